@@ -1,0 +1,2 @@
+// Package lgamma is the helper library that code rewritten by overfact imports.
+package lgamma

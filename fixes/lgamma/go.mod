@@ -1,0 +1,3 @@
+module github.com/overfact/overfact/fixes/lgamma
+
+go 1.21

@@ -1,0 +1,72 @@
+// Package fixes builds the suggested fixes that overfact attaches to its
+// findings: rewrites of factorial arithmetic into calls of the helper module
+// github.com/overfact/overfact/fixes/lgamma, and range guards where no
+// rewrite can make a result fit its type.
+//
+// The analyzer describes what it matched with a Match and calls Suggest;
+// this package never imports the analyzer, so the two evolve separately.
+package fixes
+
+import (
+	"go/ast"
+	"go/types"
+
+	"golang.org/x/tools/go/analysis"
+)
+
+// HelperPath is the import path of the helper module rewritten code imports.
+const HelperPath = "github.com/overfact/overfact/fixes/lgamma"
+
+// Shape names the arithmetic the analyzer recognised.
+type Shape int
+
+const (
+	ShapeNone             Shape = iota
+	ShapeFactorial              // a standalone factorial (loop, recursion or call) whose value is returned or stored
+	ShapeBinomial               // n!/(k!(n-k)!)                       Args: n, k
+	ShapePermutation            // n!/(n-k)!                           Args: n, k
+	ShapeMultinomial            // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately
+	ShapeCatalan                // (2n)!/((n+1)!n!)                    Args: n
+	ShapeHypergeometric         // C(K,k)C(N-K,n-k)/C(N,n)             Args: k, N, K, n
+	ShapePowOverFactorial       // x^k/k!                              Args: x, k
+	ShapePoisson                // x^k*exp(-x)/k!                      Args: k, lambda
+	ShapeBinomialPMF            // C(n,k) p^k (1-p)^(n-k)              Args: k, n, p
+	ShapeGammaRatio             // Γ(a)/Γ(b)                           Args: a, b
+	ShapeBeta                   // Γ(a)Γ(b)/Γ(a+b)                     Args: a, b
+	ShapeBinomialLoop           // b = b*(n-k+i)/i loop                Args: n, k
+	ShapeFallingLoop            // n(n-1)...(n-k+1) loop               Args: n, k
+	ShapeGamma                  // a bare math.Gamma(x)                Args: x
+)
+
+// Match is what the analyzer found, in the terms a fix needs.
+type Match struct {
+	Shape Shape
+	File  *ast.File // the file holding Node
+	// Node is the expression (for ratios and terms) or statement (for
+	// loops) whose value the fix replaces.
+	Node ast.Node
+	// Args are the shape's operands as they appear in the source, in the
+	// order documented beside each Shape.
+	Args  []ast.Expr
+	Extra []ast.Expr
+	// Result is the type of the value the original code computes.
+	Result types.Type
+
+	// For loop shapes: the accumulator, the statement that initialises it
+	// (nil when it is a parameter or named result) and the loop itself.
+	Acc     types.Object
+	AccInit ast.Stmt
+	Loop    ast.Stmt
+
+	// For ShapeFactorial: the enclosing function, the parameter whose
+	// range decides overflow, and the first bad value of that parameter.
+	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
+	Param    types.Object
+	FirstBad int64
+}
+
+// Suggest returns the fixes for m, the recommended one first, or nil when
+// no value-preserving rewrite exists.
+func Suggest(pass *analysis.Pass, m Match) []analysis.SuggestedFix {
+	return nil
+}
