@@ -1,0 +1,118 @@
+package thresholds
+
+import (
+	"math"
+	"math/big"
+)
+
+// FallingFirstBad returns, for a fixed k ≥ 1, the first n ≥ k for which
+// the falling factorial n!/(n−k)! = n(n−1)…(n−k+1) does not fit t, or
+// math.MaxInt64 if none below 2^62 breaks it.
+//
+// Special cases are:
+//
+//	FallingFirstBad(t, k ≤ 0) = math.MaxInt64 (the empty product 1)
+func FallingFirstBad(t Num, k int64) int64 {
+	if k <= 0 {
+		return math.MaxInt64
+	}
+	return memo(cacheKey{shape: "falling", t: t, a: k}, func() int64 {
+		if k >= Factorial(t).FirstBad {
+			return k // already n = k gives k!, which does not fit
+		}
+		s := shape{
+			from: k,
+			// k·ln(n−k+1) ≤ ln(n(n−1)…(n−k+1)) ≤ k·ln n, which stays
+			// accurate for n near 2^62 where differences of Robbins'
+			// bounds would cancel.
+			bounds: func(n int64) (lo, hi float64) {
+				fk := float64(k)
+				lo, hi = fk*math.Log(float64(n-k+1)), fk*math.Log(float64(n))
+				return widen(lo, hi, hi)
+			},
+			fits: func(n int64, max *big.Int) bool {
+				return fallingProduct(n, k).CmpAbs(max) <= 0
+			},
+		}
+		return firstBad(s, t.maxInt(), t.logMax())
+	})
+}
+
+// fallingProduct returns n(n−1)…(n−k+1) for 0 ≤ k ≤ n.
+func fallingProduct(n, k int64) *big.Int {
+	if k <= 0 {
+		return big.NewInt(1)
+	}
+	return new(big.Int).MulRange(n-k+1, n)
+}
+
+// FallingFits reports whether n!/(n−k)! fits t. Arguments with k ≤ 0 or
+// n < k give an empty or zero product and fit.
+func FallingFits(t Num, n, k int64) bool {
+	if k <= 0 || n < k {
+		return true
+	}
+	return n < FallingFirstBad(t, k)
+}
+
+// RisingFirstBad returns, for a fixed x, the first n ≥ 1 for which the
+// rising factorial x(x+1)…(x+n−1) does not fit t, or math.MaxInt64 if
+// none below 2^62 breaks it.
+//
+// Special cases are:
+//
+//	RisingFirstBad(t, 0) = math.MaxInt64 (every product is 0)
+//	RisingFirstBad(t, x < 0): the products are ± falling factorials of
+//	−x, which reach 0 at n = 1−x; the first n whose magnitude does not
+//	fit, or math.MaxInt64 if none does
+func RisingFirstBad(t Num, x int64) int64 {
+	switch {
+	case x == 0:
+		return math.MaxInt64
+	case x < 0:
+		return memo(cacheKey{shape: "risingneg", t: t, a: x}, func() int64 {
+			return risingNegative(t, -x)
+		})
+	}
+	return memo(cacheKey{shape: "rising", t: t, a: x}, func() int64 {
+		s := shape{
+			from: 1,
+			bounds: func(n int64) (lo, hi float64) {
+				return risingBounds(x, n)
+			},
+			fits: func(n int64, max *big.Int) bool {
+				return new(big.Int).MulRange(x, x+n-1).CmpAbs(max) <= 0
+			},
+		}
+		return firstBad(s, t.maxInt(), t.logMax())
+	})
+}
+
+// risingBounds bounds ln(x(x+1)…(x+n−1)) for x, n ≥ 1 by the better of
+// n·ln x ≤ · ≤ n·ln(x+n−1) and Robbins' bounds on (x+n−1)!/(x−1)!; the
+// first is tight for large x, the second for small x.
+func risingBounds(x, n int64) (lo, hi float64) {
+	top := x + n - 1
+	lo, hi = float64(n)*math.Log(float64(x)), float64(n)*math.Log(float64(top))
+	lo, hi = widen(lo, hi, hi)
+	tlo, thi := LogFactorialBounds(top)
+	blo, bhi := LogFactorialBounds(x - 1)
+	rlo, rhi := widen(tlo-bhi, thi-blo, thi+bhi)
+	return math.Max(lo, rlo), math.Min(hi, rhi)
+}
+
+// risingNegative handles x(x+1)…(x+n−1) for x = −m < 0: its magnitude
+// is m(m−1)…(m−n+1), which grows with n until the factor 1 and then
+// becomes 0. Each factor but the last is at least 2, so an exact scan
+// ends within Bits+1 steps or at n = m.
+func risingNegative(t Num, m int64) int64 {
+	max := t.maxInt()
+	p, f := big.NewInt(1), new(big.Int)
+	for n := int64(1); n <= m; n++ {
+		p.Mul(p, f.SetInt64(m-n+1))
+		if p.CmpAbs(max) > 0 {
+			return n
+		}
+	}
+	return math.MaxInt64
+}
