@@ -1,0 +1,228 @@
+// Package driver runs one analyzer over packages named by go/packages
+// patterns and reports the findings as text, JSON or SARIF, or applies
+// their fixes.
+//
+// It plays the part singlechecker plays for most analyzers, on top of
+// the public checker package, and adds what that lacks: a SARIF log,
+// a working directory of its own (so that a nested module can be
+// analysed from outside it), progress on long runs, and fixes that are
+// written atomically and never applied to a package that did not
+// type-check. The exit codes follow Go's analysis drivers.
+package driver
+
+import (
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"sort"
+	"strings"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/analysis/checker"
+	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/internal/sarif"
+)
+
+// Exit codes, the convention of Go's analysis drivers.
+const (
+	ExitClean    = 0 // no findings
+	ExitError    = 1 // a package failed to load, parse or type-check, or a fix failed
+	ExitFindings = 3 // findings reported (or, with Diff, a non-empty diff)
+)
+
+// Options configures a run.
+type Options struct {
+	Dir   string // directory to load from; the current one if empty
+	Tests bool   // analyse test files too
+	Fix   bool   // apply the first fix of each finding instead of reporting
+	Diff  bool   // print the fixes as a unified diff instead of applying them; implies Fix
+	JSON  bool   // report in the JSON form of go vet -json on stdout
+
+	SARIF      string // write a SARIF log to this file ("-" for stdout)
+	SourceRoot string // SARIF artifact URIs are relative to it; Dir if empty
+	Rules      []sarif.Rule
+	Version    string // tool version written into the SARIF log
+
+	// Progress, when set, receives "done/total" lines while a run over
+	// more than ProgressMin packages is in progress.
+	Progress io.Writer
+
+	Stdout, Stderr io.Writer
+}
+
+// ProgressMin is the number of packages above which progress is shown.
+const ProgressMin = 50
+
+// Run analyses the packages matching patterns and returns the exit code.
+func Run(a *analysis.Analyzer, patterns []string, opts Options) int {
+	r := &run{opts: opts}
+	return r.main(a, patterns)
+}
+
+type run struct {
+	opts Options
+	dir  string // absolute
+	code int
+}
+
+func (r *run) fail(code int) { r.code = max(r.code, code) }
+
+func (r *run) errorf(format string, args ...any) {
+	fmt.Fprintf(r.opts.Stderr, "overfact: "+format+"\n", args...)
+	r.fail(ExitError)
+}
+
+func (r *run) main(a *analysis.Analyzer, patterns []string) int {
+	dir, err := filepath.Abs(r.opts.Dir)
+	if err != nil {
+		r.errorf("%v", err)
+		return r.code
+	}
+	r.dir = dir
+	pkgs, err := r.load(a, patterns)
+	if err != nil {
+		r.errorf("%v", err)
+		return r.code
+	}
+	if n := printPackageErrors(r.opts.Stderr, pkgs); n > 0 {
+		r.fail(ExitError)
+	}
+	analyzer, finish := a, func() {}
+	if r.opts.Progress != nil {
+		analyzer, finish = withProgress(a, pkgs, r.opts.Progress)
+	}
+	graph, err := checker.Analyze([]*analysis.Analyzer{analyzer}, pkgs, nil)
+	finish()
+	if err != nil {
+		r.errorf("%v", err)
+		return r.code
+	}
+	r.report(graph)
+	return r.code
+}
+
+func (r *run) load(a *analysis.Analyzer, patterns []string) ([]*packages.Package, error) {
+	mode := packages.LoadSyntax | packages.NeedModule
+	if len(a.FactTypes) > 0 {
+		// Facts flow up from dependencies, which must be analysed too.
+		mode = packages.LoadAllSyntax | packages.NeedModule
+	}
+	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests}
+	pkgs, err := packages.Load(cfg, patterns...)
+	if err == nil && len(pkgs) == 0 {
+		err = fmt.Errorf("%s matched no packages", strings.Join(patterns, " "))
+	}
+	return pkgs, err
+}
+
+func (r *run) report(graph *checker.Graph) {
+	for act := range graph.All() {
+		if act.Err != nil && act.IsRoot {
+			r.errorf("%s: %v", act.Package.ID, act.Err)
+		}
+	}
+	if r.opts.Fix || r.opts.Diff {
+		r.fix(graph.Roots)
+		return
+	}
+	if r.opts.SARIF != "" {
+		r.writeSARIF(graph.Roots)
+	}
+	if r.opts.JSON {
+		if err := graph.PrintJSON(r.opts.Stdout); err != nil {
+			r.errorf("%v", err)
+		}
+		return // as with go vet -json, findings alone do not fail the run
+	}
+	if n := writeText(r.opts.Stderr, r.dir, graph.Roots); n > 0 {
+		r.fail(ExitFindings)
+	}
+}
+
+func (r *run) fix(roots []*checker.Action) {
+	plan := planFixes(roots)
+	for _, id := range plan.refused {
+		r.errorf("not fixing %s: the package has errors", id)
+	}
+	names := make([]string, 0, len(plan.files))
+	for name := range plan.files {
+		names = append(names, name)
+	}
+	sort.Strings(names)
+	for _, name := range names {
+		r.fixFile(name, plan.files[name])
+	}
+	if plan.conflicts > 0 {
+		r.errorf("%d fixes overlap others and were not applied; run again to apply them", plan.conflicts)
+	}
+}
+
+func (r *run) fixFile(name string, edits []edit) {
+	old, err := os.ReadFile(name)
+	if err != nil {
+		r.errorf("%v", err)
+		return
+	}
+	fixed, err := apply(old, edits)
+	if err != nil {
+		r.errorf("fixing %s: %v", name, err)
+		return
+	}
+	if r.opts.Diff {
+		if err := writeUnified(r.opts.Stdout, relPath(r.dir, name), old, fixed); err != nil {
+			r.errorf("%v", err)
+		}
+		if string(old) != string(fixed) {
+			r.fail(ExitFindings)
+		}
+		return
+	}
+	if err := writeAtomic(name, fixed); err != nil {
+		r.errorf("%v", err)
+	}
+}
+
+func (r *run) writeSARIF(roots []*checker.Action) {
+	root := r.opts.SourceRoot
+	if root == "" {
+		root = r.dir
+	}
+	b, err := sarif.NewBuilder(sarif.ToolComponent{
+		Name:           "overfact",
+		Version:        r.opts.Version,
+		InformationURI: "https://github.com/overfact/overfact",
+	}, r.opts.Rules, root)
+	if err != nil {
+		r.errorf("%v", err)
+		return
+	}
+	for _, act := range roots {
+		if act.Err != nil {
+			continue
+		}
+		for _, d := range act.Diagnostics {
+			if err := b.Add(act.Package.Fset, d, act.Analyzer.Name); err != nil {
+				r.errorf("%v", err)
+			}
+		}
+	}
+	if r.opts.SARIF == "-" {
+		if err := b.Write(r.opts.Stdout); err != nil {
+			r.errorf("%v", err)
+		}
+		return
+	}
+	f, err := os.Create(r.opts.SARIF)
+	if err != nil {
+		r.errorf("%v", err)
+		return
+	}
+	if err := b.Write(f); err != nil {
+		r.errorf("%v", err)
+	}
+	if err := f.Close(); err != nil {
+		r.errorf("%v", err)
+	}
+}

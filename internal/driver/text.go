@@ -1,0 +1,64 @@
+package driver
+
+import (
+	"fmt"
+	"io"
+	"path/filepath"
+	"strings"
+
+	"golang.org/x/tools/go/analysis/checker"
+	"golang.org/x/tools/go/packages"
+)
+
+// writeText prints each root finding once as "file:line:col: message",
+// the form compilers and go vet use and editors jump to, and returns how
+// many it printed. A file in both a package and its test variant yields
+// the same finding twice; the copy is dropped.
+func writeText(w io.Writer, dir string, roots []*checker.Action) int {
+	seen := make(map[string]bool)
+	n := 0
+	for _, act := range roots {
+		if act.Err != nil {
+			continue
+		}
+		for _, d := range act.Diagnostics {
+			p := act.Package.Fset.Position(d.Pos)
+			line := fmt.Sprintf("%s:%d:%d: %s", relPath(dir, p.Filename), p.Line, p.Column, d.Message)
+			if seen[line] {
+				continue
+			}
+			seen[line] = true
+			fmt.Fprintln(w, line)
+			n++
+		}
+	}
+	return n
+}
+
+// relPath returns name relative to dir when it lies inside dir, so that
+// output is short and the same on every checkout.
+func relPath(dir, name string) string {
+	rel, err := filepath.Rel(dir, name)
+	if err != nil || rel == ".." || strings.HasPrefix(rel, ".."+string(filepath.Separator)) {
+		return name
+	}
+	return rel
+}
+
+// printPackageErrors prints the load, parse and type errors of pkgs and
+// their dependencies, each once, and returns their number.
+func printPackageErrors(w io.Writer, pkgs []*packages.Package) int {
+	n := 0
+	seen := make(map[string]bool)
+	packages.Visit(pkgs, nil, func(p *packages.Package) {
+		for _, err := range p.Errors {
+			msg := err.Error()
+			if !seen[msg] {
+				seen[msg] = true
+				fmt.Fprintln(w, msg)
+			}
+			n++
+		}
+	})
+	return n
+}
