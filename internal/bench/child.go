@@ -1,0 +1,66 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"os"
+	"runtime"
+	"time"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/analysis/checker"
+)
+
+// childReport is what one measured process prints on its standard output.
+type childReport struct {
+	Side        string  `json:"side"`
+	Packages    int     `json:"packages"`
+	Load        float64 `json:"load_s"`
+	Analyze     float64 `json:"analyze_s"`
+	Total       float64 `json:"total_s"`
+	PeakKiB     int64   `json:"vmhwm_kib"`
+	Diagnostics int     `json:"diagnostics"`
+	Errors      int     `json:"errors"`
+}
+
+// runChild loads the packages once, runs one side once and reports. Each
+// side runs in a process of its own so that its peak memory is its own.
+func runChild(name string, patterns []string) error {
+	a := side(name)
+	if a == nil {
+		return fmt.Errorf("unknown side %q", name)
+	}
+	start := time.Now()
+	mode, err := loadMode(*loadFlag, []*analysis.Analyzer{target})
+	if err != nil {
+		return err
+	}
+	pkgs, err := load(*dirFlag, mode, *testsFlag, patterns)
+	if err != nil {
+		return err
+	}
+	loaded := time.Now()
+	g, err := checker.Analyze([]*analysis.Analyzer{a}, pkgs, nil)
+	if err != nil {
+		return err
+	}
+	done := time.Now()
+	rep := childReport{Side: name, Packages: len(pkgs),
+		Load: seconds(loaded.Sub(start)), Analyze: seconds(done.Sub(loaded)), Total: seconds(done.Sub(start))}
+	for _, act := range g.Roots {
+		rep.Diagnostics += len(act.Diagnostics)
+		if act.Err != nil {
+			rep.Errors++
+		}
+	}
+	f, err := os.Open("/proc/self/status")
+	if err != nil {
+		return err
+	}
+	defer f.Close()
+	if rep.PeakKiB, err = parseHWM(f); err != nil {
+		return err
+	}
+	runtime.KeepAlive(pkgs)
+	return json.NewEncoder(os.Stdout).Encode(rep)
+}

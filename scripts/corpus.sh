@@ -1,0 +1,72 @@
+#!/usr/bin/env bash
+# corpus.sh runs overfact, tests included, over three bodies of real Go
+# code: the standard library of the installed toolchain, gonum v0.17.0 and
+# golang.org/x/tools v0.52.0. It prints, per corpus, the packages analysed,
+# crashes, analyzer errors and every finding. Then it applies overfact -fix
+# to a scratch copy of gonum and builds and tests the packages it touched.
+#
+# Run from the repository root:   scripts/corpus.sh
+# Output files go to $OUT (default: a new temporary directory, printed).
+# Needs only Go and access to the module proxy; nothing is written to the
+# repository.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+repo=$(pwd)
+work=$(mktemp -d "${TMPDIR:-/tmp}/overfact-corpus.XXXXXX")
+OUT=${OUT:-$work/out}
+mkdir -p "$OUT"
+trap 'chmod -R u+w "$work" 2>/dev/null; rm -rf "$work/gonum-fix" "$work/mods"' EXIT
+export GOWORK=off GOFLAGS=-mod=mod
+
+echo "== building (overfact at $(git rev-parse --short HEAD 2>/dev/null || echo unknown))"
+go build -o "$work/bench" ./internal/bench
+go build -o "$work/overfact" ./cmd/overfact
+
+# module DIR PATH VERSION makes DIR a throwaway module that requires
+# PATH@VERSION and everything its tests import.
+module() {
+	mkdir -p "$1"
+	(cd "$1" && go mod init corpus.example/run >/dev/null 2>&1 && go get -t "$2/...@$3" >/dev/null 2>&1)
+}
+
+run() { # NAME DIR PATTERN
+	echo "== $1"
+	local rc=0
+	( cd "$2" && "$work/bench" -mode corpus -dir "$2" "$3" ) >"$OUT/$1.txt" 2>"$OUT/$1.err" || rc=$?
+	head -1 "$OUT/$1.txt"
+	tail -n +2 "$OUT/$1.txt"
+	if [ -s "$OUT/$1.err" ]; then echo "   stderr: $OUT/$1.err"; head -20 "$OUT/$1.err"; fi
+	[ $rc -eq 0 ] || echo "   exit status $rc"
+}
+
+mkdir -p "$work/mods/std"
+(cd "$work/mods/std" && go mod init corpus.example/std >/dev/null 2>&1)
+run std "$work/mods/std" std
+module "$work/mods/gonum" gonum.org/v1/gonum v0.17.0
+run gonum "$work/mods/gonum" gonum.org/v1/gonum/...
+module "$work/mods/xtools" golang.org/x/tools v0.52.0
+run xtools "$work/mods/xtools" golang.org/x/tools/...
+
+echo "== overfact -fix on a scratch copy of gonum v0.17.0"
+src=$(cd "$work/mods/gonum" && go list -m -f '{{.Dir}}' gonum.org/v1/gonum)
+cp -r "$src" "$work/gonum-fix"
+chmod -R u+w "$work/gonum-fix"
+cd "$work/gonum-fix"
+# Rewritten code imports the helper module, as a user would after go get.
+go mod edit -require=github.com/overfact/overfact/fixes/lgamma@v0.1.0 \
+	-replace=github.com/overfact/overfact/fixes/lgamma="$repo/fixes/lgamma"
+go mod download
+rc=0
+"$work/overfact" -fix ./... >"$OUT/gonum-fix.txt" 2>&1 || rc=$?
+echo "overfact -fix ./... exit status $rc ($(wc -l <"$OUT/gonum-fix.txt") lines of output in $OUT/gonum-fix.txt)"
+diff -ru --exclude=go.mod --exclude=go.sum "$src" . >"$OUT/gonum-fix.diff" || true
+touched=$(grep '^+++ ' "$OUT/gonum-fix.diff" | awk '{print $2}' | xargs -r -n1 dirname | sort -u | sed 's|^\./||; s|^|./|')
+echo "files changed: $(grep -c '^+++ ' "$OUT/gonum-fix.diff" || true); diff in $OUT/gonum-fix.diff"
+echo "packages touched: ${touched:-none}"
+echo "-- go build ./..."
+go build ./... && echo "go build ./...: ok"
+echo "-- go vet on touched packages"
+[ -z "$touched" ] || go vet $touched && echo "go vet: ok"
+echo "-- go test on touched packages"
+[ -z "$touched" ] || go test $touched
+echo "== results in $OUT"
