@@ -1,0 +1,234 @@
+package lsp
+
+import (
+	"context"
+	"fmt"
+	"go/token"
+	"os"
+	"path/filepath"
+	"runtime/debug"
+	"slices"
+	"strings"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/analysis/checker"
+	"golang.org/x/tools/go/packages"
+)
+
+// loadMode is what checker.Analyze needs: syntax and types of the analysed
+// package and of every dependency, since analyzers with facts run on the
+// dependencies too.
+const loadMode = packages.NeedName | packages.NeedFiles | packages.NeedCompiledGoFiles |
+	packages.NeedImports | packages.NeedDeps | packages.NeedTypes | packages.NeedTypesSizes |
+	packages.NeedSyntax | packages.NeedTypesInfo | packages.NeedModule
+
+// finding is one diagnostic converted to the protocol, with its fixes.
+type finding struct {
+	diag  Diagnostic
+	fixes []fix
+}
+
+// fix is one suggested fix converted to the protocol: edits per file path.
+type fix struct {
+	title string
+	edits map[string][]TextEdit
+}
+
+// result is the result of analysing the package of one file at one
+// snapshot of the open buffers.
+type result struct {
+	// versions holds, for each open file of the analysed package, the
+	// version of the buffer that was analysed; findings are keyed by the
+	// same paths.
+	versions map[string]int32
+	findings map[string][]finding
+}
+
+// analyze loads the package containing path with the open buffers as an
+// overlay and runs the analyzers on it. A panic inside loading or analysis
+// is turned into an error, so one bad input cannot stop the server.
+func analyze(ctx context.Context, opts *Options, docs map[string]*document, path string, enc encoding) (res *result, err error) {
+	defer func() {
+		if p := recover(); p != nil {
+			res, err = nil, fmt.Errorf("panic during analysis of %s: %v\n%s", path, p, debug.Stack())
+		}
+	}()
+	overlay := make(map[string][]byte, len(docs))
+	for p, d := range docs {
+		overlay[p] = d.text
+	}
+	cfg := &packages.Config{
+		Mode:    loadMode,
+		Context: ctx,
+		Dir:     filepath.Dir(path),
+		Overlay: overlay,
+		Tests:   strings.HasSuffix(path, "_test.go"),
+	}
+	pkgs, err := packages.Load(cfg, "file="+path)
+	if err != nil {
+		return nil, err
+	}
+	var roots []*packages.Package
+	for _, p := range pkgs {
+		if slices.Contains(p.CompiledGoFiles, path) {
+			roots = append(roots, p)
+		}
+	}
+	if len(roots) == 0 {
+		return nil, loadProblem(path, pkgs)
+	}
+	// Sequential keeps every action on this goroutine, where the deferred
+	// recover above can catch an analyzer's panic; in parallel mode it
+	// would kill the process.
+	graph, err := checker.Analyze(opts.Analyzers, roots, &checker.Options{Sequential: true})
+	if err != nil {
+		return nil, err
+	}
+	conv := converter{enc: enc, overlay: overlay, fset: roots[0].Fset, texts: make(map[string][]byte), severity: opts.Severity}
+	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding)}
+	for _, p := range roots {
+		for _, f := range p.CompiledGoFiles {
+			if d, ok := docs[f]; ok {
+				res.versions[f] = d.version
+			}
+		}
+	}
+	if err := rootFailure(graph, roots); err != nil {
+		return nil, err
+	}
+	seen := make(map[string]bool)
+	for _, act := range graph.Roots {
+		for _, d := range act.Diagnostics {
+			file, fd, ok := conv.finding(d)
+			if _, open := res.versions[file]; !ok || !open {
+				continue
+			}
+			key := fmt.Sprintf("%s:%v:%s", file, fd.diag.Range, fd.diag.Message)
+			if seen[key] {
+				continue // the same file analysed as package and test variant
+			}
+			seen[key] = true
+			res.findings[file] = append(res.findings[file], fd)
+		}
+	}
+	return res, nil
+}
+
+// rootFailure returns an error when no analysis of the file's packages
+// ran, typically because the package does not type-check yet; the first
+// package error says why.
+func rootFailure(graph *checker.Graph, roots []*packages.Package) error {
+	var first error
+	for _, act := range graph.Roots {
+		if act.Err == nil {
+			return nil
+		}
+		if first == nil {
+			first = act.Err
+		}
+	}
+	for _, p := range roots {
+		if len(p.Errors) > 0 {
+			return fmt.Errorf("%v: %s", first, p.Errors[0].Msg)
+		}
+	}
+	return first
+}
+
+// loadProblem explains why no package holding path was loaded, using the
+// errors go/packages attached to what it did return.
+func loadProblem(path string, pkgs []*packages.Package) error {
+	var msgs []string
+	for _, p := range pkgs {
+		for _, e := range p.Errors {
+			msgs = append(msgs, e.Msg)
+		}
+	}
+	if len(msgs) == 0 {
+		return fmt.Errorf("no package found containing %s", path)
+	}
+	return fmt.Errorf("cannot load the package of %s: %s", path, strings.Join(msgs, "; "))
+}
+
+// converter turns go/analysis positions into protocol ranges, reading each
+// file's text from the overlay or, for files not open, from disk.
+type converter struct {
+	enc     encoding
+	overlay map[string][]byte
+	fset    *token.FileSet
+	texts   map[string][]byte
+	// severity maps a diagnostic category to an LSP severity.
+	severity func(category string) int
+}
+
+// text returns the contents of file as the analysis saw them.
+func (c *converter) text(file string) []byte {
+	if t, ok := c.overlay[file]; ok {
+		return t
+	}
+	if t, ok := c.texts[file]; ok {
+		return t
+	}
+	t, _ := os.ReadFile(file)
+	c.texts[file] = t
+	return t
+}
+
+// span returns the file and protocol range of [pos, end); an end of
+// token.NoPos means an empty range at pos, as in analysis.TextEdit.
+func (c *converter) span(pos, end token.Pos) (string, Range, bool) {
+	tf := c.fset.File(pos)
+	if tf == nil {
+		return "", Range{}, false
+	}
+	if !end.IsValid() || end < pos {
+		end = pos
+	}
+	if int(end) > tf.Base()+tf.Size() {
+		end = token.Pos(tf.Base() + tf.Size())
+	}
+	file := filepath.Clean(tf.Name())
+	text := c.text(file)
+	return file, c.enc.toRange(text, tf.Offset(pos), tf.Offset(end)), true
+}
+
+// finding converts one diagnostic.
+func (c *converter) finding(d analysis.Diagnostic) (string, finding, bool) {
+	file, rng, ok := c.span(d.Pos, d.End)
+	if !ok {
+		return "", finding{}, false
+	}
+	pd := Diagnostic{
+		Range:    rng,
+		Severity: c.severity(d.Category),
+		Code:     d.Category,
+		Source:   "overfact",
+		Message:  d.Message,
+	}
+	if d.URL != "" {
+		pd.CodeDescription = &CodeDescription{Href: d.URL}
+	}
+	for _, r := range d.Related {
+		if rf, rr, ok := c.span(r.Pos, r.End); ok {
+			pd.RelatedInformation = append(pd.RelatedInformation, DiagnosticRelatedInformation{
+				Location: Location{URI: pathToURI(rf), Range: rr},
+				Message:  r.Message,
+			})
+		}
+	}
+	fd := finding{diag: pd}
+	for _, sf := range d.SuggestedFixes {
+		fx := fix{title: sf.Message, edits: make(map[string][]TextEdit)}
+		for _, e := range sf.TextEdits {
+			ef, er, ok := c.span(e.Pos, e.End)
+			if !ok {
+				continue
+			}
+			fx.edits[ef] = append(fx.edits[ef], TextEdit{Range: er, NewText: string(e.NewText)})
+		}
+		if len(fx.edits) > 0 {
+			fd.fixes = append(fd.fixes, fx)
+		}
+	}
+	return file, fd, true
+}

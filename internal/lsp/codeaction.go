@@ -1,0 +1,114 @@
+package lsp
+
+import (
+	"sort"
+	"strings"
+)
+
+// codeActions answers textDocument/codeAction with the suggested fixes of
+// the findings whose range meets the requested one. If the findings on
+// record are older than the buffer, the file is analysed first, so a fix is
+// never computed against text the client no longer has.
+func (s *server) codeActions(p codeActionParams) []CodeAction {
+	actions := []CodeAction{} // an empty list, not null: some clients mind
+	if !wantsQuickFix(p.Context.Only) {
+		return actions
+	}
+	path, err := uriToPath(p.TextDocument.URI)
+	if err != nil {
+		return actions
+	}
+	d := s.docs.get(path)
+	if d == nil {
+		return actions
+	}
+	if r := s.cached(path); r == nil || r.version != d.version {
+		s.refresh(path)
+	}
+	r := s.cached(path)
+	if r == nil || r.version != d.version {
+		return actions
+	}
+	s.mu.Lock()
+	docChanges := s.docChanges
+	s.mu.Unlock()
+	for _, f := range r.findings {
+		if !overlaps(f.diag.Range, p.Range) {
+			continue
+		}
+		for i, fx := range f.fixes {
+			actions = append(actions, CodeAction{
+				Title:       fx.title,
+				Kind:        kindQuickFix,
+				Diagnostics: []Diagnostic{f.diag},
+				IsPreferred: i == 0,
+				Edit:        s.workspaceEdit(fx, docChanges),
+			})
+		}
+	}
+	return actions
+}
+
+func (s *server) cached(path string) *fileResult {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	return s.cache[path]
+}
+
+// wantsQuickFix reports whether a CodeActionContext.only filter admits
+// quick fixes; kinds are hierarchical, so "quickfix.x" is not enough but
+// "quickfix" and the empty filter are.
+func wantsQuickFix(only []string) bool {
+	if len(only) == 0 {
+		return true
+	}
+	for _, k := range only {
+		if k == kindQuickFix || strings.HasPrefix(kindQuickFix, k+".") {
+			return true
+		}
+	}
+	return false
+}
+
+// overlaps reports whether two ranges share a position, counting ranges
+// that merely touch, so that a cursor at either end of a finding selects it.
+func overlaps(a, b Range) bool {
+	return !before(a.End, b.Start) && !before(b.End, a.Start)
+}
+
+func before(p, q Position) bool {
+	return p.Line < q.Line || p.Line == q.Line && p.Character < q.Character
+}
+
+// workspaceEdit converts a fix into the edit form the client accepts. Open
+// documents get their version in documentChanges so that a client can refuse
+// an edit made for text it has since changed.
+func (s *server) workspaceEdit(fx fix, docChanges bool) *WorkspaceEdit {
+	paths := make([]string, 0, len(fx.edits))
+	for p := range fx.edits {
+		paths = append(paths, p)
+	}
+	sort.Strings(paths)
+	we := &WorkspaceEdit{}
+	if !docChanges {
+		we.Changes = make(map[string][]TextEdit)
+	}
+	for _, p := range paths {
+		uri := pathToURI(p)
+		var version *int32
+		if d := s.docs.get(p); d != nil {
+			uri = d.uri
+			v := d.version
+			version = &v
+		}
+		if docChanges {
+			we.DocumentChanges = append(we.DocumentChanges, TextDocumentEdit{
+				TextDocument: VersionedTextDocumentIdentifier{URI: uri, Version: version},
+				Edits:        fx.edits[p],
+			})
+		} else {
+			we.Changes[uri] = fx.edits[p]
+		}
+	}
+	return we
+}

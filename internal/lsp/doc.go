@@ -1,0 +1,16 @@
+// Package lsp implements the overfact language server: a Language Server
+// Protocol 3.17 server over a byte stream (stdio in practice) that publishes
+// overfact's findings for the Go files an editor has open and offers their
+// suggested fixes as quick-fix code actions.
+//
+// The server analyses unsaved buffer contents: every open document is given
+// to golang.org/x/tools/go/packages as an overlay, the package of the changed
+// file is loaded with its dependencies from source, and the analyzers run
+// through golang.org/x/tools/go/analysis/checker, so facts computed on
+// dependencies reach the analysed package as they do under go vet.
+//
+// The transport is JSON-RPC 2.0 with Content-Length framing, written here on
+// top of encoding/json because the x/tools implementations are internal.
+// The server is meant to run beside gopls, not to replace it: it answers only
+// the lifecycle, document synchronisation and code action requests.
+package lsp
