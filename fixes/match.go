@@ -10,8 +10,6 @@ package fixes
 import (
 	"go/ast"
 	"go/types"
-
-	"golang.org/x/tools/go/analysis"
 )
 
 // HelperPath is the import path of the helper module rewritten code imports.
@@ -63,10 +61,4 @@ type Match struct {
 	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
 	Param    types.Object
 	FirstBad int64
-}
-
-// Suggest returns the fixes for m, the recommended one first, or nil when
-// no value-preserving rewrite exists.
-func Suggest(pass *analysis.Pass, m Match) []analysis.SuggestedFix {
-	return nil
 }

@@ -1,0 +1,119 @@
+package fixes
+
+import (
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math"
+	"strconv"
+)
+
+// No rewrite makes 25! fit an int64, so a standalone factorial gets a
+// range guard instead: the function panics, naming the argument and the
+// limit, where it used to return a wrapped integer or +Inf:
+//
+//	if n >= 21 {
+//		panic(fmt.Sprintf("fact: n = %d overflows int64 (largest is 20)", n))
+//	}
+//
+// The limit is the match's first bad value, computed by the thresholds
+// package; nothing here types a threshold.
+func buildGuard(b *builder) error {
+	m := b.m
+	body := funcBody(m.Func)
+	if body == nil || m.Param == nil || m.Param.Name() == "" || m.Param.Name() == "_" {
+		return errors.New("factorial match lacks a function body or a named parameter")
+	}
+	if m.FirstBad <= 0 {
+		return errors.New("factorial match has no first bad value")
+	}
+	if !reaches(m.Param.Type(), m.FirstBad) {
+		return fmt.Errorf("%s of type %s never reaches %d", m.Param.Name(), m.Param.Type(), m.FirstBad)
+	}
+	if _, obj := b.scopeAt(body.Lbrace+1).LookupParent(m.Param.Name(), body.Lbrace+1); obj != m.Param {
+		return fmt.Errorf("%s is not visible where the function starts", m.Param.Name())
+	}
+	verb := "%d"
+	if classOf(m.Param.Type()) == classFloat {
+		verb = "%v"
+	}
+	result := "its result type"
+	if m.Result != nil {
+		result = types.TypeString(m.Result, types.RelativeTo(b.pass.Pkg))
+	}
+	p := m.Param.Name()
+	msg := fmt.Sprintf("%s: %s = %s overflows %s (largest is %d)", funcName(m.Func), p, verb, result, m.FirstBad-1)
+	_, hadFmt := b.imports["fmt"]
+	fmtName := b.use("fmt", "fmt", body.Lbrace+1)
+	indent := b.indentOf(body.Lbrace) + "\t"
+	guard := fmt.Sprintf("\n%sif %s >= %d {\n%s\tpanic(%s.Sprintf(%s, %s))\n%s}",
+		indent, p, m.FirstBad, indent, fmtName, strconv.Quote(msg), p, indent)
+	if len(body.List) > 0 && b.line(body.List[0].Pos()) == b.line(body.Lbrace) {
+		guard += "\n" + indent
+	}
+	b.insert(body.Lbrace+1, guard)
+	b.message = fmt.Sprintf("Add a range guard: panic when %s >= %d, where the result overflows %s", p, m.FirstBad, result)
+	if !hadFmt && b.addedImport("fmt") {
+		b.message += " (imports fmt)"
+	}
+	return nil
+}
+
+func funcBody(n ast.Node) *ast.BlockStmt {
+	switch f := n.(type) {
+	case *ast.FuncDecl:
+		return f.Body
+	case *ast.FuncLit:
+		return f.Body
+	}
+	return nil
+}
+
+func funcName(n ast.Node) string {
+	if f, ok := n.(*ast.FuncDecl); ok {
+		return f.Name.Name
+	}
+	return "factorial"
+}
+
+// reaches reports whether a value of type t can be as large as v; a guard
+// the parameter can never trip would be dead code.
+func reaches(t types.Type, v int64) bool {
+	b, ok := t.Underlying().(*types.Basic)
+	if !ok {
+		return false
+	}
+	switch classOf(b) {
+	case classFloat:
+		return true
+	case classSigned, classUnsigned:
+		bits := map[types.BasicKind]uint{types.Int8: 7, types.Int16: 15, types.Int32: 31, types.Uint8: 8, types.Uint16: 16, types.Uint32: 32}[b.Kind()]
+		return bits == 0 || uint64(v) <= math.MaxUint64>>(64-bits)
+	}
+	return false
+}
+
+// addedImport reports whether the fix adds an import of path.
+func (b *builder) addedImport(path string) bool {
+	for _, spec := range b.file.Imports {
+		if importPath(spec) == path && b.pkgNameOf(spec) != nil && b.pkgNameOf(spec).Name() == b.imports[path] {
+			return false
+		}
+	}
+	_, ok := b.imports[path]
+	return ok
+}
+
+func (b *builder) line(p token.Pos) int { return b.tok.Line(p) }
+
+// indentOf returns the leading white space of the line holding p.
+func (b *builder) indentOf(p token.Pos) string {
+	start := b.offset(b.tok.LineStart(b.line(p)))
+	end := start
+	for end < len(b.src) && (b.src[end] == '\t' || b.src[end] == ' ') {
+		end++
+	}
+	return string(b.src[start:end])
+}

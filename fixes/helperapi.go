@@ -1,0 +1,99 @@
+package fixes
+
+import (
+	"go/ast"
+	"go/parser"
+	"go/token"
+	"go/types"
+	"sync"
+)
+
+// helperAPI declares the part of the helper module's API that fixes emit.
+// The fixer cannot load the helper itself (user packages rarely import it
+// before a fix is applied), so it type-checks rewritten code against these
+// declarations. TestHelperAPIMatchesModule checks every signature here
+// against the real module, so this copy cannot drift unnoticed.
+const helperAPI = `package lgamma
+
+func Choose(n, k int) float64                               { panic("") }
+func MustChooseInt64(n, k int64) int64                      { panic("") }
+func MustChooseUint64(n, k uint64) uint64                   { panic("") }
+func Falling(n, k int) float64                              { panic("") }
+func MustFallingInt64(n, k int64) int64                     { panic("") }
+func MustFallingUint64(n, k uint64) uint64                  { panic("") }
+func Multinomial(ks ...int) float64                         { panic("") }
+func MustMultinomialInt64(ks ...int64) int64                { panic("") }
+func Catalan(n int) float64                                 { panic("") }
+func MustCatalanInt64(n int64) int64                        { panic("") }
+func HypergeometricPMF(k, total, successes, draws int) float64 { panic("") }
+func PowOverFactorial(x float64, k int) float64             { panic("") }
+func PoissonPMF(k int, lambda float64) float64              { panic("") }
+func BinomialPMF(k, n int, p float64) float64               { panic("") }
+func GammaRatio(a, b float64) float64                       { panic("") }
+func Beta(a, b float64) float64                             { panic("") }
+`
+
+// fmtAPI stands in for package fmt when a range guard adds the import to a
+// package that does not already depend on it.
+const fmtAPI = `package fmt
+
+func Sprintf(format string, a ...any) string { panic("") }
+`
+
+var (
+	stubOnce  sync.Once
+	stubPkgs  map[string]*types.Package
+	errStubTC error
+)
+
+// stubs returns the type-checked stand-ins, keyed by import path.
+func stubs() (map[string]*types.Package, error) {
+	stubOnce.Do(func() {
+		stubPkgs = make(map[string]*types.Package)
+		for path, src := range map[string]string{HelperPath: helperAPI, "fmt": fmtAPI} {
+			fset := token.NewFileSet()
+			f, err := parser.ParseFile(fset, path+".go", src, 0)
+			if err != nil {
+				errStubTC = err
+				return
+			}
+			pkg, err := new(types.Config).Check(path, fset, []*ast.File{f}, nil)
+			if err != nil {
+				errStubTC = err
+				return
+			}
+			stubPkgs[path] = pkg
+		}
+	})
+	return stubPkgs, errStubTC
+}
+
+// helperFunc returns the signature of the helper function name.
+func helperFunc(name string) *types.Signature {
+	pkgs, err := stubs()
+	if err != nil {
+		return nil
+	}
+	fn, ok := pkgs[HelperPath].Scope().Lookup(name).(*types.Func)
+	if !ok {
+		return nil
+	}
+	return fn.Type().(*types.Signature)
+}
+
+// HelperFuncs lists the helper functions fixes may emit, for tests that
+// check them against the helper module.
+func HelperFuncs() map[string]*types.Signature {
+	pkgs, err := stubs()
+	if err != nil {
+		return nil
+	}
+	out := make(map[string]*types.Signature)
+	scope := pkgs[HelperPath].Scope()
+	for _, name := range scope.Names() {
+		if fn, ok := scope.Lookup(name).(*types.Func); ok {
+			out[name] = fn.Type().(*types.Signature)
+		}
+	}
+	return out
+}

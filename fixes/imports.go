@@ -1,0 +1,233 @@
+package fixes
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+	"strconv"
+	"strings"
+
+	"golang.org/x/tools/go/analysis"
+)
+
+// helper returns the name under which the fixed file refers to the helper
+// module, adding its import when the file lacks one. at is where the name
+// will be used.
+func (b *builder) helper(at token.Pos) string {
+	return b.use(HelperPath, "lgamma", at)
+}
+
+// use returns the name of the import of path in the fixed file, adding
+// the import under base (or base2, base3, ... when base is taken) if the
+// file does not import path yet. An existing import is reused; a dot or
+// blank import is not, since its name cannot qualify a call.
+func (b *builder) use(path, base string, at token.Pos) string {
+	if name, ok := b.imports[path]; ok {
+		return name
+	}
+	for _, spec := range b.file.Imports {
+		if importPath(spec) != path {
+			continue
+		}
+		if pn := b.pkgNameOf(spec); pn != nil && pn.Name() != "_" && pn.Name() != "." && b.visible(pn, at) {
+			b.imports[path] = pn.Name()
+			return pn.Name()
+		}
+	}
+	name := base
+	for i := 2; !b.free(name, at); i++ {
+		name = base + strconv.Itoa(i)
+	}
+	b.imports[path] = name
+	b.addImport(path, base, name)
+	return name
+}
+
+func importPath(spec *ast.ImportSpec) string {
+	p, _ := strconv.Unquote(spec.Path.Value)
+	return p
+}
+
+// visible reports whether the name of pn still denotes pn at pos (a local
+// variable may shadow it).
+func (b *builder) visible(pn *types.PkgName, pos token.Pos) bool {
+	_, obj := b.scopeAt(pos).LookupParent(pn.Name(), pos)
+	return obj == pn
+}
+
+// free reports whether name can be declared at file scope and used at pos:
+// nothing of that name is visible there, in this file or in the package.
+func (b *builder) free(name string, pos token.Pos) bool {
+	if _, obj := b.scopeAt(pos).LookupParent(name, pos); obj != nil {
+		return false
+	}
+	return b.pass.Pkg.Scope().Lookup(name) == nil
+}
+
+func (b *builder) scopeAt(pos token.Pos) *types.Scope {
+	if s := b.pass.Pkg.Scope().Innermost(pos); s != nil {
+		return s
+	}
+	return b.pass.TypesInfo.Scopes[b.file]
+}
+
+// addImport inserts the import spec of path. Standard-library paths go in
+// sorted position among the first import declaration's specs; the helper
+// module goes in a group of its own at its end, as goimports would.
+func (b *builder) addImport(path, base, name string) {
+	spec := strconv.Quote(path)
+	if name != base {
+		spec = name + " " + spec
+	}
+	var decl *ast.GenDecl
+	for _, d := range b.file.Decls {
+		if g, ok := d.(*ast.GenDecl); ok && g.Tok == token.IMPORT {
+			decl = g
+			break
+		}
+	}
+	switch {
+	case decl == nil:
+		b.insert(b.file.Name.End(), "\n\nimport "+spec)
+	case !decl.Lparen.IsValid():
+		only := decl.Specs[0]
+		b.insert(only.Pos(), "(\n\t")
+		b.insert(only.End(), "\n"+groupSep(path)+"\t"+spec+"\n)")
+	default:
+		b.insertSpec(decl, path, spec)
+	}
+}
+
+func (b *builder) insertSpec(decl *ast.GenDecl, path, spec string) {
+	if len(decl.Specs) == 0 {
+		b.insert(decl.Lparen+1, "\n\t"+spec+"\n")
+		return
+	}
+	if isStd(path) {
+		for _, s := range decl.Specs {
+			if p := importPath(s.(*ast.ImportSpec)); isStd(p) && p > path {
+				b.insert(s.Pos(), spec+"\n\t")
+				return
+			}
+		}
+	}
+	last := decl.Specs[len(decl.Specs)-1]
+	b.insert(last.End(), "\n"+groupSep(path)+"\t"+spec)
+}
+
+// groupSep separates a non-standard import from the standard ones.
+func groupSep(path string) string {
+	if isStd(path) {
+		return ""
+	}
+	return "\n"
+}
+
+// isStd reports whether path looks like a standard-library path (common
+// practice, as in goimports: no dot in the first element).
+func isStd(path string) bool {
+	first, _, _ := strings.Cut(path, "/")
+	return !strings.Contains(first, ".")
+}
+
+func (b *builder) insert(pos token.Pos, text string) {
+	b.edits = append(b.edits, analysis.TextEdit{Pos: pos, End: pos, NewText: []byte(text)})
+}
+
+// removeUnusedImports deletes the imports whose every use lies in source
+// the fix deletes, so that one fix applied alone (as an editor does) still
+// compiles. The go vet, go fix and checker drivers of x/tools v0.52.0
+// also drop unreferenced imports after merging fixes
+// (driverutil.FormatSourceRemoveImports); this covers the single-fix case.
+func (b *builder) removeUnusedImports() {
+	for _, spec := range b.file.Imports {
+		pn := b.pkgNameOf(spec)
+		if pn == nil || pn.Name() == "_" || pn.Name() == "." {
+			continue
+		}
+		if _, added := b.imports[pn.Imported().Path()]; added && b.imports[pn.Imported().Path()] == pn.Name() {
+			continue
+		}
+		if b.removesAllUses(pn) {
+			b.deleteSpec(spec)
+		}
+	}
+}
+
+func (b *builder) removesAllUses(pn *types.PkgName) bool {
+	any := false
+	for id, obj := range b.pass.TypesInfo.Uses {
+		if obj != pn {
+			continue
+		}
+		if !b.deletes(id.Pos()) {
+			return false
+		}
+		any = true
+	}
+	return any
+}
+
+// deletes reports whether the fix drops the source at p.
+func (b *builder) deletes(p token.Pos) bool {
+	for _, c := range b.copied {
+		if c.contains(p) {
+			return false
+		}
+	}
+	for _, r := range b.removed {
+		if r.contains(p) {
+			return true
+		}
+	}
+	return false
+}
+
+// deleteSpec deletes the import spec together with its line, or the whole
+// declaration when it is the declaration's only spec and nothing was
+// inserted into it.
+func (b *builder) deleteSpec(spec *ast.ImportSpec) {
+	for _, d := range b.file.Decls {
+		g, ok := d.(*ast.GenDecl)
+		if !ok || g.Tok != token.IMPORT {
+			continue
+		}
+		for i, s := range g.Specs {
+			if s != spec {
+				continue
+			}
+			switch {
+			case len(g.Specs) == 1 && !b.insertsInto(g):
+				b.replace(g.Pos(), b.lineEnd(g.End()), "")
+			case i+1 < len(g.Specs):
+				b.replace(s.Pos(), g.Specs[i+1].Pos(), "")
+			case i > 0:
+				b.replace(g.Specs[i-1].End(), s.End(), "")
+			default:
+				b.replace(s.Pos(), s.End(), "")
+			}
+			return
+		}
+	}
+}
+
+func (b *builder) insertsInto(g *ast.GenDecl) bool {
+	for _, e := range b.edits {
+		if e.Pos == e.End && g.Pos() <= e.Pos && e.Pos <= g.End() {
+			return true
+		}
+	}
+	return false
+}
+
+// lineEnd returns the position just past the newline ending p's line.
+func (b *builder) lineEnd(p token.Pos) token.Pos {
+	off := b.offset(p)
+	for off < len(b.src) && b.src[off] != '\n' {
+		off++
+	}
+	if off < len(b.src) {
+		off++
+	}
+	return b.tok.Pos(off)
+}

@@ -1,0 +1,129 @@
+package fixes
+
+import (
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/constant"
+	"go/token"
+	"go/types"
+
+	"golang.org/x/tools/go/ast/astutil"
+)
+
+// An integer loop that builds C(n,k) multiplicatively, or the falling
+// factorial n(n-1)...(n-k+1), becomes one call of the exact helper; the
+// loop and the accumulator's initialisation to 1 are replaced together:
+//
+//	b := 1
+//	for i := 1; i <= k; i++ { b = b * (n - k + i) / i }
+//
+// becomes
+//
+//	b := int(lgamma.MustChooseInt64(int64(n), int64(k)))
+var loopFamilies = map[Shape]family{
+	ShapeBinomialLoop: ratioFamilies[ShapeBinomial],
+	ShapeFallingLoop:  ratioFamilies[ShapePermutation],
+}
+
+func buildLoop(b *builder) error {
+	loop, acc, init := b.m.Loop, b.m.Acc, b.m.AccInit
+	if loop == nil {
+		loop, _ = b.m.Node.(ast.Stmt)
+	}
+	if loop == nil || acc == nil || init == nil {
+		// Without the initialisation the fixer cannot see that the
+		// accumulator starts at 1.
+		return errors.New("loop match lacks the loop, the accumulator or its initialisation")
+	}
+	rhs := initValue(b.pass.TypesInfo, init, acc)
+	if rhs == nil || !isOne(b.pass.TypesInfo, rhs) {
+		return fmt.Errorf("%s does not start at 1", acc.Name())
+	}
+	name, err := b.pick(loopFamilies[b.m.Shape], acc.Type())
+	if err != nil {
+		return err
+	}
+	call, err := b.call(name, b.m.Args, acc.Type())
+	if err != nil {
+		return err
+	}
+	if next(b.file, init) == loop {
+		b.replace(rhs.Pos(), rhs.End(), call)
+		b.replace(init.End(), loop.End(), "")
+		b.message = rewriteMessage(call)
+		return nil
+	}
+	if b.mentioned(acc, init.End(), loop.Pos()) {
+		return fmt.Errorf("%s changes between its initialisation and the loop", acc.Name())
+	}
+	b.replace(loop.Pos(), loop.End(), acc.Name()+" = "+call)
+	b.message = rewriteMessage(call)
+	return nil
+}
+
+// initValue returns the expression init assigns to acc, if init is a
+// single-variable assignment, short declaration or var declaration.
+func initValue(info *types.Info, init ast.Stmt, acc types.Object) ast.Expr {
+	switch s := init.(type) {
+	case *ast.AssignStmt:
+		if len(s.Lhs) == 1 && len(s.Rhs) == 1 && (s.Tok == token.ASSIGN || s.Tok == token.DEFINE) {
+			if id, ok := s.Lhs[0].(*ast.Ident); ok && info.ObjectOf(id) == acc {
+				return s.Rhs[0]
+			}
+		}
+	case *ast.DeclStmt:
+		g, ok := s.Decl.(*ast.GenDecl)
+		if !ok || len(g.Specs) != 1 {
+			return nil
+		}
+		v, ok := g.Specs[0].(*ast.ValueSpec)
+		if ok && len(v.Names) == 1 && len(v.Values) == 1 && info.Defs[v.Names[0]] == acc {
+			return v.Values[0]
+		}
+	}
+	return nil
+}
+
+func isOne(info *types.Info, e ast.Expr) bool {
+	tv, ok := info.Types[e]
+	return ok && tv.Value != nil && constant.Compare(tv.Value, token.EQL, constant.MakeInt64(1))
+}
+
+// next returns the statement following s in its block, or nil.
+func next(file *ast.File, s ast.Stmt) ast.Stmt {
+	path, _ := astutil.PathEnclosingInterval(file, s.Pos(), s.End())
+	if len(path) < 2 {
+		return nil
+	}
+	var list []ast.Stmt
+	switch p := path[1].(type) {
+	case *ast.BlockStmt:
+		list = p.List
+	case *ast.CaseClause:
+		list = p.Body
+	case *ast.CommClause:
+		list = p.Body
+	}
+	for i, t := range list {
+		if t == s && i+1 < len(list) {
+			return list[i+1]
+		}
+	}
+	return nil
+}
+
+// mentioned reports whether obj is referred to between pos and end.
+func (b *builder) mentioned(obj types.Object, pos, end token.Pos) bool {
+	found := false
+	ast.Inspect(b.file, func(n ast.Node) bool {
+		if found || n == nil || n.End() < pos || n.Pos() > end {
+			return false
+		}
+		if id, ok := n.(*ast.Ident); ok && b.pass.TypesInfo.ObjectOf(id) == obj && id.Pos() >= pos && id.End() <= end {
+			found = true
+		}
+		return true
+	})
+	return found
+}

@@ -1,0 +1,143 @@
+package fixes
+
+import (
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/token"
+	"sort"
+
+	"golang.org/x/tools/go/analysis"
+)
+
+// Suggest returns the fixes for m, the recommended one first, or nil when
+// no value-preserving rewrite exists.
+func Suggest(pass *analysis.Pass, m Match) []analysis.SuggestedFix {
+	fixes, _ := Build(pass, m)
+	return fixes
+}
+
+// Build is Suggest with the reason a fix was refused, for callers that
+// want to explain a finding without a fix (and for tests).
+func Build(pass *analysis.Pass, m Match) ([]analysis.SuggestedFix, error) {
+	b, err := newBuilder(pass, m)
+	if err != nil {
+		return nil, err
+	}
+	build, ok := builders[m.Shape]
+	if !ok {
+		return nil, fmt.Errorf("no rewrite for shape %d", m.Shape)
+	}
+	if err := build(b); err != nil {
+		return nil, err
+	}
+	fix, err := b.finish()
+	if err != nil {
+		return nil, err
+	}
+	return []analysis.SuggestedFix{fix}, nil
+}
+
+// builders maps each shape to the function that writes its fix into a
+// builder. Shapes missing here (a bare math.Gamma) have no value-preserving
+// rewrite: no float64 holds Γ(172).
+var builders map[Shape]func(*builder) error
+
+func init() {
+	builders = map[Shape]func(*builder) error{
+		ShapeBinomial:         buildRatio,
+		ShapePermutation:      buildRatio,
+		ShapeMultinomial:      buildRatio,
+		ShapeCatalan:          buildRatio,
+		ShapeHypergeometric:   buildTerm,
+		ShapePowOverFactorial: buildTerm,
+		ShapePoisson:          buildTerm,
+		ShapeBinomialPMF:      buildTerm,
+		ShapeGammaRatio:       buildTerm,
+		ShapeBeta:             buildTerm,
+		ShapeBinomialLoop:     buildLoop,
+		ShapeFallingLoop:      buildLoop,
+		ShapeFactorial:        buildGuard,
+	}
+}
+
+// A builder collects the edits of one fix to one file.
+type builder struct {
+	pass    *analysis.Pass
+	m       Match
+	file    *ast.File
+	tok     *token.File
+	src     []byte
+	edits   []analysis.TextEdit
+	removed []span // source the fix deletes
+	copied  []span // source the fix deletes but re-emits verbatim
+	imports map[string]string
+	message string
+}
+
+type span struct{ pos, end token.Pos }
+
+func (s span) contains(p token.Pos) bool { return s.pos <= p && p < s.end }
+
+func newBuilder(pass *analysis.Pass, m Match) (*builder, error) {
+	if m.File == nil || m.Node == nil {
+		return nil, errors.New("match has no file or node")
+	}
+	if ast.IsGenerated(m.File) {
+		return nil, errors.New("file is generated")
+	}
+	tok := pass.Fset.File(m.File.FileStart)
+	if tok == nil {
+		return nil, errors.New("file has no position information")
+	}
+	read := pass.ReadFile
+	if read == nil {
+		return nil, errors.New("pass cannot read files")
+	}
+	src, err := read(tok.Name())
+	if err != nil {
+		return nil, err
+	}
+	if len(src) != tok.Size() {
+		return nil, fmt.Errorf("%s changed since it was parsed", tok.Name())
+	}
+	return &builder{pass: pass, m: m, file: m.File, tok: tok, src: src, imports: make(map[string]string)}, nil
+}
+
+func (b *builder) offset(p token.Pos) int { return b.tok.Offset(p) }
+
+// text returns the source of n.
+func (b *builder) text(n ast.Node) string {
+	return string(b.src[b.offset(n.Pos()):b.offset(n.End())])
+}
+
+// copyText returns the source of n and records that the fix keeps it, so
+// that imports it uses are not deleted.
+func (b *builder) copyText(n ast.Node) string {
+	b.copied = append(b.copied, span{n.Pos(), n.End()})
+	return b.text(n)
+}
+
+// replace replaces the source from pos to end with text.
+func (b *builder) replace(pos, end token.Pos, text string) {
+	b.edits = append(b.edits, analysis.TextEdit{Pos: pos, End: end, NewText: []byte(text)})
+	if end > pos {
+		b.removed = append(b.removed, span{pos, end})
+	}
+}
+
+// finish adds the import edits, checks the fixed file type-checks and
+// returns the fix.
+func (b *builder) finish() (analysis.SuggestedFix, error) {
+	b.removeUnusedImports()
+	sort.SliceStable(b.edits, func(i, j int) bool {
+		if b.edits[i].Pos != b.edits[j].Pos {
+			return b.edits[i].Pos < b.edits[j].Pos
+		}
+		return b.edits[i].End < b.edits[j].End
+	})
+	if err := b.verify(); err != nil {
+		return analysis.SuggestedFix{}, err
+	}
+	return analysis.SuggestedFix{Message: b.message, TextEdits: b.edits}, nil
+}
