@@ -101,8 +101,9 @@ func (fr *frameReader) next() ([]byte, error) {
 			sawHeader = true
 			continue
 		}
-		if k, _, ok := strings.Cut(line, ":"); ok && sawHeader && isToken(k) {
-			continue // Content-Type or another header of the same block
+		if k, _, ok := strings.Cut(line, ":"); ok && isToken(k) {
+			sawHeader = true
+			continue // Content-Type or another header of the block
 		}
 		if !sawHeader {
 			continue // garbage before a header: skip it
