@@ -1,0 +1,84 @@
+package main
+
+import (
+	"flag"
+	"fmt"
+	"os"
+	"strings"
+
+	"github.com/overfact/overfact/analyzer"
+	"github.com/overfact/overfact/internal/driver"
+	"github.com/overfact/overfact/internal/sarif"
+)
+
+// runAnalysis implements the standalone mode: overfact [flags] PACKAGES.
+func runAnalysis(args []string) int {
+	fs := flag.NewFlagSet("overfact", flag.ContinueOnError)
+	opts := driver.Options{Stdout: os.Stdout, Stderr: os.Stderr}
+	fs.StringVar(&opts.Dir, "C", "", "change to `dir` before loading packages (for a module nested in another)")
+	fs.BoolVar(&opts.Tests, "test", true, "analyse test files too")
+	fs.BoolVar(&opts.Fix, "fix", false, "apply the first suggested fix of each finding")
+	fs.BoolVar(&opts.Diff, "diff", false, "print the fixes as a unified diff instead of applying them (implies -fix)")
+	fs.BoolVar(&opts.JSON, "json", false, "print findings as JSON on stdout, in the form of go vet -json")
+	fs.StringVar(&opts.SARIF, "sarif", "", "also write a SARIF 2.1.0 log to `file` (- for stdout)")
+	fs.StringVar(&opts.SourceRoot, "srcroot", "", "`dir` SARIF artifact URIs are relative to (default: the -C directory or the current one)")
+	addAnalyzerFlags(fs)
+	fs.Usage = func() { usage(fs) }
+	if err := fs.Parse(args); err != nil {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		return 2
+	}
+	if fs.NArg() == 0 {
+		usage(fs)
+		return driver.ExitError
+	}
+	opts.Rules = rules()
+	opts.Version = moduleVersion()
+	if driver.IsTerminal(os.Stderr) {
+		opts.Progress = os.Stderr
+	}
+	return driver.Run(analyzer.Analyzer, fs.Args(), opts)
+}
+
+// addAnalyzerFlags exposes the analyzer's own flags, as singlechecker
+// does, so that the same flag works standalone and under go vet.
+func addAnalyzerFlags(fs *flag.FlagSet) {
+	analyzer.Analyzer.Flags.VisitAll(func(f *flag.Flag) {
+		if fs.Lookup(f.Name) == nil {
+			fs.Var(f.Value, f.Name, f.Usage)
+		}
+	})
+}
+
+// rules turns the analyzer's categories into SARIF rules. A category
+// ending in ".definite" overflows for every input the code allows, an
+// error; the others overflow for inputs nothing rules out, a warning.
+func rules() []sarif.Rule {
+	var out []sarif.Rule
+	for _, c := range analyzer.Categories() {
+		level := sarif.LevelWarning
+		if strings.HasSuffix(c.ID, ".definite") {
+			level = sarif.LevelError
+		}
+		out = append(out, sarif.Rule{ID: c.ID, Title: c.Title, Help: c.Help, Level: level})
+	}
+	return out
+}
+
+func usage(fs *flag.FlagSet) {
+	out := fs.Output()
+	doc, _, _ := strings.Cut(analyzer.Analyzer.Doc, "\n\n")
+	fmt.Fprintf(out, "overfact: %s\n\n", doc)
+	fmt.Fprint(out, `Usage:
+  overfact [flags] PACKAGES     analyse packages (exit 0 clean, 3 findings, 1 errors)
+  overfact bounds [TYPE...]     print where factorials stop fitting each type
+  overfact version              print the version
+  go vet -vettool=$(which overfact) PACKAGES
+  go fix -fixtool=$(which overfact) PACKAGES
+
+Flags:
+`)
+	fs.PrintDefaults()
+}
