@@ -1,0 +1,90 @@
+package lsp
+
+import (
+	"bytes"
+	"context"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+)
+
+// TestNeovim runs the server under Neovim's built-in LSP client, a client
+// written outside this project: testdata/lsp/e2e.lua opens a Go file,
+// waits for the diagnostic, checks that Neovim placed it on the right byte
+// of a line with non-ASCII text before it, applies the preferred quick fix
+// and writes the buffer, which this test then reads.
+func TestNeovim(t *testing.T) {
+	if testing.Short() {
+		t.Skip("editor test skipped under -short")
+	}
+	nvim, err := exec.LookPath("nvim")
+	if err != nil {
+		t.Skip("nvim not on PATH; install it with: apt-get install -y neovim")
+	}
+	root, err := filepath.Abs(filepath.Join("..", ".."))
+	if err != nil {
+		t.Fatal(err)
+	}
+	ctx, cancel := context.WithTimeout(context.Background(), 4*time.Minute)
+	defer cancel()
+
+	tmp := t.TempDir()
+	bin := filepath.Join(tmp, "overfact")
+	build := exec.CommandContext(ctx, "go", "build", "-o", bin, "./testdata/lsp/server")
+	build.Dir = root
+	if out, err := build.CombinedOutput(); err != nil {
+		t.Fatalf("go build: %v\n%s", err, out)
+	}
+
+	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	file := filepath.Join(dir, "desk.go")
+	logPath := filepath.Join(tmp, "e2e.log")
+	script := filepath.Join(root, "testdata", "lsp", "e2e.lua")
+
+	gocache := goEnv(t, "GOCACHE") // kept: the XDG directories below move
+	cmd := exec.CommandContext(ctx, nvim, "--headless", "--clean", "-u", "NONE", "-c", "luafile "+script)
+	cmd.Dir = dir
+	cmd.Env = append(os.Environ(),
+		"OVERFACT_E2E_CMD="+bin+" lsp",
+		"OVERFACT_E2E_FILE="+file,
+		"OVERFACT_E2E_AT=math.Gamma",
+		"OVERFACT_E2E_LOG="+logPath,
+		"OVERFACT_E2E_TIMEOUT=30000",
+		"GOCACHE="+gocache,
+		// Keep Neovim's state, logs and swap files out of the user's home.
+		"XDG_CONFIG_HOME="+filepath.Join(tmp, "config"),
+		"XDG_DATA_HOME="+filepath.Join(tmp, "data"),
+		"XDG_STATE_HOME="+filepath.Join(tmp, "state"),
+		"XDG_CACHE_HOME="+filepath.Join(tmp, "cache"),
+	)
+	var out bytes.Buffer
+	cmd.Stdout, cmd.Stderr = &out, &out
+	runErr := cmd.Run()
+	trace, _ := os.ReadFile(logPath)
+	t.Logf("script trace:\n%s", trace)
+	if runErr != nil {
+		t.Fatalf("nvim: %v\n%s", runErr, out.Bytes())
+	}
+	if !bytes.Contains(trace, []byte("\nOK\n")) {
+		t.Fatalf("script did not finish")
+	}
+	fixed, err := os.ReadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := "/* é λ 𝛤 */ return gammaChecked(n + 1)"; !strings.Contains(string(fixed), want) {
+		t.Errorf("file after the fix lacks %q:\n%s", want, fixed)
+	}
+}
+
+func goEnv(t *testing.T, name string) string {
+	t.Helper()
+	out, err := exec.Command("go", "env", name).Output()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return strings.TrimSpace(string(out))
+}
