@@ -50,10 +50,14 @@ func buildGuard(b *builder) error {
 	indent := b.indentOf(body.Lbrace) + "\t"
 	guard := fmt.Sprintf("\n%sif %s >= %d {\n%s\tpanic(%s.Sprintf(%s, %s))\n%s}",
 		indent, p, m.FirstBad, indent, fmtName, strconv.Quote(msg), p, indent)
+	// The guard goes after the brace's line, below any comment ending
+	// that line, unless a statement shares the line with the brace.
+	at := b.lineEnd(body.Lbrace) - 1
 	if len(body.List) > 0 && b.line(body.List[0].Pos()) == b.line(body.Lbrace) {
+		at = body.Lbrace + 1
 		guard += "\n" + indent
 	}
-	b.insert(body.Lbrace+1, guard)
+	b.insert(at, guard)
 	b.message = fmt.Sprintf("Add a range guard: panic when %s >= %d, where the result overflows %s", p, m.FirstBad, result)
 	if !hadFmt && b.addedImport("fmt") {
 		b.message += " (imports fmt)"

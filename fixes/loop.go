@@ -36,6 +36,9 @@ func buildLoop(b *builder) error {
 		// accumulator starts at 1.
 		return errors.New("loop match lacks the loop, the accumulator or its initialisation")
 	}
+	if !onlyUpdates(b.pass.TypesInfo, loop, acc) {
+		return fmt.Errorf("the loop does more than update %s", acc.Name())
+	}
 	rhs := initValue(b.pass.TypesInfo, init, acc)
 	if rhs == nil || !isOne(b.pass.TypesInfo, rhs) {
 		return fmt.Errorf("%s does not start at 1", acc.Name())
@@ -60,6 +63,36 @@ func buildLoop(b *builder) error {
 	b.replace(loop.Pos(), loop.End(), acc.Name()+" = "+call)
 	b.message = rewriteMessage(call)
 	return nil
+}
+
+// onlyUpdates reports whether every statement of the loop's body assigns
+// acc, so that replacing the loop drops no other effect.
+func onlyUpdates(info *types.Info, loop ast.Stmt, acc types.Object) bool {
+	var body *ast.BlockStmt
+	switch l := loop.(type) {
+	case *ast.ForStmt:
+		body = l.Body
+	case *ast.RangeStmt:
+		body = l.Body
+	default:
+		return false
+	}
+	for _, s := range body.List {
+		var lhs []ast.Expr
+		switch s := s.(type) {
+		case *ast.AssignStmt:
+			lhs = s.Lhs
+		case *ast.IncDecStmt:
+			lhs = []ast.Expr{s.X}
+		}
+		if len(lhs) != 1 {
+			return false
+		}
+		if id, ok := lhs[0].(*ast.Ident); !ok || info.ObjectOf(id) != acc {
+			return false
+		}
+	}
+	return true
 }
 
 // initValue returns the expression init assigns to acc, if init is a
@@ -93,22 +126,24 @@ func isOne(info *types.Info, e ast.Expr) bool {
 // next returns the statement following s in its block, or nil.
 func next(file *ast.File, s ast.Stmt) ast.Stmt {
 	path, _ := astutil.PathEnclosingInterval(file, s.Pos(), s.End())
-	if len(path) < 2 {
-		return nil
-	}
-	var list []ast.Stmt
-	switch p := path[1].(type) {
-	case *ast.BlockStmt:
-		list = p.List
-	case *ast.CaseClause:
-		list = p.Body
-	case *ast.CommClause:
-		list = p.Body
-	}
-	for i, t := range list {
-		if t == s && i+1 < len(list) {
-			return list[i+1]
+	for _, n := range path {
+		var list []ast.Stmt
+		switch p := n.(type) {
+		case *ast.BlockStmt:
+			list = p.List
+		case *ast.CaseClause:
+			list = p.Body
+		case *ast.CommClause:
+			list = p.Body
+		default:
+			continue
 		}
+		for i, t := range list {
+			if t == s && i+1 < len(list) {
+				return list[i+1]
+			}
+		}
+		return nil
 	}
 	return nil
 }

@@ -135,8 +135,8 @@ func factorialMatch(pass *analysis.Pass, m fixes.Match, line int, param string) 
 			m.Param = p
 		}
 	}
-	if sig.Results().Len() != 1 || m.Param == nil {
-		return m, fmt.Errorf("function has no parameter %s or not one result", param)
+	if sig.Results().Len() == 0 || m.Param == nil {
+		return m, fmt.Errorf("function has no parameter %s or no result", param)
 	}
 	m.Result = sig.Results().At(0).Type()
 	m.FirstBad = firstBadFactorial(pass.TypesSizes, m.Result)

@@ -1,0 +1,40 @@
+// Package probeguard holds standalone factorials for the range guards: a
+// reliability test plan that counts orderings of units under test.
+package probeguard
+
+// Orderings is n! in int64, wrong from n = 21 on.
+//
+// probe:factorial(n)
+func Orderings(n int64) int64 { // want "probe factorial"
+	r := int64(1)
+	for i := int64(2); i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+
+// Rec is n! by recursion, in int32: wrong from n = 13 on.
+//
+// probe:factorial(n)
+func Rec(n int32) int32 { // want "probe factorial"
+	if n < 2 {
+		return 1
+	}
+	return n * Rec(n-1)
+}
+
+// Short has its statement on the line of its brace.
+//
+// probe:factorial(n)
+func Short(n uint) uint { return uint(Orderings(int64(n))) } // want "probe factorial"
+
+// Tiny takes an int8, which never reaches 171.
+//
+// probe:factorial(n)
+func Tiny(n int8) float64 { // want "probe factorial: no fix: n of type int8 never reaches 171"
+	r := 1.0
+	for i := int8(2); i <= n; i++ {
+		r *= float64(i)
+	}
+	return r
+}

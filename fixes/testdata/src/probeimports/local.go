@@ -1,0 +1,8 @@
+package probeimports
+
+// Mixes has a local lgamma2, so its fix imports the helper as lgamma3.
+func Mixes(n, k int) float64 {
+	lgamma2 := 0.5
+	// probe:binomial(n, k)
+	return lgamma2 * fact(n) / fact(n-k) / fact(k) // want "probe binomial"
+}
