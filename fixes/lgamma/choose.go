@@ -1,0 +1,159 @@
+package lgamma
+
+// Binomial coefficients. The logarithm is ln(n!/(n−k)!) − ln k! with the
+// smaller of k and n−k (see falling.go), all in double-double, so C(n,k)
+// keeps full float64 accuracy where exp(lgamma(n+1)−lgamma(k+1)−
+// lgamma(n−k+1)) loses digits to the rounding of ln n!. The exact forms
+// use the multiplicative formula C(m+i, i) = C(m+i−1, i−1)·(m+i)/i and
+// divide out gcd(C, i) before multiplying (Knuth, TAOCP vol. 2, 4.5.2
+// exercise; common practice), so intermediates overflow only when the
+// result does.
+
+import (
+	"math"
+	"math/bits"
+)
+
+// logChooseDD returns ln C(n,k) for 0 ≤ k ≤ n in double-double.
+func logChooseDD(n, k int64) dd {
+	if k > n-k {
+		k = n - k
+	}
+	if k == 0 {
+		return dd{}
+	}
+	return lnFallingDD(n, k).sub(lnFactDD(k))
+}
+
+// LogChoose returns ln C(n,k), the log of the binomial coefficient.
+//
+// Special cases are:
+//
+//	LogChoose(n, 0) = LogChoose(n, n) = 0
+//	LogChoose(n, k < 0) = LogChoose(n, k > n) = -Inf
+//	LogChoose(n < 0, k) = NaN
+func LogChoose(n, k int) float64 {
+	switch {
+	case n < 0:
+		return math.NaN()
+	case k < 0 || k > n:
+		return math.Inf(-1)
+	}
+	return logChooseDD(int64(n), int64(k)).float()
+}
+
+// Choose returns the binomial coefficient C(n,k) = n!/(k!(n−k)!) as a
+// float64, with a relative error of a few 1e-16.
+//
+// Special cases are:
+//
+//	Choose(n, k < 0) = Choose(n, k > n) = 0
+//	Choose(n < 0, k) = NaN
+//	Choose(n, k) = +Inf if the result overflows
+func Choose(n, k int) float64 {
+	switch {
+	case n < 0:
+		return math.NaN()
+	case k < 0 || k > n:
+		return 0
+	}
+	return integerResult(logChooseDD(int64(n), int64(k)), func() (uint64, bool) {
+		return chooseU(uint64(n), uint64(k), math.MaxUint64)
+	})
+}
+
+// exactLogLimit is a little below ln 2^64: results under e^exactLogLimit
+// are computed exactly as well, as the double-double value cannot decide
+// the rounding of an integer that lies halfway between two float64s.
+const exactLogLimit = 44
+
+// integerResult rounds an integer-valued result given by its logarithm,
+// going through the exact uint64 value when it is small enough to have
+// one.
+func integerResult(l dd, exact func() (uint64, bool)) float64 {
+	if l.hi < exactLogLimit {
+		if u, ok := exact(); ok {
+			return float64(u)
+		}
+	}
+	return expOf(l)
+}
+
+// gcd returns the greatest common divisor of a and b (Euclid).
+func gcd(a, b uint64) uint64 {
+	for b != 0 {
+		a, b = b, a%b
+	}
+	return a
+}
+
+// mulDiv returns r·a/d when d divides r·a, with r·a/d ≤ limit, by first
+// dividing out the common factor of r and d.
+func mulDiv(r, a, d, limit uint64) (uint64, bool) {
+	g := gcd(r, d)
+	r, d = r/g, d/g
+	hi, lo := bits.Mul64(r, a/d)
+	if hi != 0 || lo > limit {
+		return 0, false
+	}
+	return lo, true
+}
+
+// chooseU returns C(n,k) if it is at most limit. Along i the partial
+// values C(n−k+i, i) only grow, so the first overflow decides.
+func chooseU(n, k, limit uint64) (uint64, bool) {
+	if k > n {
+		return 0, true
+	}
+	if k > n-k {
+		k = n - k
+	}
+	r := uint64(1)
+	for i := uint64(1); i <= k; i++ {
+		var ok bool
+		if r, ok = mulDiv(r, n-k+i, i, limit); !ok {
+			return 0, false
+		}
+	}
+	return r, true
+}
+
+// ChooseInt64 returns C(n,k) and true when it fits in an int64, and 0 and
+// false when it does not or n is negative. For k < 0 or k > n the result
+// is 0 and true.
+func ChooseInt64(n, k int64) (int64, bool) {
+	switch {
+	case n < 0:
+		return 0, false
+	case k < 0:
+		return 0, true
+	}
+	r, ok := chooseU(uint64(n), uint64(k), math.MaxInt64)
+	return int64(r), ok
+}
+
+// MustChooseInt64 is like ChooseInt64 but panics when n is negative or
+// the result does not fit in an int64.
+func MustChooseInt64(n, k int64) int64 {
+	r, ok := ChooseInt64(n, k)
+	if !ok {
+		panic(mustError("MustChooseInt64", args(n, k), nonNegative("n", n), "int64"))
+	}
+	return r
+}
+
+// ChooseUint64 returns C(n,k) and true when it fits in a uint64, and 0
+// and false otherwise. For k > n the result is 0 and true.
+func ChooseUint64(n, k uint64) (uint64, bool) {
+	return chooseU(n, k, math.MaxUint64)
+}
+
+// MustChooseUint64 is like ChooseUint64 but panics when the result does
+// not fit in a uint64.
+func MustChooseUint64(n, k uint64) uint64 {
+	r, ok := ChooseUint64(n, k)
+	if !ok {
+		panic(mustError("MustChooseUint64", args(n, k), "", "uint64"))
+	}
+	return r
+}

@@ -1,0 +1,137 @@
+package lgamma
+
+// Factorials. ln n! is a table lookup below 1024 (values generated with
+// math/big, see gen_tables.go) and Stirling's formula with the remainder
+// series δ(n) of DLMF §5.11.1 above, evaluated in double-double so the
+// result is correctly rounded in all but rare ties. The exact forms
+// multiply with overflow checks from math/bits.
+
+import (
+	"fmt"
+	"math"
+	"math/bits"
+)
+
+// lnFactDD returns ln n! for n ≥ 0 in double-double.
+func lnFactDD(n int64) dd {
+	if n < int64(len(lnFactTable)) {
+		return lnFactTable[n]
+	}
+	// ln n! = (n+½)ln n − n + ½ln 2π + δ(n).
+	x := ddInt(n)
+	return x.addF(0.5).mul(ddLog(x)).sub(x).add(halfLn2Pi).addF(stirlingInt(n))
+}
+
+// LogFactorial returns ln n!, within 1 ulp for every n.
+//
+// Special cases are:
+//
+//	LogFactorial(0) = LogFactorial(1) = 0
+//	LogFactorial(n < 0) = NaN
+func LogFactorial(n int) float64 {
+	if n < 0 {
+		return math.NaN()
+	}
+	if n < len(lnFactTable) {
+		return lnFactTable[n].hi
+	}
+	return lnFactDD(int64(n)).float()
+}
+
+// maxFactorialFloat is the largest n with n! < MaxFloat64.
+const maxFactorialFloat = 170
+
+// Factorial returns n! rounded to the nearest float64.
+//
+// Special cases are:
+//
+//	Factorial(n > 170) = +Inf
+//	Factorial(n < 0) = NaN
+func Factorial(n int) float64 {
+	switch {
+	case n < 0:
+		return math.NaN()
+	case n > maxFactorialFloat:
+		return math.Inf(1)
+	}
+	return factTable[n]
+}
+
+// factorialU returns n! if it is at most limit.
+func factorialU(n, limit uint64) (uint64, bool) {
+	r := uint64(1)
+	for i := uint64(2); i <= n; i++ {
+		hi, lo := bits.Mul64(r, i)
+		if hi != 0 || lo > limit {
+			return 0, false
+		}
+		r = lo
+	}
+	return r, true
+}
+
+// FactorialInt64 returns n! and true when n! fits in an int64
+// (0 ≤ n ≤ 20), and 0 and false otherwise.
+func FactorialInt64(n int64) (int64, bool) {
+	if n < 0 {
+		return 0, false
+	}
+	r, ok := factorialU(uint64(n), math.MaxInt64)
+	return int64(r), ok
+}
+
+// MustFactorialInt64 is like FactorialInt64 but panics when n is negative
+// or n! does not fit in an int64.
+func MustFactorialInt64(n int64) int64 {
+	r, ok := FactorialInt64(n)
+	if !ok {
+		panic(mustError("MustFactorialInt64", args(n), nonNegative("n", n), "int64"))
+	}
+	return r
+}
+
+// FactorialUint64 returns n! and true when n! fits in a uint64
+// (n ≤ 20), and 0 and false otherwise.
+func FactorialUint64(n uint64) (uint64, bool) {
+	return factorialU(n, math.MaxUint64)
+}
+
+// MustFactorialUint64 is like FactorialUint64 but panics when n! does not
+// fit in a uint64.
+func MustFactorialUint64(n uint64) uint64 {
+	r, ok := FactorialUint64(n)
+	if !ok {
+		panic(mustError("MustFactorialUint64", args(n), "", "uint64"))
+	}
+	return r
+}
+
+// mustError builds the panic message of the Must functions, naming the
+// function and its arguments: a domain problem if there is one, else the
+// overflow.
+func mustError(fn, args, domain, typ string) string {
+	if domain != "" {
+		return fmt.Sprintf("lgamma: %s(%s): %s", fn, args, domain)
+	}
+	return fmt.Sprintf("lgamma: %s(%s): result does not fit in %s", fn, args, typ)
+}
+
+// nonNegative returns a domain complaint if v is negative.
+func nonNegative(name string, v int64) string {
+	if v < 0 {
+		return fmt.Sprintf("%s = %d is negative", name, v)
+	}
+	return ""
+}
+
+// args formats the arguments of a call for a panic message.
+func args[T int64 | uint64](vs ...T) string {
+	s := ""
+	for i, v := range vs {
+		if i > 0 {
+			s += ", "
+		}
+		s += fmt.Sprint(v)
+	}
+	return s
+}

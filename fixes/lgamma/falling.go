@@ -1,0 +1,121 @@
+package lgamma
+
+// Falling factorials n!/(n−k)! = n(n−1)…(n−k+1). The logarithm is the
+// difference of two Stirling forms rewritten as
+// k·ln n + (m+½)·ln(n/m) − k + δ(n) − δ(m), m = n−k (DLMF 5.11.1), so
+// that no two large terms cancel even for n near 2^63 and small k.
+
+import (
+	"math"
+	"math/bits"
+)
+
+// lnFallingDD returns ln(n!/(n−k)!) for 0 ≤ k ≤ n in double-double.
+func lnFallingDD(n, k int64) dd {
+	m := n - k
+	if m < int64(len(lnFactTable)) {
+		return lnFactDD(n).sub(lnFactTable[m])
+	}
+	x, y := ddInt(n), ddInt(m)
+	kd := ddInt(k)
+	r := kd.mul(ddLog(x)).add(y.addF(0.5).mul(ddLog(x.div(y)))).sub(kd)
+	return r.addF(stirlingInt(n) - stirlingInt(m))
+}
+
+// LogFalling returns ln(n!/(n−k)!), the log of the falling factorial
+// n(n−1)…(n−k+1).
+//
+// Special cases are:
+//
+//	LogFalling(n, 0) = 0
+//	LogFalling(n, k > n) = -Inf (a factor is zero)
+//	LogFalling(n < 0, k) = NaN
+//	LogFalling(n, k < 0) = NaN
+func LogFalling(n, k int) float64 {
+	switch {
+	case n < 0 || k < 0:
+		return math.NaN()
+	case k > n:
+		return math.Inf(-1)
+	}
+	return lnFallingDD(int64(n), int64(k)).float()
+}
+
+// Falling returns the falling factorial n!/(n−k)! = n(n−1)…(n−k+1).
+//
+// Special cases are:
+//
+//	Falling(n, 0) = 1
+//	Falling(n, k > n) = 0
+//	Falling(n < 0, k) = NaN
+//	Falling(n, k < 0) = NaN
+//	Falling(n, k) = +Inf if the result overflows
+func Falling(n, k int) float64 {
+	switch {
+	case n < 0 || k < 0:
+		return math.NaN()
+	case k > n:
+		return 0
+	}
+	return integerResult(lnFallingDD(int64(n), int64(k)), func() (uint64, bool) {
+		return fallingU(uint64(n), uint64(k), math.MaxUint64)
+	})
+}
+
+// fallingU returns n(n−1)…(n−k+1) if it is at most limit. The partial
+// products only grow, so the first overflow decides.
+func fallingU(n, k, limit uint64) (uint64, bool) {
+	if k > n {
+		return 0, true
+	}
+	r := uint64(1)
+	for i := uint64(0); i < k; i++ {
+		hi, lo := bits.Mul64(r, n-i)
+		if hi != 0 || lo > limit {
+			return 0, false
+		}
+		r = lo
+	}
+	return r, true
+}
+
+// FallingInt64 returns n!/(n−k)! and true when it fits in an int64, and
+// 0 and false when it does not or n or k is negative. For k > n the
+// result is 0 and true.
+func FallingInt64(n, k int64) (int64, bool) {
+	if n < 0 || k < 0 {
+		return 0, false
+	}
+	r, ok := fallingU(uint64(n), uint64(k), math.MaxInt64)
+	return int64(r), ok
+}
+
+// MustFallingInt64 is like FallingInt64 but panics when n or k is
+// negative or the result does not fit in an int64.
+func MustFallingInt64(n, k int64) int64 {
+	r, ok := FallingInt64(n, k)
+	if !ok {
+		d := nonNegative("n", n)
+		if d == "" {
+			d = nonNegative("k", k)
+		}
+		panic(mustError("MustFallingInt64", args(n, k), d, "int64"))
+	}
+	return r
+}
+
+// FallingUint64 returns n!/(n−k)! and true when it fits in a uint64, and
+// 0 and false otherwise. For k > n the result is 0 and true.
+func FallingUint64(n, k uint64) (uint64, bool) {
+	return fallingU(n, k, math.MaxUint64)
+}
+
+// MustFallingUint64 is like FallingUint64 but panics when the result does
+// not fit in a uint64.
+func MustFallingUint64(n, k uint64) uint64 {
+	r, ok := FallingUint64(n, k)
+	if !ok {
+		panic(mustError("MustFallingUint64", args(n, k), "", "uint64"))
+	}
+	return r
+}

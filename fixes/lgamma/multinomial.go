@@ -1,0 +1,112 @@
+package lgamma
+
+// Multinomial coefficients (k₁+…+kₘ)!/(k₁!…kₘ!) as the product of the
+// binomials C(k₁+…+kᵢ, kᵢ) (DLMF 26.4.2), so both the log form and the
+// exact form reuse the binomial code and no factorial of the total is
+// ever formed.
+
+import (
+	"fmt"
+	"math"
+	"math/bits"
+)
+
+// logMultinomialDD returns ln of the multinomial coefficient, or false
+// if an argument is negative.
+func logMultinomialDD(ks []int) (dd, bool) {
+	var r dd
+	var s int64
+	for _, k := range ks {
+		if k < 0 {
+			return dd{}, false
+		}
+		s += int64(k)
+		if s < 0 {
+			return dd{math.Inf(1), 0}, true
+		}
+		r = r.add(logChooseDD(s, int64(k)))
+	}
+	return r, true
+}
+
+// LogMultinomial returns ln((k₁+…+kₘ)!/(k₁!…kₘ!)).
+//
+// Special cases are:
+//
+//	LogMultinomial() = 0
+//	LogMultinomial(ks) = NaN if any k is negative
+//	LogMultinomial(ks) = +Inf if the sum of ks overflows int64
+func LogMultinomial(ks ...int) float64 {
+	r, ok := logMultinomialDD(ks)
+	if !ok {
+		return math.NaN()
+	}
+	return r.float()
+}
+
+// Multinomial returns (k₁+…+kₘ)!/(k₁!…kₘ!) as a float64.
+//
+// Special cases are:
+//
+//	Multinomial() = 1
+//	Multinomial(ks) = NaN if any k is negative
+//	Multinomial(ks) = +Inf if the result overflows
+func Multinomial(ks ...int) float64 {
+	r, ok := logMultinomialDD(ks)
+	if !ok {
+		return math.NaN()
+	}
+	return integerResult(r, func() (uint64, bool) { return multinomialU(ks, math.MaxUint64) })
+}
+
+// MultinomialInt64 returns the multinomial coefficient and true when it
+// fits in an int64, and 0 and false when it does not or any k is
+// negative. Every factor C(k₁+…+kᵢ, kᵢ) is at least 1, so the first
+// overflow decides.
+func MultinomialInt64(ks ...int64) (int64, bool) {
+	r, ok := multinomialU(ks, math.MaxInt64)
+	return int64(r), ok
+}
+
+// multinomialU returns the multinomial coefficient if it is at most limit
+// and no k is negative.
+func multinomialU[T int | int64](ks []T, limit uint64) (uint64, bool) {
+	r := uint64(1)
+	var s uint64
+	for _, k := range ks {
+		if k < 0 {
+			return 0, false
+		}
+		s += uint64(k)
+		if s > limit {
+			return 0, false
+		}
+		c, ok := chooseU(s, uint64(k), limit)
+		if !ok {
+			return 0, false
+		}
+		hi, lo := bits.Mul64(r, c)
+		if hi != 0 || lo > limit {
+			return 0, false
+		}
+		r = lo
+	}
+	return r, true
+}
+
+// MustMultinomialInt64 is like MultinomialInt64 but panics when an
+// argument is negative or the result does not fit in an int64.
+func MustMultinomialInt64(ks ...int64) int64 {
+	r, ok := MultinomialInt64(ks...)
+	if !ok {
+		d := ""
+		for i, k := range ks {
+			if k < 0 {
+				d = fmt.Sprintf("argument %d = %d is negative", i+1, k)
+				break
+			}
+		}
+		panic(mustError("MustMultinomialInt64", args(ks...), d, "int64"))
+	}
+	return r
+}

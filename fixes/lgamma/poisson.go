@@ -1,0 +1,68 @@
+package lgamma
+
+// Poisson probabilities λᵏe^(−λ)/k! by the saddle-point expansion of
+// Loader (2000), "Fast and accurate computation of binomial
+// probabilities": ln p = −δ(k) − bd0(k, λ) − ½ln(2πk), with δ the
+// Stirling remainder (stirling.go) and bd0 the deviance (bd0.go). All
+// terms are carried in double-double and exponentiated once.
+
+import "math"
+
+// poissonLogDD returns ln P(X = k) for k ≥ 1 and finite λ > 0.
+func poissonLogDD(k int, lambda float64) dd {
+	x := ddInt(int64(k))
+	r := bd0(x, dd{lambda, 0}).addF(stirlingInt(int64(k))).add(halfLn2Pi)
+	return r.add(ddLog(x).mulF(0.5)).neg()
+}
+
+// poissonSpecial handles the arguments outside the main formula: it
+// returns the log-probability and true, or false for k ≥ 1, 0 < λ < ∞.
+func poissonSpecial(k int, lambda float64) (float64, bool) {
+	switch {
+	case math.IsNaN(lambda) || lambda < 0 || math.IsInf(lambda, 1):
+		return math.NaN(), true
+	case k < 0:
+		return math.Inf(-1), true
+	case k == 0:
+		return -lambda, true
+	case lambda == 0:
+		return math.Inf(-1), true
+	}
+	return 0, false
+}
+
+// PoissonLogPMF returns ln P(X = k) for X ~ Poisson(λ), that is
+// k·ln λ − λ − ln k!.
+//
+// Special cases are:
+//
+//	PoissonLogPMF(0, λ) = -λ
+//	PoissonLogPMF(k < 0, λ) = -Inf
+//	PoissonLogPMF(k > 0, 0) = -Inf
+//	PoissonLogPMF(k, λ < 0) = NaN
+//	PoissonLogPMF(k, +Inf) = NaN
+//	PoissonLogPMF(k, NaN) = NaN
+func PoissonLogPMF(k int, lambda float64) float64 {
+	if v, ok := poissonSpecial(k, lambda); ok {
+		return v
+	}
+	return poissonLogDD(k, lambda).float()
+}
+
+// PoissonPMF returns P(X = k) = λᵏe^(−λ)/k! for X ~ Poisson(λ), with a
+// relative error of a few 1e-16 wherever the result is a normal float64.
+//
+// Special cases are:
+//
+//	PoissonPMF(0, λ) = e^(−λ)
+//	PoissonPMF(k < 0, λ) = 0
+//	PoissonPMF(k > 0, 0) = 0
+//	PoissonPMF(k, λ < 0) = NaN
+//	PoissonPMF(k, +Inf) = NaN
+//	PoissonPMF(k, NaN) = NaN
+func PoissonPMF(k int, lambda float64) float64 {
+	if v, ok := poissonSpecial(k, lambda); ok {
+		return math.Exp(v)
+	}
+	return expOf(poissonLogDD(k, lambda))
+}
