@@ -8,6 +8,8 @@ import (
 	"go/types"
 	"math"
 	"strconv"
+
+	"github.com/overfact/overfact/analyzer/thresholds"
 )
 
 // No rewrite makes 25! fit an int64, so a standalone factorial gets a
@@ -25,6 +27,9 @@ func buildGuard(b *builder) error {
 	body := funcBody(m.Func)
 	if body == nil || m.Param == nil || m.Param.Name() == "" || m.Param.Name() == "_" {
 		return errors.New("factorial match lacks a function body or a named parameter")
+	}
+	if m.FirstBad <= 0 {
+		m.FirstBad = factorialFirstBad(b.pass.TypesSizes, m.Result)
 	}
 	if m.FirstBad <= 0 {
 		return errors.New("factorial match has no first bad value")
@@ -63,6 +68,22 @@ func buildGuard(b *builder) error {
 		b.message += " (imports fmt)"
 	}
 	return nil
+}
+
+// factorialFirstBad asks the thresholds package for the first n whose n!
+// does not fit t, or returns 0.
+func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
+	if t == nil {
+		return 0
+	}
+	num, ok := thresholds.Lookup(t, sizes)
+	if !ok {
+		return 0
+	}
+	if l := thresholds.Factorial(num); !l.None() {
+		return l.FirstBad
+	}
+	return 0
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {

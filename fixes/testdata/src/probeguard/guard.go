@@ -38,3 +38,25 @@ func Tiny(n int8) float64 { // want "probe factorial: no fix: n of type int8 nev
 	}
 	return r
 }
+
+// Count leaves the limit to the thresholds package.
+//
+// probe:factorial(n; auto)
+func Count(n uint64) uint64 { // want "probe factorial"
+	r := uint64(1)
+	for i := uint64(2); i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+
+// Small is n! in float32, +Inf from n = 35 on.
+//
+// probe:factorial(n; auto)
+func Small(n int) float32 { // want "probe factorial"
+	r := float32(1)
+	for i := 2; i <= n; i++ {
+		r *= float32(i)
+	}
+	return r
+}
