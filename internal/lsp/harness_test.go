@@ -65,6 +65,12 @@ func writeModule(t *testing.T, files map[string]string) string {
 	if _, ok := files["go.mod"]; !ok {
 		files["go.mod"] = "module example.com/desk\n\ngo 1.21\n"
 	}
+	writeFiles(t, dir, files)
+	return dir
+}
+
+func writeFiles(t testing.TB, dir string, files map[string]string) {
+	t.Helper()
 	for name, text := range files {
 		p := filepath.Join(dir, name)
 		if err := os.MkdirAll(filepath.Dir(p), 0o755); err != nil {
@@ -74,7 +80,6 @@ func writeModule(t *testing.T, files map[string]string) string {
 			t.Fatal(err)
 		}
 	}
-	return dir
 }
 
 // client drives a server over pipes with hand-built JSON-RPC messages.
