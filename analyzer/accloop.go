@@ -1,0 +1,317 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+)
+
+// facKind is the kind of product a loop, a recursion or a function
+// computes.
+type facKind int
+
+const (
+	kindNone      facKind = iota
+	kindFactorial         // 1·2·…·n
+	kindDouble            // n·(n−2)·(n−4)·…
+	kindFalling           // n·(n−1)·…·(n−k+1)
+	kindRising            // x·(x+1)·…·(x+n−1)
+	kindBinomial          // C(n, k), from a ratio or a multiplicative loop
+)
+
+var kindNames = map[facKind]string{
+	kindFactorial: "factorial",
+	kindDouble:    "double-factorial",
+	kindFalling:   "falling-factorial",
+	kindRising:    "rising-factorial",
+	kindBinomial:  "binomial",
+}
+
+// accLoop is a loop that multiplies an accumulator, started at a
+// constant, by a factor that moves with the induction variable.
+type accLoop struct {
+	shape   *loopShape
+	acc     types.Object
+	accInit ast.Stmt
+	update  ast.Stmt
+	mult    ast.Expr // the factor, as written
+	div     ast.Expr // the divisor of a multiplicative binomial loop
+	kind    facKind
+	// The largest factor is top+topOff (the constant topOff when top is
+	// nil); for a falling factorial the factors run from top down over
+	// count values.
+	top    ast.Expr
+	topOff int64
+	count  ast.Expr // falling and rising: number of factors, as count+countOff
+	coff   int64
+	x      ast.Expr // rising: the base x
+}
+
+// accLoopOf recognises a product loop; before are the statements that
+// precede the loop in its block, searched for the accumulator's start.
+func (fc *fnCtx) accLoopOf(s ast.Stmt, before []ast.Stmt) *accLoop {
+	sh := fc.shapeOf(s)
+	if sh == nil {
+		return nil
+	}
+	var found *accLoop
+	for _, st := range sh.body.List {
+		al := fc.updateOf(st, sh)
+		if al == nil {
+			continue
+		}
+		if found != nil && found.acc == al.acc {
+			// acc *= x; acc /= y as two statements: a binomial loop.
+			if found.div == nil && al.div != nil && al.mult == nil {
+				found.div = al.div
+				continue
+			}
+			return nil
+		}
+		if found == nil && al.mult != nil {
+			found = al
+		}
+	}
+	if found == nil || fc.assignsElsewhere(sh.body, found) {
+		return nil
+	}
+	found.accInit = fc.constStart(found.acc, before)
+	if found.accInit == nil {
+		return nil
+	}
+	if !fc.classify(found) {
+		return nil
+	}
+	return found
+}
+
+// updateOf matches acc *= X, acc = acc * X, acc = X * acc,
+// acc = acc * X / Y and acc /= Y.
+func (fc *fnCtx) updateOf(st ast.Stmt, sh *loopShape) *accLoop {
+	as, ok := st.(*ast.AssignStmt)
+	if !ok || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return nil
+	}
+	acc := fc.c.objOf(as.Lhs[0])
+	if acc == nil || acc == sh.iv {
+		return nil
+	}
+	al := &accLoop{shape: sh, acc: acc, update: as}
+	switch as.Tok {
+	case token.MUL_ASSIGN:
+		al.mult = as.Rhs[0]
+	case token.QUO_ASSIGN:
+		al.div = as.Rhs[0]
+	case token.ASSIGN:
+		rhs, ok := unparen(as.Rhs[0]).(*ast.BinaryExpr)
+		if !ok {
+			return nil
+		}
+		if rhs.Op == token.QUO {
+			al.div = rhs.Y
+			if rhs, ok = unparen(rhs.X).(*ast.BinaryExpr); !ok {
+				return nil
+			}
+		}
+		if rhs.Op != token.MUL {
+			return nil
+		}
+		switch acc {
+		case fc.c.objOf(rhs.X):
+			al.mult = rhs.Y
+		case fc.c.objOf(rhs.Y):
+			al.mult = rhs.X
+		default:
+			return nil
+		}
+	default:
+		return nil
+	}
+	return al
+}
+
+// assignsElsewhere reports whether the loop body changes the accumulator
+// other than by its update, which would make it something else than a
+// product.
+func (fc *fnCtx) assignsElsewhere(body *ast.BlockStmt, al *accLoop) bool {
+	other := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		if other {
+			return false
+		}
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			if n == al.update || (al.div != nil && fc.isDivOf(n, al)) {
+				return false
+			}
+			for _, l := range n.Lhs {
+				if fc.c.objOf(l) == al.acc {
+					other = true
+				}
+			}
+		case *ast.IncDecStmt:
+			if fc.c.objOf(n.X) == al.acc {
+				other = true
+			}
+		case *ast.UnaryExpr:
+			if n.Op == token.AND && fc.c.objOf(n.X) == al.acc {
+				other = true
+			}
+		}
+		return true
+	})
+	return other
+}
+
+func (fc *fnCtx) isDivOf(as *ast.AssignStmt, al *accLoop) bool {
+	return as.Tok == token.QUO_ASSIGN && len(as.Rhs) == 1 && as.Rhs[0] == al.div
+}
+
+// constStart finds the statement, among those before the loop, that last
+// sets the accumulator, and returns it when it sets a non-zero constant.
+func (fc *fnCtx) constStart(acc types.Object, before []ast.Stmt) ast.Stmt {
+	for i := len(before) - 1; i >= 0; i-- {
+		switch st := before[i].(type) {
+		case *ast.AssignStmt:
+			for j, l := range st.Lhs {
+				if fc.c.objOf(l) != acc {
+					continue
+				}
+				if len(st.Rhs) == len(st.Lhs) && fc.nonZeroConst(st.Rhs[j]) {
+					return st
+				}
+				return nil
+			}
+		case *ast.DeclStmt:
+			gd, ok := st.Decl.(*ast.GenDecl)
+			if !ok || gd.Tok != token.VAR {
+				continue
+			}
+			for _, spec := range gd.Specs {
+				vs := spec.(*ast.ValueSpec)
+				for j, name := range vs.Names {
+					if fc.c.pass.TypesInfo.Defs[name] != acc {
+						continue
+					}
+					if len(vs.Values) == len(vs.Names) && fc.nonZeroConst(vs.Values[j]) {
+						return st
+					}
+					return nil
+				}
+			}
+		default:
+			if mentions(fc.c.pass.TypesInfo, st, acc) {
+				return nil
+			}
+		}
+	}
+	return nil
+}
+
+func (fc *fnCtx) nonZeroConst(e ast.Expr) bool {
+	v, ok := fc.floatConst(e)
+	return ok && v != 0
+}
+
+// mentions reports whether n uses obj.
+func mentions(info *types.Info, n ast.Node, obj types.Object) bool {
+	found := false
+	ast.Inspect(n, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && info.Uses[id] == obj {
+			found = true
+		}
+		return !found
+	})
+	return found
+}
+
+// classify decides what product the loop forms from how its factor moves
+// with the induction variable.
+func (fc *fnCtx) classify(al *accLoop) bool {
+	sh := al.shape
+	lin, ok := fc.linear(al.mult)
+	if !ok {
+		return fc.classifyRising(al)
+	}
+	a := lin.coefOf(sh.iv)
+	rest := lin.without(sh.iv)
+	// hi and lo are the ends where the factor is largest and smallest.
+	hi, hiOff, lo, loOff := sh.last, sh.lastOff, sh.first, sh.firstOff
+	if (sh.step > 0) != (a > 0) {
+		hi, hiOff, lo, loOff = lo, loOff, hi, hiOff
+	}
+	switch {
+	case a == 1 && len(rest.terms) == 0:
+		// The factor is i+c: a factorial when it starts at 1 or 2.
+		if lo == nil && loOff+rest.c <= 0 {
+			return false // a zero factor: not a factorial
+		}
+		if lo != nil || loOff+rest.c > 2 {
+			return fc.classifyPartial(al, hi, hiOff+rest.c)
+		}
+		al.top, al.topOff = hi, hiOff+rest.c
+		al.kind = kindFactorial
+		if sh.step == 2 || sh.step == -2 {
+			al.kind = kindDouble
+		} else if sh.step != 1 && sh.step != -1 {
+			return false
+		}
+		return true
+	case (a == 1 || a == -1) && len(rest.terms) > 0 && (sh.step == 1 || sh.step == -1):
+		// The factor is n∓i: a falling factorial of n over the trip count.
+		al.kind = kindFalling
+		al.top = al.mult
+		al.count, al.coff = tripCount(sh)
+		return al.count != nil || sh.first == nil && sh.last == nil
+	}
+	return false
+}
+
+// classifyPartial handles i+c starting above 2 or at a variable: the
+// product of the factors down from the largest is a falling factorial.
+func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
+	sh := al.shape
+	if hi == nil || (sh.step != 1 && sh.step != -1) {
+		return false
+	}
+	al.kind = kindFalling
+	al.top, al.topOff = hi, hiOff
+	al.count, al.coff = tripCount(sh)
+	return al.count != nil
+}
+
+// classifyRising matches x + i with x a floating-point value.
+func (fc *fnCtx) classifyRising(al *accLoop) bool {
+	sh := al.shape
+	b, ok := fc.stripConv(al.mult).(*ast.BinaryExpr)
+	if !ok || b.Op != token.ADD || sh.step != 1 || sh.first != nil || sh.firstOff != 0 {
+		return false
+	}
+	x := b.X
+	if fc.c.objOf(fc.stripConv(b.Y)) != sh.iv {
+		if fc.c.objOf(fc.stripConv(b.X)) != sh.iv {
+			return false
+		}
+		x = b.Y
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(x))
+	if !ok || !t.Float {
+		return false
+	}
+	al.kind = kindRising
+	al.x = x
+	al.count, al.coff = tripCount(sh)
+	return al.count != nil
+}
+
+// tripCount returns the number of iterations of a unit-step loop whose
+// one end is constant, as expr+off.
+func tripCount(sh *loopShape) (ast.Expr, int64) {
+	switch {
+	case sh.step > 0 && sh.first == nil && sh.last != nil:
+		return sh.last, sh.lastOff - sh.firstOff + 1
+	case sh.step < 0 && sh.last == nil && sh.first != nil:
+		return sh.first, sh.firstOff - sh.lastOff + 1
+	}
+	return nil, 0
+}

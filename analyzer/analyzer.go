@@ -1,0 +1,136 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"os"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/analysis/passes/inspect"
+	"golang.org/x/tools/go/ast/inspector"
+)
+
+// Analyzer reports overflow-prone factorial arithmetic.
+var Analyzer = &analysis.Analyzer{
+	Name:             "overfact",
+	Doc:              doc,
+	URL:              "https://github.com/overfact/overfact",
+	Requires:         []*analysis.Analyzer{inspect.Analyzer},
+	Run:              run,
+	FactTypes:        []analysis.Fact{new(FactorialFact)},
+	RunDespiteErrors: true,
+}
+
+var debug bool
+
+func init() {
+	Analyzer.Flags.BoolVar(&debug, "debug", false, "log functions skipped after an internal error to stderr")
+}
+
+// checker holds the state of one pass.
+type checker struct {
+	pass      *analysis.Pass
+	files     map[*token.File]*fileInfo
+	funcs     map[*types.Func]*facFunc // factorial-valued functions of this package
+	fnInfo    map[ast.Node]*fnCtx      // per analysed function
+	reported  map[reportKey]bool
+	consumed  map[*ast.CallExpr]bool // calls already part of a finding
+	allFuncs  []ast.Node // every FuncDecl and FuncLit, in source order
+	callIndex map[*types.Func][]*ast.CallExpr
+	escapes   map[*types.Func]bool
+}
+
+type reportKey struct {
+	pos token.Pos
+	cat string
+}
+
+// fileInfo is what the checker knows about one file.
+type fileInfo struct {
+	file      *ast.File
+	generated bool
+	dirs      *directives
+}
+
+func run(pass *analysis.Pass) (any, error) {
+	c := &checker{
+		pass:      pass,
+		files:     make(map[*token.File]*fileInfo),
+		funcs:     make(map[*types.Func]*facFunc),
+		fnInfo:    make(map[ast.Node]*fnCtx),
+		reported:  make(map[reportKey]bool),
+		consumed:  make(map[*ast.CallExpr]bool),
+	}
+	for _, f := range pass.Files {
+		tf := pass.Fset.File(f.Pos())
+		if tf == nil {
+			continue
+		}
+		fi := &fileInfo{file: f, generated: ast.IsGenerated(f)}
+		fi.dirs = c.parseDirectives(f, fi.generated)
+		c.files[tf] = fi
+	}
+	ins := pass.ResultOf[inspect.Analyzer].(*inspector.Inspector)
+
+	// Phase 1: find factorial-valued functions and export their facts, so
+	// that phase 2 sees calls of local and imported ones alike.
+	ins.Preorder([]ast.Node{(*ast.FuncDecl)(nil), (*ast.FuncLit)(nil)}, func(n ast.Node) {
+		c.allFuncs = append(c.allFuncs, n)
+	})
+	funcs := c.allFuncs
+	for _, n := range funcs {
+		if d, ok := n.(*ast.FuncDecl); ok && d.Body != nil {
+			c.guard(n, func() { c.findFactorialFunc(d) })
+		}
+	}
+	// Phase 2: report, function by function, only where a cheap syntactic
+	// scan found something worth the range analysis.
+	for _, n := range funcs {
+		if body := funcBody(n); body != nil && c.candidate(body) {
+			c.guard(n, func() { c.checkFunc(n) })
+		}
+	}
+	return nil, nil
+}
+
+// guard runs f and turns a panic into a skipped function, so that odd
+// code never crashes the driver nor yields a bogus finding.
+func (c *checker) guard(n ast.Node, f func()) {
+	defer func() {
+		if r := recover(); r != nil && debug {
+			fmt.Fprintf(os.Stderr, "overfact: %s: skipped function after internal error: %v\n", c.pass.Fset.Position(n.Pos()), r)
+		}
+	}()
+	f()
+}
+
+func funcBody(n ast.Node) *ast.BlockStmt {
+	switch n := n.(type) {
+	case *ast.FuncDecl:
+		return n.Body
+	case *ast.FuncLit:
+		return n.Body
+	}
+	return nil
+}
+
+func funcType(n ast.Node) *ast.FuncType {
+	switch n := n.(type) {
+	case *ast.FuncDecl:
+		return n.Type
+	case *ast.FuncLit:
+		return n.Type
+	}
+	return nil
+}
+
+// fileOf returns what the checker knows of the file holding pos.
+func (c *checker) fileOf(pos token.Pos) *fileInfo {
+	tf := c.pass.Fset.File(pos)
+	if tf == nil {
+		return nil
+	}
+	return c.files[tf]
+}

@@ -1,0 +1,104 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// maxBinomialScan bounds the values of k tried when n is bounded but k
+// is not; beyond it the loop is reported as possible.
+const maxBinomialScan = 256
+
+// checkBinomialLoop reports b = b*(n-k+i)/i and its variants in an
+// integer type: the product b*(n-k+i) is formed before the division, so
+// it wraps while C(n, k) itself still fits.
+func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
+	if t.Float || al.kind != kindFalling {
+		return
+	}
+	sh := al.shape
+	k := shift(fc.rangeOf(al.count), al.coff)
+	nExpr := fc.binomialN(al)
+	if nExpr == nil {
+		return
+	}
+	n := fc.rangeOf(nExpr)
+	if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) {
+		return
+	}
+	lim := thresholds.CentralBinomialLoop(t.Num)
+	central := thresholds.CentralBinomial(t.Num)
+	name := src(nExpr)
+	clause, _ := verdict(name, n, lim.FirstBad)
+	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
+	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s*(%s) %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		t.typeName(), al.acc.Name(), src(al.mult), verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
+	kExpr := al.count
+	if al.coff != 0 {
+		kExpr = nil
+	}
+	m := &fixes.Match{
+		Shape:   fixes.ShapeBinomialLoop,
+		Node:    sh.stmt,
+		Result:  fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]),
+		Acc:     al.acc,
+		AccInit: al.accInit,
+		Loop:    sh.stmt,
+		Func:    fc.node,
+	}
+	if kExpr != nil {
+		m.Args = []ast.Expr{nExpr, kExpr}
+	}
+	fc.report(finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
+}
+
+// binomialN finds n in the factor: the variable with coefficient +1
+// other than the induction variable and the trip count.
+func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
+	lin, ok := fc.linear(al.mult)
+	if !ok {
+		return nil
+	}
+	kObj := fc.c.objOf(al.count)
+	var nObj types.Object
+	for _, t := range lin.terms {
+		if t.obj != al.shape.iv && t.obj != kObj && t.coef == 1 {
+			nObj = t.obj
+		}
+	}
+	if nObj == nil {
+		return nil
+	}
+	var found ast.Expr
+	ast.Inspect(al.mult, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && found == nil && fc.c.pass.TypesInfo.Uses[id] == nObj {
+			found = id
+		}
+		return found == nil
+	})
+	return found
+}
+
+// binomialLoopSafe reports whether every (n, k) in the ranges keeps the
+// loop's intermediate within t. The intermediate grows with n, so the
+// largest n decides; every k up to it is tried.
+func (fc *fnCtx) binomialLoopSafe(t numType, n, k ranges.Interval) bool {
+	if !bounded(n) {
+		return false
+	}
+	lo, hi := max(k.Lo, 0), min(k.Hi, n.Hi)
+	if hi-lo > maxBinomialScan {
+		return false
+	}
+	for kk := lo; kk <= hi; kk++ {
+		if !thresholds.BinomialLoopFits(t.Num, n.Hi, kk) {
+			return false
+		}
+	}
+	return true
+}

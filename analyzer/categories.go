@@ -1,0 +1,73 @@
+package analyzer
+
+import "strings"
+
+// A category names one pattern the analyzer reports. A finding whose
+// overflow is certain for every input the code can see carries the
+// pattern's ID followed by definiteSuffix; a finding that overflows only
+// for inputs nothing rules out carries the bare ID.
+const (
+	catLoop       = "factorial-loop"
+	catRecursion  = "factorial-recursion"
+	catCall       = "factorial-call"
+	catRatio      = "factorial-ratio"
+	catBinomLoop  = "binomial-loop"
+	catPowOverFac = "power-over-factorial"
+	catGammaRatio = "gamma-ratio"
+	catGamma      = "gamma-overflow"
+	catLateConv   = "late-conversion"
+	catDirective  = "directive"
+
+	definiteSuffix = ".definite"
+)
+
+// baseURL is the pattern list of the project README; each category is an
+// anchor in it.
+const baseURL = "https://github.com/overfact/overfact#"
+
+// CategoryInfo describes one category for report writers such as SARIF.
+type CategoryInfo struct {
+	ID    string // the Diagnostic.Category value
+	Title string // a one-sentence description
+	Help  string // the URL of the category's section in the README
+}
+
+// patterns lists every pattern category with its description, in the order
+// of the README.
+var patterns = []struct{ id, title string }{
+	{catLoop, "A loop multiplies an accumulator by its induction variable (a factorial, double, falling or rising factorial) and the product exceeds its type."},
+	{catRecursion, "A recursive function returns n times itself at n-1 and the factorial exceeds its result type."},
+	{catCall, "A call of a factorial-valued function receives an argument whose factorial cannot fit the result type."},
+	{catRatio, "A binomial, permutation, multinomial, Catalan or hypergeometric value is computed as a ratio of factorials whose numerator overflows first."},
+	{catBinomLoop, "A multiplicative binomial loop overflows in its intermediate product before the division, even where the coefficient fits."},
+	{catPowOverFac, "A power-over-factorial term such as x^k/k! (Poisson, Erlang, Taylor series) divides two values that overflow separately."},
+	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
+	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},
+	{catLateConv, "A factorial is converted to another type after it has already wrapped or lost exactness."},
+}
+
+// Categories returns every category the analyzer can emit: each pattern in
+// its possible and its definite form, and the category of malformed
+// directives.
+func Categories() []CategoryInfo {
+	var out []CategoryInfo
+	for _, p := range patterns {
+		out = append(out,
+			CategoryInfo{ID: p.id, Title: p.title, Help: baseURL + p.id},
+			CategoryInfo{ID: p.id + definiteSuffix, Title: "Certain for every input the code allows: " + lowerFirst(p.title), Help: baseURL + p.id})
+	}
+	out = append(out, CategoryInfo{ID: catDirective, Title: "An //overfact: directive is malformed, lacks its reason or names an unknown verb.", Help: baseURL + catDirective})
+	return out
+}
+
+// categoryURL returns the README anchor of a category, definite or not.
+func categoryURL(cat string) string {
+	return baseURL + strings.TrimSuffix(cat, definiteSuffix)
+}
+
+func lowerFirst(s string) string {
+	if s == "" {
+		return s
+	}
+	return strings.ToLower(s[:1]) + s[1:]
+}

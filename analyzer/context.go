@@ -1,0 +1,208 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/constant"
+	"go/token"
+	"go/types"
+	"math"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+)
+
+// fnCtx is one function under analysis. Its range analysis runs lazily,
+// on the first question about a range, so functions without a candidate
+// cost only the syntactic scan.
+type fnCtx struct {
+	c       *checker
+	node    ast.Node // *ast.FuncDecl or *ast.FuncLit
+	file    *fileInfo
+	entry   map[types.Object]ranges.Interval
+	rng     *ranges.Func
+	assumes []stmtAssume // statement-level bound annotations
+	defs    map[types.Object][]ast.Expr
+	inl     map[ast.Expr]bool // values consumed by a larger product
+}
+
+// maxVisits bounds the range analysis of one function; past it the
+// ranges package widens, which only makes findings "possible".
+const maxVisits = 20000
+
+func (c *checker) ctx(n ast.Node) *fnCtx {
+	if fc, ok := c.fnInfo[n]; ok {
+		return fc
+	}
+	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos())}
+	fc.entry = c.entryOf(n)
+	if fc.file != nil {
+		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
+	}
+	c.fnInfo[n] = fc
+	return fc
+}
+
+// ranges returns the range analysis of the function, running it once.
+func (fc *fnCtx) ranges() *ranges.Func {
+	if fc.rng == nil {
+		fc.rng = ranges.Analyze(fc.c.pass.TypesInfo, fc.node, ranges.Options{Entry: fc.entry, MaxVisits: maxVisits})
+	}
+	return fc.rng
+}
+
+// rangeOf returns the range of the integer expression e where it is
+// evaluated, narrowed by statement-level bound annotations over it.
+func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
+	e = unparen(e)
+	if v, ok := fc.intConst(e); ok {
+		return ranges.Point(v)
+	}
+	iv := fc.ranges().Of(e)
+	if lin, ok := fc.linear(e); ok && len(lin.terms) == 1 && lin.terms[0].coef == 1 {
+		for _, a := range fc.assumes {
+			if a.obj == lin.terms[0].obj && a.from <= e.Pos() && e.End() <= a.to {
+				iv = iv.Meet(shift(a.iv, lin.c))
+			}
+		}
+	}
+	return iv
+}
+
+// entryRange returns the range of variable v at node n.
+func (fc *fnCtx) entryRange(v types.Object, n ast.Node) ranges.Interval {
+	iv := fc.ranges().At(v, n)
+	for _, a := range fc.assumes {
+		if a.obj == v && a.from <= n.Pos() && n.End() <= a.to {
+			iv = iv.Meet(a.iv)
+		}
+	}
+	return iv
+}
+
+// intConst returns the value of a constant integer expression.
+func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
+	tv, ok := fc.c.pass.TypesInfo.Types[e]
+	if !ok || tv.Value == nil {
+		return 0, false
+	}
+	v := constant.ToInt(tv.Value)
+	if v.Kind() != constant.Int {
+		return 0, false
+	}
+	return constant.Int64Val(v)
+}
+
+// floatConst returns the value of a constant numeric expression.
+func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
+	tv, ok := fc.c.pass.TypesInfo.Types[unparen(e)]
+	if !ok || tv.Value == nil {
+		return 0, false
+	}
+	v := constant.ToFloat(tv.Value)
+	if v.Kind() != constant.Float && v.Kind() != constant.Int {
+		return 0, false
+	}
+	f, _ := constant.Float64Val(v)
+	return f, true
+}
+
+// shift adds d to both ends of a bounded interval, saturating at the
+// unbounded ends.
+func shift(iv ranges.Interval, d int64) ranges.Interval {
+	if iv.IsEmpty() {
+		return iv
+	}
+	return ranges.Interval{Lo: addSat(iv.Lo, d), Hi: addSat(iv.Hi, d)}
+}
+
+func addSat(x, d int64) int64 {
+	switch {
+	case x == math.MinInt64 || x == math.MaxInt64:
+		return x
+	case d > 0 && x > math.MaxInt64-d:
+		return math.MaxInt64
+	case d < 0 && x < math.MinInt64-d:
+		return math.MinInt64
+	}
+	return x + d
+}
+
+func unparen(e ast.Expr) ast.Expr {
+	for {
+		p, ok := e.(*ast.ParenExpr)
+		if !ok {
+			return e
+		}
+		e = p.X
+	}
+}
+
+// stripConv removes parentheses and numeric conversions around e.
+func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
+	for {
+		e = unparen(e)
+		call, ok := e.(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
+			return e
+		}
+		e = call.Args[0]
+	}
+}
+
+func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
+	tv, ok := fc.c.pass.TypesInfo.Types[call.Fun]
+	return ok && tv.IsType()
+}
+
+// objOf returns the variable an identifier denotes.
+func (c *checker) objOf(e ast.Expr) types.Object {
+	id, ok := unparen(e).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	obj := c.pass.TypesInfo.ObjectOf(id)
+	if _, ok := obj.(*types.Var); !ok {
+		return nil
+	}
+	return obj
+}
+
+// calleeOf returns the function a call statically calls, or nil.
+func (c *checker) calleeOf(call *ast.CallExpr) *types.Func {
+	var id *ast.Ident
+	switch fun := unparen(call.Fun).(type) {
+	case *ast.Ident:
+		id = fun
+	case *ast.SelectorExpr:
+		id = fun.Sel
+	case *ast.IndexExpr: // generic instantiation f[T](...)
+		switch x := fun.X.(type) {
+		case *ast.Ident:
+			id = x
+		case *ast.SelectorExpr:
+			id = x.Sel
+		}
+	case *ast.IndexListExpr:
+		switch x := fun.X.(type) {
+		case *ast.Ident:
+			id = x
+		case *ast.SelectorExpr:
+			id = x.Sel
+		}
+	}
+	if id == nil {
+		return nil
+	}
+	fn, _ := c.pass.TypesInfo.Uses[id].(*types.Func)
+	if fn != nil {
+		fn = fn.Origin()
+	}
+	return fn
+}
+
+// isMathFunc reports whether call calls the function name of package math.
+func (c *checker) isMathFunc(call *ast.CallExpr, name string) bool {
+	fn := c.calleeOf(call)
+	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
+}
+
+var _ = token.NoPos

@@ -1,0 +1,103 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+)
+
+// checkExprs judges the products and ratios of known factors in body,
+// then the factorial calls, conversions and Gamma calls that no product
+// consumed. One product is one root cause: the factors of a ratio are
+// not reported again on their own.
+func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
+	var roots []*ast.BinaryExpr
+	var calls []*ast.CallExpr
+	inner := make(map[ast.Expr]bool)
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BinaryExpr:
+			if n.Op == token.MUL || n.Op == token.QUO {
+				roots = append(roots, n)
+				for _, x := range []ast.Expr{n.X, n.Y} {
+					if b, ok := fc.stripConv(x).(*ast.BinaryExpr); ok && (b.Op == token.MUL || b.Op == token.QUO) {
+						inner[b] = true
+					}
+				}
+			}
+		case *ast.CallExpr:
+			calls = append(calls, n)
+		}
+		return true
+	})
+	type rooted struct {
+		e *ast.BinaryExpr
+		p *product
+	}
+	var prods []rooted
+	for _, r := range roots {
+		if !inner[r] {
+			prods = append(prods, rooted{r, fc.evalProduct(r)})
+		}
+	}
+	for _, r := range prods {
+		if !fc.inl[r.e] {
+			fc.checkProduct(r.e, r.p)
+		}
+	}
+	for _, call := range calls {
+		fc.checkCall(call)
+	}
+}
+
+// checkProduct dispatches a product to the pattern its factors form.
+func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
+	var facNum, facDen, gamma, powNum, binNum, binDen int
+	for _, f := range p.num {
+		switch {
+		case f.kind == kindBinomial:
+			binNum++
+		case f.kind != kindNone:
+			facNum++
+		case f.math == "Gamma":
+			gamma++
+		case f.math == "Pow":
+			powNum++
+		}
+	}
+	gammaNum := gamma
+	for _, f := range p.den {
+		switch {
+		case f.kind == kindBinomial:
+			binDen++
+		case f.kind != kindNone:
+			facDen++
+		case f.math == "Gamma":
+			gamma++
+		}
+	}
+	switch {
+	case gammaNum >= 1 && gamma >= 2:
+		fc.consume(p)
+		fc.checkGammaRatio(root, p)
+	case powNum >= 1 && facDen == 1 && facNum == 0:
+		fc.consume(p)
+		fc.checkPowOverFactorial(root, p)
+	case binNum == 2 && binDen == 1 && facNum == 0 && facDen == 0:
+		fc.consume(p)
+		fc.checkHypergeometric(root, p)
+	case facNum >= 1 && (facDen >= 1 || facNum >= 2):
+		fc.consume(p)
+		fc.checkFactorialRatio(root, p)
+	}
+}
+
+// consume marks the calls of a judged product.
+func (fc *fnCtx) consume(p *product) {
+	for _, list := range [][]factor{p.num, p.den} {
+		for _, f := range list {
+			fc.c.consumed[f.call] = true
+		}
+	}
+}

@@ -1,0 +1,38 @@
+package analyzer
+
+import "fmt"
+
+// FactorialFact marks a function whose result is a factorial-shaped
+// value of its parameters, so that calls of it are known factorial values
+// in every package that imports it, also when each package is analysed
+// on its own (go vet -vettool). Its fields are of basic types only, as
+// the fact encoding requires.
+type FactorialFact struct {
+	// Kind is "factorial", "double-factorial", "falling-factorial",
+	// "rising-factorial" or "binomial".
+	Kind string
+	// Param is the index of the parameter n; the function returns
+	// (n+Offset)! (or n!! and so on). Param2 is the index of k for
+	// falling factorials and binomials, −1 otherwise.
+	Param  int
+	Param2 int
+	Offset int64
+	// Safe says that the function bounds its own parameter, by a guard
+	// or an annotation, so that its result always fits: Lo and Hi are
+	// the proven range of the parameter where the product is formed.
+	Safe   bool
+	Lo, Hi int64
+	// FirstBad is the first n at which the result stops fitting the
+	// result type; for a binomial function, the first n of C(n, n/2).
+	FirstBad int64
+}
+
+// AFact marks FactorialFact as an analysis fact.
+func (*FactorialFact) AFact() {}
+
+func (f *FactorialFact) String() string {
+	if f.Safe {
+		return fmt.Sprintf("%s of parameter %d, safe for [%d, %d]", f.Kind, f.Param, f.Lo, f.Hi)
+	}
+	return fmt.Sprintf("%s of parameter %d, breaks from %d", f.Kind, f.Param, f.FirstBad)
+}

@@ -1,0 +1,80 @@
+package analyzer
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// checkFallingLoop reports n·(n−1)·…·(n−k+1) formed by a loop when the
+// largest factor n and the number of factors k can make it exceed t.
+// The product grows with both, so the largest n and k decide safety and
+// the smallest decide certainty.
+func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
+	n := fc.rangeOf(fc.stripConv(al.mult))
+	if al.top != nil && al.top != al.mult {
+		n = shift(fc.rangeOf(al.top), al.topOff)
+	}
+	k := shift(fc.rangeOf(al.count), al.coff)
+	if n.IsEmpty() || k.IsEmpty() {
+		return
+	}
+	if bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) {
+		return
+	}
+	kName := plus(src(al.count), al.coff)
+	var msg string
+	if bounded(k) && k.Hi > 0 {
+		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with %s = %d, for a largest factor ≥ %d", kName, t.typeName(), verb(t), kName, k.Hi, thresholds.FallingFirstBad(t.Num, k.Hi))
+	} else {
+		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with every factor taken it is a factorial, which breaks from %d", kName, t.typeName(), verb(t), thresholds.Factorial(t.Num).FirstBad)
+	}
+	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, k.Lo)
+	switch {
+	case definite:
+		msg += fmt.Sprintf("; the product always exceeds %s here", t.Name)
+	case !bounded(n):
+		msg += "; the largest factor is not bounded here"
+	case !bounded(k):
+		msg += fmt.Sprintf("; %s is not bounded here", kName)
+	default:
+		msg += fmt.Sprintf("; the largest factor may reach %d and %s may reach %d here", n.Hi, kName, k.Hi)
+	}
+	m := fc.loopMatch(al, t)
+	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
+	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+}
+
+// checkRisingLoop reports x·(x+1)·…·(x+n−1) in a float loop. With x
+// unknown the analyzer measures against x = 1, the rising factorial that
+// equals n!: a larger x breaks sooner, so silence below that point is a
+// documented approximation.
+func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
+	k := shift(fc.rangeOf(al.count), al.coff)
+	if k.IsEmpty() {
+		return
+	}
+	x := int64(1)
+	xv, xconst := fc.floatConst(al.x)
+	if xconst && xv == math.Trunc(xv) && math.Abs(xv) < 1<<53 {
+		x = int64(xv)
+	}
+	first := thresholds.RisingFirstBad(t.Num, x)
+	if bounded(k) && k.Hi < first {
+		return
+	}
+	kName := plus(src(al.count), al.coff)
+	clause, definite := verdict(kName, k, first)
+	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d at %s = %d%s", kName, src(al.x), t.typeName(), verb(t), kName, first, src(al.x), x, clause)
+	m := fc.loopMatch(al, t)
+	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
+	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
+}
+
+// bounded reports whether iv is non-empty with finite ends.
+func bounded(iv ranges.Interval) bool {
+	return !iv.IsEmpty() && iv.Lo != math.MinInt64 && iv.Hi != math.MaxInt64
+}

@@ -1,0 +1,237 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+)
+
+// facFunc is a factorial-valued function of this package.
+type facFunc struct {
+	obj    *types.Func
+	decl   *ast.FuncDecl
+	kind   facKind
+	param  int
+	param2 int
+	offset int64
+	loop   *accLoop        // the product loop, or nil
+	rec    *ast.BinaryExpr // the recursive n*f(n-1), or nil
+	recN   ast.Expr        // its n operand
+	result numType
+	fact   FactorialFact
+}
+
+// findFactorialFunc decides whether decl returns a factorial of one of
+// its parameters, and if so exports the fact.
+func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
+	obj, _ := c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
+	if obj == nil {
+		return
+	}
+	sig := obj.Type().(*types.Signature)
+	if sig.Results().Len() == 0 || sig.Results().Len() > 2 {
+		return
+	}
+	res, ok := c.numOf(sig.Results().At(0).Type())
+	if !ok {
+		return
+	}
+	own := &fnCtx{c: c, node: decl, file: c.fileOf(decl.Pos()), entry: c.ownEntry(decl)}
+	if own.file != nil {
+		own.assumes = own.file.dirs.stmtAssumesIn(decl)
+	}
+	ff := own.recursionOf(decl, obj)
+	if ff == nil {
+		ff = own.loopFuncOf(decl, obj)
+	}
+	if ff == nil {
+		return
+	}
+	ff.obj, ff.decl, ff.result = obj, decl, res
+	ff.fact = FactorialFact{Kind: kindNames[ff.kind], Param: ff.param, Param2: ff.param2, Offset: ff.offset}
+	ff.fact.FirstBad = firstBadOf(ff.kind, res) - ff.offset
+	key := own.keyRange(ff)
+	if !key.IsEmpty() && !key.IsTop() && key.Hi < firstBadOf(ff.kind, res) && ff.kind != kindFalling && ff.kind != kindRising {
+		ff.fact.Safe = true
+		ff.fact.Lo, ff.fact.Hi = shift(key, -ff.offset).Lo, shift(key, -ff.offset).Hi
+	}
+	c.funcs[obj] = ff
+	c.pass.ExportObjectFact(obj, &ff.fact)
+}
+
+// firstBadOf returns the first largest factor at which a product of the
+// kind stops fitting t.
+func firstBadOf(k facKind, t numType) int64 {
+	switch k {
+	case kindDouble:
+		return thresholds.DoubleFactorial(t.Num).FirstBad
+	case kindBinomial:
+		return thresholds.CentralBinomialRatio(t.Num).FirstBad
+	}
+	return thresholds.Factorial(t.Num).FirstBad
+}
+
+// keyRange is the range of the largest factor where it is multiplied.
+func (fc *fnCtx) keyRange(ff *facFunc) ranges.Interval {
+	if ff.rec != nil {
+		return fc.rangeOf(ff.recN)
+	}
+	return fc.rangeOf(fc.stripConv(ff.loop.mult))
+}
+
+// paramIndex returns the index of the parameter v of decl, or −1.
+func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
+	i := 0
+	for _, f := range decl.Type.Params.List {
+		if len(f.Names) == 0 {
+			i++
+			continue
+		}
+		for _, name := range f.Names {
+			if c.pass.TypesInfo.Defs[name] == v && v != nil {
+				return i
+			}
+			i++
+		}
+	}
+	return -1
+}
+
+// recursionOf matches a return of n * f(n-1) (or n-2, a double
+// factorial) anywhere in a returned expression.
+func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if ff != nil {
+			return false
+		}
+		if _, ok := n.(*ast.FuncLit); ok {
+			return false
+		}
+		ret, ok := n.(*ast.ReturnStmt)
+		if !ok || len(ret.Results) == 0 {
+			return true
+		}
+		ast.Inspect(ret.Results[0], func(m ast.Node) bool {
+			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.MUL && ff == nil {
+				ff = fc.recursiveProduct(decl, self, b)
+			}
+			return ff == nil
+		})
+		return ff == nil
+	})
+	return ff
+}
+
+func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr) *facFunc {
+	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
+		nExpr, callExpr := pair[0], pair[1]
+		v := fc.c.objOf(fc.stripConv(nExpr))
+		idx := fc.c.paramIndex(decl, v)
+		call, ok := fc.stripConv(callExpr).(*ast.CallExpr)
+		if idx < 0 || !ok || fc.c.calleeOf(call) != self || idx >= len(call.Args) {
+			continue
+		}
+		lin, ok := fc.linear(call.Args[idx])
+		if !ok || len(lin.terms) != 1 || lin.terms[0].obj != v || lin.terms[0].coef != 1 {
+			continue
+		}
+		kind := kindNone
+		switch lin.c {
+		case -1:
+			kind = kindFactorial
+		case -2:
+			kind = kindDouble
+		}
+		if kind == kindNone {
+			continue
+		}
+		return &facFunc{kind: kind, param: idx, param2: -1, rec: b, recN: fc.stripConv(nExpr)}
+	}
+	return nil
+}
+
+// loopFuncOf matches a function that returns the accumulator of a
+// product loop whose largest factor is a parameter.
+func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	fc.eachLoop(decl.Body, func(al *accLoop) {
+		if ff != nil || al.div != nil || !fc.returns(decl.Body, al.acc) {
+			return
+		}
+		resT := self.Type().(*types.Signature).Results().At(0).Type()
+		if !types.Identical(fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]), resT) {
+			return
+		}
+		switch al.kind {
+		case kindFactorial, kindDouble:
+			idx := fc.c.paramIndex(decl, fc.c.objOf(al.top))
+			if idx < 0 {
+				return
+			}
+			ff = &facFunc{kind: al.kind, param: idx, param2: -1, offset: al.topOff, loop: al}
+		}
+	})
+	return ff
+}
+
+// returns reports whether some return statement of body returns v as its
+// first result.
+func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			if len(n.Results) > 0 && fc.c.objOf(n.Results[0]) == v {
+				found = true
+			}
+		}
+		return !found
+	})
+	return found
+}
+
+// eachLoop calls f for each product loop in body, outside closures.
+func (fc *fnCtx) eachLoop(body *ast.BlockStmt, f func(*accLoop)) {
+	ast.Inspect(body, func(n ast.Node) bool {
+		var list []ast.Stmt
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BlockStmt:
+			list = n.List
+		case *ast.CaseClause:
+			list = n.Body
+		case *ast.CommClause:
+			list = n.Body
+		default:
+			return true
+		}
+		for i, st := range list {
+			for {
+				l, ok := st.(*ast.LabeledStmt)
+				if !ok {
+					break
+				}
+				st = l.Stmt
+			}
+			if al := fc.accLoopOf(st, list[:i]); al != nil {
+				f(al)
+			}
+		}
+		return true
+	})
+}
+
+// lastGoodApprox formats the largest value of the kind that fits t.
+func lastGoodApprox(k facKind, t numType) string {
+	if k == kindDouble {
+		return thresholds.DoubleFactorial(t.Num).LastGoodApprox()
+	}
+	return thresholds.Factorial(t.Num).LastGoodApprox()
+}

@@ -1,0 +1,232 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math"
+
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// affine is x = a·v + b with v a single variable (an integer converted to
+// float, or a float), as Gamma arguments are written: float64(n)+1,
+// (nu+1)/2.
+type affine struct {
+	a, b  float64
+	v     ast.Expr // nil for a constant
+	isInt bool     // v is an integer variable
+}
+
+// affineOf returns the affine form of a float expression.
+func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
+	if depth > maxDepth {
+		return affine{}, false
+	}
+	e = unparen(e)
+	if v, ok := fc.floatConst(e); ok {
+		return affine{b: v}, true
+	}
+	switch x := e.(type) {
+	case *ast.CallExpr:
+		if len(x.Args) == 1 && fc.isConversion(x) {
+			return fc.affineOf(x.Args[0], depth+1)
+		}
+	case *ast.Ident:
+		if fc.c.objOf(x) == nil {
+			return affine{}, false
+		}
+		t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(x))
+		return affine{a: 1, v: x, isInt: ok && !t.Float}, ok
+	case *ast.BinaryExpr:
+		l, ok1 := fc.affineOf(x.X, depth+1)
+		r, ok2 := fc.affineOf(x.Y, depth+1)
+		if !ok1 || !ok2 || (l.v != nil && r.v != nil) {
+			// Two variables: only n+n style sums of the same one would
+			// do, and those are rare enough to leave.
+			return affine{}, false
+		}
+		v, isInt := l.v, l.isInt
+		if v == nil {
+			v, isInt = r.v, r.isInt
+		}
+		switch x.Op {
+		case token.ADD:
+			return affine{l.a + r.a, l.b + r.b, v, isInt}, true
+		case token.SUB:
+			return affine{l.a - r.a, l.b - r.b, v, isInt}, true
+		case token.MUL:
+			if l.v == nil {
+				return affine{r.a * l.b, r.b * l.b, v, isInt}, true
+			}
+			return affine{l.a * r.b, l.b * r.b, v, isInt}, true
+		case token.QUO:
+			if r.v == nil && r.b != 0 {
+				return affine{l.a / r.b, l.b / r.b, v, isInt}, true
+			}
+		}
+	}
+	return affine{}, false
+}
+
+// gammaBound says where math.Gamma(arg) first returns +Inf: at the
+// variable's value firstV (an integer when the variable is one). The
+// range of the argument follows from the variable's range.
+type gammaBound struct {
+	aff       affine
+	first     float64 // first bad argument
+	firstV    float64 // first bad value of the variable
+	lo, hi    float64 // range of the argument
+	certain   bool    // lo ≥ first
+	reachable bool    // hi ≥ first
+}
+
+func (fc *fnCtx) gammaBoundOf(arg ast.Expr) (gammaBound, bool) {
+	aff, ok := fc.affineOf(arg, 0)
+	if !ok {
+		return gammaBound{}, false
+	}
+	g := gammaBound{aff: aff, first: thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes))}
+	vlo, vhi := math.Inf(-1), math.Inf(1)
+	if aff.v != nil && aff.isInt {
+		r := fc.rangeOf(aff.v)
+		if r.IsEmpty() {
+			return g, false
+		}
+		if r.Lo != math.MinInt64 {
+			vlo = float64(r.Lo)
+		}
+		if r.Hi != math.MaxInt64 {
+			vhi = float64(r.Hi)
+		}
+	}
+	if aff.v == nil {
+		vlo, vhi = 0, 0
+	}
+	g.lo, g.hi = aff.a*vlo+aff.b, aff.a*vhi+aff.b
+	if aff.a < 0 {
+		g.lo, g.hi = g.hi, g.lo
+	}
+	if aff.v == nil {
+		g.lo, g.hi = aff.b, aff.b
+	}
+	g.certain = g.lo >= g.first
+	g.reachable = g.hi >= g.first
+	if aff.a > 0 {
+		g.firstV = (g.first - aff.b) / aff.a
+		if aff.isInt {
+			g.firstV = math.Ceil(g.firstV)
+		}
+	}
+	return g, true
+}
+
+func floatNum(sizes types.Sizes) thresholds.Num {
+	n, _ := thresholds.Lookup(types.Typ[types.Float64], sizes)
+	return n
+}
+
+// describe renders where the Gamma call breaks, in terms of its variable.
+func (g gammaBound) describe(call string) string {
+	if g.aff.v == nil || g.aff.a <= 0 {
+		return fmt.Sprintf("%s is +Inf for arguments ≥ %.10g", call, g.first)
+	}
+	return fmt.Sprintf("%s is +Inf for %s ≥ %.10g (Γ(x) overflows float64 from x = %.10g)", call, src(g.aff.v), g.firstV, g.first)
+}
+
+func (g gammaBound) clause() string {
+	switch {
+	case g.certain:
+		return "; the argument is always past it here"
+	case g.aff.v == nil:
+		return ""
+	case math.IsInf(g.hi, 1):
+		return fmt.Sprintf("; %s is not bounded here", src(g.aff.v))
+	}
+	return fmt.Sprintf("; the argument may reach %.10g here", g.hi)
+}
+
+// checkGammaRatio judges products and ratios of math.Gamma calls, such
+// as the Beta function and the Student-t constant: the ratio is finite
+// where a Gamma in it is already +Inf.
+func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
+	var worst *gammaBound
+	var worstCall *ast.CallExpr
+	for _, f := range p.num {
+		if f.math != "Gamma" {
+			continue
+		}
+		g, ok := fc.gammaBoundOf(f.arg)
+		if !ok {
+			g = gammaBound{first: thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes)), hi: math.Inf(1), reachable: true}
+		}
+		if g.reachable && (worst == nil || g.certain) {
+			worst, worstCall = &g, f.call
+		}
+	}
+	if worst == nil {
+		return
+	}
+	what := "ratio of math.Gamma values"
+	m := &fixes.Match{Shape: fixes.ShapeGammaRatio, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if a, b, ok := fc.betaArgs(p); ok {
+		what = "Beta function as Γ(a)Γ(b)/Γ(a+b)"
+		m.Shape, m.Args = fixes.ShapeBeta, []ast.Expr{a, b}
+	} else if len(p.num) == 1 && len(p.den) == 1 && p.den[0].math == "Gamma" {
+		m.Args = []ast.Expr{p.num[0].arg, p.den[0].arg}
+	} else {
+		m.Shape = fixes.ShapeNone
+	}
+	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
+	fc.report(finding{node: root, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
+}
+
+// betaArgs matches Γ(a)Γ(b)/Γ(a+b).
+func (fc *fnCtx) betaArgs(p *product) (a, b ast.Expr, ok bool) {
+	if len(p.num) != 2 || len(p.den) != 1 || p.other != 0 {
+		return nil, nil, false
+	}
+	for _, f := range append(append([]factor{}, p.num...), p.den...) {
+		if f.math != "Gamma" {
+			return nil, nil, false
+		}
+	}
+	la, ok1 := fc.affineOf(p.num[0].arg, 0)
+	lb, ok2 := fc.affineOf(p.num[1].arg, 0)
+	ls, ok3 := fc.affineOf(p.den[0].arg, 0)
+	if ok1 && ok2 && ok3 && (la.v == nil || lb.v == nil || sameVar(fc, la.v, lb.v)) {
+		if la.a+lb.a == ls.a && la.b+lb.b == ls.b {
+			return p.num[0].arg, p.num[1].arg, true
+		}
+	}
+	// Γ(a)Γ(b)/Γ(a+b) with a, b separate variables: compare the syntax.
+	if s, ok := unparen(p.den[0].arg).(*ast.BinaryExpr); ok && s.Op == token.ADD {
+		if src(s.X) == src(p.num[0].arg) && src(s.Y) == src(p.num[1].arg) || src(s.Y) == src(p.num[0].arg) && src(s.X) == src(p.num[1].arg) {
+			return p.num[0].arg, p.num[1].arg, true
+		}
+	}
+	return nil, nil, false
+}
+
+func sameVar(fc *fnCtx, x, y ast.Expr) bool {
+	return x != nil && y != nil && fc.c.objOf(x) == fc.c.objOf(y)
+}
+
+// checkGamma judges a math.Gamma call no product consumed.
+func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
+	g, ok := fc.gammaBoundOf(call.Args[0])
+	if ok && !g.reachable {
+		return
+	}
+	if !ok {
+		g = gammaBound{first: thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes)), hi: math.Inf(1)}
+	}
+	msg := fmt.Sprintf("math.Gamma overflows: %s%s", g.describe("math.Gamma("+src(call.Args[0])+")"), g.clause())
+	if !ok {
+		msg = fmt.Sprintf("math.Gamma overflows: %s; the argument is not bounded here", g.describe("math.Gamma("+src(call.Args[0])+")"))
+	}
+	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
+		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})
+}

@@ -1,0 +1,191 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+)
+
+// loopShape describes how a loop's induction variable runs: from first to
+// last in steps of step. An end is expr+off, or the constant off when expr
+// is nil. For a while-style loop the first value is the variable's value
+// on entry, written as the variable itself.
+type loopShape struct {
+	stmt      ast.Stmt // *ast.ForStmt or *ast.RangeStmt
+	body      *ast.BlockStmt
+	iv        types.Object
+	step      int64
+	first     ast.Expr
+	firstOff  int64
+	last      ast.Expr
+	lastOff   int64
+	whileLike bool // the variable is counted down in the body
+}
+
+// shapeOf recognises the counting forms of a loop, or returns nil.
+func (fc *fnCtx) shapeOf(s ast.Stmt) *loopShape {
+	switch s := s.(type) {
+	case *ast.ForStmt:
+		if s.Init == nil && s.Post == nil {
+			return fc.whileShape(s)
+		}
+		return fc.forShape(s)
+	case *ast.RangeStmt:
+		return fc.rangeShape(s)
+	}
+	return nil
+}
+
+// forShape handles `for i := a; i <op> b; i++` and its downward twin.
+func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
+	init, ok := s.Init.(*ast.AssignStmt)
+	if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
+		return nil
+	}
+	iv := fc.c.objOf(init.Lhs[0])
+	if iv == nil {
+		return nil
+	}
+	step := fc.stepOf(s.Post, iv)
+	if step == 0 {
+		return nil
+	}
+	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: step}
+	sh.first, sh.firstOff = fc.end(init.Rhs[0])
+	cond, ok := unparen(s.Cond).(*ast.BinaryExpr)
+	if !ok {
+		return nil
+	}
+	op, bound := cond.Op, cond.Y
+	if fc.c.objOf(cond.X) != iv {
+		if fc.c.objOf(cond.Y) != iv {
+			return nil
+		}
+		op, bound = mirror(op), cond.X
+	}
+	var adj int64
+	switch {
+	case step > 0 && op == token.LEQ:
+	case step > 0 && (op == token.LSS || op == token.NEQ):
+		adj = -1
+	case step < 0 && op == token.GEQ:
+	case step < 0 && (op == token.GTR || op == token.NEQ):
+		adj = 1
+	default:
+		return nil
+	}
+	sh.last, sh.lastOff = fc.end(bound)
+	sh.lastOff += adj
+	return sh
+}
+
+// whileShape handles `for n > b { ...; n-- }`.
+func (fc *fnCtx) whileShape(s *ast.ForStmt) *loopShape {
+	cond, ok := unparen(s.Cond).(*ast.BinaryExpr)
+	if !ok {
+		return nil
+	}
+	iv := fc.c.objOf(cond.X)
+	if iv == nil || (cond.Op != token.GTR && cond.Op != token.GEQ) {
+		return nil
+	}
+	var step int64
+	for _, st := range s.Body.List {
+		if d := fc.stepOf(st, iv); d != 0 {
+			step = d
+		}
+	}
+	if step >= 0 {
+		return nil
+	}
+	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: step, first: cond.X, whileLike: true}
+	sh.last, sh.lastOff = fc.end(cond.Y)
+	if cond.Op == token.GTR {
+		sh.lastOff++
+	}
+	return sh
+}
+
+// rangeShape handles `for i := range n` over an integer.
+func (fc *fnCtx) rangeShape(s *ast.RangeStmt) *loopShape {
+	if s.Key == nil || s.Value != nil {
+		return nil
+	}
+	iv := fc.c.objOf(s.Key)
+	if iv == nil {
+		return nil
+	}
+	if _, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(s.X)); !ok {
+		return nil
+	}
+	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: 1}
+	sh.last, sh.lastOff = fc.end(s.X)
+	sh.lastOff--
+	return sh
+}
+
+// end splits a loop end into an expression and a constant offset.
+func (fc *fnCtx) end(e ast.Expr) (ast.Expr, int64) {
+	if v, ok := fc.intConst(unparen(e)); ok {
+		return nil, v
+	}
+	if b, ok := unparen(e).(*ast.BinaryExpr); ok && (b.Op == token.ADD || b.Op == token.SUB) {
+		if v, ok := fc.intConst(unparen(b.Y)); ok {
+			if b.Op == token.SUB {
+				v = -v
+			}
+			return b.X, v
+		}
+	}
+	return e, 0
+}
+
+// stepOf returns the constant by which s changes v (i++, i -= 2,
+// i = i + 1), or 0.
+func (fc *fnCtx) stepOf(s ast.Stmt, v types.Object) int64 {
+	switch s := s.(type) {
+	case *ast.IncDecStmt:
+		if fc.c.objOf(s.X) != v {
+			return 0
+		}
+		if s.Tok == token.INC {
+			return 1
+		}
+		return -1
+	case *ast.AssignStmt:
+		if len(s.Lhs) != 1 || len(s.Rhs) != 1 || fc.c.objOf(s.Lhs[0]) != v {
+			return 0
+		}
+		switch s.Tok {
+		case token.ADD_ASSIGN, token.SUB_ASSIGN:
+			d, ok := fc.intConst(unparen(s.Rhs[0]))
+			if !ok {
+				return 0
+			}
+			if s.Tok == token.SUB_ASSIGN {
+				d = -d
+			}
+			return d
+		case token.ASSIGN:
+			lin, ok := fc.linear(s.Rhs[0])
+			if ok && len(lin.terms) == 1 && lin.terms[0].obj == v && lin.terms[0].coef == 1 {
+				return lin.c
+			}
+		}
+	}
+	return 0
+}
+
+func mirror(op token.Token) token.Token {
+	switch op {
+	case token.LSS:
+		return token.GTR
+	case token.GTR:
+		return token.LSS
+	case token.LEQ:
+		return token.GEQ
+	case token.GEQ:
+		return token.LEQ
+	}
+	return op
+}

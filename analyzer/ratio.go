@@ -1,0 +1,206 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// brokenFactor returns the numerator factor that can break first: the
+// first whose argument is not bounded below its threshold, with its
+// range and first bad argument. ok is false when every numerator factor
+// is safe.
+func (fc *fnCtx) brokenFactor(num []factor) (f factor, r ranges.Interval, first int64, ok bool) {
+	for _, f := range num {
+		if f.kind == kindNone || f.kind == kindRising || f.kind == kindFalling {
+			continue
+		}
+		if f.fact != nil && f.fact.Safe {
+			continue
+		}
+		first := firstBadOf(f.kind, f.t) - f.off
+		r := fc.rangeOf(f.arg)
+		if r.IsEmpty() || r.Hi < first {
+			continue
+		}
+		return f, r, first, true
+	}
+	return factor{}, ranges.Interval{}, 0, false
+}
+
+// bang renders the factorial of an argument: n!, (n-k)!, (2*n)!.
+func bang(arg ast.Expr, off int64) string {
+	s := plus(src(arg), off)
+	if _, ok := unparen(arg).(*ast.Ident); ok && off == 0 {
+		return s + "!"
+	}
+	if _, ok := unparen(arg).(*ast.BasicLit); ok && off == 0 {
+		return s + "!"
+	}
+	return "(" + s + ")!"
+}
+
+// checkFactorialRatio judges binomials, permutations, Catalan numbers,
+// multinomials and other products and ratios of factorial values.
+func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
+	u, r, first, ok := fc.brokenFactor(p.num)
+	if !ok {
+		return
+	}
+	var facts, dens []factor
+	for _, f := range p.num {
+		if f.kind == kindFactorial {
+			facts = append(facts, f)
+		}
+	}
+	for _, f := range p.den {
+		if f.kind == kindFactorial {
+			dens = append(dens, f)
+		}
+	}
+	name := plus(src(u.arg), u.off)
+	clause, definite := verdict(src(u.arg), r, first)
+	breaks := fmt.Sprintf("the numerator %s %s for %s ≥ %d", bang(u.arg, u.off), verb(u.t), src(u.arg), first)
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	var msg string
+	shape := fixes.ShapeNone
+	if len(facts) == 1 && len(p.num) == 1 && u.kind == kindFactorial {
+		shape, msg = fc.ratioShape(u, dens, m)
+	}
+	switch {
+	case shape == fixes.ShapeBinomial:
+		central := thresholds.CentralBinomial(u.t.Num)
+		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, name, name, name, central.FirstBad-1)
+	case shape == fixes.ShapeCatalan:
+		cv := thresholds.CatalanValue(u.t.Num)
+		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: %s although the Catalan number itself fits up to n = %d", u.t.typeName(), breaks, cv.FirstBad-1)
+	case shape == fixes.ShapePermutation:
+		msg = fmt.Sprintf("permutation count n!/(n-k)! as a ratio of factorials in %s: %s, although the product of the top k factors may still fit", u.t.typeName(), breaks)
+	case shape == fixes.ShapeMultinomial:
+		msg = fmt.Sprintf("multinomial coefficient as a ratio of factorials in %s: %s before any division", u.t.typeName(), breaks)
+	case len(p.den) == 0:
+		msg = fmt.Sprintf("product of factorials in %s: the factor %s alone %s for %s ≥ %d, and the product earlier", u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(u.arg), first)
+	default:
+		msg = fmt.Sprintf("ratio of factorials in %s: %s before the division", u.t.typeName(), breaks)
+	}
+	m.Shape = shape
+	if shape == fixes.ShapeNone {
+		m.Args = nil
+	}
+	fc.report(finding{
+		node:     root,
+		cat:      catRatio,
+		definite: definite,
+		msg:      msg + clause,
+		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
+		match:    m,
+	})
+}
+
+// ratioShape matches the denominators of a single-factorial numerator
+// against the binomial, Catalan, permutation and multinomial forms, and
+// fills the Match arguments in the order fixes documents.
+func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shape, string) {
+	n, ok := fc.linear(u.arg)
+	if !ok || len(dens) == 0 || u.off != 0 {
+		return fixes.ShapeNone, ""
+	}
+	var lins []linear
+	sum := linear{}
+	for _, d := range dens {
+		l, ok := fc.linear(d.arg)
+		if !ok || d.off != 0 {
+			return fixes.ShapeNone, ""
+		}
+		lins = append(lins, l)
+		sum = sum.add(l)
+	}
+	switch {
+	case len(dens) == 2 && sum.equal(n):
+		k := dens[0].arg
+		if len(lins[1].terms) < len(lins[0].terms) {
+			k = dens[1].arg
+		}
+		m.Args = []ast.Expr{u.arg, k}
+		return fixes.ShapeBinomial, ""
+	case len(dens) == 2 && sum.scale(2).equal(n.scale(2).add(linear{c: 2})) && (lins[0].scale(2).equal(n) || lins[1].scale(2).equal(n)):
+		half := dens[0].arg
+		if !lins[0].scale(2).equal(n) {
+			half = dens[1].arg
+		}
+		m.Args = []ast.Expr{half}
+		return fixes.ShapeCatalan, ""
+	case len(dens) == 1:
+		if b, ok := unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
+			if x, ok := fc.linear(b.X); ok && x.equal(n) {
+				m.Args = []ast.Expr{u.arg, b.Y}
+			}
+		}
+		return fixes.ShapePermutation, ""
+	case len(dens) >= 3 && sum.equal(n):
+		for _, d := range dens {
+			m.Args = append(m.Args, d.arg)
+		}
+		m.Extra = []ast.Expr{u.arg}
+		return fixes.ShapeMultinomial, ""
+	}
+	return fixes.ShapeNone, ""
+}
+
+// checkHypergeometric judges C(K,k)·C(N−K,n−k)/C(N,n) formed from calls
+// of a binomial-valued function: the denominator's C(N, n) breaks first.
+func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
+	d := p.den[0]
+	for _, f := range p.den {
+		if f.kind == kindBinomial {
+			d = f
+		}
+	}
+	if d.fact == nil || d.fact.Safe {
+		return
+	}
+	first := d.fact.FirstBad
+	r := fc.rangeOf(d.arg)
+	if r.IsEmpty() || r.Hi < first {
+		return
+	}
+	clause, definite := verdict(src(d.arg), r, first)
+	msg := fmt.Sprintf("hypergeometric probability from three binomial coefficients in %s: %s(%s, …) breaks for %s ≥ %d before the division%s",
+		d.t.typeName(), d.fn.Name(), src(d.arg), src(d.arg), first, clause)
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if args := fc.hyperArgs(p); args != nil {
+		m.Shape, m.Args = fixes.ShapeHypergeometric, args
+	}
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: m})
+}
+
+// hyperArgs returns k, N, K, n of C(K,k)C(N-K,n-k)/C(N,n), or nil.
+func (fc *fnCtx) hyperArgs(p *product) []ast.Expr {
+	if len(p.num) != 2 || len(p.den) != 1 {
+		return nil
+	}
+	a, b, d := p.num[0], p.num[1], p.den[0]
+	if a.arg2 == nil || b.arg2 == nil || d.arg2 == nil {
+		return nil
+	}
+	N, ok1 := fc.linear(d.arg)
+	n, ok2 := fc.linear(d.arg2)
+	K, ok3 := fc.linear(a.arg)
+	k, ok4 := fc.linear(a.arg2)
+	K2, ok5 := fc.linear(b.arg)
+	k2, ok6 := fc.linear(b.arg2)
+	if !(ok1 && ok2 && ok3 && ok4 && ok5 && ok6) {
+		return nil
+	}
+	if !K.add(K2).equal(N) || !k.add(k2).equal(n) {
+		return nil
+	}
+	if len(K2.terms) < len(K.terms) {
+		a = b // the simpler pair is C(K, k), the other C(N-K, n-k)
+	}
+	return []ast.Expr{a.arg2, d.arg, a.arg, d.arg2}
+}

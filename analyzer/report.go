@@ -1,0 +1,73 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+
+	"golang.org/x/tools/go/analysis"
+
+	"github.com/overfact/overfact/fixes"
+)
+
+// finding is one root cause, ready to become a Diagnostic.
+type finding struct {
+	node     ast.Node
+	cat      string // the pattern's category, without definiteSuffix
+	definite bool
+	msg      string
+	related  []analysis.RelatedInformation
+	match    *fixes.Match
+}
+
+// report emits f unless it lies in a generated file, is silenced by an
+// allow directive, or repeats a finding already made.
+func (fc *fnCtx) report(f finding) {
+	c := fc.c
+	cat := f.cat
+	if f.definite {
+		cat += definiteSuffix
+	}
+	pos := f.node.Pos()
+	fi := c.fileOf(pos)
+	if fi == nil || fi.generated || fi.dirs.allowed(c.pass.Fset, pos) {
+		return
+	}
+	key := reportKey{pos, cat}
+	if c.reported[key] {
+		return
+	}
+	c.reported[key] = true
+	d := analysis.Diagnostic{
+		Pos:      pos,
+		End:      f.node.End(),
+		Category: cat,
+		URL:      categoryURL(cat),
+		Message:  f.msg,
+		Related:  f.related,
+	}
+	if f.match != nil {
+		f.match.File = fi.file
+		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
+	}
+	c.pass.Report(d)
+}
+
+// reportDirective reports a malformed directive; these are never
+// silenced, since an allow that does not parse silences nothing.
+func (c *checker) reportDirective(pos, end token.Pos, msg string) {
+	c.pass.Report(analysis.Diagnostic{
+		Pos:      pos,
+		End:      end,
+		Category: catDirective,
+		URL:      categoryURL(catDirective),
+		Message:  msg,
+	})
+}
+
+// relatedDef points at the definition of a factorial-valued function.
+func (c *checker) relatedDef(name string, pos token.Pos) []analysis.RelatedInformation {
+	if !pos.IsValid() {
+		return nil
+	}
+	return []analysis.RelatedInformation{{Pos: pos, Message: name + " computes the factorial here"}}
+}
