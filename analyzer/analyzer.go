@@ -37,7 +37,7 @@ type checker struct {
 	fnInfo    map[ast.Node]*fnCtx      // per analysed function
 	reported  map[reportKey]bool
 	consumed  map[*ast.CallExpr]bool // calls already part of a finding
-	allFuncs  []ast.Node // every FuncDecl and FuncLit, in source order
+	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
 }
@@ -56,12 +56,12 @@ type fileInfo struct {
 
 func run(pass *analysis.Pass) (any, error) {
 	c := &checker{
-		pass:      pass,
-		files:     make(map[*token.File]*fileInfo),
-		funcs:     make(map[*types.Func]*facFunc),
-		fnInfo:    make(map[ast.Node]*fnCtx),
-		reported:  make(map[reportKey]bool),
-		consumed:  make(map[*ast.CallExpr]bool),
+		pass:     pass,
+		files:    make(map[*token.File]*fileInfo),
+		funcs:    make(map[*types.Func]*facFunc),
+		fnInfo:   make(map[ast.Node]*fnCtx),
+		reported: make(map[reportKey]bool),
+		consumed: make(map[*ast.CallExpr]bool),
 	}
 	for _, f := range pass.Files {
 		tf := pass.Fset.File(f.Pos())
