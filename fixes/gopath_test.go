@@ -57,3 +57,12 @@ func copyDir(t *testing.T, from, to string, withGolden bool) {
 		}
 	}
 }
+
+func readFile(t *testing.T, name string) []byte {
+	t.Helper()
+	data, err := os.ReadFile(name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return data
+}
