@@ -1,0 +1,4 @@
+package fuzz
+
+// underTest is the analyzer fuzzed.
+var underTest = expand

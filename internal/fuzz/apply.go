@@ -1,0 +1,123 @@
+package fuzz
+
+import (
+	"bytes"
+	"fmt"
+	"go/token"
+	"slices"
+
+	"golang.org/x/tools/go/analysis"
+)
+
+// edit is a TextEdit resolved to byte offsets in one file.
+type edit struct {
+	file       string
+	start, end int
+	text       string
+}
+
+// resolve turns the edits of fix into offsets, rejecting edits that fall
+// outside the package's files or overlap each other, which the go/analysis
+// contract forbids within one fix. Identical edits are merged, as the
+// x/tools drivers do.
+func resolve(fset *token.FileSet, src map[string][]byte, fix analysis.SuggestedFix) ([]edit, error) {
+	var out []edit
+	for _, te := range fix.TextEdits {
+		tf := fset.File(te.Pos)
+		if tf == nil {
+			return nil, fmt.Errorf("edit at %d is in no file", te.Pos)
+		}
+		end := te.End
+		if !end.IsValid() {
+			end = te.Pos
+		}
+		if fset.File(end) != tf {
+			return nil, fmt.Errorf("edit %s spans files", fset.Position(te.Pos))
+		}
+		name := tf.Name()
+		if _, ok := src[name]; !ok {
+			return nil, fmt.Errorf("edit in %s, not a file of the package", name)
+		}
+		e := edit{name, tf.Offset(te.Pos), tf.Offset(end), string(te.NewText)}
+		if e.start > e.end || e.end > len(src[name]) {
+			return nil, fmt.Errorf("edit %s has bad range [%d,%d)", fset.Position(te.Pos), e.start, e.end)
+		}
+		out = append(out, e)
+	}
+	sortEdits(out)
+	out = slices.Compact(out)
+	if i := firstOverlap(out); i >= 0 {
+		return nil, fmt.Errorf("overlapping edits at %s offsets %d and %d", out[i].file, out[i].start, out[i+1].start)
+	}
+	return out, nil
+}
+
+func sortEdits(es []edit) {
+	slices.SortStableFunc(es, func(a, b edit) int {
+		if a.file != b.file {
+			if a.file < b.file {
+				return -1
+			}
+			return 1
+		}
+		if a.start != b.start {
+			return a.start - b.start
+		}
+		return a.end - b.end
+	})
+}
+
+// firstOverlap returns the index i of the first sorted edit that overlaps
+// edit i+1, or -1. As in x/tools' diff package, insertions at one offset
+// do not overlap: they apply in order.
+func firstOverlap(es []edit) int {
+	for i := 0; i+1 < len(es); i++ {
+		a, b := es[i], es[i+1]
+		if a.file == b.file && b.start < a.end {
+			return i
+		}
+	}
+	return -1
+}
+
+// apply returns a copy of src with the sorted, non-overlapping edits done.
+func apply(src map[string][]byte, es []edit) map[string][]byte {
+	out := make(map[string][]byte, len(src))
+	for name, b := range src {
+		out[name] = b
+	}
+	for name := range src {
+		var mine []edit
+		for _, e := range es {
+			if e.file == name {
+				mine = append(mine, e)
+			}
+		}
+		if len(mine) == 0 {
+			continue
+		}
+		var buf bytes.Buffer
+		last := 0
+		for _, e := range mine {
+			buf.Write(src[name][last:e.start])
+			buf.WriteString(e.text)
+			last = e.end
+		}
+		buf.Write(src[name][last:])
+		out[name] = buf.Bytes()
+	}
+	return out
+}
+
+// merge adds the edits of next to those already chosen, unless some of
+// them overlap; it reports whether next was taken. This is how all fixes
+// of a run are applied together, the way -fix does.
+func merge(chosen, next []edit) ([]edit, bool) {
+	all := append(slices.Clone(chosen), next...)
+	sortEdits(all)
+	all = slices.Compact(all)
+	if firstOverlap(all) >= 0 {
+		return chosen, false
+	}
+	return all, true
+}
