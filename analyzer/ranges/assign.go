@@ -1,0 +1,144 @@
+package ranges
+
+import (
+	"go/ast"
+	"go/token"
+)
+
+func (w *walker) assign(s state, st *ast.AssignStmt) state {
+	switch st.Tok {
+	case token.ASSIGN, token.DEFINE:
+	default:
+		if len(st.Lhs) != 1 || len(st.Rhs) != 1 {
+			return s
+		}
+		return w.update(s, st.Lhs[0], opOf(st.Tok), w.eval(s, st.Rhs[0]))
+	}
+	// Go evaluates every operand before assigning any.
+	vals := make([]Interval, len(st.Lhs))
+	if len(st.Lhs) == len(st.Rhs) {
+		for i, r := range st.Rhs {
+			vals[i] = w.eval(s, r)
+		}
+	} else {
+		for _, r := range st.Rhs {
+			w.eval(s, r)
+		}
+		for i := range vals {
+			vals[i] = Top()
+		}
+	}
+	for _, l := range st.Lhs {
+		w.operands(s, l)
+	}
+	for i, l := range st.Lhs {
+		s = w.store(s, l, vals[i])
+	}
+	return s
+}
+
+// operands evaluates the parts of an assignment target that are read
+// (indexes, pointers), but not a plain variable, which is written.
+func (w *walker) operands(s state, l ast.Expr) {
+	if _, ok := ast.Unparen(l).(*ast.Ident); !ok {
+		w.eval(s, l)
+	}
+}
+
+// store assigns r to the target l.
+func (w *walker) store(s state, l ast.Expr, r Interval) state {
+	id, ok := ast.Unparen(l).(*ast.Ident)
+	if !ok || id.Name == "_" {
+		return s
+	}
+	obj := w.f.objOf(id)
+	if obj == nil || !w.f.tracked(obj) {
+		return s
+	}
+	s = w.f.put(s, obj, r)
+	if w.rec && s.live {
+		w.f.exprs[id] = r.Meet(kindOf(obj.Type()).top)
+	}
+	return s
+}
+
+// update applies x op= r, also used for x++ and x--.
+func (w *walker) update(s state, l ast.Expr, op token.Token, r Interval) state {
+	id, ok := ast.Unparen(l).(*ast.Ident)
+	if !ok {
+		w.eval(s, l)
+		return s
+	}
+	cur := w.eval(s, id)
+	var k numKind
+	if tv, ok := w.f.info.Types[id]; ok {
+		k = kindOf(tv.Type)
+	}
+	if !k.ok {
+		return s
+	}
+	return w.store(s, id, arith(op, cur, r, k, w.f.opts.NoWrap))
+}
+
+func opOf(tok token.Token) token.Token {
+	switch tok {
+	case token.ADD_ASSIGN:
+		return token.ADD
+	case token.SUB_ASSIGN:
+		return token.SUB
+	case token.MUL_ASSIGN:
+		return token.MUL
+	case token.QUO_ASSIGN:
+		return token.QUO
+	case token.REM_ASSIGN:
+		return token.REM
+	case token.AND_ASSIGN:
+		return token.AND
+	case token.OR_ASSIGN:
+		return token.OR
+	case token.XOR_ASSIGN:
+		return token.XOR
+	case token.SHL_ASSIGN:
+		return token.SHL
+	case token.SHR_ASSIGN:
+		return token.SHR
+	case token.AND_NOT_ASSIGN:
+		return token.AND_NOT
+	}
+	return token.ILLEGAL
+}
+
+func (w *walker) decl(s state, st *ast.DeclStmt) state {
+	gd, ok := st.Decl.(*ast.GenDecl)
+	if !ok || gd.Tok != token.VAR {
+		return s
+	}
+	for _, spec := range gd.Specs {
+		vs, ok := spec.(*ast.ValueSpec)
+		if !ok {
+			continue
+		}
+		vals := make([]Interval, len(vs.Names))
+		switch {
+		case len(vs.Values) == 0:
+			for i := range vals {
+				vals[i] = Point(0) // the zero value
+			}
+		case len(vs.Values) == len(vs.Names):
+			for i, v := range vs.Values {
+				vals[i] = w.eval(s, v)
+			}
+		default:
+			for _, v := range vs.Values {
+				w.eval(s, v)
+			}
+			for i := range vals {
+				vals[i] = Top()
+			}
+		}
+		for i, id := range vs.Names {
+			s = w.store(s, id, vals[i])
+		}
+	}
+	return s
+}

@@ -1,0 +1,49 @@
+// Package ranges computes integer ranges of the numeric variables and
+// expressions of one Go function, so that a caller can tell whether a
+// value provably stays below some threshold where it is used.
+//
+// # Domain
+//
+// Each local variable of integer or float type (or of a type parameter
+// whose type set holds only integers, or only floats) is mapped to an
+// Interval [Lo, Hi]. MinInt64 and MaxInt64 stand for −∞ and +∞. Float
+// intervals have integer bounds rounded outwards. The walk follows the
+// syntax of the function in execution order, carrying a state (a
+// persistent map from variables to intervals, so that snapshots and
+// joins cost only the differences) and refining it at conditions:
+// dominating guards that leave (return, panic, os.Exit, log.Fatal,
+// t.Fatal, break, continue, goto), branch conditions with && || and !,
+// switch cases, loop conditions and range loops. Loops are iterated to
+// a fixpoint with widening after Options.MaxVisits trips, followed by
+// one narrowing trip; the loop condition re-narrows the body. No SSA
+// or control-flow graph is built: the cost is linear in the function
+// size times a small factor per loop nesting level, with a global
+// budget past which loops fall back to forgetting what they assign.
+//
+// # Soundness
+//
+// The result over-approximates: the interval returned by Func.Of or
+// Func.At contains every value the expression or variable can take at
+// that point in any execution that starts in the Options.Entry ranges.
+// Integer arithmetic follows Go's wrapping semantics: when a result
+// might leave its type, the range is the whole type. Package-level
+// variables, fields, elements and results of calls are unknown.
+// A variable whose address is taken, that a closure assigns, or that
+// has a pointer method called on it is unknown from that point on (and
+// throughout any loop containing that point, or everywhere if the
+// function uses goto). Closures are analysed on their own, knowing
+// nothing of the variables they capture. Code nested deeper than 1000
+// levels is not walked: what it assigns becomes unknown.
+//
+// # Known limits
+//
+// The domain is non-relational: it does not know that s = 3·i, or that
+// i ≤ n after n changes. Conditions on derived values (x := f(n); if x
+// > 3) refine only x. Comparisons involving NaN are assumed false and
+// their negations true, so a float guard such as "if x > 170 { return }"
+// is taken to bound x even though a NaN would pass it. Labels targeted
+// by goto reset every fact. The int and uint types are taken to be 64
+// bits wide. Options.NoWrap trades the wrap-around rule for precision
+// on unbounded values: it reads the extreme bounds as infinite, so
+// n−1 after "if n > 20 { return }" is (−∞, 19] rather than unknown.
+package ranges

@@ -1,0 +1,125 @@
+package ranges
+
+import (
+	"go/ast"
+	"go/types"
+)
+
+// pass walks one trip through a loop from the head state and returns
+// the state that reaches the head again and the state that leaves.
+type pass func(head state) (next, exit state)
+
+// loop runs a loop to a fixpoint of its head state: join-based
+// iteration, widening from the MaxVisits-th trip on (immediately below
+// two enclosing loops), then one descending step F(H) (Cousot and
+// Cousot, POPL 1977) that doubles as the recording pass. Deeper than
+// four loops, or past the work budget, the head just forgets every
+// variable the loop assigns, which needs no iteration.
+func (w *walker) loop(entry state, n ast.Node, trip pass) state {
+	if !entry.live {
+		return entry
+	}
+	w.loops++
+	defer func() { w.loops-- }()
+	if w.loops > 4 || w.f.work > 20*w.f.size+10000 {
+		head := entry
+		for _, obj := range w.f.assignedIn(n) {
+			head = w.f.put(head, obj, Top())
+		}
+		_, exit := trip(head)
+		return exit
+	}
+	visits := w.f.opts.MaxVisits
+	if w.loops > 2 {
+		visits = 1
+	}
+	rec := w.rec
+	w.rec = false
+	head := entry
+	var next state
+	for i := 1; ; i++ {
+		next, _ = trip(head)
+		h := head.join(next)
+		if i >= visits {
+			h = head.widen(h)
+		}
+		if h.equal(head) {
+			break
+		}
+		head = h
+	}
+	w.rec = rec
+	// head is a post-fixpoint, so entry ⊔ next, one more application
+	// of the loop's transfer function, is still sound and often tighter.
+	_, exit := trip(entry.join(next))
+	return exit
+}
+
+func (w *walker) forStmt(s state, st *ast.ForStmt, label string) state {
+	s = w.stmt(s, st.Init)
+	return w.loop(s, st, func(head state) (state, state) {
+		in, out := head, dead
+		if st.Cond != nil {
+			w.cond(head, st.Cond)
+			in, out = w.refine2(head, st.Cond)
+		}
+		t := w.push(label, true)
+		end := w.stmt(in, st.Body)
+		w.pop()
+		end = joinAll(end, t.conts)
+		end = w.stmt(end, st.Post)
+		return end, joinAll(out, t.breaks)
+	})
+}
+
+func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
+	x := w.eval(s, st.X)
+	key, val := w.rangeKey(st.X, x)
+	return w.loop(s, st, func(head state) (state, state) {
+		in := head
+		if key.IsEmpty() {
+			in = dead
+		}
+		if st.Key != nil {
+			w.operands(in, st.Key)
+			in = w.store(in, st.Key, key)
+		}
+		if st.Value != nil {
+			w.operands(in, st.Value)
+			in = w.store(in, st.Value, val)
+		}
+		t := w.push(label, true)
+		end := w.stmt(in, st.Body)
+		w.pop()
+		end = joinAll(end, t.conts)
+		// The loop ends at the head, after any number of trips.
+		return end, joinAll(head, t.breaks)
+	})
+}
+
+// rangeKey returns the ranges of the key and value of range x, where
+// x has range xr; an empty key range means the body never runs.
+func (w *walker) rangeKey(x ast.Expr, xr Interval) (key, val Interval) {
+	tv, ok := w.f.info.Types[x]
+	if !ok || tv.Type == nil {
+		return Top(), Top()
+	}
+	if k := kindOf(tv.Type); k.ok && !k.float {
+		return Span(0, strictBelow(xr.Hi, w.f.opts.NoWrap)).Meet(Interval{0, posInf}), Top()
+	}
+	t := tv.Type.Underlying()
+	if p, ok := t.(*types.Pointer); ok {
+		t = p.Elem().Underlying()
+	}
+	switch t := t.(type) {
+	case *types.Array:
+		return Span(0, t.Len()-1), Top()
+	case *types.Slice:
+		return Interval{0, posInf - 1}, Top()
+	case *types.Basic:
+		if t.Info()&types.IsString != 0 {
+			return Interval{0, posInf - 1}, Top()
+		}
+	}
+	return Top(), Top()
+}
