@@ -4,5 +4,6 @@ package probeimports
 func Mixes(n, k int) float64 {
 	lgamma2 := 0.5
 	// probe:binomial(n, k)
-	return lgamma2 * fact(n) / fact(n-k) / fact(k) // want "probe binomial"
+	c := fact(n) / fact(n-k) / fact(k) // want "probe binomial"
+	return lgamma2 * c
 }

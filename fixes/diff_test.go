@@ -1,0 +1,277 @@
+package fixes_test
+
+import (
+	"bufio"
+	"bytes"
+	"fmt"
+	"math"
+	"math/big"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+
+	"github.com/overfact/overfact/fixes"
+)
+
+// A diffCase runs one function of a testdata package, before and after
+// its fixes, over a grid of inputs.
+type diffCase struct {
+	pkg, fn string
+	loops   []string // loop clauses, outermost first, over int variables
+	args    string   // the call's arguments, in the loop variables
+	typ     string   // the function's result type
+	ref     func([]float64) *big.Float
+	guard   bool // a range guard: where the original is right, the fixed code returns the same bits
+	noBreak bool // the original stays right on this grid (the fix must not hurt)
+}
+
+var diffCases = []diffCase{
+	{pkg: "probebinom", fn: "Rotas", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
+	{pkg: "probebinom", fn: "RotasU", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	{pkg: "probebinom", fn: "RotaShare", loops: []string{"n := 0; n <= 400; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "probebinom", fn: "Orders", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
+	{pkg: "probebinom", fn: "OrdersF", loops: []string{"n := 0; n <= 250; n += 5", "k := 0; k <= 40 && k <= n; k += 3"}, args: "n, k", typ: "float64", ref: refFalling},
+	{pkg: "probebinom", fn: "Shifts", loops: []string{"a := 0; a <= 12; a++", "b := 0; b <= 12; b += 2", "c := 0; c <= 12; c += 3"}, args: "a, b, c", typ: "int", ref: refMultinomial},
+	{pkg: "probebinom", fn: "ShiftsF", loops: []string{"a := 0; a <= 90; a += 9", "b := 0; b <= 90; b += 10", "c := 0; c <= 40; c += 8"}, args: "a, b, c", typ: "float64", ref: refMultinomial},
+	{pkg: "probebinom", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
+	{pkg: "probebinom", fn: "QueuesF", loops: []string{"n := 0; n <= 250; n++"}, args: "n", typ: "float64", ref: refCatalan},
+	{pkg: "probeloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
+	{pkg: "probeloop", fn: "Orders", loops: []string{"n := 0; n <= 30; n++", "k := 0; k <= n; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refFalling},
+	{pkg: "probeloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	{pkg: "probeloop", fn: "Odds", loops: []string{"n := 0; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "probeguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
+	{pkg: "probeguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
+	{pkg: "probeguard", fn: "Short", loops: []string{"n := 0; n <= 25; n++"}, args: "uint(n)", typ: "uint", ref: refFactorial, guard: true},
+	{pkg: "probeguard", fn: "Count", loops: []string{"n := 0; n <= 25; n++"}, args: "uint64(n)", typ: "uint64", ref: refFactorial, guard: true},
+	{pkg: "probeguard", fn: "Small", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "float32", ref: refFactorial, guard: true},
+	{pkg: "probeguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, guard: true},
+	{pkg: "probeterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
+	{pkg: "probeterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
+	{pkg: "probeterm", fn: "Defects", loops: []string{"n := 10; n <= 1000; n *= 3", "k := 0; k <= n; k += 1 + n/11"}, args: "k, n, 0.125", typ: "float64", ref: refBinomialPMF},
+	{pkg: "probeterm", fn: "Lot", loops: []string{"total := 60; total <= 240; total += 60", "k := 0; k <= 30; k += 2"}, args: "k, total, 30, 40", typ: "float64", ref: refHypergeometric},
+	{pkg: "probeterm", fn: "Spread", loops: []string{"a := 1; a <= 220; a += 7", "b := 1; b <= 220; b += 11"}, args: "float64(a), float64(b)", typ: "float64", ref: refGammaRatio},
+	{pkg: "probeterm", fn: "Mix", loops: []string{"a := 1; a <= 200; a += 9", "b := 1; b <= 200; b += 13"}, args: "float64(a), float64(b)", typ: "float64", ref: refBeta},
+	{pkg: "probeimports", fn: "Plans", loops: []string{"n := 0; n <= 300; n += 7", "k := 0; k <= n; k += 1 + n/5"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "probeimports", fn: "Tail", loops: []string{"n := 0; n <= 300; n += 7", "k := 0; k <= 30 && k <= n; k += 3"}, args: "n, k", typ: "float64", ref: refFalling},
+	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
+}
+
+// TestDifferential compiles each testdata package twice, as written and
+// as fixed, runs both over the grids of diffCases in one generated
+// program, and compares both with exact math/big references: where the
+// reference fits the result type the fixed code must match it (exactly
+// for integers, within 1e-12 relative for floats); where it does not,
+// integer code must panic; and the original must be wrong somewhere on
+// the grid, or the case would not show the fix doing anything.
+func TestDifferential(t *testing.T) {
+	if _, err := exec.LookPath("go"); err != nil {
+		t.Skip("no go command")
+	}
+	pkgs := diffPackages()
+	dir := gopath(t, filepath.Join("testdata", "src"), pkgs...)
+	mod := t.TempDir()
+	for _, p := range pkgs {
+		copyDir(t, filepath.Join("testdata", "src", p), filepath.Join(mod, "orig", p), false)
+	}
+	applyFirstFixes(t, dir, probe, pkgs...)
+	for _, p := range pkgs {
+		copyDir(t, filepath.Join(dir, "src", p), filepath.Join(mod, "fixed", p), false)
+	}
+	helper, err := filepath.Abs("lgamma")
+	if err != nil {
+		t.Fatal(err)
+	}
+	gomod := fmt.Sprintf("module difftest\n\ngo 1.21\n\nrequire %s v0.0.0\n\nreplace %s => %s\n", fixes.HelperPath, fixes.HelperPath, helper)
+	write(t, filepath.Join(mod, "go.mod"), gomod)
+	write(t, filepath.Join(mod, "main.go"), diffMain(pkgs))
+	cmd := exec.Command("go", "run", ".")
+	cmd.Dir = mod
+	cmd.Env = append(os.Environ(), "GOWORK=off", "GOFLAGS=-mod=mod", "GOPROXY=off")
+	var stderr bytes.Buffer
+	cmd.Stderr = &stderr
+	out, err := cmd.Output()
+	if err != nil {
+		t.Fatalf("go run: %v\n%s", err, stderr.Bytes())
+	}
+	checkDiff(t, out)
+}
+
+func diffPackages() []string {
+	var pkgs []string
+	seen := make(map[string]bool)
+	for _, c := range diffCases {
+		if !seen[c.pkg] {
+			seen[c.pkg] = true
+			pkgs = append(pkgs, c.pkg)
+		}
+	}
+	return pkgs
+}
+
+func write(t *testing.T, name, content string) {
+	t.Helper()
+	if err := os.WriteFile(name, []byte(content), 0o644); err != nil {
+		t.Fatal(err)
+	}
+}
+
+// diffMain writes the program that prints, for every case and input,
+// "index|args|original|fixed", with "panic" for a call that panicked.
+func diffMain(pkgs []string) string {
+	var b strings.Builder
+	b.WriteString("package main\n\nimport (\n\t\"fmt\"\n\t\"strconv\"\n")
+	for _, p := range pkgs {
+		fmt.Fprintf(&b, "\to_%s \"difftest/orig/%s\"\n\tf_%s \"difftest/fixed/%s\"\n", p, p, p, p)
+	}
+	b.WriteString(`)
+
+func run(f func() any) (s string) {
+	defer func() {
+		if recover() != nil {
+			s = "panic"
+		}
+	}()
+	switch v := f().(type) {
+	case float64:
+		return strconv.FormatFloat(v, 'g', -1, 64)
+	case float32:
+		return strconv.FormatFloat(float64(v), 'g', -1, 32)
+	default:
+		return fmt.Sprint(v)
+	}
+}
+
+func show(i int, args []any, o, f func() any) {
+	fmt.Printf("%d|%s|%s|%s\n", i, fmt.Sprint(args...), run(o), run(f))
+}
+
+func main() {
+`)
+	for i, c := range diffCases {
+		b.WriteString("\t{\n")
+		for _, l := range c.loops {
+			fmt.Fprintf(&b, "\tfor %s {\n", l)
+		}
+		fmt.Fprintf(&b, "\tshow(%d, []any{%s}, func() any { return o_%s.%s(%s) }, func() any { return f_%s.%s(%s) })\n",
+			i, spaced(c.args), c.pkg, c.fn, c.args, c.pkg, c.fn, c.args)
+		for range c.loops {
+			b.WriteString("\t}\n")
+		}
+		b.WriteString("\t}\n")
+	}
+	b.WriteString("}\n")
+	return b.String()
+}
+
+// spaced makes fmt.Sprint put a space between every argument.
+func spaced(args string) string {
+	parts := strings.Split(args, ",")
+	for i, p := range parts {
+		parts[i] = "\" \", " + strings.TrimSpace(p)
+	}
+	return strings.Join(parts, ", ")
+}
+
+type caseStats struct{ runs, broke int }
+
+func checkDiff(t *testing.T, out []byte) {
+	stats := make([]caseStats, len(diffCases))
+	sc := bufio.NewScanner(bytes.NewReader(out))
+	for sc.Scan() {
+		f := strings.Split(sc.Text(), "|")
+		if len(f) != 4 {
+			t.Fatalf("bad line %q", sc.Text())
+		}
+		i, _ := strconv.Atoi(f[0])
+		c := diffCases[i]
+		var x []float64
+		for _, a := range strings.Fields(f[1]) {
+			v, err := strconv.ParseFloat(a, 64)
+			if err != nil {
+				t.Fatalf("bad argument %q", a)
+			}
+			x = append(x, v)
+		}
+		ref := c.ref(x)
+		stats[i].runs++
+		if !right(c.typ, f[2], ref, c.guard) {
+			stats[i].broke++
+		}
+		if !right(c.typ, f[3], ref, c.guard) {
+			t.Errorf("%s.%s(%s): fixed = %s, original = %s, want %s", c.pkg, c.fn, f[1], f[3], f[2], describe(c.typ, ref))
+		}
+		if c.guard && fits(c.typ, ref) && f[2] != f[3] {
+			t.Errorf("%s.%s(%s): guarded = %s, original = %s; want the same", c.pkg, c.fn, f[1], f[3], f[2])
+		}
+	}
+	for i, s := range stats {
+		c := diffCases[i]
+		switch {
+		case s.runs == 0:
+			t.Errorf("%s.%s never ran", c.pkg, c.fn)
+		case s.broke == 0 && !c.noBreak:
+			t.Errorf("%s.%s: the original was right on all %d inputs; the grid does not reach its overflow", c.pkg, c.fn, s.runs)
+		}
+		t.Logf("%s.%s: %d inputs, original wrong on %d, fixed right on all", c.pkg, c.fn, s.runs, s.broke)
+	}
+}
+
+// limits of the result types, as exact big floats.
+func limit(typ string) *big.Float {
+	switch typ {
+	case "int", "int64":
+		return fl(math.MaxInt64)
+	case "uint", "uint64":
+		return bf(new(big.Int).SetUint64(math.MaxUint64))
+	case "int32":
+		return fl(math.MaxInt32)
+	case "float32":
+		return fl(math.MaxFloat32)
+	}
+	return fl(math.MaxFloat64)
+}
+
+func isFloat(typ string) bool { return strings.HasPrefix(typ, "float") }
+
+func fits(typ string, ref *big.Float) bool {
+	return new(big.Float).Abs(ref).Cmp(limit(typ)) <= 0
+}
+
+// right reports whether the printed result got is a correct outcome for
+// reference ref: the value itself when it fits (floats within 1e-12
+// relative, 1e-6 for float32, and an absolute 1e-300 near underflow); a
+// panic when it does not, or for a float (unless loud is set, as for a
+// range guard) an infinity.
+func right(typ, got string, ref *big.Float, loud bool) bool {
+	if !fits(typ, ref) {
+		return got == "panic" || !loud && isFloat(typ) && (got == "+Inf" || got == "-Inf")
+	}
+	if got == "panic" {
+		return false
+	}
+	v, _, err := big.ParseFloat(got, 10, refPrec, big.ToNearestEven)
+	if err != nil {
+		return false
+	}
+	if !isFloat(typ) {
+		return v.Cmp(ref) == 0
+	}
+	tol := 1e-12
+	if typ == "float32" {
+		tol = 1e-6
+	}
+	diff := new(big.Float).Sub(v, ref)
+	d, _ := new(big.Float).Abs(diff).Float64()
+	r, _ := new(big.Float).Abs(ref).Float64()
+	return d <= tol*r || d <= 1e-300
+}
+
+func describe(typ string, ref *big.Float) string {
+	if !fits(typ, ref) {
+		return "a panic (true value " + ref.Text('g', 6) + " overflows " + typ + ")"
+	}
+	return ref.Text('g', 17)
+}

@@ -1,0 +1,117 @@
+package fixes_test
+
+import (
+	"math"
+	"math/big"
+)
+
+// Reference values for the differential tests, computed with math/big
+// from the defining formulas (common practice; DLMF 26.3.1 for C(n,k),
+// 26.4.2 for multinomials, 5.4.1 for Γ(n) = (n−1)! and 5.12.1 for
+// B(a,b) = Γ(a)Γ(b)/Γ(a+b)), never from the helper module. Integers are
+// exact; the 2000-bit floats carry far more digits than float64 needs.
+const refPrec = 2000
+
+func bf(x *big.Int) *big.Float { return new(big.Float).SetPrec(refPrec).SetInt(x) }
+
+func fl(x float64) *big.Float { return new(big.Float).SetPrec(refPrec).SetFloat64(x) }
+
+func quo(a, b *big.Float) *big.Float { return new(big.Float).SetPrec(refPrec).Quo(a, b) }
+
+func mul(a, b *big.Float) *big.Float { return new(big.Float).SetPrec(refPrec).Mul(a, b) }
+
+func factorialBig(n int64) *big.Int {
+	if n < 2 {
+		return big.NewInt(1)
+	}
+	return new(big.Int).MulRange(1, n)
+}
+
+func chooseBig(n, k int64) *big.Int {
+	if k < 0 || k > n {
+		return big.NewInt(0)
+	}
+	return new(big.Int).Binomial(n, k)
+}
+
+func fallingBig(n, k int64) *big.Int {
+	switch {
+	case k == 0:
+		return big.NewInt(1)
+	case k > n:
+		return big.NewInt(0)
+	}
+	return new(big.Int).MulRange(n-k+1, n)
+}
+
+// powBig is x^k for a float64 x, exactly (x is a dyadic rational).
+func powBig(x float64, k int64) *big.Float {
+	r := fl(1)
+	for i := int64(0); i < k; i++ {
+		r = mul(r, fl(x))
+	}
+	return r
+}
+
+func refChoose(x []float64) *big.Float { return bf(chooseBig(int64(x[0]), int64(x[1]))) }
+
+func refFalling(x []float64) *big.Float { return bf(fallingBig(int64(x[0]), int64(x[1]))) }
+
+func refFactorial(x []float64) *big.Float { return bf(factorialBig(int64(x[0]))) }
+
+func refMultinomial(x []float64) *big.Float {
+	var sum int64
+	den := big.NewInt(1)
+	for _, v := range x {
+		sum += int64(v)
+		den.Mul(den, factorialBig(int64(v)))
+	}
+	return bf(new(big.Int).Quo(factorialBig(sum), den))
+}
+
+func refCatalan(x []float64) *big.Float {
+	n := int64(x[0])
+	return bf(new(big.Int).Quo(chooseBig(2*n, n), big.NewInt(n+1)))
+}
+
+// refPowFact is a^k/k! for (a, k).
+func refPowFact(x []float64) *big.Float {
+	return quo(powBig(x[0], int64(x[1])), bf(factorialBig(int64(x[1]))))
+}
+
+// refPoisson is λ^k e^(−λ)/k! for (k, λ); e^(−λ) comes from math.Exp,
+// whose error (under 1 ulp) is far inside the tests' tolerance.
+func refPoisson(x []float64) *big.Float {
+	k, lambda := int64(x[0]), x[1]
+	return mul(quo(powBig(lambda, k), bf(factorialBig(k))), fl(math.Exp(-lambda)))
+}
+
+// refBinomialPMF is C(n,k) p^k (1−p)^(n−k) for (k, n, p), with 1−p exact.
+func refBinomialPMF(x []float64) *big.Float {
+	k, n, p := int64(x[0]), int64(x[1]), x[2]
+	q := new(big.Float).SetPrec(refPrec).Sub(fl(1), fl(p))
+	r := mul(bf(chooseBig(n, k)), powBig(p, k))
+	for i := int64(0); i < n-k; i++ {
+		r = mul(r, q)
+	}
+	return r
+}
+
+// refHypergeometric is C(K,k) C(N−K,n−k) / C(N,n) for (k, N, K, n).
+func refHypergeometric(x []float64) *big.Float {
+	k, total, bad, n := int64(x[0]), int64(x[1]), int64(x[2]), int64(x[3])
+	num := new(big.Int).Mul(chooseBig(bad, k), chooseBig(total-bad, n-k))
+	return quo(bf(num), bf(chooseBig(total, n)))
+}
+
+// refGammaRatio is Γ(a)/Γ(b) = (a−1)!/(b−1)! for positive integers.
+func refGammaRatio(x []float64) *big.Float {
+	return quo(bf(factorialBig(int64(x[0])-1)), bf(factorialBig(int64(x[1])-1)))
+}
+
+// refBeta is (a−1)!(b−1)!/(a+b−1)! for positive integers.
+func refBeta(x []float64) *big.Float {
+	a, b := int64(x[0]), int64(x[1])
+	num := new(big.Int).Mul(factorialBig(a-1), factorialBig(b-1))
+	return quo(bf(num), bf(factorialBig(a+b-1)))
+}
