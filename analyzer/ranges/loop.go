@@ -21,7 +21,7 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	}
 	w.loops++
 	defer func() { w.loops-- }()
-	if w.loops > 4 || w.f.work > 20*w.f.size+10000 {
+	if w.loops > 4 || w.f.overBudget() {
 		head := entry
 		for _, obj := range w.f.assignedIn(n) {
 			head = w.f.put(head, obj, Top())
@@ -40,7 +40,7 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	for i := 1; ; i++ {
 		next, _ = trip(head)
 		h := head.join(next)
-		if i >= visits {
+		if i >= visits || w.f.overBudget() {
 			h = head.widen(h)
 		}
 		if h.equal(head) {
@@ -54,6 +54,12 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	_, exit := trip(entry.join(next))
 	return exit
 }
+
+// overBudget reports whether the walk has spent its allowance of
+// statement visits, a small multiple of the function size; past it,
+// loops widen at once so that no MaxVisits setting can make the
+// analysis of one function super-linear.
+func (f *Func) overBudget() bool { return f.work > 20*f.size+10000 }
 
 func (w *walker) forStmt(s state, st *ast.ForStmt, label string) state {
 	s = w.stmt(s, st.Init)
