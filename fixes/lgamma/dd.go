@@ -89,28 +89,20 @@ func (a dd) divF(b float64) dd {
 // float rounds to the nearest float64; the pair is normalized, so hi is it.
 func (a dd) float() float64 { return a.hi + a.lo }
 
-// ddExpm1Small returns e^r − 1 for |r| ≤ 2^-10 by its Taylor series;
-// 10 terms leave a truncation error below 2^-110 relative.
-func ddExpm1Small(r dd) dd {
-	s := dd{1, 0}
-	for n := 10.0; n >= 2; n-- {
-		s = s.mul(r).divF(n).addF(1)
-	}
-	return s.mul(r)
-}
-
-// ddExp returns e^a for a finite, |a.hi| < 709. The argument is reduced
-// as a = k·ln2 + r, then r/2^9 goes to the series and the result is
-// squared nine times in the e^x−1 form (2t + t²) so no bits are lost to
-// the leading 1 (the reduction of Hida, Li and Bailey's exp).
+// ddExp returns e^a for finite a with |a.hi| < 709, to about 1e-20
+// relative. Table-driven reduction (Tang, "Table-driven implementation
+// of the exponential function in IEEE floating-point arithmetic", ACM
+// TOMS 15, 1989): a = (64q + j)·ln2/64 + r with |r| ≤ ln2/128, so
+// e^a = 2^q · 2^(j/64) · e^r, where 2^(j/64) comes from a generated
+// double-double table and e^r − 1 = r + p needs only r in double-double;
+// p = r²/2 + … is below 1.5e-5 and float64 suffices for it.
 func ddExp(a dd) dd {
-	k := math.Round(a.hi / ln2.hi)
-	r := a.sub(twoProd(k, ln2.hi)).sub(twoProd(k, ln2.lo))
-	t := ddExpm1Small(r.scale(-9))
-	for i := 0; i < 9; i++ {
-		t = t.mulF(2).add(t.mul(t))
-	}
-	return t.addF(1).scale(int(k))
+	k := math.Round(a.hi * (64 / ln2.hi))
+	r := a.sub(twoProd(k, ln2.hi/64)).sub(twoProd(k, ln2.lo/64))
+	x := r.hi
+	p := x * x * (1.0/2 + x*(1.0/6+x*(1.0/24+x*(1.0/120+x*(1.0/720+x*(1.0/5040+x/40320))))))
+	t := exp2Table[int(k)&63]
+	return t.add(t.mul(r.addF(p))).scale(int(k) >> 6)
 }
 
 // expOf rounds e^a to float64; it handles the ranges ddExp does not.
@@ -132,16 +124,25 @@ func expOf(a dd) float64 {
 	return ddExp(a).float()
 }
 
-// ddLog returns ln a for a positive finite dd. After the binary exponent
-// is split off, one Newton step y + a·e^(−y) − 1 from y = math.Log
-// doubles the number of correct bits (the method of Hida, Li and Bailey).
+// ddLog returns ln a for a positive finite dd, to about 1e-26 relative.
+// Table-driven reduction (Tang, "Table-driven implementation of the
+// logarithm function in IEEE floating-point arithmetic", ACM TOMS 16,
+// 1990): a = 2^e·m with m in [1, 2), m = c·(1+u) with c = 1 + i/512 and
+// |u| ≤ 1/1024, ln(1+u) = 2·atanh(s) = 2s + 2s(s²/3 + s⁴/5 + …) with
+// s = u/(2+u). Only 2s needs double-double; the rest is below 1e-7 of it.
 func ddLog(a dd) dd {
 	_, e := math.Frexp(a.hi)
+	e--
 	m := a.scale(-e)
-	y := dd{math.Log(m.hi), 0}
-	y = y.add(m.mul(ddExp(y.neg())).addF(-1))
+	i := int(math.Round((m.hi - 1) * 512))
+	c := 1 + float64(i)/512
+	u := m.addF(-c).divF(c)
+	s := u.div(u.addF(2))
+	x2 := s.hi * s.hi
+	w := x2 * (1.0/3 + x2*(1.0/5+x2*(1.0/7+x2/9)))
+	r := logTable[i].add(s.mulF(2).addF(2 * s.hi * w))
 	if e == 0 {
-		return y
+		return r
 	}
-	return y.add(twoProd(float64(e), ln2.hi)).add(dd{float64(e) * ln2.lo, 0})
+	return r.add(twoProd(float64(e), ln2.hi)).addF(float64(e) * ln2.lo)
 }

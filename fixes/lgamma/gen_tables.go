@@ -2,7 +2,8 @@
 
 // This program writes tables.go: ln n! as double-double pairs for
 // n < 1024, n! as float64 for n ≤ 170, the Stirling remainder δ(n) for
-// n < 16, and the double-double constants ln 2 and ½ln 2π.
+// n < 16, the double-double constants ln 2 and ½ln 2π, and the reduction
+// tables of ddLog (ln(1 + i/512)) and ddExp (2^(j/64)).
 //
 // Every value is computed with math/big at 320 bits and rounded to
 // nearest once. Logarithms use ln x = e·ln2 + 2·atanh((m−1)/(m+1)) with
@@ -135,6 +136,31 @@ func main() {
 		d := new(big.Float).SetPrec(prec).Sub(lnFact[n], s)
 		f, _ := d.Float64()
 		fmt.Fprintf(&b, "%s,\n", lit(f))
+	}
+	fmt.Fprintf(&b, "}\n")
+
+	// logTable[i] = ln(1 + i/logTableSteps) for the reduction in ddLog.
+	const logSteps = 512
+	fmt.Fprintf(&b, "\n// logTable[i] is ln(1 + i/%d) as a double-double.\nvar logTable = [%d]dd{\n", logSteps, logSteps+1)
+	for i := int64(0); i <= logSteps; i++ {
+		c := new(big.Float).SetPrec(prec).Quo(newF(logSteps+i), newF(logSteps))
+		h, l := split(lnBig(c))
+		fmt.Fprintf(&b, "{%s, %s},\n", lit(h), lit(l))
+	}
+	fmt.Fprintf(&b, "}\n")
+
+	// exp2Table[j] = 2^(j/64): 2^(1/64) by six square roots, then powers.
+	const expSteps = 64
+	root := newF(2)
+	for i := 0; i < 6; i++ {
+		root.Sqrt(root)
+	}
+	fmt.Fprintf(&b, "\n// exp2Table[j] is 2^(j/%d) as a double-double.\nvar exp2Table = [%d]dd{\n", expSteps, expSteps)
+	pow := newF(1)
+	for j := 0; j < expSteps; j++ {
+		h, l := split(pow)
+		fmt.Fprintf(&b, "{%s, %s},\n", lit(h), lit(l))
+		pow.Mul(pow, root)
 	}
 	fmt.Fprintf(&b, "}\n")
 
