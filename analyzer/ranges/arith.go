@@ -99,19 +99,22 @@ func shiftLeft(x, y Interval, inf bool) (Interval, bool) {
 	return cornersOK(x, c, func(a, b int64) (int64, bool) { return mulB(a, int64(1)<<b, inf) })
 }
 
-// shiftRight is floor division by 2^c; counts of 63 or more give 0 or −1.
+// shiftRight is floor division by 2^c; counts of 63 or more give 0 or
+// −1. An infinite end stays infinite: for 64-bit unsigned values +inf
+// stands for more than MaxInt64.
 func shiftRight(x, y Interval) Interval {
 	c := y.Meet(Interval{0, posInf})
 	if c.IsEmpty() {
 		return Empty()
 	}
 	c = Interval{min(c.Lo, 63), min(c.Hi, 63)}
-	r, _ := cornersOK(x, c, func(a, b int64) (int64, bool) {
-		if isInf(a) {
-			return a, true
-		}
-		return a >> b, true
-	})
+	r, _ := cornersOK(x, c, func(a, b int64) (int64, bool) { return a >> b, true })
+	if x.Lo == negInf {
+		r.Lo = negInf
+	}
+	if x.Hi == posInf {
+		r.Hi = posInf
+	}
 	return r
 }
 
