@@ -47,7 +47,7 @@ type result struct {
 // analyze loads the package containing path with the open buffers as an
 // overlay and runs the analyzers on it. A panic inside loading or analysis
 // is turned into an error, so one bad input cannot stop the server.
-func analyze(ctx context.Context, opts *Options, docs map[string]*document, path string, enc encoding) (res *result, err error) {
+func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[string]*document, path string, enc encoding) (res *result, err error) {
 	defer func() {
 		if p := recover(); p != nil {
 			res, err = nil, fmt.Errorf("panic during analysis of %s: %v\n%s", path, p, debug.Stack())
@@ -64,18 +64,9 @@ func analyze(ctx context.Context, opts *Options, docs map[string]*document, path
 		Overlay: overlay,
 		Tests:   strings.HasSuffix(path, "_test.go"),
 	}
-	pkgs, err := packages.Load(cfg, "file="+path)
+	roots, err := load(cfg, path, cache)
 	if err != nil {
 		return nil, err
-	}
-	var roots []*packages.Package
-	for _, p := range pkgs {
-		if slices.Contains(p.CompiledGoFiles, path) {
-			roots = append(roots, p)
-		}
-	}
-	if len(roots) == 0 {
-		return nil, loadProblem(path, pkgs)
 	}
 	// Sequential keeps every action on this goroutine, where the deferred
 	// recover above can catch an analyzer's panic; in parallel mode it
@@ -133,6 +124,40 @@ func rootFailure(graph *checker.Graph, roots []*packages.Package) error {
 		}
 	}
 	return first
+}
+
+// load returns the packages holding path: the cached package re-checked
+// when cache can serve, else a fresh load with go/packages, which cache
+// then keeps. A _test.go file belongs to several package variants and is
+// always loaded afresh.
+func load(cfg *packages.Config, path string, cache *loadCache) ([]*packages.Package, error) {
+	if !cfg.Tests {
+		if p := cache.lookup(path, cfg.Overlay); p != nil {
+			if np, err := recheck(p, cfg.Overlay); err == nil {
+				cache.mu.Lock()
+				cache.reused++
+				cache.mu.Unlock()
+				return []*packages.Package{np}, nil
+			}
+		}
+	}
+	pkgs, err := packages.Load(cfg, "file="+path)
+	if err != nil {
+		return nil, err
+	}
+	var roots []*packages.Package
+	for _, p := range pkgs {
+		if slices.Contains(p.CompiledGoFiles, path) {
+			roots = append(roots, p)
+		}
+	}
+	if len(roots) == 0 {
+		return nil, loadProblem(path, pkgs)
+	}
+	if !cfg.Tests && len(roots) == 1 {
+		cache.add(roots[0], cfg.Overlay)
+	}
+	return roots, nil
 }
 
 // loadProblem explains why no package holding path was loaded, using the

@@ -2,6 +2,7 @@ package lsp
 
 import (
 	"context"
+	"fmt"
 	"path/filepath"
 	"testing"
 )
@@ -22,8 +23,11 @@ func Report(n float64) string {
 `
 
 // BenchmarkAnalyze measures one analysis of a buffer, the latency a user
-// waits after the debounce: go list, parsing and type-checking the package
-// and its dependencies, and running the analyzers.
+// waits after the debounce. "cold" loads the package and its dependencies
+// with go/packages; "warm" is the next analysis after an edit of the same
+// package, served by re-checking it against the dependencies kept in
+// memory. Both run in one invocation, so their ratio is measured under the
+// same machine load:
 //
 //	go test -run '^$' -bench Analyze -benchtime 5x ./internal/lsp
 func BenchmarkAnalyze(b *testing.B) {
@@ -34,19 +38,38 @@ func BenchmarkAnalyze(b *testing.B) {
 		{"math", deskSource},
 		{"fmt", staffingSource},
 	} {
-		b.Run(bc.name, func(b *testing.B) {
-			dir := b.TempDir()
-			writeFiles(b, dir, map[string]string{"go.mod": "module example.com/desk\n\ngo 1.21\n", "desk.go": bc.src})
-			path := filepath.Join(dir, "desk.go")
-			docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: 1, text: []byte(bc.src)}}
-			opts := withDefaults(testOptions())
-			b.ResetTimer()
-			for i := 0; i < b.N; i++ {
-				res, err := analyze(context.Background(), &opts, docs, path, encUTF16)
-				if err != nil || len(res.findings[path]) != 1 {
-					b.Fatalf("analyze: %v, %+v", err, res)
-				}
+		for _, warm := range []bool{false, true} {
+			name := bc.name + "/cold"
+			if warm {
+				name = bc.name + "/warm"
 			}
-		})
+			b.Run(name, func(b *testing.B) {
+				dir := b.TempDir()
+				writeFiles(b, dir, map[string]string{"go.mod": "module example.com/desk\n\ngo 1.21\n", "desk.go": bc.src})
+				path := filepath.Join(dir, "desk.go")
+				opts := withDefaults(testOptions())
+				cache := new(loadCache)
+				run := func(i int) {
+					// Each run sees a different buffer, as after a keystroke.
+					text := fmt.Sprintf("%s// edit %d\n", bc.src, i)
+					docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: int32(i), text: []byte(text)}}
+					if !warm {
+						cache = new(loadCache)
+					}
+					res, err := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
+					if err != nil || len(res.findings[path]) != 1 {
+						b.Fatalf("analyze: %v, %+v", err, res)
+					}
+				}
+				run(-1)
+				b.ResetTimer()
+				for i := 0; i < b.N; i++ {
+					run(i)
+				}
+				if warm && cache.reused != b.N {
+					b.Fatalf("warm runs reused the cache %d times of %d", cache.reused, b.N)
+				}
+			})
+		}
 	}
 }

@@ -50,6 +50,7 @@ type server struct {
 	out  *frameWriter
 	log  *log.Logger
 	docs *documents
+	pkgs loadCache // packages kept between analyses
 
 	mu         sync.Mutex // guards the fields below
 	state      int
@@ -357,6 +358,7 @@ func (s *server) didSave(p didSaveParams) error {
 	if p.Text != nil {
 		s.docs.setText(path, *p.Text)
 	}
+	s.pkgs.invalidate() // what is on disk may differ from what was loaded
 	s.schedule(path, 0)
 	return nil
 }
@@ -432,7 +434,7 @@ func (s *server) refresh(path string) {
 		return // closed while waiting
 	}
 	start := time.Now()
-	res, err := analyze(s.ctx, &s.opts, docs, path, s.encoding())
+	res, err := analyze(s.ctx, &s.opts, &s.pkgs, docs, path, s.encoding())
 	if err != nil {
 		s.reportProblem(path, err)
 		res = &result{versions: map[string]int32{path: d.version}}

@@ -1,0 +1,203 @@
+package lsp
+
+import (
+	"crypto/sha256"
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/parser"
+	"go/scanner"
+	"go/types"
+	"os"
+	"slices"
+	"sort"
+	"strconv"
+	"sync"
+
+	"golang.org/x/tools/go/packages"
+)
+
+// loadCache keeps the last few packages loaded with their dependencies, so
+// that the next analysis of the same package, after edits to that package's
+// files only, re-parses and re-type-checks the package alone against the
+// dependencies already in memory instead of loading the whole import graph
+// from source again. This is how the gopls design keeps per-keystroke work
+// proportional to the edited package (common practice in Go editors).
+//
+// An entry is valid while the open buffers outside its package are
+// unchanged and no file was saved since it was loaded; anything else
+// (a new import, a package clause edit, cgo) falls back to a full load.
+type loadCache struct {
+	mu      sync.Mutex
+	entries []*loadEntry // most recent first
+	reused  int          // analyses served from an entry, for tests
+}
+
+type loadEntry struct {
+	pkg *packages.Package
+	key [sha256.Size]byte
+}
+
+// maxCached bounds the memory held: each entry keeps a dependency graph.
+const maxCached = 3
+
+// errStale reports that a cached package cannot serve the current buffers.
+var errStale = errors.New("cached package is stale")
+
+// invalidate drops every entry; called when files change on disk.
+func (c *loadCache) invalidate() {
+	c.mu.Lock()
+	c.entries = nil
+	c.mu.Unlock()
+}
+
+// lookup returns the cached package holding path if it is still valid for
+// overlay, or nil.
+func (c *loadCache) lookup(path string, overlay map[string][]byte) *packages.Package {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	for _, e := range c.entries {
+		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) {
+			return e.pkg
+		}
+	}
+	return nil
+}
+
+// add records a freshly loaded package, unless it uses cgo, whose compiled
+// files are generated and cannot be re-parsed from the overlay.
+func (c *loadCache) add(pkg *packages.Package, overlay map[string][]byte) {
+	if !slices.Equal(pkg.GoFiles, pkg.CompiledGoFiles) || pkg.Types == nil {
+		return
+	}
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	c.entries = slices.DeleteFunc(c.entries, func(e *loadEntry) bool { return e.pkg.ID == pkg.ID })
+	c.entries = append([]*loadEntry{{pkg: pkg, key: outsideKey(pkg, overlay)}}, c.entries...)
+	if len(c.entries) > maxCached {
+		c.entries = c.entries[:maxCached]
+	}
+}
+
+// outsideKey fingerprints the overlay as it matters to pkg's dependencies:
+// the set of open files, and the contents of those outside pkg.
+func outsideKey(pkg *packages.Package, overlay map[string][]byte) [sha256.Size]byte {
+	paths := make([]string, 0, len(overlay))
+	for p := range overlay {
+		paths = append(paths, p)
+	}
+	sort.Strings(paths)
+	h := sha256.New()
+	for _, p := range paths {
+		fmt.Fprintf(h, "%s\x00", p)
+		if !slices.Contains(pkg.CompiledGoFiles, p) {
+			fmt.Fprintf(h, "%d\x00", len(overlay[p]))
+			h.Write(overlay[p])
+		}
+	}
+	var key [sha256.Size]byte
+	h.Sum(key[:0])
+	return key
+}
+
+// recheck returns a copy of the cached package pkg re-parsed from the
+// overlay (or disk) and re-type-checked against pkg's loaded imports, with
+// the same types.Config settings go/packages uses.
+func recheck(pkg *packages.Package, overlay map[string][]byte) (*packages.Package, error) {
+	var errs []packages.Error
+	files := make([]*ast.File, 0, len(pkg.CompiledGoFiles))
+	for _, name := range pkg.CompiledGoFiles {
+		src, ok := overlay[name]
+		if !ok {
+			var err error
+			if src, err = os.ReadFile(name); err != nil {
+				return nil, errStale
+			}
+		}
+		f, err := parser.ParseFile(pkg.Fset, name, src, parser.AllErrors|parser.ParseComments)
+		if f == nil {
+			return nil, errStale
+		}
+		errs = append(errs, parseErrors(err)...)
+		if !importsKnown(pkg, f) || f.Name.Name != pkg.Name {
+			return nil, errStale
+		}
+		files = append(files, f)
+	}
+	info := &types.Info{
+		Types:        make(map[ast.Expr]types.TypeAndValue),
+		Defs:         make(map[*ast.Ident]types.Object),
+		Uses:         make(map[*ast.Ident]types.Object),
+		Implicits:    make(map[ast.Node]types.Object),
+		Instances:    make(map[*ast.Ident]types.Instance),
+		Scopes:       make(map[ast.Node]*types.Scope),
+		Selections:   make(map[*ast.SelectorExpr]*types.Selection),
+		FileVersions: make(map[*ast.File]string),
+	}
+	var typeErrors []types.Error
+	tc := &types.Config{
+		Importer: importerFunc(func(path string) (*types.Package, error) {
+			if path == "unsafe" {
+				return types.Unsafe, nil
+			}
+			return pkg.Imports[path].Types, nil // importsKnown checked it
+		}),
+		Error: func(err error) {
+			if te, ok := err.(types.Error); ok {
+				typeErrors = append(typeErrors, te)
+				errs = append(errs, packages.Error{Pos: te.Fset.Position(te.Pos).String(), Msg: te.Msg, Kind: packages.TypeError})
+			}
+		},
+		Sizes: pkg.TypesSizes,
+	}
+	if pkg.Module != nil && pkg.Module.GoVersion != "" {
+		tc.GoVersion = "go" + pkg.Module.GoVersion
+	}
+	tpkg := types.NewPackage(pkg.PkgPath, pkg.Name)
+	if err := types.NewChecker(tc, pkg.Fset, tpkg, info).Files(files); err != nil && len(errs) == 0 {
+		errs = append(errs, packages.Error{Msg: err.Error(), Kind: packages.TypeError})
+	}
+	np := *pkg
+	np.Syntax, np.Types, np.TypesInfo = files, tpkg, info
+	np.TypeErrors, np.Errors = typeErrors, errs
+	np.IllTyped = len(errs) > 0
+	for _, imp := range pkg.Imports {
+		np.IllTyped = np.IllTyped || imp.IllTyped
+	}
+	return &np, nil
+}
+
+// importsKnown reports whether every import of f is among pkg's loaded
+// imports; a new import needs go list, hence a full load.
+func importsKnown(pkg *packages.Package, f *ast.File) bool {
+	for _, spec := range f.Imports {
+		path, err := strconv.Unquote(spec.Path.Value)
+		if err != nil || path == "C" {
+			return false
+		}
+		if imp := pkg.Imports[path]; path != "unsafe" && (imp == nil || imp.Types == nil) {
+			return false
+		}
+	}
+	return true
+}
+
+// parseErrors converts a parser error into package errors.
+func parseErrors(err error) []packages.Error {
+	if err == nil {
+		return nil
+	}
+	var list scanner.ErrorList
+	if !errors.As(err, &list) {
+		return []packages.Error{{Msg: err.Error(), Kind: packages.ParseError}}
+	}
+	out := make([]packages.Error, 0, len(list))
+	for _, e := range list {
+		out = append(out, packages.Error{Pos: e.Pos.String(), Msg: e.Msg, Kind: packages.ParseError})
+	}
+	return out
+}
+
+type importerFunc func(path string) (*types.Package, error)
+
+func (f importerFunc) Import(path string) (*types.Package, error) { return f(path) }
