@@ -61,11 +61,16 @@ func corpus(patterns []string) error {
 	if err != nil {
 		return err
 	}
-	g, err := checker.Analyze([]*analysis.Analyzer{a}, pkgs, nil)
+	var g *checker.Graph
+	recovered, err := countRecovered(func() error {
+		var err error
+		g, err = checker.Analyze([]*analysis.Analyzer{a}, pkgs, nil)
+		return err
+	})
 	if err != nil {
 		return err
 	}
-	var crashes, errs, actions int
+	crashes, errs, actions := recovered, 0, 0
 	seen := map[string]bool{}
 	var found []finding
 	for act := range g.All() {
@@ -90,8 +95,8 @@ func corpus(patterns []string) error {
 		}
 	}
 	slices.SortFunc(found, func(x, y finding) int { return strings.Compare(x.Pos, y.Pos) })
-	fmt.Printf("patterns %v (tests=%v): %d root packages, %d analyzer actions (dependencies included), %d crashes, %d analyzer errors, %d findings\n",
-		patterns, *testsFlag, len(pkgs), actions, crashes, errs, len(found))
+	fmt.Printf("patterns %v (tests=%v): %d root packages, %d analyzer actions (dependencies included), %d crashes (%d of them recovered inside the analyzer), %d analyzer errors, %d findings\n",
+		patterns, *testsFlag, len(pkgs), actions, crashes, recovered, errs, len(found))
 	for _, f := range found {
 		if *jsonFlag {
 			b, _ := json.Marshal(f)
@@ -117,4 +122,33 @@ func shortPos(pos string) string {
 		}
 	}
 	return pos
+}
+
+// countRecovered runs f with the analyzer's debug flag on, if it has one,
+// and standard error sent to a file, and counts the functions the analyzer
+// reports having skipped after an internal error: those are panics it
+// recovered from, and count as crashes here. The log is copied to the
+// real standard error.
+func countRecovered(f func() error) (int, error) {
+	if fl := target.Flags.Lookup("debug"); fl != nil {
+		if err := fl.Value.Set("true"); err != nil {
+			return 0, err
+		}
+	}
+	log, err := os.CreateTemp("", "overfact-corpus-log")
+	if err != nil {
+		return 0, err
+	}
+	defer os.Remove(log.Name())
+	defer log.Close()
+	stderr := os.Stderr
+	os.Stderr = log
+	err = f()
+	os.Stderr = stderr
+	text, rerr := os.ReadFile(log.Name())
+	if rerr != nil {
+		return 0, rerr
+	}
+	os.Stderr.Write(text)
+	return strings.Count(string(text), "internal error"), err
 }

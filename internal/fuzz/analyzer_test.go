@@ -1,4 +1,6 @@
 package fuzz
 
+import "github.com/overfact/overfact/analyzer"
+
 // underTest is the analyzer fuzzed.
-var underTest = expand
+var underTest = analyzer.Analyzer

@@ -109,15 +109,41 @@ func apply(src map[string][]byte, es []edit) map[string][]byte {
 	return out
 }
 
-// merge adds the edits of next to those already chosen, unless some of
-// them overlap; it reports whether next was taken. This is how all fixes
-// of a run are applied together, the way -fix does.
+// merge adds the edits of next to those already chosen, unless one of
+// them clashes with a chosen edit; it reports whether next was taken.
+// Between fixes the rule is stricter than within one: two different
+// insertions at one point clash, since nothing orders them. Identical
+// edits coalesce. This is how -fix combines the fixes of a run.
 func merge(chosen, next []edit) ([]edit, bool) {
-	all := append(slices.Clone(chosen), next...)
-	sortEdits(all)
-	all = slices.Compact(all)
-	if firstOverlap(all) >= 0 {
-		return chosen, false
+	var fresh []edit
+	for _, e := range next {
+		dup := false
+		for _, c := range chosen {
+			if c == e {
+				dup = true
+				break
+			}
+			if clash(c, e) {
+				return chosen, false
+			}
+		}
+		if !dup {
+			fresh = append(fresh, e)
+		}
 	}
+	all := append(slices.Clone(chosen), fresh...)
+	sortEdits(all)
 	return all, true
+}
+
+// clash reports whether edits of two different fixes touch the same bytes
+// or insert at the same point.
+func clash(a, b edit) bool {
+	if a.file != b.file {
+		return false
+	}
+	if a.start == a.end && b.start == b.end {
+		return a.start == b.start
+	}
+	return a.start < b.end && b.start < a.end
 }

@@ -127,3 +127,18 @@ func BenchmarkExec(b *testing.B) {
 		checkPackage(t, underTest, "example.com/gen", map[string][]byte{"gen.go": []byte(Generate("gen", seed))}, true)
 	}
 }
+
+func TestMerge(t *testing.T) {
+	// The rule -fix applies between fixes (internal/driver): identical
+	// edits coalesce; distinct insertions at one point clash.
+	base := []edit{{"a", 10, 10, "(\n"}, {"a", 20, 20, "\n\t\"fmt\"\n)"}}
+	if got, ok := merge(base, []edit{{"a", 10, 10, "(\n"}, {"a", 30, 34, "x"}}); !ok || len(got) != 3 {
+		t.Errorf("identical insertion plus a disjoint edit: ok=%v, %d edits; want true, 3", ok, len(got))
+	}
+	if _, ok := merge(base, []edit{{"a", 20, 20, "\n\t\"math\"\n)"}}); ok {
+		t.Errorf("distinct insertions at one point merged")
+	}
+	if _, ok := merge(base, []edit{{"a", 15, 25, ""}}); ok {
+		t.Errorf("a deletion spanning an insertion merged")
+	}
+}

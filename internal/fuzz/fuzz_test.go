@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/parser"
 	"go/token"
+	"io"
 	"io/fs"
 	"os"
 	"path/filepath"
@@ -80,9 +81,13 @@ func checkPackage(t *testing.T, a *analysis.Analyzer, path string, src map[strin
 		}
 		return
 	}
+	mark := analyzerLog.mark()
 	diags, err := Run(a, pkg)
 	if err != nil {
 		t.Fatalf("analyzer error on valid code: %v\n%s", err, dump(src))
+	}
+	if msg := analyzerLog.since(mark); strings.Contains(msg, "internal error") {
+		t.Fatalf("analyzer recovered from a panic: %s\n%s", msg, dump(src))
 	}
 	var all []edit
 	for _, d := range diags {
@@ -116,4 +121,36 @@ func dump(src map[string][]byte) string {
 		fmt.Fprintf(&b, "-- %s --\n%s", name, text)
 	}
 	return b.String()
+}
+
+// analyzerLog catches what the analyzer writes to standard error. Its
+// debug flag makes it log each function it skipped after recovering from a
+// panic; the fuzz target counts those as crashes.
+var analyzerLog = newStderrLog()
+
+type stderrLog struct{ f *os.File }
+
+func newStderrLog() *stderrLog {
+	if fl := underTest.Flags.Lookup("debug"); fl != nil {
+		fl.Value.Set("true")
+	}
+	f, err := os.CreateTemp("", "overfact-fuzz-stderr")
+	if err != nil {
+		panic(err)
+	}
+	os.Remove(f.Name()) // kept open; gone when the process ends
+	os.Stderr = f
+	return &stderrLog{f}
+}
+
+func (l *stderrLog) mark() int64 {
+	off, _ := l.f.Seek(0, io.SeekCurrent)
+	return off
+}
+
+func (l *stderrLog) since(off int64) string {
+	end := l.mark()
+	b := make([]byte, end-off)
+	l.f.ReadAt(b, off)
+	return string(b)
 }
