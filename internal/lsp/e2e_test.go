@@ -11,10 +11,37 @@ import (
 	"time"
 )
 
-// TestNeovim runs the server under Neovim's built-in LSP client, a client
-// written outside this project: testdata/lsp/e2e.lua opens a Go file,
-// waits for the diagnostic, checks that Neovim placed it on the right byte
-// of a line with non-ASCII text before it, applies the preferred quick fix
+// shiftSource is a support-desk file with a binomial coefficient written as
+// a ratio of factorials, after non-ASCII text on the same line so that
+// Neovim's UTF-16 to byte conversion is exercised, and a math.Gamma call
+// whose finding has no fix.
+const shiftSource = `package desk
+
+import "math"
+
+// Agents estimates the staffing table entry for n callers.
+func Agents(n float64) float64 {
+	return math.Gamma(n + 1)
+}
+
+// Shifts counts the ways to pick k agents of n for a shift.
+func Shifts(n, k int) int {
+	/* é λ 𝛤 */ return fact(n) / (fact(k) * fact(n-k))
+}
+
+func fact(n int) int {
+	r := 1
+	for i := 2; i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+`
+
+// TestNeovim runs "overfact lsp" under Neovim's built-in LSP client, a
+// client written outside this project: testdata/lsp/e2e.lua opens a Go
+// file, waits for the diagnostics, checks that Neovim placed the binomial
+// finding on the right byte of its line, applies its preferred quick fix
 // and writes the buffer, which this test then reads.
 func TestNeovim(t *testing.T) {
 	if testing.Short() {
@@ -33,13 +60,13 @@ func TestNeovim(t *testing.T) {
 
 	tmp := t.TempDir()
 	bin := filepath.Join(tmp, "overfact")
-	build := exec.CommandContext(ctx, "go", "build", "-o", bin, "./testdata/lsp/server")
+	build := exec.CommandContext(ctx, "go", "build", "-o", bin, "./cmd/overfact")
 	build.Dir = root
 	if out, err := build.CombinedOutput(); err != nil {
 		t.Fatalf("go build: %v\n%s", err, out)
 	}
 
-	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	dir := writeModule(t, map[string]string{"desk.go": shiftSource})
 	file := filepath.Join(dir, "desk.go")
 	logPath := filepath.Join(tmp, "e2e.log")
 	script := filepath.Join(root, "testdata", "lsp", "e2e.lua")
@@ -50,7 +77,8 @@ func TestNeovim(t *testing.T) {
 	cmd.Env = append(os.Environ(),
 		"OVERFACT_E2E_CMD="+bin+" lsp",
 		"OVERFACT_E2E_FILE="+file,
-		"OVERFACT_E2E_AT=math.Gamma",
+		"OVERFACT_E2E_CODE=factorial-ratio",
+		"OVERFACT_E2E_AT=fact(n) / (fact(k)",
 		"OVERFACT_E2E_LOG="+logPath,
 		"OVERFACT_E2E_TIMEOUT=30000",
 		"GOCACHE="+gocache,
@@ -75,8 +103,16 @@ func TestNeovim(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if want := "/* é λ 𝛤 */ return gammaChecked(n + 1)"; !strings.Contains(string(fixed), want) {
-		t.Errorf("file after the fix lacks %q:\n%s", want, fixed)
+	// The rewrite the fix promises: the exact-integer binomial of the
+	// helper module, and its import.
+	for _, want := range []string{
+		"/* é λ 𝛤 */ return int(lgamma.MustChooseInt64(int64(n), int64(k)))",
+		`"github.com/overfact/overfact/fixes/lgamma"`,
+		"return math.Gamma(n + 1)",
+	} {
+		if !strings.Contains(string(fixed), want) {
+			t.Errorf("file after the fix lacks %q:\n%s", want, fixed)
+		}
 	}
 }
 

@@ -8,7 +8,8 @@
 -- with these environment variables:
 --   OVERFACT_E2E_CMD    the server command, words separated by spaces
 --   OVERFACT_E2E_FILE   the Go file to open
---   OVERFACT_E2E_AT     text the first diagnostic must start at
+--   OVERFACT_E2E_CODE   the code (category) of the diagnostic to fix
+--   OVERFACT_E2E_AT     text that diagnostic must start at
 --   OVERFACT_E2E_LOG    file receiving a trace of what the script saw
 --   OVERFACT_E2E_TIMEOUT milliseconds to wait for each step (default 30000)
 -- On success the fixed buffer is written back to OVERFACT_E2E_FILE and
@@ -29,6 +30,7 @@ end
 local function run()
   local cmd = vim.split(os.getenv("OVERFACT_E2E_CMD"), " ", { trimempty = true })
   local file = os.getenv("OVERFACT_E2E_FILE")
+  local code = os.getenv("OVERFACT_E2E_CODE")
   local at = os.getenv("OVERFACT_E2E_AT")
   local timeout = tonumber(os.getenv("OVERFACT_E2E_TIMEOUT") or "30000")
   log("nvim", tostring(vim.version().major) .. "." .. vim.version().minor .. "." .. vim.version().patch)
@@ -60,8 +62,16 @@ local function run()
   local client = vim.lsp.get_client_by_id(client_id)
   log("offset encoding", client.offset_encoding)
 
-  local d = vim.diagnostic.get(bufnr)[1]
-  log("diagnostic", d.lnum, d.col, d.end_lnum, d.end_col, d.source, d.message)
+  local d
+  for _, x in ipairs(vim.diagnostic.get(bufnr)) do
+    log("diagnostic", x.lnum, x.col, x.end_lnum, x.end_col, x.severity, x.source, x.code, x.message)
+    if x.code == code and not d then
+      d = x
+    end
+  end
+  if not d then
+    return fail("no diagnostic with code " .. code)
+  end
   -- Neovim converted the server's columns into byte columns; the finding
   -- must start exactly at the expected text even with non-ASCII runes
   -- before it on the line.
