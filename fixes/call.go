@@ -71,6 +71,9 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 	if b.m.Result == nil {
 		return fmt.Errorf("match has no result type")
 	}
+	if err := b.covered(); err != nil {
+		return err
+	}
 	text, err := b.call(name, args, b.m.Result)
 	if err != nil {
 		return err

@@ -39,6 +39,9 @@ func classOf(t types.Type) class {
 // operand where the helper takes an integer (the fractional part would be
 // dropped) and anything that is not a number.
 func (b *builder) arg(e ast.Expr, want types.Type) (string, error) {
+	if classOf(want) != classFloat {
+		e = b.floatOfInt(e)
+	}
 	text := b.copyText(e)
 	tv, ok := b.pass.TypesInfo.Types[e]
 	if !ok {
@@ -61,6 +64,27 @@ func (b *builder) arg(e ast.Expr, want types.Type) (string, error) {
 		return "", fmt.Errorf("%s is a float where an integer is needed", text)
 	}
 	return want.String() + "(" + text + ")", nil
+}
+
+// floatOfInt returns x when e is a conversion float64(x) (or float32(x))
+// of an integer x, and e otherwise: math.Pow(x, float64(k)) takes its
+// exponent as a float, yet k itself is what the helper's integer
+// parameter needs. Every integer a factorial can take converts to float64
+// exactly (below 2^53), so nothing is lost.
+func (b *builder) floatOfInt(e ast.Expr) ast.Expr {
+	call, ok := ast.Unparen(e).(*ast.CallExpr)
+	if !ok || len(call.Args) != 1 {
+		return e
+	}
+	tv, ok := b.pass.TypesInfo.Types[call.Fun]
+	if !ok || !tv.IsType() || classOf(tv.Type) != classFloat {
+		return e
+	}
+	inner := call.Args[0]
+	if c := classOf(b.pass.TypesInfo.TypeOf(inner)); c != classSigned && c != classUnsigned {
+		return e
+	}
+	return inner
 }
 
 func isUntyped(t types.Type) bool {

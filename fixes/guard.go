@@ -40,6 +40,10 @@ func buildGuard(b *builder) error {
 	if _, obj := b.scopeAt(body.Lbrace+1).LookupParent(m.Param.Name(), body.Lbrace+1); obj != m.Param {
 		return fmt.Errorf("%s is not visible where the function starts", m.Param.Name())
 	}
+	if b.assigned(m.Param, body) {
+		// The guard tests the value the function was called with.
+		return fmt.Errorf("%s is assigned in the function, so its first value does not bound the factorial", m.Param.Name())
+	}
 	verb := "%d"
 	if classOf(m.Param.Type()) == classFloat {
 		verb = "%v"
@@ -84,6 +88,32 @@ func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
 		return l.FirstBad
 	}
 	return 0
+}
+
+// assigned reports whether obj is assigned, incremented or has its
+// address taken anywhere in body.
+func (b *builder) assigned(obj types.Object, body *ast.BlockStmt) bool {
+	is := func(e ast.Expr) bool {
+		id, ok := ast.Unparen(e).(*ast.Ident)
+		return ok && b.pass.TypesInfo.ObjectOf(id) == obj
+	}
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			for _, l := range n.Lhs {
+				found = found || is(l)
+			}
+		case *ast.IncDecStmt:
+			found = found || is(n.X)
+		case *ast.UnaryExpr:
+			found = found || n.Op == token.AND && is(n.X)
+		case *ast.RangeStmt:
+			found = found || n.Key != nil && is(n.Key) || n.Value != nil && is(n.Value)
+		}
+		return !found
+	})
+	return found
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {

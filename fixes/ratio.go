@@ -17,10 +17,9 @@ var ratioFamilies = map[Shape]family{
 }
 
 func buildRatio(b *builder) error {
-	if b.m.Shape == ShapeMultinomial && len(b.m.Extra) > 0 {
-		// n!/(k1!...km!) with n given apart from the ks is a multinomial
-		// only if n = k1+...+km, which the fixer cannot know.
-		return errors.New("multinomial with a separate n: no helper preserves its value")
+	if b.m.Shape == ShapeMultinomial && len(b.m.Extra) > 0 && !b.sumIs(b.m.Extra[0], b.m.Args) {
+		// n!/(k1!...km!) is a multinomial only if n = k1+...+km.
+		return errors.New("multinomial whose n is not visibly the sum of its parts")
 	}
 	name, err := b.pick(ratioFamilies[b.m.Shape], b.m.Result)
 	if err != nil {

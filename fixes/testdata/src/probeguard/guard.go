@@ -60,3 +60,16 @@ func Small(n int) float32 { // want "probe factorial"
 	}
 	return r
 }
+
+// Halve reassigns n before its loop, so a guard on the incoming n would
+// test the wrong value.
+//
+// probe:factorial(n)
+func Halve(n int) int { // want "probe factorial: no fix: n is assigned in the function"
+	n /= 2
+	r := 1
+	for i := 2; i <= n; i++ {
+		r *= i
+	}
+	return r
+}
