@@ -72,7 +72,7 @@ func (fc *fnCtx) accLoopOf(s ast.Stmt, before []ast.Stmt) *accLoop {
 			found = al
 		}
 	}
-	if found == nil || fc.assignsElsewhere(sh.body, found) {
+	if found == nil || fc.assignsElsewhere(sh.body, found) || fc.closureAssigns(found.acc) {
 		return nil
 	}
 	found.accInit = fc.constStart(found.acc, before)
@@ -209,7 +209,7 @@ func (fc *fnCtx) constStart(acc types.Object, before []ast.Stmt) ast.Stmt {
 }
 
 func (fc *fnCtx) nonZeroConst(e ast.Expr) bool {
-	v, ok := fc.floatConst(e)
+	v, ok := fc.floatConst(fc.stripConv(e))
 	return ok && v != 0
 }
 
@@ -314,4 +314,33 @@ func tripCount(sh *loopShape) (ast.Expr, int64) {
 		return sh.first, sh.firstOff - sh.lastOff + 1
 	}
 	return nil, 0
+}
+
+// closureAssigns reports whether a closure in the function assigns v; a
+// call of it may then change the accumulator between the factors.
+func (fc *fnCtx) closureAssigns(v types.Object) bool {
+	found := false
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		lit, ok := n.(*ast.FuncLit)
+		if !ok || found {
+			return !found
+		}
+		ast.Inspect(lit.Body, func(m ast.Node) bool {
+			switch m := m.(type) {
+			case *ast.AssignStmt:
+				for _, l := range m.Lhs {
+					if fc.c.objOf(l) == v {
+						found = true
+					}
+				}
+			case *ast.IncDecStmt:
+				if fc.c.objOf(m.X) == v {
+					found = true
+				}
+			}
+			return !found
+		})
+		return false
+	})
+	return found
 }

@@ -85,6 +85,11 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(n, func() { c.findFactorialFunc(d) })
 		}
 	}
+	for _, n := range funcs {
+		if d, ok := n.(*ast.FuncDecl); ok && d.Body != nil {
+			c.guard(n, func() { c.findBinomialFunc(d) })
+		}
+	}
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.
 	for _, n := range funcs {

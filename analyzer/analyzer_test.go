@@ -15,6 +15,17 @@ func testdata(t *testing.T) string {
 	return dir
 }
 
-func TestSmoke(t *testing.T) {
-	analysistest.Run(t, testdata(t), Analyzer, "cardshuffle")
+// The packages of testdata/src, each a scenario with its expectations in
+// // want comments.
+var scenarios = []string{
+	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
+	"reliability", "generic", "gentable", "tables", "oddcode",
+}
+
+func TestScenarios(t *testing.T) {
+	for _, pkg := range scenarios {
+		t.Run(pkg, func(t *testing.T) {
+			analysistest.Run(t, testdata(t), Analyzer, pkg)
+		})
+	}
 }

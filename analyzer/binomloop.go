@@ -37,7 +37,7 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	clause, _ := verdict(name, n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
 	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s*(%s) %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		t.typeName(), al.acc.Name(), src(al.mult), verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
+		t.typeName(), al.acc.Name(), src(unparen(al.mult)), verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
 	kExpr := al.count
 	if al.coff != 0 {
 		kExpr = nil

@@ -103,6 +103,9 @@ func (fc *fnCtx) topRange(al *accLoop) ranges.Interval {
 
 func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
 	first := firstBadOf(al.kind, t)
+	if al.top == nil && al.topOff < first {
+		return // a constant bound below the threshold
+	}
 	r := fc.rangeOf(fc.stripConv(al.mult))
 	if r.IsEmpty() || r.Hi < first {
 		return
@@ -157,13 +160,17 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	}
 	name := src(ff.recN)
 	clause, definite := verdict(name, r, first)
+	shape := fixes.ShapeFactorial
+	if ff.kind != kindFactorial {
+		shape = fixes.ShapeNone
+	}
 	fc.report(finding{
 		node:     ff.rec,
 		cat:      catRecursion,
 		definite: definite,
 		msg:      "recursive " + factorialLimitText(ff.kind, name, 0, ff.result) + clause,
 		match: &fixes.Match{
-			Shape:    fixes.ShapeFactorial,
+			Shape:    shape,
 			Node:     ff.rec,
 			Args:     []ast.Expr{ff.recN},
 			Result:   ff.obj.Type().(*types.Signature).Results().At(0).Type(),

@@ -37,6 +37,7 @@ func (c *checker) ctx(n ast.Node) *fnCtx {
 	if fc.file != nil {
 		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
 	}
+	fc.liftAssumes()
 	c.fnInfo[n] = fc
 	return fc
 }
@@ -206,3 +207,51 @@ func (c *checker) isMathFunc(call *ast.CallExpr, name string) bool {
 }
 
 var _ = token.NoPos
+
+// liftAssumes turns a statement-level bound on a parameter that the
+// function never assigns into an entry range: the parameter has the same
+// value everywhere, so the bound holds at entry when it holds at the
+// statement, and the range analysis then carries it into every
+// expression derived from it.
+func (fc *fnCtx) liftAssumes() {
+	if fc.defs == nil {
+		fc.collectDefs()
+	}
+	sig := fc.signature()
+	if sig == nil {
+		return
+	}
+	for _, a := range fc.assumes {
+		if len(fc.defs[a.obj]) > 0 || !isParam(sig, a.obj) {
+			continue
+		}
+		iv := a.iv
+		if old, ok := fc.entry[a.obj]; ok {
+			iv = iv.Meet(old)
+		}
+		fc.entry[a.obj] = iv
+	}
+}
+
+func (fc *fnCtx) signature() *types.Signature {
+	var t types.Type
+	switch n := fc.node.(type) {
+	case *ast.FuncDecl:
+		if obj := fc.c.pass.TypesInfo.Defs[n.Name]; obj != nil {
+			t = obj.Type()
+		}
+	case *ast.FuncLit:
+		t = fc.c.pass.TypesInfo.TypeOf(n)
+	}
+	sig, _ := t.(*types.Signature)
+	return sig
+}
+
+func isParam(sig *types.Signature, v types.Object) bool {
+	for i := 0; i < sig.Params().Len(); i++ {
+		if sig.Params().At(i) == v {
+			return true
+		}
+	}
+	return false
+}

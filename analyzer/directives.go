@@ -102,7 +102,7 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 				continue
 			}
 			verb, arg, _ := strings.Cut(strings.TrimPrefix(cm.Text, directivePrefix), " ")
-			arg = strings.TrimSpace(arg)
+			arg = directiveArg(arg)
 			fn := docOf[cg]
 			switch verb {
 			case "allow":
@@ -201,7 +201,7 @@ func (c *checker) parseStmtAssumes(d *directives, f *ast.File, pending []*ast.Co
 			return true
 		}
 		found[cm] = true
-		name, iv, ok := parseAssume(strings.TrimSpace(strings.TrimPrefix(cm.Text, directivePrefix+"assume")))
+		name, iv, ok := parseAssume(directiveArg(strings.TrimPrefix(cm.Text, directivePrefix+"assume")))
 		if !ok {
 			c.reportDirective(cm.Pos(), cm.End(), "malformed //overfact:assume: want ident <= N (or <, >=, >, ==) or A <= ident <= B")
 			return true
@@ -275,4 +275,13 @@ func (d *directives) stmtAssumesIn(fn ast.Node) []stmtAssume {
 		}
 	}
 	return out
+}
+
+// directiveArg trims the argument of a directive; a "//" in it starts a
+// comment on the directive, as in //overfact:assume n <= 20 // menu size.
+func directiveArg(arg string) string {
+	if i := strings.Index(arg, "//"); i >= 0 {
+		arg = arg[:i]
+	}
+	return strings.TrimSpace(arg)
 }

@@ -1,6 +1,9 @@
 package analyzer
 
-import "fmt"
+import (
+	"fmt"
+	"math"
+)
 
 // FactorialFact marks a function whose result is a factorial-shaped
 // value of its parameters, so that calls of it are known factorial values
@@ -32,7 +35,18 @@ func (*FactorialFact) AFact() {}
 
 func (f *FactorialFact) String() string {
 	if f.Safe {
-		return fmt.Sprintf("%s of parameter %d, safe for [%d, %d]", f.Kind, f.Param, f.Lo, f.Hi)
+		return fmt.Sprintf("%s of parameter %d, safe for [%s, %s]", f.Kind, f.Param, bound(f.Lo), bound(f.Hi))
 	}
 	return fmt.Sprintf("%s of parameter %d, breaks from %d", f.Kind, f.Param, f.FirstBad)
+}
+
+// bound renders an end of a range, with the unbounded ends as -inf, +inf.
+func bound(v int64) string {
+	switch v {
+	case math.MinInt64:
+		return "-inf"
+	case math.MaxInt64:
+		return "+inf"
+	}
+	return fmt.Sprint(v)
 }

@@ -168,8 +168,9 @@ func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		}
 		switch al.kind {
 		case kindFactorial, kindDouble:
-			idx := fc.c.paramIndex(decl, fc.c.objOf(al.top))
-			if idx < 0 {
+			p := fc.c.objOf(al.top)
+			idx := fc.c.paramIndex(decl, p)
+			if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, al.shape.stmt) {
 				return
 			}
 			ff = &facFunc{kind: al.kind, param: idx, param2: -1, offset: al.topOff, loop: al}
@@ -234,4 +235,34 @@ func lastGoodApprox(k facKind, t numType) string {
 		return thresholds.DoubleFactorial(t.Num).LastGoodApprox()
 	}
 	return thresholds.Factorial(t.Num).LastGoodApprox()
+}
+
+// assignedOutside reports whether v is assigned in body outside the
+// statement skip: then the function's result is not a factorial of the
+// argument it was called with.
+func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip ast.Node) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		if n == skip || found {
+			return false
+		}
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			for _, l := range n.Lhs {
+				if id, ok := unparen(l).(*ast.Ident); ok && info.ObjectOf(id) == v {
+					found = true
+				}
+			}
+		case *ast.IncDecStmt:
+			if id, ok := unparen(n.X).(*ast.Ident); ok && info.ObjectOf(id) == v {
+				found = true
+			}
+		case *ast.UnaryExpr:
+			if id, ok := unparen(n.X).(*ast.Ident); ok && n.Op == token.AND && info.ObjectOf(id) == v {
+				found = true
+			}
+		}
+		return !found
+	})
+	return found
 }

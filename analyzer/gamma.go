@@ -38,6 +38,11 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 		if fc.c.objOf(x) == nil {
 			return affine{}, false
 		}
+		if def := fc.singleDef(x); def != nil {
+			if a, ok := fc.affineOf(def, depth+1); ok {
+				return a, true
+			}
+		}
 		t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(x))
 		return affine{a: 1, v: x, isInt: ok && !t.Float}, ok
 	case *ast.BinaryExpr:

@@ -40,8 +40,12 @@ func (fc *fnCtx) linearDepth(e ast.Expr, depth int) (linear, bool) {
 	}
 	switch e := e.(type) {
 	case *ast.Ident:
+		// Only integer variables: x + float64(i) is a rising factorial,
+		// not a falling one.
 		if obj := fc.c.objOf(e); obj != nil {
-			return linear{terms: []term{{obj, 1}}}, true
+			if t, ok := fc.c.numOf(obj.Type()); ok && !t.Float {
+				return linear{terms: []term{{obj, 1}}}, true
+			}
 		}
 	case *ast.UnaryExpr:
 		if e.Op == token.SUB {

@@ -126,7 +126,7 @@ func (fc *fnCtx) rangeShape(s *ast.RangeStmt) *loopShape {
 
 // end splits a loop end into an expression and a constant offset.
 func (fc *fnCtx) end(e ast.Expr) (ast.Expr, int64) {
-	if v, ok := fc.intConst(unparen(e)); ok {
+	if v, ok := fc.intConst(fc.stripConv(e)); ok {
 		return nil, v
 	}
 	if b, ok := unparen(e).(*ast.BinaryExpr); ok && (b.Op == token.ADD || b.Op == token.SUB) {

@@ -41,7 +41,7 @@ func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
 		return "", iv.Lo >= firstBad
 	case iv.Lo >= firstBad && iv.Lo != math.MinInt64:
 		return fmt.Sprintf("; %s is at least %d here", name, iv.Lo), true
-	case iv.Hi == math.MaxInt64:
+	case typeLimit(iv.Hi):
 		return fmt.Sprintf("; %s is not bounded here", name), false
 	}
 	return fmt.Sprintf("; %s may reach %d here", name, iv.Hi), false
@@ -52,14 +52,33 @@ func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
 // largest that fits)".
 func factorialLimitText(kind facKind, name string, off int64, t numType) string {
 	first := firstBadOf(kind, t)
-	last := lastGoodApprox(kind, t)
-	bang := "!"
 	what := "factorial"
 	if kind == kindDouble {
-		bang, what = "!!", "double factorial"
+		what = "double factorial"
 	}
 	if name == "" {
-		return fmt.Sprintf("%s of %d in %s %s (%d%s ≈ %s is the largest that fits)", what, off, t.typeName(), verb(t), first-1, bang, last)
+		return fmt.Sprintf("%s of %d in %s %s (%s)", what, off, t.typeName(), verb(t), largestFits(kind, t))
 	}
-	return fmt.Sprintf("%s of %s in %s %s for %s ≥ %d (%d%s ≈ %s is the largest that fits)", what, plus(name, off), t.typeName(), verb(t), name, first-off, first-1, bang, last)
+	return fmt.Sprintf("%s of %s in %s %s for %s ≥ %d (%s)", what, plus(name, off), t.typeName(), verb(t), name, first-off, largestFits(kind, t))
+}
+
+// largestFits names the largest value of the kind that fits t:
+// "20! ≈ 2.43e18 is the largest that fits".
+func largestFits(kind facKind, t numType) string {
+	bang := "!"
+	if kind == kindDouble {
+		bang = "!!"
+	}
+	return fmt.Sprintf("%d%s ≈ %s is the largest that fits", firstBadOf(kind, t)-1, bang, lastGoodApprox(kind, t))
+}
+
+// typeLimit reports whether v is the largest value of an integer type,
+// which is what the range of an unconstrained variable ends at.
+func typeLimit(v int64) bool {
+	switch v {
+	case math.MaxInt8, math.MaxUint8, math.MaxInt16, math.MaxUint16,
+		math.MaxInt32, math.MaxUint32, math.MaxInt64:
+		return true
+	}
+	return false
 }

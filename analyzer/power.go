@@ -55,7 +55,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	if !facSafe {
 		clause, definite = verdict(src(fac.arg), r, first)
 		msg = fmt.Sprintf("%s in %s: the divisor %s %s for %s ≥ %d (%s), after which the term is 0 or NaN although its true value is small",
-			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, factorialLimitText(fac.kind, "", first-1, fac.t)[len("factorial of "):])
+			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
 			msg += "; " + powText
 		}

@@ -76,8 +76,13 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		central := thresholds.CentralBinomial(u.t.Num)
 		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, name, name, name, central.FirstBad-1)
 	case shape == fixes.ShapeCatalan:
-		cv := thresholds.CatalanValue(u.t.Num)
-		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: %s although the Catalan number itself fits up to n = %d", u.t.typeName(), breaks, cv.FirstBad-1)
+		// The threshold is stated for n, the half of the numerator's
+		// argument, as the Catalan number is indexed by it.
+		half := m.Args[0]
+		cat, cv := thresholds.Catalan(u.t.Num), thresholds.CatalanValue(u.t.Num)
+		clause, definite = verdict(src(half), fc.rangeOf(half), cat.FirstBad)
+		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: the numerator %s %s for %s ≥ %d although the Catalan number itself fits up to %s = %d",
+			u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(half), cat.FirstBad, src(half), cv.FirstBad-1)
 	case shape == fixes.ShapePermutation:
 		msg = fmt.Sprintf("permutation count n!/(n-k)! as a ratio of factorials in %s: %s, although the product of the top k factors may still fit", u.t.typeName(), breaks)
 	case shape == fixes.ShapeMultinomial:

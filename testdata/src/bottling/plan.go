@@ -1,0 +1,89 @@
+// Package bottling plans acceptance sampling on a bottling line: from a
+// lot of N bottles, n are drawn and the lot is accepted when at most c of
+// them are defective.
+package bottling
+
+import (
+	"math"
+
+	"mathkit"
+)
+
+// Ways returns C(n, k), the number of samples of k bottles from n.
+func Ways(n, k int) int64 { // want Ways:`binomial of parameter 0, breaks from 21`
+	return mathkit.Factorial(n) / (mathkit.Factorial(k) * mathkit.Factorial(n-k)) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21 although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
+}
+
+// WaysStepwise is Ways written through local variables.
+func WaysStepwise(n, k int) int64 { // want WaysStepwise:`binomial of parameter 0`
+	num := mathkit.Factorial(n)
+	den := mathkit.Factorial(k) * mathkit.Factorial(n-k)
+	return num / den // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+}
+
+// DrawProbability is the hypergeometric probability of d defectives in
+// a sample of n from a lot of N bottles holding D defectives.
+func DrawProbability(d, N, D, n int) float64 {
+	return float64(Ways(D, d)*Ways(N-D, n-d)) / float64(Ways(N, n)) // want `hypergeometric probability from three binomial coefficients in int64: Ways\(N, …\) breaks for N ≥ 21 before the division; N is not bounded here`
+}
+
+// SmallLot is the number of samples of 5 from a crate of 12: constant
+// arguments, far below the threshold.
+func SmallLot() int64 {
+	return mathkit.Factorial(12) / (mathkit.Factorial(5) * mathkit.Factorial(7))
+}
+
+// GuardedWays refuses lots the int64 factorials cannot hold.
+func GuardedWays(n, k int) int64 { // want GuardedWays:`binomial of parameter 0, safe for \[-inf, 20\]`
+	if n > 20 {
+		return -1
+	}
+	return mathkit.Factorial(n) / (mathkit.Factorial(k) * mathkit.Factorial(n-k))
+}
+
+// SafeWays uses the guarded factorial, whose values are always right.
+func SafeWays(n, k int) int64 { // want SafeWays:`binomial of parameter 0, safe for`
+	return mathkit.SmallFactorial(n) / (mathkit.SmallFactorial(k) * mathkit.SmallFactorial(n-k))
+}
+
+// Orderings counts the orders in which a sample of n bottles can be
+// inspected, n!/(n-k)! for the first k.
+func Orderings(n, k int) int64 {
+	return mathkit.Factorial(n) / mathkit.Factorial(n-k) // want `permutation count n!/\(n-k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+}
+
+// CrateSplits counts the ways to split a crate into three sample
+// groups of sizes a, b and c.
+func CrateSplits(a, b, c int) int64 {
+	return mathkit.Factorial(a+b+c) / (mathkit.Factorial(a) * mathkit.Factorial(b) * mathkit.Factorial(c)) // want `multinomial coefficient as a ratio of factorials in int64: the numerator \(a \+ b \+ c\)! wraps for a \+ b \+ c ≥ 21`
+}
+
+// ShiftFactorial is n! for a whole shift of n bottles, which is always
+// more than 21 on this line.
+func ShiftFactorial() int64 {
+	return mathkit.Factorial(24) // want `Factorial\(24\): factorial of 24 in int64 wraps for 24 ≥ 21`
+}
+
+// FloatWays converts too late: the int64 factorial has already wrapped.
+func FloatWays(n int) float64 {
+	return float64(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float64 \(which holds it up to n = 170\)`
+}
+
+// TruncatedCount converts a float factorial back to an integer.
+func TruncatedCount(n int) int64 {
+	return int64(mathkit.FactorialFloat(n)) // want `int64\(mathkit.FactorialFloat\(n\)\) of a float64 factorial: n! is no longer exact in float64 for n ≥ 23 and exceeds int64 for n ≥ 21`
+}
+
+// AcceptProb is the probability of at most c defectives when each of n
+// bottles is defective with probability p; the binomial pmf terms go
+// through lgamma already and are not factorial arithmetic.
+func AcceptProb(n, c int, p float64) float64 {
+	sum := 0.0
+	for i := 0; i <= c; i++ {
+		ln, _ := math.Lgamma(float64(n + 1))
+		li, _ := math.Lgamma(float64(i + 1))
+		lr, _ := math.Lgamma(float64(n - i + 1))
+		sum += math.Exp(ln - li - lr + float64(i)*math.Log(p) + float64(n-i)*math.Log1p(-p))
+	}
+	return sum
+}

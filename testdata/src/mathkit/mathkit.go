@@ -1,0 +1,50 @@
+// Package mathkit holds the counting routines shared by the planning tools.
+package mathkit
+
+import "errors"
+
+// ErrRange is returned for arguments whose factorial does not fit.
+var ErrRange = errors.New("mathkit: argument out of range")
+
+// Factorial returns n! in int64.
+func Factorial(n int) int64 { // want Factorial:`factorial of parameter 0, breaks from 21`
+	f := int64(1)
+	for i := 2; i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2.43e18 is the largest that fits\); n is not bounded here`
+		f *= int64(i)
+	}
+	return f
+}
+
+// FactorialFloat returns n! in float64, counting down.
+func FactorialFloat(n int) float64 { // want FactorialFloat:`factorial of parameter 0, breaks from 171`
+	f := 1.0
+	for i := n; i > 1; i-- { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171 \(170! ≈ 7.26e306 is the largest that fits\); n is not bounded here`
+		f *= float64(i)
+	}
+	return f
+}
+
+// CheckedFactorial returns n! for 0 ≤ n ≤ 20, and ErrRange beyond,
+// where int64 would wrap.
+func CheckedFactorial(n int) (int64, error) { // want CheckedFactorial:`factorial of parameter 0, safe for \[2, 20\]`
+	if n < 0 || n > 20 {
+		return 0, ErrRange
+	}
+	f := int64(1)
+	for i := 2; i <= n; i++ {
+		f *= int64(i)
+	}
+	return f, nil
+}
+
+// SmallFactorial returns n! and panics past 20!, the largest factorial
+// an int64 holds.
+func SmallFactorial(n int) int64 { // want SmallFactorial:`factorial of parameter 0, safe for \[2, 20\]`
+	if n > 20 {
+		panic("mathkit: factorial of more than 20")
+	}
+	if n <= 1 {
+		return 1
+	}
+	return int64(n) * SmallFactorial(n-1)
+}
