@@ -1,0 +1,97 @@
+package thresholds
+
+import (
+	"math"
+	"math/big"
+	"testing"
+
+	"gonum.org/v1/gonum/stat/combin"
+)
+
+// fallingRef returns n(n−1)…(n−k+1) by plain multiplication.
+func fallingRef(n, k int64) *big.Int {
+	p := big.NewInt(1)
+	for i := int64(0); i < k; i++ {
+		p.Mul(p, big.NewInt(n-i))
+	}
+	return p
+}
+
+func TestFallingFirstBad(t *testing.T) {
+	for _, name := range []string{"int8", "uint8", "int16", "int32", "int64", "uint64", "float32", "float64"} {
+		typ := mustNamed(t, name, nil)
+		max := typ.MaxInt()
+		for k := int64(1); k <= 40; k++ {
+			got := FallingFirstBad(typ, k)
+			if got == math.MaxInt64 {
+				// Nothing below 2^62 breaks: the product at 2^62 fits.
+				if fallingRef(1<<62, k).Cmp(max) > 0 {
+					t.Errorf("%s, k = %d: no limit reported, but (2^62)_k overflows", name, k)
+				}
+				continue
+			}
+			if got < k || fallingRef(got, k).Cmp(max) <= 0 || (got > k && fallingRef(got-1, k).Cmp(max) > 0) {
+				t.Errorf("%s, k = %d: FallingFirstBad = %d fails the defining property", name, k, got)
+			}
+		}
+	}
+	i64 := mustNamed(t, "int64", nil)
+	// n(n−1) ≤ 2^63−1 up to n = 3037000499·… : floor(√(2^63)) = 3037000499
+	// (common practice: √(2^63) ≈ 3.037e9); n = 3037000500 gives
+	// 9223372033963249500 and fits; 3037000501 does not.
+	if got := FallingFirstBad(i64, 2); got != 3037000501 {
+		t.Errorf("FallingFirstBad(int64, 2) = %d, want 3037000501", got)
+	}
+	if FallingFirstBad(i64, 1) != math.MaxInt64 || FallingFirstBad(i64, 0) != math.MaxInt64 {
+		t.Error("k ≤ 1 must never break int64 below 2^62")
+	}
+	if got := FallingFirstBad(i64, 25); got != 25 {
+		t.Errorf("FallingFirstBad(int64, 25) = %d, want 25 (25! does not fit)", got)
+	}
+}
+
+// TestFallingAgainstGonum uses gonum's combin.NumPermutations, real Go
+// code that multiplies n−k+1 … n in int: its result is right exactly
+// when FallingFits says the product fits.
+func TestFallingAgainstGonum(t *testing.T) {
+	it := mustNamed(t, "int", nil)
+	if it.Bits != 64 {
+		t.Skip("host int is not 64-bit")
+	}
+	for _, nk := range [][2]int64{{20, 20}, {21, 21}, {30, 12}, {30, 13}, {30, 14}, {3037000500, 2}, {3037000501, 2}, {2097153, 3}, {2097154, 3}} {
+		n, k := nk[0], nk[1]
+		got := big.NewInt(int64(combin.NumPermutations(int(n), int(k))))
+		if right := got.Cmp(fallingRef(n, k)) == 0; right != FallingFits(it, n, k) {
+			t.Errorf("(%d)_%d: gonum right = %v, FallingFits = %v", n, k, right, FallingFits(it, n, k))
+		}
+	}
+}
+
+func TestRisingFirstBad(t *testing.T) {
+	for _, name := range []string{"int8", "int32", "int64", "uint64", "float64"} {
+		typ := mustNamed(t, name, nil)
+		max := typ.MaxInt()
+		for _, x := range []int64{1, 2, 3, 7, 100, 12345, 1 << 31, 1 << 40} {
+			got := RisingFirstBad(typ, x)
+			rising := func(n int64) *big.Int { return fallingRef(x+n-1, n) }
+			if got == math.MaxInt64 {
+				t.Errorf("%s, x = %d: no limit", name, x)
+				continue
+			}
+			if rising(got).Cmp(max) <= 0 || (got > 1 && rising(got-1).Cmp(max) > 0) {
+				t.Errorf("%s, x = %d: RisingFirstBad = %d fails the defining property", name, x, got)
+			}
+		}
+	}
+	i64 := mustNamed(t, "int64", nil)
+	if got := RisingFirstBad(i64, 1); got != 21 {
+		t.Errorf("RisingFirstBad(int64, 1) = %d, want 21 (the factorial)", got)
+	}
+	// x = −30: magnitudes 30, 30·29, …; 30!/16! ≈ 1.27e19 > 2^63−1 ≥ 30!/17!.
+	if got := RisingFirstBad(i64, -30); got != 14 {
+		t.Errorf("RisingFirstBad(int64, -30) = %d, want 14", got)
+	}
+	if RisingFirstBad(i64, -10) != math.MaxInt64 || RisingFirstBad(i64, 0) != math.MaxInt64 {
+		t.Error("10! fits and zero products fit")
+	}
+}
