@@ -26,8 +26,10 @@ func Report(n float64) string {
 // waits after the debounce. "cold" loads the package and its dependencies
 // with go/packages; "warm" is the next analysis after an edit of the same
 // package, served by re-checking it against the dependencies kept in
-// memory. Both run in one invocation, so their ratio is measured under the
-// same machine load:
+// memory. "overfact" runs overfact's analyzer, whose facts make it run on
+// every dependency too; "nofacts" a test analyzer that runs on the edited
+// package alone. All run in one invocation, so their ratios are measured
+// under the same machine load:
 //
 //	go test -run '^$' -bench Analyze -benchtime 5x ./internal/lsp
 func BenchmarkAnalyze(b *testing.B) {
@@ -38,38 +40,50 @@ func BenchmarkAnalyze(b *testing.B) {
 		{"math", deskSource},
 		{"fmt", staffingSource},
 	} {
-		for _, warm := range []bool{false, true} {
-			name := bc.name + "/cold"
-			if warm {
-				name = bc.name + "/warm"
+		for _, ac := range []struct {
+			name string
+			opts Options
+		}{
+			{"nofacts", testOptions()},
+			{"overfact", Options{}},
+		} {
+			for _, warm := range []bool{false, true} {
+				name := bc.name + "/" + ac.name + "/cold"
+				if warm {
+					name = bc.name + "/" + ac.name + "/warm"
+				}
+				bench(b, name, bc.src, ac.opts, warm)
 			}
-			b.Run(name, func(b *testing.B) {
-				dir := b.TempDir()
-				writeFiles(b, dir, map[string]string{"go.mod": "module example.com/desk\n\ngo 1.21\n", "desk.go": bc.src})
-				path := filepath.Join(dir, "desk.go")
-				opts := withDefaults(testOptions())
-				cache := new(loadCache)
-				run := func(i int) {
-					// Each run sees a different buffer, as after a keystroke.
-					text := fmt.Sprintf("%s// edit %d\n", bc.src, i)
-					docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: int32(i), text: []byte(text)}}
-					if !warm {
-						cache = new(loadCache)
-					}
-					res, err := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
-					if err != nil || len(res.findings[path]) != 1 {
-						b.Fatalf("analyze: %v, %+v", err, res)
-					}
-				}
-				run(-1)
-				b.ResetTimer()
-				for i := 0; i < b.N; i++ {
-					run(i)
-				}
-				if warm && cache.reused != b.N {
-					b.Fatalf("warm runs reused the cache %d times of %d", cache.reused, b.N)
-				}
-			})
 		}
 	}
+}
+
+func bench(b *testing.B, name, src string, opts Options, warm bool) {
+	b.Run(name, func(b *testing.B) {
+		dir := b.TempDir()
+		writeFiles(b, dir, map[string]string{"go.mod": "module example.com/desk\n\ngo 1.21\n", "desk.go": src})
+		path := filepath.Join(dir, "desk.go")
+		opts := withDefaults(opts)
+		cache := new(loadCache)
+		run := func(i int) {
+			// Each run sees a different buffer, as after a keystroke.
+			text := fmt.Sprintf("%s// edit %d\n", src, i)
+			docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: int32(i), text: []byte(text)}}
+			if !warm {
+				cache = new(loadCache)
+			}
+			res, err := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
+			if err != nil || len(res.findings[path]) == 0 {
+				b.Fatalf("analyze: %v, %+v", err, res)
+			}
+		}
+		run(-1)
+		b.ResetTimer()
+		for i := 0; i < b.N; i++ {
+			run(i)
+		}
+		if warm && cache.reused != b.N {
+			b.Fatalf("warm runs reused the cache %d times of %d", cache.reused, b.N)
+		}
+	})
 }

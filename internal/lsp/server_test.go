@@ -284,3 +284,61 @@ func TestAnalyzerPanic(t *testing.T) {
 		t.Errorf("Serve = %v", err)
 	}
 }
+
+// TestDocumentChanges checks the versioned form of WorkspaceEdit for a
+// client that declares workspace.workspaceEdit.documentChanges.
+func TestDocumentChanges(t *testing.T) {
+	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	c := startServer(t, testOptions())
+	c.initialize(map[string]any{"workspace": map[string]any{"workspaceEdit": map[string]any{"documentChanges": true}}})
+	uri := c.open(filepath.Join(dir, "desk.go"), deskSource)
+	p := c.diagnosticsFor(uri, anyDiags)
+	as := c.codeActions(uri, p.Diagnostics[0].Range)
+	if len(as) == 0 {
+		t.Fatal("no code actions")
+	}
+	e := as[0].Edit
+	if e.Changes != nil || len(e.DocumentChanges) != 1 {
+		t.Fatalf("edit = %+v, want one documentChanges entry", e)
+	}
+	dc := e.DocumentChanges[0]
+	if dc.TextDocument.URI != uri || dc.TextDocument.Version == nil || *dc.TextDocument.Version != 1 {
+		t.Errorf("document = %+v, want %s at version 1", dc.TextDocument, uri)
+	}
+}
+
+// TestPackageSiblings opens two files of one package; a change to one
+// republishes both, the other's at its unchanged version.
+func TestPackageSiblings(t *testing.T) {
+	other := "package desk\n\nimport \"math\"\n\nvar Peak = math.Gamma(40)\n"
+	dir := writeModule(t, map[string]string{"desk.go": deskSource, "peak.go": other})
+	c := startServer(t, testOptions())
+	c.initialize(map[string]any{})
+	uri := c.open(filepath.Join(dir, "desk.go"), deskSource)
+	c.diagnosticsFor(uri, anyDiags)
+	peak := c.open(filepath.Join(dir, "peak.go"), other)
+	c.diagnosticsFor(peak, anyDiags)
+	c.notify("textDocument/didChange", map[string]any{
+		"textDocument":   map[string]any{"uri": uri, "version": 2},
+		"contentChanges": []any{map[string]any{"text": "package desk\n"}},
+	})
+	// The two publications come in either order.
+	var sawEdited, sawSibling bool
+	for !sawEdited || !sawSibling {
+		m := c.note("textDocument/publishDiagnostics")
+		var p publishDiagnosticsParams
+		json.Unmarshal(m.Params, &p)
+		switch {
+		case p.URI == uri && *p.Version == 2:
+			sawEdited = true
+			if len(p.Diagnostics) != 0 {
+				t.Errorf("edited file: %+v", p.Diagnostics)
+			}
+		case p.URI == peak: // its first publication was consumed above
+			sawSibling = true
+			if *p.Version != 1 || len(p.Diagnostics) != 1 {
+				t.Errorf("sibling republished as %+v", p)
+			}
+		}
+	}
+}
