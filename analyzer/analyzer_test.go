@@ -1,9 +1,17 @@
 package analyzer
 
 import (
+	"go/parser"
+	"go/token"
+	"math"
+	"math/big"
 	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
 	"testing"
 
+	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/analysistest"
 )
 
@@ -22,10 +30,201 @@ var scenarios = []string{
 	"reliability", "generic", "gentable", "tables", "oddcode",
 }
 
+// TestScenarios runs the analyzer over every scenario package in one
+// load, checks the // want expectations, and then checks the emitted
+// diagnostics against the category list and against math/big.
 func TestScenarios(t *testing.T) {
-	for _, pkg := range scenarios {
-		t.Run(pkg, func(t *testing.T) {
-			analysistest.Run(t, testdata(t), Analyzer, pkg)
-		})
+	results := analysistest.Run(t, testdata(t), Analyzer, scenarios...)
+	var diags []analysis.Diagnostic
+	for _, r := range results {
+		diags = append(diags, r.Diagnostics...)
+	}
+	if len(diags) == 0 {
+		t.Fatal("no diagnostics at all")
+	}
+	t.Run("categories", func(t *testing.T) { checkCategories(t, diags) })
+	t.Run("factorial-numbers", func(t *testing.T) { checkFactorialNumbers(t, diags) })
+	t.Run("binomial-numbers", func(t *testing.T) { checkBinomialNumbers(t, diags) })
+	t.Run("gamma-numbers", func(t *testing.T) { checkGammaNumbers(t, diags) })
+}
+
+// checkCategories: every category emitted is listed, with its URL.
+func checkCategories(t *testing.T, diags []analysis.Diagnostic) {
+	listed := make(map[string]CategoryInfo)
+	for _, c := range Categories() {
+		if c.Title == "" || !strings.HasPrefix(c.Help, "https://github.com/overfact/overfact#") {
+			t.Errorf("category %q lacks a title or an anchor URL: %+v", c.ID, c)
+		}
+		listed[c.ID] = c
+	}
+	seen := make(map[string]bool)
+	for _, d := range diags {
+		c, ok := listed[d.Category]
+		if !ok {
+			t.Errorf("category %q of %q is not in Categories()", d.Category, d.Message)
+			continue
+		}
+		if d.URL != c.Help {
+			t.Errorf("diagnostic URL %q, category help %q", d.URL, c.Help)
+		}
+		seen[d.Category] = true
+	}
+	// The scenarios exercise every pattern at least in its possible form.
+	for _, p := range patterns {
+		if !seen[p.id] && !seen[p.id+definiteSuffix] {
+			t.Errorf("no scenario emits category %q", p.id)
+		}
+	}
+}
+
+// maxOf returns the largest finite value of a predeclared numeric type,
+// computed here from the language specification's type sizes (not by
+// the thresholds package), as an exact big.Float.
+func maxOf(t *testing.T, name string) *big.Float {
+	switch name {
+	case "float64":
+		return new(big.Float).SetFloat64(math.MaxFloat64)
+	case "float32":
+		return new(big.Float).SetFloat64(math.MaxFloat32)
+	}
+	bits := map[string]uint{"int8": 7, "int16": 15, "int32": 31, "int64": 63, "int": 63,
+		"uint8": 8, "uint16": 16, "uint32": 32, "uint64": 64, "uint": 64}[name]
+	if bits == 0 {
+		t.Fatalf("unknown type %q", name)
+	}
+	m := new(big.Int).Sub(new(big.Int).Lsh(big.NewInt(1), bits), big.NewInt(1))
+	return new(big.Float).SetInt(m)
+}
+
+func fits(t *testing.T, v *big.Int, typ string) bool {
+	return new(big.Float).SetInt(v).Cmp(maxOf(t, typ)) <= 0
+}
+
+// doubleFact is n!! by its definition.
+func doubleFact(n int64) *big.Int {
+	r := big.NewInt(1)
+	for i := n; i > 1; i -= 2 {
+		r.Mul(r, big.NewInt(i))
+	}
+	return r
+}
+
+var factorialMsg = regexp.MustCompile(`(double )?factorial of (\w+) in (\w+)[^:]*? (?:wraps|overflows to \+Inf) for (\w+) ≥ (\d+) \((\d+)(!!?) ≈ ([0-9.e]+) is the largest that fits\)`)
+
+// checkFactorialNumbers parses "factorial of n in T wraps for n ≥ N
+// ((N-1)! ≈ X …)" and checks with math/big that N! does not fit T, that
+// (N−1)! does, and that X is (N−1)! to three digits.
+func checkFactorialNumbers(t *testing.T, diags []analysis.Diagnostic) {
+	checked := 0
+	for _, d := range diags {
+		m := factorialMsg.FindStringSubmatch(d.Message)
+		if m == nil || m[2] != m[4] {
+			continue
+		}
+		typ := m[3]
+		n, _ := strconv.ParseInt(m[5], 10, 64)
+		last, _ := strconv.ParseInt(m[6], 10, 64)
+		val := func(k int64) *big.Int { return new(big.Int).MulRange(1, k) }
+		if m[1] != "" {
+			val = doubleFact
+		}
+		if last != n-1 {
+			t.Errorf("%q: largest that fits is %d, first bad %d", d.Message, last, n)
+		}
+		if fits(t, val(n), typ) || !fits(t, val(n-1), typ) {
+			t.Errorf("%q: math/big disagrees about %d in %s", d.Message, n, typ)
+		}
+		approx, _ := strconv.ParseFloat(m[8], 64)
+		exact, _ := new(big.Float).SetInt(val(n - 1)).Float64()
+		if math.Abs(approx-exact)/exact > 0.005 {
+			t.Errorf("%q: %s is not %d%s ≈ %g", d.Message, m[8], n-1, m[7], exact)
+		}
+		checked++
+	}
+	if checked < 10 {
+		t.Errorf("only %d factorial messages checked", checked)
+	}
+}
+
+var (
+	centralMsg = regexp.MustCompile(`in (\w+): .* C\((\w+), (\w+)/2\) itself fits up to (\w+) = (\d+)`)
+	loopMsg    = regexp.MustCompile(`multiplicative binomial loop in (\w+): .* for (\w+) ≥ (\d+) at k = (\w+)/2`)
+)
+
+// loopPeakFits runs b = b*(n-k+i)/i for i = 1..k in math/big and
+// reports whether every intermediate fits typ.
+func loopPeakFits(t *testing.T, n, k int64, typ string) bool {
+	b := big.NewInt(1)
+	for i := int64(1); i <= k; i++ {
+		b.Mul(b, big.NewInt(n-k+i))
+		if !fits(t, b, typ) {
+			return false
+		}
+		b.Quo(b, big.NewInt(i))
+	}
+	return true
+}
+
+// checkBinomialNumbers checks "C(n, n/2) itself fits up to n = N" and the
+// binomial-loop threshold against math/big.
+func checkBinomialNumbers(t *testing.T, diags []analysis.Diagnostic) {
+	checked := 0
+	for _, d := range diags {
+		if m := centralMsg.FindStringSubmatch(d.Message); m != nil {
+			n, _ := strconv.ParseInt(m[5], 10, 64)
+			if !fits(t, new(big.Int).Binomial(n, n/2), m[1]) || fits(t, new(big.Int).Binomial(n+1, (n+1)/2), m[1]) {
+				t.Errorf("%q: math/big disagrees that C(%d, %d) is the last central binomial in %s", d.Message, n, n/2, m[1])
+			}
+			checked++
+		}
+		if m := loopMsg.FindStringSubmatch(d.Message); m != nil {
+			n, _ := strconv.ParseInt(m[3], 10, 64)
+			if loopPeakFits(t, n, n/2, m[1]) || !loopPeakFits(t, n-1, (n-1)/2, m[1]) {
+				t.Errorf("%q: a math/big run of the loop disagrees about n = %d in %s", d.Message, n, m[1])
+			}
+			checked++
+		}
+	}
+	if checked < 3 {
+		t.Errorf("only %d binomial messages checked", checked)
+	}
+}
+
+var studentMsg = regexp.MustCompile(`math.Gamma\(\(v \+ 1\) / 2\) is \+Inf for nu ≥ (\d+)`)
+
+// checkGammaNumbers checks the Student-t threshold with the standard
+// library's math.Gamma: Γ((ν+1)/2) is +Inf at the stated ν and finite
+// just below.
+func checkGammaNumbers(t *testing.T, diags []analysis.Diagnostic) {
+	for _, d := range diags {
+		if m := studentMsg.FindStringSubmatch(d.Message); m != nil {
+			nu, _ := strconv.ParseFloat(m[1], 64)
+			if !math.IsInf(math.Gamma((nu+1)/2), 1) || math.IsInf(math.Gamma(nu/2), 1) {
+				t.Errorf("%q: math.Gamma disagrees about ν = %g", d.Message, nu)
+			}
+			return
+		}
+	}
+	t.Error("no Student-t message found")
+}
+
+// TestDocMatchesPackageComment keeps Analyzer.Doc, the const doc, the
+// same text as the package comment of doc.go, its single source.
+func TestDocMatchesPackageComment(t *testing.T) {
+	f, err := parser.ParseFile(token.NewFileSet(), "doc.go", nil, parser.ParseComments|parser.PackageClauseOnly)
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := f.Doc.Text()
+	const header = "# Analyzer overfact\n\n"
+	i := strings.Index(text, header)
+	if i < 0 {
+		t.Fatalf("package comment lacks %q", header)
+	}
+	if got, want := strings.TrimSpace(text[i+len(header):]), strings.TrimSpace(doc); got != want {
+		t.Errorf("const doc differs from the package comment:\n--- comment ---\n%s\n--- doc ---\n%s", got, want)
+	}
+	if Analyzer.Doc != doc || Analyzer.Name != "overfact" {
+		t.Error("Analyzer does not use doc")
 	}
 }

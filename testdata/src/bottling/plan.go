@@ -87,3 +87,43 @@ func AcceptProb(n, c int, p float64) float64 {
 	}
 	return sum
 }
+
+// PalletOrders is the float factorial of a pallet of 200 crates, always
+// +Inf.
+func PalletOrders() float64 {
+	return mathkit.FactorialFloat(200) // want `FactorialFloat\(200\): factorial of 200 in float64 overflows to \+Inf for 200 ≥ 171 .*; 200 is at least 200 here`
+}
+
+// CrateOrders is the factorial of a 10-bottle crate.
+func CrateOrders() int64 {
+	return mathkit.Factorial(10)
+}
+
+// LineOrders is the factorial of the bottles on a line segment, which
+// can be long enough to wrap but is not known to be.
+func LineOrders(n int) int64 {
+	if n > 30 {
+		n = 30
+	}
+	return mathkit.Factorial(n)
+}
+
+// FloatWays32 converts the wrapped int64 factorial to float32.
+func FloatWays32(n int) float32 {
+	return float32(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float32 \(which holds it up to n = 34\)`
+}
+
+// SafeFloat converts a factorial that is always right.
+func SafeFloat(n int) float64 {
+	return float64(mathkit.SmallFactorial(n))
+}
+
+// CrateFloat converts the factorial of a constant crate size.
+func CrateFloat() float64 {
+	return float64(mathkit.Factorial(12))
+}
+
+// CrateCount converts a float factorial of 15 back: exact and in range.
+func CrateCount() int64 {
+	return int64(mathkit.FactorialFloat(15))
+}

@@ -141,3 +141,33 @@ func Euchre(k int64) int64 {
 	}
 	return Orderings(20) / (Orderings(k) * Orderings(20-k))
 }
+
+// Interleavings counts riffle interleavings as a recursive double
+// factorial.
+func Interleavings(n int64) int64 { // want Interleavings:`double-factorial of parameter 0, breaks from 34`
+	if n <= 1 {
+		return 1
+	}
+	return n * Interleavings(n-2) // want `recursive double factorial of n in int64 wraps for n ≥ 34 \(33!! ≈ 6.33e18 is the largest that fits\); n is not bounded here`
+}
+
+// Suits counts suit orders; the caller promises at most 12 suits.
+//
+//overfact:assume n <= 12
+func Suits(n uint32) uint32 { // want Suits:`factorial of parameter 0, safe for \[2, 12\]`
+	if n < 2 {
+		return 1
+	}
+	return n * Suits(n-1)
+}
+
+// Jokers refuses decks past 12 jokers, the most a uint32 count holds.
+func Jokers(n uint32) uint32 { // want Jokers:`factorial of parameter 0, safe for \[2, 12\]`
+	if n > 12 {
+		return 0
+	}
+	if n < 2 {
+		return 1
+	}
+	return n * Jokers(n-1)
+}

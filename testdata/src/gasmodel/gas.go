@@ -74,3 +74,26 @@ func SpeedRatio(n int) float64 {
 	}
 	return math.Gamma(float64(n)+0.5) / math.Gamma(float64(n))
 }
+
+// Occupancy is n!/k! written with Gamma.
+func Occupancy(n, k int) float64 {
+	return math.Gamma(float64(n+1)) / math.Gamma(float64(k+1)) // want `ratio of math.Gamma values in float64: math.Gamma\(float64\(n \+ 1\)\) is \+Inf for n ≥ 171`
+}
+
+// FixedRatio is a ratio of Gamma values at constants.
+func FixedRatio() float64 {
+	return math.Gamma(7.5) / math.Gamma(3.5)
+}
+
+// Shape is Γ(x) of a fitted shape parameter that nothing bounds.
+func Shape(x float64) float64 {
+	return math.Gamma(x) // want `math.Gamma overflows: math.Gamma\(x\) is \+Inf for x ≥ 171.62.*; x is not bounded here`
+}
+
+// Levels is Γ(n+1) for the 170 energy levels of the model.
+func Levels(n int) float64 {
+	if n < 0 || n > 170 {
+		return math.NaN()
+	}
+	return math.Gamma(float64(n) + 1)
+}

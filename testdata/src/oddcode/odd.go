@@ -85,8 +85,3 @@ func namedPlain(n int) (f float64) {
 	}
 	return
 }
-
-// deep nests far.
-func deep(n int) int {
-	return ((((((((((((((((((((n * 2)))))))))))))))))))) * ((((((((((((((((n))))))))))))))))
-}

@@ -54,3 +54,25 @@ func ChooseFloat(n, k int) float64 {
 	}
 	return b
 }
+
+// ChooseU counts pump subsets in uint64.
+func ChooseU(n, k uint64) uint64 { // want ChooseU:`binomial of parameter 0, breaks from 63`
+	b := uint64(1)
+	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b\*\(n - i\) wraps before the division for n ≥ 63`
+		b = b * (n - i) / (i + 1)
+	}
+	return b
+}
+
+// FewSpares counts choices of at most 5 spares from a depot of at most
+// 1000 pumps.
+func FewSpares(n, k int64) int64 {
+	if n < 0 || n > 1000 || k < 0 || k > 5 {
+		return 0
+	}
+	b := int64(1)
+	for i := int64(1); i <= k; i++ {
+		b = b * (n - k + i) / i
+	}
+	return b * 1
+}
