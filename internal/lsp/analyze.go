@@ -53,9 +53,13 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 			res, err = nil, fmt.Errorf("panic during analysis of %s: %v\n%s", path, p, debug.Stack())
 		}
 	}()
+	// Only Go files: an unsaved go.mod would change what go list resolves,
+	// which the saved one should decide.
 	overlay := make(map[string][]byte, len(docs))
 	for p, d := range docs {
-		overlay[p] = d.text
+		if isGoFile(p) {
+			overlay[p] = d.text
+		}
 	}
 	cfg := &packages.Config{
 		Mode:    loadMode,

@@ -342,3 +342,36 @@ func TestPackageSiblings(t *testing.T) {
 		}
 	}
 }
+
+// TestEditStorm sends twenty full-text changes faster than the debounce;
+// publications must never go back to an older version, and the last one
+// must be the newest version's.
+func TestEditStorm(t *testing.T) {
+	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	c := startServer(t, testOptions())
+	c.initialize(map[string]any{})
+	uri := c.open(filepath.Join(dir, "desk.go"), deskSource)
+	const last = 21
+	for v := 2; v <= last; v++ {
+		// Version v has v-1 extra calls, hence v findings.
+		text := deskSource + strings.Repeat("var _ = math.Gamma(3)\n", v-1)
+		c.notify("textDocument/didChange", map[string]any{
+			"textDocument":   map[string]any{"uri": uri, "version": v},
+			"contentChanges": []any{map[string]any{"text": text}},
+		})
+	}
+	newest := int32(0)
+	p := c.diagnosticsFor(uri, func(p publishDiagnosticsParams) bool {
+		if *p.Version < newest {
+			t.Errorf("version %d published after version %d", *p.Version, newest)
+		}
+		newest = *p.Version
+		if got := len(p.Diagnostics); got != int(*p.Version) {
+			t.Errorf("version %d published with %d findings", *p.Version, got)
+		}
+		return *p.Version == last
+	})
+	if as := c.codeActions(uri, p.Diagnostics[len(p.Diagnostics)-1].Range); len(as) != 2 {
+		t.Errorf("code actions for the newest finding: %d", len(as))
+	}
+}
