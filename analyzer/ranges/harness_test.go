@@ -25,6 +25,10 @@ var (
 	impFset    = token.NewFileSet()
 )
 
+// importerForTests reads imported packages from source, so the tests
+// need no export data.
+func importerForTests() types.Importer { return importer.ForCompiler(impFset, "source", nil) }
+
 // program is a type-checked test source.
 type program struct {
 	fset *token.FileSet
@@ -35,7 +39,7 @@ type program struct {
 
 func check(t testing.TB, src string) *program {
 	t.Helper()
-	importOnce.Do(func() { imp = importer.ForCompiler(impFset, "source", nil) })
+	importOnce.Do(func() { imp = importerForTests() })
 	fset := impFset
 	f, err := parser.ParseFile(fset, "case.go", src, parser.ParseComments)
 	if err != nil {

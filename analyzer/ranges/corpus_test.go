@@ -1,0 +1,166 @@
+package ranges
+
+// This file is both compiled into the tests and parsed by them: the
+// brute-force check runs each function below for every argument in a
+// small range, records what each probe call sees, and checks that the
+// range computed for the probed expression holds every recorded value.
+// The functions are factorial-shaped code from made-up scenarios.
+
+var probes = map[int][]int{}
+
+// probe records v under id and returns it.
+func probe(id, v int) int {
+	probes[id] = append(probes[id], v)
+	return v
+}
+
+func seatingOrders(n int) int {
+	if n < 0 || n > 20 {
+		return -1
+	}
+	r := 1
+	for i := 2; i <= n; i++ {
+		r *= probe(1, i)
+	}
+	return r
+}
+
+func seatingDown(n int) int {
+	r := 1
+	for i := n; i > 1; i-- {
+		r *= probe(2, i)
+	}
+	return probe(3, n)
+}
+
+func crateDrain(n int) int {
+	if n > 12 {
+		return 0
+	}
+	s := 0
+	for n > 1 {
+		s += probe(4, n)
+		n -= 2
+	}
+	return probe(5, n) + s
+}
+
+func diceTable(n int) int {
+	if n < 1 || n > 6 {
+		return 0
+	}
+	s := 0
+	for i := 1; i <= n; i++ {
+		for j := i; j <= 6; j++ {
+			s += probe(6, i*j)
+		}
+	}
+	return s
+}
+
+func samplingPlan(n int) int {
+	k := 0
+	for i := 0; i < 50; i += 3 {
+		if i*i > n {
+			break
+		}
+		k = probe(7, i)
+	}
+	return probe(8, k)
+}
+
+func shiftKind(n int) int {
+	switch {
+	case n < 0:
+		return 0
+	case n <= 4:
+		return probe(9, n*2)
+	case n <= 9:
+		return probe(10, n-5)
+	}
+	return probe(11, n)
+}
+
+func rangeCount(n int) int {
+	if n > 9 {
+		n = 9
+	}
+	s := 0
+	for i := range n {
+		s += probe(12, i)
+	}
+	return probe(13, s)
+}
+
+func topDose(short bool, n int) (dose int) {
+	if short {
+		dose = 3
+	} else if n > 0 && n < 8 {
+		dose = n
+	}
+	return probe(14, dose)
+}
+
+func doseBool(n int) int { return topDose(n%2 == 0, n/2) }
+
+func gasShells(n int) int {
+	if n < 0 {
+		n = -n
+	}
+	if n > 40 {
+		return 0
+	}
+	t := 0
+	for k := 1; k*k <= n; k++ {
+		t += probe(15, n/k)
+		t += probe(16, n%k)
+	}
+	return t
+}
+
+func tallyOdds(n int) int {
+	s := 0
+	for i := 0; i < 10; i++ {
+		if i%2 == 0 {
+			continue
+		}
+		if i > n {
+			break
+		}
+		s += probe(17, i)
+	}
+	return probe(18, s)
+}
+
+func multiset(n int) int {
+	if n < 0 || n > 7 {
+		return 0
+	}
+	var parts [4]int
+	c := 0
+	for i := range parts {
+		parts[i] = n - i
+		c += probe(19, n-i)
+	}
+	return c
+}
+
+func clampedTerm(n int) int {
+	m := min(max(n, 2), 15)
+	return probe(20, m) + probe(21, m*m-1)
+}
+
+var corpus = map[string]func(int) int{
+	"seatingOrders": seatingOrders,
+	"seatingDown":   seatingDown,
+	"crateDrain":    crateDrain,
+	"diceTable":     diceTable,
+	"samplingPlan":  samplingPlan,
+	"shiftKind":     shiftKind,
+	"rangeCount":    rangeCount,
+	"doseBool":      doseBool,
+	"gasShells":     gasShells,
+	"tallyOdds":     tallyOdds,
+	"multiset":      multiset,
+	"clampedTerm":   clampedTerm,
+}
