@@ -51,7 +51,24 @@ func firstBad(s shape, max *big.Int, L float64) int64 {
 	// Narrow both ends on the bounds alone, then resolve exactly.
 	good = lastTrue(good, bad, sureGood)
 	bad = firstTrue(good, bad, sureBad)
-	return firstTrue(good, bad, func(n int64) bool { return !s.fits(n, max) })
+	breaks := func(n int64) bool { return !s.fits(n, max) }
+	n := firstTrue(good, bad, breaks)
+	// Confirm both sides exactly, so that no answer rests on rounding;
+	// should a bound ever be wrong, fall back to exact bisection.
+	if breaks(n) && (n == s.from || !breaks(n-1)) {
+		return n
+	}
+	return exactSearch(s.from, breaks)
+}
+
+// exactSearch finds the first n ≥ from with breaks(n) by exact tests
+// alone: doubling strides, then bisection.
+func exactSearch(from int64, breaks func(int64) bool) int64 {
+	bad, ok := expandUp(from, breaks)
+	if !ok {
+		return math.MaxInt64
+	}
+	return firstTrue(from-1, bad, breaks)
 }
 
 // expandUp returns some n ≥ start with p(n), stepping by doubling
