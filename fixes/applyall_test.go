@@ -10,6 +10,7 @@ import (
 	"path/filepath"
 	"sort"
 	"strconv"
+	"strings"
 	"testing"
 
 	"golang.org/x/tools/go/analysis"
@@ -37,6 +38,12 @@ type fileEdit struct {
 // imports the merged result no longer uses are dropped. It returns the
 // number of fixes applied and skipped.
 func applyFirstFixes(t *testing.T, dir string, a *analysis.Analyzer, pkgs ...string) (applied, skipped int) {
+	return applyFirstFixesSeen(t, dir, a, nil, pkgs...)
+}
+
+// applyFirstFixesSeen is applyFirstFixes that also shows each fixed
+// diagnostic to seen, with its package's files.
+func applyFirstFixesSeen(t *testing.T, dir string, a *analysis.Analyzer, seenFix func(*token.FileSet, []*ast.File, analysis.Diagnostic), pkgs ...string) (applied, skipped int) {
 	t.Helper()
 	edits := make(map[string][]fileEdit)
 	seen := make(map[string]bool)
@@ -45,6 +52,9 @@ func applyFirstFixes(t *testing.T, dir string, a *analysis.Analyzer, pkgs ...str
 		for _, d := range r.Diagnostics {
 			if len(d.SuggestedFixes) == 0 {
 				continue
+			}
+			if seenFix != nil {
+				seenFix(fset, r.Action.Package.Syntax, d)
 			}
 			fix := d.SuggestedFixes[0]
 			key := fset.Position(d.Pos).String() + fix.Message
@@ -90,7 +100,7 @@ func merge(fset *token.FileSet, edits map[string][]fileEdit, fix analysis.Sugges
 				dup = true
 				break
 			}
-			if fe.start < old.end && old.start < fe.end || fe.start == old.start && fe.end == old.end {
+			if overlap(fe, old) {
 				return false
 			}
 		}
@@ -102,6 +112,20 @@ func merge(fset *token.FileSet, edits map[string][]fileEdit, fix analysis.Sugges
 		edits[name] = append(edits[name], es...)
 	}
 	return true
+}
+
+// overlap reports whether two different edits conflict, by the rule of
+// the x/tools merge: deletions may not overlap, nor may an insertion fall
+// strictly inside a deletion; insertions at one point are kept in order.
+func overlap(x, y fileEdit) bool {
+	if x.start == x.end || y.start == y.end {
+		ins, del := x, y
+		if y.start == y.end {
+			ins, del = y, x
+		}
+		return del.start < ins.start && ins.start < del.end
+	}
+	return x.start < y.end && y.start < x.end
 }
 
 func applyEdits(src []byte, es []fileEdit) []byte {
@@ -161,12 +185,7 @@ func importName(spec *ast.ImportSpec) string {
 // and type error.
 func typeCheck(t *testing.T, dir string, pkgs ...string) {
 	t.Helper()
-	cfg := &packages.Config{
-		Mode:  packages.NeedName | packages.NeedTypes | packages.NeedSyntax | packages.NeedTypesInfo,
-		Dir:   dir,
-		Tests: true,
-		Env:   append(os.Environ(), "GOPATH="+dir, "GO111MODULE=off", "GOWORK=off"),
-	}
+	cfg := loadConfig(dir)
 	loaded, err := packages.Load(cfg, pkgs...)
 	if err != nil {
 		t.Fatal(err)
@@ -176,6 +195,39 @@ func typeCheck(t *testing.T, dir string, pkgs ...string) {
 			t.Errorf("after fixes, %s: %v", p.PkgPath, e)
 		}
 	})
+}
+
+// compiling returns the patterns whose packages type-check without error.
+func compiling(t *testing.T, dir string, patterns []string) []string {
+	t.Helper()
+	loaded, err := packages.Load(loadConfig(dir), patterns...)
+	if err != nil {
+		t.Fatal(err)
+	}
+	bad := make(map[string]bool)
+	for _, p := range loaded {
+		if len(p.Errors) > 0 {
+			first, _, _ := strings.Cut(p.PkgPath, "/")
+			bad[first] = true
+		}
+	}
+	var ok []string
+	for _, p := range patterns {
+		first, _, _ := strings.Cut(p, "/")
+		if !bad[first] {
+			ok = append(ok, p)
+		}
+	}
+	return ok
+}
+
+func loadConfig(dir string) *packages.Config {
+	return &packages.Config{
+		Mode:  packages.NeedName | packages.NeedTypes | packages.NeedSyntax | packages.NeedTypesInfo,
+		Dir:   dir,
+		Tests: true,
+		Env:   append(os.Environ(), "GOPATH="+dir, "GO111MODULE=off", "GOWORK=off"),
+	}
 }
 
 // TestProbeFixesCompile applies every probe fix at once and type-checks

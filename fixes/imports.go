@@ -90,9 +90,13 @@ func (b *builder) addImport(path, base, name string) {
 	case decl == nil:
 		b.insert(b.file.Name.End(), "\n\nimport "+spec)
 	case !decl.Lparen.IsValid():
+		// import "math" becomes a parenthesised list. The parentheses
+		// are edits of their own, identical in every fix, so that fixes
+		// adding different imports to the same declaration merge.
 		only := decl.Specs[0]
 		b.insert(only.Pos(), "(\n\t")
-		b.insert(only.End(), "\n"+groupSep(path)+"\t"+spec+"\n)")
+		b.insert(only.Pos(), spec+"\n"+groupSep(path)+"\t")
+		b.insert(only.End(), "\n)")
 	default:
 		b.insertSpec(decl, path, spec)
 	}

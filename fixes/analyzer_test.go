@@ -1,0 +1,20 @@
+package fixes_test
+
+import (
+	"path/filepath"
+	"testing"
+
+	"golang.org/x/tools/go/analysis/analysistest"
+
+	"github.com/overfact/overfact/analyzer"
+)
+
+// fixPackages are the analysistest packages of the repository's testdata
+// whose directory names start with "fix": the real analyzer's findings
+// and their fixes, against hand-written .golden files.
+var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard"}
+
+func TestAnalyzerGolden(t *testing.T) {
+	dir := gopath(t, filepath.Join("..", "testdata", "src"), fixPackages...)
+	analysistest.RunWithSuggestedFixes(t, dir, analyzer.Analyzer, fixPackages...)
+}

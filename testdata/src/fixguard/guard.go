@@ -1,0 +1,35 @@
+// Package fixguard is a reliability test plan counting orderings of units
+// under test; no rewrite makes 25! fit an int64, so its .golden file shows
+// range guards that fail loudly at the first value that overflows.
+package fixguard
+
+import "fmt"
+
+// Orderings is n! in int64, wrong from n = 21 on.
+func Orderings(n int64) int64 { // want Orderings:"factorial of parameter 0"
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want "factorial of n in int64"
+		r *= i
+	}
+	return r
+}
+
+// Rec is n! by recursion, in int32: wrong from n = 13 on.
+func Rec(n int32) int32 { // want Rec:"factorial of parameter 0"
+	if n < 2 {
+		return 1
+	}
+	return n * Rec(n-1) // want "recursive factorial of n in int32"
+}
+
+// Spread is n! in float64, +Inf from n = 171 on.
+func Spread(n int) float64 { // want Spread:"factorial of parameter 0"
+	r := 1.0
+	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+		r *= float64(i)
+	}
+	return r
+}
+
+// Label keeps fmt in use.
+func Label(n int) string { return fmt.Sprint(Spread(n)) }

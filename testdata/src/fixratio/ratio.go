@@ -1,0 +1,45 @@
+// Package fixratio is a support-desk staffing estimator whose rota counts
+// are ratios of factorials; its .golden file shows them rewritten into
+// helper calls.
+package fixratio
+
+func fact(n int) int { // want fact:"factorial of parameter 0"
+	r := 1
+	for i := 2; i <= n; i++ { // want "factorial of n in int"
+		r *= i
+	}
+	return r
+}
+
+func factF(n int) float64 { // want factF:"factorial of parameter 0"
+	r := 1.0
+	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+		r *= float64(i)
+	}
+	return r
+}
+
+// Rotas counts the ways to pick k agents out of n.
+func Rotas(n, k int) int { // want Rotas:"binomial of parameter 0"
+	return fact(n) / (fact(k) * fact(n-k)) // want "binomial coefficient"
+}
+
+// RotaShare is Rotas as a float, for probabilities.
+func RotaShare(n, k int) float64 { // want RotaShare:"binomial of parameter 0"
+	return factF(n) / (factF(k) * factF(n-k)) // want "binomial coefficient"
+}
+
+// Orders counts ordered picks of k agents out of n.
+func Orders(n, k int) int {
+	return fact(n) / fact(n-k) // want "permutation count"
+}
+
+// Shifts counts the ways to split a+b+c agents into three named shifts.
+func Shifts(a, b, c int) float64 {
+	return factF(a+b+c) / (factF(a) * factF(b) * factF(c)) // want "multinomial coefficient"
+}
+
+// Queues counts well-formed call/answer sequences of n pairs.
+func Queues(n int) int {
+	return fact(2*n) / (fact(n+1) * fact(n)) // want "Catalan number"
+}

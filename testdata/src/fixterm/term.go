@@ -1,0 +1,44 @@
+// Package fixterm is a bottling line's sampling plan and a support desk's
+// arrival model, with probability terms that overflow; its .golden file
+// shows them in log space.
+package fixterm
+
+import "math"
+
+func factF(n int) float64 { // want factF:"factorial of parameter 0"
+	r := 1.0
+	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+		r *= float64(i)
+	}
+	return r
+}
+
+func choose(n, k int) float64 { // want choose:"binomial of parameter 0"
+	return factF(n) / (factF(k) * factF(n-k)) // want "binomial coefficient"
+}
+
+// Arrivals is the chance of exactly k calls in an hour averaging lambda.
+func Arrivals(k int, lambda float64) float64 {
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / factF(k) // want "Poisson"
+}
+
+// Load is the Erlang-style term a^k/k! of an offered load a.
+func Load(a float64, k int) float64 {
+	return math.Pow(a, float64(k)) / factF(k) // want "power-over-factorial"
+}
+
+// Lot is the chance of k faulty bottles when n are drawn from a lot of
+// total holding bad faulty ones.
+func Lot(k, total, bad, n int) float64 {
+	return choose(bad, k) * choose(total-bad, n-k) / choose(total, n) // want "hypergeometric"
+}
+
+// Spread is a gamma ratio of a fill-level model.
+func Spread(a, b float64) float64 {
+	return math.Gamma(a) / math.Gamma(b) // want "ratio of math.Gamma"
+}
+
+// Mix is the beta function of the same model.
+func Mix(a, b float64) float64 {
+	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want "Beta function"
+}
