@@ -8,10 +8,7 @@ import (
 // CentralBinomial returns the first n whose true C(n, ⌊n/2⌋) does not
 // fit t (int64: 67, as C(66, 33) fits).
 func CentralBinomial(t Num) Limit {
-	return memoLimit(cacheKey{shape: "cbin", t: t}, func() Limit {
-		n := firstBad(centralShape, t.maxInt(), t.logMax())
-		return exactLimit(n, central)
-	})
+	return shapeLimit("cbin", t, centralShape, central)
 }
 
 // CentralBinomialRatio returns the first n at which C(n, ⌊n/2⌋) written
@@ -92,9 +89,9 @@ func BinomialLoopFits(t Num, n, k int64) bool {
 	return memo(cacheKey{shape: "loopfits", t: t, a: n, b: k}, func() bool {
 		max := t.maxInt()
 		switch {
-		case k <= 0 || n < 0:
-			return true
-		case k > n:
+		case k <= 0:
+			return true // the loop does not run
+		case k > n || n < 0:
 			return simulateLoop(n, k, max)
 		case tooWide(n, k, max):
 			return false
@@ -109,10 +106,10 @@ func tooWide(n, k int64, max *big.Int) bool {
 	return min(k, n-k) > int64(max.BitLen())
 }
 
-// simulateLoop runs the loop exactly for k > n, where the factors
-// n−k+i start negative and reach zero at i = k−n; it stops at the first
-// intermediate beyond max, which comes within a few steps when k−n is
-// large.
+// simulateLoop runs the loop exactly for k > n (or n < 0), where the
+// factors n−k+i start negative and may reach zero at i = k−n. It stops
+// at the first intermediate beyond max or at a zero product; the
+// magnitudes grow like binomial coefficients, so a long run ends early.
 func simulateLoop(n, k int64, max *big.Int) bool {
 	b, f, q := big.NewInt(1), new(big.Int), new(big.Int)
 	for i := int64(1); i <= k; i++ {

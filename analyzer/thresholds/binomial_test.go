@@ -63,8 +63,8 @@ func TestLoopBySimulation(t *testing.T) {
 		if !simulateLoopRef(l.FirstBad-1, (l.FirstBad-1)/2, max) || simulateLoopRef(l.FirstBad, l.FirstBad/2, max) {
 			t.Errorf("%s: loop limit %d disagrees with simulation", name, l.FirstBad)
 		}
-		for nn := int64(0); nn <= 80; nn++ {
-			for k := int64(0); k <= nn+3; k++ {
+		for nn := int64(-5); nn <= 80; nn++ {
+			for k := int64(0); k <= nn+8; k++ {
 				if got, want := BinomialLoopFits(n, nn, k), simulateLoopRef(nn, k, max); got != want {
 					t.Errorf("BinomialLoopFits(%s, %d, %d) = %v, simulation %v", name, nn, k, got, want)
 				}
@@ -111,6 +111,11 @@ func TestBinomialFits(t *testing.T) {
 	}
 	// Far beyond any exact computation: C(10^15, 5·10^14) does not fit,
 	// C(10^15, 1) = 10^15 does.
+	// k far beyond n: the loop's first factors are about −k, and the
+	// second product already exceeds int64.
+	if BinomialLoopFits(i64, 0, 1e18) || !BinomialLoopFits(i64, 0, 3) {
+		t.Error("loops with k > n misjudged")
+	}
 	if BinomialFits(i64, 1e15, 5e14) || !BinomialFits(i64, 1e15, 1) || !BinomialLoopFits(i64, 1e15, 1) {
 		t.Error("wide binomials misjudged")
 	}

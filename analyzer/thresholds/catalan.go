@@ -20,10 +20,7 @@ func Catalan(t Num) Limit {
 // CatalanValue returns the first n whose true Catalan number
 // C(2n, n)/(n+1) does not fit t (int64: 36, as C35 fits).
 func CatalanValue(t Num) Limit {
-	return memoLimit(cacheKey{shape: "catvalue", t: t}, func() Limit {
-		n := firstBad(catalanShape, t.maxInt(), t.logMax())
-		return exactLimit(n, catalan)
-	})
+	return shapeLimit("catvalue", t, catalanShape, catalan)
 }
 
 // catalan returns C(2n, n)/(n+1) exactly.

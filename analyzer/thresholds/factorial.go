@@ -9,10 +9,7 @@ import (
 // int64 and uint64 (20! = 2432902008176640000 fits), 171 for float64, 35
 // for float32.
 func Factorial(t Num) Limit {
-	return memoLimit(cacheKey{shape: "fact", t: t}, func() Limit {
-		n := firstBad(factorialShape, t.maxInt(), t.logMax())
-		return exactLimit(n, factorial)
-	})
+	return shapeLimit("fact", t, factorialShape, factorial)
 }
 
 // factorialShape is n!, bracketed by Robbins' bound and started at the
@@ -34,6 +31,14 @@ func factorial(n int64) *big.Int {
 	return new(big.Int).MulRange(1, n)
 }
 
+// shapeLimit returns the cached Limit of s in t, named name in the
+// cache, for a shape whose only intermediate is its result value(n).
+func shapeLimit(name string, t Num, s shape, value func(int64) *big.Int) Limit {
+	return memoLimit(cacheKey{shape: name, t: t}, func() Limit {
+		return exactLimit(firstBad(s, t.maxInt(), t.logMax()), value)
+	})
+}
+
 // exactLimit builds the Limit of a shape whose only intermediate is its
 // result, value(n).
 func exactLimit(firstBad int64, value func(int64) *big.Int) Limit {
@@ -47,10 +52,7 @@ func exactLimit(firstBad int64, value func(int64) *big.Int) Limit {
 // DoubleFactorial returns the first n for which n!! = n(n−2)(n−4)…
 // does not fit t.
 func DoubleFactorial(t Num) Limit {
-	return memoLimit(cacheKey{shape: "dfact", t: t}, func() Limit {
-		n := firstBad(doubleFactorialShape, t.maxInt(), t.logMax())
-		return exactLimit(n, doubleFactorial)
-	})
+	return shapeLimit("dfact", t, doubleFactorialShape, doubleFactorial)
 }
 
 // doubleFactorialShape bounds ln n!! through factorials:
