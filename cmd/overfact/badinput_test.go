@@ -53,7 +53,7 @@ func TestBrokenPackages(t *testing.T) {
 		{"type error", "package line\n\nfunc Orders(n int) int {\n\tvar s string = n\n\treturn s\n}\n", "line/line.go:4:"},
 	}
 	for _, tt := range tests {
-		dir := writeModule(t, map[string]string{"go.mod": goMod, "line/line.go": tt.src, "line/ok.go": strings.Replace(loopFile, "Orders", "Crates", 1)})
+		dir := writeModule(t, map[string]string{"go.mod": goMod, "line/line.go": tt.src, "line/ok.go": strings.ReplaceAll(loopFile, "Orders", "Crates")})
 		r := runIn(t, dir, isolated, "./...")
 		noPanic(t, r)
 		if r.code != 1 || !strings.Contains(r.stderr, filepath.FromSlash(tt.where)) {
@@ -65,7 +65,7 @@ func TestBrokenPackages(t *testing.T) {
 		if r.code != 1 {
 			t.Errorf("%s: -fix exit code %d, want 1", tt.name, r.code)
 		}
-		for name, want := range map[string]string{"line.go": tt.src, "ok.go": strings.Replace(loopFile, "Orders", "Crates", 1)} {
+		for name, want := range map[string]string{"line.go": tt.src, "ok.go": strings.ReplaceAll(loopFile, "Orders", "Crates")} {
 			if got, _ := os.ReadFile(filepath.Join(dir, "line", name)); string(got) != want {
 				t.Errorf("%s: -fix changed %s of a broken package:\n%s", tt.name, name, got)
 			}
@@ -80,7 +80,7 @@ func TestFixReadOnly(t *testing.T) {
 	dir := writeModule(t, map[string]string{
 		"go.mod":      goMod,
 		"line/a.go":   loopFile,
-		"line/b.go":   strings.Replace(loopFile, "Orders", "Crates", 1),
+		"line/b.go":   strings.ReplaceAll(loopFile, "Orders", "Crates"),
 		"line/doc.go": "// Package line models the bottling line.\npackage line\n",
 	})
 	if r := runIn(t, dir, isolated, "-diff", "./..."); !strings.Contains(r.stdout, "b/line/a.go") || !strings.Contains(r.stdout, "b/line/b.go") {
@@ -95,7 +95,7 @@ func TestFixReadOnly(t *testing.T) {
 	if r.code != 1 || !strings.Contains(r.stderr, ro) {
 		t.Errorf("-fix with a read-only file: code %d, stderr %q; want 1 and the file named", r.code, r.stderr)
 	}
-	if got, _ := os.ReadFile(ro); string(got) != strings.Replace(loopFile, "Orders", "Crates", 1) {
+	if got, _ := os.ReadFile(ro); string(got) != strings.ReplaceAll(loopFile, "Orders", "Crates") {
 		t.Errorf("the read-only file changed:\n%s", got)
 	}
 	if got, _ := os.ReadFile(filepath.Join(dir, "line", "a.go")); string(got) == loopFile {

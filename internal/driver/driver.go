@@ -15,7 +15,6 @@ import (
 	"io"
 	"os"
 	"path/filepath"
-	"sort"
 	"strings"
 
 	"golang.org/x/tools/go/analysis"
@@ -62,54 +61,92 @@ func Run(a *analysis.Analyzer, patterns []string, opts Options) int {
 }
 
 type run struct {
-	opts Options
-	dir  string // absolute
-	code int
+	opts     Options
+	dir      string // absolute
+	failed   bool   // an error happened
+	findings bool   // findings were reported (or a diff printed)
 }
 
-func (r *run) fail(code int) { r.code = max(r.code, code) }
+// code is the exit code: an error outranks findings, so that a broken
+// package is never mistaken for one that merely has findings.
+func (r *run) code() int {
+	switch {
+	case r.failed:
+		return ExitError
+	case r.findings:
+		return ExitFindings
+	}
+	return ExitClean
+}
 
 func (r *run) errorf(format string, args ...any) {
 	fmt.Fprintf(r.opts.Stderr, "overfact: "+format+"\n", args...)
-	r.fail(ExitError)
+	r.failed = true
 }
 
 func (r *run) main(a *analysis.Analyzer, patterns []string) int {
 	dir, err := filepath.Abs(r.opts.Dir)
 	if err != nil {
 		r.errorf("%v", err)
-		return r.code
+		return r.code()
 	}
 	r.dir = dir
-	pkgs, err := r.load(a, patterns)
+	graph, ok := r.analyze(a, patterns, nil, true)
+	if !ok {
+		return r.code()
+	}
+	if r.opts.Fix || r.opts.Diff {
+		r.fix(a, patterns, graph)
+	} else {
+		r.report(graph)
+	}
+	return r.code()
+}
+
+// analyze loads the packages, with overlay standing in for the files it
+// names, and runs a over them. The first pass reports load errors and
+// shows progress; the later passes of -fix are silent.
+func (r *run) analyze(a *analysis.Analyzer, patterns []string, overlay map[string][]byte, first bool) (*checker.Graph, bool) {
+	pkgs, err := r.load(a, patterns, overlay)
 	if err != nil {
 		r.errorf("%v", err)
-		return r.code
-	}
-	if n := printPackageErrors(r.opts.Stderr, pkgs); n > 0 {
-		r.fail(ExitError)
+		return nil, false
 	}
 	analyzer, finish := a, func() {}
-	if r.opts.Progress != nil {
-		analyzer, finish = withProgress(a, pkgs, r.opts.Progress)
+	if overlay != nil {
+		analyzer = withOverlay(a, overlay)
+	}
+	if first {
+		if n := printPackageErrors(r.opts.Stderr, pkgs); n > 0 {
+			r.failed = true
+		}
+		if r.opts.Progress != nil {
+			analyzer, finish = withProgress(a, pkgs, r.opts.Progress)
+		}
 	}
 	graph, err := checker.Analyze([]*analysis.Analyzer{analyzer}, pkgs, nil)
 	finish()
 	if err != nil {
 		r.errorf("%v", err)
-		return r.code
+		return nil, false
 	}
-	r.report(graph)
-	return r.code
+	if first {
+		for act := range graph.All() {
+			if act.Err != nil && act.IsRoot {
+				r.errorf("%s: %v", act.Package.ID, act.Err)
+			}
+		}
+	}
+	return graph, true
 }
 
-func (r *run) load(a *analysis.Analyzer, patterns []string) ([]*packages.Package, error) {
+func (r *run) load(a *analysis.Analyzer, patterns []string, overlay map[string][]byte) ([]*packages.Package, error) {
 	mode := packages.LoadSyntax | packages.NeedModule
 	if len(a.FactTypes) > 0 {
 		// Facts flow up from dependencies, which must be analysed too.
 		mode = packages.LoadAllSyntax | packages.NeedModule
 	}
-	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests}
+	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests, Overlay: overlay}
 	pkgs, err := packages.Load(cfg, patterns...)
 	if err == nil && len(pkgs) == 0 {
 		err = fmt.Errorf("%s matched no packages", strings.Join(patterns, " "))
@@ -118,15 +155,6 @@ func (r *run) load(a *analysis.Analyzer, patterns []string) ([]*packages.Package
 }
 
 func (r *run) report(graph *checker.Graph) {
-	for act := range graph.All() {
-		if act.Err != nil && act.IsRoot {
-			r.errorf("%s: %v", act.Package.ID, act.Err)
-		}
-	}
-	if r.opts.Fix || r.opts.Diff {
-		r.fix(graph.Roots)
-		return
-	}
 	if r.opts.SARIF != "" {
 		r.writeSARIF(graph.Roots)
 	}
@@ -137,50 +165,7 @@ func (r *run) report(graph *checker.Graph) {
 		return // as with go vet -json, findings alone do not fail the run
 	}
 	if n := writeText(r.opts.Stderr, r.dir, graph.Roots); n > 0 {
-		r.fail(ExitFindings)
-	}
-}
-
-func (r *run) fix(roots []*checker.Action) {
-	plan := planFixes(roots)
-	for _, id := range plan.refused {
-		r.errorf("not fixing %s: the package has errors", id)
-	}
-	names := make([]string, 0, len(plan.files))
-	for name := range plan.files {
-		names = append(names, name)
-	}
-	sort.Strings(names)
-	for _, name := range names {
-		r.fixFile(name, plan.files[name])
-	}
-	if plan.conflicts > 0 {
-		r.errorf("%d fixes overlap others and were not applied; run again to apply them", plan.conflicts)
-	}
-}
-
-func (r *run) fixFile(name string, edits []edit) {
-	old, err := os.ReadFile(name)
-	if err != nil {
-		r.errorf("%v", err)
-		return
-	}
-	fixed, err := apply(old, edits)
-	if err != nil {
-		r.errorf("fixing %s: %v", name, err)
-		return
-	}
-	if r.opts.Diff {
-		if err := writeUnified(r.opts.Stdout, relPath(r.dir, name), old, fixed); err != nil {
-			r.errorf("%v", err)
-		}
-		if string(old) != string(fixed) {
-			r.fail(ExitFindings)
-		}
-		return
-	}
-	if err := writeAtomic(name, fixed); err != nil {
-		r.errorf("%v", err)
+		r.findings = true
 	}
 }
 

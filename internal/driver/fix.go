@@ -35,18 +35,36 @@ func (e edit) overlaps(f edit) bool {
 
 // fixPlan is the set of accepted edits, per file.
 type fixPlan struct {
-	files     map[string][]edit
-	accepted  map[string]bool // fix keys, to drop the copy a test variant reports
-	conflicts int
-	refused   []string // packages not fixed because they have errors
+	files    map[string][]edit
+	accepted map[string]bool // fix keys, to drop the copy a test variant reports
+	// leftover counts, by findingKey, the findings whose fix clashed
+	// with an accepted one.
+	leftover map[string]int
+	refused  []string // packages not fixed because they have errors
+}
+
+// findingKey identifies a finding across re-analyses of edited text,
+// where its position moves but its file, category and message do not.
+func findingKey(fset *token.FileSet, d analysis.Diagnostic) string {
+	return fset.Position(d.Pos).Filename + "\x00" + d.Category + "\x00" + d.Message
+}
+
+func (p *fixPlan) leftoverCount() int {
+	n := 0
+	for _, c := range p.leftover {
+		n += c
+	}
+	return n
 }
 
 // planFixes selects the first suggested fix of every root diagnostic,
 // skipping packages that did not type-check and generated files, and
 // dropping a fix whose edits overlap an accepted one (identical edits,
-// such as the same import added twice, coalesce).
-func planFixes(roots []*checker.Action) *fixPlan {
-	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool)}
+// such as the same import added twice, coalesce). When only is not nil,
+// it takes only as many findings of each key as only counts: those left
+// over by the previous round.
+func planFixes(roots []*checker.Action, only map[string]int) *fixPlan {
+	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool), leftover: make(map[string]int)}
 	for _, act := range roots {
 		if act.Err != nil || len(act.Diagnostics) == 0 {
 			continue
@@ -55,10 +73,21 @@ func planFixes(roots []*checker.Action) *fixPlan {
 			p.refused = append(p.refused, act.Package.ID)
 			continue
 		}
-		generated := generatedFiles(act.Package.Fset, act.Package.Syntax)
+		fset := act.Package.Fset
+		generated := generatedFiles(fset, act.Package.Syntax)
 		for _, d := range act.Diagnostics {
-			if len(d.SuggestedFixes) > 0 {
-				p.add(act.Package.Fset, d.SuggestedFixes[0], generated)
+			if len(d.SuggestedFixes) == 0 {
+				continue
+			}
+			key := findingKey(fset, d)
+			if only != nil {
+				if only[key] == 0 {
+					continue
+				}
+				only[key]--
+			}
+			if !p.add(fset, d.SuggestedFixes[0], generated) {
+				p.leftover[key]++
 			}
 		}
 	}
@@ -75,7 +104,9 @@ func generatedFiles(fset *token.FileSet, files []*ast.File) map[string]bool {
 	return gen
 }
 
-func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated map[string]bool) {
+// add accepts fix unless it clashes with an accepted fix; it reports
+// false for a clash only.
+func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated map[string]bool) bool {
 	var edits []edit
 	for _, te := range fix.TextEdits {
 		end := te.End
@@ -84,20 +115,19 @@ func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated 
 		}
 		s, e := fset.Position(te.Pos), fset.Position(end)
 		if generated[s.Filename] {
-			return
+			return true
 		}
 		edits = append(edits, edit{s.Filename, s.Offset, e.Offset, string(te.NewText)})
 	}
 	key := fmt.Sprint(edits)
 	if p.accepted[key] {
-		return
+		return true
 	}
 	var fresh []edit
 	for _, e := range edits {
 		dup, clash := p.check(e)
 		if clash {
-			p.conflicts++
-			return
+			return false
 		}
 		if !dup {
 			fresh = append(fresh, e)
@@ -107,6 +137,7 @@ func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated 
 	for _, e := range fresh {
 		p.files[e.file] = append(p.files[e.file], e)
 	}
+	return true
 }
 
 // check reports whether e equals an accepted edit or clashes with one.

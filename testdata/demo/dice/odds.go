@@ -10,33 +10,18 @@ func perms(n int) int {
 	return n * perms(n-1)
 }
 
-// Patterns counts the throws of n dice showing face i counts[i] times:
-// the multinomial n!/(c1!...c6!).
-func Patterns(counts [6]int) int {
-	n := 0
-	for _, c := range counts {
-		n += c
-	}
-	den := 1
-	for _, c := range counts {
-		den *= perms(c)
-	}
-	return perms(n) / den
+// Patterns counts the throws of n dice that show ones ones and sixes
+// sixes, the rest being other faces: the multinomial
+// n!/(ones! sixes! (n-ones-sixes)!), before the other faces are told apart.
+func Patterns(n, ones, sixes int) int {
+	return perms(n) / (perms(ones) * perms(sixes) * perms(n-ones-sixes))
 }
 
-// Probability is the chance of a pattern among the 6^n equally likely
-// throws; the count is converted to float64 only after it was formed in
-// int.
-func Probability(counts [6]int) float64 {
-	n := 0
-	for _, c := range counts {
-		n += c
-	}
-	total := 1.0
-	for i := 0; i < n; i++ {
-		total *= 6
-	}
-	return float64(Patterns(counts)) / total
+// Orders is the number of orders in which n distinct dice can be lined
+// up on the table, as a float64 for the odds poster; the count is
+// converted only after it was formed in int.
+func Orders(n int) float64 {
+	return float64(perms(n))
 }
 
 // Table returns the chance of "all different" for a throw of one to six

@@ -14,8 +14,7 @@ func BallVolume(d float64) float64 {
 // EnergyShareDensity is the Beta(a, b) density at x, the share of the
 // energy held by a subsystem with 2a of the 2(a+b) degrees of freedom.
 func EnergyShareDensity(x, a, b float64) float64 {
-	norm := math.Gamma(a+b) / (math.Gamma(a) * math.Gamma(b))
-	return norm * math.Pow(x, a-1) * math.Pow(1-x, b-1)
+	return math.Gamma(a+b) / (math.Gamma(a) * math.Gamma(b)) * math.Pow(x, a-1) * math.Pow(1-x, b-1)
 }
 
 // SpeedMoment is the mean of v^k for Maxwell-Boltzmann speeds in three
@@ -24,14 +23,12 @@ func SpeedMoment(k int, s float64) float64 {
 	return math.Gamma(float64(k+3)/2) / math.Gamma(1.5) * math.Pow(s, float64(k))
 }
 
-// TaylorExp sums the first terms of the series of e^x, x^k/k!, as the
-// course's first exercise does.
+// TaylorExp sums 1 + x + x^2/2! + ... up to the term x^terms/terms!,
+// the series of e^x, as the course's first exercise does.
 func TaylorExp(x float64, terms int) float64 {
-	sum, fact := 0.0, 1.0
-	for k := 0; k < terms; k++ {
-		if k > 0 {
-			fact *= float64(k)
-		}
+	sum, fact := 1.0, 1.0
+	for k := 1; k <= terms; k++ {
+		fact *= float64(k)
 		sum += math.Pow(x, float64(k)) / fact
 	}
 	return sum

@@ -14,24 +14,21 @@ func factorial(c int) float64 {
 }
 
 // ErlangB is the probability that a call finds all c agents busy and is
-// lost, with traffic a in erlangs (calls per hour times hours per call).
+// lost, with traffic a in erlangs (calls per hour times hours per call):
+// (a^c/c!) / Σ a^k/k! for k = 0..c.
 func ErlangB(c int, a float64) float64 {
-	top := math.Pow(a, float64(c)) / factorial(c)
 	sum := 0.0
 	for k := 0; k <= c; k++ {
 		sum += math.Pow(a, float64(k)) / factorial(k)
 	}
-	return top / sum
+	return math.Pow(a, float64(c)) / factorial(c) / sum
 }
 
-// ErlangC is the probability that a call has to wait in the queue.
+// ErlangC is the probability that a call has to wait in the queue,
+// from Erlang B by the usual identity C = cB / (c − a(1 − B)).
 func ErlangC(c int, a float64) float64 {
-	term := math.Pow(a, float64(c)) / factorial(c) * float64(c) / (float64(c) - a)
-	sum := 0.0
-	for k := 0; k < c; k++ {
-		sum += math.Pow(a, float64(k)) / factorial(k)
-	}
-	return term / (sum + term)
+	b := ErlangB(c, a)
+	return float64(c) * b / (float64(c) - a*(1-b))
 }
 
 // AgentsNeeded returns the smallest staff whose waiting probability is
