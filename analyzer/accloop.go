@@ -49,7 +49,7 @@ type accLoop struct {
 
 // accLoopOf recognises a product loop; before are the statements that
 // precede the loop in its block, searched for the accumulator's start.
-func (fc *fnCtx) accLoopOf(s ast.Stmt, before []ast.Stmt) *accLoop {
+func (fc *fnCtx) accLoopOf(s ast.Stmt, before [][]ast.Stmt) *accLoop {
 	sh := fc.shapeOf(s)
 	if sh == nil {
 		return nil
@@ -169,18 +169,31 @@ func (fc *fnCtx) isDivOf(as *ast.AssignStmt, al *accLoop) bool {
 
 // constStart finds the statement, among those before the loop, that last
 // sets the accumulator, and returns it when it sets a non-zero constant.
-func (fc *fnCtx) constStart(acc types.Object, before []ast.Stmt) ast.Stmt {
-	for i := len(before) - 1; i >= 0; i-- {
-		switch st := before[i].(type) {
+func (fc *fnCtx) constStart(acc types.Object, before [][]ast.Stmt) ast.Stmt {
+	for j := len(before) - 1; j >= 0; j-- {
+		st, found := fc.startIn(acc, before[j])
+		if found {
+			return st
+		}
+	}
+	return nil
+}
+
+// startIn searches one block's statements backwards; found reports that
+// a statement touching the accumulator was met, st that it sets it to a
+// non-zero constant.
+func (fc *fnCtx) startIn(acc types.Object, list []ast.Stmt) (st ast.Stmt, found bool) {
+	for i := len(list) - 1; i >= 0; i-- {
+		switch st := list[i].(type) {
 		case *ast.AssignStmt:
 			for j, l := range st.Lhs {
 				if fc.c.objOf(l) != acc {
 					continue
 				}
 				if len(st.Rhs) == len(st.Lhs) && fc.nonZeroConst(st.Rhs[j]) {
-					return st
+					return st, true
 				}
-				return nil
+				return nil, true
 			}
 		case *ast.DeclStmt:
 			gd, ok := st.Decl.(*ast.GenDecl)
@@ -194,18 +207,18 @@ func (fc *fnCtx) constStart(acc types.Object, before []ast.Stmt) ast.Stmt {
 						continue
 					}
 					if len(vs.Values) == len(vs.Names) && fc.nonZeroConst(vs.Values[j]) {
-						return st
+						return st, true
 					}
-					return nil
+					return nil, true
 				}
 			}
 		default:
 			if mentions(fc.c.pass.TypesInfo, st, acc) {
-				return nil
+				return nil, true
 			}
 		}
 	}
-	return nil
+	return nil, false
 }
 
 func (fc *fnCtx) nonZeroConst(e ast.Expr) bool {

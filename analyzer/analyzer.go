@@ -2,6 +2,7 @@ package analyzer
 
 import (
 	"fmt"
+	"io"
 	"go/ast"
 	"go/token"
 	"go/types"
@@ -24,6 +25,13 @@ var Analyzer = &analysis.Analyzer{
 }
 
 var debug bool
+
+// debugOut receives the debug log; tests replace it.
+var debugOut io.Writer = os.Stderr
+
+// testHook, when set by a test, runs at the start of each function's
+// checks, so that a test can make one of them fail.
+var testHook func(ast.Node)
 
 func init() {
 	Analyzer.Flags.BoolVar(&debug, "debug", false, "log functions skipped after an internal error to stderr")
@@ -105,7 +113,7 @@ func run(pass *analysis.Pass) (any, error) {
 func (c *checker) guard(n ast.Node, f func()) {
 	defer func() {
 		if r := recover(); r != nil && debug {
-			fmt.Fprintf(os.Stderr, "overfact: %s: skipped function after internal error: %v\n", c.pass.Fset.Position(n.Pos()), r)
+			fmt.Fprintf(debugOut, "overfact: %s: skipped function after internal error: %v\n", c.pass.Fset.Position(n.Pos()), r)
 		}
 	}()
 	f()

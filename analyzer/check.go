@@ -56,6 +56,9 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 
 // checkFunc reports the findings of one function.
 func (c *checker) checkFunc(n ast.Node) {
+	if testHook != nil {
+		testHook(n)
+	}
 	fc := c.ctx(n)
 	body := funcBody(n)
 	fc.eachLoop(body, fc.checkAccLoop)
