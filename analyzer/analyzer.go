@@ -2,10 +2,10 @@ package analyzer
 
 import (
 	"fmt"
-	"io"
 	"go/ast"
 	"go/token"
 	"go/types"
+	"io"
 	"os"
 
 	"golang.org/x/tools/go/analysis"
