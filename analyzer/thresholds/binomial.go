@@ -111,9 +111,11 @@ func tooWide(n, k int64, max *big.Int) bool {
 // at the first intermediate beyond max or at a zero product; the
 // magnitudes grow like binomial coefficients, so a long run ends early.
 func simulateLoop(n, k int64, max *big.Int) bool {
-	b, f, q := big.NewInt(1), new(big.Int), new(big.Int)
+	// The factors are kept in big.Int: n−k can pass the int64 range.
+	b, q, one := big.NewInt(1), new(big.Int), big.NewInt(1)
+	f := new(big.Int).Sub(big.NewInt(n), big.NewInt(k))
 	for i := int64(1); i <= k; i++ {
-		f.SetInt64(n - k + i)
+		f.Add(f, one)
 		b.Mul(b, f)
 		if b.CmpAbs(max) > 0 {
 			return false

@@ -52,7 +52,13 @@ func FallingFits(t Num, n, k int64) bool {
 	if k <= 0 || n < k {
 		return true
 	}
-	return n < FallingFirstBad(t, k)
+	first := FallingFirstBad(t, k)
+	if first == math.MaxInt64 && n >= searchCap {
+		// The search stops at 2^62; beyond it decide exactly. k is
+		// below the factorial limit here, so the product is short.
+		return fallingProduct(n, k).CmpAbs(t.maxInt()) <= 0
+	}
+	return n < first
 }
 
 // RisingFirstBad returns, for a fixed x, the first n ≥ 1 for which the
@@ -81,7 +87,7 @@ func RisingFirstBad(t Num, x int64) int64 {
 				return risingBounds(x, n)
 			},
 			fits: func(n int64, max *big.Int) bool {
-				return new(big.Int).MulRange(x, x+n-1).CmpAbs(max) <= 0
+				return risingProduct(x, n).CmpAbs(max) <= 0
 			},
 		}
 		return firstBad(s, t.maxInt(), t.logMax())
@@ -90,15 +96,33 @@ func RisingFirstBad(t Num, x int64) int64 {
 
 // risingBounds bounds ln(x(x+1)…(x+n−1)) for x, n ≥ 1 by the better of
 // n·ln x ≤ · ≤ n·ln(x+n−1) and Robbins' bounds on (x+n−1)!/(x−1)!; the
-// first is tight for large x, the second for small x.
+// first is tight for large x, the second for small x. The top factor is
+// taken in float64, as x+n−1 may pass math.MaxInt64.
 func risingBounds(x, n int64) (lo, hi float64) {
-	top := x + n - 1
-	lo, hi = float64(n)*math.Log(float64(x)), float64(n)*math.Log(float64(top))
+	top := float64(x) + float64(n-1)
+	lo, hi = float64(n)*math.Log(float64(x)), float64(n)*math.Log(top)
 	lo, hi = widen(lo, hi, hi)
-	tlo, thi := LogFactorialBounds(top)
+	if x > math.MaxInt64-(n-1) {
+		return lo, hi
+	}
+	tlo, thi := LogFactorialBounds(x + n - 1)
 	blo, bhi := LogFactorialBounds(x - 1)
 	rlo, rhi := widen(tlo-bhi, thi-blo, thi+bhi)
 	return math.Max(lo, rlo), math.Min(hi, rhi)
+}
+
+// risingProduct returns x(x+1)…(x+n−1) exactly for x, n ≥ 1, also when
+// the top factor passes math.MaxInt64.
+func risingProduct(x, n int64) *big.Int {
+	if x <= math.MaxInt64-(n-1) {
+		return new(big.Int).MulRange(x, x+n-1)
+	}
+	p, f, one := big.NewInt(1), big.NewInt(x), big.NewInt(1)
+	for range n {
+		p.Mul(p, f)
+		f.Add(f, one)
+	}
+	return p
 }
 
 // risingNegative handles x(x+1)…(x+n−1) for x = −m < 0: its magnitude

@@ -95,3 +95,32 @@ func TestRisingFirstBad(t *testing.T) {
 		t.Error("10! fits and zero products fit")
 	}
 }
+
+func TestRisingHugeBase(t *testing.T) {
+	// x = MaxInt64: x itself fits int64, x(x+1) does not; in float64
+	// (max ≈ 2^1024) the products of x ≈ 2^63 fit up to 16 factors,
+	// since 2^(63·16) < 2^1024 < 2^(63·17) (common practice).
+	i64, f64 := mustNamed(t, "int64", nil), mustNamed(t, "float64", nil)
+	if got := RisingFirstBad(i64, math.MaxInt64); got != 2 {
+		t.Errorf("RisingFirstBad(int64, MaxInt64) = %d, want 2", got)
+	}
+	if got := RisingFirstBad(f64, math.MaxInt64); got != 17 {
+		t.Errorf("RisingFirstBad(float64, MaxInt64) = %d, want 17", got)
+	}
+}
+
+func TestFallingFitsBeyondCap(t *testing.T) {
+	// (2^63−1)^16 < 2^1008 fits float64; n(n−1) for n = 2^63−1 does not
+	// fit uint64 (≈ 2^126).
+	f64, u64 := mustNamed(t, "float64", nil), mustNamed(t, "uint64", nil)
+	if !FallingFits(f64, math.MaxInt64, 16) {
+		t.Error("(MaxInt64)_16 judged not to fit float64")
+	}
+	if FallingFits(u64, math.MaxInt64, 2) || !FallingFits(u64, math.MaxInt64, 1) {
+		t.Error("uint64 falling products near MaxInt64 misjudged")
+	}
+	want := fallingRef(math.MaxInt64, 16).Cmp(f64.MaxInt()) <= 0
+	if !want {
+		t.Error("reference: (MaxInt64)_16 exceeds MaxFloat64")
+	}
+}
