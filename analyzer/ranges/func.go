@@ -247,6 +247,9 @@ func (f *Func) Reachable(n ast.Node) bool {
 // reached. It descends from the root along the nodes that contain n, so
 // it costs the depth of n times the fan-out, not the function size.
 func (f *Func) locate(n ast.Node) (snap **facts, reached bool) {
+	if s, ok := f.snaps[n]; ok {
+		return &s, true
+	}
 	if n.Pos() < f.root.Pos() || n.End() > f.root.End() {
 		return nil, true
 	}

@@ -119,6 +119,14 @@ func crew(n int) int {
 	}
 	return n/*@range (-inf, 30]*/
 }`},
+	{"t.Fatalf does not return", `package p
+import "testing"
+func crew(t *testing.T, n int) int {
+	if n > 30 {
+		t.Fatalf("crew of %d is too big", n)
+	}
+	return n/*@range (-inf, 30]*/
+}`},
 	{"an ordinary call returns", `package p
 import "log"
 func crew(n int) int {
@@ -214,6 +222,45 @@ func mix(n int) int {
 	d := 100 - n/*@range [90, 98]*/
 	e := n << 2/*@range [8, 40]*/
 	return a + b + c + d + e
+}`},
+	// -MinInt64 wraps to MinInt64, so an unbounded n gives Top.
+	{"negating an unbounded value", `package p
+func mix(n int) int {
+	if n > 5 {
+		return 0
+	}
+	return -n/*@range (-inf, +inf)*/
+}`},
+	{"negating a bounded value", `package p
+func mix(n int) int {
+	if n > 5 || n < -5 {
+		return 0
+	}
+	return -n/*@range [-5, 5]*/
+}`},
+	{"min of unknowns", `package p
+func mix(n, m int) int {
+	return min(n, m)/*@range (-inf, +inf)*/
+}`},
+	{"uint64 strict bound keeps +inf", `package p
+func mix(u, v uint64) uint64 {
+	if u < v {
+		return u/*@range [0, +inf)*/
+	}
+	return 0
+}`},
+	{"uint guard", `package p
+func mix(u uint) uint {
+	if u > 20 {
+		return 0
+	}
+	return u * 2/*@range [0, 40]*/
+}`},
+	{"constant past int64", `package p
+func mix() uint64 {
+	const big = 1 << 63
+	var u uint64 = big
+	return u/*@range [+inf, +inf)*/
 }`},
 	{"wrapping makes top", `package p
 func mix(n int) int {

@@ -111,7 +111,7 @@ func (w *walker) rangeKey(x ast.Expr, xr Interval) (key, val Interval) {
 		return Top(), Top()
 	}
 	if k := kindOf(tv.Type); k.ok && !k.float {
-		return Span(0, strictBelow(xr.Hi, w.f.opts.NoWrap)).Meet(Interval{0, posInf}), Top()
+		return Span(0, strictBelow(xr.Hi, w.f.opts.NoWrap || k.u64)).Meet(Interval{0, posInf}), Top()
 	}
 	t := tv.Type.Underlying()
 	if p, ok := t.(*types.Pointer); ok {

@@ -112,6 +112,15 @@ func drain(n int) int {
 	}
 	return n/*@range (-inf, 1]*/
 }`},
+	{"while loop from an unbounded start", `package p
+func drain(n int) int {
+	r := 1
+	for n > 1 {
+		r *= n/*@range [2, +inf)*/
+		n--
+	}
+	return r
+}`},
 	{"exit value of an up loop", `package p
 func lastIndex(n int) int {
 	if n < 0 || n > 20 {
@@ -131,6 +140,19 @@ func pairs(n int) int {
 	for i := 0; i < n; i++ {
 		for j := i; j < n; j++ {
 			s += j/*@range [0, 9]*/
+		}
+	}
+	return s
+}`},
+	{"nested loop with an unbounded inner limit", `package p
+func pairs(n, m int) int {
+	if n < 0 || n > 10 {
+		return 0
+	}
+	s := 0
+	for i := 0; i < n; i++ {
+		for j := i; j <= m; j++ {
+			s += i/*@range [0, 9]*/ + j/*@range (-inf, +inf)*/
 		}
 	}
 	return s

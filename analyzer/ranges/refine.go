@@ -171,20 +171,23 @@ func (w *walker) narrowVar(s state, id *ast.Ident, op token.Token, b Interval) s
 		return s
 	}
 	cur := w.f.get(s, obj, id)
-	float := kindOf(obj.Type()).float
+	k := kindOf(obj.Type())
+	float := k.float
+	// For 64-bit unsigned types +inf covers every value past MaxInt64.
+	inf := w.f.opts.NoWrap || k.u64
 	var c Interval
 	switch op {
 	case token.LSS:
 		c = Interval{negInf, b.Hi}
 		if !float {
-			c.Hi = strictBelow(b.Hi, w.f.opts.NoWrap)
+			c.Hi = strictBelow(b.Hi, inf)
 		}
 	case token.LEQ:
 		c = Interval{negInf, b.Hi}
 	case token.GTR:
 		c = Interval{b.Lo, posInf}
 		if !float {
-			c.Lo = strictAbove(b.Lo, w.f.opts.NoWrap)
+			c.Lo = strictAbove(b.Lo, inf)
 		}
 	case token.GEQ:
 		c = Interval{b.Lo, posInf}
