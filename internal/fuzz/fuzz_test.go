@@ -82,7 +82,10 @@ func checkPackage(t *testing.T, a *analysis.Analyzer, path string, src map[strin
 		return
 	}
 	mark := analyzerLog.mark()
+	stderr := os.Stderr
+	os.Stderr = analyzerLog.f
 	diags, err := Run(a, pkg)
+	os.Stderr = stderr
 	if err != nil {
 		t.Fatalf("analyzer error on valid code: %v\n%s", err, dump(src))
 	}
@@ -123,7 +126,9 @@ func dump(src map[string][]byte) string {
 	return b.String()
 }
 
-// analyzerLog catches what the analyzer writes to standard error. Its
+// analyzerLog catches what the analyzer writes to standard error while it
+// runs (os.Stderr points to it only then, so the fuzzing engine's own
+// output is untouched). Its
 // debug flag makes it log each function it skipped after recovering from a
 // panic; the fuzz target counts those as crashes.
 var analyzerLog = newStderrLog()
@@ -139,7 +144,6 @@ func newStderrLog() *stderrLog {
 		panic(err)
 	}
 	os.Remove(f.Name()) // kept open; gone when the process ends
-	os.Stderr = f
 	return &stderrLog{f}
 }
 
