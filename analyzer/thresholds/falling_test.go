@@ -21,7 +21,7 @@ func TestFallingFirstBad(t *testing.T) {
 	for _, name := range []string{"int8", "uint8", "int16", "int32", "int64", "uint64", "float32", "float64"} {
 		typ := mustNamed(t, name, nil)
 		max := typ.MaxInt()
-		for k := int64(1); k <= 40; k++ {
+		for k := int64(1); k <= Factorial(typ).FirstBad+2; k++ {
 			got := FallingFirstBad(typ, k)
 			if got == math.MaxInt64 {
 				// Nothing below 2^62 breaks: the product at 2^62 fits.

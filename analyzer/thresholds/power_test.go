@@ -3,6 +3,7 @@ package thresholds
 import (
 	"math"
 	"math/big"
+	"math/rand/v2"
 	"testing"
 )
 
@@ -76,6 +77,23 @@ func TestPowerNearOne(t *testing.T) {
 			want := math.Log(mf) / math.Log1p(x-1)
 			if math.Abs(float64(k)-want) > 1+1e-9*want {
 				t.Errorf("PowerFirstBad(%s, %v) = %d, want ≈ %.1f", name, x, k, want)
+			}
+		}
+	}
+}
+
+// TestPowerRandomExact checks pseudo-random bases in [1.05, 10^6) exactly
+// (a fixed seed keeps the run reproducible).
+func TestPowerRandomExact(t *testing.T) {
+	r := rand.New(rand.NewPCG(1, 2))
+	for _, name := range []string{"int64", "uint32", "float32", "float64"} {
+		typ := mustNamed(t, name, nil)
+		max := typ.MaxInt()
+		for range 40 {
+			x := math.Exp(math.Log(1.05) + r.Float64()*(math.Log(1e6)-math.Log(1.05)))
+			k := PowerFirstBad(typ, x)
+			if !powerExceeds(x, k, max) || (k > 0 && powerExceeds(x, k-1, max)) {
+				t.Errorf("PowerFirstBad(%s, %v) = %d fails the exact check", name, x, k)
 			}
 		}
 	}
