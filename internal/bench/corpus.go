@@ -1,8 +1,10 @@
 package main
 
 import (
+	"cmp"
 	"encoding/json"
 	"fmt"
+	"go/token"
 	"os"
 	"path/filepath"
 	"runtime/debug"
@@ -20,6 +22,8 @@ type finding struct {
 	Category string `json:"category,omitempty"`
 	Message  string `json:"message"`
 	Fixes    int    `json:"fixes"`
+
+	pos token.Position
 }
 
 // panicError marks an analyzer run that panicked, so crashes are counted
@@ -85,8 +89,12 @@ func corpus(patterns []string) error {
 			errs++
 			fmt.Fprintf(os.Stderr, "ERROR in %s: %v\n", act.Package.ID, act.Err)
 		}
+		if !act.IsRoot {
+			continue // drivers report findings of the named packages only
+		}
 		for _, d := range act.Diagnostics {
-			f := finding{shortPos(act.Package.Fset.Position(d.Pos).String()), d.Category, d.Message, len(d.SuggestedFixes)}
+			p := act.Package.Fset.Position(d.Pos)
+			f := finding{shortPos(p.String()), d.Category, d.Message, len(d.SuggestedFixes), p}
 			key := f.Pos + "\x00" + f.Message
 			if !seen[key] {
 				seen[key] = true
@@ -94,7 +102,12 @@ func corpus(patterns []string) error {
 			}
 		}
 	}
-	slices.SortFunc(found, func(x, y finding) int { return strings.Compare(x.Pos, y.Pos) })
+	slices.SortFunc(found, func(x, y finding) int {
+		if c := strings.Compare(x.pos.Filename, y.pos.Filename); c != 0 {
+			return c
+		}
+		return cmp.Compare(x.pos.Offset, y.pos.Offset)
+	})
 	fmt.Printf("patterns %v (tests=%v): %d root packages, %d analyzer actions (dependencies included), %d crashes (%d of them recovered inside the analyzer), %d analyzer errors, %d findings\n",
 		patterns, *testsFlag, len(pkgs), actions, crashes, recovered, errs, len(found))
 	for _, f := range found {
