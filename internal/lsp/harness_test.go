@@ -232,25 +232,14 @@ func (c *client) initialize(caps map[string]any) initializeResult {
 // skipping other notifications; it returns the accepted params.
 func (c *client) diagnosticsFor(uri string, ok func(publishDiagnosticsParams) bool) publishDiagnosticsParams {
 	c.t.Helper()
-	deadline := time.After(timeout)
 	for {
-		select {
-		case m, open := <-c.notes:
-			if !open {
-				c.t.Fatalf("server closed its output while waiting for diagnostics of %s", uri)
-			}
-			if m.Method != "textDocument/publishDiagnostics" {
-				continue
-			}
-			var p publishDiagnosticsParams
-			if err := json.Unmarshal(m.Params, &p); err != nil {
-				c.t.Fatal(err)
-			}
-			if p.URI == uri && ok(p) {
-				return p
-			}
-		case <-deadline:
-			c.t.Fatalf("no matching diagnostics for %s within %v", uri, timeout)
+		m := c.note("textDocument/publishDiagnostics")
+		var p publishDiagnosticsParams
+		if err := json.Unmarshal(m.Params, &p); err != nil {
+			c.t.Fatal(err)
+		}
+		if p.URI == uri && ok(p) {
+			return p
 		}
 	}
 }

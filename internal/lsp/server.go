@@ -300,30 +300,27 @@ func (s *server) notification(method string, params json.RawMessage) (done bool,
 	var perr error
 	switch method {
 	case "textDocument/didOpen":
-		var p didOpenParams
-		if perr = json.Unmarshal(params, &p); perr == nil {
-			perr = s.didOpen(p)
-		}
+		perr = decodeThen(params, s.didOpen)
 	case "textDocument/didChange":
-		var p didChangeParams
-		if perr = json.Unmarshal(params, &p); perr == nil {
-			perr = s.didChange(p)
-		}
+		perr = decodeThen(params, s.didChange)
 	case "textDocument/didSave":
-		var p didSaveParams
-		if perr = json.Unmarshal(params, &p); perr == nil {
-			perr = s.didSave(p)
-		}
+		perr = decodeThen(params, s.didSave)
 	case "textDocument/didClose":
-		var p didCloseParams
-		if perr = json.Unmarshal(params, &p); perr == nil {
-			perr = s.didClose(p)
-		}
+		perr = decodeThen(params, s.didClose)
 	}
 	if perr != nil {
 		s.log.Printf("%s: %v", method, perr)
 	}
 	return false, nil
+}
+
+// decodeThen decodes params into a P and passes it to f.
+func decodeThen[P any](params json.RawMessage, f func(P) error) error {
+	var p P
+	if err := json.Unmarshal(params, &p); err != nil {
+		return err
+	}
+	return f(p)
 }
 
 func (s *server) encoding() encoding {
