@@ -13,6 +13,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/overfact/overfact/analyzer"
 	"github.com/overfact/overfact/fixes"
 )
 
@@ -56,6 +57,22 @@ var diffCases = []diffCase{
 	{pkg: "probeterm", fn: "Mix", loops: []string{"a := 1; a <= 200; a += 9", "b := 1; b <= 200; b += 13"}, args: "float64(a), float64(b)", typ: "float64", ref: refBeta},
 	{pkg: "probeimports", fn: "Plans", loops: []string{"n := 0; n <= 300; n += 7", "k := 0; k <= n; k += 1 + n/5"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "probeimports", fn: "Tail", loops: []string{"n := 0; n <= 300; n += 7", "k := 0; k <= 30 && k <= n; k += 3"}, args: "n, k", typ: "float64", ref: refFalling},
+	// The real analyzer's fix packages.
+	{pkg: "fixratio", fn: "Rotas", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
+	{pkg: "fixratio", fn: "RotaShare", loops: []string{"n := 0; n <= 400; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixratio", fn: "Orders", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
+	{pkg: "fixratio", fn: "Shifts", loops: []string{"a := 0; a <= 90; a += 9", "b := 0; b <= 90; b += 10", "c := 0; c <= 40; c += 8"}, args: "a, b, c", typ: "float64", ref: refMultinomial},
+	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
+	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
+	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
+	{pkg: "fixterm", fn: "Lot", loops: []string{"total := 60; total <= 240; total += 60", "k := 0; k <= 30; k += 2"}, args: "k, total, 30, 40", typ: "float64", ref: refHypergeometric},
+	{pkg: "fixterm", fn: "Spread", loops: []string{"a := 1; a <= 220; a += 7", "b := 1; b <= 220; b += 11"}, args: "float64(a), float64(b)", typ: "float64", ref: refGammaRatio},
+	{pkg: "fixterm", fn: "Mix", loops: []string{"a := 1; a <= 200; a += 9", "b := 1; b <= 200; b += 13"}, args: "float64(a), float64(b)", typ: "float64", ref: refBeta},
+	{pkg: "fixloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
+	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
+	{pkg: "fixguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
+	{pkg: "fixguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, guard: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 }
 
@@ -71,14 +88,28 @@ func TestDifferential(t *testing.T) {
 		t.Skip("no go command")
 	}
 	pkgs := diffPackages()
-	dir := gopath(t, filepath.Join("testdata", "src"), pkgs...)
 	mod := t.TempDir()
-	for _, p := range pkgs {
-		copyDir(t, filepath.Join("testdata", "src", p), filepath.Join(mod, "orig", p), false)
-	}
-	applyFirstFixes(t, dir, probe, pkgs...)
-	for _, p := range pkgs {
-		copyDir(t, filepath.Join(dir, "src", p), filepath.Join(mod, "fixed", p), false)
+	// Packages named fix* are the real analyzer's, in the repository's
+	// testdata; the others are the probe's, in this package's.
+	for _, real := range []bool{false, true} {
+		root, a := filepath.Join("testdata", "src"), probe
+		if real {
+			root, a = filepath.Join("..", "testdata", "src"), analyzer.Analyzer
+		}
+		var some []string
+		for _, p := range pkgs {
+			if strings.HasPrefix(p, "fix") == real {
+				some = append(some, p)
+			}
+		}
+		dir := gopath(t, root, some...)
+		for _, p := range some {
+			copyDir(t, filepath.Join(root, p), filepath.Join(mod, "orig", p), false)
+		}
+		applyFirstFixes(t, dir, a, some...)
+		for _, p := range some {
+			copyDir(t, filepath.Join(dir, "src", p), filepath.Join(mod, "fixed", p), false)
+		}
 	}
 	helper, err := filepath.Abs("lgamma")
 	if err != nil {
