@@ -22,9 +22,7 @@ func (s *server) codeActions(p codeActionParams) []CodeAction {
 	if d == nil {
 		return actions
 	}
-	if r := s.cached(path); r == nil || r.version != d.version {
-		s.refresh(path)
-	}
+	s.refresh(path, true)
 	r := s.cached(path)
 	if r == nil || r.version != d.version {
 		return actions

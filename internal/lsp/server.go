@@ -396,7 +396,7 @@ func (s *server) schedule(path string, delay time.Duration) {
 	s.timers[path] = time.AfterFunc(delay, func() {
 		defer s.wg.Done()
 		defer s.recoverTo("analysis")
-		s.refresh(path)
+		s.refresh(path, false)
 	})
 }
 
@@ -419,7 +419,11 @@ func (s *server) stop() {
 // publishes the findings of each of its open files whose buffer has not
 // changed meanwhile; results for a changed buffer are dropped, since the
 // analysis its change scheduled will replace them.
-func (s *server) refresh(path string) {
+//
+// With onlyIfStale, a file whose published findings are already those of
+// its current version is left alone: a code action request arriving while
+// the analysis its didOpen scheduled runs then waits for that one only.
+func (s *server) refresh(path string, onlyIfStale bool) {
 	s.analysisMu.Lock()
 	defer s.analysisMu.Unlock()
 	if s.ctx.Err() != nil {
@@ -429,6 +433,9 @@ func (s *server) refresh(path string) {
 	d, ok := docs[path]
 	if !ok {
 		return // closed while waiting
+	}
+	if r := s.cached(path); onlyIfStale && r != nil && r.version == d.version {
+		return
 	}
 	start := time.Now()
 	res, err := analyze(s.ctx, &s.opts, &s.pkgs, docs, path, s.encoding())
