@@ -81,7 +81,15 @@ local function run()
   end
 
   -- Ask for code actions at the diagnostic, in the client's own encoding.
-  local _, start16 = vim.str_utfindex(line, d.col)
+  -- vim.str_utfindex took (line, byte index) until 0.10 and takes
+  -- (line, encoding, byte index) from 0.11 on.
+  local start16
+  if vim.fn.has("nvim-0.11") == 1 then
+    start16 = vim.str_utfindex(line, "utf-16", d.col)
+  else
+    local _
+    _, start16 = vim.str_utfindex(line, d.col)
+  end
   local start = d.col
   if client.offset_encoding == "utf-16" then
     start = start16
