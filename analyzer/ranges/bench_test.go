@@ -2,6 +2,8 @@ package ranges
 
 import (
 	"fmt"
+	"go/ast"
+	"go/types"
 	"testing"
 )
 
@@ -20,4 +22,40 @@ func BenchmarkAnalyzeHuge(b *testing.B) {
 			b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(lines), "ns/line")
 		})
 	}
+}
+
+// BenchmarkStdlib analyses every function of a few standard packages
+// and reports the cost per AST node next to a plain ast.Inspect.
+func BenchmarkStdlib(b *testing.B) {
+	var funcs []*ast.FuncDecl
+	var infos []*types.Info
+	nodes := 0
+	for _, path := range corpusPackages {
+		_, files, info := loadStd(b, path)
+		for _, f := range files {
+			for _, d := range f.Decls {
+				if fd, ok := d.(*ast.FuncDecl); ok && fd.Body != nil {
+					funcs = append(funcs, fd)
+					infos = append(infos, info)
+					ast.Inspect(fd, func(ast.Node) bool { nodes++; return true })
+				}
+			}
+		}
+	}
+	b.Run("analyze", func(b *testing.B) {
+		for b.Loop() {
+			for i, fd := range funcs {
+				Analyze(infos[i], fd, Options{})
+			}
+		}
+		b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(nodes), "ns/node")
+	})
+	b.Run("inspect", func(b *testing.B) {
+		for b.Loop() {
+			for _, fd := range funcs {
+				ast.Inspect(fd, func(ast.Node) bool { return true })
+			}
+		}
+		b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(nodes), "ns/node")
+	})
 }

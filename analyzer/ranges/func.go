@@ -185,9 +185,9 @@ func (f *Func) get(s state, obj types.Object, at ast.Node) Interval {
 
 // Of returns the range of the integer- or float-valued expression e
 // where it is evaluated (e must be a node inside fn): Top when nothing
-// is known, Empty when that point is unreachable. For floats the bounds
-// are rounded outwards to integers. For a variable on the left of an
-// assignment it is the value assigned.
+// is known (or e is not a numeric value), Empty when that point is
+// unreachable. For floats the bounds are rounded outwards to integers.
+// For a variable on the left of an assignment it is the value assigned.
 func (f *Func) Of(e ast.Expr) Interval {
 	if e == nil {
 		return Top()
@@ -201,10 +201,14 @@ func (f *Func) Of(e ast.Expr) Interval {
 	if _, reached := f.locate(e); !reached {
 		return Empty()
 	}
-	if tv, ok := f.info.Types[e]; ok && tv.Value != nil {
+	tv, ok := f.info.Types[e]
+	switch {
+	case !ok || !tv.IsValue():
+		return Top()
+	case tv.Value != nil:
 		return constRange(tv.Value)
 	}
-	return Top()
+	return kindOf(tv.Type).top
 }
 
 // At returns the range of variable v at the program point just before

@@ -29,6 +29,12 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 		_, exit := trip(head)
 		return exit
 	}
+	if !w.f.carries(n) {
+		// Nothing flows from one trip to the next: the entry state
+		// is already the fixpoint.
+		_, exit := trip(entry)
+		return exit
+	}
 	visits := w.f.opts.MaxVisits
 	if w.loops > 2 {
 		visits = 1
@@ -53,6 +59,26 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	// of the loop's transfer function, is still sound and often tighter.
 	_, exit := trip(entry.join(next))
 	return exit
+}
+
+// carries reports whether loop n assigns a variable that lives across
+// trips: one declared before the loop or in a for statement's init.
+// Variables declared in the body, and the keys a range statement
+// declares, start afresh on every trip.
+func (f *Func) carries(n ast.Node) bool {
+	var body ast.Node = n
+	switch n := n.(type) {
+	case *ast.ForStmt:
+		body = n.Body
+	case *ast.RangeStmt:
+		body = n
+	}
+	for _, obj := range f.assignedIn(n) {
+		if p := obj.Pos(); p < body.Pos() || p >= body.End() {
+			return true
+		}
+	}
+	return false
 }
 
 // overBudget reports whether the walk has spent its allowance of
