@@ -5,6 +5,7 @@ import (
 	"go/ast"
 	"go/types"
 	"math"
+	"strconv"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -37,7 +38,7 @@ func plus(name string, off int64) string {
 // whether the overflow is certain.
 func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
 	switch {
-	case name == "":
+	case name == "" || isConst(name):
 		return "", iv.Lo >= firstBad
 	case iv.Lo >= firstBad && iv.Lo != math.MinInt64:
 		return fmt.Sprintf("; %s is at least %d here", name, iv.Lo), true
@@ -52,6 +53,9 @@ func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
 // largest that fits)".
 func factorialLimitText(kind facKind, name string, off int64, t numType) string {
 	first := firstBadOf(kind, t)
+	if v, err := strconv.ParseInt(name, 0, 64); err == nil {
+		name, off = "", v+off
+	}
 	what := "factorial"
 	if kind == kindDouble {
 		what = "double factorial"
@@ -81,4 +85,10 @@ func typeLimit(v int64) bool {
 		return true
 	}
 	return false
+}
+
+// isConst reports whether a rendered expression is an integer literal.
+func isConst(name string) bool {
+	_, err := strconv.ParseInt(name, 0, 64)
+	return err == nil
 }

@@ -62,9 +62,11 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 			dens = append(dens, f)
 		}
 	}
-	name := plus(src(u.arg), u.off)
 	clause, definite := verdict(src(u.arg), r, first)
 	breaks := fmt.Sprintf("the numerator %s %s for %s ≥ %d", bang(u.arg, u.off), verb(u.t), src(u.arg), first)
+	if isConst(src(u.arg)) {
+		breaks = fmt.Sprintf("the numerator %s %s, as every factorial from %s does", bang(u.arg, u.off), verb(u.t), bang(&ast.BasicLit{Value: fmt.Sprint(first + u.off)}, 0))
+	}
 	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
 	var msg string
 	shape := fixes.ShapeNone
@@ -74,7 +76,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	switch {
 	case shape == fixes.ShapeBinomial:
 		central := thresholds.CentralBinomial(u.t.Num)
-		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, name, name, name, central.FirstBad-1)
+		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s, although C(n, n/2) itself fits up to n = %d", u.t.typeName(), breaks, central.FirstBad-1)
 	case shape == fixes.ShapeCatalan:
 		// The threshold is stated for n, the half of the numerator's
 		// argument, as the Catalan number is indexed by it.

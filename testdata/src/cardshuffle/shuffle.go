@@ -131,7 +131,7 @@ func TwoPiles(a, b int64) int64 {
 
 // Pinochle uses a double deck of 48, always past the limit.
 func Pinochle() int64 {
-	return Orderings(48) / (Orderings(12) * Orderings(36)) // want `binomial coefficient as a ratio of factorials in int64: the numerator 48! wraps for 48 ≥ 21.*`
+	return Orderings(48) / (Orderings(12) * Orderings(36)) // want `binomial coefficient as a ratio of factorials in int64: the numerator 48! wraps, as every factorial from 21! does, although C\(n, n/2\) itself fits up to n = 66`
 }
 
 // Euchre deals 5 from 24: a constant, but 24! already wraps.
