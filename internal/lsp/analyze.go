@@ -42,6 +42,9 @@ type result struct {
 	// same paths.
 	versions map[string]int32
 	findings map[string][]finding
+	// rechecked says the package was re-checked against cached
+	// dependencies rather than loaded afresh.
+	rechecked bool
 }
 
 // analyze loads the package containing path with the open buffers as an
@@ -68,6 +71,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		Overlay: overlay,
 		Tests:   strings.HasSuffix(path, "_test.go"),
 	}
+	reusedBefore := cache.reuses()
 	roots, err := load(cfg, path, cache)
 	if err != nil {
 		return nil, err
@@ -80,7 +84,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		return nil, err
 	}
 	conv := converter{enc: enc, overlay: overlay, fset: roots[0].Fset, texts: make(map[string][]byte), severity: opts.Severity}
-	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding)}
+	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding), rechecked: cache.reuses() > reusedBefore}
 	for _, p := range roots {
 		for _, f := range p.CompiledGoFiles {
 			if d, ok := docs[f]; ok {

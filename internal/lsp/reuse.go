@@ -30,7 +30,7 @@ import (
 type loadCache struct {
 	mu      sync.Mutex
 	entries []*loadEntry // most recent first
-	reused  int          // analyses served from an entry, for tests
+	reused  int          // analyses served from an entry
 }
 
 type loadEntry struct {
@@ -43,6 +43,13 @@ const maxCached = 3
 
 // errStale reports that a cached package cannot serve the current buffers.
 var errStale = errors.New("cached package is stale")
+
+// reuses returns how many analyses an entry has served.
+func (c *loadCache) reuses() int {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	return c.reused
+}
 
 // invalidate drops every entry; called when files change on disk.
 func (c *loadCache) invalidate() {

@@ -447,7 +447,11 @@ func (s *server) refresh(path string, onlyIfStale bool) {
 		delete(s.reported, path)
 		s.mu.Unlock()
 	}
-	s.log.Printf("analysed %s (version %d) in %v", filepath.Base(path), d.version, time.Since(start).Round(time.Millisecond))
+	how := "loaded"
+	if res.rechecked {
+		how = "re-checked"
+	}
+	s.log.Printf("analysed %s (version %d, %s) in %v", filepath.Base(path), d.version, how, time.Since(start).Round(time.Millisecond))
 	for f, v := range res.versions {
 		s.store(f, v, res.findings[f])
 	}
