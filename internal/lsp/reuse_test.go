@@ -45,7 +45,10 @@ func TestReuseMatchesFullLoad(t *testing.T) {
 			t.Errorf("%s: cached error %v, fresh error %v", e.name, werr, cerr)
 			continue
 		}
-		if werr == nil && !reflect.DeepEqual(warm, cold) {
+		if werr == nil && warm.rechecked != e.reused {
+			t.Errorf("%s: result says rechecked = %v", e.name, warm.rechecked)
+		}
+		if werr == nil && (!reflect.DeepEqual(warm.findings, cold.findings) || !reflect.DeepEqual(warm.versions, cold.versions)) {
 			t.Errorf("%s: cached result\n%+v\nfresh result\n%+v", e.name, warm, cold)
 		}
 	}
