@@ -33,8 +33,13 @@ func LogBeta(a, b float64) float64 {
 	return lnBetaDD(a, b).float()
 }
 
+// lnBetaDD returns ln B(a,b) for finite a, b > 0 as ln Γ(min) plus the
+// ratio ln Γ(max) − ln Γ(a+b), which stays accurate when max ≫ min.
 func lnBetaDD(a, b float64) dd {
-	return lgammaDD(dd{a, 0}).add(lgammaDD(dd{b, 0})).sub(lgammaDD(twoSum(a, b)))
+	if a < b {
+		a, b = b, a
+	}
+	return lgammaDD(dd{b, 0}).add(lnGammaRatioDD(dd{a, 0}, twoSum(a, b)))
 }
 
 // Beta returns B(a,b) = Γ(a)Γ(b)/Γ(a+b) for a, b > 0.

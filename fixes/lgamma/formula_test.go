@@ -131,3 +131,24 @@ func TestPMFsSumToOne(t *testing.T) {
 		}
 	}
 }
+
+// For negative x the reflection formula (DLMF 5.5.3) is used; away from
+// the zeros of ln|Γ| it agrees with math.Lgamma, which uses the same
+// formula with its own ln Γ.
+func TestLogGammaNegative(t *testing.T) {
+	for x := -170.75; x < 0; x += 0.37 {
+		if x == math.Trunc(x) {
+			continue
+		}
+		want, sign := math.Lgamma(x)
+		if math.Abs(want) < 0.5 {
+			continue
+		}
+		if got := LogGamma(x); math.Abs(got-want) > 1e-13*math.Abs(want) {
+			t.Errorf("LogGamma(%g) = %.17g, math.Lgamma %.17g", x, got, want)
+		}
+		if GammaSign(x) != sign {
+			t.Errorf("GammaSign(%g) = %d, math.Lgamma sign %d", x, GammaSign(x), sign)
+		}
+	}
+}

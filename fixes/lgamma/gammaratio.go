@@ -7,6 +7,18 @@ package lgamma
 
 import "math"
 
+// lnGammaRatioDD returns ln Γ(a) − ln Γ(b) for finite a, b > 0. Above
+// the series threshold the two Stirling forms are merged as
+// (a−½)·ln(a/b) + (a−b)·(ln b − 1) + δ(a) − δ(b), so that for large,
+// close a and b no term is larger than the result by more than ln b.
+func lnGammaRatioDD(a, b dd) dd {
+	if a.hi < stirlingSeriesMin || b.hi < stirlingSeriesMin {
+		return lgammaDD(a).sub(lgammaDD(b))
+	}
+	r := a.addF(-0.5).mul(ddLog(a.div(b))).add(a.sub(b).mul(ddLog(b).addF(-1)))
+	return r.addF(stirlingSeries(a.hi) - stirlingSeries(b.hi))
+}
+
 // lnAbsGammaDD returns ln|Γ(x)| for finite x that is not a pole.
 func lnAbsGammaDD(x float64) dd {
 	if x > 0 {
@@ -48,7 +60,16 @@ func LogGammaRatio(a, b float64) float64 {
 	if v, _, ok := gammaRatioSpecial(a, b); ok {
 		return v
 	}
-	return lnAbsGammaDD(a).sub(lnAbsGammaDD(b)).float()
+	return lnAbsGammaRatioDD(a, b).float()
+}
+
+// lnAbsGammaRatioDD returns ln|Γ(a)/Γ(b)| for finite a, b that are not
+// poles.
+func lnAbsGammaRatioDD(a, b float64) dd {
+	if a > 0 && b > 0 {
+		return lnGammaRatioDD(dd{a, 0}, dd{b, 0})
+	}
+	return lnAbsGammaDD(a).sub(lnAbsGammaDD(b))
 }
 
 // GammaRatio returns Γ(a)/Γ(b) without forming either gamma value, so it
@@ -70,7 +91,7 @@ func GammaRatio(a, b float64) float64 {
 		}
 		return float64(s) * math.Exp(v)
 	}
-	v := expOf(lnAbsGammaDD(a).sub(lnAbsGammaDD(b)))
+	v := expOf(lnAbsGammaRatioDD(a, b))
 	if GammaSign(a) != GammaSign(b) {
 		return -v
 	}

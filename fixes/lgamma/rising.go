@@ -32,7 +32,7 @@ func risingDD(x float64, n int) (dd, int) {
 		return ddLog(p), 1
 	}
 	if x > 0 {
-		return lgammaDD(twoSum(x, float64(n))).sub(lgammaDD(dd{x, 0})), 1
+		return lnGammaRatioDD(twoSum(x, float64(n)), dd{x, 0}), 1
 	}
 	// m factors are negative: x, x+1, …, x+m−1.
 	m := math.Min(float64(n), math.Ceil(-x))
@@ -40,9 +40,9 @@ func risingDD(x float64, n int) (dd, int) {
 		return dd{math.Inf(-1), 0}, 0 // the factor x+(−x) is zero
 	}
 	negX := twoSum(1, -x) // 1−x
-	r := lgammaDD(negX).sub(lgammaDD(negX.addF(-m)))
+	r := lnGammaRatioDD(negX, negX.addF(-m))
 	if float64(n) > m {
-		r = r.add(lgammaDD(twoSum(x, float64(n)))).sub(lgammaDD(twoSum(x, m)))
+		r = r.add(lnGammaRatioDD(twoSum(x, float64(n)), twoSum(x, m)))
 	}
 	if math.Mod(m, 2) == 1 {
 		return r, -1
