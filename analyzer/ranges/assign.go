@@ -55,7 +55,7 @@ func (w *walker) store(s state, l ast.Expr, r Interval) state {
 	if obj == nil || !w.f.tracked(obj) {
 		return s
 	}
-	s = w.f.put(s, obj, r)
+	s = w.f.assignVar(s, obj, r)
 	if w.rec && s.live {
 		w.f.exprs[id] = r.Meet(kindOf(obj.Type()).top)
 	}

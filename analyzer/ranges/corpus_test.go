@@ -150,7 +150,31 @@ func clampedTerm(n int) int {
 	return probe(20, m) + probe(21, m*m-1)
 }
 
+func chooseRow(n int) int {
+	if n > 12 {
+		return 0
+	}
+	s := 0
+	for k := 0; k <= n; k++ {
+		s += probe(22, n-k)
+	}
+	return s
+}
+
+func splitCrew(n int) int {
+	k := n % 7
+	if k < 0 || k > n {
+		return 0
+	}
+	if n > 25 {
+		return 1
+	}
+	return probe(23, n-k) + probe(24, k)
+}
+
 var corpus = map[string]func(int) int{
+	"chooseRow":     chooseRow,
+	"splitCrew":     splitCrew,
 	"seatingOrders": seatingOrders,
 	"seatingDown":   seatingDown,
 	"crateDrain":    crateDrain,

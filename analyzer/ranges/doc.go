@@ -13,7 +13,12 @@
 // joins cost only the differences) and refining it at conditions:
 // dominating guards that leave (return, panic, os.Exit, log.Fatal,
 // t.Fatal, break, continue, goto), branch conditions with && || and !,
-// switch cases, loop conditions and range loops. Loops are iterated to
+// switch cases, loop conditions and range loops. Beside the intervals
+// a state carries up to 16 difference facts x − y ≤ c taken from guards
+// that compare two variables (each plus a constant); they narrow one
+// variable when the other is narrowed and bound x − y, so that after
+// "if k < 0 || k > n { return }" and "if n > 20 { return }" both k and
+// n−k lie in [0, 20]. Loops are iterated to
 // a fixpoint with widening after Options.MaxVisits trips, followed by
 // one narrowing trip; the loop condition re-narrows the body. No SSA
 // or control-flow graph is built: the cost is linear in the function
@@ -37,8 +42,9 @@
 //
 // # Known limits
 //
-// The domain is non-relational: it does not know that s = 3·i, or that
-// i ≤ n after n changes. Conditions on derived values (x := f(n); if x
+// Apart from the guard-derived difference facts, which are not closed
+// transitively and die when either variable is assigned, the domain is
+// non-relational: it does not know that s = 3·i. Conditions on derived values (x := f(n); if x
 // > 3) refine only x. Comparisons involving NaN are assumed false and
 // their negations true, so a float guard such as "if x > 170 { return }"
 // is taken to bound x even though a NaN would pass it. Labels targeted

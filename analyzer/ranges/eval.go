@@ -133,7 +133,18 @@ func (w *walker) binary(s state, e *ast.BinaryExpr) Interval {
 	case token.EQL, token.NEQ, token.LSS, token.LEQ, token.GTR, token.GEQ:
 		return Top()
 	}
-	return arith(e.Op, x, y, w.kind(e), w.f.opts.NoWrap)
+	k := w.kind(e)
+	r := arith(e.Op, x, y, k, w.f.opts.NoWrap)
+	if e.Op == token.SUB {
+		if d, ok := w.difference(s, e, x, y, k); ok {
+			// Both are sound; an empty meet can only come from
+			// unreachable code, where d is as good as anything.
+			if r = r.Meet(d); r.IsEmpty() {
+				r = d
+			}
+		}
+	}
+	return r
 }
 
 func (w *walker) call(s state, e *ast.CallExpr) Interval {

@@ -193,6 +193,7 @@ func widen(old, next Interval) Interval {
 // tracked variables, or unreachable when live is false.
 type state struct {
 	facts *facts
+	rels  []rel // difference facts, never changed in place
 	live  bool
 }
 
@@ -205,7 +206,7 @@ func (s state) join(t state) state {
 	case !t.live:
 		return s
 	}
-	return state{combine(s.facts, t.facts, Interval.Join), true}
+	return state{combine(s.facts, t.facts, Interval.Join), joinRels(s.rels, t.rels), true}
 }
 
 func (s state) widen(t state) state {
@@ -215,11 +216,11 @@ func (s state) widen(t state) state {
 	case !t.live:
 		return s
 	}
-	return state{combine(s.facts, t.facts, widen), true}
+	return state{combine(s.facts, t.facts, widen), widenRels(s.rels, t.rels), true}
 }
 
 func (s state) equal(t state) bool {
-	return s.live == t.live && equal(s.facts, t.facts)
+	return s.live == t.live && equal(s.facts, t.facts) && equalRels(s.rels, t.rels)
 }
 
 func joinAll(s state, more []state) state {

@@ -37,6 +37,7 @@ type Func struct {
 	opts Options
 
 	ids   map[types.Object]int32
+	objs  []types.Object        // by id
 	exprs map[ast.Expr]Interval // ranges at evaluation
 	snaps map[ast.Node]*facts   // states before reached statements and calls
 	// opaque marks statements beyond maxDepth: reached, but not walked.
@@ -139,7 +140,25 @@ func (f *Func) id(obj types.Object) int32 {
 	}
 	id := int32(len(f.ids))
 	f.ids[obj] = id
+	f.objs = append(f.objs, obj)
 	return id
+}
+
+// fact returns the interval s holds for variable id.
+func (f *Func) fact(s state, id int32) Interval {
+	if r, ok := s.facts.get(id); ok {
+		return r
+	}
+	return kindOf(f.objs[id].Type()).top
+}
+
+// assignVar is put for an assignment: facts relating obj to other
+// variables no longer hold.
+func (f *Func) assignVar(s state, obj types.Object, r Interval) state {
+	if id, ok := f.ids[obj]; ok && s.live {
+		s.rels = killRels(s.rels, id)
+	}
+	return f.put(s, obj, r)
 }
 
 // put sets obj to r in s, within the range of obj's type.

@@ -24,7 +24,7 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	if w.loops > 4 || w.f.overBudget() {
 		head := entry
 		for _, obj := range w.f.assignedIn(n) {
-			head = w.f.put(head, obj, Top())
+			head = w.f.assignVar(head, obj, Top())
 		}
 		_, exit := trip(head)
 		return exit

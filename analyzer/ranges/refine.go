@@ -60,7 +60,9 @@ func (w *walker) compare(s state, x ast.Expr, op token.Token, y ast.Expr) state 
 		return dead
 	}
 	s = w.narrow(s, x, op, yr)
-	return w.narrow(s, y, flip(op), xr)
+	s = w.narrow(s, y, flip(op), xr)
+	s = w.relate(s, x, op, y)
+	return w.propagate(s)
 }
 
 // quiet evaluates e without recording anything.
