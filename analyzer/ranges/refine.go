@@ -62,7 +62,7 @@ func (w *walker) compare(s state, x ast.Expr, op token.Token, y ast.Expr) state 
 	s = w.narrow(s, x, op, yr)
 	s = w.narrow(s, y, flip(op), xr)
 	s = w.relate(s, x, op, y)
-	return w.propagate(s)
+	return w.propagate(s, x)
 }
 
 // quiet evaluates e without recording anything.

@@ -176,13 +176,17 @@ func (w *walker) relate(s state, x ast.Expr, op token.Token, y ast.Expr) state {
 }
 
 // propagate narrows intervals through the difference facts, once:
-// x ≤ hi(y) + c and y ≥ lo(x) − c.
-func (w *walker) propagate(s state) state {
+// x ≤ hi(y) + c and y ≥ lo(x) − c. Facts about a variable that may
+// have changed out of sight by at are skipped.
+func (w *walker) propagate(s state, at ast.Node) state {
 	for _, r := range s.rels {
 		if !s.live {
 			return s
 		}
 		xo, yo := w.f.objs[r.x], w.f.objs[r.y]
+		if w.f.escapedAt(xo, at) || w.f.escapedAt(yo, at) {
+			continue
+		}
 		xr, yr := w.f.fact(s, r.x), w.f.fact(s, r.y)
 		if yr.Hi != posInf {
 			if hi, ok := addB(yr.Hi, r.c, false, 0); ok && hi < xr.Hi {

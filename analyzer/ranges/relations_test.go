@@ -78,3 +78,19 @@ func TestRelations(t *testing.T) {
 		t.Run(c.name, func(t *testing.T) { checkMarkers(t, c.src, Options{}) })
 	}
 }
+
+func TestRelationEscapes(t *testing.T) {
+	checkMarkers(t, `package p
+func set(p *int) { *p = 50 }
+func fact(n int) int { return n }
+func choose(n, k int) int {
+	if k < 0 || k > n {
+		return 0
+	}
+	set(&k)
+	if n > 20 {
+		return -1
+	}
+	return fact(n-k/*@range (-inf, +inf)*/)
+}`, Options{})
+}
