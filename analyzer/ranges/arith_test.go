@@ -51,9 +51,10 @@ func goOp(op token.Token, a, b int64) (int64, bool) {
 	panic(op)
 }
 
-// goOp8 is goOp in int8, where wrapping is easy to reach.
-func goOp8(op token.Token, a, b int64) (int64, bool) {
-	x, y := int8(a), int8(b)
+// goOpSmall is goOp in a small integer type, where wrapping is easy
+// to reach; operators other than + − * / % fall back to int64.
+func goOpSmall[T int8 | uint8](op token.Token, a, b int64) (int64, bool) {
+	x, y := T(a), T(b)
 	switch op {
 	case token.ADD:
 		return int64(x + y), true
@@ -90,7 +91,7 @@ func TestArithContainsEveryValue(t *testing.T) {
 			kinds := []struct {
 				k   numKind
 				ref func(token.Token, int64, int64) (int64, bool)
-			}{{i64, goOp}, {i8, goOp8}}
+			}{{i64, goOp}, {i8, goOpSmall[int8]}}
 			for _, kk := range kinds {
 				if kk.k.safe.Lo < 0 && (x.Lo < kk.k.safe.Lo || x.Hi > kk.k.safe.Hi || y.Lo < kk.k.safe.Lo || y.Hi > kk.k.safe.Hi) {
 					continue
@@ -264,28 +265,7 @@ func randWide(rng *rand.Rand) Interval {
 // TestArithUint8 checks unsigned wrapping against Go's uint8 operators.
 func TestArithUint8(t *testing.T) {
 	u8 := kindOf(types.Typ[types.Uint8])
-	ref := func(op token.Token, a, b int64) (int64, bool) {
-		x, y := uint8(a), uint8(b)
-		switch op {
-		case token.ADD:
-			return int64(x + y), true
-		case token.SUB:
-			return int64(x - y), true
-		case token.MUL:
-			return int64(x * y), true
-		case token.QUO:
-			if y == 0 {
-				return 0, false
-			}
-			return int64(x / y), true
-		case token.REM:
-			if y == 0 {
-				return 0, false
-			}
-			return int64(x % y), true
-		}
-		return 0, false
-	}
+	ref := goOpSmall[uint8]
 	rng := rand.New(rand.NewSource(4))
 	for trial := 0; trial < 3000; trial++ {
 		x, y := randSmall(rng, 200).Meet(Span(0, 255)), randSmall(rng, 200).Meet(Span(0, 255))
