@@ -2,6 +2,8 @@ package analyzer
 
 import (
 	"fmt"
+	"go/ast"
+	"go/token"
 	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
@@ -45,6 +47,9 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	}
 	m := fc.loopMatch(al, t)
 	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
+	if n := fc.fallingBase(al); n != nil {
+		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
+	}
 	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
 }
 
@@ -77,4 +82,22 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 // bounded reports whether iv is non-empty with finite ends.
 func bounded(iv ranges.Interval) bool {
 	return !iv.IsEmpty() && iv.Lo != math.MinInt64 && iv.Hi != math.MaxInt64
+}
+
+// fallingBase returns n when the loop is exactly
+// for i := 0; i < k; i++ { p *= n - i }, the form whose product is
+// n!/(n-k)! with the arguments as written; otherwise nil.
+func (fc *fnCtx) fallingBase(al *accLoop) ast.Expr {
+	sh := al.shape
+	if sh.step != 1 || sh.first != nil || sh.firstOff != 0 || al.coff != 0 || al.count == nil {
+		return nil
+	}
+	b, ok := fc.stripConv(al.mult).(*ast.BinaryExpr)
+	if !ok || b.Op != token.SUB || fc.c.objOf(fc.stripConv(b.Y)) != sh.iv {
+		return nil
+	}
+	if lin, ok := fc.linear(b.X); !ok || lin.coefOf(sh.iv) != 0 {
+		return nil
+	}
+	return b.X
 }
