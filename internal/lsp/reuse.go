@@ -9,9 +9,11 @@ import (
 	"go/scanner"
 	"go/types"
 	"os"
+	"path/filepath"
 	"slices"
 	"sort"
 	"strconv"
+	"strings"
 	"sync"
 
 	"golang.org/x/tools/go/packages"
@@ -25,8 +27,11 @@ import (
 // proportional to the edited package (common practice in Go editors).
 //
 // An entry is valid while the open buffers outside its package are
-// unchanged and no file was saved since it was loaded; anything else
-// (a new import, a package clause edit, cgo) falls back to a full load.
+// unchanged and none of the files and directories it was loaded from that
+// can change (the module's go.mod and go.sum, the directories and Go files
+// of its packages outside GOROOT and the module cache) has a new size or
+// modification time; anything else (a new import, a package clause edit,
+// cgo) falls back to a full load.
 type loadCache struct {
 	mu      sync.Mutex
 	entries []*loadEntry // most recent first
@@ -34,8 +39,79 @@ type loadCache struct {
 }
 
 type loadEntry struct {
-	pkg *packages.Package
-	key [sha256.Size]byte
+	pkg    *packages.Package
+	key    [sha256.Size]byte
+	stamps map[string]stamp // files and directories the load read
+}
+
+// stamp is what a load saw of a file (its size and modification time)
+// or of a directory (the names of its Go files: editors that save through a
+// backup file touch the directory itself on every save).
+type stamp string
+
+func stampOf(path string) stamp {
+	fi, err := os.Stat(path)
+	switch {
+	case err != nil:
+		return "absent"
+	case !fi.IsDir():
+		return stamp(fmt.Sprintf("%d %d", fi.Size(), fi.ModTime().UnixNano()))
+	}
+	entries, err := os.ReadDir(path)
+	if err != nil {
+		return "unreadable"
+	}
+	var names []string
+	for _, e := range entries {
+		if isGoFile(e.Name()) {
+			names = append(names, e.Name())
+		}
+	}
+	return stamp(strings.Join(names, "/"))
+}
+
+// mutableInputs lists the files and directories of pkg's load that can
+// change under an editor session: those of the packages of modules that
+// are not in the module cache (whose directories carry an "@version"), and
+// of the standard library none, as GOROOT is read-only in practice.
+func mutableInputs(pkg *packages.Package) map[string]stamp {
+	stamps := make(map[string]stamp)
+	seen := make(map[*packages.Package]bool)
+	var visit func(p *packages.Package)
+	visit = func(p *packages.Package) {
+		if seen[p] {
+			return
+		}
+		seen[p] = true
+		if m := p.Module; m != nil && !strings.Contains(m.Dir, "@") {
+			if m.GoMod != "" {
+				stamps[m.GoMod] = stampOf(m.GoMod)
+				sum := strings.TrimSuffix(m.GoMod, ".mod") + ".sum"
+				stamps[sum] = stampOf(sum)
+			}
+			for _, f := range p.CompiledGoFiles {
+				stamps[f] = stampOf(f)
+				stamps[filepath.Dir(f)] = stampOf(filepath.Dir(f))
+			}
+		}
+		for _, imp := range p.Imports {
+			visit(imp)
+		}
+	}
+	visit(pkg)
+	return stamps
+}
+
+// unchanged reports whether every input of e looks as when it was loaded.
+// Open files do not count: their text comes from the overlay, which the
+// entry's key covers, so saving a buffer keeps the entry.
+func (e *loadEntry) unchanged(overlay map[string][]byte) bool {
+	for path, st := range e.stamps {
+		if _, open := overlay[path]; !open && stampOf(path) != st {
+			return false
+		}
+	}
+	return true
 }
 
 // maxCached bounds the memory held: each entry keeps a dependency graph.
@@ -51,20 +127,13 @@ func (c *loadCache) reuses() int {
 	return c.reused
 }
 
-// invalidate drops every entry; called when files change on disk.
-func (c *loadCache) invalidate() {
-	c.mu.Lock()
-	c.entries = nil
-	c.mu.Unlock()
-}
-
 // lookup returns the cached package holding path if it is still valid for
 // overlay, or nil.
 func (c *loadCache) lookup(path string, overlay map[string][]byte) *packages.Package {
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	for _, e := range c.entries {
-		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) {
+		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) && e.unchanged(overlay) {
 			return e.pkg
 		}
 	}
@@ -80,7 +149,8 @@ func (c *loadCache) add(pkg *packages.Package, overlay map[string][]byte) {
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	c.entries = slices.DeleteFunc(c.entries, func(e *loadEntry) bool { return e.pkg.ID == pkg.ID })
-	c.entries = append([]*loadEntry{{pkg: pkg, key: outsideKey(pkg, overlay)}}, c.entries...)
+	e := &loadEntry{pkg: pkg, key: outsideKey(pkg, overlay), stamps: mutableInputs(pkg)}
+	c.entries = append([]*loadEntry{e}, c.entries...)
 	if len(c.entries) > maxCached {
 		c.entries = c.entries[:maxCached]
 	}

@@ -2,10 +2,12 @@ package lsp
 
 import (
 	"context"
+	"os"
 	"path/filepath"
 	"reflect"
 	"strings"
 	"testing"
+	"time"
 )
 
 // TestReuseMatchesFullLoad analyses a sequence of edits twice, once through
@@ -51,5 +53,51 @@ func TestReuseMatchesFullLoad(t *testing.T) {
 		if werr == nil && (!reflect.DeepEqual(warm.findings, cold.findings) || !reflect.DeepEqual(warm.versions, cold.versions)) {
 			t.Errorf("%s: cached result\n%+v\nfresh result\n%+v", e.name, warm, cold)
 		}
+	}
+}
+
+// TestReuseNoticesDisk changes files on disk between analyses of an open
+// buffer and checks when the cached package may still serve.
+func TestReuseNoticesDisk(t *testing.T) {
+	dir := writeModule(t, map[string]string{"combin/combin.go": combinSource, "rota.go": rotaSource})
+	path := filepath.Join(dir, "rota.go")
+	docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: 1, text: []byte(rotaSource)}}
+	opts := withDefaults(testOptions())
+	cache := new(loadCache)
+	for _, step := range []struct {
+		name   string
+		change func()
+		reused bool
+	}{
+		{"first load", func() {}, false},
+		{"nothing changed", func() {}, true},
+		{"open buffer saved", func() { writeLater(t, path, rotaSource) }, true},
+		{"backup file written", func() { writeLater(t, path+"~", rotaSource) }, true},
+		{"dependency edited on disk", func() { writeLater(t, filepath.Join(dir, "combin", "combin.go"), combinSource+"\nvar Unused int\n") }, false},
+		{"again unchanged", func() {}, true},
+		{"file added to the package", func() { writeLater(t, filepath.Join(dir, "extra.go"), "package desk\n") }, false},
+		{"go.mod edited", func() { writeLater(t, filepath.Join(dir, "go.mod"), "module example.com/desk\n\ngo 1.22\n") }, false},
+	} {
+		step.change()
+		res, err := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
+		if err != nil {
+			t.Fatalf("%s: %v", step.name, err)
+		}
+		if res.rechecked != step.reused {
+			t.Errorf("%s: re-checked = %v, want %v", step.name, res.rechecked, step.reused)
+		}
+	}
+}
+
+// writeLater writes a file with a modification time clearly after any
+// earlier write, since file systems may keep coarse timestamps.
+func writeLater(t *testing.T, path, text string) {
+	t.Helper()
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	later := time.Now().Add(2 * time.Second)
+	if err := os.Chtimes(path, later, later); err != nil {
+		t.Fatal(err)
 	}
 }

@@ -355,7 +355,6 @@ func (s *server) didSave(p didSaveParams) error {
 	if p.Text != nil {
 		s.docs.setText(path, *p.Text)
 	}
-	s.pkgs.invalidate() // what is on disk may differ from what was loaded
 	s.schedule(path, 0)
 	return nil
 }
