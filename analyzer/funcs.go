@@ -11,17 +11,20 @@ import (
 
 // facFunc is a factorial-valued function of this package.
 type facFunc struct {
-	obj    *types.Func
-	decl   *ast.FuncDecl
-	kind   facKind
-	param  int
-	param2 int
-	offset int64
-	loop   *accLoop        // the product loop, or nil
-	rec    *ast.BinaryExpr // the recursive n*f(n-1), or nil
-	recN   ast.Expr        // its n operand
-	result numType
-	fact   FactorialFact
+	obj     *types.Func
+	decl    *ast.FuncDecl
+	kind    facKind
+	param   int
+	param2  int
+	offset  int64
+	loop    *accLoop        // the product loop, or nil
+	rec     *ast.BinaryExpr // the recursive n*f(n-1), or nil
+	recN    ast.Expr        // its n operand
+	wrap    ast.Expr        // a wrapper's argument to the factorial it returns
+	wrapOff int64           // the largest factor is wrap+wrapOff
+	inner   *FactorialFact  // the wrapped factorial function's fact
+	result  numType
+	fact    FactorialFact
 }
 
 // findFactorialFunc decides whether decl returns a factorial of one of
@@ -48,6 +51,9 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 		ff = own.loopFuncOf(decl, obj)
 	}
 	if ff == nil {
+		ff = own.wrapperOf(decl, obj)
+	}
+	if ff == nil {
 		return
 	}
 	ff.obj, ff.decl, ff.result = obj, decl, res
@@ -57,6 +63,11 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 	if !key.IsEmpty() && !key.IsTop() && key.Hi < firstBadOf(ff.kind, res) && ff.kind != kindFalling && ff.kind != kindRising {
 		ff.fact.Safe = true
 		ff.fact.Lo, ff.fact.Hi = shift(key, -ff.offset).Lo, shift(key, -ff.offset).Hi
+	}
+	if ff.inner != nil && ff.inner.Safe {
+		// A wrapper of a safe function is safe on the same factors.
+		ff.fact.Safe = true
+		ff.fact.Lo, ff.fact.Hi = addSat(ff.inner.Lo, ff.inner.Offset-ff.offset), addSat(ff.inner.Hi, ff.inner.Offset-ff.offset)
 	}
 	c.funcs[obj] = ff
 	c.pass.ExportObjectFact(obj, &ff.fact)
@@ -78,6 +89,9 @@ func firstBadOf(k facKind, t numType) int64 {
 func (fc *fnCtx) keyRange(ff *facFunc) ranges.Interval {
 	if ff.rec != nil {
 		return fc.rangeOf(ff.recN)
+	}
+	if ff.wrap != nil {
+		return shift(fc.rangeOf(ff.wrap), ff.wrapOff)
 	}
 	return fc.rangeOf(fc.stripConv(ff.loop.mult))
 }
@@ -295,4 +309,58 @@ func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip
 		return !found
 	})
 	return found
+}
+
+// wrapperOf matches a function that returns a factorial of a parameter
+// computed elsewhere: return f(n+c) of a factorial function f, or
+// return math.Gamma(float64(n)+b) with an integer b ≥ 1, which is
+// (n+b−1)! in float64.
+func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	resT := self.Type().(*types.Signature).Results().At(0).Type()
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok || ff != nil {
+			return false
+		}
+		ret, ok := n.(*ast.ReturnStmt)
+		if !ok || len(ret.Results) == 0 {
+			return true
+		}
+		call, ok := unparen(ret.Results[0]).(*ast.CallExpr)
+		if !ok || !types.Identical(fc.c.pass.TypesInfo.TypeOf(call), resT) {
+			return false
+		}
+		ff = fc.wrappedCall(decl, call)
+		return false
+	})
+	return ff
+}
+
+func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
+	if fc.c.isMathFunc(call, "Gamma") && len(call.Args) == 1 {
+		aff, ok := fc.affineOf(call.Args[0], 0)
+		if !ok || aff.a != 1 || !aff.isInt || aff.b < 1 || aff.b != float64(int64(aff.b)) {
+			return nil
+		}
+		idx := fc.c.paramIndex(decl, fc.c.objOf(aff.v))
+		if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, fc.c.objOf(aff.v), nil) {
+			return nil
+		}
+		off := int64(aff.b) - 1
+		return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: aff.v, wrapOff: off}
+	}
+	f, ok := fc.factorOf(call)
+	if !ok || (f.kind != kindFactorial && f.kind != kindDouble) {
+		return nil
+	}
+	lin, ok := fc.linear(f.arg)
+	if !ok || len(lin.terms) != 1 || lin.terms[0].coef != 1 {
+		return nil
+	}
+	p := lin.terms[0].obj
+	idx := fc.c.paramIndex(decl, p)
+	if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, nil) {
+		return nil
+	}
+	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.c + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
 }

@@ -91,9 +91,19 @@ func Shape(x float64) float64 {
 }
 
 // Levels is Γ(n+1) for the 170 energy levels of the model.
-func Levels(n int) float64 {
+func Levels(n int) float64 { // want Levels:`factorial of parameter 0, safe for \[0, 170\]`
 	if n < 0 || n > 170 {
 		return math.NaN()
 	}
 	return math.Gamma(float64(n) + 1)
+}
+
+// Arrangements is C(n, k) over Γ-based factorials in float64.
+func Arrangements(n, k int) float64 { // want Arrangements:`binomial of parameter 0, breaks from 171`
+	return mathkit.GammaFactorial(n) / (mathkit.GammaFactorial(k) * mathkit.GammaFactorial(n-k)) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171, although C\(n, n/2\) itself fits up to n = \d+`
+}
+
+// Reports uses the int64 wrapper from another package.
+func Reports(n int) float64 {
+	return float64(mathkit.Factorial64(n)) // want `n! is computed in int64, which wraps for n ≥ 21`
 }

@@ -1,7 +1,10 @@
 // Package mathkit holds the counting routines shared by the planning tools.
 package mathkit
 
-import "errors"
+import (
+	"errors"
+	"math"
+)
 
 // ErrRange is returned for arguments whose factorial does not fit.
 var ErrRange = errors.New("mathkit: argument out of range")
@@ -47,4 +50,19 @@ func SmallFactorial(n int) int64 { // want SmallFactorial:`factorial of paramete
 		return 1
 	}
 	return int64(n) * SmallFactorial(n-1)
+}
+
+// GammaFactorial returns n! as Γ(n+1).
+func GammaFactorial(n int) float64 { // want GammaFactorial:`factorial of parameter 0, breaks from 171`
+	return math.Gamma(float64(n) + 1) // want `math.Gamma overflows: math.Gamma\(float64\(n\) \+ 1\) is \+Inf for n ≥ 171`
+}
+
+// Factorial64 is Factorial under the name the reports use.
+func Factorial64(n int) int64 { // want Factorial64:`factorial of parameter 0, breaks from 21`
+	return Factorial(n)
+}
+
+// SmallFactorial64 wraps the guarded factorial.
+func SmallFactorial64(n int) int64 { // want SmallFactorial64:`factorial of parameter 0, safe for \[2, 20\]`
+	return SmallFactorial(n)
 }
