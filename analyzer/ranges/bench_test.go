@@ -42,14 +42,16 @@ func BenchmarkStdlib(b *testing.B) {
 			}
 		}
 	}
-	b.Run("analyze", func(b *testing.B) {
-		for b.Loop() {
-			for i, fd := range funcs {
-				Analyze(infos[i], fd, Options{})
+	for _, visits := range []int{1, 3, 20000} {
+		b.Run(fmt.Sprintf("analyze/visits=%d", visits), func(b *testing.B) {
+			for b.Loop() {
+				for i, fd := range funcs {
+					Analyze(infos[i], fd, Options{MaxVisits: visits})
+				}
 			}
-		}
-		b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(nodes), "ns/node")
-	})
+			b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(nodes), "ns/node")
+		})
+	}
 	b.Run("inspect", func(b *testing.B) {
 		for b.Loop() {
 			for _, fd := range funcs {

@@ -85,7 +85,7 @@ func (f *Func) carries(n ast.Node) bool {
 // statement visits, a small multiple of the function size; past it,
 // loops widen at once so that no MaxVisits setting can make the
 // analysis of one function super-linear.
-func (f *Func) overBudget() bool { return f.work > 20*f.size+10000 }
+func (f *Func) overBudget() bool { return f.work > 10*f.size+1000 }
 
 func (w *walker) forStmt(s state, st *ast.ForStmt, label string) state {
 	s = w.stmt(s, st.Init)
