@@ -71,8 +71,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		Overlay: overlay,
 		Tests:   strings.HasSuffix(path, "_test.go"),
 	}
-	reusedBefore := cache.reuses()
-	roots, err := load(cfg, path, cache)
+	roots, rechecked, err := load(cfg, path, cache)
 	if err != nil {
 		return nil, err
 	}
@@ -84,7 +83,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		return nil, err
 	}
 	conv := converter{enc: enc, overlay: overlay, fset: roots[0].Fset, texts: make(map[string][]byte), severity: opts.Severity}
-	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding), rechecked: cache.reuses() > reusedBefore}
+	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding), rechecked: rechecked}
 	for _, p := range roots {
 		for _, f := range p.CompiledGoFiles {
 			if d, ok := docs[f]; ok {
@@ -138,34 +137,30 @@ func rootFailure(graph *checker.Graph, roots []*packages.Package) error {
 // when cache can serve, else a fresh load with go/packages, which cache
 // then keeps. A _test.go file belongs to several package variants and is
 // always loaded afresh.
-func load(cfg *packages.Config, path string, cache *loadCache) ([]*packages.Package, error) {
+func load(cfg *packages.Config, path string, cache *loadCache) (roots []*packages.Package, rechecked bool, err error) {
 	if !cfg.Tests {
 		if p := cache.lookup(path, cfg.Overlay); p != nil {
 			if np, err := recheck(p, cfg.Overlay); err == nil {
-				cache.mu.Lock()
-				cache.reused++
-				cache.mu.Unlock()
-				return []*packages.Package{np}, nil
+				return []*packages.Package{np}, true, nil
 			}
 		}
 	}
 	pkgs, err := packages.Load(cfg, "file="+path)
 	if err != nil {
-		return nil, err
+		return nil, false, err
 	}
-	var roots []*packages.Package
 	for _, p := range pkgs {
 		if slices.Contains(p.CompiledGoFiles, path) {
 			roots = append(roots, p)
 		}
 	}
 	if len(roots) == 0 {
-		return nil, loadProblem(path, pkgs)
+		return nil, false, loadProblem(path, pkgs)
 	}
 	if !cfg.Tests && len(roots) == 1 {
 		cache.add(roots[0], cfg.Overlay)
 	}
-	return roots, nil
+	return roots, false, nil
 }
 
 // loadProblem explains why no package holding path was loaded, using the

@@ -76,14 +76,14 @@ func bench(b *testing.B, name, src string, opts Options, warm bool) {
 			if err != nil || len(res.findings[path]) == 0 {
 				b.Fatalf("analyze: %v, %+v", err, res)
 			}
+			if i >= 0 && res.rechecked != warm {
+				b.Fatalf("run %d re-checked = %v, want %v", i, res.rechecked, warm)
+			}
 		}
 		run(-1)
 		b.ResetTimer()
 		for i := 0; i < b.N; i++ {
 			run(i)
-		}
-		if warm && cache.reused != b.N {
-			b.Fatalf("warm runs reused the cache %d times of %d", cache.reused, b.N)
 		}
 	})
 }

@@ -35,14 +35,19 @@ import (
 type loadCache struct {
 	mu      sync.Mutex
 	entries []*loadEntry // most recent first
-	reused  int          // analyses served from an entry
 }
 
 type loadEntry struct {
 	pkg    *packages.Package
 	key    [sha256.Size]byte
 	stamps map[string]stamp // files and directories the load read
+	uses   int              // re-checks served
 }
+
+// maxUses bounds the re-checks one entry serves: each adds the re-parsed
+// files' line tables to the shared token.FileSet, which only a fresh load
+// starts anew.
+const maxUses = 1000
 
 // stamp is what a load saw of a file (its size and modification time)
 // or of a directory (the names of its Go files: editors that save through a
@@ -120,20 +125,14 @@ const maxCached = 3
 // errStale reports that a cached package cannot serve the current buffers.
 var errStale = errors.New("cached package is stale")
 
-// reuses returns how many analyses an entry has served.
-func (c *loadCache) reuses() int {
-	c.mu.Lock()
-	defer c.mu.Unlock()
-	return c.reused
-}
-
 // lookup returns the cached package holding path if it is still valid for
-// overlay, or nil.
+// overlay, and counts the use, or returns nil.
 func (c *loadCache) lookup(path string, overlay map[string][]byte) *packages.Package {
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	for _, e := range c.entries {
-		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) && e.unchanged(overlay) {
+		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) && e.unchanged(overlay) && e.uses < maxUses {
+			e.uses++
 			return e.pkg
 		}
 	}

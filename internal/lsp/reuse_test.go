@@ -37,11 +37,7 @@ func TestReuseMatchesFullLoad(t *testing.T) {
 	cache := new(loadCache)
 	for i, e := range edits {
 		docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: int32(i), text: []byte(e.text)}}
-		before := cache.reused
 		warm, werr := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
-		if got := cache.reused > before; got != e.reused {
-			t.Errorf("%s: served from the cache = %v, want %v", e.name, got, e.reused)
-		}
 		cold, cerr := analyze(context.Background(), &opts, new(loadCache), docs, path, encUTF16)
 		if (werr == nil) != (cerr == nil) {
 			t.Errorf("%s: cached error %v, fresh error %v", e.name, werr, cerr)
@@ -99,5 +95,30 @@ func writeLater(t *testing.T, path, text string) {
 	later := time.Now().Add(2 * time.Second)
 	if err := os.Chtimes(path, later, later); err != nil {
 		t.Fatal(err)
+	}
+}
+
+// TestReuseLimit checks that an entry is retired after maxUses re-checks,
+// so that a long session's FileSet starts anew.
+func TestReuseLimit(t *testing.T) {
+	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	path := filepath.Join(dir, "desk.go")
+	docs := map[string]*document{path: {uri: pathToURI(path), path: path, version: 1, text: []byte(deskSource)}}
+	opts := withDefaults(testOptions())
+	cache := new(loadCache)
+	rechecks := 0
+	for i := 0; i <= maxUses+1; i++ {
+		res, err := analyze(context.Background(), &opts, cache, docs, path, encUTF16)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if res.rechecked {
+			rechecks++
+		} else if i != 0 && i != maxUses+1 {
+			t.Fatalf("analysis %d loaded afresh", i)
+		}
+	}
+	if rechecks != maxUses {
+		t.Errorf("%d re-checks, want %d", rechecks, maxUses)
 	}
 }
