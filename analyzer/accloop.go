@@ -17,6 +17,7 @@ const (
 	kindFalling           // n·(n−1)·…·(n−k+1)
 	kindRising            // x·(x+1)·…·(x+n−1)
 	kindBinomial          // C(n, k), from a ratio or a multiplicative loop
+	kindPower             // x^k by a loop multiplying by a loop-invariant x
 )
 
 var kindNames = map[facKind]string{
@@ -242,6 +243,11 @@ func mentions(info *types.Info, n ast.Node, obj types.Object) bool {
 // with the induction variable.
 func (fc *fnCtx) classify(al *accLoop) bool {
 	sh := al.shape
+	if !mentions(fc.c.pass.TypesInfo, al.mult, sh.iv) {
+		al.kind = kindPower
+		al.count, al.coff = tripCount(sh)
+		return al.count != nil && al.div == nil
+	}
 	lin, ok := fc.linear(al.mult)
 	if !ok {
 		return fc.classifyRising(al)

@@ -61,7 +61,16 @@ func (c *checker) checkFunc(n ast.Node) {
 	}
 	fc := c.ctx(n)
 	body := funcBody(n)
-	fc.eachLoop(body, fc.checkAccLoop)
+	fc.eachLoop(body, func(al *accLoop) {
+		if al.kind == kindPower {
+			if fc.powLoops == nil {
+				fc.powLoops = make(map[types.Object]*accLoop)
+			}
+			fc.powLoops[al.acc] = al
+			return
+		}
+		fc.checkAccLoop(al)
+	})
 	if d, ok := n.(*ast.FuncDecl); ok {
 		if fn, _ := c.pass.TypesInfo.Defs[d.Name].(*types.Func); fn != nil {
 			if ff := c.funcs[fn]; ff != nil && ff.rec != nil {

@@ -22,6 +22,8 @@ type fnCtx struct {
 	assumes []stmtAssume // statement-level bound annotations
 	defs    map[types.Object][]ast.Expr
 	inl     map[ast.Expr]bool // values consumed by a larger product
+	// powLoops maps the accumulator of each power loop x·x·…·x to it.
+	powLoops map[types.Object]*accLoop
 }
 
 // maxVisits bounds the range analysis of one function; past it the

@@ -63,6 +63,12 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 			return
 		}
 	case *ast.Ident:
+		if al := fc.powLoops[fc.c.objOf(e)]; al != nil && e.Pos() > al.shape.stmt.End() {
+			// The accumulator of a power loop, used after the loop.
+			t, _ := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+			p.num = append(p.num, factor{math: "Pow", arg: al.mult, arg2: al.count, t: t})
+			return
+		}
 		if def := fc.singleDef(e); def != nil {
 			fc.inlined(def)
 			fc.evalInto(p, def, den, depth+1)

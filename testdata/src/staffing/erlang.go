@@ -78,3 +78,35 @@ func Backlog(k int) float64 {
 	}
 	return math.Pow(2, float64(k)) / mathkit.FactorialFloat(k) // want `the divisor k! overflows to \+Inf for k ≥ 171 .*; math.Pow\(2, float64\(k\)\) overflows to \+Inf for k ≥ 1024; k may reach 1100 here`
 }
+
+// Surge is the Poisson chance of k calls, with the power formed by a
+// loop.
+func Surge(lambda float64, k int) float64 {
+	p := 1.0
+	for i := 0; i < k; i++ {
+		p *= lambda
+	}
+	return p * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term λ\^k·e\^\(−λ\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
+}
+
+// SurgeCapped is Surge with a power loop of at most 40 steps.
+func SurgeCapped(lambda float64, k int) float64 {
+	k = min(k, 40)
+	p := 1.0
+	for i := 0; i < k; i++ {
+		p *= lambda
+	}
+	return p * math.Exp(-lambda) / mathkit.FactorialFloat(k)
+}
+
+// ErlangCIncremental builds each term from the last, term *= a/k: no
+// factorial is ever formed, so nothing is reported.
+func ErlangCIncremental(a float64, c int) float64 {
+	term, sum := 1.0, 1.0
+	for k := 1; k < c; k++ {
+		term *= a / float64(k)
+		sum += term
+	}
+	last := term * a / float64(c) * float64(c) / (float64(c) - a)
+	return last / (sum + last)
+}
