@@ -181,6 +181,32 @@ func total(n int) int {
 	}
 	return s/*@range (-inf, +inf)*/
 }`},
+	{"float counter up to a float bound", `package p
+func gammaTerm(x float64) float64 {
+	if x < 1 || x > 170 {
+		return 0
+	}
+	g := 1.0
+	for t := 1.0; t < x; t++ {
+		g *= t/*@range [1, 170]*/
+	}
+	return g
+}`},
+	{"float counter with no bound", `package p
+func gammaTerm(x float64) float64 {
+	g := 1.0
+	for t := 1.0; t < x; t++ {
+		g *= t/*@range [1, +inf)*/
+	}
+	return g
+}`},
+	{"recursive step down", `package p
+func fact(n int) int {
+	if n <= 1 {
+		return 1
+	}
+	return n * fact(n-1/*@range [1, 9223372036854775806]*/)
+}`},
 	{"infinite loop without break is not left", `package p
 func serve(n int) int {
 	for {
