@@ -45,9 +45,15 @@ func applyFirstFixes(t *testing.T, dir string, a *analysis.Analyzer, pkgs ...str
 // diagnostic to seen, with its package's files.
 func applyFirstFixesSeen(t *testing.T, dir string, a *analysis.Analyzer, seenFix func(*token.FileSet, []*ast.File, analysis.Diagnostic), pkgs ...string) (applied, skipped int) {
 	t.Helper()
+	return applyResults(t, analysistest.Run(quiet{}, dir, a, pkgs...), seenFix)
+}
+
+// applyResults applies the first fixes of an analysistest run in place.
+func applyResults(t *testing.T, results []*analysistest.Result, seenFix func(*token.FileSet, []*ast.File, analysis.Diagnostic)) (applied, skipped int) {
+	t.Helper()
 	edits := make(map[string][]fileEdit)
 	seen := make(map[string]bool)
-	for _, r := range analysistest.Run(quiet{}, dir, a, pkgs...) {
+	for _, r := range results {
 		fset := r.Action.Package.Fset
 		for _, d := range r.Diagnostics {
 			if len(d.SuggestedFixes) == 0 {
@@ -230,13 +236,3 @@ func loadConfig(dir string) *packages.Config {
 	}
 }
 
-// TestProbeFixesCompile applies every probe fix at once and type-checks
-// the result against the real helper module.
-func TestProbeFixesCompile(t *testing.T) {
-	dir := gopath(t, filepath.Join("testdata", "src"), probePackages...)
-	applied, skipped := applyFirstFixes(t, dir, probe, probePackages...)
-	if applied == 0 || skipped != 0 {
-		t.Errorf("applied %d fixes, skipped %d for overlaps; want some and none", applied, skipped)
-	}
-	typeCheck(t, dir, probePackages...)
-}

@@ -10,12 +10,12 @@ import (
 	"golang.org/x/tools/go/analysis/analysistest"
 )
 
-// TestSingleFixDropsImport applies one fix by itself, with no driver
-// clean-up afterwards (as an editor applies a quick fix), and checks that
-// the import it leaves unused is gone and the helper's is there.
-func TestSingleFixDropsImport(t *testing.T) {
-	dir := gopath(t, filepath.Join("testdata", "src"), "probeterm")
-	for _, r := range analysistest.Run(quiet{}, dir, probe, "probeterm") {
+// singleFixDropsImport applies the one fix of probeterm/scalar.go by
+// itself, with no driver clean-up afterwards (as an editor applies a
+// quick fix), and checks that the import it leaves unused is gone and the
+// helper's is there.
+func singleFixDropsImport(t *testing.T, results []*analysistest.Result) {
+	for _, r := range results {
 		fset := r.Action.Package.Fset
 		for _, d := range r.Diagnostics {
 			name := fset.File(d.Pos).Name()

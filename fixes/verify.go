@@ -7,6 +7,7 @@ import (
 	"go/token"
 	"go/types"
 	"sort"
+	"sync"
 
 	"golang.org/x/tools/go/analysis"
 )
@@ -20,24 +21,24 @@ func (b *builder) verify() error {
 	if err != nil {
 		return err
 	}
-	// All files are parsed afresh into one file set: go/types compares
-	// positions, so the fixed file cannot join the pass's set of files
-	// under positions of its own.
-	fset := token.NewFileSet()
-	var files []*ast.File
+	// The fixed file and the package's other files are parsed into one
+	// file set of the fixer's own (go/types compares positions, so the
+	// fixed file cannot join the pass's set under positions of its own);
+	// the other files are parsed once per package and shared by its fixes.
+	others, err := parsedFiles(b.pass)
+	if err != nil {
+		return err
+	}
+	name := b.tok.Name()
+	fixedFile, err := parser.ParseFile(others.fset, name, fixed, parser.SkipObjectResolution)
+	if err != nil {
+		return fmt.Errorf("fixed code does not parse: %v", err)
+	}
+	files := []*ast.File{fixedFile}
 	for _, f := range b.pass.Files {
-		name := b.pass.Fset.File(f.FileStart).Name()
-		src := fixed
 		if f != b.file {
-			if src, err = b.pass.ReadFile(name); err != nil {
-				return err
-			}
+			files = append(files, others.files[f])
 		}
-		pf, err := parser.ParseFile(fset, name, src, parser.SkipObjectResolution)
-		if err != nil {
-			return fmt.Errorf("fixed code does not parse: %v", err)
-		}
-		files = append(files, pf)
 	}
 	var first error
 	conf := types.Config{
@@ -50,11 +51,65 @@ func (b *builder) verify() error {
 			}
 		},
 	}
-	conf.Check(b.pass.Pkg.Path(), fset, files, nil)
+	conf.Check(b.pass.Pkg.Path(), others.fset, files, nil)
 	if first != nil {
 		return fmt.Errorf("fixed code does not type-check: %v", first)
 	}
 	return nil
+}
+
+// parsed holds a package's files parsed afresh, by the pass's file.
+type parsed struct {
+	fset  *token.FileSet
+	files map[*ast.File]*ast.File
+}
+
+// parseCache keeps the parsed files of the last few packages: a driver
+// analyses packages in parallel, and each package's fixes are built
+// while it is analysed, so a handful of entries serve them all.
+var parseCache struct {
+	sync.Mutex
+	order   []*analysis.Pass
+	entries map[*analysis.Pass]*parsed
+}
+
+const parseCacheSize = 8
+
+func parsedFiles(pass *analysis.Pass) (*parsed, error) {
+	parseCache.Lock()
+	p, ok := parseCache.entries[pass]
+	parseCache.Unlock()
+	if ok {
+		return p, nil
+	}
+	p = &parsed{fset: token.NewFileSet(), files: make(map[*ast.File]*ast.File)}
+	for _, f := range pass.Files {
+		name := pass.Fset.File(f.FileStart).Name()
+		src, err := pass.ReadFile(name)
+		if err != nil {
+			return nil, err
+		}
+		pf, err := parser.ParseFile(p.fset, name, src, parser.SkipObjectResolution)
+		if err != nil {
+			return nil, err
+		}
+		p.files[f] = pf
+	}
+	parseCache.Lock()
+	defer parseCache.Unlock()
+	if parseCache.entries == nil {
+		parseCache.entries = make(map[*analysis.Pass]*parsed)
+	}
+	if old, ok := parseCache.entries[pass]; ok {
+		return old, nil
+	}
+	if len(parseCache.order) == parseCacheSize {
+		delete(parseCache.entries, parseCache.order[0])
+		parseCache.order = parseCache.order[1:]
+	}
+	parseCache.entries[pass] = p
+	parseCache.order = append(parseCache.order, pass)
+	return p, nil
 }
 
 // importerFor resolves imports to the packages the analysed package

@@ -1,0 +1,102 @@
+package fixes_test
+
+import (
+	"fmt"
+	"go/importer"
+	"go/token"
+	"go/types"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/fixes"
+)
+
+// BenchmarkBuild measures the cost of one fix in packages of growing
+// size, and reports it as a ratio to one type-check of the package
+// (typechecks/fix), measured in the same run: Build re-parses and
+// type-checks the package to verify each fix, so the ratio should stay
+// near a small constant while the time per fix grows with the package.
+//
+//	go test -run '^$' -bench BenchmarkBuild ./fixes/
+func BenchmarkBuild(b *testing.B) {
+	for _, files := range []int{1, 10, 50} {
+		b.Run(fmt.Sprintf("files=%d", files), func(b *testing.B) {
+			pass, matches := benchPass(b, files)
+			start := time.Now()
+			const checks = 5
+			for i := 0; i < checks; i++ {
+				conf := types.Config{Importer: importer.Default()}
+				if _, err := conf.Check("bench", pass.Fset, pass.Files, nil); err != nil {
+					b.Fatal(err)
+				}
+			}
+			perCheck := time.Since(start) / checks
+			b.ResetTimer()
+			for i := 0; i < b.N; i++ {
+				if _, err := fixes.Build(pass, matches[i%len(matches)]); err != nil {
+					b.Fatal(err)
+				}
+			}
+			b.StopTimer()
+			perFix := b.Elapsed() / time.Duration(b.N)
+			b.ReportMetric(float64(perFix)/float64(perCheck), "typechecks/fix")
+		})
+	}
+}
+
+// benchPass writes a package of n files, each with ten binomial ratios
+// marked for the probe, loads it and returns a pass over it with the
+// probe's matches.
+func benchPass(b *testing.B, n int) (*analysis.Pass, []fixes.Match) {
+	dir := b.TempDir()
+	pkgDir := filepath.Join(dir, "src", "bench")
+	if err := os.MkdirAll(pkgDir, 0o755); err != nil {
+		b.Fatal(err)
+	}
+	for f := 0; f < n; f++ {
+		var src strings.Builder
+		fmt.Fprintf(&src, "package bench\n\n")
+		if f == 0 {
+			src.WriteString("func fact(n int) float64 {\n\tr := 1.0\n\tfor i := 2; i <= n; i++ {\n\t\tr *= float64(i)\n\t}\n\treturn r\n}\n")
+		}
+		for i := 0; i < 10; i++ {
+			fmt.Fprintf(&src, "\nfunc C%d_%d(n, k int) float64 {\n\t// probe:binomial(n, k)\n\treturn fact(n) / (fact(k) * fact(n-k))\n}\n", f, i)
+		}
+		if err := os.WriteFile(filepath.Join(pkgDir, fmt.Sprintf("f%d.go", f)), []byte(src.String()), 0o644); err != nil {
+			b.Fatal(err)
+		}
+	}
+	cfg := loadConfig(dir)
+	cfg.Tests = false
+	loaded, err := packages.Load(cfg, "bench")
+	if err != nil || len(loaded) != 1 || len(loaded[0].Errors) > 0 {
+		b.Fatalf("load: %v %v", err, loaded)
+	}
+	p := loaded[0]
+	pass := &analysis.Pass{
+		Fset: p.Fset, Files: p.Syntax, Pkg: p.Types, TypesInfo: p.TypesInfo, TypesSizes: p.TypesSizes,
+		ReadFile: os.ReadFile, Report: func(analysis.Diagnostic) {},
+	}
+	var matches []fixes.Match
+	for _, f := range p.Syntax {
+		for _, cg := range f.Comments {
+			sub := probeComment.FindStringSubmatch(cg.List[0].Text)
+			if sub == nil {
+				continue
+			}
+			m, err := probeMatch(pass, f, p.Fset.Position(cg.Pos()).Line+1, sub[1], sub[2])
+			if err != nil {
+				b.Fatal(err)
+			}
+			matches = append(matches, m)
+		}
+	}
+	_ = token.NoPos
+	return pass, matches
+}
