@@ -235,4 +235,3 @@ func loadConfig(dir string) *packages.Config {
 		Env:   append(os.Environ(), "GOPATH="+dir, "GO111MODULE=off", "GOWORK=off"),
 	}
 }
-
