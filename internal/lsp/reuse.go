@@ -195,7 +195,7 @@ func recheck(pkg *packages.Package, overlay map[string][]byte) (*packages.Packag
 			return nil, errStale
 		}
 		errs = append(errs, parseErrors(err)...)
-		if !importsKnown(pkg, f) || f.Name.Name != pkg.Name {
+		if !importsKnown(pkg, f) || f.Name.Name != pkg.Name || constraints(f) != constraints(cachedSyntax(pkg, name)) {
 			return nil, errStale
 		}
 		files = append(files, f)
@@ -241,6 +241,36 @@ func recheck(pkg *packages.Package, overlay map[string][]byte) (*packages.Packag
 		np.IllTyped = np.IllTyped || imp.IllTyped
 	}
 	return &np, nil
+}
+
+// constraints returns the build constraint lines of f: editing them may
+// move the file in or out of the package, which only go list decides.
+func constraints(f *ast.File) string {
+	if f == nil {
+		return ""
+	}
+	var lines []string
+	for _, g := range f.Comments {
+		if g.Pos() > f.Package {
+			break
+		}
+		for _, c := range g.List {
+			if strings.HasPrefix(c.Text, "//go:build") || strings.HasPrefix(c.Text, "// +build") {
+				lines = append(lines, c.Text)
+			}
+		}
+	}
+	return strings.Join(lines, "\n")
+}
+
+// cachedSyntax returns the syntax tree pkg was loaded with for file name.
+func cachedSyntax(pkg *packages.Package, name string) *ast.File {
+	for _, f := range pkg.Syntax {
+		if tf := pkg.Fset.File(f.FileStart); tf != nil && tf.Name() == name {
+			return f
+		}
+	}
+	return nil
 }
 
 // importsKnown reports whether every import of f is among pkg's loaded

@@ -26,6 +26,7 @@ func TestReuseMatchesFullLoad(t *testing.T) {
 		{"new import", strings.Replace(deskSource, `import "math"`, "import (\n\t\"fmt\"\n\t\"math\"\n)\n\nvar _ = fmt.Sprint", 1), false},
 		{"syntax error", strings.Replace(deskSource, "return math", "return (math", 1), true},
 		{"type error", strings.Replace(deskSource, "n + 1", `n + "one"`, 1), true},
+		{"build constraint added", "//go:build ignore\n\n" + deskSource, false},
 		{"package renamed", strings.Replace(deskSource, "package desk", "package help", 1), false},
 		{"back", deskSource, false}, // the cache now holds package help
 	}
