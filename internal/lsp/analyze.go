@@ -56,14 +56,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 			res, err = nil, fmt.Errorf("panic during analysis of %s: %v\n%s", path, p, debug.Stack())
 		}
 	}()
-	// Only Go files: an unsaved go.mod would change what go list resolves,
-	// which the saved one should decide.
-	overlay := make(map[string][]byte, len(docs))
-	for p, d := range docs {
-		if isGoFile(p) {
-			overlay[p] = d.text
-		}
-	}
+	overlay := overlayOf(docs)
 	cfg := &packages.Config{
 		Mode:    loadMode,
 		Context: ctx,
@@ -82,17 +75,38 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 	if err != nil {
 		return nil, err
 	}
-	conv := converter{enc: enc, overlay: overlay, fset: roots[0].Fset, texts: make(map[string][]byte), severity: opts.Severity}
-	res = &result{versions: make(map[string]int32), findings: make(map[string][]finding), rechecked: rechecked}
+	if err := rootFailure(graph, roots); err != nil {
+		return nil, err
+	}
+	conv := &converter{enc: enc, overlay: overlay, fset: roots[0].Fset, texts: make(map[string][]byte), severity: opts.Severity}
+	res = collect(graph, roots, docs, conv)
+	res.rechecked = rechecked
+	return res, nil
+}
+
+// overlayOf returns the open buffers to analyse. Only Go files: an unsaved
+// go.mod would change what go list resolves, which the saved one should
+// decide.
+func overlayOf(docs map[string]*document) map[string][]byte {
+	overlay := make(map[string][]byte, len(docs))
+	for p, d := range docs {
+		if isGoFile(p) {
+			overlay[p] = d.text
+		}
+	}
+	return overlay
+}
+
+// collect converts the root actions' diagnostics that fall in open files
+// of the analysed packages.
+func collect(graph *checker.Graph, roots []*packages.Package, docs map[string]*document, conv *converter) *result {
+	res := &result{versions: make(map[string]int32), findings: make(map[string][]finding)}
 	for _, p := range roots {
 		for _, f := range p.CompiledGoFiles {
 			if d, ok := docs[f]; ok {
 				res.versions[f] = d.version
 			}
 		}
-	}
-	if err := rootFailure(graph, roots); err != nil {
-		return nil, err
 	}
 	seen := make(map[string]bool)
 	for _, act := range graph.Roots {
@@ -109,7 +123,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 			res.findings[file] = append(res.findings[file], fd)
 		}
 	}
-	return res, nil
+	return res
 }
 
 // rootFailure returns an error when no analysis of the file's packages

@@ -375,3 +375,17 @@ func TestEditStorm(t *testing.T) {
 		t.Errorf("code actions for the newest finding: %d", len(as))
 	}
 }
+
+// TestTestFile opens a _test.go file, which go list puts in the test
+// variant of its package; each finding is published once.
+func TestTestFile(t *testing.T) {
+	testSource := "package desk\n\nimport (\n\t\"math\"\n\t\"testing\"\n)\n\nfunc TestAgents(t *testing.T) {\n\t_ = math.Gamma(200)\n}\n"
+	dir := writeModule(t, map[string]string{"desk.go": deskSource, "desk_test.go": testSource})
+	c := startServer(t, testOptions())
+	c.initialize(map[string]any{})
+	uri := c.open(filepath.Join(dir, "desk_test.go"), testSource)
+	p := c.diagnosticsFor(uri, func(publishDiagnosticsParams) bool { return true })
+	if len(p.Diagnostics) != 1 || p.Diagnostics[0].Range.Start.Line != lineOf(testSource, "math.Gamma") {
+		t.Errorf("test file diagnostics = %+v, want the one call", p.Diagnostics)
+	}
+}
