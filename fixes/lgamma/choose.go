@@ -4,10 +4,12 @@ package lgamma
 // smaller of k and n−k (see falling.go), all in double-double, so C(n,k)
 // keeps full float64 accuracy where exp(lgamma(n+1)−lgamma(k+1)−
 // lgamma(n−k+1)) loses digits to the rounding of ln n!. The exact forms
-// use the multiplicative formula C(m+i, i) = C(m+i−1, i−1)·(m+i)/i and
-// divide out gcd(C, i) before multiplying (Knuth, TAOCP vol. 2, 4.5.2
-// exercise; common practice), so intermediates overflow only when the
-// result does.
+// use the multiplicative formula C(m+i, i) = C(m+i−1, i−1)·(m+i)/i
+// (DLMF 26.3.5 rearranged; common practice). The usual way to keep
+// C·(m+i) from overflowing is to divide gcd(C, i) out first; here the
+// product is formed in 128 bits instead, which has the same effect (no
+// intermediate overflow where the result fits) without the divisions of
+// Euclid's algorithm.
 
 import (
 	"math"
@@ -79,24 +81,17 @@ func integerResult(l dd, exact func() (uint64, bool)) float64 {
 	return expOf(l)
 }
 
-// gcd returns the greatest common divisor of a and b (Euclid).
-func gcd(a, b uint64) uint64 {
-	for b != 0 {
-		a, b = b, a%b
-	}
-	return a
-}
-
-// mulDiv returns r·a/d when d divides r·a, with r·a/d ≤ limit, by first
-// dividing out the common factor of r and d.
+// mulDiv returns r·a/d when d divides r·a and the quotient is at most
+// limit. The product is formed in 128 bits (math/bits), so it cannot
+// overflow; the quotient fits in 64 bits exactly when the high word of
+// the product is below d.
 func mulDiv(r, a, d, limit uint64) (uint64, bool) {
-	g := gcd(r, d)
-	r, d = r/g, d/g
-	hi, lo := bits.Mul64(r, a/d)
-	if hi != 0 || lo > limit {
+	hi, lo := bits.Mul64(r, a)
+	if hi >= d {
 		return 0, false
 	}
-	return lo, true
+	q, _ := bits.Div64(hi, lo, d)
+	return q, q <= limit
 }
 
 // chooseU returns C(n,k) if it is at most limit. Along i the partial

@@ -66,8 +66,8 @@ func TestChooseExact(t *testing.T) {
 			}
 		}
 	}
-	// Large n, small k, where only the gcd step keeps the intermediate
-	// r·(n−k+i) from overflowing although the result fits.
+	// Large n, small k, where the intermediate r·(n−k+i) exceeds 64 bits
+	// although the result fits.
 	for _, c := range [][2]int64{{1 << 62, 1}, {3037000499, 2}, {4294967296, 2}, {2097151, 3}, {1 << 32, 3}, {100000, 5}, {5000, 8}} {
 		want := new(big.Int).Binomial(c[0], c[1])
 		got, ok := ChooseInt64(c[0], c[1])
