@@ -172,7 +172,24 @@ func splitCrew(n int) int {
 	return probe(23, n-k) + probe(24, k)
 }
 
+func rangeShrink(n int) int {
+	if n > 20 || n < 0 {
+		return 0
+	}
+	r := 0
+	m := n % 9
+	for i := range n {
+		n--
+		r += probe(25, n-i)
+	}
+	for i := range m {
+		r += probe(26, m-i)
+	}
+	return r
+}
+
 var corpus = map[string]func(int) int{
+	"rangeShrink":   rangeShrink,
 	"chooseRow":     chooseRow,
 	"splitCrew":     splitCrew,
 	"seatingOrders": seatingOrders,

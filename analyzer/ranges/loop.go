@@ -2,6 +2,7 @@ package ranges
 
 import (
 	"go/ast"
+	"go/token"
 	"go/types"
 )
 
@@ -115,6 +116,7 @@ func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 		if st.Key != nil {
 			w.operands(in, st.Key)
 			in = w.store(in, st.Key, key)
+			in = w.keyBelow(in, st)
 		}
 		if st.Value != nil {
 			w.operands(in, st.Value)
@@ -127,6 +129,29 @@ func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 		// The loop ends at the head, after any number of trips.
 		return end, joinAll(head, t.breaks)
 	})
+}
+
+// keyBelow records key < x for "for key := range x" over an integer
+// variable x that the loop never assigns (range evaluates x once).
+func (w *walker) keyBelow(s state, st *ast.RangeStmt) state {
+	k := w.kind(st.X)
+	if !k.ok || k.float || st.Tok != token.DEFINE {
+		return s
+	}
+	x, ok := ast.Unparen(st.X).(*ast.Ident)
+	if !ok {
+		return s
+	}
+	obj := w.f.objOf(x)
+	if obj == nil {
+		return s
+	}
+	for _, a := range w.f.assignedIn(st) {
+		if a == obj {
+			return s
+		}
+	}
+	return w.relate(s, st.Key, token.LSS, x)
 }
 
 // rangeKey returns the ranges of the key and value of range x, where

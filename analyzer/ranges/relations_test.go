@@ -36,6 +36,33 @@ func falling(n int) int {
 	}
 	return r
 }`},
+	{"range key below its limit", `package p
+func fact(n int) int { return n }
+func falling(n int) int {
+	if n > 20 {
+		return 0
+	}
+	r := 1
+	for i := range n {
+		r *= fact(n-i/*@range [1, 20]*/)
+	}
+	return r
+}`},
+	// n−i reaches −2 for n = 5 here, so no i < n fact may be used; n is
+	// widened downwards, and the difference may wrap.
+	{"range limit changed in the body", `package p
+func fact(n int) int { return n }
+func falling(n int) int {
+	if n > 20 || n < 0 {
+		return 0
+	}
+	r := 1
+	for i := range n {
+		n--
+		r *= fact(n-i/*@range (-inf, +inf)*/)
+	}
+	return r
+}`},
 	{"assignment kills the relation", `package p
 func fact(n int) int { return n }
 func choose(n, k int, wide bool) int {
