@@ -7,23 +7,30 @@
 // Each local variable of integer or float type (or of a type parameter
 // whose type set holds only integers, or only floats) is mapped to an
 // Interval [Lo, Hi]. MinInt64 and MaxInt64 stand for −∞ and +∞. Float
-// intervals have integer bounds rounded outwards. The walk follows the
-// syntax of the function in execution order, carrying a state (a
-// persistent map from variables to intervals, so that snapshots and
-// joins cost only the differences) and refining it at conditions:
-// dominating guards that leave (return, panic, os.Exit, log.Fatal,
-// t.Fatal, break, continue, goto), branch conditions with && || and !,
-// switch cases, loop conditions and range loops. Beside the intervals
-// a state carries up to 16 difference facts x − y ≤ c taken from guards
-// that compare two variables (each plus a constant); they narrow one
-// variable when the other is narrowed and bound x − y, so that after
+// intervals have integer bounds rounded outwards.
+//
+// The walk follows the syntax of the function in execution order,
+// carrying a state (a persistent map from variables to intervals, so
+// that snapshots and joins cost only the differences) and refining it
+// at conditions: dominating guards that leave (return, panic, os.Exit,
+// log.Fatal, t.Fatal, break, continue, goto), branch conditions with
+// &&, || and !, switch cases, loop conditions and range loops.
+//
+// Beside the intervals a state carries up to 16 difference facts
+// x − y ≤ c, taken from guards that compare two variables (each plus a
+// constant) and from "for i := range n". They narrow one variable when
+// the other is narrowed and bound x − y, so that after
 // "if k < 0 || k > n { return }" and "if n > 20 { return }" both k and
-// n−k lie in [0, 20]. Loops are iterated to
-// a fixpoint with widening after Options.MaxVisits trips, followed by
-// one narrowing trip; the loop condition re-narrows the body. No SSA
-// or control-flow graph is built: the cost is linear in the function
-// size times a small factor per loop nesting level, with a global
-// budget past which loops fall back to forgetting what they assign.
+// n−k lie in [0, 20].
+//
+// Loops are iterated to a fixpoint, widening after Options.MaxVisits
+// trips (after one trip below two enclosing loops), then given one
+// narrowing trip; the loop condition re-narrows the body on every trip.
+// A loop that assigns nothing living across trips is walked once. No
+// SSA form or control-flow graph is built. The work per function is
+// capped at ten statement visits per syntax node (plus a constant):
+// past that, and below four enclosing loops, a loop forgets what it
+// assigns instead of iterating.
 //
 // # Soundness
 //
@@ -32,7 +39,7 @@
 // that point in any execution that starts in the Options.Entry ranges.
 // Integer arithmetic follows Go's wrapping semantics: when a result
 // might leave its type, the range is the whole type. Package-level
-// variables, fields, elements and results of calls are unknown.
+// variables, struct fields, elements and results of calls are unknown.
 // A variable whose address is taken, that a closure assigns, or that
 // has a pointer method called on it is unknown from that point on (and
 // throughout any loop containing that point, or everywhere if the
@@ -42,14 +49,20 @@
 //
 // # Known limits
 //
-// Apart from the guard-derived difference facts, which are not closed
-// transitively and die when either variable is assigned, the domain is
-// non-relational: it does not know that s = 3·i. Conditions on derived values (x := f(n); if x
-// > 3) refine only x. Comparisons involving NaN are assumed false and
-// their negations true, so a float guard such as "if x > 170 { return }"
-// is taken to bound x even though a NaN would pass it. Labels targeted
-// by goto reset every fact. The int and uint types are taken to be 64
-// bits wide. Options.NoWrap trades the wrap-around rule for precision
-// on unbounded values: it reads the extreme bounds as infinite, so
-// n−1 after "if n > 20 { return }" is (−∞, 19] rather than unknown.
+// Apart from the difference facts, which are not closed transitively
+// and die when either variable is assigned, the domain is
+// non-relational: it does not know that s = 3·i. Because of the wrap
+// rule, a value widened to +∞ and then incremented, or widened to −∞
+// and then decremented, becomes unknown on both sides. Conditions on
+// derived values (x := f(n); if x > 3) refine only x. Comparisons
+// involving NaN are assumed false and their negations true, so a float
+// guard such as "if x > 170 { return }" is taken to bound x even though
+// a NaN would pass it. Labels targeted by goto reset every fact. The
+// int and uint types are taken to be 64 bits wide.
+//
+// Options.NoWrap trades the wrap rule for precision on unbounded
+// values: it reads the extreme bounds as infinite, so n−1 after
+// "if n > 20 { return }" is (−∞, 19] rather than unknown; results are
+// then sound only for executions in which no unbounded variable sits
+// at the limits of its type.
 package ranges
