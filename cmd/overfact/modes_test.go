@@ -1,0 +1,65 @@
+package main
+
+import (
+	"bytes"
+	"fmt"
+	"os/exec"
+	"strings"
+	"testing"
+	"time"
+)
+
+// TestTestFlag checks -test: findings in _test.go files are reported by
+// default, as singlechecker does, and not with -test=false.
+func TestTestFlag(t *testing.T) {
+	dir := writeModule(t, map[string]string{
+		"go.mod":            goMod,
+		"line/line.go":      "// Package line models the bottling line.\npackage line\n",
+		"line/line_test.go": strings.Replace(loopFile, "package line", "package line\n\nimport \"testing\"\n\nfunc TestOrders(t *testing.T) { _ = Orders(3) }", 1),
+	})
+	r := runIn(t, dir, isolated, "./...")
+	if r.code != 3 || !strings.Contains(r.stderr, "line_test.go:") {
+		t.Errorf("default run: code %d, stderr %q; want the finding in line_test.go", r.code, r.stderr)
+	}
+	r = runIn(t, dir, isolated, "-test=false", "./...")
+	if r.code != 0 || r.stderr != "" {
+		t.Errorf("-test=false: code %d, stderr %q; want a clean run", r.code, r.stderr)
+	}
+}
+
+// frame encodes one JSON-RPC message with the Content-Length header of
+// the Language Server Protocol's base protocol.
+func frame(body string) string {
+	return fmt.Sprintf("Content-Length: %d\r\n\r\n%s", len(body), body)
+}
+
+// TestLSPSubcommand starts "overfact lsp", sends initialize, shutdown
+// and exit as an editor does (LSP 3.17 lifecycle), and expects the
+// initialize result with the server's capabilities and a clean exit.
+func TestLSPSubcommand(t *testing.T) {
+	in := frame(`{"jsonrpc":"2.0","id":1,"method":"initialize","params":{"processId":null,"rootUri":null,"capabilities":{}}}`) +
+		frame(`{"jsonrpc":"2.0","method":"initialized","params":{}}`) +
+		frame(`{"jsonrpc":"2.0","id":2,"method":"shutdown"}`) +
+		frame(`{"jsonrpc":"2.0","method":"exit"}`)
+	cmd := exec.Command(overfactBin, "lsp")
+	cmd.Stdin = strings.NewReader(in)
+	var out, errb bytes.Buffer
+	cmd.Stdout, cmd.Stderr = &out, &errb
+	if err := cmd.Start(); err != nil {
+		t.Fatal(err)
+	}
+	done := make(chan error, 1)
+	go func() { done <- cmd.Wait() }()
+	select {
+	case err := <-done:
+		if err != nil {
+			t.Errorf("overfact lsp: %v\n%s", err, errb.String())
+		}
+	case <-time.After(20 * time.Second):
+		cmd.Process.Kill()
+		t.Fatalf("overfact lsp did not exit after the exit notification")
+	}
+	if !strings.Contains(out.String(), `"capabilities"`) || !strings.Contains(out.String(), `"id":2`) {
+		t.Errorf("no initialize result and shutdown reply:\n%s", out.String())
+	}
+}
