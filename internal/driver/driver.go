@@ -13,7 +13,6 @@ package driver
 import (
 	"fmt"
 	"io"
-	"os"
 	"path/filepath"
 	"strings"
 
@@ -166,48 +165,5 @@ func (r *run) report(graph *checker.Graph) {
 	}
 	if n := writeText(r.opts.Stderr, r.dir, graph.Roots); n > 0 {
 		r.findings = true
-	}
-}
-
-func (r *run) writeSARIF(roots []*checker.Action) {
-	root := r.opts.SourceRoot
-	if root == "" {
-		root = r.dir
-	}
-	b, err := sarif.NewBuilder(sarif.ToolComponent{
-		Name:           "overfact",
-		Version:        r.opts.Version,
-		InformationURI: "https://github.com/overfact/overfact",
-	}, r.opts.Rules, root)
-	if err != nil {
-		r.errorf("%v", err)
-		return
-	}
-	for _, act := range roots {
-		if act.Err != nil {
-			continue
-		}
-		for _, d := range act.Diagnostics {
-			if err := b.Add(act.Package.Fset, d, act.Analyzer.Name); err != nil {
-				r.errorf("%v", err)
-			}
-		}
-	}
-	if r.opts.SARIF == "-" {
-		if err := b.Write(r.opts.Stdout); err != nil {
-			r.errorf("%v", err)
-		}
-		return
-	}
-	f, err := os.Create(r.opts.SARIF)
-	if err != nil {
-		r.errorf("%v", err)
-		return
-	}
-	if err := b.Write(f); err != nil {
-		r.errorf("%v", err)
-	}
-	if err := f.Close(); err != nil {
-		r.errorf("%v", err)
 	}
 }
