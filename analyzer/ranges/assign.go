@@ -3,6 +3,7 @@ package ranges
 import (
 	"go/ast"
 	"go/token"
+	"go/types"
 )
 
 func (w *walker) assign(s state, st *ast.AssignStmt) state {
@@ -38,46 +39,66 @@ func (w *walker) assign(s state, st *ast.AssignStmt) state {
 }
 
 // operands evaluates the parts of an assignment target that are read
-// (indexes, pointers), but not a plain variable, which is written.
+// (indexes, pointers), but not a plain variable or tracked field, which
+// is written.
 func (w *walker) operands(s state, l ast.Expr) {
-	if _, ok := ast.Unparen(l).(*ast.Ident); !ok {
-		w.eval(s, l)
+	switch x := ast.Unparen(l).(type) {
+	case *ast.Ident:
+		return
+	case *ast.SelectorExpr:
+		if _, ok := w.f.fieldOf(x); ok {
+			return
+		}
 	}
+	w.eval(s, l)
 }
 
 // store assigns r to the target l.
 func (w *walker) store(s state, l ast.Expr, r Interval) state {
-	id, ok := ast.Unparen(l).(*ast.Ident)
-	if !ok || id.Name == "_" {
+	var obj types.Object
+	switch x := ast.Unparen(l).(type) {
+	case *ast.Ident:
+		if x.Name == "_" {
+			return s
+		}
+		obj = w.f.objOf(x)
+	case *ast.SelectorExpr:
+		obj, _ = w.f.fieldOf(x)
+	}
+	if obj == nil {
 		return s
 	}
-	obj := w.f.objOf(id)
-	if obj == nil || !w.f.tracked(obj) {
+	if w.f.structVar(obj) {
+		return w.f.forgetFields(s, obj)
+	}
+	if !w.f.tracked(obj) {
 		return s
 	}
 	s = w.f.assignVar(s, obj, r)
 	if w.rec && s.live {
-		w.f.exprs[id] = r.Meet(kindOf(obj.Type()).top)
+		w.f.exprs[ast.Unparen(l)] = r.Meet(kindOf(obj.Type()).top)
 	}
 	return s
 }
 
 // update applies x op= r, also used for x++ and x--.
 func (w *walker) update(s state, l ast.Expr, op token.Token, r Interval) state {
-	id, ok := ast.Unparen(l).(*ast.Ident)
-	if !ok {
-		w.eval(s, l)
+	l = ast.Unparen(l)
+	cur := w.eval(s, l)
+	switch x := l.(type) {
+	case *ast.Ident:
+	case *ast.SelectorExpr:
+		if _, ok := w.f.fieldOf(x); !ok {
+			return s
+		}
+	default:
 		return s
 	}
-	cur := w.eval(s, id)
-	var k numKind
-	if tv, ok := w.f.info.Types[id]; ok {
-		k = kindOf(tv.Type)
-	}
+	k := w.kind(l)
 	if !k.ok {
 		return s
 	}
-	return w.store(s, id, arith(op, cur, r, k, w.f.opts.NoWrap))
+	return w.store(s, l, arith(op, cur, r, k, w.f.opts.NoWrap))
 }
 
 func opOf(tok token.Token) token.Token {

@@ -188,7 +188,23 @@ func rangeShrink(n int) int {
 	return r
 }
 
+type crewPlan struct{ size, spare int }
+
+func crewFields(n int) int {
+	c := crewPlan{size: n}
+	if c.size > 9 || c.size < -4 {
+		return 0
+	}
+	c.spare = c.size * 2
+	for c.size > 0 {
+		c.size--
+		probe(29, c.size)
+	}
+	return probe(27, c.spare) + probe(28, c.size)
+}
+
 var corpus = map[string]func(int) int{
+	"crewFields":    crewFields,
 	"rangeShrink":   rangeShrink,
 	"chooseRow":     chooseRow,
 	"splitCrew":     splitCrew,

@@ -6,7 +6,9 @@
 //
 // Each local variable of integer or float type (or of a type parameter
 // whose type set holds only integers, or only floats) is mapped to an
-// Interval [Lo, Hi]. MinInt64 and MaxInt64 stand for −∞ and +∞. Float
+// Interval [Lo, Hi], and so is each direct numeric field of a local
+// struct variable (c.Batch for a parameter c of type Config, not of
+// type *Config). MinInt64 and MaxInt64 stand for −∞ and +∞. Float
 // intervals have integer bounds rounded outwards.
 //
 // The walk follows the syntax of the function in execution order,
@@ -39,9 +41,10 @@
 // that point in any execution that starts in the Options.Entry ranges.
 // Integer arithmetic follows Go's wrapping semantics: when a result
 // might leave its type, the range is the whole type. Package-level
-// variables, struct fields, elements and results of calls are unknown.
-// A variable whose address is taken, that a closure assigns, or that
-// has a pointer method called on it is unknown from that point on (and
+// variables, fields reached through pointers, elements and results of
+// calls are unknown. A variable whose address (or a field's address)
+// is taken, that a closure assigns, or that has a pointer method
+// called on it is unknown, fields included, from that point on (and
 // throughout any loop containing that point, or everywhere if the
 // function uses goto). Closures are analysed on their own, knowing
 // nothing of the variables they capture. Code nested deeper than 1000

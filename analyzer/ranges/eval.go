@@ -60,6 +60,10 @@ func (w *walker) evalNode(s state, e ast.Expr) Interval {
 	case *ast.FuncLit:
 		w.funcLit(e)
 		return Top()
+	case *ast.SelectorExpr:
+		if v, ok := w.f.fieldOf(e); ok {
+			return w.f.get(s, v, e)
+		}
 	}
 	w.children(s, e)
 	return Top()

@@ -44,6 +44,10 @@ type Func struct {
 	opaque map[ast.Node]bool
 	lits   map[*ast.FuncLit]bool
 
+	fields    map[fieldKey]*types.Var
+	fieldBase map[types.Object]types.Object   // stand-in → variable
+	fieldsOf  map[types.Object][]types.Object // variable → stand-ins
+
 	escapes     map[types.Object][]escape
 	hasGoto     bool
 	gotoTargets map[string]bool
@@ -127,6 +131,9 @@ func (f *Func) objOf(id *ast.Ident) types.Object {
 // tracked reports whether obj is a local numeric variable, the only
 // kind of object the walk keeps facts about.
 func (f *Func) tracked(obj types.Object) bool {
+	if _, ok := f.fieldBase[obj]; ok {
+		return true
+	}
 	v, ok := obj.(*types.Var)
 	if !ok || v.IsField() || v.Pkg() == nil || v.Parent() == nil || v.Parent() == v.Pkg().Scope() {
 		return false

@@ -25,7 +25,7 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	if w.loops > 4 || w.f.overBudget() {
 		head := entry
 		for _, obj := range w.f.assignedIn(n) {
-			head = w.f.assignVar(head, obj, Top())
+			head = w.f.forget(head, obj)
 		}
 		_, exit := trip(head)
 		return exit

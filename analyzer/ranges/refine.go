@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/constant"
 	"go/token"
+	"go/types"
 )
 
 // refine2 returns the states in which cond holds and fails, both from
@@ -102,7 +103,11 @@ func (w *walker) narrow(s state, target ast.Expr, op token.Token, b Interval) st
 	}
 	switch t := ast.Unparen(target).(type) {
 	case *ast.Ident:
-		return w.narrowVar(s, t, op, b)
+		return w.narrowVar(s, w.f.objOf(t), t, op, b)
+	case *ast.SelectorExpr:
+		if v, ok := w.f.fieldOf(t); ok {
+			return w.narrowVar(s, v, t, op, b)
+		}
 	case *ast.CallExpr:
 		tv, ok := w.f.info.Types[ast.Unparen(t.Fun)]
 		if !ok || !tv.IsType() || len(t.Args) != 1 {
@@ -167,8 +172,9 @@ func (w *walker) constOf(e ast.Expr) (int64, bool) {
 	return constant.Int64Val(tv.Value)
 }
 
-func (w *walker) narrowVar(s state, id *ast.Ident, op token.Token, b Interval) state {
-	obj := w.f.objOf(id)
+// narrowVar restricts variable obj, read at id, to the values for
+// which obj op b can hold.
+func (w *walker) narrowVar(s state, obj types.Object, id ast.Expr, op token.Token, b Interval) state {
 	if obj == nil || !w.f.tracked(obj) || w.f.escapedAt(obj, id) {
 		return s
 	}

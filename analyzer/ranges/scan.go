@@ -72,30 +72,30 @@ func (f *Func) scan(body ast.Node) {
 				f.gotoTargets[n.Label.Name] = true
 			}
 		case *ast.UnaryExpr:
-			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && n.Op == token.AND {
+			if id, ok := rootIdent(n.X); ok && n.Op == token.AND {
 				site(id, false)
 			}
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				if id, ok := ast.Unparen(l).(*ast.Ident); ok {
+				if id, ok := rootIdent(l); ok {
 					site(id, true)
 				}
 			}
 		case *ast.IncDecStmt:
-			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok {
+			if id, ok := rootIdent(n.X); ok {
 				site(id, true)
 			}
 		case *ast.RangeStmt:
 			loops = append(loops, n)
 			if n.Tok == token.ASSIGN {
 				for _, l := range []ast.Expr{n.Key, n.Value} {
-					if id, ok := ast.Unparen(l).(*ast.Ident); ok {
+					if id, ok := rootIdent(l); ok && l != nil {
 						site(id, true)
 					}
 				}
 			}
 		case *ast.SelectorExpr:
-			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && f.pointerMethod(n) {
+			if id, ok := rootIdent(n.X); ok && f.pointerMethod(n) {
 				site(id, false)
 			}
 		}
@@ -134,6 +134,9 @@ func (f *Func) pointerMethod(sel *ast.SelectorExpr) bool {
 // runs: n follows an escape of v, or shares a loop with one, or the
 // function uses goto.
 func (f *Func) escapedAt(v types.Object, n ast.Node) bool {
+	if base, ok := f.fieldBase[v]; ok {
+		v = base
+	}
 	es := f.escapes[v]
 	if len(es) == 0 {
 		return false
@@ -160,9 +163,14 @@ func (f *Func) assignedIn(st ast.Node) []types.Object {
 	}
 	var objs []types.Object
 	add := func(e ast.Expr) {
-		if id, ok := ast.Unparen(e).(*ast.Ident); ok {
-			if obj := f.objOf(id); obj != nil && f.tracked(obj) {
+		switch x := ast.Unparen(e).(type) {
+		case *ast.Ident:
+			if obj := f.objOf(x); obj != nil && (f.tracked(obj) || f.structVar(obj)) {
 				objs = append(objs, obj)
+			}
+		case *ast.SelectorExpr:
+			if v, ok := f.fieldOf(x); ok {
+				objs = append(objs, v)
 			}
 		}
 	}

@@ -126,7 +126,7 @@ func (w *walker) opaque(s state, st ast.Stmt) state {
 		w.f.snaps[st] = s.facts
 	}
 	for _, obj := range w.f.assignedIn(st) {
-		s = w.f.assignVar(s, obj, Top())
+		s = w.f.forget(s, obj)
 	}
 	for _, t := range w.targets {
 		t.breaks = append(t.breaks, s)
