@@ -39,7 +39,22 @@ func lnBetaDD(a, b float64) dd {
 	if a < b {
 		a, b = b, a
 	}
+	if a > 0x1p1000 && b >= stirlingSeriesMin {
+		return lnBetaHuge(a, b)
+	}
 	return lgammaDD(dd{b, 0}).add(lnGammaRatioDD(dd{a, 0}, twoSum(a, b)))
+}
+
+// lnBetaHuge returns ln B(a,b) for a ≥ b ≥ 16 when a+b may overflow: the
+// Stirling forms with ln(a+b) = ln a + ln(1 + b/a) give
+// (b−½)·ln(b/a) − ½ln a − (a+b−½)·ln(1+b/a) + ½ln 2π + δ(a) + δ(b) − δ(a+b),
+// in which a+b only appears multiplied by a logarithm below ln 2.
+func lnBetaHuge(a, b float64) dd {
+	ad, bd := dd{a, 0}, dd{b, 0}
+	l1 := ddLog(bd.divF(a).addF(1))
+	r := bd.addF(-0.5).mul(ddLog(bd.divF(a))).sub(ddLog(ad).mulF(0.5))
+	r = r.sub(l1.mulF(a)).sub(l1.mul(bd.addF(-0.5))).add(halfLn2Pi)
+	return r.addF(stirlingSeries(a) + stirlingSeries(b) - stirlingSeries(a+b))
 }
 
 // Beta returns B(a,b) = Γ(a)Γ(b)/Γ(a+b) for a, b > 0.

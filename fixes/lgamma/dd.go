@@ -12,9 +12,16 @@ import "math"
 
 type dd struct{ hi, lo float64 }
 
+// The three error-free transformations pass an overflow on as {±Inf, 0}
+// rather than the NaN their error terms would compute, so that a result
+// too large for float64 comes out as ±Inf.
+
 // twoSum returns a+b exactly as a normalized dd (Knuth).
 func twoSum(a, b float64) dd {
 	s := a + b
+	if math.IsInf(s, 0) {
+		return dd{s, 0}
+	}
 	bb := s - a
 	return dd{s, (a - (s - bb)) + (b - bb)}
 }
@@ -22,12 +29,18 @@ func twoSum(a, b float64) dd {
 // quickTwoSum is twoSum for |a| ≥ |b| (Dekker).
 func quickTwoSum(a, b float64) dd {
 	s := a + b
+	if math.IsInf(s, 0) {
+		return dd{s, 0}
+	}
 	return dd{s, b - (s - a)}
 }
 
 // twoProd returns a*b exactly as a dd, using a fused multiply-add.
 func twoProd(a, b float64) dd {
 	p := a * b
+	if math.IsInf(p, 0) {
+		return dd{p, 0}
+	}
 	return dd{p, math.FMA(a, b, -p)}
 }
 
@@ -71,6 +84,10 @@ func (a dd) mulF(b float64) dd {
 func (a dd) scale(e int) dd { return dd{math.Ldexp(a.hi, e), math.Ldexp(a.lo, e)} }
 
 func (a dd) div(b dd) dd {
+	if math.Abs(a.hi) > 0x1p1000 && !math.IsInf(a.hi, 0) {
+		// b·q1 ≈ a could round up to Inf; divide a smaller a instead.
+		return a.scale(-64).div(b).scale(64)
+	}
 	q1 := a.hi / b.hi
 	r := a.sub(b.mulF(q1))
 	q2 := r.hi / b.hi
@@ -80,6 +97,9 @@ func (a dd) div(b dd) dd {
 }
 
 func (a dd) divF(b float64) dd {
+	if math.Abs(a.hi) > 0x1p1000 && !math.IsInf(a.hi, 0) {
+		return a.scale(-64).divF(b).scale(64)
+	}
 	q1 := a.hi / b
 	p := twoProd(q1, b)
 	q2 := (a.hi - p.hi - p.lo + a.lo) / b
@@ -97,6 +117,9 @@ func (a dd) float() float64 { return a.hi + a.lo }
 // double-double table and e^r − 1 = r + p needs only r in double-double;
 // p = r²/2 + … is below 1.5e-5 and float64 suffices for it.
 func ddExp(a dd) dd {
+	if !(math.Abs(a.hi) < 709) {
+		return dd{math.Exp(a.hi), 0} // out of range or NaN: callers go through expOf
+	}
 	k := math.Round(a.hi * (64 / ln2.hi))
 	r := a.sub(twoProd(k, ln2.hi/64)).sub(twoProd(k, ln2.lo/64))
 	x := r.hi
@@ -131,6 +154,9 @@ func expOf(a dd) float64 {
 // |u| ≤ 1/1024, ln(1+u) = 2·atanh(s) = 2s + 2s(s²/3 + s⁴/5 + …) with
 // s = u/(2+u). Only 2s needs double-double; the rest is below 1e-7 of it.
 func ddLog(a dd) dd {
+	if !(a.hi > 0 && a.hi <= math.MaxFloat64) {
+		return dd{math.Log(a.hi), 0} // ±Inf, NaN: the math package's answer
+	}
 	_, e := math.Frexp(a.hi)
 	e--
 	m := a.scale(-e)

@@ -2,6 +2,7 @@ package lgamma
 
 import (
 	"math"
+	"math/big"
 	"strings"
 	"testing"
 )
@@ -24,6 +25,11 @@ func same(got, want float64) bool {
 	return got == want && math.Signbit(got) == math.Signbit(want) || got == want && want == 0
 }
 
+func refFloat(x *big.Float) float64 {
+	f, _ := x.Float64()
+	return f
+}
+
 func TestSpecialCases(t *testing.T) {
 	tests := []struct {
 		name      string
@@ -42,6 +48,10 @@ func TestSpecialCases(t *testing.T) {
 		{"LogGamma(-0)", LogGamma(math.Copysign(0, -1)), inf},
 		{"LogGamma(-3)", LogGamma(-3), inf},
 		{"LogGamma(1)", LogGamma(1), 0},
+		{"LogGamma(MaxFloat64)", LogGamma(math.MaxFloat64), inf}, // x(ln x − 1) overflows, as in math.Lgamma
+		{"LogGamma(1e305)", LogGamma(1e305), lgammaNaive(1e305)}, // x ≥ 2^58: math.Lgamma's x(ln x − 1) is exact to rounding
+		{"GammaRatio(MaxFloat64, MaxFloat64)", GammaRatio(math.MaxFloat64, math.MaxFloat64), 1},
+		{"LogBeta(MaxFloat64, MaxFloat64)", LogBeta(math.MaxFloat64, math.MaxFloat64), ninf}, // −2·MaxFloat64·ln 2
 		{"LogGamma(2)", LogGamma(2), 0},
 		{"LogChoose(-1, 0)", LogChoose(-1, 0), nan},
 		{"LogChoose(5, -1)", LogChoose(5, -1), ninf},
