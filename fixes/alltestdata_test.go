@@ -35,6 +35,7 @@ func srcPackages(t *testing.T, root string) []string {
 // helper module, and that analysing it again finds nothing left to fix
 // and none of the findings that were fixed.
 func TestAllTestdataFixes(t *testing.T) {
+	t.Parallel()
 	root := filepath.Join("..", "testdata", "src")
 	pkgs := srcPackages(t, root)
 	dir := gopath(t, root, pkgs...)

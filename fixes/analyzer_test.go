@@ -15,6 +15,7 @@ import (
 var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard"}
 
 func TestAnalyzerGolden(t *testing.T) {
+	t.Parallel()
 	dir := gopath(t, filepath.Join("..", "testdata", "src"), fixPackages...)
 	analysistest.RunWithSuggestedFixes(t, dir, analyzer.Analyzer, fixPackages...)
 }

@@ -46,7 +46,7 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 		return "", fmt.Errorf("helper has no function %s", name)
 	}
 	params := sig.Params()
-	if !sig.Variadic() && len(args) != params.Len() {
+	if len(args) == 0 || !sig.Variadic() && len(args) != params.Len() {
 		return "", fmt.Errorf("%s takes %d operands, match has %d", name, params.Len(), len(args))
 	}
 	texts := make([]string, len(args))

@@ -88,6 +88,7 @@ var diffCases = []diffCase{
 // integer code must panic; and the original must be wrong somewhere on
 // the grid, or the case would not show the fix doing anything.
 func TestDifferential(t *testing.T) {
+	t.Parallel()
 	if _, err := exec.LookPath("go"); err != nil {
 		t.Skip("no go command")
 	}

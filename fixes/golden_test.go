@@ -15,6 +15,7 @@ var probePackages = []string{"probebinom", "probeterm", "probeloop", "probeguard
 // applied alone drops the import it empties, and that all fixes applied
 // at once merge without overlaps and type-check against the real helper.
 func TestProbeGolden(t *testing.T) {
+	t.Parallel()
 	dir := gopath(t, filepath.Join("testdata", "src"), probePackages...)
 	results := analysistest.RunWithSuggestedFixes(t, dir, probe, probePackages...)
 	// The same run serves two more checks, since loading is the slow

@@ -34,6 +34,10 @@ func buildGuard(b *builder) error {
 	if m.FirstBad <= 0 {
 		return errors.New("factorial match has no first bad value")
 	}
+	if _, ok := m.Param.Type().(*types.TypeParam); ok {
+		// One guard would have to serve every type of the constraint.
+		return fmt.Errorf("%s has the type parameter %s", m.Param.Name(), m.Param.Type())
+	}
 	if !reaches(m.Param.Type(), m.FirstBad) {
 		return fmt.Errorf("%s of type %s never reaches %d", m.Param.Name(), m.Param.Type(), m.FirstBad)
 	}

@@ -23,7 +23,7 @@ const (
 	ShapeFactorial              // a standalone factorial (loop, recursion or call) whose value is returned or stored
 	ShapeBinomial               // n!/(k!(n-k)!)                       Args: n, k
 	ShapePermutation            // n!/(n-k)!                           Args: n, k
-	ShapeMultinomial            // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately
+	ShapeMultinomial            // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately (fixes checks that n = k1+...+km)
 	ShapeCatalan                // (2n)!/((n+1)!n!)                    Args: n
 	ShapeHypergeometric         // C(K,k)C(N-K,n-k)/C(N,n)             Args: k, N, K, n
 	ShapePowOverFactorial       // x^k/k!                              Args: x, k

@@ -19,7 +19,13 @@ func Suggest(pass *analysis.Pass, m Match) []analysis.SuggestedFix {
 
 // Build is Suggest with the reason a fix was refused, for callers that
 // want to explain a finding without a fix (and for tests).
-func Build(pass *analysis.Pass, m Match) ([]analysis.SuggestedFix, error) {
+func Build(pass *analysis.Pass, m Match) (fixes []analysis.SuggestedFix, err error) {
+	// A fixer bug must cost a fix, never the analysis.
+	defer func() {
+		if r := recover(); r != nil {
+			fixes, err = nil, fmt.Errorf("internal error building the fix: %v", r)
+		}
+	}()
 	b, err := newBuilder(pass, m)
 	if err != nil {
 		return nil, err
