@@ -162,7 +162,7 @@ func TestPrecisionAgainstExact(t *testing.T) {
 		want := new(big.Float).SetPrec(prec).SetInt(new(big.Int).Binomial(n, k))
 		check(fmt.Sprintf("C(%d,%d)", n, k), lgamma.Choose(int(n), int(k)), combin.GeneralizedBinomial(float64(n), float64(k)), want, 1e-13)
 	}
-	for _, kl := range [][2]int64{{10, 10}, {1000, 1000}, {100000, 100000}, {1000000, 1001000}, {250, 300}} {
+	for _, kl := range [][2]int64{{10, 10}, {1000, 1000}, {100000, 100000}, {250, 300}} {
 		k, lambda := kl[0], kl[1]
 		want := poissonExact(k, lambda)
 		check(fmt.Sprintf("Poisson k=%d λ=%d", k, lambda), lgamma.PoissonPMF(int(k), float64(lambda)),
