@@ -34,8 +34,29 @@ func (w *walker) assign(s state, st *ast.AssignStmt) state {
 	}
 	for i, l := range st.Lhs {
 		s = w.store(s, l, vals[i])
+		if len(st.Lhs) == len(st.Rhs) {
+			s = w.structInit(s, l, st.Rhs[i], true)
+		}
 	}
 	return s
+}
+
+// structInit sets the fields of a struct variable l assigned the
+// composite literal r, or declared without a value (r nil, zero).
+func (w *walker) structInit(s state, l, r ast.Expr, needLit bool) state {
+	id, ok := ast.Unparen(l).(*ast.Ident)
+	if !ok || !s.live {
+		return s
+	}
+	obj := w.f.objOf(id)
+	if obj == nil || !w.f.structVar(obj) {
+		return s
+	}
+	lit, _ := ast.Unparen(r).(*ast.CompositeLit)
+	if needLit && lit == nil {
+		return s
+	}
+	return w.initFields(s, obj, lit)
 }
 
 // operands evaluates the parts of an assignment target that are read
@@ -159,6 +180,12 @@ func (w *walker) decl(s state, st *ast.DeclStmt) state {
 		}
 		for i, id := range vs.Names {
 			s = w.store(s, id, vals[i])
+			switch {
+			case len(vs.Values) == 0:
+				s = w.structInit(s, id, nil, false)
+			case len(vs.Values) == len(vs.Names):
+				s = w.structInit(s, id, vs.Values[i], true)
+			}
 		}
 	}
 	return s

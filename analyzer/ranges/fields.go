@@ -35,9 +35,14 @@ func (f *Func) fieldOf(sel *ast.SelectorExpr) (types.Object, bool) {
 	if !ok || !kindOf(fv.Type()).ok {
 		return nil, false
 	}
+	return f.standIn(base, fv), true
+}
+
+// standIn returns the key object for field fv of variable base.
+func (f *Func) standIn(base types.Object, fv *types.Var) types.Object {
 	key := fieldKey{base, fv}
 	if v, ok := f.fields[key]; ok {
-		return v, true
+		return v
 	}
 	// The stand-in takes the variable's position: loops judge by it
 	// whether a value lives across trips.
@@ -50,7 +55,54 @@ func (f *Func) fieldOf(sel *ast.SelectorExpr) (types.Object, bool) {
 	f.fields[key] = v
 	f.fieldBase[v] = base
 	f.fieldsOf[base] = append(f.fieldsOf[base], v)
-	return v, true
+	return v
+}
+
+// initFields sets the numeric fields of struct variable base from a
+// composite literal of its type, or to zero when lit is nil (a var
+// declaration without value). Fields the literal leaves out are zero.
+func (w *walker) initFields(s state, base types.Object, lit *ast.CompositeLit) state {
+	st, ok := base.Type().Underlying().(*types.Struct)
+	if !ok {
+		return s
+	}
+	vals := make([]Interval, st.NumFields())
+	for i := range vals {
+		vals[i] = Point(0)
+	}
+	if lit != nil {
+		for i, el := range lit.Elts {
+			if kv, ok := el.(*ast.KeyValueExpr); ok {
+				id, ok := kv.Key.(*ast.Ident)
+				if !ok {
+					return s
+				}
+				j := fieldIndex(st, id.Name)
+				if j < 0 {
+					return s
+				}
+				vals[j] = w.quiet(s, kv.Value)
+			} else if i < len(vals) {
+				vals[i] = w.quiet(s, el)
+			}
+		}
+	}
+	for i := range vals {
+		fv := st.Field(i)
+		if kindOf(fv.Type()).ok {
+			s = w.f.assignVar(s, w.f.standIn(base, fv), vals[i])
+		}
+	}
+	return s
+}
+
+func fieldIndex(st *types.Struct, name string) int {
+	for i := 0; i < st.NumFields(); i++ {
+		if st.Field(i).Name() == name {
+			return i
+		}
+	}
+	return -1
 }
 
 // structVar reports whether obj is a local variable of struct type.

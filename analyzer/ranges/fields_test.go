@@ -88,7 +88,29 @@ func count() int {
 	for i := 0; i < 10; i++ {
 		t.n = i
 	}
-	return t.n/*@range (-inf, +inf)*/
+	return t.n/*@range [0, 9]*/
+}`},
+	{"composite literal sets the fields", `package p
+type plan struct {
+	batch, lots int
+	name        string
+	spare       uint8
+}
+func fact(n int) int { return n }
+func draws(n int) int {
+	c := plan{batch: 12, name: "line 4"}
+	d := plan{3, n, "x", 7}
+	s := fact(c.batch/*@range [12, 12]*/)
+	s += fact(c.lots/*@range [0, 0]*/)
+	s += fact(int(c.spare/*@range [0, 0]*/))
+	s += fact(d.batch/*@range [3, 3]*/)
+	return s + fact(d.lots/*@range (-inf, +inf)*/)
+}`},
+	{"literal through a pointer sets nothing", `package p
+type plan struct{ batch int }
+func draws() int {
+	c := &plan{batch: 12}
+	return c.batch/*@range (-inf, +inf)*/
 }`},
 	{"range over structs refreshes the variable", `package p
 type plan struct{ batch int }
