@@ -113,7 +113,9 @@ func TestSARIF(t *testing.T) {
 	if len(run.Results) != textFindings || textFindings == 0 {
 		t.Errorf("%d SARIF results, %d text findings", len(run.Results), textFindings)
 	}
+	levels := make(map[string]int)
 	for _, res := range run.Results {
+		levels[res.Level]++
 		rule := run.Tool.Driver.Rules[res.RuleIndex]
 		loc := res.Locations[0].PhysicalLocation
 		if rule.ID != res.RuleID || res.Level != rule.DefaultConfiguration.Level {
@@ -125,6 +127,11 @@ func TestSARIF(t *testing.T) {
 		if rg := loc.Region; rg.StartLine < 1 || rg.StartColumn < 1 || rg.EndLine < rg.StartLine {
 			t.Errorf("result %q: region %+v", res.Message.Text, rg)
 		}
+	}
+
+	// The demo has one definite finding (perms(24)) and many possible ones.
+	if levels["error"] != 1 || levels["warning"] != len(run.Results)-1 {
+		t.Errorf("levels %v, want 1 error and the rest warnings", levels)
 	}
 
 	// -sarif - writes the same log to stdout.

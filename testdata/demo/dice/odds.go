@@ -39,3 +39,9 @@ func Table() [6]float64 {
 	}
 	return t
 }
+
+// TokenOrders is the number of orders in which the 24 party tokens can
+// be handed out, a count that looks small and is not.
+func TokenOrders() int {
+	return perms(24)
+}

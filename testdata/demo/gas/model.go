@@ -34,6 +34,8 @@ func TaylorExp(x float64, terms int) float64 {
 	return sum
 }
 
-// standardVolume is the volume of the ball in three dimensions, a
-// constant argument far below where Gamma overflows.
-var standardVolume = BallVolume(3)
+// StandardVolume is the volume of the ball in three dimensions, 4π/3:
+// Γ(5/2) of a constant argument far below where Gamma overflows.
+func StandardVolume() float64 {
+	return math.Pow(math.Pi, 1.5) / math.Gamma(2.5)
+}

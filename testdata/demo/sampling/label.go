@@ -2,7 +2,9 @@ package sampling
 
 // crateArrangements is the number of ways to arrange the six bottles of
 // a crate: the factorial of a small constant, computed exactly.
-var crateArrangements = fact(6)
+func crateArrangements() int64 {
+	return fact(6)
+}
 
 // labelOrders counts the orders in which the labeller can apply the
 // labels of one bottle; a bottle carries at most five labels, and the
@@ -16,5 +18,5 @@ func labelOrders(labels int64) int64 {
 
 // CrateReport is the line printed on the quality sheet.
 func CrateReport(labels int64) (int64, int64) {
-	return crateArrangements, labelOrders(labels)
+	return crateArrangements(), labelOrders(labels)
 }
