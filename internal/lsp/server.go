@@ -334,7 +334,7 @@ func (s *server) didOpen(p didOpenParams) error {
 	if err != nil {
 		return err
 	}
-	s.schedule(d.path, 0)
+	s.schedule(d.path, 0, false)
 	return nil
 }
 
@@ -343,7 +343,7 @@ func (s *server) didChange(p didChangeParams) error {
 		return err
 	}
 	path, _ := uriToPath(p.TextDocument.URI)
-	s.schedule(path, s.opts.Debounce)
+	s.schedule(path, s.opts.Debounce, false)
 	return nil
 }
 
@@ -355,7 +355,7 @@ func (s *server) didSave(p didSaveParams) error {
 	if p.Text != nil {
 		s.docs.setText(path, *p.Text)
 	}
-	s.schedule(path, 0)
+	s.schedule(path, 0, true) // published again even if unchanged, as clients expect on save
 	return nil
 }
 
@@ -379,7 +379,10 @@ func (s *server) didClose(p didCloseParams) error {
 
 // schedule arranges for path to be analysed after delay, replacing an
 // analysis of it still waiting, so that only the newest version is analysed.
-func (s *server) schedule(path string, delay time.Duration) {
+// Unless force is set, the analysis is skipped if one of a sibling file has
+// meanwhile published this version's findings, as when an editor restores
+// a session and opens every file of a package at once.
+func (s *server) schedule(path string, delay time.Duration, force bool) {
 	if !isGoFile(path) {
 		return
 	}
@@ -395,7 +398,7 @@ func (s *server) schedule(path string, delay time.Duration) {
 	s.timers[path] = time.AfterFunc(delay, func() {
 		defer s.wg.Done()
 		defer s.recoverTo("analysis")
-		s.refresh(path, false)
+		s.refresh(path, !force)
 	})
 }
 
@@ -421,7 +424,8 @@ func (s *server) stop() {
 //
 // With onlyIfStale, a file whose published findings are already those of
 // its current version is left alone: a code action request arriving while
-// the analysis its didOpen scheduled runs then waits for that one only.
+// the analysis its didOpen scheduled runs then waits for that one only, and
+// files of a package opened together are analysed once.
 func (s *server) refresh(path string, onlyIfStale bool) {
 	s.analysisMu.Lock()
 	defer s.analysisMu.Unlock()
@@ -434,6 +438,7 @@ func (s *server) refresh(path string, onlyIfStale bool) {
 		return // closed while waiting
 	}
 	if r := s.cached(path); onlyIfStale && r != nil && r.version == d.version {
+		s.log.Printf("%s (version %d) already analysed", filepath.Base(path), d.version)
 		return
 	}
 	start := time.Now()
