@@ -116,7 +116,7 @@ func (r *run) analyze(a *analysis.Analyzer, patterns []string, overlay map[strin
 		analyzer = withOverlay(a, overlay)
 	}
 	if first {
-		if n := printPackageErrors(r.opts.Stderr, pkgs); n > 0 {
+		if n := printPackageErrors(r.opts.Stderr, r.dir, pkgs); n > 0 {
 			r.failed = true
 		}
 		if r.opts.Progress != nil {

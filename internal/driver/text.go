@@ -46,13 +46,17 @@ func relPath(dir, name string) string {
 }
 
 // printPackageErrors prints the load, parse and type errors of pkgs and
-// their dependencies, each once, and returns their number.
-func printPackageErrors(w io.Writer, pkgs []*packages.Package) int {
+// their dependencies, each once, and returns their number. Positions
+// inside dir are shortened as findings are.
+func printPackageErrors(w io.Writer, dir string, pkgs []*packages.Package) int {
 	n := 0
 	seen := make(map[string]bool)
 	packages.Visit(pkgs, nil, func(p *packages.Package) {
 		for _, err := range p.Errors {
-			msg := err.Error()
+			msg := err.Msg
+			if err.Pos != "" && err.Pos != "-" {
+				msg = relPath(dir, err.Pos) + ": " + msg
+			}
 			if !seen[msg] {
 				seen[msg] = true
 				fmt.Fprintln(w, msg)
