@@ -58,7 +58,6 @@ func buildGuard(b *builder) error {
 	}
 	p := m.Param.Name()
 	msg := fmt.Sprintf("%s: %s = %s overflows %s (largest is %d)", funcName(m.Func), p, verb, result, m.FirstBad-1)
-	_, hadFmt := b.imports["fmt"]
 	fmtName := b.use("fmt", "fmt", body.Lbrace+1)
 	indent := b.indentOf(body.Lbrace) + "\t"
 	guard := fmt.Sprintf("\n%sif %s >= %d {\n%s\tpanic(%s.Sprintf(%s, %s))\n%s}",
@@ -72,7 +71,7 @@ func buildGuard(b *builder) error {
 	}
 	b.insert(at, guard)
 	b.message = fmt.Sprintf("Add a range guard: panic when %s >= %d, where the result overflows %s", p, m.FirstBad, result)
-	if !hadFmt && b.addedImport("fmt") {
+	if b.added["fmt"] {
 		b.message += " (imports fmt)"
 	}
 	return nil
@@ -152,17 +151,6 @@ func reaches(t types.Type, v int64) bool {
 		return bits == 0 || uint64(v) <= math.MaxUint64>>(64-bits)
 	}
 	return false
-}
-
-// addedImport reports whether the fix adds an import of path.
-func (b *builder) addedImport(path string) bool {
-	for _, spec := range b.file.Imports {
-		if importPath(spec) == path && b.pkgNameOf(spec) != nil && b.pkgNameOf(spec).Name() == b.imports[path] {
-			return false
-		}
-	}
-	_, ok := b.imports[path]
-	return ok
 }
 
 func (b *builder) line(p token.Pos) int { return b.tok.Line(p) }

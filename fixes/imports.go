@@ -39,6 +39,7 @@ func (b *builder) use(path, base string, at token.Pos) string {
 		name = base + strconv.Itoa(i)
 	}
 	b.imports[path] = name
+	b.added[path] = true
 	b.addImport(path, base, name)
 	return name
 }
@@ -149,8 +150,8 @@ func (b *builder) removeUnusedImports() {
 		if pn == nil || pn.Name() == "_" || pn.Name() == "." {
 			continue
 		}
-		if _, added := b.imports[pn.Imported().Path()]; added && b.imports[pn.Imported().Path()] == pn.Name() {
-			continue
+		if b.imports[pn.Imported().Path()] == pn.Name() {
+			continue // the fix uses this import
 		}
 		if b.removesAllUses(pn) {
 			b.deleteSpec(spec)

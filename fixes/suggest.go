@@ -75,9 +75,10 @@ type builder struct {
 	tok     *token.File
 	src     []byte
 	edits   []analysis.TextEdit
-	removed []span // source the fix deletes
-	copied  []span // source the fix deletes but re-emits verbatim
-	imports map[string]string
+	removed []span            // source the fix deletes
+	copied  []span            // source the fix deletes but re-emits verbatim
+	imports map[string]string // import path → name the fix uses
+	added   map[string]bool   // import paths the fix adds
 	message string
 }
 
@@ -107,7 +108,8 @@ func newBuilder(pass *analysis.Pass, m Match) (*builder, error) {
 	if len(src) != tok.Size() {
 		return nil, fmt.Errorf("%s changed since it was parsed", tok.Name())
 	}
-	return &builder{pass: pass, m: m, file: m.File, tok: tok, src: src, imports: make(map[string]string)}, nil
+	return &builder{pass: pass, m: m, file: m.File, tok: tok, src: src,
+		imports: make(map[string]string), added: make(map[string]bool)}, nil
 }
 
 func (b *builder) offset(p token.Pos) int { return b.tok.Offset(p) }
