@@ -73,14 +73,15 @@ func (fc *fnCtx) accLoopOf(s ast.Stmt, before [][]ast.Stmt) *accLoop {
 			found = al
 		}
 	}
-	if found == nil || fc.assignsElsewhere(sh.body, found) || fc.closureAssigns(found.acc) {
+	if found == nil {
 		return nil
 	}
+	// The cheap tests first; the walks of the body and the function last.
 	found.accInit = fc.constStart(found.acc, before)
-	if found.accInit == nil {
+	if found.accInit == nil || !fc.classify(found) {
 		return nil
 	}
-	if !fc.classify(found) {
+	if fc.assignsElsewhere(sh.body, found) || fc.closureAssigns(found.acc) {
 		return nil
 	}
 	return found

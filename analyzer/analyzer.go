@@ -84,25 +84,34 @@ func run(pass *analysis.Pass) (any, error) {
 
 	// Phase 1: find factorial-valued functions and export their facts, so
 	// that phase 2 sees calls of local and imported ones alike.
-	ins.Preorder([]ast.Node{(*ast.FuncDecl)(nil), (*ast.FuncLit)(nil)}, func(n ast.Node) {
-		c.allFuncs = append(c.allFuncs, n)
-	})
+	scans := c.scanAll(ins)
 	funcs := c.allFuncs
+	var decls []*ast.FuncDecl
 	for _, n := range funcs {
 		if d, ok := n.(*ast.FuncDecl); ok && d.Body != nil {
-			c.guard(n, func() { c.findFactorialFunc(d) })
+			if s := scans[d]; s.worth() || s.localCall {
+				decls = append(decls, d)
+			}
 		}
 	}
-	for _, n := range funcs {
-		if d, ok := n.(*ast.FuncDecl); ok && d.Body != nil {
-			c.guard(n, func() { c.findBinomialFunc(d) })
+	for _, d := range decls {
+		c.guard(d, func() { c.findFactorialFunc(d) })
+	}
+	for _, d := range decls {
+		if c.funcs[c.declObj(d)] == nil {
+			s := scans[d]
+			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.
 	for _, n := range funcs {
-		if body := funcBody(n); body != nil && c.candidate(body) {
-			c.guard(n, func() { c.checkFunc(n) })
+		s := scans[n]
+		// A call of this package's functions may now be a call of a
+		// factorial function found in phase 1.
+		s.knownCall = s.knownCall || s.localCall && len(c.funcs) > 0
+		if funcBody(n) != nil && s.worth() {
+			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
 	}
 	return nil, nil
@@ -129,16 +138,6 @@ func funcBody(n ast.Node) *ast.BlockStmt {
 	return nil
 }
 
-func funcType(n ast.Node) *ast.FuncType {
-	switch n := n.(type) {
-	case *ast.FuncDecl:
-		return n.Type
-	case *ast.FuncLit:
-		return n.Type
-	}
-	return nil
-}
-
 // fileOf returns what the checker knows of the file holding pos.
 func (c *checker) fileOf(pos token.Pos) *fileInfo {
 	tf := c.pass.Fset.File(pos)
@@ -146,4 +145,10 @@ func (c *checker) fileOf(pos token.Pos) *fileInfo {
 		return nil
 	}
 	return c.files[tf]
+}
+
+// declObj returns the function a declaration declares.
+func (c *checker) declObj(d *ast.FuncDecl) *types.Func {
+	fn, _ := c.pass.TypesInfo.Defs[d.Name].(*types.Func)
+	return fn
 }

@@ -12,7 +12,7 @@ import (
 // parameters, as a ratio of factorial calls or by a multiplicative loop,
 // and if so exports the fact; calls of it then form hypergeometric
 // probabilities. It runs after every factorial function is known.
-func (c *checker) findBinomialFunc(decl *ast.FuncDecl) {
+func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 	obj, _ := c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
 	if obj == nil || c.funcs[obj] != nil {
 		return
@@ -29,8 +29,11 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl) {
 	if own.file != nil {
 		own.assumes = own.file.dirs.stmtAssumesIn(decl)
 	}
-	fact := own.binomialRatioFunc(decl)
-	if fact == nil {
+	var fact *FactorialFact
+	if calls {
+		fact = own.binomialRatioFunc(decl)
+	}
+	if fact == nil && loops {
 		fact = own.binomialLoopFunc(decl, res)
 	}
 	if fact == nil {

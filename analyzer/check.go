@@ -7,32 +7,87 @@ import (
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/fixes"
+	"golang.org/x/tools/go/ast/inspector"
 )
 
-// candidate is the syntactic prefilter: only a function with a product
-// assignment, a multiplication or division, or a call (which may be of
-// math.Gamma or of a factorial function) is worth a range analysis. It
-// allocates nothing per node.
-func (c *checker) candidate(body *ast.BlockStmt) bool {
-	found := false
-	ast.Inspect(body, func(n ast.Node) bool {
-		if found {
-			return false
+// scan is what the syntactic prefilter found in a function body.
+type scan struct {
+	product   bool // a *= or x = x*y: a product loop may be here
+	loop      bool // a for or range statement
+	callMul   bool // a multiplication with a call operand: recursion may be here
+	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
+	localCall bool // a call of a function of this package, which may become factorial-valued
+}
+
+// scanAll is the syntactic prefilter. In one pass of the shared
+// inspector over the node types that matter, it records for each
+// function (a closure counts on its own) whether it multiplies and what
+// it calls; it allocates only per function. Only what it finds is
+// analysed further, and the range analysis runs only when a finding
+// needs a range.
+func (c *checker) scanAll(ins *inspector.Inspector) map[ast.Node]*scan {
+	out := make(map[ast.Node]*scan)
+	var stack []ast.Node
+	var cur *scan
+	types := []ast.Node{(*ast.FuncDecl)(nil), (*ast.FuncLit)(nil), (*ast.AssignStmt)(nil), (*ast.BinaryExpr)(nil), (*ast.CallExpr)(nil), (*ast.ForStmt)(nil), (*ast.RangeStmt)(nil)}
+	ins.Preorder(types, func(n ast.Node) {
+		for len(stack) > 0 && n.Pos() >= stack[len(stack)-1].End() {
+			stack = stack[:len(stack)-1]
+			cur = nil
+			if len(stack) > 0 {
+				cur = out[stack[len(stack)-1]]
+			}
 		}
 		switch n := n.(type) {
-		case *ast.FuncLit:
-			return false // analysed on its own
+		case *ast.FuncDecl, *ast.FuncLit:
+			c.allFuncs = append(c.allFuncs, n)
+			cur = new(scan)
+			out[n] = cur
+			stack = append(stack, n)
+		case *ast.ForStmt, *ast.RangeStmt:
+			if cur != nil {
+				cur.loop = true
+			}
 		case *ast.AssignStmt:
-			found = n.Tok == token.MUL_ASSIGN || n.Tok == token.QUO_ASSIGN
+			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && isMulOrQuo(n.Rhs[0])) {
+				cur.product = true
+			}
 		case *ast.BinaryExpr:
-			found = n.Op == token.MUL || n.Op == token.QUO
+			if cur != nil && n.Op == token.MUL && !cur.callMul {
+				_, x := unparen(n.X).(*ast.CallExpr)
+				_, y := unparen(n.Y).(*ast.CallExpr)
+				cur.callMul = x || y
+			}
 		case *ast.CallExpr:
-			fn := c.calleeOf(n)
-			found = fn != nil && (fn.Pkg() != nil && fn.Pkg().Path() == "math" && fn.Name() == "Gamma" || c.factOf(fn) != nil)
+			if cur == nil {
+				return
+			}
+			if !cur.knownCall {
+				cur.knownCall = c.knownCallee(n)
+			}
+			if fn := c.calleeOf(n); fn != nil && fn.Pkg() == c.pass.Pkg {
+				cur.localCall = true
+			}
 		}
-		return !found
 	})
-	return found
+	return out
+}
+
+// knownCallee reports whether call calls math.Gamma, math.Pow, math.Exp
+// or a function with a factorial fact.
+func (c *checker) knownCallee(call *ast.CallExpr) bool {
+	fn := c.calleeOf(call)
+	if fn == nil {
+		return false
+	}
+	if fn.Pkg() != nil && fn.Pkg().Path() == "math" {
+		switch fn.Name() {
+		case "Gamma", "Pow", "Exp":
+			return true
+		}
+		return false
+	}
+	return c.factOf(fn) != nil
 }
 
 // factOf returns the factorial fact of fn, from this package or an
@@ -55,30 +110,36 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 }
 
 // checkFunc reports the findings of one function.
-func (c *checker) checkFunc(n ast.Node) {
+func (c *checker) checkFunc(n ast.Node, s scan) {
 	if testHook != nil {
 		testHook(n)
 	}
 	fc := c.ctx(n)
 	body := funcBody(n)
-	fc.eachLoop(body, func(al *accLoop) {
-		if al.kind == kindPower {
-			if fc.powLoops == nil {
-				fc.powLoops = make(map[types.Object]*accLoop)
-			}
-			fc.powLoops[al.acc] = al
-			return
-		}
-		fc.checkAccLoop(al)
-	})
-	if d, ok := n.(*ast.FuncDecl); ok {
-		if fn, _ := c.pass.TypesInfo.Defs[d.Name].(*types.Func); fn != nil {
-			if ff := c.funcs[fn]; ff != nil && ff.rec != nil {
-				fc.checkRecursion(ff)
-			}
+	if s.worthLoops() {
+		fc.eachLoop(body, fc.noteLoop)
+	}
+	if d, ok := n.(*ast.FuncDecl); ok && s.callMul {
+		if ff := c.funcs[c.declObj(d)]; ff != nil && ff.rec != nil {
+			fc.checkRecursion(ff)
 		}
 	}
-	fc.checkExprs(body)
+	if s.knownCall || fc.powLoops != nil {
+		fc.checkExprs(body)
+	}
+}
+
+// noteLoop reports a product loop, or records a power loop for the
+// products that use its result.
+func (fc *fnCtx) noteLoop(al *accLoop) {
+	if al.kind == kindPower {
+		if fc.powLoops == nil {
+			fc.powLoops = make(map[types.Object]*accLoop)
+		}
+		fc.powLoops[al.acc] = al
+		return
+	}
+	fc.checkAccLoop(al)
 }
 
 // checkAccLoop reports a product loop whose product can exceed its type.
@@ -192,3 +253,14 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 		},
 	})
 }
+
+func isMulOrQuo(e ast.Expr) bool {
+	b, ok := unparen(e).(*ast.BinaryExpr)
+	return ok && (b.Op == token.MUL || b.Op == token.QUO)
+}
+
+// worthLoops reports whether a function may hold a product loop.
+func (s *scan) worthLoops() bool { return s.loop && s.product }
+
+// worth reports whether a function may hold anything to report.
+func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall }

@@ -219,6 +219,9 @@ var _ = token.NoPos
 // statement, and the range analysis then carries it into every
 // expression derived from it.
 func (fc *fnCtx) liftAssumes() {
+	if len(fc.assumes) == 0 {
+		return
+	}
 	if fc.defs == nil {
 		fc.collectDefs()
 	}

@@ -77,8 +77,13 @@ func largestFits(kind facKind, t numType) string {
 }
 
 // typeLimit reports whether v is the largest value of an integer type,
-// which is what the range of an unconstrained variable ends at.
+// which is what the range of an unconstrained variable ends at, or so
+// large (past 2^32) that naming it would only hide that nothing bounds
+// the value in practice.
 func typeLimit(v int64) bool {
+	if v >= 1<<32 {
+		return true
+	}
 	switch v {
 	case math.MaxInt8, math.MaxUint8, math.MaxInt16, math.MaxUint16,
 		math.MaxInt32, math.MaxUint32, math.MaxInt64:
