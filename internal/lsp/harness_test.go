@@ -1,6 +1,7 @@
 package lsp
 
 import (
+	"bytes"
 	"context"
 	"encoding/json"
 	"fmt"
@@ -294,4 +295,22 @@ func anyDiags(p publishDiagnosticsParams) bool { return len(p.Diagnostics) > 0 }
 func noDiags(p publishDiagnosticsParams) bool  { return len(p.Diagnostics) == 0 }
 func lineOf(text string, sub string) uint32 {
 	return uint32(strings.Count(text[:strings.Index(text, sub)], "\n"))
+}
+
+// syncBuffer is a bytes.Buffer safe for the server's concurrent logging.
+type syncBuffer struct {
+	mu  sync.Mutex
+	buf bytes.Buffer
+}
+
+func (b *syncBuffer) Write(p []byte) (int, error) {
+	b.mu.Lock()
+	defer b.mu.Unlock()
+	return b.buf.Write(p)
+}
+
+func (b *syncBuffer) String() string {
+	b.mu.Lock()
+	defer b.mu.Unlock()
+	return b.buf.String()
 }
