@@ -5,6 +5,7 @@ import (
 	"go/token"
 	"math"
 	"math/big"
+	"os"
 	"path/filepath"
 	"regexp"
 	"strconv"
@@ -38,6 +39,7 @@ func TestScenarios(t *testing.T) {
 	var diags []analysis.Diagnostic
 	for _, r := range results {
 		diags = append(diags, r.Diagnostics...)
+		checkRelated(t, r.Pass.Fset, r.Diagnostics)
 	}
 	if len(diags) == 0 {
 		t.Fatal("no diagnostics at all")
@@ -226,5 +228,30 @@ func TestDocMatchesPackageComment(t *testing.T) {
 	}
 	if Analyzer.Doc != doc || Analyzer.Name != "overfact" {
 		t.Error("Analyzer does not use doc")
+	}
+}
+
+// checkRelated: a finding about a value that comes from a call of a
+// factorial function points at that function's declaration.
+func checkRelated(t *testing.T, fset *token.FileSet, diags []analysis.Diagnostic) {
+	for _, d := range diags {
+		switch strings.TrimSuffix(d.Category, definiteSuffix) {
+		case catRatio, catCall, catLateConv:
+		default:
+			continue
+		}
+		if len(d.Related) != 1 {
+			t.Errorf("%s: %q has %d related positions, want the definition", fset.Position(d.Pos), d.Message, len(d.Related))
+			continue
+		}
+		p := fset.Position(d.Related[0].Pos)
+		src, err := os.ReadFile(p.Filename)
+		if err != nil {
+			t.Fatal(err)
+		}
+		lines := strings.Split(string(src), "\n")
+		if p.Line < 1 || p.Line > len(lines) || !strings.HasPrefix(lines[p.Line-1], "func ") {
+			t.Errorf("%s: related position %s is not a function declaration", fset.Position(d.Pos), p)
+		}
 	}
 }

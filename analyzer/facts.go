@@ -16,7 +16,8 @@ type FactorialFact struct {
 	Kind string
 	// Param is the index of the parameter n; the function returns
 	// (n+Offset)! (or n!! and so on). Param2 is the index of k for
-	// falling factorials and binomials, −1 otherwise.
+	// falling factorials n!/(n-k)! and binomials C(n, k), of x for rising
+	// factorials x(x+1)…(x+n−1), and −1 otherwise.
 	Param  int
 	Param2 int
 	Offset int64

@@ -188,6 +188,20 @@ func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 				return
 			}
 			ff = &facFunc{kind: al.kind, param: idx, param2: -1, offset: al.topOff, loop: al}
+		case kindFalling:
+			// p *= n - i for i < k: n!/(n-k)! of parameters n and k.
+			n, k := fc.c.objOf(fc.fallingBase(al)), fc.c.objOf(al.count)
+			ni, ki := fc.c.paramIndex(decl, n), fc.c.paramIndex(decl, k)
+			if ni >= 0 && ki >= 0 && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, n, al.shape.stmt) && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, k, al.shape.stmt) {
+				ff = &facFunc{kind: kindFalling, param: ni, param2: ki, loop: al}
+			}
+		case kindRising:
+			// p *= x + i for i < n: x(x+1)…(x+n-1) of parameters n and x.
+			n, x := fc.c.objOf(al.count), fc.c.objOf(al.x)
+			ni, xi := fc.c.paramIndex(decl, n), fc.c.paramIndex(decl, x)
+			if ni >= 0 && xi >= 0 && al.coff == 0 && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, n, al.shape.stmt) && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, x, al.shape.stmt) {
+				ff = &facFunc{kind: kindRising, param: ni, param2: xi, loop: al}
+			}
 		}
 	})
 	return ff

@@ -171,3 +171,13 @@ func Jokers(n uint32) uint32 { // want Jokers:`factorial of parameter 0, safe fo
 	}
 	return n * Jokers(n-1)
 }
+
+// Draws counts ordered draws of k cards from n: a falling factorial
+// function.
+func Draws(n, k int64) int64 { // want Draws:`falling-factorial of parameter 0, breaks from 21`
+	p := int64(1)
+	for i := int64(0); i < k; i++ { // want `falling factorial of k factors in int64 wraps`
+		p *= n - i
+	}
+	return p
+}

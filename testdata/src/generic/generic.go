@@ -19,7 +19,7 @@ func Factorial[T Number](n T) T { // want Factorial:`factorial of parameter 0, b
 type Float interface{ ~float32 | ~float64 }
 
 // Rising returns x(x+1)…(x+n-1).
-func Rising[F Float](x F, n int) F {
+func Rising[F Float](x F, n int) F { // want Rising:`rising-factorial of parameter 1, breaks from 35`
 	p := F(1)
 	for i := 0; i < n; i++ { // want `rising factorial of n factors from x in float32 \(the narrowest type in the constraint of F\) overflows to \+Inf for n ≥ 35 at x = 1; n is not bounded here`
 		p *= x + F(i)
