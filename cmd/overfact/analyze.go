@@ -70,11 +70,15 @@ func rules() []sarif.Rule {
 func usage(fs *flag.FlagSet) {
 	out := fs.Output()
 	doc, _, _ := strings.Cut(analyzer.Analyzer.Doc, "\n\n")
-	fmt.Fprintf(out, "overfact: %s\n\n", doc)
+	if !strings.HasPrefix(doc, analyzer.Analyzer.Name+":") {
+		doc = analyzer.Analyzer.Name + ": " + doc
+	}
+	fmt.Fprintf(out, "%s\n\n", doc)
 	fmt.Fprint(out, `Usage:
   overfact [flags] PACKAGES     analyse packages (exit 0 clean, 3 findings, 1 errors)
   overfact bounds [TYPE...]     print where factorials stop fitting each type
   overfact version              print the version
+  overfact lsp [-log file]      serve the Language Server Protocol on stdin/stdout
   go vet -vettool=$(which overfact) PACKAGES
   go fix -fixtool=$(which overfact) PACKAGES
 
