@@ -2,7 +2,6 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/types"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -13,21 +12,9 @@ import (
 // and if so exports the fact; calls of it then form hypergeometric
 // probabilities. It runs after every factorial function is known.
 func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
-	obj, _ := c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
-	if obj == nil || c.funcs[obj] != nil {
+	obj, res, own := c.numericFunc(decl)
+	if own == nil || c.funcs[obj] != nil {
 		return
-	}
-	sig := obj.Type().(*types.Signature)
-	if sig.Results().Len() == 0 || sig.Results().Len() > 2 {
-		return
-	}
-	res, ok := c.numOf(sig.Results().At(0).Type())
-	if !ok {
-		return
-	}
-	own := &fnCtx{c: c, node: decl, file: c.fileOf(decl.Pos()), entry: c.ownEntry(decl)}
-	if own.file != nil {
-		own.assumes = own.file.dirs.stmtAssumesIn(decl)
 	}
 	var fact *FactorialFact
 	if calls {

@@ -69,10 +69,7 @@ func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 		if caller == nil || ff.param >= len(call.Args) {
 			return ranges.Interval{}, false
 		}
-		own := &fnCtx{c: c, node: caller, file: c.fileOf(caller.Pos()), entry: c.ownEntry(caller)}
-		if own.file != nil {
-			own.assumes = own.file.dirs.stmtAssumesIn(caller)
-		}
+		own := c.ownCtx(caller)
 		join = join.Join(own.rangeOf(call.Args[ff.param]))
 		any = true
 		if join.IsTop() {

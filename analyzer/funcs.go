@@ -30,21 +30,9 @@ type facFunc struct {
 // findFactorialFunc decides whether decl returns a factorial of one of
 // its parameters, and if so exports the fact.
 func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
-	obj, _ := c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
-	if obj == nil {
+	obj, res, own := c.numericFunc(decl)
+	if own == nil {
 		return
-	}
-	sig := obj.Type().(*types.Signature)
-	if sig.Results().Len() == 0 || sig.Results().Len() > 2 {
-		return
-	}
-	res, ok := c.numOf(sig.Results().At(0).Type())
-	if !ok {
-		return
-	}
-	own := &fnCtx{c: c, node: decl, file: c.fileOf(decl.Pos()), entry: c.ownEntry(decl)}
-	if own.file != nil {
-		own.assumes = own.file.dirs.stmtAssumesIn(decl)
 	}
 	ff := own.recursionOf(decl, obj)
 	if ff == nil {
@@ -377,4 +365,33 @@ func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 		return nil
 	}
 	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.c + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
+}
+
+// numericFunc returns the function decl declares, its numeric result
+// type and a context for it that knows only its own annotations, or a
+// nil context when the first of at most two results is not numeric.
+func (c *checker) numericFunc(decl *ast.FuncDecl) (*types.Func, numType, *fnCtx) {
+	obj := c.declObj(decl)
+	if obj == nil {
+		return nil, numType{}, nil
+	}
+	sig := obj.Type().(*types.Signature)
+	if sig.Results().Len() == 0 || sig.Results().Len() > 2 {
+		return nil, numType{}, nil
+	}
+	res, ok := c.numOf(sig.Results().At(0).Type())
+	if !ok {
+		return nil, numType{}, nil
+	}
+	return obj, res, c.ownCtx(decl)
+}
+
+// ownCtx returns a fresh context for fn with its own annotations only,
+// not the ranges its call sites give it.
+func (c *checker) ownCtx(fn ast.Node) *fnCtx {
+	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos()), entry: c.ownEntry(fn)}
+	if own.file != nil {
+		own.assumes = own.file.dirs.stmtAssumesIn(fn)
+	}
+	return own
 }

@@ -69,5 +69,5 @@ func (c *checker) relatedDef(name string, pos token.Pos) []analysis.RelatedInfor
 	if !pos.IsValid() {
 		return nil
 	}
-	return []analysis.RelatedInformation{{Pos: pos, Message: name + " computes the factorial here"}}
+	return []analysis.RelatedInformation{{Pos: pos, Message: name + " is defined here"}}
 }
