@@ -18,7 +18,7 @@ import (
 
 // Report prints the staffing table entry for n callers.
 func Report(n float64) string {
-	return fmt.Sprintf("%.3g agents", math.Gamma(n+1))
+	return fmt.Sprintf("%.3g operators", math.Gamma(n+1))
 }
 `
 

@@ -19,12 +19,12 @@ const shiftSource = `package desk
 
 import "math"
 
-// Agents estimates the staffing table entry for n callers.
-func Agents(n float64) float64 {
+// Staff estimates the staffing table entry for n callers.
+func Staff(n float64) float64 {
 	return math.Gamma(n + 1)
 }
 
-// Shifts counts the ways to pick k agents of n for a shift.
+// Shifts counts the ways to pick k operators of n for a shift.
 func Shifts(n, k int) int {
 	/* é λ 𝛤 */ return fact(n) / (fact(k) * fact(n-k))
 }

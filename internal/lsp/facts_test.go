@@ -25,7 +25,7 @@ const rotaSource = `package desk
 
 import "example.com/desk/combin"
 
-// Shifts counts the ways to pick k agents of n for a shift.
+// Shifts counts the ways to pick k operators of n for a shift.
 func Shifts(n, k int) int {
 	return combin.Fact(n) / (combin.Fact(k) * combin.Fact(n-k))
 }

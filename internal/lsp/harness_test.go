@@ -274,7 +274,7 @@ func (c *client) open(path, text string) string {
 	return uri
 }
 
-// shutdown performs the orderly end of a session and returns Serve's result.
+// shutdown performs the orderly end of a connection and returns Serve's result.
 func (c *client) shutdown() error {
 	c.t.Helper()
 	if m := c.call("shutdown", nil); m.Error != nil {

@@ -76,7 +76,7 @@ func stampOf(path string) stamp {
 }
 
 // mutableInputs lists the files and directories of pkg's load that can
-// change under an editor session: those of the packages of modules that
+// change while the editor runs: those of the packages of modules that
 // are not in the module cache (whose directories carry an "@version"), and
 // of the standard library none, as GOROOT is read-only in practice.
 func mutableInputs(pkg *packages.Package) map[string]stamp {

@@ -100,7 +100,7 @@ func writeLater(t *testing.T, path, text string) {
 }
 
 // TestReuseLimit checks that an entry is retired after maxUses re-checks,
-// so that a long session's FileSet starts anew.
+// so that a long-running server's FileSet starts anew.
 func TestReuseLimit(t *testing.T) {
 	dir := writeModule(t, map[string]string{"desk.go": deskSource})
 	path := filepath.Join(dir, "desk.go")

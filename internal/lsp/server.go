@@ -157,7 +157,7 @@ func (s *server) loop(ctx context.Context, fr *frameReader) error {
 }
 
 // endOfInput decides what an end of the input means: the normal end of a
-// session after shutdown, or a client that went away.
+// connection after shutdown, or a client that went away.
 func (s *server) endOfInput(err error) error {
 	s.mu.Lock()
 	defer s.mu.Unlock()
@@ -379,9 +379,9 @@ func (s *server) didClose(p didCloseParams) error {
 
 // schedule arranges for path to be analysed after delay, replacing an
 // analysis of it still waiting, so that only the newest version is analysed.
-// Unless force is set, the analysis is skipped if one of a sibling file has
-// meanwhile published this version's findings, as when an editor restores
-// a session and opens every file of a package at once.
+// Unless force is set, the analysis is skipped if an analysis of a sibling
+// file has meanwhile published this version's findings, as when an editor
+// starting up reopens every file of a package at once.
 func (s *server) schedule(path string, delay time.Duration, force bool) {
 	if !isGoFile(path) {
 		return

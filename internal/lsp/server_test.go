@@ -22,8 +22,8 @@ const deskSource = `package desk
 
 import "math"
 
-// Agents estimates the staffing table entry for n callers.
-func Agents(n float64) float64 {
+// Staff estimates the staffing table entry for n callers.
+func Staff(n float64) float64 {
 	/* é λ 𝛤 */ return math.Gamma(n + 1)
 }
 `
@@ -381,7 +381,7 @@ func TestEditStorm(t *testing.T) {
 // TestTestFile opens a _test.go file, which go list puts in the test
 // variant of its package; each finding is published once.
 func TestTestFile(t *testing.T) {
-	testSource := "package desk\n\nimport (\n\t\"math\"\n\t\"testing\"\n)\n\nfunc TestAgents(t *testing.T) {\n\t_ = math.Gamma(200)\n}\n"
+	testSource := "package desk\n\nimport (\n\t\"math\"\n\t\"testing\"\n)\n\nfunc TestStaff(t *testing.T) {\n\t_ = math.Gamma(200)\n}\n"
 	dir := writeModule(t, map[string]string{"desk.go": deskSource, "desk_test.go": testSource})
 	c := startServer(t, testOptions())
 	c.initialize(map[string]any{})
