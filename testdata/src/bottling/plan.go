@@ -127,3 +127,17 @@ func CrateFloat() float64 {
 func CrateCount() int64 {
 	return int64(mathkit.FactorialFloat(15))
 }
+
+// BatchWays is C(n, 3) for a batch whose size the line controller caps
+// at 20, a bound declared for the one statement that needs it.
+func BatchWays(batch []int) int64 {
+	n := len(batch)
+	//overfact:assume n <= 20
+	return mathkit.Factorial(n) / (mathkit.Factorial(3) * mathkit.Factorial(n-3))
+}
+
+// BatchWaysUnchecked is BatchWays without the declared bound.
+func BatchWaysUnchecked(batch []int) int64 {
+	n := len(batch)
+	return mathkit.Factorial(n) / (mathkit.Factorial(3) * mathkit.Factorial(n-3)) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+}
