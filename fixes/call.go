@@ -79,6 +79,9 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 		return err
 	}
 	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)
+	for _, d := range b.absorbed {
+		b.deleteStmt(d)
+	}
 	b.message = rewriteMessage(text)
 	return nil
 }

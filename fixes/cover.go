@@ -6,31 +6,157 @@ import (
 	"go/constant"
 	"go/token"
 	"go/types"
+
+	"golang.org/x/tools/go/ast/astutil"
 )
 
 // covered checks that replacing the match's expression by a helper call
-// on its operands loses nothing: the operands lie inside the expression,
-// and every variable the expression reads is read by an operand. A match
-// whose expression also holds another factor (x * n!/(k!(n-k)!)) would
-// otherwise have that factor silently dropped.
+// on its operands loses nothing: the operands lie inside the expression
+// (or in the definitions of locals it alone reads, which the rewrite
+// deletes with it), and every variable that source reads is read by an
+// operand. A match whose expression also holds another factor
+// (x * n!/(k!(n-k)!)) would otherwise have that factor silently dropped.
 func (b *builder) covered() error {
 	node := b.m.Node
+	regions := []ast.Node{node}
+	locals := make(map[types.Object]bool)
 	operands := append(append([]ast.Expr(nil), b.m.Args...), b.m.Extra...)
+	if !within(operands, regions) {
+		defs, err := b.absorbable()
+		if err != nil {
+			return err
+		}
+		for v, d := range defs {
+			locals[v] = true
+			regions = append(regions, d)
+			b.absorbed = append(b.absorbed, d)
+		}
+	}
 	read := make(map[types.Object]bool)
 	for _, a := range operands {
-		if a.Pos() < node.Pos() || a.End() > node.End() {
+		if !within([]ast.Expr{a}, regions) {
 			return fmt.Errorf("operand %s lies outside the rewritten expression", b.text(a))
 		}
 		for _, v := range b.vars(a) {
 			read[v] = true
 		}
 	}
-	for _, v := range b.vars(node) {
-		if !read[v] {
-			return fmt.Errorf("the rewrite would drop %s", v.Name())
+	for _, r := range regions {
+		for _, v := range b.vars(r) {
+			if !read[v] && !locals[v] {
+				return fmt.Errorf("the rewrite would drop %s", v.Name())
+			}
 		}
 	}
 	return nil
+}
+
+// within reports whether every expression lies inside one of regions.
+func within(es []ast.Expr, regions []ast.Node) bool {
+	for _, e := range es {
+		in := false
+		for _, r := range regions {
+			in = in || r.Pos() <= e.Pos() && e.End() <= r.End()
+		}
+		if !in {
+			return false
+		}
+	}
+	return true
+}
+
+// absorbable finds the definitions, earlier in the statement list that
+// holds the match's expression, of locals read only by that expression
+// (num := n!; den := k!(n-k)!; return num / den): the rewrite deletes
+// them along with the expression. None of the operands' variables may be
+// assigned between the first definition and the expression, so the helper
+// call sees the values the definitions saw.
+func (b *builder) absorbable() (map[types.Object]ast.Stmt, error) {
+	node := b.m.Node
+	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
+	var list []ast.Stmt
+	at := -1
+	for i := 1; i < len(path) && at < 0; i++ {
+		list = stmtList(path[i])
+		for j, s := range list {
+			if s == path[i-1] {
+				at = j
+			}
+		}
+	}
+	if at < 0 {
+		return nil, fmt.Errorf("the match's expression is not in a statement list")
+	}
+	defs := make(map[types.Object]ast.Stmt)
+	first := at
+	for j := at - 1; j >= 0; j-- {
+		v := b.definedVar(list[j])
+		if v != nil && b.usedOnlyIn(v, node) {
+			defs[v] = list[j]
+			first = j
+		}
+	}
+	for _, s := range list[first:at] {
+		if _, isDef := defs[b.definedVar(s)]; isDef && b.definedVar(s) != nil {
+			continue
+		}
+		for _, a := range b.m.Args {
+			for _, v := range b.vars(a) {
+				if b.assigned(v, s) {
+					return nil, fmt.Errorf("%s changes before the expression", v.Name())
+				}
+			}
+		}
+	}
+	return defs, nil
+}
+
+// definedVar returns the variable s defines, if s is v := e or var v = e.
+func (b *builder) definedVar(s ast.Stmt) types.Object {
+	switch s := s.(type) {
+	case *ast.AssignStmt:
+		if s.Tok == token.DEFINE && len(s.Lhs) == 1 && len(s.Rhs) == 1 {
+			if id, ok := s.Lhs[0].(*ast.Ident); ok {
+				return b.pass.TypesInfo.Defs[id]
+			}
+		}
+	case *ast.DeclStmt:
+		if g, ok := s.Decl.(*ast.GenDecl); ok && len(g.Specs) == 1 {
+			if v, ok := g.Specs[0].(*ast.ValueSpec); ok && len(v.Names) == 1 && len(v.Values) == 1 {
+				return b.pass.TypesInfo.Defs[v.Names[0]]
+			}
+		}
+	}
+	return nil
+}
+
+// usedOnlyIn reports whether every use of v lies in n, and there is one.
+func (b *builder) usedOnlyIn(v types.Object, n ast.Node) bool {
+	used := false
+	for id, obj := range b.pass.TypesInfo.Uses {
+		if obj != v {
+			continue
+		}
+		if id.Pos() < n.Pos() || id.End() > n.End() {
+			return false
+		}
+		used = true
+	}
+	return used
+}
+
+// deleteStmt deletes s, with its line when nothing else is on it.
+func (b *builder) deleteStmt(s ast.Stmt) {
+	start := b.offset(b.tok.LineStart(b.line(s.Pos())))
+	alone := true
+	for _, c := range b.src[start:b.offset(s.Pos())] {
+		alone = alone && (c == ' ' || c == '\t')
+	}
+	if alone {
+		b.replace(b.tok.Pos(start), b.lineEnd(s.End()), "")
+		return
+	}
+	b.replace(s.Pos(), s.End(), "")
 }
 
 // vars lists the variables (not fields) n reads.

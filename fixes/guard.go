@@ -94,14 +94,14 @@ func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
 }
 
 // assigned reports whether obj is assigned, incremented or has its
-// address taken anywhere in body.
-func (b *builder) assigned(obj types.Object, body *ast.BlockStmt) bool {
+// address taken anywhere in n.
+func (b *builder) assigned(obj types.Object, n ast.Node) bool {
 	is := func(e ast.Expr) bool {
 		id, ok := ast.Unparen(e).(*ast.Ident)
 		return ok && b.pass.TypesInfo.ObjectOf(id) == obj
 	}
 	found := false
-	ast.Inspect(body, func(n ast.Node) bool {
+	ast.Inspect(n, func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {

@@ -127,15 +127,8 @@ func isOne(info *types.Info, e ast.Expr) bool {
 func next(file *ast.File, s ast.Stmt) ast.Stmt {
 	path, _ := astutil.PathEnclosingInterval(file, s.Pos(), s.End())
 	for _, n := range path {
-		var list []ast.Stmt
-		switch p := n.(type) {
-		case *ast.BlockStmt:
-			list = p.List
-		case *ast.CaseClause:
-			list = p.Body
-		case *ast.CommClause:
-			list = p.Body
-		default:
+		list := stmtList(n)
+		if list == nil {
 			continue
 		}
 		for i, t := range list {
@@ -144,6 +137,19 @@ func next(file *ast.File, s ast.Stmt) ast.Stmt {
 			}
 		}
 		return nil
+	}
+	return nil
+}
+
+// stmtList returns the statements of a block or case clause, or nil.
+func stmtList(n ast.Node) []ast.Stmt {
+	switch p := n.(type) {
+	case *ast.BlockStmt:
+		return p.List
+	case *ast.CaseClause:
+		return p.Body
+	case *ast.CommClause:
+		return p.Body
 	}
 	return nil
 }

@@ -104,7 +104,11 @@ func probeMatch(pass *analysis.Pass, f *ast.File, line int, shape, operands stri
 	m.Node, m.Result = e, pass.TypesInfo.TypeOf(e)
 	var err error
 	if m.Args, err = findAll(e, head); err != nil {
-		return m, err
+		// Operands may sit in the definitions of locals the expression
+		// reads: look in the whole function.
+		if m.Args, err = findAll(enclosingFunc(f, e), head); err != nil {
+			return m, err
+		}
 	}
 	if semi {
 		m.Extra, err = findAll(e, tail)
@@ -230,6 +234,17 @@ func assigns(info *types.Info, s ast.Stmt, obj types.Object) bool {
 		}
 	}
 	return false
+}
+
+func enclosingFunc(f *ast.File, e ast.Expr) ast.Node {
+	var fn ast.Node = f
+	ast.Inspect(f, func(n ast.Node) bool {
+		if d, ok := n.(*ast.FuncDecl); ok && d.Pos() <= e.Pos() && e.End() <= d.End() {
+			fn = d.Body
+		}
+		return true
+	})
+	return fn
 }
 
 // exprAt returns the value of the return, assignment or declaration that

@@ -79,7 +79,10 @@ type builder struct {
 	copied  []span            // source the fix deletes but re-emits verbatim
 	imports map[string]string // import path → name the fix uses
 	added   map[string]bool   // import paths the fix adds
-	message string
+	// absorbed are definitions of locals only the rewritten expression
+	// read; the rewrite deletes them.
+	absorbed []ast.Stmt
+	message  string
 }
 
 type span struct{ pos, end token.Pos }

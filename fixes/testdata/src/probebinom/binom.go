@@ -100,3 +100,29 @@ func Share(n float64, k int) float64 {
 	// probe:binomial(n,k)
 	return factF(int(n)) / (factF(k) * factF(int(n)-k)) // want "probe binomial: no fix: n is a float"
 }
+
+// Stepwise builds the ratio through locals, which the rewrite deletes.
+func Stepwise(n, k int) int {
+	num := fact(n)
+	den := fact(k) * fact(n-k) // the denominator
+	// probe:binomial(n, k)
+	return num / den // want "probe binomial"
+}
+
+// Reused reads its numerator twice, so the local stays and no fix is
+// offered.
+func Reused(n, k int) (int, int) {
+	num := fact(n)
+	den := fact(k) * fact(n-k)
+	// probe:binomial(n, k)
+	return num / den, num // want "probe binomial: no fix: operand n lies outside"
+}
+
+// Moved changes k between the definitions and the ratio.
+func Moved(n, k int) int {
+	num := fact(n)
+	den := fact(k) * fact(n-k)
+	k++
+	// probe:binomial(n, k)
+	return num / den // want "probe binomial: no fix: k changes before the expression"
+}
