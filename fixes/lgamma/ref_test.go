@@ -58,7 +58,7 @@ func refLog(x *big.Float) *big.Float {
 	e := x.MantExp(m)
 	mf, _ := m.Float64()
 	y := bf(math.Log(mf) + float64(e)*math.Ln2)
-	for i := 0; i < 4; i++ {
+	for i := 0; i < 3; i++ { // 53 → 159 → 477 bits, one step to spare
 		ey := refExp(y)
 		num := bnew().Sub(x, ey)
 		den := bnew().Add(x, ey)
@@ -106,6 +106,12 @@ var refBernoulli = sync.OnceValue(func() []*big.Rat {
 	return even
 })
 
+// refHalfLn2Pi is ½ln 2π.
+var refHalfLn2Pi = sync.OnceValue(func() *big.Float {
+	h := refLog(bnew().Mul(refPi(), bi(2)))
+	return h.Quo(h, bi(2))
+})
+
 // refLnGamma returns ln Γ(x) for x > 0.
 func refLnGamma(x *big.Float) *big.Float {
 	z := bnew().Set(x)
@@ -118,8 +124,7 @@ func refLnGamma(x *big.Float) *big.Float {
 	r := bnew().Sub(z, bf(0.5))
 	r.Mul(r, refLog(z))
 	r.Sub(r, z)
-	half := refLog(bnew().Mul(refPi(), bi(2)))
-	r.Add(r, half.Quo(half, bi(2)))
+	r.Add(r, refHalfLn2Pi())
 	zinv := bnew().Quo(bi(1), z)
 	zinv2 := bnew().Mul(zinv, zinv)
 	pow := bnew().Set(zinv)
