@@ -34,12 +34,28 @@ func runAnalysis(args []string) int {
 		usage(fs)
 		return driver.ExitError
 	}
+	if msg := conflictingFlags(opts); msg != "" {
+		fmt.Fprintf(os.Stderr, "overfact: %s\n", msg)
+		return 2
+	}
 	opts.Rules = rules()
 	opts.Version = moduleVersion()
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}
 	return driver.Run(analyzer.Analyzer, fs.Args(), opts)
+}
+
+// conflictingFlags explains why a combination of flags cannot work:
+// fixing reports nothing, and stdout holds one document at a time.
+func conflictingFlags(o driver.Options) string {
+	switch {
+	case (o.Fix || o.Diff) && (o.JSON || o.SARIF != ""):
+		return "-fix and -diff do not report findings; run -json or -sarif separately"
+	case o.JSON && o.SARIF == "-":
+		return "-json and -sarif - would both write to stdout; give -sarif a file"
+	}
+	return ""
 }
 
 // addAnalyzerFlags exposes the analyzer's own flags, as singlechecker

@@ -63,3 +63,15 @@ func TestLSPSubcommand(t *testing.T) {
 		t.Errorf("no initialize result and shutdown reply:\n%s", out.String())
 	}
 }
+
+func TestConflictingFlags(t *testing.T) {
+	for _, args := range [][]string{
+		{"-fix", "-json", "./..."},
+		{"-diff", "-sarif", "out.sarif", "./..."},
+		{"-json", "-sarif", "-", "./..."},
+	} {
+		if r := runIn(t, ".", nil, args...); r.code != 2 || !strings.Contains(r.stderr, "overfact: ") {
+			t.Errorf("%v: code %d, stderr %q; want 2 and an explanation", args, r.code, r.stderr)
+		}
+	}
+}
