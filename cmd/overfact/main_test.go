@@ -93,9 +93,9 @@ func TestVersion(t *testing.T) {
 }
 
 // TestVetProtocol checks the two queries the go command sends a vet
-// tool before any package, as cmd/go/internal/work (vet and buildid
-// handling) expects them: -V=full names the tool and a build ID, and
-// -flags lists flags as JSON.
+// tool before any package: -V=full names the tool and a build ID (read by
+// cmd/go/internal/work/buildid.go), and -flags lists the flags as JSON
+// (read by cmd/go/internal/vet/vetflag.go); file names from memory.
 func TestVetProtocol(t *testing.T) {
 	r := runIn(t, ".", nil, "-V=full")
 	if r.code != 0 || !strings.Contains(r.stdout, " version ") || !strings.Contains(r.stdout, "buildID=") {
