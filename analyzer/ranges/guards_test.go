@@ -8,18 +8,18 @@ var guardCases = []struct {
 	name, src string
 }{
 	{"early return bounds a staffing estimate", `package p
-func agents(n int) int {
+func staffNeeded(n int) int {
 	if n > 20 {
 		return -1
 	}
 	return n/*@range (-inf, 20]*/
 }`},
 	{"no guard stays top", `package p
-func agents(n int) int {
+func staffNeeded(n int) int {
 	return n/*@range (-inf, +inf)*/
 }`},
 	{"guard that falls through does not refine", `package p
-func agents(n int) int {
+func staffNeeded(n int) int {
 	if n > 20 {
 		n = n + 0
 	}
