@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/ast"
 	"go/types"
+	"strconv"
 	"strings"
 )
 
@@ -13,9 +14,10 @@ type family struct {
 	float, signed, unsigned string
 }
 
-// pick returns the helper of f that serves a result of type t. Integer
-// results need a 64-bit type: the exact helpers return int64 or uint64,
-// and converting to a narrower type would wrap silently again.
+// pick returns the helper of f that serves a result of type t. The exact
+// helpers return int64 or uint64; for a narrower integer type (int32, or
+// int on a 32-bit target) call wraps their result in a check, since the
+// conversion alone would wrap silently again.
 func (b *builder) pick(f family, t types.Type) (string, error) {
 	var name string
 	switch classOf(t) {
@@ -32,10 +34,36 @@ func (b *builder) pick(f family, t types.Type) (string, error) {
 	if name == "" {
 		return "", fmt.Errorf("no helper for a result of type %s", t)
 	}
-	if c := classOf(t); c != classFloat && b.pass.TypesSizes.Sizeof(t) < 8 {
-		return "", fmt.Errorf("result type %s is narrower than the exact helpers' 64 bits", t)
-	}
 	return name, nil
+}
+
+// narrow reports whether t is an integer type narrower than 64 bits.
+func (b *builder) narrow(t types.Type) bool {
+	return classOf(t) != classFloat && b.pass.TypesSizes.Sizeof(t) < 8
+}
+
+// checked converts text, the call of a 64-bit exact helper, to the narrow
+// integer type want, panicking when the value does not fit:
+//
+//	func() int32 {
+//		v := lgamma.MustChooseInt64(int64(n), int64(k))
+//		if int64(int32(v)) != v {
+//			panic("lgamma.MustChooseInt64(int64(n), int64(k)) overflows int32")
+//		}
+//		return int32(v)
+//	}()
+func (b *builder) checked(text string, got, want types.Type) (string, error) {
+	name, err := b.typeName(want)
+	if err != nil {
+		return "", err
+	}
+	// v may shadow a v of the enclosing code without harm: the operands,
+	// on the right of v's definition, are outside its scope.
+	v := "v"
+	indent := b.indentOf(b.m.Node.Pos())
+	msg := strconv.Quote(text + " overflows " + types.TypeString(want, types.RelativeTo(b.pass.Pkg)))
+	return fmt.Sprintf("func() %[1]s {\n%[2]s\t%[3]s := %[4]s\n%[2]s\tif %[5]s(%[1]s(%[3]s)) != %[3]s {\n%[2]s\t\tpanic(%[6]s)\n%[2]s\t}\n%[2]s\treturn %[1]s(%[3]s)\n%[2]s}()",
+		name, indent, v, text, got, msg), nil
 }
 
 // call returns the text of a call of the helper function name on args,
@@ -62,7 +90,14 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 		texts[i] = t
 	}
 	text := b.helper(b.m.Node.Pos()) + "." + name + "(" + strings.Join(texts, ", ") + ")"
-	return b.result(text, sig.Results().At(0).Type(), want)
+	got := sig.Results().At(0).Type()
+	if classOf(got) != classFloat && b.narrow(want) {
+		b.shown = fmt.Sprintf("%s(%s), checked to fit", types.TypeString(want, types.RelativeTo(b.pass.Pkg)), text)
+		return b.checked(text, got, want)
+	}
+	text, err := b.result(text, got, want)
+	b.shown = text
+	return text, err
 }
 
 // rewrite replaces the match's node with the call of the helper name and
@@ -82,10 +117,11 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 	for _, d := range b.absorbed {
 		b.deleteStmt(d)
 	}
-	b.message = rewriteMessage(text)
+	b.message = b.rewriteMessage()
 	return nil
 }
 
-func rewriteMessage(text string) string {
-	return fmt.Sprintf("Rewrite as %s (imports %s)", text, HelperPath)
+// rewriteMessage words the fix of the last call built.
+func (b *builder) rewriteMessage() string {
+	return fmt.Sprintf("Rewrite as %s (imports %s)", b.shown, HelperPath)
 }

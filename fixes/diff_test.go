@@ -52,6 +52,7 @@ var diffCases = []diffCase{
 	{pkg: "probeguard", fn: "Lit", loops: []string{"n := 0; n <= 25; n++"}, args: "n", typ: "int", ref: refFactorial, guard: true},
 	{pkg: "probeguard", fn: "Level", loops: []string{"n := 0; n <= 180; n++"}, args: "float64(n)", typ: "float64", ref: refFactorial, guard: true},
 	{pkg: "probeguard", fn: "Plan{}.Orders", loops: []string{"n := 0; n <= 25; n++"}, args: "n", typ: "int", ref: refFactorial, guard: true},
+	{pkg: "probebinom", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "probebinom", fn: "Stepwise", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
 	{pkg: "probebinom", fn: "Named", loops: []string{"n := 0; n <= 400; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "probeterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},

@@ -54,14 +54,14 @@ func buildLoop(b *builder) error {
 	if next(b.file, init) == loop {
 		b.replace(rhs.Pos(), rhs.End(), call)
 		b.replace(init.End(), loop.End(), "")
-		b.message = rewriteMessage(call)
+		b.message = b.rewriteMessage()
 		return nil
 	}
 	if b.mentioned(acc, init.End(), loop.Pos()) {
 		return fmt.Errorf("%s changes between its initialisation and the loop", acc.Name())
 	}
 	b.replace(loop.Pos(), loop.End(), acc.Name()+" = "+call)
-	b.message = rewriteMessage(call)
+	b.message = b.rewriteMessage()
 	return nil
 }
 

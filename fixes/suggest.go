@@ -82,6 +82,7 @@ type builder struct {
 	// absorbed are definitions of locals only the rewritten expression
 	// read; the rewrite deletes them.
 	absorbed []ast.Stmt
+	shown    string // the helper call as the fix's message shows it
 	message  string
 }
 
