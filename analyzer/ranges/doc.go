@@ -26,13 +26,13 @@
 // n−k lie in [0, 20].
 //
 // Loops are iterated to a fixpoint, widening after Options.MaxVisits
-// trips (after one trip below two enclosing loops), then given one
+// trips (after one trip inside two or more enclosing loops), then given one
 // narrowing trip; the loop condition re-narrows the body on every trip.
 // A loop that assigns nothing living across trips is walked once. No
 // SSA form or control-flow graph is built. The work per function is
 // capped at ten statement visits per syntax node (plus a constant):
-// past that, and below four enclosing loops, a loop forgets what it
-// assigns instead of iterating.
+// past that, and for a loop inside four or more enclosing loops, a
+// loop forgets what it assigns instead of iterating.
 //
 // # Soundness
 //

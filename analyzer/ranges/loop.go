@@ -11,11 +11,12 @@ import (
 type pass func(head state) (next, exit state)
 
 // loop runs a loop to a fixpoint of its head state: join-based
-// iteration, widening from the MaxVisits-th trip on (immediately below
-// two enclosing loops), then one descending step F(H) (Cousot and
-// Cousot, POPL 1977) that doubles as the recording pass. Deeper than
-// four loops, or past the work budget, the head just forgets every
-// variable the loop assigns, which needs no iteration.
+// iteration, widening from the MaxVisits-th trip on (from the first
+// inside two or more enclosing loops), then one descending step F(H)
+// (Cousot and Cousot, POPL 1977) that doubles as the recording pass.
+// Inside four or more enclosing loops, or past the work budget, the
+// head just forgets every variable the loop assigns, which needs no
+// iteration.
 func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	if !entry.live {
 		return entry

@@ -119,7 +119,7 @@ func TestDeepNesting(t *testing.T) {
 
 // TestNestedLoopsStayCheap nests twelve counting loops; without the
 // depth rule the work would be (MaxVisits+2)^12 trips of the body. The
-// time is logged. Below four enclosing loops, and once the work budget
+// time is logged. Inside four or more enclosing loops, and once the work budget
 // of the function is spent (which this nest does), a loop forgets what
 // it assigns instead of iterating, so the counters keep only the upper
 // bound their conditions give.
