@@ -11,7 +11,8 @@ import (
 // TestBruteForce runs the functions of corpus_test.go for every
 // argument in [-30, 30] and checks soundness: each value a probe saw is
 // inside the range computed for the probed expression, both when the
-// parameter range is given as Entry and when nothing is known. The
+// parameter range is given as Entry and when nothing is known, for
+// several MaxVisits settings (so through different widenings). The
 // reference is the execution of the Go code itself.
 func TestBruteForce(t *testing.T) {
 	src, err := os.ReadFile("corpus_test.go")
@@ -26,28 +27,30 @@ func TestBruteForce(t *testing.T) {
 		param := p.info.Defs[fd.Type.Params.List[0].Names[0]]
 		calls := probeCalls(p, fd)
 		for _, entry := range []map[string]Interval{nil, {"n": Span(lo, hi)}} {
-			opts := Options{}
-			if entry != nil {
-				opts.Entry = map[types.Object]Interval{param: entry["n"]}
-			}
-			f := Analyze(p.info, fd, opts)
-			clear(probes)
-			for n := lo; n <= hi; n++ {
-				run(n)
-			}
-			// Probes in functions doseBool calls are checked below with
-			// those functions' own analysis.
-			for id, call := range calls {
-				got := f.Of(call.Args[1])
-				for _, v := range probes[id] {
-					checked[id]++
-					if !got.Contains(int64(v)) {
-						t.Errorf("%s probe %d: value %d not in computed %v (entry %v)", name, id, v, got, entry)
-						break
-					}
+			for _, visits := range []int{1, 3, 40} {
+				opts := Options{MaxVisits: visits}
+				if entry != nil {
+					opts.Entry = map[types.Object]Interval{param: entry["n"]}
 				}
-				if testing.Verbose() {
-					t.Logf("%s probe %d: %v (entry %v)", name, id, got, entry)
+				f := Analyze(p.info, fd, opts)
+				clear(probes)
+				for n := lo; n <= hi; n++ {
+					run(n)
+				}
+				// Probes in functions doseBool calls are checked below with
+				// those functions' own analysis.
+				for id, call := range calls {
+					got := f.Of(call.Args[1])
+					for _, v := range probes[id] {
+						checked[id]++
+						if !got.Contains(int64(v)) {
+							t.Errorf("%s probe %d: value %d not in computed %v (entry %v)", name, id, v, got, entry)
+							break
+						}
+					}
+					if testing.Verbose() && visits == 3 {
+						t.Logf("%s probe %d: %v (entry %v)", name, id, got, entry)
+					}
 				}
 			}
 		}
