@@ -64,14 +64,18 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		Overlay: overlay,
 		Tests:   strings.HasSuffix(path, "_test.go"),
 	}
-	roots, rechecked, err := load(cfg, path, cache)
+	roots, memo, rechecked, err := load(cfg, path, cache)
 	if err != nil {
 		return nil, err
+	}
+	analyzers := opts.Analyzers
+	if memo != nil {
+		analyzers = memo.wrap(analyzers, roots[0].Types)
 	}
 	// Sequential keeps every action on this goroutine, where the deferred
 	// recover above can catch an analyzer's panic; in parallel mode it
 	// would kill the process.
-	graph, err := checker.Analyze(opts.Analyzers, roots, &checker.Options{Sequential: true})
+	graph, err := checker.Analyze(analyzers, roots, &checker.Options{Sequential: true})
 	if err != nil {
 		return nil, err
 	}
@@ -150,18 +154,19 @@ func rootFailure(graph *checker.Graph, roots []*packages.Package) error {
 // load returns the packages holding path: the cached package re-checked
 // when cache can serve, else a fresh load with go/packages, which cache
 // then keeps. A _test.go file belongs to several package variants and is
-// always loaded afresh.
-func load(cfg *packages.Config, path string, cache *loadCache) (roots []*packages.Package, rechecked bool, err error) {
+// always loaded afresh. The memo, nil for packages not cached, holds the
+// analyzers' outcomes on the dependencies.
+func load(cfg *packages.Config, path string, cache *loadCache) (roots []*packages.Package, memo *factMemo, rechecked bool, err error) {
 	if !cfg.Tests {
-		if p := cache.lookup(path, cfg.Overlay); p != nil {
-			if np, err := recheck(p, cfg.Overlay); err == nil {
-				return []*packages.Package{np}, true, nil
+		if e := cache.lookup(path, cfg.Overlay); e != nil {
+			if np, err := recheck(e.pkg, cfg.Overlay); err == nil {
+				return []*packages.Package{np}, e.facts, true, nil
 			}
 		}
 	}
 	pkgs, err := packages.Load(cfg, "file="+path)
 	if err != nil {
-		return nil, false, err
+		return nil, nil, false, err
 	}
 	for _, p := range pkgs {
 		if slices.Contains(p.CompiledGoFiles, path) {
@@ -169,12 +174,14 @@ func load(cfg *packages.Config, path string, cache *loadCache) (roots []*package
 		}
 	}
 	if len(roots) == 0 {
-		return nil, false, loadProblem(path, pkgs)
+		return nil, nil, false, loadProblem(path, pkgs)
 	}
 	if !cfg.Tests && len(roots) == 1 {
-		cache.add(roots[0], cfg.Overlay)
+		if e := cache.add(roots[0], cfg.Overlay); e != nil {
+			memo = e.facts
+		}
 	}
-	return roots, false, nil
+	return roots, memo, false, nil
 }
 
 // loadProblem explains why no package holding path was loaded, using the

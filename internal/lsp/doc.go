@@ -9,7 +9,7 @@
 // through golang.org/x/tools/go/analysis/checker, so facts computed on
 // dependencies reach the analysed package as they do under go vet. The
 // loaded dependencies are kept, so that after an edit only the edited
-// package is parsed and type-checked again (reuse.go).
+// package is parsed, type-checked and analysed again (reuse.go, memo.go).
 //
 // The transport is JSON-RPC 2.0 with Content-Length framing, written here on
 // top of encoding/json because the x/tools implementations are internal.

@@ -42,6 +42,7 @@ type loadEntry struct {
 	key    [sha256.Size]byte
 	stamps map[string]stamp // files and directories the load read
 	uses   int              // re-checks served
+	facts  *factMemo        // analyzer outcomes on the dependencies
 }
 
 // maxUses bounds the re-checks one entry serves: each adds the re-parsed
@@ -125,34 +126,36 @@ const maxCached = 3
 // errStale reports that a cached package cannot serve the current buffers.
 var errStale = errors.New("cached package is stale")
 
-// lookup returns the cached package holding path if it is still valid for
-// overlay, and counts the use, or returns nil.
-func (c *loadCache) lookup(path string, overlay map[string][]byte) *packages.Package {
+// lookup returns the entry of the cached package holding path if it is
+// still valid for overlay, and counts the use, or returns nil.
+func (c *loadCache) lookup(path string, overlay map[string][]byte) *loadEntry {
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	for _, e := range c.entries {
 		if slices.Contains(e.pkg.CompiledGoFiles, path) && e.key == outsideKey(e.pkg, overlay) && e.unchanged(overlay) && e.uses < maxUses {
 			e.uses++
-			return e.pkg
+			return e
 		}
 	}
 	return nil
 }
 
-// add records a freshly loaded package, unless it uses cgo, whose compiled
-// files are generated and cannot be re-parsed from the overlay.
-func (c *loadCache) add(pkg *packages.Package, overlay map[string][]byte) {
+// add records a freshly loaded package and returns its entry, unless it
+// uses cgo, whose compiled files are generated and cannot be re-parsed from
+// the overlay; then it returns nil.
+func (c *loadCache) add(pkg *packages.Package, overlay map[string][]byte) *loadEntry {
 	if !slices.Equal(pkg.GoFiles, pkg.CompiledGoFiles) || pkg.Types == nil {
-		return
+		return nil
 	}
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	c.entries = slices.DeleteFunc(c.entries, func(e *loadEntry) bool { return e.pkg.ID == pkg.ID })
-	e := &loadEntry{pkg: pkg, key: outsideKey(pkg, overlay), stamps: mutableInputs(pkg)}
+	e := &loadEntry{pkg: pkg, key: outsideKey(pkg, overlay), stamps: mutableInputs(pkg), facts: newFactMemo()}
 	c.entries = append([]*loadEntry{e}, c.entries...)
 	if len(c.entries) > maxCached {
 		c.entries = c.entries[:maxCached]
 	}
+	return e
 }
 
 // outsideKey fingerprints the overlay as it matters to pkg's dependencies:
