@@ -48,6 +48,9 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// gammaLines holds the lines with a Gamma finding: one is enough
+	// for an expression with several Gamma calls.
+	gammaLines map[token.Position]bool
 }
 
 type reportKey struct {
@@ -64,12 +67,13 @@ type fileInfo struct {
 
 func run(pass *analysis.Pass) (any, error) {
 	c := &checker{
-		pass:     pass,
-		files:    make(map[*token.File]*fileInfo),
-		funcs:    make(map[*types.Func]*facFunc),
-		fnInfo:   make(map[ast.Node]*fnCtx),
-		reported: make(map[reportKey]bool),
-		consumed: make(map[*ast.CallExpr]bool),
+		pass:       pass,
+		files:      make(map[*token.File]*fileInfo),
+		funcs:      make(map[*types.Func]*facFunc),
+		fnInfo:     make(map[ast.Node]*fnCtx),
+		reported:   make(map[reportKey]bool),
+		consumed:   make(map[*ast.CallExpr]bool),
+		gammaLines: make(map[token.Position]bool),
 	}
 	for _, f := range pass.Files {
 		tf := pass.Fset.File(f.Pos())

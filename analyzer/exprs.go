@@ -78,7 +78,7 @@ func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
 		}
 	}
 	switch {
-	case gammaNum >= 1 && gamma >= 2:
+	case gammaNum >= 1 && gamma > gammaNum:
 		fc.consume(p)
 		fc.checkGammaRatio(root, p)
 	case powNum >= 1 && facDen == 1 && facNum == 0:

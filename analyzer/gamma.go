@@ -185,6 +185,7 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		m.Shape = fixes.ShapeNone
 	}
 	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
+	fc.c.gammaLines[fc.c.lineOf(root)] = true
 	fc.report(finding{node: root, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
 }
 
@@ -221,6 +222,10 @@ func sameVar(fc *fnCtx, x, y ast.Expr) bool {
 
 // checkGamma judges a math.Gamma call no product consumed.
 func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
+	line := fc.c.lineOf(call)
+	if fc.c.gammaLines[line] {
+		return
+	}
 	g, ok := fc.gammaBoundOf(call.Args[0])
 	if ok && !g.reachable {
 		return
@@ -232,6 +237,13 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	if !ok {
 		msg = fmt.Sprintf("math.Gamma overflows: %s; the argument is not bounded here", g.describe("math.Gamma("+src(call.Args[0])+")"))
 	}
+	fc.c.gammaLines[line] = true
 	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
 		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})
+}
+
+// lineOf returns the file and line of n, without the column.
+func (c *checker) lineOf(n ast.Node) token.Position {
+	p := c.pass.Fset.Position(n.Pos())
+	return token.Position{Filename: p.Filename, Line: p.Line}
 }

@@ -107,3 +107,9 @@ func Arrangements(n, k int) float64 { // want Arrangements:`binomial of paramete
 func Reports(n int) float64 {
 	return float64(mathkit.Factorial64(n)) // want `n! is computed in int64, which wraps for n ≥ 21`
 }
+
+// WeibullVariance is the variance of a Weibull fit with scale lambda and
+// shape k: several Gamma calls on one line make one finding.
+func WeibullVariance(lambda, k float64) float64 {
+	return lambda * lambda * (math.Gamma(1+2/k) - math.Gamma(1+1/k)*math.Gamma(1+1/k)) // want `math.Gamma overflows: math.Gamma\(1 \+ 2 / k\) is \+Inf for arguments ≥ 171.62`
+}
