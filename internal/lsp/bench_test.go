@@ -27,9 +27,10 @@ func Report(n float64) string {
 // with go/packages; "warm" is the next analysis after an edit of the same
 // package, served by re-checking it against the dependencies kept in
 // memory. "overfact" runs overfact's analyzer, whose facts make it run on
-// every dependency too; "nofacts" a test analyzer that runs on the edited
-// package alone. All run in one invocation, so their ratios are measured
-// under the same machine load:
+// every dependency when cold and replay its outcomes on them when warm;
+// "nofacts" a test analyzer that runs on the edited package alone. All run
+// in one invocation, so their ratios are measured under the same machine
+// load:
 //
 //	go test -run '^$' -bench Analyze -benchtime 5x ./internal/lsp
 func BenchmarkAnalyze(b *testing.B) {
