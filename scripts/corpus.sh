@@ -62,7 +62,7 @@ echo "overfact -fix ./... exit status $rc ($(wc -l <"$OUT/gonum-fix.txt") lines 
 diff -ru --exclude=go.mod --exclude=go.sum "$src" . >"$OUT/gonum-fix.diff" || true
 touched=$(grep '^+++ ' "$OUT/gonum-fix.diff" | awk '{print $2}' | xargs -r -n1 dirname | sort -u | sed 's|^\./||; s|^|./|')
 echo "files changed: $(grep -c '^+++ ' "$OUT/gonum-fix.diff" || true); diff in $OUT/gonum-fix.diff"
-echo "packages touched: ${touched:-none}"
+echo "packages touched: $(echo ${touched:-none})"
 echo "-- go build ./..."
 go build ./... && echo "go build ./...: ok"
 echo "-- go vet on touched packages"
