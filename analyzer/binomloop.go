@@ -15,8 +15,10 @@ import (
 const maxBinomialScan = 256
 
 // checkBinomialLoop reports b = b*(n-k+i)/i and its variants in an
-// integer type: the product b*(n-k+i) is formed before the division, so
-// it wraps while C(n, k) itself still fits.
+// integer type (the multiplicative formula C(n,k) = ∏ (n−k+i)/i, common
+// practice; every partial product is an exact binomial, so the division
+// is exact): the product b*(n-k+i) is formed before the division, so it
+// wraps while C(n, k) itself still fits.
 func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	if t.Float || al.kind != kindFalling {
 		return

@@ -111,8 +111,13 @@ func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
 	return f, true
 }
 
-// shift adds d to both ends of a bounded interval, saturating at the
-// unbounded ends.
+// shift adds d to both ends of an interval, saturating at the unbounded
+// ends.
+//
+// Special cases are:
+//
+//	shift(empty, d) = empty
+//	shift([−∞, hi], d) = [−∞, hi+d], and likewise for +∞
 func shift(iv ranges.Interval, d int64) ranges.Interval {
 	if iv.IsEmpty() {
 		return iv
@@ -120,6 +125,12 @@ func shift(iv ranges.Interval, d int64) ranges.Interval {
 	return ranges.Interval{Lo: addSat(iv.Lo, d), Hi: addSat(iv.Hi, d)}
 }
 
+// addSat returns x+d, clamped to the int64 range.
+//
+// Special cases are:
+//
+//	addSat(math.MinInt64, d) = math.MinInt64 (−∞ stays −∞)
+//	addSat(math.MaxInt64, d) = math.MaxInt64 (+∞ stays +∞)
 func addSat(x, d int64) int64 {
 	switch {
 	case x == math.MinInt64 || x == math.MaxInt64:

@@ -110,7 +110,11 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 
 // ratioShape matches the denominators of a single-factorial numerator
 // against the binomial, Catalan, permutation and multinomial forms, and
-// fills the Match arguments in the order fixes documents.
+// fills the Match arguments in the order fixes documents. The forms are
+// the textbook ones (common practice): C(n,k) = n!/(k!(n−k)!) (DLMF
+// 26.3.1), n!/(n−k)! for k-permutations, the multinomial n!/(k₁!…kₘ!)
+// with Σkᵢ = n (DLMF 26.4.2), and the Catalan number
+// (2n)!/((n+1)!n!) (OEIS A000108).
 func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shape, string) {
 	n, ok := fc.linear(u.arg)
 	if !ok || len(dens) == 0 || u.off != 0 {
@@ -159,7 +163,8 @@ func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shap
 }
 
 // checkHypergeometric judges C(K,k)·C(N−K,n−k)/C(N,n) formed from calls
-// of a binomial-valued function: the denominator's C(N, n) breaks first.
+// of a binomial-valued function (the hypergeometric pmf, common
+// practice): the denominator's C(N, n), with the largest n, breaks first.
 func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 	d := p.den[0]
 	for _, f := range p.den {
