@@ -316,7 +316,7 @@ func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip
 // wrapperOf matches a function that returns a factorial of a parameter
 // computed elsewhere: return f(n+c) of a factorial function f, or
 // return math.Gamma(float64(n)+b) with an integer b ≥ 1, which is
-// (n+b−1)! in float64 since Γ(n+1) = n! (DLMF 5.4.1).
+// (n+b−1)! in float64 since Γ(n+1) = n! (DLMF 5.4.1, from memory).
 func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 	var ff *facFunc
 	resT := self.Type().(*types.Signature).Results().At(0).Type()

@@ -155,7 +155,8 @@ func (g gammaBound) clause() string {
 
 // checkGammaRatio judges ratios of math.Gamma calls, such as the Beta
 // function B(a,b) = Γ(a)Γ(b)/Γ(a+b) (DLMF 5.12.1) and the Student-t
-// constant Γ((ν+1)/2)/(√(νπ)Γ(ν/2)) (common practice): the ratio is
+// constant Γ((ν+1)/2)/(√(νπ)Γ(ν/2)) (common practice; DLMF section
+// from memory): the ratio is
 // finite where a Gamma in it is already +Inf.
 func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 	var worst *gammaBound

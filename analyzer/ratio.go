@@ -114,7 +114,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 // the textbook ones (common practice): C(n,k) = n!/(k!(n−k)!) (DLMF
 // 26.3.1), n!/(n−k)! for k-permutations, the multinomial n!/(k₁!…kₘ!)
 // with Σkᵢ = n (DLMF 26.4.2), and the Catalan number
-// (2n)!/((n+1)!n!) (OEIS A000108).
+// (2n)!/((n+1)!n!) (OEIS A000108); section numbers from memory.
 func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shape, string) {
 	n, ok := fc.linear(u.arg)
 	if !ok || len(dens) == 0 || u.off != 0 {
