@@ -68,6 +68,7 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "RotaShare", loops: []string{"n := 0; n <= 400; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixratio", fn: "Orders", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixratio", fn: "Shifts", loops: []string{"a := 0; a <= 90; a += 9", "b := 0; b <= 90; b += 10", "c := 0; c <= 40; c += 8"}, args: "a, b, c", typ: "float64", ref: refMultinomial},
+	{pkg: "fixratio", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
 	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},

@@ -43,3 +43,16 @@ func Shifts(a, b, c int) float64 {
 func Queues(n int) int {
 	return fact(2*n) / (fact(n+1) * fact(n)) // want "Catalan number"
 }
+
+func fact32(n int32) int32 { // want fact32:"factorial of parameter 0"
+	r := int32(1)
+	for i := int32(2); i <= n; i++ { // want "factorial of n in int32"
+		r *= i
+	}
+	return r
+}
+
+// Rotas32 is Rotas in int32: the helper's int64 is checked to fit.
+func Rotas32(n, k int32) int32 { // want Rotas32:"binomial of parameter 0"
+	return fact32(n) / (fact32(k) * fact32(n-k)) // want "binomial coefficient"
+}
