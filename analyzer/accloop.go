@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
 )
 
 // facKind is the kind of product a loop, a recursion or a function
@@ -334,6 +336,15 @@ func tripCount(sh *loopShape) (ast.Expr, int64) {
 		return sh.first, sh.firstOff - sh.lastOff + 1
 	}
 	return nil, 0
+}
+
+// endRange is the range of expr+off, or the constant off when expr is
+// nil.
+func (fc *fnCtx) endRange(e ast.Expr, off int64) ranges.Interval {
+	if e == nil {
+		return ranges.Point(off)
+	}
+	return shift(fc.rangeOf(e), off)
 }
 
 // closureAssigns reports whether a closure in the function assigns v; a

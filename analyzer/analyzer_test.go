@@ -25,7 +25,14 @@ func testdata(t *testing.T) string {
 }
 
 // The packages of testdata/src, each a scenario with its expectations in
-// // want comments.
+// // want comments. The numbers in the wants are facts of the trade,
+// written from memory: 20! ≈ 2.43e18 is the largest factorial in int64
+// and 170! ≈ 7.26e306 in float64 (OEIS A000142), C(66, 33) the largest
+// central binomial in int64 (OEIS A000984), the Catalan number C₃₅ the
+// largest in int64 (OEIS A000108), 33!! the largest double factorial in
+// int64 (OEIS A006882), Γ(x) overflows float64 just above x = 171.62
+// (DLMF 5.4.1 with 170!). TestScenarios re-derives each threshold it can
+// parse out of a message with math/big or math.Gamma.
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode",

@@ -83,7 +83,7 @@ func (fc *fnCtx) binomialLoopFunc(decl *ast.FuncDecl, res numType) *FactorialFac
 		}
 		fact = &FactorialFact{Kind: kindNames[kindBinomial], Param: nIdx, Param2: kIdx, FirstBad: thresholds.CentralBinomialLoop(res.Num).FirstBad}
 		n := fc.rangeOf(nExpr)
-		k := shift(fc.rangeOf(al.count), al.coff)
+		k := fc.endRange(al.count, al.coff)
 		if fc.binomialLoopSafe(res, n, k) {
 			fact.Safe, fact.Lo, fact.Hi = true, n.Lo, n.Hi
 		}

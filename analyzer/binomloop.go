@@ -24,7 +24,7 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 		return
 	}
 	sh := al.shape
-	k := shift(fc.rangeOf(al.count), al.coff)
+	k := fc.endRange(al.count, al.coff)
 	nExpr := fc.binomialN(al)
 	if nExpr == nil {
 		return

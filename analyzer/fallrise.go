@@ -20,7 +20,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	if al.top != nil && al.top != al.mult {
 		n = shift(fc.rangeOf(al.top), al.topOff)
 	}
-	k := shift(fc.rangeOf(al.count), al.coff)
+	k := fc.endRange(al.count, al.coff)
 	if n.IsEmpty() || k.IsEmpty() {
 		return
 	}
@@ -58,7 +58,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 // equals n!: a larger x breaks sooner, so silence below that point is a
 // documented approximation.
 func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
-	k := shift(fc.rangeOf(al.count), al.coff)
+	k := fc.endRange(al.count, al.coff)
 	if k.IsEmpty() {
 		return
 	}
