@@ -9,6 +9,7 @@ import (
 	"os"
 	"path/filepath"
 	"sort"
+	"strings"
 
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
@@ -49,6 +50,17 @@ func findingKey(fset *token.FileSet, d analysis.Diagnostic) string {
 	return fset.Position(d.Pos).Filename + "\x00" + d.Category + "\x00" + d.Message
 }
 
+// fixText is the text a fix inserts, which stays the same when earlier
+// edits move its positions.
+func fixText(f analysis.SuggestedFix) string {
+	var sb strings.Builder
+	for _, te := range f.TextEdits {
+		sb.Write(te.NewText)
+		sb.WriteByte(0)
+	}
+	return sb.String()
+}
+
 func (p *fixPlan) leftoverCount() int {
 	n := 0
 	for _, c := range p.leftover {
@@ -62,8 +74,11 @@ func (p *fixPlan) leftoverCount() int {
 // dropping a fix whose edits overlap an accepted one (identical edits,
 // such as the same import added twice, coalesce). When only is not nil,
 // it takes only as many findings of each key as only counts: those left
-// over by the previous round.
-func planFixes(roots []*checker.Action, only map[string]int) *fixPlan {
+// over by the previous round. applied records, per finding key, the text
+// of the fixes applied so far; a finding of a leftover key whose fix was
+// already applied is one its fix did not silence, and is passed over so
+// that no fix is applied twice.
+func planFixes(roots []*checker.Action, only map[string]int, applied map[string]map[string]bool) *fixPlan {
 	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool), leftover: make(map[string]int)}
 	for _, act := range roots {
 		if act.Err != nil || len(act.Diagnostics) == 0 {
@@ -79,16 +94,21 @@ func planFixes(roots []*checker.Action, only map[string]int) *fixPlan {
 			if len(d.SuggestedFixes) == 0 {
 				continue
 			}
-			key := findingKey(fset, d)
+			key, text := findingKey(fset, d), fixText(d.SuggestedFixes[0])
 			if only != nil {
-				if only[key] == 0 {
+				if only[key] == 0 || applied[key][text] {
 					continue
 				}
 				only[key]--
 			}
 			if !p.add(fset, d.SuggestedFixes[0], generated) {
 				p.leftover[key]++
+				continue
 			}
+			if applied[key] == nil {
+				applied[key] = make(map[string]bool)
+			}
+			applied[key][text] = true
 		}
 	}
 	return p

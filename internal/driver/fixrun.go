@@ -21,9 +21,10 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 	contents := make(map[string][]byte) // current text of each changed file
 	originals := make(map[string][]byte)
 	var pending map[string]int // findings whose fix was left over; nil: all
+	applied := make(map[string]map[string]bool)
 	var plan *fixPlan
 	for round := 0; ; round++ {
-		plan = planFixes(graph.Roots, pending)
+		plan = planFixes(graph.Roots, pending, applied)
 		for _, id := range plan.refused {
 			if round == 0 {
 				r.errorf("not fixing %s: the package has errors", id)
