@@ -87,6 +87,9 @@ func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
 	case binNum == 2 && binDen == 1 && facNum == 0 && facDen == 0:
 		fc.consume(p)
 		fc.checkHypergeometric(root, p)
+	case binNum == 1 && binDen == 0 && powNum == 2 && facNum == 0 && facDen == 0:
+		fc.consume(p)
+		fc.checkBinomialPMF(root, p)
 	case facNum >= 1 && (facDen >= 1 || facNum >= 2):
 		fc.consume(p)
 		fc.checkFactorialRatio(root, p)

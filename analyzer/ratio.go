@@ -216,3 +216,35 @@ func (fc *fnCtx) hyperArgs(p *product) []ast.Expr {
 	}
 	return []ast.Expr{a.arg2, d.arg, a.arg, d.arg2}
 }
+
+// checkBinomialPMF judges C(n,k)·p^k·(1−p)^(n−k) (the binomial pmf,
+// common practice) where C(n, k) comes from a binomial-valued function
+// that breaks: the probability is small, the coefficient is not.
+func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
+	var b factor
+	var pows []factor
+	for _, f := range p.num {
+		switch {
+		case f.kind == kindBinomial:
+			b = f
+		case f.math == "Pow":
+			pows = append(pows, f)
+		}
+	}
+	if b.fact == nil || b.fact.Safe {
+		return
+	}
+	first := b.fact.FirstBad
+	r := fc.rangeOf(b.arg)
+	if r.IsEmpty() || r.Hi < first {
+		return
+	}
+	clause, definite := verdict(src(b.arg), r, first)
+	msg := fmt.Sprintf("binomial probability C(n,k)·p^k·(1−p)^(n−k) in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
+		b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
+		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
+	}
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: m})
+}

@@ -28,7 +28,7 @@ func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, b
 func Availability(n, k int, p float64) float64 {
 	sum := 0.0
 	for i := k; i <= n; i++ {
-		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i))
+		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n,k\)·p\^k·\(1−p\)\^\(n−k\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
 	}
 	return sum
 }
@@ -75,4 +75,13 @@ func FewSpares(n, k int64) int64 {
 		b = b * (n - k + i) / i
 	}
 	return b * 1
+}
+
+// SmallAvailability is Availability for the six-pump station.
+func SmallAvailability(k int, p float64) float64 {
+	sum := 0.0
+	for i := k; i <= 6; i++ {
+		sum += float64(chooseSteps(6, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(6-i))
+	}
+	return sum
 }
