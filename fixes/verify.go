@@ -112,11 +112,12 @@ func parsedFiles(pass *analysis.Pass) (*parsed, error) {
 	return p, nil
 }
 
+// importerMap is a types.Importer over packages already loaded.
+type importerMap map[string]*types.Package
+
 // importerFor resolves imports to the packages the analysed package
 // already depends on, and the helper module and fmt (which fixes add) to
 // their declared stand-ins when it does not.
-type importerMap map[string]*types.Package
-
 func importerFor(pkg *types.Package) importerMap {
 	m := make(importerMap)
 	var visit func(p *types.Package)
