@@ -27,6 +27,11 @@ func (b *builder) covered() error {
 			return err
 		}
 		for v, d := range defs {
+			if !holdsOperand(d, operands) {
+				// A local the operands do not flow through (scale := 2)
+				// is a factor of its own, not part of the ratio.
+				continue
+			}
 			locals[v] = true
 			regions = append(regions, d)
 			b.absorbed = append(b.absorbed, d)
@@ -49,6 +54,16 @@ func (b *builder) covered() error {
 		}
 	}
 	return nil
+}
+
+// holdsOperand reports whether one of operands lies in n.
+func holdsOperand(n ast.Node, operands []ast.Expr) bool {
+	for _, a := range operands {
+		if n.Pos() <= a.Pos() && a.End() <= n.End() {
+			return true
+		}
+	}
+	return false
 }
 
 // within reports whether every expression lies inside one of regions.

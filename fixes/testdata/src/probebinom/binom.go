@@ -127,3 +127,12 @@ func Moved(n, k int) int {
 	// probe:binomial(n, k)
 	return num / den // want "probe binomial: no fix: k changes before the expression"
 }
+
+// Scaled has a factor of its own in a local; the rewrite would drop it.
+func Scaled(n, k int) int {
+	scale := 2
+	num := fact(n)
+	den := fact(k) * fact(n-k)
+	// probe:binomial(n, k)
+	return scale * num / den // want "probe binomial: no fix: the rewrite would drop scale"
+}
