@@ -31,11 +31,17 @@ func lnFactDD(n int64) dd {
 //	LogFactorial(0) = LogFactorial(1) = 0
 //	LogFactorial(n < 0) = NaN
 func LogFactorial(n int) float64 {
+	// Kept small enough to inline: the table case is the common one.
+	if uint(n) < uint(len(lnFactTable)) {
+		return lnFactTable[n].hi
+	}
+	return logFactorialLarge(n)
+}
+
+// logFactorialLarge is LogFactorial outside the table.
+func logFactorialLarge(n int) float64 {
 	if n < 0 {
 		return math.NaN()
-	}
-	if n < len(lnFactTable) {
-		return lnFactTable[n].hi
 	}
 	return lnFactDD(int64(n)).float()
 }
