@@ -11,9 +11,10 @@ import (
 )
 
 // writeText prints each root finding once as "file:line:col: message",
-// the form compilers and go vet use and editors jump to, and returns how
-// many it printed. A file in both a package and its test variant yields
-// the same finding twice; the copy is dropped.
+// the form compilers and go vet use and editors jump to, each related
+// position after it as "file:line:col: \tmessage" as go vet prints them,
+// and returns how many findings it printed. A file in both a package and
+// its test variant yields the same finding twice; the copy is dropped.
 func writeText(w io.Writer, dir string, roots []*checker.Action) int {
 	seen := make(map[string]bool)
 	n := 0
@@ -29,6 +30,10 @@ func writeText(w io.Writer, dir string, roots []*checker.Action) int {
 			}
 			seen[line] = true
 			fmt.Fprintln(w, line)
+			for _, rel := range d.Related {
+				rp := act.Package.Fset.Position(rel.Pos)
+				fmt.Fprintf(w, "%s:%d:%d: \t%s\n", relPath(dir, rp.Filename), rp.Line, rp.Column, rel.Message)
+			}
 			n++
 		}
 	}
