@@ -12,11 +12,16 @@ import (
 func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
 	var roots []*ast.BinaryExpr
 	var calls []*ast.CallExpr
+	var blocks [][]ast.Stmt
 	inner := make(map[ast.Expr]bool)
 	ast.Inspect(body, func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.FuncLit:
 			return false
+		case *ast.BlockStmt:
+			blocks = append(blocks, n.List)
+		case *ast.CaseClause:
+			blocks = append(blocks, n.Body)
 		case *ast.BinaryExpr:
 			if n.Op == token.MUL || n.Op == token.QUO {
 				roots = append(roots, n)
@@ -45,6 +50,9 @@ func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
 		if !fc.inl[r.e] {
 			fc.checkProduct(r.e, r.p)
 		}
+	}
+	for _, list := range blocks {
+		fc.checkChains(list)
 	}
 	for _, call := range calls {
 		fc.checkCall(call)
@@ -102,5 +110,44 @@ func (fc *fnCtx) consume(p *product) {
 		for _, f := range list {
 			fc.c.consumed[f.call] = true
 		}
+	}
+}
+
+// checkChains judges values built by simple re-assignments in one block,
+// r := fact(n); r /= fact(k); r /= fact(n-k), as the product they form.
+// The finding is placed at the last re-assignment and has no fix, as no
+// single expression holds the value.
+func (fc *fnCtx) checkChains(list []ast.Stmt) {
+	if fc.defs == nil {
+		fc.collectDefs()
+	}
+	for i, st := range list {
+		init, ok := st.(*ast.AssignStmt)
+		if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 || (init.Tok != token.DEFINE && init.Tok != token.ASSIGN) {
+			continue
+		}
+		v := fc.c.objOf(init.Lhs[0])
+		if v == nil {
+			continue
+		}
+		var chain []*ast.AssignStmt
+		for _, next := range list[i+1:] {
+			as, ok := next.(*ast.AssignStmt)
+			if ok && len(as.Lhs) == 1 && fc.c.objOf(as.Lhs[0]) == v && (as.Tok == token.MUL_ASSIGN || as.Tok == token.QUO_ASSIGN) {
+				chain = append(chain, as)
+			}
+		}
+		// Every change of v must be the start or a link of the chain:
+		// collectDefs notes a start once and each link twice.
+		if len(chain) == 0 || len(fc.defs[v]) != 1+2*len(chain) {
+			continue
+		}
+		p := fc.evalProduct(init.Rhs[0])
+		for _, as := range chain {
+			fc.evalInto(p, as.Rhs[0], as.Tok == token.QUO_ASSIGN, 1)
+		}
+		fc.noFix = true
+		fc.checkProduct(chain[len(chain)-1].Lhs[0], p)
+		fc.noFix = false
 	}
 }

@@ -141,3 +141,23 @@ func BatchWaysUnchecked(batch []int) int64 {
 	n := len(batch)
 	return mathkit.Factorial(n) / (mathkit.Factorial(3) * mathkit.Factorial(n-3)) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
 }
+
+// WaysByParts divides the numerator down step by step; the numerator
+// has wrapped before the first division.
+func WaysByParts(n, k int) int64 {
+	r := mathkit.Factorial(n)
+	r /= mathkit.Factorial(k)
+	r /= mathkit.Factorial(n - k) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+	return r
+}
+
+// CrateByParts is WaysByParts for a crate of 12.
+func CrateByParts(k int) int64 {
+	if k < 0 || k > 12 {
+		return 0
+	}
+	r := mathkit.Factorial(12)
+	r /= mathkit.Factorial(k)
+	r /= mathkit.Factorial(12 - k)
+	return r
+}
