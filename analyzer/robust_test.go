@@ -74,6 +74,9 @@ func fine(n int) int64 {
 	return f * 2
 }
 `
+	if Analyzer.Flags.Lookup("debug") == nil {
+		t.Fatal("no -debug flag")
+	}
 	var log bytes.Buffer
 	oldOut, oldDebug := debugOut, debug
 	debugOut, debug = &log, true
