@@ -48,7 +48,8 @@ var patterns = []struct{ id, title string }{
 
 // Categories returns every category the analyzer can emit: each pattern in
 // its possible and its definite form, and the category of malformed
-// directives.
+// directives. (factorial-call is emitted only in its definite form; the
+// bare form is listed so that every definite category has one.)
 func Categories() []CategoryInfo {
 	var out []CategoryInfo
 	for _, p := range patterns {
