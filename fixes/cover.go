@@ -52,8 +52,45 @@ func (b *builder) covered() error {
 				return fmt.Errorf("the rewrite would drop %s", v.Name())
 			}
 		}
+		if c := b.looseConstant(r, operands); c != nil {
+			return fmt.Errorf("the rewrite would drop the factor %s", b.text(c))
+		}
 	}
 	return nil
+}
+
+// looseConstant returns a constant in n that is neither in an operand nor
+// in the arguments of a call (fact(2*n) and math.Pow(1-p, …) hold their
+// constants inside factorial and power arguments; 2*fact(n) does not),
+// or nil. Such a constant is a factor the helper would not reproduce.
+func (b *builder) looseConstant(n ast.Node, operands []ast.Expr) ast.Expr {
+	var loose ast.Expr
+	var visit func(n ast.Node) bool
+	visit = func(n ast.Node) bool {
+		if loose != nil {
+			return false
+		}
+		switch e := n.(type) {
+		case *ast.CallExpr:
+			if tv, ok := b.pass.TypesInfo.Types[e.Fun]; ok && tv.IsType() {
+				return true // a conversion shields nothing: float64(2)*n!
+			}
+			ast.Inspect(e.Fun, visit)
+			return false // constants among the arguments are arguments
+		case *ast.BasicLit:
+			loose = e
+		case *ast.Ident:
+			if _, ok := b.pass.TypesInfo.Uses[e].(*types.Const); ok {
+				loose = e
+			}
+		}
+		if loose != nil && inOperand(loose, operands) {
+			loose = nil
+		}
+		return loose == nil
+	}
+	ast.Inspect(n, visit)
+	return loose
 }
 
 // holdsOperand reports whether one of operands lies in n.
@@ -64,6 +101,19 @@ func holdsOperand(n ast.Node, operands []ast.Expr) bool {
 		}
 	}
 	return false
+}
+
+// inOperand reports whether e lies in one of operands.
+func inOperand(e ast.Expr, operands []ast.Expr) bool {
+	return within([]ast.Expr{e}, exprNodes(operands))
+}
+
+func exprNodes(es []ast.Expr) []ast.Node {
+	out := make([]ast.Node, len(es))
+	for i, e := range es {
+		out[i] = e
+	}
+	return out
 }
 
 // within reports whether every expression lies inside one of regions.

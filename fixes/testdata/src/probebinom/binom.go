@@ -136,3 +136,17 @@ func Scaled(n, k int) int {
 	// probe:binomial(n, k)
 	return scale * num / den // want "probe binomial: no fix: the rewrite would drop scale"
 }
+
+const pair = 2
+
+// Twice has a constant factor, which the helper would not reproduce.
+func Twice(n, k int) int {
+	// probe:binomial(n, k)
+	return 2 * fact(n) / (fact(k) * fact(n-k)) // want "probe binomial: no fix: the rewrite would drop the factor 2"
+}
+
+// Pairs divides by a named constant as well.
+func Pairs(n, k int) int {
+	// probe:binomial(n, k)
+	return fact(n) / (pair * fact(k) * fact(n-k)) // want "probe binomial: no fix: the rewrite would drop the factor pair"
+}
