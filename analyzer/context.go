@@ -3,7 +3,6 @@ package analyzer
 import (
 	"go/ast"
 	"go/constant"
-	"go/token"
 	"go/types"
 	"math"
 
@@ -222,8 +221,6 @@ func (c *checker) isMathFunc(call *ast.CallExpr, name string) bool {
 	fn := c.calleeOf(call)
 	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
-
-var _ = token.NoPos
 
 // liftAssumes turns a statement-level bound on a parameter that the
 // function never assigns into an entry range: the parameter has the same
