@@ -189,3 +189,65 @@ func mirror(op token.Token) token.Token {
 	}
 	return op
 }
+
+// eachLoop calls f for each product loop in body, outside closures.
+func (fc *fnCtx) eachLoop(body *ast.BlockStmt, f func(*accLoop)) {
+	fc.walkBlock(body.List, nil, 0, f)
+}
+
+// walkBlock visits the statements of a block. before holds, innermost
+// last, the statements that precede the current one in each enclosing
+// block up to the nearest enclosing loop, where the search for an
+// accumulator's start stops: a start outside a loop would make the
+// product span its iterations.
+func (fc *fnCtx) walkBlock(list []ast.Stmt, outer [][]ast.Stmt, depth int, f func(*accLoop)) {
+	if depth > maxNesting {
+		return
+	}
+	for i, st := range list {
+		before := append(outer[:len(outer):len(outer)], list[:i])
+		for {
+			l, ok := st.(*ast.LabeledStmt)
+			if !ok {
+				break
+			}
+			st = l.Stmt
+		}
+		if al := fc.accLoopOf(st, before); al != nil {
+			f(al)
+		}
+		switch s := st.(type) {
+		case *ast.BlockStmt:
+			fc.walkBlock(s.List, before, depth+1, f)
+		case *ast.IfStmt:
+			fc.walkBlock(s.Body.List, before, depth+1, f)
+			if s.Else != nil {
+				fc.walkBlock([]ast.Stmt{s.Else}, before, depth+1, f)
+			}
+		case *ast.ForStmt:
+			fc.walkBlock(s.Body.List, nil, depth+1, f)
+		case *ast.RangeStmt:
+			fc.walkBlock(s.Body.List, nil, depth+1, f)
+		case *ast.SwitchStmt:
+			fc.walkClauses(s.Body, before, depth, f)
+		case *ast.TypeSwitchStmt:
+			fc.walkClauses(s.Body, before, depth, f)
+		case *ast.SelectStmt:
+			fc.walkClauses(s.Body, before, depth, f)
+		}
+	}
+}
+
+func (fc *fnCtx) walkClauses(body *ast.BlockStmt, before [][]ast.Stmt, depth int, f func(*accLoop)) {
+	for _, cl := range body.List {
+		switch cl := cl.(type) {
+		case *ast.CaseClause:
+			fc.walkBlock(cl.Body, before, depth+1, f)
+		case *ast.CommClause:
+			fc.walkBlock(cl.Body, before, depth+1, f)
+		}
+	}
+}
+
+// maxNesting bounds the statement nesting the loop search descends into.
+const maxNesting = 1000
