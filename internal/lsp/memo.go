@@ -2,6 +2,7 @@ package lsp
 
 import (
 	"go/types"
+	"reflect"
 	"sync"
 
 	"golang.org/x/tools/go/analysis"
@@ -58,29 +59,116 @@ func (fm *factMemo) put(k memoKey, o *depOutcome) {
 	fm.m[k] = o
 }
 
+func (fm *factMemo) has(k memoKey) bool {
+	fm.mu.Lock()
+	defer fm.mu.Unlock()
+	return fm.m[k] != nil
+}
+
 // wrap returns analyzers that behave as as do, except that on a package
 // other than root an analyzer with facts replays its memoized outcome, or
 // runs and memoizes it. Analyzers without facts never run on dependencies
-// and are returned unchanged.
+// and are returned unchanged, as is an analyzer another one requires, since
+// its copy and the original would then both declare its fact types.
+//
+// The requirements of a wrapped analyzer (inspect and the like) are wrapped
+// too, when none of them has facts, so that they also skip a dependency
+// whose outcome will be replayed: they would otherwise run on every
+// dependency for nothing, and they are most of the cost of a re-check.
 func (fm *factMemo) wrap(as []*analysis.Analyzer, root *types.Package) []*analysis.Analyzer {
+	required := make(map[*analysis.Analyzer]bool)
+	var mark func(a *analysis.Analyzer)
+	mark = func(a *analysis.Analyzer) {
+		for _, r := range a.Requires {
+			required[r] = true
+			mark(r)
+		}
+	}
+	for _, a := range as {
+		mark(a)
+	}
 	out := make([]*analysis.Analyzer, len(as))
 	for i, a := range as {
-		if len(a.FactTypes) == 0 {
+		if len(a.FactTypes) == 0 || required[a] {
 			out[i] = a
 			continue
 		}
-		w := *a // same name, flags, requirements, fact and result types
-		w.Run = fm.run(a, root)
+		w := *a // same name, flags, fact and result types
+		orig := make(map[*analysis.Analyzer]*analysis.Analyzer)
+		if reqs, ok := fm.skippable(a, a.Requires, root, orig, make(map[*analysis.Analyzer]*analysis.Analyzer)); ok {
+			w.Requires = reqs
+		} else {
+			clear(orig)
+		}
+		w.Run = fm.run(a, root, orig)
 		out[i] = &w
 	}
 	return out
 }
 
+// skippable returns copies of reqs, the requirements of owner, that return
+// a zero result on a dependency whose outcome for owner is memoized and
+// otherwise run as the originals do; orig maps each copy to its original.
+// It fails if a requirement has facts, since it must then run everywhere.
+func (fm *factMemo) skippable(owner *analysis.Analyzer, reqs []*analysis.Analyzer, root *types.Package, orig, copies map[*analysis.Analyzer]*analysis.Analyzer) ([]*analysis.Analyzer, bool) {
+	out := make([]*analysis.Analyzer, 0, len(reqs))
+	for _, r := range reqs {
+		if c, ok := copies[r]; ok {
+			out = append(out, c)
+			continue
+		}
+		if len(r.FactTypes) > 0 {
+			return nil, false
+		}
+		sub, ok := fm.skippable(owner, r.Requires, root, orig, copies)
+		if !ok {
+			return nil, false
+		}
+		c := *r
+		c.Requires = sub
+		c.Run = func(pass *analysis.Pass) (any, error) {
+			if pass.Pkg != root && fm.has(memoKey{owner, pass.Pkg}) {
+				return zeroResult(r), nil
+			}
+			return r.Run(unwrapped(pass, r, orig))
+		}
+		copies[r], orig[&c] = &c, r
+		out = append(out, &c)
+	}
+	return out, true
+}
+
+// zeroResult is a result of a's declared type that nothing will read.
+func zeroResult(a *analysis.Analyzer) any {
+	if a.ResultType == nil {
+		return nil
+	}
+	return reflect.Zero(a.ResultType).Interface()
+}
+
+// unwrapped returns a copy of pass as the original analyzer a expects it:
+// its ResultOf keyed by the original requirements, not their copies.
+func unwrapped(pass *analysis.Pass, a *analysis.Analyzer, orig map[*analysis.Analyzer]*analysis.Analyzer) *analysis.Pass {
+	if len(orig) == 0 {
+		return pass
+	}
+	p := *pass
+	p.Analyzer = a
+	p.ResultOf = make(map[*analysis.Analyzer]any, len(pass.ResultOf))
+	for k, v := range pass.ResultOf {
+		if o, ok := orig[k]; ok {
+			k = o
+		}
+		p.ResultOf[k] = v
+	}
+	return &p
+}
+
 // run is the Run function of a wrapped analyzer.
-func (fm *factMemo) run(a *analysis.Analyzer, root *types.Package) func(*analysis.Pass) (any, error) {
+func (fm *factMemo) run(a *analysis.Analyzer, root *types.Package, orig map[*analysis.Analyzer]*analysis.Analyzer) func(*analysis.Pass) (any, error) {
 	return func(pass *analysis.Pass) (any, error) {
 		if pass.Pkg == root {
-			return a.Run(pass)
+			return a.Run(unwrapped(pass, a, orig))
 		}
 		k := memoKey{a, pass.Pkg}
 		if o := fm.get(k); o != nil {
@@ -92,7 +180,7 @@ func (fm *factMemo) run(a *analysis.Analyzer, root *types.Package) func(*analysi
 			}
 			return o.result, nil
 		}
-		result, err := a.Run(pass)
+		result, err := a.Run(unwrapped(pass, a, orig))
 		if err != nil {
 			return nil, err // not memoized: the next analysis tries again
 		}
