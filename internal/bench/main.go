@@ -22,6 +22,7 @@ import (
 	"flag"
 	"fmt"
 	"os"
+	"time"
 )
 
 var (
@@ -32,6 +33,10 @@ var (
 	loadFlag  = flag.String("load", "auto", "load mode: auto (what the driver needs for overfact), all (syntax of every dependency) or roots (syntax of the named packages only)")
 	childFlag = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON")
 	jsonFlag  = flag.Bool("json", false, "corpus mode: print findings as JSON lines")
+
+	caseTimeFlag  = flag.Duration("casetime", 5*time.Minute, "scale mode: time allowed for the runs of one size")
+	profileFlag   = flag.String("cpuprofile", "", "with -scalecase: write a CPU profile of the analysis runs to this file")
+	scaleCaseFlag = flag.String("scalecase", "", "internal: measure one scale case (kind:divisor) and print run times")
 )
 
 func main() {
@@ -42,6 +47,8 @@ func main() {
 	flag.Parse()
 	var err error
 	switch {
+	case *scaleCaseFlag != "":
+		err = runScaleCase(*scaleCaseFlag)
 	case *childFlag != "":
 		err = runChild(*childFlag, flag.Args())
 	case *modeFlag == "compare":
