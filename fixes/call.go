@@ -109,6 +109,9 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 	if err := b.covered(); err != nil {
 		return err
 	}
+	if err := b.checkShape(); err != nil {
+		return err
+	}
 	text, err := b.call(name, args, b.m.Result)
 	if err != nil {
 		return err

@@ -95,11 +95,11 @@ func QueuesF(n int) float64 {
 	return factF(2*n) / (factF(n+1) * factF(n)) // want "probe catalan"
 }
 
-// Share takes a float count, which the integer helpers cannot take
-// without truncating it.
+// Share takes a float count, truncated inside the factorials: the
+// operand n is not what the factorials read.
 func Share(n float64, k int) float64 {
 	// probe:binomial(n,k)
-	return factF(int(n)) / (factF(k) * factF(int(n)-k)) // want "probe binomial: no fix: n is a float"
+	return factF(int(n)) / (factF(k) * factF(int(n)-k)) // want "probe binomial: no fix: the expression is not the binomial coefficient of its operands"
 }
 
 // Stepwise builds the ratio through locals, which the rewrite deletes.

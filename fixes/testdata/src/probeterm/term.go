@@ -70,3 +70,29 @@ func Volume(x float64) float64 {
 
 // Report keeps fmt in use.
 func Report(k int) string { return fmt.Sprint(Arrivals(k, 2)) }
+
+// Doubled decays twice as fast: not a Poisson term of lambda.
+func Doubled(k int, lambda float64) float64 {
+	// probe:poisson(k, lambda)
+	return math.Pow(lambda, float64(k)) * math.Exp(-2*lambda) / factF(k) // want "probe poisson: no fix: the expression is not the Poisson term of its operands"
+}
+
+// Shifted has x^(k+1) over k!, which is not x^j/j! for any one j.
+func Shifted(x float64, k int) float64 {
+	// probe:powfact(x, k+1)
+	return math.Pow(x, float64(k+1)) / factF(k) // want "probe powfact: no fix: the expression is not the power over factorial of its operands"
+}
+
+func weight(n int) float64 { return float64(n) }
+
+// Weighted has a factor of its own, which the rewrite would drop.
+func Weighted(n, k int) float64 {
+	// probe:binomial(n, k)
+	return weight(n) * factF(n) / (factF(k) * factF(n-k)) // want "probe binomial: no fix: the expression is not the binomial coefficient of its operands"
+}
+
+// Raised is Γ(a+1)/Γ(b), a gamma ratio of a+1 and b.
+func Raised(a, b float64) float64 {
+	// probe:gammaratio(a+1, b)
+	return math.Gamma(a+1) / math.Gamma(b) // want "probe gammaratio"
+}

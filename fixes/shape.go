@@ -1,0 +1,227 @@
+package fixes
+
+import (
+	"fmt"
+	"go/ast"
+	"go/constant"
+	"go/token"
+	"go/types"
+)
+
+var constantOne = constant.MakeInt64(1)
+
+// shapeArity is the number of operands each checked shape takes (0: any).
+var shapeArity = map[Shape]int{
+	ShapeBinomial: 2, ShapePermutation: 2, ShapeMultinomial: 0, ShapeCatalan: 1,
+	ShapeHypergeometric: 4, ShapePowOverFactorial: 2, ShapePoisson: 2,
+	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2,
+}
+
+// The analyzer finds the shapes; before replacing an expression, the
+// fixer checks on its own that the expression is that shape of the match's
+// operands, factor by factor. A helper call replaces the whole
+// expression, so a mismatch (an e^(−2λ) in a Poisson term, an x^(k+1)
+// over k!, an extra factor g(n)) would otherwise change the value.
+
+// A factorPattern accepts one factor of a product or quotient.
+type factorPattern func(ast.Expr) bool
+
+// shapeMatches reports whether the match's expression multiplies exactly
+// the num patterns and divides by exactly the den patterns, in any order.
+func (b *builder) shapeMatches(num, den []factorPattern) bool {
+	var gotNum, gotDen []ast.Expr
+	e, ok := b.m.Node.(ast.Expr)
+	if !ok || !b.factors(e, false, &gotNum, &gotDen) {
+		return false
+	}
+	return assign(gotNum, num) && assign(gotDen, den)
+}
+
+// factors splits e into the factors it multiplies (num) and divides by
+// (den), through parentheses, numeric conversions and the locals the
+// rewrite absorbs.
+func (b *builder) factors(e ast.Expr, inv bool, num, den *[]ast.Expr) bool {
+	e = ast.Unparen(e)
+	switch x := e.(type) {
+	case *ast.BinaryExpr:
+		switch x.Op {
+		case token.MUL:
+			return b.factors(x.X, inv, num, den) && b.factors(x.Y, inv, num, den)
+		case token.QUO:
+			return b.factors(x.X, inv, num, den) && b.factors(x.Y, !inv, num, den)
+		}
+	case *ast.CallExpr:
+		if b.isNumericConversion(x) {
+			return b.factors(x.Args[0], inv, num, den)
+		}
+	case *ast.Ident:
+		if rhs := b.absorbedValue(x); rhs != nil {
+			return b.factors(rhs, inv, num, den)
+		}
+	}
+	if inv {
+		*den = append(*den, e)
+	} else {
+		*num = append(*num, e)
+	}
+	return true
+}
+
+// absorbedValue returns the value of the absorbed local id names, or nil.
+func (b *builder) absorbedValue(id *ast.Ident) ast.Expr {
+	obj := b.pass.TypesInfo.Uses[id]
+	for _, d := range b.absorbed {
+		if b.definedVar(d) == obj && obj != nil {
+			return initValue(b.pass.TypesInfo, d, obj)
+		}
+	}
+	return nil
+}
+
+// assign reports whether each factor matches a distinct pattern and no
+// pattern is left over.
+func assign(factors []ast.Expr, patterns []factorPattern) bool {
+	if len(factors) != len(patterns) {
+		return false
+	}
+	if len(factors) == 0 {
+		return true
+	}
+	for i, p := range patterns {
+		if !p(factors[0]) {
+			continue
+		}
+		rest := append(append([]factorPattern(nil), patterns[:i]...), patterns[i+1:]...)
+		if assign(factors[1:], rest) {
+			return true
+		}
+	}
+	return false
+}
+
+// call returns e as a call that is not a conversion, with its callee.
+func (b *builder) callOf(e ast.Expr) (*ast.CallExpr, *types.Func) {
+	c, ok := ast.Unparen(e).(*ast.CallExpr)
+	if !ok {
+		return nil, nil
+	}
+	if tv, ok := b.pass.TypesInfo.Types[c.Fun]; ok && tv.IsType() {
+		return nil, nil
+	}
+	var id *ast.Ident
+	switch f := ast.Unparen(c.Fun).(type) {
+	case *ast.Ident:
+		id = f
+	case *ast.SelectorExpr:
+		id = f.Sel
+	}
+	fn, _ := b.pass.TypesInfo.Uses[id].(*types.Func)
+	return c, fn
+}
+
+func isMath(fn *types.Func, name string) bool {
+	return fn != nil && fn.Pkg() != nil && fn.Pkg().Path() == "math" && fn.Name() == name
+}
+
+// argsAre reports whether the call's arguments equal the forms.
+func (b *builder) argsAre(c *ast.CallExpr, forms ...linear) bool {
+	if len(c.Args) != len(forms) {
+		return false
+	}
+	for i, a := range c.Args {
+		l, ok := b.linearOf(a)
+		if !ok || !l.equal(forms[i]) {
+			return false
+		}
+	}
+	return true
+}
+
+// userCall accepts a call of a function of the user's (the analyzer
+// vouches that it computes a factorial or a binomial) on the forms.
+func (b *builder) userCall(forms ...linear) factorPattern {
+	return func(e ast.Expr) bool {
+		c, fn := b.callOf(e)
+		return c != nil && (fn == nil || fn.Pkg() == nil || fn.Pkg().Path() != "math") && b.argsAre(c, forms...)
+	}
+}
+
+// mathCall accepts math.name on the forms.
+func (b *builder) mathCall(name string, forms ...linear) factorPattern {
+	return func(e ast.Expr) bool {
+		c, fn := b.callOf(e)
+		return c != nil && isMath(fn, name) && b.argsAre(c, forms...)
+	}
+}
+
+// checkShape checks the expression of a ratio or term match against its
+// shape, with the operands read as linear forms.
+func (b *builder) checkShape() error {
+	if n, ok := shapeArity[b.m.Shape]; !ok || n > 0 && len(b.m.Args) != n || len(b.m.Args) == 0 {
+		return fmt.Errorf("shape %d with %d operands has no check", b.m.Shape, len(b.m.Args))
+	}
+	ops := make([]linear, len(b.m.Args))
+	for i, a := range b.m.Args {
+		l, ok := b.linearOf(a)
+		if !ok {
+			return fmt.Errorf("operand %s is not a sum of variables and constants", b.text(a))
+		}
+		ops[i] = l
+	}
+	num, den, alt := b.patterns(ops)
+	if num == nil {
+		return fmt.Errorf("shape %d has no check", b.m.Shape)
+	}
+	if b.shapeMatches(num, den) || alt != nil && b.shapeMatches(alt[0], alt[1]) {
+		return nil
+	}
+	return fmt.Errorf("the expression is not the %s of its operands", shapeName[b.m.Shape])
+}
+
+var shapeName = map[Shape]string{
+	ShapeBinomial: "binomial coefficient", ShapePermutation: "falling factorial",
+	ShapeMultinomial: "multinomial coefficient", ShapeCatalan: "Catalan number",
+	ShapeHypergeometric: "hypergeometric probability", ShapePowOverFactorial: "power over factorial",
+	ShapePoisson: "Poisson term", ShapeBinomialPMF: "binomial probability",
+	ShapeGammaRatio: "gamma ratio", ShapeBeta: "beta function",
+}
+
+// patterns returns the factors of the match's shape: numerator,
+// denominator and, for the binomial pmf, a second accepted form.
+func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]factorPattern) {
+	fact, choose := b.userCall, b.userCall
+	one := newLinear()
+	one.c = constantOne
+	switch b.m.Shape {
+	case ShapeBinomial: // n, k
+		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[1]), fact(o[0].add(o[1].scale(-1)))}, nil
+	case ShapePermutation: // n, k
+		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[0].add(o[1].scale(-1)))}, nil
+	case ShapeMultinomial: // k1..km
+		sum := newLinear()
+		for _, k := range o {
+			sum = sum.add(k)
+			den = append(den, fact(k))
+		}
+		return []factorPattern{fact(sum)}, den, nil
+	case ShapeCatalan: // n
+		return []factorPattern{fact(o[0].scale(2))}, []factorPattern{fact(o[0].add(one)), fact(o[0])}, nil
+	case ShapeHypergeometric: // k, N, K, n
+		k, total, bad, n := o[0], o[1], o[2], o[3]
+		return []factorPattern{choose(bad, k), choose(total.add(bad.scale(-1)), n.add(k.scale(-1)))}, []factorPattern{choose(total, n)}, nil
+	case ShapePowOverFactorial: // x, k
+		return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{fact(o[1])}, nil
+	case ShapePoisson: // k, lambda
+		return []factorPattern{b.mathCall("Pow", o[1], o[0]), b.mathCall("Exp", o[1].scale(-1))}, []factorPattern{fact(o[0])}, nil
+	case ShapeBinomialPMF: // k, n, p
+		k, n, p := o[0], o[1], o[2]
+		pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", one.add(p.scale(-1)), n.add(k.scale(-1)))
+		return []factorPattern{choose(n, k), pk, qnk}, nil,
+			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.scale(-1)))}}
+	case ShapeGammaRatio: // a, b
+		return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
+	case ShapeBeta: // a, b
+		return []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, nil
+	}
+	return nil, nil, nil
+}
