@@ -19,7 +19,7 @@ echo "nproc: $(nproc)"
 grep -m1 'model name' /proc/cpuinfo || true
 grep MemTotal /proc/meminfo || true
 go version
-echo "overfact at $(git rev-parse --short HEAD 2>/dev/null || echo unknown)"
+echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}"
 
 mkdir -p "$work/mod"
 (cd "$work/mod" && go mod init bench.example/run >/dev/null 2>&1 && go get -t gonum.org/v1/gonum/...@v0.17.0 >/dev/null 2>&1)

@@ -18,7 +18,7 @@ mkdir -p "$OUT"
 trap 'chmod -R u+w "$work" 2>/dev/null; rm -rf "$work/gonum-fix" "$work/mods"' EXIT
 export GOWORK=off GOFLAGS=-mod=mod
 
-echo "== building (overfact at $(git rev-parse --short HEAD 2>/dev/null || echo unknown))"
+echo "== building (overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)})"
 go build -o "$work/bench" ./internal/bench
 go build -o "$work/overfact" ./cmd/overfact
 
@@ -46,6 +46,60 @@ module "$work/mods/gonum" gonum.org/v1/gonum v0.17.0
 run gonum "$work/mods/gonum" gonum.org/v1/gonum/...
 module "$work/mods/xtools" golang.org/x/tools v0.52.0
 run xtools "$work/mods/xtools" golang.org/x/tools/...
+
+echo "== probes: gonum calls at the inputs the findings name (evidence for the verdicts)"
+mkdir -p "$work/mods/gonum/probe"
+cat >"$work/mods/gonum/probe/main.go" <<'GO'
+// Command probe calls gonum where overfact reported overflow and prints
+// what comes back next to the exact value (math/big) where one exists.
+package main
+
+import (
+	"fmt"
+	"math"
+	"math/big"
+	"os"
+	"time"
+
+	"gonum.org/v1/gonum/mathext"
+	"gonum.org/v1/gonum/stat/combin"
+	"gonum.org/v1/gonum/stat/distuv"
+)
+
+func main() {
+	exact := new(big.Int).Binomial(62, 31)
+	fmt.Printf("combin.go:41   Binomial(62, 31) = %d; exact C(62,31) = %s (fits int64: %v)\n", combin.Binomial(62, 31), exact, exact.IsInt64())
+	rev := make([]int, 21)
+	for i := range rev {
+		rev[i] = 20 - i
+	}
+	fmt.Printf("combin.go:679  PermutationIndex(reverse of 0..20, 21, 21) = %d; exact 21!-1 = %s\n",
+		combin.PermutationIndex(rev, 21, 21), new(big.Int).Sub(new(big.Int).MulRange(1, 21), big.NewInt(1)))
+	fmt.Printf("combin.go:437  NumPermutations(21, 21) = %d (loop not reported)\n", combin.NumPermutations(21, 21))
+	for _, c := range []float64{100.5, 172.5} {
+		fmt.Printf("hypergeo.go:78 Hypergeo(1.3, 2.7, %v, -2) = %v\n", c, mathext.Hypergeo(1.3, 2.7, c, -2))
+	}
+	for _, c := range []float64{100.5, 170.5} {
+		fmt.Printf("hyp2f1.go:165  Hypergeo(1.3, 2.7, %v, 1-1e-15) = %v\n", c, mathext.Hypergeo(1.3, 2.7, c, 1-1e-15))
+	}
+	for _, k := range []float64{0.1, 0.02} {
+		fmt.Printf("weibull.go:39  Weibull{K: %v, λ: 1}.ExKurtosis() = %v\n", k, distuv.Weibull{K: k, Lambda: 1}.ExKurtosis())
+	}
+	w := distuv.Weibull{K: 1.0 / 172, Lambda: 1e-20}
+	lg, _ := math.Lgamma(173)
+	fmt.Printf("weibull.go:76  Weibull{K: 1/172, λ: 1e-20}.Mean() = %v; λΓ(173) = %.6g by log-gamma; Variance() = %v\n", w.Mean(), math.Exp(lg+math.Log(1e-20)), w.Variance())
+	done := make(chan float64)
+	go func() { done <- mathext.Hypergeo(1.5, 2.5, 204, 0.95) }()
+	select {
+	case v := <-done:
+		fmt.Printf("hyp2f1.go:285  Hypergeo(1.5, 2.5, 204, 0.95) = %v\n", v)
+	case <-time.After(20 * time.Second):
+		fmt.Println("hyp2f1.go:285  Hypergeo(1.5, 2.5, 204, 0.95) has not returned after 20s")
+		os.Exit(0)
+	}
+}
+GO
+(cd "$work/mods/gonum" && go run ./probe) || echo "probe failed"
 
 echo "== overfact -fix on a scratch copy of gonum v0.17.0"
 src=$(cd "$work/mods/gonum" && go list -m -f '{{.Dir}}' gonum.org/v1/gonum)

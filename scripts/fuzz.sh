@@ -9,5 +9,5 @@
 # go test ./internal/fuzz then replays it.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-echo "overfact at $(git rev-parse --short HEAD 2>/dev/null || echo unknown); $(go version)"
+echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version)"
 exec go test -run XXX -fuzz FuzzAnalyzer -fuzztime "${1:-10m}" -fuzzminimizetime 20x -parallel 1 ./internal/fuzz

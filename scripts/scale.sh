@@ -15,7 +15,7 @@ n=${1:-5}
 work=$(mktemp -d "${TMPDIR:-/tmp}/overfact-scale.XXXXXX")
 trap 'rm -rf "$work"' EXIT
 
-echo "overfact at $(git rev-parse --short HEAD 2>/dev/null || echo unknown); $(go version); nproc $(nproc)"
+echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version); nproc $(nproc)"
 go build -o "$work/bench" ./internal/bench
 "$work/bench" -mode scale -n "$n" -casetime "${CASETIME:-2m}"
 
