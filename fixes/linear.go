@@ -8,17 +8,16 @@ import (
 	"math"
 )
 
-// linear is an expression c + Σ coef·v over variables v, with an exact
-// constant c (go/constant keeps 1.0/6 as the rational 1/6) and integer
-// coefficients. Comparing operands as linear forms lets the fixer see that
+// linear is an expression c + Σ coef·v over variables v, with exact
+// constants (go/constant keeps 1.0/6 as the rational 1/6). Comparing operands as linear forms lets the fixer see that
 // n-k and -(k-n) are the same, or that a+b+c is the n of a multinomial.
 type linear struct {
 	c     constant.Value
-	terms map[types.Object]int64
+	terms map[types.Object]constant.Value
 }
 
 func newLinear() linear {
-	return linear{c: constant.MakeInt64(0), terms: make(map[types.Object]int64)}
+	return linear{c: constant.MakeInt64(0), terms: make(map[types.Object]constant.Value)}
 }
 
 // linearOf reads e as a linear form. It reports false for anything but
@@ -42,11 +41,11 @@ func (b *builder) linearOf(e ast.Expr) (linear, bool) {
 		}
 	case *ast.Ident:
 		v, ok := b.pass.TypesInfo.Uses[e].(*types.Var)
-		l.terms[v] = 1
+		l.terms[v] = constant.MakeInt64(1)
 		return l, ok
 	case *ast.UnaryExpr:
 		x, ok := b.linearOf(e.X)
-		return x.scale(-1), ok && e.Op == token.SUB
+		return x.scale(constant.MakeInt64(-1)), ok && e.Op == token.SUB
 	case *ast.BinaryExpr:
 		return b.linearBinary(e)
 	}
@@ -63,13 +62,18 @@ func (b *builder) linearBinary(e *ast.BinaryExpr) (linear, bool) {
 	case token.ADD:
 		return x.add(y), true
 	case token.SUB:
-		return x.add(y.scale(-1)), true
+		return x.add(y.neg()), true
 	case token.MUL:
-		if k, ok := y.integer(); ok {
-			return x.scale(k), true
+		if len(y.terms) == 0 {
+			return x.scale(y.c), true
 		}
-		if k, ok := x.integer(); ok {
-			return y.scale(k), true
+		if len(x.terms) == 0 {
+			return y.scale(x.c), true
+		}
+	case token.QUO:
+		// Only float division is exact; an integer (v+1)/2 truncates.
+		if len(y.terms) == 0 && constant.Sign(y.c) != 0 && classOf(b.pass.TypesInfo.TypeOf(e)) == classFloat {
+			return x.scale(constant.BinaryOp(constant.MakeInt64(1), token.QUO, y.c)), true
 		}
 	}
 	return x, false
@@ -87,39 +91,32 @@ func (b *builder) isNumericConversion(e *ast.CallExpr) bool {
 	return to != classOther && from != classOther && (to == classFloat || from != classFloat)
 }
 
-// integer returns the value of a constant form that is an integer.
-func (l linear) integer() (int64, bool) {
-	if len(l.terms) > 0 {
-		return 0, false
-	}
-	i := constant.ToInt(l.c)
-	if i.Kind() != constant.Int {
-		return 0, false
-	}
-	return constant.Int64Val(i)
-}
-
-func (l linear) scale(k int64) linear {
-	out := linear{c: constant.BinaryOp(l.c, token.MUL, constant.MakeInt64(k)), terms: make(map[types.Object]int64)}
+func (l linear) scale(k constant.Value) linear {
+	out := linear{c: constant.BinaryOp(l.c, token.MUL, k), terms: make(map[types.Object]constant.Value)}
 	for v, c := range l.terms {
-		out.terms[v] = c * k
+		out.terms[v] = constant.BinaryOp(c, token.MUL, k)
 	}
 	return out
 }
 
+func (l linear) neg() linear { return l.scale(constant.MakeInt64(-1)) }
+
 func (l linear) add(m linear) linear {
-	out := l.scale(1)
+	out := l.scale(constant.MakeInt64(1))
 	out.c = constant.BinaryOp(out.c, token.ADD, m.c)
 	for v, c := range m.terms {
-		out.terms[v] += c
+		if old, ok := out.terms[v]; ok {
+			c = constant.BinaryOp(old, token.ADD, c)
+		}
+		out.terms[v] = c
 	}
 	return out
 }
 
 func (l linear) equal(m linear) bool {
-	d := l.add(m.scale(-1))
+	d := l.add(m.neg())
 	for _, c := range d.terms {
-		if c != 0 {
+		if constant.Sign(c) != 0 {
 			return false
 		}
 	}

@@ -194,9 +194,9 @@ func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]fact
 	one.c = constantOne
 	switch b.m.Shape {
 	case ShapeBinomial: // n, k
-		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[1]), fact(o[0].add(o[1].scale(-1)))}, nil
+		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[1]), fact(o[0].add(o[1].neg()))}, nil
 	case ShapePermutation: // n, k
-		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[0].add(o[1].scale(-1)))}, nil
+		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[0].add(o[1].neg()))}, nil
 	case ShapeMultinomial: // k1..km
 		sum := newLinear()
 		for _, k := range o {
@@ -205,19 +205,19 @@ func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]fact
 		}
 		return []factorPattern{fact(sum)}, den, nil
 	case ShapeCatalan: // n
-		return []factorPattern{fact(o[0].scale(2))}, []factorPattern{fact(o[0].add(one)), fact(o[0])}, nil
+		return []factorPattern{fact(o[0].scale(constant.MakeInt64(2)))}, []factorPattern{fact(o[0].add(one)), fact(o[0])}, nil
 	case ShapeHypergeometric: // k, N, K, n
 		k, total, bad, n := o[0], o[1], o[2], o[3]
-		return []factorPattern{choose(bad, k), choose(total.add(bad.scale(-1)), n.add(k.scale(-1)))}, []factorPattern{choose(total, n)}, nil
+		return []factorPattern{choose(bad, k), choose(total.add(bad.neg()), n.add(k.neg()))}, []factorPattern{choose(total, n)}, nil
 	case ShapePowOverFactorial: // x, k
 		return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{fact(o[1])}, nil
 	case ShapePoisson: // k, lambda
-		return []factorPattern{b.mathCall("Pow", o[1], o[0]), b.mathCall("Exp", o[1].scale(-1))}, []factorPattern{fact(o[0])}, nil
+		return []factorPattern{b.mathCall("Pow", o[1], o[0]), b.mathCall("Exp", o[1].neg())}, []factorPattern{fact(o[0])}, nil
 	case ShapeBinomialPMF: // k, n, p
 		k, n, p := o[0], o[1], o[2]
-		pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", one.add(p.scale(-1)), n.add(k.scale(-1)))
+		pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", one.add(p.neg()), n.add(k.neg()))
 		return []factorPattern{choose(n, k), pk, qnk}, nil,
-			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.scale(-1)))}}
+			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.neg()))}}
 	case ShapeGammaRatio: // a, b
 		return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
 	case ShapeBeta: // a, b

@@ -96,3 +96,16 @@ func Raised(a, b float64) float64 {
 	// probe:gammaratio(a+1, b)
 	return math.Gamma(a+1) / math.Gamma(b) // want "probe gammaratio"
 }
+
+// Halves is a gamma ratio of half-integers, read through float division.
+func Halves(v float64) float64 {
+	// probe:gammaratio((v+1)/2, v/2)
+	return math.Gamma((v+1)/2) / math.Gamma(v/2) // want "probe gammaratio"
+}
+
+// Student has a square root beside its gamma ratio, which GammaRatio
+// alone would drop.
+func Student(v float64) float64 {
+	// probe:gammaratio((v+1)/2, v/2)
+	return math.Gamma((v+1)/2) / (math.Sqrt(v*math.Pi) * math.Gamma(v/2)) // want "probe gammaratio: no fix: the expression is not the gamma ratio of its operands"
+}
