@@ -32,7 +32,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	if bounded(k) && k.Hi > 0 {
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with %s = %d, for a largest factor ≥ %d", kName, t.typeName(), verb(t), kName, k.Hi, thresholds.FallingFirstBad(t.Num, k.Hi))
 	} else {
-		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with every factor taken it is a factorial, which breaks from %d", kName, t.typeName(), verb(t), thresholds.Factorial(t.Num).FirstBad)
+		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: run down to 1 it is a factorial, which %s from %d!", kName, t.typeName(), verb(t), verb(t), thresholds.Factorial(t.Num).FirstBad)
 	}
 	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, k.Lo)
 	switch {
