@@ -65,7 +65,8 @@ func TestStirlingCoefficients(t *testing.T) {
 }
 
 // The generated tables carry ln n! to double-double precision and n!
-// correctly rounded; the constants likewise.
+// correctly rounded; the reduction tables of ddLog and ddExp and the
+// constants likewise.
 func TestTables(t *testing.T) {
 	f := big.NewInt(1)
 	for n := int64(0); n < int64(len(lnFactTable)); n++ {
@@ -78,6 +79,20 @@ func TestTables(t *testing.T) {
 		}
 		if w, _ := want.Float64(); lnFactTable[n].hi != w {
 			t.Errorf("lnFactTable[%d].hi = %v, want %v", n, lnFactTable[n].hi, w)
+		}
+	}
+	for i := range logTable {
+		want := refLog(bnew().Quo(bi(int64(512+i)), bi(512)))
+		if d := bnew().Sub(ddValue(logTable[i]), want); d.Sign() != 0 {
+			if f, _ := d.Float64(); math.Abs(f) > 1e-32 {
+				t.Errorf("logTable[%d] off by %g", i, f)
+			}
+		}
+	}
+	for j := range exp2Table {
+		want := refExp(bnew().Mul(refLog(bi(2)), bf(float64(j)/64)))
+		if r := ddRel(exp2Table[j], want); r > 1e-32 {
+			t.Errorf("exp2Table[%d] off by %g relative", j, r)
 		}
 	}
 	if r := ddRel(ln2, refLog(bi(2))); r > 1e-32 {
