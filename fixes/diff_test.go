@@ -42,6 +42,7 @@ var diffCases = []diffCase{
 	{pkg: "probeloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
 	{pkg: "probeloop", fn: "Orders", loops: []string{"n := 0; n <= 30; n++", "k := 0; k <= n; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refFalling},
 	{pkg: "probeloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	{pkg: "probeloop", fn: "Ranged", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
 	{pkg: "probeloop", fn: "Odds", loops: []string{"n := 0; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "probeguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
 	{pkg: "probeguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},

@@ -39,6 +39,9 @@ func buildLoop(b *builder) error {
 	if !onlyUpdates(b.pass.TypesInfo, loop, acc) {
 		return fmt.Errorf("the loop does more than update %s", acc.Name())
 	}
+	if err := b.checkLoop(loop, acc); err != nil {
+		return err
+	}
 	rhs := initValue(b.pass.TypesInfo, init, acc)
 	if rhs == nil || !isOne(b.pass.TypesInfo, rhs) {
 		return fmt.Errorf("%s does not start at 1", acc.Name())

@@ -185,8 +185,11 @@ func loopMatch(pass *analysis.Pass, m fixes.Match, line int, acc, operands strin
 	ast.Inspect(m.File, func(n ast.Node) bool {
 		if b, ok := n.(*ast.BlockStmt); ok && loop == nil {
 			for _, s := range b.List {
-				if _, ok := s.(*ast.ForStmt); ok && pass.Fset.Position(s.Pos()).Line == line {
-					loop, list = s, b.List
+				switch s.(type) {
+				case *ast.ForStmt, *ast.RangeStmt:
+					if pass.Fset.Position(s.Pos()).Line == line {
+						loop, list = s, b.List
+					}
 				}
 			}
 		}

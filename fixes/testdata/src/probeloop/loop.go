@@ -55,12 +55,13 @@ func Odds(n, k int) float64 {
 	return b
 }
 
-// Kept uses its counter after the loop, so the loop cannot go.
+// Kept declares its counter outside the loop, which the check does not
+// follow (removing the loop would leave i unused).
 func Kept(n, k int) (int, int) {
 	b := 1
 	i := 1
 	// probe:binomialloop(b; n, k)
-	for ; i <= k; i++ { // want "probe binomialloop: no fix: fixed code does not type-check"
+	for ; i <= k; i++ { // want "probe binomialloop: no fix: the loop does not count an induction variable up by one"
 		b = b * (n - k + i) / i
 	}
 	return b, 0
@@ -72,6 +73,37 @@ func Doubled(n, k int) int {
 	// probe:binomialloop(b; n, k)
 	for i := 1; i <= k; i++ { // want "probe binomialloop: no fix: b does not start at 1"
 		b = b * (n - k + i) / i
+	}
+	return b
+}
+
+// Ranged counts with range over an int.
+func Ranged(n, k int) int {
+	b := 1
+	// probe:binomialloop(b; n, k)
+	for i := range k { // want "probe binomialloop"
+		b = b * (n - i) / (i + 1)
+	}
+	return b
+}
+
+// OffByOne multiplies by n-i from i = 1: that is C(n-1, k)·n/(n-k), not
+// C(n, k).
+func OffByOne(n, k int) int {
+	b := 1
+	// probe:binomialloop(b; n, k)
+	for i := 1; i <= k; i++ { // want "probe binomialloop: no fix: the loop is not the multiplicative binomial of its operands"
+		b = b * (n - i) / i
+	}
+	return b
+}
+
+// DivideFirst divides before it multiplies, which truncates.
+func DivideFirst(n, k int) int {
+	b := 1
+	// probe:binomialloop(b; n, k)
+	for i := 1; i <= k; i++ { // want "probe binomialloop: no fix: the loop's update is not acc = acc \\* F / G"
+		b = b / i * (n - k + i)
 	}
 	return b
 }
