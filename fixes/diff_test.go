@@ -124,7 +124,7 @@ func TestDifferential(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	gomod := fmt.Sprintf("module difftest\n\ngo 1.21\n\nrequire %s v0.0.0\n\nreplace %s => %s\n", fixes.HelperPath, fixes.HelperPath, helper)
+	gomod := fmt.Sprintf("module difftest\n\ngo 1.22\n\nrequire %s v0.0.0\n\nreplace %s => %s\n", fixes.HelperPath, fixes.HelperPath, helper)
 	write(t, filepath.Join(mod, "go.mod"), gomod)
 	write(t, filepath.Join(mod, "main.go"), diffMain(pkgs))
 	cmd := exec.Command("go", "run", ".")
