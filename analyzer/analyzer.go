@@ -9,8 +9,6 @@ import (
 	"os"
 
 	"golang.org/x/tools/go/analysis"
-	"golang.org/x/tools/go/analysis/passes/inspect"
-	"golang.org/x/tools/go/ast/inspector"
 )
 
 // Analyzer reports overflow-prone factorial arithmetic.
@@ -18,7 +16,6 @@ var Analyzer = &analysis.Analyzer{
 	Name:             "overfact",
 	Doc:              doc,
 	URL:              "https://github.com/overfact/overfact",
-	Requires:         []*analysis.Analyzer{inspect.Analyzer},
 	Run:              run,
 	FactTypes:        []analysis.Fact{new(FactorialFact)},
 	RunDespiteErrors: true,
@@ -84,11 +81,10 @@ func run(pass *analysis.Pass) (any, error) {
 		fi.dirs = c.parseDirectives(f, fi.generated)
 		c.files[tf] = fi
 	}
-	ins := pass.ResultOf[inspect.Analyzer].(*inspector.Inspector)
 
 	// Phase 1: find factorial-valued functions and export their facts, so
 	// that phase 2 sees calls of local and imported ones alike.
-	scans := c.scanAll(ins)
+	scans := c.scanAll(pass.Files)
 	funcs := c.allFuncs
 	var decls []*ast.FuncDecl
 	for _, n := range funcs {

@@ -7,7 +7,6 @@ import (
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/fixes"
-	"golang.org/x/tools/go/ast/inspector"
 )
 
 // scan is what the syntactic prefilter found in a function body.
@@ -19,18 +18,24 @@ type scan struct {
 	localCall bool // a call of a function of this package, which may become factorial-valued
 }
 
-// scanAll is the syntactic prefilter. In one pass of the shared
-// inspector over the node types that matter, it records for each
-// function (a closure counts on its own) whether it multiplies and what
-// it calls; it allocates only per function. Only what it finds is
-// analysed further, and the range analysis runs only when a finding
-// needs a range.
-func (c *checker) scanAll(ins *inspector.Inspector) map[ast.Node]*scan {
+// scanAll is the syntactic prefilter. In one walk of the files it
+// records for each function (a closure counts on its own) whether it
+// multiplies and what it calls; it allocates only per function. Only
+// what it finds is analysed further, and the range analysis runs only
+// when a finding needs a range.
+//
+// It walks the syntax itself instead of asking for the shared
+// inspector: because the analyzer has facts, the driver runs it on
+// every dependency package, and an inspector built there stays alive
+// until the whole run ends (docs/patterns.md, "Cost", has the figures).
+func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 	out := make(map[ast.Node]*scan)
 	var stack []ast.Node
 	var cur *scan
-	types := []ast.Node{(*ast.FuncDecl)(nil), (*ast.FuncLit)(nil), (*ast.AssignStmt)(nil), (*ast.BinaryExpr)(nil), (*ast.CallExpr)(nil), (*ast.ForStmt)(nil), (*ast.RangeStmt)(nil)}
-	ins.Preorder(types, func(n ast.Node) {
+	visit := func(n ast.Node) bool {
+		if n == nil {
+			return false
+		}
 		for len(stack) > 0 && n.Pos() >= stack[len(stack)-1].End() {
 			stack = stack[:len(stack)-1]
 			cur = nil
@@ -60,7 +65,7 @@ func (c *checker) scanAll(ins *inspector.Inspector) map[ast.Node]*scan {
 			}
 		case *ast.CallExpr:
 			if cur == nil {
-				return
+				return true
 			}
 			if !cur.knownCall {
 				cur.knownCall = c.knownCallee(n)
@@ -69,7 +74,11 @@ func (c *checker) scanAll(ins *inspector.Inspector) map[ast.Node]*scan {
 				cur.localCall = true
 			}
 		}
-	})
+		return true
+	}
+	for _, f := range files {
+		ast.Inspect(f, visit)
+	}
 	return out
 }
 
