@@ -28,7 +28,7 @@ func (w *walker) eval(s state, e ast.Expr) Interval {
 	} else {
 		r = w.evalNode(s, e)
 	}
-	k := numKind{}
+	k := notNumber
 	if typed {
 		k = kindOf(tv.Type)
 	}
@@ -89,7 +89,7 @@ func (w *walker) kind(e ast.Expr) numKind {
 	if tv, ok := w.f.info.Types[e]; ok {
 		return kindOf(tv.Type)
 	}
-	return numKind{}
+	return notNumber
 }
 
 func (w *walker) unary(s state, e *ast.UnaryExpr) Interval {

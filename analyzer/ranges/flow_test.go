@@ -200,6 +200,26 @@ func seats[T small](n T) T {
 	}
 	return n + 10/*@range (-inf, +inf)*/
 }`},
+	// Go spec, "Type parameter declarations": a type set may mix integer
+	// and float types, so nothing about i's values is known statically.
+	{"loop variable of a type parameter with integers and floats", `package p
+type amount interface{ ~int | ~float64 }
+func fact[T amount](n T) T {
+	p := T(1)
+	for i := T(2); i <= n; i++ {
+		p *= i/*@range (-inf, +inf)*/
+	}
+	return p/*@range (-inf, +inf)*/
+}`},
+	{"counter of a type parameter with integers and floats", `package p
+type amount interface{ ~int | ~float64 }
+func tally[T amount](n T) T {
+	var j T
+	for j = 0; j < 10; j++ {
+		_ = j/*@range (-inf, +inf)*/
+	}
+	return j
+}`},
 	{"generic without a numeric core", `package p
 func seats[T any](n T) T {
 	return n

@@ -21,17 +21,23 @@ type numKind struct {
 	mant uint
 }
 
+// notNumber is the kind of a type that holds no number the analysis
+// tracks, such as a type parameter with integers and floats in its type
+// set: any value is possible (top is the whole line, not the zero
+// interval of an unset numKind) and no range is safe from wrapping.
+var notNumber = numKind{safe: Empty(), top: Top()}
+
 // kindOf classifies t; it never panics on nil or invalid types.
 func kindOf(t types.Type) numKind {
 	if t == nil {
-		return numKind{}
+		return notNumber
 	}
 	if tp, ok := types.Unalias(t).(*types.TypeParam); ok {
 		return paramKind(tp)
 	}
 	b, ok := t.Underlying().(*types.Basic)
 	if !ok {
-		return numKind{}
+		return notNumber
 	}
 	return basicKind(b.Kind())
 }
@@ -68,7 +74,7 @@ func basicKind(k types.BasicKind) numKind {
 	case types.Float64, types.UntypedFloat:
 		return numKind{ok: true, float: true, safe: Top(), top: Top(), mant: 53}
 	}
-	return numKind{}
+	return notNumber
 }
 
 // paramKind treats a type parameter whose type set holds only integer
@@ -77,7 +83,7 @@ func basicKind(k types.BasicKind) numKind {
 func paramKind(tp *types.TypeParam) numKind {
 	iface, ok := tp.Constraint().Underlying().(*types.Interface)
 	if !ok {
-		return numKind{}
+		return notNumber
 	}
 	var terms []types.Type
 	for i := 0; i < iface.NumEmbeddeds(); i++ {
@@ -91,13 +97,13 @@ func paramKind(tp *types.TypeParam) numKind {
 		}
 	}
 	if len(terms) == 0 {
-		return numKind{}
+		return notNumber
 	}
 	var out numKind
 	for i, t := range terms {
 		k := kindOf(t)
 		if !k.ok || (i > 0 && k.float != out.float) {
-			return numKind{}
+			return notNumber
 		}
 		if i == 0 {
 			out = k
