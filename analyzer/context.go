@@ -59,9 +59,6 @@ func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
 	if v, ok := fc.intConst(e); ok {
 		return ranges.Point(v)
 	}
-	if fc.mixedTypeParam(e) {
-		return ranges.Top()
-	}
 	iv := fc.ranges().Of(e)
 	if lin, ok := fc.linear(e); ok && len(lin.terms) == 1 && lin.terms[0].coef == 1 {
 		for _, a := range fc.assumes {
@@ -271,25 +268,4 @@ func isParam(sig *types.Signature, v types.Object) bool {
 		}
 	}
 	return false
-}
-
-// mixedTypeParam reports whether e has a type parameter type whose type
-// set holds a floating-point type. An integer range says nothing sound
-// about the float instantiations, so such values are treated as unknown.
-func (fc *fnCtx) mixedTypeParam(e ast.Expr) bool {
-	tp, ok := types.Unalias(fc.c.pass.TypesInfo.TypeOf(e)).(*types.TypeParam)
-	if !ok {
-		return false
-	}
-	iface, ok := tp.Constraint().Underlying().(*types.Interface)
-	if !ok {
-		return true
-	}
-	floats := false
-	eachTerm(iface, 0, func(t types.Type) {
-		if b, ok := t.Underlying().(*types.Basic); ok && b.Info()&types.IsFloat != 0 {
-			floats = true
-		}
-	})
-	return floats
 }
