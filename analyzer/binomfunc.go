@@ -42,7 +42,8 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 			return true
 		}
 		p := fc.evalProduct(ret.Results[0])
-		if len(p.num) != 1 || len(p.den) != 2 || p.num[0].kind != kindFactorial {
+		// An unknown operand (2·n!/(k!(n−k)!)) makes it no binomial.
+		if len(p.num) != 1 || len(p.den) != 2 || p.num[0].kind != kindFactorial || p.other != 0 {
 			return true
 		}
 		u := p.num[0]

@@ -59,8 +59,14 @@ func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
 	}
 }
 
-// checkProduct dispatches a product to the pattern its factors form.
+// checkProduct dispatches a product to the pattern its factors form. A
+// product with operands the analyzer does not know is judged at the
+// sub-expression that holds its factors alone, when the syntax groups
+// one: that is the expression a shape describes and a fix replaces.
 func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
+	if sub, sp := fc.exactPart(root, p); sub != nil {
+		root, p = sub, sp
+	}
 	var facNum, facDen, gamma, powNum, binNum, binDen int
 	for _, f := range p.num {
 		switch {

@@ -3,6 +3,7 @@ package analyzer
 import (
 	"fmt"
 	"go/ast"
+	"go/token"
 	"math"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -14,14 +15,14 @@ import (
 // small, but k! and x^k are computed separately and each overflows on
 // its own: past k! the term is 0, past both it is NaN.
 func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
-	var pow, fac factor
-	exp := false
+	var pow, fac, ex factor
+	pows, exps := 0, 0
 	for _, f := range p.num {
 		switch {
 		case f.math == "Pow":
-			pow = f
+			pow, pows = f, pows+1
 		case f.math == "Exp":
-			exp = true
+			ex, exps = f, exps+1
 		}
 	}
 	for _, f := range p.den {
@@ -39,16 +40,21 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	if facSafe && powSafe {
 		return
 	}
-	what := "power-over-factorial term x^k/k!"
-	m := &fixes.Match{Shape: fixes.ShapePowOverFactorial, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	if exp {
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	exact := fac.kind == kindFactorial && fac.off == 0 && p.other == 0 && pows == 1 && exps <= 1 &&
+		len(p.num) == pows+exps && len(p.den) == 1 && fc.sameInt(pow.arg2, fac.arg)
+	var what string
+	switch {
+	case exact && exps == 0:
+		what = "power-over-factorial term x^k/k!"
+		m.Shape, m.Args = fixes.ShapePowOverFactorial, []ast.Expr{pow.arg, pow.arg2}
+	case exact && fc.negated(ex.arg, pow.arg):
 		what = "Poisson-style term λ^k·e^(−λ)/k!"
 		m.Shape, m.Args = fixes.ShapePoisson, []ast.Expr{pow.arg2, pow.arg}
-	} else {
-		m.Args = []ast.Expr{pow.arg, pow.arg2}
-	}
-	if fac.off != 0 || p.other != 0 && !exp {
-		m.Shape, m.Args = fixes.ShapeNone, nil
+	default:
+		// Not the shape as written (x^(k+1)/k!, e^(−2λ), an extra
+		// factor): name what the code computes instead.
+		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), bang(fac.arg, fac.off))
 	}
 	var msg, clause string
 	definite := false
@@ -80,4 +86,38 @@ func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
 		return "", true
 	}
 	return fmt.Sprintf("math.Pow(%s, %s) %s for %s ≥ %d", src(pow.arg), src(pow.arg2), verb(pow.t), src(fc.stripConv(pow.arg2)), first), false
+}
+
+// powerText renders math.Pow(x, e) as x^e, with the exponent's
+// conversion dropped.
+func powerText(fc *fnCtx, pow factor) string {
+	e := fc.stripConv(pow.arg2)
+	switch unparen(e).(type) {
+	case *ast.Ident, *ast.BasicLit:
+		return src(pow.arg) + "^" + src(e)
+	}
+	return src(pow.arg) + "^(" + src(e) + ")"
+}
+
+// sameInt reports whether the integer expressions a and b (conversions
+// aside) have the same linear form: the exponent and the factorial of
+// x^k/k! must be one k.
+func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
+	la, ok1 := fc.linear(a)
+	lb, ok2 := fc.linear(b)
+	return ok1 && ok2 && la.equal(lb)
+}
+
+// negated reports whether e is −x: the exponent of e^(−λ) beside λ^k.
+func (fc *fnCtx) negated(e, x ast.Expr) bool {
+	u, ok := unparen(e).(*ast.UnaryExpr)
+	if !ok || u.Op != token.SUB {
+		return false
+	}
+	a, ok1 := fc.affineOf(u.X, 0)
+	b, ok2 := fc.affineOf(x, 0)
+	if !ok1 || !ok2 || a.a != b.a || a.b != b.b {
+		return false
+	}
+	return a.v == nil && b.v == nil || sameVar(fc, a.v, b.v)
 }

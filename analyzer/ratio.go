@@ -70,7 +70,9 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
 	var msg string
 	shape := fixes.ShapeNone
-	if len(facts) == 1 && len(p.num) == 1 && u.kind == kindFactorial {
+	// An unknown operand (2·n!/(k!(n−k)!)) makes the value something
+	// else than the shape, so no shape is claimed for it.
+	if len(facts) == 1 && len(p.num) == 1 && u.kind == kindFactorial && p.other == 0 {
 		shape, msg = fc.ratioShape(u, dens, m)
 	}
 	switch {
@@ -184,7 +186,7 @@ func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 	msg := fmt.Sprintf("hypergeometric probability from three binomial coefficients in %s: %s(%s, …) breaks for %s ≥ %d before the division%s",
 		d.t.typeName(), d.fn.Name(), src(d.arg), src(d.arg), first, clause)
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	if args := fc.hyperArgs(p); args != nil {
+	if args := fc.hyperArgs(p); args != nil && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeHypergeometric, args
 	}
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: m})

@@ -115,3 +115,20 @@ func refBeta(x []float64) *big.Float {
 	num := new(big.Int).Mul(factorialBig(a-1), factorialBig(b-1))
 	return quo(bf(num), bf(factorialBig(a+b-1)))
 }
+
+// scaled is c times the reference ref, for a shape inside a product with
+// a constant.
+func scaled(c int64, ref func([]float64) *big.Float) func([]float64) *big.Float {
+	return func(x []float64) *big.Float { return mul(fl(float64(c)), ref(x)) }
+}
+
+// refErlangB is the Erlang B formula (a^c/c!) / Σ_{k=0..c} a^k/k! for
+// (a, c) (common practice; the queueing handbooks' loss formula).
+func refErlangB(x []float64) *big.Float {
+	a, c := x[0], int64(x[1])
+	sum := fl(0)
+	for k := int64(0); k <= c; k++ {
+		sum = new(big.Float).SetPrec(refPrec).Add(sum, refPowFact([]float64{a, float64(k)}))
+	}
+	return quo(refPowFact([]float64{a, float64(c)}), sum)
+}

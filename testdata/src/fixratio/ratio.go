@@ -56,3 +56,23 @@ func fact32(n int32) int32 { // want fact32:"factorial of parameter 0"
 func Rotas32(n, k int32) int32 { // want Rotas32:"binomial of parameter 0"
 	return fact32(n) / (fact32(k) * fact32(n-k)) // want "binomial coefficient"
 }
+
+// Pairings counts picks of k agents out of n, each pick staffed on
+// either of two sites. The syntax groups the binomial apart from the 2,
+// so the binomial alone is rewritten.
+func Pairings(n, k int) int {
+	return 2 * (fact(n) / (fact(k) * fact(n-k))) // want "binomial coefficient"
+}
+
+// PairingsFlat is Pairings with the 2 inside the numerator: the
+// expression is no binomial as written, so it is reported as a plain
+// ratio, without a fix.
+func PairingsFlat(n, k int) int {
+	return 2 * fact(n) / (fact(k) * fact(n-k)) // want `ratio of factorials in int: the numerator n! wraps`
+}
+
+// TripleShare is RotaShare for three shifts; the factor 3 comes after
+// the binomial, which is rewritten on its own.
+func TripleShare(n, k int) float64 {
+	return factF(n) / (factF(k) * factF(n-k)) * 3 // want "binomial coefficient"
+}

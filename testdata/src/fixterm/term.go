@@ -42,3 +42,26 @@ func Spread(a, b float64) float64 {
 func Mix(a, b float64) float64 {
 	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want "Beta function"
 }
+
+// Blocking is the Erlang B chance that a call finds all c lines busy at
+// offered load a: the last term over the sum of all terms. The term is
+// grouped apart from the sum, so it is rewritten on its own.
+func Blocking(a float64, c int) float64 {
+	sum := 0.0
+	for k := 0; k <= c; k++ {
+		sum += math.Pow(a, float64(k)) / factF(k) // want "power-over-factorial"
+	}
+	return math.Pow(a, float64(c)) / factF(c) / sum // want "power-over-factorial"
+}
+
+// NextLoad is a^(k+1)/k!, which is no a^k/k!: it is reported with its
+// real exponent and not rewritten.
+func NextLoad(a float64, k int) float64 {
+	return math.Pow(a, float64(k+1)) / factF(k) // want `term with a\^\(k \+ 1\) over k! in float64`
+}
+
+// PairArrivals has e^(−2λ) where a Poisson term has e^(−λ): no
+// Poisson term, so no rewrite.
+func PairArrivals(k int, lambda float64) float64 {
+	return math.Pow(lambda, float64(k)) * math.Exp(-2*lambda) / factF(k) // want `term with lambda\^k over k! in float64`
+}

@@ -15,8 +15,8 @@ func ErlangC(a float64, c int) float64 {
 	for k := 0; k < c; k++ {
 		sum += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k) // want `power-over-factorial term x\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 	}
-	top := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c) * float64(c) / (float64(c) - a)
-	return top / (sum + top) // want `power-over-factorial term x\^k/k! in float64: the divisor c! overflows to \+Inf for c ≥ 171`
+	top := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c) * float64(c) / (float64(c) - a) // want `power-over-factorial term x\^k/k! in float64: the divisor c! overflows to \+Inf for c ≥ 171`
+	return top / (sum + top)
 }
 
 // ErlangCSmallDesk is ErlangC for the eight-seat desk.
