@@ -89,7 +89,12 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	}
 	c.consumed[inner] = true
 	clause, definite := verdict(src(f.arg), r, first)
+	// The conversion and the call become one helper call computing n! in
+	// the target type; a call whose value is (n+off)! is left alone.
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: conv, Result: c.pass.TypesInfo.TypeOf(conv)}
+	if f.off == 0 {
+		m.Shape, m.Args = fixes.ShapeFactorialValue, []ast.Expr{f.arg}
+	}
 	fc.report(finding{node: conv, cat: catLateConv, definite: definite, msg: msg + clause,
-		related: c.relatedDef(f.fn.Name(), f.fn.Pos()),
-		match:   &fixes.Match{Shape: fixes.ShapeFactorial, Node: conv, Args: []ast.Expr{f.arg}, Result: c.pass.TypesInfo.TypeOf(conv), FirstBad: first}})
+		related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})
 }

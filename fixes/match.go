@@ -34,6 +34,7 @@ const (
 	ShapeBinomialLoop           // b = b*(n-k+i)/i loop                Args: n, k
 	ShapeFallingLoop            // n(n-1)...(n-k+1) loop               Args: n, k
 	ShapeGamma                  // a bare math.Gamma(x)                Args: x
+	ShapeFactorialValue         // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -14,7 +14,7 @@ var constantOne = constant.MakeInt64(1)
 var shapeArity = map[Shape]int{
 	ShapeBinomial: 2, ShapePermutation: 2, ShapeMultinomial: 0, ShapeCatalan: 1,
 	ShapeHypergeometric: 4, ShapePowOverFactorial: 2, ShapePoisson: 2,
-	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2,
+	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2, ShapeFactorialValue: 1,
 }
 
 // The analyzer finds the shapes; before replacing an expression, the
@@ -146,6 +146,19 @@ func (b *builder) userCall(forms ...linear) factorPattern {
 	}
 }
 
+// converted accepts what p accepts, or a conversion of it: factors keeps
+// a float-to-integer conversion, which drops a fraction, as one factor.
+func (b *builder) converted(p factorPattern) factorPattern {
+	return func(e ast.Expr) bool {
+		if c, ok := ast.Unparen(e).(*ast.CallExpr); ok && len(c.Args) == 1 {
+			if tv, ok := b.pass.TypesInfo.Types[c.Fun]; ok && tv.IsType() {
+				return p(c.Args[0])
+			}
+		}
+		return p(e)
+	}
+}
+
 // mathCall accepts math.name on the forms.
 func (b *builder) mathCall(name string, forms ...linear) factorPattern {
 	return func(e ast.Expr) bool {
@@ -184,6 +197,7 @@ var shapeName = map[Shape]string{
 	ShapeHypergeometric: "hypergeometric probability", ShapePowOverFactorial: "power over factorial",
 	ShapePoisson: "Poisson term", ShapeBinomialPMF: "binomial probability",
 	ShapeGammaRatio: "gamma ratio", ShapeBeta: "beta function",
+	ShapeFactorialValue: "converted factorial",
 }
 
 // patterns returns the factors of the match's shape: numerator,
@@ -220,6 +234,8 @@ func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]fact
 			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.neg()))}}
 	case ShapeGammaRatio: // a, b
 		return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
+	case ShapeFactorialValue: // n
+		return []factorPattern{b.converted(fact(o[0]))}, nil, nil
 	case ShapeBeta: // a, b
 		return []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, nil
 	}

@@ -64,6 +64,7 @@ func init() {
 		ShapeBinomialLoop:     buildLoop,
 		ShapeFallingLoop:      buildLoop,
 		ShapeFactorial:        buildGuard,
+		ShapeFactorialValue:   buildValue,
 	}
 }
 
