@@ -29,7 +29,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	}
 	kName := plus(src(al.count), al.coff)
 	var msg string
-	if bounded(k) && k.Hi > 0 {
+	if finite(k) && k.Hi > 0 {
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with %s = %d, for a largest factor ≥ %d", kName, t.typeName(), verb(t), kName, k.Hi, thresholds.FallingFirstBad(t.Num, k.Hi))
 	} else {
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: run down to 1 it is a factorial, which %s from %d!", kName, t.typeName(), verb(t), verb(t), thresholds.Factorial(t.Num).FirstBad)
@@ -38,9 +38,9 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	switch {
 	case definite:
 		msg += fmt.Sprintf("; the product always exceeds %s here", t.Name)
-	case !bounded(n):
+	case !finite(n):
 		msg += "; the largest factor is not bounded here"
-	case !bounded(k):
+	case !finite(k):
 		msg += fmt.Sprintf("; %s is not bounded here", kName)
 	default:
 		msg += fmt.Sprintf("; the largest factor may reach %d and %s may reach %d here", n.Hi, kName, k.Hi)
@@ -82,6 +82,13 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 // bounded reports whether iv is non-empty with finite ends.
 func bounded(iv ranges.Interval) bool {
 	return !iv.IsEmpty() && iv.Lo != math.MinInt64 && iv.Hi != math.MaxInt64
+}
+
+// finite reports whether iv is bounded by ends a message can name: an
+// end at or near a type limit (k < n gives k ≤ MaxInt64−1 for an
+// unbounded n) is a bound of the arithmetic, not of the code.
+func finite(iv ranges.Interval) bool {
+	return bounded(iv) && !typeLimit(iv.Hi) && !typeLimit(-iv.Lo)
 }
 
 // fallingBase returns n when the loop is exactly

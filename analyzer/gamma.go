@@ -100,10 +100,12 @@ func (fc *fnCtx) gammaBoundOf(arg ast.Expr) (gammaBound, bool) {
 		if r.IsEmpty() {
 			return g, false
 		}
-		if r.Lo != math.MinInt64 {
+		// An end at or near a type limit (k < n gives k ≤ MaxInt64−1 for
+		// an unbounded n) bounds nothing in practice.
+		if !typeLimit(-r.Lo) && r.Lo != math.MinInt64 {
 			vlo = float64(r.Lo)
 		}
-		if r.Hi != math.MaxInt64 {
+		if !typeLimit(r.Hi) {
 			vhi = float64(r.Hi)
 		}
 	}

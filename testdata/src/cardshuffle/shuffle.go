@@ -181,3 +181,20 @@ func Draws(n, k int64) int64 { // want Draws:`falling-factorial of parameter 0, 
 	}
 	return p
 }
+
+// DealTable lists the ordered deals of k cards (at most five) from decks
+// of every size below maxDeck.
+func DealTable(maxDeck, k int) []int64 {
+	if k < 0 || k > 5 {
+		return nil
+	}
+	var out []int64
+	for n := k; n < maxDeck; n++ {
+		p := int64(1)
+		for i := 0; i < k; i++ { // want `falling factorial of k factors in int64 wraps: with k = 5, for a largest factor ≥ \d+; the largest factor is not bounded here`
+			p *= int64(n - i)
+		}
+		out = append(out, p)
+	}
+	return out
+}
