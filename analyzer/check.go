@@ -219,7 +219,9 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		Loop:    al.shape.stmt,
 		Func:    fc.node,
 	}
-	if al.kind != kindFactorial {
+	// A double factorial n!! gets the same guard as n!, with its own
+	// first bad n.
+	if al.kind != kindFactorial && al.kind != kindDouble {
 		m.Shape = fixes.ShapeNone
 	}
 	if al.top != nil {
@@ -243,7 +245,7 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	name := src(ff.recN)
 	clause, definite := verdict(name, r, first)
 	shape := fixes.ShapeFactorial
-	if ff.kind != kindFactorial {
+	if ff.kind != kindFactorial && ff.kind != kindDouble {
 		shape = fixes.ShapeNone
 	}
 	fc.report(finding{

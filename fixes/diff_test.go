@@ -88,6 +88,8 @@ var diffCases = []diffCase{
 	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, guard: true},
+	{pkg: "fixguard", fn: "Pairings", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
+	{pkg: "fixguard", fn: "PairingsRec", loops: []string{"n := 0; n <= 25; n++"}, args: "int32(n)", typ: "int32", ref: refDoubleFactorial, guard: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 }
 

@@ -132,3 +132,13 @@ func refErlangB(x []float64) *big.Float {
 	}
 	return quo(refPowFact([]float64{a, float64(c)}), sum)
 }
+
+// refDoubleFactorial is n!! = n(n−2)(n−4)… down to 1 or 2, exactly
+// (the definition, common practice; OEIS A006882).
+func refDoubleFactorial(x []float64) *big.Float {
+	r := big.NewInt(1)
+	for i := int64(x[0]); i > 1; i -= 2 {
+		r.Mul(r, big.NewInt(i))
+	}
+	return bf(r)
+}

@@ -33,3 +33,22 @@ func Spread(n int) float64 { // want Spread:"factorial of parameter 0"
 
 // Label keeps fmt in use.
 func Label(n int) string { return fmt.Sprint(Spread(n)) }
+
+// Pairings is the double factorial n!! = n(n−2)(n−4)…; for odd n, the
+// number of ways to pair up n+1 units on a test rig. Wrong in int64 from
+// n = 34 on.
+func Pairings(n int64) int64 { // want Pairings:"double-factorial of parameter 0"
+	r := int64(1)
+	for i := n; i > 1; i -= 2 { // want `double factorial of n in int64 wraps for n ≥ 34`
+		r *= i
+	}
+	return r
+}
+
+// PairingsRec is Pairings by recursion, in int32: wrong from n = 20 on.
+func PairingsRec(n int32) int32 { // want PairingsRec:"double-factorial of parameter 0"
+	if n < 2 {
+		return 1
+	}
+	return n * PairingsRec(n-2) // want `recursive double factorial of n in int32 wraps for n ≥ \d+`
+}
