@@ -52,3 +52,15 @@ func PairingsRec(n int32) int32 { // want PairingsRec:"double-factorial of param
 	}
 	return n * PairingsRec(n-2) // want `recursive double factorial of n in int32 wraps for n ≥ \d+`
 }
+
+// WearFrom is the rising factorial x(x+1)…(x+n−1) of a rig's wear
+// model. Its limit is measured at x = 1 and is not exact for other
+// starts (too late for a larger x, too early for a smaller one), so no
+// guard is offered.
+func WearFrom(x float64, n int) float64 { // want WearFrom:"rising-factorial of parameter 1"
+	p := 1.0
+	for i := 0; i < n; i++ { // want `rising factorial of n factors from x in float64 overflows to \+Inf for n ≥ 171 at x = 1`
+		p *= x + float64(i)
+	}
+	return p
+}
