@@ -79,6 +79,7 @@ var diffCases = []diffCase{
 	{pkg: "fixconv", fn: "Spread", loops: []string{"n := 0; n <= 175; n++"}, args: "int64(n)", typ: "float64", ref: refFactorial},
 	{pkg: "fixconv", fn: "Spread32", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "float32", ref: refFactorial},
 	{pkg: "fixconv", fn: "Count", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int64", ref: refFactorial},
+	{pkg: "fixconv", fn: "CountU", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "uint64", ref: refFactorial},
 	{pkg: "fixconv", fn: "Count32", loops: []string{"n := 0; n <= 20; n++"}, args: "n", typ: "int32", ref: refFactorial},
 	{pkg: "fixterm", fn: "Lot", loops: []string{"total := 60; total <= 240; total += 60", "k := 0; k <= 30; k += 2"}, args: "k, total, 30, 40", typ: "float64", ref: refHypergeometric},
 	{pkg: "fixterm", fn: "Spread", loops: []string{"a := 1; a <= 220; a += 7", "b := 1; b <= 220; b += 11"}, args: "float64(a), float64(b)", typ: "float64", ref: refGammaRatio},

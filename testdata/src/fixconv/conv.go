@@ -42,6 +42,11 @@ func Count32(n int) int32 {
 	return int32(orderingsF(n)) // want `of a float64 factorial`
 }
 
+// CountU is Count in uint64, which holds n! up to 20 as int64 does.
+func CountU(n int) uint64 {
+	return uint64(orderingsF(n)) // want `of a float64 factorial`
+}
+
 // Board is the count for a full board of 24 dice: certainly past int64,
 // and no rewrite can make it fit, so the call gets no fix (the guard in
 // orderings is where it fails).
