@@ -183,7 +183,7 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 	if a, b, ok := fc.betaArgs(p); ok {
 		what = "Beta function as Γ(a)Γ(b)/Γ(a+b)"
 		m.Shape, m.Args = fixes.ShapeBeta, []ast.Expr{a, b}
-	} else if len(p.num) == 1 && len(p.den) == 1 && p.den[0].math == "Gamma" {
+	} else if len(p.num) == 1 && len(p.den) == 1 && p.den[0].math == "Gamma" && p.other == 0 {
 		m.Args = []ast.Expr{p.num[0].arg, p.den[0].arg}
 	} else {
 		m.Shape = fixes.ShapeNone

@@ -54,7 +54,11 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	default:
 		// Not the shape as written (x^(k+1)/k!, e^(−2λ), an extra
 		// factor): name what the code computes instead.
-		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), bang(fac.arg, fac.off))
+		den := bang(fac.arg, fac.off)
+		if fac.kind == kindDouble {
+			den += "!"
+		}
+		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), den)
 	}
 	var msg, clause string
 	definite := false

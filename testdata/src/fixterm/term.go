@@ -65,3 +65,9 @@ func NextLoad(a float64, k int) float64 {
 func PairArrivals(k int, lambda float64) float64 {
 	return math.Pow(lambda, float64(k)) * math.Exp(-2*lambda) / factF(k) // want `term with lambda\^k over k! in float64`
 }
+
+// Scaled is a gamma ratio with the scale v between its factors: the
+// syntax does not group the ratio apart from v, so it is not rewritten.
+func Scaled(a, b, v float64) float64 {
+	return math.Gamma(a) * v / math.Gamma(b) // want "ratio of math.Gamma"
+}
