@@ -299,7 +299,63 @@ func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
 	al.kind = kindFalling
 	al.top, al.topOff = hi, hiOff
 	al.count, al.coff = tripCount(sh)
-	return al.count != nil
+	if al.count == nil {
+		var ok bool
+		al.count, al.coff, ok = fc.spanCount(sh)
+		// A constant count is fine for a product; a binomial loop's
+		// messages name its k.
+		return ok && (al.count != nil || al.div == nil)
+	}
+	return true
+}
+
+// spanCount returns the trip count of a unit-step loop whose ends are
+// both variable but differ by one variable or a constant, as count+off
+// (count nil for a constant): the loop for i := n-k+1; i <= n; i++
+// makes k trips, and for i := n-5; i <= n; i++ makes 6. It is how a
+// falling factorial n!/(n−k)! is written counting up to n.
+func (fc *fnCtx) spanCount(sh *loopShape) (ast.Expr, int64, bool) {
+	if sh.first == nil || sh.last == nil {
+		return nil, 0, false
+	}
+	lo, hi := sh.first, sh.last
+	loOff, hiOff := sh.firstOff, sh.lastOff
+	if sh.step < 0 {
+		lo, hi, loOff, hiOff = hi, lo, hiOff, loOff
+	}
+	l, ok1 := fc.linear(lo)
+	h, ok2 := fc.linear(hi)
+	if !ok1 || !ok2 {
+		return nil, 0, false
+	}
+	d := h.add(l.scale(-1))
+	off := d.c + hiOff - loOff + 1
+	if len(d.terms) == 0 {
+		return nil, off, true
+	}
+	if len(d.terms) != 1 || d.terms[0].coef != 1 {
+		return nil, 0, false
+	}
+	id := identOf(fc.c.pass.TypesInfo, hi, d.terms[0].obj)
+	if id == nil {
+		id = identOf(fc.c.pass.TypesInfo, lo, d.terms[0].obj)
+	}
+	if id == nil {
+		return nil, 0, false
+	}
+	return id, off, true
+}
+
+// identOf returns an identifier in e that denotes obj.
+func identOf(info *types.Info, e ast.Expr, obj types.Object) *ast.Ident {
+	var found *ast.Ident
+	ast.Inspect(e, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && found == nil && info.Uses[id] == obj {
+			found = id
+		}
+		return found == nil
+	})
+	return found
 }
 
 // classifyRising matches x + i with x a floating-point value.

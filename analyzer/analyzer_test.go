@@ -35,7 +35,7 @@ func testdata(t *testing.T) string {
 // parse out of a message with math/big or math.Gamma.
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
-	"reliability", "generic", "gentable", "tables", "oddcode",
+	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
 }
 
 // TestScenarios runs the analyzer over every scenario package in one

@@ -29,9 +29,12 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	}
 	kName := plus(src(al.count), al.coff)
 	var msg string
-	if finite(k) && k.Hi > 0 {
+	switch {
+	case al.count == nil && k.Hi > 0:
+		msg = fmt.Sprintf("falling factorial of %s factors in %s %s for a largest factor ≥ %d", kName, t.typeName(), verb(t), thresholds.FallingFirstBad(t.Num, k.Hi))
+	case finite(k) && k.Hi > 0:
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with %s = %d, for a largest factor ≥ %d", kName, t.typeName(), verb(t), kName, k.Hi, thresholds.FallingFirstBad(t.Num, k.Hi))
-	} else {
+	default:
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: run down to 1 it is a factorial, which %s from %d!", kName, t.typeName(), verb(t), verb(t), thresholds.Factorial(t.Num).FirstBad)
 	}
 	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, k.Lo)
