@@ -20,3 +20,22 @@ func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
 	}
 	return b
 }
+
+// Rolls counts the ordered ways k dice of n can be picked one after
+// another: n(n−1)…(n−k+1).
+func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0"
+	p := 1
+	for i := 0; i < k; i++ { // want `falling factorial of k factors in int wraps`
+		p *= n - i
+	}
+	return p
+}
+
+// RollsUp is Rolls counted up to n: (n−k+1)(n−k+2)…n.
+func RollsUp(n, k int) int {
+	p := 1
+	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors in int wraps`
+		p *= i
+	}
+	return p
+}
