@@ -36,8 +36,9 @@ run() { # NAME DIR PATTERN
 	head -1 "$OUT/$1.txt"
 	tail -n +2 "$OUT/$1.txt"
 	if [ -s "$OUT/$1.err" ]; then echo "   stderr: $OUT/$1.err"; head -20 "$OUT/$1.err"; fi
-	[ $rc -eq 0 ] || echo "   exit status $rc"
+	[ $rc -eq 0 ] || { echo "   exit status $rc"; failed=1; }
 }
+failed=0
 
 mkdir -p "$work/mods/std"
 (cd "$work/mods/std" && go mod init corpus.example/std >/dev/null 2>&1)
@@ -118,9 +119,14 @@ touched=$(grep '^+++ ' "$OUT/gonum-fix.diff" | awk '{print $2}' | xargs -r -n1 d
 echo "files changed: $(grep -c '^+++ ' "$OUT/gonum-fix.diff" || true); diff in $OUT/gonum-fix.diff"
 echo "packages touched: $(echo ${touched:-none})"
 echo "-- go build ./..."
-go build ./... && echo "go build ./...: ok"
-echo "-- go vet on touched packages"
-[ -z "$touched" ] || go vet $touched && echo "go vet: ok"
-echo "-- go test on touched packages"
-[ -z "$touched" ] || go test $touched
+if go build ./...; then echo "go build ./...: ok"; else failed=1; fi
+if [ -n "$touched" ]; then
+	echo "-- go vet on touched packages"
+	if go vet $touched; then echo "go vet: ok"; else failed=1; fi
+	echo "-- go test on touched packages"
+	go test $touched || failed=1
+fi
 echo "== results in $OUT"
+# Non-zero when a corpus run had crashes or analyzer errors, or the fixed
+# copy of gonum failed to build, vet or test.
+exit $failed
