@@ -26,6 +26,9 @@ func (fc *fnCtx) exactPart(root ast.Expr, p *product) (ast.Expr, *product) {
 			want[f.call] = true
 		}
 	}
+	if len(want) == 0 {
+		return nil, nil // nothing to judge, so nothing to look for
+	}
 	queue := []ast.Expr{root}
 	for steps := 0; len(queue) > 0 && steps < 4*maxDepth*maxDepth; steps++ {
 		e := queue[0]
