@@ -20,7 +20,7 @@ type Shape int
 
 const (
 	ShapeNone             Shape = iota
-	ShapeFactorial              // a standalone factorial (loop, recursion or call) whose value is returned or stored
+	ShapeFactorial              // a standalone factorial or double factorial (loop, recursion or call) whose value is returned or stored
 	ShapeBinomial               // n!/(k!(n-k)!)                       Args: n, k
 	ShapePermutation            // n!/(n-k)!                           Args: n, k
 	ShapeMultinomial            // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately (fixes checks that n = k1+...+km)
