@@ -119,6 +119,19 @@ func (fc *fnCtx) consume(p *product) {
 	}
 }
 
+// judged reports whether a call of p is already part of a judged
+// product.
+func (fc *fnCtx) judged(p *product) bool {
+	for _, list := range [][]factor{p.num, p.den} {
+		for _, f := range list {
+			if f.call != nil && fc.c.consumed[f.call] {
+				return true
+			}
+		}
+	}
+	return false
+}
+
 // checkChains judges values built by simple re-assignments in one block,
 // r := fact(n); r /= fact(k); r /= fact(n-k), as the product they form.
 // The finding is placed at the last re-assignment and has no fix, as no
@@ -151,6 +164,11 @@ func (fc *fnCtx) checkChains(list []ast.Stmt) {
 		p := fc.evalProduct(init.Rhs[0])
 		for _, as := range chain {
 			fc.evalInto(p, as.Rhs[0], as.Tok == token.QUO_ASSIGN, 1)
+		}
+		if fc.judged(p) {
+			// A link such as w *= Γ(c)/Γ(b) was already judged as a
+			// product of its own: one finding per root cause.
+			continue
 		}
 		fc.noFix = true
 		fc.checkProduct(chain[len(chain)-1].Lhs[0], p)

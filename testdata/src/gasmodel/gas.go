@@ -123,3 +123,11 @@ func VolumeSeries(dims int) float64 {
 	}
 	return s
 }
+
+// ScaledWeight rescales a tabulated weight w by Γ(c)Γ(b−a)/(Γ(b)Γ(c−a)),
+// the factor of a continuation of the model's partition series.
+func ScaledWeight(a, b, c, z float64) float64 {
+	w := math.Exp(-z)
+	w *= math.Gamma(c) / math.Gamma(b) * math.Gamma(b-a) / math.Gamma(c-a) // want `ratio of math.Gamma values in float64: math.Gamma\(c\) is \+Inf for c ≥ 171.62`
+	return w
+}
