@@ -2,7 +2,9 @@ package analyzer
 
 import (
 	"go/ast"
+	"go/token"
 	"go/types"
+	"go/version"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -32,6 +34,9 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 	entry := c.ownEntry(n)
 	decl, ok := n.(*ast.FuncDecl)
 	if !ok {
+		if lit, ok := n.(*ast.FuncLit); ok {
+			c.capturedEntry(lit, entry)
+		}
 		return entry
 	}
 	obj, _ := c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
@@ -135,4 +140,112 @@ func (c *checker) enclosingFunc(n ast.Node) ast.Node {
 		}
 	}
 	return best
+}
+
+// capturedEntry adds to entry the ranges of the integer variables a
+// closure captures that hold one value for the closure's whole life: a
+// variable the enclosing function sets only where it declares it, or a
+// per-iteration loop variable (Go 1.22 and later) that only its for
+// statement sets. Their range where the closure is created then holds
+// whenever it runs, as in
+//
+//	for n := 3; n <= 6; n++ { t.Run(…, func(t *testing.T) { … n … }) }
+func (c *checker) capturedEntry(lit *ast.FuncLit, entry map[types.Object]ranges.Interval) {
+	var outer ast.Node
+	for _, f := range c.allFuncs {
+		if f != lit && f.Pos() <= lit.Pos() && lit.End() <= f.End() && (outer == nil || outer.Pos() <= f.Pos()) {
+			outer = f
+		}
+	}
+	if outer == nil || funcBody(outer) == nil {
+		return
+	}
+	body := funcBody(outer)
+	seen := make(map[types.Object]bool)
+	ast.Inspect(lit.Body, func(n ast.Node) bool {
+		id, ok := n.(*ast.Ident)
+		if !ok {
+			return true
+		}
+		v, ok := c.pass.TypesInfo.Uses[id].(*types.Var)
+		if !ok || seen[v] || v.Pos() < body.Pos() || v.Pos() >= lit.Pos() {
+			return true
+		}
+		seen[v] = true
+		if t, ok := c.numOf(v.Type()); !ok || t.Float || !c.setOnce(body, v) {
+			return true
+		}
+		entry[v] = c.ctx(outer).entryRange(v, lit)
+		return true
+	})
+}
+
+// setOnce reports whether v is set only by its declaration, or, for a
+// per-iteration variable of a three-clause loop, by that loop's init
+// and post statements; it must also never have its address taken.
+func (c *checker) setOnce(body *ast.BlockStmt, v *types.Var) bool {
+	var post ast.Stmt
+	once := true
+	ast.Inspect(body, func(n ast.Node) bool {
+		if !once {
+			return false
+		}
+		if fs, ok := n.(*ast.ForStmt); ok && c.declaresLoopVar(fs, v) {
+			post = fs.Post
+		}
+		if post != nil && n == ast.Node(post) {
+			return false // the post statement sets the next iteration's copy
+		}
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			for _, l := range n.Lhs {
+				if id, ok := unparen(l).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
+					once = false
+				}
+			}
+		case *ast.IncDecStmt:
+			once = once && c.objOf(n.X) != v
+		case *ast.UnaryExpr:
+			once = once && !(n.Op == token.AND && c.objOf(n.X) == v)
+		case *ast.RangeStmt:
+			if n.Tok == token.DEFINE {
+				// A range variable is one per iteration only from Go 1.22.
+				once = once && (!c.defines(n.Key, v) && !c.defines(n.Value, v) || c.perIteration(n))
+			} else {
+				once = once && c.objOf(n.Key) != v && c.objOf(n.Value) != v
+			}
+		}
+		return true
+	})
+	return once
+}
+
+// declaresLoopVar reports whether fs declares v in its init statement
+// with per-iteration semantics (the file is Go 1.22 or later).
+func (c *checker) declaresLoopVar(fs *ast.ForStmt, v *types.Var) bool {
+	as, ok := fs.Init.(*ast.AssignStmt)
+	if !ok || as.Tok != token.DEFINE {
+		return false
+	}
+	declared := false
+	for _, l := range as.Lhs {
+		declared = declared || c.defines(l, v)
+	}
+	return declared && c.perIteration(fs)
+}
+
+func (c *checker) defines(e ast.Expr, v *types.Var) bool {
+	id, ok := e.(*ast.Ident)
+	return ok && c.pass.TypesInfo.Defs[id] == v
+}
+
+// perIteration reports whether loop variables declared at n are one per
+// iteration: the file is Go 1.22 or later.
+func (c *checker) perIteration(n ast.Node) bool {
+	fi := c.fileOf(n.Pos())
+	if fi == nil {
+		return false
+	}
+	ver := c.pass.TypesInfo.FileVersions[fi.file]
+	return ver != "" && version.Compare(ver, "go1.22") >= 0
 }
