@@ -76,7 +76,11 @@ func main() {
 	}
 	fmt.Printf("combin.go:679  PermutationIndex(reverse of 0..20, 21, 21) = %d; exact 21!-1 = %s\n",
 		combin.PermutationIndex(rev, 21, 21), new(big.Int).Sub(new(big.Int).MulRange(1, 21), big.NewInt(1)))
-	fmt.Printf("combin.go:437  NumPermutations(21, 21) = %d (loop not reported)\n", combin.NumPermutations(21, 21))
+	fmt.Printf("combin.go:438  NumPermutations(21, 21) = %d; exact 21! = %s\n", combin.NumPermutations(21, 21), new(big.Int).MulRange(1, 21))
+	for _, n := range []int64{14, 15} {
+		p := new(big.Int).MulRange(n+1, 2*n)
+		fmt.Printf("product_test.go:231 catalan's product (n+1)...(2n) at n = %d is %s (fits int64: %v)\n", n, p, p.IsInt64())
+	}
 	for _, c := range []float64{100.5, 172.5} {
 		fmt.Printf("hypergeo.go:78 Hypergeo(1.3, 2.7, %v, -2) = %v\n", c, mathext.Hypergeo(1.3, 2.7, c, -2))
 	}
