@@ -7,9 +7,13 @@
 //		analyzer under the same driver (go/analysis/checker) on the same
 //		packages, and prints the ratios of wall time and peak memory, both
 //		for the analysis step alone and for the whole run (load+analyze).
-//	bench -mode scale [-n 5]
+//	bench -mode scale [-n 5] [-casetime 5m]
 //		generates one long function and a package of many small factorial
-//		functions at three sizes and prints how analysis time grows.
+//		functions at three sizes and prints how analysis time grows; each
+//		size runs in a child process cut off after -casetime.
+//	bench -scalecase "long function:16" [-n 5] [-cpuprofile F]
+//		measures one of those sizes (kind:divisor of the full size) in this
+//		process and prints each run's analysis time in seconds.
 //	bench -mode corpus [-dir D] PATTERNS
 //		runs overfact (tests included) over the packages and prints the
 //		package count, crashes, analyzer errors and every finding.
