@@ -231,7 +231,7 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 		return
 	}
 	g, ok := fc.gammaBoundOf(call.Args[0])
-	if ok && !g.reachable {
+	if ok && !g.reachable || !fc.gammaEscapes(call) {
 		return
 	}
 	if !ok {
@@ -244,6 +244,153 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	fc.c.gammaLines[line] = true
 	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
 		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})
+}
+
+// gammaEscapes reports whether the value of a bare math.Gamma call can
+// meet arithmetic, the only place its +Inf is wrong: an IEEE +Inf for a
+// Γ(x) beyond float64 is the right answer when it is only compared,
+// passed to a function outside package math, or stored (TestGamma in
+// std's math/all_test.go compares Γ of its table against an expected
+// +Inf). It can meet arithmetic when it is an operand of + - * / or
+// their assignment forms, or an argument to a math function that maps
+// it to a value that may be finite (math.Log(math.Gamma(x)) is +Inf
+// where ln Γ(x) is finite); directly, through sign changes, conversions
+// and math.Abs, or through a local variable it is stored in, any use of
+// which is such an operand. A returned value counts as meeting
+// arithmetic: the function is then a numeric building block whose
+// callers compute with it, which a per-function look cannot follow.
+func (fc *fnCtx) gammaEscapes(call *ast.CallExpr) bool {
+	root := funcBody(fc.node)
+	if root == nil {
+		return true
+	}
+	parents := parentsIn(root)
+	e, use := fc.gammaUse(call, parents)
+	if use != useStored {
+		return use == useArith
+	}
+	v := fc.storedIn(e, parents)
+	if v == nil {
+		return false
+	}
+	found := false
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && !found && fc.c.pass.TypesInfo.Uses[id] == v {
+			_, u := fc.gammaUse(id, parents)
+			found = u == useArith
+		}
+		return !found
+	})
+	return found
+}
+
+type gammaUseKind int
+
+const (
+	useOther  gammaUseKind = iota // compared, passed on, discarded
+	useArith                      // operand of arithmetic, or returned
+	useStored                     // the right-hand side of an assignment
+)
+
+// gammaUse classifies the use of the value of e, looking through
+// wrappers that keep its magnitude; it returns the outermost wrapper.
+func (fc *fnCtx) gammaUse(e ast.Expr, parents map[ast.Node]ast.Node) (ast.Expr, gammaUseKind) {
+	for {
+		switch p := parents[e].(type) {
+		case *ast.ParenExpr:
+			e = p
+			continue
+		case *ast.UnaryExpr:
+			if p.Op == token.SUB || p.Op == token.ADD {
+				e = p
+				continue
+			}
+		case *ast.BinaryExpr:
+			switch p.Op {
+			case token.ADD, token.SUB, token.MUL, token.QUO:
+				return e, useArith
+			}
+		case *ast.AssignStmt:
+			switch p.Tok {
+			case token.ADD_ASSIGN, token.SUB_ASSIGN, token.MUL_ASSIGN, token.QUO_ASSIGN:
+				return e, useArith
+			case token.ASSIGN, token.DEFINE:
+				return e, useStored
+			}
+		case *ast.ValueSpec:
+			return e, useStored
+		case *ast.ReturnStmt:
+			return e, useArith
+		case *ast.CallExpr:
+			if len(p.Args) == 1 && (fc.isConversion(p) || fc.c.isMathFunc(p, "Abs")) {
+				e = p
+				continue
+			}
+			if fn := fc.c.calleeOf(p); fn != nil && fn.Pkg() != nil && fn.Pkg().Path() == "math" && gammaMaps[fn.Name()] {
+				return e, useArith
+			}
+		}
+		return e, useOther
+	}
+}
+
+// gammaMaps are the math functions that can map an infinite Γ value to
+// a value that should have been finite.
+var gammaMaps = map[string]bool{
+	"Pow": true, "Exp": true, "Exp2": true, "Expm1": true, "Log": true, "Log2": true,
+	"Log10": true, "Log1p": true, "Sqrt": true, "Cbrt": true, "Hypot": true, "FMA": true,
+	"Mod": true, "Remainder": true, "Atan": true, "Atan2": true, "Tanh": true,
+}
+
+// storedIn returns the local variable e is assigned to, or nil.
+func (fc *fnCtx) storedIn(e ast.Expr, parents map[ast.Node]ast.Node) *types.Var {
+	var lhs []ast.Expr
+	var rhs []ast.Expr
+	switch p := parents[e].(type) {
+	case *ast.AssignStmt:
+		lhs, rhs = p.Lhs, p.Rhs
+	case *ast.ValueSpec:
+		for _, n := range p.Names {
+			lhs = append(lhs, n)
+		}
+		rhs = p.Values
+	}
+	if len(lhs) != len(rhs) {
+		return nil
+	}
+	for i, r := range rhs {
+		if r != e {
+			continue
+		}
+		id, ok := unparen(lhs[i]).(*ast.Ident)
+		if !ok {
+			return nil
+		}
+		v, _ := fc.c.objOf(id).(*types.Var)
+		if v == nil || v.Parent() == nil || v.Parent() == v.Pkg().Scope() {
+			return nil // a package variable is read where this function cannot see
+		}
+		return v
+	}
+	return nil
+}
+
+// parentsIn maps each node under root to its parent.
+func parentsIn(root ast.Node) map[ast.Node]ast.Node {
+	parents := make(map[ast.Node]ast.Node)
+	var stack []ast.Node
+	ast.Inspect(root, func(n ast.Node) bool {
+		if n == nil {
+			stack = stack[:len(stack)-1]
+			return false
+		}
+		if len(stack) > 0 {
+			parents[n] = stack[len(stack)-1]
+		}
+		stack = append(stack, n)
+		return true
+	})
+	return parents
 }
 
 // lineOf returns the file and line of n, without the column.
