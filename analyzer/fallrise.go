@@ -52,6 +52,8 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
 	if n := fc.fallingBase(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
+	} else if n, k := fc.fallingSpan(al); n != nil {
+		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
 	}
 	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
 }
@@ -110,4 +112,19 @@ func (fc *fnCtx) fallingBase(al *accLoop) ast.Expr {
 		return nil
 	}
 	return b.X
+}
+
+// fallingSpan returns n and k when the loop counts up by one from n−k+1
+// to n and multiplies by i itself, for i := n - k + 1; i <= n; i++ {
+// p *= i }: the other way to write n!/(n−k)!. Otherwise both are nil;
+// a span of constant length has no k in the source to hand over.
+func (fc *fnCtx) fallingSpan(al *accLoop) (ast.Expr, ast.Expr) {
+	sh := al.shape
+	if sh.step != 1 || sh.first == nil || sh.last == nil || al.top == nil || al.topOff != 0 || al.count == nil || al.coff != 0 {
+		return nil, nil
+	}
+	if fc.c.objOf(fc.stripConv(al.mult)) != sh.iv {
+		return nil, nil
+	}
+	return al.top, al.count
 }

@@ -86,6 +86,7 @@ var diffCases = []diffCase{
 	{pkg: "fixterm", fn: "Mix", loops: []string{"a := 1; a <= 200; a += 9", "b := 1; b <= 200; b += 13"}, args: "float64(a), float64(b)", typ: "float64", ref: refBeta},
 	{pkg: "fixloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
+	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
 	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
