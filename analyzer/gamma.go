@@ -264,20 +264,26 @@ func (fc *fnCtx) gammaEscapes(call *ast.CallExpr) bool {
 	if root == nil {
 		return true
 	}
-	parents := parentsIn(root)
-	e, use := fc.gammaUse(call, parents)
+	return fc.meetsArith(root, call, parentsIn(root), make(map[*types.Var]bool))
+}
+
+// meetsArith reports whether the value of e meets arithmetic, following
+// it through the local variables it is copied into; each variable is
+// followed once, so x = x and copy cycles end.
+func (fc *fnCtx) meetsArith(root ast.Node, e ast.Expr, parents map[ast.Node]ast.Node, seen map[*types.Var]bool) bool {
+	e, use := fc.gammaUse(e, parents)
 	if use != useStored {
 		return use == useArith
 	}
 	v := fc.storedIn(e, parents)
-	if v == nil {
+	if v == nil || seen[v] {
 		return false
 	}
+	seen[v] = true
 	found := false
 	ast.Inspect(root, func(n ast.Node) bool {
 		if id, ok := n.(*ast.Ident); ok && !found && fc.c.pass.TypesInfo.Uses[id] == v {
-			_, u := fc.gammaUse(id, parents)
-			found = u == useArith
+			found = fc.meetsArith(root, id, parents, seen)
 		}
 		return !found
 	})
