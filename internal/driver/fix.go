@@ -90,7 +90,7 @@ func planFixes(roots []*checker.Action, only map[string]int, applied map[string]
 		}
 		fset := act.Package.Fset
 		generated := generatedFiles(fset, act.Package.Syntax)
-		for _, d := range act.Diagnostics {
+		for _, d := range guardsLast(act.Diagnostics) {
 			if len(d.SuggestedFixes) == 0 {
 				continue
 			}
@@ -112,6 +112,25 @@ func planFixes(roots []*checker.Action, only map[string]int, applied map[string]
 		}
 	}
 	return p
+}
+
+// guardsLast orders the diagnostics of a package so that the fixes of
+// factorial definitions (loops and recursions, whose fix is a range
+// guard) are tried after every other fix. A guard bounds the factorial,
+// which silences the findings of the ratios and terms built from it; if
+// a guard won a clash with such a ratio's rewrite, the next round would
+// no longer report the ratio, and it would keep the guard's panic where a
+// rewrite gives the right value.
+func guardsLast(diags []analysis.Diagnostic) []analysis.Diagnostic {
+	out := append([]analysis.Diagnostic(nil), diags...)
+	sort.SliceStable(out, func(i, j int) bool { return !isDefinition(out[i]) && isDefinition(out[j]) })
+	return out
+}
+
+// isDefinition reports whether d is a factorial definition's finding.
+func isDefinition(d analysis.Diagnostic) bool {
+	cat := strings.TrimSuffix(d.Category, ".definite")
+	return cat == "factorial-loop" || cat == "factorial-recursion"
 }
 
 func generatedFiles(fset *token.FileSet, files []*ast.File) map[string]bool {

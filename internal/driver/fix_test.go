@@ -1,6 +1,7 @@
 package driver
 
 import (
+	"golang.org/x/tools/go/analysis"
 	"os"
 	"path/filepath"
 	"strings"
@@ -78,5 +79,28 @@ func TestWriteAtomic(t *testing.T) {
 	entries, _ := os.ReadDir(dir)
 	if len(entries) != 2 {
 		t.Errorf("temporary files left behind: %v", entries)
+	}
+}
+
+// A range guard bounds the factorial it guards, which silences the
+// findings of ratios built from it; so the guards' fixes are planned
+// after every other fix, keeping the order within each kind.
+func TestGuardsLast(t *testing.T) {
+	in := []analysis.Diagnostic{
+		{Category: "factorial-recursion", Message: "a"},
+		{Category: "factorial-ratio", Message: "b"},
+		{Category: "factorial-loop.definite", Message: "c"},
+		{Category: "power-over-factorial", Message: "d"},
+		{Category: "factorial-loop", Message: "e"},
+	}
+	var got []string
+	for _, d := range guardsLast(in) {
+		got = append(got, d.Message)
+	}
+	if want := "b d a c e"; strings.Join(got, " ") != want {
+		t.Errorf("guardsLast order = %v, want %s", got, want)
+	}
+	if in[0].Message != "a" {
+		t.Error("guardsLast reordered its argument")
 	}
 }
