@@ -17,6 +17,9 @@ import (
 // compile: a wrong conversion, a clashing name or a variable the fix left
 // unused are caught here rather than in the user's build.
 func (b *builder) verify() error {
+	if !spendVerification(b.pass) {
+		return fmt.Errorf("this package's %d fix checks are spent; apply the fixes offered so far and analyse again", maxVerifications)
+	}
 	fixed, err := apply(b.src, b.tok, b.edits)
 	if err != nil {
 		return err
@@ -166,4 +169,45 @@ func apply(src []byte, tok *token.File, edits []analysis.TextEdit) ([]byte, erro
 		last = end
 	}
 	return append(out, src[last:]...), nil
+}
+
+// maxVerifications bounds the fixes type-checked in one package. Each
+// check type-checks the whole package, so without a bound a package with
+// thousands of findings would cost thousands of type-checks and analysis
+// time would grow with the square of the package. With it, fix checking
+// costs at most this many type-checks of the package: linear in its size.
+// Findings past the bound are still reported, without a fix; after the
+// first fixes are applied, the next analysis offers fixes for the rest
+// (the command's -fix does so in its later rounds).
+const maxVerifications = 32
+
+// verifications counts the fix checks of the last few passes, as
+// parseCache keeps their parsed files.
+var verifications struct {
+	sync.Mutex
+	order []*analysis.Pass
+	count map[*analysis.Pass]int
+}
+
+// spendVerification reports whether pass may check one more fix, and
+// counts it.
+func spendVerification(pass *analysis.Pass) bool {
+	verifications.Lock()
+	defer verifications.Unlock()
+	if verifications.count == nil {
+		verifications.count = make(map[*analysis.Pass]int)
+	}
+	n, ok := verifications.count[pass]
+	if !ok {
+		if len(verifications.order) == parseCacheSize {
+			delete(verifications.count, verifications.order[0])
+			verifications.order = verifications.order[1:]
+		}
+		verifications.order = append(verifications.order, pass)
+	}
+	if n >= maxVerifications {
+		return false
+	}
+	verifications.count[pass] = n + 1
+	return true
 }
