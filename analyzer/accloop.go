@@ -406,28 +406,32 @@ func (fc *fnCtx) endRange(e ast.Expr, off int64) ranges.Interval {
 // closureAssigns reports whether a closure in the function assigns v; a
 // call of it may then change the accumulator between the factors.
 func (fc *fnCtx) closureAssigns(v types.Object) bool {
-	found := false
-	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
-		lit, ok := n.(*ast.FuncLit)
-		if !ok || found {
-			return !found
-		}
-		ast.Inspect(lit.Body, func(m ast.Node) bool {
-			switch m := m.(type) {
-			case *ast.AssignStmt:
-				for _, l := range m.Lhs {
-					if fc.c.objOf(l) == v {
-						found = true
+	// The set is gathered once per function: asked once per loop, a walk
+	// of the whole body each time made long functions quadratic.
+	if fc.closureAssigned == nil {
+		fc.closureAssigned = make(map[types.Object]bool)
+		ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+			lit, ok := n.(*ast.FuncLit)
+			if !ok {
+				return true
+			}
+			ast.Inspect(lit.Body, func(m ast.Node) bool {
+				switch m := m.(type) {
+				case *ast.AssignStmt:
+					for _, l := range m.Lhs {
+						if obj := fc.c.objOf(l); obj != nil {
+							fc.closureAssigned[obj] = true
+						}
+					}
+				case *ast.IncDecStmt:
+					if obj := fc.c.objOf(m.X); obj != nil {
+						fc.closureAssigned[obj] = true
 					}
 				}
-			case *ast.IncDecStmt:
-				if fc.c.objOf(m.X) == v {
-					found = true
-				}
-			}
-			return !found
+				return true
+			})
+			return false
 		})
-		return false
-	})
-	return found
+	}
+	return v != nil && fc.closureAssigned[v]
 }

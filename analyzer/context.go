@@ -24,6 +24,10 @@ type fnCtx struct {
 	noFix   bool              // the finding being judged has no expression to rewrite
 	// powLoops maps the accumulator of each power loop x·x·…·x to it.
 	powLoops map[types.Object]*accLoop
+	// closureAssigned and returned are gathered once per function (see
+	// closureAssigns and returns).
+	closureAssigned map[types.Object]bool
+	returned        map[*ast.BlockStmt]map[types.Object]bool
 }
 
 // maxVisits bounds the range analysis of one function; past it the

@@ -198,19 +198,29 @@ func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 // returns reports whether some return statement of body returns v as its
 // first result.
 func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
-	found := false
-	ast.Inspect(body, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.FuncLit:
-			return false
-		case *ast.ReturnStmt:
-			if len(n.Results) > 0 && fc.c.objOf(n.Results[0]) == v {
-				found = true
+	// Gathered once per body, as closureAssigns is: it is asked per loop.
+	set, ok := fc.returned[body]
+	if !ok {
+		set = make(map[types.Object]bool)
+		ast.Inspect(body, func(n ast.Node) bool {
+			switch n := n.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.ReturnStmt:
+				if len(n.Results) > 0 {
+					if obj := fc.c.objOf(n.Results[0]); obj != nil {
+						set[obj] = true
+					}
+				}
 			}
+			return true
+		})
+		if fc.returned == nil {
+			fc.returned = make(map[*ast.BlockStmt]map[types.Object]bool)
 		}
-		return !found
-	})
-	return found
+		fc.returned[body] = set
+	}
+	return v != nil && set[v]
 }
 
 // lastGoodApprox formats the largest value of the kind that fits t.
