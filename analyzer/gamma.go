@@ -179,42 +179,83 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		return
 	}
 	what := "ratio of math.Gamma values"
-	m := &fixes.Match{Shape: fixes.ShapeGammaRatio, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	if a, b, ok := fc.betaArgs(p); ok {
+	m := fc.gammaMatch(root, p)
+	if m.Shape == fixes.ShapeBeta {
 		what = "Beta function as Γ(a)Γ(b)/Γ(a+b)"
-		m.Shape, m.Args = fixes.ShapeBeta, []ast.Expr{a, b}
-	} else if len(p.num) == 1 && len(p.den) == 1 && p.den[0].math == "Gamma" && p.other == 0 {
-		m.Args = []ast.Expr{p.num[0].arg, p.den[0].arg}
-	} else {
-		m.Shape = fixes.ShapeNone
+	}
+	if m.Shape == fixes.ShapeNone {
+		// Γ(a)/Γ(b)·x^k: the ratio may be grouped apart from the other
+		// factors, as the AST of a left-to-right product often does.
+		if sub, sp := fc.exactPart(root, gammaOnly(p)); sub != nil {
+			if sm := fc.gammaMatch(sub, sp); sm.Shape != fixes.ShapeNone {
+				m = sm
+			}
+		}
 	}
 	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
 	fc.c.gammaLines[fc.c.lineOf(root)] = true
 	fc.report(finding{node: root, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
 }
 
-// betaArgs matches Γ(a)Γ(b)/Γ(a+b).
-func (fc *fnCtx) betaArgs(p *product) (a, b ast.Expr, ok bool) {
-	if len(p.num) != 2 || len(p.den) != 1 || p.other != 0 {
+// gammaMatch describes a product of Gamma calls that is exactly one of
+// the shapes the fixes package rewrites, with root as its node; its Shape
+// is ShapeNone otherwise.
+func (fc *fnCtx) gammaMatch(root ast.Expr, p *product) *fixes.Match {
+	m := &fixes.Match{Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if a, b, ok := fc.betaArgs(p.num, p.den, p.other); ok {
+		m.Shape, m.Args = fixes.ShapeBeta, []ast.Expr{a, b}
+	} else if a, b, ok := fc.betaArgs(p.den, p.num, p.other); ok {
+		m.Shape, m.Args = fixes.ShapeInverseBeta, []ast.Expr{a, b}
+	} else if len(p.num) == 1 && len(p.den) == 1 && p.num[0].math == "Gamma" && p.den[0].math == "Gamma" && p.other == 0 {
+		m.Shape, m.Args = fixes.ShapeGammaRatio, []ast.Expr{p.num[0].arg, p.den[0].arg}
+	}
+	return m
+}
+
+// gammaOnly returns the Gamma factors of p, with the others counted as
+// unknown, for exactPart to find the sub-expression that holds just them.
+func gammaOnly(p *product) *product {
+	q := &product{other: p.other}
+	for _, f := range p.num {
+		if f.math == "Gamma" {
+			q.num = append(q.num, f)
+		} else {
+			q.other++
+		}
+	}
+	for _, f := range p.den {
+		if f.math == "Gamma" {
+			q.den = append(q.den, f)
+		} else {
+			q.other++
+		}
+	}
+	return q
+}
+
+// betaArgs matches Γ(a)Γ(b)/Γ(a+b) with two, the Γ(a)Γ(b), and one, the
+// Γ(a+b); swapped, it matches the inverse 1/B(a,b) = Γ(a+b)/(Γ(a)Γ(b)).
+func (fc *fnCtx) betaArgs(two, one []factor, other int) (a, b ast.Expr, ok bool) {
+	if len(two) != 2 || len(one) != 1 || other != 0 {
 		return nil, nil, false
 	}
-	for _, f := range append(append([]factor{}, p.num...), p.den...) {
+	for _, f := range append(append([]factor{}, two...), one...) {
 		if f.math != "Gamma" {
 			return nil, nil, false
 		}
 	}
-	la, ok1 := fc.affineOf(p.num[0].arg, 0)
-	lb, ok2 := fc.affineOf(p.num[1].arg, 0)
-	ls, ok3 := fc.affineOf(p.den[0].arg, 0)
+	la, ok1 := fc.affineOf(two[0].arg, 0)
+	lb, ok2 := fc.affineOf(two[1].arg, 0)
+	ls, ok3 := fc.affineOf(one[0].arg, 0)
 	if ok1 && ok2 && ok3 && (la.v == nil || lb.v == nil || sameVar(fc, la.v, lb.v)) {
 		if la.a+lb.a == ls.a && la.b+lb.b == ls.b {
-			return p.num[0].arg, p.num[1].arg, true
+			return two[0].arg, two[1].arg, true
 		}
 	}
 	// Γ(a)Γ(b)/Γ(a+b) with a, b separate variables: compare the syntax.
-	if s, ok := unparen(p.den[0].arg).(*ast.BinaryExpr); ok && s.Op == token.ADD {
-		if src(s.X) == src(p.num[0].arg) && src(s.Y) == src(p.num[1].arg) || src(s.Y) == src(p.num[0].arg) && src(s.X) == src(p.num[1].arg) {
-			return p.num[0].arg, p.num[1].arg, true
+	if s, ok := unparen(one[0].arg).(*ast.BinaryExpr); ok && s.Op == token.ADD {
+		if src(s.X) == src(two[0].arg) && src(s.Y) == src(two[1].arg) || src(s.Y) == src(two[0].arg) && src(s.X) == src(two[1].arg) {
+			return two[0].arg, two[1].arg, true
 		}
 	}
 	return nil, nil, false

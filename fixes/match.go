@@ -35,6 +35,7 @@ const (
 	ShapeFallingLoop            // n(n-1)...(n-k+1) loop               Args: n, k
 	ShapeGamma                  // a bare math.Gamma(x)                Args: x
 	ShapeFactorialValue         // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
+	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

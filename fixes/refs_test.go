@@ -142,3 +142,29 @@ func refDoubleFactorial(x []float64) *big.Float {
 	}
 	return bf(r)
 }
+
+// refFillMoment is Γ((k+3)/2)/Γ(3/2)·s^k for even k: with j = k/2 the
+// ratio is (3/2)(5/2)…(j+1/2), by Γ(x+1) = xΓ(x) (DLMF 5.5.1).
+func refFillMoment(x []float64) *big.Float {
+	k, s := int64(x[0]), x[1]
+	r := powBig(s, k)
+	for i := int64(0); i < k/2; i++ {
+		r = mul(r, fl(1.5+float64(i)))
+	}
+	return r
+}
+
+// refFillDensity is x^(a−1)(1−x)^(b−1)/B(a,b) for positive integers a, b,
+// with 1/B(a,b) = (a+b−1)!/((a−1)!(b−1)!) (DLMF 5.12.1 and 5.4.1).
+func refFillDensity(x []float64) *big.Float {
+	a, b, p := int64(x[0]), int64(x[1]), x[2]
+	inv := quo(bf(factorialBig(a+b-1)), bf(new(big.Int).Mul(factorialBig(a-1), factorialBig(b-1))))
+	return mul(inv, mul(powBig(p, a-1), powBig(1-p, b-1)))
+}
+
+// refDrift is Γ(k+b)/Γ(b)·g^k = (k+b−1)!/(b−1)!·g^k for a positive
+// integer b (DLMF 5.4.1).
+func refDrift(x []float64) *big.Float {
+	k, b, g := int64(x[0]), int64(x[1]), x[2]
+	return mul(quo(bf(factorialBig(k+b-1)), bf(factorialBig(b-1))), powBig(g, k))
+}

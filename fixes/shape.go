@@ -15,6 +15,7 @@ var shapeArity = map[Shape]int{
 	ShapeBinomial: 2, ShapePermutation: 2, ShapeMultinomial: 0, ShapeCatalan: 1,
 	ShapeHypergeometric: 4, ShapePowOverFactorial: 2, ShapePoisson: 2,
 	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2, ShapeFactorialValue: 1,
+	ShapeInverseBeta: 2,
 }
 
 // The analyzer finds the shapes; before replacing an expression, the
@@ -197,7 +198,7 @@ var shapeName = map[Shape]string{
 	ShapeHypergeometric: "hypergeometric probability", ShapePowOverFactorial: "power over factorial",
 	ShapePoisson: "Poisson term", ShapeBinomialPMF: "binomial probability",
 	ShapeGammaRatio: "gamma ratio", ShapeBeta: "beta function",
-	ShapeFactorialValue: "converted factorial",
+	ShapeFactorialValue: "converted factorial", ShapeInverseBeta: "inverse beta function",
 }
 
 // patterns returns the factors of the match's shape: numerator,
@@ -238,6 +239,8 @@ func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]fact
 		return []factorPattern{b.converted(fact(o[0]))}, nil, nil
 	case ShapeBeta: // a, b
 		return []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, nil
+	case ShapeInverseBeta: // a, b
+		return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, nil
 	}
 	return nil, nil, nil
 }

@@ -61,6 +61,7 @@ func init() {
 		ShapeBinomialPMF:      buildTerm,
 		ShapeGammaRatio:       buildTerm,
 		ShapeBeta:             buildTerm,
+		ShapeInverseBeta:      buildInverseBeta,
 		ShapeBinomialLoop:     buildLoop,
 		ShapeFallingLoop:      buildLoop,
 		ShapeFactorial:        buildGuard,

@@ -71,3 +71,22 @@ func PairArrivals(k int, lambda float64) float64 {
 func Scaled(a, b, v float64) float64 {
 	return math.Gamma(a) * v / math.Gamma(b) // want "ratio of math.Gamma"
 }
+
+// FillMoment is the k-th moment factor of a fill-level model: the gamma
+// ratio is grouped apart from the power, so it alone is rewritten.
+func FillMoment(k int, s float64) float64 {
+	return math.Gamma(float64(k+3)/2) / math.Gamma(1.5) * math.Pow(s, float64(k)) // want "ratio of math.Gamma"
+}
+
+// FillDensity is the Beta density of a fill share x: its normalising
+// constant 1/B(a,b) is grouped apart from the powers.
+func FillDensity(a, b, x float64) float64 {
+	return math.Gamma(a+b) / (math.Gamma(a) * math.Gamma(b)) * math.Pow(x, a-1) * math.Pow(1-x, b-1) // want "ratio of math.Gamma"
+}
+
+// Drift is the k-step growth of a fill model, Γ(k+b)/Γ(b)·g^k: the
+// gamma ratio is rewritten on its own, and stays finite when Γ(k+b) is
+// not.
+func Drift(k int, b, g float64) float64 {
+	return math.Gamma(float64(k)+b) / math.Gamma(b) * math.Pow(g, float64(k)) // want "ratio of math.Gamma"
+}
