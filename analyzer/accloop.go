@@ -268,6 +268,9 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 		if lo == nil && loOff+rest.c <= 0 {
 			return false // a zero factor: not a factorial
 		}
+		if lo == nil && loOff+rest.c > 2 && fc.risingFromConst(al, loOff+rest.c) {
+			return true
+		}
 		if lo != nil || loOff+rest.c > 2 {
 			return fc.classifyPartial(al, hi, hiOff+rest.c)
 		}
@@ -285,6 +288,35 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 		al.top = al.mult
 		al.count, al.coff = tripCount(sh)
 		return al.count != nil || sh.first == nil && sh.last == nil
+	}
+	return false
+}
+
+// risingFromConst matches a factor i+c that starts at the constant
+// start > 2 and grows to a variable end, p *= 3 + float64(i) for i from
+// 0: the product start·(start+1)·… is the rising factorial of start over
+// the trip count, whose largest factor moves with the count. Read as a
+// falling factorial its top and its count would look independent. The
+// constant must be written as the factor's operand, for the message to
+// name it; a binomial loop keeps its falling reading.
+func (fc *fnCtx) risingFromConst(al *accLoop, start int64) bool {
+	sh := al.shape
+	if al.div != nil || sh.step != 1 && sh.step != -1 {
+		return false
+	}
+	count, coff := tripCount(sh)
+	if count == nil {
+		return false
+	}
+	b, ok := fc.stripConv(al.mult).(*ast.BinaryExpr)
+	if !ok || b.Op != token.ADD {
+		return false
+	}
+	for _, x := range []ast.Expr{b.X, b.Y} {
+		if v, ok := fc.floatConst(x); ok && v == float64(start) {
+			al.kind, al.x, al.count, al.coff = kindRising, x, count, coff
+			return true
+		}
 	}
 	return false
 }
