@@ -16,6 +16,9 @@ func TestVerificationBudget(t *testing.T) {
 			t.Fatalf("check %d of a package refused; want %d allowed", i+1, maxVerifications)
 		}
 	}
+	if verificationsLeft(a) {
+		t.Errorf("verificationsLeft after %d checks = true, want false", maxVerifications)
+	}
 	if spendVerification(a) {
 		t.Errorf("check %d of a package allowed; want at most %d", maxVerifications+1, maxVerifications)
 	}

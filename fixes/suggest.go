@@ -26,6 +26,11 @@ func Build(pass *analysis.Pass, m Match) (fixes []analysis.SuggestedFix, err err
 			fixes, err = nil, fmt.Errorf("internal error building the fix: %v", r)
 		}
 	}()
+	if !verificationsLeft(pass) {
+		// Building a fix costs a walk of its function; past the budget
+		// the check would refuse it anyway, so do not build it.
+		return nil, errVerificationsSpent
+	}
 	b, err := newBuilder(pass, m)
 	if err != nil {
 		return nil, err

@@ -18,7 +18,7 @@ import (
 // unused are caught here rather than in the user's build.
 func (b *builder) verify() error {
 	if !spendVerification(b.pass) {
-		return fmt.Errorf("this package's %d fix checks are spent; apply the fixes offered so far and analyse again", maxVerifications)
+		return errVerificationsSpent
 	}
 	fixed, err := apply(b.src, b.tok, b.edits)
 	if err != nil {
@@ -180,6 +180,15 @@ func apply(src []byte, tok *token.File, edits []analysis.TextEdit) ([]byte, erro
 // first fixes are applied, the next analysis offers fixes for the rest
 // (the command's -fix does so in its later rounds).
 const maxVerifications = 32
+
+var errVerificationsSpent = fmt.Errorf("this package's %d fix checks are spent; apply the fixes offered so far and analyse again", maxVerifications)
+
+// verificationsLeft reports whether pass may still check a fix.
+func verificationsLeft(pass *analysis.Pass) bool {
+	verifications.Lock()
+	defer verifications.Unlock()
+	return verifications.count[pass] < maxVerifications
+}
 
 // verifications counts the fix checks of the last few passes, as
 // parseCache keeps their parsed files.
