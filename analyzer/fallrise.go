@@ -78,7 +78,13 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 	}
 	kName := plus(src(al.count), al.coff)
 	clause, definite := verdict(kName, k, first)
-	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d at %s = %d%s", kName, src(al.x), t.typeName(), verb(t), kName, first, src(al.x), x, clause)
+	// With x unknown, say which x the limit is measured at; a constant x
+	// already stands in "from".
+	at := ""
+	if !xconst {
+		at = fmt.Sprintf(" at %s = %d", src(al.x), x)
+	}
+	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d%s%s", kName, src(al.x), t.typeName(), verb(t), kName, first, at, clause)
 	m := fc.loopMatch(al, t)
 	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
 	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
