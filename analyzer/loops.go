@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
 )
 
 // loopShape describes how a loop's induction variable runs: from first to
@@ -61,7 +63,7 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 		if fc.c.objOf(cond.Y) != iv {
 			return nil
 		}
-		op, bound = mirror(op), cond.X
+		op, bound = ranges.Flip(op), cond.X
 	}
 	var adj int64
 	switch {
@@ -174,20 +176,6 @@ func (fc *fnCtx) stepOf(s ast.Stmt, v types.Object) int64 {
 		}
 	}
 	return 0
-}
-
-func mirror(op token.Token) token.Token {
-	switch op {
-	case token.LSS:
-		return token.GTR
-	case token.GTR:
-		return token.LSS
-	case token.LEQ:
-		return token.GEQ
-	case token.GEQ:
-		return token.LEQ
-	}
-	return op
 }
 
 // eachLoop calls f for each product loop in body, outside closures.

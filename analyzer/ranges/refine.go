@@ -61,7 +61,7 @@ func (w *walker) compare(s state, x ast.Expr, op token.Token, y ast.Expr) state 
 		return dead
 	}
 	s = w.narrow(s, x, op, yr)
-	s = w.narrow(s, y, flip(op), xr)
+	s = w.narrow(s, y, Flip(op), xr)
 	s = w.relate(s, x, op, y)
 	return w.propagate(s, x)
 }
@@ -253,8 +253,8 @@ func negate(op token.Token) token.Token {
 	return op
 }
 
-// flip turns x op y into y op' x.
-func flip(op token.Token) token.Token {
+// Flip turns the comparison x op y into y op' x.
+func Flip(op token.Token) token.Token {
 	switch op {
 	case token.LSS:
 		return token.GTR
