@@ -94,7 +94,7 @@ func TestVersion(t *testing.T) {
 
 // TestVetProtocol checks the two queries the go command sends a vet
 // tool before any package: -V=full names the tool and a build ID (read by
-// cmd/go/internal/work/buildid.go), and -flags lists the flags as JSON
+// buildid.go in the go command's internal "work" package), and -flags lists the flags as JSON
 // (read by cmd/go/internal/vet/vetflag.go); file names from memory.
 func TestVetProtocol(t *testing.T) {
 	r := runIn(t, ".", nil, "-V=full")
