@@ -1,6 +1,7 @@
 package thresholds
 
 import (
+	"fmt"
 	"math"
 	"math/big"
 )
@@ -139,4 +140,58 @@ func risingNegative(t Num, m int64) int64 {
 		}
 	}
 	return math.MaxInt64
+}
+
+// FallingAffineFirstBad returns the first v for which the falling
+// factorial whose largest factor is a·v+b and whose number of factors is
+// c·v+d, (a·v+b)!/((a−c)·v+b−d)!, does not fit t: the loop
+// for i := n+1; i <= 2*n; i++ { p *= i } is a = 2, b = 0, c = 1, d = 0.
+// The scan starts at the first v with at least one factor, all of them
+// positive, and is exact: with a ≥ c ≥ 1 the product grows by at least
+// one factor per step, so it passes t within a few hundred steps.
+//
+// Special cases are:
+//
+//	FallingAffineFirstBad(t, a, b, c, d) = math.MaxInt64 unless a ≥ c ≥ 1
+//	(the count or the lowest factor does not grow with v)
+func FallingAffineFirstBad(t Num, a, b, c, d int64) int64 {
+	if c < 1 || a < c || a > 1<<20 || b < -1<<40 || b > 1<<40 || d < -1<<40 || d > 1<<40 {
+		return math.MaxInt64
+	}
+	return memo(cacheKey{shape: fmt.Sprintf("fallingaffine %d %d", c, d), t: t, a: a, b: b}, func() int64 {
+		return fallingAffineScan(t, a, b, c, d)
+	})
+}
+
+// fallingAffineScan walks v upward from the first v whose count and
+// lowest factor are both at least 1.
+func fallingAffineScan(t Num, a, b, c, d int64) int64 {
+	limit := t.maxInt()
+	v := ceilDiv(1-d, c)
+	if a > c {
+		v = max(v, ceilDiv(d-b, a-c)) // lowest factor (a−c)v+b−d+1 ≥ 1
+	} else if b-d+1 < 1 {
+		return math.MaxInt64 // a constant lowest factor ≤ 0: zero or sign-alternating
+	}
+	for i := 0; i < maxAffineSteps; i++ {
+		top, k := a*v+b, c*v+d
+		if fallingProduct(top, k).CmpAbs(limit) > 0 {
+			return v
+		}
+		v++
+	}
+	return math.MaxInt64
+}
+
+// maxAffineSteps bounds the scan of FallingAffineFirstBad; the product
+// of at least i factors, each at least 1 and all but one at least 2,
+// passes every supported type (at most 2^1024) well before.
+const maxAffineSteps = 4096
+
+func ceilDiv(x, y int64) int64 {
+	q := x / y
+	if x%y != 0 && (x < 0) == (y < 0) {
+		q++
+	}
+	return q
 }

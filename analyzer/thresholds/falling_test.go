@@ -124,3 +124,58 @@ func TestFallingFitsBeyondCap(t *testing.T) {
 		t.Error("reference: (MaxInt64)_16 exceeds MaxFloat64")
 	}
 }
+
+// affineRef scans v upward by plain big.Int multiplication of the
+// factors (a·v+b)(a·v+b−1)…, independent of the package's search.
+func affineRef(max *big.Int, a, b, c, d, from int64) int64 {
+	for v := from; v < from+5000; v++ {
+		p := big.NewInt(1)
+		for i := int64(0); i < c*v+d; i++ {
+			p.Mul(p, big.NewInt(a*v+b-i))
+		}
+		if p.CmpAbs(max) > 0 {
+			return v
+		}
+	}
+	return math.MaxInt64
+}
+
+func TestFallingAffineFirstBad(t *testing.T) {
+	i64 := mustNamed(t, "int64", nil)
+	// (2n)!/n! = (n+1)…(2n): at n = 14 it is 3497296636753920000 and at
+	// n = 15 202843204931727360000 > 2^63−1 (math/big, checked by hand
+	// with the reference below).
+	if got := FallingAffineFirstBad(i64, 2, 0, 1, 0); got != 15 {
+		t.Errorf("int64, (n+1)…(2n): got %d, want 15", got)
+	}
+	tests := []struct {
+		a, b, c, d int64
+		from       int64 // first v with at least one factor, all positive
+	}{
+		{2, 0, 1, 0, 1},  // (n+1)…(2n), (2n)!/n!
+		{2, 1, 1, 0, 1},  // (n+2)…(2n+1)
+		{1, 0, 1, 0, 1},  // n!: the factorial itself
+		{3, 0, 2, 0, 1},  // (n+1)…(3n), (3n)!/n!
+		{2, 0, 2, -1, 1}, // 2…(2n), (2n)!
+		{1, 5, 1, 0, 1},  // 6…(n+5), (n+5)!/5!
+		{3, -2, 1, 1, 2}, // lowest factor 2n−2 ≥ 1 from n = 2
+	}
+	for _, name := range []string{"int8", "uint8", "int16", "int32", "int64", "uint64", "float32", "float64"} {
+		typ := mustNamed(t, name, nil)
+		for _, tt := range tests {
+			want := affineRef(typ.MaxInt(), tt.a, tt.b, tt.c, tt.d, tt.from)
+			if got := FallingAffineFirstBad(typ, tt.a, tt.b, tt.c, tt.d); got != want {
+				t.Errorf("%s, top %d·v%+d, count %d·v%+d: got %d, want %d", name, tt.a, tt.b, tt.c, tt.d, got, want)
+			}
+		}
+	}
+	// The first n with (n)! too large for int64 is 21 (OEIS A000142).
+	if got := FallingAffineFirstBad(i64, 1, 0, 1, 0); got != 21 {
+		t.Errorf("int64, n!: got %d, want 21", got)
+	}
+	for _, tt := range []struct{ a, b, c, d int64 }{{1, 0, 2, 0}, {1, 0, 0, 3}, {1, -1, 1, 0}} {
+		if got := FallingAffineFirstBad(i64, tt.a, tt.b, tt.c, tt.d); got != math.MaxInt64 {
+			t.Errorf("int64, top %d·v%+d, count %d·v%+d: got %d, want no limit", tt.a, tt.b, tt.c, tt.d, got)
+		}
+	}
+}
