@@ -66,6 +66,12 @@ func (w *walker) stmt(s state, st ast.Stmt) state {
 	if w.rec {
 		w.f.snaps[st] = s.facts
 	}
+	return w.f.closeScope(w.walkStmt(s, st, label), st)
+}
+
+// walkStmt is stmt for a statement that is walked: reached, live, and
+// not nested too deeply.
+func (w *walker) walkStmt(s state, st ast.Stmt, label string) state {
 	switch st := st.(type) {
 	case *ast.BlockStmt:
 		return w.list(s, st.List)
