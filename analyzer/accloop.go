@@ -47,7 +47,12 @@ type accLoop struct {
 	topOff int64
 	count  ast.Expr // falling and rising: number of factors, as count+countOff
 	coff   int64
-	x      ast.Expr // rising: the base x
+	// span is the number of factors of a falling factorial between two
+	// variable ends that differ by a multiple of one variable, k from
+	// n+1 to 3*n: no expression in the source counts them, so count is
+	// nil and only span describes them.
+	span *linear
+	x    ast.Expr // rising: the base x
 }
 
 // accLoopOf recognises a product loop; before are the statements that
@@ -334,11 +339,29 @@ func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
 	if al.count == nil {
 		var ok bool
 		al.count, al.coff, ok = fc.spanCount(sh)
+		if !ok && al.div == nil {
+			al.span = fc.scaledSpan(sh)
+			return al.span != nil
+		}
 		// A constant count is fine for a product; a binomial loop's
 		// messages name its k.
 		return ok && (al.count != nil || al.div == nil)
 	}
 	return true
+}
+
+// scaledSpan returns the trip count of a unit-step loop whose ends differ
+// by a multiple of one variable, for k := n + 1; k <= 3*n; k++ (2n
+// trips), or nil.
+func (fc *fnCtx) scaledSpan(sh *loopShape) *linear {
+	if sh.step != 1 && sh.step != -1 {
+		return nil
+	}
+	d, ok := fc.span(sh)
+	if !ok || len(d.terms) != 1 || d.terms[0].coef < 2 {
+		return nil
+	}
+	return &d
 }
 
 // spanCount returns the trip count of a unit-step loop whose ends are
@@ -347,8 +370,31 @@ func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
 // makes k trips, and for i := n-5; i <= n; i++ makes 6. It is how a
 // falling factorial n!/(n−k)! is written counting up to n.
 func (fc *fnCtx) spanCount(sh *loopShape) (ast.Expr, int64, bool) {
-	if sh.first == nil || sh.last == nil {
+	d, ok := fc.span(sh)
+	if !ok {
 		return nil, 0, false
+	}
+	if len(d.terms) == 0 {
+		return nil, d.c, true
+	}
+	if len(d.terms) != 1 || d.terms[0].coef != 1 {
+		return nil, 0, false
+	}
+	id := identOf(fc.c.pass.TypesInfo, sh.last, d.terms[0].obj)
+	if id == nil {
+		id = identOf(fc.c.pass.TypesInfo, sh.first, d.terms[0].obj)
+	}
+	if id == nil {
+		return nil, 0, false
+	}
+	return id, d.c, true
+}
+
+// span returns the trip count of a loop between two variable ends as a
+// linear form: the high end less the low end, plus one.
+func (fc *fnCtx) span(sh *loopShape) (linear, bool) {
+	if sh.first == nil || sh.last == nil {
+		return linear{}, false
 	}
 	lo, hi := sh.first, sh.last
 	loOff, hiOff := sh.firstOff, sh.lastOff
@@ -358,24 +404,11 @@ func (fc *fnCtx) spanCount(sh *loopShape) (ast.Expr, int64, bool) {
 	l, ok1 := fc.linear(lo)
 	h, ok2 := fc.linear(hi)
 	if !ok1 || !ok2 {
-		return nil, 0, false
+		return linear{}, false
 	}
 	d := h.add(l.scale(-1))
-	off := d.c + hiOff - loOff + 1
-	if len(d.terms) == 0 {
-		return nil, off, true
-	}
-	if len(d.terms) != 1 || d.terms[0].coef != 1 {
-		return nil, 0, false
-	}
-	id := identOf(fc.c.pass.TypesInfo, hi, d.terms[0].obj)
-	if id == nil {
-		id = identOf(fc.c.pass.TypesInfo, lo, d.terms[0].obj)
-	}
-	if id == nil {
-		return nil, 0, false
-	}
-	return id, off, true
+	d.c += hiOff - loOff + 1
+	return d, true
 }
 
 // identOf returns an identifier in e that denotes obj.

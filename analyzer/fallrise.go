@@ -16,6 +16,14 @@ import (
 // The product grows with both, so the largest n and k decide safety and
 // the smallest decide certainty.
 func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
+	if al.span != nil {
+		// Only the joint reading applies: no expression counts the
+		// factors for the bounds of the top and the count to judge.
+		if msg, definite, _ := fc.fallingAffine(al, t); msg != "" {
+			fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
+		}
+		return
+	}
 	n := fc.rangeOf(fc.stripConv(al.mult))
 	if al.top != nil && al.top != al.mult {
 		n = shift(fc.rangeOf(al.top), al.topOff)
@@ -27,6 +35,90 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	if bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) {
 		return
 	}
+	msg, definite, judged := fc.fallingAffine(al, t)
+	if !judged {
+		msg, definite = fallingText(al, t, n, k)
+	}
+	if msg == "" {
+		return
+	}
+	m := fc.bareLoopMatch(al, t)
+	if n := fc.fallingBase(al); n != nil {
+		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
+	} else if n, k := fc.fallingSpan(al); n != nil {
+		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
+	}
+	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+}
+
+// fallingAffine judges a falling factorial whose largest factor and
+// number of factors are both affine in one variable v, as in
+// for k := n + 1; k <= 2*n; k++ { p *= k }: the two grow together, so
+// the first bad input is that of their joint product, (2n)!/n! first
+// wraps int64 at n = 15, and neither bound alone names it. It returns
+// the message (empty when the loop fits), whether the overflow is
+// certain, and false when the loop is not of this form.
+func (fc *fnCtx) fallingAffine(al *accLoop, t numType) (string, bool, bool) {
+	if al.top == nil || al.count == nil && al.span == nil {
+		return "", false, false
+	}
+	top, ok1 := fc.linear(al.top)
+	cnt, ok2 := linear{}, true
+	if al.span != nil {
+		cnt = *al.span
+	} else {
+		cnt, ok2 = fc.linear(al.count)
+		cnt.c += al.coff
+	}
+	if !ok1 || !ok2 || len(top.terms) != 1 || len(cnt.terms) != 1 || top.terms[0].obj != cnt.terms[0].obj {
+		return "", false, false
+	}
+	v := top.terms[0].obj
+	a, b := top.terms[0].coef, top.c+al.topOff
+	c, d := cnt.terms[0].coef, cnt.c
+	first := thresholds.FallingAffineFirstBad(t.Num, a, b, c, d)
+	start := thresholds.FallingAffineStart(a, b, c, d)
+	id := identOf(fc.c.pass.TypesInfo, al.top, v)
+	if first == math.MaxInt64 || start == math.MaxInt64 || id == nil {
+		return "", false, false
+	}
+	vr := fc.rangeOf(id)
+	// Below the start either the loop makes no trips (the count is what
+	// starts it: MirroredHalls at n ≤ 0) or some factor is not positive,
+	// where the bounds of the top and the count must decide.
+	empty := c*(start-1)+d <= 0 // first is finite, so |c|, |d|, |start| ≤ 2^41
+	switch {
+	case vr.IsEmpty():
+		return "", false, true
+	case vr.Hi < first && (empty || vr.Lo >= start && vr.Lo != math.MinInt64):
+		return "", false, true
+	case vr.Hi < first:
+		return "", false, false
+	}
+	clause, definite := verdict(v.Name(), vr, first)
+	msg := fmt.Sprintf("falling factorial of %s factors down from %s in %s %s for %s ≥ %d%s",
+		affineText(v.Name(), c, d), affineText(v.Name(), a, b), t.typeName(), verb(t), v.Name(), first, clause)
+	return msg, definite, true
+}
+
+// bareLoopMatch is the match of a loop reported without a rewrite of its own.
+func (fc *fnCtx) bareLoopMatch(al *accLoop, t numType) *fixes.Match {
+	m := fc.loopMatch(al, t)
+	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
+	return m
+}
+
+// affineText renders a·name+b.
+func affineText(name string, a, b int64) string {
+	if a != 1 {
+		name = fmt.Sprintf("%d*%s", a, name)
+	}
+	return plus(name, b)
+}
+
+// fallingText is the message of a falling-factorial loop whose largest
+// factor n and number of factors k are judged by their own ranges.
+func fallingText(al *accLoop, t numType, n, k ranges.Interval) (string, bool) {
 	kName := plus(src(al.count), al.coff)
 	var msg string
 	switch {
@@ -48,14 +140,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	default:
 		msg += fmt.Sprintf("; the largest factor may reach %d and %s may reach %d here", n.Hi, kName, k.Hi)
 	}
-	m := fc.loopMatch(al, t)
-	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
-	if n := fc.fallingBase(al); n != nil {
-		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
-	} else if n, k := fc.fallingSpan(al); n != nil {
-		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
-	}
-	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+	return msg, definite
 }
 
 // checkRisingLoop reports x·(x+1)·…·(x+n−1) in a float loop. With x

@@ -163,15 +163,35 @@ func FallingAffineFirstBad(t Num, a, b, c, d int64) int64 {
 	})
 }
 
-// fallingAffineScan walks v upward from the first v whose count and
-// lowest factor are both at least 1.
-func fallingAffineScan(t Num, a, b, c, d int64) int64 {
-	limit := t.maxInt()
+// FallingAffineStart returns the first v at which the falling factorial
+// of FallingAffineFirstBad has at least one factor and all its factors
+// are positive; from there on the product grows with v, so every v from
+// the start up to the first bad value fits.
+//
+// Special cases are:
+//
+//	FallingAffineStart(a, b, c, d) = math.MaxInt64 unless a ≥ c ≥ 1,
+//	and when a = c with a lowest factor b−d+1 ≤ 0
+func FallingAffineStart(a, b, c, d int64) int64 {
+	if c < 1 || a < c {
+		return math.MaxInt64
+	}
 	v := ceilDiv(1-d, c)
 	if a > c {
-		v = max(v, ceilDiv(d-b, a-c)) // lowest factor (a−c)v+b−d+1 ≥ 1
-	} else if b-d+1 < 1 {
+		return max(v, ceilDiv(d-b, a-c)) // lowest factor (a−c)v+b−d+1 ≥ 1
+	}
+	if b-d+1 < 1 {
 		return math.MaxInt64 // a constant lowest factor ≤ 0: zero or sign-alternating
+	}
+	return v
+}
+
+// fallingAffineScan walks v upward from FallingAffineStart.
+func fallingAffineScan(t Num, a, b, c, d int64) int64 {
+	limit := t.maxInt()
+	v := FallingAffineStart(a, b, c, d)
+	if v == math.MaxInt64 {
+		return math.MaxInt64
 	}
 	for i := 0; i < maxAffineSteps; i++ {
 		top, k := a*v+b, c*v+d

@@ -160,6 +160,13 @@ func TestFallingAffineFirstBad(t *testing.T) {
 		{1, 5, 1, 0, 1},  // 6…(n+5), (n+5)!/5!
 		{3, -2, 1, 1, 2}, // lowest factor 2n−2 ≥ 1 from n = 2
 	}
+	for _, tt := range tests {
+		// The start is derived by hand in the table: the first v with
+		// c·v+d ≥ 1 and (a−c)·v+b−d+1 ≥ 1.
+		if got := FallingAffineStart(tt.a, tt.b, tt.c, tt.d); got != tt.from {
+			t.Errorf("start of top %d·v%+d, count %d·v%+d: got %d, want %d", tt.a, tt.b, tt.c, tt.d, got, tt.from)
+		}
+	}
 	for _, name := range []string{"int8", "uint8", "int16", "int32", "int64", "uint64", "float32", "float64"} {
 		typ := mustNamed(t, name, nil)
 		for _, tt := range tests {

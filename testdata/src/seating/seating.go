@@ -83,3 +83,93 @@ func Podium(n int) int {
 	}
 	return p
 }
+
+// The mirrored-hall loops below multiply a span whose both ends move with
+// n, so the top and the number of factors grow together. First bad
+// inputs, each found by an exact scan with arbitrary-precision integers
+// (Python's int) and checked by the thresholds package's math/big tests:
+// (n+1)…(2n) passes 2^63−1 first at n = 15 (at n = 14 it is
+// 3497296636753920000); (n+1)…(3n) passes 2^64−1 first at n = 9; and
+// 6·7·…·n passes 2^63−1 first at n = 22.
+
+// MirroredHalls counts the ordered seatings of n guests at the n empty
+// seats of a mirrored hall of 2n seats, (n+1)·…·(2n).
+func MirroredHalls(n int64) int64 {
+	p := int64(1)
+	for k := n + 1; k < 2*n+1; k++ { // want `falling factorial of n factors down from 2\*n in int64 wraps for n ≥ 15; n is not bounded here`
+		p *= k
+	}
+	return p
+}
+
+// MirroredHallsCapped is MirroredHalls for the planner's halls of at
+// most 14 pairs, the largest that fits.
+func MirroredHallsCapped(n int64) int64 {
+	if n > 14 {
+		return 0
+	}
+	p := int64(1)
+	for k := n + 1; k < 2*n+1; k++ {
+		p *= k
+	}
+	return p
+}
+
+// MirroredHallsOneTooMany allows one pair more than fits.
+func MirroredHallsOneTooMany(n int64) int64 {
+	if n < 1 || n > 15 {
+		return 0
+	}
+	p := int64(1)
+	for k := n + 1; k <= 2*n; k++ { // want `falling factorial of n factors down from 2\*n in int64 wraps for n ≥ 15; n may reach 15 here`
+		p *= k
+	}
+	return p
+}
+
+// GrandHall is a hall of three wings: (n+1)·…·(3n), 2n factors.
+func GrandHall(n uint64) uint64 {
+	if n >= 9 {
+		panic("grand hall too large")
+	}
+	p := uint64(1)
+	for k := n + 1; k <= 3*n; k++ {
+		p *= k
+	}
+	return p
+}
+
+// GrandHallUnchecked is GrandHall without its guard.
+func GrandHallUnchecked(n uint64) uint64 {
+	p := uint64(1)
+	for k := n + 1; k <= 3*n; k++ { // want `falling factorial of 2\*n factors down from 3\*n in uint64 wraps for n ≥ 9; n is not bounded here`
+		p *= k
+	}
+	return p
+}
+
+// BanquetsPast counts the seatings once the five tables of honour are
+// filled: 6·7·…·n.
+func BanquetsPast(n int64) int64 {
+	if n > 30 {
+		return 0
+	}
+	p := int64(1)
+	for i := int64(6); i <= n; i++ { // want `falling factorial of n-5 factors down from n in int64 wraps for n ≥ 22; n may reach 30 here`
+		p *= i
+	}
+	return p
+}
+
+// BanquetsBig is BanquetsPast for halls of 22 or more seats, where the
+// product can never fit.
+func BanquetsBig(n int64) int64 {
+	if n < 22 || n > 40 {
+		return 0
+	}
+	p := int64(1)
+	for i := int64(6); i <= n; i++ { // want `falling factorial of n-5 factors down from n in int64 wraps for n ≥ 22; n is at least 22 here`
+		p *= i
+	}
+	return p
+}
