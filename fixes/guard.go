@@ -44,7 +44,7 @@ func buildGuard(b *builder) error {
 	if _, obj := b.scopeAt(body.Lbrace+1).LookupParent(m.Param.Name(), body.Lbrace+1); obj != m.Param {
 		return fmt.Errorf("%s is not visible where the function starts", m.Param.Name())
 	}
-	if b.assigned(m.Param, body) {
+	if b.assignedInBody(m.Param, body) {
 		// The guard tests the value the function was called with.
 		return fmt.Errorf("%s is assigned in the function, so its first value does not bound the factorial", m.Param.Name())
 	}
@@ -96,27 +96,47 @@ func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
 // assigned reports whether obj is assigned, incremented or has its
 // address taken anywhere in n.
 func (b *builder) assigned(obj types.Object, n ast.Node) bool {
-	is := func(e ast.Expr) bool {
-		id, ok := ast.Unparen(e).(*ast.Ident)
-		return ok && b.pass.TypesInfo.ObjectOf(id) == obj
-	}
 	found := false
+	b.eachAssigned(n, func(v types.Object) bool {
+		found = v == obj
+		return !found
+	})
+	return found
+}
+
+// eachAssigned calls f with each variable assigned, incremented or
+// having its address taken in n, until f returns false.
+func (b *builder) eachAssigned(n ast.Node, f func(types.Object) bool) {
+	more := true
+	visit := func(e ast.Expr) {
+		if id, ok := ast.Unparen(e).(*ast.Ident); ok && more {
+			if obj := b.pass.TypesInfo.ObjectOf(id); obj != nil {
+				more = f(obj)
+			}
+		}
+	}
 	ast.Inspect(n, func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				found = found || is(l)
+				visit(l)
 			}
 		case *ast.IncDecStmt:
-			found = found || is(n.X)
+			visit(n.X)
 		case *ast.UnaryExpr:
-			found = found || n.Op == token.AND && is(n.X)
+			if n.Op == token.AND {
+				visit(n.X)
+			}
 		case *ast.RangeStmt:
-			found = found || n.Key != nil && is(n.Key) || n.Value != nil && is(n.Value)
+			if n.Key != nil {
+				visit(n.Key)
+			}
+			if n.Value != nil {
+				visit(n.Value)
+			}
 		}
-		return !found
+		return more
 	})
-	return found
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {

@@ -7,7 +7,6 @@ import (
 	"go/token"
 	"go/types"
 	"sort"
-	"sync"
 
 	"golang.org/x/tools/go/analysis"
 )
@@ -67,25 +66,12 @@ type parsed struct {
 	files map[*ast.File]*ast.File
 }
 
-// parseCache keeps the parsed files of the last few packages: a driver
-// analyses packages in parallel, and each package's fixes are built
-// while it is analysed, so a handful of entries serve them all.
-var parseCache struct {
-	sync.Mutex
-	order   []*analysis.Pass
-	entries map[*analysis.Pass]*parsed
-}
-
-const parseCacheSize = 8
-
 func parsedFiles(pass *analysis.Pass) (*parsed, error) {
-	parseCache.Lock()
-	p, ok := parseCache.entries[pass]
-	parseCache.Unlock()
-	if ok {
-		return p, nil
+	st := stateOf(pass)
+	if st.parsed != nil {
+		return st.parsed, nil
 	}
-	p = &parsed{fset: token.NewFileSet(), files: make(map[*ast.File]*ast.File)}
+	p := &parsed{fset: token.NewFileSet(), files: make(map[*ast.File]*ast.File)}
 	for _, f := range pass.Files {
 		name := pass.Fset.File(f.FileStart).Name()
 		src, err := pass.ReadFile(name)
@@ -98,20 +84,7 @@ func parsedFiles(pass *analysis.Pass) (*parsed, error) {
 		}
 		p.files[f] = pf
 	}
-	parseCache.Lock()
-	defer parseCache.Unlock()
-	if parseCache.entries == nil {
-		parseCache.entries = make(map[*analysis.Pass]*parsed)
-	}
-	if old, ok := parseCache.entries[pass]; ok {
-		return old, nil
-	}
-	if len(parseCache.order) == parseCacheSize {
-		delete(parseCache.entries, parseCache.order[0])
-		parseCache.order = parseCache.order[1:]
-	}
-	parseCache.entries[pass] = p
-	parseCache.order = append(parseCache.order, pass)
+	st.parsed = p
 	return p, nil
 }
 
@@ -185,38 +158,16 @@ var errVerificationsSpent = fmt.Errorf("this package's %d fix checks are spent; 
 
 // verificationsLeft reports whether pass may still check a fix.
 func verificationsLeft(pass *analysis.Pass) bool {
-	verifications.Lock()
-	defer verifications.Unlock()
-	return verifications.count[pass] < maxVerifications
-}
-
-// verifications counts the fix checks of the last few passes, as
-// parseCache keeps their parsed files.
-var verifications struct {
-	sync.Mutex
-	order []*analysis.Pass
-	count map[*analysis.Pass]int
+	return stateOf(pass).checks < maxVerifications
 }
 
 // spendVerification reports whether pass may check one more fix, and
 // counts it.
 func spendVerification(pass *analysis.Pass) bool {
-	verifications.Lock()
-	defer verifications.Unlock()
-	if verifications.count == nil {
-		verifications.count = make(map[*analysis.Pass]int)
-	}
-	n, ok := verifications.count[pass]
-	if !ok {
-		if len(verifications.order) == parseCacheSize {
-			delete(verifications.count, verifications.order[0])
-			verifications.order = verifications.order[1:]
-		}
-		verifications.order = append(verifications.order, pass)
-	}
-	if n >= maxVerifications {
+	st := stateOf(pass)
+	if st.checks >= maxVerifications {
 		return false
 	}
-	verifications.count[pass] = n + 1
+	st.checks++
 	return true
 }
