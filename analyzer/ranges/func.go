@@ -88,6 +88,10 @@ func Analyze(info *types.Info, fn ast.Node, opts Options) *Func {
 		return f
 	}
 	f.scan(f.body)
+	// Sized up front: a long function's maps would otherwise be rehashed
+	// as they grow, each time rereading every entry.
+	f.exprs = make(map[ast.Expr]Interval, f.size/2)
+	f.snaps = make(map[ast.Node]*facts, f.size/4)
 	s := state{live: true}
 	s = f.zeroResults(s, ftype)
 	for obj, r := range opts.Entry {
