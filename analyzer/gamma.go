@@ -193,8 +193,26 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		}
 	}
 	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
+	if n := gammaCount(p.num); n >= 2 && !worst.certain {
+		// Γ(a)·Γ(b) passes the largest float64 once ln Γ(a) + ln Γ(b)
+		// does, which can be well before either argument reaches the
+		// single-Γ limit (a = b = 100 already does): the limit above
+		// is where the first Γ alone breaks, not the first bad input.
+		msg += fmt.Sprintf("; the product of the %d Γ values above the line can overflow first, before any one of them is +Inf", n)
+	}
 	fc.c.gammaLines[fc.c.lineOf(root)] = true
 	fc.report(finding{node: root, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
+}
+
+// gammaCount counts the math.Gamma factors among fs.
+func gammaCount(fs []factor) int {
+	n := 0
+	for _, f := range fs {
+		if f.math == "Gamma" {
+			n++
+		}
+	}
+	return n
 }
 
 // gammaMatch describes a product of Gamma calls that is exactly one of

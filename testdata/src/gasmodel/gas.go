@@ -17,7 +17,18 @@ func BallVolume(d int) float64 {
 
 // MixingWeight returns the Beta function B(a, b) = Γ(a)Γ(b)/Γ(a+b).
 func MixingWeight(a, b float64) float64 {
-	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want `Beta function as Γ\(a\)Γ\(b\)/Γ\(a\+b\) in float64: math.Gamma\(a\) is \+Inf for a ≥ 171.62`
+	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want `Beta function as Γ\(a\)Γ\(b\)/Γ\(a\+b\) in float64: math.Gamma\(a\) is \+Inf for a ≥ 171.62.*; the product of the 2 Γ values above the line can overflow first, before any one of them is \+Inf`
+}
+
+// ContinuationFactor is Γ(c)Γ(c−a−b)/(Γ(c−a)Γ(c−b)), the value at 1 of
+// the model's hypergeometric partition series (Gauss's summation, DLMF
+// 15.4.20). Its numerator passes the largest float64 before Γ(c) alone
+// does: with a = 1.3 and b = 2.7, at c = 170.5 the two numerator values
+// are about 5.6e305 and 7.0e296 (Γ(170.5) and Γ(166.5), from
+// ln Γ via math.Lgamma), whose product is +Inf.
+func ContinuationFactor(a, b, c float64) float64 {
+	d := c - a - b
+	return math.Gamma(c) * math.Gamma(d) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64: math.Gamma\(c\) is \+Inf for c ≥ 171.62.*; the product of the 2 Γ values above the line can overflow first`
 }
 
 // StudentNorm returns the normalising constant of Student's t density
