@@ -73,3 +73,34 @@ func Halve(n int) int { // want "probe factorial: no fix: n is assigned in the f
 	}
 	return r
 }
+
+// Tally counts n down as it multiplies, so the incoming n is not the
+// value the loop ends on either.
+//
+// probe:factorial(n)
+func Tally(n int) int { // want "probe factorial: no fix: n is assigned in the function"
+	r := 1
+	for n > 1 {
+		r *= n
+		n--
+	}
+	return r
+}
+
+// Shared hands n's address to a helper that may change it.
+//
+// probe:factorial(n)
+func Shared(n int) int { // want "probe factorial: no fix: n is assigned in the function"
+	clamp(&n)
+	r := 1
+	for i := 2; i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+
+func clamp(p *int) {
+	if *p > 20 {
+		*p = 20
+	}
+}
