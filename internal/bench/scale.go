@@ -7,6 +7,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"runtime"
 	"runtime/pprof"
 	"strconv"
 	"strings"
@@ -35,10 +36,10 @@ const (
 func scale() error {
 	fmt.Printf("analysis time of overfact (median of up to %d runs, %v per size at most) against input size\n", *runsFlag, *caseTimeFlag)
 	for _, kind := range []string{"long function", "many functions"} {
-		var base float64
+		var base, allocBase float64
 		for _, div := range []int{16, 4, 1} {
 			c := makeCase(kind, div)
-			times, err := scaleChild(kind, div)
+			times, allocs, err := scaleChild(kind, div)
 			if cs, ok := err.(*cutShort); ok {
 				per := cs.ran.Seconds() / float64(c.units)
 				fmt.Printf("  %-15s %6d %-5s %2d×  first run unfinished after %.0fs of analysis: per 1000 %s more than %.3fms, per-unit ratio to 1× more than %s\n",
@@ -49,11 +50,12 @@ func scale() error {
 				return fmt.Errorf("%s 1/%d: %v", kind, div, err)
 			}
 			per := median(times) / float64(c.units)
+			allocPer := median(allocs) / float64(c.units)
 			if base == 0 {
-				base = per
+				base, allocBase = per, allocPer
 			}
-			fmt.Printf("  %-15s %6d %-5s %2d×  %d runs, median %.2fs, per 1000 %s %.3fms, per-unit ratio to 1× %s\n",
-				kind, c.units, c.unit, 16/div, len(times), median(times), c.unit, per*1e6, ratio(per, base))
+			fmt.Printf("  %-15s %6d %-5s %2d×  %d runs, median %.2fs, per 1000 %s %.3fms, per-unit ratio to 1× %s; allocations per 1000 %s %.0f, ratio %s\n",
+				kind, c.units, c.unit, 16/div, len(times), median(times), c.unit, per*1e6, ratio(per, base), c.unit, allocPer*1000, ratio(allocPer, allocBase))
 		}
 	}
 	return nil
@@ -62,11 +64,12 @@ func scale() error {
 // scaleChild measures one case in a child process, which is killed when
 // the case's time is up: checker.Analyze cannot be interrupted, and a
 // superlinear analyzer would otherwise never finish the largest cases.
-// It returns the analysis times of the runs that finished.
-func scaleChild(kind string, div int) ([]float64, error) {
+// It returns the analysis times of the runs that finished, and the heap
+// allocations each made for the generated package.
+func scaleChild(kind string, div int) (times, allocs []float64, err error) {
 	exe, err := os.Executable()
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	ctx, cancel := context.WithTimeout(context.Background(), *caseTimeFlag)
 	defer cancel()
@@ -74,12 +77,11 @@ func scaleChild(kind string, div int) ([]float64, error) {
 	cmd.Stderr = os.Stderr
 	out, err := cmd.StdoutPipe()
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	if err := cmd.Start(); err != nil {
-		return nil, err
+		return nil, nil, err
 	}
-	var times []float64
 	var loaded time.Time
 	sc := bufio.NewScanner(out)
 	for sc.Scan() {
@@ -87,20 +89,25 @@ func scaleChild(kind string, div int) ([]float64, error) {
 			loaded = time.Now()
 			continue
 		}
-		t, err := strconv.ParseFloat(sc.Text(), 64)
-		if err != nil {
-			return nil, fmt.Errorf("bad child output %q", sc.Text())
+		f := strings.Fields(sc.Text())
+		if len(f) != 2 {
+			return nil, nil, fmt.Errorf("bad child output %q", sc.Text())
 		}
-		times = append(times, t)
+		t, err1 := strconv.ParseFloat(f[0], 64)
+		a, err2 := strconv.ParseFloat(f[1], 64)
+		if err1 != nil || err2 != nil {
+			return nil, nil, fmt.Errorf("bad child output %q", sc.Text())
+		}
+		times, allocs = append(times, t), append(allocs, a)
 	}
 	if err := cmd.Wait(); err != nil && ctx.Err() == nil {
-		return nil, err
+		return nil, nil, err
 	}
 	if len(times) == 0 && !loaded.IsZero() {
 		// A lower bound on the first run, which was cut short.
-		return nil, &cutShort{time.Since(loaded)}
+		return nil, nil, &cutShort{time.Since(loaded)}
 	}
-	return times, nil
+	return times, allocs, nil
 }
 
 // cutShort reports a case whose first run did not finish in time.
@@ -109,7 +116,14 @@ type cutShort struct{ ran time.Duration }
 func (c *cutShort) Error() string { return fmt.Sprintf("first run cut short after %v", c.ran) }
 
 // runScaleCase is the child side of scaleChild: it generates the case,
-// loads it once and prints the analysis time of each run, one per line.
+// loads it once and prints, one line per run, the analysis time and the
+// heap allocations the generated package cost. Allocations are counted,
+// not timed, so they do not depend on the machine's load or caches: if
+// they grow linearly while the time grows faster, the difference is the
+// memory hierarchy rather than extra work. The driver also analyses the
+// standard-library packages the case imports (overfact exports facts);
+// their share is measured on a baseline package with the same imports
+// and subtracted.
 func runScaleCase(spec string) error {
 	kind, divText, ok := strings.Cut(spec, ":")
 	div, err := strconv.Atoi(divText)
@@ -121,7 +135,7 @@ func runScaleCase(spec string) error {
 		return err
 	}
 	defer os.RemoveAll(dir)
-	pkg, err := writeCase(dir, makeCase(kind, div))
+	pkg, basePkg, err := writeCase(dir, makeCase(kind, div))
 	if err != nil {
 		return err
 	}
@@ -138,7 +152,11 @@ func runScaleCase(spec string) error {
 		defer pprof.StopCPUProfile()
 	}
 	for range *runsFlag {
-		g, err := checker.Analyze([]*analysis.Analyzer{target}, []*packages.Package{pkg}, nil)
+		baseAllocs, _, err := analyzeCounted(basePkg)
+		if err != nil {
+			return err
+		}
+		allocs, g, err := analyzeCounted(pkg)
 		if err != nil {
 			return err
 		}
@@ -146,9 +164,19 @@ func runScaleCase(spec string) error {
 		if err != nil {
 			return err
 		}
-		fmt.Println(d.Seconds())
+		fmt.Println(d.Seconds(), int64(allocs)-int64(baseAllocs))
 	}
 	return nil
+}
+
+// analyzeCounted runs overfact on pkg and its dependencies and returns
+// the number of heap allocations made meanwhile.
+func analyzeCounted(pkg *packages.Package) (uint64, *checker.Graph, error) {
+	var before, after runtime.MemStats
+	runtime.ReadMemStats(&before)
+	g, err := checker.Analyze([]*analysis.Analyzer{target}, []*packages.Package{pkg}, nil)
+	runtime.ReadMemStats(&after)
+	return after.Mallocs - before.Mallocs, g, err
 }
 
 func makeCase(kind string, div int) scaleCase {
@@ -161,26 +189,42 @@ func makeCase(kind string, div int) scaleCase {
 	return scaleCase{kind, "funcs", n, manyFuncs(n)}
 }
 
-// writeCase writes c as a module of its own and loads it.
-func writeCase(dir string, c scaleCase) (*packages.Package, error) {
+// writeCase writes c as a module of its own, with a baseline package
+// that imports what the generated one does and holds no code, and loads
+// both.
+func writeCase(dir string, c scaleCase) (gen, base *packages.Package, err error) {
+	if err := os.Mkdir(filepath.Join(dir, "base"), 0o755); err != nil {
+		return nil, nil, err
+	}
 	files := map[string]string{
-		"go.mod": "module example.com/gen\n\ngo 1.26\n",
-		"gen.go": c.src,
+		"go.mod":       "module example.com/gen\n\ngo 1.26\n",
+		"gen.go":       c.src,
+		"base/base.go": "// Package base imports what the generated package imports.\npackage base\n\nimport \"math\"\n\nvar _ = math.Pi\n",
 	}
 	for name, text := range files {
 		if err := os.WriteFile(filepath.Join(dir, name), []byte(text), 0o644); err != nil {
-			return nil, err
+			return nil, nil, err
 		}
 	}
 	mode, err := loadMode("auto", []*analysis.Analyzer{target})
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
-	pkgs, err := load(dir, mode, false, []string{"."})
+	pkgs, err := load(dir, mode, false, []string{".", "./base"})
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
-	return pkgs[0], nil
+	for _, p := range pkgs {
+		if p.Name == "base" {
+			base = p
+		} else {
+			gen = p
+		}
+	}
+	if gen == nil || base == nil {
+		return nil, nil, fmt.Errorf("loaded %d packages, want the generated one and its baseline", len(pkgs))
+	}
+	return gen, base, nil
 }
 
 // ownTime sums the durations of the actions on pkg (overfact and what it
