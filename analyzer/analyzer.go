@@ -45,6 +45,10 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// tables holds the package's unchanging tables (ranges.PackageTables),
+	// found the first time a function is range-analysed.
+	tables     map[types.Object]*ast.CompositeLit
+	tablesDone bool
 	// gammaLines holds the lines with a Gamma finding: one is enough
 	// for an expression with several Gamma calls.
 	gammaLines map[token.Position]bool

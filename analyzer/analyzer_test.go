@@ -36,7 +36,7 @@ func testdata(t *testing.T) string {
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
-	"labtables",
+	"labtables", "raffle",
 }
 
 // TestScenarios runs the analyzer over every scenario package in one

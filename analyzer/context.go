@@ -57,9 +57,20 @@ func (c *checker) ctx(n ast.Node) *fnCtx {
 // ranges returns the range analysis of the function, running it once.
 func (fc *fnCtx) ranges() *ranges.Func {
 	if fc.rng == nil {
-		fc.rng = ranges.Analyze(fc.c.pass.TypesInfo, fc.node, ranges.Options{Entry: fc.entry, MaxVisits: maxVisits})
+		opts := ranges.Options{Entry: fc.entry, MaxVisits: maxVisits, Tables: fc.c.packageTables()}
+		fc.rng = ranges.Analyze(fc.c.pass.TypesInfo, fc.node, opts)
 	}
 	return fc.rng
+}
+
+// packageTables returns the package's unexported table variables that
+// nothing changes, so that table-driven code, for _, tc := range cases
+// { fact(tc.n) }, is judged by the values its table holds.
+func (c *checker) packageTables() map[types.Object]*ast.CompositeLit {
+	if !c.tablesDone {
+		c.tables, c.tablesDone = ranges.PackageTables(c.pass.TypesInfo, c.pass.Files), true
+	}
+	return c.tables
 }
 
 // rangeOf returns the range of the integer expression e where it is

@@ -203,7 +203,32 @@ func crewFields(n int) int {
 	return probe(27, c.spare) + probe(28, c.size)
 }
 
+// ticketTable draws draws from fixed tables of a raffle plan; one table
+// is changed by the argument before it is read.
+func ticketTable(n int) int {
+	s := 0
+	for i, tc := range []struct{ pool, draw int }{{49, 6}, {20, 3}, {10, 0}} {
+		s += probe(30, tc.pool) + probe(31, tc.draw) + probe(32, i)
+	}
+	prizes := []int{5, 1, 12}
+	for _, p := range prizes {
+		s += probe(33, p)
+	}
+	bumped := []int{2, 4}
+	bumped[1] = n
+	for _, b := range bumped {
+		s += probe(34, b)
+	}
+	var sparse [4]int
+	sparse = [4]int{2: 8}
+	for _, v := range sparse {
+		s += probe(35, v)
+	}
+	return s + len(prizes)
+}
+
 var corpus = map[string]func(int) int{
+	"ticketTable":   ticketTable,
 	"crewFields":    crewFields,
 	"rangeShrink":   rangeShrink,
 	"chooseRow":     chooseRow,

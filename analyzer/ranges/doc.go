@@ -25,6 +25,15 @@
 // "if k < 0 || k > n { return }" and "if n > 20 { return }" both k and
 // n−k lie in [0, 20].
 //
+// A range over a table of constants gives each trip's value the join
+// of the table's constants (per field, for a table of structs) and the
+// key the table's index range. A table is a composite literal ranged
+// over directly, a local declared with one whose every use is a range
+// over it or len or cap, or a package-level variable the caller vouches
+// for (Options.Tables, found by PackageTables: unexported, and every use
+// in the package such a use). Facts about the variables a block
+// declares are dropped when the block ends.
+//
 // Loops are iterated to a fixpoint, widening after Options.MaxVisits
 // trips (after one trip inside two or more enclosing loops), then given one
 // narrowing trip; the loop condition re-narrows the body on every trip.

@@ -66,25 +66,11 @@ func (w *walker) initFields(s state, base types.Object, lit *ast.CompositeLit) s
 	if !ok {
 		return s
 	}
-	vals := make([]Interval, st.NumFields())
-	for i := range vals {
-		vals[i] = Point(0)
-	}
+	vals := zeroFields(st)
 	if lit != nil {
-		for i, el := range lit.Elts {
-			if kv, ok := el.(*ast.KeyValueExpr); ok {
-				id, ok := kv.Key.(*ast.Ident)
-				if !ok {
-					return s
-				}
-				j := fieldIndex(st, id.Name)
-				if j < 0 {
-					return s
-				}
-				vals[j] = w.quiet(s, kv.Value)
-			} else if i < len(vals) {
-				vals[i] = w.quiet(s, el)
-			}
+		vals, ok = literalFields(st, lit, func(e ast.Expr) Interval { return w.quiet(s, e) })
+		if !ok {
+			return s
 		}
 	}
 	for i := range vals {
@@ -94,6 +80,36 @@ func (w *walker) initFields(s state, base types.Object, lit *ast.CompositeLit) s
 		}
 	}
 	return s
+}
+
+func zeroFields(st *types.Struct) []Interval {
+	vals := make([]Interval, st.NumFields())
+	for i := range vals {
+		vals[i] = Point(0)
+	}
+	return vals
+}
+
+// literalFields returns the ranges of the fields of struct literal lit,
+// each given by eval, and zero for the fields it leaves out.
+func literalFields(st *types.Struct, lit *ast.CompositeLit, eval func(ast.Expr) Interval) ([]Interval, bool) {
+	vals := zeroFields(st)
+	for i, el := range lit.Elts {
+		if kv, ok := el.(*ast.KeyValueExpr); ok {
+			id, ok := kv.Key.(*ast.Ident)
+			if !ok {
+				return nil, false
+			}
+			j := fieldIndex(st, id.Name)
+			if j < 0 {
+				return nil, false
+			}
+			vals[j] = eval(kv.Value)
+		} else if i < len(vals) {
+			vals[i] = eval(el)
+		}
+	}
+	return vals, true
 }
 
 func fieldIndex(st *types.Struct, name string) int {

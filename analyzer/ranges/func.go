@@ -20,6 +20,11 @@ type Options struct {
 	// MinInt64. Results are then sound only for executions where no
 	// unbounded variable sits at the limits of its type.
 	NoWrap bool
+	// Tables holds package-level variables that hold a composite
+	// literal nothing changes: the caller has checked that every use in
+	// the package is a range expression or an argument of len or cap.
+	// A range over one draws its values from the literal's constants.
+	Tables map[types.Object]*ast.CompositeLit
 }
 
 // defaultVisits is the default for Options.MaxVisits.
@@ -52,6 +57,8 @@ type Func struct {
 	hasGoto     bool
 	gotoTargets map[string]bool
 	assigned    map[ast.Node][]types.Object
+	localTables map[types.Object]*ast.CompositeLit // locals declared with a literal
+	tableUses   map[types.Object]*tableUses
 	size        int // nodes in the function
 	work        int // statements walked so far, for the budget
 }

@@ -109,6 +109,12 @@ func (w *walker) forStmt(s state, st *ast.ForStmt, label string) state {
 func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 	x := w.eval(s, st.X)
 	key, val := w.rangeKey(st.X, x)
+	table := w.f.tableOf(st.X)
+	if table != nil {
+		if k, ok := w.f.tableKey(table); ok {
+			key = key.Meet(k)
+		}
+	}
 	return w.loop(s, st, func(head state) (state, state) {
 		in := head
 		if key.IsEmpty() {
@@ -122,6 +128,9 @@ func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 		if st.Value != nil {
 			w.operands(in, st.Value)
 			in = w.store(in, st.Value, val)
+			if table != nil {
+				in = w.tableValue(in, st.Value, table)
+			}
 		}
 		t := w.push(label, true)
 		end := w.stmt(in, st.Body)

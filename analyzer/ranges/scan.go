@@ -58,7 +58,14 @@ func (f *Func) scan(body ast.Node) {
 			}
 			f.escapes[obj] = append(f.escapes[obj], escape{at, loop})
 		}
+		noteTableUses(f.info, n, f.tableUses)
 		switch n := n.(type) {
+		case *ast.ValueSpec:
+			names := make([]ast.Expr, len(n.Names))
+			for i, id := range n.Names {
+				names[i] = id
+			}
+			f.noteTableDecl(names, n.Values)
 		case *ast.ForStmt:
 			loops = append(loops, n)
 		case *ast.FuncLit:
@@ -80,6 +87,9 @@ func (f *Func) scan(body ast.Node) {
 				if id, ok := rootIdent(l); ok {
 					site(id, true)
 				}
+			}
+			if n.Tok == token.DEFINE {
+				f.noteTableDecl(n.Lhs, n.Rhs)
 			}
 		case *ast.IncDecStmt:
 			if id, ok := rootIdent(n.X); ok {
