@@ -3,6 +3,7 @@ package analyzer
 import (
 	"go/ast"
 	"go/constant"
+	"go/token"
 	"go/types"
 	"math"
 
@@ -28,6 +29,9 @@ type fnCtx struct {
 	// closureAssigns and returns).
 	closureAssigned map[types.Object]bool
 	returned        map[*ast.BlockStmt]map[types.Object]bool
+	// gammaCalls holds the function's math.Gamma calls by line, gathered
+	// once (see gammaCallsOn).
+	gammaCalls map[token.Position][]*ast.CallExpr
 }
 
 // maxVisits bounds the range analysis of one function; past it the

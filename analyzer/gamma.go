@@ -286,20 +286,21 @@ func sameVar(fc *fnCtx, x, y ast.Expr) bool {
 // checkGamma judges a math.Gamma call no product consumed.
 func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	line := fc.c.lineOf(call)
-	if fc.c.gammaLines[line] {
+	if fc.c.gammaLines[line] || !fc.gammaReportable(call) {
 		return
 	}
+	first := thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes))
+	choice := fc.firstToOverflow(call, first)
+	call = choice.call
 	g, ok := fc.gammaBoundOf(call.Args[0])
-	if ok && !g.reachable || !fc.gammaEscapes(call) {
-		return
-	}
 	if !ok {
-		g = gammaBound{first: thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes)), hi: math.Inf(1)}
+		g = gammaBound{first: first, hi: math.Inf(1)}
 	}
 	msg := fmt.Sprintf("math.Gamma overflows: %s%s", g.describe("math.Gamma("+src(call.Args[0])+")"), g.clause())
 	if !ok {
 		msg = fmt.Sprintf("math.Gamma overflows: %s; the argument is not bounded here", g.describe("math.Gamma("+src(call.Args[0])+")"))
 	}
+	msg += choice.clause()
 	fc.c.gammaLines[line] = true
 	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
 		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})

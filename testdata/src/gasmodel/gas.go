@@ -122,7 +122,23 @@ func Reports(n int) float64 {
 // WeibullVariance is the variance of a Weibull fit with scale lambda and
 // shape k: several Gamma calls on one line make one finding.
 func WeibullVariance(lambda, k float64) float64 {
-	return lambda * lambda * (math.Gamma(1+2/k) - math.Gamma(1+1/k)*math.Gamma(1+1/k)) // want `math.Gamma overflows: math.Gamma\(1 \+ 2 / k\) is \+Inf for arguments ≥ 171.62`
+	return lambda * lambda * (math.Gamma(1+2/k) - math.Gamma(1+1/k)*math.Gamma(1+1/k)) // want `math.Gamma overflows: math.Gamma\(1 \+ 2 / k\) is \+Inf for arguments ≥ 171.62.*; of the 3 math.Gamma calls on this line over 1/k, it overflows first`
+}
+
+// WeibullKurtosis is the excess kurtosis of a Weibull fit with shape k,
+// from the raw moments Γ(1+i/k), i = 1…4 (common practice). Of its
+// Gamma calls, Γ(1+4/k) reaches +Inf first as k falls: at k = 0.02 it
+// is Γ(201) = 200!, past float64, while Γ(1+2/k) = Γ(101) = 100! ≈
+// 9.33e157 is not (OEIS A000142). The finding names that call, not the
+// first one written.
+func WeibullKurtosis(k float64) float64 {
+	return (-6*math.Pow(math.Gamma(1+1/k), 4) + 12*math.Pow(math.Gamma(1+1/k), 2)*math.Gamma(1+2/k) - 3*math.Pow(math.Gamma(1+2/k), 2) - 4*math.Gamma(1+1/k)*math.Gamma(1+3/k) + math.Gamma(1+4/k)) / math.Pow(math.Gamma(1+2/k)-math.Pow(math.Gamma(1+1/k), 2), 2) // want `math.Gamma overflows: math.Gamma\(1 \+ 4 / k\) is \+Inf for arguments ≥ 171.62.*; of the 9 math.Gamma calls on this line over 1/k, it overflows first`
+}
+
+// WeibullSpread mixes terms: only calls over the same term are compared,
+// so the first written, over 1/k, is named.
+func WeibullSpread(k, m float64) float64 {
+	return math.Gamma(1+1/k) * math.Gamma(1+m) // want `math.Gamma overflows: math.Gamma\(1 \+ 1 / k\) is \+Inf for arguments ≥ 171.62\d*; the argument is not bounded here$`
 }
 
 // VolumeSeries sums the unit-ball volumes of dimensions 0 to dims-1, a
