@@ -157,18 +157,20 @@ func (f *Func) tableOf(x ast.Expr) *ast.CompositeLit {
 	return nil
 }
 
-// tableElems returns the element expressions of a slice or array
-// literal, and whether some element is left at its zero value (keyed
+// tableElems returns the element expressions of a slice, array or map
+// literal, and whether some element is left at its zero value (indexed
 // elements, or an array longer than its list).
 func tableElems(lit *ast.CompositeLit, t types.Type) ([]ast.Expr, bool) {
 	zero := false
 	if a, ok := t.Underlying().(*types.Array); ok && a.Len() > int64(len(lit.Elts)) {
 		zero = true
 	}
+	_, isMap := t.Underlying().(*types.Map)
 	elems := make([]ast.Expr, 0, len(lit.Elts))
 	for _, e := range lit.Elts {
 		if kv, ok := e.(*ast.KeyValueExpr); ok {
-			zero = true
+			// An index key may skip elements; a map has only its entries.
+			zero = zero || !isMap
 			e = kv.Value
 		}
 		elems = append(elems, e)
@@ -176,9 +178,16 @@ func tableElems(lit *ast.CompositeLit, t types.Type) ([]ast.Expr, bool) {
 	return elems, zero
 }
 
-// tableKey returns the range of the key over a table: its length is
-// known when no element is keyed.
+// tableKey returns the range of the key over a slice table: its length
+// is known when no element is keyed. An array's length is its type's,
+// which rangeKey already gives ([4]int{1, 2} runs four trips), and a
+// map's keys are not indices.
 func (f *Func) tableKey(lit *ast.CompositeLit) (Interval, bool) {
+	if tv, ok := f.info.Types[lit]; !ok || tv.Type == nil {
+		return Interval{}, false
+	} else if _, isSlice := tv.Type.Underlying().(*types.Slice); !isSlice {
+		return Interval{}, false
+	}
 	for _, e := range lit.Elts {
 		if _, ok := e.(*ast.KeyValueExpr); ok {
 			return Interval{}, false

@@ -46,6 +46,24 @@ func sparse() int {
 	}
 	return s
 }`},
+	{"an array longer than its list runs its whole length", `package p
+func padded() int {
+	s := 0
+	for i, n := range [4]int{6, 8} {
+		s += i/*@range [0, 3]*/
+		s += n/*@range [0, 8]*/
+	}
+	return s
+}`},
+	{"a map table's keys are not indices", `package p
+func byName() int {
+	s := 0
+	for k, n := range map[int]int{10: 2, 20: 5} {
+		s += k/*@range (-inf, +inf)*/
+		s += n/*@range [2, 5]*/
+	}
+	return s
+}`},
 	{"a table passed to a function may change", `package p
 func touch([]int) {}
 func passed() int {
