@@ -32,6 +32,7 @@ type fnCtx struct {
 	// gammaCalls holds the function's math.Gamma calls by line, gathered
 	// once (see gammaCallsOn).
 	gammaCalls map[token.Position][]*ast.CallExpr
+	parents    map[ast.Node]ast.Node // of the function body, for gammaEscapes
 }
 
 // maxVisits bounds the range analysis of one function; past it the

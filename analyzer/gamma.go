@@ -324,7 +324,12 @@ func (fc *fnCtx) gammaEscapes(call *ast.CallExpr) bool {
 	if root == nil {
 		return true
 	}
-	return fc.meetsArith(root, call, parentsIn(root), make(map[*types.Var]bool))
+	if fc.parents == nil {
+		// Built once per function: a line of several Gamma calls asks
+		// for each of them.
+		fc.parents = parentsIn(root)
+	}
+	return fc.meetsArith(root, call, fc.parents, make(map[*types.Var]bool))
 }
 
 // meetsArith reports whether the value of e meets arithmetic, following

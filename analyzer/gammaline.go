@@ -34,11 +34,13 @@ func (fc *fnCtx) firstToOverflow(call *ast.CallExpr, first float64) gammaChoice 
 	}
 	bestAt := (first - c0) / k0
 	for _, other := range fc.gammaCallsOn(fc.c.lineOf(call)) {
-		if other == call || !fc.gammaReportable(other) {
+		if other == call {
 			continue
 		}
+		// The form first: it reads the argument alone, while whether
+		// the call is reportable asks how its value is used.
 		c, k, t, ok := fc.scaledTerm(other.Args[0], 0)
-		if !ok || t != t0 || k <= 0 {
+		if !ok || t != t0 || k <= 0 || !fc.gammaReportable(other) {
 			continue
 		}
 		best.sharing++

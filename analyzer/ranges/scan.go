@@ -58,14 +58,14 @@ func (f *Func) scan(body ast.Node) {
 			}
 			f.escapes[obj] = append(f.escapes[obj], escape{at, loop})
 		}
-		noteTableUses(f.info, n, f.tableUses)
+		if f.tableUses != nil {
+			// A local is declared before it is used, so until a table
+			// candidate is declared there is nothing to count.
+			noteTableUses(f.info, n, f.tableUses)
+		}
 		switch n := n.(type) {
 		case *ast.ValueSpec:
-			names := make([]ast.Expr, len(n.Names))
-			for i, id := range n.Names {
-				names[i] = id
-			}
-			f.noteTableDecl(names, n.Values)
+			f.noteTableDecl(specNames(n), n.Values)
 		case *ast.ForStmt:
 			loops = append(loops, n)
 		case *ast.FuncLit:

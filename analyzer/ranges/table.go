@@ -40,6 +40,16 @@ func tableDecls(info *types.Info, names []ast.Expr, values []ast.Expr, add func(
 	}
 }
 
+// specNames returns the names a var spec declares, as expressions like
+// the left side of a := declaration.
+func specNames(vs *ast.ValueSpec) []ast.Expr {
+	names := make([]ast.Expr, len(vs.Names))
+	for i, id := range vs.Names {
+		names[i] = id
+	}
+	return names
+}
+
 // noteTableDecl records the locals a declaration gives a literal.
 func (f *Func) noteTableDecl(names []ast.Expr, values []ast.Expr) {
 	tableDecls(f.info, names, values, func(obj types.Object, lit *ast.CompositeLit) {
@@ -109,11 +119,7 @@ func PackageTables(info *types.Info, files []*ast.File) map[types.Object]*ast.Co
 				if !ok {
 					continue
 				}
-				names := make([]ast.Expr, len(vs.Names))
-				for i, id := range vs.Names {
-					names[i] = id
-				}
-				tableDecls(info, names, vs.Values, func(obj types.Object, lit *ast.CompositeLit) {
+				tableDecls(info, specNames(vs), vs.Values, func(obj types.Object, lit *ast.CompositeLit) {
 					if _, isVar := obj.(*types.Var); isVar && !obj.Exported() {
 						lits[obj], uses[obj] = lit, &tableUses{}
 					}
