@@ -52,6 +52,10 @@ type checker struct {
 	// gammaLines holds the lines with a Gamma finding: one is enough
 	// for an expression with several Gamma calls.
 	gammaLines map[token.Position]bool
+	// rewritten holds the nodes that a reported fix replaces, and held
+	// the findings whose guard waits for them (holdGuard).
+	rewritten []ast.Node
+	held      []heldGuard
 }
 
 type reportKey struct {
@@ -118,6 +122,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
 	}
+	c.releaseGuards()
 	return nil, nil
 }
 

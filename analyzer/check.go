@@ -220,8 +220,13 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		Func:    fc.node,
 	}
 	// A double factorial n!! gets the same guard as n!, with its own
-	// first bad n.
-	if al.kind != kindFactorial && al.kind != kindDouble {
+	// first bad n. The guard tests the function's argument, so it is
+	// right only where the product is what the function returns: a
+	// product that feeds a sum, a ratio or a conversion (a series term
+	// x^k/k!, 1/float64(f)) may still give a correct result past the
+	// point where the product itself no longer fits, and a guard would
+	// make that function panic.
+	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) {
 		m.Shape = fixes.ShapeNone
 	}
 	if al.top != nil {
@@ -230,6 +235,18 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		m.FirstBad = firstBadOf(al.kind, t) - al.topOff
 	}
 	return m
+}
+
+// returnsProduct reports whether al's product is the value of its
+// function: a factorial-valued function of this package whose loop
+// accumulates into the same variable.
+func (fc *fnCtx) returnsProduct(al *accLoop) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	return ff != nil && ff.loop != nil && ff.loop.acc == al.acc
 }
 
 // checkRecursion reports a recursive factorial whose parameter is not

@@ -3,6 +3,7 @@ package analyzer
 import (
 	"go/ast"
 	"go/token"
+	"go/types"
 
 	"golang.org/x/tools/go/analysis"
 
@@ -47,9 +48,89 @@ func (fc *fnCtx) report(f finding) {
 	}
 	if f.match != nil && !fc.noFix {
 		f.match.File = fi.file
+		if c.holdGuard(d, f.match) {
+			return
+		}
 		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
+		if len(d.SuggestedFixes) > 0 {
+			c.rewritten = append(c.rewritten, f.match.Node)
+		}
 	}
 	c.pass.Report(d)
+}
+
+// heldGuard is a float factorial function's finding whose range guard
+// waits for the end of the pass (see holdGuard).
+type heldGuard struct {
+	d analysis.Diagnostic
+	m fixes.Match
+}
+
+// holdGuard keeps back the finding d of a float-valued factorial
+// function whose fix is a range guard. Past its limit such a function
+// returns +Inf, and a caller such as x/fact(k) or a series term may still
+// compute its own result correctly from that; a guard would make that
+// caller panic. So the guard is offered only where every call of the
+// function in the package lies in an expression that a fix rewrites
+// without it, which the end of the pass knows (releaseGuards).
+func (c *checker) holdGuard(d analysis.Diagnostic, m *fixes.Match) bool {
+	if m.Shape != fixes.ShapeFactorial || m.Result == nil {
+		return false
+	}
+	if b, ok := m.Result.Underlying().(*types.Basic); !ok || b.Info()&types.IsFloat == 0 {
+		return false // a wrapped integer is never a value a caller can use
+	}
+	c.held = append(c.held, heldGuard{d, *m})
+	return true
+}
+
+// releaseGuards reports the held findings, each with its guard only
+// where no call of its function is left to see the guard fire.
+func (c *checker) releaseGuards() {
+	for _, h := range c.held {
+		if decl, ok := h.m.Func.(*ast.FuncDecl); ok && c.callsRewritten(c.declObj(decl)) {
+			h.d.SuggestedFixes = fixes.Suggest(c.pass, h.m)
+		}
+		c.pass.Report(h.d)
+	}
+	c.held = nil
+}
+
+// callsRewritten reports whether no call of fn in this package could
+// see a guard fire while its own result is still right: each call either
+// lies in an expression that a fix of this pass rewrites, or its value
+// never meets arithmetic (it is printed, compared, passed on), so that
+// the caller only carries n! itself, which does not fit. fn must never
+// be used as a value.
+func (c *checker) callsRewritten(fn *types.Func) bool {
+	if fn == nil {
+		return false
+	}
+	calls := c.callsOf(fn)
+	if c.escapes[fn] {
+		return false
+	}
+	for _, call := range calls {
+		if c.inRewrite(call) {
+			continue
+		}
+		outer := c.enclosingFunc(call)
+		if outer == nil || c.ctx(outer).gammaEscapes(call) {
+			return false
+		}
+	}
+	return true
+}
+
+// inRewrite reports whether n lies in an expression that a reported
+// fix replaces.
+func (c *checker) inRewrite(n ast.Node) bool {
+	for _, r := range c.rewritten {
+		if r.Pos() <= n.Pos() && n.End() <= r.End() {
+			return true
+		}
+	}
+	return false
 }
 
 // reportDirective reports a malformed directive; these are never

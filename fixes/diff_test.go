@@ -96,6 +96,12 @@ var diffCases = []diffCase{
 	{pkg: "fixguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Pairings", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
 	{pkg: "fixguard", fn: "PairingsRec", loops: []string{"n := 0; n <= 25; n++"}, args: "int32(n)", typ: "int32", ref: refDoubleFactorial, guard: true},
+	// Right before the fixes wherever the factorial inside them overflows
+	// (the term or sum is finite, or below the smallest float64): no fix
+	// may make them panic there.
+	{pkg: "fixseries", fn: "Decay", loops: []string{"k := 0; k <= 260; k += 3"}, args: "1, k", typ: "float64", ref: refDecay, noBreak: true},
+	{pkg: "fixseries", fn: "ExpSeries", loops: []string{"x := 1; x <= 16; x *= 2", "n := 0; n <= 260; n += 7"}, args: "float64(x) / 2, n", typ: "float64", ref: refExpSeries, noBreak: true},
+	{pkg: "fixseries", fn: "Tail", loops: []string{"n := 0; n <= 260; n += 3"}, args: "n", typ: "float64", ref: refTail, noBreak: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 }
 

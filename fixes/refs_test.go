@@ -168,3 +168,23 @@ func refDrift(x []float64) *big.Float {
 	k, b, g := int64(x[0]), int64(x[1]), x[2]
 	return mul(quo(bf(factorialBig(k+b-1)), bf(factorialBig(b-1))), powBig(g, k))
 }
+
+// refDecay is a^(k+1)/k! for (a, k), exactly.
+func refDecay(x []float64) *big.Float {
+	return quo(powBig(x[0], int64(x[1])+1), bf(factorialBig(int64(x[1]))))
+}
+
+// refExpSeries is the partial sum of the series of e^x (DLMF 4.2.19),
+// the sum of x^k/k! for k = 0 … n, for (x, n).
+func refExpSeries(x []float64) *big.Float {
+	sum := fl(0)
+	for k := int64(0); k <= int64(x[1]); k++ {
+		sum = new(big.Float).SetPrec(refPrec).Add(sum, refPowFact([]float64{x[0], float64(k)}))
+	}
+	return sum
+}
+
+// refTail is 1/n!.
+func refTail(x []float64) *big.Float {
+	return quo(fl(1), bf(factorialBig(int64(x[0]))))
+}

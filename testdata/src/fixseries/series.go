@@ -1,0 +1,49 @@
+// Package fixseries is a kiln-cooling lab's series code: sums and terms
+// whose true values are small although a factorial inside them no longer
+// fits a float64. Past that point the code still returns the right
+// value, and a fix must not make it panic there.
+package fixseries
+
+import "math"
+
+// factorial returns n! in float64.
+func factorial(n int) float64 { // want factorial:"factorial of parameter 0"
+	f := 1.0
+	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+		f *= float64(i)
+	}
+	return f
+}
+
+// Decay is the kiln's cooling term a^(k+1)/k!. Past k = 170 the divisor
+// is +Inf, and for a ≤ 1 the term is then below the smallest float64, so
+// 0 is its correctly rounded value.
+func Decay(a float64, k int) float64 {
+	return math.Pow(a, float64(k+1)) / factorial(k) // want `term with a\^\(k \+ 1\) over k! in float64`
+}
+
+// Label prints the number of firing orders of n trays.
+func Label(n int) float64 { // want Label:"factorial of parameter 0"
+	return factorial(n)
+}
+
+// ExpSeries sums 1 + x + x^2/2! + ... + x^terms/terms!, keeping the
+// factorial in the loop that sums the terms.
+func ExpSeries(x float64, terms int) float64 {
+	sum, fact := 1.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		fact *= float64(k)
+		sum += math.Pow(x, float64(k)) / fact
+	}
+	return sum
+}
+
+// Tail is 1/n!, the weight of the n-th term, from an integer product
+// converted at the end.
+func Tail(n int) float64 {
+	p := 1.0
+	for i := 1; i <= n; i++ { // want "factorial of n in float64"
+		p *= float64(i)
+	}
+	return 1 / p
+}
