@@ -227,6 +227,9 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 	// point where the product itself no longer fits, and a guard would
 	// make that function panic.
 	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) {
+		if st := fc.seriesTermMatch(al); st != nil {
+			return st
+		}
 		m.Shape = fixes.ShapeNone
 	}
 	if al.top != nil {

@@ -101,6 +101,8 @@ var diffCases = []diffCase{
 	// may make them panic there.
 	{pkg: "fixseries", fn: "Decay", loops: []string{"k := 0; k <= 260; k += 3"}, args: "1, k", typ: "float64", ref: refDecay, noBreak: true},
 	{pkg: "fixseries", fn: "ExpSeries", loops: []string{"x := 1; x <= 16; x *= 2", "n := 0; n <= 260; n += 7"}, args: "float64(x) / 2, n", typ: "float64", ref: refExpSeries, noBreak: true},
+	{pkg: "fixseries", fn: "ExpSeries", loops: []string{"x := 100; x <= 300; x += 100", "n := 100; n <= 400; n += 20"}, args: "float64(x), n", typ: "float64", ref: refExpSeries},
+	{pkg: "fixseries", fn: "CoolingSum", loops: []string{"x := 1; x <= 300; x += 23", "n := 0; n <= 400; n += 20"}, args: "float64(x), int64(n)", typ: "float64", ref: refExpSeries},
 	{pkg: "fixseries", fn: "Tail", loops: []string{"n := 0; n <= 260; n += 3"}, args: "n", typ: "float64", ref: refTail, noBreak: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 }

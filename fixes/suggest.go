@@ -71,6 +71,7 @@ func init() {
 		ShapeFallingLoop:      buildLoop,
 		ShapeFactorial:        buildGuard,
 		ShapeFactorialValue:   buildValue,
+		ShapeSeriesTerm:       buildSeriesTerm,
 	}
 }
 

@@ -47,3 +47,48 @@ func Tail(n int) float64 {
 	}
 	return 1 / p
 }
+
+// ExpTail sums the same series and also returns the last factorial, so
+// the running factorial stays: only the terms could be rewritten, and a
+// fix that kept half the loop's state is not offered.
+func ExpTail(x float64, terms int) (float64, float64) {
+	sum, fact := 1.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		fact *= float64(k)
+		sum += math.Pow(x, float64(k)) / fact
+	}
+	return sum, fact
+}
+
+// Lagged adds x^k/(k-1)!: the term reads the factorial before its
+// update, so it is no x^k/k! and keeps its loop as written.
+func Lagged(x float64, terms int) float64 {
+	sum, fact := 0.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		sum += math.Pow(x, float64(k)) / fact
+		fact *= float64(k)
+	}
+	return sum
+}
+
+// Shifted adds x^(k+1)/k!, whose power is not the factorial's count.
+func Shifted(x float64, terms int) float64 {
+	sum, fact := 0.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		fact *= float64(k)
+		sum += math.Pow(x, float64(k+1)) / fact
+	}
+	return sum
+}
+
+// CoolingSum is ExpSeries written with its own declarations and the
+// update spelled out in full, over an int64 count.
+func CoolingSum(rate float64, steps int64) float64 {
+	var sum float64 = 1
+	f := 1.0
+	for j := int64(1); j <= steps; j++ { // want "factorial of steps in float64"
+		f = f * float64(j)
+		sum += math.Pow(rate, float64(j)) / f
+	}
+	return sum
+}
