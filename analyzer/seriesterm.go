@@ -42,18 +42,33 @@ func (fc *fnCtx) seriesTermMatch(al *accLoop) *fixes.Match {
 	if term == nil || reads != 1 {
 		return nil
 	}
-	pow, ok := unparen(term.X).(*ast.CallExpr)
-	if !ok || !fc.c.isMathFunc(pow, "Pow") || len(pow.Args) != 2 || fc.c.objOf(fc.stripConv(pow.Args[1])) != al.shape.iv {
-		return nil
+	// The fixes package knows the numerators it can rewrite (a power of
+	// the counter, a Poisson term, a running power); asking it to build
+	// a fix costs a type-check, so only those that can be one are passed.
+	if !fc.powOfCounter(term.X, al.shape.iv) {
+		if _, ok := unparen(term.X).(*ast.Ident); !ok {
+			return nil
+		}
 	}
 	return &fixes.Match{
 		Shape:   fixes.ShapeSeriesTerm,
 		Node:    term,
-		Args:    []ast.Expr{pow.Args[0], fc.stripConv(pow.Args[1])},
 		Result:  info.TypeOf(term),
 		Acc:     al.acc,
 		AccInit: al.accInit,
 		Loop:    al.shape.stmt,
 		Func:    fc.node,
 	}
+}
+
+// powOfCounter reports whether e holds math.Pow(·, iv) among the
+// factors it multiplies.
+func (fc *fnCtx) powOfCounter(e ast.Expr, iv types.Object) bool {
+	switch e := unparen(e).(type) {
+	case *ast.BinaryExpr:
+		return e.Op == token.MUL && (fc.powOfCounter(e.X, iv) || fc.powOfCounter(e.Y, iv))
+	case *ast.CallExpr:
+		return fc.c.isMathFunc(e, "Pow") && len(e.Args) == 2 && fc.c.objOf(fc.stripConv(e.Args[1])) == iv
+	}
+	return false
 }

@@ -36,7 +36,7 @@ const (
 	ShapeGamma                  // a bare math.Gamma(x)                Args: x
 	ShapeFactorialValue         // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
 	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
-	ShapeSeriesTerm             // pow(x,k)/acc, acc = k! kept by the loop  Args: x, k (Node: the term; Acc, AccInit, Loop: the running factorial)
+	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

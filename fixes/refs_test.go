@@ -188,3 +188,14 @@ func refExpSeries(x []float64) *big.Float {
 func refTail(x []float64) *big.Float {
 	return quo(fl(1), bf(factorialBig(int64(x[0]))))
 }
+
+// refPoissonCDF is the sum of λ^k e^(−λ)/k! for k = 0 … n, for (λ, n)
+// (DLMF 8.4.10 relates it to the incomplete gamma function; the sum is
+// the definition).
+func refPoissonCDF(x []float64) *big.Float {
+	sum := fl(0)
+	for k := int64(0); k <= int64(x[1]); k++ {
+		sum = new(big.Float).SetPrec(refPrec).Add(sum, refPoisson([]float64{float64(k), x[0]}))
+	}
+	return sum
+}

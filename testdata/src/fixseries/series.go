@@ -92,3 +92,38 @@ func CoolingSum(rate float64, steps int64) float64 {
 	}
 	return sum
 }
+
+// CoolingPower keeps the power beside the factorial, as x^k/k! is often
+// written: both overflow long before their quotient does.
+func CoolingPower(x float64, terms int) float64 {
+	sum, fact, pow := 1.0, 1.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		fact *= float64(k)
+		pow *= x
+		sum += pow / fact
+	}
+	return sum
+}
+
+// LateCount is the chance that a kiln sees at most n cracks in a batch
+// whose mean is lambda: a Poisson sum with its factorial in the loop.
+func LateCount(lambda float64, n int) float64 {
+	cdf, fact := math.Exp(-lambda), 1.0
+	for k := 1; k <= n; k++ { // want "factorial of n in float64"
+		fact *= float64(k)
+		cdf += math.Exp(-lambda) * math.Pow(lambda, float64(k)) / fact
+	}
+	return cdf
+}
+
+// PowerFirst reads the power before it is updated, so its term is
+// x^(k-1)/k! and it keeps its loop.
+func PowerFirst(x float64, terms int) float64 {
+	sum, fact, pow := 0.0, 1.0, 1.0
+	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
+		fact *= float64(k)
+		sum += pow / fact
+		pow *= x
+	}
+	return sum
+}
