@@ -358,8 +358,8 @@ func (fc *fnCtx) meetsArith(root ast.Node, e ast.Expr, parents map[ast.Node]ast.
 type gammaUseKind int
 
 const (
-	useOther  gammaUseKind = iota // compared, passed on, discarded
-	useArith                      // operand of arithmetic, or returned
+	useOther  gammaUseKind = iota // compared, passed on, returned, discarded
+	useArith                      // operand of arithmetic
 	useStored                     // the right-hand side of an assignment
 )
 
@@ -391,7 +391,10 @@ func (fc *fnCtx) gammaUse(e ast.Expr, parents map[ast.Node]ast.Node) (ast.Expr, 
 		case *ast.ValueSpec:
 			return e, useStored
 		case *ast.ReturnStmt:
-			return e, useArith
+			// A function that returns Γ as it is (or converted) returns
+			// +Inf exactly where the true value does not fit: the honest
+			// float result, and its callers' arithmetic is theirs.
+			return e, useOther
 		case *ast.CallExpr:
 			if len(p.Args) == 1 && (fc.isConversion(p) || fc.c.isMathFunc(p, "Abs")) {
 				e = p

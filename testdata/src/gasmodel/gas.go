@@ -72,9 +72,16 @@ func HalfIntegerGamma() float64 {
 	return math.Gamma(5.5)
 }
 
-// Furnace is Γ(200), which is always +Inf.
+// Furnace is Γ(200), which is always +Inf: returned as it is, that is
+// the honest float64 value of a number past the range.
 func Furnace() float64 {
-	return math.Gamma(200) // want `math.Gamma overflows: math.Gamma\(200\) is \+Inf for arguments ≥ 171.62.*; the argument is always past it here`
+	return math.Gamma(200)
+}
+
+// FurnaceShare divides by Γ(200), which is always +Inf, so the share is
+// always 0 although its true value is not.
+func FurnaceShare(heat float64) float64 {
+	return heat / math.Gamma(200) // want `math.Gamma overflows: math.Gamma\(200\) is \+Inf for arguments ≥ 171.62.*; the argument is always past it here`
 }
 
 // SpeedRatio is Γ(n+1/2)/Γ(n) for the speed moments, with n from the
@@ -96,9 +103,16 @@ func FixedRatio() float64 {
 	return math.Gamma(7.5) / math.Gamma(3.5)
 }
 
-// Shape is Γ(x) of a fitted shape parameter that nothing bounds.
+// Shape is Γ(x) of a fitted shape parameter that nothing bounds,
+// returned as it is: +Inf where Γ(x) exceeds float64 is the right value.
 func Shape(x float64) float64 {
-	return math.Gamma(x) // want `math.Gamma overflows: math.Gamma\(x\) is \+Inf for x ≥ 171.62.*; x is not bounded here`
+	return math.Gamma(x)
+}
+
+// ShapeWeight divides by Γ(x) of that parameter: past x ≈ 171.62 the
+// weight is 0 although its true value is not.
+func ShapeWeight(w, x float64) float64 {
+	return w / math.Gamma(x) // want `math.Gamma overflows: math.Gamma\(x\) is \+Inf for x ≥ 171.62.*; x is not bounded here`
 }
 
 // Levels is Γ(n+1) for the 170 energy levels of the model.
