@@ -47,7 +47,7 @@ func (fc *fnCtx) report(f finding) {
 	}
 	if f.match != nil && !fc.noFix {
 		f.match.File = fi.file
-		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
+		d.SuggestedFixes = c.fixer.Suggest(*f.match)
 	}
 	c.pass.Report(d)
 }
