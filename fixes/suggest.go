@@ -151,6 +151,8 @@ func (b *builder) replace(pos, end token.Pos, text string) {
 // returns the fix.
 func (b *builder) finish() (analysis.SuggestedFix, error) {
 	b.removeUnusedImports()
+	b.keepComments()
+	b.matchLineEndings()
 	sort.SliceStable(b.edits, func(i, j int) bool {
 		if b.edits[i].Pos != b.edits[j].Pos {
 			return b.edits[i].Pos < b.edits[j].Pos
