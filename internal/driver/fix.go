@@ -29,8 +29,11 @@ type fixPlan struct {
 	takenAt  []string        // where they are and what they say, for messages
 	clashed  int             // fixes left for a later round: their edits overlap a taken fix
 	deferred int             // definitions' fixes left for a later round (see planFixes)
-	refused  []string        // packages not fixed because they have errors
+	refused  []refusal       // packages not fixed because they have errors
 }
+
+// A refusal is a package left unfixed, and its first error.
+type refusal struct{ pkg, first string }
 
 // A finding is where a diagnostic lies, by physical file and byte offset,
 // and its category: what identifies it across the rounds of -fix, once
@@ -73,7 +76,11 @@ func planFixes(roots []*checker.Action, done map[finding]bool) *fixPlan {
 			continue
 		}
 		if len(act.Package.Errors) > 0 || act.Package.IllTyped {
-			p.refused = append(p.refused, act.Package.ID)
+			r := refusal{pkg: act.Package.ID}
+			if len(act.Package.Errors) > 0 {
+				r.first = act.Package.Errors[0].Error()
+			}
+			p.refused = append(p.refused, r)
 			continue
 		}
 		fset := act.Package.Fset

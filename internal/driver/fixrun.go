@@ -32,12 +32,16 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 	done := make(map[finding]bool)       // findings whose fix was applied
 	for round := 1; ; round++ {
 		plan := planFixes(graph.Roots, done)
-		for _, id := range plan.refused {
+		for _, ref := range plan.refused {
 			if round == 1 {
-				r.errorf("not fixing %s: the package has errors", id)
+				r.errorf("not fixing %s: the package has errors", ref.pkg)
 				continue
 			}
-			r.errorf("the fixes of %s do not type-check together; no file written", id)
+			// The fixed text is checked before it is written: a package
+			// that no longer loads (an import the module cannot resolve,
+			// such as a helper module it does not require) or
+			// type-checks is never written.
+			r.errorf("the fixed code of %s does not build: %s; %s", ref.pkg, ref.first, r.nothingDone())
 			return
 		}
 		if len(plan.taken) == 0 {
@@ -52,7 +56,7 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 		}
 		next, ok := r.analyze(a, patterns, contents, false)
 		if !ok {
-			r.errorf("no file written")
+			r.errorf("%s", r.nothingDone())
 			return
 		}
 		graph = next
@@ -83,14 +87,14 @@ func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, do
 				err = r.src.check(name, old)
 			}
 			if err != nil {
-				r.errorf("%v; no file written", err)
+				r.errorf("%v; %s", err, r.nothingDone())
 				return false
 			}
 			originals[name] = old
 		}
 		fixed, err := textedit.Apply(old, textEdits(plan.files[name]))
 		if err != nil {
-			r.errorf("fixing %s: %v; no file written", name, err)
+			r.errorf("fixing %s: %v; %s", name, err, r.nothingDone())
 			return false
 		}
 		contents[name] = fixed
@@ -118,6 +122,15 @@ func textEdits(edits []edit) []textedit.Edit {
 		out[i] = e.Edit
 	}
 	return out
+}
+
+// nothingDone says that a run stopped before writing (or printing)
+// anything.
+func (r *run) nothingDone() string {
+	if r.opts.Diff {
+		return "no diff printed"
+	}
+	return "no file written"
 }
 
 // heldBack reports the fixes still offered after the last round.
