@@ -135,8 +135,11 @@ func (r *run) nothingDone() string {
 
 // heldBack reports the fixes still offered after the last round.
 func (r *run) heldBack(plan *fixPlan) {
-	n := len(plan.taken) + plan.clashed + plan.deferred
-	r.errorf("%d fixes still to apply after %d rounds were held back; run -fix again to apply them:", n, maxFixRounds)
+	n, what := len(plan.taken)+plan.clashed+plan.deferred, "fixes were"
+	if n == 1 {
+		what = "fix was"
+	}
+	r.errorf("stopped after %d rounds of fixes: %d more %s offered and held back; run -fix again to apply them (positions in the fixed text):", maxFixRounds, n, what)
 	for i, where := range plan.takenAt {
 		if i == maxHeldBackShown {
 			fmt.Fprintf(r.opts.Stderr, "\t... and %d more\n", len(plan.takenAt)-i)

@@ -272,3 +272,31 @@ func TestFixCRLF(t *testing.T) {
 		t.Errorf("CRLF file after -fix:\n%q\nwant:\n%q", got, want)
 	}
 }
+
+// growAnalyzer never runs out of fixes: it reports the last declaration
+// of every file, with a fix that appends another declaration after it.
+var growAnalyzer = &analysis.Analyzer{
+	Name: "grow",
+	Doc:  "reports the last declaration and appends one",
+	Run: func(pass *analysis.Pass) (any, error) {
+		for _, f := range pass.Files {
+			last := f.Decls[len(f.Decls)-1]
+			pass.Report(analysis.Diagnostic{Pos: last.Pos(), Message: "last declaration",
+				SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: last.End(), End: last.End(), NewText: []byte("\n\nvar _ = 0")}}}}})
+		}
+		return nil, nil
+	},
+}
+
+// TestFixRoundsBounded checks that -fix stops after its last round when
+// fixes keep coming, says how many it held back and where, and exits 1.
+func TestFixRoundsBounded(t *testing.T) {
+	dir := noteModule(t, map[string]string{"p.go": "package p\n\nvar _ = 0\n"})
+	code, stderr := runFix(growAnalyzer, dir)
+	if code != ExitError || !strings.Contains(stderr, "stopped after 16 rounds of fixes: 1 more fix was offered and held back") || !strings.Contains(stderr, "p.go:") {
+		t.Errorf("exit code %d, stderr %q; want 1 and the held-back fix listed", code, stderr)
+	}
+	if got := strings.Count(readFile(t, filepath.Join(dir, "p.go")), "var _ = 0"); got != 1+maxFixRounds {
+		t.Errorf("%d declarations after -fix, want %d: one per round", got, 1+maxFixRounds)
+	}
+}
