@@ -109,47 +109,54 @@ func TestFixManyFindings(t *testing.T) {
 }
 
 // TestFixConcurrentProcesses starts two -fix processes over one module
-// at the same moment, a few times over. Whichever writes first, every
-// file must afterwards parse and hold either its original text or the
-// complete fixed text, never a mixture.
+// at the same moment (repeat it with -count=N). Whichever writes first,
+// the other either writes the same fixes or finds the files changed and
+// writes nothing: at least one succeeds, every file parses, and the
+// module builds. (TestFixConcurrentRuns in internal/driver forces the
+// order where the second run applies its fixes after the first wrote.)
 func TestFixConcurrentProcesses(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs -fix twice and builds the result")
+	}
 	files := map[string]string{"go.mod": helperModule(t), "line/fact.go": factFile, "line/choose.go": chooseFile, "line/a.go": loopFile}
-	ref := writeModule(t, files)
-	if r := runIn(t, ref, isolated, "-fix", "./..."); r.code != 0 {
-		t.Fatalf("reference -fix: code %d\n%s", r.code, r.stderr)
+	dir := writeModule(t, files)
+	var wg sync.WaitGroup
+	results := make([]result, 2)
+	for i := range results {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			results[i] = runIn(t, dir, isolated, "-fix", "./...")
+		}()
 	}
-	for round := 0; round < 3; round++ {
-		dir := writeModule(t, files)
-		var wg sync.WaitGroup
-		results := make([]result, 2)
-		for i := range results {
-			wg.Add(1)
-			go func() {
-				defer wg.Done()
-				results[i] = runIn(t, dir, isolated, "-fix", "./...")
-			}()
-		}
-		wg.Wait()
-		for i, r := range results {
-			noPanic(t, r)
-			if r.code != 0 && r.code != 1 {
-				t.Errorf("round %d, run %d: code %d\n%s", round, i, r.code, r.stderr)
-			}
-		}
-		for name, orig := range files {
-			path := filepath.Join(dir, filepath.FromSlash(name))
-			got, _ := os.ReadFile(path)
-			if strings.HasSuffix(name, ".go") {
-				if _, err := parser.ParseFile(token.NewFileSet(), path, got, 0); err != nil {
-					t.Errorf("round %d: %s does not parse after two concurrent runs: %v\n%s", round, name, err, got)
-				}
-			}
-			want, _ := os.ReadFile(filepath.Join(ref, filepath.FromSlash(name)))
-			if string(got) != string(want) && string(got) != orig {
-				t.Errorf("round %d: %s is neither the original nor the fixed text:\n%s", round, name, got)
-			}
+	wg.Wait()
+	ok := 0
+	for i, r := range results {
+		noPanic(t, r)
+		switch {
+		case r.code == 0:
+			ok++
+		case r.code != 1 || !strings.Contains(r.stderr, "changed since it was analysed"):
+			t.Errorf("run %d: code %d\n%s", i, r.code, r.stderr)
 		}
 	}
+	if ok == 0 {
+		t.Errorf("neither run succeeded:\n%s%s", results[0].stderr, results[1].stderr)
+	}
+	for name, orig := range files {
+		if !strings.HasSuffix(name, ".go") {
+			continue
+		}
+		path := filepath.Join(dir, filepath.FromSlash(name))
+		got, _ := os.ReadFile(path)
+		if _, err := parser.ParseFile(token.NewFileSet(), path, got, 0); err != nil {
+			t.Errorf("%s does not parse after two concurrent runs: %v\n%s", name, err, got)
+		}
+		if string(got) == orig {
+			t.Errorf("%s was not fixed by the run that succeeded", name)
+		}
+	}
+	goBuild(t, dir)
 }
 
 // TestFixWithoutHelperModule runs -fix in a module that does not require
