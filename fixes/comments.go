@@ -38,7 +38,7 @@ func (b *builder) keepComments() {
 			continue
 		}
 		start := b.tok.LineStart(b.line(b.edits[i].Pos))
-		indent := b.indentAt(start)
+		indent := b.indentOf(start)
 		var sb strings.Builder
 		for _, t := range texts {
 			sb.WriteString(indent + t + "\n")
@@ -75,16 +75,6 @@ func (b *builder) inImportDecl(p token.Pos) bool {
 		}
 	}
 	return false
-}
-
-// indentAt returns the blanks that begin the line starting at start.
-func (b *builder) indentAt(start token.Pos) string {
-	off := b.offset(start)
-	end := off
-	for end < len(b.src) && (b.src[end] == ' ' || b.src[end] == '\t') {
-		end++
-	}
-	return string(b.src[off:end])
 }
 
 // matchLineEndings writes the line breaks of every edit as the file's own:
