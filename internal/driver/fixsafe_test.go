@@ -300,3 +300,33 @@ func TestFixRoundsBounded(t *testing.T) {
 		t.Errorf("%d declarations after -fix, want %d: one per round", got, 1+maxFixRounds)
 	}
 }
+
+// TestFixRestoresOnLateChange edits the second of two files after the
+// first was renamed into place: the run must put the first back, leave
+// the user's edit alone and exit 1, so that it still writes all or
+// nothing.
+func TestFixRestoresOnLateChange(t *testing.T) {
+	other := strings.ReplaceAll(noteSrc, "func f(", "func g(")
+	dir := noteModule(t, map[string]string{"p.go": noteSrc, "q.go": other})
+	q := filepath.Join(dir, "q.go")
+	edited := "// edited at the last moment\n" + other
+	testHookBeforeRename = func(name string) {
+		if name == q {
+			if err := os.WriteFile(q, []byte(edited), 0o644); err != nil {
+				t.Error(err)
+			}
+		}
+	}
+	defer func() { testHookBeforeRename = nil }()
+	code, stderr := runFix(noteAnalyzer, dir)
+	if code != ExitError || !strings.Contains(stderr, "q.go changed since it was analysed; restoring the files already written") {
+		t.Errorf("exit code %d, stderr %q; want 1 and the restore announced", code, stderr)
+	}
+	if got := readFile(t, filepath.Join(dir, "p.go")); got != noteSrc {
+		t.Errorf("p.go was not restored:\n%s", got)
+	}
+	if got := readFile(t, q); got != edited {
+		t.Errorf("q.go lost the user's edit:\n%s", got)
+	}
+	noLeftovers(t, dir)
+}

@@ -41,23 +41,30 @@ func (r *run) writeFixed(changes []change) {
 		}
 	}
 	for i, t := range targets {
+		if testHookBeforeRename != nil {
+			testHookBeforeRename(t.name)
+		}
 		if err := t.unchanged(r.src); err != nil {
 			if i == 0 {
 				r.errorf("%v; no file written", err)
 			} else {
-				r.errorf("%v; restoring the %d files already written", err, i)
+				r.errorf("%v; restoring the files already written", err)
 				r.restore(targets[:i])
 			}
 			return
 		}
 		if err := os.Rename(t.tmp, t.path); err != nil {
-			r.errorf("cannot write %s: %v; restoring the %d files already written", t.name, err, i)
+			r.errorf("cannot write %s: %v; restoring the files already written", t.name, err)
 			r.restore(targets[:i])
 			return
 		}
 		targets[i].tmp = ""
 	}
 }
+
+// testHookBeforeRename, when set by a test, runs just before each
+// target's last check and rename.
+var testHookBeforeRename func(name string)
 
 // A target is a file -fix writes.
 type target struct {
