@@ -29,11 +29,8 @@ type fixPlan struct {
 	takenAt  []string        // where they are and what they say, for messages
 	clashed  int             // fixes left for a later round: their edits overlap a taken fix
 	deferred int             // definitions' fixes left for a later round (see planFixes)
-	refused  []refusal       // packages not fixed because they have errors
+	refused  []string        // packages not fixed because they have errors
 }
-
-// A refusal is a package left unfixed, and its first error.
-type refusal struct{ pkg, first string }
 
 // A finding is where a diagnostic lies, by physical file and byte offset,
 // and its category: what identifies it across the rounds of -fix, once
@@ -76,11 +73,7 @@ func planFixes(roots []*checker.Action, done map[finding]bool) *fixPlan {
 			continue
 		}
 		if len(act.Package.Errors) > 0 || act.Package.IllTyped {
-			r := refusal{pkg: act.Package.ID}
-			if len(act.Package.Errors) > 0 {
-				r.first = act.Package.Errors[0].Error()
-			}
-			p.refused = append(p.refused, r)
+			p.refused = append(p.refused, act.Package.ID)
 			continue
 		}
 		fset := act.Package.Fset

@@ -30,19 +30,13 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 	contents := make(map[string][]byte)  // edited text of each changed file
 	originals := make(map[string][]byte) // its analysed text
 	done := make(map[finding]bool)       // findings whose fix was applied
+	broken := brokenRoots(graph.Roots)   // packages with errors before any fix
 	for round := 1; ; round++ {
 		plan := planFixes(graph.Roots, done)
-		for _, ref := range plan.refused {
-			if round == 1 {
-				r.errorf("not fixing %s: the package has errors", ref.pkg)
-				continue
+		if round == 1 {
+			for _, id := range plan.refused {
+				r.errorf("not fixing %s: the package has errors", id)
 			}
-			// The fixed text is checked before it is written: a package
-			// that no longer loads (an import the module cannot resolve,
-			// such as a helper module it does not require) or
-			// type-checks is never written.
-			r.errorf("the fixed code of %s does not build: %s; %s", ref.pkg, ref.first, r.nothingDone())
-			return
 		}
 		if len(plan.taken) == 0 {
 			break
@@ -59,6 +53,16 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 			r.errorf("%s", r.nothingDone())
 			return
 		}
+		// The fixed text is checked before it is written: a package
+		// that no longer loads (an import the module cannot resolve,
+		// such as a helper module it does not require) or type-checks
+		// is never written.
+		for id, first := range brokenRoots(next.Roots) {
+			if _, ok := broken[id]; !ok {
+				r.errorf("the fixed code of %s does not build: %s; %s", id, first, r.nothingDone())
+				return
+			}
+		}
 		graph = next
 	}
 	changes := changedFiles(contents, originals)
@@ -67,6 +71,22 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 		return
 	}
 	r.writeFixed(changes)
+}
+
+// brokenRoots returns the root packages that have errors, each with its
+// first error.
+func brokenRoots(roots []*checker.Action) map[string]string {
+	out := make(map[string]string)
+	for _, act := range roots {
+		pkg := act.Package
+		switch {
+		case len(pkg.Errors) > 0:
+			out[pkg.ID] = pkg.Errors[0].Error()
+		case pkg.IllTyped:
+			out[pkg.ID] = "the package does not type-check"
+		}
+	}
+	return out
 }
 
 // applyPlan applies a plan's edits to the current contents and carries

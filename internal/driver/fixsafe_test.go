@@ -2,6 +2,7 @@ package driver
 
 import (
 	"bytes"
+	"go/ast"
 	"go/parser"
 	"go/token"
 	"os"
@@ -32,7 +33,11 @@ func noteModule(t *testing.T, files map[string]string) string {
 	dir := t.TempDir()
 	files["go.mod"] = "module example.com/p\n\ngo 1.21\n"
 	for name, content := range files {
-		if err := os.WriteFile(filepath.Join(dir, name), []byte(content), 0o644); err != nil {
+		path := filepath.Join(dir, filepath.FromSlash(name))
+		if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(path, []byte(content), 0o644); err != nil {
 			t.Fatal(err)
 		}
 	}
@@ -329,4 +334,56 @@ func TestFixRestoresOnLateChange(t *testing.T) {
 		t.Errorf("q.go lost the user's edit:\n%s", got)
 	}
 	noLeftovers(t, dir)
+}
+
+// TestFixBesideBrokenPackage fixes a module where another package does
+// not type-check as written: that package is named and left alone, and
+// the others are still fixed (their fixed text builds).
+func TestFixBesideBrokenPackage(t *testing.T) {
+	broken := "package bad\n\nfunc h(x int) int {\n\tx *= y\n\treturn x\n}\n"
+	dir := noteModule(t, map[string]string{"p.go": noteSrc, "bad/bad.go": broken})
+	var stdout, stderr bytes.Buffer
+	code := Run(noteAnalyzer, []string{"./..."}, Options{Dir: dir, Fix: true, Stdout: &stdout, Stderr: &stderr})
+	if code != ExitError || !strings.Contains(stderr.String(), "example.com/p/bad") || strings.Contains(stderr.String(), "no file written") {
+		t.Errorf("exit code %d, stderr %q; want 1 and only the broken package refused", code, stderr.String())
+	}
+	if got := readFile(t, filepath.Join(dir, "p.go")); got != noteFixed {
+		t.Errorf("p.go:\n%s\nwant:\n%s", got, noteFixed)
+	}
+	if got := readFile(t, filepath.Join(dir, "bad", "bad.go")); got != broken {
+		t.Errorf("the broken package was changed:\n%s", got)
+	}
+}
+
+// breakAnalyzer offers a fix that does not compile, as a buggy analyzer
+// might: x *= y becomes x = x * undefinedFactor.
+var breakAnalyzer = &analysis.Analyzer{
+	Name: "break",
+	Doc:  "offers a fix that does not compile",
+	Run: func(pass *analysis.Pass) (any, error) {
+		for _, f := range pass.Files {
+			ast.Inspect(f, func(n ast.Node) bool {
+				if as, ok := n.(*ast.AssignStmt); ok && as.Tok == token.MUL_ASSIGN {
+					pass.Report(analysis.Diagnostic{Pos: as.Pos(), Message: "product",
+						SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: as.Pos(), End: as.End(), NewText: []byte("x = x * undefinedFactor")}}}}})
+				}
+				return true
+			})
+		}
+		return nil, nil
+	},
+}
+
+// TestFixThatDoesNotBuild checks that fixed text which no longer
+// type-checks is never written, whatever analyzer offered the fix.
+func TestFixThatDoesNotBuild(t *testing.T) {
+	src := "package p\n\nfunc f(x, i int) int {\n\tx *= i\n\treturn x\n}\n"
+	dir := noteModule(t, map[string]string{"p.go": src})
+	code, stderr := runFix(breakAnalyzer, dir)
+	if code != ExitError || !strings.Contains(stderr, "the fixed code of example.com/p does not build") || !strings.Contains(stderr, "undefinedFactor") {
+		t.Errorf("exit code %d, stderr %q; want 1 and the type error named", code, stderr)
+	}
+	if got := readFile(t, filepath.Join(dir, "p.go")); got != src {
+		t.Errorf("p.go was written:\n%s", got)
+	}
 }
