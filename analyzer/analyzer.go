@@ -9,6 +9,8 @@ import (
 	"os"
 
 	"golang.org/x/tools/go/analysis"
+
+	"github.com/overfact/overfact/fixes"
 )
 
 // Analyzer reports overflow-prone factorial arithmetic.
@@ -37,6 +39,7 @@ func init() {
 // checker holds the state of one pass.
 type checker struct {
 	pass      *analysis.Pass
+	fixer     *fixes.Fixer // the package's fixes share it; it dies with the pass
 	files     map[*token.File]*fileInfo
 	funcs     map[*types.Func]*facFunc // factorial-valued functions of this package
 	fnInfo    map[ast.Node]*fnCtx      // per analysed function
@@ -73,6 +76,7 @@ type fileInfo struct {
 func run(pass *analysis.Pass) (any, error) {
 	c := &checker{
 		pass:       pass,
+		fixer:      fixes.NewFixer(pass),
 		files:      make(map[*token.File]*fileInfo),
 		funcs:      make(map[*types.Func]*facFunc),
 		fnInfo:     make(map[ast.Node]*fnCtx),

@@ -51,7 +51,7 @@ func (fc *fnCtx) report(f finding) {
 		if c.holdGuard(d, f.match) {
 			return
 		}
-		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
+		d.SuggestedFixes = c.fixer.Suggest(*f.match)
 		if len(d.SuggestedFixes) > 0 {
 			c.rewritten = append(c.rewritten, f.match.Node)
 		}
@@ -89,7 +89,7 @@ func (c *checker) holdGuard(d analysis.Diagnostic, m *fixes.Match) bool {
 func (c *checker) releaseGuards() {
 	for _, h := range c.held {
 		if decl, ok := h.m.Func.(*ast.FuncDecl); ok && c.callsRewritten(c.declObj(decl)) {
-			h.d.SuggestedFixes = fixes.Suggest(c.pass, h.m)
+			h.d.SuggestedFixes = c.fixer.Suggest(h.m)
 		}
 		c.pass.Report(h.d)
 	}

@@ -54,6 +54,7 @@ var probeShapes = map[string]fixes.Shape{
 }
 
 func runProbe(pass *analysis.Pass) (any, error) {
+	fx := fixes.NewFixer(pass)
 	for _, f := range pass.Files {
 		for _, cg := range f.Comments {
 			for _, c := range cg.List {
@@ -66,7 +67,7 @@ func runProbe(pass *analysis.Pass) (any, error) {
 					pass.Reportf(c.Pos(), "bad probe: %v", err)
 					continue
 				}
-				found, err := fixes.Build(pass, m)
+				found, err := fx.Build(m)
 				msg := "probe " + sub[1]
 				if err != nil {
 					msg += ": no fix: " + err.Error()

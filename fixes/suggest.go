@@ -12,26 +12,26 @@ import (
 
 // Suggest returns the fixes for m, the recommended one first, or nil when
 // no value-preserving rewrite exists.
-func Suggest(pass *analysis.Pass, m Match) []analysis.SuggestedFix {
-	fixes, _ := Build(pass, m)
+func (fx *Fixer) Suggest(m Match) []analysis.SuggestedFix {
+	fixes, _ := fx.Build(m)
 	return fixes
 }
 
 // Build is Suggest with the reason a fix was refused, for callers that
 // want to explain a finding without a fix (and for tests).
-func Build(pass *analysis.Pass, m Match) (fixes []analysis.SuggestedFix, err error) {
+func (fx *Fixer) Build(m Match) (fixes []analysis.SuggestedFix, err error) {
 	// A fixer bug must cost a fix, never the analysis.
 	defer func() {
 		if r := recover(); r != nil {
 			fixes, err = nil, fmt.Errorf("internal error building the fix: %v", r)
 		}
 	}()
-	if !verificationsLeft(pass) {
+	if !fx.verificationsLeft() {
 		// Building a fix costs a walk of its function; past the budget
 		// the check would refuse it anyway, so do not build it.
 		return nil, errVerificationsSpent
 	}
-	b, err := newBuilder(pass, m)
+	b, err := newBuilder(fx, m)
 	if err != nil {
 		return nil, err
 	}
@@ -77,6 +77,7 @@ func init() {
 
 // A builder collects the edits of one fix to one file.
 type builder struct {
+	fx      *Fixer
 	pass    *analysis.Pass
 	m       Match
 	file    *ast.File
@@ -98,7 +99,8 @@ type span struct{ pos, end token.Pos }
 
 func (s span) contains(p token.Pos) bool { return s.pos <= p && p < s.end }
 
-func newBuilder(pass *analysis.Pass, m Match) (*builder, error) {
+func newBuilder(fx *Fixer, m Match) (*builder, error) {
+	pass := fx.pass
 	if m.File == nil || m.Node == nil {
 		return nil, errors.New("match has no file or node")
 	}
@@ -120,7 +122,7 @@ func newBuilder(pass *analysis.Pass, m Match) (*builder, error) {
 	if len(src) != tok.Size() {
 		return nil, fmt.Errorf("%s changed since it was parsed", tok.Name())
 	}
-	return &builder{pass: pass, m: m, file: m.File, tok: tok, src: src,
+	return &builder{fx: fx, pass: pass, m: m, file: m.File, tok: tok, src: src,
 		imports: make(map[string]string), added: make(map[string]bool)}, nil
 }
 
@@ -150,6 +152,8 @@ func (b *builder) replace(pos, end token.Pos, text string) {
 // returns the fix.
 func (b *builder) finish() (analysis.SuggestedFix, error) {
 	b.removeUnusedImports()
+	b.keepComments()
+	b.matchLineEndings()
 	sort.SliceStable(b.edits, func(i, j int) bool {
 		if b.edits[i].Pos != b.edits[j].Pos {
 			return b.edits[i].Pos < b.edits[j].Pos

@@ -6,9 +6,10 @@ import (
 	"go/parser"
 	"go/token"
 	"go/types"
-	"sort"
 
 	"golang.org/x/tools/go/analysis"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
 // verify applies the fix to the file and type-checks the package with the
@@ -16,7 +17,7 @@ import (
 // compile: a wrong conversion, a clashing name or a variable the fix left
 // unused are caught here rather than in the user's build.
 func (b *builder) verify() error {
-	if !spendVerification(b.pass) {
+	if !b.fx.spendVerification() {
 		return errVerificationsSpent
 	}
 	fixed, err := apply(b.src, b.tok, b.edits)
@@ -27,7 +28,7 @@ func (b *builder) verify() error {
 	// file set of the fixer's own (go/types compares positions, so the
 	// fixed file cannot join the pass's set under positions of its own);
 	// the other files are parsed once per package and shared by its fixes.
-	others, err := parsedFiles(b.pass)
+	others, err := b.fx.parsedFiles()
 	if err != nil {
 		return err
 	}
@@ -66,11 +67,11 @@ type parsed struct {
 	files map[*ast.File]*ast.File
 }
 
-func parsedFiles(pass *analysis.Pass) (*parsed, error) {
-	st := stateOf(pass)
-	if st.parsed != nil {
-		return st.parsed, nil
+func (fx *Fixer) parsedFiles() (*parsed, error) {
+	if fx.parsed != nil {
+		return fx.parsed, nil
 	}
+	pass := fx.pass
 	p := &parsed{fset: token.NewFileSet(), files: make(map[*ast.File]*ast.File)}
 	for _, f := range pass.Files {
 		name := pass.Fset.File(f.FileStart).Name()
@@ -84,7 +85,7 @@ func parsedFiles(pass *analysis.Pass) (*parsed, error) {
 		}
 		p.files[f] = pf
 	}
-	st.parsed = p
+	fx.parsed = p
 	return p, nil
 }
 
@@ -126,22 +127,14 @@ func (m importerMap) Import(path string) (*types.Package, error) {
 	return nil, fmt.Errorf("package %s is not a dependency", path)
 }
 
-// apply returns src with the non-overlapping edits applied.
+// apply returns src with the fix's edits applied, by the one applier
+// the command also writes fixes with.
 func apply(src []byte, tok *token.File, edits []analysis.TextEdit) ([]byte, error) {
-	sorted := append([]analysis.TextEdit(nil), edits...)
-	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].Pos < sorted[j].Pos })
-	var out []byte
-	last := 0
-	for _, e := range sorted {
-		start, end := tok.Offset(e.Pos), tok.Offset(e.End)
-		if start < last || end < start {
-			return nil, fmt.Errorf("overlapping edits at offset %d", start)
-		}
-		out = append(out, src[last:start]...)
-		out = append(out, e.NewText...)
-		last = end
+	es := make([]textedit.Edit, len(edits))
+	for i, e := range edits {
+		es[i] = textedit.Edit{Start: tok.Offset(e.Pos), End: tok.Offset(e.End), Text: string(e.NewText)}
 	}
-	return append(out, src[last:]...), nil
+	return textedit.Apply(src, es)
 }
 
 // maxVerifications bounds the fixes type-checked in one package. Each
@@ -155,19 +148,3 @@ func apply(src []byte, tok *token.File, edits []analysis.TextEdit) ([]byte, erro
 const maxVerifications = 32
 
 var errVerificationsSpent = fmt.Errorf("this package's %d fix checks are spent; apply the fixes offered so far and analyse again", maxVerifications)
-
-// verificationsLeft reports whether pass may still check a fix.
-func verificationsLeft(pass *analysis.Pass) bool {
-	return stateOf(pass).checks < maxVerifications
-}
-
-// spendVerification reports whether pass may check one more fix, and
-// counts it.
-func spendVerification(pass *analysis.Pass) bool {
-	st := stateOf(pass)
-	if st.checks >= maxVerifications {
-		return false
-	}
-	st.checks++
-	return true
-}

@@ -63,7 +63,7 @@ func fakeBuilder(t *testing.T, src string) *builder {
 		TypesSizes: types.SizesFor("gc", "amd64"),
 		ReadFile:   func(string) ([]byte, error) { return []byte(src), nil },
 	}
-	b, err := newBuilder(pass, Match{File: f, Node: f.Name})
+	b, err := newBuilder(NewFixer(pass), Match{File: f, Node: f.Name})
 	if err != nil {
 		t.Fatal(err)
 	}

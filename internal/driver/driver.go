@@ -55,7 +55,7 @@ const ProgressMin = 50
 
 // Run analyses the packages matching patterns and returns the exit code.
 func Run(a *analysis.Analyzer, patterns []string, opts Options) int {
-	r := &run{opts: opts}
+	r := &run{opts: opts, src: newSources()}
 	return r.main(a, patterns)
 }
 
@@ -64,6 +64,7 @@ type run struct {
 	dir      string // absolute
 	failed   bool   // an error happened
 	findings bool   // findings were reported (or a diff printed)
+	src      *sources
 }
 
 // code is the exit code: an error outranks findings, so that a broken
@@ -111,16 +112,13 @@ func (r *run) analyze(a *analysis.Analyzer, patterns []string, overlay map[strin
 		r.errorf("%v", err)
 		return nil, false
 	}
-	analyzer, finish := a, func() {}
-	if overlay != nil {
-		analyzer = withOverlay(a, overlay)
-	}
+	analyzer, finish := withSources(a, overlay, r.src), func() {}
 	if first {
 		if n := printPackageErrors(r.opts.Stderr, r.dir, pkgs); n > 0 {
 			r.failed = true
 		}
 		if r.opts.Progress != nil {
-			analyzer, finish = withProgress(a, pkgs, r.opts.Progress)
+			analyzer, finish = withProgress(analyzer, pkgs, r.opts.Progress)
 		}
 	}
 	graph, err := checker.Analyze([]*analysis.Analyzer{analyzer}, pkgs, nil)
@@ -145,7 +143,8 @@ func (r *run) load(a *analysis.Analyzer, patterns []string, overlay map[string][
 		// Facts flow up from dependencies, which must be analysed too.
 		mode = packages.LoadAllSyntax | packages.NeedModule
 	}
-	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests, Overlay: overlay}
+	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests, Overlay: overlay,
+		ParseFile: r.src.parseFile(overlay)}
 	pkgs, err := packages.Load(cfg, patterns...)
 	if err == nil && len(pkgs) == 0 {
 		err = fmt.Errorf("%s matched no packages", strings.Join(patterns, " "))

@@ -6,80 +6,68 @@ import (
 	"go/ast"
 	"go/format"
 	"go/token"
-	"os"
-	"path/filepath"
 	"sort"
 	"strings"
 
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
-// An edit replaces bytes [start, end) of a file by text.
+// An edit is a text edit of one file.
 type edit struct {
-	file       string
-	start, end int
-	text       string
+	file string
+	textedit.Edit
 }
 
-// overlaps reports whether two edits of one file touch the same bytes;
-// two insertions at one point conflict too, since their order is unknown.
-func (e edit) overlaps(f edit) bool {
-	if e.file != f.file {
-		return false
-	}
-	if e.start == e.end && f.start == f.end {
-		return e.start == f.start
-	}
-	return e.start < f.end && f.start < e.end
-}
-
-// fixPlan is the set of accepted edits, per file.
+// fixPlan is the set of fixes taken in one round, their edits per file.
 type fixPlan struct {
 	files    map[string][]edit
 	accepted map[string]bool // fix keys, to drop the copy a test variant reports
-	// leftover counts, by findingKey, the findings whose fix clashed
-	// with an accepted one.
-	leftover map[string]int
-	refused  []string // packages not fixed because they have errors
+	taken    []finding       // the findings whose fixes were taken
+	takenAt  []string        // where they are and what they say, for messages
+	clashed  int             // fixes left for a later round: their edits overlap a taken fix
+	deferred int             // definitions' fixes left for a later round (see planFixes)
+	refused  []string        // packages not fixed because they have errors
 }
 
-// findingKey identifies a finding across re-analyses of edited text,
-// where its position moves but its file, category and message do not.
-func findingKey(fset *token.FileSet, d analysis.Diagnostic) string {
-	return fset.Position(d.Pos).Filename + "\x00" + d.Category + "\x00" + d.Message
+// A finding is where a diagnostic lies, by physical file and byte offset,
+// and its category: what identifies it across the rounds of -fix, once
+// its offset is carried through the edits of each round (see moved).
+type finding struct {
+	file     string
+	offset   int
+	category string
 }
 
-// fixText is the text a fix inserts, which stays the same when earlier
-// edits move its positions.
-func fixText(f analysis.SuggestedFix) string {
-	var sb strings.Builder
-	for _, te := range f.TextEdits {
-		sb.Write(te.NewText)
-		sb.WriteByte(0)
-	}
-	return sb.String()
-}
-
-func (p *fixPlan) leftoverCount() int {
-	n := 0
-	for _, c := range p.leftover {
-		n += c
-	}
-	return n
+func findingOf(fset *token.FileSet, d analysis.Diagnostic) finding {
+	p := fset.PositionFor(d.Pos, false)
+	return finding{p.Filename, p.Offset, d.Category}
 }
 
 // planFixes selects the first suggested fix of every root diagnostic,
-// skipping packages that did not type-check and generated files, and
-// dropping a fix whose edits overlap an accepted one (identical edits,
-// such as the same import added twice, coalesce). When only is not nil,
-// it takes only as many findings of each key as only counts: those left
-// over by the previous round. applied records, per finding key, the text
-// of the fixes applied so far; a finding of a leftover key whose fix was
-// already applied is one its fix did not silence, and is passed over so
-// that no fix is applied twice.
-func planFixes(roots []*checker.Action, only map[string]int, applied map[string]map[string]bool) *fixPlan {
-	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool), leftover: make(map[string]int)}
+// skipping packages that did not type-check, generated files and the
+// findings in done, whose fix was applied in an earlier round without
+// silencing them (a fix is never applied twice). A fix whose edits clash
+// with a taken one is left for the next round; identical edits, such as
+// the same import added by two fixes, coalesce.
+//
+// The fixes of factorial definitions (loops and recursions, whose fix is
+// a range guard) are taken only in a round that takes nothing else. A
+// guard bounds its factorial, which silences the findings of the ratios
+// and terms built from it, even in other packages; a ratio whose rewrite
+// was not yet offered (an analyzer may offer only so many fixes per
+// analysis) would then keep the guard's panic where its rewrite gives
+// the right value.
+func planFixes(roots []*checker.Action, done map[finding]bool) *fixPlan {
+	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool)}
+	type candidate struct {
+		fset      *token.FileSet
+		d         analysis.Diagnostic
+		generated map[string]bool
+	}
+	var definitions []candidate
 	for _, act := range roots {
 		if act.Err != nil || len(act.Diagnostics) == 0 {
 			continue
@@ -90,41 +78,36 @@ func planFixes(roots []*checker.Action, only map[string]int, applied map[string]
 		}
 		fset := act.Package.Fset
 		generated := generatedFiles(fset, act.Package.Syntax)
-		for _, d := range guardsLast(act.Diagnostics) {
-			if len(d.SuggestedFixes) == 0 {
+		for _, d := range act.Diagnostics {
+			if len(d.SuggestedFixes) == 0 || done[findingOf(fset, d)] {
 				continue
 			}
-			key, text := findingKey(fset, d), fixText(d.SuggestedFixes[0])
-			if only != nil {
-				if only[key] == 0 || applied[key][text] {
-					continue
-				}
-				only[key]--
-			}
-			if !p.add(fset, d.SuggestedFixes[0], generated) {
-				p.leftover[key]++
+			if isDefinition(d) {
+				definitions = append(definitions, candidate{fset, d, generated})
 				continue
 			}
-			if applied[key] == nil {
-				applied[key] = make(map[string]bool)
-			}
-			applied[key][text] = true
+			p.take(fset, d, generated)
 		}
+	}
+	if len(p.taken) > 0 {
+		p.deferred = len(definitions)
+		return p
+	}
+	for _, c := range definitions {
+		p.take(c.fset, c.d, c.generated)
 	}
 	return p
 }
 
-// guardsLast orders the diagnostics of a package so that the fixes of
-// factorial definitions (loops and recursions, whose fix is a range
-// guard) are tried after every other fix. A guard bounds the factorial,
-// which silences the findings of the ratios and terms built from it; if
-// a guard won a clash with such a ratio's rewrite, the next round would
-// no longer report the ratio, and it would keep the guard's panic where a
-// rewrite gives the right value.
-func guardsLast(diags []analysis.Diagnostic) []analysis.Diagnostic {
-	out := append([]analysis.Diagnostic(nil), diags...)
-	sort.SliceStable(out, func(i, j int) bool { return !isDefinition(out[i]) && isDefinition(out[j]) })
-	return out
+// take adds the first fix of d to the plan, unless it clashes.
+func (p *fixPlan) take(fset *token.FileSet, d analysis.Diagnostic, generated map[string]bool) {
+	switch p.add(fset, d.SuggestedFixes[0], generated) {
+	case added:
+		p.taken = append(p.taken, findingOf(fset, d))
+		p.takenAt = append(p.takenAt, fmt.Sprintf("%s: %s", fset.Position(d.Pos), d.Message))
+	case clashed:
+		p.clashed++
+	}
 }
 
 // isDefinition reports whether d is a factorial definition's finding.
@@ -143,30 +126,39 @@ func generatedFiles(fset *token.FileSet, files []*ast.File) map[string]bool {
 	return gen
 }
 
-// add accepts fix unless it clashes with an accepted fix; it reports
-// false for a clash only.
-func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated map[string]bool) bool {
+type addResult int
+
+const (
+	added   addResult = iota
+	skipped           // in a generated file, or the same fix taken already
+	clashed
+)
+
+// add takes fix unless it clashes with a taken fix.
+func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated map[string]bool) addResult {
 	var edits []edit
 	for _, te := range fix.TextEdits {
 		end := te.End
 		if !end.IsValid() {
 			end = te.Pos
 		}
-		s, e := fset.Position(te.Pos), fset.Position(end)
+		// The physical file and offset: a //line directive names
+		// another file, which is not the one to edit.
+		s, e := fset.PositionFor(te.Pos, false), fset.PositionFor(end, false)
 		if generated[s.Filename] {
-			return true
+			return skipped
 		}
-		edits = append(edits, edit{s.Filename, s.Offset, e.Offset, string(te.NewText)})
+		edits = append(edits, edit{s.Filename, textedit.Edit{Start: s.Offset, End: e.Offset, Text: string(te.NewText)}})
 	}
 	key := fmt.Sprint(edits)
 	if p.accepted[key] {
-		return true
+		return skipped
 	}
 	var fresh []edit
 	for _, e := range edits {
 		dup, clash := p.check(e)
 		if clash {
-			return false
+			return clashed
 		}
 		if !dup {
 			fresh = append(fresh, e)
@@ -176,78 +168,52 @@ func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated 
 	for _, e := range fresh {
 		p.files[e.file] = append(p.files[e.file], e)
 	}
-	return true
+	return added
 }
 
-// check reports whether e equals an accepted edit or clashes with one.
+// check reports whether e equals a taken edit or clashes with one.
 func (p *fixPlan) check(e edit) (dup, clash bool) {
 	for _, f := range p.files[e.file] {
 		if f == e {
 			return true, false
 		}
-		if e.overlaps(f) {
+		if e.Clashes(f.Edit) {
 			return false, true
 		}
 	}
 	return false, false
 }
 
-// apply returns content with the edits applied. It re-formats the result
-// only when the original was gofmt-clean, so that a fix never reformats
-// code its author laid out by hand.
-func apply(content []byte, edits []edit) ([]byte, error) {
+// moved returns the offset in the edited text of the byte at offset off
+// of the text the edits were applied to; a byte the edits replaced moves
+// to the start of its replacement. eol is the file's line ending, which
+// inserted text takes (textedit.Apply).
+func moved(off int, edits []edit, eol string) int {
 	sorted := append([]edit(nil), edits...)
-	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].start < sorted[j].start })
-	var out bytes.Buffer
-	last := 0
+	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].Start < sorted[j].Start })
+	delta := 0
 	for _, e := range sorted {
-		if e.start < last || e.end > len(content) {
-			return nil, fmt.Errorf("edit %d-%d out of range or overlapping", e.start, e.end)
-		}
-		out.Write(content[last:e.start])
-		out.WriteString(e.text)
-		last = e.end
-	}
-	out.Write(content[last:])
-	if orig, err := format.Source(content); err == nil && bytes.Equal(orig, content) {
-		if fixed, err := format.Source(out.Bytes()); err == nil {
-			return fixed, nil
+		n := len(textedit.WithLineEnding(e.Text, eol))
+		switch {
+		case e.Start > off:
+			return off + delta
+		case e.Start == e.End || e.End <= off:
+			delta += n - (e.End - e.Start)
+		default: // e.Start <= off < e.End
+			return e.Start + delta
 		}
 	}
-	return out.Bytes(), nil
+	return off + delta
 }
 
-// writeAtomic replaces the file name by content without ever leaving it
-// half-written: the bytes go to a temporary file in the same directory,
-// which is then renamed over the original, keeping its permissions. A
-// file without write permission is refused even when the process could
-// replace it (as root can), since its owner marked it read-only.
-func writeAtomic(name string, content []byte) error {
-	info, err := os.Stat(name)
-	if err != nil {
-		return err
+// gofmtIfClean returns fixed gofmt-ed when the original was gofmt-clean,
+// so that fixes never reformat code its author laid out by hand, and
+// fixed as it is otherwise.
+func gofmtIfClean(original, fixed []byte) []byte {
+	if orig, err := format.Source(original); err == nil && bytes.Equal(orig, original) {
+		if out, err := format.Source(fixed); err == nil {
+			return out
+		}
 	}
-	if info.Mode().Perm()&0o200 == 0 {
-		return fmt.Errorf("%s is read-only; not fixed", name)
-	}
-	tmp, err := os.CreateTemp(filepath.Dir(name), "."+filepath.Base(name)+".overfact-*")
-	if err != nil {
-		return fmt.Errorf("cannot fix %s: %v", name, err)
-	}
-	defer os.Remove(tmp.Name()) // after a successful rename there is nothing to remove
-	if _, err := tmp.Write(content); err != nil {
-		tmp.Close()
-		return fmt.Errorf("cannot fix %s: %v", name, err)
-	}
-	if err := tmp.Chmod(info.Mode().Perm()); err != nil {
-		tmp.Close()
-		return fmt.Errorf("cannot fix %s: %v", name, err)
-	}
-	if err := tmp.Close(); err != nil {
-		return fmt.Errorf("cannot fix %s: %v", name, err)
-	}
-	if err := os.Rename(tmp.Name(), name); err != nil {
-		return fmt.Errorf("cannot fix %s: %v", name, err)
-	}
-	return nil
+	return fixed
 }

@@ -1,106 +1,105 @@
 package driver
 
 import (
-	"golang.org/x/tools/go/analysis"
-	"os"
-	"path/filepath"
+	"go/ast"
+	"go/parser"
+	"go/token"
 	"strings"
 	"testing"
+
+	"golang.org/x/tools/go/analysis"
+	"golang.org/x/tools/go/analysis/checker"
+	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
-func TestApply(t *testing.T) {
+// TestGofmtIfClean checks that fixed text is gofmt-ed only when the
+// original was gofmt-clean.
+func TestGofmtIfClean(t *testing.T) {
 	src := "package p\n\nfunc f(n int) int { return fact(n) / fact(n-2) }\n"
 	i := strings.Index(src, "fact(n) / fact(n-2)")
-	edits := []edit{
-		{"f.go", i, i + len("fact(n) / fact(n-2)"), "n * (n - 1)"},
-		{"f.go", len("package p\n"), len("package p\n"), "\n// f counts ordered pairs.\n"},
+	edits := []textedit.Edit{
+		{Start: i, End: i + len("fact(n) / fact(n-2)"), Text: "n * (n - 1)"},
+		{Start: len("package p\n"), End: len("package p\n"), Text: "\n// f counts ordered pairs.\n"},
 	}
-	got, err := apply([]byte(src), edits)
+	fixed, err := textedit.Apply([]byte(src), edits)
 	if err != nil {
 		t.Fatal(err)
 	}
 	// Written by hand: both edits applied, then gofmt (the source was
 	// gofmt-clean) folds the doubled blank line.
 	want := "package p\n\n// f counts ordered pairs.\n\nfunc f(n int) int { return n * (n - 1) }\n"
-	if string(got) != want {
-		t.Errorf("apply = %q, want %q", got, want)
+	if got := gofmtIfClean([]byte(src), fixed); string(got) != want {
+		t.Errorf("gofmtIfClean = %q, want %q", got, want)
 	}
-	if _, err := apply([]byte(src), []edit{{"f.go", 0, 5, "x"}, {"f.go", 3, 8, "y"}}); err == nil {
-		t.Error("overlapping edits applied without error")
+	// A hand-aligned original keeps its layout.
+	loose := strings.Replace(src, "{ return", "{   return", 1)
+	i = strings.Index(loose, "fact(n) / fact(n-2)")
+	fixed, _ = textedit.Apply([]byte(loose), []textedit.Edit{{Start: i, End: i + len("fact(n) / fact(n-2)"), Text: "n * (n - 1)"}})
+	if got := gofmtIfClean([]byte(loose), fixed); !strings.Contains(string(got), "{   return n * (n - 1) }") {
+		t.Errorf("gofmtIfClean reformatted a file that was not gofmt-clean: %q", got)
 	}
 }
 
-func TestOverlaps(t *testing.T) {
+// TestMoved checks how a finding's offset follows the edits of a round.
+func TestMoved(t *testing.T) {
+	edits := []edit{
+		{"f", textedit.Edit{Start: 2, End: 2, Text: "ab"}},   // insertion
+		{"f", textedit.Edit{Start: 10, End: 14, Text: "x"}},  // replacement
+		{"f", textedit.Edit{Start: 20, End: 20, Text: "\n"}}, // a line break
+	}
 	tests := []struct {
-		a, b edit
-		want bool
+		off  int
+		eol  string
+		want int
 	}{
-		{edit{"f", 0, 5, ""}, edit{"f", 5, 9, ""}, false}, // adjacent
-		{edit{"f", 0, 5, ""}, edit{"f", 4, 9, ""}, true},
-		{edit{"f", 3, 3, "x"}, edit{"f", 3, 3, "y"}, true}, // two insertions at one point
-		{edit{"f", 3, 3, "x"}, edit{"f", 0, 9, ""}, true},  // insertion inside a deletion
-		{edit{"f", 0, 5, ""}, edit{"g", 0, 5, ""}, false},  // other file
+		{0, "\n", 0},     // before every edit
+		{2, "\n", 4},     // at the insertion: pushed after it
+		{5, "\n", 7},     // between the edits
+		{11, "\n", 12},   // inside the replacement: its start
+		{14, "\n", 13},   // just after it
+		{20, "\n", 20},   // at the line break
+		{21, "\r\n", 22}, // a CRLF file's line break is two bytes
 	}
 	for _, tt := range tests {
-		if got := tt.a.overlaps(tt.b); got != tt.want {
-			t.Errorf("%v overlaps %v = %v, want %v", tt.a, tt.b, got, tt.want)
+		if got := moved(tt.off, edits, tt.eol); got != tt.want {
+			t.Errorf("moved(%d, %q) = %d, want %d", tt.off, tt.eol, got, tt.want)
 		}
 	}
 }
 
-func TestWriteAtomic(t *testing.T) {
-	dir := t.TempDir()
-	rw := filepath.Join(dir, "rw.go")
-	ro := filepath.Join(dir, "ro.go")
-	for _, name := range []string{rw, ro} {
-		if err := os.WriteFile(name, []byte("old\n"), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	if err := os.Chmod(ro, 0o444); err != nil {
+// TestDefinitionsInARoundOfTheirOwn checks that the fixes of factorial
+// definitions (range guards, which silence the ratios built on the
+// factorial) wait until a round takes no other fix.
+func TestDefinitionsInARoundOfTheirOwn(t *testing.T) {
+	fset := token.NewFileSet()
+	src := "package p\n\nvar a, b, c = 1, 2, 3\n"
+	f, err := parser.ParseFile(fset, "p.go", src, 0)
+	if err != nil {
 		t.Fatal(err)
 	}
-	if err := writeAtomic(rw, []byte("new\n")); err != nil {
-		t.Fatal(err)
+	tf := fset.File(f.FileStart)
+	diag := func(cat string, off int) analysis.Diagnostic {
+		pos := tf.Pos(off)
+		return analysis.Diagnostic{Pos: pos, Category: cat, Message: cat,
+			SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: pos, End: pos + 1, NewText: []byte("x")}}}}}
 	}
-	if got, _ := os.ReadFile(rw); string(got) != "new\n" {
-		t.Errorf("rw.go = %q after write", got)
+	at := strings.Index(src, "a")
+	act := &checker.Action{
+		Package: &packages.Package{ID: "p", Fset: fset, Syntax: []*ast.File{f}},
+		Diagnostics: []analysis.Diagnostic{
+			diag("factorial-loop", at),
+			diag("factorial-ratio", at+3),
+			diag("factorial-recursion.definite", at+6),
+		},
 	}
-	if info, _ := os.Stat(rw); info.Mode().Perm() != 0o644 {
-		t.Errorf("rw.go mode = %v, want 0644 kept", info.Mode().Perm())
+	plan := planFixes([]*checker.Action{act}, map[finding]bool{})
+	if len(plan.taken) != 1 || plan.taken[0].category != "factorial-ratio" || plan.deferred != 2 {
+		t.Fatalf("first round took %v and deferred %d; want the ratio alone, 2 deferred", plan.taken, plan.deferred)
 	}
-	err := writeAtomic(ro, []byte("new\n"))
-	if err == nil || !strings.Contains(err.Error(), ro) {
-		t.Errorf("read-only write: err = %v, want one naming %s", err, ro)
-	}
-	if got, _ := os.ReadFile(ro); string(got) != "old\n" {
-		t.Errorf("ro.go = %q, want it untouched", got)
-	}
-	entries, _ := os.ReadDir(dir)
-	if len(entries) != 2 {
-		t.Errorf("temporary files left behind: %v", entries)
-	}
-}
-
-// A range guard bounds the factorial it guards, which silences the
-// findings of ratios built from it; so the guards' fixes are planned
-// after every other fix, keeping the order within each kind.
-func TestGuardsLast(t *testing.T) {
-	in := []analysis.Diagnostic{
-		{Category: "factorial-recursion", Message: "a"},
-		{Category: "factorial-ratio", Message: "b"},
-		{Category: "factorial-loop.definite", Message: "c"},
-		{Category: "power-over-factorial", Message: "d"},
-		{Category: "factorial-loop", Message: "e"},
-	}
-	var got []string
-	for _, d := range guardsLast(in) {
-		got = append(got, d.Message)
-	}
-	if want := "b d a c e"; strings.Join(got, " ") != want {
-		t.Errorf("guardsLast order = %v, want %s", got, want)
-	}
-	if in[0].Message != "a" {
-		t.Error("guardsLast reordered its argument")
+	plan = planFixes([]*checker.Action{act}, map[finding]bool{plan.taken[0]: true})
+	if len(plan.taken) != 2 || plan.deferred != 0 {
+		t.Errorf("second round took %v and deferred %d; want both definitions", plan.taken, plan.deferred)
 	}
 }

@@ -1,117 +1,201 @@
 package driver
 
 import (
+	"fmt"
 	"os"
 	"sort"
 
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
-// maxFixRounds bounds the passes of -fix. Fixes whose edits overlap
-// (typically two fixes adding different imports at one place) cannot be
-// applied together; rather than leave them for the user to run again,
-// the driver re-analyses the fixed text and applies the fixes of the
-// findings that were left over, a few times at most.
-const maxFixRounds = 4
+// maxFixRounds bounds the rounds of -fix. A round applies every fix it
+// can; fixes whose edits overlap a taken one (typically two fixes adding
+// different imports at one place), and the findings an analyzer offered
+// no fix for yet (overfact checks at most 32 fixes per package and
+// analysis), are left for the next round, which re-analyses the edited
+// text in memory. Rounds go on until one finds nothing left to apply,
+// 16 at most: over 500 fixes in one package.
+const maxFixRounds = 16
 
-// fix applies (or, with Diff, prints) the fixes of graph's findings,
-// then writes every changed file once.
+// maxHeldBackShown bounds the findings a run lists when it stops with
+// fixes still to apply; the rest are counted.
+const maxHeldBackShown = 10
+
+// fix applies (or, with Diff, prints) the fixes of graph's findings, in
+// rounds, then writes every changed file, or none.
 func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph) {
-	contents := make(map[string][]byte) // current text of each changed file
-	originals := make(map[string][]byte)
-	var pending map[string]int // findings whose fix was left over; nil: all
-	applied := make(map[string]map[string]bool)
-	var plan *fixPlan
-	for round := 0; ; round++ {
-		plan = planFixes(graph.Roots, pending, applied)
-		for _, id := range plan.refused {
-			if round == 0 {
+	contents := make(map[string][]byte)  // edited text of each changed file
+	originals := make(map[string][]byte) // its analysed text
+	done := make(map[finding]bool)       // findings whose fix was applied
+	broken := brokenRoots(graph.Roots)   // packages with errors before any fix
+	for round := 1; ; round++ {
+		plan := planFixes(graph.Roots, done)
+		if round == 1 {
+			for _, id := range plan.refused {
 				r.errorf("not fixing %s: the package has errors", id)
-			} else {
-				r.errorf("not applying the remaining fixes of %s: it no longer type-checks after the first ones", id)
 			}
 		}
-		if !r.applyPlan(plan, contents, originals) || len(plan.leftover) == 0 || round+1 == maxFixRounds {
+		if len(plan.taken) == 0 {
 			break
+		}
+		if round > maxFixRounds {
+			r.heldBack(plan)
+			break
+		}
+		if !r.applyPlan(plan, contents, originals, done) {
+			return
 		}
 		next, ok := r.analyze(a, patterns, contents, false)
 		if !ok {
-			break
+			r.errorf("%s", r.nothingDone())
+			return
 		}
-		graph, pending = next, plan.leftover
-	}
-	r.writeFixed(contents, originals)
-	if n := plan.leftoverCount(); n > 0 {
-		r.errorf("%d fixes overlap others and were not applied; run again to apply them", n)
-	}
-}
-
-// applyPlan applies a plan's edits to the current contents and reports
-// whether anything changed.
-func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte) bool {
-	changed := false
-	for name, edits := range plan.files {
-		old, ok := contents[name]
-		if !ok {
-			var err error
-			if old, err = os.ReadFile(name); err != nil {
-				r.errorf("%v", err)
-				continue
+		// The fixed text is checked before it is written: a package
+		// that no longer loads (an import the module cannot resolve,
+		// such as a helper module it does not require) or type-checks
+		// is never written.
+		for id, first := range brokenRoots(next.Roots) {
+			if _, ok := broken[id]; !ok {
+				r.errorf("the fixed code of %s does not build: %s; %s", id, first, r.nothingDone())
+				return
 			}
-			originals[name] = old
 		}
-		fixed, err := apply(old, edits)
-		if err != nil {
-			r.errorf("fixing %s: %v", name, err)
-			continue
-		}
-		contents[name] = fixed
-		changed = true
+		graph = next
 	}
-	return changed
+	changes := changedFiles(contents, originals)
+	if r.opts.Diff {
+		r.printDiffs(changes)
+		return
+	}
+	r.writeFixed(changes)
 }
 
-// writeFixed prints the diff of, or writes, every changed file.
-func (r *run) writeFixed(contents, originals map[string][]byte) {
-	names := make([]string, 0, len(contents))
-	for name := range contents {
+// brokenRoots returns the root packages that have errors, each with its
+// first error.
+func brokenRoots(roots []*checker.Action) map[string]string {
+	out := make(map[string]string)
+	for _, act := range roots {
+		pkg := act.Package
+		switch {
+		case len(pkg.Errors) > 0:
+			out[pkg.ID] = pkg.Errors[0].Error()
+		case pkg.IllTyped:
+			out[pkg.ID] = "the package does not type-check"
+		}
+	}
+	return out
+}
+
+// applyPlan applies a plan's edits to the current contents and carries
+// the applied findings through them. It reports false, having said why,
+// when a file no longer holds the text that was analysed: nothing is
+// written then.
+func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, done map[finding]bool) bool {
+	names := make([]string, 0, len(plan.files))
+	for name := range plan.files {
 		names = append(names, name)
 	}
 	sort.Strings(names)
 	for _, name := range names {
-		old, fixed := originals[name], contents[name]
-		if string(old) == string(fixed) {
-			continue
-		}
-		if r.opts.Diff {
-			if err := writeUnified(r.opts.Stdout, relPath(r.dir, name), old, fixed); err != nil {
-				r.errorf("%v", err)
+		old, ok := contents[name]
+		if !ok {
+			var err error
+			if old, err = os.ReadFile(name); err == nil {
+				err = r.src.check(name, old)
 			}
-			r.findings = true
-			continue
+			if err != nil {
+				r.errorf("%v; %s", err, r.nothingDone())
+				return false
+			}
+			originals[name] = old
 		}
-		if err := writeAtomic(name, fixed); err != nil {
-			r.errorf("%v", err)
+		fixed, err := textedit.Apply(old, textEdits(plan.files[name]))
+		if err != nil {
+			r.errorf("fixing %s: %v; %s", name, err, r.nothingDone())
+			return false
 		}
+		contents[name] = fixed
+	}
+	for _, f := range plan.taken {
+		done[f] = true
+	}
+	var all []finding
+	for f := range done {
+		all = append(all, f)
+	}
+	clear(done)
+	for _, f := range all {
+		if edits, ok := plan.files[f.file]; ok {
+			f.offset = moved(f.offset, edits, textedit.LineEnding(originals[f.file]))
+		}
+		done[f] = true
+	}
+	return true
+}
+
+func textEdits(edits []edit) []textedit.Edit {
+	out := make([]textedit.Edit, len(edits))
+	for i, e := range edits {
+		out[i] = e.Edit
+	}
+	return out
+}
+
+// nothingDone says that a run stopped before writing (or printing)
+// anything.
+func (r *run) nothingDone() string {
+	if r.opts.Diff {
+		return "no diff printed"
+	}
+	return "no file written"
+}
+
+// heldBack reports the fixes still offered after the last round.
+func (r *run) heldBack(plan *fixPlan) {
+	n, what := len(plan.taken)+plan.clashed+plan.deferred, "fixes were"
+	if n == 1 {
+		what = "fix was"
+	}
+	r.errorf("stopped after %d rounds of fixes: %d more %s offered and held back; run -fix again to apply them (positions in the fixed text):", maxFixRounds, n, what)
+	for i, where := range plan.takenAt {
+		if i == maxHeldBackShown {
+			fmt.Fprintf(r.opts.Stderr, "\t... and %d more\n", len(plan.takenAt)-i)
+			break
+		}
+		fmt.Fprintf(r.opts.Stderr, "\t%s\n", where)
 	}
 }
 
-// withOverlay returns a copy of a whose passes read the files named in
-// overlay from it. The checker's Pass.ReadFile reads the disk, but in a
-// later round of -fix the syntax comes from the edited text, and an
-// analyzer or fix builder that reads the source must see that text.
-func withOverlay(a *analysis.Analyzer, overlay map[string][]byte) *analysis.Analyzer {
-	wrapped := *a
-	wrapped.Run = func(pass *analysis.Pass) (any, error) {
-		disk := pass.ReadFile
-		pass.ReadFile = func(name string) ([]byte, error) {
-			if content, ok := overlay[name]; ok {
-				return content, nil
-			}
-			return disk(name)
+// A change is one file's analysed text and its fixed text.
+type change struct {
+	name     string
+	old, new []byte
+}
+
+// changedFiles lists the files the fixes change, in name order, gofmt-ing
+// the fixed text of files that were gofmt-clean.
+func changedFiles(contents, originals map[string][]byte) []change {
+	var out []change
+	for name, fixed := range contents {
+		old := originals[name]
+		fixed = gofmtIfClean(old, fixed)
+		if string(old) != string(fixed) {
+			out = append(out, change{name, old, fixed})
 		}
-		return a.Run(pass)
 	}
-	return &wrapped
+	sort.Slice(out, func(i, j int) bool { return out[i].name < out[j].name })
+	return out
+}
+
+// printDiffs prints the unified diff of every change.
+func (r *run) printDiffs(changes []change) {
+	for _, c := range changes {
+		if err := writeUnified(r.opts.Stdout, relPath(r.dir, c.name), c.old, c.new); err != nil {
+			r.errorf("%v", err)
+		}
+		r.findings = true
+	}
 }

@@ -1,12 +1,13 @@
 package fuzz
 
 import (
-	"bytes"
 	"fmt"
 	"go/token"
 	"slices"
 
 	"golang.org/x/tools/go/analysis"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
 // edit is a TextEdit resolved to byte offsets in one file.
@@ -80,34 +81,28 @@ func firstOverlap(es []edit) int {
 	return -1
 }
 
-// apply returns a copy of src with the sorted, non-overlapping edits done.
+// apply returns a copy of src with the sorted, non-overlapping edits done,
+// by the applier the command writes fixes with.
 func apply(src map[string][]byte, es []edit) map[string][]byte {
 	out := make(map[string][]byte, len(src))
+	byFile := make(map[string][]textedit.Edit)
+	for _, e := range es {
+		byFile[e.file] = append(byFile[e.file], e.edit())
+	}
 	for name, b := range src {
 		out[name] = b
-	}
-	for name := range src {
-		var mine []edit
-		for _, e := range es {
-			if e.file == name {
-				mine = append(mine, e)
+		if mine := byFile[name]; len(mine) > 0 {
+			fixed, err := textedit.Apply(b, mine)
+			if err != nil {
+				panic(err) // resolve and merge let no such edit through
 			}
+			out[name] = fixed
 		}
-		if len(mine) == 0 {
-			continue
-		}
-		var buf bytes.Buffer
-		last := 0
-		for _, e := range mine {
-			buf.Write(src[name][last:e.start])
-			buf.WriteString(e.text)
-			last = e.end
-		}
-		buf.Write(src[name][last:])
-		out[name] = buf.Bytes()
 	}
 	return out
 }
+
+func (e edit) edit() textedit.Edit { return textedit.Edit{Start: e.start, End: e.end, Text: e.text} }
 
 // merge adds the edits of next to those already chosen, unless one of
 // them clashes with a chosen edit; it reports whether next was taken.
@@ -139,11 +134,5 @@ func merge(chosen, next []edit) ([]edit, bool) {
 // clash reports whether edits of two different fixes touch the same bytes
 // or insert at the same point.
 func clash(a, b edit) bool {
-	if a.file != b.file {
-		return false
-	}
-	if a.start == a.end && b.start == b.end {
-		return a.start == b.start
-	}
-	return a.start < b.end && b.start < a.end
+	return a.file == b.file && a.edit().Clashes(b.edit())
 }
