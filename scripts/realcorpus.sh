@@ -8,8 +8,9 @@
 # For every module@version named there it
 #   1. fetches the module from the module proxy into a throwaway module
 #      (nothing of it is written to this repository),
-#   2. runs `overfact -json -test=false MODULE/...` on it (labels cover
-#      non-test files),
+#   2. runs `overfact -json -test=false PACKAGES` on it, with the package
+#      patterns of testdata/realcorpus/modules.tsv (labels cover non-test
+#      files),
 #   3. matches the findings to the labelled functions (a finding counts for
 #      the function whose lines hold it) and prints per module and in total
 #      BAD found (TP), BAD missed (FN), functions with findings that are
@@ -29,6 +30,7 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 repo=$(pwd)
 labels="$repo/testdata/realcorpus/labels.tsv"
+modules="$repo/testdata/realcorpus/modules.tsv"
 helpers="$repo/testdata/realcorpus/helpers"
 work=$(mktemp -d "${TMPDIR:-/tmp}/overfact-realcorpus.XXXXXX")
 OUT=${OUT:-$work/out}
@@ -41,11 +43,12 @@ mkdir -p "$work/bin"
 go build -o "$work/bin/overfact" ./cmd/overfact
 go build -o "$work/bin/realcorpus" ./internal/realcorpus
 
-mods=$(grep -v '^#' "$labels" | tail -n +2 | cut -f1,2 | sort -u | tr '\t' '@')
+mods=$(grep -v '^#' "$modules" | tail -n +2 | cut -f1,2 | tr '\t' '@')
 echo "== modules: $(echo "$mods" | wc -l)"
 scoreargs=()
 for mv in $mods; do
 	m=${mv%@*}
+	patterns=$(grep -v '^#' "$modules" | awk -F'\t' -v m="$m" '$1 == m {print $3}')
 	slug=$(echo "$mv" | tr '/@' '__')
 	dir="$work/mods/$slug"
 	mkdir -p "$dir"
@@ -53,7 +56,7 @@ for mv in $mods; do
 		{ echo "go get $mv failed:"; cat "$OUT/$slug.get.err"; exit 1; }
 	src=$(cd "$dir" && go list -m -f '{{.Dir}}' "$m")
 	rc=0
-	(cd "$dir" && "$work/bin/overfact" -json -test=false "$m/...") >"$OUT/$slug.json" 2>"$OUT/$slug.err" || rc=$?
+	(cd "$dir" && "$work/bin/overfact" -json -test=false $patterns) >"$OUT/$slug.json" 2>"$OUT/$slug.err" || rc=$?
 	# 0: no findings, 3: findings; 1: errors (reported in the JSON and stderr)
 	echo "$mv: overfact exit status $rc, $(grep -c '"posn"' "$OUT/$slug.json" || true) findings"
 	if [ $rc -ne 0 ] && [ $rc -ne 3 ]; then head -5 "$OUT/$slug.err"; fi
@@ -62,7 +65,7 @@ for mv in $mods; do
 done
 
 echo "== score"
-"$work/bin/realcorpus" score -labels "$labels" "${scoreargs[@]}" | tee "$OUT/score.md"
+"$work/bin/realcorpus" score -labels "$labels" -modules "$modules" "${scoreargs[@]}" | tee "$OUT/score.md"
 
 echo "== probes: each BAD function at its probe input against math/big"
 failed=0

@@ -118,3 +118,77 @@ func parseLabels(r io.Reader) ([]label, error) {
 	}
 	return out, nil
 }
+
+// A corpusModule is one line of the modules file: a module version and
+// the package patterns overfact is run on.
+type corpusModule struct {
+	Module, Version string
+	Patterns        []string
+}
+
+var moduleColumns = []string{"module", "version", "packages"}
+
+// readModules reads the modules file: tab-separated, a header line
+// naming moduleColumns, lines starting with # ignored.
+func readModules(path string) ([]corpusModule, error) {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return nil, err
+	}
+	var out []corpusModule
+	header := false
+	seen := map[string]bool{}
+	for n, line := range strings.Split(string(data), "\n") {
+		if strings.TrimSpace(line) == "" || strings.HasPrefix(line, "#") {
+			continue
+		}
+		cols := strings.Split(line, "\t")
+		if !header {
+			if strings.Join(cols, "\t") != strings.Join(moduleColumns, "\t") {
+				return nil, fmt.Errorf("%s:%d: header must be %q", path, n+1, strings.Join(moduleColumns, "\\t"))
+			}
+			header = true
+			continue
+		}
+		if len(cols) != len(moduleColumns) {
+			return nil, fmt.Errorf("%s:%d: %d columns, want %d", path, n+1, len(cols), len(moduleColumns))
+		}
+		m := corpusModule{Module: cols[0], Version: cols[1], Patterns: strings.Fields(cols[2])}
+		if m.Module == "" || !strings.HasPrefix(m.Version, "v") || len(m.Patterns) == 0 {
+			return nil, fmt.Errorf("%s:%d: need a module, a version and package patterns", path, n+1)
+		}
+		for _, p := range m.Patterns {
+			if p != m.Module+"/..." && !strings.HasPrefix(p, m.Module+"/") {
+				return nil, fmt.Errorf("%s:%d: pattern %s is outside module %s", path, n+1, p, m.Module)
+			}
+		}
+		if seen[m.Module] {
+			return nil, fmt.Errorf("%s:%d: module %s listed twice", path, n+1, m.Module)
+		}
+		seen[m.Module] = true
+		out = append(out, m)
+	}
+	if !header {
+		return nil, fmt.Errorf("%s: no header line", path)
+	}
+	return out, nil
+}
+
+// checkCorpus checks that every label names a module of the modules
+// file at that module's version.
+func checkCorpus(labels []label, mods []corpusModule) error {
+	version := map[string]string{}
+	for _, m := range mods {
+		version[m.Module] = m.Version
+	}
+	for _, l := range labels {
+		v, ok := version[l.Module]
+		switch {
+		case !ok:
+			return fmt.Errorf("labels line %d: module %s is not in the modules file", l.lineNo, l.Module)
+		case v != l.Version:
+			return fmt.Errorf("labels line %d: %s labelled at %s, listed at %s", l.lineNo, l.Module, l.Version, v)
+		}
+	}
+	return nil
+}

@@ -14,7 +14,7 @@
 //	realcorpus probes -labels FILE -helpers DIR MODULE MODDIR
 //		writes the probe tests of MODULE's BAD labels into MODDIR, a
 //		writable copy of the module, and prints the probed packages.
-//	realcorpus score -labels FILE MODULE@VERSION MODDIR JSONFILE ...
+//	realcorpus score -labels FILE -modules FILE MODULE@VERSION MODDIR JSONFILE ...
 //		matches the findings of overfact -json (JSONFILE) to the labels
 //		and prints the table, the false positives and the missed BAD
 //		functions.
@@ -49,7 +49,7 @@ func main() {
 }
 
 func usage() {
-	fmt.Fprintln(os.Stderr, "usage: realcorpus funcs DIR | probes -labels F -helpers D MODULE MODDIR | score -labels F (MODULE@VERSION MODDIR JSON)...")
+	fmt.Fprintln(os.Stderr, "usage: realcorpus funcs DIR | probes -labels F -helpers D MODULE MODDIR | score -labels F -modules F (MODULE@VERSION MODDIR JSON)...")
 	os.Exit(2)
 }
 
@@ -90,12 +90,20 @@ func cmdProbes(args []string) error {
 func cmdScore(args []string) error {
 	fs := flag.NewFlagSet("score", flag.ExitOnError)
 	labelsPath := fs.String("labels", "testdata/realcorpus/labels.tsv", "labels file")
+	modulesPath := fs.String("modules", "testdata/realcorpus/modules.tsv", "modules file")
 	fs.Parse(args)
 	if fs.NArg() == 0 || fs.NArg()%3 != 0 {
 		usage()
 	}
 	labels, err := readLabels(*labelsPath)
 	if err != nil {
+		return err
+	}
+	mods, err := readModules(*modulesPath)
+	if err != nil {
+		return err
+	}
+	if err := checkCorpus(labels, mods); err != nil {
 		return err
 	}
 	var runs []moduleRun

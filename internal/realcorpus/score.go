@@ -134,7 +134,7 @@ func ratio(a, b int) string {
 func score(w io.Writer, labels []label, runs []moduleRun) error {
 	type fpItem struct {
 		where, verdict string
-		msgs          []string
+		msgs           []string
 	}
 	var total tally
 	var fps []fpItem
