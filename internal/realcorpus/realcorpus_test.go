@@ -152,6 +152,7 @@ func Other() {}
 		"p/a.go Safe [SAFE]",
 		"p/a.go Other [unlabelled]",
 		"example.com/m/p/a.go:11 Missed: nothing",
+		"Found BAD functions, 1:\n- example.com/m/p/a.go:3 Bad: factorial loop",
 	} {
 		if !strings.Contains(got, want) {
 			t.Errorf("score output lacks %q:\n%s", want, got)

@@ -138,7 +138,7 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 	}
 	var total tally
 	var fps []fpItem
-	var missed []label
+	var missed, found []label
 	fmt.Fprintln(w, "| module | version | BAD | SAFE | findings | BAD found (TP) | BAD missed (FN) | FP functions | recall | precision |")
 	fmt.Fprintln(w, "|---|---|---|---|---|---|---|---|---|---|")
 	for _, run := range runs {
@@ -186,6 +186,7 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 				t.bad++
 				if len(hit[l.File+"\t"+l.Func]) > 0 {
 					t.tp++
+					found = append(found, l)
 				} else {
 					t.fn++
 					missed = append(missed, l)
@@ -224,6 +225,11 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 		for _, m := range fp.msgs {
 			fmt.Fprintf(w, "    %s\n", m)
 		}
+	}
+	sort.Slice(found, func(i, j int) bool { return probeID(found[i]) < probeID(found[j]) })
+	fmt.Fprintf(w, "\nFound BAD functions, %d:\n", len(found))
+	for _, l := range found {
+		fmt.Fprintf(w, "- %s: %s\n", probeID(l), l.Shape)
 	}
 	sort.Slice(missed, func(i, j int) bool { return probeID(missed[i]) < probeID(missed[j]) })
 	fmt.Fprintf(w, "\nMissed BAD functions, %d:\n", len(missed))
