@@ -1,0 +1,264 @@
+package main
+
+import (
+	"bytes"
+	"go/parser"
+	"go/token"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// TestLabelsFile checks the committed corpus files: the labels parse,
+// every BAD label has a probe and a reference that are Go expressions,
+// both verdicts occur, every label's module is listed at its version,
+// and the probe helpers are Go files.
+func TestLabelsFile(t *testing.T) {
+	labels, err := readLabels("../../testdata/realcorpus/labels.tsv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	mods, err := readModules("../../testdata/realcorpus/modules.tsv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := checkCorpus(labels, mods); err != nil {
+		t.Fatal(err)
+	}
+	count := map[string]int{}
+	labelled := map[string]bool{}
+	for _, l := range labels {
+		count[l.Verdict]++
+		labelled[l.Module] = true
+		if l.Verdict != "BAD" {
+			continue
+		}
+		for _, e := range []string{l.Probe, l.Want} {
+			if _, err := parser.ParseExpr(e); err != nil {
+				t.Errorf("labels line %d: %q is not a Go expression: %v", l.lineNo, e, err)
+			}
+		}
+	}
+	if count["BAD"] == 0 || count["SAFE"] == 0 {
+		t.Errorf("labels: %d BAD, %d SAFE; the corpus needs both", count["BAD"], count["SAFE"])
+	}
+	for _, m := range mods {
+		if !labelled[m.Module] {
+			t.Errorf("module %s has no labels", m.Module)
+		}
+	}
+	helpers, _ := filepath.Glob("../../testdata/realcorpus/helpers/*.go.txt")
+	for _, h := range helpers {
+		src, err := os.ReadFile(h)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !strings.Contains(string(src), "package __PKG__") {
+			t.Errorf("%s: no package __PKG__ clause", h)
+		}
+		if _, err := parser.ParseFile(token.NewFileSet(), h, strings.Replace(string(src), "__PKG__", "p", 1), 0); err != nil {
+			t.Errorf("%s: %v", h, err)
+		}
+	}
+	t.Logf("%d labels (%d BAD, %d SAFE) in %d modules", len(labels), count["BAD"], count["SAFE"], len(mods))
+}
+
+const header = "module\tversion\tpackage\tfile\tfunction\tline\tverdict\tshape\tprobe\twant\n"
+
+func TestParseLabelsRejects(t *testing.T) {
+	good := "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tBAD\tfactorial loop\tF(21)\texFact(21)\n"
+	if _, err := parseLabels(strings.NewReader(header + good)); err != nil {
+		t.Fatalf("good line rejected: %v", err)
+	}
+	for _, tc := range []struct{ name, line string }{
+		{"BAD without probe", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tBAD\tloop\t\t\n"},
+		{"BAD without reference", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tBAD\tloop\tF(21)\t\n"},
+		{"SAFE with probe", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\tloop\tF(21)\texFact(21)\n"},
+		{"unknown verdict", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tMAYBE\tloop\t\t\n"},
+		{"missing column", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\tloop\t\n"},
+		{"bad line number", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\tx\tSAFE\tloop\t\t\n"},
+		{"package outside module", "example.com/m\tv1.0.0\texample.com/other\tp/a.go\tF\t3\tSAFE\tloop\t\t\n"},
+		{"test file", "example.com/m\tv1.0.0\texample.com/m/p\tp/a_test.go\tF\t3\tSAFE\tloop\t\t\n"},
+		{"no shape", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\t\t\t\n"},
+		{"version without v", "example.com/m\t1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\tloop\t\t\n"},
+	} {
+		if _, err := parseLabels(strings.NewReader(header + tc.line)); err == nil {
+			t.Errorf("%s: accepted", tc.name)
+		}
+	}
+	if _, err := parseLabels(strings.NewReader(header + good + good)); err == nil {
+		t.Errorf("a function labelled twice: accepted")
+	}
+	if _, err := parseLabels(strings.NewReader(good)); err == nil {
+		t.Errorf("no header: accepted")
+	}
+}
+
+// TestScore runs the matching on a module of three functions written
+// here, with findings in the form overfact -json prints.
+func TestScore(t *testing.T) {
+	dir := t.TempDir()
+	src := `package p
+
+func Bad(n int) int {
+	f := 1
+	for i := 2; i <= n; i++ {
+		f *= i
+	}
+	return f
+}
+
+func Missed(n float64) float64 { return n }
+
+func Safe(n int) int {
+	return n
+}
+
+func Other() {}
+`
+	if err := os.MkdirAll(filepath.Join(dir, "p"), 0o755); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(filepath.Join(dir, "p", "a.go"), []byte(src), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	labels, err := parseLabels(strings.NewReader(header +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tBad\t3\tBAD\tfactorial loop\tBad(21)\texFact(21)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tMissed\t11\tBAD\tnothing\tMissed(1)\tofpF(2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tSafe\t13\tSAFE\tidentity\t\t\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	file := filepath.Join(dir, "p", "a.go")
+	js := `{"example.com/m/p": {"overfact": [
+		{"posn": "` + file + `:6:3", "message": "factorial wraps"},
+		{"posn": "` + file + `:14:9", "message": "on a safe function"},
+		{"posn": "` + file + `:17:1", "message": "on an unlabelled function"}
+	]}}`
+	found, errs, err := readFindings([]byte(js), dir)
+	if err != nil || len(errs) != 0 || len(found) != 3 {
+		t.Fatalf("readFindings: %d findings, errors %v, %v", len(found), errs, err)
+	}
+	var out bytes.Buffer
+	if err := score(&out, labels, []moduleRun{{Module: "example.com/m", Version: "v1.0.0", Dir: dir, Findings: found}}); err != nil {
+		t.Fatal(err)
+	}
+	got := out.String()
+	// BAD 2, SAFE 1, findings 3, TP 1, FN 1, FP 2 (Safe and Other), recall 1/2, precision 1/3.
+	for _, want := range []string{
+		"| example.com/m | v1.0.0 | 2 | 1 | 3 | 1 | 1 | 2 | 0.50 | 0.33 |",
+		"p/a.go Safe [SAFE]",
+		"p/a.go Other [unlabelled]",
+		"example.com/m/p/a.go:11 Missed: nothing",
+		"Found BAD functions, 1:\n- example.com/m/p/a.go:3 Bad: factorial loop",
+	} {
+		if !strings.Contains(got, want) {
+			t.Errorf("score output lacks %q:\n%s", want, got)
+		}
+	}
+
+	// A label whose function is not at its line is an error.
+	stale, _ := parseLabels(strings.NewReader(header + "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tSafe\t12\tSAFE\tidentity\t\t\n"))
+	if err := score(&out, stale, []moduleRun{{Module: "example.com/m", Version: "v1.0.0", Dir: dir}}); err == nil {
+		t.Errorf("a stale line number was accepted")
+	}
+}
+
+func TestReadFindingsError(t *testing.T) {
+	_, errs, err := readFindings([]byte(`{"example.com/m/p": {"overfact": {"error": "type errors"}}}`), "/x")
+	if err != nil || len(errs) != 1 || !strings.Contains(errs[0], "type errors") {
+		t.Fatalf("errs %v, err %v", errs, err)
+	}
+}
+
+// TestProbeSource checks that the generated probe file and the helpers
+// written beside it are Go source.
+func TestProbeSource(t *testing.T) {
+	ls, err := parseLabels(strings.NewReader(header +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tT.M\t3\tBAD\tloop\tT{}.M(21)\texQuo(exFact(30), exBinom(30, 2))\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	fset := token.NewFileSet()
+	if _, err := parser.ParseFile(fset, "probe.go", probeSource("p", ls), 0); err != nil {
+		t.Errorf("probe source: %v", err)
+	}
+	if _, err := parser.ParseFile(fset, "helpers.go", strings.Replace(probeHelpers, "__PKG__", "p", 1), 0); err != nil {
+		t.Errorf("helpers source: %v", err)
+	}
+}
+
+// TestProbesRun builds and runs the generated probes on a small package
+// written here, with the go command and no network. C(21, 1) as
+// fact(21)/(fact(1)*fact(20)) in int64 must PASS (wrong value shown: 21!
+// wraps, math/big), fact(21) itself must FAIL (21! = 51090942171709440000
+// does not fit int64, so a wrapped value is no labelling evidence), a
+// float64 factorial at 20 must FAIL (its value is right), and a float64
+// C(200, 2) from factorials must PASS (NaN).
+func TestProbesRun(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs the go command")
+	}
+	dir := t.TempDir()
+	src := `package p
+
+func fact(n int64) int64 {
+	f := int64(1)
+	for i := int64(2); i <= n; i++ {
+		f *= i
+	}
+	return f
+}
+
+func ffact(n float64) float64 {
+	f := 1.0
+	for i := 2.0; i <= n; i++ {
+		f *= i
+	}
+	return f
+}
+
+func choose(n, k float64) float64 { return ffact(n) / (ffact(k) * ffact(n-k)) }
+
+func ichoose(n, k int64) int64 { return fact(n) / (fact(k) * fact(n-k)) }
+`
+	must := func(err error) {
+		t.Helper()
+		if err != nil {
+			t.Fatal(err)
+		}
+	}
+	must(os.MkdirAll(filepath.Join(dir, "p"), 0o755))
+	must(os.WriteFile(filepath.Join(dir, "go.mod"), []byte("module example.com/m\n\ngo 1.21\n"), 0o644))
+	must(os.WriteFile(filepath.Join(dir, "p", "p.go"), []byte(src), 0o644))
+	labels, err := parseLabels(strings.NewReader(header +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tfact\t3\tBAD\tint64 factorial loop\tfact(21)\texFact(21)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tffact\t11\tBAD\tfloat64 factorial loop, right here\tfact(20)\texFact(20)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tchoose\t19\tBAD\tbinomial from factorials\tchoose(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tichoose\t21\tBAD\tbinomial from factorials\tichoose(21, 1)\texBinom(21, 1)\n"))
+	must(err)
+	pkgs, err := writeProbes(labels, "example.com/m", dir, t.TempDir())
+	must(err)
+	if len(pkgs) != 1 || pkgs[0] != "./p" {
+		t.Fatalf("probed packages %v", pkgs)
+	}
+	cmd := exec.Command("go", "test", "-count=1", "-run", "^"+probeTest+"$", "-v", "./p")
+	cmd.Dir = dir
+	cmd.Env = append(os.Environ(), "GOWORK=off", "GOFLAGS=-mod=mod", "GOTOOLCHAIN=local")
+	out, err := cmd.CombinedOutput()
+	if err != nil {
+		t.Fatalf("go test: %v\n%s", err, out)
+	}
+	for _, want := range []string{
+		"PROBE FAIL example.com/m/p/p.go:3 fact: the exact value 51090942171709440000 does not fit int64",
+		"PROBE PASS example.com/m/p/p.go:21 ichoose: got -1, exact 21 (integer differs)",
+		"PROBE FAIL example.com/m/p/p.go:11 ffact: got 2432902008176640000, exact 2432902008176640000: the value is right",
+		"PROBE PASS example.com/m/p/p.go:19 choose: got NaN, exact 19900 (NaN)",
+	} {
+		if !strings.Contains(string(out), want) {
+			t.Errorf("probe output lacks %q:\n%s", want, out)
+		}
+	}
+}
