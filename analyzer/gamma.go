@@ -109,6 +109,9 @@ func (fc *fnCtx) gammaBoundOf(arg ast.Expr) (gammaBound, bool) {
 			vhi = float64(r.Hi)
 		}
 	}
+	if id, ok := aff.v.(*ast.Ident); ok && !aff.isInt {
+		vlo, vhi = fc.floatBounds(id)
+	}
 	if aff.v == nil {
 		vlo, vhi = 0, 0
 	}

@@ -1,0 +1,221 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math"
+
+	"golang.org/x/tools/go/ast/astutil"
+)
+
+// floatBounds returns the bounds that the code around id puts on the
+// float variable id names there: an early exit before it (if p >= 10 {
+// return … }, so p < 10 after it) or a condition it lies under (if q <
+// 10 { … use … }), each against a constant. The integer ranges package
+// does not follow floats; Gamma arguments often are floats bounded this
+// way (a log-Beta that switches to an asymptotic form for p ≥ 10).
+//
+// A bound counts only where the variable cannot change after the
+// statement that gives it: no assignment to it lies after that point in
+// the function, none lies in a function literal, and its address is
+// never taken. A NaN passes every such test, but Γ(NaN) is NaN, never an
+// overflow, so the bounds serve the Gamma checks all the same.
+//
+// Special cases are:
+//
+//	no guard or condition, or a variable that may change: [−Inf, +Inf]
+func (fc *fnCtx) floatBounds(id *ast.Ident) (lo, hi float64) {
+	lo, hi = math.Inf(-1), math.Inf(1)
+	v, ok := fc.c.objOf(id).(*types.Var)
+	if !ok || fc.file == nil {
+		return lo, hi
+	}
+	last, ok := fc.lastWrite(v)
+	if !ok {
+		return lo, hi
+	}
+	apply := func(cond ast.Expr, holds bool, from token.Pos) {
+		if last > from {
+			return
+		}
+		for _, c := range fc.comparisons(cond, holds, v) {
+			lo, hi = math.Max(lo, c.lo), math.Min(hi, c.hi)
+		}
+	}
+	path, _ := astutil.PathEnclosingInterval(fc.file.file, id.Pos(), id.End())
+	for i := 1; i < len(path); i++ {
+		child := path[i-1]
+		switch p := path[i].(type) {
+		case *ast.FuncDecl, *ast.FuncLit:
+			return lo, hi
+		case *ast.IfStmt:
+			switch child {
+			case p.Body:
+				apply(p.Cond, true, p.Cond.End())
+			case p.Else:
+				apply(p.Cond, false, p.Cond.End())
+			}
+		case *ast.BlockStmt:
+			for _, st := range p.List {
+				if st.Pos() >= child.Pos() {
+					break
+				}
+				if s, ok := st.(*ast.IfStmt); ok && s.Else == nil && fc.exits(s.Body) {
+					apply(s.Cond, false, s.End())
+				}
+			}
+		}
+	}
+	return lo, hi
+}
+
+// lastWrite returns the position of the last assignment to v in the
+// function, or false when v is written in a function literal or has its
+// address taken, so that no position bounds its changes.
+func (fc *fnCtx) lastWrite(v *types.Var) (token.Pos, bool) {
+	var last token.Pos
+	ok := true
+	info := fc.c.pass.TypesInfo
+	is := func(e ast.Expr) bool {
+		id, isID := unparen(e).(*ast.Ident)
+		return isID && info.ObjectOf(id) == v
+	}
+	ast.Inspect(fc.node, func(n ast.Node) bool {
+		if !ok {
+			return false
+		}
+		write := false
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			if n != fc.node {
+				ast.Inspect(n.Body, func(m ast.Node) bool {
+					if as, isAs := m.(*ast.AssignStmt); isAs {
+						for _, l := range as.Lhs {
+							ok = ok && !is(l)
+						}
+					}
+					if inc, isInc := m.(*ast.IncDecStmt); isInc {
+						ok = ok && !is(inc.X)
+					}
+					return ok
+				})
+			}
+		case *ast.AssignStmt:
+			for _, l := range n.Lhs {
+				write = write || is(l) && info.Defs[unparen(l).(*ast.Ident)] == nil
+			}
+		case *ast.IncDecStmt:
+			write = is(n.X)
+		case *ast.RangeStmt:
+			write = n.Key != nil && is(n.Key) || n.Value != nil && is(n.Value)
+		case *ast.UnaryExpr:
+			ok = ok && !(n.Op == token.AND && is(n.X))
+		}
+		if write && n.Pos() > last {
+			last = n.Pos()
+		}
+		return ok
+	})
+	return last, ok
+}
+
+type floatRange struct{ lo, hi float64 }
+
+// comparisons returns the bounds on v that cond (or, with holds false,
+// its negation) implies: v against a constant, joined by && (or by ||
+// under a negation).
+func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRange {
+	switch c := unparen(cond).(type) {
+	case *ast.UnaryExpr:
+		if c.Op == token.NOT {
+			return fc.comparisons(c.X, !holds, v)
+		}
+	case *ast.BinaryExpr:
+		switch {
+		case c.Op == token.LAND && holds, c.Op == token.LOR && !holds:
+			return append(fc.comparisons(c.X, holds, v), fc.comparisons(c.Y, holds, v)...)
+		case c.Op == token.LAND, c.Op == token.LOR:
+			return nil
+		}
+		op, x, k := c.Op, c.X, c.Y
+		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
+			op, x, k = flipCmp(op), c.Y, c.X
+		}
+		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
+			return nil
+		}
+		bound, ok := fc.floatConst(k)
+		if !ok {
+			return nil
+		}
+		if !holds {
+			op = negateCmp(op)
+		}
+		switch op {
+		case token.LSS, token.LEQ:
+			return []floatRange{{math.Inf(-1), bound}}
+		case token.GTR, token.GEQ:
+			return []floatRange{{bound, math.Inf(1)}}
+		case token.EQL:
+			return []floatRange{{bound, bound}}
+		}
+	}
+	return nil
+}
+
+// flipCmp turns c OP x into x OP' c.
+func flipCmp(op token.Token) token.Token {
+	switch op {
+	case token.LSS:
+		return token.GTR
+	case token.LEQ:
+		return token.GEQ
+	case token.GTR:
+		return token.LSS
+	case token.GEQ:
+		return token.LEQ
+	}
+	return op
+}
+
+// negateCmp is the comparison that holds where op does not, NaN aside.
+func negateCmp(op token.Token) token.Token {
+	switch op {
+	case token.LSS:
+		return token.GEQ
+	case token.LEQ:
+		return token.GTR
+	case token.GTR:
+		return token.LEQ
+	case token.GEQ:
+		return token.LSS
+	case token.EQL:
+		return token.NEQ
+	}
+	return token.ILLEGAL
+}
+
+// exits reports whether a block always leaves the function: it ends in a
+// return or a call of panic.
+func (fc *fnCtx) exits(b *ast.BlockStmt) bool {
+	if len(b.List) == 0 {
+		return false
+	}
+	switch s := b.List[len(b.List)-1].(type) {
+	case *ast.ReturnStmt:
+		return true
+	case *ast.ExprStmt:
+		call, ok := unparen(s.X).(*ast.CallExpr)
+		if !ok {
+			return false
+		}
+		id, ok := unparen(call.Fun).(*ast.Ident)
+		if !ok {
+			return false
+		}
+		b, ok := fc.c.pass.TypesInfo.Uses[id].(*types.Builtin)
+		return ok && b.Name() == "panic"
+	}
+	return false
+}
