@@ -6,19 +6,19 @@ import "fmt"
 type Kind int
 
 const (
-	Unknown       Kind = iota
-	Fact               // n!
-	Falling            // n!/(n−k)!
-	Binomial           // C(n, k)
-	InvBinomial        // 1/C(n, k)
-	Multinomial        // n!/(k₁!…k_m!), Σkᵢ = n
-	Catalan            // C(2n, n)/(n+1)
-	PowOverFact        // x^k/k!
-	Poisson            // x^k·e^(−x)/k!
-	BinomialPMF        // C(n, k)·p^k·(1−p)^(n−k)
-	Beta               // Γ(a)Γ(b)/Γ(a+b)
-	InvBeta            // Γ(a+b)/(Γ(a)Γ(b))
-	GammaRatio         // any other ratio or product of Γ values
+	Unknown     Kind = iota
+	Fact             // n!
+	Falling          // n!/(n−k)!
+	Binomial         // C(n, k)
+	InvBinomial      // 1/C(n, k)
+	Multinomial      // n!/(k₁!…k_m!), Σkᵢ = n
+	Catalan          // C(2n, n)/(n+1)
+	PowOverFact      // x^k/k!
+	Poisson          // x^k·e^(−x)/k!
+	BinomialPMF      // C(n, k)·p^k·(1−p)^(n−k)
+	Beta             // Γ(a)Γ(b)/Γ(a+b)
+	InvBeta          // Γ(a+b)/(Γ(a)Γ(b))
+	GammaRatio       // any other ratio or product of Γ values
 )
 
 // Form is a recognised term: its kind and arguments, in the order the

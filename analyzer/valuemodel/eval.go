@@ -70,8 +70,9 @@ type Acc struct {
 // Op is one multiplication or division of an accumulator.
 type Op struct {
 	Stmt ast.Stmt
-	Mul  bool  // multiply (false: divide)
-	By   *Term // the operand on trip t
+	X    ast.Expr // the operand as written
+	Mul  bool     // multiply (false: divide)
+	By   *Term    // the operand on trip t
 	// From and To bound the trips on which the op runs, [From, To).
 	From, To Affine
 	// Before and After are the accumulator's values on trip t just
@@ -325,7 +326,7 @@ func (e *evaluator) branch(list []ast.Stmt, en env) {
 				}
 				return true
 			})
-		default:
+		case *ast.ForStmt, *ast.RangeStmt, *ast.LabeledStmt, *ast.AssignStmt, *ast.ExprStmt, *ast.ReturnStmt, *ast.DeclStmt, *ast.IncDecStmt:
 			e.stmt(s, inner)
 		}
 	}

@@ -588,7 +588,7 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 					i := opIndex[obj]
 					opIndex[obj]++
 					if dry {
-						op := Op{Stmt: st, Mul: o.mul, By: t, From: Int(0), To: l.Count}
+						op := Op{Stmt: st, X: o.x, Mul: o.mul, By: t, From: Int(0), To: l.Count}
 						if guard != nil {
 							op.From, op.To, t = e.guardRange(l, guard, in)
 							if t == nil {
