@@ -136,7 +136,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall || fc.powLoops != nil {
 		fc.checkExprs(body)
 	}
-	if s.worthLoops() {
+	if s.worthLoops() || s.knownCall {
 		fc.checkModel()
 	}
 }

@@ -131,8 +131,20 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 	case s.Loop != nil || s.Obj == nil:
 		return ranges.Top()
 	case s.Field != nil:
-		if e, ok := res.Exprs[s]; ok {
-			return fc.rangeOf(e)
+		// A read of the field inside at, where the guards before it
+		// hold; else the first read the model met.
+		var in ast.Expr
+		ast.Inspect(at, func(n ast.Node) bool {
+			if sel, ok := n.(*ast.SelectorExpr); ok && in == nil && fc.c.objOf(sel.X) == s.Obj && fc.c.pass.TypesInfo.ObjectOf(sel.Sel) == s.Field {
+				in = sel
+			}
+			return in == nil
+		})
+		if in == nil {
+			in = res.Exprs[s]
+		}
+		if in != nil {
+			return fc.rangeOf(in)
 		}
 		return ranges.Top()
 	}
@@ -361,6 +373,13 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 		}
 		return thresholds.BinomialLoopFits(t.Num, n, k)
 	}
+	lim := thresholds.CentralBinomialLoop(t.Num)
+	// The largest intermediate over every k ≤ n is at k = ⌈n/2⌉, one
+	// past the central limit's k = ⌊n/2⌋ for odd n: a margin of one n
+	// covers it.
+	if bounded(n) && k.Lo >= 0 && n.Hi < lim.FirstBad-1 {
+		return true
+	}
 	if bounded(n) {
 		lo, hi := max(k.Lo, 0), min(k.Hi, n.Hi)
 		safe := hi-lo <= maxBinomialScan
@@ -371,7 +390,6 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 			return true
 		}
 	}
-	lim := thresholds.CentralBinomialLoop(t.Num)
 	central := thresholds.CentralBinomial(t.Num)
 	name := nv.Name()
 	clause, _ := verdict(name, n, lim.FirstBad)
@@ -473,8 +491,21 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 		return nil
 	}
 	idx := fc.c.paramIndex(decl, v.Obj)
-	read, ok := res.Exprs[v]
-	if idx < 0 || !ok || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
+	// The range of n where the product is formed: a read of it in the
+	// last loop, after the guards that bound it.
+	var read ast.Expr
+	if len(res.Loops) > 0 {
+		ast.Inspect(res.Loops[len(res.Loops)-1].Stmt, func(n ast.Node) bool {
+			if id, ok := n.(*ast.Ident); ok && read == nil && fc.c.pass.TypesInfo.Uses[id] == v.Obj {
+				read = id
+			}
+			return read == nil
+		})
+	}
+	if read == nil {
+		read = res.Exprs[v]
+	}
+	if idx < 0 || read == nil || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
 		return nil
 	}
 	off := beta.Num().Int64()

@@ -258,26 +258,34 @@ func mergeGamma(gs []GammaPow) []GammaPow {
 	return kept
 }
 
-// foldShift applies Γ(x+1) = x·Γ(x): a power x^e beside Γ(x)^p (or
-// Γ(x+1)^p with e of the other sign) moves the Gamma's argument by one.
+// foldShift applies Γ(x+1) = x·Γ(x) with x = λ·b for a power b^e of
+// a monic base b beside Γ(λb)^±1 or Γ(λb+1)^±1: λb·Γ(λb) = Γ(λb+1).
 func (t *Term) foldShift() {
 	for changed, guard := true, 0; changed && guard < 64; guard++ {
 		changed = false
 		for i, p := range t.Pows {
-			if !p.Exp.IsConst() || !p.Exp.c().IsInt() {
+			e, ok := smallInt(p.Exp)
+			if !ok || e == 0 || p.Base.IsConst() {
 				continue
 			}
-			e := p.Exp.c().Num().Int64()
 			for j, g := range t.Gamma {
-				switch {
-				case g.Arg.Equal(p.Base) && sameSign(e, int64(g.Pow)):
-					// x·Γ(x) = Γ(x+1)
-					t.Gamma[j].Arg = g.Arg.Shift(1)
-				case g.Arg.Equal(p.Base.Shift(1)) && sameSign(e, -int64(g.Pow)):
-					// x/Γ(x+1) = 1/Γ(x)
-					t.Gamma[j].Arg = p.Base
-				default:
+				if g.Pow != 1 && g.Pow != -1 {
 					continue
+				}
+				var lam *big.Rat
+				var shift int64
+				if l, ok := ratioOf(g.Arg, p.Base); ok && sameSign(e, int64(g.Pow)) {
+					lam, shift = l, 1 // b·Γ(λb) = Γ(λb+1)/λ
+				} else if l, ok := ratioOf(g.Arg.Shift(-1), p.Base); ok && sameSign(e, -int64(g.Pow)) {
+					lam, shift = l, -1 // b/Γ(λb+1) = 1/(λ·Γ(λb))
+				} else {
+					continue
+				}
+				t.Gamma[j].Arg = g.Arg.Shift(shift)
+				if e > 0 {
+					t.Coef.Quo(t.Coef, lam)
+				} else {
+					t.Coef.Mul(t.Coef, lam)
 				}
 				step := int64(1)
 				if e < 0 {
@@ -296,6 +304,18 @@ func (t *Term) foldShift() {
 			}
 		}
 	}
+}
+
+// ratioOf returns λ > 0 with a = λ·b, for b not constant.
+func ratioOf(a, b Affine) (*big.Rat, bool) {
+	if b.IsConst() || len(a.Terms) != len(b.Terms) {
+		return nil, false
+	}
+	lam := new(big.Rat).Quo(a.Terms[0].K, b.Terms[0].K)
+	if lam.Sign() <= 0 || !a.Equal(b.Scale(lam)) {
+		return nil, false
+	}
+	return lam, true
 }
 
 func sameSign(a, b int64) bool { return a > 0 && b > 0 || a < 0 && b < 0 }

@@ -1,0 +1,111 @@
+package analyzer
+
+import (
+	"math"
+	"math/big"
+	"testing"
+
+	"golang.org/x/tools/go/analysis/analysistest"
+)
+
+// TestModelScenarios runs the shapes the value model judges: a shift
+// rota counted in float64, Erlang B and Poisson sums with a running
+// factorial or a running product from e^(−λ), and dice-pool binomials
+// multiplied before they are divided, in float64 or over struct fields.
+func TestModelScenarios(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "callcentre", "dicepool")
+}
+
+// The first bad inputs the scenario messages state, confirmed here by
+// running the code's own arithmetic in float64 (or int64) beside
+// math/big, not by asking the analyzer or the thresholds package.
+func TestModelProbes(t *testing.T) {
+	maxF, _ := new(big.Float).SetFloat64(math.MaxFloat64).Int(nil)
+	binom := func(n, k int64) *big.Int { return new(big.Int).Binomial(n, k) }
+
+	// dicepool.Ways: r *= m; r /= d; m-- in float64. At n = 1021,
+	// k = 510 the product overflows although C(1021, 510) fits; at
+	// n = 1020 every step is finite.
+	ways := func(n, k int) float64 {
+		r, m := 1.0, float64(n)
+		for d := 1; d <= k; d++ {
+			r *= m
+			r /= float64(d)
+			m--
+		}
+		return r
+	}
+	if v := ways(1021, 510); !math.IsInf(v, 1) || binom(1021, 510).Cmp(maxF) > 0 {
+		t.Errorf("Ways(1021, 510) = %v; C(1021, 510) fits: %v", v, binom(1021, 510).Cmp(maxF) <= 0)
+	}
+	for n := 2; n <= 1020; n++ {
+		if v := ways(n, n/2); math.IsInf(v, 0) {
+			t.Fatalf("Ways(%d, %d) = %v, want finite", n, n/2, v)
+		}
+	}
+	// C(1029, 514) fits and C(1030, 515) does not (the pmf's limit).
+	if binom(1029, 514).Cmp(maxF) > 0 || binom(1030, 515).Cmp(maxF) <= 0 {
+		t.Error("central binomial limit of float64 is not n = 1030")
+	}
+	// dicepool.Pool.Combos in int64: at N = 62, K = 31 the product
+	// r*(N−K+i) wraps although C(62, 31) fits; at N = 61 it does not.
+	combos := func(n, k int64) (int64, bool) {
+		r := big.NewInt(1)
+		wrapped := false
+		for i := int64(1); i <= k; i++ {
+			r.Mul(r, big.NewInt(n-k+i))
+			wrapped = wrapped || !r.IsInt64()
+			r.Quo(r, big.NewInt(i))
+		}
+		return r.Int64(), wrapped
+	}
+	if _, w := combos(62, 31); !w || !binom(62, 31).IsInt64() {
+		t.Error("Combos(62, 31) should wrap while C(62, 31) fits int64")
+	}
+	for n := int64(1); n <= 61; n++ {
+		if _, w := combos(n, n/2); w {
+			t.Fatalf("Combos(%d, %d) wraps, want it to fit", n, n/2)
+		}
+	}
+	// callcentre.ErlangB, AtMost: k! in float64 is +Inf from k = 171.
+	f := 1.0
+	for k := 1.0; k <= 171; k++ {
+		f *= k
+		if k == 170 && math.IsInf(f, 0) {
+			t.Error("170! overflowed float64")
+		}
+	}
+	if !math.IsInf(f, 1) {
+		t.Error("171! fits float64")
+	}
+	// Surge: (2k+1)! at k = 85 is 171!, +Inf; at k = 84 it is 169!.
+	s := 1.0
+	for k := 1; k <= 85; k++ {
+		s *= float64(2*k) * float64(2*k+1)
+		if k == 84 && math.IsInf(s, 0) {
+			t.Error("169! overflowed float64")
+		}
+	}
+	if !math.IsInf(s, 1) {
+		t.Error("171! fits float64")
+	}
+	// Backlog: with lambda = 746 and n = 746 the computed CDF is 0,
+	// while the true P(X ≤ λ) of a Poisson variable is near ½ (for
+	// large λ the distribution is close to normal about λ; common
+	// practice).
+	backlog := func(lambda float64, n int) float64 {
+		p := math.Exp(-lambda)
+		sum := p
+		for k := 1; k <= n; k++ {
+			p *= lambda / float64(k)
+			sum += p
+		}
+		return sum
+	}
+	if v := backlog(746, 746); v != 0 {
+		t.Errorf("Backlog(746, 746) = %v, want the wrong 0", v)
+	}
+	if v := backlog(700, 700); math.Abs(v-0.5) > 0.05 {
+		t.Errorf("Backlog(700, 700) = %v, want about 0.5", v)
+	}
+}

@@ -1,0 +1,134 @@
+// Package dicepool computes the odds of a tabletop dice pool: how many
+// ways k of n dice show a success, and the chance of exactly k.
+package dicepool
+
+import "math"
+
+// Ways counts the ways k of n dice succeed, stepping the top factor
+// down.
+func Ways(n, k int) float64 {
+	r := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product r\*\(m\) overflows to \+Inf before the division for n ≥ 1021 at k = n/2, although C\(n, n/2\) itself fits up to n = 1029; n is not bounded here`
+		r *= m
+		r /= float64(d)
+		m--
+	}
+	return r
+}
+
+// WaysUp is Ways with the factors counted up.
+func WaysUp(n, k int) float64 {
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product r\*\(float64\(n - k \+ d\)\)`
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
+
+// Pool is a dice pool: N dice, K of them must succeed.
+type Pool struct {
+	N, K int64
+}
+
+// Combos counts the winning faces of the pool in integers.
+func (p Pool) Combos() int64 {
+	r := int64(1)
+	for i := int64(1); i <= p.K; i++ { // want `multiplicative binomial loop computes C\(p.N, p.K\) in int64: the product r\*\(p.N - p.K \+ i\) wraps before the division for p.N ≥ 62 at p.K = p.N/2, although C\(p.N, p.N/2\) itself fits up to p.N = 66; p.N is not bounded here`
+		r = r * (p.N - p.K + i) / i
+	}
+	return r
+}
+
+// Split divides at every step: no intermediate exceeds the result.
+func Split(n, k int) float64 {
+	v := 1.0
+	for c := 1; c <= k; c++ {
+		v *= float64(n+1-c) / float64(c)
+	}
+	return v
+}
+
+// TableCombos serves tables of at most 60 dice.
+func (p Pool) TableCombos() int64 {
+	if p.N > 60 || p.K < 0 || p.K > p.N {
+		return 0
+	}
+	r := int64(1)
+	for i := int64(1); i <= p.K; i++ {
+		r = r * (p.N - p.K + i) / i
+	}
+	return r
+}
+
+// BucketWays serves buckets of at most 1000 dice.
+func BucketWays(n, k int) float64 {
+	if n < 0 || n > 1000 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ {
+		r *= m
+		r /= float64(d)
+		m--
+	}
+	return r
+}
+
+// Exactly is the chance that exactly k of n dice succeed, each with
+// probability p.
+func Exactly(n, k int, p float64) float64 {
+	c := 1.0
+	for j := 1; j <= k; j++ {
+		c *= float64(n+1-j) / float64(j)
+	}
+	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `computes the binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1030 at k = n/2 \(C\(1029, 514\) ≈ 1.43e308 is the largest central one that fits\).*; n is not bounded here`
+}
+
+// ExactlyLog forms the coefficient from log-gamma, then leaves log
+// space.
+func ExactlyLog(n, k, p float64) float64 {
+	a, _ := math.Lgamma(n + 1)
+	b, _ := math.Lgamma(k + 1)
+	c, _ := math.Lgamma(n - k + 1)
+	coef := math.Exp(a - b - c)
+	return coef * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030`
+}
+
+// ExactlyInline writes the same in one expression.
+func ExactlyInline(n, k, p float64) float64 {
+	a, _ := math.Lgamma(n + 1)
+	b, _ := math.Lgamma(k + 1)
+	c, _ := math.Lgamma(n - k + 1)
+	return math.Exp(a-b-c) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030`
+}
+
+// ExactlyStable stays in log space to the end.
+func ExactlyStable(n, k, p float64) float64 {
+	a, _ := math.Lgamma(n + 1)
+	b, _ := math.Lgamma(k + 1)
+	c, _ := math.Lgamma(n - k + 1)
+	return math.Exp(a - b - c + k*math.Log(p) + (n-k)*math.Log(1-p))
+}
+
+// ExactlyTable serves tables of at most 1000 dice.
+func ExactlyTable(n, k int, p float64) float64 {
+	if n > 1000 {
+		return 0
+	}
+	c := 1.0
+	for j := 1; j <= k; j++ {
+		c *= float64(n+1-j) / float64(j)
+	}
+	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
+
+// ExactlyHandful serves a handful of dice, counted in a byte.
+func ExactlyHandful(n, k uint8, p float64) float64 {
+	c := 1.0
+	for j := uint8(1); j <= k; j++ {
+		c *= float64(n+1-j) / float64(j)
+	}
+	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
