@@ -6,6 +6,9 @@ import (
 	"go/parser"
 	"go/token"
 	"go/types"
+	"math"
+	"math/big"
+	"strings"
 	"testing"
 )
 
@@ -221,5 +224,85 @@ func f(p pool) int64 {
 				t.Errorf("got %s (value %v), want %s", got, v, tc.want)
 			}
 		})
+	}
+}
+
+// The intermediates of a multiplicative binomial loop, trip by trip,
+// against the loop run in math/big: after r*(n−k+d) on trip t the
+// product is (t+1)·C(n−k+t+1, t+1) (common practice).
+func TestLoopIntermediates(t *testing.T) {
+	info, fd := load(t, `func f(n, k int) float64 {
+	r := 1.0
+	for d := 1; d <= k; d++ {
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if len(res.Loops) != 1 || len(res.Loops[0].Accs) != 1 {
+		t.Fatalf("loops %d", len(res.Loops))
+	}
+	l := res.Loops[0]
+	a := l.Accs[0]
+	if len(a.Ops) != 2 || !a.Ops[0].Mul || a.Ops[1].Mul {
+		t.Fatalf("ops %+v, want × then ÷", a.Ops)
+	}
+	syms := map[string]Sym{}
+	for s := range res.Exprs {
+		syms[s.Name()] = s
+	}
+	n, k := int64(40), int64(20)
+	r := big.NewInt(1)
+	for d := int64(1); d <= k; d++ {
+		r.Mul(r, big.NewInt(n-k+d))
+		val := map[Sym]float64{syms["n"]: float64(n), syms["k"]: float64(k), l.Iter: float64(d - 1)}
+		want, _ := new(big.Float).SetInt(r).Float64()
+		closeLog(t, "after ×", a.Ops[0].After, val, math.Log(want))
+		r.Quo(r, big.NewInt(d))
+	}
+}
+
+// A sum's term is read with the running accumulators it uses.
+func TestSumTerms(t *testing.T) {
+	info, fd := load(t, `func f(a float64, c int) float64 {
+	fact, sum := 1.0, 1.0
+	for k := 1; k <= c; k++ {
+		fact *= float64(k)
+		sum += math.Pow(a, float64(k)) / fact
+	}
+	return sum
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if len(res.Loops) != 1 || len(res.Loops[0].Sums) != 1 {
+		t.Fatalf("want one loop with one sum")
+	}
+	if f := Recognise(res.Loops[0].Sums[0].Sum.Term); f.Kind != PowOverFact {
+		t.Errorf("term %v, want a^k/k!", res.Loops[0].Sums[0].Sum.Term)
+	}
+	// The sum itself is unknown past the loop.
+	if v := returned(res, fd); v != nil {
+		t.Errorf("sum after the loop = %v, want unknown", v)
+	}
+}
+
+// Huge functions stop at the cap and say so; bad input never panics.
+func TestBounded(t *testing.T) {
+	var b strings.Builder
+	b.WriteString("func f(n int) int {\n\tv := 1\n")
+	for i := 0; i < 3000; i++ {
+		b.WriteString("\tv = v*n + 1\n")
+	}
+	b.WriteString("\treturn v\n}")
+	info, fd := load(t, b.String(), "f")
+	res := Evaluate(info, fd, Options{MaxNodes: 500})
+	if !res.Capped {
+		t.Error("not capped")
+	}
+	res = Evaluate(&types.Info{}, fd, Options{})
+	if len(res.Loops) != 0 {
+		t.Error("loops found without type information")
+	}
+	if res := Evaluate(info, &ast.FuncDecl{}, Options{}); res == nil {
+		t.Error("nil result for an empty declaration")
 	}
 }

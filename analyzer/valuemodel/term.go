@@ -54,7 +54,7 @@ func FromAffine(a Affine) *Term {
 func GammaOf(a Affine) *Term {
 	t := One()
 	t.Gamma = []GammaPow{{a, 1}}
-	return t
+	return t.norm()
 }
 
 // Factorial returns n! as Γ(n+1).
