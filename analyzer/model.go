@@ -64,7 +64,7 @@ func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 func (fc *fnCtx) checkModel() {
 	res := fc.evalModel()
 	for _, l := range res.Loops {
-		if fc.c.reportedAt(l.Stmt.Pos()) {
+		if l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
 			continue
 		}
 		mc := &modelCtx{fc: fc, res: res, loop: l}

@@ -54,6 +54,11 @@ type Loop struct {
 	BoundOff *big.Rat
 	Accs     []*Acc
 	Sums     []*SumAcc
+	// Exits reports that the body can leave the loop early or skip the
+	// rest of a trip (break, continue, return, goto, panic): the
+	// summary then holds only for trips that run to the end, and the
+	// trip count is an upper bound.
+	Exits bool
 }
 
 // Acc is a variable the loop multiplies or divides, and nothing else.

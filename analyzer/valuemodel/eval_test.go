@@ -306,3 +306,26 @@ func TestBounded(t *testing.T) {
 		t.Error("nil result for an empty declaration")
 	}
 }
+
+// A loop that can stop early is marked, so that its trip count is
+// read as an upper bound only.
+func TestExits(t *testing.T) {
+	for src, want := range map[string]bool{
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { v *= float64(i); if v > 1e300 { break } }; return v }`:                         true,
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { v *= float64(i); if v > 1e300 { return 0 } }; return v }`:                      true,
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { v *= float64(i); for j := 0; j < 3; j++ { if j == 1 { break } } }; return v }`: false,
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { switch { case i > 2: break }; v *= float64(i) }; return v }`:                   false,
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { if i%2 == 0 { continue }; v *= float64(i) }; return v }`:                       true,
+		`func f(n int) float64 { v := 1.0; for i := 1; i <= n; i++ { if v > 1e300 { panic("too big") }; v *= float64(i) }; return v }`:              true,
+	} {
+		info, fd := load(t, src, "f")
+		res := Evaluate(info, fd, Options{})
+		if len(res.Loops) == 0 {
+			t.Errorf("%s: no loop", src)
+			continue
+		}
+		if got := res.Loops[len(res.Loops)-1].Exits; got != want {
+			t.Errorf("%s: Exits = %v, want %v", src, got, want)
+		}
+	}
+}

@@ -78,6 +78,7 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 			l.Accs = append(l.Accs, &Acc{Obj: obj, Init: init.t})
 		}
 	}
+	l.Exits = e.exits(body)
 	e.trip(l, body, trip(true), roles, sites, true)
 	e.trip(l, body, trip(false), roles, sites, false)
 	e.res.Loops = append(e.res.Loops, l)
@@ -701,4 +702,47 @@ func (l *Loop) body() ast.Node {
 		return s.Body
 	}
 	return nil
+}
+
+// exits reports whether body can leave its loop before the condition
+// fails, or skip the rest of a trip: a break or continue of the loop
+// itself, a labelled break or continue, a goto, a return or a call of
+// panic, outside closures.
+func (e *evaluator) exits(body *ast.BlockStmt) bool {
+	found := false
+	var walk func(n ast.Node, inner bool)
+	walk = func(n ast.Node, inner bool) {
+		ast.Inspect(n, func(m ast.Node) bool {
+			if found || m == nil {
+				return false
+			}
+			switch m := m.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.ForStmt, *ast.RangeStmt, *ast.SwitchStmt, *ast.TypeSwitchStmt, *ast.SelectStmt:
+				if m != n {
+					walk(m, true)
+					return false
+				}
+			case *ast.BranchStmt:
+				switch {
+				case m.Tok == token.GOTO, m.Label != nil && m.Tok != token.FALLTHROUGH:
+					found = true
+				case (m.Tok == token.BREAK || m.Tok == token.CONTINUE) && !inner:
+					found = true
+				}
+			case *ast.ReturnStmt:
+				found = true
+			case *ast.CallExpr:
+				if id, ok := ast.Unparen(m.Fun).(*ast.Ident); ok && id.Name == "panic" {
+					if _, ok := e.info.Uses[id].(*types.Builtin); ok {
+						found = true
+					}
+				}
+			}
+			return true
+		})
+	}
+	walk(body, false)
+	return found
 }

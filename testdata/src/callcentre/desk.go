@@ -192,3 +192,18 @@ func Ramp(lambda float64, n int) float64 {
 	}
 	return w
 }
+
+// ErlangBConverged stops adding once the terms no longer matter, long
+// before the factorial could overflow for any traffic the desk sees.
+func ErlangBConverged(a, c float64) float64 {
+	fact, sum := 1.0, 1.0
+	for k := 1.0; k <= c; k++ {
+		fact *= k
+		t := math.Pow(a, k) / fact
+		sum += t
+		if t < 1e-16*sum {
+			break
+		}
+	}
+	return sum
+}
