@@ -64,7 +64,12 @@ func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 func (fc *fnCtx) checkModel() {
 	res := fc.evalModel()
 	for _, l := range res.Loops {
-		if l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+		// A while-style loop consumes a variable the code often bounds
+		// only through a derived value (q := math.Abs(x); if q > 33
+		// { return }; for x >= 3 { x--; z *= x } in std's math.Gamma),
+		// which the range analysis does not follow: precision first,
+		// only loops with a counter of their own are judged.
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
 			continue
 		}
 		mc := &modelCtx{fc: fc, res: res, loop: l}
@@ -494,7 +499,10 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 	// The range of n where the product is formed: a read of it in the
 	// last loop, after the guards that bound it.
 	var read ast.Expr
-	if len(res.Loops) > 0 {
+	if len(res.Loops) == 0 || res.Loops[len(res.Loops)-1].Counter == nil {
+		return nil
+	}
+	{
 		ast.Inspect(res.Loops[len(res.Loops)-1].Stmt, func(n ast.Node) bool {
 			if id, ok := n.(*ast.Ident); ok && read == nil && fc.c.pass.TypesInfo.Uses[id] == v.Obj {
 				read = id

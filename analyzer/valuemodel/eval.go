@@ -148,7 +148,13 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 // variable itself, a nil entry unknown.
 type env map[types.Object]*value
 
-func (en env) copy() env {
+// copyEnv copies en, counting its entries against the node budget: in
+// a long function the copies, not the nodes, would dominate the work.
+func (e *evaluator) copyEnv(en env) env {
+	e.nodes += len(en)
+	if e.nodes > e.opts.MaxNodes {
+		e.res.Capped = true
+	}
 	out := make(env, len(en))
 	for k, v := range en {
 		out[k] = v
@@ -313,7 +319,7 @@ func (e *evaluator) stmt(st ast.Stmt, en env) {
 // branch walks statements that may or may not run: values inside are
 // recorded, and what they assign is unknown afterwards.
 func (e *evaluator) branch(list []ast.Stmt, en env) {
-	inner := en.copy()
+	inner := e.copyEnv(en)
 	for _, st := range list {
 		switch s := st.(type) {
 		case *ast.BlockStmt:
@@ -323,7 +329,7 @@ func (e *evaluator) branch(list []ast.Stmt, en env) {
 		case *ast.SwitchStmt, *ast.TypeSwitchStmt, *ast.SelectStmt:
 			ast.Inspect(s, func(n ast.Node) bool {
 				if cl, ok := n.(*ast.CaseClause); ok {
-					e.block(cl.Body, inner.copy())
+					e.block(cl.Body, e.copyEnv(inner))
 					return false
 				}
 				if _, ok := n.(*ast.FuncLit); ok {

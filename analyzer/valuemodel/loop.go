@@ -46,7 +46,7 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		roles[obj] = e.roleOf(obj, ss, steps)
 	}
 	trip := func(dry bool) env {
-		in := en.copy()
+		in := e.copyEnv(en)
 		for obj, r := range roles {
 			switch r {
 			case roleStep:
@@ -128,7 +128,7 @@ func (e *evaluator) cur(obj types.Object, en env) *value {
 // is unknown inside and after it.
 func (e *evaluator) opaqueLoop(st ast.Stmt, en env) {
 	e.forgetAssigned([]ast.Stmt{st}, en)
-	in := en.copy()
+	in := e.copyEnv(en)
 	switch s := st.(type) {
 	case *ast.ForStmt:
 		if s.Init != nil {

@@ -207,3 +207,20 @@ func ErlangBConverged(a, c float64) float64 {
 	}
 	return sum
 }
+
+// Reduce brings a float argument below 3 by dividing out factors, as a
+// Gamma routine does after it has checked q := math.Abs(x) ≤ 33, which
+// the range analysis does not carry back to x: a while-style loop is
+// not judged by the value model.
+func Reduce(x float64) float64 {
+	q := math.Abs(x)
+	if q > 33 {
+		return math.Inf(1)
+	}
+	z := 1.0
+	for x >= 3 {
+		x = x - 1
+		z = z * x
+	}
+	return z
+}
