@@ -63,7 +63,14 @@ func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 // loop: one finding per root cause.
 func (fc *fnCtx) checkModel() {
 	res := fc.evalModel()
+	judged := make(map[ast.Stmt]bool)
+	for _, e := range fc.modelRoots(res) {
+		fc.modelRatio(res, e, judged)
+	}
 	for _, l := range res.Loops {
+		if judged[l.Stmt] {
+			continue
+		}
 		// A while-style loop consumes a variable the code often bounds
 		// only through a derived value (q := math.Abs(x); if q > 33
 		// { return }; for x >= 3 { x--; z *= x } in std's math.Gamma),
@@ -518,4 +525,72 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 	}
 	off := beta.Num().Int64()
 	return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: read, wrapOff: off}
+}
+
+// modelRatio reports a returned quotient of loop accumulators that
+// computes C(n, k), a falling product or n! over one or two factorial
+// loops (in one loop or several): the numerator leaves the type while
+// C(n, k) still fits. The loops it judges are marked, so that each is
+// not reported again on its own.
+func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool) {
+	b, ok := unparen(e).(*ast.BinaryExpr)
+	if !ok || b.Op != token.QUO {
+		return
+	}
+	f := vm.Recognise(res.Values[e])
+	if f.Kind != vm.Binomial {
+		return
+	}
+	var loops []*vm.Loop
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if mentions(fc.c.pass.TypesInfo, b, a.Obj) {
+				loops = append(loops, l)
+				break
+			}
+		}
+	}
+	if len(loops) == 0 {
+		return
+	}
+	for _, l := range loops {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+			return
+		}
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+	if !ok {
+		return
+	}
+	num := vm.Recognise(res.Values[b.X])
+	// n!/(n−k)! grows with k up to n! at k = n: the numerator breaks
+	// first where n! does, whichever form it has.
+	first := thresholds.Factorial(t.Num).FirstBad
+	if num.Kind != vm.Fact && num.Kind != vm.Falling {
+		return
+	}
+	nv, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || !num.Args[0].Equal(f.Args[0]) {
+		return
+	}
+	for _, l := range loops {
+		judged[l.Stmt] = true
+	}
+	n := fc.symRange(res, nv, e)
+	if n.IsEmpty() || n.Hi < first {
+		return
+	}
+	clause, definite := verdict(nv.Name(), n, first)
+	den := "its divisor"
+	if d := vm.Recognise(res.Values[b.Y]); d.Kind != vm.Unknown && d.Kind != vm.GammaRatio {
+		den = d.String()
+	}
+	at := ""
+	if num.Kind == vm.Falling {
+		at = fmt.Sprintf(" at %s = %s and for %s ≥ %d at %s = %s/2", f.Args[1], nv.Name(), nv.Name(), thresholds.CentralFalling(t.Num).FirstBad, f.Args[1], nv.Name())
+	}
+	central := thresholds.CentralBinomial(t.Num)
+	msg := fmt.Sprintf("computes C(%s, %s) as %s divided by %s in %s: the numerator %s for %s ≥ %d%s, although C(%s, %s/2) itself fits up to %s = %d",
+		f.Args[0], f.Args[1], num, den, t.typeName(), verb(t), nv.Name(), first, at, nv.Name(), nv.Name(), nv.Name(), central.FirstBad-1)
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
 }

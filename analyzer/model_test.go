@@ -47,6 +47,38 @@ func TestModelProbes(t *testing.T) {
 	if binom(1029, 514).Cmp(maxF) > 0 || binom(1030, 515).Cmp(maxF) <= 0 {
 		t.Error("central binomial limit of float64 is not n = 1030")
 	}
+	// dicepool.MidHands: at n = k = 171 both loops overflow and the
+	// ratio is NaN, while C(171, 171) = 1; C(200, k) fits for every k.
+	hands := func(n, k float64) float64 {
+		num, den := 1.0, 1.0
+		for i := 0.0; i < k; i++ {
+			num *= n - i
+		}
+		for i := 2.0; i <= k; i++ {
+			den *= i
+		}
+		return num / den
+	}
+	if v := hands(171, 171); !math.IsNaN(v) {
+		t.Errorf("MidHands(171, 171) = %v, want NaN", v)
+	}
+	for k := int64(0); k <= 200; k++ {
+		if binom(200, k).Cmp(maxF) > 0 {
+			t.Fatalf("C(200, %d) does not fit float64", k)
+		}
+	}
+	// The numerator n!/(n−⌊n/2⌋)! at k = n/2: finite at n = 269,
+	// +Inf at n = 270.
+	if v := hands(269, 134); math.IsInf(v, 0) || math.IsNaN(v) {
+		t.Errorf("Hands(269, 134) = %v, want finite", v)
+	}
+	num270 := 1.0
+	for i := 0.0; i < 135; i++ {
+		num270 *= 270 - i
+	}
+	if !math.IsInf(num270, 1) {
+		t.Errorf("270!/135! = %v in float64, want +Inf", num270)
+	}
 	// dicepool.Pool.Combos in int64: at N = 62, K = 31 the product
 	// r*(N−K+i) wraps although C(62, 31) fits; at N = 61 it does not.
 	combos := func(n, k int64) (int64, bool) {

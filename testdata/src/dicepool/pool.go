@@ -132,3 +132,66 @@ func ExactlyHandful(n, k uint8, p float64) float64 {
 	}
 	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
 }
+
+// Hands counts the hands of k dice out of n, numerator and divisor in
+// two loops counted in float64.
+func Hands(n, k float64) float64 {
+	num := 1.0
+	for i := 0.0; i < k; i++ {
+		num *= n - i
+	}
+	den := 1.0
+	for i := 2.0; i <= k; i++ {
+		den *= i
+	}
+	return num / den // want `computes C\(n, k\) as n!/\(n - k\)! divided by k! in float64: the numerator overflows to \+Inf for n ≥ 171 at k = n and for n ≥ 270 at k = n/2, although C\(n, n/2\) itself fits up to n = 1029; n is not bounded here`
+}
+
+// HandsOneLoop keeps n!, k! and (n−k)! in one loop.
+func HandsOneLoop(n, k float64) float64 {
+	num, den := 1.0, 1.0
+	for i := 1.0; i <= n; i++ {
+		num *= i
+		if i <= k {
+			den *= i
+		}
+		if i <= n-k {
+			den *= i
+		}
+	}
+	return num / den // want `computes C\(n, k\) as n! divided by its divisor in float64: the numerator overflows to \+Inf for n ≥ 171, although C\(n, n/2\) itself fits up to n = 1029; n is not bounded here`
+}
+
+// SmallHands serves cups of at most 170 dice: numerator and divisor
+// fit float64 for every k there.
+func SmallHands(n, k float64) float64 {
+	if n > 170 || k < 0 || k > n {
+		return 0
+	}
+	num := 1.0
+	for i := 0.0; i < k; i++ {
+		num *= n - i
+	}
+	den := 1.0
+	for i := 2.0; i <= k; i++ {
+		den *= i
+	}
+	return num / den
+}
+
+// MidHands serves cups of at most 200 dice: C(200, k) fits float64, but
+// from k = 171 both loops overflow and the ratio is NaN.
+func MidHands(n, k float64) float64 {
+	if n > 200 || k < 0 || k > n {
+		return 0
+	}
+	num := 1.0
+	for i := 0.0; i < k; i++ {
+		num *= n - i
+	}
+	den := 1.0
+	for i := 2.0; i <= k; i++ {
+		den *= i
+	}
+	return num / den // want `computes C\(n, k\) as n!/\(n - k\)! divided by k! .*; n may reach 200 here`
+}
