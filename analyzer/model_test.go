@@ -1,8 +1,10 @@
 package analyzer
 
 import (
+	"bytes"
 	"math"
 	"math/big"
+	"strings"
 	"testing"
 
 	"golang.org/x/tools/go/analysis/analysistest"
@@ -139,5 +141,24 @@ func TestModelProbes(t *testing.T) {
 	}
 	if v := backlog(700, 700); math.Abs(v-0.5) > 0.05 {
 		t.Errorf("Backlog(700, 700) = %v, want about 0.5", v)
+	}
+}
+
+// TestModelCapLogged: a function past the value model's node cap is
+// modelled only in part, and the -debug log says so.
+func TestModelCapLogged(t *testing.T) {
+	var b strings.Builder
+	b.WriteString("package capped\n\nimport \"math\"\n\nfunc long(x float64) float64 {\n\tv := math.Exp(-x)\n")
+	for i := 0; i < 4000; i++ {
+		b.WriteString("\tv = v*x + 1\n")
+	}
+	b.WriteString("\treturn v\n}\n")
+	var log bytes.Buffer
+	oldOut, oldDebug := debugOut, debug
+	debugOut, debug = &log, true
+	defer func() { debugOut, debug = oldOut, oldDebug }()
+	analysistest.Run(t, writePkg(t, "capped", b.String()), Analyzer, "capped")
+	if !strings.Contains(log.String(), "value model stopped at") {
+		t.Errorf("debug log = %q", log.String())
 	}
 }
