@@ -62,6 +62,9 @@ func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 // function compute where it leaves its type and no matcher reported the
 // loop: one finding per root cause.
 func (fc *fnCtx) checkModel() {
+	if !fc.modelWorth() {
+		return
+	}
 	res := fc.evalModel()
 	judged := make(map[ast.Stmt]bool)
 	for _, e := range fc.modelRoots(res) {
@@ -97,8 +100,8 @@ func (fc *fnCtx) checkModel() {
 
 // reportedAt reports whether a finding of any category starts at pos.
 func (c *checker) reportedAt(pos token.Pos) bool {
-	for k := range c.reported {
-		if k.pos == pos {
+	for _, p := range patterns {
+		if c.reported[reportKey{pos, p.id}] || c.reported[reportKey{pos, p.id + definiteSuffix}] {
 			return true
 		}
 	}
@@ -593,4 +596,29 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 	msg := fmt.Sprintf("computes C(%s, %s) as %s divided by %s in %s: the numerator %s for %s ≥ %d%s, although C(%s, %s/2) itself fits up to %s = %d",
 		f.Args[0], f.Args[1], num, den, t.typeName(), verb(t), nv.Name(), first, at, nv.Name(), nv.Name(), nv.Name(), central.FirstBad-1)
 	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+}
+
+// modelWorth is the model's own cheap prefilter: a counting loop that
+// no matcher reported, or a binomial coefficient from math.Lgamma beside
+// two math.Pow calls (the pmf). Functions whose loops are all reported
+// already cost one walk of their syntax and no evaluation.
+func (fc *fnCtx) modelWorth() bool {
+	open, lgamma, pows := false, false, 0
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			open = open || !fc.c.reportedAt(n.Pos())
+		case *ast.CallExpr:
+			switch {
+			case fc.c.isMathFunc(n, "Lgamma"):
+				lgamma = true
+			case fc.c.isMathFunc(n, "Pow"):
+				pows++
+			}
+		}
+		return !open
+	})
+	return open || lgamma && pows >= 2
 }
