@@ -5,7 +5,6 @@ import (
 	"go/ast"
 	"go/types"
 	"math/big"
-	"sort"
 	"strings"
 )
 
@@ -29,6 +28,30 @@ func (s Sym) Name() string {
 		return s.Obj.Name() + "." + s.Field.Name()
 	}
 	return s.Obj.Name()
+}
+
+// before orders variables by position, ties broken by kind, so that
+// two different variables never compare equal.
+func (s Sym) before(t Sym) bool {
+	if p, q := s.pos(), t.pos(); p != q {
+		return p < q
+	}
+	if s == t {
+		return false
+	}
+	return s.rank() < t.rank()
+}
+
+// rank breaks ties of pos between distinct variables at one position
+// (a variable and a loop starting there).
+func (s Sym) rank() int {
+	switch {
+	case s.Loop != nil:
+		return 2
+	case s.Field != nil:
+		return 1
+	}
+	return 0
 }
 
 func (s Sym) pos() int {
@@ -60,56 +83,112 @@ type Affine struct {
 
 func rat(n int64) *big.Rat { return big.NewRat(n, 1) }
 
+// smallRats holds the integers −64…64 as rationals that are only ever
+// read: forms share them instead of allocating.
+var smallRats = func() (out [129]*big.Rat) {
+	for i := range out {
+		out[i] = big.NewRat(int64(i-64), 1)
+	}
+	return out
+}()
+
+// shared returns n as a rational the caller must not modify.
+func shared(n int64) *big.Rat {
+	if n >= -64 && n <= 64 {
+		return smallRats[n+64]
+	}
+	return big.NewRat(n, 1)
+}
+
+var ratOne = shared(1)
+
+// smallInt64 returns r as an int64 when it is an integer of at most
+// 2^30 in size, where sums and products of two stay exact in int64.
+func smallInt64(r *big.Rat) (int64, bool) {
+	if !r.IsInt() || !r.Num().IsInt64() {
+		return 0, false
+	}
+	v := r.Num().Int64()
+	return v, v >= -1<<30 && v <= 1<<30
+}
+
+// addRat returns x+y, shared when both are small integers.
+func addRat(x, y *big.Rat) *big.Rat {
+	if a, ok := smallInt64(x); ok {
+		if b, ok := smallInt64(y); ok {
+			return shared(a + b)
+		}
+	}
+	return new(big.Rat).Add(x, y)
+}
+
+// mulRat returns x·y, shared when both are small integers.
+func mulRat(x, y *big.Rat) *big.Rat {
+	if a, ok := smallInt64(x); ok {
+		if b, ok := smallInt64(y); ok {
+			return shared(a * b)
+		}
+	}
+	return new(big.Rat).Mul(x, y)
+}
+
 // Const returns the constant form c.
 func Const(c *big.Rat) Affine { return Affine{C: new(big.Rat).Set(c)} }
 
 // Int returns the constant form n.
-func Int(n int64) Affine { return Affine{C: rat(n)} }
+func Int(n int64) Affine { return Affine{C: shared(n)} }
 
 // Var returns the form 1·s.
-func Var(s Sym) Affine { return Affine{C: new(big.Rat), Terms: []Lin{{s, rat(1)}}} }
+func Var(s Sym) Affine { return Affine{C: shared(0), Terms: []Lin{{s, ratOne}}} }
 
+// c returns the constant of a, which the caller must not modify.
 func (a Affine) c() *big.Rat {
 	if a.C == nil {
-		return new(big.Rat)
+		return shared(0)
 	}
 	return a.C
 }
 
-// Add returns a+b.
+// Add returns a+b, merging the two sorted term lists.
 func (a Affine) Add(b Affine) Affine {
-	out := Affine{C: new(big.Rat).Add(a.c(), b.c())}
-	m := make(map[Sym]*big.Rat, len(a.Terms)+len(b.Terms))
-	for _, l := range append(append([]Lin(nil), a.Terms...), b.Terms...) {
-		if k, ok := m[l.Sym]; ok {
-			m[l.Sym] = new(big.Rat).Add(k, l.K)
-		} else {
-			m[l.Sym] = new(big.Rat).Set(l.K)
+	out := Affine{C: addRat(a.c(), b.c())}
+	if len(a.Terms)+len(b.Terms) > 0 {
+		out.Terms = make([]Lin, 0, len(a.Terms)+len(b.Terms))
+	}
+	i, j := 0, 0
+	for i < len(a.Terms) || j < len(b.Terms) {
+		switch {
+		case j == len(b.Terms) || i < len(a.Terms) && a.Terms[i].Sym.before(b.Terms[j].Sym):
+			out.Terms = append(out.Terms, a.Terms[i])
+			i++
+		case i == len(a.Terms) || b.Terms[j].Sym.before(a.Terms[i].Sym):
+			out.Terms = append(out.Terms, b.Terms[j])
+			j++
+		default: // the same variable
+			if k := addRat(a.Terms[i].K, b.Terms[j].K); k.Sign() != 0 {
+				out.Terms = append(out.Terms, Lin{a.Terms[i].Sym, k})
+			}
+			i++
+			j++
 		}
 	}
-	for s, k := range m {
-		if k.Sign() != 0 {
-			out.Terms = append(out.Terms, Lin{s, k})
-		}
-	}
-	sort.Slice(out.Terms, func(i, j int) bool { return out.Terms[i].Sym.pos() < out.Terms[j].Sym.pos() })
 	return out
 }
 
 // Scale returns r·a.
 func (a Affine) Scale(r *big.Rat) Affine {
-	out := Affine{C: new(big.Rat).Mul(a.c(), r)}
+	out := Affine{C: mulRat(a.c(), r)}
 	if r.Sign() == 0 {
 		return out
 	}
 	for _, l := range a.Terms {
-		out.Terms = append(out.Terms, Lin{l.Sym, new(big.Rat).Mul(l.K, r)})
+		out.Terms = append(out.Terms, Lin{l.Sym, mulRat(l.K, r)})
 	}
 	return out
 }
 
 // Sub returns a−b.
-func (a Affine) Sub(b Affine) Affine { return a.Add(b.Scale(rat(-1))) }
+func (a Affine) Sub(b Affine) Affine { return a.Add(b.Scale(shared(-1))) }
 
 // Shift returns a+n.
 func (a Affine) Shift(n int64) Affine { return a.Add(Int(n)) }

@@ -68,7 +68,7 @@ func (f Form) String() string {
 }
 
 func paren(a Affine) string {
-	if len(a.Terms) == 1 && a.c().Sign() == 0 && a.Terms[0].K.Cmp(rat(1)) == 0 || a.IsConst() {
+	if len(a.Terms) == 1 && a.c().Sign() == 0 && a.Terms[0].K.Cmp(ratOne) == 0 || a.IsConst() {
 		return a.String()
 	}
 	return "(" + a.String() + ")"
@@ -77,7 +77,7 @@ func paren(a Affine) string {
 // Recognise names the canonical form of t, whatever the order its
 // factors were written in; Kind Unknown when it is none of them.
 func Recognise(t *Term) Form {
-	if t == nil || t.Coef.Cmp(rat(1)) != 0 || t.SqrtPi != 0 {
+	if t == nil || t.Coef.Cmp(ratOne) != 0 || t.SqrtPi != 0 {
 		return Form{}
 	}
 	var up, down []Affine
@@ -104,7 +104,7 @@ func Recognise(t *Term) Form {
 		if noExp {
 			return Form{PowOverFact, []Affine{p.Base, k}}
 		}
-		if t.Exp.Equal(p.Base.Scale(rat(-1))) {
+		if t.Exp.Equal(p.Base.Scale(shared(-1))) {
 			return Form{Poisson, []Affine{p.Base, k}}
 		}
 	case noExp && len(t.Pows) == 2:
@@ -165,7 +165,7 @@ func gammaForm(up, down []Affine) Form {
 		// Catalan: Γ(2n+1)/(Γ(n+2)Γ(n+1))
 		for _, bc := range [][2]Affine{{b, c}, {c, b}} {
 			n := bc[1].Shift(-1)
-			if bc[0].Equal(n.Shift(2)) && a.Equal(n.Scale(rat(2)).Shift(1)) {
+			if bc[0].Equal(n.Shift(2)) && a.Equal(n.Scale(shared(2)).Shift(1)) {
 				return Form{Catalan, []Affine{n}}
 			}
 		}

@@ -584,7 +584,7 @@ func (e *evaluator) binary(op token.Token, a, b *value) *value {
 		switch {
 		case op == token.ADD || op == token.SUB && a.log:
 			if op == token.SUB {
-				oa = oa.Scale(rat(-1))
+				oa = oa.Scale(shared(-1))
 			}
 			return &value{t: l.t.Mul(ExpOf(oa)), log: true}
 		case op == token.SUB:
@@ -606,7 +606,7 @@ func (e *evaluator) binary(op token.Token, a, b *value) *value {
 			return nil
 		}
 		if op == token.SUB {
-			y = y.Scale(rat(-1))
+			y = y.Scale(shared(-1))
 		}
 		return &value{t: FromAffine(x.Add(y))}
 	}
@@ -621,7 +621,7 @@ func logScale(t *Term, k Affine) *Term {
 	if k.IsConst() && k.c().IsInt() {
 		return t.PowInt(k.c().Num().Int64())
 	}
-	if t.Coef.Cmp(rat(1)) == 0 && len(t.Gamma) == 0 && t.SqrtPi == 0 && len(t.Pows) == 1 && t.Pows[0].Exp.IsConst() && t.Exp.IsConst() && t.Exp.c().Sign() == 0 {
+	if t.Coef.Cmp(ratOne) == 0 && len(t.Gamma) == 0 && t.SqrtPi == 0 && len(t.Pows) == 1 && t.Pows[0].Exp.IsConst() && t.Exp.IsConst() && t.Exp.c().Sign() == 0 {
 		p := t.Pows[0]
 		return PowOf(p.Base, k.Scale(p.Exp.c()))
 	}

@@ -663,7 +663,7 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 // the third result is nil when the condition is not of that form.
 func (e *evaluator) guardRange(l *Loop, cond ast.Expr, en env) (Affine, Affine, *Term) {
 	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
-	if !ok || l.Step.Cmp(rat(1)) != 0 && l.Step.Cmp(rat(-1)) != 0 {
+	if !ok || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
 		return Int(0), l.Count, nil
 	}
 	op, x := b.Op, b.Y

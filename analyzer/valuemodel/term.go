@@ -21,7 +21,9 @@ type Power struct {
 
 // Term is Coef · √π^SqrtPi · ∏ Γ(Gamma[i].Arg)^Gamma[i].Pow ·
 // ∏ Pows[j].Base^Pows[j].Exp · exp(Exp). The zero value is not a term;
-// build terms with One, Num, Sym or Gamma.
+// build terms with One, Num, FromAffine or GammaOf. Terms, their forms
+// and their rationals are never modified once built: operations return
+// new terms, which may share parts with their operands.
 type Term struct {
 	Coef   *big.Rat
 	SqrtPi int
@@ -35,7 +37,7 @@ type Term struct {
 const maxFactors = 24
 
 // One returns the term 1.
-func One() *Term { return &Term{Coef: rat(1), Exp: Int(0)} }
+func One() *Term { return &Term{Coef: ratOne, Exp: Int(0)} }
 
 // Num returns the constant term c.
 func Num(c *big.Rat) *Term { return &Term{Coef: new(big.Rat).Set(c), Exp: Int(0)} }
@@ -75,7 +77,7 @@ func ExpOf(x Affine) *Term {
 }
 
 func (t *Term) clone() *Term {
-	out := &Term{Coef: new(big.Rat).Set(t.Coef), SqrtPi: t.SqrtPi, Exp: t.Exp}
+	out := &Term{Coef: t.Coef, SqrtPi: t.SqrtPi, Exp: t.Exp}
 	out.Gamma = append([]GammaPow(nil), t.Gamma...)
 	out.Pows = append([]Power(nil), t.Pows...)
 	return out
@@ -88,7 +90,7 @@ func (t *Term) Mul(u *Term) *Term {
 		return nil
 	}
 	out := t.clone()
-	out.Coef.Mul(out.Coef, u.Coef)
+	out.Coef = mulRat(out.Coef, u.Coef)
 	out.SqrtPi += u.SqrtPi
 	out.Gamma = append(out.Gamma, u.Gamma...)
 	out.Pows = append(out.Pows, u.Pows...)
@@ -101,12 +103,12 @@ func (t *Term) Inv() *Term {
 	if t == nil || t.Coef.Sign() == 0 {
 		return nil
 	}
-	out := &Term{Coef: new(big.Rat).Inv(t.Coef), SqrtPi: -t.SqrtPi, Exp: t.Exp.Scale(rat(-1))}
+	out := &Term{Coef: new(big.Rat).Inv(t.Coef), SqrtPi: -t.SqrtPi, Exp: t.Exp.Scale(shared(-1))}
 	for _, g := range t.Gamma {
 		out.Gamma = append(out.Gamma, GammaPow{g.Arg, -g.Pow})
 	}
 	for _, p := range t.Pows {
-		out.Pows = append(out.Pows, Power{p.Base, p.Exp.Scale(rat(-1))})
+		out.Pows = append(out.Pows, Power{p.Base, p.Exp.Scale(shared(-1))})
 	}
 	return out
 }
@@ -120,7 +122,7 @@ func (t *Term) Neg() *Term {
 		return nil
 	}
 	out := t.clone()
-	out.Coef.Neg(out.Coef)
+	out.Coef = new(big.Rat).Neg(out.Coef)
 	return out
 }
 
@@ -165,7 +167,7 @@ func (t *Term) Affine() (Affine, bool) {
 		return Const(t.Coef), true
 	case 1:
 		p := t.Pows[0]
-		if p.Exp.IsConst() && p.Exp.c().Cmp(rat(1)) == 0 {
+		if p.Exp.IsConst() && p.Exp.c().Cmp(ratOne) == 0 {
 			return p.Base.Scale(t.Coef), true
 		}
 	}
@@ -283,9 +285,9 @@ func (t *Term) foldShift() {
 				}
 				t.Gamma[j].Arg = g.Arg.Shift(shift)
 				if e > 0 {
-					t.Coef.Quo(t.Coef, lam)
+					t.Coef = new(big.Rat).Quo(t.Coef, lam)
 				} else {
-					t.Coef.Mul(t.Coef, lam)
+					t.Coef = mulRat(t.Coef, lam)
 				}
 				step := int64(1)
 				if e < 0 {
@@ -331,7 +333,7 @@ func (t *Term) duplicate() {
 				continue
 			}
 			z, p := gi.Arg, gi.Pow
-			rest := []GammaPow{{z.Scale(rat(2)), p}}
+			rest := []GammaPow{{z.Scale(shared(2)), p}}
 			for k, g := range t.Gamma {
 				if k != i && k != j {
 					rest = append(rest, g)
@@ -340,11 +342,11 @@ func (t *Term) duplicate() {
 			t.Gamma = mergeGamma(rest)
 			t.SqrtPi += p
 			// 2^(p(1−2z))
-			e := Int(1).Sub(z.Scale(rat(2))).Scale(rat(int64(p)))
+			e := Int(1).Sub(z.Scale(shared(2))).Scale(rat(int64(p)))
 			t.Pows = append(t.Pows, Power{Int(2), e})
 			if e.IsConst() && e.c().IsInt() {
 				t.Pows = t.Pows[:len(t.Pows)-1]
-				t.Coef.Mul(t.Coef, ratPow(rat(2), e.c().Num().Int64()))
+				t.Coef = mulRat(t.Coef, ratPow(rat(2), e.c().Num().Int64()))
 			}
 			i = -1
 			break
@@ -371,7 +373,7 @@ func (t *Term) String() string {
 		return "?"
 	}
 	var num, den []string
-	if t.Coef.Cmp(rat(1)) != 0 || (len(t.Gamma) == 0 && len(t.Pows) == 0 && t.SqrtPi == 0) {
+	if t.Coef.Cmp(ratOne) != 0 || (len(t.Gamma) == 0 && len(t.Pows) == 0 && t.SqrtPi == 0) {
 		num = append(num, ratString(t.Coef))
 	}
 	if t.SqrtPi != 0 {
@@ -400,10 +402,10 @@ func (t *Term) String() string {
 		e := p.Exp
 		neg := e.IsConst() && e.c().Sign() < 0 || !e.IsConst() && e.Terms[0].K.Sign() < 0 && e.c().Sign() <= 0
 		if neg {
-			e = e.Scale(rat(-1))
+			e = e.Scale(shared(-1))
 		}
 		s := "(" + p.Base.String() + ")"
-		if !(e.IsConst() && e.c().Cmp(rat(1)) == 0) {
+		if !(e.IsConst() && e.c().Cmp(ratOne) == 0) {
 			s += "^(" + e.String() + ")"
 		}
 		if neg {
@@ -441,13 +443,13 @@ func (t *Term) normPows() bool {
 		case b.IsConst() && b.c().Sign() > 0 && b.c().IsInt():
 			r, m := intRoot(b.c().Num())
 			b, e = Const(new(big.Rat).SetInt(r)), e.Scale(rat(m))
-		case !b.IsConst() && new(big.Rat).Abs(b.Terms[0].K).Cmp(rat(1)) != 0:
+		case !b.IsConst() && new(big.Rat).Abs(b.Terms[0].K).Cmp(ratOne) != 0:
 			// (k·x + c)^e = |k|^e · (x·k/|k| + c/|k|)^e, kept exact when
 			// e is a small integer; the sign stays in the base, where
 			// it keeps the base positive.
 			if small, ok := smallInt(e); ok {
 				lead := new(big.Rat).Abs(b.Terms[0].K)
-				t.Coef.Mul(t.Coef, ratPow(lead, small))
+				t.Coef = mulRat(t.Coef, ratPow(lead, small))
 				b = b.Scale(new(big.Rat).Inv(lead))
 			}
 		}
@@ -474,7 +476,7 @@ func (t *Term) normPows() bool {
 				if v == nil {
 					return false
 				}
-				t.Coef.Mul(t.Coef, v)
+				t.Coef = mulRat(t.Coef, v)
 				continue
 			}
 			if p.Base.c().Sign() <= 0 {
@@ -538,7 +540,7 @@ func (t *Term) foldConstGamma() {
 			kept = append(kept, g)
 			continue
 		}
-		t.Coef.Mul(t.Coef, ratPow(v, int64(g.Pow)))
+		t.Coef = mulRat(t.Coef, ratPow(v, int64(g.Pow)))
 		t.SqrtPi += sqrtPi * g.Pow
 	}
 	t.Gamma = kept
