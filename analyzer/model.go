@@ -88,7 +88,7 @@ func (fc *fnCtx) checkModel() {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
 				break
 			}
 		}
@@ -621,4 +621,60 @@ func (fc *fnCtx) modelWorth() bool {
 		return !open
 	})
 	return open || lgamma && pows >= 2
+}
+
+// fallingLoop reports an accumulator that ends as n!/(n−k)! of a loop
+// the matchers did not read (one counting in float64), the way they
+// report one counting in an integer type: the product grows with n and
+// k, and is n! itself at k = n.
+func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
+	if a.Guarded || len(a.Ops) == 0 || len(mc.loop.Sums) > 0 {
+		return false
+	}
+	f := vm.Recognise(a.After)
+	if f.Kind != vm.Falling {
+		return false
+	}
+	nv, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
+		return false
+	}
+	fc := mc.fc
+	n := fc.symRange(mc.res, nv, mc.loop.Stmt)
+	k := ranges.Top()
+	kName := f.Args[1].String()
+	if kv, kAlpha, kBeta, ok := oneVar(f.Args[1]); ok && kAlpha.Cmp(big.NewRat(1, 1)) == 0 && kBeta.Sign() == 0 {
+		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
+	} else if !f.Args[1].IsConst() {
+		return false
+	} else if c := f.Args[1].C; c.IsInt() && c.Num().IsInt64() {
+		k = ranges.Point(c.Num().Int64())
+	}
+	if n.IsEmpty() || k.IsEmpty() {
+		return true
+	}
+	if bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) {
+		return true
+	}
+	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, min(k.Lo, n.Lo))
+	var msg string
+	if bounded(k) {
+		// A bounded count: the largest factor decides.
+		first := thresholds.FallingFirstBad(t.Num, k.Hi)
+		if first == math.MaxInt64 {
+			return true
+		}
+		clause, _ := verdict(nv.Name(), n, first)
+		with := ""
+		if k.Lo != k.Hi {
+			with = fmt.Sprintf(" with %s up to %d", kName, k.Hi)
+		}
+		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d%s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, with, clause)
+	} else {
+		first := thresholds.Factorial(t.Num).FirstBad
+		clause, _ := verdict(nv.Name(), n, first)
+		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d at %s = %s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, kName, nv.Name(), clause)
+	}
+	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg})
+	return true
 }

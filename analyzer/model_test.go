@@ -81,6 +81,23 @@ func TestModelProbes(t *testing.T) {
 	if !math.IsInf(num270, 1) {
 		t.Errorf("270!/135! = %v in float64, want +Inf", num270)
 	}
+	// callcentre.Squads: 40 factors down from n pass the largest
+	// float64 first at n = 50859028 (exactly, in math/big), and the
+	// float64 loop returns +Inf there and a finite value just below.
+	squad := func(n float64) float64 {
+		p := 1.0
+		for i := 0.0; i < 40; i++ {
+			p *= n - i
+		}
+		return p
+	}
+	fall := func(n int64) *big.Int { return new(big.Int).MulRange(n-39, n) }
+	if fall(50859028).Cmp(maxF) <= 0 || fall(50859027).Cmp(maxF) > 0 {
+		t.Error("40 factors down from n first exceed float64 elsewhere than n = 50859028")
+	}
+	if !math.IsInf(squad(50859028), 1) || math.IsInf(squad(50859027), 0) {
+		t.Errorf("Squads at 50859028: %v, at 50859027: %v", squad(50859028), squad(50859027))
+	}
 	// dicepool.Pool.Combos in int64: at N = 62, K = 31 the product
 	// r*(N−K+i) wraps although C(62, 31) fits; at N = 61 it does not.
 	combos := func(n, k int64) (int64, bool) {

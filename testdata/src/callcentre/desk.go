@@ -224,3 +224,76 @@ func Reduce(x float64) float64 {
 	}
 	return z
 }
+
+// Lineups counts ordered lineups of k agents out of n, in float64.
+func Lineups(n, k float64) float64 {
+	p := 1.0
+	for i := 0.0; i < k; i++ { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n; n is not bounded here`
+		p *= n - i
+	}
+	return p
+}
+
+// Podium counts the ordered top three of n agents.
+func Podium(n float64) float64 {
+	p := 1.0
+	for i := 0.0; i < 3; i++ {
+		p *= n - i
+	}
+	return p
+}
+
+// TopTen counts ordered top-ten lists from a floor of any size.
+func TopTen(n float64) float64 {
+	p := 1.0
+	for i := 0.0; i < 10; i++ {
+		p *= n - i
+	}
+	return p
+}
+
+// PodiumSmall counts podiums of a desk of at most 500 agents.
+func PodiumSmall(n float64) float64 {
+	if n > 500 {
+		return 0
+	}
+	p := 1.0
+	for i := 0.0; i < 3; i++ {
+		p *= n - i
+	}
+	return p
+}
+
+// LineupsCapped counts lineups of at most 170 agents.
+func LineupsCapped(n, k float64) float64 {
+	if n < 0 || n > 170 || k < 0 || k > n {
+		return 0
+	}
+	p := 1.0
+	for i := 0.0; i < k; i++ {
+		p *= n - i
+	}
+	return p
+}
+
+// Squads counts ordered squads of at most 40 agents from a floor of
+// any size.
+func Squads(n, k float64) float64 {
+	if k < 0 || k > 40 {
+		return 0
+	}
+	p := 1.0
+	for i := 0.0; i < k; i++ { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 50859028 with k up to 40; n is not bounded here`
+		p *= n - i
+	}
+	return p
+}
+
+// LineupsDown counts the same lineups from the top down.
+func LineupsDown(n, k float64) float64 {
+	p := 1.0
+	for i := n; i > n-k; i-- { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n`
+		p *= i
+	}
+	return p
+}
