@@ -329,3 +329,22 @@ func TestExits(t *testing.T) {
 		}
 	}
 }
+
+// A loop whose body also moves its counter is not summarised.
+func TestCounterMovedInBody(t *testing.T) {
+	info, fd := load(t, `func f(n float64) float64 {
+	v := 1.0
+	for i := 2.0; i <= n; i++ {
+		v *= i
+		i++
+	}
+	return v
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if len(res.Loops) != 0 {
+		t.Errorf("summarised %d loops", len(res.Loops))
+	}
+	if v := returned(res, fd); v != nil {
+		t.Errorf("value %v, want unknown", v)
+	}
+}

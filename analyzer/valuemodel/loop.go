@@ -33,7 +33,9 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		return
 	}
 	sites, ok := e.sites(body, l.Counter)
-	if !ok {
+	if _, stepped := sites[l.Counter]; !ok || l.Counter != nil && stepped {
+		// The body moves the counter too: the trips are not the
+		// ones the loop header counts.
 		e.opaqueLoop(st, en)
 		return
 	}
