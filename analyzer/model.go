@@ -678,3 +678,71 @@ func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
 	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg})
 	return true
 }
+
+// modelBinomialFunc recognises, from the value model, a function whose
+// last statement returns C(n, k) of two parameters computed by a loop
+// in a float type, which the matchers leave alone: calls of it then
+// form binomial probabilities and hypergeometric ratios like those of
+// any binomial function. Its first bad n is where the loop's largest
+// intermediate leaves the type: the product before the division when
+// it multiplies first, else C(n, n/2) itself.
+func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFact {
+	if !res.Float {
+		return nil
+	}
+	list := decl.Body.List
+	if len(list) == 0 {
+		return nil
+	}
+	ret, ok := list[len(list)-1].(*ast.ReturnStmt)
+	if !ok || len(ret.Results) != 1 {
+		return nil
+	}
+	id, ok := unparen(ret.Results[0]).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	m := fc.evalModel()
+	f := vm.Recognise(m.Values[ret.Results[0]])
+	if f.Kind != vm.Binomial {
+		return nil
+	}
+	var idx [2]int
+	for i, a := range f.Args {
+		v, alpha, beta, ok := oneVar(a)
+		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Field != nil || v.Obj == nil {
+			return nil
+		}
+		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
+			return nil
+		}
+	}
+	var acc *vm.Acc
+	var loop *vm.Loop
+	for _, l := range m.Loops {
+		for _, a := range l.Accs {
+			if a.Obj == fc.c.pass.TypesInfo.Uses[id] {
+				acc, loop = a, l
+			}
+		}
+	}
+	if acc == nil || loop.Counter == nil || loop.Exits || acc.Guarded {
+		return nil
+	}
+	first := thresholds.CentralBinomial(res.Num).FirstBad
+	for _, op := range acc.Ops {
+		if !op.Mul {
+			break
+		}
+		if _, ok := op.By.Affine(); ok {
+			first = thresholds.CentralBinomialLoop(res.Num).FirstBad
+			break
+		}
+	}
+	fact := &FactorialFact{Kind: kindNames[kindBinomial], Param: idx[0], Param2: idx[1], FirstBad: first}
+	nv, _, _, _ := oneVar(f.Args[0])
+	if n := fc.symRange(m, nv, loop.Stmt); bounded(n) && n.Hi < first-1 {
+		fact.Safe, fact.Lo, fact.Hi = true, n.Lo, n.Hi
+	}
+	return fact
+}

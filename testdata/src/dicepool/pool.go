@@ -6,7 +6,7 @@ import "math"
 
 // Ways counts the ways k of n dice succeed, stepping the top factor
 // down.
-func Ways(n, k int) float64 {
+func Ways(n, k int) float64 { // want Ways:`binomial of parameter 0, breaks from 1021`
 	r := 1.0
 	m := float64(n)
 	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product r\*\(m\) overflows to \+Inf before the division for n ≥ 1021 at k = n/2, although C\(n, n/2\) itself fits up to n = 1029; n is not bounded here`
@@ -18,7 +18,7 @@ func Ways(n, k int) float64 {
 }
 
 // WaysUp is Ways with the factors counted up.
-func WaysUp(n, k int) float64 {
+func WaysUp(n, k int) float64 { // want WaysUp:`binomial of parameter 0, breaks from 1021`
 	r := 1.0
 	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product r\*\(float64\(n - k \+ d\)\)`
 		r = r * float64(n-k+d) / float64(d)
@@ -41,7 +41,7 @@ func (p Pool) Combos() int64 {
 }
 
 // Split divides at every step: no intermediate exceeds the result.
-func Split(n, k int) float64 {
+func Split(n, k int) float64 { // want Split:`binomial of parameter 0, breaks from 1030`
 	v := 1.0
 	for c := 1; c <= k; c++ {
 		v *= float64(n+1-c) / float64(c)
@@ -62,7 +62,7 @@ func (p Pool) TableCombos() int64 {
 }
 
 // BucketWays serves buckets of at most 1000 dice.
-func BucketWays(n, k int) float64 {
+func BucketWays(n, k int) float64 { // want BucketWays:`binomial of parameter 0, safe for \[0, 1000\]`
 	if n < 0 || n > 1000 || k < 0 {
 		return 0
 	}
@@ -194,4 +194,19 @@ func MidHands(n, k float64) float64 {
 		den *= i
 	}
 	return num / den // want `computes C\(n, k\) as n!/\(n - k\)! divided by k! .*; n may reach 200 here`
+}
+
+// Chance is the chance that exactly k of n dice succeed, over Ways.
+func Chance(n, k int, p float64) float64 {
+	return Ways(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n,k\)·p\^k·\(1−p\)\^\(n−k\) in float64: Ways\(n, …\) breaks for n ≥ 1021 although the probability itself is at most 1; n is not bounded here`
+}
+
+// ChanceSplit is Chance over Split, which divides at every step.
+func ChanceSplit(n, k int, p float64) float64 {
+	return Split(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability .* in float64: Split\(n, …\) breaks for n ≥ 1030`
+}
+
+// ChanceBucket is Chance over BucketWays, bounded to 1000 dice.
+func ChanceBucket(n, k int, p float64) float64 {
+	return BucketWays(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
 }
