@@ -9,6 +9,7 @@ const (
 	Unknown     Kind = iota
 	Fact             // n!
 	Falling          // n!/(n−k)!
+	Rising           // x(x+1)…(x+n−1) = Γ(x+n)/Γ(x)
 	Binomial         // C(n, k)
 	InvBinomial      // 1/C(n, k)
 	Multinomial      // n!/(k₁!…k_m!), Σkᵢ = n
@@ -36,6 +37,8 @@ func (f Form) String() string {
 		return a(0) + "!"
 	case Falling:
 		return fmt.Sprintf("%s!/%s!", a(0), paren(f.Args[0].Sub(f.Args[1])))
+	case Rising:
+		return fmt.Sprintf("rising(%s, %s)", f.Args[0], f.Args[1])
 	case Binomial:
 		return fmt.Sprintf("C(%s, %s)", f.Args[0], f.Args[1])
 	case InvBinomial:
@@ -147,6 +150,10 @@ func gammaForm(up, down []Affine) Form {
 	case len(up) == 1 && len(down) == 0:
 		return Form{Fact, []Affine{up[0].Shift(-1)}}
 	case len(up) == 1 && len(down) == 1:
+		if x := down[0]; len(x.Terms) == 1 && x.Terms[0].K.Cmp(ratOne) == 0 && x.c().Sign() == 0 && !up[0].Sub(x).IsConst() {
+			// Γ(x+n)/Γ(x) over a bare variable x: the rising factorial.
+			return Form{Rising, []Affine{x, up[0].Sub(x)}}
+		}
 		n := up[0].Shift(-1)
 		k := up[0].Sub(down[0])
 		if k.IsConst() && k.c().Sign() == 0 {

@@ -172,6 +172,13 @@ func f(p pool) int64 {
 	}
 	return d
 }`, "(2*k + 1)!"},
+		{"rising", `func f(x float64, n int) float64 {
+	p := 1.0
+	for i := 0; i < n; i++ {
+		p *= x + float64(i)
+	}
+	return p
+}`, "rising(x, n)"},
 		{"exp lgamma", `func f(n, k float64) float64 {
 	a, _ := math.Lgamma(n + 1)
 	b, _ := math.Lgamma(k + 1)
