@@ -464,6 +464,15 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if !coef {
 		return
 	}
+	// A coefficient from a loop already reported (its product breaks
+	// first) is that loop's root cause.
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if mentions(fc.c.pass.TypesInfo, e, a.Obj) && fc.c.reportedAt(l.Stmt.Pos()) {
+				return
+			}
+		}
+	}
 	nv, alpha, beta, ok := oneVar(f.Args[0])
 	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
 		return

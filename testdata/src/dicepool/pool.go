@@ -210,3 +210,16 @@ func ChanceSplit(n, k int, p float64) float64 {
 func ChanceBucket(n, k int, p float64) float64 {
 	return BucketWays(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
 }
+
+// ExactlyStepped forms the coefficient by multiplying first: the loop
+// is the one finding, from n = 1021, before C(n, k) itself breaks.
+func ExactlyStepped(n, k int, p float64) float64 {
+	c := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product c\*\(m\)`
+		c *= m
+		c /= float64(d)
+		m--
+	}
+	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
