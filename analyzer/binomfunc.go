@@ -23,6 +23,9 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 	if fact == nil && loops {
 		fact = own.binomialLoopFunc(decl, res)
 	}
+	if fact == nil && loops {
+		fact = own.modelBinomialFunc(decl, res)
+	}
 	if fact == nil {
 		return
 	}

@@ -136,6 +136,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall || fc.powLoops != nil {
 		fc.checkExprs(body)
 	}
+	if s.worthLoops() || s.knownCall {
+		fc.checkModel()
+	}
 }
 
 // noteLoop reports a product loop, or records a power loop for the

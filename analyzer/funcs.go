@@ -42,6 +42,9 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 		ff = own.wrapperOf(decl, obj)
 	}
 	if ff == nil {
+		ff = own.modelFactorialFunc(decl)
+	}
+	if ff == nil {
 		return
 	}
 	ff.obj, ff.decl, ff.result = obj, decl, res

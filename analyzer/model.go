@@ -1,0 +1,757 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"math"
+	"math/big"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	vm "github.com/overfact/overfact/analyzer/valuemodel"
+)
+
+// modelMaxNodes caps the syntax nodes the value model evaluates in one
+// function; past it the rest of the function is unknown to the model.
+const modelMaxNodes = vm.DefaultMaxNodes
+
+// evalModel runs the value model over the function.
+func (fc *fnCtx) evalModel() *vm.Result {
+	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, MaxNodes: modelMaxNodes})
+	if res.Capped && debug {
+		fmt.Fprintf(debugOut, "overfact: %s: value model stopped at %d syntax nodes; the rest of the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), modelMaxNodes)
+	}
+	return res
+}
+
+// modelCallee gives the value of a call of a function with a factorial
+// fact, in the algebra.
+func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
+	fact := fc.c.factOf(fc.c.calleeOf(call))
+	if fact == nil || fact.Param >= len(args) {
+		return nil
+	}
+	n, ok := args[fact.Param].Affine()
+	if !ok {
+		return nil
+	}
+	var k vm.Affine
+	if fact.Param2 >= 0 {
+		if fact.Param2 >= len(args) {
+			return nil
+		}
+		if k, ok = args[fact.Param2].Affine(); !ok {
+			return nil
+		}
+	}
+	switch kindOfName(fact.Kind) {
+	case kindFactorial:
+		return vm.Factorial(n.Shift(fact.Offset))
+	case kindFalling:
+		return vm.Factorial(n).Div(vm.Factorial(n.Sub(k)))
+	case kindRising:
+		return vm.GammaOf(k.Add(n)).Div(vm.GammaOf(k))
+	case kindBinomial:
+		return vm.Factorial(n).Div(vm.Factorial(k).Mul(vm.Factorial(n.Sub(k))))
+	}
+	return nil
+}
+
+// checkModel reports, from the value model, what the loops of the
+// function compute where it leaves its type and no matcher reported the
+// loop: one finding per root cause.
+func (fc *fnCtx) checkModel() {
+	if !fc.modelWorth() {
+		return
+	}
+	res := fc.evalModel()
+	judged := make(map[ast.Stmt]bool)
+	for _, e := range fc.modelRoots(res) {
+		fc.modelRatio(res, e, judged)
+	}
+	for _, l := range res.Loops {
+		if judged[l.Stmt] {
+			continue
+		}
+		// A while-style loop consumes a variable the code often bounds
+		// only through a derived value (q := math.Abs(x); if q > 33
+		// { return }; for x >= 3 { x--; z *= x } in std's math.Gamma),
+		// which the range analysis does not follow: precision first,
+		// only loops with a counter of their own are judged.
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+			continue
+		}
+		mc := &modelCtx{fc: fc, res: res, loop: l}
+		for _, a := range l.Accs {
+			t, ok := fc.c.numOf(a.Obj.Type())
+			if !ok {
+				continue
+			}
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
+				break
+			}
+		}
+	}
+	for _, e := range fc.modelRoots(res) {
+		fc.modelPMF(res, e)
+	}
+}
+
+// reportedAt reports whether a finding of any category starts at pos.
+func (c *checker) reportedAt(pos token.Pos) bool {
+	for _, p := range patterns {
+		if c.reported[reportKey{pos, p.id}] || c.reported[reportKey{pos, p.id + definiteSuffix}] {
+			return true
+		}
+	}
+	return false
+}
+
+// modelCtx is one loop of the model being judged.
+type modelCtx struct {
+	fc   *fnCtx
+	res  *vm.Result
+	loop *vm.Loop
+}
+
+// oneVar splits a into α·v + β for its one variable v.
+func oneVar(a vm.Affine) (vm.Sym, *big.Rat, *big.Rat, bool) {
+	if len(a.Terms) != 1 {
+		return vm.Sym{}, nil, nil, false
+	}
+	return a.Terms[0].Sym, a.Terms[0].K, a.C, true
+}
+
+// firstAt returns the smallest integer v with α·v + β ≥ f, for α > 0.
+func firstAt(alpha, beta *big.Rat, f int64) (int64, bool) {
+	if alpha.Sign() <= 0 {
+		return 0, false
+	}
+	x := new(big.Rat).Sub(big.NewRat(f, 1), beta)
+	x.Quo(x, alpha)
+	q := new(big.Int).Quo(x.Num(), x.Denom())
+	if x.Sign() > 0 && !x.IsInt() {
+		q.Add(q, big.NewInt(1))
+	}
+	if !q.IsInt64() {
+		return 0, false
+	}
+	return q.Int64(), true
+}
+
+// symRange returns the range of a variable of the model at node at.
+func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval {
+	switch {
+	case s.Loop != nil || s.Obj == nil:
+		return ranges.Top()
+	case s.Field != nil:
+		// A read of the field inside at, where the guards before it
+		// hold; else the first read the model met.
+		var in ast.Expr
+		ast.Inspect(at, func(n ast.Node) bool {
+			if sel, ok := n.(*ast.SelectorExpr); ok && in == nil && fc.c.objOf(sel.X) == s.Obj && fc.c.pass.TypesInfo.ObjectOf(sel.Sel) == s.Field {
+				in = sel
+			}
+			return in == nil
+		})
+		if in == nil {
+			in = res.Exprs[s]
+		}
+		if in != nil {
+			return fc.rangeOf(in)
+		}
+		return ranges.Top()
+	}
+	return fc.entryRange(s.Obj, at)
+}
+
+// counterArg rewrites a form in the trip index t as a form in the
+// loop's counter j = From + Step·t.
+func (mc *modelCtx) counterArg(a vm.Affine) (vm.Affine, bool) {
+	l := mc.loop
+	if l.Counter == nil {
+		return a, !a.Has(l.Iter)
+	}
+	j := vm.Var(vm.Sym{Obj: l.Counter})
+	// t = (j − From)/Step
+	t := j.Sub(l.From).Scale(new(big.Rat).Inv(l.Step))
+	return a.Subst(l.Iter, t), true
+}
+
+// reach returns the variable that decides how many trips the loop
+// makes and the first value of it at which trip tBad runs: the trip
+// count α·v + β must pass tBad.
+func (mc *modelCtx) reach(tBad int64) (vm.Sym, int64, bool) {
+	v, alpha, beta, ok := oneVar(mc.loop.Count)
+	if !ok {
+		return vm.Sym{}, 0, false
+	}
+	first, ok := firstAt(alpha, beta, tBad+1)
+	return v, first, ok
+}
+
+// factorialLoop reports an accumulator that ends as n! of a loop the
+// matchers did not read, such as one counting in float64.
+func (mc *modelCtx) factorialLoop(a *vm.Acc, t numType) bool {
+	if a.Guarded || len(a.Ops) == 0 || len(mc.loop.Sums) > 0 {
+		return false
+	}
+	f := vm.Recognise(a.After)
+	if f.Kind != vm.Fact {
+		return false
+	}
+	v, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || !beta.IsInt() || !alpha.IsInt() {
+		return false
+	}
+	F := thresholds.Factorial(t.Num).FirstBad
+	first, ok := firstAt(alpha, beta, F)
+	if !ok {
+		return false
+	}
+	fc := mc.fc
+	r := fc.symRange(mc.res, v, mc.loop.Stmt)
+	if r.IsEmpty() || r.Hi < first {
+		return true
+	}
+	clause, definite := verdict(v.Name(), r, first)
+	var msg string
+	if alpha.Cmp(big.NewRat(1, 1)) == 0 {
+		msg = factorialLimitText(kindFactorial, v.Name(), beta.Num().Int64(), t)
+	} else {
+		msg = fmt.Sprintf("factorial of %s in %s %s for %s ≥ %d (%s)", f.Args[0], t.typeName(), verb(t), v.Name(), first, largestFits(kindFactorial, t))
+	}
+	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg + clause})
+	return true
+}
+
+// runningFactorial reports a factorial kept inside the summation loop
+// that divides by it, fact *= k; sum += pow(a, k)/fact (Erlang B and
+// C, Poisson CDFs, Bessel and Taylor series): past its threshold the
+// accumulator is +Inf (or wraps) and each term is 0 or NaN, although
+// the terms and the sum are finite.
+func (mc *modelCtx) runningFactorial(a *vm.Acc, t numType) bool {
+	l := mc.loop
+	if len(l.Sums) == 0 || len(a.Ops) == 0 {
+		return false
+	}
+	last := a.Ops[len(a.Ops)-1]
+	for _, op := range a.Ops {
+		if !op.Mul {
+			return false
+		}
+	}
+	run := vm.Recognise(last.After)
+	if run.Kind != vm.Fact || !run.Args[0].Has(l.Iter) {
+		return false
+	}
+	divides := false
+	for _, s := range l.Sums {
+		if s.Sum.Term == nil {
+			continue
+		}
+		for _, g := range s.Sum.Term.Gamma {
+			if g.Pow < 0 && g.Arg.Equal(run.Args[0].Shift(1)) {
+				divides = true
+			}
+		}
+	}
+	if !divides {
+		return false
+	}
+	// The running value is (α·t + β)!: the first bad trip and its
+	// counter value.
+	alpha, beta := run.Args[0].Coef(l.Iter), run.Args[0].Sub(vm.Var(l.Iter).Scale(run.Args[0].Coef(l.Iter)))
+	if !beta.IsConst() {
+		return false
+	}
+	F := firstBadOf(kindFactorial, t)
+	tBad, ok := firstAt(alpha, beta.C, F)
+	if !ok {
+		return false
+	}
+	arg, ok := mc.counterArg(run.Args[0])
+	if !ok {
+		return false
+	}
+	v, first, ok := mc.reach(tBad)
+	if !ok {
+		return false
+	}
+	fc := mc.fc
+	r := fc.symRange(mc.res, v, l.Stmt)
+	if r.IsEmpty() || r.Hi < first {
+		return true
+	}
+	clause, definite := verdict(v.Name(), r, first)
+	jBad := tBad
+	if l.Counter != nil {
+		jv, _ := l.From.Add(vm.Int(tBad).Scale(l.Step)).At(nil)
+		if jv != nil && jv.IsInt() {
+			jBad = jv.Num().Int64()
+		}
+	}
+	at := ""
+	if l.Counter != nil {
+		at = fmt.Sprintf(" from %s = %d", l.Counter.Name(), jBad)
+	}
+	msg := fmt.Sprintf("running factorial %s computes %s inside the sum that divides by it: in %s it %s%s (%s), after which each term is 0 or NaN although the terms are finite; the loop reaches that trip for %s ≥ %d",
+		a.Obj.Name(), vm.Recognise(vm.Factorial(arg)), t.typeName(), verb(t), at, largestFits(kindFactorial, t), v.Name(), first)
+	fc.report(finding{node: l.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
+	return true
+}
+
+// poissonRun reports a running product started at math.Exp(−λ) that
+// computes the Poisson terms λ^k·e^(−λ)/k! one factor at a time: the
+// start underflows in float64 while the terms near k = λ are not small.
+func (mc *modelCtx) poissonRun(a *vm.Acc, t numType) bool {
+	if len(a.Ops) == 0 || a.Init == nil || !t.Float {
+		return false
+	}
+	// e^(−λ) with λ one variable of coefficient 1.
+	lam, k, _, ok := oneVar(a.Init.Exp)
+	if !ok || k.Cmp(big.NewRat(-1, 1)) != 0 || len(a.Init.Gamma) > 0 || len(a.Init.Pows) > 0 {
+		return false
+	}
+	last := a.Ops[len(a.Ops)-1]
+	if vm.Recognise(last.After).Kind != vm.Poisson {
+		return false
+	}
+	sub, zero := thresholds.ExpUnderflow(t.Num)
+	if math.IsInf(zero, 1) {
+		return false
+	}
+	fc := mc.fc
+	r := fc.symRange(mc.res, lam, mc.loop.Stmt)
+	first := int64(math.Ceil(sub))
+	if r.IsEmpty() || r.Hi < first {
+		return true
+	}
+	clause, definite := verdict(lam.Name(), r, first)
+	msg := fmt.Sprintf("running product %s computes the Poisson terms %s^k·e^(−%s)/k! from math.Exp(-%s), which in %s loses its digits for %s > %s and is 0 for %s ≥ %s, after which every term is wrong or 0 although the terms near k = %s are not small",
+		a.Obj.Name(), lam.Name(), lam.Name(), lam.Name(), t.typeName(), lam.Name(), fmtFloat(sub), lam.Name(), fmtFloat(zero), lam.Name())
+	fc.report(finding{node: mc.loop.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
+	return true
+}
+
+func fmtFloat(x float64) string { return fmt.Sprintf("%.6g", x) }
+
+// binomialLoop reports a multiplicative binomial loop that multiplies
+// before it divides, in any arrangement, in a float type or over
+// operands the matchers do not read (struct fields, receivers).
+func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
+	f := vm.Recognise(a.After)
+	if f.Kind != vm.Binomial || a.Guarded {
+		return false
+	}
+	// The product is formed before the division when a multiplication
+	// by a growing integer factor is an op of its own before a
+	// division.
+	var mul *vm.Op
+	for i := range a.Ops {
+		op := &a.Ops[i]
+		if op.Mul && mul == nil {
+			if _, ok := op.By.Affine(); ok {
+				mul = op
+			}
+		}
+		if !op.Mul && mul != nil {
+			break
+		}
+		if !op.Mul && mul == nil {
+			return false
+		}
+	}
+	if mul == nil {
+		return true
+	}
+	by, _ := mul.By.Affine()
+	down := by.Coef(mc.loop.Iter).Sign() < 0
+	nv, nAlpha, nBeta, ok1 := oneVar(f.Args[0])
+	if !ok1 || nAlpha.Cmp(big.NewRat(1, 1)) != 0 || nBeta.Sign() != 0 {
+		return false
+	}
+	fc := mc.fc
+	n := fc.symRange(mc.res, nv, mc.loop.Stmt)
+	k := ranges.Top()
+	kName := f.Args[1].String()
+	if kv, kAlpha, kBeta, ok := oneVar(f.Args[1]); ok && kAlpha.Cmp(big.NewRat(1, 1)) == 0 && kBeta.Sign() == 0 {
+		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
+	}
+	if n.IsEmpty() || k.IsEmpty() {
+		return true
+	}
+	fits := func(n, k int64) bool {
+		if down {
+			return thresholds.BinomialLoopDownFits(t.Num, n, k)
+		}
+		return thresholds.BinomialLoopFits(t.Num, n, k)
+	}
+	lim := thresholds.CentralBinomialLoop(t.Num)
+	// The largest intermediate over every k ≤ n is at k = ⌈n/2⌉, one
+	// past the central limit's k = ⌊n/2⌋ for odd n: a margin of one n
+	// covers it.
+	if bounded(n) && k.Lo >= 0 && n.Hi < lim.FirstBad-1 {
+		return true
+	}
+	if bounded(n) {
+		lo, hi := max(k.Lo, 0), min(k.Hi, n.Hi)
+		safe := hi-lo <= maxBinomialScan
+		for kk := lo; safe && kk <= hi; kk++ {
+			safe = fits(n.Hi, kk)
+		}
+		if safe {
+			return true
+		}
+	}
+	central := thresholds.CentralBinomial(t.Num)
+	name := nv.Name()
+	clause, _ := verdict(name, n, lim.FirstBad)
+	definite := n.Lo == n.Hi && k.Lo == k.Hi && !fits(n.Lo, k.Lo)
+	msg := fmt.Sprintf("multiplicative binomial loop computes C(%s, %s) in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		name, kName, t.typeName(), a.Obj.Name(), src(unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
+	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg})
+	return true
+}
+
+// modelRoots returns the returned expressions of the function, outside
+// closures: the places where its whole value is known.
+func (fc *fnCtx) modelRoots(res *vm.Result) []ast.Expr {
+	var out []ast.Expr
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			if len(n.Results) == 1 {
+				out = append(out, n.Results[0])
+			}
+		}
+		return true
+	})
+	return out
+}
+
+// modelPMF reports a binomial probability C(n, k)·p^k·(1−p)^(n−k) whose
+// coefficient is formed in a float type on its own, by a loop or as
+// exp of log-gamma differences: past the central limit it is +Inf, and
+// the product +Inf or NaN, although the probability is at most 1.
+func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
+	f := vm.Recognise(res.Values[e])
+	if f.Kind != vm.BinomialPMF || fc.c.reportedAt(e.Pos()) {
+		return
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+	if !ok || !t.Float {
+		return
+	}
+	// The coefficient must be one operand of its own: a product whose
+	// operands are the coefficient and the two powers.
+	b, ok := unparen(e).(*ast.BinaryExpr)
+	if !ok || b.Op != token.MUL {
+		return
+	}
+	coef := false
+	ast.Inspect(e, func(n ast.Node) bool {
+		if x, ok := n.(ast.Expr); ok && !coef {
+			if g := vm.Recognise(res.Values[x]); g.Kind == vm.Binomial {
+				coef = true
+			}
+		}
+		return !coef
+	})
+	if !coef {
+		return
+	}
+	// A coefficient from a loop already reported (its product breaks
+	// first) is that loop's root cause.
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if mentions(fc.c.pass.TypesInfo, e, a.Obj) && fc.c.reportedAt(l.Stmt.Pos()) {
+				return
+			}
+		}
+	}
+	nv, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
+		return
+	}
+	n := fc.symRange(res, nv, e)
+	central := thresholds.CentralBinomial(t.Num)
+	if n.IsEmpty() || n.Hi < central.FirstBad {
+		return
+	}
+	clause, definite := verdict(nv.Name(), n, central.FirstBad)
+	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the product is +Inf or NaN although the probability is at most 1",
+		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox())
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+}
+
+// modelFactorialFunc recognises, from the value model, a function
+// whose last statement returns n! of a parameter n plus a constant,
+// computed in a way the matchers do not read (a loop counting in
+// float64), so that its callers' ratios are judged as those of any
+// factorial function.
+func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
+	list := decl.Body.List
+	if len(list) == 0 {
+		return nil
+	}
+	ret, ok := list[len(list)-1].(*ast.ReturnStmt)
+	if !ok || len(ret.Results) != 1 {
+		return nil
+	}
+	if _, ok := unparen(ret.Results[0]).(*ast.Ident); !ok {
+		return nil
+	}
+	res := fc.evalModel()
+	f := vm.Recognise(res.Values[ret.Results[0]])
+	if f.Kind != vm.Fact {
+		return nil
+	}
+	v, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || !beta.IsInt() || !beta.Num().IsInt64() || v.Field != nil || v.Obj == nil {
+		return nil
+	}
+	idx := fc.c.paramIndex(decl, v.Obj)
+	// The range of n where the product is formed: a read of it in the
+	// last loop, after the guards that bound it.
+	var read ast.Expr
+	if len(res.Loops) == 0 || res.Loops[len(res.Loops)-1].Counter == nil {
+		return nil
+	}
+	{
+		ast.Inspect(res.Loops[len(res.Loops)-1].Stmt, func(n ast.Node) bool {
+			if id, ok := n.(*ast.Ident); ok && read == nil && fc.c.pass.TypesInfo.Uses[id] == v.Obj {
+				read = id
+			}
+			return read == nil
+		})
+	}
+	if read == nil {
+		read = res.Exprs[v]
+	}
+	if idx < 0 || read == nil || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
+		return nil
+	}
+	off := beta.Num().Int64()
+	return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: read, wrapOff: off}
+}
+
+// modelRatio reports a returned quotient of loop accumulators that
+// computes C(n, k), a falling product or n! over one or two factorial
+// loops (in one loop or several): the numerator leaves the type while
+// C(n, k) still fits. The loops it judges are marked, so that each is
+// not reported again on its own.
+func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool) {
+	b, ok := unparen(e).(*ast.BinaryExpr)
+	if !ok || b.Op != token.QUO {
+		return
+	}
+	f := vm.Recognise(res.Values[e])
+	if f.Kind != vm.Binomial {
+		return
+	}
+	var loops []*vm.Loop
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if mentions(fc.c.pass.TypesInfo, b, a.Obj) {
+				loops = append(loops, l)
+				break
+			}
+		}
+	}
+	if len(loops) == 0 {
+		return
+	}
+	for _, l := range loops {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+			return
+		}
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+	if !ok {
+		return
+	}
+	num := vm.Recognise(res.Values[b.X])
+	// n!/(n−k)! grows with k up to n! at k = n: the numerator breaks
+	// first where n! does, whichever form it has.
+	first := thresholds.Factorial(t.Num).FirstBad
+	if num.Kind != vm.Fact && num.Kind != vm.Falling {
+		return
+	}
+	nv, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || !num.Args[0].Equal(f.Args[0]) {
+		return
+	}
+	for _, l := range loops {
+		judged[l.Stmt] = true
+	}
+	n := fc.symRange(res, nv, e)
+	if n.IsEmpty() || n.Hi < first {
+		return
+	}
+	clause, definite := verdict(nv.Name(), n, first)
+	den := "its divisor"
+	if d := vm.Recognise(res.Values[b.Y]); d.Kind != vm.Unknown && d.Kind != vm.GammaRatio {
+		den = d.String()
+	}
+	at := ""
+	if num.Kind == vm.Falling {
+		at = fmt.Sprintf(" at %s = %s and for %s ≥ %d at %s = %s/2", f.Args[1], nv.Name(), nv.Name(), thresholds.CentralFalling(t.Num).FirstBad, f.Args[1], nv.Name())
+	}
+	central := thresholds.CentralBinomial(t.Num)
+	msg := fmt.Sprintf("computes C(%s, %s) as %s divided by %s in %s: the numerator %s for %s ≥ %d%s, although C(%s, %s/2) itself fits up to %s = %d",
+		f.Args[0], f.Args[1], num, den, t.typeName(), verb(t), nv.Name(), first, at, nv.Name(), nv.Name(), nv.Name(), central.FirstBad-1)
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+}
+
+// modelWorth is the model's own cheap prefilter: a counting loop that
+// no matcher reported, or a binomial coefficient from math.Lgamma beside
+// two math.Pow calls (the pmf). Functions whose loops are all reported
+// already cost one walk of their syntax and no evaluation.
+func (fc *fnCtx) modelWorth() bool {
+	open, lgamma, pows := false, false, 0
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			open = open || !fc.c.reportedAt(n.Pos())
+		case *ast.CallExpr:
+			switch {
+			case fc.c.isMathFunc(n, "Lgamma"):
+				lgamma = true
+			case fc.c.isMathFunc(n, "Pow"):
+				pows++
+			}
+		}
+		return !open
+	})
+	return open || lgamma && pows >= 2
+}
+
+// fallingLoop reports an accumulator that ends as n!/(n−k)! of a loop
+// the matchers did not read (one counting in float64), the way they
+// report one counting in an integer type: the product grows with n and
+// k, and is n! itself at k = n.
+func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
+	if a.Guarded || len(a.Ops) == 0 || len(mc.loop.Sums) > 0 {
+		return false
+	}
+	f := vm.Recognise(a.After)
+	if f.Kind != vm.Falling {
+		return false
+	}
+	nv, alpha, beta, ok := oneVar(f.Args[0])
+	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
+		return false
+	}
+	fc := mc.fc
+	n := fc.symRange(mc.res, nv, mc.loop.Stmt)
+	k := ranges.Top()
+	kName := f.Args[1].String()
+	if kv, kAlpha, kBeta, ok := oneVar(f.Args[1]); ok && kAlpha.Cmp(big.NewRat(1, 1)) == 0 && kBeta.Sign() == 0 {
+		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
+	} else if !f.Args[1].IsConst() {
+		return false
+	} else if c := f.Args[1].C; c.IsInt() && c.Num().IsInt64() {
+		k = ranges.Point(c.Num().Int64())
+	}
+	if n.IsEmpty() || k.IsEmpty() {
+		return true
+	}
+	if bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) {
+		return true
+	}
+	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, min(k.Lo, n.Lo))
+	var msg string
+	if bounded(k) {
+		// A bounded count: the largest factor decides.
+		first := thresholds.FallingFirstBad(t.Num, k.Hi)
+		if first == math.MaxInt64 {
+			return true
+		}
+		clause, _ := verdict(nv.Name(), n, first)
+		with := ""
+		if k.Lo != k.Hi {
+			with = fmt.Sprintf(" with %s up to %d", kName, k.Hi)
+		}
+		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d%s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, with, clause)
+	} else {
+		first := thresholds.Factorial(t.Num).FirstBad
+		clause, _ := verdict(nv.Name(), n, first)
+		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d at %s = %s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, kName, nv.Name(), clause)
+	}
+	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg})
+	return true
+}
+
+// modelBinomialFunc recognises, from the value model, a function whose
+// last statement returns C(n, k) of two parameters computed by a loop
+// in a float type, which the matchers leave alone: calls of it then
+// form binomial probabilities and hypergeometric ratios like those of
+// any binomial function. Its first bad n is where the loop's largest
+// intermediate leaves the type: the product before the division when
+// it multiplies first, else C(n, n/2) itself.
+func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFact {
+	if !res.Float {
+		return nil
+	}
+	list := decl.Body.List
+	if len(list) == 0 {
+		return nil
+	}
+	ret, ok := list[len(list)-1].(*ast.ReturnStmt)
+	if !ok || len(ret.Results) != 1 {
+		return nil
+	}
+	id, ok := unparen(ret.Results[0]).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	m := fc.evalModel()
+	f := vm.Recognise(m.Values[ret.Results[0]])
+	if f.Kind != vm.Binomial {
+		return nil
+	}
+	var idx [2]int
+	for i, a := range f.Args {
+		v, alpha, beta, ok := oneVar(a)
+		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Field != nil || v.Obj == nil {
+			return nil
+		}
+		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
+			return nil
+		}
+	}
+	var acc *vm.Acc
+	var loop *vm.Loop
+	for _, l := range m.Loops {
+		for _, a := range l.Accs {
+			if a.Obj == fc.c.pass.TypesInfo.Uses[id] {
+				acc, loop = a, l
+			}
+		}
+	}
+	if acc == nil || loop.Counter == nil || loop.Exits || acc.Guarded {
+		return nil
+	}
+	first := thresholds.CentralBinomial(res.Num).FirstBad
+	for _, op := range acc.Ops {
+		if !op.Mul {
+			break
+		}
+		if _, ok := op.By.Affine(); ok {
+			first = thresholds.CentralBinomialLoop(res.Num).FirstBad
+			break
+		}
+	}
+	fact := &FactorialFact{Kind: kindNames[kindBinomial], Param: idx[0], Param2: idx[1], FirstBad: first}
+	nv, _, _, _ := oneVar(f.Args[0])
+	if n := fc.symRange(m, nv, loop.Stmt); bounded(n) && n.Hi < first-1 {
+		fact.Safe, fact.Lo, fact.Hi = true, n.Lo, n.Hi
+	}
+	return fact
+}

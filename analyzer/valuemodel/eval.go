@@ -1,0 +1,688 @@
+package valuemodel
+
+import (
+	"go/ast"
+	"go/constant"
+	"go/token"
+	"go/types"
+	"math/big"
+)
+
+// Options configures Evaluate.
+type Options struct {
+	// Callee returns the value of a call the caller knows, such as a
+	// function with a factorial fact, from the values of its arguments
+	// (nil where unknown); nil when the call is not known.
+	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// MaxNodes caps the syntax nodes evaluated in one function
+	// (DefaultMaxNodes when 0); past it Result.Capped is set and the
+	// rest of the function is unknown.
+	MaxNodes int
+}
+
+// DefaultMaxNodes is the default cap of Options.MaxNodes.
+const DefaultMaxNodes = 20000
+
+// Result is what Evaluate learned about one function.
+type Result struct {
+	// Loops holds the summary of every counting loop, outer loops
+	// after the loops they contain.
+	Loops []*Loop
+	// Values holds the value of each expression evaluated, in terms of
+	// the function's variables; inside a loop, in terms of the loop's
+	// trip index too.
+	Values map[ast.Expr]*Term
+	// Exprs holds, for each variable met, an expression that reads it.
+	Exprs map[Sym]ast.Expr
+	// Capped reports that the evaluation stopped at Options.MaxNodes.
+	Capped bool
+}
+
+// Loop summarises a counting loop: trip t runs from 0 to Count−1 and
+// the counter holds From + Step·t during trip t.
+type Loop struct {
+	Stmt    ast.Stmt
+	Iter    Sym
+	Counter types.Object
+	From    Affine
+	Step    *big.Rat
+	Count   Affine
+	// Bound is the expression the loop condition compares the counter
+	// with, and BoundOff what the last counter value adds to it
+	// (k <= c: 0, k < c: −1 for a unit step).
+	Bound    ast.Expr
+	BoundOff *big.Rat
+	Accs     []*Acc
+	Sums     []*SumAcc
+	// Exits reports that the body can leave the loop early or skip the
+	// rest of a trip (break, continue, return, goto, panic): the
+	// summary then holds only for trips that run to the end, and the
+	// trip count is an upper bound.
+	Exits bool
+}
+
+// Acc is a variable the loop multiplies or divides, and nothing else.
+type Acc struct {
+	Obj  types.Object
+	Init *Term // the value before the loop
+	Ops  []Op  // in the order one trip performs them
+	// After is the value after the loop (nil when unknown).
+	After *Term
+	// Guarded reports that some op runs only on some trips.
+	Guarded bool
+}
+
+// Op is one multiplication or division of an accumulator.
+type Op struct {
+	Stmt ast.Stmt
+	X    ast.Expr // the operand as written
+	Mul  bool     // multiply (false: divide)
+	By   *Term    // the operand on trip t
+	// From and To bound the trips on which the op runs, [From, To).
+	From, To Affine
+	// Before and After are the accumulator's values on trip t just
+	// before and just after the op, when the op runs on every trip up
+	// to t (nil when unknown). After is the intermediate the code forms.
+	Before, After *Term
+}
+
+// SumAcc is a variable to which every trip adds a term.
+type SumAcc struct {
+	Obj  types.Object
+	Stmt ast.Stmt
+	Sum  Sum
+}
+
+// Sum is Σ_{t=From}^{To−1} Term(t).
+type Sum struct {
+	Iter     Sym
+	From, To Affine
+	Term     *Term
+}
+
+// value is a term or the logarithm of one.
+type value struct {
+	t   *Term
+	log bool // the value is ln t
+}
+
+type evaluator struct {
+	info   *types.Info
+	opts   Options
+	res    *Result
+	nodes  int
+	opaque map[types.Object]bool // assigned by closures or through their address
+	fields map[types.Object]bool // struct variables whose fields are assigned
+}
+
+// Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
+// *ast.FuncLit, and summarises its loops. It never panics on partially
+// typed code: what it cannot type is unknown.
+func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
+	res = &Result{Values: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
+	defer func() {
+		if r := recover(); r != nil {
+			res = &Result{Values: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
+		}
+	}()
+	if opts.MaxNodes <= 0 {
+		opts.MaxNodes = DefaultMaxNodes
+	}
+	var body *ast.BlockStmt
+	switch fn := fn.(type) {
+	case *ast.FuncDecl:
+		body = fn.Body
+	case *ast.FuncLit:
+		body = fn.Body
+	}
+	if body == nil || info == nil {
+		return res
+	}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool)}
+	e.scanOpaque(body)
+	e.block(body.List, env{})
+	return res
+}
+
+// env maps each local to its current value; a missing entry is the
+// variable itself, a nil entry unknown.
+type env map[types.Object]*value
+
+// copyEnv copies en, counting its entries against the node budget: in
+// a long function the copies, not the nodes, would dominate the work.
+func (e *evaluator) copyEnv(en env) env {
+	e.nodes += len(en)
+	if e.nodes > e.opts.MaxNodes {
+		e.res.Capped = true
+	}
+	out := make(env, len(en))
+	for k, v := range en {
+		out[k] = v
+	}
+	return out
+}
+
+// scanOpaque finds the variables whose value the walk cannot follow:
+// those a closure assigns or whose address is taken, and the struct
+// variables whose fields are assigned.
+func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
+	inLit := 0
+	var visit func(n ast.Node) bool
+	visit = func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			inLit++
+			ast.Inspect(n.Body, visit)
+			inLit--
+			return false
+		case *ast.AssignStmt:
+			for _, l := range n.Lhs {
+				e.noteAssign(l, inLit > 0)
+			}
+		case *ast.IncDecStmt:
+			e.noteAssign(n.X, inLit > 0)
+		case *ast.UnaryExpr:
+			if n.Op == token.AND {
+				e.noteAssign(n.X, true)
+			}
+		}
+		return true
+	}
+	ast.Inspect(body, visit)
+}
+
+func (e *evaluator) noteAssign(l ast.Expr, opaque bool) {
+	l = ast.Unparen(l)
+	for {
+		sel, ok := l.(*ast.SelectorExpr)
+		if !ok {
+			break
+		}
+		if id, ok := ast.Unparen(sel.X).(*ast.Ident); ok {
+			if obj := e.info.ObjectOf(id); obj != nil {
+				e.fields[obj] = true
+			}
+		}
+		l = ast.Unparen(sel.X)
+	}
+	if id, ok := l.(*ast.Ident); ok && opaque {
+		if obj := e.info.ObjectOf(id); obj != nil {
+			e.opaque[obj] = true
+		}
+	}
+}
+
+// tick counts one evaluated node and reports whether the budget holds.
+func (e *evaluator) tick() bool {
+	e.nodes++
+	if e.nodes > e.opts.MaxNodes {
+		e.res.Capped = true
+		return false
+	}
+	return true
+}
+
+func (e *evaluator) objOf(x ast.Expr) types.Object {
+	id, ok := ast.Unparen(x).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	obj, _ := e.info.ObjectOf(id).(*types.Var)
+	if obj == nil {
+		return nil
+	}
+	return obj
+}
+
+// numeric reports whether x has an integer or float type.
+func (e *evaluator) numeric(x ast.Expr) bool {
+	t := e.info.TypeOf(x)
+	if t == nil {
+		return false
+	}
+	b, ok := t.Underlying().(*types.Basic)
+	return ok && b.Info()&(types.IsInteger|types.IsFloat) != 0
+}
+
+// block walks a list of statements, updating en.
+func (e *evaluator) block(list []ast.Stmt, en env) {
+	for _, st := range list {
+		if !e.tick() {
+			return
+		}
+		e.stmt(st, en)
+	}
+}
+
+func (e *evaluator) stmt(st ast.Stmt, en env) {
+	switch s := st.(type) {
+	case *ast.LabeledStmt:
+		e.stmt(s.Stmt, en)
+	case *ast.AssignStmt:
+		e.assign(s, en)
+	case *ast.DeclStmt:
+		gd, ok := s.Decl.(*ast.GenDecl)
+		if !ok || gd.Tok != token.VAR {
+			return
+		}
+		for _, spec := range gd.Specs {
+			vs := spec.(*ast.ValueSpec)
+			for i, name := range vs.Names {
+				obj := e.info.Defs[name]
+				if obj == nil {
+					continue
+				}
+				switch {
+				case len(vs.Values) == len(vs.Names):
+					en[obj] = e.eval(vs.Values[i], en)
+				case len(vs.Values) == 0:
+					en[obj] = &value{t: Num(new(big.Rat))}
+				default:
+					en[obj] = nil
+				}
+			}
+		}
+	case *ast.IncDecStmt:
+		if obj := e.objOf(s.X); obj != nil {
+			d := int64(1)
+			if s.Tok == token.DEC {
+				d = -1
+			}
+			en[obj] = e.addAffine(e.eval(s.X, en), Int(d))
+		}
+	case *ast.ReturnStmt:
+		for _, r := range s.Results {
+			e.eval(r, en)
+		}
+	case *ast.ExprStmt:
+		e.eval(s.X, en)
+	case *ast.BlockStmt:
+		e.block(s.List, en)
+	case *ast.ForStmt, *ast.RangeStmt:
+		e.loop(s, en)
+	case *ast.IfStmt:
+		if s.Init != nil {
+			e.stmt(s.Init, en)
+		}
+		e.eval(s.Cond, en)
+		e.branch([]ast.Stmt{s.Body}, en)
+		if s.Else != nil {
+			e.branch([]ast.Stmt{s.Else}, en)
+		}
+	default:
+		// switch, select, go, defer, goto …: walk for the values inside,
+		// then forget what they assign.
+		e.branch([]ast.Stmt{st}, en)
+	}
+}
+
+// branch walks statements that may or may not run: values inside are
+// recorded, and what they assign is unknown afterwards.
+func (e *evaluator) branch(list []ast.Stmt, en env) {
+	inner := e.copyEnv(en)
+	for _, st := range list {
+		switch s := st.(type) {
+		case *ast.BlockStmt:
+			e.block(s.List, inner)
+		case *ast.IfStmt:
+			e.stmt(s, inner)
+		case *ast.SwitchStmt, *ast.TypeSwitchStmt, *ast.SelectStmt:
+			ast.Inspect(s, func(n ast.Node) bool {
+				if cl, ok := n.(*ast.CaseClause); ok {
+					e.block(cl.Body, e.copyEnv(inner))
+					return false
+				}
+				if _, ok := n.(*ast.FuncLit); ok {
+					return false
+				}
+				return true
+			})
+		case *ast.ForStmt, *ast.RangeStmt, *ast.LabeledStmt, *ast.AssignStmt, *ast.ExprStmt, *ast.ReturnStmt, *ast.DeclStmt, *ast.IncDecStmt:
+			e.stmt(s, inner)
+		}
+	}
+	e.forgetAssigned(list, en)
+}
+
+// forgetAssigned makes unknown every variable list assigns.
+func (e *evaluator) forgetAssigned(list []ast.Stmt, en env) {
+	for _, st := range list {
+		ast.Inspect(st, func(n ast.Node) bool {
+			switch n := n.(type) {
+			case *ast.AssignStmt:
+				for _, l := range n.Lhs {
+					if obj := e.objOf(l); obj != nil {
+						en[obj] = nil
+					}
+				}
+			case *ast.IncDecStmt:
+				if obj := e.objOf(n.X); obj != nil {
+					en[obj] = nil
+				}
+			case *ast.RangeStmt:
+				for _, x := range []ast.Expr{n.Key, n.Value} {
+					if obj := e.objOf(x); obj != nil {
+						en[obj] = nil
+					}
+				}
+			}
+			return true
+		})
+	}
+}
+
+// assign evaluates an assignment and updates en.
+func (e *evaluator) assign(s *ast.AssignStmt, en env) {
+	if len(s.Lhs) == 2 && len(s.Rhs) == 1 {
+		// lg, sign := math.Lgamma(x)
+		if call, ok := ast.Unparen(s.Rhs[0]).(*ast.CallExpr); ok && e.isMath(call, "Lgamma") && len(call.Args) == 1 {
+			x := e.eval(call.Args[0], en)
+			if obj := e.objOf(s.Lhs[0]); obj != nil {
+				en[obj] = nil
+				if a, ok := affineOf(x); ok {
+					en[obj] = &value{t: GammaOf(a), log: true}
+				}
+			}
+			if obj := e.objOf(s.Lhs[1]); obj != nil {
+				en[obj] = nil
+			}
+			return
+		}
+	}
+	if len(s.Lhs) != len(s.Rhs) {
+		for _, l := range s.Lhs {
+			if obj := e.objOf(l); obj != nil {
+				en[obj] = nil
+			}
+		}
+		for _, r := range s.Rhs {
+			e.eval(r, en)
+		}
+		return
+	}
+	vals := make([]*value, len(s.Rhs))
+	for i, r := range s.Rhs {
+		v := e.eval(r, en)
+		if s.Tok != token.ASSIGN && s.Tok != token.DEFINE {
+			cur := e.eval(s.Lhs[i], en)
+			v = e.binary(opOf(s.Tok), cur, v)
+		}
+		vals[i] = v
+	}
+	for i, l := range s.Lhs {
+		if obj := e.objOf(l); obj != nil {
+			if e.opaque[obj] || !e.numeric(l) {
+				en[obj] = nil
+				continue
+			}
+			en[obj] = vals[i]
+		}
+	}
+}
+
+// opOf maps an assignment operator to its binary operator.
+func opOf(tok token.Token) token.Token {
+	switch tok {
+	case token.ADD_ASSIGN:
+		return token.ADD
+	case token.SUB_ASSIGN:
+		return token.SUB
+	case token.MUL_ASSIGN:
+		return token.MUL
+	case token.QUO_ASSIGN:
+		return token.QUO
+	}
+	return token.ILLEGAL
+}
+
+func affineOf(v *value) (Affine, bool) {
+	if v == nil || v.log {
+		return Affine{}, false
+	}
+	return v.t.Affine()
+}
+
+func (e *evaluator) addAffine(v *value, d Affine) *value {
+	a, ok := affineOf(v)
+	if !ok {
+		return nil
+	}
+	return &value{t: FromAffine(a.Add(d))}
+}
+
+func (e *evaluator) isMath(call *ast.CallExpr, name string) bool {
+	var id *ast.Ident
+	switch f := ast.Unparen(call.Fun).(type) {
+	case *ast.SelectorExpr:
+		id = f.Sel
+	case *ast.Ident:
+		id = f
+	}
+	if id == nil {
+		return false
+	}
+	fn, ok := e.info.Uses[id].(*types.Func)
+	return ok && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
+}
+
+// eval returns the value of x in en, recording it.
+func (e *evaluator) eval(x ast.Expr, en env) *value {
+	if x == nil || !e.tick() {
+		return nil
+	}
+	v := e.evalRaw(x, en)
+	if v != nil && !v.log && v.t != nil {
+		e.res.Values[x] = v.t
+	}
+	return v
+}
+
+func (e *evaluator) evalRaw(x ast.Expr, en env) *value {
+	if tv, ok := e.info.Types[x]; ok && tv.Value != nil {
+		if r, ok := ratOf(tv.Value); ok {
+			return &value{t: Num(r)}
+		}
+		return nil
+	}
+	switch x := x.(type) {
+	case *ast.ParenExpr:
+		return e.eval(x.X, en)
+	case *ast.Ident:
+		obj := e.objOf(x)
+		if obj == nil || !e.numeric(x) || e.opaque[obj] {
+			return nil
+		}
+		if v, ok := en[obj]; ok {
+			return v
+		}
+		s := Sym{Obj: obj}
+		if _, ok := e.res.Exprs[s]; !ok {
+			e.res.Exprs[s] = x
+		}
+		return &value{t: FromAffine(Var(s))}
+	case *ast.SelectorExpr:
+		base := e.objOf(x.X)
+		sel := e.info.Selections[x]
+		if base == nil || sel == nil || sel.Kind() != types.FieldVal || len(sel.Index()) != 1 || !e.numeric(x) || e.fields[base] || e.opaque[base] {
+			return nil
+		}
+		if v, ok := en[base]; ok && v == nil {
+			return nil
+		}
+		s := Sym{Obj: base, Field: sel.Obj()}
+		if _, ok := e.res.Exprs[s]; !ok {
+			e.res.Exprs[s] = x
+		}
+		return &value{t: FromAffine(Var(s))}
+	case *ast.UnaryExpr:
+		v := e.eval(x.X, en)
+		switch x.Op {
+		case token.ADD:
+			return v
+		case token.SUB:
+			if v == nil {
+				return nil
+			}
+			if v.log {
+				return &value{t: v.t.Inv(), log: true}
+			}
+			return &value{t: v.t.Neg()}
+		}
+		return nil
+	case *ast.BinaryExpr:
+		a := e.eval(x.X, en)
+		b := e.eval(x.Y, en)
+		if !e.numeric(x) {
+			return nil
+		}
+		return e.binary(x.Op, a, b)
+	case *ast.CallExpr:
+		return e.call(x, en)
+	}
+	return nil
+}
+
+func ratOf(v constant.Value) (*big.Rat, bool) {
+	switch v.Kind() {
+	case constant.Int, constant.Float:
+		switch r := constant.Val(constant.ToFloat(v)).(type) {
+		case *big.Rat:
+			return r, true
+		case *big.Float:
+			out, acc := r.Rat(nil)
+			return out, acc == big.Exact && out != nil
+		case int64:
+			return rat(r), true
+		}
+	}
+	return nil, false
+}
+
+// binary combines two values by op.
+func (e *evaluator) binary(op token.Token, a, b *value) *value {
+	if a == nil || b == nil {
+		return nil
+	}
+	switch {
+	case a.log && b.log:
+		switch op {
+		case token.ADD:
+			return &value{t: a.t.Mul(b.t), log: true}
+		case token.SUB:
+			return &value{t: a.t.Div(b.t), log: true}
+		}
+		return nil
+	case a.log || b.log:
+		l, o := a, b
+		if b.log {
+			l, o = b, a
+		}
+		oa, ok := affineOf(o)
+		if !ok {
+			return nil
+		}
+		switch {
+		case op == token.ADD || op == token.SUB && a.log:
+			if op == token.SUB {
+				oa = oa.Scale(shared(-1))
+			}
+			return &value{t: l.t.Mul(ExpOf(oa)), log: true}
+		case op == token.SUB:
+			return &value{t: ExpOf(oa).Div(l.t), log: true}
+		case op == token.MUL:
+			return &value{t: logScale(l.t, oa), log: true}
+		}
+		return nil
+	}
+	switch op {
+	case token.MUL:
+		return &value{t: a.t.Mul(b.t)}
+	case token.QUO:
+		return &value{t: a.t.Div(b.t)}
+	case token.ADD, token.SUB:
+		x, ok1 := a.t.Affine()
+		y, ok2 := b.t.Affine()
+		if !ok1 || !ok2 {
+			return nil
+		}
+		if op == token.SUB {
+			y = y.Scale(shared(-1))
+		}
+		return &value{t: FromAffine(x.Add(y))}
+	}
+	return nil
+}
+
+// logScale returns t^k for ln t scaled by k.
+func logScale(t *Term, k Affine) *Term {
+	if t == nil {
+		return nil
+	}
+	if k.IsConst() && k.c().IsInt() {
+		return t.PowInt(k.c().Num().Int64())
+	}
+	if t.Coef.Cmp(ratOne) == 0 && len(t.Gamma) == 0 && t.SqrtPi == 0 && len(t.Pows) == 1 && t.Pows[0].Exp.IsConst() && t.Exp.IsConst() && t.Exp.c().Sign() == 0 {
+		p := t.Pows[0]
+		return PowOf(p.Base, k.Scale(p.Exp.c()))
+	}
+	return nil
+}
+
+// call evaluates conversions, the functions of package math the
+// algebra knows, and calls Options.Callee knows.
+func (e *evaluator) call(x *ast.CallExpr, en env) *value {
+	if tv, ok := e.info.Types[x.Fun]; ok && tv.IsType() {
+		if len(x.Args) != 1 {
+			return nil
+		}
+		v := e.eval(x.Args[0], en)
+		if !e.numeric(x) || !e.numeric(x.Args[0]) {
+			return nil
+		}
+		return v
+	}
+	args := make([]*value, len(x.Args))
+	for i, a := range x.Args {
+		args[i] = e.eval(a, en)
+	}
+	one := len(args) == 1 && args[0] != nil
+	switch {
+	case e.isMath(x, "Gamma") && one:
+		if a, ok := affineOf(args[0]); ok {
+			return &value{t: GammaOf(a)}
+		}
+	case e.isMath(x, "Exp") && one:
+		if args[0].log {
+			return &value{t: args[0].t}
+		}
+		if a, ok := affineOf(args[0]); ok {
+			return &value{t: ExpOf(a)}
+		}
+	case e.isMath(x, "Log") && one:
+		if !args[0].log {
+			return &value{t: args[0].t, log: true}
+		}
+	case e.isMath(x, "Pow") && len(args) == 2 && args[0] != nil && args[1] != nil:
+		k, ok := affineOf(args[1])
+		if !ok {
+			return nil
+		}
+		if b, ok := affineOf(args[0]); ok {
+			return &value{t: PowOf(b, k)}
+		}
+		if !args[0].log {
+			return &value{t: logScale(args[0].t, k)}
+		}
+	case e.opts.Callee != nil:
+		ts := make([]*Term, len(args))
+		for i, a := range args {
+			if a != nil && !a.log {
+				ts[i] = a.t
+			}
+		}
+		if t := e.opts.Callee(x, ts); t != nil {
+			return &value{t: t}
+		}
+	}
+	return nil
+}

@@ -1,0 +1,750 @@
+package valuemodel
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math/big"
+)
+
+// site is one assignment of a variable in a loop body; guard is the
+// condition of the if statement around it, nil at the top level.
+type site struct {
+	stmt  ast.Stmt
+	guard ast.Expr
+}
+
+// role is what a loop does to a variable declared outside its body.
+type role int
+
+const (
+	roleOther role = iota
+	roleAcc
+	roleSum
+	roleStep
+)
+
+// loop summarises a counting loop and updates en past it; a loop of
+// any other form is walked once with what it assigns unknown.
+func (e *evaluator) loop(st ast.Stmt, en env) {
+	l, body := e.shape(st, en)
+	if l == nil {
+		e.opaqueLoop(st, en)
+		return
+	}
+	sites, ok := e.sites(body, l.Counter)
+	if _, stepped := sites[l.Counter]; !ok || l.Counter != nil && stepped {
+		// The body moves the counter too: the trips are not the
+		// ones the loop header counts.
+		e.opaqueLoop(st, en)
+		return
+	}
+	roles := make(map[types.Object]role)
+	steps := make(map[types.Object]Affine)
+	for obj, ss := range sites {
+		if obj == l.Counter || body.Pos() <= obj.Pos() && obj.Pos() < body.End() {
+			continue
+		}
+		roles[obj] = e.roleOf(obj, ss, steps)
+	}
+	trip := func(dry bool) env {
+		in := e.copyEnv(en)
+		for obj, r := range roles {
+			switch r {
+			case roleStep:
+				in[obj] = e.addAffine(e.cur(obj, en), steps[obj].Scale(new(big.Rat)).Add(Var(l.Iter).Scale(steps[obj].c())))
+			case roleAcc:
+				in[obj] = nil
+				if !dry {
+					in[obj] = e.tripStart(l, obj)
+				}
+			default:
+				in[obj] = nil
+			}
+		}
+		if l.Counter != nil {
+			in[l.Counter] = &value{t: FromAffine(l.From.Add(Var(l.Iter).Scale(l.Step)))}
+		}
+		return in
+	}
+	// Two passes: the first learns each accumulator's operands, the
+	// second follows the accumulators through the trip with their
+	// values at its start.
+	for obj, r := range roles {
+		if r == roleAcc {
+			init := e.cur(obj, en)
+			if init == nil || init.log {
+				roles[obj] = roleOther
+				continue
+			}
+			l.Accs = append(l.Accs, &Acc{Obj: obj, Init: init.t})
+		}
+	}
+	l.Exits = e.exits(body)
+	e.trip(l, body, trip(true), roles, sites, true)
+	e.trip(l, body, trip(false), roles, sites, false)
+	e.res.Loops = append(e.res.Loops, l)
+	// Past the loop.
+	for obj, r := range roles {
+		switch r {
+		case roleStep:
+			en[obj] = e.addAffine(e.cur(obj, en), steps[obj].Scale(new(big.Rat)).Add(l.Count.Scale(steps[obj].c())))
+		case roleAcc:
+			en[obj] = nil
+			if a := l.acc(obj); a != nil && a.After != nil {
+				en[obj] = &value{t: a.After}
+			}
+		default:
+			en[obj] = nil
+		}
+	}
+	if l.Counter != nil && !(st.Pos() <= l.Counter.Pos() && l.Counter.Pos() < st.End()) {
+		en[l.Counter] = nil
+	}
+}
+
+func (l *Loop) acc(obj types.Object) *Acc {
+	for _, a := range l.Accs {
+		if a.Obj == obj {
+			return a
+		}
+	}
+	return nil
+}
+
+// cur returns the value of obj in en: the entry, or the variable itself.
+func (e *evaluator) cur(obj types.Object, en env) *value {
+	if v, ok := en[obj]; ok {
+		return v
+	}
+	if e.opaque[obj] {
+		return nil
+	}
+	if b, ok := obj.Type().Underlying().(*types.Basic); !ok || b.Info()&(types.IsInteger|types.IsFloat) == 0 {
+		return nil
+	}
+	return &value{t: FromAffine(Var(Sym{Obj: obj}))}
+}
+
+// opaqueLoop walks a loop it cannot summarise: everything it assigns
+// is unknown inside and after it.
+func (e *evaluator) opaqueLoop(st ast.Stmt, en env) {
+	e.forgetAssigned([]ast.Stmt{st}, en)
+	in := e.copyEnv(en)
+	switch s := st.(type) {
+	case *ast.ForStmt:
+		if s.Init != nil {
+			e.forgetAssigned([]ast.Stmt{s.Init}, in)
+		}
+		e.block(s.Body.List, in)
+	case *ast.RangeStmt:
+		e.block(s.Body.List, in)
+	}
+}
+
+// shape recognises the counting forms of a loop.
+func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
+	l := &Loop{Stmt: st, Iter: Sym{Loop: st}}
+	switch s := st.(type) {
+	case *ast.RangeStmt:
+		if s.Value != nil || !e.numeric(s.X) {
+			return nil, nil
+		}
+		if t := e.info.TypeOf(s.X); t != nil {
+			if b, ok := t.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+				return nil, nil
+			}
+		}
+		n, ok := affineOf(e.eval(s.X, en))
+		if !ok {
+			return nil, nil
+		}
+		if s.Key != nil {
+			l.Counter = e.objOf(s.Key)
+			if l.Counter == nil {
+				return nil, nil
+			}
+		}
+		l.From, l.Step, l.Count, l.Bound, l.BoundOff = Int(0), rat(1), n, s.X, rat(-1)
+		return l, s.Body
+	case *ast.ForStmt:
+		cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
+		if !ok {
+			return nil, nil
+		}
+		if s.Init == nil && s.Post == nil {
+			// for n > 1 { …; n-- }
+			v := e.objOf(cond.X)
+			if v == nil {
+				v = e.objOf(cond.Y)
+			}
+			if v == nil {
+				return nil, nil
+			}
+			var step *big.Rat
+			for _, b := range s.Body.List {
+				if d := e.stepOf(b, v); d != nil {
+					if step != nil {
+						return nil, nil
+					}
+					step = d
+				}
+			}
+			from, ok := affineOf(e.cur(v, en))
+			if step == nil || !ok {
+				return nil, nil
+			}
+			l.Counter, l.From, l.Step = v, from, step
+			// The counter is stepped in the body: the body sees it
+			// through its role, not as the trip's counter.
+			if !e.bound(l, cond, en) {
+				return nil, nil
+			}
+			l.Counter = nil
+			return l, s.Body
+		}
+		init, ok := s.Init.(*ast.AssignStmt)
+		if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
+			return nil, nil
+		}
+		v := e.objOf(init.Lhs[0])
+		if v == nil || e.opaque[v] {
+			return nil, nil
+		}
+		from, ok := affineOf(e.eval(init.Rhs[0], en))
+		step := e.stepOf(s.Post, v)
+		if !ok || step == nil {
+			return nil, nil
+		}
+		l.Counter, l.From, l.Step = v, from, step
+		if !e.bound(l, cond, en) {
+			return nil, nil
+		}
+		return l, s.Body
+	}
+	return nil, nil
+}
+
+// bound reads the loop condition counter <op> bound into the trip
+// count.
+func (e *evaluator) bound(l *Loop, cond *ast.BinaryExpr, en env) bool {
+	op, b := cond.Op, cond.Y
+	if e.objOf(cond.X) != l.Counter {
+		if e.objOf(cond.Y) != l.Counter {
+			return false
+		}
+		op, b = flip(op), cond.X
+	}
+	bv, ok := affineOf(e.eval(b, en))
+	if !ok {
+		return false
+	}
+	up := l.Step.Sign() > 0
+	var span Affine
+	off := new(big.Rat)
+	switch {
+	case up && (op == token.LSS || op == token.NEQ):
+		span, off = bv.Sub(l.From), rat(-1)
+	case up && op == token.LEQ:
+		span = bv.Sub(l.From).Add(Const(l.Step))
+	case !up && (op == token.GTR || op == token.NEQ):
+		span, off = bv.Sub(l.From), rat(1)
+	case !up && op == token.GEQ:
+		span = bv.Sub(l.From).Add(Const(l.Step))
+	default:
+		return false
+	}
+	l.Count = span.Scale(new(big.Rat).Inv(l.Step))
+	l.Bound, l.BoundOff = b, off
+	return true
+}
+
+func flip(op token.Token) token.Token {
+	switch op {
+	case token.LSS:
+		return token.GTR
+	case token.GTR:
+		return token.LSS
+	case token.LEQ:
+		return token.GEQ
+	case token.GEQ:
+		return token.LEQ
+	}
+	return op
+}
+
+// stepOf returns the constant by which s changes v, or nil.
+func (e *evaluator) stepOf(s ast.Stmt, v types.Object) *big.Rat {
+	switch s := s.(type) {
+	case *ast.IncDecStmt:
+		if e.objOf(s.X) != v {
+			return nil
+		}
+		if s.Tok == token.INC {
+			return rat(1)
+		}
+		return rat(-1)
+	case *ast.AssignStmt:
+		if len(s.Lhs) != 1 || len(s.Rhs) != 1 || e.objOf(s.Lhs[0]) != v {
+			return nil
+		}
+		var c ast.Expr
+		neg := false
+		switch s.Tok {
+		case token.ADD_ASSIGN:
+			c = s.Rhs[0]
+		case token.SUB_ASSIGN:
+			c, neg = s.Rhs[0], true
+		case token.ASSIGN:
+			b, ok := ast.Unparen(s.Rhs[0]).(*ast.BinaryExpr)
+			if !ok || (b.Op != token.ADD && b.Op != token.SUB) || e.objOf(b.X) != v {
+				return nil
+			}
+			c, neg = b.Y, b.Op == token.SUB
+		default:
+			return nil
+		}
+		tv, ok := e.info.Types[c]
+		if !ok || tv.Value == nil {
+			return nil
+		}
+		r, ok := ratOf(tv.Value)
+		if !ok || r.Sign() == 0 {
+			return nil
+		}
+		if neg {
+			r = new(big.Rat).Neg(r)
+		}
+		return r
+	}
+	return nil
+}
+
+// sites lists where the body assigns each variable: at its top level,
+// or in an if statement with no else whose condition compares the
+// counter (the site's guard); a site with a nil stmt is anywhere else.
+func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object) (map[types.Object][]site, bool) {
+	out := make(map[types.Object][]site)
+	var note func(st ast.Stmt, guard ast.Expr, nested bool)
+	note = func(st ast.Stmt, guard ast.Expr, nested bool) {
+		ast.Inspect(st, func(n ast.Node) bool {
+			switch n := n.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.AssignStmt:
+				for _, l := range n.Lhs {
+					if obj := e.objOf(l); obj != nil {
+						s := site{stmt: n, guard: guard}
+						if nested {
+							s.stmt = nil
+						}
+						out[obj] = append(out[obj], s)
+					}
+				}
+			case *ast.IncDecStmt:
+				if obj := e.objOf(n.X); obj != nil {
+					s := site{stmt: n, guard: guard}
+					if nested {
+						s.stmt = nil
+					}
+					out[obj] = append(out[obj], s)
+				}
+			case *ast.RangeStmt:
+				for _, x := range []ast.Expr{n.Key, n.Value} {
+					if obj := e.objOf(x); obj != nil {
+						out[obj] = append(out[obj], site{})
+					}
+				}
+			}
+			return true
+		})
+	}
+	for _, st := range body.List {
+		switch s := st.(type) {
+		case *ast.AssignStmt, *ast.IncDecStmt:
+			note(s, nil, false)
+		case *ast.IfStmt:
+			if s.Init == nil && s.Else == nil && counter != nil && e.counterCmp(s.Cond, counter) {
+				for _, b := range s.Body.List {
+					switch b.(type) {
+					case *ast.AssignStmt, *ast.IncDecStmt:
+						note(b, s.Cond, false)
+					default:
+						note(b, nil, true)
+					}
+				}
+				continue
+			}
+			note(s, nil, true)
+		default:
+			note(st, nil, true)
+		}
+	}
+	return out, true
+}
+
+func (e *evaluator) counterCmp(cond ast.Expr, counter types.Object) bool {
+	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
+	if !ok {
+		return false
+	}
+	switch b.Op {
+	case token.LSS, token.LEQ, token.GTR, token.GEQ:
+		return e.objOf(b.X) == counter || e.objOf(b.Y) == counter
+	}
+	return false
+}
+
+// roleOf decides what the loop does to obj from where it assigns it.
+func (e *evaluator) roleOf(obj types.Object, ss []site, steps map[types.Object]Affine) role {
+	if e.opaque[obj] {
+		return roleOther
+	}
+	for _, s := range ss {
+		if s.stmt == nil {
+			return roleOther
+		}
+	}
+	if len(ss) == 1 && ss[0].guard == nil {
+		if d := e.stepOf(ss[0].stmt, obj); d != nil {
+			steps[obj] = Const(d)
+			return roleStep
+		}
+	}
+	acc, sum := true, true
+	for _, s := range ss {
+		as, ok := s.stmt.(*ast.AssignStmt)
+		if !ok {
+			return roleOther
+		}
+		if _, ok := e.accOps(as, obj); !ok {
+			acc = false
+		}
+		if _, _, ok := e.sumTerm(as, obj); !ok {
+			sum = false
+		}
+	}
+	switch {
+	case acc:
+		return roleAcc
+	case sum:
+		return roleSum
+	}
+	return roleOther
+}
+
+// opExpr is one operand of an accumulator update, as written.
+type opExpr struct {
+	mul bool
+	x   ast.Expr
+}
+
+// accOps reads acc *= X, acc /= X, acc = acc*X/Y and their variants
+// into the operations in the order the code performs them.
+func (e *evaluator) accOps(as *ast.AssignStmt, acc types.Object) ([]opExpr, bool) {
+	if len(as.Lhs) != 1 || len(as.Rhs) != 1 || e.objOf(as.Lhs[0]) != acc {
+		return nil, false
+	}
+	switch as.Tok {
+	case token.MUL_ASSIGN:
+		return []opExpr{{true, as.Rhs[0]}}, true
+	case token.QUO_ASSIGN:
+		return []opExpr{{false, as.Rhs[0]}}, true
+	case token.ASSIGN:
+	default:
+		return nil, false
+	}
+	var ops []opExpr
+	x := ast.Unparen(as.Rhs[0])
+	for depth := 0; depth < 8; depth++ {
+		if e.objOf(x) == acc {
+			// reverse: the innermost operation runs first
+			for i, j := 0, len(ops)-1; i < j; i, j = i+1, j-1 {
+				ops[i], ops[j] = ops[j], ops[i]
+			}
+			return ops, len(ops) > 0
+		}
+		b, ok := x.(*ast.BinaryExpr)
+		if !ok || (b.Op != token.MUL && b.Op != token.QUO) {
+			return nil, false
+		}
+		if b.Op == token.MUL && e.objOf(b.Y) == acc && len(ops) == 0 || b.Op == token.MUL && e.objOf(b.Y) == acc {
+			ops = append(ops, opExpr{true, b.X})
+			x = ast.Unparen(b.Y)
+			continue
+		}
+		if mentionsObj(e.info, b.Y, acc) {
+			return nil, false
+		}
+		ops = append(ops, opExpr{b.Op == token.MUL, b.Y})
+		x = ast.Unparen(b.X)
+	}
+	return nil, false
+}
+
+// sumTerm reads s += X, s -= X, s = s + X and s = X + s.
+func (e *evaluator) sumTerm(as *ast.AssignStmt, s types.Object) (ast.Expr, bool, bool) {
+	if len(as.Lhs) != 1 || len(as.Rhs) != 1 || e.objOf(as.Lhs[0]) != s {
+		return nil, false, false
+	}
+	switch as.Tok {
+	case token.ADD_ASSIGN:
+		return as.Rhs[0], false, !mentionsObj(e.info, as.Rhs[0], s)
+	case token.SUB_ASSIGN:
+		return as.Rhs[0], true, !mentionsObj(e.info, as.Rhs[0], s)
+	case token.ASSIGN:
+		b, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
+		if !ok || b.Op != token.ADD {
+			return nil, false, false
+		}
+		switch s {
+		case e.objOf(b.X):
+			return b.Y, false, !mentionsObj(e.info, b.Y, s)
+		case e.objOf(b.Y):
+			return b.X, false, !mentionsObj(e.info, b.X, s)
+		}
+	}
+	return nil, false, false
+}
+
+func mentionsObj(info *types.Info, n ast.Node, obj types.Object) bool {
+	found := false
+	ast.Inspect(n, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && info.ObjectOf(id) == obj {
+			found = true
+		}
+		return !found
+	})
+	return found
+}
+
+// tripStart returns an accumulator's value at the start of trip t,
+// assuming each of its ops has run on every trip of its range before
+// t: Init·∏ over each op of its operands on the trips before.
+func (e *evaluator) tripStart(l *Loop, obj types.Object) *value {
+	a := l.acc(obj)
+	if a == nil || len(a.Ops) == 0 {
+		return nil
+	}
+	v := a.Init
+	for _, op := range a.Ops {
+		v = v.Mul(opProduct(l, op, Var(l.Iter).Sub(op.From)))
+	}
+	if v == nil {
+		return nil
+	}
+	return &value{t: v}
+}
+
+// opProduct returns ∏ of op's operand (or its inverse) over n trips
+// starting at op.From.
+func opProduct(l *Loop, op Op, n Affine) *Term {
+	if op.By == nil {
+		return nil
+	}
+	dummy := Sym{Loop: l.body()}
+	f := op.By.Subst(l.Iter, Var(dummy).Add(op.From))
+	p := ProductOver(f, dummy, n)
+	if !op.Mul {
+		p = p.Inv()
+	}
+	return p
+}
+
+// trip walks one trip of the body. In the dry pass it records each
+// accumulator's operands; in the other it records the values the
+// accumulators take, the terms of the sums, and the value after the
+// loop.
+func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.Object]role, sites map[types.Object][]site, dry bool) {
+	saved := e.res
+	if dry {
+		// Record nothing from the dry pass.
+		e.res = &Result{Values: make(map[ast.Expr]*Term), Exprs: saved.Exprs}
+	}
+	defer func() {
+		if dry {
+			e.res = saved
+		}
+	}()
+	opIndex := make(map[types.Object]int)
+	var walk func(list []ast.Stmt, guard ast.Expr)
+	walk = func(list []ast.Stmt, guard ast.Expr) {
+		for _, st := range list {
+			if !e.tick() {
+				return
+			}
+			as, _ := st.(*ast.AssignStmt)
+			var obj types.Object
+			if as != nil && len(as.Lhs) == 1 {
+				obj = e.objOf(as.Lhs[0])
+			}
+			switch {
+			case obj != nil && roles[obj] == roleAcc:
+				ops, _ := e.accOps(as, obj)
+				a := l.acc(obj)
+				for _, o := range ops {
+					by := e.eval(o.x, in)
+					var t *Term
+					if by != nil && !by.log {
+						t = by.t
+					}
+					i := opIndex[obj]
+					opIndex[obj]++
+					if dry {
+						op := Op{Stmt: st, X: o.x, Mul: o.mul, By: t, From: Int(0), To: l.Count}
+						if guard != nil {
+							op.From, op.To, t = e.guardRange(l, guard, in)
+							if t == nil {
+								op.By = nil
+							}
+							a.Guarded = true
+						}
+						a.Ops = append(a.Ops, op)
+						continue
+					}
+					if i >= len(a.Ops) {
+						continue
+					}
+					op := &a.Ops[i]
+					cur := in[obj]
+					if cur == nil || t == nil {
+						in[obj] = nil
+						continue
+					}
+					op.Before = cur.t
+					if o.mul {
+						op.After = cur.t.Mul(t)
+					} else {
+						op.After = cur.t.Div(t)
+					}
+					in[obj] = &value{t: op.After}
+				}
+			case obj != nil && roles[obj] == roleSum:
+				x, neg, _ := e.sumTerm(as, obj)
+				v := e.eval(x, in)
+				if dry {
+					continue
+				}
+				var t *Term
+				if v != nil && !v.log {
+					t = v.t
+					if neg {
+						t = t.Neg()
+					}
+				}
+				from, to := Int(0), l.Count
+				if guard != nil {
+					from, to, _ = e.guardRange(l, guard, in)
+				}
+				l.Sums = append(l.Sums, &SumAcc{Obj: obj, Stmt: st, Sum: Sum{Iter: l.Iter, From: from, To: to, Term: t}})
+			default:
+				if ifs, ok := st.(*ast.IfStmt); ok && ifs.Init == nil && ifs.Else == nil && l.Counter != nil && e.counterCmp(ifs.Cond, l.Counter) {
+					e.eval(ifs.Cond, in)
+					walk(ifs.Body.List, ifs.Cond)
+					continue
+				}
+				e.stmt(st, in)
+			}
+		}
+	}
+	walk(body.List, nil)
+	if dry {
+		return
+	}
+	for _, a := range l.Accs {
+		v := a.Init
+		for _, op := range a.Ops {
+			v = v.Mul(opProduct(l, op, op.To.Sub(op.From)))
+		}
+		a.After = v
+	}
+}
+
+// guardRange turns a condition comparing the counter with a
+// loop-invariant bound into the trips on which it holds, [from, to);
+// the third result is nil when the condition is not of that form.
+func (e *evaluator) guardRange(l *Loop, cond ast.Expr, en env) (Affine, Affine, *Term) {
+	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
+	if !ok || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
+		return Int(0), l.Count, nil
+	}
+	op, x := b.Op, b.Y
+	if e.objOf(b.X) != l.Counter {
+		op, x = flip(op), b.X
+	}
+	bv, ok := affineOf(e.eval(x, en))
+	if !ok || bv.Has(l.Iter) {
+		return Int(0), l.Count, nil
+	}
+	// counter = From + Step·t
+	tAt := bv.Sub(l.From).Scale(l.Step) // the trip on which counter = bound
+	if l.Step.Sign() < 0 {
+		op = flip(op)
+	}
+	switch op {
+	case token.LEQ:
+		return Int(0), tAt.Shift(1), One()
+	case token.LSS:
+		return Int(0), tAt, One()
+	case token.GEQ:
+		return tAt, l.Count, One()
+	case token.GTR:
+		return tAt.Shift(1), l.Count, One()
+	}
+	return Int(0), l.Count, nil
+}
+
+// body returns the loop's body, which stands for the running index of
+// the products the summary forms.
+func (l *Loop) body() ast.Node {
+	switch s := l.Stmt.(type) {
+	case *ast.ForStmt:
+		return s.Body
+	case *ast.RangeStmt:
+		return s.Body
+	}
+	return nil
+}
+
+// exits reports whether body can leave its loop before the condition
+// fails, or skip the rest of a trip: a break or continue of the loop
+// itself, a labelled break or continue, a goto, a return or a call of
+// panic, outside closures.
+func (e *evaluator) exits(body *ast.BlockStmt) bool {
+	found := false
+	var walk func(n ast.Node, inner bool)
+	walk = func(n ast.Node, inner bool) {
+		ast.Inspect(n, func(m ast.Node) bool {
+			if found || m == nil {
+				return false
+			}
+			switch m := m.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.ForStmt, *ast.RangeStmt, *ast.SwitchStmt, *ast.TypeSwitchStmt, *ast.SelectStmt:
+				if m != n {
+					walk(m, true)
+					return false
+				}
+			case *ast.BranchStmt:
+				switch {
+				case m.Tok == token.GOTO, m.Label != nil && m.Tok != token.FALLTHROUGH:
+					found = true
+				case (m.Tok == token.BREAK || m.Tok == token.CONTINUE) && !inner:
+					found = true
+				}
+			case *ast.ReturnStmt:
+				found = true
+			case *ast.CallExpr:
+				if id, ok := ast.Unparen(m.Fun).(*ast.Ident); ok && id.Name == "panic" {
+					if _, ok := e.info.Uses[id].(*types.Builtin); ok {
+						found = true
+					}
+				}
+			}
+			return true
+		})
+	}
+	walk(body, false)
+	return found
+}
