@@ -35,7 +35,11 @@ func buildAndRun(m *testing.M) int {
 		fmt.Fprintf(os.Stderr, "building overfact: %v\n%s", err, out)
 		return 1
 	}
-	return m.Run()
+	code := m.Run()
+	if theRelease != nil {
+		os.RemoveAll(theRelease.dir)
+	}
+	return code
 }
 
 // result is what one run of the command produced.
