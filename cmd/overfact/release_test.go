@@ -155,37 +155,6 @@ func (r *release) copyDependencies(root string) error {
 	return r.proxy.CopyFromCache(filepath.Join(strings.TrimSpace(cache), "cache", "download"), mods)
 }
 
-// copyModule copies the files of the module at src to dst, leaving out
-// version control data and nested modules, which are not part of it.
-func copyModule(src, dst string) error {
-	return filepath.WalkDir(src, func(path string, d os.DirEntry, err error) error {
-		if err != nil {
-			return err
-		}
-		rel, _ := filepath.Rel(src, path)
-		if d.Name() == ".git" {
-			if d.IsDir() {
-				return filepath.SkipDir
-			}
-			return nil
-		}
-		if d.IsDir() {
-			if _, err := os.Stat(filepath.Join(path, "go.mod")); err == nil && rel != "." {
-				return filepath.SkipDir
-			}
-			return os.MkdirAll(filepath.Join(dst, rel), 0o755)
-		}
-		if !d.Type().IsRegular() {
-			return nil
-		}
-		data, err := os.ReadFile(path)
-		if err != nil {
-			return err
-		}
-		return os.WriteFile(filepath.Join(dst, rel), data, 0o644)
-	})
-}
-
 // TestReleaseInstall checks the two promises of the install section:
 // go install …/cmd/overfact@version works from a fresh GOPATH (the root
 // go.mod has no replace directive, which go install refuses), and a user

@@ -18,6 +18,9 @@ const maxFixRounds = 4
 // fix applies (or, with Diff, prints) the fixes of graph's findings,
 // then writes every changed file once.
 func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph) {
+	if !r.ensureHelper(graph.Roots) {
+		return
+	}
 	contents := make(map[string][]byte) // current text of each changed file
 	originals := make(map[string][]byte)
 	var pending map[string]int // findings whose fix was left over; nil: all
