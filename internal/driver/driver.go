@@ -163,6 +163,8 @@ func (r *run) load(a *analysis.Analyzer, patterns []string, overlay map[string][
 }
 
 func (r *run) report(graph *checker.Graph) {
+	// One finding, one report, and the same exit code in every mode.
+	r.findings = dropCopies(graph.Roots) > 0
 	if r.opts.SARIF != "" {
 		r.writeSARIF(graph.Roots)
 	}
@@ -170,9 +172,7 @@ func (r *run) report(graph *checker.Graph) {
 		if err := graph.PrintJSON(r.opts.Stdout); err != nil {
 			r.errorf("%v", err)
 		}
-		return // as with go vet -json, findings alone do not fail the run
+		return
 	}
-	if n := writeText(r.opts.Stderr, r.dir, graph.Roots); n > 0 {
-		r.findings = true
-	}
+	writeText(r.opts.Stderr, r.dir, graph.Roots)
 }
