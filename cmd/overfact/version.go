@@ -66,9 +66,14 @@ func vcsRevision() string {
 
 // runVersion implements "overfact version".
 func runVersion(w io.Writer) int {
-	fmt.Fprintf(w, "overfact %s", moduleVersion())
+	v := moduleVersion()
+	fmt.Fprintf(w, "overfact %s", v)
 	if rev := vcsRevision(); rev != "" {
 		fmt.Fprintf(w, " (revision %s)", rev)
+	} else if v == "(devel)" {
+		// In a checkout's workspace the go command's default,
+		// -buildvcs=auto, records no revision.
+		fmt.Fprint(w, " (no revision recorded: build with -buildvcs=true)")
 	}
 	fmt.Fprintf(w, " built with %s for %s/%s\n", runtime.Version(), runtime.GOOS, runtime.GOARCH)
 	return 0
