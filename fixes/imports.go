@@ -98,9 +98,18 @@ func (b *builder) addImport(path, base, name string) {
 	case !decl.Lparen.IsValid():
 		// import "math" becomes a parenthesised list. The parentheses
 		// are edits of their own, identical in every fix, so that fixes
-		// adding different imports to the same declaration merge.
+		// adding different imports to the same declaration merge. The
+		// opening one replaces the space after the keyword rather than
+		// being inserted where a new standard import is: a driver that
+		// drops only adjacent copies of an edit (golangci-lint's) then
+		// still sees the copies side by side.
 		only := decl.Specs[0]
-		b.insert(only.Pos(), "(\n\t")
+		kw := decl.TokPos + token.Pos(len(token.IMPORT.String()))
+		if gap := b.src[b.tok.Offset(kw):b.tok.Offset(only.Pos())]; len(gap) > 0 && len(bytes.TrimSpace(gap)) == 0 {
+			b.replace(kw, only.Pos(), " (\n\t")
+		} else {
+			b.insert(only.Pos(), "(\n\t")
+		}
 		b.insert(placeImport(decl.Specs, path, spec))
 		b.insert(b.closeParen(only))
 	default:

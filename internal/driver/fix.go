@@ -197,7 +197,9 @@ func (p *fixPlan) check(e edit) (dup, clash bool) {
 // code its author laid out by hand.
 func apply(content []byte, edits []edit) ([]byte, error) {
 	sorted := append([]edit(nil), edits...)
-	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].start < sorted[j].start })
+	sort.SliceStable(sorted, func(i, j int) bool {
+		return sorted[i].start < sorted[j].start || sorted[i].start == sorted[j].start && sorted[i].end < sorted[j].end
+	})
 	var out bytes.Buffer
 	last := 0
 	for _, e := range sorted {
