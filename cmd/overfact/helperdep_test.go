@@ -95,7 +95,10 @@ func (r *release) run(t *testing.T, dir string, env []string, args ...string) re
 // TestFixAddsHelper runs -fix, with the command installed from the
 // release proxy, on a module that does not require the helper: the
 // command adds the requirement at its own version, and the fixed module
-// builds and passes its tests, which fail before the fix.
+// builds and passes its tests, which fail before the fix. The -fix runs
+// of these tests leave out test files (-test=false), which hold nothing
+// to fix and would only add the testing package's dependencies to the
+// analysis.
 func TestFixAddsHelper(t *testing.T) {
 	r := published(t)
 	dir := writeModule(t, planModule)
@@ -103,7 +106,7 @@ func TestFixAddsHelper(t *testing.T) {
 	if out, err := goCmd(dir, env, "test", "./..."); err == nil {
 		t.Fatalf("the module's test passes before the fix; it tests nothing:\n%s", out)
 	}
-	res := r.run(t, dir, env, "-fix", "./...")
+	res := r.run(t, dir, env, "-fix", "-test=false", "./...")
 	if res.code != 0 {
 		t.Fatalf("-fix: code %d\n%s", res.code, res.stderr)
 	}
@@ -136,7 +139,7 @@ func TestFixHelperUnavailable(t *testing.T) {
 		t.Run(tt.name, func(t *testing.T) {
 			dir := writeModule(t, planModule)
 			before := snapshot(t, dir)
-			res := r.run(t, dir, r.env(t.TempDir(), tt.extra...), "-fix", "./...")
+			res := r.run(t, dir, r.env(t.TempDir(), tt.extra...), "-fix", "-test=false", "./...")
 			if res.code != 1 || !strings.Contains(res.stderr, helperPath) || !strings.Contains(res.stderr, tt.want) {
 				t.Errorf("-fix: code %d, stderr:\n%s\nwant 1 and a message naming %s and %q", res.code, res.stderr, helperPath, tt.want)
 			}
@@ -184,7 +187,7 @@ func TestHelperCopy(t *testing.T) {
 				t.Errorf("go.mod has no relative replace:\n%s", data)
 			}
 			offline := r.env(t.TempDir(), "GOPROXY=off")
-			if res := r.run(t, dir, offline, "-fix", "./..."); res.code != 0 {
+			if res := r.run(t, dir, offline, "-fix", "-test=false", "./..."); res.code != 0 {
 				t.Fatalf("-fix with the copy and GOPROXY=off: code %d\n%s", res.code, res.stderr)
 			}
 			if out, err := goCmd(dir, offline, "test", "./..."); err != nil {
