@@ -4,7 +4,6 @@ import (
 	"go/parser"
 	"go/token"
 	"os"
-	"path/filepath"
 	"sort"
 	"testing"
 
@@ -22,13 +21,7 @@ import (
 // around a single import); each fixed file must still parse.
 func TestFixesMergeAdjacent(t *testing.T) {
 	t.Parallel()
-	root := filepath.Join("..", "testdata", "src")
-	pkgs := srcPackages(t, root)
-	dir := gopath(t, root, pkgs...)
-	patterns := make([]string, len(pkgs))
-	for i, p := range pkgs {
-		patterns[i] = p + "/..."
-	}
+	dir, patterns := testdataTree(t)
 	edits := make(map[string][]fileEdit)
 	for _, r := range analysistest.Run(quiet{}, dir, analyzer.Analyzer, patterns...) {
 		fset := r.Action.Package.Fset
