@@ -36,8 +36,8 @@ func buildAndRun(m *testing.M) int {
 		return 1
 	}
 	code := m.Run()
-	if theRelease != nil {
-		os.RemoveAll(theRelease.dir)
+	if releaseDir != "" {
+		os.RemoveAll(releaseDir) // the module caches in it were made with -modcacherw
 	}
 	return code
 }

@@ -39,6 +39,7 @@ var (
 	releaseOnce sync.Once
 	theRelease  *release
 	releaseErr  error
+	releaseDir  string // removed by TestMain, whether publish succeeded or not
 )
 
 // published returns the release, building it on first use. It is shared
@@ -98,6 +99,7 @@ func publish() (*release, error) {
 	if err != nil {
 		return nil, err
 	}
+	releaseDir = dir
 	r := &release{dir: dir, proxy: modproxy.Proxy{Dir: filepath.Join(dir, "proxy")}}
 	if err := r.proxy.PublishDir(helperPath, releaseVersion, filepath.Join(root, "fixes", "lgamma")); err != nil {
 		return nil, err
