@@ -29,6 +29,20 @@ func srcPackages(t *testing.T, root string) []string {
 	return pkgs
 }
 
+// testdataTree copies every analysistest package of the repository (the
+// analyzer's scenarios included) into a GOPATH tree, and returns it with
+// a pattern per package.
+func testdataTree(t *testing.T) (dir string, patterns []string) {
+	t.Helper()
+	root := filepath.Join("..", "testdata", "src")
+	pkgs := srcPackages(t, root)
+	dir = gopath(t, root, pkgs...)
+	for _, p := range pkgs {
+		patterns = append(patterns, p+"/...")
+	}
+	return dir, patterns
+}
+
 // TestAllTestdataFixes applies the first fix of every finding in every
 // analysistest package of the repository (the analyzer's scenarios
 // included) and checks that the result type-checks against the real
@@ -36,13 +50,7 @@ func srcPackages(t *testing.T, root string) []string {
 // and none of the findings that were fixed.
 func TestAllTestdataFixes(t *testing.T) {
 	t.Parallel()
-	root := filepath.Join("..", "testdata", "src")
-	pkgs := srcPackages(t, root)
-	dir := gopath(t, root, pkgs...)
-	patterns := make([]string, len(pkgs))
-	for i, p := range pkgs {
-		patterns[i] = p + "/..."
-	}
+	dir, patterns := testdataTree(t)
 	// Packages that do not type-check as written (the analyzer's odd-code
 	// scenarios) cannot be judged after fixing; leave them out.
 	patterns = compiling(t, dir, patterns)

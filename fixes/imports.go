@@ -1,6 +1,7 @@
 package fixes
 
 import (
+	"bytes"
 	"go/ast"
 	"go/token"
 	"go/types"
@@ -72,9 +73,11 @@ func (b *builder) scopeAt(pos token.Pos) *types.Scope {
 	return b.pass.TypesInfo.Scopes[b.file]
 }
 
-// addImport inserts the import spec of path. Standard-library paths go in
-// sorted position among the first import declaration's specs; the helper
-// module goes in a group of its own at its end, as goimports would.
+// addImport inserts the import spec of path where goimports would put
+// it (common practice): in the first import declaration, standard-library
+// paths in sorted position in the standard group, which comes first,
+// other paths in sorted position among the other imports, each kind in a
+// group of its own separated by a blank line.
 func (b *builder) addImport(path, base, name string) {
 	spec := strconv.Quote(path)
 	if name != base {
@@ -90,42 +93,82 @@ func (b *builder) addImport(path, base, name string) {
 	switch {
 	case decl == nil:
 		b.insert(b.file.Name.End(), "\n\nimport "+spec)
+	case len(decl.Specs) == 0:
+		b.insert(decl.Lparen+1, "\n\t"+spec+"\n")
 	case !decl.Lparen.IsValid():
 		// import "math" becomes a parenthesised list. The parentheses
 		// are edits of their own, identical in every fix, so that fixes
-		// adding different imports to the same declaration merge.
+		// adding different imports to the same declaration merge. The
+		// opening one replaces the space after the keyword rather than
+		// being inserted where a new standard import is: a driver that
+		// drops only adjacent copies of an edit (golangci-lint's) then
+		// still sees the copies side by side.
 		only := decl.Specs[0]
-		b.insert(only.Pos(), "(\n\t")
-		b.insert(only.Pos(), spec+"\n"+groupSep(path)+"\t")
-		b.insert(only.End(), "\n)")
+		kw := decl.TokPos + token.Pos(len(token.IMPORT.String()))
+		if gap := b.src[b.tok.Offset(kw):b.tok.Offset(only.Pos())]; len(gap) > 0 && len(bytes.TrimSpace(gap)) == 0 {
+			b.replace(kw, only.Pos(), " (\n\t")
+		} else {
+			b.insert(only.Pos(), "(\n\t")
+		}
+		b.insert(placeImport(decl.Specs, path, spec))
+		b.insert(b.closeParen(only))
 	default:
-		b.insertSpec(decl, path, spec)
+		b.insert(placeImport(decl.Specs, path, spec))
 	}
 }
 
-func (b *builder) insertSpec(decl *ast.GenDecl, path, spec string) {
-	if len(decl.Specs) == 0 {
-		b.insert(decl.Lparen+1, "\n\t"+spec+"\n")
-		return
+// closeParen returns where the ")" of an import list made from the
+// single spec only goes, and its text: at the start of the next line when
+// nothing follows the spec on its own, so that specs that several fixes
+// append at the spec's end all land inside the list, in whatever order
+// a driver merges same-point insertions.
+func (b *builder) closeParen(only ast.Spec) (token.Pos, string) {
+	end := specEnd(only)
+	rest := b.src[b.tok.Offset(end):]
+	if i := bytes.IndexByte(rest, '\n'); i >= 0 && len(bytes.TrimSpace(rest[:i])) == 0 {
+		return end + token.Pos(i+1), ")\n"
 	}
-	if isStd(path) {
-		for _, s := range decl.Specs {
-			if p := importPath(s.(*ast.ImportSpec)); isStd(p) && p > path {
-				b.insert(s.Pos(), spec+"\n\t")
-				return
-			}
+	return end, "\n)"
+}
+
+// placeImport returns where, among the specs of an import declaration,
+// the spec of path goes, and the text to insert there.
+func placeImport(specs []ast.Spec, path, spec string) (token.Pos, string) {
+	std := isStd(path)
+	var kin []*ast.ImportSpec // the imports of the same kind
+	for _, s := range specs {
+		if is := s.(*ast.ImportSpec); isStd(importPath(is)) == std {
+			kin = append(kin, is)
 		}
 	}
-	last := decl.Specs[len(decl.Specs)-1]
-	b.insert(last.End(), "\n"+groupSep(path)+"\t"+spec)
+	for _, s := range kin {
+		if importPath(s) > path {
+			return specStart(s), spec + "\n\t"
+		}
+	}
+	switch {
+	case len(kin) > 0:
+		return specEnd(kin[len(kin)-1]), "\n\t" + spec
+	case std: // the standard group comes first
+		return specStart(specs[0].(*ast.ImportSpec)), spec + "\n\n\t"
+	}
+	return specEnd(specs[len(specs)-1].(*ast.ImportSpec)), "\n\n\t" + spec
 }
 
-// groupSep separates a non-standard import from the standard ones.
-func groupSep(path string) string {
-	if isStd(path) {
-		return ""
+// specStart and specEnd include a spec's doc and line comments, so that
+// an insertion never separates a comment from its import.
+func specStart(s ast.Spec) token.Pos {
+	if is := s.(*ast.ImportSpec); is.Doc != nil {
+		return is.Doc.Pos()
 	}
-	return "\n"
+	return s.Pos()
+}
+
+func specEnd(s ast.Spec) token.Pos {
+	if is := s.(*ast.ImportSpec); is.Comment != nil {
+		return is.Comment.End()
+	}
+	return s.End()
 }
 
 // isStd reports whether path looks like a standard-library path (common

@@ -5,16 +5,20 @@ import (
 	"fmt"
 	"os"
 	"strings"
+	"text/tabwriter"
 
 	"github.com/overfact/overfact/analyzer"
 	"github.com/overfact/overfact/internal/driver"
 	"github.com/overfact/overfact/internal/sarif"
 )
 
-// runAnalysis implements the standalone mode: overfact [flags] PACKAGES.
-func runAnalysis(args []string) int {
+// analysisFlags returns the flags of the standalone mode, stored into
+// opts (which may be nil when only the usage is wanted).
+func analysisFlags(opts *driver.Options) *flag.FlagSet {
+	if opts == nil {
+		opts = new(driver.Options)
+	}
 	fs := flag.NewFlagSet("overfact", flag.ContinueOnError)
-	opts := driver.Options{Stdout: os.Stdout, Stderr: os.Stderr}
 	fs.StringVar(&opts.Dir, "C", "", "change to `dir` before loading packages (for a module nested in another)")
 	fs.BoolVar(&opts.Tests, "test", true, "analyse test files too")
 	fs.BoolVar(&opts.Fix, "fix", false, "apply the first suggested fix of each finding")
@@ -24,15 +28,21 @@ func runAnalysis(args []string) int {
 	fs.StringVar(&opts.SourceRoot, "srcroot", "", "`dir` SARIF artifact URIs are relative to (default: the -C directory or the current one)")
 	addAnalyzerFlags(fs)
 	fs.Usage = func() { usage(fs) }
-	if err := fs.Parse(args); err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
+	return fs
+}
+
+// runAnalysis implements the standalone mode: overfact [flags] PACKAGES.
+func runAnalysis(args []string) int {
+	opts := driver.Options{Stdout: os.Stdout, Stderr: os.Stderr}
+	fs := analysisFlags(&opts)
+	patterns, code, ok := parseFlags(fs, args, os.Stderr)
+	if !ok {
+		return code
 	}
-	if fs.NArg() == 0 {
+	if len(patterns) == 0 {
+		fmt.Fprintln(os.Stderr, "overfact: no packages to analyse")
 		usage(fs)
-		return driver.ExitError
+		return 2
 	}
 	if msg := conflictingFlags(opts); msg != "" {
 		fmt.Fprintf(os.Stderr, "overfact: %s\n", msg)
@@ -40,10 +50,11 @@ func runAnalysis(args []string) int {
 	}
 	opts.Rules = rules()
 	opts.Version = moduleVersion()
+	opts.Helper = helperModule()
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}
-	return driver.Run(analyzer.Analyzer, fs.Args(), opts)
+	return driver.Run(analyzer.Analyzer, patterns, opts)
 }
 
 // conflictingFlags explains why a combination of flags cannot work:
@@ -90,12 +101,14 @@ func usage(fs *flag.FlagSet) {
 		doc = analyzer.Analyzer.Name + ": " + doc
 	}
 	fmt.Fprintf(out, "%s\n\n", doc)
-	fmt.Fprint(out, `Usage:
-  overfact [flags] PACKAGES     analyse packages (exit 0 clean, 3 findings, 1 errors)
-  overfact bounds [TYPE...]     print where factorials stop fitting each type
-  overfact version              print the version
-  overfact lsp [-log file]      serve the Language Server Protocol on stdin/stdout
-  go vet -vettool=$(which overfact) PACKAGES
+	fmt.Fprintln(out, "Usage:")
+	tw := tabwriter.NewWriter(out, 0, 4, 2, ' ', 0)
+	fmt.Fprintln(tw, "  overfact [flags] PACKAGES\tanalyse packages (exit 0 clean, 3 findings, 1 errors, 2 bad usage)")
+	for _, c := range subcommands {
+		fmt.Fprintf(tw, "  %s\t%s\n", strings.TrimSpace("overfact "+c.name+" "+c.args), c.summary)
+	}
+	tw.Flush()
+	fmt.Fprint(out, `  go vet -vettool=$(which overfact) PACKAGES
   go fix -fixtool=$(which overfact) PACKAGES
 
 Flags:

@@ -40,8 +40,8 @@ func TestMissingPackages(t *testing.T) {
 		}
 	}
 	r := runIn(t, dir, isolated, "-C", filepath.Join(dir, "nodir"), "./...")
-	if r.code != 1 {
-		t.Errorf("-C to a missing directory: code %d, want 1", r.code)
+	if r.code != 1 || !strings.Contains(r.stderr, "nodir: no such directory") || strings.Contains(r.stderr, "fork/exec") {
+		t.Errorf("-C to a missing directory: code %d, stderr %q; want 1 and that the directory does not exist", r.code, r.stderr)
 	}
 }
 

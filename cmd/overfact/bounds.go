@@ -7,6 +7,7 @@ import (
 	"go/types"
 	"io"
 	"strconv"
+	"strings"
 	"text/tabwriter"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -74,19 +75,24 @@ func runBounds(args []string, stdout, stderr io.Writer) int {
 			"binomial coefficients and Gamma stop fitting it.\n\n")
 		fs.PrintDefaults()
 	}
-	if err := fs.Parse(args); err != nil {
-		return 2
+	names, code, ok := parseFlags(fs, args, stderr)
+	if !ok {
+		return code
 	}
 	sizes := types.SizesFor("gc", *arch)
 	if sizes == nil {
-		fmt.Fprintf(stderr, "overfact bounds: unknown architecture %q\n", *arch)
+		fmt.Fprintf(stderr, "overfact bounds: unknown architecture %q; the gc compiler's are %s\n", *arch, strings.Join(knownArchs(), " "))
 		return 2
 	}
 	var nums []thresholds.Num
-	for _, name := range fs.Args() {
+	for _, name := range names {
 		n, ok := thresholds.Named(name, sizes)
 		if !ok {
-			fmt.Fprintf(stderr, "overfact bounds: %q is not a fixed-size numeric type\n", name)
+			var valid []string
+			for _, n := range thresholds.All(sizes) {
+				valid = append(valid, n.Name)
+			}
+			fmt.Fprintf(stderr, "overfact bounds: %q is not a fixed-size numeric type; the types are %s\n", name, strings.Join(valid, " "))
 			return 2
 		}
 		nums = append(nums, n)
@@ -99,6 +105,19 @@ func runBounds(args []string, stdout, stderr io.Writer) int {
 		return writeBoundsJSON(stdout, stderr, rows)
 	}
 	return writeBoundsText(stdout, rows)
+}
+
+// knownArchs returns the architectures for which go/types knows the gc
+// compiler's sizes, out of the GOARCH values of "go tool dist list"
+// (from memory; one go/types does not know is left out).
+func knownArchs() []string {
+	var out []string
+	for _, a := range []string{"386", "amd64", "arm", "arm64", "loong64", "mips", "mipsle", "mips64", "mips64le", "ppc64", "ppc64le", "riscv64", "s390x", "sparc64", "wasm"} {
+		if types.SizesFor("gc", a) != nil {
+			out = append(out, a)
+		}
+	}
+	return out
 }
 
 func writeBoundsJSON(stdout, stderr io.Writer, rows []thresholds.Row) int {

@@ -206,10 +206,31 @@ func TestBoundsText(t *testing.T) {
 	}
 }
 
+// TestBoundsBadInput checks that a wrong type or architecture is a bad
+// command line whose message lists the valid values.
 func TestBoundsBadInput(t *testing.T) {
-	for _, args := range [][]string{{"bounds", "complex128"}, {"bounds", "string"}, {"bounds", "-arch", "pdp11"}} {
-		if r := runIn(t, ".", nil, args...); r.code != 2 || r.stderr == "" {
-			t.Errorf("%v: code %d, stderr %q; want 2 and a message", args, r.code, r.stderr)
+	for _, tt := range []struct {
+		args []string
+		want string
+	}{
+		{[]string{"bounds", "complex128"}, "int8 int16"},
+		{[]string{"bounds", "float128"}, "float32 float64"},
+		{[]string{"bounds", "string"}, "uintptr"},
+		{[]string{"bounds", "-arch", "pdp11"}, "386 amd64 arm arm64"},
+		{[]string{"bounds", "-arch", "sparc"}, "amd64"},
+	} {
+		if r := runIn(t, ".", nil, tt.args...); r.code != 2 || !strings.Contains(r.stderr, tt.want) {
+			t.Errorf("%v: code %d, stderr %q; want 2 and the valid values (%s ...)", tt.args, r.code, r.stderr, tt.want)
 		}
+	}
+}
+
+// TestBoundsFlagAfterType checks that a flag after a type name is a flag,
+// not a type: bounds int8 -json prints int8's row as JSON.
+func TestBoundsFlagAfterType(t *testing.T) {
+	r := runIn(t, ".", nil, "bounds", "int8", "-json")
+	var rows []jsonRow
+	if err := json.Unmarshal([]byte(r.stdout), &rows); err != nil || r.code != 0 || len(rows) != 1 || rows[0].Type != "int8" {
+		t.Errorf("bounds int8 -json: code %d, %v, stdout %q, stderr %q; want int8's row as JSON", r.code, err, r.stdout, r.stderr)
 	}
 }

@@ -122,8 +122,8 @@ func demoReport(t *testing.T) map[finding][]string {
 	root := repoRoot(t)
 	demo := filepath.Join(root, "testdata", "demo")
 	r := runIn(t, root, nil, "-C", filepath.Join("testdata", "demo"), "-json", "./...")
-	if r.code != 0 {
-		t.Fatalf("-json run: code %d\n%s", r.code, r.stderr)
+	if r.code != 3 {
+		t.Fatalf("-json run: code %d, want 3 (findings)\n%s", r.code, r.stderr)
 	}
 	var tree map[string]map[string]json.RawMessage
 	if err := json.Unmarshal([]byte(r.stdout), &tree); err != nil {

@@ -12,9 +12,9 @@ import (
 	"testing"
 )
 
-// helperModule returns a go.mod requiring the helper module from this
+// helperGoMod returns a go.mod requiring the helper module from this
 // repository, so that fixed code builds and analyses again.
-func helperModule(t *testing.T) string {
+func helperGoMod(t *testing.T) string {
 	return fmt.Sprintf("module example.com/bottling\n\ngo 1.21\n\nrequire github.com/overfact/overfact/fixes/lgamma v0.1.0\n\nreplace github.com/overfact/overfact/fixes/lgamma => %s\n",
 		filepath.ToSlash(filepath.Join(repoRoot(t), "fixes", "lgamma")))
 }
@@ -58,7 +58,7 @@ func goBuild(t *testing.T, dir string) {
 // it used to return a right value. With choose.go read-only nothing may
 // be written; once it is writable, one run applies both.
 func TestFixReadOnlyKeepsPlan(t *testing.T) {
-	dir := writeModule(t, map[string]string{"go.mod": helperModule(t), "line/fact.go": factFile, "line/choose.go": chooseFile})
+	dir := writeModule(t, map[string]string{"go.mod": helperGoMod(t), "line/fact.go": factFile, "line/choose.go": chooseFile})
 	choose := filepath.Join(dir, "line", "choose.go")
 	if err := os.Chmod(choose, 0o444); err != nil {
 		t.Fatal(err)
@@ -93,7 +93,7 @@ func TestFixManyFindings(t *testing.T) {
 	for i := 0; i < 45; i++ {
 		fmt.Fprintf(&src, "\n// Mixes%d counts pallets of kind %d.\nfunc Mixes%d(n, k int) float64 {\n\treturn fact(n) / (fact(k) * fact(n-k))\n}\n", i, i, i)
 	}
-	dir := writeModule(t, map[string]string{"go.mod": helperModule(t), "line/fact.go": factFile, "line/mixes.go": src.String()})
+	dir := writeModule(t, map[string]string{"go.mod": helperGoMod(t), "line/fact.go": factFile, "line/mixes.go": src.String()})
 	r := runIn(t, dir, isolated, "-fix", "./...")
 	if r.code != 0 {
 		t.Fatalf("-fix: code %d\n%s", r.code, r.stderr)
@@ -118,7 +118,7 @@ func TestFixConcurrentProcesses(t *testing.T) {
 	if testing.Short() {
 		t.Skip("runs -fix twice and builds the result")
 	}
-	files := map[string]string{"go.mod": helperModule(t), "line/fact.go": factFile, "line/choose.go": chooseFile, "line/a.go": loopFile}
+	files := map[string]string{"go.mod": helperGoMod(t), "line/fact.go": factFile, "line/choose.go": chooseFile, "line/a.go": loopFile}
 	dir := writeModule(t, files)
 	var wg sync.WaitGroup
 	results := make([]result, 2)

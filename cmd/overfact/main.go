@@ -7,13 +7,15 @@
 //	overfact bounds [TYPE...]       print the overflow thresholds table
 //	overfact version                print the module and Go versions
 //	overfact lsp                    serve the Language Server Protocol on stdin/stdout
+//	overfact helper [DEST]          copy the helper module into the current module
+//	overfact help [SUBCOMMAND]      print the usage
 //	go vet -vettool=$(which overfact) PACKAGES
 //	go fix -fixtool=$(which overfact) PACKAGES
 //
 // Under go vet and go fix the command speaks their unit protocol
 // (-V=full, -flags, and one .cfg file per package), handled by
 // unitchecker. Standalone, it exits 0 when clean, 3 when it reports
-// findings and 1 on errors. See docs/command.md for every flag.
+// findings, 1 on errors and 2 on a bad command line. See docs/command.md for every flag.
 package main
 
 import (
@@ -51,20 +53,12 @@ func isUnitProtocol(args []string) bool {
 	return strings.HasSuffix(args[len(args)-1], ".cfg")
 }
 
-// dispatch runs a subcommand or the standalone analysis and returns the
-// exit code.
+// dispatch runs the subcommand args[0] names, or else the standalone
+// analysis, and returns the exit code.
 func dispatch(args []string) int {
 	if len(args) > 0 {
-		switch args[0] {
-		case "bounds":
-			return runBounds(args[1:], os.Stdout, os.Stderr)
-		case "version":
-			return runVersion(os.Stdout)
-		case "help":
-			return runAnalysis([]string{"-h"})
-		}
-		if code, ok := runSubcommand(args); ok {
-			return code
+		if c := lookup(args[0]); c != nil {
+			return c.run(args[1:], os.Stdout, os.Stderr)
 		}
 	}
 	return runAnalysis(args)

@@ -35,7 +35,11 @@ func buildAndRun(m *testing.M) int {
 		fmt.Fprintf(os.Stderr, "building overfact: %v\n%s", err, out)
 		return 1
 	}
-	return m.Run()
+	code := m.Run()
+	if releaseDir != "" {
+		os.RemoveAll(releaseDir) // the module caches in it were made with -modcacherw
+	}
+	return code
 }
 
 // result is what one run of the command produced.
@@ -48,7 +52,13 @@ type result struct {
 // environment.
 func runIn(t *testing.T, dir string, env []string, args ...string) result {
 	t.Helper()
-	cmd := exec.Command(overfactBin, args...)
+	return runBinary(t, overfactBin, dir, env, args...)
+}
+
+// runBinary runs the command bin as runIn does.
+func runBinary(t *testing.T, bin, dir string, env []string, args ...string) result {
+	t.Helper()
+	cmd := exec.Command(bin, args...)
 	cmd.Dir = dir
 	cmd.Env = append(os.Environ(), env...)
 	var stdout, stderr bytes.Buffer
@@ -109,7 +119,43 @@ func TestVetProtocol(t *testing.T) {
 
 func TestNoArguments(t *testing.T) {
 	r := runIn(t, ".", nil)
-	if r.code != 1 || !strings.Contains(r.stderr, "Usage") {
+	if r.code != 2 || !strings.Contains(r.stderr, "Usage") {
 		t.Errorf("no arguments: code %d, stderr %q", r.code, r.stderr)
+	}
+}
+
+// TestBadFlag checks that a mistyped flag leads with the error and does
+// not bury it under the whole usage.
+func TestBadFlag(t *testing.T) {
+	for _, args := range [][]string{{"-nosuch", "./..."}, {"bounds", "-nosuch"}, {"lsp", "-nosuch"}, {"helper", "-nosuch"}} {
+		r := runIn(t, ".", nil, args...)
+		first, _, _ := strings.Cut(r.stderr, "\n")
+		if r.code != 2 || !strings.Contains(first, "flag provided but not defined: -nosuch") || strings.Count(r.stderr, "\n") > 2 {
+			t.Errorf("%v: code %d, stderr:\n%s\nwant 2 and the error first, in at most two lines", args, r.code, r.stderr)
+		}
+	}
+}
+
+// TestHelp checks "help", "help SUBCOMMAND" and -h: the usage on stdout
+// (help) and exit 0; an unknown subcommand is a bad command line.
+func TestHelp(t *testing.T) {
+	for _, tt := range []struct {
+		args []string
+		want string
+	}{
+		{[]string{"help"}, "overfact helper"},
+		{[]string{"help", "bounds"}, "Usage: overfact bounds"},
+		{[]string{"help", "lsp"}, "Usage: overfact lsp"},
+		{[]string{"help", "helper"}, "Usage: overfact helper"},
+	} {
+		if r := runIn(t, ".", nil, tt.args...); r.code != 0 || !strings.Contains(r.stdout, tt.want) {
+			t.Errorf("%v: code %d, stdout %q; want 0 and %q", tt.args, r.code, r.stdout, tt.want)
+		}
+	}
+	if r := runIn(t, ".", nil, "-h"); r.code != 0 || !strings.Contains(r.stderr, "Usage:") {
+		t.Errorf("-h: code %d, stderr %q", r.code, r.stderr)
+	}
+	if r := runIn(t, ".", nil, "help", "nosuch"); r.code != 2 || !strings.Contains(r.stderr, "bounds, version") {
+		t.Errorf("help nosuch: code %d, stderr %q; want 2 and the subcommands", r.code, r.stderr)
 	}
 }

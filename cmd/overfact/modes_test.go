@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"encoding/json"
 	"fmt"
 	"os/exec"
 	"strings"
@@ -24,6 +25,34 @@ func TestTestFlag(t *testing.T) {
 	r = runIn(t, dir, isolated, "-test=false", "./...")
 	if r.code != 0 || r.stderr != "" {
 		t.Errorf("-test=false: code %d, stderr %q; want a clean run", r.code, r.stderr)
+	}
+}
+
+// TestJSONOnce checks -json on a package with tests: the finding in
+// line.go belongs to both "line" and "line [line.test]", and is reported
+// once, as go vet reports it; the exit code is 3, as in text mode, and 0
+// when the run is clean.
+func TestJSONOnce(t *testing.T) {
+	dir := writeModule(t, map[string]string{
+		"go.mod":            goMod,
+		"line/line.go":      loopFile,
+		"line/line_test.go": "package line\n\nimport \"testing\"\n\nfunc TestOrders(t *testing.T) { _ = Orders(3) }\n",
+		"clean/clean.go":    "// Package clean has nothing to report.\npackage clean\n",
+	})
+	r := runIn(t, dir, isolated, "-json", "./...")
+	var tree map[string]map[string][]struct{ Posn, Message string }
+	if err := json.Unmarshal([]byte(r.stdout), &tree); err != nil {
+		t.Fatalf("-json output: %v\n%s", err, r.stdout)
+	}
+	n := 0
+	for _, byAnalyzer := range tree {
+		n += len(byAnalyzer["overfact"])
+	}
+	if r.code != 3 || n != 1 {
+		t.Errorf("-json: code %d, %d findings; want 3 and one finding\n%s", r.code, n, r.stdout)
+	}
+	if r := runIn(t, dir, isolated, "-json", "./clean"); r.code != 0 {
+		t.Errorf("-json on a clean package: code %d, want 0\n%s", r.code, r.stderr)
 	}
 }
 

@@ -13,6 +13,7 @@ package driver
 import (
 	"fmt"
 	"io"
+	"os"
 	"path/filepath"
 	"strings"
 
@@ -42,6 +43,10 @@ type Options struct {
 	SourceRoot string // SARIF artifact URIs are relative to it; Dir if empty
 	Rules      []sarif.Rule
 	Version    string // tool version written into the SARIF log
+
+	// Helper, when its Path is set, is the module that fixes import; -fix
+	// makes sure it resolves from the fixed module before writing.
+	Helper Helper
 
 	// Progress, when set, receives "done/total" lines while a run over
 	// more than ProgressMin packages is in progress.
@@ -91,6 +96,10 @@ func (r *run) main(a *analysis.Analyzer, patterns []string) int {
 		return r.code()
 	}
 	r.dir = dir
+	if info, err := os.Stat(dir); err != nil || !info.IsDir() {
+		r.errorf("cannot load packages from %s: no such directory", r.opts.Dir)
+		return r.code()
+	}
 	graph, ok := r.analyze(a, patterns, nil, true)
 	if !ok {
 		return r.code()
@@ -153,6 +162,8 @@ func (r *run) load(a *analysis.Analyzer, patterns []string, overlay map[string][
 }
 
 func (r *run) report(graph *checker.Graph) {
+	// One finding, one report, and the same exit code in every mode.
+	r.findings = dropCopies(graph.Roots) > 0
 	if r.opts.SARIF != "" {
 		r.writeSARIF(graph.Roots)
 	}
@@ -160,9 +171,7 @@ func (r *run) report(graph *checker.Graph) {
 		if err := graph.PrintJSON(r.opts.Stdout); err != nil {
 			r.errorf("%v", err)
 		}
-		return // as with go vet -json, findings alone do not fail the run
+		return
 	}
-	if n := writeText(r.opts.Stderr, r.dir, graph.Roots); n > 0 {
-		r.findings = true
-	}
+	writeText(r.opts.Stderr, r.dir, graph.Roots)
 }

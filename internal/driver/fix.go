@@ -190,7 +190,9 @@ func (p *fixPlan) check(e edit) (dup, clash bool) {
 // inserted text takes (textedit.Apply).
 func moved(off int, edits []edit, eol string) int {
 	sorted := append([]edit(nil), edits...)
-	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].Start < sorted[j].Start })
+	sort.SliceStable(sorted, func(i, j int) bool {
+		return sorted[i].Start < sorted[j].Start || sorted[i].Start == sorted[j].Start && sorted[i].End < sorted[j].End
+	})
 	delta := 0
 	for _, e := range sorted {
 		n := len(textedit.WithLineEnding(e.Text, eol))

@@ -27,6 +27,9 @@ const maxHeldBackShown = 10
 // fix applies (or, with Diff, prints) the fixes of graph's findings, in
 // rounds, then writes every changed file, or none.
 func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph) {
+	if !r.ensureHelper(graph.Roots) {
+		return
+	}
 	contents := make(map[string][]byte)  // edited text of each changed file
 	originals := make(map[string][]byte) // its analysed text
 	done := make(map[finding]bool)       // findings whose fix was applied

@@ -176,3 +176,25 @@ func (r *run) restore(written []target) {
 		}
 	}
 }
+
+// writeFile replaces one file that is not a source the analysis read (a
+// go.mod) the way writeFixed replaces sources: through a temporary file
+// beside it, with its mode and owner, and through a symbolic link.
+func writeFile(name string, content []byte) error {
+	path, err := filepath.EvalSymlinks(name)
+	if err != nil {
+		return err
+	}
+	t := target{change: change{name: name}, path: path}
+	if t.info, err = os.Stat(path); err != nil {
+		return err
+	}
+	if err := t.stage(content); err != nil {
+		return err
+	}
+	if err := os.Rename(t.tmp, path); err != nil {
+		os.Remove(t.tmp)
+		return fmt.Errorf("cannot write %s: %v", name, err)
+	}
+	return nil
+}

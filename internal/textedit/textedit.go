@@ -40,7 +40,11 @@ func (e Edit) Clashes(f Edit) bool {
 // LineEnding), so that a fix never leaves a file with mixed endings.
 func Apply(src []byte, edits []Edit) ([]byte, error) {
 	sorted := append([]Edit(nil), edits...)
-	sort.SliceStable(sorted, func(i, j int) bool { return sorted[i].Start < sorted[j].Start })
+	// At one position, an insertion comes before a replacement that
+	// starts there (an import added before the declaration it edits).
+	sort.SliceStable(sorted, func(i, j int) bool {
+		return sorted[i].Start < sorted[j].Start || sorted[i].Start == sorted[j].Start && sorted[i].End < sorted[j].End
+	})
 	eol := LineEnding(src)
 	var out bytes.Buffer
 	out.Grow(len(src))
