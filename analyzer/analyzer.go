@@ -63,7 +63,11 @@ type reportKey struct {
 type fileInfo struct {
 	file      *ast.File
 	generated bool
-	dirs      *directives
+	// cgo marks cgo's rewrite of a user's file: its findings map back to
+	// the user's file through //line comments, but its text is not that
+	// file's, so no edit computed on it may be offered.
+	cgo  bool
+	dirs *directives
 }
 
 func run(pass *analysis.Pass) (any, error) {
@@ -81,7 +85,8 @@ func run(pass *analysis.Pass) (any, error) {
 		if tf == nil {
 			continue
 		}
-		fi := &fileInfo{file: f, generated: ast.IsGenerated(f)}
+		fi := &fileInfo{file: f}
+		fi.generated, fi.cgo = judgeGenerated(pass.Fset, f)
 		fi.dirs = c.parseDirectives(f, fi.generated)
 		c.files[tf] = fi
 	}

@@ -45,7 +45,7 @@ func (fc *fnCtx) report(f finding) {
 		Message:  f.msg,
 		Related:  f.related,
 	}
-	if f.match != nil && !fc.noFix {
+	if f.match != nil && !fc.noFix && !fi.cgo {
 		f.match.File = fi.file
 		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
 	}
