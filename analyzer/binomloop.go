@@ -56,7 +56,7 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	if kExpr != nil {
 		m.Args = []ast.Expr{nExpr, kExpr}
 	}
-	fc.report(finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
+	fc.reportLoop(al, finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
 }
 
 // binomialN finds n in the factor: the variable with coefficient +1

@@ -199,7 +199,7 @@ func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
 		definite = al.topOff >= first
 	}
 	m := fc.loopMatch(al, t)
-	fc.report(finding{
+	fc.reportLoop(al, finding{
 		node:     al.shape.stmt,
 		cat:      catLoop,
 		definite: definite,

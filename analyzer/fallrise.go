@@ -20,7 +20,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		// Only the joint reading applies: no expression counts the
 		// factors for the bounds of the top and the count to judge.
 		if msg, definite, _ := fc.fallingAffine(al, t); msg != "" {
-			fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
+			fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
 		}
 		return
 	}
@@ -48,7 +48,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	} else if n, k := fc.fallingSpan(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
 	}
-	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
 }
 
 // fallingAffine judges a falling factorial whose largest factor and
@@ -172,7 +172,7 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d%s%s", kName, src(al.x), t.typeName(), verb(t), kName, first, at, clause)
 	m := fc.loopMatch(al, t)
 	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
-	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
+	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
 }
 
 // bounded reports whether iv is non-empty with finite ends.

@@ -87,6 +87,16 @@ var diffCases = []diffCase{
 	{pkg: "fixterm", fn: "FillMoment", loops: []string{"k := 0; k <= 338; k += 2"}, args: "k, 0.5", typ: "float64", ref: refFillMoment, noBreak: true},
 	{pkg: "fixterm", fn: "FillDensity", loops: []string{"a := 1; a <= 400; a += 13", "b := 1; b <= 400; b += 17"}, args: "float64(a), float64(b), 0.5", typ: "float64", ref: refFillDensity},
 	{pkg: "fixterm", fn: "Drift", loops: []string{"b := 20; b <= 200; b += 30", "k := 0; k <= 150; k += 5"}, args: "k, float64(b), 1.5", typ: "float64", ref: refDrift},
+	// Loops that leave early: nothing but Past is fixed, and every
+	// function keeps its values (Labeled(25) is 24, not a panic).
+	{pkg: "fixexit", fn: "Labeled", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Jumped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Skipped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(5), noBreak: true},
+	{pkg: "fixexit", fn: "Capped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refCapped, noBreak: true},
+	{pkg: "fixexit", fn: "Until", loops: []string{"n := 0; n <= 30; n++"}, args: "n, 5", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Thirty", loops: []string{"s := 1; s <= 21; s++"}, args: "s", typ: "int", ref: refThirty, noBreak: true},
+	{pkg: "fixexit", fn: "OddCrates", loops: []string{"n := 0; n <= 34; n++"}, args: "n", typ: "int", ref: refOddProduct, noBreak: true},
+	{pkg: "fixexit", fn: "Past", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorial, guard: true},
 	{pkg: "fixloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},

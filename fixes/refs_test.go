@@ -168,3 +168,36 @@ func refDrift(x []float64) *big.Float {
 	k, b, g := int64(x[0]), int64(x[1]), x[2]
 	return mul(quo(bf(factorialBig(k+b-1)), bf(factorialBig(b-1))), powBig(g, k))
 }
+
+// refFactorialTo returns the reference min(n, m)!: a product loop over
+// 1..n that some exit stops after its m-th factor (math/big).
+func refFactorialTo(m int64) func([]float64) *big.Float {
+	return func(x []float64) *big.Float { return bf(factorialBig(min(int64(x[0]), m))) }
+}
+
+// refThirty is the product 1·2·…·min(30, stop−1) of a loop over 1..30
+// that returns on reaching stop, for stop ≥ 1 (math/big).
+func refThirty(x []float64) *big.Float { return bf(factorialBig(min(30, int64(x[0])-1))) }
+
+// refCapped is the product 1·2·…·i over i ≤ n, stopped as soon as it
+// passes 1000 (math/big).
+func refCapped(x []float64) *big.Float {
+	r := big.NewInt(1)
+	for i := int64(1); i <= int64(x[0]); i++ {
+		r.Mul(r, big.NewInt(i))
+		if r.Cmp(big.NewInt(1000)) > 0 {
+			break
+		}
+	}
+	return bf(r)
+}
+
+// refOddProduct is the product of the odd numbers up to n: n!! for odd n,
+// (n−1)!! for even n (OEIS A006882).
+func refOddProduct(x []float64) *big.Float {
+	n := int64(x[0])
+	if n%2 == 0 {
+		n--
+	}
+	return refDoubleFactorial([]float64{float64(n)})
+}
