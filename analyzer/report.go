@@ -47,7 +47,7 @@ func (fc *fnCtx) report(f finding) {
 	}
 	if f.match != nil && !fc.noFix && !fi.cgo {
 		f.match.File = fi.file
-		d.SuggestedFixes = fixes.Suggest(c.pass, *f.match)
+		d.SuggestedFixes = c.physicalOnly(fixes.Suggest(c.pass, *f.match))
 	}
 	c.pass.Report(d)
 }
@@ -70,4 +70,21 @@ func (c *checker) relatedDef(name string, pos token.Pos) []analysis.RelatedInfor
 		return nil
 	}
 	return []analysis.RelatedInformation{{Pos: pos, Message: name + " is defined here"}}
+}
+
+// physicalOnly drops the fixes when an edit lies where a //line
+// directive maps the file to another name: drivers that place an edit
+// by its mapped file name and its offset in the compiled file would
+// write into the wrong file.
+func (c *checker) physicalOnly(fs []analysis.SuggestedFix) []analysis.SuggestedFix {
+	for _, f := range fs {
+		for _, e := range f.TextEdits {
+			for _, p := range []token.Pos{e.Pos, e.End} {
+				if p.IsValid() && c.pass.Fset.PositionFor(p, true).Filename != c.pass.Fset.PositionFor(p, false).Filename {
+					return nil
+				}
+			}
+		}
+	}
+	return fs
 }
