@@ -56,6 +56,7 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	if kExpr != nil {
 		m.Args = []ast.Expr{nExpr, kExpr}
 	}
+	fc.noteCountSign(m)
 	fc.reportLoop(al, finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
 }
 
@@ -103,4 +104,14 @@ func (fc *fnCtx) binomialLoopSafe(t numType, n, k ranges.Interval) bool {
 		}
 	}
 	return true
+}
+
+// noteCountSign records in a loop match whether its number of factors,
+// Args[1], is never negative, so that the rewrite need not keep the
+// loop's result for k < 0 (see fixes.Match.CountNonNeg).
+func (fc *fnCtx) noteCountSign(m *fixes.Match) {
+	if len(m.Args) == 2 {
+		k := fc.rangeOf(m.Args[1])
+		m.CountNonNeg = !k.IsEmpty() && k.Lo >= 0
+	}
 }

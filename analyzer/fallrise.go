@@ -48,6 +48,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	} else if n, k := fc.fallingSpan(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
 	}
+	fc.noteCountSign(m)
 	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
 }
 

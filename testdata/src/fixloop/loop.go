@@ -12,6 +12,19 @@ func Ways(n, k int) int { // want Ways:"binomial of parameter 0"
 	return b
 }
 
+// WaysChecked refuses a negative k first, so the rewrite needs no
+// condition of its own.
+func WaysChecked(n, k int) int { // want WaysChecked:"binomial of parameter 0"
+	if k < 0 {
+		return 0
+	}
+	b := 1
+	for i := 1; i <= k; i++ { // want "multiplicative binomial loop"
+		b = b * (n - k + i) / i
+	}
+	return b
+}
+
 // WaysU counts in unsigned arithmetic.
 func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
 	b := uint64(1)
