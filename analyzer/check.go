@@ -198,12 +198,17 @@ func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
 	if al.top == nil {
 		definite = al.topOff >= first
 	}
+	msg := factorialLimitText(al.kind, name, al.topOff, t) + clause
+	if al.top == nil && al.shape.bigEnd != nil {
+		// The largest factor is a constant beyond int64: say it as written.
+		msg = factorialConstText(al.kind, src(al.shape.bigEnd), t)
+	}
 	m := fc.loopMatch(al, t)
 	fc.reportLoop(al, finding{
 		node:     al.shape.stmt,
 		cat:      catLoop,
 		definite: definite,
-		msg:      factorialLimitText(al.kind, name, al.topOff, t) + clause,
+		msg:      msg,
 		match:    m,
 	})
 }

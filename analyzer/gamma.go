@@ -29,6 +29,9 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 	if v, ok := fc.floatConst(e); ok {
 		return affine{b: v}, true
 	}
+	if v, ok := fc.specialConst(e); ok {
+		return affine{b: v}, true
+	}
 	switch x := e.(type) {
 	case *ast.CallExpr:
 		if len(x.Args) == 1 && fc.isConversion(x) {
@@ -192,7 +195,11 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 			}
 		}
 	}
-	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
+	although := ""
+	if fc.gammaRatioFinite(p, m, worst.first) {
+		although = ", although the result itself is finite"
+	}
+	msg := fmt.Sprintf("%s in float64: %s%s%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), although, worst.clause())
 	if n := gammaCount(p.num); n >= 2 && !worst.certain {
 		// Γ(a)·Γ(b) passes the largest float64 once ln Γ(a) + ln Γ(b)
 		// does, which can be well before either argument reaches the

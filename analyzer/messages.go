@@ -66,6 +66,16 @@ func factorialLimitText(kind facKind, name string, off int64, t numType) string 
 	return fmt.Sprintf("%s of %s in %s %s for %s ≥ %d (%s)", what, plus(name, off), t.typeName(), verb(t), name, first-off, largestFits(kind, t))
 }
 
+// factorialConstText describes a factorial whose largest factor is the
+// constant written as text, up to which the loop runs.
+func factorialConstText(kind facKind, text string, t numType) string {
+	what := "factorial"
+	if kind == kindDouble {
+		what = "double factorial"
+	}
+	return fmt.Sprintf("%s up to %s in %s %s (%s)", what, text, t.typeName(), verb(t), largestFits(kind, t))
+}
+
 // largestFits names the largest value of the kind that fits t:
 // "20! ≈ 2.43e18 is the largest that fits".
 func largestFits(kind facKind, t numType) string {
