@@ -18,7 +18,6 @@ package main
 
 import (
 	"os"
-	"strings"
 
 	"golang.org/x/tools/go/analysis/unitchecker"
 
@@ -48,7 +47,7 @@ func isUnitProtocol(args []string) bool {
 			return true
 		}
 	}
-	return strings.HasSuffix(args[len(args)-1], ".cfg")
+	return isVetConfig(args[len(args)-1])
 }
 
 // dispatch runs a subcommand or the standalone analysis and returns the
