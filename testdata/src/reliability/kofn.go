@@ -7,7 +7,7 @@ import "math"
 // Choose returns C(n, k) with the multiplicative formula.
 func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks from 62`
 	b := int64(1)
-	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop in int64: the product b\*\(n - k \+ i\) wraps before the division for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
+	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop in int64: the product b \* \(n - k \+ i\) wraps before the division for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
 		b = b * (n - k + i) / i
 	}
 	return b
@@ -16,7 +16,7 @@ func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks 
 // chooseSteps is the same loop in two statements, counting from n down.
 func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, breaks from 62`
 	b := 1
-	for i := 0; i < k; i++ { // want `multiplicative binomial loop in int: the product b\*\(n - i\) wraps`
+	for i := 0; i < k; i++ { // want `multiplicative binomial loop in int: the product b \* \(n - i\) wraps`
 		b *= n - i
 		b /= i + 1
 	}
@@ -58,7 +58,7 @@ func ChooseFloat(n, k int) float64 {
 // ChooseU counts pump subsets in uint64.
 func ChooseU(n, k uint64) uint64 { // want ChooseU:`binomial of parameter 0, breaks from 63`
 	b := uint64(1)
-	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b\*\(n - i\) wraps before the division for n ≥ 63`
+	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b \* \(n - i\) wraps before the division for n ≥ 63`
 		b = b * (n - i) / (i + 1)
 	}
 	return b
