@@ -3,9 +3,9 @@ package analyzer
 import (
 	"go/ast"
 	"go/constant"
-	"math"
 	"go/token"
 	"go/types"
+	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
