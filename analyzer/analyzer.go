@@ -45,6 +45,11 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// sitesDecided holds the unexported factorial functions whose every
+	// call in the package is either always safe or always past the first
+	// bad value, with one past it: the calls are the findings, and the
+	// definition has nothing to add (see callSiteRange).
+	sitesDecided map[*types.Func]bool
 	// tables holds the package's unchanging tables (ranges.PackageTables),
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit

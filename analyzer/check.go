@@ -184,6 +184,9 @@ func (fc *fnCtx) topRange(al *accLoop) ranges.Interval {
 }
 
 func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
+	if fc.decidedAtCalls(al.shape.stmt) {
+		return
+	}
 	first := firstBadOf(al.kind, t)
 	if al.top == nil && al.topOff < first {
 		return // a constant bound below the threshold
@@ -242,6 +245,9 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	// The analysis of this pass has its own ranges; ff.recN is the same
 	// node in both, so asking for its range here is sound.
+	if fc.decidedAtCalls(ff.rec) {
+		return
+	}
 	first := firstBadOf(ff.kind, ff.result)
 	r := fc.rangeOf(ff.recN)
 	if r.IsEmpty() || r.Hi < first {
@@ -280,3 +286,20 @@ func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
 func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall }
+
+// decidedAtCalls reports whether n is the product loop or the recursion
+// of this function's factorial, and every call of the function in the
+// package is either safe or certainly past its first bad value: the
+// calls past it are the findings (fact(25)), one each, and a finding at
+// the definition would only repeat them with a range the calls gave it.
+func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+		return false
+	}
+	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
+}

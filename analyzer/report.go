@@ -64,10 +64,17 @@ func (c *checker) reportDirective(pos, end token.Pos, msg string) {
 	})
 }
 
-// relatedDef points at the definition of a factorial-valued function.
+// relatedDef points at the definition of a factorial-valued function,
+// at the start of the line that declares it. The name's own column is
+// not always known: under go vet a function of another package comes
+// from export data, which keeps only its line, so the line start is the
+// position every driver can give alike.
 func (c *checker) relatedDef(name string, pos token.Pos) []analysis.RelatedInformation {
 	if !pos.IsValid() {
 		return nil
+	}
+	if f := c.pass.Fset.File(pos); f != nil {
+		pos = f.LineStart(f.PositionFor(pos, false).Line)
 	}
 	return []analysis.RelatedInformation{{Pos: pos, Message: name + " is defined here"}}
 }
