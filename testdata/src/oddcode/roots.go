@@ -64,3 +64,22 @@ func mfactUse(k int) int { // want mfactUse:"factorial of parameter 0, breaks fr
 	}
 	return mfact(k)
 }
+
+// gfact is the factorial teams and orders use.
+func gfact(n int) int { // want gfact:"factorial of parameter 0"
+	r := 1
+	for i := 2; i <= n; i++ { // want `^factorial of n in int wraps for n ≥ 21`
+		r *= i
+	}
+	return r
+}
+
+// teams names its own variables m and j: the message speaks of them.
+func teams(m, j int) int { // want teams:"binomial of parameter 0, breaks from 21"
+	return gfact(m) / (gfact(j) * gfact(m-j)) // want `^binomial coefficient as a ratio of factorials in int: the numerator m! wraps for m ≥ 21, although C\(m, m/2\) itself fits up to m = 66; m is not bounded here$`
+}
+
+// orders names its own variables too.
+func orders(m, j int) int {
+	return gfact(m) / gfact(m-j) // want `^permutation count m!/\(m - j\)! as a ratio of factorials in int: the numerator m! wraps for m ≥ 21, although the product of the top j factors may still fit; m is not bounded here$`
+}

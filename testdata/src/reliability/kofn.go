@@ -28,7 +28,7 @@ func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, b
 func Availability(n, k int, p float64) float64 {
 	sum := 0.0
 	for i := k; i <= n; i++ {
-		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n,k\)·p\^k·\(1−p\)\^\(n−k\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
+		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n, i\)·p\^i·\(1−p\)\^\(n−i\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
 	}
 	return sum
 }
