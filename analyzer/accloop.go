@@ -53,6 +53,11 @@ type accLoop struct {
 	// nil and only span describes them.
 	span *linear
 	x    ast.Expr // rising: the base x
+	// exits are where the loop can end before its test stops it, or
+	// skip its update (see leavesEarly); early is set while any of them
+	// may cut the product short.
+	exits []ast.Stmt
+	early bool
 }
 
 // accLoopOf recognises a product loop; before are the statements that
@@ -90,6 +95,16 @@ func (fc *fnCtx) accLoopOf(s ast.Stmt, before [][]ast.Stmt) *accLoop {
 	}
 	if fc.assignsElsewhere(sh.body, found) || fc.closureAssigns(found.acc) {
 		return nil
+	}
+	found.exits = fc.leavesEarly(found)
+	found.early = len(found.exits) > 0
+	if found.early && (found.kind == kindFactorial || found.kind == kindDouble) && found.div == nil {
+		if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(found.update.(*ast.AssignStmt).Lhs[0])); ok {
+			found.early = !fc.exitsPast(found, firstBadOf(found.kind, t))
+		}
+	}
+	if found.early && found.kind == kindPower {
+		return nil // not x^k: nothing to judge a term by
 	}
 	return found
 }

@@ -48,6 +48,11 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// sitesDecided holds the unexported factorial functions whose every
+	// call in the package is either always safe or always past the first
+	// bad value, with one past it: the calls are the findings, and the
+	// definition has nothing to add (see callSiteRange).
+	sitesDecided map[*types.Func]bool
 	// tables holds the package's unchanging tables (ranges.PackageTables),
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
@@ -70,7 +75,11 @@ type reportKey struct {
 type fileInfo struct {
 	file      *ast.File
 	generated bool
-	dirs      *directives
+	// cgo marks cgo's rewrite of a user's file: its findings map back to
+	// the user's file through //line comments, but its text is not that
+	// file's, so no edit computed on it may be offered.
+	cgo  bool
+	dirs *directives
 }
 
 func run(pass *analysis.Pass) (any, error) {
@@ -89,7 +98,8 @@ func run(pass *analysis.Pass) (any, error) {
 		if tf == nil {
 			continue
 		}
-		fi := &fileInfo{file: f, generated: ast.IsGenerated(f)}
+		fi := &fileInfo{file: f}
+		fi.generated, fi.cgo = judgeGenerated(pass.Fset, f)
 		fi.dirs = c.parseDirectives(f, fi.generated)
 		c.files[tf] = fi
 	}

@@ -76,7 +76,7 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 func (fc *fnCtx) binomialLoopFunc(decl *ast.FuncDecl, res numType) *FactorialFact {
 	var fact *FactorialFact
 	fc.eachLoop(decl.Body, func(al *accLoop) {
-		if fact != nil || al.div == nil || al.kind != kindFalling || !fc.returns(decl.Body, al.acc) {
+		if fact != nil || al.div == nil || al.early || al.kind != kindFalling || !fc.returns(decl.Body, al.acc) {
 			return
 		}
 		nExpr := fc.binomialN(al)

@@ -3,6 +3,7 @@ package analyzer
 import (
 	"fmt"
 	"go/ast"
+	"go/token"
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/ranges"
@@ -38,8 +39,9 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	name := src(nExpr)
 	clause, _ := verdict(name, n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
-	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s*(%s) %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		t.typeName(), al.acc.Name(), src(unparen(al.mult)), verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
+	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: unparen(al.mult)}})
+	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		t.typeName(), product, verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
 	kExpr := al.count
 	if al.coff != 0 {
 		kExpr = nil
@@ -56,7 +58,8 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	if kExpr != nil {
 		m.Args = []ast.Expr{nExpr, kExpr}
 	}
-	fc.report(finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
+	fc.noteCountSign(m)
+	fc.reportLoop(al, finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
 }
 
 // binomialN finds n in the factor: the variable with coefficient +1
@@ -103,4 +106,14 @@ func (fc *fnCtx) binomialLoopSafe(t numType, n, k ranges.Interval) bool {
 		}
 	}
 	return true
+}
+
+// noteCountSign records in a loop match whether its number of factors,
+// Args[1], is never negative, so that the rewrite need not keep the
+// loop's result for k < 0 (see fixes.Match.CountNonNeg).
+func (fc *fnCtx) noteCountSign(m *fixes.Match) {
+	if len(m.Args) == 2 {
+		k := fc.rangeOf(m.Args[1])
+		m.CountNonNeg = !k.IsEmpty() && k.Lo >= 0
+	}
 }

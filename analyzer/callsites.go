@@ -6,6 +6,7 @@ import (
 	"go/token"
 	"go/types"
 	"go/version"
+	"math"
 	"os"
 	"path/filepath"
 	"runtime"
@@ -65,29 +66,64 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 // callSiteRange joins the ranges of the argument n over every call of ff
 // outside ff itself. It reports false when the function is also used as
 // a value (then it may be called from anywhere) or never called.
+//
+// A recursive function is also entered from its own calls. Those that
+// pass n − c (c ≥ 0) only go down from the outside calls, so the range
+// keeps their top and loses its bottom (fact(25) runs fact(24), …); any
+// other self-call gives up. It records in c.sitesDecided whether every
+// outside call is either always safe or always past the first bad value
+// (then reported at the call itself).
 func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 	calls := c.callsOf(ff.obj)
 	if calls == nil {
 		return ranges.Interval{}, false
 	}
 	join := ranges.Empty()
-	any := false
+	any, self, decided, past := false, false, true, false
+	param := ff.obj.Type().(*types.Signature).Params().At(ff.param)
+	first := ff.fact.FirstBad
 	for _, call := range calls {
+		if ff.param >= len(call.Args) {
+			return ranges.Interval{}, false
+		}
 		if ff.decl.Pos() <= call.Pos() && call.End() <= ff.decl.End() {
+			if !c.goesDown(ff.decl, call.Args[ff.param], param) {
+				return ranges.Interval{}, false
+			}
+			self = true
 			continue
 		}
 		caller := c.enclosingFunc(call)
-		if caller == nil || ff.param >= len(call.Args) {
+		if caller == nil {
 			return ranges.Interval{}, false
 		}
 		own := c.ownCtx(caller)
-		join = join.Join(own.rangeOf(call.Args[ff.param]))
+		r := own.rangeOf(call.Args[ff.param])
+		join = join.Join(r)
 		any = true
+		if !r.IsEmpty() {
+			past = past || r.Lo >= first
+			decided = decided && (r.Hi < first || r.Lo >= first)
+		}
 		if join.IsTop() {
 			break
 		}
 	}
+	if self && any && !join.IsEmpty() {
+		join = ranges.Interval{Lo: math.MinInt64, Hi: join.Hi}
+	}
+	if c.sitesDecided == nil {
+		c.sitesDecided = make(map[*types.Func]bool)
+	}
+	c.sitesDecided[ff.obj] = any && decided && past
 	return join, any
+}
+
+// goesDown reports whether arg, an argument of a call of decl inside
+// decl, is its parameter p minus a constant c ≥ 0.
+func (c *checker) goesDown(decl *ast.FuncDecl, arg ast.Expr, p types.Object) bool {
+	lin, ok := c.ownCtx(decl).linear(arg)
+	return ok && len(lin.terms) == 1 && lin.terms[0].obj == p && lin.terms[0].coef == 1 && lin.c <= 0
 }
 
 // callsOf returns the calls of fn in this package, or nil when fn is

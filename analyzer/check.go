@@ -187,6 +187,9 @@ func (fc *fnCtx) topRange(al *accLoop) ranges.Interval {
 }
 
 func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
+	if fc.decidedAtCalls(al.shape.stmt) {
+		return
+	}
 	first := firstBadOf(al.kind, t)
 	if al.top == nil && al.topOff < first {
 		return // a constant bound below the threshold
@@ -201,12 +204,17 @@ func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
 	if al.top == nil {
 		definite = al.topOff >= first
 	}
+	msg := factorialLimitText(al.kind, name, al.topOff, t) + clause
+	if al.top == nil && al.shape.bigEnd != nil {
+		// The largest factor is a constant beyond int64: say it as written.
+		msg = factorialConstText(al.kind, src(al.shape.bigEnd), t)
+	}
 	m := fc.loopMatch(al, t)
-	fc.report(finding{
+	fc.reportLoop(al, finding{
 		node:     al.shape.stmt,
 		cat:      catLoop,
 		definite: definite,
-		msg:      factorialLimitText(al.kind, name, al.topOff, t) + clause,
+		msg:      msg,
 		match:    m,
 	})
 }
@@ -260,6 +268,9 @@ func (fc *fnCtx) returnsProduct(al *accLoop) bool {
 func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	// The analysis of this pass has its own ranges; ff.recN is the same
 	// node in both, so asking for its range here is sound.
+	if fc.decidedAtCalls(ff.rec) {
+		return
+	}
 	first := firstBadOf(ff.kind, ff.result)
 	r := fc.rangeOf(ff.recN)
 	if r.IsEmpty() || r.Hi < first {
@@ -298,3 +309,20 @@ func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
 func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall }
+
+// decidedAtCalls reports whether n is the product loop or the recursion
+// of this function's factorial, and every call of the function in the
+// package is either safe or certainly past its first bad value: the
+// calls past it are the findings (fact(25)), one each, and a finding at
+// the definition would only repeat them with a range the calls gave it.
+func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+		return false
+	}
+	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
+}

@@ -20,7 +20,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		// Only the joint reading applies: no expression counts the
 		// factors for the bounds of the top and the count to judge.
 		if msg, definite, _ := fc.fallingAffine(al, t); msg != "" {
-			fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
+			fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
 		}
 		return
 	}
@@ -37,7 +37,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	}
 	msg, definite, judged := fc.fallingAffine(al, t)
 	if !judged {
-		msg, definite = fallingText(al, t, n, k)
+		msg, definite = fallingText(al, t, n, k, src(fc.fallingTop(al)))
 	}
 	if msg == "" {
 		return
@@ -48,7 +48,8 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	} else if n, k := fc.fallingSpan(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
 	}
-	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+	fc.noteCountSign(m)
+	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
 }
 
 // fallingAffine judges a falling factorial whose largest factor and
@@ -118,7 +119,10 @@ func affineText(name string, a, b int64) string {
 
 // fallingText is the message of a falling-factorial loop whose largest
 // factor n and number of factors k are judged by their own ranges.
-func fallingText(al *accLoop, t numType, n, k ranges.Interval) (string, bool) {
+//
+// nName is the largest factor as the code writes it (n of n·(n−1)·…), or
+// "" when no single expression names it.
+func fallingText(al *accLoop, t numType, n, k ranges.Interval, nName string) (string, bool) {
 	kName := plus(src(al.count), al.coff)
 	var msg string
 	switch {
@@ -126,13 +130,19 @@ func fallingText(al *accLoop, t numType, n, k ranges.Interval) (string, bool) {
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s for a largest factor ≥ %d", kName, t.typeName(), verb(t), thresholds.FallingFirstBad(t.Num, k.Hi))
 	case finite(k) && k.Hi > 0:
 		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: with %s = %d, for a largest factor ≥ %d", kName, t.typeName(), verb(t), kName, k.Hi, thresholds.FallingFirstBad(t.Num, k.Hi))
+	case nName != "":
+		// Neither end is bounded: the product is worst when it runs
+		// all the way down, where it is n! itself.
+		msg = fmt.Sprintf("falling factorial of %s factors from %s down in %s %s: when %s = %s it is %s!, which %s for %s ≥ %d", kName, nName, t.typeName(), verb(t), kName, nName, nName, verb(t), nName, thresholds.Factorial(t.Num).FirstBad)
 	default:
-		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: run down to 1 it is a factorial, which %s from %d!", kName, t.typeName(), verb(t), verb(t), thresholds.Factorial(t.Num).FirstBad)
+		msg = fmt.Sprintf("falling factorial of %s factors in %s %s: when its factors run down to 1 it is a factorial, which %s from %d!", kName, t.typeName(), verb(t), verb(t), thresholds.Factorial(t.Num).FirstBad)
 	}
 	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, k.Lo)
 	switch {
 	case definite:
 		msg += fmt.Sprintf("; the product always exceeds %s here", t.Name)
+	case !finite(n) && nName != "":
+		msg += fmt.Sprintf("; %s is not bounded here", nName)
 	case !finite(n):
 		msg += "; the largest factor is not bounded here"
 	case !finite(k):
@@ -172,7 +182,7 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d%s%s", kName, src(al.x), t.typeName(), verb(t), kName, first, at, clause)
 	m := fc.loopMatch(al, t)
 	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
-	fc.report(finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
+	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
 }
 
 // bounded reports whether iv is non-empty with finite ends.
@@ -218,4 +228,18 @@ func (fc *fnCtx) fallingSpan(al *accLoop) (ast.Expr, ast.Expr) {
 		return nil, nil
 	}
 	return al.top, al.count
+}
+
+// fallingTop returns the expression that names a falling factorial's
+// largest factor: n of "p *= n - i" counting i up from 0, or the end n of
+// a loop "for i := n - k + 1; i <= n; i++ { p *= i }". It is nil when no
+// single expression does.
+func (fc *fnCtx) fallingTop(al *accLoop) ast.Expr {
+	if n := fc.fallingBase(al); n != nil {
+		return n
+	}
+	if al.top != nil && al.topOff == 0 {
+		return al.top
+	}
+	return nil
 }

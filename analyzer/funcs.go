@@ -164,7 +164,7 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 	var ff *facFunc
 	fc.eachLoop(decl.Body, func(al *accLoop) {
-		if ff != nil || al.div != nil || !fc.returns(decl.Body, al.acc) {
+		if ff != nil || al.div != nil || al.early || !fc.returns(decl.Body, al.acc) {
 			return
 		}
 		resT := self.Type().(*types.Signature).Results().At(0).Type()

@@ -29,6 +29,9 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 	if v, ok := fc.floatConst(e); ok {
 		return affine{b: v}, true
 	}
+	if v, ok := fc.specialConst(e); ok {
+		return affine{b: v}, true
+	}
 	switch x := e.(type) {
 	case *ast.CallExpr:
 		if len(x.Args) == 1 && fc.isConversion(x) {
@@ -195,7 +198,11 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 			}
 		}
 	}
-	msg := fmt.Sprintf("%s in float64: %s, although the %s itself is finite%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), "result", worst.clause())
+	although := ""
+	if fc.gammaRatioFinite(p, m, worst.first) {
+		although = ", although the result itself is finite"
+	}
+	msg := fmt.Sprintf("%s in float64: %s%s%s", what, worst.describe("math.Gamma("+src(worstCall.Args[0])+")"), although, worst.clause())
 	if n := gammaCount(p.num); n >= 2 && !worst.certain {
 		// Γ(a)·Γ(b) passes the largest float64 once ln Γ(a) + ln Γ(b)
 		// does, which can be well before either argument reaches the
@@ -203,8 +210,10 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		// is where the first Γ alone breaks, not the first bad input.
 		msg += fmt.Sprintf("; the product of the %d Γ values above the line can overflow first, before any one of them is +Inf", n)
 	}
+	at := fc.valueHolding(root, worstCall)
 	fc.c.gammaLines[fc.c.lineOf(root)] = true
-	fc.report(finding{node: root, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
+	fc.c.gammaLines[fc.c.lineOf(at)] = true
+	fc.report(finding{node: at, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
 }
 
 // gammaCount counts the math.Gamma factors among fs.
@@ -327,12 +336,38 @@ func (fc *fnCtx) gammaEscapes(call *ast.CallExpr) bool {
 	if root == nil {
 		return true
 	}
+	return fc.meetsArith(root, call, fc.parentMap(), make(map[*types.Var]bool))
+}
+
+// parentMap returns the parents of the nodes of the function body, built
+// once per function: a line of several Gamma calls asks for each of them.
+func (fc *fnCtx) parentMap() map[ast.Node]ast.Node {
 	if fc.parents == nil {
-		// Built once per function: a line of several Gamma calls asks
-		// for each of them.
-		fc.parents = parentsIn(root)
+		fc.parents = parentsIn(funcBody(fc.node))
 	}
-	return fc.meetsArith(root, call, fc.parents, make(map[*types.Var]bool))
+	return fc.parents
+}
+
+// valueHolding returns where a finding about the product at root is
+// reported: at root, unless the call that breaks lies outside it, in the
+// value of a local that root uses (c := Γ(a)/Γ(b); return c * t). Then
+// it is that value, the whole expression assigned, so that the finding
+// sits where the arithmetic is written and an allow directive on that
+// line reaches it.
+func (fc *fnCtx) valueHolding(root ast.Expr, call ast.Expr) ast.Expr {
+	if root.Pos() <= call.Pos() && call.End() <= root.End() || funcBody(fc.node) == nil {
+		return root
+	}
+	parents := fc.parentMap()
+	top := call
+	for n := parents[call]; n != nil; n = parents[n] {
+		e, ok := n.(ast.Expr)
+		if !ok {
+			break
+		}
+		top = e
+	}
+	return top
 }
 
 // meetsArith reports whether the value of e meets arithmetic, following

@@ -2,8 +2,10 @@ package analyzer
 
 import (
 	"go/ast"
+	"go/constant"
 	"go/token"
 	"go/types"
+	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -22,6 +24,9 @@ type loopShape struct {
 	last      ast.Expr
 	lastOff   int64
 	whileLike bool // the variable is counted down in the body
+	// bigEnd is an end that is a constant beyond int64 (math.MaxUint64-1),
+	// held as the nearest int64 in its offset: messages show it as written.
+	bigEnd ast.Expr
 }
 
 // shapeOf recognises the counting forms of a loop, or returns nil.
@@ -77,6 +82,7 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 		return nil
 	}
 	sh.last, sh.lastOff = fc.end(bound)
+	fc.noteBigEnd(sh, init.Rhs[0], bound)
 	sh.lastOff += adj
 	return sh
 }
@@ -102,6 +108,7 @@ func (fc *fnCtx) whileShape(s *ast.ForStmt) *loopShape {
 	}
 	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: step, first: cond.X, whileLike: true}
 	sh.last, sh.lastOff = fc.end(cond.Y)
+	fc.noteBigEnd(sh, cond.Y)
 	if cond.Op == token.GTR {
 		sh.lastOff++
 	}
@@ -122,14 +129,25 @@ func (fc *fnCtx) rangeShape(s *ast.RangeStmt) *loopShape {
 	}
 	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: 1}
 	sh.last, sh.lastOff = fc.end(s.X)
+	fc.noteBigEnd(sh, s.X)
 	sh.lastOff--
 	return sh
 }
 
-// end splits a loop end into an expression and a constant offset.
+// end splits a loop end into an expression and a constant offset. A
+// constant beyond int64 (a uint64 bound) is the nearest int64, so that it
+// is never taken for a variable.
 func (fc *fnCtx) end(e ast.Expr) (ast.Expr, int64) {
 	if v, ok := fc.intConst(fc.stripConv(e)); ok {
 		return nil, v
+	}
+	if tv, ok := fc.c.pass.TypesInfo.Types[e]; ok && tv.Value != nil {
+		if v := constant.ToInt(tv.Value); v.Kind() == constant.Int {
+			if constant.Sign(v) > 0 {
+				return nil, math.MaxInt64
+			}
+			return nil, math.MinInt64
+		}
 	}
 	if b, ok := unparen(e).(*ast.BinaryExpr); ok && (b.Op == token.ADD || b.Op == token.SUB) {
 		if v, ok := fc.intConst(unparen(b.Y)); ok {
@@ -140,6 +158,18 @@ func (fc *fnCtx) end(e ast.Expr) (ast.Expr, int64) {
 		}
 	}
 	return e, 0
+}
+
+// noteBigEnd records an end of sh that is a constant beyond int64.
+func (fc *fnCtx) noteBigEnd(sh *loopShape, ends ...ast.Expr) {
+	for _, e := range ends {
+		if _, ok := fc.intConst(fc.stripConv(e)); ok {
+			continue
+		}
+		if tv, ok := fc.c.pass.TypesInfo.Types[e]; ok && tv.Value != nil {
+			sh.bigEnd = e
+		}
+	}
 }
 
 // stepOf returns the constant by which s changes v (i++, i -= 2,

@@ -3,9 +3,12 @@ package analyzer
 import (
 	"fmt"
 	"go/ast"
+	"go/printer"
+	"go/token"
 	"go/types"
 	"math"
 	"strconv"
+	"strings"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -13,13 +16,22 @@ import (
 // Every number in a message comes from the thresholds package or from the
 // range of the code; none is typed here.
 
-// src renders an expression as messages show it.
+// src renders an expression as messages show it: as gofmt prints it on
+// one line (d/2 + 1, not d / 2 + 1), without its comments.
 func src(e ast.Expr) string {
 	if e == nil {
 		return ""
 	}
-	return types.ExprString(e)
+	var b strings.Builder
+	if err := printer.Fprint(&b, emptyFset, e); err != nil {
+		return types.ExprString(e)
+	}
+	return b.String()
 }
+
+// emptyFset gives the printer no line information, so that an
+// expression written over several lines is shown on one.
+var emptyFset = token.NewFileSet()
 
 // plus renders name+off, or the constant off when name is empty.
 func plus(name string, off int64) string {
@@ -64,6 +76,16 @@ func factorialLimitText(kind facKind, name string, off int64, t numType) string 
 		return fmt.Sprintf("%s of %d in %s %s (%s)", what, off, t.typeName(), verb(t), largestFits(kind, t))
 	}
 	return fmt.Sprintf("%s of %s in %s %s for %s ≥ %d (%s)", what, plus(name, off), t.typeName(), verb(t), name, first-off, largestFits(kind, t))
+}
+
+// factorialConstText describes a factorial whose largest factor is the
+// constant written as text, up to which the loop runs.
+func factorialConstText(kind facKind, text string, t numType) string {
+	what := "factorial"
+	if kind == kindDouble {
+		what = "double factorial"
+	}
+	return fmt.Sprintf("%s up to %s in %s %s (%s)", what, text, t.typeName(), verb(t), largestFits(kind, t))
 }
 
 // largestFits names the largest value of the kind that fits t:

@@ -79,7 +79,7 @@ func (fc *fnCtx) checkModel() {
 		// { return }; for x >= 3 { x--; z *= x } in std's math.Gamma),
 		// which the range analysis does not follow: precision first,
 		// only loops with a counter of their own are judged.
-		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) {
 			continue
 		}
 		mc := &modelCtx{fc: fc, res: res, loop: l}
@@ -506,6 +506,13 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 		return nil
 	}
 	res := fc.evalModel()
+	for _, l := range res.Loops {
+		if l.Exits {
+			// A loop that can stop early need not form the whole
+			// product: its function is no factorial of its argument.
+			return nil
+		}
+	}
 	f := vm.Recognise(res.Values[ret.Results[0]])
 	if f.Kind != vm.Fact {
 		return nil
@@ -566,7 +573,7 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 		return
 	}
 	for _, l := range loops {
-		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) {
 			return
 		}
 	}

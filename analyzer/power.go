@@ -46,10 +46,12 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	var what string
 	switch {
 	case exact && exps == 0:
-		what = "power-over-factorial term x^k/k!"
+		// The code's own names: a^c/c! for math.Pow(a, float64(c)) /
+		// factorial(c), not a textbook x^k/k!.
+		what = fmt.Sprintf("power-over-factorial term %s/%s", powerText(fc, pow), bang(fac.arg, fac.off))
 		m.Shape, m.Args = fixes.ShapePowOverFactorial, []ast.Expr{pow.arg, pow.arg2}
 	case exact && fc.negated(ex.arg, pow.arg):
-		what = "Poisson-style term λ^k·e^(−λ)/k!"
+		what = fmt.Sprintf("Poisson-style term %s·e^(−%s)/%s", powerText(fc, pow), atom(pow.arg), bang(fac.arg, fac.off))
 		m.Shape, m.Args = fixes.ShapePoisson, []ast.Expr{pow.arg2, pow.arg}
 	default:
 		// Not the shape as written (x^(k+1)/k!, e^(−2λ), an extra
@@ -95,12 +97,18 @@ func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
 // powerText renders math.Pow(x, e) as x^e, with the exponent's
 // conversion dropped.
 func powerText(fc *fnCtx, pow factor) string {
-	e := fc.stripConv(pow.arg2)
+	return atom(pow.arg) + "^" + atom(fc.stripConv(pow.arg2))
+}
+
+// atom renders e for a place where an operator binds tightly, as the
+// base or exponent of x^k: in parentheses unless it is a name, a
+// selector, a literal or a call.
+func atom(e ast.Expr) string {
 	switch unparen(e).(type) {
-	case *ast.Ident, *ast.BasicLit:
-		return src(pow.arg) + "^" + src(e)
+	case *ast.Ident, *ast.BasicLit, *ast.SelectorExpr, *ast.CallExpr:
+		return src(unparen(e))
 	}
-	return src(pow.arg) + "^(" + src(e) + ")"
+	return "(" + src(e) + ")"
 }
 
 // sameInt reports whether the integer expressions a and b (conversions

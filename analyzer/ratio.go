@@ -78,7 +78,13 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	switch {
 	case shape == fixes.ShapeBinomial:
 		central := thresholds.CentralBinomial(u.t.Num)
-		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s, although C(n, n/2) itself fits up to n = %d", u.t.typeName(), breaks, central.FirstBad-1)
+		// The code's own n, unless the numerator is a constant or an
+		// offset, where no name stands for the row.
+		n := atom(u.arg)
+		if u.off != 0 || isConst(n) {
+			n = "n"
+		}
+		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s, although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, n, n, n, central.FirstBad-1)
 	case shape == fixes.ShapeCatalan:
 		// The threshold is stated for n, the half of the numerator's
 		// argument, as the Catalan number is indexed by it.
@@ -88,7 +94,12 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: the numerator %s %s for %s ≥ %d although the Catalan number itself fits up to %s = %d",
 			u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(half), cat.FirstBad, src(half), cv.FirstBad-1)
 	case shape == fixes.ShapePermutation:
-		msg = fmt.Sprintf("permutation count n!/(n-k)! as a ratio of factorials in %s: %s, although the product of the top k factors may still fit", u.t.typeName(), breaks)
+		// The code's own n and k: fact(n) / fact(n-k) is n!/(n - k)!.
+		what, k := "n!/(n-k)!", "k"
+		if len(dens) == 1 && len(m.Args) == 2 {
+			what, k = bang(u.arg, u.off)+"/"+bang(dens[0].arg, dens[0].off), atom(m.Args[1])
+		}
+		msg = fmt.Sprintf("permutation count %s as a ratio of factorials in %s: %s, although the product of the top %s factors may still fit", what, u.t.typeName(), breaks, k)
 	case shape == fixes.ShapeMultinomial:
 		msg = fmt.Sprintf("multinomial coefficient as a ratio of factorials in %s: %s before any division", u.t.typeName(), breaks)
 	case len(p.den) == 0:
@@ -242,8 +253,15 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 		return
 	}
 	clause, definite := verdict(src(b.arg), r, first)
-	msg := fmt.Sprintf("binomial probability C(n,k)·p^k·(1−p)^(n−k) in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
-		b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
+	what := "C(n,k)·p^k·(1−p)^(n−k)"
+	if b.arg2 != nil && len(pows) > 0 {
+		// The code's own n, k and p: C(n, d)·p^d·(1−p)^(n−d).
+		bn, bk := fc.stripConv(b.arg), fc.stripConv(b.arg2)
+		n, k, q := atom(bn), atom(bk), atom(pows[0].arg)
+		what = fmt.Sprintf("C(%s, %s)·%s^%s·(1−%s)^(%s−%s)", src(bn), src(bk), q, k, q, n, k)
+	}
+	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
+		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
 	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}

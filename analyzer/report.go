@@ -46,12 +46,12 @@ func (fc *fnCtx) report(f finding) {
 		Message:  f.msg,
 		Related:  f.related,
 	}
-	if f.match != nil && !fc.noFix {
+	if f.match != nil && !fc.noFix && !fi.cgo {
 		f.match.File = fi.file
 		if c.holdGuard(d, f.match) {
 			return
 		}
-		d.SuggestedFixes = c.fixer.Suggest(*f.match)
+		d.SuggestedFixes = c.physicalOnly(c.fixer.Suggest(*f.match))
 		if len(d.SuggestedFixes) > 0 {
 			c.rewritten = append(c.rewritten, f.match.Node)
 		}
@@ -89,7 +89,7 @@ func (c *checker) holdGuard(d analysis.Diagnostic, m *fixes.Match) bool {
 func (c *checker) releaseGuards() {
 	for _, h := range c.held {
 		if decl, ok := h.m.Func.(*ast.FuncDecl); ok && c.callsRewritten(c.declObj(decl)) {
-			h.d.SuggestedFixes = c.fixer.Suggest(h.m)
+			h.d.SuggestedFixes = c.physicalOnly(c.fixer.Suggest(h.m))
 		}
 		c.pass.Report(h.d)
 	}
@@ -145,10 +145,34 @@ func (c *checker) reportDirective(pos, end token.Pos, msg string) {
 	})
 }
 
-// relatedDef points at the definition of a factorial-valued function.
+// relatedDef points at the definition of a factorial-valued function,
+// at the start of the line that declares it. The name's own column is
+// not always known: under go vet a function of another package comes
+// from export data, which keeps only its line, so the line start is the
+// position every driver can give alike.
 func (c *checker) relatedDef(name string, pos token.Pos) []analysis.RelatedInformation {
 	if !pos.IsValid() {
 		return nil
 	}
+	if f := c.pass.Fset.File(pos); f != nil {
+		pos = f.LineStart(f.PositionFor(pos, false).Line)
+	}
 	return []analysis.RelatedInformation{{Pos: pos, Message: name + " is defined here"}}
+}
+
+// physicalOnly drops the fixes when an edit lies where a //line
+// directive maps the file to another name: drivers that place an edit
+// by its mapped file name and its offset in the compiled file would
+// write into the wrong file.
+func (c *checker) physicalOnly(fs []analysis.SuggestedFix) []analysis.SuggestedFix {
+	for _, f := range fs {
+		for _, e := range f.TextEdits {
+			for _, p := range []token.Pos{e.Pos, e.End} {
+				if p.IsValid() && c.pass.Fset.PositionFor(p, true).Filename != c.pass.Fset.PositionFor(p, false).Filename {
+					return nil
+				}
+			}
+		}
+	}
+	return fs
 }

@@ -15,6 +15,7 @@ import (
 
 	"github.com/overfact/overfact/analyzer"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/fixes/lgamma"
 )
 
 // A diffCase runs one function of a testdata package, before and after
@@ -87,8 +88,19 @@ var diffCases = []diffCase{
 	{pkg: "fixterm", fn: "FillMoment", loops: []string{"k := 0; k <= 338; k += 2"}, args: "k, 0.5", typ: "float64", ref: refFillMoment, noBreak: true},
 	{pkg: "fixterm", fn: "FillDensity", loops: []string{"a := 1; a <= 400; a += 13", "b := 1; b <= 400; b += 17"}, args: "float64(a), float64(b), 0.5", typ: "float64", ref: refFillDensity},
 	{pkg: "fixterm", fn: "Drift", loops: []string{"b := 20; b <= 200; b += 30", "k := 0; k <= 150; k += 5"}, args: "k, float64(b), 1.5", typ: "float64", ref: refDrift},
-	{pkg: "fixloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refChoose},
-	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
+	// Loops that leave early: nothing but Past is fixed, and every
+	// function keeps its values (Labeled(25) is 24, not a panic).
+	{pkg: "fixexit", fn: "Labeled", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Jumped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Skipped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorialTo(5), noBreak: true},
+	{pkg: "fixexit", fn: "Capped", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refCapped, noBreak: true},
+	{pkg: "fixexit", fn: "Until", loops: []string{"n := 0; n <= 30; n++"}, args: "n, 5", typ: "int", ref: refFactorialTo(4), noBreak: true},
+	{pkg: "fixexit", fn: "Thirty", loops: []string{"s := 1; s <= 21; s++"}, args: "s", typ: "int", ref: refThirty, noBreak: true},
+	{pkg: "fixexit", fn: "OddCrates", loops: []string{"n := 0; n <= 34; n++"}, args: "n", typ: "int", ref: refOddProduct, noBreak: true},
+	{pkg: "fixexit", fn: "Past", loops: []string{"n := 0; n <= 30; n++"}, args: "n", typ: "int", ref: refFactorial, guard: true},
+	{pkg: "fixloop", fn: "Ways", loops: []string{"n := 0; n <= 68; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopChoose},
+	{pkg: "fixloop", fn: "WaysChecked", loops: []string{"n := 0; n <= 68; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refCheckedChoose},
+	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
 	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
@@ -109,6 +121,26 @@ var diffCases = []diffCase{
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 }
 
+// negativeNCases run the binomial loops over negative n, where the loop
+// computes the generalised coefficient; they need a helper module whose
+// Choose family accepts a negative n.
+var negativeNCases = []diffCase{
+	{pkg: "fixloop", fn: "Ways", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refLoopChoose, noBreak: true},
+	{pkg: "fixloop", fn: "WaysChecked", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refCheckedChoose, noBreak: true},
+}
+
+// generalisedChoose reports whether the helper module in the tree
+// computes C(-3, 2) = 6, the generalised binomial coefficient (common
+// practice: C(n, k) = (−1)^k·C(k−n−1, k) for n < 0).
+func generalisedChoose() (ok bool) {
+	defer func() {
+		if recover() != nil {
+			ok = false
+		}
+	}()
+	return lgamma.MustChooseInt64(-3, 2) == 6
+}
+
 // TestDifferential compiles each testdata package twice, as written and
 // as fixed, runs both over the grids of diffCases in one generated
 // program, and compares both with exact math/big references: where the
@@ -121,7 +153,13 @@ func TestDifferential(t *testing.T) {
 	if _, err := exec.LookPath("go"); err != nil {
 		t.Skip("no go command")
 	}
-	pkgs := diffPackages()
+	cases := diffCases
+	if generalisedChoose() {
+		cases = append(cases[:len(cases):len(cases)], negativeNCases...)
+	} else {
+		t.Log("the helper module in the tree rejects a negative n in MustChooseInt64: the binomial loops are not compared over negative n")
+	}
+	pkgs := diffPackages(cases)
 	mod := t.TempDir()
 	// Packages named fix* are the real analyzer's, in the repository's
 	// testdata; the others are the probe's, in this package's.
@@ -151,7 +189,7 @@ func TestDifferential(t *testing.T) {
 	}
 	gomod := fmt.Sprintf("module difftest\n\ngo 1.22\n\nrequire %s v0.0.0\n\nreplace %s => %s\n", fixes.HelperPath, fixes.HelperPath, helper)
 	write(t, filepath.Join(mod, "go.mod"), gomod)
-	write(t, filepath.Join(mod, "main.go"), diffMain(pkgs))
+	write(t, filepath.Join(mod, "main.go"), diffMain(pkgs, cases))
 	cmd := exec.Command("go", "run", ".")
 	cmd.Dir = mod
 	cmd.Env = append(os.Environ(), "GOWORK=off", "GOFLAGS=-mod=mod", "GOPROXY=off")
@@ -161,13 +199,13 @@ func TestDifferential(t *testing.T) {
 	if err != nil {
 		t.Fatalf("go run: %v\n%s", err, stderr.Bytes())
 	}
-	checkDiff(t, out)
+	checkDiff(t, out, cases)
 }
 
-func diffPackages() []string {
+func diffPackages(cases []diffCase) []string {
 	var pkgs []string
 	seen := make(map[string]bool)
-	for _, c := range diffCases {
+	for _, c := range cases {
 		if !seen[c.pkg] {
 			seen[c.pkg] = true
 			pkgs = append(pkgs, c.pkg)
@@ -185,7 +223,7 @@ func write(t *testing.T, name, content string) {
 
 // diffMain writes the program that prints, for every case and input,
 // "index|args|original|fixed", with "panic" for a call that panicked.
-func diffMain(pkgs []string) string {
+func diffMain(pkgs []string, cases []diffCase) string {
 	var b strings.Builder
 	b.WriteString("package main\n\nimport (\n\t\"fmt\"\n\t\"strconv\"\n")
 	for _, p := range pkgs {
@@ -215,7 +253,7 @@ func show(i int, args []any, o, f func() any) {
 
 func main() {
 `)
-	for i, c := range diffCases {
+	for i, c := range cases {
 		b.WriteString("\t{\n")
 		for _, l := range c.loops {
 			fmt.Fprintf(&b, "\tfor %s {\n", l)
@@ -242,8 +280,8 @@ func spaced(args string) string {
 
 type caseStats struct{ runs, broke int }
 
-func checkDiff(t *testing.T, out []byte) {
-	stats := make([]caseStats, len(diffCases))
+func checkDiff(t *testing.T, out []byte, cases []diffCase) {
+	stats := make([]caseStats, len(cases))
 	sc := bufio.NewScanner(bytes.NewReader(out))
 	for sc.Scan() {
 		f := strings.Split(sc.Text(), "|")
@@ -251,7 +289,7 @@ func checkDiff(t *testing.T, out []byte) {
 			t.Fatalf("bad line %q", sc.Text())
 		}
 		i, _ := strconv.Atoi(f[0])
-		c := diffCases[i]
+		c := cases[i]
 		var x []float64
 		for _, a := range strings.Fields(f[1]) {
 			v, err := strconv.ParseFloat(a, 64)
@@ -273,7 +311,7 @@ func checkDiff(t *testing.T, out []byte) {
 		}
 	}
 	for i, s := range stats {
-		c := diffCases[i]
+		c := cases[i]
 		switch {
 		case s.runs == 0:
 			t.Errorf("%s.%s never ran", c.pkg, c.fn)

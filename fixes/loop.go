@@ -21,6 +21,21 @@ import (
 // becomes
 //
 //	b := int(lgamma.MustChooseInt64(int64(n), int64(k)))
+//
+// The loop leaves b at 1 for every k ≤ 0, while C(n, k) is 0 for k < 0
+// (and the falling factorial is not defined there), so unless the
+// analyzer shows that k is never negative (Match.CountNonNeg) the call
+// runs only where the loop would:
+//
+//	b := 1
+//	if k > 0 {
+//		b = int(lgamma.MustChooseInt64(int64(n), int64(k)))
+//	}
+//
+// For a negative n the loop computes the generalised coefficient
+// C(n, k) = (−1)^k·C(k−n−1, k), which is what the helper's Choose family
+// returns; the falling-factorial helpers take no negative n and panic
+// where the loop multiplied negative factors (docs/fixes.md).
 var loopFamilies = map[Shape]family{
 	ShapeBinomialLoop: ratioFamilies[ShapeBinomial],
 	ShapeFallingLoop:  ratioFamilies[ShapePermutation],
@@ -53,6 +68,17 @@ func buildLoop(b *builder) error {
 	call, err := b.call(name, b.m.Args, acc.Type())
 	if err != nil {
 		return err
+	}
+	if !b.m.CountNonNeg && classOf(b.pass.TypesInfo.TypeOf(b.m.Args[1])) != classUnsigned {
+		// The loop is replaced by the call under the loop's own
+		// condition for running; the accumulator keeps its 1 otherwise.
+		if b.mentioned(acc, init.End(), loop.Pos()) {
+			return fmt.Errorf("%s changes between its initialisation and the loop", acc.Name())
+		}
+		indent := b.indentOf(loop.Pos())
+		b.replace(loop.Pos(), loop.End(), fmt.Sprintf("if %s > 0 {\n%s\t%s = %s\n%s}", b.copyText(b.m.Args[1]), indent, acc.Name(), call, indent))
+		b.message = b.rewriteMessage() + ", where " + b.text(b.m.Args[1]) + " > 0 lets the loop run"
+		return nil
 	}
 	if next(b.file, init) == loop {
 		b.replace(rhs.Pos(), rhs.End(), call)

@@ -58,6 +58,12 @@ type Match struct {
 	Acc     types.Object
 	AccInit ast.Stmt
 	Loop    ast.Stmt
+	// CountNonNeg, for the binomial and falling-factorial loops, tells
+	// that the number of factors (Args[1]) is never negative where the
+	// loop starts. Otherwise the rewrite keeps what a loop that runs no
+	// trip leaves, its accumulator at 1, where the helper would say 0 or
+	// panic for k < 0.
+	CountNonNeg bool
 
 	// For ShapeFactorial: the enclosing function, the parameter whose
 	// range decides overflow, and the first bad value of that parameter.

@@ -3,6 +3,7 @@ package fixes_test
 import (
 	"math"
 	"math/big"
+	"testing"
 )
 
 // Reference values for the differential tests, computed with math/big
@@ -198,4 +199,99 @@ func refPoissonCDF(x []float64) *big.Float {
 		sum = new(big.Float).SetPrec(refPrec).Add(sum, refPoisson([]float64{float64(k), x[0]}))
 	}
 	return sum
+}
+
+// refFactorialTo returns the reference min(n, m)!: a product loop over
+// 1..n that some exit stops after its m-th factor (math/big).
+func refFactorialTo(m int64) func([]float64) *big.Float {
+	return func(x []float64) *big.Float { return bf(factorialBig(min(int64(x[0]), m))) }
+}
+
+// refThirty is the product 1·2·…·min(30, stop−1) of a loop over 1..30
+// that returns on reaching stop, for stop ≥ 1 (math/big).
+func refThirty(x []float64) *big.Float { return bf(factorialBig(min(30, int64(x[0])-1))) }
+
+// refCapped is the product 1·2·…·i over i ≤ n, stopped as soon as it
+// passes 1000 (math/big).
+func refCapped(x []float64) *big.Float {
+	r := big.NewInt(1)
+	for i := int64(1); i <= int64(x[0]); i++ {
+		r.Mul(r, big.NewInt(i))
+		if r.Cmp(big.NewInt(1000)) > 0 {
+			break
+		}
+	}
+	return bf(r)
+}
+
+// refOddProduct is the product of the odd numbers up to n: n!! for odd n,
+// (n−1)!! for even n (OEIS A006882).
+func refOddProduct(x []float64) *big.Float {
+	n := int64(x[0])
+	if n%2 == 0 {
+		n--
+	}
+	return refDoubleFactorial([]float64{float64(n)})
+}
+
+// loopChooseBig is what the multiplicative loop b = b*(n−k+i)/i over
+// i = 1..k computes without overflow: 1 for k ≤ 0 (no trip), and the
+// generalised binomial coefficient n(n−1)…(n−k+1)/k! otherwise, which is
+// C(n, k) for n ≥ 0 and (−1)^k·C(k−n−1, k) for n < 0 (common practice;
+// every partial product is such a coefficient, so each division is
+// exact).
+func loopChooseBig(n, k int64) *big.Int {
+	switch {
+	case k <= 0:
+		return big.NewInt(1)
+	case n >= 0:
+		return chooseBig(n, k)
+	}
+	r := new(big.Int).Binomial(k-n-1, k)
+	if k%2 == 1 {
+		r.Neg(r)
+	}
+	return r
+}
+
+func refLoopChoose(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]), int64(x[1]))) }
+
+// refCheckedChoose is a binomial loop behind "if k < 0 { return 0 }".
+func refCheckedChoose(x []float64) *big.Float {
+	if x[1] < 0 {
+		return fl(0)
+	}
+	return refLoopChoose(x)
+}
+
+// refLoopFalling is what p *= n − i over i = 0..k−1 computes: 1 for
+// k ≤ 0 (no trip), n(n−1)…(n−k+1) otherwise.
+func refLoopFalling(x []float64) *big.Float {
+	if x[1] <= 0 {
+		return fl(1)
+	}
+	return refFalling(x)
+}
+
+// TestLoopChooseReference checks the reference of the binomial loop
+// against the loop itself, run where nothing overflows, and against
+// values worked by hand from the generalised definition: C(−3, 2) =
+// (−3)(−4)/2 = 6, C(−1, 3) = (−1)(−2)(−3)/6 = −1.
+func TestLoopChooseReference(t *testing.T) {
+	for n := int64(-15); n <= 15; n++ {
+		for k := int64(-3); k <= 15; k++ {
+			b := int64(1)
+			for i := int64(1); i <= k; i++ {
+				b = b * (n - k + i) / i
+			}
+			if got := loopChooseBig(n, k); got.Cmp(big.NewInt(b)) != 0 {
+				t.Errorf("loopChooseBig(%d, %d) = %v, the loop gives %d", n, k, got, b)
+			}
+		}
+	}
+	for _, c := range []struct{ n, k, want int64 }{{-3, 2, 6}, {-1, 3, -1}, {5, -1, 1}} {
+		if got := loopChooseBig(c.n, c.k); got.Int64() != c.want {
+			t.Errorf("loopChooseBig(%d, %d) = %v, want %d", c.n, c.k, got, c.want)
+		}
+	}
 }

@@ -227,7 +227,106 @@ func ticketTable(n int) int {
 	return s + len(prizes)
 }
 
+// packCrates multiplies crate sizes until a check in a nested loop finds
+// a crate too large and leaves both loops.
+func packCrates(n int) int {
+	r := 1
+outer:
+	for i := 1; i <= n; i++ {
+		for j := 0; j < 3; j++ {
+			if i > 4 {
+				break outer
+			}
+		}
+		r *= probe(36, i)
+	}
+	return r + probe(37, n)
+}
+
+// skipShelves skips to the next shelf from a nested loop; only shelves
+// whose inner loop ran out reach the tally.
+func skipShelves(n int) int {
+	s := 0
+shelves:
+	for i := 0; i < n; i++ {
+		for j := i; j < n; j++ {
+			if j-i > 2 {
+				continue shelves
+			}
+			s += probe(38, j-i)
+		}
+		s += probe(39, i)
+	}
+	return s
+}
+
+// drainGoto leaves two loops with a goto.
+func drainGoto(n int) int {
+	i := 0
+	for ; i < n; i++ {
+		for j := 0; j < 2; j++ {
+			if i >= 7 {
+				goto done
+			}
+		}
+		probe(40, i)
+	}
+	probe(41, i)
+done:
+	return probe(42, i)
+}
+
+// firstFit breaks out of a loop from inside a switch.
+func firstFit(n int) int {
+	k := 0
+search:
+	for k = 0; k < 40; k++ {
+		switch {
+		case k*k > n:
+			break search
+		case k > 25:
+			break
+		}
+	}
+	return probe(43, k)
+}
+
+// onePass leaves on its first trip or runs to the end.
+func onePass(n int) int {
+	i := 0
+	for i = 0; i < 10; i++ {
+		if n > 0 {
+			break
+		}
+	}
+	return probe(44, i)
+}
+
+// tallyRows leaves range loops by labelled continue and break.
+func tallyRows(n int) int {
+	s := 0
+rows:
+	for i := range 6 {
+		for j := range n {
+			if j > i {
+				continue rows
+			}
+			if i+j > 8 {
+				break rows
+			}
+		}
+		s += probe(45, i)
+	}
+	return s + probe(46, n)
+}
+
 var corpus = map[string]func(int) int{
+	"packCrates":    packCrates,
+	"skipShelves":   skipShelves,
+	"drainGoto":     drainGoto,
+	"firstFit":      firstFit,
+	"onePass":       onePass,
+	"tallyRows":     tallyRows,
 	"ticketTable":   ticketTable,
 	"crewFields":    crewFields,
 	"rangeShrink":   rangeShrink,

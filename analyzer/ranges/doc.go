@@ -37,6 +37,10 @@
 // Loops are iterated to a fixpoint, widening after Options.MaxVisits
 // trips (after one trip inside two or more enclosing loops), then given one
 // narrowing trip; the loop condition re-narrows the body on every trip.
+// The exit by the loop's own test is taken apart from the entry state and
+// from the states that come back after a trip, so a loop whose test holds
+// on entry keeps at its exit what its body established: after
+// "if i > 4 { break outer }" in a nested loop, i ≤ 4 below that loop.
 // A loop that assigns nothing living across trips is walked once. No
 // SSA form or control-flow graph is built. The work per function is
 // capped at ten statement visits per syntax node (plus a constant):

@@ -7,8 +7,10 @@ import (
 )
 
 // pass walks one trip through a loop from the head state and returns
-// the state that reaches the head again and the state that leaves.
-type pass func(head state) (next, exit state)
+// the state that reaches the head again and the join of the states that
+// leave the body by break (a break naming this loop or, through
+// w.targets, none).
+type pass func(head state) (next, breaks state)
 
 // loop runs a loop to a fixpoint of its head state: join-based
 // iteration, widening from the MaxVisits-th trip on (from the first
@@ -17,7 +19,16 @@ type pass func(head state) (next, exit state)
 // Inside four or more enclosing loops, or past the work budget, the
 // head just forgets every variable the loop assigns, which needs no
 // iteration.
-func (w *walker) loop(entry state, n ast.Node, trip pass) state {
+//
+// leave returns the part of a head state in which the loop's own test
+// ends the loop. It is applied to the entry state and to the states
+// that come back to the head apart, not to their join: when the test
+// holds on entry, the loop can only end after a trip, so what the body
+// established (i ≤ 4 after "if i > 4 { break outer }" in a nested loop)
+// survives the exit. Each is a sound description of the head states it
+// stands for (head ⊒ entry ⊔ F(head) at the fixpoint), so their parts
+// cover every state that leaves by the test.
+func (w *walker) loop(entry state, n ast.Node, leave func(state) state, trip pass) state {
 	if !entry.live {
 		return entry
 	}
@@ -28,14 +39,14 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 		for _, obj := range w.f.assignedIn(n) {
 			head = w.f.forget(head, obj)
 		}
-		_, exit := trip(head)
-		return exit
+		_, breaks := trip(head)
+		return w.leaving(leave, head).join(breaks)
 	}
 	if !w.f.carries(n) {
 		// Nothing flows from one trip to the next: the entry state
 		// is already the fixpoint.
-		_, exit := trip(entry)
-		return exit
+		_, breaks := trip(entry)
+		return w.leaving(leave, entry).join(breaks)
 	}
 	visits := w.f.opts.MaxVisits
 	if w.loops > 2 {
@@ -58,9 +69,23 @@ func (w *walker) loop(entry state, n ast.Node, trip pass) state {
 	}
 	w.rec = rec
 	// head is a post-fixpoint, so entry ⊔ next, one more application
-	// of the loop's transfer function, is still sound and often tighter.
-	_, exit := trip(entry.join(next))
-	return exit
+	// of the loop's transfer function, is still sound and often tighter;
+	// the states it sends back to the head cover every state that comes
+	// back after one trip or more.
+	again, breaks := trip(entry.join(next))
+	return w.leaving(leave, entry).join(w.leaving(leave, again)).join(breaks)
+}
+
+// leaving applies leave to s without recording anything: the recording
+// pass records the loop test once, in the state it is evaluated in.
+func (w *walker) leaving(leave func(state) state, s state) state {
+	if !s.live {
+		return s
+	}
+	rec := w.rec
+	w.rec = false
+	defer func() { w.rec = rec }()
+	return leave(s)
 }
 
 // carries reports whether loop n assigns a variable that lives across
@@ -91,18 +116,25 @@ func (f *Func) overBudget() bool { return f.work > 10*f.size+1000 }
 
 func (w *walker) forStmt(s state, st *ast.ForStmt, label string) state {
 	s = w.stmt(s, st.Init)
-	return w.loop(s, st, func(head state) (state, state) {
-		in, out := head, dead
+	leave := func(head state) state {
+		if st.Cond == nil {
+			return dead
+		}
+		_, out := w.refine2(head, st.Cond)
+		return out
+	}
+	return w.loop(s, st, leave, func(head state) (state, state) {
+		in := head
 		if st.Cond != nil {
 			w.cond(head, st.Cond)
-			in, out = w.refine2(head, st.Cond)
+			in, _ = w.refine2(head, st.Cond)
 		}
 		t := w.push(label, true)
 		end := w.stmt(in, st.Body)
 		w.pop()
 		end = joinAll(end, t.conts)
 		end = w.stmt(end, st.Post)
-		return end, joinAll(out, t.breaks)
+		return end, joinAll(dead, t.breaks)
 	})
 }
 
@@ -115,7 +147,9 @@ func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 			key = key.Meet(k)
 		}
 	}
-	return w.loop(s, st, func(head state) (state, state) {
+	// The loop may end at the head, after any number of trips.
+	leave := func(head state) state { return head }
+	return w.loop(s, st, leave, func(head state) (state, state) {
 		in := head
 		if key.IsEmpty() {
 			in = dead
@@ -136,8 +170,7 @@ func (w *walker) rangeStmt(s state, st *ast.RangeStmt, label string) state {
 		end := w.stmt(in, st.Body)
 		w.pop()
 		end = joinAll(end, t.conts)
-		// The loop ends at the head, after any number of trips.
-		return end, joinAll(head, t.breaks)
+		return end, joinAll(dead, t.breaks)
 	})
 }
 

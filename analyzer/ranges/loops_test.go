@@ -16,6 +16,50 @@ func waysToSeat(n int) int {
 	}
 	return r
 }`},
+	{"labelled break out of a nested loop", `package p
+func packCrates(n int) int {
+	r := 1
+outer:
+	for i := 1; i <= n; i++ {
+		for j := 0; j < 3; j++ {
+			if i > 4 {
+				break outer
+			}
+		}
+		r *= i/*@range [1, 4]*/
+	}
+	return r
+}`},
+	{"goto out of a nested loop", `package p
+func packCrates(n int) int {
+	r := 1
+	for i := 1; i <= n; i++ {
+		for j := 0; j < 3; j++ {
+			if i > 4 {
+				goto done
+			}
+		}
+		r *= i/*@range [1, 4]*/
+	}
+done:
+	return r
+}`},
+	{"a loop that may run no trip keeps its entry state at the exit", `package p
+func packCrates(n, m int) int {
+	if n > 20 {
+		return 0
+	}
+	r := 1
+	for i := 1; i <= n; i++ {
+		for j := 0; j < m; j++ {
+			if i > 4 {
+				break
+			}
+		}
+		r *= i/*@range [1, 20]*/
+	}
+	return r
+}`},
 	{"counting up to an unbounded n", `package p
 func waysToSeat(n int) int {
 	r := 1

@@ -88,10 +88,15 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 	for obj, r := range roles {
 		switch r {
 		case roleStep:
-			en[obj] = e.addAffine(e.cur(obj, en), steps[obj].Scale(new(big.Rat)).Add(l.Count.Scale(steps[obj].c())))
-		case roleAcc:
 			en[obj] = nil
-			if a := l.acc(obj); a != nil && a.After != nil {
+			if !l.Exits {
+				en[obj] = e.addAffine(e.cur(obj, en), steps[obj].Scale(new(big.Rat)).Add(l.Count.Scale(steps[obj].c())))
+			}
+		case roleAcc:
+			// A loop that can leave early need not run all its trips:
+			// past it, what it stepped and accumulated is unknown.
+			en[obj] = nil
+			if a := l.acc(obj); a != nil && a.After != nil && !l.Exits {
 				en[obj] = &value{t: a.After}
 			}
 		default:

@@ -20,7 +20,6 @@ package main
 
 import (
 	"os"
-	"strings"
 
 	"golang.org/x/tools/go/analysis/unitchecker"
 
@@ -50,7 +49,7 @@ func isUnitProtocol(args []string) bool {
 			return true
 		}
 	}
-	return strings.HasSuffix(args[len(args)-1], ".cfg")
+	return isVetConfig(args[len(args)-1])
 }
 
 // dispatch runs the subcommand args[0] names, or else the standalone

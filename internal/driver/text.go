@@ -2,12 +2,15 @@ package driver
 
 import (
 	"fmt"
+	"go/token"
 	"io"
 	"path/filepath"
 	"strings"
 
 	"golang.org/x/tools/go/analysis/checker"
 	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/internal/sarif"
 )
 
 // writeText prints each root finding once as "file:line:col: message",
@@ -15,29 +18,39 @@ import (
 // position after it as "file:line:col: \tmessage" as go vet prints them,
 // and returns how many findings it printed. A file in both a package and
 // its test variant yields the same finding twice; the copy is dropped.
+// Under a //line directive a position is printed where the directive
+// maps it only when that file exists (see sarif.Positions), and without
+// a column when the directive gives none, as token.Position does.
 func writeText(w io.Writer, dir string, roots []*checker.Action) int {
 	seen := make(map[string]bool)
+	ps := sarif.NewPositions()
 	n := 0
 	for _, act := range roots {
 		if act.Err != nil {
 			continue
 		}
 		for _, d := range act.Diagnostics {
-			p := act.Package.Fset.Position(d.Pos)
-			line := fmt.Sprintf("%s:%d:%d: %s", relPath(dir, p.Filename), p.Line, p.Column, d.Message)
+			p := ps.Of(act.Package.Fset, d.Pos)
+			line := fmt.Sprintf("%s: %s", textPos(dir, p), d.Message)
 			if seen[line] {
 				continue
 			}
 			seen[line] = true
 			fmt.Fprintln(w, line)
 			for _, rel := range d.Related {
-				rp := act.Package.Fset.Position(rel.Pos)
-				fmt.Fprintf(w, "%s:%d:%d: \t%s\n", relPath(dir, rp.Filename), rp.Line, rp.Column, rel.Message)
+				fmt.Fprintf(w, "%s: \t%s\n", textPos(dir, ps.Of(act.Package.Fset, rel.Pos)), rel.Message)
 			}
 			n++
 		}
 	}
 	return n
+}
+
+// textPos formats p as file:line:column, or file:line when the column is
+// not known, with the file relative to dir when it lies inside it.
+func textPos(dir string, p token.Position) string {
+	p.Filename = relPath(dir, p.Filename)
+	return p.String()
 }
 
 // relPath returns name relative to dir when it lies inside dir, so that

@@ -36,8 +36,19 @@ type Builder struct {
 	log      Log
 	index    map[string]int // rule id -> index in rules
 	seen     map[string]bool
-	files    map[string][]byte
+	files    map[string]*source
 	ReadFile func(name string) ([]byte, error) // os.ReadFile unless set
+	// Positions decides where a position under a //line directive is
+	// reported (see Positions).
+	Positions *Positions
+}
+
+// source is a file read for column conversion: its content and the
+// offsets at which its lines start, or nil content when it could not be
+// read.
+type source struct {
+	content []byte
+	lines   []int
 }
 
 // NewBuilder returns a Builder for a run of the named tool whose
@@ -48,11 +59,12 @@ func NewBuilder(tool ToolComponent, rules []Rule, root string) (*Builder, error)
 		return nil, err
 	}
 	b := &Builder{
-		root:     filepath.Clean(abs),
-		index:    make(map[string]int),
-		seen:     make(map[string]bool),
-		files:    make(map[string][]byte),
-		ReadFile: os.ReadFile,
+		root:      filepath.Clean(abs),
+		index:     make(map[string]int),
+		seen:      make(map[string]bool),
+		files:     make(map[string]*source),
+		ReadFile:  os.ReadFile,
+		Positions: NewPositions(),
 	}
 	tool.Rules = nil
 	b.log = Log{
@@ -120,8 +132,12 @@ func ruleName(id string) string {
 // diagnostic with an unknown or empty category gets a rule named after
 // fallback. Diagnostics already added at the same place with the same
 // message (a file shared by a package and its test variant) are dropped.
+//
+// A finding is never dropped for a file that cannot be read: its columns
+// then stay byte counts. The error result is kept for callers; it is
+// always nil.
 func (b *Builder) Add(fset *token.FileSet, d analysis.Diagnostic, fallback string) error {
-	start, end := fset.Position(d.Pos), fset.Position(d.End)
+	start, end := b.Positions.Span(fset, d.Pos, d.End)
 	key := fmt.Sprintf("%s:%d:%d:%s", start.Filename, start.Offset, end.Offset, d.Message)
 	if b.seen[key] {
 		return nil
@@ -166,14 +182,8 @@ func (b *Builder) Add(fset *token.FileSet, d analysis.Diagnostic, fallback strin
 }
 
 func (b *Builder) location(fset *token.FileSet, pos, end token.Pos) (Location, error) {
-	if !end.IsValid() {
-		end = pos
-	}
-	p, e := fset.Position(pos), fset.Position(end)
-	r, err := b.region(p, e)
-	if err != nil {
-		return Location{}, err
-	}
+	p, e := b.Positions.Span(fset, pos, end)
+	r := b.region(p, e)
 	return Location{PhysicalLocation: PhysicalLocation{
 		ArtifactLocation: b.artifact(p.Filename),
 		Region:           &r,
@@ -189,11 +199,10 @@ func (b *Builder) fix(fset *token.FileSet, sf analysis.SuggestedFix) (Fix, error
 		if !end.IsValid() {
 			end = te.Pos
 		}
-		p, e := fset.Position(te.Pos), fset.Position(end)
-		r, err := b.region(p, e)
-		if err != nil {
-			return Fix{}, err
-		}
+		// An edit applies to the bytes of the file that was compiled,
+		// whatever a //line directive says.
+		p, e := fset.PositionFor(te.Pos, false), fset.PositionFor(end, false)
+		r := b.region(p, e)
 		if _, ok := byFile[p.Filename]; !ok {
 			names = append(names, p.Filename)
 		}
@@ -228,31 +237,58 @@ func (b *Builder) artifact(filename string) ArtifactLocation {
 	return ArtifactLocation{URI: escapePath(filepath.ToSlash(rel)), URIBaseID: SourceRoot}
 }
 
-// region converts byte-based positions into a region whose columns count
-// UTF-16 code units.
-func (b *Builder) region(start, end token.Position) (Region, error) {
-	content, err := b.content(start.Filename)
-	if err != nil {
-		return Region{}, err
-	}
+// region converts positions into a region whose columns count UTF-16
+// code units of their lines in the file. A file that cannot be read, or
+// a line it does not have, keeps byte columns; an unknown column (0,
+// from a //line directive without one) is left out, which SARIF reads
+// as the whole line (§3.30.5, §3.30.7).
+func (b *Builder) region(start, end token.Position) Region {
+	src := b.source(start.Filename)
 	return Region{
 		StartLine:   start.Line,
-		StartColumn: UTF16Column(content, start.Offset, start.Column),
+		StartColumn: src.column(start),
 		EndLine:     end.Line,
-		EndColumn:   UTF16Column(content, end.Offset, end.Column),
-	}, nil
+		EndColumn:   src.column(end),
+	}
 }
 
-func (b *Builder) content(filename string) ([]byte, error) {
-	if c, ok := b.files[filename]; ok {
-		return c, nil
+func (b *Builder) source(filename string) *source {
+	if s, ok := b.files[filename]; ok {
+		return s
 	}
-	c, err := b.ReadFile(filename)
-	if err != nil {
-		return nil, fmt.Errorf("sarif: reading %s for column conversion: %v", filename, err)
+	s := &source{}
+	if c, err := b.ReadFile(filename); err == nil {
+		s.content = c
+		s.lines = append(s.lines, 0)
+		for i, ch := range c {
+			if ch == '\n' {
+				s.lines = append(s.lines, i+1)
+			}
+		}
 	}
-	b.files[filename] = c
-	return c, nil
+	b.files[filename] = s
+	return s
+}
+
+// column returns the UTF-16 column of p, found by its line and byte
+// column rather than its offset: under a //line directive the offset is
+// one in another file.
+func (s *source) column(p token.Position) int {
+	if p.Column < 1 {
+		return 0
+	}
+	if p.Line < 1 || p.Line > len(s.lines) {
+		return p.Column
+	}
+	start := s.lines[p.Line-1]
+	end := len(s.content)
+	if p.Line < len(s.lines) {
+		end = s.lines[p.Line] - 1
+	}
+	if start+p.Column-1 > end {
+		return p.Column
+	}
+	return UTF16Column(s.content, start+p.Column-1, p.Column)
 }
 
 // fileURI returns the file URI of an absolute path (RFC 8089).

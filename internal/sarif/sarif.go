@@ -106,12 +106,13 @@ type ArtifactLocation struct {
 
 // Region is a region object given by lines and columns (§3.30). Lines
 // and columns are 1-based; columns count UTF-16 code units, the run's
-// columnKind. An insertion point has equal start and end.
+// columnKind. An insertion point has equal start and end. A column is
+// left out when it is not known (a //line directive without one).
 type Region struct {
 	StartLine   int `json:"startLine"`
-	StartColumn int `json:"startColumn"`
+	StartColumn int `json:"startColumn,omitempty"`
 	EndLine     int `json:"endLine"`
-	EndColumn   int `json:"endColumn"`
+	EndColumn   int `json:"endColumn,omitempty"`
 }
 
 // Fix is a fix object (§3.55).

@@ -49,7 +49,7 @@ func SafeWays(n, k int) int64 { // want SafeWays:`binomial of parameter 0, safe 
 // Orderings counts the orders in which a sample of n bottles can be
 // inspected, n!/(n-k)! for the first k.
 func Orderings(n, k int) int64 {
-	return mathkit.Factorial(n) / mathkit.Factorial(n-k) // want `permutation count n!/\(n-k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+	return mathkit.Factorial(n) / mathkit.Factorial(n-k) // want `permutation count n!/\(n - k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
 }
 
 // CrateSplits counts the ways to split a crate into three sample

@@ -98,7 +98,7 @@ func Perfect(n int) int64 {
 // TopCards counts ordered draws of k cards from n: a falling factorial.
 func TopCards(n, k int) int64 {
 	p := int64(1)
-	for i := 0; i < k; i++ { // want `falling factorial of k factors in int64 wraps`
+	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= int64(n - i)
 	}
 	return p * 1
@@ -176,7 +176,7 @@ func Jokers(n uint32) uint32 { // want Jokers:`factorial of parameter 0, safe fo
 // function.
 func Draws(n, k int64) int64 { // want Draws:`falling-factorial of parameter 0, breaks from 21`
 	p := int64(1)
-	for i := int64(0); i < k; i++ { // want `falling factorial of k factors in int64 wraps`
+	for i := int64(0); i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= n - i
 	}
 	return p
@@ -191,7 +191,7 @@ func DealTable(maxDeck, k int) []int64 {
 	var out []int64
 	for n := k; n < maxDeck; n++ {
 		p := int64(1)
-		for i := 0; i < k; i++ { // want `falling factorial of k factors in int64 wraps: with k = 5, for a largest factor ≥ \d+; the largest factor is not bounded here`
+		for i := 0; i < k; i++ { // want `falling factorial of k factors in int64 wraps: with k = 5, for a largest factor ≥ \d+; n is not bounded here`
 			p *= int64(n - i)
 		}
 		out = append(out, p)

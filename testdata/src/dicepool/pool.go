@@ -198,7 +198,7 @@ func MidHands(n, k float64) float64 {
 
 // Chance is the chance that exactly k of n dice succeed, over Ways.
 func Chance(n, k int, p float64) float64 {
-	return Ways(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n,k\)·p\^k·\(1−p\)\^\(n−k\) in float64: Ways\(n, …\) breaks for n ≥ 1021 although the probability itself is at most 1; n is not bounded here`
+	return Ways(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in float64: Ways\(n, …\) breaks for n ≥ 1021 although the probability itself is at most 1; n is not bounded here`
 }
 
 // ChanceSplit is Chance over Split, which divides at every step.

@@ -12,6 +12,19 @@ func Ways(n, k int) int { // want Ways:"binomial of parameter 0"
 	return b
 }
 
+// WaysChecked refuses a negative k first, so the rewrite needs no
+// condition of its own.
+func WaysChecked(n, k int) int { // want WaysChecked:"binomial of parameter 0"
+	if k < 0 {
+		return 0
+	}
+	b := 1
+	for i := 1; i <= k; i++ { // want "multiplicative binomial loop"
+		b = b * (n - k + i) / i
+	}
+	return b
+}
+
 // WaysU counts in unsigned arithmetic.
 func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
 	b := uint64(1)
@@ -25,7 +38,7 @@ func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
 // another: n(n−1)…(n−k+1).
 func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0"
 	p := 1
-	for i := 0; i < k; i++ { // want `falling factorial of k factors in int wraps`
+	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int wraps`
 		p *= n - i
 	}
 	return p
@@ -34,7 +47,7 @@ func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0"
 // RollsUp is Rolls counted up to n: (n−k+1)(n−k+2)…n.
 func RollsUp(n, k int) int {
 	p := 1
-	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors in int wraps`
+	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors from n down in int wraps`
 		p *= i
 	}
 	return p

@@ -12,7 +12,7 @@ import (
 // BallVolume returns the volume of the unit ball in d dimensions,
 // π^(d/2)/Γ(d/2+1).
 func BallVolume(d int) float64 {
-	return math.Pow(math.Pi, float64(d)/2) / math.Gamma(float64(d)/2+1) // want `math.Gamma overflows: math.Gamma\(float64\(d\) / 2 \+ 1\) is \+Inf for d ≥ 342`
+	return math.Pow(math.Pi, float64(d)/2) / math.Gamma(float64(d)/2+1) // want `math.Gamma overflows: math.Gamma\(float64\(d\)/2 \+ 1\) is \+Inf for d ≥ 342`
 }
 
 // MixingWeight returns the Beta function B(a, b) = Γ(a)Γ(b)/Γ(a+b).
@@ -51,7 +51,7 @@ func StudentNormTable(nu int) float64 {
 // Partition returns V^N/N! for N indistinguishable particles in a box of
 // volume V (in units of the thermal volume).
 func Partition(V float64, N int) float64 {
-	return math.Pow(V, float64(N)) / mathkit.FactorialFloat(N) // want `power-over-factorial term x\^k/k! in float64: the divisor N! overflows`
+	return math.Pow(V, float64(N)) / mathkit.FactorialFloat(N) // want `power-over-factorial term V\^N/N! in float64: the divisor N! overflows`
 }
 
 // SmallBox is Partition for the demo's box of 40 particles.
@@ -136,7 +136,7 @@ func Reports(n int) float64 {
 // WeibullVariance is the variance of a Weibull fit with scale lambda and
 // shape k: several Gamma calls on one line make one finding.
 func WeibullVariance(lambda, k float64) float64 {
-	return lambda * lambda * (math.Gamma(1+2/k) - math.Gamma(1+1/k)*math.Gamma(1+1/k)) // want `math.Gamma overflows: math.Gamma\(1 \+ 2 / k\) is \+Inf for arguments ≥ 171.62.*; of the 3 math.Gamma calls on this line over 1/k, it overflows first`
+	return lambda * lambda * (math.Gamma(1+2/k) - math.Gamma(1+1/k)*math.Gamma(1+1/k)) // want `math.Gamma overflows: math.Gamma\(1 \+ 2/k\) is \+Inf for arguments ≥ 171.62.*; of the 3 math.Gamma calls on this line over 1/k, it overflows first`
 }
 
 // WeibullKurtosis is the excess kurtosis of a Weibull fit with shape k,
@@ -146,13 +146,13 @@ func WeibullVariance(lambda, k float64) float64 {
 // 9.33e157 is not (OEIS A000142). The finding names that call, not the
 // first one written.
 func WeibullKurtosis(k float64) float64 {
-	return (-6*math.Pow(math.Gamma(1+1/k), 4) + 12*math.Pow(math.Gamma(1+1/k), 2)*math.Gamma(1+2/k) - 3*math.Pow(math.Gamma(1+2/k), 2) - 4*math.Gamma(1+1/k)*math.Gamma(1+3/k) + math.Gamma(1+4/k)) / math.Pow(math.Gamma(1+2/k)-math.Pow(math.Gamma(1+1/k), 2), 2) // want `math.Gamma overflows: math.Gamma\(1 \+ 4 / k\) is \+Inf for arguments ≥ 171.62.*; of the 9 math.Gamma calls on this line over 1/k, it overflows first`
+	return (-6*math.Pow(math.Gamma(1+1/k), 4) + 12*math.Pow(math.Gamma(1+1/k), 2)*math.Gamma(1+2/k) - 3*math.Pow(math.Gamma(1+2/k), 2) - 4*math.Gamma(1+1/k)*math.Gamma(1+3/k) + math.Gamma(1+4/k)) / math.Pow(math.Gamma(1+2/k)-math.Pow(math.Gamma(1+1/k), 2), 2) // want `math.Gamma overflows: math.Gamma\(1 \+ 4/k\) is \+Inf for arguments ≥ 171.62.*; of the 9 math.Gamma calls on this line over 1/k, it overflows first`
 }
 
 // WeibullSpread mixes terms: only calls over the same term are compared,
 // so the first written, over 1/k, is named.
 func WeibullSpread(k, m float64) float64 {
-	return math.Gamma(1+1/k) * math.Gamma(1+m) // want `math.Gamma overflows: math.Gamma\(1 \+ 1 / k\) is \+Inf for arguments ≥ 171.62\d*; the argument is not bounded here$`
+	return math.Gamma(1+1/k) * math.Gamma(1+m) // want `math.Gamma overflows: math.Gamma\(1 \+ 1/k\) is \+Inf for arguments ≥ 171.62\d*; the argument is not bounded here$`
 }
 
 // VolumeSeries sums the unit-ball volumes of dimensions 0 to dims-1, a
@@ -160,7 +160,7 @@ func WeibullSpread(k, m float64) float64 {
 func VolumeSeries(dims int) float64 {
 	s := 0.0
 	for d := 0; d < dims; d++ {
-		s += math.Pow(math.Pi, float64(d)/2) / math.Gamma(float64(d)/2+1) // want `math.Gamma overflows: math.Gamma\(float64\(d\) / 2 \+ 1\) is \+Inf for d ≥ 342 .*; d is not bounded here`
+		s += math.Pow(math.Pi, float64(d)/2) / math.Gamma(float64(d)/2+1) // want `math.Gamma overflows: math.Gamma\(float64\(d\)/2 \+ 1\) is \+Inf for d ≥ 342 .*; d is not bounded here`
 	}
 	return s
 }

@@ -53,12 +53,12 @@ func Column(rows []Entry) []float64 {
 // BallVolume is the volume r^d·π^(d/2)/Γ(d/2+1) of a d-ball (DLMF 5.19.4,
 // from memory): finite and tiny where Γ(d/2+1) is +Inf.
 func BallVolume(d, r float64) float64 {
-	return math.Pow(r, d) * math.Pow(math.Pi, d/2) / math.Gamma(d/2+1) // want `math.Gamma overflows: math.Gamma\(d / 2 \+ 1\) is \+Inf for d ≥ 341.2`
+	return math.Pow(r, d) * math.Pow(math.Pi, d/2) / math.Gamma(d/2+1) // want `math.Gamma overflows: math.Gamma\(d/2 \+ 1\) is \+Inf for d ≥ 341.2`
 }
 
 // ShellVolume is BallVolume through a normaliser kept in a variable.
 func ShellVolume(d, r, dr float64) float64 {
-	norm := math.Gamma(d/2 + 1) // want `math.Gamma overflows: math.Gamma\(d / 2 \+ 1\) is \+Inf for d ≥ 341.2`
+	norm := math.Gamma(d/2 + 1) // want `math.Gamma overflows: math.Gamma\(d/2 \+ 1\) is \+Inf for d ≥ 341.2`
 	v := math.Pow(math.Pi, d/2) * (math.Pow(r+dr, d) - math.Pow(r, d))
 	return v / norm
 }

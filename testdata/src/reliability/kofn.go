@@ -7,7 +7,7 @@ import "math"
 // Choose returns C(n, k) with the multiplicative formula.
 func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks from 62`
 	b := int64(1)
-	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop in int64: the product b\*\(n - k \+ i\) wraps before the division for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
+	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop in int64: the product b \* \(n - k \+ i\) wraps before the division for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
 		b = b * (n - k + i) / i
 	}
 	return b
@@ -16,7 +16,7 @@ func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks 
 // chooseSteps is the same loop in two statements, counting from n down.
 func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, breaks from 62`
 	b := 1
-	for i := 0; i < k; i++ { // want `multiplicative binomial loop in int: the product b\*\(n - i\) wraps`
+	for i := 0; i < k; i++ { // want `multiplicative binomial loop in int: the product b \* \(n - i\) wraps`
 		b *= n - i
 		b /= i + 1
 	}
@@ -28,7 +28,7 @@ func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, b
 func Availability(n, k int, p float64) float64 {
 	sum := 0.0
 	for i := k; i <= n; i++ {
-		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n,k\)·p\^k·\(1−p\)\^\(n−k\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
+		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n, i\)·p\^i·\(1−p\)\^\(n−i\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
 	}
 	return sum
 }
@@ -58,7 +58,7 @@ func ChooseFloat(n, k int) float64 { // want ChooseFloat:`binomial of parameter 
 // ChooseU counts pump subsets in uint64.
 func ChooseU(n, k uint64) uint64 { // want ChooseU:`binomial of parameter 0, breaks from 63`
 	b := uint64(1)
-	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b\*\(n - i\) wraps before the division for n ≥ 63`
+	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b \* \(n - i\) wraps before the division for n ≥ 63`
 		b = b * (n - i) / (i + 1)
 	}
 	return b

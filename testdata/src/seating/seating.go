@@ -9,7 +9,7 @@ func Arrangements(n, k int) int {
 		return 0
 	}
 	p := 1
-	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors in int wraps: run down to 1 it is a factorial, which wraps from 21!; the largest factor is not bounded here`
+	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors from n down in int wraps: when k = n it is n!, which wraps for n ≥ 21; n is not bounded here`
 		p *= i
 	}
 	return p
@@ -18,7 +18,7 @@ func Arrangements(n, k int) int {
 // Arrangements64 is Arrangements in int64, counting down from n.
 func Arrangements64(n, k int64) int64 {
 	p := int64(1)
-	for i := n; i > n-k; i-- { // want `falling factorial of k factors in int64 wraps`
+	for i := n; i > n-k; i-- { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= i
 	}
 	return p
@@ -28,7 +28,7 @@ func Arrangements64(n, k int64) int64 {
 // guests, with the factor written one above the loop variable.
 func Prizes(n, k uint64) uint64 {
 	p := uint64(1)
-	for i := n - k; i < n; i++ { // want `falling factorial of k factors in uint64 wraps`
+	for i := n - k; i < n; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
 		p *= i + 1
 	}
 	return p
@@ -78,7 +78,7 @@ func Judges(n, k int) int {
 // integers (Python's arbitrary-precision int).
 func Podium(n int) int {
 	p := 1
-	for i := n - 2; i <= n; i++ { // want `falling factorial of 3 factors in int wraps for a largest factor ≥ 2097154; the largest factor is not bounded here`
+	for i := n - 2; i <= n; i++ { // want `falling factorial of 3 factors in int wraps for a largest factor ≥ 2097154; n is not bounded here`
 		p *= i
 	}
 	return p

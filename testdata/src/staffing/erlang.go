@@ -13,9 +13,9 @@ import (
 func ErlangC(a float64, c int) float64 {
 	sum := 0.0
 	for k := 0; k < c; k++ {
-		sum += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k) // want `power-over-factorial term x\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
+		sum += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k) // want `power-over-factorial term a\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 	}
-	top := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c) * float64(c) / (float64(c) - a) // want `power-over-factorial term x\^k/k! in float64: the divisor c! overflows to \+Inf for c ≥ 171`
+	top := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c) * float64(c) / (float64(c) - a) // want `power-over-factorial term a\^c/c! in float64: the divisor c! overflows to \+Inf for c ≥ 171`
 	return top / (sum + top)
 }
 
@@ -44,12 +44,12 @@ func ErlangB(a float64, c int) float64 {
 // Arrivals returns the probability of exactly k calls in an interval in
 // which lambda calls arrive on average.
 func Arrivals(lambda float64, k int) float64 {
-	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term λ\^k·e\^\(−λ\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }
 
 // ArrivalsInt divides by an int64 factorial, which wraps much sooner.
 func ArrivalsInt(lambda float64, k int) float64 {
-	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(mathkit.Factorial(k)) // want `Poisson-style term λ\^k·e\^\(−λ\)/k! in int64: the divisor k! wraps for k ≥ 21`
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(mathkit.Factorial(k)) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in int64: the divisor k! wraps for k ≥ 21`
 }
 
 // QuietHour is the chance of at most 3 calls in a quiet hour: every k is
@@ -86,7 +86,7 @@ func Surge(lambda float64, k int) float64 {
 	for i := 0; i < k; i++ {
 		p *= lambda
 	}
-	return p * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term λ\^k·e\^\(−λ\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
+	return p * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }
 
 // SurgeCapped is Surge with a power loop of at most 40 steps.
