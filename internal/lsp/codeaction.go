@@ -1,5 +1,7 @@
 package lsp
 
+// Code actions: the quick fixes offered for the findings on record.
+
 import (
 	"sort"
 	"strings"
@@ -45,12 +47,6 @@ func (s *server) codeActions(p codeActionParams) []CodeAction {
 		}
 	}
 	return actions
-}
-
-func (s *server) cached(path string) *fileResult {
-	s.mu.Lock()
-	defer s.mu.Unlock()
-	return s.cache[path]
 }
 
 // wantsQuickFix reports whether a CodeActionContext.only filter admits
