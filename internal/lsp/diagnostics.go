@@ -10,9 +10,10 @@ import (
 	"time"
 )
 
-// fileResult is what the server last published for one file.
+// fileResult is what the server last published for one file: the
+// findings of one analysed state of its buffer.
 type fileResult struct {
-	version  int32
+	doc      *document
 	findings []finding
 }
 
@@ -70,15 +71,15 @@ func (s *server) refresh(path string, onlyIfStale bool) {
 	if !ok {
 		return // closed while waiting
 	}
-	if r := s.cached(path); onlyIfStale && r != nil && r.version == d.version {
+	if r := s.cached(path); onlyIfStale && r != nil && r.doc == d {
 		s.log.Printf("%s (version %d) already analysed", filepath.Base(path), d.version)
 		return
 	}
 	start := time.Now()
-	res, err := analyze(s.ctx, &s.opts, &s.pkgs, docs, path, s.encoding())
+	res, err := s.analyze(docs, path)
 	if err != nil {
 		s.reportProblem(path, err)
-		res = &result{versions: map[string]int32{path: d.version}}
+		res = &result{docs: map[string]*document{path: d}}
 	} else {
 		s.mu.Lock()
 		delete(s.reported, path)
@@ -89,8 +90,8 @@ func (s *server) refresh(path string, onlyIfStale bool) {
 		how = "re-checked"
 	}
 	s.log.Printf("analysed %s (version %d, %s) in %v", filepath.Base(path), d.version, how, time.Since(start).Round(time.Millisecond))
-	for f, v := range res.versions {
-		s.store(f, v, res.findings[f])
+	for f, ad := range res.docs {
+		s.store(ad, res.findings[f])
 	}
 }
 
@@ -117,11 +118,15 @@ func firstLine(s string) string {
 	return first
 }
 
-// store records and publishes the findings for path if its buffer is still
-// at version v.
-func (s *server) store(path string, v int32, fs []finding) {
-	d := s.docs.get(path)
-	if d == nil || d.version != v {
+// store records and publishes the findings of the analysed document ad if
+// its buffer is still in the state analysed and in step with the client.
+// The check and the publication happen under publishMu, which a change
+// that puts the buffer out of step and a close also take to withdraw the
+// findings, so stale findings cannot be published after the withdrawal.
+func (s *server) store(ad *document, fs []finding) {
+	s.publishMu.Lock()
+	defer s.publishMu.Unlock()
+	if d := s.docs.get(ad.path); d != ad || !d.inStep() {
 		return
 	}
 	s.mu.Lock()
@@ -129,9 +134,10 @@ func (s *server) store(path string, v int32, fs []finding) {
 		s.mu.Unlock()
 		return
 	}
-	s.cache[path] = &fileResult{version: v, findings: fs}
+	s.cache[ad.path] = &fileResult{doc: ad, findings: fs}
 	s.mu.Unlock()
-	s.publish(d.uri, &v, fs)
+	v := ad.version
+	s.publish(ad.uri, &v, fs)
 }
 
 // publish sends textDocument/publishDiagnostics; no findings clears the

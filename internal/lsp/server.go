@@ -58,15 +58,27 @@ type server struct {
 	timers     map[string]*time.Timer // pending analyses per path
 	reported   map[string]bool        // paths whose load problem was logged
 	closing    bool
+	releasing  bool // a release of closed packages' state is pending
 
 	analysisMu sync.Mutex     // one analysis at a time: the machine is shared
+	publishMu  sync.Mutex     // orders publications of one document's findings and their withdrawal
 	wg         sync.WaitGroup // timers and request goroutines in flight
+
+	// analyzeFn, when set, replaces the loading and analysis of a
+	// package, so that the protocol's handling can be fuzzed at the
+	// speed of its own code.
+	analyzeFn func(docs map[string]*document, path string, enc encoding) (*result, error)
 }
 
 // Serve runs a language server reading requests from in and writing
 // responses and notifications to out until the client sends exit, in ends,
 // or ctx is done. It returns nil after an orderly shutdown and exit.
 func Serve(ctx context.Context, in io.Reader, out io.Writer, opts Options) error {
+	return serve(ctx, in, out, opts, nil)
+}
+
+// serve is Serve with the package analysis replaced by analyzeFn, if set.
+func serve(ctx context.Context, in io.Reader, out io.Writer, opts Options, analyzeFn func(map[string]*document, string, encoding) (*result, error)) error {
 	opts = withDefaults(opts)
 	ctx, cancel := context.WithCancel(ctx)
 	s := &server{
@@ -79,6 +91,8 @@ func Serve(ctx context.Context, in io.Reader, out io.Writer, opts Options) error
 		cache:    make(map[string]*fileResult),
 		timers:   make(map[string]*time.Timer),
 		reported: make(map[string]bool),
+
+		analyzeFn: analyzeFn,
 	}
 	err := s.loop(ctx, newFrameReader(in))
 	s.stop()
@@ -139,4 +153,12 @@ func (s *server) recoverTo(what string) {
 		s.log.Printf("panic in %s: %v", what, p)
 		s.showLog(logError, fmt.Sprintf("overfact: internal error in %s: %v", what, p))
 	}
+}
+
+// analyze analyses the package of path against the open buffers docs.
+func (s *server) analyze(docs map[string]*document, path string) (*result, error) {
+	if s.analyzeFn != nil {
+		return s.analyzeFn(docs, path, s.encoding())
+	}
+	return analyze(s.ctx, &s.opts, &s.pkgs, docs, path, s.encoding())
 }
