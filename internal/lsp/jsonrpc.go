@@ -118,9 +118,28 @@ func (fr *frameReader) next() ([]byte, error) {
 	return body, nil
 }
 
-// indexFold is strings.Index ignoring ASCII case.
+// indexFold is strings.Index ignoring ASCII case; sub is lower case. It
+// compares bytes, so that its index is one into s: lower-casing s first
+// would not do, since strings.ToLower replaces each invalid UTF-8 byte
+// with the three bytes of U+FFFD and so shifts the index.
 func indexFold(s, sub string) int {
-	return strings.Index(strings.ToLower(s), sub)
+	for i := 0; i+len(sub) <= len(s); i++ {
+		j := 0
+		for j < len(sub) && lowerASCII(s[i+j]) == sub[j] {
+			j++
+		}
+		if j == len(sub) {
+			return i
+		}
+	}
+	return -1
+}
+
+func lowerASCII(c byte) byte {
+	if 'A' <= c && c <= 'Z' {
+		return c + 'a' - 'A'
+	}
+	return c
 }
 
 // isToken reports whether s is a plausible header field name (RFC 7230

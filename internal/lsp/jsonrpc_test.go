@@ -32,6 +32,10 @@ func TestFrameReader(t *testing.T) {
 		{"short body", "Content-Length: 10\r\n\r\n{}", []string{"!unexpected"}},
 		{"eof in header", "Content-Length: 10\r\n", []string{"!unexpected"}},
 		{"empty", "", []string{"!eof"}},
+		// Invalid UTF-8 before a glued header (found by FuzzServe): the
+		// header's index must be one into the line as read.
+		{"invalid UTF-8 before header", "\x9b\x9b}Content-Length: 2\r\n\r\n{}", []string{"{}", "!eof"}},
+		{"upper-case header", "CONTENT-LENGTH: 2\r\n\r\n{}", []string{"{}", "!eof"}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			fr := newFrameReader(strings.NewReader(tc.stream))
