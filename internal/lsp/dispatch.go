@@ -53,8 +53,8 @@ func (s *server) loop(ctx context.Context, fr *frameReader) error {
 
 // handle dispatches one message body; done reports that exit was received.
 func (s *server) handle(body []byte) (done bool, err error) {
-	var m message
-	if err := json.Unmarshal(body, &m); err != nil {
+	m, err := decodeMessage(body)
+	if err != nil {
 		s.log.Printf("malformed message: %v", err)
 		if id := guessID(body); id != nil {
 			s.replyError(id, codeParseError, "parse error: "+err.Error())

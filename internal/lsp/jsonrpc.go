@@ -44,6 +44,25 @@ type rpcError struct {
 
 func (e *rpcError) Error() string { return fmt.Sprintf("jsonrpc error %d: %s", e.Code, e.Message) }
 
+// decodeMessage decodes a message body. Member names are matched exactly,
+// as JSON-RPC 2.0 names them: encoding/json alone would take "ID" or "iD"
+// for "id", and so answer a notification as a request.
+func decodeMessage(body []byte) (*message, error) {
+	var members map[string]json.RawMessage
+	if err := json.Unmarshal(body, &members); err != nil {
+		return nil, err
+	}
+	m := new(message)
+	for name, dst := range map[string]any{"jsonrpc": &m.JSONRPC, "id": &m.ID, "method": &m.Method, "params": &m.Params, "result": &m.Result, "error": &m.Error} {
+		if raw, ok := members[name]; ok {
+			if err := json.Unmarshal(raw, dst); err != nil {
+				return nil, fmt.Errorf("member %q: %w", name, err)
+			}
+		}
+	}
+	return m, nil
+}
+
 // errNoLength reports a header block without a usable Content-Length; the
 // body that may follow cannot be delimited, so the reader resynchronises on
 // the next header.

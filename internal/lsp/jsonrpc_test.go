@@ -128,7 +128,13 @@ func TestBadInput(t *testing.T) {
 	c.notify("textDocument/didOpen", map[string]any{"textDocument": map[string]any{"uri": "untitled:Untitled-1", "languageId": "go", "version": 1, "text": "package x"}})
 	c.notify("textDocument/didClose", map[string]any{"textDocument": map[string]any{"uri": "::"}})
 
-	// The server still works: the skipped shutdown (id 555) was not obeyed.
+	// Member names are case-sensitive (JSON-RPC 2.0 section 4): with "iD"
+	// instead of "id" this is a notification, which is not answered, and
+	// shutdown is not a notification the server knows (found by FuzzServe).
+	c.sendRaw(frameOf(`{"jsonrpc":"2.0","iD":556,"method":"shutdown"}`))
+
+	// The server still works: the skipped shutdowns (ids 555 and 556)
+	// were not obeyed.
 	if err := c.shutdown(); err != nil {
 		t.Errorf("Serve = %v", err)
 	}
