@@ -32,19 +32,25 @@ type finding struct {
 type fix struct {
 	title string
 	edits map[string][]TextEdit
+	// base holds, for each edited file, the open document whose text the
+	// edits were computed against, or nil for a file that was not open
+	// (whose text was read from disk). The fix is offered only while each
+	// of those files is still in that state.
+	base map[string]*document
 }
 
 // result is the result of analysing the package of one file at one
 // snapshot of the open buffers.
 type result struct {
-	// versions holds, for each open file of the analysed package, the
-	// version of the buffer that was analysed; findings are keyed by the
-	// same paths.
-	versions map[string]int32
+	// docs holds, for each open file of the analysed package, the state
+	// of its buffer that was analysed; findings are keyed by the same
+	// paths.
+	docs     map[string]*document
 	findings map[string][]finding
 	// rechecked says the package was re-checked against cached
 	// dependencies rather than loaded afresh.
 	rechecked bool
+	seen      map[string]bool // findings added, by file, range and message
 }
 
 // analyze loads the package containing path with the open buffers as an
@@ -72,6 +78,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 	if memo != nil {
 		analyzers = memo.wrap(analyzers, roots[0].Types)
 	}
+	analyzers = readingOverlay(analyzers, overlay)
 	// Sequential keeps every action on this goroutine, where the deferred
 	// recover above can catch an analyzer's panic; in parallel mode it
 	// would kill the process.
@@ -104,30 +111,44 @@ func overlayOf(docs map[string]*document) map[string][]byte {
 // collect converts the root actions' diagnostics that fall in open files
 // of the analysed packages.
 func collect(graph *checker.Graph, roots []*packages.Package, docs map[string]*document, conv *converter) *result {
-	res := &result{versions: make(map[string]int32), findings: make(map[string][]finding)}
+	res := newResult()
 	for _, p := range roots {
 		for _, f := range p.CompiledGoFiles {
 			if d, ok := docs[f]; ok {
-				res.versions[f] = d.version
+				res.docs[f] = d
 			}
 		}
 	}
-	seen := make(map[string]bool)
 	for _, act := range graph.Roots {
 		for _, d := range act.Diagnostics {
-			file, fd, ok := conv.finding(d)
-			if _, open := res.versions[file]; !ok || !open {
-				continue
-			}
-			key := fmt.Sprintf("%s:%v:%s", file, fd.diag.Range, fd.diag.Message)
-			if seen[key] {
-				continue // the same file analysed as package and test variant
-			}
-			seen[key] = true
-			res.findings[file] = append(res.findings[file], fd)
+			res.add(conv, docs, d)
 		}
 	}
 	return res
+}
+
+func newResult() *result {
+	return &result{docs: make(map[string]*document), findings: make(map[string][]finding), seen: make(map[string]bool)}
+}
+
+// add converts d and records it if it falls in an analysed open file;
+// each fix remembers the documents it was computed against.
+func (res *result) add(conv *converter, docs map[string]*document, d analysis.Diagnostic) {
+	file, fd, ok := conv.finding(d)
+	if _, open := res.docs[file]; !ok || !open {
+		return
+	}
+	for _, fx := range fd.fixes {
+		for f := range fx.edits {
+			fx.base[f] = docs[f]
+		}
+	}
+	key := fmt.Sprintf("%s:%v:%s", file, fd.diag.Range, fd.diag.Message)
+	if res.seen[key] {
+		return // the same file analysed as package and test variant
+	}
+	res.seen[key] = true
+	res.findings[file] = append(res.findings[file], fd)
 }
 
 // rootFailure returns an error when no analysis of the file's packages
@@ -200,7 +221,9 @@ func loadProblem(path string, pkgs []*packages.Package) error {
 }
 
 // converter turns go/analysis positions into protocol ranges, reading each
-// file's text from the overlay or, for files not open, from disk.
+// file's text from the overlay or, for files not open, from disk; a file
+// whose text no longer has the size it was parsed with has changed since,
+// and positions in it are not converted.
 type converter struct {
 	enc     encoding
 	overlay map[string][]byte
@@ -238,6 +261,9 @@ func (c *converter) span(pos, end token.Pos) (string, Range, bool) {
 	}
 	file := filepath.Clean(tf.Name())
 	text := c.text(file)
+	if len(text) != tf.Size() {
+		return "", Range{}, false
+	}
 	return file, c.enc.toRange(text, tf.Offset(pos), tf.Offset(end)), true
 }
 
@@ -267,17 +293,64 @@ func (c *converter) finding(d analysis.Diagnostic) (string, finding, bool) {
 	}
 	fd := finding{diag: pd}
 	for _, sf := range d.SuggestedFixes {
-		fx := fix{title: sf.Message, edits: make(map[string][]TextEdit)}
+		fx := fix{title: sf.Message, edits: make(map[string][]TextEdit), base: make(map[string]*document)}
+		complete := true
 		for _, e := range sf.TextEdits {
 			ef, er, ok := c.span(e.Pos, e.End)
 			if !ok {
-				continue
+				complete = false // part of a fix would be worse than none
+				break
 			}
 			fx.edits[ef] = append(fx.edits[ef], TextEdit{Range: er, NewText: string(e.NewText)})
 		}
-		if len(fx.edits) > 0 {
+		if complete && len(fx.edits) > 0 {
 			fd.fixes = append(fd.fixes, fx)
 		}
 	}
 	return file, fd, true
+}
+
+// readingOverlay returns copies of as, and of the analyzers they require,
+// whose passes read the files named in overlay from it. The checker's
+// Pass.ReadFile reads the disk, but the syntax of an open file comes from
+// its buffer, and an analyzer or fix builder that reads the source must
+// see the text its positions refer to: a fix built from the disk would be
+// computed for a text the editor does not show.
+//
+// Every analyzer of the graph is copied, so that no analyzer appears both
+// as itself and as its copy (the two would declare the same fact types),
+// and each original runs with the pass it expects: its own identity, and
+// its requirements' results keyed by the originals.
+func readingOverlay(as []*analysis.Analyzer, overlay map[string][]byte) []*analysis.Analyzer {
+	orig := make(map[*analysis.Analyzer]*analysis.Analyzer) // copy -> original
+	copies := make(map[*analysis.Analyzer]*analysis.Analyzer)
+	var copyOf func(a *analysis.Analyzer) *analysis.Analyzer
+	copyOf = func(a *analysis.Analyzer) *analysis.Analyzer {
+		if c, ok := copies[a]; ok {
+			return c
+		}
+		c := *a
+		copies[a], orig[&c] = &c, a
+		c.Requires = make([]*analysis.Analyzer, len(a.Requires))
+		for i, r := range a.Requires {
+			c.Requires[i] = copyOf(r)
+		}
+		c.Run = func(pass *analysis.Pass) (any, error) {
+			p := unwrapped(pass, a, orig)
+			disk := pass.ReadFile
+			p.ReadFile = func(name string) ([]byte, error) {
+				if text, ok := overlay[filepath.Clean(name)]; ok {
+					return text, nil
+				}
+				return disk(name)
+			}
+			return a.Run(p)
+		}
+		return &c
+	}
+	out := make([]*analysis.Analyzer, len(as))
+	for i, a := range as {
+		out[i] = copyOf(a)
+	}
+	return out
 }

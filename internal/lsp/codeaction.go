@@ -1,5 +1,7 @@
 package lsp
 
+// Code actions: the quick fixes offered for the findings on record.
+
 import (
 	"sort"
 	"strings"
@@ -8,7 +10,9 @@ import (
 // codeActions answers textDocument/codeAction with the suggested fixes of
 // the findings whose range meets the requested one. If the findings on
 // record are older than the buffer, the file is analysed first, so a fix is
-// never computed against text the client no longer has.
+// never computed against text the client no longer has. A document that is
+// out of step gets no actions, and a fix is offered only while every file
+// it edits is in the state its edits were computed for.
 func (s *server) codeActions(p codeActionParams) []CodeAction {
 	actions := []CodeAction{} // an empty list, not null: some clients mind
 	if !wantsQuickFix(p.Context.Only) {
@@ -18,13 +22,13 @@ func (s *server) codeActions(p codeActionParams) []CodeAction {
 	if err != nil {
 		return actions
 	}
-	d := s.docs.get(path)
-	if d == nil {
+	if !s.docs.get(path).inStep() {
 		return actions
 	}
 	s.refresh(path, true)
+	d := s.docs.get(path)
 	r := s.cached(path)
-	if r == nil || r.version != d.version {
+	if r == nil || r.doc != d || !d.inStep() {
 		return actions
 	}
 	s.mu.Lock()
@@ -35,6 +39,9 @@ func (s *server) codeActions(p codeActionParams) []CodeAction {
 			continue
 		}
 		for i, fx := range f.fixes {
+			if !s.current(fx) {
+				continue
+			}
 			actions = append(actions, CodeAction{
 				Title:       fx.title,
 				Kind:        kindQuickFix,
@@ -45,12 +52,6 @@ func (s *server) codeActions(p codeActionParams) []CodeAction {
 		}
 	}
 	return actions
-}
-
-func (s *server) cached(path string) *fileResult {
-	s.mu.Lock()
-	defer s.mu.Unlock()
-	return s.cache[path]
 }
 
 // wantsQuickFix reports whether a CodeActionContext.only filter admits
@@ -78,9 +79,22 @@ func before(p, q Position) bool {
 	return p.Line < q.Line || p.Line == q.Line && p.Character < q.Character
 }
 
+// current reports whether every file fx edits is still in the state the
+// edits were computed for: the same open, in-step document, or a file
+// that was closed then and is closed now.
+func (s *server) current(fx fix) bool {
+	for p, base := range fx.base {
+		if d := s.docs.get(p); d != base || base != nil && !base.inStep() {
+			return false
+		}
+	}
+	return true
+}
+
 // workspaceEdit converts a fix into the edit form the client accepts. Open
-// documents get their version in documentChanges so that a client can refuse
-// an edit made for text it has since changed.
+// documents get the version their edits were computed for in
+// documentChanges, so that a client can refuse an edit made for text it
+// has since changed.
 func (s *server) workspaceEdit(fx fix, docChanges bool) *WorkspaceEdit {
 	paths := make([]string, 0, len(fx.edits))
 	for p := range fx.edits {
@@ -94,7 +108,7 @@ func (s *server) workspaceEdit(fx fix, docChanges bool) *WorkspaceEdit {
 	for _, p := range paths {
 		uri := pathToURI(p)
 		var version *int32
-		if d := s.docs.get(p); d != nil {
+		if d := fx.base[p]; d != nil {
 			uri = d.uri
 			v := d.version
 			version = &v

@@ -15,4 +15,18 @@
 // top of encoding/json because the x/tools implementations are internal.
 // The server is meant to run beside gopls, not to replace it: it answers only
 // the lifecycle, document synchronisation and code action requests.
+//
+// The files follow the protocol's areas, as gopls's server does:
+//
+//   - jsonrpc.go: Content-Length framing and JSON-RPC messages (transport);
+//   - protocol.go, position.go: the protocol's types and position encodings;
+//   - server.go: options, per-connection state, Serve;
+//   - dispatch.go: the read loop and routing of requests and notifications;
+//   - lifecycle.go: initialize, shutdown, exit;
+//   - textsync.go and documents.go: didOpen/didChange/didSave/didClose and
+//     the store of open buffers;
+//   - diagnostics.go: scheduling analyses and publishing their findings;
+//   - codeaction.go: quick fixes;
+//   - analyze.go, reuse.go, memo.go: loading and analysing a package, and
+//     what is kept between analyses.
 package lsp

@@ -314,3 +314,40 @@ func (b *syncBuffer) String() string {
 	defer b.mu.Unlock()
 	return b.buf.String()
 }
+
+// openDesk starts a server with opts on a module holding deskSource as
+// desk.go, opens the file and waits for its findings.
+func openDesk(t *testing.T, opts Options) (c *client, path, uri string) {
+	t.Helper()
+	dir := writeModule(t, map[string]string{"desk.go": deskSource})
+	c = startServer(t, opts)
+	c.initialize(map[string]any{})
+	path = filepath.Join(dir, "desk.go")
+	uri = c.open(path, deskSource)
+	c.diagnosticsFor(uri, anyDiags)
+	return c, path, uri
+}
+
+// change sends a didChange of uri to version with the given content
+// changes: a string is a full text, a textChange a ranged one.
+func (c *client) change(uri string, version int, changes ...any) {
+	c.t.Helper()
+	var list []any
+	for _, ch := range changes {
+		switch ch := ch.(type) {
+		case string:
+			list = append(list, map[string]any{"text": ch})
+		case textChange:
+			list = append(list, map[string]any{"range": ch.r, "text": ch.text})
+		}
+	}
+	c.notify("textDocument/didChange", map[string]any{
+		"textDocument":   map[string]any{"uri": uri, "version": version},
+		"contentChanges": list,
+	})
+}
+
+type textChange struct {
+	r    Range
+	text string
+}

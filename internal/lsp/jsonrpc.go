@@ -44,6 +44,25 @@ type rpcError struct {
 
 func (e *rpcError) Error() string { return fmt.Sprintf("jsonrpc error %d: %s", e.Code, e.Message) }
 
+// decodeMessage decodes a message body. Member names are matched exactly,
+// as JSON-RPC 2.0 names them: encoding/json alone would take "ID" or "iD"
+// for "id", and so answer a notification as a request.
+func decodeMessage(body []byte) (*message, error) {
+	var members map[string]json.RawMessage
+	if err := json.Unmarshal(body, &members); err != nil {
+		return nil, err
+	}
+	m := new(message)
+	for name, dst := range map[string]any{"jsonrpc": &m.JSONRPC, "id": &m.ID, "method": &m.Method, "params": &m.Params, "result": &m.Result, "error": &m.Error} {
+		if raw, ok := members[name]; ok {
+			if err := json.Unmarshal(raw, dst); err != nil {
+				return nil, fmt.Errorf("member %q: %w", name, err)
+			}
+		}
+	}
+	return m, nil
+}
+
 // errNoLength reports a header block without a usable Content-Length; the
 // body that may follow cannot be delimited, so the reader resynchronises on
 // the next header.
@@ -118,9 +137,28 @@ func (fr *frameReader) next() ([]byte, error) {
 	return body, nil
 }
 
-// indexFold is strings.Index ignoring ASCII case.
+// indexFold is strings.Index ignoring ASCII case; sub is lower case. It
+// compares bytes, so that its index is one into s: lower-casing s first
+// would not do, since strings.ToLower replaces each invalid UTF-8 byte
+// with the three bytes of U+FFFD and so shifts the index.
 func indexFold(s, sub string) int {
-	return strings.Index(strings.ToLower(s), sub)
+	for i := 0; i+len(sub) <= len(s); i++ {
+		j := 0
+		for j < len(sub) && lowerASCII(s[i+j]) == sub[j] {
+			j++
+		}
+		if j == len(sub) {
+			return i
+		}
+	}
+	return -1
+}
+
+func lowerASCII(c byte) byte {
+	if 'A' <= c && c <= 'Z' {
+		return c + 'a' - 'A'
+	}
+	return c
 }
 
 // isToken reports whether s is a plausible header field name (RFC 7230

@@ -32,6 +32,10 @@ func TestFrameReader(t *testing.T) {
 		{"short body", "Content-Length: 10\r\n\r\n{}", []string{"!unexpected"}},
 		{"eof in header", "Content-Length: 10\r\n", []string{"!unexpected"}},
 		{"empty", "", []string{"!eof"}},
+		// Invalid UTF-8 before a glued header (found by FuzzServe): the
+		// header's index must be one into the line as read.
+		{"invalid UTF-8 before header", "\x9b\x9b}Content-Length: 2\r\n\r\n{}", []string{"{}", "!eof"}},
+		{"upper-case header", "CONTENT-LENGTH: 2\r\n\r\n{}", []string{"{}", "!eof"}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			fr := newFrameReader(strings.NewReader(tc.stream))
@@ -124,7 +128,13 @@ func TestBadInput(t *testing.T) {
 	c.notify("textDocument/didOpen", map[string]any{"textDocument": map[string]any{"uri": "untitled:Untitled-1", "languageId": "go", "version": 1, "text": "package x"}})
 	c.notify("textDocument/didClose", map[string]any{"textDocument": map[string]any{"uri": "::"}})
 
-	// The server still works: the skipped shutdown (id 555) was not obeyed.
+	// Member names are case-sensitive (JSON-RPC 2.0 section 4): with "iD"
+	// instead of "id" this is a notification, which is not answered, and
+	// shutdown is not a notification the server knows (found by FuzzServe).
+	c.sendRaw(frameOf(`{"jsonrpc":"2.0","iD":556,"method":"shutdown"}`))
+
+	// The server still works: the skipped shutdowns (ids 555 and 556)
+	// were not obeyed.
 	if err := c.shutdown(); err != nil {
 		t.Errorf("Serve = %v", err)
 	}

@@ -153,9 +153,23 @@ func (c *loadCache) add(pkg *packages.Package, overlay map[string][]byte) *loadE
 	e := &loadEntry{pkg: pkg, key: outsideKey(pkg, overlay), stamps: mutableInputs(pkg), facts: newFactMemo()}
 	c.entries = append([]*loadEntry{e}, c.entries...)
 	if len(c.entries) > maxCached {
+		clear(c.entries[maxCached:]) // the backing array would keep the evicted graph
 		c.entries = c.entries[:maxCached]
 	}
 	return e
+}
+
+// forget drops the entries of packages none of whose files is open, with
+// their dependency graphs and memos, and reports whether it dropped any:
+// a package the editor has closed is not worth the memory it pins.
+func (c *loadCache) forget(open func(path string) bool) bool {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	n := len(c.entries)
+	c.entries = slices.DeleteFunc(c.entries, func(e *loadEntry) bool { // zeroes the tail
+		return !slices.ContainsFunc(e.pkg.CompiledGoFiles, open)
+	})
+	return len(c.entries) < n
 }
 
 // outsideKey fingerprints the overlay as it matters to pkg's dependencies:

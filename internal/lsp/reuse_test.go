@@ -2,12 +2,15 @@ package lsp
 
 import (
 	"context"
+	"go/types"
 	"os"
 	"path/filepath"
 	"reflect"
 	"strings"
 	"testing"
 	"time"
+
+	"golang.org/x/tools/go/packages"
 )
 
 // TestReuseMatchesFullLoad analyses a sequence of edits twice, once through
@@ -47,7 +50,7 @@ func TestReuseMatchesFullLoad(t *testing.T) {
 		if werr == nil && warm.rechecked != e.reused {
 			t.Errorf("%s: result says rechecked = %v", e.name, warm.rechecked)
 		}
-		if werr == nil && (!reflect.DeepEqual(warm.findings, cold.findings) || !reflect.DeepEqual(warm.versions, cold.versions)) {
+		if werr == nil && (!reflect.DeepEqual(warm.findings, cold.findings) || !reflect.DeepEqual(warm.docs, cold.docs)) {
 			t.Errorf("%s: cached result\n%+v\nfresh result\n%+v", e.name, warm, cold)
 		}
 	}
@@ -121,5 +124,45 @@ func TestReuseLimit(t *testing.T) {
 	}
 	if rechecks != maxUses {
 		t.Errorf("%d re-checks, want %d", rechecks, maxUses)
+	}
+}
+
+// TestCacheReleases checks that the cache lets go of what it drops: the
+// packages of closed files on forget, and an evicted entry, which the
+// backing array of the entry list must not keep reachable.
+func TestCacheReleases(t *testing.T) {
+	pkg := func(name string) *packages.Package {
+		file := filepath.Join(t.TempDir(), name+".go")
+		return &packages.Package{ID: name, GoFiles: []string{file}, CompiledGoFiles: []string{file}, Types: types.NewPackage(name, name)}
+	}
+	cache := new(loadCache)
+	var all []*packages.Package
+	for _, name := range []string{"a", "b", "c", "d"} {
+		p := pkg(name)
+		all = append(all, p)
+		cache.add(p, nil)
+	}
+	if len(cache.entries) != maxCached {
+		t.Fatalf("%d entries, want %d", len(cache.entries), maxCached)
+	}
+	for _, e := range cache.entries[len(cache.entries):cap(cache.entries)] {
+		if e != nil {
+			t.Errorf("evicted entry %s still reachable from the entry list", e.pkg.ID)
+		}
+	}
+	open := all[2].CompiledGoFiles[0] // c's file is open
+	if !cache.forget(func(p string) bool { return p == open }) {
+		t.Error("forget dropped nothing")
+	}
+	if len(cache.entries) != 1 || cache.entries[0].pkg.ID != "c" {
+		t.Errorf("after forget: %d entries, want c's alone", len(cache.entries))
+	}
+	for _, e := range cache.entries[len(cache.entries):cap(cache.entries)] {
+		if e != nil {
+			t.Errorf("dropped entry %s still reachable from the entry list", e.pkg.ID)
+		}
+	}
+	if cache.forget(func(p string) bool { return p == open }) {
+		t.Error("a second forget dropped something")
 	}
 }
