@@ -16,7 +16,9 @@ func bd0(x, m dd) dd {
 	if m.hi < tinyMean {
 		l = ddLog(x).sub(ddLog(m))
 	} else {
-		l = ddLog(x.div(m))
+		// ln(x/M) = ln(1 + (x−M)/M) with x−M exact: for x near M the
+		// rounding of x/M would be magnified by the factor x.
+		l = ddLog1p(x.sub(m).div(m))
 	}
 	return x.mul(l).add(m).sub(x)
 }

@@ -39,7 +39,14 @@ func lnBetaDD(a, b float64) dd {
 	if a < b {
 		a, b = b, a
 	}
-	if a > 0x1p1000 && b >= stirlingSeriesMin {
+	switch {
+	case a > 0x1p900 && b < stirlingSeriesMin:
+		// ln Γ(a) − ln Γ(a+b) = −b·ψ(a) − b²ψ′(a)/2 − … with
+		// ψ(a) = ln a − 1/(2a) − … (DLMF 5.11.2) and ψ′(a) ≈ 1/a: every
+		// term after −b·ln a is below 2^-890 absolute. (b/a itself would
+		// be subnormal here, and ln(1 − b/(a+b)) would lose its digits.)
+		return lgammaDD(dd{b, 0}).sub(ddLog(dd{a, 0}).mulF(b))
+	case a > 0x1p1000:
 		return lnBetaHuge(a, b)
 	}
 	return lgammaDD(dd{b, 0}).add(lnGammaRatioDD(dd{a, 0}, twoSum(a, b)))

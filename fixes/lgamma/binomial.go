@@ -12,19 +12,32 @@ package lgamma
 
 import "math"
 
+// tinyP is the p below which the mean n·p is formed scaled.
+const tinyP = 0x1p-900
+
 // binomialLogDD returns ln P(X = k) for 0 ≤ k ≤ n and 0 < p < 1.
 func binomialLogDD(k, n int, p float64) dd {
 	q := twoSum(1, -p)
 	nd := ddInt(int64(n))
 	switch k {
 	case 0:
-		return ddLog(q).mul(nd)
+		// n·ln(1−p) through ln(1+x): 1−p itself would lose a p below 2^-53
+		return ddLog1p(dd{-p, 0}).mul(nd)
 	case n:
 		return ddLog(dd{p, 0}).mul(nd)
 	}
 	x, y := ddInt(int64(k)), ddInt(int64(n-k))
-	r := dd{stirlingInt(int64(n)), 0}.addF(-stirlingInt(int64(k))).addF(-stirlingInt(int64(n - k)))
-	r = r.sub(bd0(x, nd.mulF(p))).sub(bd0(y, nd.mul(q)))
+	r := dd{stirlingInt(uint64(n)), 0}.addF(-stirlingInt(uint64(k))).addF(-stirlingInt(uint64(n - k)))
+	var dk dd
+	if p < tinyP {
+		// n·p could be subnormal and lose bits: form it scaled by 2^200.
+		// The mean itself, below 2^-837, vanishes next to k ≥ 1 in bd0.
+		ms := nd.mulF(p * 0x1p200)
+		dk = x.mul(ddLog(x).sub(ddLog(ms)).add(ln2.mulF(200))).sub(x)
+	} else {
+		dk = bd0(x, nd.mulF(p))
+	}
+	r = r.sub(dk).sub(bd0(y, nd.mul(q)))
 	return r.sub(halfLn2Pi).sub(ddLog(x.mul(y).div(nd)).mulF(0.5))
 }
 

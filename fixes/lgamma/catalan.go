@@ -51,7 +51,7 @@ func Catalan(n int) float64 {
 		return math.Inf(1)
 	}
 	m := int64(n)
-	return integerResult(logChooseDD(2*m, m).sub(ddLog(ddInt(m+1))), func() (uint64, bool) {
+	return integerResult(logChooseDD(uint64(2*m), uint64(m)).sub(ddLog(ddInt(m+1))), func() (uint64, bool) {
 		r, ok := CatalanInt64(m)
 		return uint64(r), ok
 	})

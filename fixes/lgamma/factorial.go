@@ -12,13 +12,13 @@ import (
 	"math/bits"
 )
 
-// lnFactDD returns ln n! for n ≥ 0 in double-double.
-func lnFactDD(n int64) dd {
-	if n < int64(len(lnFactTable)) {
+// lnFactDD returns ln n! in double-double.
+func lnFactDD(n uint64) dd {
+	if n < uint64(len(lnFactTable)) {
 		return lnFactTable[n]
 	}
 	// ln n! = (n+½)ln n − n + ½ln 2π + δ(n).
-	x := ddInt(n)
+	x := ddUint(n)
 	return x.addF(0.5).mul(ddLog(x)).sub(x).add(halfLn2Pi).addF(stirlingInt(n))
 }
 
@@ -43,7 +43,7 @@ func logFactorialLarge(n int) float64 {
 	if n < 0 {
 		return math.NaN()
 	}
-	return lnFactDD(int64(n)).float()
+	return lnFactDD(uint64(n)).float()
 }
 
 // maxFactorialFloat is the largest n with n! < MaxFloat64.

@@ -11,14 +11,16 @@ import (
 )
 
 // lnFallingDD returns ln(n!/(n−k)!) for 0 ≤ k ≤ n in double-double.
-func lnFallingDD(n, k int64) dd {
+// ln(n/m) is taken as ln(1 + k/m) with k/m formed directly: the rounding
+// of n/m itself would be magnified by the factor m+½.
+func lnFallingDD(n, k uint64) dd {
 	m := n - k
-	if m < int64(len(lnFactTable)) {
+	if m < uint64(len(lnFactTable)) {
 		return lnFactDD(n).sub(lnFactTable[m])
 	}
-	x, y := ddInt(n), ddInt(m)
-	kd := ddInt(k)
-	r := kd.mul(ddLog(x)).add(y.addF(0.5).mul(ddLog(x.div(y)))).sub(kd)
+	x, y := ddUint(n), ddUint(m)
+	kd := ddUint(k)
+	r := kd.mul(ddLog(x)).add(y.addF(0.5).mul(ddLog1p(kd.div(y)))).sub(kd)
 	return r.addF(stirlingInt(n) - stirlingInt(m))
 }
 
@@ -38,7 +40,7 @@ func LogFalling(n, k int) float64 {
 	case k > n:
 		return math.Inf(-1)
 	}
-	return lnFallingDD(int64(n), int64(k)).float()
+	return lnFallingDD(uint64(n), uint64(k)).float()
 }
 
 // Falling returns the falling factorial n!/(n−k)! = n(n−1)…(n−k+1).
@@ -57,7 +59,7 @@ func Falling(n, k int) float64 {
 	case k > n:
 		return 0
 	}
-	return integerResult(lnFallingDD(int64(n), int64(k)), func() (uint64, bool) {
+	return integerResult(lnFallingDD(uint64(n), uint64(k)), func() (uint64, bool) {
 		return fallingU(uint64(n), uint64(k), math.MaxUint64)
 	})
 }

@@ -1,15 +1,82 @@
 package lgamma
 
-// ln Γ(x) for x > 0: Stirling's series (DLMF §5.11.1, see stirling.go)
-// at z ≥ 16, with smaller arguments shifted up by the recurrence
-// Γ(x) = Γ(x+m)/(x(x+1)…(x+m−1)) (DLMF 5.5.1); negative arguments use
-// the reflection formula Γ(x)Γ(1−x) = π/sin(πx) (DLMF 5.5.3).
+// ln Γ(x). Positive arguments:
+//
+//   - near 1 and 2, where ln Γ has its zeros, the Taylor expansions
+//     ln Γ(1+t) = −γt + Σ (−1)ᵏζ(k)tᵏ/k and
+//     ln Γ(2+t) = (1−γ)t + Σ (−1)ᵏ(ζ(k)−1)tᵏ/k (DLMF 5.7.3) for
+//     |t| ≤ 1/8 and |t| ≤ 1/4, whose leading terms are summed in
+//     double-double, so the result keeps its relative accuracy however
+//     close x is to 1 or 2 (the method of the expansions about the zeros
+//     used by Cody and Hillstrom, "Chebyshev approximations for the
+//     natural logarithm of the gamma function", Math. Comp. 21, 1967);
+//   - 0 < x < 1/8 by ln Γ(x) = ln Γ(1+x) − ln x (DLMF 5.5.1) with the
+//     expansion about 1 at t = x, exact;
+//   - z ≥ 16 by Stirling's series (DLMF 5.11.1, see stirling.go) written
+//     as z(ln z − 1) − ½ln z + ½ln 2π + Σ B₂ₖ/(2k(2k−1)z^(2k−1)), whose
+//     largest term cannot overflow before the result does;
+//   - the rest shifted up to 16 by Γ(x) = Γ(x+m)/(x(x+1)…(x+m−1))
+//     (DLMF 5.5.1).
+//
+// Negative arguments: ln|Γ(x)| = ln Γ(x+n) − ln|x(x+1)…(x+n−1)| with
+// x+n in (0, 1] for x > −20, where ln|Γ| has its zeros and the product is
+// exact enough in double-double; the reflection formula
+// Γ(x)Γ(1−x) = π/sin(πx) (DLMF 5.5.3) below, where |ln|Γ(x)|| > 9.
 
 import "math"
 
+// stirlingAccurateMax is where the float64 series of stirling.go is
+// accurate enough for ln Γ: above 2^20 its rounding error is below
+// 2^-80 absolute while ln Γ(z) exceeds 10⁷.
+const stirlingAccurateMax = 0x1p20
+
+// stirlingSeriesDD returns Σ B₂ₖ/(2k(2k−1)z^(2k−1)) for z ≥ 16, to about
+// 1e-33 absolute: twenty terms (the first omitted is below 1e-34 at
+// z = 16), the six largest in double-double.
+func stirlingSeriesDD(z dd) dd {
+	r := dd{1, 0}.div(z)
+	r2 := r.mul(r)
+	x := r2.hi
+	t := stirlingCoef[len(stirlingCoef)-1].hi
+	for i := len(stirlingCoef) - 2; i >= 6; i-- {
+		t = t*x + stirlingCoef[i].hi
+	}
+	s := dd{t, 0}
+	for i := 5; i >= 0; i-- {
+		s = s.mul(r2).add(stirlingCoef[i])
+	}
+	return s.mul(r)
+}
+
 // lgammaStirling returns ln Γ(z) for z ≥ 16 in double-double.
 func lgammaStirling(z dd) dd {
-	return z.addF(-0.5).mul(ddLog(z)).sub(z).add(halfLn2Pi).addF(stirlingSeries(z.hi))
+	l := ddLog(z)
+	r := z.mul(l.addF(-1)).sub(l.mulF(0.5)).add(halfLn2Pi)
+	if z.hi < stirlingAccurateMax {
+		return r.add(stirlingSeriesDD(z))
+	}
+	return r.addF(stirlingSeries(z.hi))
+}
+
+// Radii and lengths of the expansions about 1 and 2: at the edge the
+// first omitted term is below 2^-64 of the result.
+const (
+	near1Radius = 0.125
+	near2Radius = 0.25
+	nearTerms   = 24
+)
+
+// lgammaNear returns Σ c[k−1]·tᵏ: the tail from t³ on in float64, the
+// first two steps of Horner's rule in double-double. The tail is at most
+// 1/90 of the result for the radii above, so its rounding stays below
+// 2^-59 of it.
+func lgammaNear(t dd, c *[32]dd) dd {
+	x := t.hi
+	s := c[nearTerms-1].hi
+	for i := nearTerms - 2; i >= 2; i-- {
+		s = s*x + c[i].hi
+	}
+	return t.mulF(s).add(c[1]).mul(t).add(c[0]).mul(t)
 }
 
 // lgammaDD returns ln Γ(x) for a finite x > 0 in double-double.
@@ -20,6 +87,15 @@ func lgammaDD(x dd) dd {
 	if x.hi >= stirlingSeriesMin {
 		return lgammaStirling(x)
 	}
+	if t := x.addF(-1); math.Abs(t.hi) <= near1Radius {
+		return lgammaNear(t, &lgamma1Coef)
+	}
+	if t := x.addF(-2); math.Abs(t.hi) <= near2Radius {
+		return lgammaNear(t, &lgamma2Coef)
+	}
+	if x.hi < near1Radius {
+		return lgammaNear(x, &lgamma1Coef).sub(ddLog(x))
+	}
 	p := x
 	z := x.addF(1)
 	for z.hi < stirlingSeriesMin {
@@ -29,17 +105,46 @@ func lgammaDD(x dd) dd {
 	return lgammaStirling(z).sub(ddLog(p))
 }
 
-// lnPi is ln π rounded to float64 (1.1447298858494002; from memory,
-// checked against math/big in the tests).
-const lnPi = 1.1447298858494002
+// reflectMin is where LogGamma changes from the upward recurrence to the
+// reflection formula for negative x.
+const reflectMin = -20
+
+// lnAbsGammaNegDD returns ln|Γ(x)| for finite x < 0 that is not a pole.
+func lnAbsGammaNegDD(x float64) dd {
+	if x > reflectMin {
+		// ln|Γ(x)| = ln Γ(z) − ln|x(x+1)…(z−1)| with z = x+m ≥ 16: one
+		// product, every factor exact in double-double, and no expansion
+		// whose own rounding would be magnified by the cancellation near
+		// the zeros of ln|Γ|.
+		p := dd{x, 0}
+		m := 1.0
+		for ; x+m < stirlingSeriesMin; m++ {
+			p = p.mul(twoSum(x, m))
+		}
+		if p.hi < 0 {
+			p = p.neg()
+		}
+		return lgammaStirling(twoSum(x, m)).sub(ddLog(p))
+	}
+	// ln|Γ(x)| = ln π − ln|sin πx| − ln Γ(1−x).
+	return lnPiDD.sub(ddLog(sinPiAbsDD(x))).sub(lgammaDD(twoSum(1, -x)))
+}
+
+// lnPiDD is ln π as a double-double (from mpmath, 50 digits:
+// 1.1447298858494001741434273513530587116472948129153).
+var lnPiDD = dd{1.1447298858494002, 1.0265951162707826e-17}
 
 // isPole reports whether Γ has a pole at x (zero or a negative integer).
 func isPole(x float64) bool { return x <= 0 && x == math.Trunc(x) }
 
 // LogGamma returns ln|Γ(x)|. The sign of Γ(x) is not part of the result;
-// GammaSign returns it, and the pair replaces math.Lgamma. For x > 0 the
-// result is within about 1 ulp; for x < 0 it comes from the reflection
-// formula and loses relative accuracy near the zeros of ln|Γ|.
+// GammaSign returns it, and the pair replaces math.Lgamma.
+//
+// Accuracy (mpmath sweep, docs/numerics.md): within 1 ulp for every
+// finite x, correctly rounded in all but rare cases for x > 0, including
+// near the zeros at 1 and 2. For x < 0 the error near the zeros of
+// ln|Γ| (one pair between each two negative integers down to about −18)
+// is stated in docs/numerics.md.
 //
 // Special cases are:
 //
@@ -61,22 +166,64 @@ func LogGamma(x float64) float64 {
 	case x > 0:
 		return lgammaDD(dd{x, 0}).float()
 	}
-	// ln|Γ(x)| = ln π − ln|sin πx| − ln Γ(1−x).
-	return lnPi - math.Log(math.Abs(sinPi(x))) - lgammaDD(twoSum(1, -x)).float()
+	return lnAbsGammaNegDD(x).float()
 }
 
-// sinPi returns sin(πx) with the argument reduced exactly to [−½, ½]
-// first, so that it stays accurate near the integers.
-func sinPi(x float64) float64 {
-	r := x - 2*math.Round(x/2) // exact: r in [−1, 1]
-	switch {
-	case r > 0.5:
-		r = 1 - r
-	case r < -0.5:
-		r = -1 - r
+// sinPiAbsDD returns |sin(πx)| for finite x that is not an integer, to
+// about 2^-66 relative: the argument is reduced exactly to r in (0, ½]
+// (sin π(n ± r) = ±sin πr), and sin πr, or cos π(½ − r) above ¼, is
+// summed from its Taylor series (DLMF 4.19.1, 4.19.2) to the power 21
+// or 20, where the next term is below 2^-70 for |πr| ≤ π/4; the terms
+// up to the fourth power are in double-double.
+func sinPiAbsDD(x float64) dd {
+	r := math.Abs(x - 2*math.Round(x/2)) // exact: r in [0, 1]
+	if r > 0.5 {
+		r = 1 - r // exact
 	}
-	return math.Sin(math.Pi * r)
+	cos := r > 0.25
+	if cos {
+		r = 0.5 - r // exact for r in [¼, ½]
+	}
+	s := piDD.mulF(r)
+	s2 := s.mul(s)
+	h := s2.hi
+	// Σ (−1)ᵏ s²ᵏ/(2k+j)! for k ≥ 3, j = 1 (sine) or 0 (cosine).
+	j := 1
+	if cos {
+		j = 0
+	}
+	t := 0.0
+	for k := 10; k >= 3; k-- {
+		c := 1 / factTable[2*k+j]
+		if k%2 == 1 {
+			c = -c
+		}
+		t = t*h + c
+	}
+	t *= h * h * h
+	if cos {
+		// 1 − s²/2 + s⁴/24 + t
+		return s2.mul(s2).mul(inv24).sub(s2.mulF(0.5)).addF(t).addF(1)
+	}
+	// s·(1 − s²/6 + s⁴/120 + t)
+	return s.mul(s2.mul(s2).mul(inv120).sub(s2.mul(inv6)).addF(t).addF(1))
 }
+
+// recipDD returns 1/n as a double-double: the error of the float64
+// quotient is (1 − n·hi)/n, whose numerator FMA forms exactly.
+func recipDD(n float64) dd {
+	hi := 1 / n
+	return dd{hi, math.FMA(-n, hi, 1) / n}
+}
+
+var (
+	inv6   = recipDD(6)
+	inv24  = recipDD(24)
+	inv120 = recipDD(120)
+	// piDD is π as a double-double (common practice; the digits are
+	// checked against math/big in the tests).
+	piDD = dd{math.Pi, 1.2246467991473532e-16}
+)
 
 // GammaSign returns the sign of Γ(x): +1 or −1. Γ is positive for x > 0
 // and alternates in sign between the negative integers.

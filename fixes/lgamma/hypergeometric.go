@@ -19,7 +19,7 @@ func hypergeometricSpecial(k, total, successes, draws int) (float64, bool) {
 }
 
 func hypergeometricLogDD(k, total, successes, draws int) dd {
-	n, K, d, kk := int64(total), int64(successes), int64(draws), int64(k)
+	n, K, d, kk := uint64(total), uint64(successes), uint64(draws), uint64(k)
 	return logChooseDD(K, kk).add(logChooseDD(n-K, d-kk)).sub(logChooseDD(n, d))
 }
 

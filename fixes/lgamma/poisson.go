@@ -11,7 +11,7 @@ import "math"
 // poissonLogDD returns ln P(X = k) for k ≥ 1 and finite λ > 0.
 func poissonLogDD(k int, lambda float64) dd {
 	x := ddInt(int64(k))
-	r := bd0(x, dd{lambda, 0}).addF(stirlingInt(int64(k))).add(halfLn2Pi)
+	r := bd0(x, dd{lambda, 0}).addF(stirlingInt(uint64(k))).add(halfLn2Pi)
 	return r.add(ddLog(x).mulF(0.5)).neg()
 }
 
@@ -62,6 +62,9 @@ func PoissonLogPMF(k int, lambda float64) float64 {
 //	PoissonPMF(k, NaN) = NaN
 func PoissonPMF(k int, lambda float64) float64 {
 	if v, ok := poissonSpecial(k, lambda); ok {
+		if k == 0 && !math.IsNaN(v) {
+			return expOf(dd{v, 0}) // e^(−λ), correctly rounded but in rare ties
+		}
 		return math.Exp(v)
 	}
 	return expOf(poissonLogDD(k, lambda))

@@ -8,7 +8,7 @@ import "math"
 
 // logPowOverFactorialDD returns ln|xᵏ/k!| for finite x ≠ 0 and k ≥ 1.
 func logPowOverFactorialDD(x float64, k int) dd {
-	return ddLog(dd{math.Abs(x), 0}).mulF(float64(k)).sub(lnFactDD(int64(k)))
+	return ddLog(dd{math.Abs(x), 0}).mulF(float64(k)).sub(lnFactDD(uint64(k)))
 }
 
 // LogPowOverFactorial returns ln|xᵏ/k!|. The sign of xᵏ/k! is negative

@@ -35,7 +35,7 @@ func stirlingSeries(z float64) float64 {
 }
 
 // stirlingInt returns δ(n) for an integer n ≥ 1.
-func stirlingInt(n int64) float64 {
+func stirlingInt(n uint64) float64 {
 	if n < stirlingSeriesMin {
 		return stirlingTable[n]
 	}
@@ -61,7 +61,7 @@ func StirlingRemainder(n float64) float64 {
 	case math.IsInf(n, 1):
 		return 0
 	case n >= stirlingSeriesMin:
-		return stirlingSeries(n)
+		return stirlingSeriesDD(dd{n, 0}).float()
 	case n == math.Trunc(n):
 		return stirlingTable[int(n)]
 	}
