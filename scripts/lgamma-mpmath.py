@@ -213,8 +213,10 @@ def gen():
         add("x near poles", "LogGamma", [-rng.randint(1, 170) + rng.choice([-1, 1]) * logu(1e-15, 1e-3)])
     # zeros of ln|Γ| on the negative axis: floats next to them
     for z in neg_zeros():
-        for x in near(z, 3):
+        for x in near(z, 40):
             add("x near zeros of ln|Γ|, x < 0", "LogGamma", [x])
+        for _ in range(max(1, N // 40)):
+            add("x near zeros of ln|Γ|, x < 0", "LogGamma", [z * (1 + rng.choice([-1, 1]) * logu(1e-16, 1e-4))])
     for x in [0.5, 1.5, 3.0, 1e-300, 1e300]:
         add("special/adversarial", "MathLgamma", [x])
 
@@ -317,16 +319,12 @@ def gen():
 def neg_zeros():
     """The zeros of ln|Γ(x)| for -18 < x < -2, by mpmath's findroot."""
     zs = []
-    with mp.workdps(40):
+    with mp.workdps(60):
         for n in range(2, 18):
-            f = lambda x: lg(x)
-            for guess in (-n - 1 / mp.factorial(n) * 0.9, -n - 1 + 1 / mp.factorial(n + 1) * 0.9):
-                try:
-                    z = mp.findroot(f, (-n - 1 + mpf(10) ** -30 if guess < -n - 0.5 else -n - mpf(10) ** -30,
-                                        -n - mpf(1) / 2), solver="anderson")
-                    zs.append(float(z))
-                except Exception:
-                    pass
+            m = mp.findroot(mp.digamma, -n - mpf(1) / 2)
+            tiny = mpf(10) ** -55
+            for a, b in ((-n - 1 + tiny, m), (m, -n - tiny)):
+                zs.append(float(mp.findroot(lg, (a, b), solver="anderson")))
     return sorted(set(zs))
 
 

@@ -111,6 +111,13 @@ const reflectMin = -20
 
 // lnAbsGammaNegDD returns ln|Γ(x)| for finite x < 0 that is not a pole.
 func lnAbsGammaNegDD(x float64) dd {
+	if x > -18 && x < -2 {
+		for i := range negZeros {
+			if r, ok := negZeros[i].eval(x); ok {
+				return r
+			}
+		}
+	}
 	if x > reflectMin {
 		// ln|Γ(x)| = ln Γ(z) − ln|x(x+1)…(z−1)| with z = x+m ≥ 16: one
 		// product, every factor exact in double-double, and no expansion
@@ -128,6 +135,33 @@ func lnAbsGammaNegDD(x float64) dd {
 	}
 	// ln|Γ(x)| = ln π − ln|sin πx| − ln Γ(1−x).
 	return lnPiDD.sub(ddLog(sinPiAbsDD(x))).sub(lgammaDD(twoSum(1, -x)))
+}
+
+// negZero is a zero x₀ of ln|Γ| on the negative axis with the Taylor
+// expansion about it (DLMF 5.15.1: the derivatives of ln|Γ| are ψ and
+// the polygamma functions), generated with mpmath (series_tables.go).
+// Within the radius the result is a1·h to double-double accuracy plus
+// terms below 2^-20 of it, where h = x − x₀ is exact to 2^-150; the
+// product path of lnAbsGammaNegDD, with an absolute error near 1e-30,
+// would lose the relative accuracy of results this close to zero.
+type negZero struct {
+	x0         [3]float64 // x₀ as a triple-double
+	radius     float64
+	a1         dd // ψ(x₀)
+	a2, a3, a4 float64
+}
+
+// eval returns ln|Γ(x)| and true if x is within the radius of x₀.
+func (z *negZero) eval(x float64) (dd, bool) {
+	if !(math.Abs(x-z.x0[0]) < 0.5) {
+		return dd{}, false
+	}
+	h := twoSum(x-z.x0[0], -z.x0[1]).addF(-z.x0[2]) // x − x₀[0] is exact (Sterbenz)
+	t := h.hi
+	if !(math.Abs(t) < z.radius) {
+		return dd{}, false
+	}
+	return z.a1.mul(h).addF(t * t * (z.a2 + t*(z.a3+t*z.a4))), true
 }
 
 // lnPiDD is ln π as a double-double (from mpmath, 50 digits:
