@@ -1,8 +1,16 @@
 package lgamma
 
 // Hypergeometric probabilities C(K,k)·C(N−K,n−k)/C(N,n) (DLMF 26.3 for
-// the binomials; the law is common practice): the three log-binomials of
-// choose.go are combined in double-double and exponentiated once.
+// the binomials; the law is common practice), as the ratio of three
+// binomial probabilities with the same p,
+//
+//	b(k; K, p)·b(n−k; N−K, p)/b(n; N, p),
+//
+// in which every power of p and 1−p cancels, whatever p is (Loader 2000,
+// "Fast and accurate computation of binomial probabilities", §4). With
+// p = n/N each factor is a saddle-point form of binomial.go whose terms
+// are no larger than its result, whereas the three log-binomials of
+// size N·H(n/N) would lose their last digits to rounding for N ≳ 1e14.
 
 import "math"
 
@@ -18,9 +26,16 @@ func hypergeometricSpecial(k, total, successes, draws int) (float64, bool) {
 	return 0, false
 }
 
+// hypergeometricLogDD returns the log-probability for k in the support.
 func hypergeometricLogDD(k, total, successes, draws int) dd {
-	n, K, d, kk := uint64(total), uint64(successes), uint64(draws), uint64(k)
-	return logChooseDD(K, kk).add(logChooseDD(n-K, d-kk)).sub(logChooseDD(n, d))
+	if draws == 0 || draws == total {
+		return dd{} // k is forced: 0, or successes
+	}
+	p := float64(draws) / float64(total)
+	if p == 1 {
+		p = 1 - 0x1p-53 // draws = total−1 beyond 2^53; any p in (0, 1) will do
+	}
+	return binomialLogDD(k, successes, p).add(binomialLogDD(draws-k, total-successes, p)).sub(binomialLogDD(draws, total, p))
 }
 
 // HypergeometricLogPMF returns ln P(X = k) where X counts the successes
