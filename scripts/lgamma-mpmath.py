@@ -309,6 +309,32 @@ def gen():
         add("|x| in (1e-3, 1e6), k ≤ 1e12", "LogPowOverFactorial", [x], [logi(1, 10**12)])
         x = rng.uniform(-1e3, 1e3)
         add("x in ±1e3, n ≤ 300", "Rising", [x], [rng.randint(0, 300)])
+        x = logu(1e-3, 1e15) * rng.choice([-1, 1])
+        n = logi(1, 10**12)
+        add("|x| in (1e-3, 1e15), n ≤ 1e12", "LogRising", [x], [n])
+        if x > 0 or n < 1e6:
+            add("|x| in (1e-3, 1e15), n ≤ 1e12", "Rising", [x], [n])
+        # the whole int64 range
+        lam = logu(1e15, 9e18)
+        k = max(0, int(lam + rng.gauss(0, 3) * math.sqrt(lam)))
+        add("λ in (1e15, 9e18)", "PoissonPMF", [lam], [k])
+        add("λ in (1e15, 9e18)", "PoissonLogPMF", [lam], [k])
+        n = logi(10**15, MAXI)
+        p = rng.random()
+        k = max(0, min(n, int(n * p + rng.gauss(0, 3) * math.sqrt(n * p * (1 - p) + 1))))
+        add("n in (1e15, 2^63)", "BinomialPMF", [p], [k, n])
+        add("n in (1e15, 2^63)", "BinomialLogPMF", [p], [k, n])
+        N_ = logi(10**15, MAXI)
+        K, d = rng.randint(0, N_), rng.randint(0, N_)
+        lo, hi = max(0, d + K - N_), min(d, K)
+        mean = d * K / N_
+        k = max(lo, min(hi, int(mean + rng.gauss(0, 2) * math.sqrt(mean + 1))))
+        add("total in (1e15, 2^63)", "HypergeometricPMF", [], [k, N_, K, d])
+        x = logu(1e-3, 1e6) * rng.choice([-1, 1])
+        add("|x| in (1e-3, 1e6), k in (1e12, 2^63)", "PowOverFactorial", [x], [logi(10**12, MAXI)])
+        add("|x| in (1e-3, 1e300), k in (1e12, 2^63)", "LogPowOverFactorial", [logu(1e-3, 1e300)], [logi(10**12, MAXI)])
+        parts = [logi(10**15, 2**61) for _ in range(rng.randint(2, 3))]
+        add("2-3 parts in (1e15, 2^61)", "LogMultinomial", [], parts)
     for p in [5e-324, 1e-310, 1e-300, 0.5, 1 - 2**-53]:
         for k in [0, 1, 9, 10]:
             add("special/adversarial", "BinomialLogPMF", [p], [k, 10])

@@ -11,14 +11,13 @@ package lgamma
 const tinyMean = 1e-290
 
 // bd0 returns x·ln(x/M) + M − x for x > 0 and M > 0 in double-double.
+// It is summed as x·ln(1 + h/M) − h with h = x − M exact: both terms are
+// of the size of h, so the sum loses nothing to an intermediate of the
+// size of M, which for M near 1e18 would cost more than the result's ulp.
 func bd0(x, m dd) dd {
-	var l dd
 	if m.hi < tinyMean {
-		l = ddLog(x).sub(ddLog(m))
-	} else {
-		// ln(x/M) = ln(1 + (x−M)/M) with x−M exact: for x near M the
-		// rounding of x/M would be magnified by the factor x.
-		l = ddLog1p(x.sub(m).div(m))
+		return x.mul(ddLog(x).sub(ddLog(m))).add(m).sub(x)
 	}
-	return x.mul(l).add(m).sub(x)
+	h := x.sub(m)
+	return x.mul(ddLog1p(h.div(m))).sub(h)
 }
