@@ -14,6 +14,12 @@ expansions that the package evaluates in double-double.
     and the radius 2^-20·(distance to the nearest pole) in which four
     terms give the full precision.
 
+  * the Taylor expansions of ln Γ about c = 1/2 + j/8, j = 0…124
+    (DLMF 5.15.1: the coefficients are ψ⁽ᵏ⁻¹⁾(c)/k!), to the power 22,
+    for LogGamma on [1/2, 16);
+  * the reduction table of ddLogFast: r_i = round(2048/(1 + i/1024))/2048,
+    an 11-bit approximation of 1/(1 + i/1024), and −ln r_i.
+
 Values come from mpmath at 100 digits (Debian package python3-mpmath) and
 are split into double-double pairs hi + lo, each rounded to nearest.
 
@@ -82,6 +88,37 @@ for z in neg_zeros():
     out.append("\t{[3]float64{%s, %s, %s}, %s, dd{%s, %s}, %s, %s, %s}," % (
         repr(hi), repr(mid), repr(lo), repr(float(ldexp(d, -20))), repr(a1hi), repr(a1lo),
         repr(cs[0]), repr(cs[1]), repr(cs[2])))
+out.append("}\n")
+src.append("\n".join(out))
+
+out = ["// lgammaCenters[j] holds ln Γ about c = 1/2 + j/8: ln Γ(c+t) =",
+       "// a[0] + a[1]·t + a[2]·t² + Σ f[k−3]·tᵏ (k = 3…22).",
+       "var lgammaCenters = [125]lgammaCenter{"]
+for j in range(125):
+    c = mpf(1) / 2 + mpf(j) / 8
+    a = [re(loggamma(c)), digamma(c), polygamma(1, c) / 2]
+    f = [polygamma(k - 1, c) / factorial(k) for k in range(3, 23)]
+    dds = ", ".join("{%s, %s}" % (fmt(float(v)), fmt(float(v - mpf(float(v))))) for v in a)
+    out.append("\t{%s, [3]dd{%s}, [20]float64{%s}}," % (repr(float(c)), dds, ", ".join(repr(float(v)) for v in f)))
+out.append("}\n")
+src.append("\n".join(out))
+
+out = ["// logFastR[i] is 1/(1 + i/1024) rounded to 11 significant bits, so that",
+       "// m·r − 1 is exact in float64 for m within 2^-11 of 1 + i/1024;",
+       "// logFastT[i] is −ln logFastR[i].",
+       "var logFastR = [1025]float64{"]
+rs = []
+for i in range(1025):
+    R = int(mp.nint(mpf(2048) / (1 + mpf(i) / 1024)))
+    rs.append(mpf(R) / 2048)
+for j in range(0, 1025, 8):
+    out.append("\t" + " ".join(repr(float(r)) + "," for r in rs[j:j + 8]))
+out.append("}\n")
+out.append("var logFastT = [1025]dd{")
+for r in rs:
+    v = -mp.log(r)
+    hi = float(v)
+    out.append("\t{%s, %s}," % (fmt(hi), fmt(float(v - mpf(hi)))))
 out.append("}\n")
 src.append("\n".join(out))
 

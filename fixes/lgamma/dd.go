@@ -214,3 +214,39 @@ func ddLog1p(x dd) dd {
 	tail := t * t * t * (1.0/3 - t*(1.0/4-t*(1.0/5-t/6)))
 	return x.sub(x.mul(x).mulF(0.5)).addF(tail)
 }
+
+// ddLogFast returns ln a for a positive finite dd to about 2^-74
+// relative, about three times faster than ddLog. It is for the terms
+// whose error the caller's result does not magnify: ln n in Stirling's
+// formula for ln n! and ln Γ(z) at z ≥ 16, where n·ln n is about the
+// size of the result. The reduction is exact instead of a division:
+// a = 2^e·m, m in [1, 2], r an 11-bit approximation of 1/m from a table,
+// u = m·r − 1 formed exactly by one FMA (|u| ≤ 2^-10 and u is a multiple
+// of 2^-63, so it fits in 53 bits), and ln a = e·ln 2 − ln r + ln(1+u)
+// with ln(1+u) = u − u²/2 + u³/3 − … (DLMF 4.6.1), u and u²/2 in
+// double-double, the rest in float64 (the method of the exact reduction:
+// Tang 1990 with the reciprocal table of, e.g., the CORE-MATH logarithms).
+func ddLogFast(a dd) dd {
+	hi, lo := a.hi, a.lo
+	if !(hi >= 0x1p-1022 && hi <= math.MaxFloat64) {
+		return ddLog(a) // subnormal, zero, negative, Inf or NaN
+	}
+	b := math.Float64bits(hi)
+	e := int(b>>52) - 1023
+	m := math.Float64frombits(b&(1<<52-1) | 1023<<52)
+	mlo := lo * (m / hi) // m/hi = 2^-e exactly
+	i := int((b>>41)&0x7ff+1) >> 1
+	r := logFastR[i]
+	us := twoSum(math.FMA(m, r, -1), mlo*r)
+	x := us.hi
+	// ln(1+u) − u + u²/2 = u³/3 − u⁴/4 + … to u⁸/8 (u⁹/9 < 2^-93).
+	tail := x * x * x * (1.0/3 - x*(1.0/4-x*(1.0/5-x*(1.0/6-x*(1.0/7-x/8)))))
+	sq := twoProd(x, x)
+	sq.lo += 2 * x * us.lo
+	res := us.sub(dd{sq.hi * 0.5, sq.lo * 0.5}).addF(tail)
+	res = logFastT[i].add(res)
+	if e == 0 {
+		return res
+	}
+	return res.add(twoProd(float64(e), ln2.hi)).addF(float64(e) * ln2.lo)
+}

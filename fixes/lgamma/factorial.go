@@ -17,9 +17,10 @@ func lnFactDD(n uint64) dd {
 	if n < uint64(len(lnFactTable)) {
 		return lnFactTable[n]
 	}
-	// ln n! = (n+½)ln n − n + ½ln 2π + δ(n).
+	// ln n! = (n+½)ln n − n + ½ln 2π + δ(n); n·ln n is about the size of
+	// the result, so ddLogFast's 2^-74 is enough.
 	x := ddUint(n)
-	return x.addF(0.5).mul(ddLog(x)).sub(x).add(halfLn2Pi).addF(stirlingInt(n))
+	return x.addF(0.5).mul(ddLogFast(x)).sub(x).add(halfLn2Pi).addF(stirlingInt(n))
 }
 
 // LogFactorial returns ln n!: correctly rounded for n < 1024 (a table)

@@ -58,6 +58,71 @@ func lgammaStirling(z dd) dd {
 	return r.addF(stirlingSeries(z.hi))
 }
 
+// lgammaLarge returns ln Γ(x) for x ≥ 16 rounded to float64. Nothing
+// cancels here: z(ln z − 1) is about the result, so ln z needs only
+// ddLogFast, and of the series only 1/(12z), the largest term, in
+// double-double; the float64 rest errs by less than 1e-22 where the
+// result is at least 27.
+func lgammaLarge(x float64) float64 {
+	z := dd{x, 0}
+	l := ddLogFast(z)
+	r := z.mul(l.addF(-1)).sub(l.mulF(0.5)).add(halfLn2Pi)
+	q := 1 / x
+	first := dd{q, math.FMA(-x, q, 1) / x}.mul(stirlingCoef[0]) // 1/(12x)
+	r2 := q * q
+	rest := q * r2 * (stirlingCoef[1].hi + r2*(stirlingCoef[2].hi+r2*(stirlingCoef[3].hi+
+		r2*(stirlingCoef[4].hi+r2*(stirlingCoef[5].hi+r2*(stirlingCoef[6].hi+r2*stirlingCoef[7].hi))))))
+	return r.add(first).addF(rest).float()
+}
+
+// lgammaCenter is the Taylor expansion of ln Γ about c (series_tables.go,
+// generated with mpmath): ln Γ(c+t) = a[0] + a[1]t + a[2]t² + Σ f[k−3]tᵏ.
+type lgammaCenter struct {
+	c float64
+	a [3]dd
+	f [20]float64
+}
+
+// lgammaTable returns ln Γ(x) for 1/2 ≤ x < 16 rounded to float64, from
+// the expansion about the nearest c = 1/2 + j/8 (|t| ≤ 1/16; the first
+// omitted term is below 2^-70 of the result even at c = 1/2, whose
+// radius of convergence is 1/2). t = x − c is exact (Sterbenz); the
+// float64 part from t³ on is at most 2^-10 of the result, so its
+// rounding stays near 2^-62; the expansions about 1 and 2 have a[0] = 0
+// and keep the relative accuracy next to the zeros. This is the fast
+// path of LogGamma; lgammaDD, which the ratio functions need for its
+// absolute accuracy, is several times slower.
+func lgammaTable(x float64) float64 {
+	e := &lgammaCenters[int((x-0.5)*8+0.5)]
+	t := x - e.c
+	s := e.f[len(e.f)-1]
+	for i := len(e.f) - 2; i >= 0; i-- {
+		s = s*t + e.f[i]
+	}
+	return e.a[2].addF(s * t).mulF(t).add(e.a[1]).mulF(t).add(e.a[0]).float()
+}
+
+// lgammaSmall returns ln Γ(x) for 0 < x < 1/2 rounded to float64:
+// ln Γ(x) = ln Γ(1+x) − ln x (DLMF 5.5.1), with ln Γ(1+x) from the
+// expansion about 1 for x < 1/8 (t = x exact) and from the table above,
+// where 1+x − c = x − (c−1) is exact too. −ln x ≥ 0.69 is the larger
+// term, so the fast logarithm is enough.
+func lgammaSmall(x float64) float64 {
+	var g dd
+	if x < near1Radius {
+		g = lgammaNear(dd{x, 0}, &lgamma1Coef)
+	} else {
+		e := &lgammaCenters[int((x+0.5)*8+0.5)]
+		t := x - (e.c - 1)
+		s := e.f[len(e.f)-1]
+		for i := len(e.f) - 2; i >= 0; i-- {
+			s = s*t + e.f[i]
+		}
+		g = e.a[2].addF(s * t).mulF(t).add(e.a[1]).mulF(t).add(e.a[0])
+	}
+	return g.sub(ddLogFast(dd{x, 0})).float()
+}
+
 // Radii and lengths of the expansions about 1 and 2: at the edge the
 // first omitted term is below 2^-64 of the result.
 const (
@@ -197,8 +262,12 @@ func LogGamma(x float64) float64 {
 		return x
 	case isPole(x):
 		return math.Inf(1)
+	case x >= stirlingSeriesMin:
+		return lgammaLarge(x)
+	case x >= 0.5:
+		return lgammaTable(x)
 	case x > 0:
-		return lgammaDD(dd{x, 0}).float()
+		return lgammaSmall(x)
 	}
 	return lnAbsGammaNegDD(x).float()
 }
