@@ -38,7 +38,7 @@ func binomialLogDD(k, n int, p float64) dd {
 		dk = bd0(x, nd.mulF(p))
 	}
 	r = r.sub(dk).sub(bd0(y, nd.mul(q)))
-	return r.sub(halfLn2Pi).sub(ddLog(x.mul(y).div(nd)).mulF(0.5))
+	return r.sub(halfLn2Pi).sub(ddLogFast(x.mul(y).div(nd)).mulF(0.5))
 }
 
 // binomialSpecial handles the arguments outside the main formula: it

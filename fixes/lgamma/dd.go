@@ -158,9 +158,13 @@ func expOf(a dd) float64 {
 		return math.Inf(1)
 	case a.hi < -745.2:
 		return 0
-	case a.hi < -708:
-		// Result is subnormal: compute e^(a+64 ln2) and scale once,
-		// so the only rounding is the final one.
+	case a.hi < -670:
+		// Below e^-670 ≈ 2^-967 the low part of the double-double
+		// would be subnormal and lose bits before the final rounding:
+		// compute e^(a+64 ln2) and scale once. Where the result is
+		// normal the scaling is exact; where it is subnormal it rounds
+		// a second time, by at most half a float64 ulp of the scaled
+		// value, far below the subnormal spacing.
 		return math.Ldexp(ddExp(a.add(ln2.mulF(64))).float(), -64)
 	case a.hi > 708:
 		return math.Ldexp(ddExp(a.sub(ln2.mulF(64))).float(), 64)
@@ -209,6 +213,21 @@ func ddLog1p(x dd) dd {
 	if math.Abs(x.hi) > 0x1p-20 {
 		return ddLog(x.addF(1))
 	}
+	return log1pSeries(x)
+}
+
+// ddLog1pFast is ddLog1p with ddLogFast: about 2^-74 relative to the
+// result (near 1, ddLogFast's reduction is exact and its error is
+// relative to ln(1+x)).
+func ddLog1pFast(x dd) dd {
+	if math.Abs(x.hi) > 0x1p-20 {
+		return ddLogFast(x.addF(1))
+	}
+	return log1pSeries(x)
+}
+
+// log1pSeries returns ln(1+x) for |x| ≤ 2^-20.
+func log1pSeries(x dd) dd {
 	// |x| ≤ 2^-20: x⁵/5 is below 2^-80·|x|, x⁶ below 2^-100·|x|.
 	t := x.hi
 	tail := t * t * t * (1.0/3 - t*(1.0/4-t*(1.0/5-t/6)))

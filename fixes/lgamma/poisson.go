@@ -12,7 +12,7 @@ import "math"
 func poissonLogDD(k int, lambda float64) dd {
 	x := ddInt(int64(k))
 	r := bd0(x, dd{lambda, 0}).addF(stirlingInt(uint64(k))).add(halfLn2Pi)
-	return r.add(ddLog(x).mulF(0.5)).neg()
+	return r.add(ddLogFast(x).mulF(0.5)).neg()
 }
 
 // poissonSpecial handles the arguments outside the main formula: it
