@@ -253,10 +253,12 @@ func ddLogFast(a dd) dd {
 	b := math.Float64bits(hi)
 	e := int(b>>52) - 1023
 	m := math.Float64frombits(b&(1<<52-1) | 1023<<52)
-	mlo := lo * (m / hi) // m/hi = 2^-e exactly
 	i := int((b>>41)&0x7ff+1) >> 1
 	r := logFastR[i]
-	us := twoSum(math.FMA(m, r, -1), mlo*r)
+	us := dd{math.FMA(m, r, -1), 0}
+	if lo != 0 {
+		us = twoSum(us.hi, lo*(m/hi)*r) // m/hi = 2^-e exactly
+	}
 	x := us.hi
 	// ln(1+u) − u + u²/2 = u³/3 − u⁴/4 + … to u⁸/8 (u⁹/9 < 2^-93).
 	tail := x * x * x * (1.0/3 - x*(1.0/4-x*(1.0/5-x*(1.0/6-x*(1.0/7-x/8)))))

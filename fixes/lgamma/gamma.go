@@ -58,21 +58,22 @@ func lgammaStirling(z dd) dd {
 	return r.addF(stirlingSeries(z.hi))
 }
 
-// lgammaLarge returns ln Γ(x) for x ≥ 16 rounded to float64. Nothing
-// cancels here: z(ln z − 1) is about the result, so ln z needs only
-// ddLogFast, and of the series only 1/(12z), the largest term, in
-// double-double; the float64 rest errs by less than 1e-22 where the
-// result is at least 27.
-func lgammaLarge(x float64) float64 {
-	z := dd{x, 0}
+// lgammaLarge returns ln Γ(x) for x ≥ 16 rounded to float64.
+func lgammaLarge(x float64) float64 { return lgammaLargeDD(dd{x, 0}).float() }
+
+// lgammaLargeDD returns ln Γ(z) for z ≥ 16 to about 2^-70 relative.
+// Nothing cancels here: (z−½)·ln z is about the result, so ln z needs
+// only ddLogFast, and the float64 series errs by less than 1e-18 where
+// the result is at least 27. Beyond 2^52, where (z−½)·ln z could
+// overflow before z is subtracted although the result does not, it is
+// written z·(ln z − 1) − ½ln z.
+func lgammaLargeDD(z dd) dd {
 	l := ddLogFast(z)
-	r := z.mul(l.addF(-1)).sub(l.mulF(0.5)).add(halfLn2Pi)
-	q := 1 / x
-	first := dd{q, math.FMA(-x, q, 1) / x}.mul(stirlingCoef[0]) // 1/(12x)
-	r2 := q * q
-	rest := q * r2 * (stirlingCoef[1].hi + r2*(stirlingCoef[2].hi+r2*(stirlingCoef[3].hi+
-		r2*(stirlingCoef[4].hi+r2*(stirlingCoef[5].hi+r2*(stirlingCoef[6].hi+r2*stirlingCoef[7].hi))))))
-	return r.add(first).addF(rest).float()
+	s := stirlingSeries(z.hi)
+	if z.hi < 0x1p52 {
+		return l.mul(z.addF(-0.5)).sub(z).add(halfLn2Pi).addF(s)
+	}
+	return z.mul(l.addF(-1)).sub(l.mulF(0.5)).add(halfLn2Pi).addF(s)
 }
 
 // lgammaCenter is the Taylor expansion of ln Γ about c (series_tables.go,
@@ -94,33 +95,32 @@ type lgammaCenter struct {
 // absolute accuracy, is several times slower.
 func lgammaTable(x float64) float64 {
 	e := &lgammaCenters[int((x-0.5)*8+0.5)]
-	t := x - e.c
+	return e.eval(x - e.c).float()
+}
+
+// eval sums the expansion at t, |t| ≤ 1/16.
+func (e *lgammaCenter) eval(t float64) dd {
 	s := e.f[len(e.f)-1]
 	for i := len(e.f) - 2; i >= 0; i-- {
 		s = s*t + e.f[i]
 	}
-	return e.a[2].addF(s * t).mulF(t).add(e.a[1]).mulF(t).add(e.a[0]).float()
+	return e.a[2].addF(s * t).mulF(t).add(e.a[1]).mulF(t).add(e.a[0])
+}
+
+// lgamma1pDD returns ln Γ(1+y) for −1/2 ≤ y < 1/2 from the same table
+// without forming 1+y: t = y − (c−1) is exact (Sterbenz, or t = y at
+// c = 1).
+func lgamma1pDD(y float64) dd {
+	e := &lgammaCenters[int((y+0.5)*8+0.5)]
+	return e.eval(y - (e.c - 1))
 }
 
 // lgammaSmall returns ln Γ(x) for 0 < x < 1/2 rounded to float64:
 // ln Γ(x) = ln Γ(1+x) − ln x (DLMF 5.5.1), with ln Γ(1+x) from the
-// expansion about 1 for x < 1/8 (t = x exact) and from the table above,
-// where 1+x − c = x − (c−1) is exact too. −ln x ≥ 0.69 is the larger
+// table above (lgamma1pDD). −ln x ≥ 0.69 is the larger
 // term, so the fast logarithm is enough.
 func lgammaSmall(x float64) float64 {
-	var g dd
-	if x < near1Radius {
-		g = lgammaNear(dd{x, 0}, &lgamma1Coef)
-	} else {
-		e := &lgammaCenters[int((x+0.5)*8+0.5)]
-		t := x - (e.c - 1)
-		s := e.f[len(e.f)-1]
-		for i := len(e.f) - 2; i >= 0; i-- {
-			s = s*t + e.f[i]
-		}
-		g = e.a[2].addF(s * t).mulF(t).add(e.a[1]).mulF(t).add(e.a[0])
-	}
-	return g.sub(ddLogFast(dd{x, 0})).float()
+	return lgamma1pDD(x).sub(ddLogFast(dd{x, 0})).float()
 }
 
 // Radii and lengths of the expansions about 1 and 2: at the edge the
@@ -168,6 +168,54 @@ func lgammaDD(x dd) dd {
 		z = z.addF(1)
 	}
 	return lgammaStirling(z).sub(ddLog(p))
+}
+
+// lgammaNeg returns ln|Γ(x)| for finite x < 0 that is not a pole,
+// rounded to float64. The fast forms below have an absolute error near
+// 2^-62; where their result is below 1/4 in magnitude (next to the zeros
+// of ln|Γ|) the accurate lnAbsGammaNegDD decides instead.
+//
+//   - −1/2 < x < 0: ln Γ(1+x) − ln|x| (DLMF 5.5.1), at least 0.69;
+//   - −20 < x ≤ −1/2: y = x+n in (0, 1] with n = ⌈−x⌉ (exact: |y| < 1
+//     and y is a multiple of x's ulp), ln|Γ(x)| = ln Γ(y) −
+//     ln|x(x+1)…(x+n−1)|, ln Γ(y) from the table or as
+//     ln Γ(1+y) − ln y for y < 1/2; every factor x+i is exact as well;
+//   - x ≤ −20: the reflection formula with the fast Stirling form, where
+//     |ln|Γ(x)|| > 9 and nothing cancels.
+func lgammaNeg(x float64) float64 {
+	switch {
+	case x > -0.5:
+		return lgamma1pDD(x).sub(ddLogFast(dd{-x, 0})).float()
+	case x <= reflectMin:
+		return lnPiDD.sub(ddLogFast(sinPiAbsDD(x))).sub(lgammaLargeDD(twoSum(1, -x))).float()
+	}
+	n := math.Ceil(-x)
+	y := x + n
+	p := dd{x, 0}
+	for i := 1.0; i < n; i++ {
+		p = p.mulF(x + i)
+	}
+	var g dd
+	if y >= 0.5 {
+		g = lgammaTableDD(y)
+	} else {
+		g = lgamma1pDD(y)
+		p = p.mulF(y)
+	}
+	if p.hi < 0 {
+		p = p.neg()
+	}
+	r := g.sub(ddLogFast(p))
+	if math.Abs(r.hi) < 0.25 {
+		return lnAbsGammaNegDD(x).float()
+	}
+	return r.float()
+}
+
+// lgammaTableDD is lgammaTable before the rounding.
+func lgammaTableDD(x float64) dd {
+	e := &lgammaCenters[int((x-0.5)*8+0.5)]
+	return e.eval(x - e.c)
 }
 
 // reflectMin is where LogGamma changes from the upward recurrence to the
@@ -269,7 +317,7 @@ func LogGamma(x float64) float64 {
 	case x > 0:
 		return lgammaSmall(x)
 	}
-	return lnAbsGammaNegDD(x).float()
+	return lgammaNeg(x)
 }
 
 // sinPiAbsDD returns |sin(πx)| for finite x that is not an integer, to
