@@ -140,6 +140,8 @@ def ref_value(name, f, i):
             l += (n - k) * mp.log1p(-p)
         return l if name == "BinomialLogPMF" else mp.exp(l)
     if name in ("LogFactorial", "Factorial"):
+        if i[0] < 0:
+            return math.nan
         l = lg(mpf(i[0]) + 1)
         return l if name == "LogFactorial" else mp.exp(l)
     if name in ("Choose", "LogChoose"):
@@ -159,6 +161,8 @@ def ref_value(name, f, i):
         return l if name == "LogFalling" else mp.exp(l)
     if name == "Catalan":
         n = i[0]
+        if n < 0:
+            return math.nan
         return mp.exp(lg(mpf(2 * n) + 1) - 2 * lg(mpf(n) + 1) - mp.log(n + 1))
     if name in ("HypergeometricPMF", "HypergeometricLogPMF"):
         k, N_, K, n = i
@@ -182,6 +186,27 @@ def ref_value(name, f, i):
         if v is None or not (-2**63 <= v <= MAXI):
             return "panic" if name.startswith("Must") else (0, False)
         return (v, True)
+    if name == "FactorialInt64":
+        n = i[0]
+        v = math.factorial(n) if n >= 0 else None
+        return (v, True) if v is not None and v <= MAXI else (0, False)
+    if name == "CatalanInt64":
+        n = i[0]
+        v = math.comb(2 * n, n) // (n + 1) if n >= 0 else None
+        return (v, True) if v is not None and v <= MAXI else (0, False)
+    if name == "FallingInt64":
+        n, k = i
+        if n < 0 or k < 0:
+            return (0, False)
+        v = math.perm(n, k) if k <= n else 0
+        return (v, True) if v <= MAXI else (0, False)
+    if name == "MultinomialInt64":
+        if any(k < 0 for k in i):
+            return (0, False)
+        v = math.factorial(sum(i))
+        for k in i:
+            v //= math.factorial(k)
+        return (v, True) if v <= MAXI else (0, False)
     raise KeyError(name)
 
 
@@ -237,6 +262,25 @@ def gen():
         add("a > 2^1000, small b", "Beta", [logu(2**1000, 1e308), logu(1e-3, 16)])
         add("a > 2^1000, small b", "LogBeta", [logu(2**1000, 1e308), logu(1e-3, 1e3)])
         add("x in (1e-3, 1e12)", "StirlingRemainder", [logu(1e-3, 1e12)])
+    for _ in range(max(1, N // 20)):
+        # the curve B(a, b) = 1, away from (1, 1): ln B is near 0 there
+        a = logu(0.05, 20)
+        with mp.workdps(30):
+            try:
+                b = float(mp.findroot(lambda b: mp.log(mp.beta(a, b)), (mpf(1e-3), mpf(50)), solver="anderson"))
+            except Exception:
+                continue
+        for x in near(b, 3):
+            add("on B(a, b) = 1", "LogBeta", [a, x])
+        # the curve Γ(a) = Γ(b), a < 1.4616 < b: ln Γ(a)/Γ(b) is near 0
+        a = rng.uniform(0.2, 1.46)
+        with mp.workdps(30):
+            try:
+                b = float(mp.findroot(lambda b: lg(b) - lg(mpf(a)), (mpf(1.4617), mpf(10)), solver="anderson"))
+            except Exception:
+                continue
+        for x in near(b, 3):
+            add("on Γ(a) = Γ(b)", "LogGammaRatio", [a, x])
     for a, b in [(2.557e305, 1.0), (1.000000000000001, 1.0), (1e308, 1.0), (1e305, 2.0)]:
         add("special/adversarial", "LogGammaRatio" if a < 2 else "LogGammaRatio", [a, b])
         add("special/adversarial", "Beta", [a, b])
@@ -273,6 +317,22 @@ def gen():
         add("2-5 parts up to 1e17", "Multinomial", [], parts)
         n = rng.randint(0, 600)
         add("n ≤ 600", "Catalan", [], [n])
+    for n in range(-1, 173):
+        add("every n in [-1, 172]", "Factorial", [], [n])
+        add("every n in [-1, 172]", "FactorialInt64", [], [n])
+    for n in [-1, 0, 1, 34, 35, 36, 519, 520]:
+        add("boundaries", "CatalanInt64", [], [n])
+        add("boundaries", "Catalan", [], [n])
+    for _ in range(N):
+        n = logi(1, MAXI)
+        k = rng.choice([rng.randint(0, min(n, 25)), rng.randint(0, n)])
+        add("n < 2^63", "LogFalling", [], [n, k])
+        n = logi(1, 10**6)
+        add("n ≤ 1e6, k ≤ 25", "FallingInt64", [], [n, rng.randint(-1, 25)])
+        parts = [logi(0, 10**rng.randint(1, 6)) for _ in range(rng.randint(1, 4))]
+        add("1-4 parts up to 1e6", "MultinomialInt64", [], parts)
+        x = logu(1e-3, 1e12)
+        add("x in (1e-3, 1e12)", "StirlingRemainder", [float(int(x)) if rng.random() < 0.3 else x])
     for ks in [[MAXI, 1], [MAXI, MAXI], [2**62, 2**62], [1, MAXI], [MAXI]]:
         add("special/adversarial", "Multinomial", [], ks)
         add("special/adversarial", "LogMultinomial", [], ks)

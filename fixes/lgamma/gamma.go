@@ -123,25 +123,30 @@ func lgammaSmall(x float64) float64 {
 	return lgamma1pDD(x).sub(ddLogFast(dd{x, 0})).float()
 }
 
-// Radii and lengths of the expansions about 1 and 2: at the edge the
-// first omitted term is below 2^-64 of the result.
+// nearRadius bounds |t| in the expansions about 1 and 2 that lgammaDD
+// uses; nearTerms of them are summed, the first nearDD in double-double.
+// At |t| = 1/64 the first omitted term is below 2^-106 of the result and
+// the float64 part starts below 2^-47 of it, so the sum is accurate to
+// about 2^-100 relative: the full double-double precision that the
+// differences of log-gammas in the ratio functions need.
 const (
-	near1Radius = 0.125
-	near2Radius = 0.25
-	nearTerms   = 24
+	nearRadius = 1.0 / 64
+	nearTerms  = 20
+	nearDD     = 8
 )
 
-// lgammaNear returns Σ c[k−1]·tᵏ: the tail from t³ on in float64, the
-// first two steps of Horner's rule in double-double. The tail is at most
-// 1/90 of the result for the radii above, so its rounding stays below
-// 2^-59 of it.
+// lgammaNear returns Σ c[k−1]·tᵏ for |t| ≤ nearRadius.
 func lgammaNear(t dd, c *[32]dd) dd {
 	x := t.hi
 	s := c[nearTerms-1].hi
-	for i := nearTerms - 2; i >= 2; i-- {
+	for i := nearTerms - 2; i >= nearDD; i-- {
 		s = s*x + c[i].hi
 	}
-	return t.mulF(s).add(c[1]).mul(t).add(c[0]).mul(t)
+	r := dd{s, 0}
+	for i := nearDD - 1; i >= 0; i-- {
+		r = r.mul(t).add(c[i])
+	}
+	return r.mul(t)
 }
 
 // lgammaDD returns ln Γ(x) for a finite x > 0 in double-double.
@@ -152,13 +157,13 @@ func lgammaDD(x dd) dd {
 	if x.hi >= stirlingSeriesMin {
 		return lgammaStirling(x)
 	}
-	if t := x.addF(-1); math.Abs(t.hi) <= near1Radius {
+	if t := x.addF(-1); math.Abs(t.hi) <= nearRadius {
 		return lgammaNear(t, &lgamma1Coef)
 	}
-	if t := x.addF(-2); math.Abs(t.hi) <= near2Radius {
+	if t := x.addF(-2); math.Abs(t.hi) <= nearRadius {
 		return lgammaNear(t, &lgamma2Coef)
 	}
-	if x.hi < near1Radius {
+	if x.hi < nearRadius {
 		return lgammaNear(x, &lgamma1Coef).sub(ddLog(x))
 	}
 	p := x
