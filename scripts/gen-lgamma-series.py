@@ -20,6 +20,10 @@ expansions that the package evaluates in double-double.
   * the reduction table of ddLogFast: r_i = round(2048/(1 + i/1024))/2048,
     an 11-bit approximation of 1/(1 + i/1024), and −ln r_i.
 
+  * for the math/big fallback: B₂ₖ/(2k(2k−1)) as exact fractions (the
+    Bernoulli numbers from the recurrence Σ_{j≤m} C(m+1,j)·B_j = 0,
+    DLMF 24.5.3, in rational arithmetic) and ln 2, ½ln 2π to 100 digits.
+
 Values come from mpmath at 100 digits (Debian package python3-mpmath) and
 are split into double-double pairs hi + lo, each rounded to nearest.
 
@@ -120,6 +124,22 @@ for r in rs:
     hi = float(v)
     out.append("\t{%s, %s}," % (fmt(hi), fmt(float(v - mpf(hi)))))
 out.append("}\n")
+src.append("\n".join(out))
+
+from fractions import Fraction
+from math import comb
+B = [Fraction(1)]
+for m_ in range(1, 41):
+    B.append(-sum(comb(m_ + 1, j) * B[j] for j in range(m_)) / Fraction(m_ + 1))
+out = ["// stirlingRat[k-1] is B₂ₖ/(2k(2k−1)) exactly, for the math/big fallback.",
+       "var stirlingRat = [...]string{"]
+for k in range(1, 21):
+    c = B[2 * k] / (2 * k * (2 * k - 1))
+    out.append('\t"%d/%d",' % (c.numerator, c.denominator))
+out.append("}\n")
+out.append("// ln 2 and ½ln 2π to 100 digits, for the math/big fallback.")
+out.append('const (\n\tbigLn2       = "%s"\n\tbigHalfLn2Pi = "%s"\n)\n' % (
+    mp.nstr(mp.log(2), 100), mp.nstr(mp.log(2 * mp.pi) / 2, 100)))
 src.append("\n".join(out))
 
 path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "fixes", "lgamma", "series_tables.go")

@@ -4,7 +4,10 @@ package lgamma
 // double-double log-gamma values; a+b is formed exactly, so a large a
 // and a tiny b do not lose b to rounding.
 
-import "math"
+import (
+	"math"
+	"math/big"
+)
 
 // betaSpecial handles the arguments outside a, b finite and positive.
 func betaSpecial(a, b float64) (float64, bool) {
@@ -30,7 +33,14 @@ func LogBeta(a, b float64) float64 {
 	if v, ok := betaSpecial(a, b); ok {
 		return v
 	}
-	return lnBetaDD(a, b).float()
+	r := lnBetaDD(a, b)
+	if math.Abs(r.hi) < 0x1p-20 && a+b < bigMax {
+		// Next to the curve B(a,b) = 1 the double-double's absolute
+		// error (up to about 2^-77·b) could exceed the ulp: math/big.
+		s := bigNew().Add(bigNew().SetFloat64(a), bigNew().SetFloat64(b))
+		return bigLnGammaSum([]*big.Float{bigNew().SetFloat64(a), bigNew().SetFloat64(b), s}, []int{1, 1, -1})
+	}
+	return r.float()
 }
 
 // lnBetaDD returns ln B(a,b) for finite a, b > 0 as ln Γ(min) plus the

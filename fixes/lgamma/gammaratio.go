@@ -5,7 +5,10 @@ package lgamma
 // representable and a ≈ b loses nothing to cancellation. Negative
 // arguments go through the reflection formula (DLMF 5.5.3).
 
-import "math"
+import (
+	"math"
+	"math/big"
+)
 
 // lnGammaRatioDD returns ln Γ(a) − ln Γ(b) for finite a, b > 0.
 //
@@ -104,7 +107,14 @@ func LogGammaRatio(a, b float64) float64 {
 	if v, _, ok := gammaRatioSpecial(a, b); ok {
 		return v
 	}
-	return lnAbsGammaRatioDD(a, b).float()
+	r := lnAbsGammaRatioDD(a, b)
+	if a != b && a > 0 && b > 0 && a < bigMax && b < bigMax && math.Abs(r.hi) < 0x1p-20*math.Max(math.Abs(a-b), 0x1p-20) {
+		// Next to the curve Γ(a) = Γ(b) (or where ψ nearly vanishes
+		// between a and b) the double-double's absolute error, up to
+		// about 2^-77·|a−b|, could exceed the ulp: math/big.
+		return bigLnGammaSum([]*big.Float{bigNew().SetFloat64(a), bigNew().SetFloat64(b)}, []int{1, -1})
+	}
+	return r.float()
 }
 
 // lnAbsGammaRatioDD returns ln|Γ(a)/Γ(b)| for finite a, b that are not
