@@ -281,6 +281,16 @@ def gen():
                 continue
         for x in near(b, 3):
             add("on Γ(a) = Γ(b)", "LogGammaRatio", [a, x])
+    # rising factorials next to ±1, where ln|x(x+1)…| passes through 0
+    for n in (2, 3, 5, 20, 40, 100):
+        for target, guess in ((1, 0.5), (-1, -0.5)):
+            with mp.workdps(40):
+                try:
+                    r = float(mp.findroot(lambda x: mp.rf(x, n) - target, guess))
+                except Exception:
+                    continue
+            for x in near(r, 5):
+                add("product near ±1", "LogRising", [x], [n])
     for a, b in [(2.557e305, 1.0), (1.000000000000001, 1.0), (1e308, 1.0), (1e305, 2.0)]:
         add("special/adversarial", "LogGammaRatio" if a < 2 else "LogGammaRatio", [a, b])
         add("special/adversarial", "Beta", [a, b])
