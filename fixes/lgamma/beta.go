@@ -24,6 +24,10 @@ func betaSpecial(a, b float64) (float64, bool) {
 
 // LogBeta returns ln B(a,b) = ln Γ(a) + ln Γ(b) − ln Γ(a+b) for a, b > 0.
 //
+// Accuracy: within 1 ulp for all a, b > 0, a > 2^1000 with small b
+// included, and next to the curve B(a,b) = 1 (taken in math/big there
+// for a+b < 2^40); the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	LogBeta(0, b) = LogBeta(a, 0) = +Inf for a, b ≥ 0
@@ -75,6 +79,9 @@ func lnBetaHuge(a, b float64) dd {
 }
 
 // Beta returns B(a,b) = Γ(a)Γ(b)/Γ(a+b) for a, b > 0.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64;
+// the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //

@@ -65,6 +65,9 @@ func binomialSpecial(k, n int, p float64) (float64, bool) {
 
 // BinomialLogPMF returns ln P(X = k) for X ~ Binomial(n, p).
 //
+// Accuracy: within 1 ulp for all 0 ≤ k ≤ n ≤ MaxInt64 and p in [0, 1],
+// subnormal p included; the mpmath sweep of docs/numerics.md measured at most 0.52 ulp.
+//
 // Special cases are:
 //
 //	BinomialLogPMF(k < 0 or k > n, n, p) = -Inf
@@ -81,6 +84,9 @@ func BinomialLogPMF(k, n int, p float64) float64 {
 // BinomialPMF returns P(X = k) = C(n,k)pᵏ(1−p)ⁿ⁻ᵏ for X ~ Binomial(n, p),
 // with a relative error of a few 1e-16 wherever the result is a normal
 // float64.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64, for
+// all 0 ≤ k ≤ n ≤ MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.53 ulp.
 //
 // Special cases are:
 //

@@ -27,6 +27,9 @@ func lnFactDD(n uint64) dd {
 // and within 1 ulp above, where every n ≤ 10⁵ and every sampled n up to
 // 2^62 came out correctly rounded as well (see docs/numerics.md).
 //
+// Accuracy: correctly rounded for n < 1024 (a table) and within 1 ulp
+// above, up to MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	LogFactorial(0) = LogFactorial(1) = 0
@@ -51,6 +54,8 @@ func logFactorialLarge(n int) float64 {
 const maxFactorialFloat = 170
 
 // Factorial returns n! rounded to the nearest float64.
+//
+// Accuracy: correctly rounded (a table built with math/big).
 //
 // Special cases are:
 //
@@ -81,6 +86,14 @@ func factorialU(n, limit uint64) (uint64, bool) {
 
 // FactorialInt64 returns n! and true when n! fits in an int64
 // (0 ≤ n ≤ 20), and 0 and false otherwise.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	FactorialInt64(n < 0) = 0, false
+//	FactorialInt64(n > 20) = 0, false
 func FactorialInt64(n int64) (int64, bool) {
 	if n < 0 {
 		return 0, false
@@ -91,6 +104,14 @@ func FactorialInt64(n int64) (int64, bool) {
 
 // MustFactorialInt64 is like FactorialInt64 but panics when n is negative
 // or n! does not fit in an int64.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	MustFactorialInt64(n < 0) panics
+//	MustFactorialInt64(n > 20) panics
 func MustFactorialInt64(n int64) int64 {
 	r, ok := FactorialInt64(n)
 	if !ok {
@@ -101,12 +122,26 @@ func MustFactorialInt64(n int64) int64 {
 
 // FactorialUint64 returns n! and true when n! fits in a uint64
 // (n ≤ 20), and 0 and false otherwise.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	FactorialUint64(n > 20) = 0, false
 func FactorialUint64(n uint64) (uint64, bool) {
 	return factorialU(n, math.MaxUint64)
 }
 
 // MustFactorialUint64 is like FactorialUint64 but panics when n! does not
 // fit in a uint64.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	MustFactorialUint64(n > 20) panics
 func MustFactorialUint64(n uint64) uint64 {
 	r, ok := FactorialUint64(n)
 	if !ok {

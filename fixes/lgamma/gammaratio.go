@@ -95,6 +95,12 @@ func gammaRatioSpecial(a, b float64) (float64, int, bool) {
 
 // LogGammaRatio returns ln|Γ(a)/Γ(b)|.
 //
+// Accuracy: within 1 ulp for positive a and b, close ones included,
+// and next to the curve Γ(a) = Γ(b) (taken in math/big there for
+// a, b < 2^40); for negative arguments the absolute error is below
+// about 1e-29, which is within 1 ulp unless the result is below about
+// 1e-13. the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	LogGammaRatio(+Inf, b) = +Inf for finite b that is not a pole
@@ -128,6 +134,9 @@ func lnAbsGammaRatioDD(a, b float64) dd {
 
 // GammaRatio returns Γ(a)/Γ(b) without forming either gamma value, so it
 // stays finite whenever the ratio is.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64,
+// negative arguments included; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //

@@ -42,6 +42,9 @@ func hypergeometricLogDD(k, total, successes, draws int) dd {
 // in draws items taken without replacement from total items of which
 // successes are successes.
 //
+// Accuracy: within 1 ulp for totals up to MaxInt64; the mpmath sweep of docs/numerics.md
+// measured at most 0.53 ulp.
+//
 // Special cases are:
 //
 //	HypergeometricLogPMF(k, ...) = -Inf if k is outside the support
@@ -57,6 +60,9 @@ func HypergeometricLogPMF(k, total, successes, draws int) float64 {
 
 // HypergeometricPMF returns P(X = k) = C(successes, k)·C(total−successes,
 // draws−k)/C(total, draws).
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64, for
+// totals up to MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.54 ulp.
 //
 // Special cases are:
 //

@@ -69,6 +69,10 @@ func risingSpecial(x float64, n int) (float64, bool) {
 // LogRising returns ln|x(x+1)…(x+n−1)|, the log of the absolute value of
 // the rising factorial.
 //
+// Accuracy: within 1 ulp for finite x and n up to MaxInt64 (where
+// the product is within 2^-20 of ±1 the logarithm is taken in math/big);
+// the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	LogRising(x, 0) = 0
@@ -103,6 +107,9 @@ func LogRising(x float64, n int) float64 {
 }
 
 // Rising returns the rising factorial x(x+1)…(x+n−1) = Γ(x+n)/Γ(x).
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64;
+// the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //

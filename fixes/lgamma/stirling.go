@@ -46,6 +46,9 @@ func stirlingInt(n uint64) float64 {
 // the error of Stirling's formula, for real n ≥ 0 (n! meaning Γ(n+1)).
 // It lies in (1/(12n+1), 1/(12n)) for n ≥ 1 (Robbins 1955).
 //
+// Accuracy: within 1 ulp for n > 0; the mpmath sweep of docs/numerics.md measured at most
+// 0.5 ulp.
+//
 // Special cases are:
 //
 //	StirlingRemainder(+Inf) = 0
