@@ -203,10 +203,16 @@ def ref_value(name, f, i):
     if name == "MultinomialInt64":
         if any(k < 0 for k in i):
             return (0, False)
-        v = math.factorial(sum(i))
-        for k in i:
-            v //= math.factorial(k)
-        return (v, True) if v <= MAXI else (0, False)
+        v, t = 1, 0
+        for k in i:  # product of binomials C(t, k), stopping past MaxInt64
+            t += k
+            m = min(k, t - k)
+            if m >= 64:  # C(t, m) ≥ C(128, 64) > 2^63
+                return (0, False)
+            v *= math.comb(t, m)
+            if v > MAXI:
+                return (0, False)
+        return (v, True)
     raise KeyError(name)
 
 

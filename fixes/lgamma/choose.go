@@ -90,18 +90,32 @@ func Choose(n, k int) float64 {
 }
 
 // exactLogLimit is a little below ln 2^64: results under e^exactLogLimit
-// are computed exactly as well, as the double-double value cannot decide
-// the rounding of an integer that lies halfway between two float64s.
+// are integers that a uint64 holds, and one that lies (nearly) halfway
+// between two float64s needs the exact value to be rounded right.
 const exactLogLimit = 44
 
-// integerResult rounds an integer-valued result given by its logarithm,
-// going through the exact uint64 value when it is small enough to have
-// one.
+// integerResult rounds an integer-valued result given by its logarithm.
+// Below e^exactLogLimit the double-double e^l (relative error below
+// 2^-62 with the logarithms of this package) decides the rounding when
+// it is not within 2^-58 of a rounding boundary, by Ziv's test (Ziv,
+// "Fast evaluation of elementary mathematical functions with correctly
+// rounded last bit", ACM TOMS 17, 1991); below 2^52 it is simply the
+// nearest integer. Only a near-tie computes the exact uint64 value,
+// whose multiplications cost more than everything else.
 func integerResult(l dd, exact func() (uint64, bool)) float64 {
-	if l.hi < exactLogLimit {
-		if u, ok := exact(); ok {
-			return float64(u)
-		}
+	if l.hi >= exactLogLimit {
+		return expOf(l)
+	}
+	v := ddExp(l)
+	if v.hi < 0x1p52 {
+		return math.Round(v.hi + v.lo)
+	}
+	err := v.hi * 0x1p-58
+	if up, down := v.hi+(v.lo+err), v.hi+(v.lo-err); up == down {
+		return up
+	}
+	if u, ok := exact(); ok {
+		return float64(u)
 	}
 	return expOf(l)
 }
