@@ -42,12 +42,23 @@ func LogFactorial(n int) float64 {
 	return logFactorialLarge(n)
 }
 
-// logFactorialLarge is LogFactorial outside the table.
+// logFactorialLarge is LogFactorial outside the table. Below 2^52,
+// x+½ is exact, and the double-double sum of lnFactDD reduces to two
+// error-free additions, (x+½)·ln x − x and then ½ln 2π + δ(n), with all
+// low parts added last (as in lgammaLarge).
 func logFactorialLarge(n int) float64 {
 	if n < 0 {
 		return math.NaN()
 	}
-	return lnFactDD(uint64(n)).float()
+	if n >= 1<<52 {
+		return lnFactDD(uint64(n)).float()
+	}
+	x := float64(n)
+	p := ddLogFast(dd{x, 0}).mulF(x + 0.5)
+	s := twoSum(p.hi, -x)
+	t := twoSum(halfLn2Pi.hi, stirlingSeries(x))
+	u := twoSum(s.hi, t.hi)
+	return u.hi + (u.lo + (s.lo + p.lo + t.lo + halfLn2Pi.lo))
 }
 
 // maxFactorialFloat is the largest n with n! < MaxFloat64.

@@ -58,8 +58,20 @@ func lgammaStirling(z dd) dd {
 	return r.addF(stirlingSeries(z.hi))
 }
 
-// lgammaLarge returns ln Γ(x) for x ≥ 16 rounded to float64.
-func lgammaLarge(x float64) float64 { return lgammaLargeDD(dd{x, 0}).float() }
+// lgammaLarge returns ln Γ(x) for x ≥ 16 rounded to float64. Below 2^52
+// x−½ is exact, and the double-double sum of lgammaLargeDD reduces to
+// two error-free additions: (x−½)·ln x − x and then ½ln 2π + series,
+// with all low parts added last.
+func lgammaLarge(x float64) float64 {
+	if x >= 0x1p52 {
+		return lgammaLargeDD(dd{x, 0}).float()
+	}
+	p := ddLogFast(dd{x, 0}).mulF(x - 0.5)
+	s := twoSum(p.hi, -x)
+	t := twoSum(halfLn2Pi.hi, stirlingSeries(x))
+	u := twoSum(s.hi, t.hi)
+	return u.hi + (u.lo + (s.lo + p.lo + t.lo + halfLn2Pi.lo))
+}
 
 // lgammaLargeDD returns ln Γ(z) for z ≥ 16 to about 2^-70 relative.
 // Nothing cancels here: (z−½)·ln z is about the result, so ln z needs
