@@ -280,19 +280,20 @@ func refLnChoose(n, k int64) *big.Float {
 }
 
 func accLogGamma(t *testing.T) *accRow {
-	// Positive reals away from the zeros of ln Γ at 1 and 2, where only
-	// absolute accuracy is meaningful; the measure is ulps of the result.
-	r := &accRow{name: "LogGamma", domain: "x in (1e-300, 1e15), |ln Γ| > 0.1", unit: "ulp", bound: 1}
+	// Positive reals, the zeros of ln Γ at 1 and 2 included; the measure
+	// is ulps of the result.
+	r := &accRow{name: "LogGamma", domain: "x in (1e-300, 1e15), near 1 and 2", unit: "ulp", bound: 1}
 	rng := rand.New(rand.NewSource(7))
 	for i := 0; i < scale(400); i++ {
 		x := math.Exp(rng.Float64()*math.Log(1e15)*1.2 - math.Log(1e15)*0.2)
 		if i < 20 {
 			x = math.Exp(-rng.Float64() * 690)
 		}
-		want := refLnGamma(bf(x))
-		if f, _ := want.Float64(); math.Abs(f) < 0.1 {
-			continue
+		if i%4 == 3 {
+			// next to the zeros: 1 or 2 plus up to 2^-10 relative
+			x = float64(1+i%2) * (1 + (rng.Float64()-0.5)*math.Exp(-rng.Float64()*30))
 		}
+		want := refLnGamma(bf(x))
 		r.add(ulpsOff(LogGamma(x), want), fmt.Sprintf("x=%.17g", x))
 		r.naive = math.Max(r.naive, ulpsOff(lgammaNaive(x), want))
 	}

@@ -4,7 +4,10 @@ package lgamma
 // double-double log-gamma values; a+b is formed exactly, so a large a
 // and a tiny b do not lose b to rounding.
 
-import "math"
+import (
+	"math"
+	"math/big"
+)
 
 // betaSpecial handles the arguments outside a, b finite and positive.
 func betaSpecial(a, b float64) (float64, bool) {
@@ -21,6 +24,10 @@ func betaSpecial(a, b float64) (float64, bool) {
 
 // LogBeta returns ln B(a,b) = ln Γ(a) + ln Γ(b) − ln Γ(a+b) for a, b > 0.
 //
+// Accuracy: within 1 ulp for all a, b > 0, a > 2^1000 with small b
+// included, and next to the curve B(a,b) = 1 (taken in math/big there
+// for a+b < 2^40); the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	LogBeta(0, b) = LogBeta(a, 0) = +Inf for a, b ≥ 0
@@ -30,7 +37,14 @@ func LogBeta(a, b float64) float64 {
 	if v, ok := betaSpecial(a, b); ok {
 		return v
 	}
-	return lnBetaDD(a, b).float()
+	r := lnBetaDD(a, b)
+	if math.Abs(r.hi) < 0x1p-20 && a+b < bigMax {
+		// Next to the curve B(a,b) = 1 the double-double's absolute
+		// error (up to about 2^-77·b) could exceed the ulp: math/big.
+		s := bigNew().Add(bigNew().SetFloat64(a), bigNew().SetFloat64(b))
+		return bigLnGammaSum([]*big.Float{bigNew().SetFloat64(a), bigNew().SetFloat64(b), s}, []int{1, 1, -1})
+	}
+	return r.float()
 }
 
 // lnBetaDD returns ln B(a,b) for finite a, b > 0 as ln Γ(min) plus the
@@ -39,7 +53,14 @@ func lnBetaDD(a, b float64) dd {
 	if a < b {
 		a, b = b, a
 	}
-	if a > 0x1p1000 && b >= stirlingSeriesMin {
+	switch {
+	case a > 0x1p900 && b < stirlingSeriesMin:
+		// ln Γ(a) − ln Γ(a+b) = −b·ψ(a) − b²ψ′(a)/2 − … with
+		// ψ(a) = ln a − 1/(2a) − … (DLMF 5.11.2) and ψ′(a) ≈ 1/a: every
+		// term after −b·ln a is below 2^-890 absolute. (b/a itself would
+		// be subnormal here, and ln(1 − b/(a+b)) would lose its digits.)
+		return lgammaDD(dd{b, 0}).sub(ddLog(dd{a, 0}).mulF(b))
+	case a > 0x1p1000:
 		return lnBetaHuge(a, b)
 	}
 	return lgammaDD(dd{b, 0}).add(lnGammaRatioDD(dd{a, 0}, twoSum(a, b)))
@@ -58,6 +79,9 @@ func lnBetaHuge(a, b float64) dd {
 }
 
 // Beta returns B(a,b) = Γ(a)Γ(b)/Γ(a+b) for a, b > 0.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64;
+// the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //

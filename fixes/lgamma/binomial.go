@@ -12,20 +12,33 @@ package lgamma
 
 import "math"
 
+// tinyP is the p below which the mean n·p is formed scaled.
+const tinyP = 0x1p-900
+
 // binomialLogDD returns ln P(X = k) for 0 ≤ k ≤ n and 0 < p < 1.
 func binomialLogDD(k, n int, p float64) dd {
 	q := twoSum(1, -p)
 	nd := ddInt(int64(n))
 	switch k {
 	case 0:
-		return ddLog(q).mul(nd)
+		// n·ln(1−p) through ln(1+x): 1−p itself would lose a p below 2^-53
+		return ddLog1p(dd{-p, 0}).mul(nd)
 	case n:
 		return ddLog(dd{p, 0}).mul(nd)
 	}
 	x, y := ddInt(int64(k)), ddInt(int64(n-k))
-	r := dd{stirlingInt(int64(n)), 0}.addF(-stirlingInt(int64(k))).addF(-stirlingInt(int64(n - k)))
-	r = r.sub(bd0(x, nd.mulF(p))).sub(bd0(y, nd.mul(q)))
-	return r.sub(halfLn2Pi).sub(ddLog(x.mul(y).div(nd)).mulF(0.5))
+	r := dd{stirlingInt(uint64(n)), 0}.addF(-stirlingInt(uint64(k))).addF(-stirlingInt(uint64(n - k)))
+	var dk dd
+	if p < tinyP {
+		// n·p could be subnormal and lose bits: form it scaled by 2^200.
+		// The mean itself, below 2^-837, vanishes next to k ≥ 1 in bd0.
+		ms := nd.mulF(p * 0x1p200)
+		dk = x.mul(ddLog(x).sub(ddLog(ms)).add(ln2.mulF(200))).sub(x)
+	} else {
+		dk = bd0(x, nd.mulF(p))
+	}
+	r = r.sub(dk).sub(bd0(y, nd.mul(q)))
+	return r.sub(halfLn2Pi).sub(ddLogFast(x.mul(y).div(nd)).mulF(0.5))
 }
 
 // binomialSpecial handles the arguments outside the main formula: it
@@ -52,6 +65,9 @@ func binomialSpecial(k, n int, p float64) (float64, bool) {
 
 // BinomialLogPMF returns ln P(X = k) for X ~ Binomial(n, p).
 //
+// Accuracy: within 1 ulp for all 0 ≤ k ≤ n ≤ MaxInt64 and p in [0, 1],
+// subnormal p included; the mpmath sweep of docs/numerics.md measured at most 0.52 ulp.
+//
 // Special cases are:
 //
 //	BinomialLogPMF(k < 0 or k > n, n, p) = -Inf
@@ -68,6 +84,9 @@ func BinomialLogPMF(k, n int, p float64) float64 {
 // BinomialPMF returns P(X = k) = C(n,k)pᵏ(1−p)ⁿ⁻ᵏ for X ~ Binomial(n, p),
 // with a relative error of a few 1e-16 wherever the result is a normal
 // float64.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64, for
+// all 0 ≤ k ≤ n ≤ MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.53 ulp.
 //
 // Special cases are:
 //

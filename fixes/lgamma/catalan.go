@@ -9,6 +9,14 @@ import "math"
 
 // CatalanInt64 returns the nth Catalan number and true when it fits in an
 // int64 (0 ≤ n ≤ 35), and 0 and false otherwise.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	CatalanInt64(n < 0) = 0, false
+//	CatalanInt64(n > 35) = 0, false
 func CatalanInt64(n int64) (int64, bool) {
 	if n < 0 {
 		return 0, false
@@ -25,6 +33,14 @@ func CatalanInt64(n int64) (int64, bool) {
 
 // MustCatalanInt64 is like CatalanInt64 but panics when n is negative or
 // the result does not fit in an int64.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	MustCatalanInt64(n < 0) panics
+//	MustCatalanInt64(n > 35) panics
 func MustCatalanInt64(n int64) int64 {
 	r, ok := CatalanInt64(n)
 	if !ok {
@@ -39,6 +55,9 @@ const maxCatalanFloat = 1 << 20
 
 // Catalan returns the nth Catalan number C(2n,n)/(n+1) as a float64.
 //
+// Accuracy: within 1 ulp, exact below 2^63; the mpmath sweep of docs/numerics.md measured
+// at most 0.5 ulp.
+//
 // Special cases are:
 //
 //	Catalan(n < 0) = NaN
@@ -51,7 +70,7 @@ func Catalan(n int) float64 {
 		return math.Inf(1)
 	}
 	m := int64(n)
-	return integerResult(logChooseDD(2*m, m).sub(ddLog(ddInt(m+1))), func() (uint64, bool) {
+	return integerResult(logChooseDD(uint64(2*m), uint64(m)).sub(ddLog(ddInt(m+1))), func() (uint64, bool) {
 		r, ok := CatalanInt64(m)
 		return uint64(r), ok
 	})

@@ -3,6 +3,7 @@ package lgamma
 import (
 	"math"
 	"math/big"
+	"math/rand"
 	"testing"
 )
 
@@ -36,4 +37,43 @@ func TestDoubleDouble(t *testing.T) {
 	if worstExp > 1e-20 || worstLog > 1e-25 {
 		t.Errorf("double-double kernels lose precision: exp %g, log %g", worstExp, worstLog)
 	}
+}
+
+// ddLogFast against the math/big logarithm of ref_test.go, and the
+// exactness of its reduction m·r − 1 (the FMA must not round).
+func TestDDLogFast(t *testing.T) {
+	rng := rand.New(rand.NewSource(11))
+	worst := 0.0
+	for i := 0; i < 4000; i++ {
+		var x dd
+		switch i % 4 {
+		case 0:
+			x = dd{1 + rng.Float64(), 0}
+		case 1:
+			x = twoSum(math.Exp(rng.Float64()*1400-700), 0)
+		case 2:
+			v := math.Ldexp(1+rng.Float64(), rng.Intn(2000)-1000)
+			x = dd{v, v * 0x1p-54 * (rng.Float64() - 0.5)}
+			x = twoSum(x.hi, x.lo)
+		default:
+			x = ddInt(rng.Int63())
+		}
+		want := refLog(ddValue(x))
+		if r := ddRel(ddLogFast(x), want); r > worst {
+			worst = r
+		}
+		// the reduction
+		b := math.Float64bits(x.hi)
+		m := math.Float64frombits(b&(1<<52-1) | 1023<<52)
+		r := logFastR[int((b>>41)&0x7ff+1)>>1]
+		exact := new(big.Float).SetPrec(200).Mul(new(big.Float).SetFloat64(m), new(big.Float).SetFloat64(r))
+		exact.Sub(exact, big.NewFloat(1))
+		if got := math.FMA(m, r, -1); new(big.Float).SetFloat64(got).Cmp(exact) != 0 || math.Abs(got) > 0x1p-10 {
+			t.Fatalf("reduction of %v: m·r − 1 = %v is not exact or too large", x.hi, got)
+		}
+	}
+	if worst > 0x1p-72 {
+		t.Errorf("ddLogFast: worst relative error %g > 2^-72", worst)
+	}
+	t.Logf("ddLogFast: worst relative error %.3g (2^%.1f)", worst, math.Log2(worst))
 }

@@ -23,3 +23,9 @@ func BenchmarkDDMul(b *testing.B) {
 	}
 	sinkD = x
 }
+
+func BenchmarkDDLogFast(b *testing.B) {
+	for i := 0; i < b.N; i++ {
+		sinkD = ddLogFast(dd{float64(i%100) + 1.5, 0})
+	}
+}

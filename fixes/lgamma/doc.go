@@ -25,12 +25,22 @@
 // package; the exact forms report them with ok = false and the Must
 // forms panic. Nothing else panics.
 //
-// The log and float forms evaluate Stirling's series and Loader's
-// saddle-point expansion in double-double arithmetic, so they are
-// accurate to about 1 ulp where the naive
+// The log and float forms evaluate Stirling's series, Loader's
+// saddle-point expansion and Taylor expansions of ln Γ in double-double
+// arithmetic, so every one is within 1 ulp of the true value over its
+// whole domain (int64 arguments up to MaxInt64 included), and in all but
+// rare cases correctly rounded: an mpmath sweep of random and
+// adversarial inputs (scripts/lgamma-mpmath.sh, figures in
+// docs/numerics.md) measured at most 0.54 ulp. The naive
 // exp(lgamma(n+1) − lgamma(k+1) − lgamma(n−k+1)) loses digits to the
 // rounding of the large logarithms (about 4e-6 relative error at
-// n = 10⁹).
+// n = 10⁹). Where a result is a cancellation to nearly zero (ln B(a,b)
+// on B = 1, ln Γ(a)/Γ(b) on Γ(a) = Γ(b), a rising factorial next to
+// ±1) the package finishes in math/big.
+//
+// C(n,k) for n < 0 is the generalised binomial coefficient
+// n(n−1)…(n−k+1)/k! = (−1)ᵏ·C(k−n−1, k), the coefficient of xᵏ in
+// (1+x)ⁿ, in every Choose form.
 //
 // To add it to a module:
 //

@@ -53,12 +53,13 @@ func TestSpecialCases(t *testing.T) {
 		{"GammaRatio(MaxFloat64, MaxFloat64)", GammaRatio(math.MaxFloat64, math.MaxFloat64), 1},
 		{"LogBeta(MaxFloat64, MaxFloat64)", LogBeta(math.MaxFloat64, math.MaxFloat64), ninf}, // −2·MaxFloat64·ln 2
 		{"LogGamma(2)", LogGamma(2), 0},
-		{"LogChoose(-1, 0)", LogChoose(-1, 0), nan},
+		{"LogChoose(-1, 0)", LogChoose(-1, 0), 0},
 		{"LogChoose(5, -1)", LogChoose(5, -1), ninf},
 		{"LogChoose(5, 6)", LogChoose(5, 6), ninf},
 		{"LogChoose(5, 0)", LogChoose(5, 0), 0},
 		{"LogChoose(5, 5)", LogChoose(5, 5), 0},
-		{"Choose(-1, 0)", Choose(-1, 0), nan},
+		{"Choose(-1, 0)", Choose(-1, 0), 1},
+		{"Choose(-3, -1)", Choose(-3, -1), 0},
 		{"Choose(5, -1)", Choose(5, -1), 0},
 		{"Choose(5, 6)", Choose(5, 6), 0},
 		{"Choose(0, 0)", Choose(0, 0), 1},
@@ -211,8 +212,8 @@ func TestIntegerDomain(t *testing.T) {
 	if _, ok := FactorialInt64(-1); ok {
 		t.Error("FactorialInt64(-1) ok")
 	}
-	if _, ok := ChooseInt64(-1, 0); ok {
-		t.Error("ChooseInt64(-1, 0) ok")
+	if v, ok := ChooseInt64(-1, 0); !ok || v != 1 {
+		t.Errorf("ChooseInt64(-1, 0) = %d, %v; want 1, true", v, ok)
 	}
 	if v, ok := ChooseInt64(5, -1); !ok || v != 0 {
 		t.Errorf("ChooseInt64(5, -1) = %d, %v; want 0, true", v, ok)
@@ -254,7 +255,7 @@ func TestMustPanics(t *testing.T) {
 		{func() { MustFactorialInt64(-2) }, "lgamma: MustFactorialInt64(-2): n = -2 is negative"},
 		{func() { MustFactorialUint64(21) }, "lgamma: MustFactorialUint64(21): result does not fit in uint64"},
 		{func() { MustChooseInt64(70, 35) }, "lgamma: MustChooseInt64(70, 35): result does not fit in int64"},
-		{func() { MustChooseInt64(-1, 0) }, "lgamma: MustChooseInt64(-1, 0): n = -1 is negative"},
+		{func() { MustChooseInt64(-70, 35) }, "lgamma: MustChooseInt64(-70, 35): result does not fit in int64"},
 		{func() { MustChooseUint64(70, 35) }, "lgamma: MustChooseUint64(70, 35): result does not fit in uint64"},
 		{func() { MustFallingInt64(30, 20) }, "lgamma: MustFallingInt64(30, 20): result does not fit in int64"},
 		{func() { MustFallingInt64(3, -1) }, "lgamma: MustFallingInt64(3, -1): k = -1 is negative"},

@@ -11,19 +11,26 @@ import (
 )
 
 // lnFallingDD returns ln(n!/(n−k)!) for 0 ≤ k ≤ n in double-double.
-func lnFallingDD(n, k int64) dd {
+// ln(n/m) is taken as ln(1 + k/m) with k/m formed directly: the rounding
+// of n/m itself would be magnified by the factor m+½.
+func lnFallingDD(n, k uint64) dd {
 	m := n - k
-	if m < int64(len(lnFactTable)) {
+	if m < uint64(len(lnFactTable)) {
 		return lnFactDD(n).sub(lnFactTable[m])
 	}
-	x, y := ddInt(n), ddInt(m)
-	kd := ddInt(k)
-	r := kd.mul(ddLog(x)).add(y.addF(0.5).mul(ddLog(x.div(y)))).sub(kd)
+	x, y := ddUint(n), ddUint(m)
+	kd := ddUint(k)
+	// Neither logarithm's error is magnified by more than ln n/ln(n/m)
+	// against the result, so ddLogFast's 2^-74 is enough.
+	r := kd.mul(ddLogFast(x)).add(y.addF(0.5).mul(ddLog1pFast(kd.div(y)))).sub(kd)
 	return r.addF(stirlingInt(n) - stirlingInt(m))
 }
 
 // LogFalling returns ln(n!/(n−k)!), the log of the falling factorial
 // n(n−1)…(n−k+1).
+//
+// Accuracy: within 1 ulp for all n and k up to MaxInt64; the mpmath sweep of docs/numerics.md
+// measured at most 0.5 ulp.
 //
 // Special cases are:
 //
@@ -38,10 +45,13 @@ func LogFalling(n, k int) float64 {
 	case k > n:
 		return math.Inf(-1)
 	}
-	return lnFallingDD(int64(n), int64(k)).float()
+	return lnFallingDD(uint64(n), uint64(k)).float()
 }
 
 // Falling returns the falling factorial n!/(n−k)! = n(n−1)…(n−k+1).
+//
+// Accuracy: within 1 ulp for all n and k up to MaxInt64, exact below
+// 2^64; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //
@@ -57,7 +67,7 @@ func Falling(n, k int) float64 {
 	case k > n:
 		return 0
 	}
-	return integerResult(lnFallingDD(int64(n), int64(k)), func() (uint64, bool) {
+	return integerResult(lnFallingDD(uint64(n), uint64(k)), func() (uint64, bool) {
 		return fallingU(uint64(n), uint64(k), math.MaxUint64)
 	})
 }
@@ -82,6 +92,15 @@ func fallingU(n, k, limit uint64) (uint64, bool) {
 // FallingInt64 returns n!/(n−k)! and true when it fits in an int64, and
 // 0 and false when it does not or n or k is negative. For k > n the
 // result is 0 and true.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	FallingInt64(n, 0) = 1, true
+//	FallingInt64(n, k > n) = 0, true for n ≥ 0
+//	FallingInt64(n, k) = 0, false if n or k is negative
 func FallingInt64(n, k int64) (int64, bool) {
 	if n < 0 || k < 0 {
 		return 0, false
@@ -92,6 +111,13 @@ func FallingInt64(n, k int64) (int64, bool) {
 
 // MustFallingInt64 is like FallingInt64 but panics when n or k is
 // negative or the result does not fit in an int64.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	MustFallingInt64(n, k) panics if n or k is negative
 func MustFallingInt64(n, k int64) int64 {
 	r, ok := FallingInt64(n, k)
 	if !ok {
@@ -106,12 +132,27 @@ func MustFallingInt64(n, k int64) int64 {
 
 // FallingUint64 returns n!/(n−k)! and true when it fits in a uint64, and
 // 0 and false otherwise. For k > n the result is 0 and true.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	FallingUint64(n, 0) = 1, true
+//	FallingUint64(n, k > n) = 0, true
 func FallingUint64(n, k uint64) (uint64, bool) {
 	return fallingU(n, k, math.MaxUint64)
 }
 
 // MustFallingUint64 is like FallingUint64 but panics when the result does
 // not fit in a uint64.
+//
+// Accuracy: exact (checked against math/big in exact_test.go and in
+// the mpmath sweep).
+//
+// Special cases are:
+//
+//	MustFallingUint64(n, k > n) = 0
 func MustFallingUint64(n, k uint64) uint64 {
 	r, ok := FallingUint64(n, k)
 	if !ok {

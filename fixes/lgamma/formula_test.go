@@ -101,8 +101,26 @@ func TestTables(t *testing.T) {
 	if r := ddRel(halfLn2Pi, refHalfLn2Pi()); r > 1e-32 {
 		t.Errorf("halfLn2Pi off by %g", r)
 	}
-	if w, _ := refLog(refPi()).Float64(); lnPi != w {
-		t.Errorf("lnPi = %v, want %v", lnPi, w)
+	if r := ddRel(lnPiDD, refLog(refPi())); r > 1e-32 {
+		t.Errorf("lnPiDD off by %g", r)
+	}
+	if r := ddRel(piDD, refPi()); r > 1e-32 {
+		t.Errorf("piDD off by %g", r)
+	}
+	for n, c := range map[float64]dd{6: inv6, 24: inv24, 120: inv120} {
+		if r := ddRel(c, bnew().Quo(bi(1), bf(n))); r > 1e-32 {
+			t.Errorf("1/%v off by %g", n, r)
+		}
+	}
+	// The generated Stirling coefficients B₂ₖ/(2k(2k−1)) against the
+	// exact Bernoulli numbers of ref_test.go.
+	for i, c := range stirlingCoef {
+		k := int64(i + 1)
+		w := bnew().SetRat(refBernoulli()[i])
+		w.Quo(w, bi(2*k*(2*k-1)))
+		if r := ddRel(c, w); r > 1e-31 {
+			t.Errorf("stirlingCoef[%d] off by %g", i, r)
+		}
 	}
 }
 

@@ -1,8 +1,16 @@
 package lgamma
 
 // Hypergeometric probabilities C(K,k)·C(N−K,n−k)/C(N,n) (DLMF 26.3 for
-// the binomials; the law is common practice): the three log-binomials of
-// choose.go are combined in double-double and exponentiated once.
+// the binomials; the law is common practice), as the ratio of three
+// binomial probabilities with the same p,
+//
+//	b(k; K, p)·b(n−k; N−K, p)/b(n; N, p),
+//
+// in which every power of p and 1−p cancels, whatever p is (Loader 2000,
+// "Fast and accurate computation of binomial probabilities", §4). With
+// p = n/N each factor is a saddle-point form of binomial.go whose terms
+// are no larger than its result, whereas the three log-binomials of
+// size N·H(n/N) would lose their last digits to rounding for N ≳ 1e14.
 
 import "math"
 
@@ -18,14 +26,24 @@ func hypergeometricSpecial(k, total, successes, draws int) (float64, bool) {
 	return 0, false
 }
 
+// hypergeometricLogDD returns the log-probability for k in the support.
 func hypergeometricLogDD(k, total, successes, draws int) dd {
-	n, K, d, kk := int64(total), int64(successes), int64(draws), int64(k)
-	return logChooseDD(K, kk).add(logChooseDD(n-K, d-kk)).sub(logChooseDD(n, d))
+	if draws == 0 || draws == total {
+		return dd{} // k is forced: 0, or successes
+	}
+	p := float64(draws) / float64(total)
+	if p == 1 {
+		p = 1 - 0x1p-53 // draws = total−1 beyond 2^53; any p in (0, 1) will do
+	}
+	return binomialLogDD(k, successes, p).add(binomialLogDD(draws-k, total-successes, p)).sub(binomialLogDD(draws, total, p))
 }
 
 // HypergeometricLogPMF returns ln P(X = k) where X counts the successes
 // in draws items taken without replacement from total items of which
 // successes are successes.
+//
+// Accuracy: within 1 ulp for totals up to MaxInt64; the mpmath sweep of docs/numerics.md
+// measured at most 0.53 ulp.
 //
 // Special cases are:
 //
@@ -42,6 +60,9 @@ func HypergeometricLogPMF(k, total, successes, draws int) float64 {
 
 // HypergeometricPMF returns P(X = k) = C(successes, k)·C(total−successes,
 // draws−k)/C(total, draws).
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64, for
+// totals up to MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.54 ulp.
 //
 // Special cases are:
 //

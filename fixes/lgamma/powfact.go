@@ -8,11 +8,14 @@ import "math"
 
 // logPowOverFactorialDD returns ln|xᵏ/k!| for finite x ≠ 0 and k ≥ 1.
 func logPowOverFactorialDD(x float64, k int) dd {
-	return ddLog(dd{math.Abs(x), 0}).mulF(float64(k)).sub(lnFactDD(int64(k)))
+	return ddLog(dd{math.Abs(x), 0}).mulF(float64(k)).sub(lnFactDD(uint64(k)))
 }
 
 // LogPowOverFactorial returns ln|xᵏ/k!|. The sign of xᵏ/k! is negative
 // exactly when x < 0 and k is odd.
+//
+// Accuracy: within 1 ulp for all finite x and k up to MaxInt64; the mpmath sweep of docs/numerics.md
+// measured at most 0.5 ulp.
 //
 // Special cases are:
 //
@@ -36,6 +39,9 @@ func LogPowOverFactorial(x float64, k int) float64 {
 }
 
 // PowOverFactorial returns xᵏ/k!.
+//
+// Accuracy: within 1 ulp wherever the result is a normal float64, for
+// k up to MaxInt64; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are:
 //

@@ -35,7 +35,7 @@ func stirlingSeries(z float64) float64 {
 }
 
 // stirlingInt returns δ(n) for an integer n ≥ 1.
-func stirlingInt(n int64) float64 {
+func stirlingInt(n uint64) float64 {
 	if n < stirlingSeriesMin {
 		return stirlingTable[n]
 	}
@@ -45,6 +45,9 @@ func stirlingInt(n int64) float64 {
 // StirlingRemainder returns δ(n) = ln n! − [(n+½)ln n − n + ½ln 2π],
 // the error of Stirling's formula, for real n ≥ 0 (n! meaning Γ(n+1)).
 // It lies in (1/(12n+1), 1/(12n)) for n ≥ 1 (Robbins 1955).
+//
+// Accuracy: within 1 ulp for n > 0; the mpmath sweep of docs/numerics.md measured at most
+// 0.5 ulp.
 //
 // Special cases are:
 //
@@ -61,7 +64,7 @@ func StirlingRemainder(n float64) float64 {
 	case math.IsInf(n, 1):
 		return 0
 	case n >= stirlingSeriesMin:
-		return stirlingSeries(n)
+		return stirlingSeriesDD(dd{n, 0}).float()
 	case n == math.Trunc(n):
 		return stirlingTable[int(n)]
 	}
