@@ -160,14 +160,14 @@ func TestFixConcurrentProcesses(t *testing.T) {
 }
 
 // TestFixWithoutHelperModule runs -fix in a module that does not require
-// the helper module: the rewritten code could not build, so the fixed
-// text's own check stops the run before anything is written, naming the
-// import.
+// the helper module, with no module proxy: the rewritten code could not
+// build, so the run stops before anything is written, naming the
+// helper module.
 func TestFixWithoutHelperModule(t *testing.T) {
 	dir := writeModule(t, map[string]string{"go.mod": goMod, "line/fact.go": factFile, "line/choose.go": chooseFile})
 	r := runIn(t, dir, isolated, "-fix", "./...")
 	noPanic(t, r)
-	if r.code != 1 || !strings.Contains(r.stderr, "github.com/overfact/overfact/fixes/lgamma") || !strings.Contains(r.stderr, "no file written") {
+	if r.code != 1 || !strings.Contains(r.stderr, "github.com/overfact/overfact/fixes/lgamma") || !strings.Contains(r.stderr, "Nothing was written") {
 		t.Errorf("code %d, stderr %q; want 1, the helper's import named and nothing written", r.code, r.stderr)
 	}
 	for name, want := range map[string]string{"fact.go": factFile, "choose.go": chooseFile} {

@@ -11,7 +11,8 @@ import (
 // only reported, on the README's own examples: the Student-t constant
 // as usually written is reported with no fix and, written as a quotient
 // of two Γ values divided by the square root, is fixed to GammaRatio; a
-// falling factorial loop counting up becomes MustFallingInt64 and one
+// falling factorial loop counting up becomes MustFallingInt64 (under
+// if k > 0, since k may be negative) and one
 // counting down is reported with no fix. Each snippet must appear in the
 // README as it is checked here.
 func TestReadmeFixClaims(t *testing.T) {
@@ -76,7 +77,7 @@ func Down(n, k int64) int64 {
 	for _, tt := range []struct {
 		line  string
 		fixed bool
-	}{{studentT, false}, {"return " + studentFix, true}, {"r := " + fallUpFix, true}, {fallDown, false}} {
+	}{{studentT, false}, {"return " + studentFix, true}, {"\tr = " + fallUpFix, true}, {fallDown, false}} {
 		changed := strings.Contains(diff, "+\t"+tt.line) || strings.Contains(diff, "-\t"+tt.line)
 		if changed != tt.fixed {
 			t.Errorf("%q: in the diff %v, want %v\n%s", tt.line, changed, tt.fixed, diff)
