@@ -108,3 +108,34 @@ func Scaled(n, k float64) float64 { // want Scaled:"binomial of parameter 0, bre
 	}
 	return r
 }
+
+// Folded steps the parameter n itself down; n is not read after the
+// loop, so the count still comes from n's value on entry.
+func Folded(n, k int) float64 {
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= float64(n)
+		r /= float64(d)
+		n--
+	}
+	return r
+}
+
+// Mirrored takes the shorter side first, as C(n, k) = C(n, n−k) allows:
+// k no longer holds its entry value, and the loop is left as it is.
+func Mirrored(n, k int) float64 {
+	if n < 0 || k < 0 || k > n {
+		return 0
+	}
+	if k > n-k {
+		k = n - k
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ {
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
