@@ -139,3 +139,23 @@ func Mirrored(n, k int) float64 {
 	}
 	return r
 }
+
+// Reload refreshes the desk after checking it: the call may change p.N
+// and p.K through the pointer, so the count is left to the loop.
+func (p *Desk) Reload() int64 {
+	if p.N < 0 || p.K < 0 {
+		return 0
+	}
+	p.refresh()
+	r := int64(1)
+	for i := int64(1); i <= p.K; i++ { // want `multiplicative binomial loop computes C\(p.N, p.K\) in int64`
+		r = r * (p.N - p.K + i) / i
+	}
+	return r
+}
+
+func (p *Desk) refresh() {
+	if p.K > p.N {
+		p.K = p.N
+	}
+}
