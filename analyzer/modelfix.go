@@ -62,7 +62,7 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		return nil
 	}
 	return &fixes.Match{
-		Shape:   fixes.ShapeModelBinomialLoop,
+		Shape:   fixes.ShapeModelBinomLoop,
 		Node:    l.Stmt,
 		Args:    args,
 		Result:  a.Obj.Type(),

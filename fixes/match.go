@@ -19,25 +19,25 @@ const HelperPath = "github.com/overfact/overfact/fixes/lgamma"
 type Shape int
 
 const (
-	ShapeNone              Shape = iota
-	ShapeFactorial               // a standalone factorial or double factorial (loop, recursion or call) whose value is returned or stored
-	ShapeBinomial                // n!/(k!(n-k)!)                       Args: n, k
-	ShapePermutation             // n!/(n-k)!                           Args: n, k
-	ShapeMultinomial             // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately (fixes checks that n = k1+...+km)
-	ShapeCatalan                 // (2n)!/((n+1)!n!)                    Args: n
-	ShapeHypergeometric          // C(K,k)C(N-K,n-k)/C(N,n)             Args: k, N, K, n
-	ShapePowOverFactorial        // x^k/k!                              Args: x, k
-	ShapePoisson                 // x^k*exp(-x)/k!                      Args: k, lambda
-	ShapeBinomialPMF             // C(n,k) p^k (1-p)^(n-k)              Args: k, n, p
-	ShapeGammaRatio              // Γ(a)/Γ(b)                           Args: a, b
-	ShapeBeta                    // Γ(a)Γ(b)/Γ(a+b)                     Args: a, b
-	ShapeBinomialLoop            // b = b*(n-k+i)/i loop                Args: n, k
-	ShapeFallingLoop             // n(n-1)...(n-k+1) loop               Args: n, k
-	ShapeGamma                   // a bare math.Gamma(x)                Args: x
-	ShapeFactorialValue          // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
-	ShapeInverseBeta             // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
-	ShapeSeriesTerm              // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
-	ShapeModelBinomialLoop       // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
+	ShapeNone             Shape = iota
+	ShapeFactorial              // a standalone factorial or double factorial (loop, recursion or call) whose value is returned or stored
+	ShapeBinomial               // n!/(k!(n-k)!)                       Args: n, k
+	ShapePermutation            // n!/(n-k)!                           Args: n, k
+	ShapeMultinomial            // n!/(k1!k2!...km!)                   Args: k1..km (n is their sum), or Extra[0]=n when given separately (fixes checks that n = k1+...+km)
+	ShapeCatalan                // (2n)!/((n+1)!n!)                    Args: n
+	ShapeHypergeometric         // C(K,k)C(N-K,n-k)/C(N,n)             Args: k, N, K, n
+	ShapePowOverFactorial       // x^k/k!                              Args: x, k
+	ShapePoisson                // x^k*exp(-x)/k!                      Args: k, lambda
+	ShapeBinomialPMF            // C(n,k) p^k (1-p)^(n-k)              Args: k, n, p
+	ShapeGammaRatio             // Γ(a)/Γ(b)                           Args: a, b
+	ShapeBeta                   // Γ(a)Γ(b)/Γ(a+b)                     Args: a, b
+	ShapeBinomialLoop           // b = b*(n-k+i)/i loop                Args: n, k
+	ShapeFallingLoop            // n(n-1)...(n-k+1) loop               Args: n, k
+	ShapeGamma                  // a bare math.Gamma(x)                Args: x
+	ShapeFactorialValue         // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
+	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
+	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
+	ShapeModelBinomLoop         // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

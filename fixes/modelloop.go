@@ -25,7 +25,7 @@ import (
 //
 //	r := lgamma.Choose(n, k)
 //
-// The analyzer vouches for what only the model knows (ShapeModelBinomialLoop
+// The analyzer vouches for what only the model knows (ShapeModelBinomLoop
 // in match.go): the loop's value is C(n, k) of the operands' entry
 // values, it runs exactly k trips, and n, k ≥ 0 there, so the helper's
 // answers for k > n (0) agree with the loop's. This builder checks the

@@ -50,7 +50,7 @@ var probeShapes = map[string]fixes.Shape{
 	"beta":           fixes.ShapeBeta,
 	"binomialloop":   fixes.ShapeBinomialLoop,
 	"fallingloop":    fixes.ShapeFallingLoop,
-	"modelloop":      fixes.ShapeModelBinomialLoop,
+	"modelloop":      fixes.ShapeModelBinomLoop,
 	"gamma":          fixes.ShapeGamma,
 }
 
@@ -93,7 +93,7 @@ func probeMatch(pass *analysis.Pass, f *ast.File, line int, shape, operands stri
 			m.FirstBad = 0 // leave the limit to the thresholds package
 		}
 		return m, err
-	case fixes.ShapeBinomialLoop, fixes.ShapeFallingLoop, fixes.ShapeModelBinomialLoop:
+	case fixes.ShapeBinomialLoop, fixes.ShapeFallingLoop, fixes.ShapeModelBinomLoop:
 		if !semi {
 			return m, fmt.Errorf("loop probe needs the accumulator")
 		}
