@@ -118,6 +118,7 @@ var diffCases = []diffCase{
 	{pkg: "fixmodel", fn: "Draws", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "DrawsUp", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Folded", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "Odds", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

@@ -159,3 +159,16 @@ func (p *Desk) refresh() {
 		p.K = p.N
 	}
 }
+
+// Odds rules out k outside 0..n, the usual check, which bounds n below
+// by 0 as well.
+func Odds(n, k int) float64 { // want Odds:"binomial of parameter 0, breaks from 1021"
+	if k < 0 || k > n {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
