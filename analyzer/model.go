@@ -411,7 +411,7 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !fits(n.Lo, k.Lo)
 	msg := fmt.Sprintf("multiplicative binomial loop computes C(%s, %s) in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
 		name, kName, t.typeName(), a.Obj.Name(), src(unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
-	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg})
+	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg, match: mc.binomialMatch(a, f)})
 	return true
 }
 

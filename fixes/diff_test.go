@@ -28,6 +28,10 @@ type diffCase struct {
 	ref     func([]float64) *big.Float
 	guard   bool // a range guard: where the original is right, the fixed code returns the same bits
 	noBreak bool // the original stays right on this grid (the fix must not hurt)
+	// call, when set, is the call to make instead of fn(args), relative
+	// to the package (for a method on a composite literal); args still
+	// names the reference's inputs.
+	call string
 }
 
 var diffCases = []diffCase{
@@ -119,6 +123,15 @@ var diffCases = []diffCase{
 	{pkg: "fixseries", fn: "LateCount", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 900; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},
 	{pkg: "fixseries", fn: "Tail", loops: []string{"n := 0; n <= 260; n += 3"}, args: "n", typ: "float64", ref: refTail, noBreak: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
+	// Loops the value model reads as C(n, k); the grids cross the
+	// product's overflow (n ≥ 1021 in float64, 62 in int64) below
+	// C(n, n/2)'s own (1030, 67), and take in k > n and negative
+	// operands, where the original's answers must be kept.
+	{pkg: "fixmodel", fn: "Draws", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "DrawsUp", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "Folded", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "Odds", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 
 // negativeNCases run the binomial loops over negative n, where the loop
@@ -258,8 +271,12 @@ func main() {
 		for _, l := range c.loops {
 			fmt.Fprintf(&b, "\tfor %s {\n", l)
 		}
-		fmt.Fprintf(&b, "\tshow(%d, []any{%s}, func() any { return o_%s.%s(%s) }, func() any { return f_%s.%s(%s) })\n",
-			i, spaced(c.args), c.pkg, c.fn, c.args, c.pkg, c.fn, c.args)
+		call := fmt.Sprintf("%s(%s)", c.fn, c.args)
+		if c.call != "" {
+			call = c.call
+		}
+		fmt.Fprintf(&b, "\tshow(%d, []any{%s}, func() any { return o_%s.%s }, func() any { return f_%s.%s })\n",
+			i, spaced(c.args), c.pkg, call, c.pkg, call)
 		for range c.loops {
 			b.WriteString("\t}\n")
 		}

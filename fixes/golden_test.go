@@ -7,7 +7,7 @@ import (
 	"golang.org/x/tools/go/analysis/analysistest"
 )
 
-var probePackages = []string{"probebinom", "probeterm", "probeloop", "probeguard", "probeimports", "probemany", "probecomments"}
+var probePackages = []string{"probebinom", "probeterm", "probeloop", "probeguard", "probeimports", "probemany", "probecomments", "probemodel"}
 
 // TestProbeGolden applies the fixes of hand-described matches and compares
 // the results with the .golden files, which were written by hand from the

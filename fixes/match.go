@@ -37,6 +37,7 @@ const (
 	ShapeFactorialValue         // T(f(n)): a factorial call converted  Args: n (f's value is n! exactly)
 	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
 	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
+	ShapeModelBinomLoop         // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

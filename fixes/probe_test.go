@@ -50,6 +50,7 @@ var probeShapes = map[string]fixes.Shape{
 	"beta":           fixes.ShapeBeta,
 	"binomialloop":   fixes.ShapeBinomialLoop,
 	"fallingloop":    fixes.ShapeFallingLoop,
+	"modelloop":      fixes.ShapeModelBinomLoop,
 	"gamma":          fixes.ShapeGamma,
 }
 
@@ -92,7 +93,7 @@ func probeMatch(pass *analysis.Pass, f *ast.File, line int, shape, operands stri
 			m.FirstBad = 0 // leave the limit to the thresholds package
 		}
 		return m, err
-	case fixes.ShapeBinomialLoop, fixes.ShapeFallingLoop:
+	case fixes.ShapeBinomialLoop, fixes.ShapeFallingLoop, fixes.ShapeModelBinomLoop:
 		if !semi {
 			return m, fmt.Errorf("loop probe needs the accumulator")
 		}
@@ -200,6 +201,12 @@ func loopMatch(pass *analysis.Pass, m fixes.Match, line int, acc, operands strin
 		return m, fmt.Errorf("no for statement on line %d", line)
 	}
 	m.Node, m.Loop = loop, loop
+	ast.Inspect(m.File, func(n ast.Node) bool {
+		if d, ok := n.(*ast.FuncDecl); ok && d.Pos() <= loop.Pos() && loop.End() <= d.End() {
+			m.Func = d
+		}
+		return m.Func == nil
+	})
 	_, m.Acc = pass.Pkg.Scope().Innermost(loop.Pos()).LookupParent(acc, loop.Pos())
 	if m.Acc == nil {
 		return m, fmt.Errorf("no accumulator %s", acc)

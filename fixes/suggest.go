@@ -72,6 +72,7 @@ func init() {
 		ShapeFactorial:        buildGuard,
 		ShapeFactorialValue:   buildValue,
 		ShapeSeriesTerm:       buildSeriesTerm,
+		ShapeModelBinomLoop:   buildModelLoop,
 	}
 }
 

@@ -1,0 +1,94 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/types"
+	"math/big"
+
+	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
+)
+
+// binomialMatch describes a binomial loop of the model for the fixer,
+// or returns nil where the model cannot vouch that one helper call
+// computes the same value as the loop wherever the loop was right:
+//
+//   - n and k are each one parameter, receiver or field of one, of an
+//     integer type (a float operand could hold a fraction, which the
+//     integer helpers would drop), read as they are;
+//   - the loop runs exactly k trips: its trip count is k, it has no
+//     early exit, and k ≥ 0 where it starts (a loop over a negative k
+//     runs no trip and returns 1, where C(n, k) is 0);
+//   - n ≥ 0 where the loop starts (over a negative n the loop forms the
+//     generalised binomial, where the helpers return NaN or panic);
+//   - the accumulator is the loop's only one, multiplied on every trip,
+//     and the loop sums nothing.
+//
+// The fixer checks the syntax on its own: the start at 1, a body that
+// does nothing else, the stepped variables unread after the loop, and
+// that n and k still hold their entry values where the call goes.
+func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
+	l, fc := mc.loop, mc.fc
+	if l.Counter == nil || l.Exits || len(l.Accs) != 1 || len(l.Sums) > 0 || a.Guarded || len(f.Args) != 2 {
+		return nil
+	}
+	if !l.Count.Equal(f.Args[1]) {
+		return nil
+	}
+	var args []ast.Expr
+	for _, arg := range f.Args {
+		v, alpha, beta, ok := oneVar(arg)
+		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Obj == nil || v.Loop != nil {
+			return nil
+		}
+		typ := v.Obj.Type()
+		if v.Field != nil {
+			typ = v.Field.Type()
+		}
+		if b, ok := typ.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+			return nil
+		}
+		if r := fc.symRange(mc.res, v, l.Stmt); r.IsEmpty() || r.Lo < 0 {
+			return nil
+		}
+		e := mc.res.Exprs[v]
+		if e == nil {
+			return nil
+		}
+		args = append(args, e)
+	}
+	init := fc.accStart(a.Obj, l.Stmt)
+	if init == nil {
+		return nil
+	}
+	return &fixes.Match{
+		Shape:   fixes.ShapeModelBinomLoop,
+		Node:    l.Stmt,
+		Args:    args,
+		Result:  a.Obj.Type(),
+		Acc:     a.Obj,
+		AccInit: init,
+		Loop:    l.Stmt,
+		Func:    fc.node,
+	}
+}
+
+// accStart returns the statement of loop's own block that last sets acc
+// before the loop, when it sets it to a non-zero constant.
+func (fc *fnCtx) accStart(acc types.Object, loop ast.Stmt) ast.Stmt {
+	var st ast.Stmt
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		b, ok := n.(*ast.BlockStmt)
+		if !ok || st != nil {
+			return st == nil
+		}
+		for i, s := range b.List {
+			if s == loop {
+				st, _ = fc.startIn(acc, b.List[:i])
+				return false
+			}
+		}
+		return true
+	})
+	return st
+}

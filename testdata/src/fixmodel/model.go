@@ -1,0 +1,174 @@
+// Package fixmodel is a lottery desk whose binomial counts are built by
+// multiplicative loops in the arrangements the value model reads; its
+// .golden file shows each loop whose rewrite keeps every right answer
+// replaced by one helper call, and the others left as they are.
+package fixmodel
+
+// Draws counts the ways to draw k balls of n, stepping the top factor
+// down in a float64 of its own.
+func Draws(n, k int) float64 { // want Draws:"binomial of parameter 0, breaks from 1021"
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= m
+		r /= float64(d)
+		m--
+	}
+	return r
+}
+
+// DrawsUp counts the factors up, multiplying before it divides.
+func DrawsUp(n, k int) float64 { // want DrawsUp:"binomial of parameter 0, breaks from 1021"
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
+
+// Desk is one lottery: N balls, K drawn.
+type Desk struct {
+	N, K int64
+}
+
+// Tickets counts the tickets of the desk in integers.
+func (p Desk) Tickets() int64 {
+	if p.N < 0 || p.K < 0 {
+		return 0
+	}
+	r := int64(1)
+	for i := int64(1); i <= p.K; i++ { // want `multiplicative binomial loop computes C\(p.N, p.K\) in int64`
+		r = r * (p.N - p.K + i) / i
+	}
+	return r
+}
+
+// Unchecked is Draws without the check of its operands: over a
+// negative k the loop runs no trip and returns 1, over a negative n it
+// forms the generalised binomial, and the helper answers neither, so
+// the loop keeps its finding without a fix.
+func Unchecked(n, k int) float64 { // want Unchecked:"binomial of parameter 0, breaks from 1021"
+	r := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= m
+		r /= float64(d)
+		m--
+	}
+	return r
+}
+
+// Remaining reads the stepped factor after the loop: it is n−k there,
+// which the rewrite would lose.
+func Remaining(n, k int) (float64, float64) {
+	if n < 0 || k < 0 {
+		return 0, 0
+	}
+	r := 1.0
+	m := float64(n)
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= m
+		r /= float64(d)
+		m--
+	}
+	return r, m
+}
+
+var drawn []int
+
+// Logged records every divisor it uses: the loop does more than
+// compute the count.
+func Logged(n, k int) float64 { // want Logged:"binomial of parameter 0, breaks from 1021"
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * float64(n-k+d) / float64(d)
+		drawn = append(drawn, d)
+	}
+	return r
+}
+
+// Scaled counts in float64 operands, which may hold fractions: the
+// integer helper would drop them.
+func Scaled(n, k float64) float64 { // want Scaled:"binomial of parameter 0, breaks from 1021"
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	for d := 1.0; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * (n - k + d) / d
+	}
+	return r
+}
+
+// Folded steps the parameter n itself down; n is not read after the
+// loop, so the count still comes from n's value on entry.
+func Folded(n, k int) float64 {
+	if n < 0 || k < 0 {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= float64(n)
+		r /= float64(d)
+		n--
+	}
+	return r
+}
+
+// Mirrored takes the shorter side first, as C(n, k) = C(n, n−k) allows:
+// k no longer holds its entry value, and the loop is left as it is.
+func Mirrored(n, k int) float64 {
+	if n < 0 || k < 0 || k > n {
+		return 0
+	}
+	if k > n-k {
+		k = n - k
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ {
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
+
+// Reload refreshes the desk after checking it: the call may change p.N
+// and p.K through the pointer, so the count is left to the loop.
+func (p *Desk) Reload() int64 {
+	if p.N < 0 || p.K < 0 {
+		return 0
+	}
+	p.refresh()
+	r := int64(1)
+	for i := int64(1); i <= p.K; i++ { // want `multiplicative binomial loop computes C\(p.N, p.K\) in int64`
+		r = r * (p.N - p.K + i) / i
+	}
+	return r
+}
+
+func (p *Desk) refresh() {
+	if p.K > p.N {
+		p.K = p.N
+	}
+}
+
+// Odds rules out k outside 0..n, the usual check, which bounds n below
+// by 0 as well.
+func Odds(n, k int) float64 { // want Odds:"binomial of parameter 0, breaks from 1021"
+	if k < 0 || k > n {
+		return 0
+	}
+	r := 1.0
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * float64(n-k+d) / float64(d)
+	}
+	return r
+}
