@@ -16,11 +16,13 @@ import (
 //   - n and k are each one parameter, receiver or field of one, of an
 //     integer type (a float operand could hold a fraction, which the
 //     integer helpers would drop), read as they are;
-//   - the loop runs exactly k trips: its trip count is k, it has no
-//     early exit, and k ≥ 0 where it starts (a loop over a negative k
-//     runs no trip and returns 1, where C(n, k) is 0);
-//   - n ≥ 0 where the loop starts (over a negative n the loop forms the
-//     generalised binomial, where the helpers return NaN or panic);
+//   - the loop runs exactly k trips: its trip count is k and it has no
+//     early exit; over a negative k it runs none and leaves 1, where
+//     C(n, k) is 0, so unless k ≥ 0 where it starts (CountNonNeg) the
+//     fixer keeps the call under if k > 0;
+//   - over a negative n the loop forms the generalised binomial
+//     C(n, k) = (−1)^k·C(k−n−1, k), which is what the helpers' Choose
+//     family returns, so n may take any value;
 //   - the accumulator is the loop's only one, multiplied on every trip,
 //     and the loop sums nothing.
 //
@@ -36,7 +38,8 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		return nil
 	}
 	var args []ast.Expr
-	for _, arg := range f.Args {
+	countNonNeg := false
+	for i, arg := range f.Args {
 		v, alpha, beta, ok := oneVar(arg)
 		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Obj == nil || v.Loop != nil {
 			return nil
@@ -48,8 +51,12 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		if b, ok := typ.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
 			return nil
 		}
-		if r := fc.symRange(mc.res, v, l.Stmt); r.IsEmpty() || r.Lo < 0 {
+		r := fc.symRange(mc.res, v, l.Stmt)
+		if r.IsEmpty() {
 			return nil
+		}
+		if i == 1 {
+			countNonNeg = r.Lo >= 0
 		}
 		e := mc.res.Exprs[v]
 		if e == nil {
@@ -70,6 +77,8 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		AccInit: init,
 		Loop:    l.Stmt,
 		Func:    fc.node,
+
+		CountNonNeg: countNonNeg,
 	}
 }
 

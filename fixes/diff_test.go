@@ -131,6 +131,7 @@ var diffCases = []diffCase{
 	{pkg: "fixmodel", fn: "DrawsUp", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Folded", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Odds", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

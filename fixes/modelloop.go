@@ -27,8 +27,17 @@ import (
 //
 // The analyzer vouches for what only the model knows (ShapeModelBinomLoop
 // in match.go): the loop's value is C(n, k) of the operands' entry
-// values, it runs exactly k trips, and n, k ≥ 0 there, so the helper's
-// answers for k > n (0) agree with the loop's. This builder checks the
+// values and it runs exactly k trips, so the helper's answers agree with
+// the loop's for k > n ≥ 0 (0) and for a negative n (the generalised
+// coefficient). Over a negative k the loop runs no trip and leaves 1,
+// where C(n, k) is 0: unless the analyzer shows k ≥ 0 (CountNonNeg) or k
+// is unsigned, the call runs under the loop's own condition for running,
+//
+//	r := 1.0
+//	if k > 0 {
+//		r = lgamma.Choose(n, k)
+//	} This builder checks the
+//
 // rest on its own: the accumulator starts at 1, the loop does nothing but
 // update it and step variables read nowhere after it, no part of it can
 // panic or call out, and the operands are parameters or receivers (or
@@ -61,10 +70,12 @@ func buildModelLoop(b *builder) error {
 		}
 		drop = append(drop, d)
 	}
+	guarded := !b.m.CountNonNeg && classOf(b.pass.TypesInfo.TypeOf(b.m.Args[1])) != classUnsigned
 	// The call goes at the initialisation when nothing but those
-	// definitions separates it from the loop, else at the loop.
+	// definitions separates it from the loop, else at the loop; under
+	// its condition, always at the loop.
 	at := loop.Pos()
-	if between, ok := b.between(init, loop); ok && sameStmts(between, drop) {
+	if between, ok := b.between(init, loop); ok && sameStmts(between, drop) && !guarded {
 		at = rhs.Pos()
 	} else if b.mentioned(acc, init.End(), loop.Pos()) {
 		return fmt.Errorf("%s changes between its initialisation and the loop", acc.Name())
@@ -86,12 +97,20 @@ func buildModelLoop(b *builder) error {
 		b.replace(rhs.Pos(), rhs.End(), call)
 		b.replace(init.End(), loop.End(), "")
 	} else {
-		b.replace(loop.Pos(), loop.End(), acc.Name()+" = "+call)
+		text := acc.Name() + " = " + call
+		if guarded {
+			indent := b.indentOf(loop.Pos())
+			text = fmt.Sprintf("if %s > 0 {\n%s\t%s\n%s}", b.copyText(b.m.Args[1]), indent, text, indent)
+		}
+		b.replace(loop.Pos(), loop.End(), text)
 		for _, d := range drop {
 			b.deleteStmt(d)
 		}
 	}
 	b.message = b.rewriteMessage()
+	if guarded {
+		b.message += ", where " + b.text(b.m.Args[1]) + " > 0 lets the loop run"
+	}
 	return nil
 }
 

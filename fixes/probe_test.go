@@ -97,6 +97,9 @@ func probeMatch(pass *analysis.Pass, f *ast.File, line int, shape, operands stri
 		if !semi {
 			return m, fmt.Errorf("loop probe needs the accumulator")
 		}
+		// A model loop comes with the analyzer's word for its domain,
+		// k ≥ 0 included (the probe package's loops are described so).
+		m.CountNonNeg = m.Shape == fixes.ShapeModelBinomLoop
 		return loopMatch(pass, m, line, strings.TrimSpace(head), tail)
 	}
 	e := exprAt(pass.Fset, f, line)

@@ -50,9 +50,9 @@ func (p Desk) Tickets() int64 {
 }
 
 // Unchecked is Draws without the check of its operands: over a
-// negative k the loop runs no trip and returns 1, over a negative n it
-// forms the generalised binomial, and the helper answers neither, so
-// the loop keeps its finding without a fix.
+// negative n the loop forms the generalised binomial, which the helper
+// also returns, and over a negative k it runs no trip and returns 1, so
+// the call runs only where the loop would.
 func Unchecked(n, k int) float64 { // want Unchecked:"binomial of parameter 0, breaks from 1021"
 	r := 1.0
 	m := float64(n)
