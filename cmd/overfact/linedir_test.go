@@ -47,7 +47,8 @@ func Plans(n, k int) int {
 // TestLineDirectives checks that a finding under a //line directive is
 // reported at the mapped file only when that file exists, with a column
 // in SARIF that is at least 1, that the SARIF log carries every finding
-// the text output does, and that -fix never edits the mapped file.
+// the text output does, that -json follows the same rule, and that -fix
+// never edits the mapped file.
 func TestLineDirectives(t *testing.T) {
 	dir := writeModule(t, lineModule)
 	r := runIn(t, dir, isolated, "./...")
@@ -96,6 +97,12 @@ func TestLineDirectives(t *testing.T) {
 				t.Errorf("SARIF %s %d in %+v", k, c, loc)
 			}
 		}
+	}
+
+	j := runIn(t, dir, isolated, "-json", "./...")
+	noPanic(t, j)
+	if strings.Contains(j.stdout, "grammar.y") || !strings.Contains(j.stdout, "parse.go:7:2") || !strings.Contains(j.stdout, "orders.tmpl:3:9") {
+		t.Errorf("-json names the missing file, or not the compiled one and the existing mapped one:\n%s", j.stdout)
 	}
 
 	f := runIn(t, dir, isolated, "-fix", "./...")

@@ -168,7 +168,7 @@ func (r *run) report(graph *checker.Graph) {
 		r.writeSARIF(graph.Roots)
 	}
 	if r.opts.JSON {
-		if err := graph.PrintJSON(r.opts.Stdout); err != nil {
+		if err := printJSON(r.opts.Stdout, graph); err != nil {
 			r.errorf("%v", err)
 		}
 		return
