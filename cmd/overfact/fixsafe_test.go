@@ -176,3 +176,37 @@ func TestFixWithoutHelperModule(t *testing.T) {
 		}
 	}
 }
+
+// termsFile uses math only in two terms that two separate fixes rewrite:
+// neither fix alone empties the import, both together do.
+const termsFile = `package line
+
+import "math"
+
+// Crates is the Erlang-style load term a^k/k! of the packing line.
+func Crates(a float64, k int) float64 {
+	return math.Pow(a, float64(k)) / fact(k)
+}
+
+// Breaks is the chance of k breakages in a shift averaging l.
+func Breaks(l float64, k int) float64 {
+	return math.Pow(l, float64(k)) * math.Exp(-l) / fact(k)
+}
+`
+
+// TestFixEmptiedImport runs -fix where the fixes of one round together
+// leave an import unused: the run drops it, so the fixed module builds,
+// where it used to stop with "imported and not used" and write nothing.
+func TestFixEmptiedImport(t *testing.T) {
+	dir := writeModule(t, map[string]string{"go.mod": helperGoMod(t), "line/fact.go": factFile, "line/terms.go": termsFile})
+	r := runIn(t, dir, isolated, "-fix", "./...")
+	noPanic(t, r)
+	if r.code != 0 {
+		t.Fatalf("code %d, stderr %q; want 0", r.code, r.stderr)
+	}
+	got, _ := os.ReadFile(filepath.Join(dir, "line", "terms.go"))
+	if strings.Contains(string(got), `"math"`) || !strings.Contains(string(got), "lgamma.PowOverFactorial(a, k)") || !strings.Contains(string(got), "lgamma.PoissonPMF(k, l)") {
+		t.Errorf("terms.go after -fix:\n%s", got)
+	}
+	goBuild(t, dir)
+}

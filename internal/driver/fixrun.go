@@ -98,6 +98,7 @@ func brokenRoots(roots []*checker.Action) map[string]string {
 // written then.
 func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, done map[finding]bool) bool {
 	names := make([]string, 0, len(plan.files))
+	pruned := make(map[string][]edit) // imports the round's fixes emptied, by file
 	for name := range plan.files {
 		names = append(names, name)
 	}
@@ -116,6 +117,14 @@ func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, do
 			originals[name] = old
 		}
 		fixed, err := textedit.Apply(old, textEdits(plan.files[name]))
+		if err == nil {
+			if prune := textedit.EmptiedImports(originals[name], fixed); len(prune) > 0 {
+				for _, e := range prune {
+					pruned[name] = append(pruned[name], edit{file: name, Edit: e})
+				}
+				fixed, err = textedit.Apply(fixed, prune)
+			}
+		}
 		if err != nil {
 			r.errorf("fixing %s: %v; %s", name, err, r.nothingDone())
 			return false
@@ -132,7 +141,9 @@ func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, do
 	clear(done)
 	for _, f := range all {
 		if edits, ok := plan.files[f.file]; ok {
-			f.offset = moved(f.offset, edits, textedit.LineEnding(originals[f.file]))
+			eol := textedit.LineEnding(originals[f.file])
+			f.offset = moved(f.offset, edits, eol)
+			f.offset = moved(f.offset, pruned[f.file], eol)
 		}
 		done[f] = true
 	}

@@ -93,6 +93,10 @@ func apply(src map[string][]byte, es []edit) map[string][]byte {
 		out[name] = b
 		if mine := byFile[name]; len(mine) > 0 {
 			fixed, err := textedit.Apply(b, mine)
+			if err == nil {
+				// As the command does after each round of fixes.
+				fixed, err = textedit.Apply(fixed, textedit.EmptiedImports(b, fixed))
+			}
 			if err != nil {
 				panic(err) // resolve and merge let no such edit through
 			}
