@@ -7,6 +7,8 @@ import (
 	"math"
 
 	"golang.org/x/tools/go/ast/astutil"
+
+	"github.com/overfact/overfact/analyzer/ranges"
 )
 
 // floatBounds returns the bounds that the code around id puts on the
@@ -140,7 +142,7 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 		}
 		op, x, k := c.Op, c.X, c.Y
 		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
-			op, x, k = flipCmp(op), c.Y, c.X
+			op, x, k = ranges.Flip(op), c.Y, c.X
 		}
 		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
 			return nil
@@ -150,7 +152,7 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 			return nil
 		}
 		if !holds {
-			op = negateCmp(op)
+			op = ranges.Negate(op)
 		}
 		switch op {
 		case token.LSS, token.LEQ:
@@ -162,38 +164,6 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 		}
 	}
 	return nil
-}
-
-// flipCmp turns c OP x into x OP' c.
-func flipCmp(op token.Token) token.Token {
-	switch op {
-	case token.LSS:
-		return token.GTR
-	case token.LEQ:
-		return token.GEQ
-	case token.GTR:
-		return token.LSS
-	case token.GEQ:
-		return token.LEQ
-	}
-	return op
-}
-
-// negateCmp is the comparison that holds where op does not, NaN aside.
-func negateCmp(op token.Token) token.Token {
-	switch op {
-	case token.LSS:
-		return token.GEQ
-	case token.LEQ:
-		return token.GTR
-	case token.GTR:
-		return token.LEQ
-	case token.GEQ:
-		return token.LSS
-	case token.EQL:
-		return token.NEQ
-	}
-	return token.ILLEGAL
 }
 
 // exits reports whether a block always leaves the function: it ends in a

@@ -45,7 +45,7 @@ func (w *walker) refine2(s state, cond ast.Expr) (t, f state) {
 			yt, yf := w.refine2(xf, c.Y)
 			return xt.join(yt), yf
 		case token.EQL, token.NEQ, token.LSS, token.LEQ, token.GTR, token.GEQ:
-			return w.compare(s, c.X, c.Op, c.Y), w.compare(s, c.X, negate(c.Op), c.Y)
+			return w.compare(s, c.X, c.Op, c.Y), w.compare(s, c.X, Negate(c.Op), c.Y)
 		}
 	}
 	return s, s
@@ -235,7 +235,9 @@ func strictAbove(v int64, noWrap bool) int64 {
 	return v + 1
 }
 
-func negate(op token.Token) token.Token {
+// Negate returns the comparison that holds where op does not (NaN aside,
+// for floats).
+func Negate(op token.Token) token.Token {
 	switch op {
 	case token.EQL:
 		return token.NEQ
