@@ -123,6 +123,42 @@ func oneVar(a vm.Affine) (vm.Sym, *big.Rat, *big.Rat, bool) {
 	return a.Terms[0].Sym, a.Terms[0].K, a.C, true
 }
 
+// plainVar returns the variable a is, when a is exactly one variable
+// (coefficient 1, no constant).
+func plainVar(a vm.Affine) (vm.Sym, bool) {
+	v, alpha, beta, ok := oneVar(a)
+	return v, ok && alpha.Cmp(big.NewRat(1, 1)) == 0 && beta.Sign() == 0
+}
+
+// countRanges returns the variable n of a form over (n, k) and the
+// ranges of n and k where the loop starts, with k's name as the form
+// writes it. A k that is no plain variable has an unknown range, or,
+// with constK, the point it is when it is an integer constant; ok is
+// false when n is no plain variable, or k neither a variable nor (with
+// constK) a constant.
+func (mc *modelCtx) countRanges(f vm.Form, constK bool) (nv vm.Sym, n, k ranges.Interval, kName string, ok bool) {
+	nv, ok = plainVar(f.Args[0])
+	if !ok {
+		return nv, n, k, "", false
+	}
+	fc := mc.fc
+	n = fc.symRange(mc.res, nv, mc.loop.Stmt)
+	k = ranges.Top()
+	kName = f.Args[1].String()
+	switch kv, isVar := plainVar(f.Args[1]); {
+	case isVar:
+		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
+	case !constK:
+	case !f.Args[1].IsConst():
+		return nv, n, k, kName, false
+	default:
+		if c := f.Args[1].C; c.IsInt() && c.Num().IsInt64() {
+			k = ranges.Point(c.Num().Int64())
+		}
+	}
+	return nv, n, k, kName, true
+}
+
 // firstAt returns the smallest integer v with α·v + β ≥ f, for α > 0.
 func firstAt(alpha, beta *big.Rat, f int64) (int64, bool) {
 	if alpha.Sign() <= 0 {
@@ -368,20 +404,14 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 	}
 	by, _ := mul.By.Affine()
 	down := by.Coef(mc.loop.Iter).Sign() < 0
-	nv, nAlpha, nBeta, ok1 := oneVar(f.Args[0])
-	if !ok1 || nAlpha.Cmp(big.NewRat(1, 1)) != 0 || nBeta.Sign() != 0 {
+	nv, n, k, kName, ok := mc.countRanges(f, false)
+	if !ok {
 		return false
-	}
-	fc := mc.fc
-	n := fc.symRange(mc.res, nv, mc.loop.Stmt)
-	k := ranges.Top()
-	kName := f.Args[1].String()
-	if kv, kAlpha, kBeta, ok := oneVar(f.Args[1]); ok && kAlpha.Cmp(big.NewRat(1, 1)) == 0 && kBeta.Sign() == 0 {
-		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
 	}
 	if n.IsEmpty() || k.IsEmpty() {
 		return true
 	}
+	fc := mc.fc
 	fits := func(n, k int64) bool {
 		if down {
 			return thresholds.BinomialLoopDownFits(t.Num, n, k)
@@ -473,8 +503,8 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 			}
 		}
 	}
-	nv, alpha, beta, ok := oneVar(f.Args[0])
-	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
+	nv, ok := plainVar(f.Args[0])
+	if !ok {
 		return
 	}
 	n := fc.symRange(res, nv, e)
@@ -651,24 +681,14 @@ func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
 	if f.Kind != vm.Falling {
 		return false
 	}
-	nv, alpha, beta, ok := oneVar(f.Args[0])
-	if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 {
+	nv, n, k, kName, ok := mc.countRanges(f, true)
+	if !ok {
 		return false
-	}
-	fc := mc.fc
-	n := fc.symRange(mc.res, nv, mc.loop.Stmt)
-	k := ranges.Top()
-	kName := f.Args[1].String()
-	if kv, kAlpha, kBeta, ok := oneVar(f.Args[1]); ok && kAlpha.Cmp(big.NewRat(1, 1)) == 0 && kBeta.Sign() == 0 {
-		k = fc.symRange(mc.res, kv, mc.loop.Stmt)
-	} else if !f.Args[1].IsConst() {
-		return false
-	} else if c := f.Args[1].C; c.IsInt() && c.Num().IsInt64() {
-		k = ranges.Point(c.Num().Int64())
 	}
 	if n.IsEmpty() || k.IsEmpty() {
 		return true
 	}
+	fc := mc.fc
 	if bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) {
 		return true
 	}
@@ -725,8 +745,8 @@ func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFa
 	}
 	var idx [2]int
 	for i, a := range f.Args {
-		v, alpha, beta, ok := oneVar(a)
-		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Field != nil || v.Obj == nil {
+		v, ok := plainVar(a)
+		if !ok || v.Field != nil || v.Obj == nil {
 			return nil
 		}
 		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {

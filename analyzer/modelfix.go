@@ -3,7 +3,6 @@ package analyzer
 import (
 	"go/ast"
 	"go/types"
-	"math/big"
 
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/fixes"
@@ -40,8 +39,8 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 	var args []ast.Expr
 	countNonNeg := false
 	for i, arg := range f.Args {
-		v, alpha, beta, ok := oneVar(arg)
-		if !ok || alpha.Cmp(big.NewRat(1, 1)) != 0 || beta.Sign() != 0 || v.Obj == nil || v.Loop != nil {
+		v, ok := plainVar(arg)
+		if !ok || v.Obj == nil || v.Loop != nil {
 			return nil
 		}
 		typ := v.Obj.Type()
