@@ -88,7 +88,7 @@ func (fc *fnCtx) checkModel() {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
 				break
 			}
 		}
