@@ -93,6 +93,7 @@ func (fc *fnCtx) checkModel() {
 			}
 		}
 	}
+	fc.modelSeries(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}

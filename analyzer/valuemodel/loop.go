@@ -80,7 +80,7 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 			l.Accs = append(l.Accs, &Acc{Obj: obj, Init: init.t})
 		}
 	}
-	l.Exits = e.exits(body)
+	l.Exits = l.Exits || e.exits(body)
 	e.trip(l, body, trip(true), roles, sites, true)
 	e.trip(l, body, trip(false), roles, sites, false)
 	e.res.Loops = append(e.res.Loops, l)
@@ -173,61 +173,82 @@ func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
 		l.From, l.Step, l.Count, l.Bound, l.BoundOff = Int(0), rat(1), n, s.X, rat(-1)
 		return l, s.Body
 	case *ast.ForStmt:
-		cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
-		if !ok {
+		// for … ; cond && more; … counts by cond and may stop early
+		// on the rest: the trip count is an upper bound.
+		conds := conjuncts(s.Cond)
+		for _, c := range conds {
+			cond, ok := ast.Unparen(c).(*ast.BinaryExpr)
+			if !ok {
+				continue
+			}
+			if out, body := e.forShape(&Loop{Stmt: st, Iter: l.Iter}, s, cond, en); out != nil {
+				out.Exits = len(conds) > 1
+				return out, body
+			}
+		}
+	}
+	return nil, nil
+}
+
+// conjuncts returns the parts cond joins with &&.
+func conjuncts(cond ast.Expr) []ast.Expr {
+	if b, ok := ast.Unparen(cond).(*ast.BinaryExpr); ok && b.Op == token.LAND {
+		return append(conjuncts(b.X), conjuncts(b.Y)...)
+	}
+	return []ast.Expr{cond}
+}
+
+// forShape recognises a for statement that counts by cond.
+func (e *evaluator) forShape(l *Loop, s *ast.ForStmt, cond *ast.BinaryExpr, en env) (*Loop, *ast.BlockStmt) {
+	if s.Init == nil && s.Post == nil {
+		// for n > 1 { …; n-- }
+		v := e.objOf(cond.X)
+		if v == nil {
+			v = e.objOf(cond.Y)
+		}
+		if v == nil {
 			return nil, nil
 		}
-		if s.Init == nil && s.Post == nil {
-			// for n > 1 { …; n-- }
-			v := e.objOf(cond.X)
-			if v == nil {
-				v = e.objOf(cond.Y)
-			}
-			if v == nil {
-				return nil, nil
-			}
-			var step *big.Rat
-			for _, b := range s.Body.List {
-				if d := e.stepOf(b, v); d != nil {
-					if step != nil {
-						return nil, nil
-					}
-					step = d
+		var step *big.Rat
+		for _, b := range s.Body.List {
+			if d := e.stepOf(b, v); d != nil {
+				if step != nil {
+					return nil, nil
 				}
+				step = d
 			}
-			from, ok := affineOf(e.cur(v, en))
-			if step == nil || !ok {
-				return nil, nil
-			}
-			l.Counter, l.From, l.Step = v, from, step
-			// The counter is stepped in the body: the body sees it
-			// through its role, not as the trip's counter.
-			if !e.bound(l, cond, en) {
-				return nil, nil
-			}
-			l.Counter = nil
-			return l, s.Body
 		}
-		init, ok := s.Init.(*ast.AssignStmt)
-		if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
-			return nil, nil
-		}
-		v := e.objOf(init.Lhs[0])
-		if v == nil || e.opaque[v] {
-			return nil, nil
-		}
-		from, ok := affineOf(e.eval(init.Rhs[0], en))
-		step := e.stepOf(s.Post, v)
-		if !ok || step == nil {
+		from, ok := affineOf(e.cur(v, en))
+		if step == nil || !ok {
 			return nil, nil
 		}
 		l.Counter, l.From, l.Step = v, from, step
+		// The counter is stepped in the body: the body sees it
+		// through its role, not as the trip's counter.
 		if !e.bound(l, cond, en) {
 			return nil, nil
 		}
+		l.Counter = nil
 		return l, s.Body
 	}
-	return nil, nil
+	init, ok := s.Init.(*ast.AssignStmt)
+	if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
+		return nil, nil
+	}
+	v := e.objOf(init.Lhs[0])
+	if v == nil || e.opaque[v] {
+		return nil, nil
+	}
+	from, ok := affineOf(e.eval(init.Rhs[0], en))
+	step := e.stepOf(s.Post, v)
+	if !ok || step == nil {
+		return nil, nil
+	}
+	l.Counter, l.From, l.Step = v, from, step
+	if !e.bound(l, cond, en) {
+		return nil, nil
+	}
+	return l, s.Body
 }
 
 // bound reads the loop condition counter <op> bound into the trip
