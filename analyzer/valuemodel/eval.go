@@ -113,6 +113,11 @@ type evaluator struct {
 	nodes  int
 	opaque map[types.Object]bool // assigned by closures or through their address
 	fields map[types.Object]bool // struct variables whose fields are assigned
+	// once holds the locals defined outside every loop and assigned
+	// nowhere else: one whose value the algebra cannot say is a
+	// variable of its own (ki := int(math.Floor(k))), the same at every
+	// read.
+	once map[types.Object]bool
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -138,7 +143,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -166,7 +171,8 @@ func (e *evaluator) copyEnv(en env) env {
 // those a closure assigns or whose address is taken, and the struct
 // variables whose fields are assigned.
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
-	inLit := 0
+	inLit, inLoop := 0, 0
+	writes := make(map[types.Object]int)
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -175,12 +181,30 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			ast.Inspect(n.Body, visit)
 			inLit--
 			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			inLoop++
+			for _, c := range childNodes(n) {
+				ast.Inspect(c, visit)
+			}
+			inLoop--
+			return false
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
 				e.noteAssign(l, inLit > 0)
+				if id, ok := ast.Unparen(l).(*ast.Ident); ok {
+					if obj := e.info.ObjectOf(id); obj != nil {
+						writes[obj]++
+						if n.Tok == token.DEFINE && inLit == 0 && inLoop == 0 && e.info.Defs[id] != nil {
+							e.once[obj] = true
+						}
+					}
+				}
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
+			if obj := e.objOf(n.X); obj != nil {
+				writes[obj]++
+			}
 		case *ast.UnaryExpr:
 			if n.Op == token.AND {
 				e.noteAssign(n.X, true)
@@ -189,6 +213,34 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 		return true
 	}
 	ast.Inspect(body, visit)
+	for obj := range e.once {
+		if writes[obj] != 1 || e.opaque[obj] {
+			delete(e.once, obj)
+		}
+	}
+}
+
+// childNodes returns the direct parts of a loop statement.
+func childNodes(n ast.Node) []ast.Node {
+	var out []ast.Node
+	add := func(x ast.Node) {
+		if x != nil {
+			out = append(out, x)
+		}
+	}
+	switch n := n.(type) {
+	case *ast.ForStmt:
+		add(n.Init)
+		add(n.Cond)
+		add(n.Post)
+		add(n.Body)
+	case *ast.RangeStmt:
+		add(n.Key)
+		add(n.Value)
+		add(n.X)
+		add(n.Body)
+	}
+	return out
 }
 
 func (e *evaluator) noteAssign(l ast.Expr, opaque bool) {
@@ -413,6 +465,11 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 		if obj := e.objOf(l); obj != nil {
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
+				continue
+			}
+			if vals[i] == nil && e.once[obj] {
+				// Read from here on as the variable itself.
+				delete(en, obj)
 				continue
 			}
 			en[obj] = vals[i]
