@@ -94,6 +94,7 @@ func (fc *fnCtx) checkModel() {
 		}
 	}
 	fc.modelSeries(res)
+	fc.modelCountRatio(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}
@@ -667,7 +668,7 @@ func (fc *fnCtx) modelWorth() bool {
 		}
 		return !open
 	})
-	return open || lgamma && pows >= 2
+	return open || lgamma && pows >= 2 || lgamma && fc.divides()
 }
 
 // fallingLoop reports an accumulator that ends as n!/(n−k)! of a loop

@@ -2,9 +2,12 @@ package analyzer
 
 import (
 	"fmt"
+	"go/ast"
+	"go/token"
 	"math"
 	"math/big"
 
+	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/fixes"
@@ -173,4 +176,94 @@ func parenAffine(a vm.Affine) string {
 		return a.String()
 	}
 	return "(" + a.String() + ")"
+}
+
+// modelCountRatio reports a float quotient whose divisor is a binomial
+// coefficient the code forms on its own (exp of log-gamma differences,
+// a loop, a binomial function), such as a count of orderings over all
+// of them, C(n1+n2, n1): past C(n, n/2)'s limit the divisor is +Inf,
+// and the quotient 0, or NaN where the count overflowed too, although
+// the ratio is finite. A constant numerator (1/C(n, k)) is left alone:
+// 0 is then within rounding of the true value.
+func (fc *fnCtx) modelCountRatio(res *vm.Result) {
+	info := fc.c.pass.TypesInfo
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BinaryExpr:
+			if n.Op != token.QUO {
+				return true
+			}
+			if tv, ok := info.Types[n.X]; ok && tv.Value != nil {
+				return true
+			}
+			t, ok := fc.c.numOf(info.TypeOf(n))
+			if !ok || !t.Float || fc.c.reportedAt(n.Pos()) {
+				return true
+			}
+			y := fc.stripConv(n.Y)
+			switch y.(type) {
+			case *ast.Ident, *ast.CallExpr:
+			default:
+				return true
+			}
+			f := vm.Recognise(res.Values[y])
+			if f.Kind != vm.Binomial || fc.fromReportedLoop(res, y) {
+				return true
+			}
+			nv, ok := plainVar(f.Args[0])
+			var r ranges.Interval
+			if ok {
+				r = fc.symRange(res, nv, n)
+			} else if v, alpha, beta, ok1 := oneVar(f.Args[0]); ok1 && alpha.Cmp(big.NewRat(1, 1)) == 0 && beta.Sign() == 0 {
+				nv, r = v, fc.symRange(res, v, n)
+			} else {
+				// n a sum of variables (n1 + n2): unknown range.
+				r = ranges.Top()
+			}
+			central := thresholds.CentralBinomial(t.Num)
+			if r.IsEmpty() || bounded(r) && r.Hi < central.FirstBad {
+				return true
+			}
+			name := f.Args[0].String()
+			clause := ""
+			if ok {
+				clause, _ = verdict(nv.Name(), r, central.FirstBad)
+			}
+			msg := fmt.Sprintf("divides by C(%s, %s) formed on its own in %s: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the quotient is 0, or NaN where %s overflowed too, although the ratio is finite%s",
+				f.Args[0], f.Args[1], t.typeName(), verb(t), name, central.FirstBad, f.Args[1], parenAffine(f.Args[0]), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), src(n.X), clause)
+			fc.report(finding{node: n, cat: catRatio, msg: msg})
+		}
+		return true
+	})
+}
+
+// fromReportedLoop reports whether y reads an accumulator of a loop
+// that has a finding already: that loop is the root cause.
+func (fc *fnCtx) fromReportedLoop(res *vm.Result, y ast.Expr) bool {
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if mentions(fc.c.pass.TypesInfo, y, a.Obj) && fc.c.reportedAt(l.Stmt.Pos()) {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// divides reports whether the function has a float division, the
+// other half of modelWorth's test for a log-gamma binomial: a count
+// divided by it.
+func (fc *fnCtx) divides() bool {
+	found := false
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if b, ok := n.(*ast.BinaryExpr); ok && b.Op == token.QUO {
+			if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(b)); ok && t.Float {
+				found = true
+			}
+		}
+		return !found
+	})
+	return found
 }

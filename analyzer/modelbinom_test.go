@@ -49,3 +49,38 @@ func TestModelBinomialPeakProbe(t *testing.T) {
 		t.Errorf("the weight C(1030, 1030) formed by ratios = %v, want +Inf", w)
 	}
 }
+
+// TestModelCountRatio runs an acceptance-sampling sheet: binomial
+// coefficients from log-gamma scaled by powers or divided into counts.
+func TestModelCountRatio(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "sampling")
+}
+
+// TestModelCountRatioProbe shows the sampling sheet's wrong values
+// beside math/big: at 3000 parts and p = 1/2 the chance of 1500
+// defects is C(3000, 1500)/2^3000 ≈ 0.0146, but the coefficient from
+// log-gamma is +Inf and 0.5^3000 is 0, so the product is NaN; and a
+// count of C(600, 300)² orderings over C(1200, 600) (a ratio ≈ 0.046)
+// is Inf/Inf.
+func TestModelCountRatioProbe(t *testing.T) {
+	lg := func(x float64) float64 { v, _ := math.Lgamma(x); return v }
+	coef := math.Exp(lg(3001) - lg(1501) - lg(1501))
+	if v := coef * math.Pow(0.5, 1500) * math.Pow(0.5, 1500); !math.IsNaN(v) {
+		t.Errorf("Chance(1500) at 3000 parts = %v, want NaN", v)
+	}
+	exact := new(big.Float).SetInt(new(big.Int).Binomial(3000, 1500))
+	exact.Quo(exact, new(big.Float).SetInt(new(big.Int).Lsh(big.NewInt(1), 3000)))
+	if f, _ := exact.Float64(); f < 0.01 || f > 0.02 {
+		t.Errorf("C(3000, 1500)/2^3000 = %v, want about 0.0146", f)
+	}
+	c := new(big.Int).Binomial(600, 300)
+	count, _ := new(big.Float).SetInt(new(big.Int).Mul(c, c)).Float64()
+	all := math.Exp(lg(1201) - lg(601) - lg(601))
+	if v := count / all; !math.IsNaN(v) {
+		t.Errorf("RankShare(C(600,300)², 600, 600) = %v, want NaN", v)
+	}
+	ratio := new(big.Float).Quo(new(big.Float).SetInt(new(big.Int).Mul(c, c)), new(big.Float).SetInt(new(big.Int).Binomial(1200, 600)))
+	if f, _ := ratio.Float64(); f < 0.04 || f > 0.05 {
+		t.Errorf("C(600,300)²/C(1200,600) = %v, want about 0.046", f)
+	}
+}
