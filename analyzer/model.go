@@ -336,7 +336,7 @@ func (mc *modelCtx) runningFactorial(a *vm.Acc, t numType) bool {
 	}
 	msg := fmt.Sprintf("running factorial %s computes %s inside the sum that divides by it: in %s it %s%s (%s), after which each term is 0 or NaN although the terms are finite; the loop reaches that trip for %s ≥ %d",
 		a.Obj.Name(), vm.Recognise(vm.Factorial(arg)), t.typeName(), verb(t), at, largestFits(kindFactorial, t), v.Name(), first)
-	fc.report(finding{node: l.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
+	fc.report(finding{node: l.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause, match: fc.runningTermFix(mc.res, l, a)})
 	return true
 }
 

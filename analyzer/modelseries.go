@@ -9,6 +9,7 @@ import (
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
 )
 
 // seriesPart is one factor of a series term that the code forms on its
@@ -128,20 +129,7 @@ func (fc *fnCtx) seriesTerm(res *vm.Result, l *vm.Loop, e ast.Expr) bool {
 	if !ok || !t.Float {
 		return false
 	}
-	var parts []seriesPart
-	seriesFactors(e, false, &parts)
-	var up, down []seriesPart
-	for _, p := range parts {
-		p.val = res.Values[p.x]
-		if !grows(p.val, l.Iter) || !fc.formedApart(p.x) {
-			continue
-		}
-		if p.den {
-			down = append(down, p)
-		} else {
-			up = append(up, p)
-		}
-	}
+	up, down := fc.growingParts(res, l, e)
 	if len(up) == 0 || len(down) == 0 {
 		return false
 	}
@@ -175,7 +163,7 @@ func (fc *fnCtx) seriesTerm(res *vm.Result, l *vm.Loop, e ast.Expr) bool {
 	}
 	msg := fmt.Sprintf("series term %s computes %s on %s, from parts formed apart that each grow with the trips: %s; past that the term is +Inf, 0 or NaN although it is finite%s",
 		src(e), what, trip, strings.Join(why, "; "), exits)
-	fc.report(finding{node: e, cat: catPowOverFac, msg: msg})
+	fc.report(finding{node: e, cat: catPowOverFac, msg: msg, match: fc.seriesTermFix(res, l, e, up, down)})
 	return true
 }
 
@@ -279,4 +267,104 @@ func (fc *fnCtx) integerArg(a vm.Affine) bool {
 		}
 	}
 	return true
+}
+
+// seriesTermFix describes, for the fixer, a term math.Pow(x, k)·…/acc
+// whose divisor the model knows to hold k! where the term reads it, a
+// running factorial of the loop multiplied on every trip (the update
+// may be guarded) that starts at 1: the term becomes
+// lgamma.PowOverFactorial(x, k)·… and acc goes. nil for any other
+// term.
+func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down []seriesPart) *fixes.Match {
+	if len(up) != 1 || len(down) != 1 || l.Exits {
+		return nil
+	}
+	call, ok := fc.stripConv(up[0].x).(*ast.CallExpr)
+	if !ok || !fc.c.isMathFunc(call, "Pow") || len(call.Args) != 2 {
+		return nil
+	}
+	pw := up[0].val
+	if pw.Coef.Cmp(big.NewRat(1, 1)) != 0 || len(pw.Pows) != 1 || len(pw.Gamma) != 0 || pw.SqrtPi != 0 {
+		return nil
+	}
+	k := pw.Pows[0].Exp
+	f := vm.Recognise(down[0].val)
+	if f.Kind != vm.Fact || !f.Args[0].Equal(k) || down[0].val.Coef.Cmp(big.NewRat(1, 1)) != 0 {
+		return nil
+	}
+	id, ok := unparen(down[0].x).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	acc := fc.c.pass.TypesInfo.Uses[id]
+	var a *vm.Acc
+	for _, x := range l.Accs {
+		if x.Obj == acc {
+			a = x
+		}
+	}
+	if a == nil || a.Init == nil {
+		return nil
+	}
+	if c, ok := a.Init.IsConst(); !ok || c.Cmp(big.NewRat(1, 1)) != 0 {
+		return nil
+	}
+	for _, op := range a.Ops {
+		if !op.Mul {
+			return nil
+		}
+	}
+	// The term must divide by acc directly: X / acc.
+	var quo *ast.BinaryExpr
+	ast.Inspect(e, func(n ast.Node) bool {
+		if b, ok := n.(*ast.BinaryExpr); ok && b.Op == token.QUO && unparen(b.Y) == down[0].x && quo == nil {
+			quo = b
+		}
+		return quo == nil
+	})
+	if quo == nil || !(quo.X.Pos() <= call.Pos() && call.End() <= quo.X.End()) {
+		return nil
+	}
+	return &fixes.Match{
+		Shape:  fixes.ShapeModelSeriesTerm,
+		Node:   quo,
+		Args:   []ast.Expr{call.Args[0], call.Args[1]},
+		Extra:  []ast.Expr{call},
+		Result: fc.c.pass.TypesInfo.TypeOf(quo),
+		Acc:    acc,
+		Loop:   l.Stmt,
+		Func:   fc.node,
+	}
+}
+
+// runningTermFix finds the term of the loop that divides a power by
+// the running factorial a, for the fix of a finding made at the loop.
+func (fc *fnCtx) runningTermFix(res *vm.Result, l *vm.Loop, a *vm.Acc) *fixes.Match {
+	for _, e := range fc.loopTerms(l) {
+		up, down := fc.growingParts(res, l, e)
+		if len(down) == 1 && mentions(fc.c.pass.TypesInfo, down[0].x, a.Obj) {
+			return fc.seriesTermFix(res, l, e, up, down)
+		}
+	}
+	return nil
+}
+
+// growingParts splits the term e into its factors and returns those
+// the code holds apart that grow with the trips, multiplied and
+// divided.
+func (fc *fnCtx) growingParts(res *vm.Result, l *vm.Loop, e ast.Expr) (up, down []seriesPart) {
+	var parts []seriesPart
+	seriesFactors(e, false, &parts)
+	for _, p := range parts {
+		p.val = res.Values[p.x]
+		if !grows(p.val, l.Iter) || !fc.formedApart(p.x) {
+			continue
+		}
+		if p.den {
+			down = append(down, p)
+		} else {
+			up = append(up, p)
+		}
+	}
+	return up, down
 }

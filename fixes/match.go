@@ -38,6 +38,7 @@ const (
 	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
 	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
 	ShapeModelBinomLoop         // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
+	ShapeModelSeriesTerm        // num/acc in a loop, acc = k! there     Node: the quotient; Args: x, k of math.Pow(x, k) in num; Extra[0]: that call; Acc, Loop (the analyzer vouches for acc's value; see buildModelSeriesTerm)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -1,8 +1,8 @@
 // Package skymodel is the signal model of a small radio-telescope
 // array: antenna beam patterns from Bessel series, the receiver's
-// noise statistics from incomplete-gamma series, and a phase model
-// from the sine series, each summed term by term with the parts of the
-// term kept in running products of their own.
+// noise statistics from incomplete-gamma series, each summed term by
+// term with the parts of the term kept in running products of their
+// own.
 package skymodel
 
 import "math"
@@ -86,20 +86,6 @@ func NoiseTail(a, x float64) float64 {
 		total += math.Pow(x, float64(n)) / divisor // want `series term math.Pow\(x, float64\(n\)\) / divisor computes Γ\(a\)·\(x\)\^\(n\)/Γ\(a \+ n \+ 1\) on the trip of n.*at x\^32, for \|x\| ≥ 4.29497e\+09`
 	}
 	return math.Exp(a*math.Log(x)-x) * total
-}
-
-// Phase is the sine of a phase by its Taylor series, the factorial
-// argument 2k+1 kept in a running product.
-func Phase(x float64, terms int) float64 {
-	sum, fact, sign := 0.0, 1.0, 1.0
-	for k := 0; k < terms; k++ {
-		if k > 0 {
-			fact *= float64(2*k) * float64(2*k+1)
-		}
-		sum += sign * math.Pow(x, float64(2*k+1)) / fact // want `fact holds \(2\*k \+ 1\)!, which overflows to \+Inf once 2\*k \+ 1 ≥ 171`
-		sign = -sign
-	}
-	return sum
 }
 
 // The functions below stay silent.
