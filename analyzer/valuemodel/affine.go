@@ -9,12 +9,15 @@ import (
 )
 
 // Sym is a variable of the function: a local or parameter (Obj), a
-// numeric field of one (Obj.Field), or the iteration index of a loop
-// (Loop, counting trips from 0).
+// numeric field of one (Obj.Field), the iteration index of a loop
+// (Loop, counting trips from 0), or the value a local got from an
+// assignment the algebra cannot evaluate (Obj with Def, that
+// assignment), which is a variable of its own until the next one.
 type Sym struct {
 	Obj   types.Object
 	Field types.Object
 	Loop  ast.Node
+	Def   ast.Node
 }
 
 // Name renders the variable as code names it.
@@ -46,6 +49,8 @@ func (s Sym) before(t Sym) bool {
 // (a variable and a loop starting there).
 func (s Sym) rank() int {
 	switch {
+	case s.Def != nil:
+		return 3
 	case s.Loop != nil:
 		return 2
 	case s.Field != nil:
@@ -56,6 +61,10 @@ func (s Sym) rank() int {
 
 func (s Sym) pos() int {
 	switch {
+	case s.Def != nil:
+		// The assignment first, then the variable among those it
+		// assigns (close together, within 2^20 of one another).
+		return int(s.Def.Pos())<<21 | int(s.Obj.Pos())&(1<<20-1)
 	case s.Loop != nil:
 		return int(s.Loop.Pos()) << 1
 	case s.Obj != nil:

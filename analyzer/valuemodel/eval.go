@@ -118,6 +118,9 @@ type evaluator struct {
 	// variable of its own (ki := int(math.Floor(k))), the same at every
 	// read.
 	once map[types.Object]bool
+	// loops is the depth of loop bodies being walked: a value assigned
+	// there changes from trip to trip.
+	loops int
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -465,12 +468,23 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 		if obj := e.objOf(l); obj != nil {
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
+				if e.once[obj] && e.loops == 0 {
+					// A struct defined once: its fields read as
+					// variables of their own.
+					delete(en, obj)
+				}
 				continue
 			}
-			if vals[i] == nil && e.once[obj] {
+			switch {
+			case vals[i] != nil || e.loops > 0:
+			case e.once[obj]:
 				// Read from here on as the variable itself.
 				delete(en, obj)
 				continue
+			default:
+				// The value this statement gave it, a variable of
+				// its own until the next assignment.
+				vals[i] = &value{t: FromAffine(Var(Sym{Obj: obj, Def: s}))}
 			}
 			en[obj] = vals[i]
 		}

@@ -81,8 +81,10 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		}
 	}
 	l.Exits = l.Exits || e.exits(body)
+	e.loops++
 	e.trip(l, body, trip(true), roles, sites, true)
 	e.trip(l, body, trip(false), roles, sites, false)
+	e.loops--
 	e.res.Loops = append(e.res.Loops, l)
 	// Past the loop.
 	for obj, r := range roles {
@@ -136,6 +138,8 @@ func (e *evaluator) cur(obj types.Object, en env) *value {
 func (e *evaluator) opaqueLoop(st ast.Stmt, en env) {
 	e.forgetAssigned([]ast.Stmt{st}, en)
 	in := e.copyEnv(en)
+	e.loops++
+	defer func() { e.loops-- }()
 	switch s := st.(type) {
 	case *ast.ForStmt:
 		if s.Init != nil {

@@ -5,6 +5,8 @@
 // computes replaced by one call, and the others left as they are.
 package fixbinompeak
 
+import "math"
+
 // Length is a distance on the glyph's em square.
 type Length float64
 
@@ -109,4 +111,27 @@ func Ramp(n float64) float64 {
 		r *= (n - i + 1) / i
 	}
 	return r
+}
+
+// Cell is one cell of the hinting sheet.
+type Cell struct{ Number float64 }
+
+// SheetCombin is the sheet function COMBIN as the sheet evaluates it:
+// the cells are read, truncated to whole numbers and checked, each
+// step reassigning the locals.
+func SheetCombin(n, c Cell) float64 {
+	number, chosen, val := 0.0, 0.0, 1.0
+	number = n.Number
+	chosen = c.Number
+	number, chosen = math.Trunc(number), math.Trunc(chosen)
+	if chosen > number {
+		return 0
+	}
+	if chosen == number || chosen == 0 {
+		return 1
+	}
+	for c := float64(1); c <= chosen; c++ { // want `multiplicative binomial loop computes C\(number, chosen\) in float64 one ratio at a time`
+		val *= (number + 1 - c) / c
+	}
+	return math.Ceil(val)
 }
