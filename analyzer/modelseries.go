@@ -218,7 +218,9 @@ func (fc *fnCtx) partBreaks(l *vm.Loop, p seriesPart, t numType, name namer) (st
 		if len(p.val.Pows) == 1 && len(p.val.Gamma) == 0 && p.val.Coef.Cmp(big.NewRat(1, 1)) == 0 {
 			// x^e alone: the first |x| at which its last trip's power
 			// leaves the type.
-			if e, ok := last(pw.Exp).At(nil); ok && e.IsInt() && e.Num().IsInt64() && e.Sign() > 0 {
+			// Past 2^16 factors the bisection's exact powers cost more
+			// than a message is worth.
+			if e, ok := last(pw.Exp).At(nil); ok && e.IsInt() && e.Num().IsInt64() && e.Sign() > 0 && e.Num().Int64() <= 1<<16 {
 				k := e.Num().Int64()
 				return fmt.Sprintf("%s holds %s, which %s on the loop's last trip, at %s^%d, for |%s| ≥ %s", src(p.x), val, verb(t), parenAffine(pw.Base), k, pw.Base, fmtFloat(thresholds.PowerBaseFirstBad(t.Num, k))), true
 			}
