@@ -75,4 +75,23 @@ func TestModelSeriesProbes(t *testing.T) {
 	if b := math.Pow(200, 150) / fact / esum; !math.IsNaN(b) {
 		t.Errorf("ErlangBSmall(200, 150) = %v, want NaN", b)
 	}
+	// skymodel.Coherence(200): the terms 200^k/k! peak near k = 200 at
+	// about 1e85 and are still growing at k = 171 (math/big); pw is +Inf
+	// from k = 134, the term +Inf, and the loop stops there with the sum
+	// +Inf, although e^200 ≈ 7.2e86 fits.
+	peak = new(big.Float).Quo(pow(200, 171), new(big.Float).SetInt(new(big.Int).MulRange(1, 171)))
+	if peak.Cmp(maxF) > 0 {
+		t.Errorf("200^171/171! = %v does not fit", peak)
+	}
+	csum, cpw, cfact, cterm, ck := 1.0, 1.0, 1.0, 1.0, 0
+	for math.Abs(cterm) > 1e-16*math.Abs(csum) {
+		ck++
+		cpw *= 200
+		cfact *= float64(ck)
+		cterm = cpw / cfact
+		csum += cterm
+	}
+	if !math.IsInf(csum, 0) && !math.IsNaN(csum) {
+		t.Errorf("Coherence(200) = %v, want +Inf or NaN", csum)
+	}
 }

@@ -12,7 +12,9 @@ import (
 // numeric field of one (Obj.Field), the iteration index of a loop
 // (Loop, counting trips from 0), or the value a local got from an
 // assignment the algebra cannot evaluate (Obj with Def, that
-// assignment), which is a variable of its own until the next one.
+// assignment), which is a variable of its own until the next one, or
+// the number of trips of a loop that runs until a condition of its
+// own (Def alone, the loop).
 type Sym struct {
 	Obj   types.Object
 	Field types.Object
@@ -23,6 +25,8 @@ type Sym struct {
 // Name renders the variable as code names it.
 func (s Sym) Name() string {
 	switch {
+	case s.Def != nil && s.Obj == nil:
+		return "trips"
 	case s.Loop != nil:
 		return "t"
 	case s.Obj == nil:
@@ -61,6 +65,8 @@ func (s Sym) rank() int {
 
 func (s Sym) pos() int {
 	switch {
+	case s.Def != nil && s.Obj == nil:
+		return int(s.Def.Pos()) << 21
 	case s.Def != nil:
 		// The assignment first, then the variable among those it
 		// assigns (close together, within 2^20 of one another).

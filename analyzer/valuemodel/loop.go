@@ -190,8 +190,54 @@ func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
 				return out, body
 			}
 		}
+		return e.untilShape(l, s, en)
 	}
 	return nil, nil
+}
+
+// untilShape recognises a loop that runs until a condition of its own
+// holds (for term > eps { k++; … }, for { …; if done { break } }) and
+// steps a variable by a constant once a trip: its trips are counted
+// by that variable, their number is a variable of its own (Trips), and
+// the loop may stop at any trip (Exits).
+func (e *evaluator) untilShape(l *Loop, s *ast.ForStmt, en env) (*Loop, *ast.BlockStmt) {
+	if s.Init != nil || s.Post != nil {
+		return nil, nil
+	}
+	for _, b := range s.Body.List {
+		id, ok := stepTarget(b)
+		if !ok {
+			continue
+		}
+		v := e.objOf(id)
+		if v == nil || e.opaque[v] {
+			continue
+		}
+		step := e.stepOf(b, v)
+		from, ok := affineOf(e.cur(v, en))
+		if step == nil || !ok {
+			continue
+		}
+		l.From, l.Step = from, step
+		l.Count = Var(Sym{Def: s})
+		l.BoundOff = new(big.Rat)
+		l.Exits = true
+		return l, s.Body
+	}
+	return nil, nil
+}
+
+// stepTarget returns what s steps, for v++, v--, v += c and v = v + c.
+func stepTarget(s ast.Stmt) (ast.Expr, bool) {
+	switch s := s.(type) {
+	case *ast.IncDecStmt:
+		return s.X, true
+	case *ast.AssignStmt:
+		if len(s.Lhs) == 1 {
+			return s.Lhs[0], true
+		}
+	}
+	return nil, false
 }
 
 // conjuncts returns the parts cond joins with &&.

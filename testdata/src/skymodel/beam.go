@@ -88,7 +88,37 @@ func NoiseTail(a, x float64) float64 {
 	return math.Exp(a*math.Log(x)-x) * total
 }
 
+// Coherence is the array's coherence factor e^x by its series, summed
+// until a term no longer changes the sum: the power and the factorial
+// run apart, with no bound on the trips.
+func Coherence(x float64) float64 {
+	sum, pw, fact, term := 1.0, 1.0, 1.0, 1.0
+	k := 0
+	for math.Abs(term) > 1e-16*math.Abs(sum) {
+		k++
+		pw *= x
+		fact *= float64(k)
+		term = pw / fact // want `series term pw / fact computes \(x\)\^\(t \+ 1\)/Γ\(t \+ 2\) on trip t \(from 0\), from parts formed apart that each grow with the trips: pw holds .*; fact holds \(t \+ 1\)!, which overflows to \+Inf once t \+ 1 ≥ 171 .*the loop may stop early`
+		sum += term
+	}
+	return sum
+}
+
 // The functions below stay silent.
+
+// CoherenceRatio builds each term from the one before, until it no
+// longer changes the sum.
+func CoherenceRatio(x float64) float64 {
+	sum, term := 1.0, 1.0
+	k := 0
+	for math.Abs(term) > 1e-16*math.Abs(sum) {
+		k++
+		term *= x / float64(k)
+		sum += term
+	}
+	return sum
+}
+
 
 // PhaseRatio forms each term from the one before, x²/((2k)(2k+1)) at
 // a time: no part grows on its own.
