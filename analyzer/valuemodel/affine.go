@@ -14,7 +14,8 @@ import (
 // assignment the algebra cannot evaluate (Obj with Def, that
 // assignment), which is a variable of its own until the next one, or
 // the number of trips of a loop that runs until a condition of its
-// own (Def alone, the loop).
+// own (Def alone, the loop), or the length of a slice variable that
+// keeps one length (Obj the builtin len, Field the variable).
 type Sym struct {
 	Obj   types.Object
 	Field types.Object
@@ -27,6 +28,8 @@ func (s Sym) Name() string {
 	switch {
 	case s.Def != nil && s.Obj == nil:
 		return "trips"
+	case s.isLen():
+		return "len(" + s.Field.Name() + ")"
 	case s.Loop != nil:
 		return "t"
 	case s.Obj == nil:
@@ -53,6 +56,8 @@ func (s Sym) before(t Sym) bool {
 // (a variable and a loop starting there).
 func (s Sym) rank() int {
 	switch {
+	case s.isLen():
+		return 4
 	case s.Def != nil:
 		return 3
 	case s.Loop != nil:
@@ -81,6 +86,12 @@ func (s Sym) pos() int {
 		return p
 	}
 	return 0
+}
+
+// isLen reports whether s is len(Field) of a slice variable.
+func (s Sym) isLen() bool {
+	_, ok := s.Obj.(*types.Builtin)
+	return ok && s.Field != nil
 }
 
 // Lin is one term k·Sym of an affine form.

@@ -121,6 +121,8 @@ type evaluator struct {
 	// loops is the depth of loop bodies being walked: a value assigned
 	// there changes from trip to trip.
 	loops int
+	// writes counts the assignments of each variable.
+	writes map[types.Object]int
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -176,6 +178,7 @@ func (e *evaluator) copyEnv(en env) env {
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 	inLit, inLoop := 0, 0
 	writes := make(map[types.Object]int)
+	e.writes = writes
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -712,6 +715,9 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		return v
 	}
+	if v := e.length(x); v != nil {
+		return v
+	}
 	args := make([]*value, len(x.Args))
 	for i, a := range x.Args {
 		args[i] = e.eval(a, en)
@@ -756,4 +762,34 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 	}
 	return nil
+}
+
+// length gives len(x) of a slice variable that keeps one length in the
+// function (a parameter never assigned, or a local defined once, and
+// its address never taken) a variable of its own, Sym{Obj: len, Field:
+// x}; nil for any other call.
+func (e *evaluator) length(call *ast.CallExpr) *value {
+	id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+	if !ok || len(call.Args) != 1 {
+		return nil
+	}
+	b, ok := e.info.Uses[id].(*types.Builtin)
+	if !ok || b.Name() != "len" {
+		return nil
+	}
+	x := e.objOf(call.Args[0])
+	if x == nil || e.opaque[x] {
+		return nil
+	}
+	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
+		return nil
+	}
+	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
+		return nil
+	}
+	s := Sym{Obj: b, Field: x}
+	if _, ok := e.res.Exprs[s]; !ok {
+		e.res.Exprs[s] = call
+	}
+	return &value{t: FromAffine(Var(s))}
 }

@@ -65,6 +65,11 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		if l.Counter != nil {
 			in[l.Counter] = &value{t: FromAffine(l.From.Add(Var(l.Iter).Scale(l.Step)))}
 		}
+		if rs, ok := st.(*ast.RangeStmt); ok && rs.Value != nil {
+			if v := e.objOf(rs.Value); v != nil {
+				in[v] = nil // the element changes with the trip
+			}
+		}
 		return in
 	}
 	// Two passes: the first learns each accumulator's operands, the
@@ -156,17 +161,25 @@ func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
 	l := &Loop{Stmt: st, Iter: Sym{Loop: st}}
 	switch s := st.(type) {
 	case *ast.RangeStmt:
-		if s.Value != nil || !e.numeric(s.X) {
-			return nil, nil
-		}
-		if t := e.info.TypeOf(s.X); t != nil {
-			if b, ok := t.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+		var n Affine
+		if v := e.rangeLen(s); v != nil {
+			// Over a slice that keeps its length: len(x) trips, the
+			// element unknown on each.
+			n, _ = affineOf(v)
+		} else {
+			if s.Value != nil || !e.numeric(s.X) {
 				return nil, nil
 			}
-		}
-		n, ok := affineOf(e.eval(s.X, en))
-		if !ok {
-			return nil, nil
+			if t := e.info.TypeOf(s.X); t != nil {
+				if b, ok := t.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+					return nil, nil
+				}
+			}
+			var ok bool
+			n, ok = affineOf(e.eval(s.X, en))
+			if !ok {
+				return nil, nil
+			}
 		}
 		if s.Key != nil {
 			l.Counter = e.objOf(s.Key)
@@ -823,4 +836,24 @@ func (e *evaluator) exits(body *ast.BlockStmt) bool {
 	}
 	walk(body, false)
 	return found
+}
+
+// rangeLen returns len(x) for a range over a slice variable x that
+// keeps its length, nil otherwise.
+func (e *evaluator) rangeLen(s *ast.RangeStmt) *value {
+	x := e.objOf(s.X)
+	if x == nil || e.opaque[x] {
+		return nil
+	}
+	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
+		return nil
+	}
+	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
+		return nil
+	}
+	b, _ := types.Universe.Lookup("len").(*types.Builtin)
+	if b == nil {
+		return nil
+	}
+	return &value{t: FromAffine(Var(Sym{Obj: b, Field: x}))}
 }

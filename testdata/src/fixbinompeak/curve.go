@@ -135,3 +135,31 @@ func SheetCombin(n, c Cell) float64 {
 	}
 	return math.Ceil(val)
 }
+
+// Point is one control point of an outline.
+type Point struct{ X, Y Length }
+
+// Scale multiplies each control point of a curve after the first by
+// its Bernstein weight C(n−1, i), stepping the weight one ratio at a
+// time over the points.
+func Scale(pts []Point) {
+	w := Length(1)
+	for i := 1; i < len(pts); i++ { // want `running product w computes C\(len\(pts\) - 1, i\) one ratio at a time in float64`
+		w *= Length(len(pts)-i) / Length(i)
+		pts[i].X *= w
+		pts[i].Y *= w
+	}
+}
+
+// Spread fills the weights C(n, i+1) of n+1 points over a range of
+// the first n.
+func Spread(pts []Point) []Length {
+	out := make([]Length, len(pts)+1)
+	out[0] = 1
+	w := Length(1)
+	for i := range pts { // want `running product w computes C\(len\(pts\), i \+ 1\) one ratio at a time`
+		w *= Length(len(pts)-i) / Length(i+1)
+		out[i+1] = w
+	}
+	return out
+}
