@@ -777,19 +777,28 @@ func (e *evaluator) length(call *ast.CallExpr) *value {
 	if !ok || b.Name() != "len" {
 		return nil
 	}
-	x := e.objOf(call.Args[0])
-	if x == nil || e.opaque[x] {
+	s, ok := e.lenSym(e.objOf(call.Args[0]))
+	if !ok {
 		return nil
 	}
-	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
-		return nil
-	}
-	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
-		return nil
-	}
-	s := Sym{Obj: b, Field: x}
 	if _, ok := e.res.Exprs[s]; !ok {
 		e.res.Exprs[s] = call
 	}
 	return &value{t: FromAffine(Var(s))}
+}
+
+// lenSym returns the variable len(x) for a slice variable x that keeps
+// one length in the function.
+func (e *evaluator) lenSym(x types.Object) (Sym, bool) {
+	if x == nil || e.opaque[x] {
+		return Sym{}, false
+	}
+	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
+		return Sym{}, false
+	}
+	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
+		return Sym{}, false
+	}
+	b, ok := types.Universe.Lookup("len").(*types.Builtin)
+	return Sym{Obj: b, Field: x}, ok
 }

@@ -841,19 +841,8 @@ func (e *evaluator) exits(body *ast.BlockStmt) bool {
 // rangeLen returns len(x) for a range over a slice variable x that
 // keeps its length, nil otherwise.
 func (e *evaluator) rangeLen(s *ast.RangeStmt) *value {
-	x := e.objOf(s.X)
-	if x == nil || e.opaque[x] {
-		return nil
+	if l, ok := e.lenSym(e.objOf(s.X)); ok {
+		return &value{t: FromAffine(Var(l))}
 	}
-	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
-		return nil
-	}
-	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
-		return nil
-	}
-	b, _ := types.Universe.Lookup("len").(*types.Builtin)
-	if b == nil {
-		return nil
-	}
-	return &value{t: FromAffine(Var(Sym{Obj: b, Field: x}))}
+	return nil
 }
