@@ -16,10 +16,9 @@ import (
 // own and that grows with the trips: a running power, a running
 // factorial or rising factorial, a product an inner loop builds.
 type seriesPart struct {
-	x    ast.Expr
-	val  *vm.Term
-	den  bool // the term divides by it
-	fact *vm.Affine
+	x   ast.Expr
+	val *vm.Term
+	den bool // the term divides by it
 }
 
 // modelSeries reports the series loops whose term is a ratio of
@@ -35,8 +34,9 @@ type seriesPart struct {
 // The term is finite where the terms of the series are, but a part
 // that left its type's range makes it +Inf, 0 or NaN: Inf/finite,
 // finite/Inf and Inf/Inf. Convergence loops (a condition of their own
-// beside the counter) are judged too: they run that far exactly where
-// the terms are not yet small, which is where the parts are large.
+// beside the counter, or instead of one) are judged too: one that stops
+// when the terms are small runs on while they are not, which is where
+// the parts are large.
 func (fc *fnCtx) modelSeries(res *vm.Result) {
 	for _, l := range res.Loops {
 		if fc.c.reportedAt(l.Stmt.Pos()) {
