@@ -8,8 +8,6 @@ import (
 	"go/types"
 	"math"
 	"strconv"
-
-	"github.com/overfact/overfact/analyzer/thresholds"
 )
 
 // No rewrite makes 25! fit an int64, so a standalone factorial gets a
@@ -29,9 +27,8 @@ func buildGuard(b *builder) error {
 		return errors.New("factorial match lacks a function body or a named parameter")
 	}
 	if m.FirstBad <= 0 {
-		m.FirstBad = factorialFirstBad(b.pass.TypesSizes, m.Result)
-	}
-	if m.FirstBad <= 0 {
+		// The analyzer computes every threshold (analyzer/thresholds)
+		// and hands it over; the fixer types none and asks nobody.
 		return errors.New("factorial match has no first bad value")
 	}
 	if _, ok := m.Param.Type().(*types.TypeParam); ok {
@@ -75,22 +72,6 @@ func buildGuard(b *builder) error {
 		b.message += " (imports fmt)"
 	}
 	return nil
-}
-
-// factorialFirstBad asks the thresholds package for the first n whose n!
-// does not fit t, or returns 0.
-func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
-	if t == nil {
-		return 0
-	}
-	num, ok := thresholds.Lookup(t, sizes)
-	if !ok {
-		return 0
-	}
-	if l := thresholds.Factorial(num); !l.None() {
-		return l.FirstBad
-	}
-	return 0
 }
 
 // assigned reports whether obj is assigned, incremented or has its
