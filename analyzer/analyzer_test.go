@@ -265,3 +265,25 @@ func checkRelated(t *testing.T, fset *token.FileSet, diags []analysis.Diagnostic
 		}
 	}
 }
+
+// TestCategoryRules checks the category rules that report writers and
+// drivers take from the analyzer instead of spelling category names: the
+// definite form (suffix ".definite", as doc.go documents) is an error and
+// the bare form a warning, and only the findings at a factorial's
+// definition, whose fix is a range guard, have their fixes applied last.
+func TestCategoryRules(t *testing.T) {
+	for _, c := range Categories() {
+		definite := strings.HasSuffix(c.ID, ".definite")
+		want := SeverityWarning
+		if definite {
+			want = SeverityError
+		}
+		if Definite(c.ID) != definite || Severity(c.ID) != want {
+			t.Errorf("%s: Definite = %v, Severity = %q", c.ID, Definite(c.ID), Severity(c.ID))
+		}
+		base := strings.TrimSuffix(c.ID, ".definite")
+		if got, want := FixesLast(c.ID), base == "factorial-loop" || base == "factorial-recursion"; got != want {
+			t.Errorf("FixesLast(%s) = %v, want %v", c.ID, got, want)
+		}
+	}
+}
