@@ -127,13 +127,13 @@ func (fc *fnCtx) updateOf(st ast.Stmt, sh *loopShape) *accLoop {
 	case token.QUO_ASSIGN:
 		al.div = as.Rhs[0]
 	case token.ASSIGN:
-		rhs, ok := unparen(as.Rhs[0]).(*ast.BinaryExpr)
+		rhs, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 		if !ok {
 			return nil
 		}
 		if rhs.Op == token.QUO {
 			al.div = rhs.Y
-			if rhs, ok = unparen(rhs.X).(*ast.BinaryExpr); !ok {
+			if rhs, ok = ast.Unparen(rhs.X).(*ast.BinaryExpr); !ok {
 				return nil
 			}
 		}

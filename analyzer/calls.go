@@ -58,7 +58,7 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	if !ok {
 		return
 	}
-	inner, ok := unparen(conv.Args[0]).(*ast.CallExpr)
+	inner, ok := ast.Unparen(conv.Args[0]).(*ast.CallExpr)
 	if !ok {
 		return
 	}

@@ -155,7 +155,7 @@ func (c *checker) indexCalls() {
 				return true
 			}
 			c.callIndex[fn] = append(c.callIndex[fn], call)
-			switch fun := unparen(call.Fun).(type) {
+			switch fun := ast.Unparen(call.Fun).(type) {
 			case *ast.Ident:
 				called[fun] = true
 			case *ast.SelectorExpr:
@@ -241,7 +241,7 @@ func (c *checker) setOnce(body *ast.BlockStmt, v *types.Var) bool {
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				if id, ok := unparen(l).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
+				if id, ok := ast.Unparen(l).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
 					once = false
 				}
 			}

@@ -59,8 +59,8 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 			}
 		case *ast.BinaryExpr:
 			if cur != nil && n.Op == token.MUL && !cur.callMul {
-				_, x := unparen(n.X).(*ast.CallExpr)
-				_, y := unparen(n.Y).(*ast.CallExpr)
+				_, x := ast.Unparen(n.X).(*ast.CallExpr)
+				_, y := ast.Unparen(n.Y).(*ast.CallExpr)
 				cur.callMul = x || y
 			}
 		case *ast.CallExpr:
@@ -300,7 +300,7 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 }
 
 func isMulOrQuo(e ast.Expr) bool {
-	b, ok := unparen(e).(*ast.BinaryExpr)
+	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
 	return ok && (b.Op == token.MUL || b.Op == token.QUO)
 }
 

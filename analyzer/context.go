@@ -7,6 +7,8 @@ import (
 	"go/types"
 	"math"
 
+	"golang.org/x/tools/go/types/typeutil"
+
 	"github.com/overfact/overfact/analyzer/ranges"
 )
 
@@ -81,7 +83,7 @@ func (c *checker) packageTables() map[types.Object]*ast.CompositeLit {
 // rangeOf returns the range of the integer expression e where it is
 // evaluated, narrowed by statement-level bound annotations over it.
 func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, ok := fc.intConst(e); ok {
 		return ranges.Point(v)
 	}
@@ -122,7 +124,7 @@ func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
 
 // floatConst returns the value of a constant numeric expression.
 func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[unparen(e)]
+	tv, ok := fc.c.pass.TypesInfo.Types[ast.Unparen(e)]
 	if !ok || tv.Value == nil {
 		return 0, false
 	}
@@ -166,20 +168,10 @@ func addSat(x, d int64) int64 {
 	return x + d
 }
 
-func unparen(e ast.Expr) ast.Expr {
-	for {
-		p, ok := e.(*ast.ParenExpr)
-		if !ok {
-			return e
-		}
-		e = p.X
-	}
-}
-
 // stripConv removes parentheses and numeric conversions around e.
 func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
 	for {
-		e = unparen(e)
+		e = ast.Unparen(e)
 		call, ok := e.(*ast.CallExpr)
 		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
 			return e
@@ -195,7 +187,7 @@ func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
 
 // objOf returns the variable an identifier denotes.
 func (c *checker) objOf(e ast.Expr) types.Object {
-	id, ok := unparen(e).(*ast.Ident)
+	id, ok := ast.Unparen(e).(*ast.Ident)
 	if !ok {
 		return nil
 	}
@@ -206,37 +198,10 @@ func (c *checker) objOf(e ast.Expr) types.Object {
 	return obj
 }
 
-// calleeOf returns the function a call statically calls, or nil.
+// calleeOf returns the function a call statically calls, or nil; for a
+// generic function or method, the generic one.
 func (c *checker) calleeOf(call *ast.CallExpr) *types.Func {
-	var id *ast.Ident
-	switch fun := unparen(call.Fun).(type) {
-	case *ast.Ident:
-		id = fun
-	case *ast.SelectorExpr:
-		id = fun.Sel
-	case *ast.IndexExpr: // generic instantiation f[T](...)
-		switch x := fun.X.(type) {
-		case *ast.Ident:
-			id = x
-		case *ast.SelectorExpr:
-			id = x.Sel
-		}
-	case *ast.IndexListExpr:
-		switch x := fun.X.(type) {
-		case *ast.Ident:
-			id = x
-		case *ast.SelectorExpr:
-			id = x.Sel
-		}
-	}
-	if id == nil {
-		return nil
-	}
-	fn, _ := c.pass.TypesInfo.Uses[id].(*types.Func)
-	if fn != nil {
-		fn = fn.Origin()
-	}
-	return fn
+	return typeutil.StaticCallee(c.pass.TypesInfo, call)
 }
 
 // isMathFunc reports whether call calls the function name of package math.

@@ -246,16 +246,16 @@ func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				if id, ok := unparen(l).(*ast.Ident); ok && info.ObjectOf(id) == v {
+				if id, ok := ast.Unparen(l).(*ast.Ident); ok && info.ObjectOf(id) == v {
 					found = true
 				}
 			}
 		case *ast.IncDecStmt:
-			if id, ok := unparen(n.X).(*ast.Ident); ok && info.ObjectOf(id) == v {
+			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && info.ObjectOf(id) == v {
 				found = true
 			}
 		case *ast.UnaryExpr:
-			if id, ok := unparen(n.X).(*ast.Ident); ok && n.Op == token.AND && info.ObjectOf(id) == v {
+			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && n.Op == token.AND && info.ObjectOf(id) == v {
 				found = true
 			}
 		}
@@ -279,7 +279,7 @@ func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		if !ok || len(ret.Results) == 0 {
 			return true
 		}
-		call, ok := unparen(ret.Results[0]).(*ast.CallExpr)
+		call, ok := ast.Unparen(ret.Results[0]).(*ast.CallExpr)
 		if !ok || !types.Identical(fc.c.pass.TypesInfo.TypeOf(call), resT) {
 			return false
 		}

@@ -25,7 +25,7 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 	if depth > maxDepth {
 		return affine{}, false
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, ok := fc.floatConst(e); ok {
 		return affine{b: v}, true
 	}
@@ -283,7 +283,7 @@ func (fc *fnCtx) betaArgs(two, one []factor, other int) (a, b ast.Expr, ok bool)
 		}
 	}
 	// Γ(a)Γ(b)/Γ(a+b) with a, b separate variables: compare the syntax.
-	if s, ok := unparen(one[0].arg).(*ast.BinaryExpr); ok && s.Op == token.ADD {
+	if s, ok := ast.Unparen(one[0].arg).(*ast.BinaryExpr); ok && s.Op == token.ADD {
 		if src(s.X) == src(two[0].arg) && src(s.Y) == src(two[1].arg) || src(s.Y) == src(two[0].arg) && src(s.X) == src(two[1].arg) {
 			return two[0].arg, two[1].arg, true
 		}
@@ -474,7 +474,7 @@ func (fc *fnCtx) storedIn(e ast.Expr, parents map[ast.Node]ast.Node) *types.Var 
 		if r != e {
 			continue
 		}
-		id, ok := unparen(lhs[i]).(*ast.Ident)
+		id, ok := ast.Unparen(lhs[i]).(*ast.Ident)
 		if !ok {
 			return nil
 		}

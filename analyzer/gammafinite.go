@@ -11,7 +11,7 @@ import (
 // constant c, which the type checker does not fold: a Gamma argument
 // written so is a constant like 1e308.
 func (fc *fnCtx) specialConst(e ast.Expr) (float64, bool) {
-	call, ok := unparen(e).(*ast.CallExpr)
+	call, ok := ast.Unparen(e).(*ast.CallExpr)
 	if !ok {
 		return 0, false
 	}

@@ -101,7 +101,7 @@ func (fc *fnCtx) scaledTerm(e ast.Expr, depth int) (c, k float64, t string, ok b
 	if depth > maxDepth {
 		return 0, 0, "", false
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, isConst := fc.floatConst(e); isConst {
 		return v, 0, "", true
 	}

@@ -104,9 +104,9 @@ func powerText(fc *fnCtx, pow factor) string {
 // base or exponent of x^k: in parentheses unless it is a name, a
 // selector, a literal or a call.
 func atom(e ast.Expr) string {
-	switch unparen(e).(type) {
+	switch ast.Unparen(e).(type) {
 	case *ast.Ident, *ast.BasicLit, *ast.SelectorExpr, *ast.CallExpr:
-		return src(unparen(e))
+		return src(ast.Unparen(e))
 	}
 	return "(" + src(e) + ")"
 }
@@ -122,7 +122,7 @@ func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
 
 // negated reports whether e is −x: the exponent of e^(−λ) beside λ^k.
 func (fc *fnCtx) negated(e, x ast.Expr) bool {
-	u, ok := unparen(e).(*ast.UnaryExpr)
+	u, ok := ast.Unparen(e).(*ast.UnaryExpr)
 	if !ok || u.Op != token.SUB {
 		return false
 	}

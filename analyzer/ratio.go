@@ -35,10 +35,10 @@ func (fc *fnCtx) brokenFactor(num []factor) (f factor, r ranges.Interval, first 
 // bang renders the factorial of an argument: n!, (n-k)!, (2*n)!.
 func bang(arg ast.Expr, off int64) string {
 	s := plus(src(arg), off)
-	if _, ok := unparen(arg).(*ast.Ident); ok && off == 0 {
+	if _, ok := ast.Unparen(arg).(*ast.Ident); ok && off == 0 {
 		return s + "!"
 	}
-	if _, ok := unparen(arg).(*ast.BasicLit); ok && off == 0 {
+	if _, ok := ast.Unparen(arg).(*ast.BasicLit); ok && off == 0 {
 		return s + "!"
 	}
 	return "(" + s + ")!"
@@ -159,7 +159,7 @@ func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shap
 		m.Args = []ast.Expr{half}
 		return fixes.ShapeCatalan, ""
 	case len(dens) == 1:
-		if b, ok := unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
+		if b, ok := ast.Unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
 			if x, ok := fc.linear(b.X); ok && x.equal(n) {
 				m.Args = []ast.Expr{u.arg, b.Y}
 			}

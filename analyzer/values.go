@@ -206,5 +206,5 @@ func (fc *fnCtx) inlined(e ast.Expr) {
 	if fc.inl == nil {
 		fc.inl = make(map[ast.Expr]bool)
 	}
-	fc.inl[unparen(e)] = true
+	fc.inl[ast.Unparen(e)] = true
 }

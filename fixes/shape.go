@@ -6,6 +6,8 @@ import (
 	"go/constant"
 	"go/token"
 	"go/types"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 var constantOne = constant.MakeInt64(1)
@@ -100,7 +102,8 @@ func assign(factors []ast.Expr, patterns []factorPattern) bool {
 	return false
 }
 
-// call returns e as a call that is not a conversion, with its callee.
+// callOf returns e as a call that is not a conversion, with its static
+// callee (nil for a call of a function value).
 func (b *builder) callOf(e ast.Expr) (*ast.CallExpr, *types.Func) {
 	c, ok := ast.Unparen(e).(*ast.CallExpr)
 	if !ok {
@@ -109,15 +112,7 @@ func (b *builder) callOf(e ast.Expr) (*ast.CallExpr, *types.Func) {
 	if tv, ok := b.pass.TypesInfo.Types[c.Fun]; ok && tv.IsType() {
 		return nil, nil
 	}
-	var id *ast.Ident
-	switch f := ast.Unparen(c.Fun).(type) {
-	case *ast.Ident:
-		id = f
-	case *ast.SelectorExpr:
-		id = f.Sel
-	}
-	fn, _ := b.pass.TypesInfo.Uses[id].(*types.Func)
-	return c, fn
+	return c, typeutil.StaticCallee(b.pass.TypesInfo, c)
 }
 
 func isMath(fn *types.Func, name string) bool {
