@@ -29,19 +29,16 @@ func (fc *fnCtx) checkCall(call *ast.CallExpr) {
 		return
 	}
 	first := firstBadOf(f.kind, f.t) - f.off
-	r := fc.rangeOf(f.arg)
-	if r.IsEmpty() || r.Lo < first {
+	j := fc.judge(f.arg, first)
+	if !j.definite {
 		return
 	}
-	clause, definite := verdict(src(f.arg), r, first)
-	if !definite {
-		return
-	}
+	name, off := shownFactorial(f.arg, f.off)
 	fc.report(finding{
 		node:     call,
 		cat:      catCall,
 		definite: true,
-		msg:      fmt.Sprintf("%s(%s): %s%s", f.fn.Name(), src(f.arg), factorialLimitText(f.kind, src(f.arg), f.off, f.t), clause),
+		msg:      fmt.Sprintf("%s(%s): %s%s", f.fn.Name(), src(f.arg), factorialLimitText(f.kind, name, off, f.t), j.clause),
 		related:  c.relatedDef(f.fn.Name(), f.fn.Pos()),
 		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
 			Result: c.pass.TypesInfo.TypeOf(call), FirstBad: first},
@@ -82,19 +79,17 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	default:
 		return
 	}
-	r := fc.rangeOf(f.arg)
-	if r.IsEmpty() || r.Hi < first {
-		c.consumed[inner] = true
+	c.consumed[inner] = true
+	j := fc.judge(f.arg, first)
+	if j.silent {
 		return
 	}
-	c.consumed[inner] = true
-	clause, definite := verdict(src(f.arg), r, first)
 	// The conversion and the call become one helper call computing n! in
 	// the target type; a call whose value is (n+off)! is left alone.
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: conv, Result: c.pass.TypesInfo.TypeOf(conv)}
 	if f.off == 0 {
 		m.Shape, m.Args = fixes.ShapeFactorialValue, []ast.Expr{f.arg}
 	}
-	fc.report(finding{node: conv, cat: catLateConv, definite: definite, msg: msg + clause,
+	fc.report(finding{node: conv, cat: catLateConv, definite: j.definite, msg: msg + j.clause,
 		related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})
 }

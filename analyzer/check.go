@@ -194,17 +194,15 @@ func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
 	if al.top == nil && al.topOff < first {
 		return // a constant bound below the threshold
 	}
-	r := fc.rangeOf(fc.stripConv(al.mult))
-	if r.IsEmpty() || r.Hi < first {
+	if fc.judge(fc.stripConv(al.mult), first).silent {
 		return
 	}
-	name := src(al.top)
-	top := fc.topRange(al)
-	clause, definite := verdict(name, top, first-al.topOff)
-	if al.top == nil {
-		definite = al.topOff >= first
-	}
-	msg := factorialLimitText(al.kind, name, al.topOff, t) + clause
+	// The verdict is the top's where the loop starts (with no top, a
+	// constant bound, its range is the point 0 and the offset decides),
+	// that holds whether or not the top alone stays below its limit.
+	clause, definite := verdict(shownName(al.top), fc.topRange(al), first-al.topOff)
+	name, off := shownFactorial(al.top, al.topOff)
+	msg := factorialLimitText(al.kind, name, off, t) + clause
 	if al.top == nil && al.shape.bigEnd != nil {
 		// The largest factor is a constant beyond int64: say it as written.
 		msg = factorialConstText(al.kind, src(al.shape.bigEnd), t)
@@ -272,12 +270,11 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 		return
 	}
 	first := firstBadOf(ff.kind, ff.result)
-	r := fc.rangeOf(ff.recN)
-	if r.IsEmpty() || r.Hi < first {
+	j := fc.judge(ff.recN, first)
+	if j.silent {
 		return
 	}
-	name := src(ff.recN)
-	clause, definite := verdict(name, r, first)
+	name, off := shownFactorial(ff.recN, 0)
 	shape := fixes.ShapeFactorial
 	if ff.kind != kindFactorial && ff.kind != kindDouble {
 		shape = fixes.ShapeNone
@@ -285,8 +282,8 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	fc.report(finding{
 		node:     ff.rec,
 		cat:      catRecursion,
-		definite: definite,
-		msg:      "recursive " + factorialLimitText(ff.kind, name, 0, ff.result) + clause,
+		definite: j.definite,
+		msg:      "recursive " + factorialLimitText(ff.kind, name, off, ff.result) + j.clause,
 		match: &fixes.Match{
 			Shape:    shape,
 			Node:     ff.rec,

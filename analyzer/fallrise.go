@@ -172,7 +172,11 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 		return
 	}
 	kName := plus(src(al.count), al.coff)
-	clause, definite := verdict(kName, k, first)
+	vName := kName
+	if al.coff == 0 {
+		vName = shownName(al.count) // nothing for a literal count
+	}
+	clause, definite := verdict(vName, k, first)
 	// With x unknown, say which x the limit is measured at; a constant x
 	// already stands in "from".
 	at := ""

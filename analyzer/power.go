@@ -34,8 +34,8 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 		return
 	}
 	first := firstBadOf(fac.kind, fac.t) - fac.off
-	r := fc.rangeOf(fac.arg)
-	facSafe := (fac.fact != nil && fac.fact.Safe) || r.IsEmpty() || r.Hi < first
+	j := fc.judge(fac.arg, first)
+	facSafe := (fac.fact != nil && fac.fact.Safe) || j.silent
 	powText, powSafe := fc.powerLimit(pow)
 	if facSafe && powSafe {
 		return
@@ -65,7 +65,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	var msg, clause string
 	definite := false
 	if !facSafe {
-		clause, definite = verdict(src(fac.arg), r, first)
+		clause, definite = j.clause, j.definite
 		msg = fmt.Sprintf("%s in %s: the divisor %s %s for %s ≥ %d (%s), after which the term is 0 or NaN although its true value is small",
 			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
@@ -87,8 +87,7 @@ func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
 		return "", true
 	}
 	first := thresholds.PowerFirstBad(pow.t.Num, x)
-	r := fc.rangeOf(fc.stripConv(pow.arg2))
-	if r.IsEmpty() || r.Hi < first {
+	if fc.judge(fc.stripConv(pow.arg2), first).silent {
 		return "", true
 	}
 	return fmt.Sprintf("math.Pow(%s, %s) %s for %s ≥ %d", src(pow.arg), src(pow.arg2), verb(pow.t), src(fc.stripConv(pow.arg2)), first), false
