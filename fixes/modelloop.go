@@ -85,7 +85,7 @@ func buildModelLoop(b *builder) error {
 			return err
 		}
 	}
-	name, err := b.pick(loopFamilies[ShapeBinomialLoop], acc.Type())
+	name, err := b.pick(shapes[ShapeModelBinomLoop].helpers, acc.Type())
 	if err != nil {
 		return err
 	}
