@@ -24,7 +24,6 @@ type fnCtx struct {
 	assumes []stmtAssume // statement-level bound annotations
 	defs    map[types.Object][]ast.Expr
 	inl     map[ast.Expr]bool // values consumed by a larger product
-	noFix   bool              // the finding being judged has no expression to rewrite
 	// powLoops maps the accumulator of each power loop x·x·…·x to it.
 	powLoops map[types.Object]*accLoop
 	// closureAssigned and returned are gathered once per function (see

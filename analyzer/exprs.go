@@ -170,8 +170,7 @@ func (fc *fnCtx) checkChains(list []ast.Stmt) {
 			// product of its own: one finding per root cause.
 			continue
 		}
-		fc.noFix = true
+		p.chained = true
 		fc.checkProduct(chain[len(chain)-1].Lhs[0], p)
-		fc.noFix = false
 	}
 }

@@ -213,7 +213,7 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 	at := fc.valueHolding(root, worstCall)
 	fc.c.gammaLines[fc.c.lineOf(root)] = true
 	fc.c.gammaLines[fc.c.lineOf(at)] = true
-	fc.report(finding{node: at, cat: catGammaRatio, definite: worst.certain, msg: msg, match: m})
+	fc.report(finding{node: at, cat: catGammaRatio, definite: worst.certain, msg: msg, match: p.fix(m)})
 }
 
 // gammaCount counts the math.Gamma factors among fs.

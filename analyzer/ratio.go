@@ -117,7 +117,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		definite: definite,
 		msg:      msg + clause,
 		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
-		match:    m,
+		match:    p.fix(m),
 	})
 }
 
@@ -200,7 +200,7 @@ func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 	if args := fc.hyperArgs(p); args != nil && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeHypergeometric, args
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: m})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: p.fix(m)})
 }
 
 // hyperArgs returns k, N, K, n of C(K,k)C(N-K,n-k)/C(N,n), or nil.
@@ -266,5 +266,5 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: m})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
 }

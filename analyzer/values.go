@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/fixes"
 )
 
 // A factor is one operand of a product or ratio that the analyzer knows:
@@ -25,6 +27,19 @@ type factor struct {
 type product struct {
 	num, den []factor
 	other    int
+	// chained marks a product built over several statements (r :=
+	// fact(n); r /= fact(k); …): no single expression holds its value,
+	// so its finding has no fix.
+	chained bool
+}
+
+// fix returns the match of p's finding, or nil where p has no
+// expression to rewrite.
+func (p *product) fix(m *fixes.Match) *fixes.Match {
+	if p.chained {
+		return nil
+	}
+	return m
 }
 
 // evalProduct splits e into known factors, following local variables
