@@ -11,6 +11,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The binomial-loop category: a multiplicative binomial loop whose
+// intermediate product overflows before the division.
+
 // maxBinomialScan bounds the values of k tried when n is bounded but k
 // is not; beyond it the loop is reported as possible.
 const maxBinomialScan = 256

@@ -9,6 +9,10 @@ import (
 	"github.com/overfact/overfact/analyzer/thresholds"
 )
 
+// Factorial-valued functions (phase 1): a function whose result is a
+// factorial of a parameter, by a loop, a recursion or a wrapper, and its
+// fact.
+
 // facFunc is a factorial-valued function of this package.
 type facFunc struct {
 	obj     *types.Func
@@ -103,60 +107,6 @@ func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
 		}
 	}
 	return -1
-}
-
-// recursionOf matches a return of n * f(n-1) (or n-2, a double
-// factorial) anywhere in a returned expression.
-func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
-	var ff *facFunc
-	ast.Inspect(decl.Body, func(n ast.Node) bool {
-		if ff != nil {
-			return false
-		}
-		if _, ok := n.(*ast.FuncLit); ok {
-			return false
-		}
-		ret, ok := n.(*ast.ReturnStmt)
-		if !ok || len(ret.Results) == 0 {
-			return true
-		}
-		ast.Inspect(ret.Results[0], func(m ast.Node) bool {
-			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.MUL && ff == nil {
-				ff = fc.recursiveProduct(decl, self, b)
-			}
-			return ff == nil
-		})
-		return ff == nil
-	})
-	return ff
-}
-
-func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr) *facFunc {
-	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
-		nExpr, callExpr := pair[0], pair[1]
-		v := fc.c.objOf(fc.stripConv(nExpr))
-		idx := fc.c.paramIndex(decl, v)
-		call, ok := fc.stripConv(callExpr).(*ast.CallExpr)
-		if idx < 0 || !ok || fc.c.calleeOf(call) != self || idx >= len(call.Args) {
-			continue
-		}
-		lin, ok := fc.linear(call.Args[idx])
-		if !ok || len(lin.terms) != 1 || lin.terms[0].obj != v || lin.terms[0].coef != 1 {
-			continue
-		}
-		kind := kindNone
-		switch lin.c {
-		case -1:
-			kind = kindFactorial
-		case -2:
-			kind = kindDouble
-		}
-		if kind == kindNone {
-			continue
-		}
-		return &facFunc{kind: kind, param: idx, param2: -1, rec: b, recN: fc.stripConv(nExpr)}
-	}
-	return nil
 }
 
 // loopFuncOf matches a function that returns the accumulator of a
@@ -345,4 +295,21 @@ func (c *checker) ownCtx(fn ast.Node) *fnCtx {
 		own.assumes = own.file.dirs.stmtAssumesIn(fn)
 	}
 	return own
+}
+
+// decidedAtCalls reports whether n is the product loop or the recursion
+// of this function's factorial, and every call of the function in the
+// package is either safe or certainly past its first bad value: the
+// calls past it are the findings (fact(25)), one each, and a finding at
+// the definition would only repeat them with a range the calls gave it.
+func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+		return false
+	}
+	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
 }

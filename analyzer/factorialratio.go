@@ -9,6 +9,10 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The factorial-ratio category: binomials, permutations, multinomials,
+// Catalan numbers, hypergeometric and binomial probabilities computed as
+// ratios or products of factorial values whose numerator overflows first.
+
 // brokenFactor returns the numerator factor that can break first: the
 // first whose argument is not bounded below its threshold, with the
 // judgement of its argument and its first bad argument. ok is false

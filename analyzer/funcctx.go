@@ -12,6 +12,9 @@ import (
 	"github.com/overfact/overfact/analyzer/ranges"
 )
 
+// The function context: one function under analysis, with its lazily
+// run range analysis and the bound annotations that narrow it.
+
 // fnCtx is one function under analysis. Its range analysis runs lazily,
 // on the first question about a range, so functions without a candidate
 // cost only the syntactic scan.

@@ -10,6 +10,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The power-over-factorial category: x^k/k! terms (Poisson, Erlang,
+// Taylor) whose power and factorial overflow separately.
+
 // checkPowOverFactorial judges x^k/k! (with or without e^(−λ)): Poisson
 // probabilities, Erlang B and C terms, Taylor-series terms. The term is
 // small, but k! and x^k are computed separately and each overflows on

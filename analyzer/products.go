@@ -8,6 +8,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// Products and ratios of known factors: factorial calls, powers,
+// exponentials and Gamma calls, followed through locals assigned once.
+
 // A factor is one operand of a product or ratio that the analyzer knows:
 // a factorial-valued call, math.Gamma, math.Pow or math.Exp.
 type factor struct {
