@@ -2,12 +2,8 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/constant"
 	"go/token"
 	"go/types"
-	"math"
-
-	"golang.org/x/tools/go/types/typeutil"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -109,107 +105,6 @@ func (fc *fnCtx) entryRange(v types.Object, n ast.Node) ranges.Interval {
 		}
 	}
 	return iv
-}
-
-// intConst returns the value of a constant integer expression.
-func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[e]
-	if !ok || tv.Value == nil {
-		return 0, false
-	}
-	v := constant.ToInt(tv.Value)
-	if v.Kind() != constant.Int {
-		return 0, false
-	}
-	return constant.Int64Val(v)
-}
-
-// floatConst returns the value of a constant numeric expression.
-func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[ast.Unparen(e)]
-	if !ok || tv.Value == nil {
-		return 0, false
-	}
-	v := constant.ToFloat(tv.Value)
-	if v.Kind() != constant.Float && v.Kind() != constant.Int {
-		return 0, false
-	}
-	f, _ := constant.Float64Val(v)
-	return f, true
-}
-
-// shift adds d to both ends of an interval, saturating at the unbounded
-// ends.
-//
-// Special cases are:
-//
-//	shift(empty, d) = empty
-//	shift([−∞, hi], d) = [−∞, hi+d], and likewise for +∞
-func shift(iv ranges.Interval, d int64) ranges.Interval {
-	if iv.IsEmpty() {
-		return iv
-	}
-	return ranges.Interval{Lo: addSat(iv.Lo, d), Hi: addSat(iv.Hi, d)}
-}
-
-// addSat returns x+d, clamped to the int64 range.
-//
-// Special cases are:
-//
-//	addSat(math.MinInt64, d) = math.MinInt64 (−∞ stays −∞)
-//	addSat(math.MaxInt64, d) = math.MaxInt64 (+∞ stays +∞)
-func addSat(x, d int64) int64 {
-	switch {
-	case x == math.MinInt64 || x == math.MaxInt64:
-		return x
-	case d > 0 && x > math.MaxInt64-d:
-		return math.MaxInt64
-	case d < 0 && x < math.MinInt64-d:
-		return math.MinInt64
-	}
-	return x + d
-}
-
-// stripConv removes parentheses and numeric conversions around e.
-func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
-	for {
-		e = ast.Unparen(e)
-		call, ok := e.(*ast.CallExpr)
-		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
-			return e
-		}
-		e = call.Args[0]
-	}
-}
-
-func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
-	tv, ok := fc.c.pass.TypesInfo.Types[call.Fun]
-	return ok && tv.IsType()
-}
-
-// objOf returns the variable an identifier denotes.
-func (c *checker) objOf(e ast.Expr) types.Object {
-	id, ok := ast.Unparen(e).(*ast.Ident)
-	if !ok {
-		return nil
-	}
-	obj := c.pass.TypesInfo.ObjectOf(id)
-	if _, ok := obj.(*types.Var); !ok {
-		return nil
-	}
-	return obj
-}
-
-// calleeOf returns the function a call statically calls, or nil; for a
-// generic function or method, the generic one.
-func (c *checker) calleeOf(call *ast.CallExpr) *types.Func {
-	return typeutil.StaticCallee(c.pass.TypesInfo, call)
-}
-
-// isMathFunc reports whether call calls the function name of package math.
-func (c *checker) isMathFunc(call *ast.CallExpr, name string) bool {
-	fn := c.calleeOf(call)
-	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
 
 // liftAssumes turns a statement-level bound on a parameter that the
