@@ -2,7 +2,6 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/token"
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/ranges"
@@ -29,10 +28,7 @@ type fnCtx struct {
 	// closureAssigns and returns).
 	closureAssigned map[types.Object]bool
 	returned        map[*ast.BlockStmt]map[types.Object]bool
-	// gammaCalls holds the function's math.Gamma calls by line, gathered
-	// once (see gammaCallsOn).
-	gammaCalls map[token.Position][]*ast.CallExpr
-	parents    map[ast.Node]ast.Node // of the function body, for gammaEscapes
+	gamma           gammaFunc // what the Gamma categories gather once per function
 }
 
 // maxVisits bounds the range analysis of one function; past it the
