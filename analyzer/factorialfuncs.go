@@ -2,11 +2,11 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/token"
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // Factorial-valued functions (phase 1): a function whose result is a
@@ -188,30 +188,7 @@ func lastGoodApprox(k facKind, t numType) string {
 // statement skip: then the function's result is not a factorial of the
 // argument it was called with.
 func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip ast.Node) bool {
-	found := false
-	ast.Inspect(body, func(n ast.Node) bool {
-		if n == skip || found {
-			return false
-		}
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				if id, ok := ast.Unparen(l).(*ast.Ident); ok && info.ObjectOf(id) == v {
-					found = true
-				}
-			}
-		case *ast.IncDecStmt:
-			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && info.ObjectOf(id) == v {
-				found = true
-			}
-		case *ast.UnaryExpr:
-			if id, ok := ast.Unparen(n.X).(*ast.Ident); ok && n.Op == token.AND && info.ObjectOf(id) == v {
-				found = true
-			}
-		}
-		return !found
-	})
-	return found
+	return assigned.In(info, body, v, func(n ast.Node) bool { return n == skip })
 }
 
 // wrapperOf matches a function that returns a factorial of a parameter

@@ -8,6 +8,8 @@ import (
 	"go/types"
 	"math"
 	"strconv"
+
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // No rewrite makes 25! fit an int64, so a standalone factorial gets a
@@ -74,50 +76,17 @@ func buildGuard(b *builder) error {
 	return nil
 }
 
-// assigned reports whether obj is assigned, incremented or has its
-// address taken anywhere in n.
+// assigned reports whether obj is assigned, incremented, set by a range
+// clause or has its address taken anywhere in n.
 func (b *builder) assigned(obj types.Object, n ast.Node) bool {
-	found := false
-	b.eachAssigned(n, func(v types.Object) bool {
-		found = v == obj
-		return !found
-	})
-	return found
+	return assigned.In(b.pass.TypesInfo, n, obj, nil)
 }
 
-// eachAssigned calls f with each variable assigned, incremented or
-// having its address taken in n, until f returns false.
+// eachAssigned calls f with each variable assigned, incremented, set by
+// a range clause or having its address taken in n, until f returns
+// false.
 func (b *builder) eachAssigned(n ast.Node, f func(types.Object) bool) {
-	more := true
-	visit := func(e ast.Expr) {
-		if id, ok := ast.Unparen(e).(*ast.Ident); ok && more {
-			if obj := b.pass.TypesInfo.ObjectOf(id); obj != nil {
-				more = f(obj)
-			}
-		}
-	}
-	ast.Inspect(n, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				visit(l)
-			}
-		case *ast.IncDecStmt:
-			visit(n.X)
-		case *ast.UnaryExpr:
-			if n.Op == token.AND {
-				visit(n.X)
-			}
-		case *ast.RangeStmt:
-			if n.Key != nil {
-				visit(n.Key)
-			}
-			if n.Value != nil {
-				visit(n.Value)
-			}
-		}
-		return more
-	})
+	assigned.Each(b.pass.TypesInfo, n, nil, func(v types.Object, _ ast.Node) bool { return f(v) })
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {
