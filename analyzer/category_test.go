@@ -11,7 +11,10 @@ import (
 // and negative cases with // want comments and, where a fix is offered,
 // the fixed file as .golden. The realistic scenario packages of the
 // repository's testdata (TestScenarios) are the integration test.
-var categoryPackages = []string{"factorialloop"}
+var categoryPackages = []string{
+	"factorialloop", "factorialrecursion", "factorialcall", "factorialratio", "binomialloop",
+	"poweroverfactorial", "gammaratio", "gammaoverflow", "lateconversion",
+}
 
 func TestCategories(t *testing.T) {
 	analysistest.RunWithSuggestedFixes(t, analysistest.TestData(), Analyzer, categoryPackages...)
