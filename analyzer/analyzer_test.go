@@ -301,8 +301,8 @@ func TestCategoryRules(t *testing.T) {
 		if definite {
 			want = SeverityError
 		}
-		if Definite(c.ID) != definite || Severity(c.ID) != want {
-			t.Errorf("%s: Definite = %v, Severity = %q", c.ID, Definite(c.ID), Severity(c.ID))
+		if isDefinite(c.ID) != definite || Severity(c.ID) != want {
+			t.Errorf("%s: isDefinite = %v, Severity = %q", c.ID, isDefinite(c.ID), Severity(c.ID))
 		}
 		base := strings.TrimSuffix(c.ID, ".definite")
 		if got, want := FixesLast(c.ID), base == "factorial-loop" || base == "factorial-recursion"; got != want {

@@ -61,9 +61,9 @@ func Categories() []CategoryInfo {
 	return out
 }
 
-// Definite reports whether a category is the definite form of a pattern:
+// isDefinite reports whether a category is the definite form of a pattern:
 // its overflow is certain for every input the code allows.
-func Definite(category string) bool {
+func isDefinite(category string) bool {
 	return strings.HasSuffix(category, definiteSuffix)
 }
 
@@ -77,7 +77,7 @@ const (
 // findings are errors, the others warnings. Every report writer (SARIF,
 // the language server) takes its levels from here.
 func Severity(category string) string {
-	if Definite(category) {
+	if isDefinite(category) {
 		return SeverityError
 	}
 	return SeverityWarning
