@@ -189,11 +189,7 @@ func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 			d = f
 		}
 	}
-	if d.fact == nil || d.fact.Safe {
-		return
-	}
-	first := d.fact.FirstBad
-	j := fc.judge(d.arg, first)
+	j, first := fc.judgeCall(d)
 	if j.silent {
 		return
 	}
@@ -248,11 +244,7 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 			pows = append(pows, f)
 		}
 	}
-	if b.fact == nil || b.fact.Safe {
-		return
-	}
-	first := b.fact.FirstBad
-	j := fc.judge(b.arg, first)
+	j, first := fc.judgeCall(b)
 	if j.silent {
 		return
 	}

@@ -25,6 +25,16 @@ func (fc *fnCtx) judge(arg ast.Expr, first int64) judgement {
 	return decide(arg, fc.rangeOf(arg), first)
 }
 
+// judgeCall judges a call of a function that carries a fact, against
+// the first bad value the fact states; a function that bounds its own
+// parameter (or a call with no fact) is silent.
+func (fc *fnCtx) judgeCall(f factor) (judgement, int64) {
+	if f.fact == nil || f.fact.Safe {
+		return judgement{silent: true}, 0
+	}
+	return fc.judge(f.arg, f.fact.FirstBad), f.fact.FirstBad
+}
+
 // decide compares r, the range of arg, with first. A nil arg or an
 // integer literal is shown by no name: the message states its value.
 func decide(arg ast.Expr, r ranges.Interval, first int64) judgement {
