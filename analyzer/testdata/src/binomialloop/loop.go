@@ -27,3 +27,24 @@ func Small(n, k int) int { // want Small:`binomial of parameter 0, safe for`
 	}
 	return b
 }
+
+// WaysU counts in unsigned arithmetic, which needs no test of k.
+func WaysU(n, k uint64) uint64 { // want WaysU:`binomial of parameter 0`
+	b := uint64(1)
+	for i := uint64(1); i <= k; i++ { // want `multiplicative binomial loop in uint64`
+		b = b * (n - k + i) / i
+	}
+	return b
+}
+
+// Thirty fixes n = 30, where every intermediate product fits: silent.
+func Thirty(k int) int {
+	if k < 0 || k > 30 {
+		return 0
+	}
+	b := 1
+	for i := 1; i <= k; i++ {
+		b = b * (30 - k + i) / i
+	}
+	return b
+}

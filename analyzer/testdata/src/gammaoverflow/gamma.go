@@ -17,3 +17,19 @@ func Bounded(x, w float64) float64 {
 	}
 	return w * math.Gamma(x)
 }
+
+// Count is Γ(n+1) = n! for an integer n with nothing bounding it.
+func Count(n int, w float64) float64 {
+	return w / math.Gamma(float64(n)+1) // want `math.Gamma`
+}
+
+// Small asks for Γ(5): silent.
+func Small(w float64) float64 {
+	return w * math.Gamma(5)
+}
+
+// Bare hands Γ(x) back untouched, where +Inf is the right answer for a
+// value past the range: silent.
+func Bare(x float64) float64 {
+	return math.Gamma(x)
+}
