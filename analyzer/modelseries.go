@@ -78,7 +78,7 @@ func (fc *fnCtx) loopTerms(l *vm.Loop) []ast.Expr {
 
 // seriesFactors splits e into the factors it multiplies and divides.
 func seriesFactors(e ast.Expr, den bool, out *[]seriesPart) {
-	switch x := unparen(e).(type) {
+	switch x := ast.Unparen(e).(type) {
 	case *ast.BinaryExpr:
 		switch x.Op {
 		case token.MUL:
@@ -121,7 +121,7 @@ func grows(t *vm.Term, iter vm.Sym) bool {
 
 // seriesTerm judges one term of the loop; true when it reported.
 func (fc *fnCtx) seriesTerm(res *vm.Result, l *vm.Loop, e ast.Expr) bool {
-	b, ok := unparen(e).(*ast.BinaryExpr)
+	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
 	if !ok || (b.Op != token.QUO && b.Op != token.MUL) || fc.c.reportedAt(e.Pos()) {
 		return false
 	}
@@ -294,7 +294,7 @@ func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down 
 	if f.Kind != vm.Fact || !f.Args[0].Equal(k) || down[0].val.Coef.Cmp(big.NewRat(1, 1)) != 0 {
 		return nil
 	}
-	id, ok := unparen(down[0].x).(*ast.Ident)
+	id, ok := ast.Unparen(down[0].x).(*ast.Ident)
 	if !ok {
 		return nil
 	}
@@ -319,7 +319,7 @@ func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down 
 	// The term must divide by acc directly: X / acc.
 	var quo *ast.BinaryExpr
 	ast.Inspect(e, func(n ast.Node) bool {
-		if b, ok := n.(*ast.BinaryExpr); ok && b.Op == token.QUO && unparen(b.Y) == down[0].x && quo == nil {
+		if b, ok := n.(*ast.BinaryExpr); ok && b.Op == token.QUO && ast.Unparen(b.Y) == down[0].x && quo == nil {
 			quo = b
 		}
 		return quo == nil
