@@ -14,6 +14,10 @@ type Options struct {
 	// function with a factorial fact, from the values of its arguments
 	// (nil where unknown); nil when the call is not known.
 	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// LogGamma reports whether a call of one argument returns ln|Γ| of
+	// it, as a function that returns the first result of math.Lgamma
+	// does; nil when no such function is known.
+	LogGamma func(call *ast.CallExpr) bool
 	// MaxNodes caps the syntax nodes evaluated in one function
 	// (DefaultMaxNodes when 0); past it Result.Capped is set and the
 	// rest of the function is unknown.
@@ -672,6 +676,10 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		if !args[0].log {
 			return &value{t: logScale(args[0].t, k)}
+		}
+	case e.opts.LogGamma != nil && one && e.opts.LogGamma(x):
+		if a, ok := affineOf(args[0]); ok {
+			return &value{t: GammaOf(a), log: true}
 		}
 	case e.opts.Callee != nil:
 		ts := make([]*Term, len(args))
