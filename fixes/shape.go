@@ -171,16 +171,15 @@ func (b *builder) mathCall(name string, forms ...linear) factorPattern {
 // checkShape checks the expression of a ratio or term match against its
 // shape, with the operands read as linear forms.
 func (b *builder) checkShape() error {
+	if _, ok := expFamilies[b.m.Shape]; ok {
+		return b.checkLogForm()
+	}
 	if n, ok := shapeArity[b.m.Shape]; !ok || n > 0 && len(b.m.Args) != n || len(b.m.Args) == 0 {
 		return fmt.Errorf("shape %d with %d operands has no check", b.m.Shape, len(b.m.Args))
 	}
-	ops := make([]linear, len(b.m.Args))
-	for i, a := range b.m.Args {
-		l, ok := b.linearOf(a)
-		if !ok {
-			return fmt.Errorf("operand %s is not a sum of variables and constants", b.text(a))
-		}
-		ops[i] = l
+	ops, err := b.operandForms()
+	if err != nil {
+		return err
 	}
 	num, den, alt := b.patterns(ops)
 	if num == nil {
@@ -190,6 +189,19 @@ func (b *builder) checkShape() error {
 		return nil
 	}
 	return fmt.Errorf("the expression is not the %s of its operands", shapeName[b.m.Shape])
+}
+
+// operandForms reads the match's operands as linear forms.
+func (b *builder) operandForms() ([]linear, error) {
+	ops := make([]linear, len(b.m.Args))
+	for i, a := range b.m.Args {
+		l, ok := b.linearOf(a)
+		if !ok {
+			return nil, fmt.Errorf("operand %s is not a sum of variables and constants", b.text(a))
+		}
+		ops[i] = l
+	}
+	return ops, nil
 }
 
 var shapeName = map[Shape]string{

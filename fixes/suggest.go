@@ -73,6 +73,10 @@ func init() {
 		ShapeFactorialValue:   buildValue,
 		ShapeSeriesTerm:       buildSeriesTerm,
 		ShapeModelBinomLoop:   buildModelLoop,
+		ShapeExpChoose:        buildExpLgamma,
+		ShapeExpBeta:          buildExpLgamma,
+		ShapeExpGammaRatio:    buildExpLgamma,
+		ShapeExpFactorial:     buildExpLgamma,
 	}
 }
 
