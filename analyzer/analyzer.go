@@ -64,6 +64,9 @@ type checker struct {
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
+	// lgWrappers holds the functions of the package that return ln|Γ|
+	// of their argument (see isLgammaCall), found on first use.
+	lgWrappers map[*types.Func]bool
 }
 
 type reportKey struct {

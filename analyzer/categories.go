@@ -18,6 +18,10 @@ const (
 	catLateConv   = "late-conversion"
 	catDirective  = "directive"
 
+	catLgammaDigits   = "lgamma-digits"
+	catLgammaInteger  = "lgamma-integer"
+	catLgammaOverflow = "lgamma-overflow"
+
 	definiteSuffix = ".definite"
 )
 
@@ -44,6 +48,9 @@ var patterns = []struct{ id, title string }{
 	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
 	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},
 	{catLateConv, "A factorial is converted to another type after it has already wrapped or lost exactness."},
+	{catLgammaDigits, "math.Exp of a sum or difference of log-gamma values (a binomial, Beta or gamma ratio) loses more digits than the tolerance allows over the argument's range."},
+	{catLgammaInteger, "An exponential of log-gamma values, or math.Gamma, is converted or rounded to an integer that comes out wrong."},
+	{catLgammaOverflow, "math.Exp of a log-gamma value is +Inf where the expression it feeds is finite."},
 }
 
 // Categories returns every category the analyzer can emit: each pattern in

@@ -139,6 +139,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.worthLoops() || s.knownCall {
 		fc.checkModel()
 	}
+	if s.knownCall {
+		fc.checkLogGamma()
+	}
 }
 
 // noteLoop reports a product loop, or records a power loop for the

@@ -167,7 +167,7 @@ func TestDifferential(t *testing.T) {
 	if _, err := exec.LookPath("go"); err != nil {
 		t.Skip("no go command")
 	}
-	cases := diffCases
+	cases := append(diffCases[:len(diffCases):len(diffCases)], lgammaDiffCases...)
 	if generalisedChoose() {
 		cases = append(cases[:len(cases):len(cases)], negativeNCases...)
 	} else {
@@ -184,7 +184,7 @@ func TestDifferential(t *testing.T) {
 		}
 		var some []string
 		for _, p := range pkgs {
-			if strings.HasPrefix(p, "fix") == real {
+			if realAnalyzerPkg(p) == real {
 				some = append(some, p)
 			}
 		}
