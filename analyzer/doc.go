@@ -24,6 +24,13 @@
 // math.Gamma values, math.Gamma calls past its overflow point, and
 // conversions that come after the factorial has already broken.
 //
+// It also reports the traps of hand-written log-gamma code: math.Exp of
+// log-gamma differences whose error bound passes a tolerance over the
+// arguments' range (flag -lgamma-tolerance, 1e-12 relative by default),
+// integers read back from such exponentials or from math.Gamma that come
+// out wrong (5! as 119), and exponentials of log-gamma values that are
+// +Inf where the expression they feed is finite.
+//
 // A function whose result is a factorial of a parameter carries a fact,
 // so its calls are known factorial values in importing packages too. A
 // factorial function that bounds its own parameter is safe, and neither
@@ -83,6 +90,13 @@ factorial terms (Poisson, Erlang, Taylor), multiplicative binomial
 loops whose intermediate wraps before the division, ratios of
 math.Gamma values, math.Gamma calls past its overflow point, and
 conversions that come after the factorial has already broken.
+
+It also reports the traps of hand-written log-gamma code: math.Exp of
+log-gamma differences whose error bound passes a tolerance over the
+arguments' range (flag -lgamma-tolerance, 1e-12 relative by default),
+integers read back from such exponentials or from math.Gamma that come
+out wrong (5! as 119), and exponentials of log-gamma values that are
++Inf where the expression they feed is finite.
 
 A function whose result is a factorial of a parameter carries a fact,
 so its calls are known factorial values in importing packages too. A

@@ -83,7 +83,7 @@ func TestExpLogGammaFirstBinomial(t *testing.T) {
 		t.Errorf("first n = %d; by hand the bound is %.6g there and %.6g at n−1", got, byHand(got), byHand(got-1))
 	}
 	// The bound at n = 10⁹ is about 4·2·ln(10⁹!)·2^-53 (about
-	// 1.8e-5), the same order as the |ln Γ(n+1)|·2^-53 ≈ 2.3e-6 of a
+	// 1.8e-5), the same order as the |ln Γ(n+1)|·2^-53 ≈ 2.2e-6 of a
 	// single term: the rounding of each of the three terms and of
 	// their sum is counted.
 	if b, _ := bound(1e9); b < 1e-6 || b > 1e-4 {
