@@ -385,7 +385,8 @@ var evalMath = map[string]func(float64) float64{
 }
 
 // lgammaMatch describes for the fixes package an expression whose value
-// the model names C(n, k), B(a, b) or Γ(a)/Γ(b) over plain variables,
+// the model names C(n, k), B(a, b), Γ(a)/Γ(b) or the binomial pmf over
+// plain variables,
 // built from exponentials of log-gamma values; nil otherwise.
 func (fc *fnCtx) lgammaMatch(res *vm.Result, root ast.Expr) *fixes.Match {
 	t := res.Values[root]
@@ -399,6 +400,8 @@ func (fc *fnCtx) lgammaMatch(res *vm.Result, root ast.Expr) *fixes.Match {
 		shape, args = fixes.ShapeExpChoose, f.Args
 	case f.Kind == vm.Beta:
 		shape, args = fixes.ShapeExpBeta, f.Args
+	case f.Kind == vm.BinomialPMF: // n, k, p; the helper takes k, n, p
+		shape, args = fixes.ShapeExpBinomialPMF, []vm.Affine{f.Args[1], f.Args[0], f.Args[2]}
 	case len(t.Gamma) == 2 && len(t.Pows) == 0 && t.Exp.IsConst() && t.SqrtPi == 0 && t.Coef.Cmp(big.NewRat(1, 1)) == 0:
 		g, h := t.Gamma[0], t.Gamma[1]
 		if g.Pow < 0 {

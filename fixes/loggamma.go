@@ -10,15 +10,17 @@ import (
 // Exponentials of log-gamma sums become the helper that computes the
 // quantity they stand for: exp(ln Γ(n+1) − ln Γ(k+1) − ln Γ(n−k+1)) is
 // C(n, k), exp(ln Γ(a) + ln Γ(b) − ln Γ(a+b)) is B(a, b), exp(ln Γ(a) −
-// ln Γ(b)) is Γ(a)/Γ(b), and exp(ln Γ(n+1)) or Γ(n+1) read back as an
-// integer is n! (common practice; DLMF 5.12.1 for B). The helpers keep
+// ln Γ(b)) is Γ(a)/Γ(b), exp(ln C(n, k) + k·ln p + (n−k)·ln(1−p)) is the
+// binomial pmf, and exp(ln Γ(n+1)) or Γ(n+1) read back as an integer is
+// n! (common practice; DLMF 5.12.1 for B). The helpers keep
 // the digits the sum of large logarithms loses, stay finite where an
 // exponential of one term alone overflows, and give integers exactly.
 var expFamilies = map[Shape]family{
-	ShapeExpChoose:     {"Choose", "MustChooseInt64", "MustChooseUint64"},
-	ShapeExpBeta:       {"Beta", "", ""},
-	ShapeExpGammaRatio: {"GammaRatio", "", ""},
-	ShapeExpFactorial:  valueFamily,
+	ShapeExpChoose:      {"Choose", "MustChooseInt64", "MustChooseUint64"},
+	ShapeExpBeta:        {"Beta", "", ""},
+	ShapeExpGammaRatio:  {"GammaRatio", "", ""},
+	ShapeExpFactorial:   valueFamily,
+	ShapeExpBinomialPMF: {"BinomialPMF", "", ""},
 }
 
 func buildExpLgamma(b *builder) error {
@@ -29,10 +31,12 @@ func buildExpLgamma(b *builder) error {
 	return b.rewrite(name, b.m.Args)
 }
 
-// wterm is w·ln Γ(x).
+// wterm is w·ln Γ(x), or, with log set, c·ln x for a linear c.
 type wterm struct {
-	w constant.Value
-	x linear
+	w   constant.Value
+	x   linear
+	log bool
+	c   linear
 }
 
 // checkLogForm checks on its own that the match's expression is exp of
@@ -64,12 +68,19 @@ func (b *builder) checkLogForm() error {
 				if !b.logTerms(c.Args[0], sign, &got) {
 					return fmt.Errorf("exponent %s is not a sum of log-gamma values", b.text(c.Args[0]))
 				}
+			case c != nil && isMath(fn, "Pow") && len(c.Args) == 2 && b.m.Shape == ShapeExpBinomialPMF:
+				x, ok1 := b.linearOf(c.Args[0])
+				e, ok2 := b.linearOf(c.Args[1])
+				if !ok1 || !ok2 {
+					return fmt.Errorf("power %s is not of linear forms", b.text(f))
+				}
+				got = append(got, wterm{log: true, x: x, c: e.scale(sign)})
 			case c != nil && isMath(fn, "Gamma") && len(c.Args) == 1 && b.m.Shape == ShapeExpFactorial && len(num)+len(den) == 1 && i == 0:
 				x, ok := b.linearOf(c.Args[0])
 				if !ok {
 					return fmt.Errorf("Γ argument %s is not linear", b.text(c.Args[0]))
 				}
-				got = append(got, wterm{one, x})
+				got = append(got, wterm{w: one, x: x})
 			default:
 				return fmt.Errorf("factor %s is not an exponential of log-gamma values", b.text(f))
 			}
@@ -96,13 +107,17 @@ func (b *builder) logPattern(o []linear) ([]wterm, error) {
 	p, m := constant.MakeInt64(1), constant.MakeInt64(-1)
 	switch {
 	case b.m.Shape == ShapeExpChoose && len(o) == 2:
-		return []wterm{{p, o[0].add(one)}, {m, o[1].add(one)}, {m, o[0].add(o[1].neg()).add(one)}}, nil
+		return []wterm{{w: p, x: o[0].add(one)}, {w: m, x: o[1].add(one)}, {w: m, x: o[0].add(o[1].neg()).add(one)}}, nil
 	case b.m.Shape == ShapeExpBeta && len(o) == 2:
-		return []wterm{{p, o[0]}, {p, o[1]}, {m, o[0].add(o[1])}}, nil
+		return []wterm{{w: p, x: o[0]}, {w: p, x: o[1]}, {w: m, x: o[0].add(o[1])}}, nil
 	case b.m.Shape == ShapeExpGammaRatio && len(o) == 2:
-		return []wterm{{p, o[0]}, {m, o[1]}}, nil
+		return []wterm{{w: p, x: o[0]}, {w: m, x: o[1]}}, nil
 	case b.m.Shape == ShapeExpFactorial && len(o) == 1:
-		return []wterm{{p, o[0].add(one)}}, nil
+		return []wterm{{w: p, x: o[0].add(one)}}, nil
+	case b.m.Shape == ShapeExpBinomialPMF && len(o) == 3: // k, n, p
+		k, n, q := o[0], o[1], o[2]
+		return []wterm{{w: p, x: n.add(one)}, {w: m, x: k.add(one)}, {w: m, x: n.add(k.neg()).add(one)},
+			{log: true, x: q, c: k}, {log: true, x: one.add(q.neg()), c: n.add(k.neg())}}, nil
 	}
 	return nil, fmt.Errorf("shape %d with %d operands has no log-gamma form", b.m.Shape, len(o))
 }
@@ -151,6 +166,20 @@ func (b *builder) logTerms(e ast.Expr, w constant.Value, out *[]wterm) bool {
 					return b.logTerms(lr[1], constant.BinaryOp(w, token.MUL, tv.Value), out)
 				}
 			}
+			// c·ln x, for the powers of a pmf written in log space.
+			for _, lr := range [][2]ast.Expr{{x.X, x.Y}, {x.Y, x.X}} {
+				lc, fn := b.callOf(lr[1])
+				if lc == nil || !isMath(fn, "Log") || len(lc.Args) != 1 || b.m.Shape != ShapeExpBinomialPMF {
+					continue
+				}
+				c, ok1 := b.linearOf(lr[0])
+				l, ok2 := b.linearOf(lc.Args[0])
+				if !ok1 || !ok2 {
+					return false
+				}
+				*out = append(*out, wterm{log: true, x: l, c: c.scale(w)})
+				return true
+			}
 		}
 	case *ast.UnaryExpr:
 		if x.Op == token.SUB {
@@ -168,7 +197,7 @@ func (b *builder) logTerms(e ast.Expr, w constant.Value, out *[]wterm) bool {
 		if !ok {
 			return false
 		}
-		*out = append(*out, wterm{w, l})
+		*out = append(*out, wterm{w: w, x: l})
 		return true
 	}
 	return false
@@ -180,8 +209,12 @@ func merge(ts []wterm) []wterm {
 	for _, t := range ts {
 		found := false
 		for i := range out {
-			if out[i].x.equal(t.x) {
-				out[i].w = constant.BinaryOp(out[i].w, token.ADD, t.w)
+			if out[i].log == t.log && out[i].x.equal(t.x) {
+				if t.log {
+					out[i].c = out[i].c.add(t.c)
+				} else {
+					out[i].w = constant.BinaryOp(out[i].w, token.ADD, t.w)
+				}
 				found = true
 				break
 			}
@@ -192,7 +225,7 @@ func merge(ts []wterm) []wterm {
 	}
 	kept := out[:0]
 	for _, t := range out {
-		if constant.Sign(t.w) != 0 {
+		if t.log && !t.c.equal(newLinear()) || !t.log && constant.Sign(t.w) != 0 {
 			kept = append(kept, t)
 		}
 	}
@@ -207,7 +240,7 @@ func sameTerms(a, b []wterm) bool {
 	for _, t := range a {
 		found := false
 		for _, u := range b {
-			if t.x.equal(u.x) && constant.Compare(t.w, token.EQL, u.w) {
+			if t.log == u.log && t.x.equal(u.x) && (t.log && t.c.equal(u.c) || !t.log && constant.Compare(t.w, token.EQL, u.w)) {
 				found = true
 				break
 			}

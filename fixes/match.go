@@ -42,6 +42,7 @@ const (
 	ShapeExpBeta                // exp(lg(a) + lg(b) − lg(a+b))        Args: a, b
 	ShapeExpGammaRatio          // exp(lg(a) − lg(b))                  Args: a, b
 	ShapeExpFactorial           // exp(lg(n+1)) or math.Gamma(n+1), under a conversion or rounding  Args: n
+	ShapeExpBinomialPMF         // exp(lg(n+1) − lg(k+1) − lg(n−k+1) + k·ln p + (n−k)·ln(1−p)), powers as factors too  Args: k, n, p
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -77,6 +77,7 @@ func init() {
 		ShapeExpBeta:          buildExpLgamma,
 		ShapeExpGammaRatio:    buildExpLgamma,
 		ShapeExpFactorial:     buildExpLgamma,
+		ShapeExpBinomialPMF:   buildExpLgamma,
 	}
 }
 

@@ -20,6 +20,11 @@ func PoolShare(a, b float64) float64 {
 	return math.Exp(logGamma(a) + logGamma(b) - logGamma(a+b)) // want `computes B\(a, b\) from 3 log-gamma values .* passes the tolerance 1e-12 from a = 107 with b between 1 and a`
 }
 
+// ExactHits is the chance that exactly k of n tickets win at odds p.
+func ExactHits(k, n int, p float64) float64 {
+	return math.Exp(logGamma(float64(n)+1) - logGamma(float64(k)+1) - logGamma(float64(n-k)+1) + float64(k)*math.Log(p) + float64(n-k)*math.Log(1-p)) // want `computes C\(n, k\)·p\^k·\(1−p\)\^\(-k \+ n\) from 3 log-gamma values .* from n = 249 .*; the exponent's other terms add rounding errors of their own`
+}
+
 // Rollover grows a jackpot by Γ(a+h)/Γ(a) after h idle draws.
 func Rollover(a, h float64) float64 {
 	num, _ := math.Lgamma(a + h)
