@@ -17,6 +17,8 @@ const (
 	catGamma      = "gamma-overflow"
 	catLateConv   = "late-conversion"
 	catDirective  = "directive"
+	catLgammaSign = "lgamma-sign"
+	catStirling   = "stirling-approximation"
 
 	definiteSuffix = ".definite"
 )
@@ -44,6 +46,8 @@ var patterns = []struct{ id, title string }{
 	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
 	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},
 	{catLateConv, "A factorial is converted to another type after it has already wrapped or lost exactness."},
+	{catLgammaSign, "math.Exp of a math.Lgamma value whose sign was dropped stands for Γ(x) where Γ(x) can be negative."},
+	{catStirling, "A hand-written Stirling approximation stands for n!: it is off by about 1/(12n) relative, and its power n^n can overflow before n! does."},
 }
 
 // Categories returns every category the analyzer can emit: each pattern in

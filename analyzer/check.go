@@ -16,6 +16,7 @@ type scan struct {
 	callMul   bool // a multiplication with a call operand: recursion may be here
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
 	localCall bool // a call of a function of this package, which may become factorial-valued
+	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -69,6 +70,9 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 			}
 			if !cur.knownCall {
 				cur.knownCall = c.knownCallee(n)
+			}
+			if !cur.logCall {
+				cur.logCall = c.isMathFunc(n, "Lgamma") || c.isMathFunc(n, "Log")
 			}
 			if fn := c.calleeOf(n); fn != nil && fn.Pkg() == c.pass.Pkg {
 				cur.localCall = true
@@ -138,6 +142,12 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	}
 	if s.worthLoops() || s.knownCall {
 		fc.checkModel()
+	}
+	if s.logCall {
+		fc.checkLgammaSign()
+	}
+	if s.logCall || s.knownCall {
+		fc.checkStirling()
 	}
 }
 
@@ -308,7 +318,7 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall }
+func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall || s.logCall }
 
 // decidedAtCalls reports whether n is the product loop or the recursion
 // of this function's factorial, and every call of the function in the

@@ -73,6 +73,9 @@ func init() {
 		ShapeFactorialValue:   buildValue,
 		ShapeSeriesTerm:       buildSeriesTerm,
 		ShapeModelBinomLoop:   buildModelLoop,
+		ShapeLgammaSign:       buildLgammaSign,
+		ShapeStirling:         buildStirling,
+		ShapeLogStirling:      buildStirling,
 	}
 }
 
