@@ -24,6 +24,11 @@
 // math.Gamma values, math.Gamma calls past its overflow point, and
 // conversions that come after the factorial has already broken.
 //
+// In log space it reports math.Exp of math.Lgamma values whose sign
+// was dropped where Γ can be negative, and hand-written Stirling
+// approximations standing for n! (about 1/(12n) off; n^n overflows
+// before n! does).
+//
 // A function whose result is a factorial of a parameter carries a fact,
 // so its calls are known factorial values in importing packages too. A
 // factorial function that bounds its own parameter is safe, and neither
@@ -54,6 +59,11 @@
 // declares a bound (<, <=, >, >=, ==, or A <= n <= B) that the analyzer
 // cannot see: in a function's doc comment for a parameter at entry, or
 // on the line before a statement for a variable within that statement.
+//
+//	//overfact:approx <reason>
+//
+// says, placed like allow, that a Stirling approximation is meant: its
+// error is not reported there.
 // Malformed directives and unknown verbs are reported.
 //
 // A factorial of a type parameter is judged by the type in its
@@ -83,6 +93,11 @@ factorial terms (Poisson, Erlang, Taylor), multiplicative binomial
 loops whose intermediate wraps before the division, ratios of
 math.Gamma values, math.Gamma calls past its overflow point, and
 conversions that come after the factorial has already broken.
+
+In log space it reports math.Exp of math.Lgamma values whose sign
+was dropped where Γ can be negative, and hand-written Stirling
+approximations standing for n! (about 1/(12n) off; n^n overflows
+before n! does).
 
 A function whose result is a factorial of a parameter carries a fact,
 so its calls are known factorial values in importing packages too. A
@@ -114,6 +129,11 @@ the reason is mandatory.
 declares a bound (<, <=, >, >=, ==, or A <= n <= B) that the analyzer
 cannot see: in a function's doc comment for a parameter at entry, or
 on the line before a statement for a variable within that statement.
+
+	//overfact:approx <reason>
+
+says, placed like allow, that a Stirling approximation is meant: its
+error is not reported there.
 Malformed directives and unknown verbs are reported.
 
 A factorial of a type parameter is judged by the type in its

@@ -29,3 +29,10 @@ func RoughPot(n int) float64 {
 	//overfact:approx the pot display rounds to two significant digits
 	return math.Sqrt(2*math.Pi*x) * math.Pow(x/math.E, x)
 }
+
+// Pot is RoughPot where the reason was forgotten: the directive is
+// reported and does not silence.
+func Pot(n int) float64 {
+	x := float64(n)
+	return math.Sqrt(2*math.Pi*x) * math.Pow(x/math.E, x) //overfact:approx // want `//overfact:approx needs a reason` `Stirling approximation`
+}
