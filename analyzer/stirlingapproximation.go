@@ -34,7 +34,11 @@ import (
 //     below the point where that error drops under stirlingTolerance
 //     (thresholds.StirlingRelErrorBelow), that is, nearly always; code
 //     that wants the approximation says so with //overfact:approx and a
-//     reason, which silences this part only.
+//     reason, which silences this part only. Code that tests n before
+//     it reaches the formula (if n < len(table) { return table[n] } or
+//     if n <= 20 { return exact }, or the formula under if n > 1000)
+//     chose the approximation for the n it lets through: the error is
+//     not reported there either.
 //   - overflow before n!: math.Pow(n, n) (or n^(n±½)) leaves float64
 //     from n = 144 (thresholds.SelfPower) while 170! fits; reported
 //     where n's range reaches it.
@@ -353,7 +357,7 @@ func (fc *fnCtx) judgeStirling(res *vm.Result, h stirlingHit) {
 	definite := false
 	// The approximation's own error, from the smallest n the code allows.
 	fi := fc.c.fileOf(h.e.Pos())
-	approx := fi != nil && fi.dirs.approx.covers(fc.c.pass.Fset, h.e.Pos())
+	approx := fi != nil && fi.dirs.approx.covers(fc.c.pass.Fset, h.e.Pos()) || bv.obj != nil && fc.dispatched(h.e, bv.obj)
 	below := thresholds.StirlingRelErrorBelow(stirlingTolerance)
 	low := int64(1)
 	if bv.lo > 1 && bv.lo < float64(math.MaxInt64/16) {
@@ -459,6 +463,39 @@ func (fc *fnCtx) corrected(res *vm.Result, h stirlingHit) bool {
 			return false
 		}
 		return false
+	}
+	return false
+}
+
+// dispatched reports whether e is reached only past a test of obj: an
+// if without else before it that leaves the function, or an if whose
+// branch holds e, whose condition reads obj. Such code picks the
+// approximation for the values of obj it lets through.
+func (fc *fnCtx) dispatched(e ast.Expr, obj types.Object) bool {
+	if fc.file == nil {
+		return false
+	}
+	reads := func(cond ast.Expr) bool { return fc.identOf(cond, obj, 0) != nil }
+	path, _ := astutil.PathEnclosingInterval(fc.file.file, e.Pos(), e.End())
+	for i := 1; i < len(path); i++ {
+		child := path[i-1]
+		switch p := path[i].(type) {
+		case *ast.FuncDecl, *ast.FuncLit:
+			return false
+		case *ast.IfStmt:
+			if (child == p.Body || child == p.Else) && reads(p.Cond) {
+				return true
+			}
+		case *ast.BlockStmt:
+			for _, st := range p.List {
+				if st.Pos() >= child.Pos() {
+					break
+				}
+				if s, ok := st.(*ast.IfStmt); ok && s.Else == nil && fc.exits(s.Body) && reads(s.Cond) {
+					return true
+				}
+			}
+		}
 	}
 	return false
 }

@@ -13,12 +13,9 @@ func ErlangWeight(a float64, agents int) float64 {
 // StaffingBound is the same weight where the planner has settled for
 // the approximation; the overflow of c^c still stands.
 func StaffingBound(a float64, agents int) float64 {
-	if agents < 1 {
-		return 0
-	}
 	c := float64(agents)
 	//overfact:approx planning only needs the order of magnitude
-	fact := math.Pow(c, c+0.5) * math.Exp(-c) * math.Sqrt(2*math.Pi) // want `hand-written Stirling approximation of agents!: math.Pow\(c, c\+0.5\) is \+Inf for agents ≥ 143.*agents is at least 1 here`
+	fact := math.Pow(c, c+0.5) * math.Exp(-c) * math.Sqrt(2*math.Pi) // want `hand-written Stirling approximation of agents!: math.Pow\(c, c\+0.5\) is \+Inf for agents ≥ 143.*agents is not bounded here`
 	return math.Pow(a, c) / fact
 }
 
@@ -35,3 +32,23 @@ func GammaForm(agents int) float64 {
 	c := float64(agents)
 	return math.Sqrt(2*math.Pi/c) * math.Pow(c/math.E, c)
 }
+
+// LargeQueue uses Stirling's formula only for call centres of more than
+// 20 agents, exactly below: the error is chosen, but c^c still
+// overflows from 144 agents.
+func LargeQueue(a float64, agents int) float64 {
+	if agents <= 20 {
+		return math.Pow(a, float64(agents)) / exactFact[agents]
+	}
+	c := float64(agents)
+	return math.Pow(a, c) / (math.Pow(c, c) * math.Exp(-c) * math.Sqrt(2*math.Pi*c)) // want `hand-written Stirling approximation of agents!: math.Pow\(c, c\) is \+Inf for agents ≥ 144.*agents is at least 21 here`
+}
+
+// exactFact holds 0! … 20!, all exact in float64.
+var exactFact = func() (t [21]float64) {
+	t[0] = 1
+	for i := 1; i <= 20; i++ {
+		t[i] = t[i-1] * float64(i)
+	}
+	return t
+}()
