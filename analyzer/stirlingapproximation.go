@@ -410,7 +410,7 @@ func (fc *fnCtx) judgeStirling(res *vm.Result, h stirlingHit) {
 	if h.log {
 		m.Shape = fixes.ShapeLogStirling
 	}
-	if bv.id != nil && bv.isInt && bv.off == 0 && bv.obj == fc.c.objOf(bv.id) {
+	if bv.id != nil && bv.off == 0 && bv.obj == fc.c.objOf(bv.id) {
 		m.Args = []ast.Expr{bv.id}
 	} else {
 		m.Shape = fixes.ShapeNone

@@ -25,6 +25,8 @@ func init() {
 		diffCase{pkg: "stirling-approximation", fn: "ErlangWeight", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
 		diffCase{pkg: "stirling-approximation", fn: "StaffingBound", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
 		diffCase{pkg: "stirling-approximation", fn: "LargeQueue", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
+		diffCase{pkg: "stirling-approximation", fn: "DropletCount", loops: []string{"n := 1; n <= 175; n++"}, args: "float64(n)", typ: "float64", ref: refFactorial},
+		diffCase{pkg: "stirling-approximation", fn: "DropletEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "float64(n)", typ: "float64", ref: refLogFactorial},
 		diffCase{pkg: "stirling-approximation", fn: "MixingEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
 		diffCase{pkg: "stirling-approximation", fn: "Microstates", loops: []string{"n := 100; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
 	)

@@ -21,7 +21,8 @@ import (
 // and finite up to 170! where math.Pow(n, n) was +Inf from 144. The
 // analyzer vouches that the expression's value is Stirling's term of
 // the operand (ShapeStirling, ShapeLogStirling in match.go), found by
-// the value model; this builder checks that the expression, and the
+// the value model. For a float n the formula stands for Γ(n+1) and
+// becomes math.Gamma(n + 1) or lgamma.LogGamma(n + 1). This builder checks that the expression, and the
 // definitions of locals only it reads, which go with it, read no
 // variable but the operand's, so that nothing else is dropped.
 func buildStirling(b *builder) error {
@@ -51,7 +52,36 @@ func buildStirling(b *builder) error {
 			}
 		}
 	}
+	if classOf(b.pass.TypesInfo.TypeOf(b.m.Args[0])) == classFloat {
+		return b.replaceByGamma()
+	}
 	return b.replaceByCall(name, b.m.Args)
+}
+
+// replaceByGamma rewrites the formula of a float x, which stands for
+// Γ(x+1) over the reals, as math.Gamma(x + 1), or its log form as
+// lgamma.LogGamma(x + 1): the same values where the formula had any
+// (x > 0), without its error and finite up to Γ(171.6).
+func (b *builder) replaceByGamma() error {
+	at := b.m.Node.Pos()
+	x := b.copyText(b.m.Args[0])
+	text := b.use("math", "math", at) + ".Gamma(" + x + " + 1)"
+	if b.m.Shape == ShapeLogStirling {
+		text = b.helper(at) + ".LogGamma(" + x + " + 1)"
+	}
+	text, err := b.result(text, types.Typ[types.Float64], b.m.Result)
+	if err != nil {
+		return err
+	}
+	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)
+	for _, d := range b.absorbed {
+		b.deleteStmt(d)
+	}
+	b.message = "Rewrite as " + text
+	if b.m.Shape == ShapeLogStirling {
+		b.message += " (imports " + HelperPath + ")"
+	}
+	return nil
 }
 
 // absorbChain returns the match's expression and the statements before
