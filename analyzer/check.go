@@ -96,7 +96,7 @@ func (c *checker) knownCallee(call *ast.CallExpr) bool {
 		}
 		return false
 	}
-	return c.factOf(fn) != nil
+	return c.factOf(fn) != nil || c.valueFactOf(fn) != nil
 }
 
 // factOf returns the factorial fact of fn, from this package or an
@@ -138,6 +138,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	}
 	if s.worthLoops() || s.knownCall {
 		fc.checkModel()
+	}
+	if s.knownCall {
+		fc.checkModelCalls()
 	}
 }
 

@@ -29,7 +29,10 @@ func (fc *fnCtx) evalModel() *vm.Result {
 // fact, in the algebra.
 func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	fact := fc.c.factOf(fc.c.calleeOf(call))
-	if fact == nil || fact.Param >= len(args) {
+	if fact == nil {
+		return fc.valueCallee(call, args)
+	}
+	if fact.Param >= len(args) {
 		return nil
 	}
 	n, ok := args[fact.Param].Affine()
@@ -161,19 +164,7 @@ func (mc *modelCtx) countRanges(f vm.Form, constK bool) (nv vm.Sym, n, k ranges.
 
 // firstAt returns the smallest integer v with α·v + β ≥ f, for α > 0.
 func firstAt(alpha, beta *big.Rat, f int64) (int64, bool) {
-	if alpha.Sign() <= 0 {
-		return 0, false
-	}
-	x := new(big.Rat).Sub(big.NewRat(f, 1), beta)
-	x.Quo(x, alpha)
-	q := new(big.Int).Quo(x.Num(), x.Denom())
-	if x.Sign() > 0 && !x.IsInt() {
-		q.Add(q, big.NewInt(1))
-	}
-	if !q.IsInt64() {
-		return 0, false
-	}
-	return q.Int64(), true
+	return firstAtRat(alpha, beta, big.NewRat(f, 1))
 }
 
 // symRange returns the range of a variable of the model at node at.

@@ -113,6 +113,7 @@ type evaluator struct {
 	nodes  int
 	opaque map[types.Object]bool // assigned by closures or through their address
 	fields map[types.Object]bool // struct variables whose fields are assigned
+	sets   map[types.Object]int  // assignments of each variable, 2 for one in a loop
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -138,7 +139,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), sets: make(map[types.Object]int)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -166,7 +167,7 @@ func (e *evaluator) copyEnv(en env) env {
 // those a closure assigns or whose address is taken, and the struct
 // variables whose fields are assigned.
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
-	inLit := 0
+	inLit, inLoop := 0, 0
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -175,9 +176,17 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			ast.Inspect(n.Body, visit)
 			inLit--
 			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			inLoop++
+			ast.Inspect(n, func(m ast.Node) bool { return m == n || visit(m) })
+			inLoop--
+			return false
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
 				e.noteAssign(l, inLit > 0)
+				if obj := e.objOf(l); obj != nil {
+					e.sets[obj] += 1 + 2*min(inLoop+inLit, 1)
+				}
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
@@ -411,6 +420,12 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 	}
 	for i, l := range s.Lhs {
 		if obj := e.objOf(l); obj != nil {
+			if !e.numeric(l) && !e.opaque[obj] && e.sets[obj] == 1 {
+				// A struct variable set once, outside loops: its
+				// fields hold one value each, read as variables.
+				delete(en, obj)
+				continue
+			}
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
 				continue
