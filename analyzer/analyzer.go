@@ -128,7 +128,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
-	c.findValueFacts(decls)
+	c.findValueFacts(decls, scans)
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.
 	for _, n := range funcs {

@@ -26,6 +26,8 @@ func (fc *fnCtx) callRootMatch(res *vm.Result, root ast.Expr, form vm.Form) *fix
 		form.Args = []vm.Affine{form.Args[1], form.Args[0], form.Args[2]}
 	case vm.Hypergeometric: // form and shape: k, N, K, n
 		shape = fixes.ShapeHypergeometric
+	case vm.NegBinomialPMF: // form and shape: f, s, p
+		shape = fixes.ShapeNegBinomialPMF
 	default:
 		return nil
 	}

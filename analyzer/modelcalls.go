@@ -27,8 +27,10 @@ type callState struct {
 // result the value model names in terms of its parameters. It runs after
 // the factorial and binomial functions are found, whose facts the model
 // reads, and computes a callee's fact before its caller's, whatever
-// their order in the source.
-func (c *checker) findValueFacts(decls []*ast.FuncDecl) {
+// their order in the source. Only functions whose scan saw a call the
+// model may know (math.Gamma, Pow or Exp, a function with a fact, one of
+// this package) or a product loop are evaluated.
+func (c *checker) findValueFacts(decls []*ast.FuncDecl, scans map[ast.Node]*scan) {
 	c.calls = &callState{
 		ready: true,
 		decls: make(map[*types.Func]*ast.FuncDecl),
@@ -36,12 +38,13 @@ func (c *checker) findValueFacts(decls []*ast.FuncDecl) {
 		busy:  make(map[*types.Func]bool),
 	}
 	for _, d := range decls {
-		if obj := c.declObj(d); obj != nil {
+		s := scans[d]
+		if obj := c.declObj(d); obj != nil && s != nil && (s.knownCall || s.localCall || s.worthLoops()) {
 			c.calls.decls[obj] = d
 		}
 	}
 	for _, d := range decls {
-		if obj := c.declObj(d); obj != nil {
+		if obj := c.declObj(d); obj != nil && c.calls.decls[obj] != nil {
 			c.guard(d, func() { c.valueFactOf(obj) })
 		}
 	}
@@ -773,7 +776,7 @@ func (fc *fnCtx) argText(res *vm.Result, w weak) (string, *big.Rat, bool) {
 			continue
 		}
 		if d := w.arg.Sub(fc.tripsAsCounters(res, x)); d.IsConst() {
-			return src(a), new(big.Rat).Sub(w.bad, d.C), true
+			return src(fc.stripConv(a)), new(big.Rat).Sub(w.bad, d.C), true
 		}
 	}
 	return "", nil, false

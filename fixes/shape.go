@@ -15,7 +15,7 @@ var shapeArity = map[Shape]int{
 	ShapeBinomial: 2, ShapePermutation: 2, ShapeMultinomial: 0, ShapeCatalan: 1,
 	ShapeHypergeometric: 4, ShapePowOverFactorial: 2, ShapePoisson: 2,
 	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2, ShapeFactorialValue: 1,
-	ShapeInverseBeta: 2,
+	ShapeInverseBeta: 2, ShapeNegBinomialPMF: 3,
 }
 
 // The analyzer finds the shapes; before replacing an expression, the
@@ -199,6 +199,7 @@ var shapeName = map[Shape]string{
 	ShapePoisson: "Poisson term", ShapeBinomialPMF: "binomial probability",
 	ShapeGammaRatio: "gamma ratio", ShapeBeta: "beta function",
 	ShapeFactorialValue: "converted factorial", ShapeInverseBeta: "inverse beta function",
+	ShapeNegBinomialPMF: "negative binomial probability",
 }
 
 // patterns returns the factors of the match's shape: numerator,
@@ -233,6 +234,12 @@ func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]fact
 		pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", one.add(p.neg()), n.add(k.neg()))
 		return []factorPattern{choose(n, k), pk, qnk}, nil,
 			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.neg()))}}
+	case ShapeNegBinomialPMF: // f, s, p: C(f+s−1, f) or C(f+s−1, s−1), p^s, (1−p)^f
+		f, s, p := o[0], o[1], o[2]
+		n := f.add(s).add(one.neg())
+		ps, qf := b.mathCall("Pow", p, s), b.mathCall("Pow", one.add(p.neg()), f)
+		return []factorPattern{choose(n, f), ps, qf}, nil,
+			&[2][]factorPattern{{choose(n, s.add(one.neg())), ps, qf}, nil}
 	case ShapeGammaRatio: // a, b
 		return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
 	case ShapeFactorialValue: // n

@@ -73,6 +73,7 @@ func init() {
 		ShapeFactorialValue:   buildValue,
 		ShapeSeriesTerm:       buildSeriesTerm,
 		ShapeModelBinomLoop:   buildModelLoop,
+		ShapeNegBinomialPMF:   buildTerm,
 	}
 }
 

@@ -14,6 +14,8 @@ var termHelpers = map[Shape]string{
 	ShapeHypergeometric:   "HypergeometricPMF",
 	ShapeGammaRatio:       "GammaRatio", // a, b
 	ShapeBeta:             "Beta",       // a, b
+
+	ShapeNegBinomialPMF: "NegativeBinomialPMF", // f, s, p
 }
 
 func buildTerm(b *builder) error {

@@ -30,6 +30,12 @@ func Tainted(k, total, bad, n int) float64 { // want Tainted:`value Γ\(p2 \+ 1\
 	return choose(float64(bad), float64(k)) * choose(float64(total-bad), float64(n-k)) / choose(float64(total), float64(n)) // want `Tainted computes C\(bad, k\)·C\(total - bad, -k \+ n\)/C\(total, n\) in float64, which fits where choose\(float64\(bad\), float64\(k\)\) already is \+Inf or NaN from bad = 171`
 }
 
+// Misses is the chance of f failed germination tests before the s-th
+// passing one, each passing with probability p.
+func Misses(f, s int, p float64) float64 { // want Misses:`value Γ\(p0 \+ p1\)`
+	return choose(float64(f+s-1), float64(f)) * math.Pow(p, float64(s)) * math.Pow(1-p, float64(f)) // want `Misses computes C\(f \+ s - 1, f\)·p\^s·\(1−p\)\^f in float64, which fits where choose\(float64\(f\+s-1\), float64\(f\)\) already is \+Inf or NaN from f \+ s - 1 = 171`
+}
+
 // SproutedF keeps its counts in float64: the helper takes whole numbers,
 // so the probability is reported but left as it is.
 func SproutedF(k, n, p float64) float64 { // want SproutedF:`value Γ\(p1 \+ 1\)`
