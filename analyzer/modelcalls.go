@@ -456,7 +456,7 @@ func (c *checker) reportedWithin(n ast.Node) bool {
 func (fc *fnCtx) checkCallRoot(res *vm.Result, root ast.Expr) {
 	c := fc.c
 	val := res.Values[root]
-	if val == nil || c.reportedWithin(root) {
+	if val == nil || c.reportedWithin(root) || fc.checksNonFinite(root) {
 		return
 	}
 	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(root))
@@ -780,4 +780,32 @@ func (fc *fnCtx) argText(res *vm.Result, w weak) (string, *big.Rat, bool) {
 		}
 	}
 	return "", nil, false
+}
+
+// checksNonFinite reports whether the function tests a variable that
+// root reads with math.IsInf or math.IsNaN: code that handles the
+// helper's +Inf or NaN itself (falling back to a log form, say) is not
+// judged on the value alone.
+func (fc *fnCtx) checksNonFinite(root ast.Expr) bool {
+	c := fc.c
+	tested := make(map[types.Object]bool)
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if call, ok := n.(*ast.CallExpr); ok && (c.isMathFunc(call, "IsInf") || c.isMathFunc(call, "IsNaN")) && len(call.Args) > 0 {
+			if obj := c.objOf(fc.stripConv(call.Args[0])); obj != nil {
+				tested[obj] = true
+			}
+		}
+		return true
+	})
+	if len(tested) == 0 {
+		return false
+	}
+	found := false
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && tested[c.pass.TypesInfo.Uses[id]] {
+			found = true
+		}
+		return !found
+	})
+	return found
 }

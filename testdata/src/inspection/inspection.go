@@ -79,3 +79,20 @@ func Cumulative(k, n int, p float64) float64 {
 	}
 	return sum
 }
+
+// DefectiveChecked falls back to the helper's log form itself when the
+// coefficient is not finite.
+func DefectiveChecked(k, n int, p float64) float64 {
+	c := probkit.Choose(float64(n), float64(k))
+	if math.IsInf(c, 0) || math.IsNaN(c) {
+		return math.Exp(logDefective(k, n, p))
+	}
+	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
+
+func logDefective(k, n int, p float64) float64 {
+	a, _ := math.Lgamma(float64(n + 1))
+	b, _ := math.Lgamma(float64(k + 1))
+	d, _ := math.Lgamma(float64(n - k + 1))
+	return a - b - d + float64(k)*math.Log(p) + float64(n-k)*math.Log1p(-p)
+}
