@@ -190,6 +190,9 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
+			if obj := e.objOf(n.X); obj != nil {
+				e.sets[obj] += 2
+			}
 		case *ast.UnaryExpr:
 			if n.Op == token.AND {
 				e.noteAssign(n.X, true)
@@ -420,9 +423,12 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 	}
 	for i, l := range s.Lhs {
 		if obj := e.objOf(l); obj != nil {
-			if !e.numeric(l) && !e.opaque[obj] && e.sets[obj] == 1 {
+			if !e.opaque[obj] && e.sets[obj] == 1 && (!e.numeric(l) || vals[i] == nil && s.Tok == token.DEFINE) {
 				// A struct variable set once, outside loops: its
-				// fields hold one value each, read as variables.
+				// fields hold one value each, read as variables. A
+				// number defined once from a value the model does not
+				// know (ki := int(math.Floor(k))) is a variable of its
+				// own, as a parameter is.
 				delete(en, obj)
 				continue
 			}

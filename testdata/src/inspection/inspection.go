@@ -96,3 +96,11 @@ func logDefective(k, n int, p float64) float64 {
 	d, _ := math.Lgamma(float64(n - k + 1))
 	return a - b - d + float64(k)*math.Log(p) + float64(n-k)*math.Log1p(-p)
 }
+
+// DefectiveAt takes the count of defects as a reading that the desk
+// rounds down: k is defined once, from a value the model does not know,
+// and read as a variable of its own.
+func DefectiveAt(reading float64, n int, p float64) float64 {
+	k := int(math.Floor(reading))
+	return probkit.Choose(float64(n), float64(k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `DefectiveAt computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) in float64, which fits where probkit.Choose\(float64\(n\), float64\(k\)\) already is \+Inf or NaN from n = 171`
+}
