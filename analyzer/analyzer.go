@@ -57,9 +57,7 @@ type checker struct {
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
 	tablesDone bool
-	// gammaLines holds the lines with a Gamma finding: one is enough
-	// for an expression with several Gamma calls.
-	gammaLines map[token.Position]bool
+	gamma      gammaPass // the Gamma categories' lines with a finding
 	// rewritten holds the nodes that a reported fix replaces, and held
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
@@ -87,14 +85,13 @@ type fileInfo struct {
 
 func run(pass *analysis.Pass) (any, error) {
 	c := &checker{
-		pass:       pass,
-		fixer:      fixes.NewFixer(pass),
-		files:      make(map[*token.File]*fileInfo),
-		funcs:      make(map[*types.Func]*facFunc),
-		fnInfo:     make(map[ast.Node]*fnCtx),
-		reported:   make(map[reportKey]bool),
-		consumed:   make(map[*ast.CallExpr]bool),
-		gammaLines: make(map[token.Position]bool),
+		pass:     pass,
+		fixer:    fixes.NewFixer(pass),
+		files:    make(map[*token.File]*fileInfo),
+		funcs:    make(map[*types.Func]*facFunc),
+		fnInfo:   make(map[ast.Node]*fnCtx),
+		reported: make(map[reportKey]bool),
+		consumed: make(map[*ast.CallExpr]bool),
 	}
 	for _, f := range pass.Files {
 		tf := pass.Fset.File(f.Pos())

@@ -202,7 +202,7 @@ func (fc *fnCtx) returnsOutsideClosures() []*ast.ReturnStmt {
 // edgeValue reports whether e is a constant or math.Inf or math.NaN: a
 // value for an edge case or an error, not the function's computation.
 func (c *checker) edgeValue(e ast.Expr) bool {
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if tv, ok := c.pass.TypesInfo.Types[e]; ok && tv.Value != nil {
 		return true
 	}

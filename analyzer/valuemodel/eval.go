@@ -6,6 +6,8 @@ import (
 	"go/token"
 	"go/types"
 	"math/big"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 // Options configures Evaluate.
@@ -472,18 +474,8 @@ func (e *evaluator) addAffine(v *value, d Affine) *value {
 }
 
 func (e *evaluator) isMath(call *ast.CallExpr, name string) bool {
-	var id *ast.Ident
-	switch f := ast.Unparen(call.Fun).(type) {
-	case *ast.SelectorExpr:
-		id = f.Sel
-	case *ast.Ident:
-		id = f
-	}
-	if id == nil {
-		return false
-	}
-	fn, ok := e.info.Uses[id].(*types.Func)
-	return ok && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
+	fn := typeutil.StaticCallee(e.info, call)
+	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
 
 // eval returns the value of x in en, recording it.

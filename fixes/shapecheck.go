@@ -6,17 +6,11 @@ import (
 	"go/constant"
 	"go/token"
 	"go/types"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 var constantOne = constant.MakeInt64(1)
-
-// shapeArity is the number of operands each checked shape takes (0: any).
-var shapeArity = map[Shape]int{
-	ShapeBinomial: 2, ShapePermutation: 2, ShapeMultinomial: 0, ShapeCatalan: 1,
-	ShapeHypergeometric: 4, ShapePowOverFactorial: 2, ShapePoisson: 2,
-	ShapeBinomialPMF: 3, ShapeGammaRatio: 2, ShapeBeta: 2, ShapeFactorialValue: 1,
-	ShapeInverseBeta: 2, ShapeNegBinomialPMF: 3,
-}
 
 // The analyzer finds the shapes; before replacing an expression, the
 // fixer checks on its own that the expression is that shape of the match's
@@ -100,7 +94,8 @@ func assign(factors []ast.Expr, patterns []factorPattern) bool {
 	return false
 }
 
-// call returns e as a call that is not a conversion, with its callee.
+// callOf returns e as a call that is not a conversion, with its static
+// callee (nil for a call of a function value).
 func (b *builder) callOf(e ast.Expr) (*ast.CallExpr, *types.Func) {
 	c, ok := ast.Unparen(e).(*ast.CallExpr)
 	if !ok {
@@ -109,15 +104,7 @@ func (b *builder) callOf(e ast.Expr) (*ast.CallExpr, *types.Func) {
 	if tv, ok := b.pass.TypesInfo.Types[c.Fun]; ok && tv.IsType() {
 		return nil, nil
 	}
-	var id *ast.Ident
-	switch f := ast.Unparen(c.Fun).(type) {
-	case *ast.Ident:
-		id = f
-	case *ast.SelectorExpr:
-		id = f.Sel
-	}
-	fn, _ := b.pass.TypesInfo.Uses[id].(*types.Func)
-	return c, fn
+	return c, typeutil.StaticCallee(b.pass.TypesInfo, c)
 }
 
 func isMath(fn *types.Func, name string) bool {
@@ -171,7 +158,8 @@ func (b *builder) mathCall(name string, forms ...linear) factorPattern {
 // checkShape checks the expression of a ratio or term match against its
 // shape, with the operands read as linear forms.
 func (b *builder) checkShape() error {
-	if n, ok := shapeArity[b.m.Shape]; !ok || n > 0 && len(b.m.Args) != n || len(b.m.Args) == 0 {
+	row, ok := shapes[b.m.Shape]
+	if !ok || row.factors == nil || row.operands != anyOperands && len(b.m.Args) != row.operands || len(b.m.Args) == 0 {
 		return fmt.Errorf("shape %d with %d operands has no check", b.m.Shape, len(b.m.Args))
 	}
 	ops := make([]linear, len(b.m.Args))
@@ -182,72 +170,9 @@ func (b *builder) checkShape() error {
 		}
 		ops[i] = l
 	}
-	num, den, alt := b.patterns(ops)
-	if num == nil {
-		return fmt.Errorf("shape %d has no check", b.m.Shape)
-	}
+	num, den, alt := row.factors(b, ops)
 	if b.shapeMatches(num, den) || alt != nil && b.shapeMatches(alt[0], alt[1]) {
 		return nil
 	}
-	return fmt.Errorf("the expression is not the %s of its operands", shapeName[b.m.Shape])
-}
-
-var shapeName = map[Shape]string{
-	ShapeBinomial: "binomial coefficient", ShapePermutation: "falling factorial",
-	ShapeMultinomial: "multinomial coefficient", ShapeCatalan: "Catalan number",
-	ShapeHypergeometric: "hypergeometric probability", ShapePowOverFactorial: "power over factorial",
-	ShapePoisson: "Poisson term", ShapeBinomialPMF: "binomial probability",
-	ShapeGammaRatio: "gamma ratio", ShapeBeta: "beta function",
-	ShapeFactorialValue: "converted factorial", ShapeInverseBeta: "inverse beta function",
-	ShapeNegBinomialPMF: "negative binomial probability",
-}
-
-// patterns returns the factors of the match's shape: numerator,
-// denominator and, for the binomial pmf, a second accepted form.
-func (b *builder) patterns(o []linear) (num, den []factorPattern, alt *[2][]factorPattern) {
-	fact, choose := b.userCall, b.userCall
-	one := newLinear()
-	one.c = constantOne
-	switch b.m.Shape {
-	case ShapeBinomial: // n, k
-		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[1]), fact(o[0].add(o[1].neg()))}, nil
-	case ShapePermutation: // n, k
-		return []factorPattern{fact(o[0])}, []factorPattern{fact(o[0].add(o[1].neg()))}, nil
-	case ShapeMultinomial: // k1..km
-		sum := newLinear()
-		for _, k := range o {
-			sum = sum.add(k)
-			den = append(den, fact(k))
-		}
-		return []factorPattern{fact(sum)}, den, nil
-	case ShapeCatalan: // n
-		return []factorPattern{fact(o[0].scale(constant.MakeInt64(2)))}, []factorPattern{fact(o[0].add(one)), fact(o[0])}, nil
-	case ShapeHypergeometric: // k, N, K, n
-		k, total, bad, n := o[0], o[1], o[2], o[3]
-		return []factorPattern{choose(bad, k), choose(total.add(bad.neg()), n.add(k.neg()))}, []factorPattern{choose(total, n)}, nil
-	case ShapePowOverFactorial: // x, k
-		return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{fact(o[1])}, nil
-	case ShapePoisson: // k, lambda
-		return []factorPattern{b.mathCall("Pow", o[1], o[0]), b.mathCall("Exp", o[1].neg())}, []factorPattern{fact(o[0])}, nil
-	case ShapeBinomialPMF: // k, n, p
-		k, n, p := o[0], o[1], o[2]
-		pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", one.add(p.neg()), n.add(k.neg()))
-		return []factorPattern{choose(n, k), pk, qnk}, nil,
-			&[2][]factorPattern{{fact(n), pk, qnk}, {fact(k), fact(n.add(k.neg()))}}
-	case ShapeNegBinomialPMF: // f, s, p: C(f+s−1, f) or C(f+s−1, s−1), p^s, (1−p)^f
-		f, s, p := o[0], o[1], o[2]
-		n := f.add(s).add(one.neg())
-		ps, qf := b.mathCall("Pow", p, s), b.mathCall("Pow", one.add(p.neg()), f)
-		return []factorPattern{choose(n, f), ps, qf}, nil,
-			&[2][]factorPattern{{choose(n, s.add(one.neg())), ps, qf}, nil}
-	case ShapeGammaRatio: // a, b
-		return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
-	case ShapeFactorialValue: // n
-		return []factorPattern{b.converted(fact(o[0]))}, nil, nil
-	case ShapeBeta: // a, b
-		return []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, nil
-	case ShapeInverseBeta: // a, b
-		return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, nil
-	}
-	return nil, nil, nil
+	return fmt.Errorf("the expression is not the %s of its operands", row.name)
 }

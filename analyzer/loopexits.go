@@ -7,6 +7,10 @@ import (
 	"math"
 )
 
+// Early exits of product loops: a return, goto or break that ends a
+// loop, or skips its update, before its product reaches the first bad
+// value; and reportLoop, which reports a loop finding with them in mind.
+
 // leavesEarly reports whether a product loop can end before its test
 // stops it, or skip its update on a trip: then its accumulator need not
 // hold the product its shape promises. It counts

@@ -4,7 +4,12 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/fixes"
 )
+
+// Products and ratios of known factors: factorial calls, powers,
+// exponentials and Gamma calls, followed through locals assigned once.
 
 // A factor is one operand of a product or ratio that the analyzer knows:
 // a factorial-valued call, math.Gamma, math.Pow or math.Exp.
@@ -25,6 +30,19 @@ type factor struct {
 type product struct {
 	num, den []factor
 	other    int
+	// chained marks a product built over several statements (r :=
+	// fact(n); r /= fact(k); …): no single expression holds its value,
+	// so its finding has no fix.
+	chained bool
+}
+
+// fix returns the match of p's finding, or nil where p has no
+// expression to rewrite.
+func (p *product) fix(m *fixes.Match) *fixes.Match {
+	if p.chained {
+		return nil
+	}
+	return m
 }
 
 // evalProduct splits e into known factors, following local variables
@@ -206,5 +224,5 @@ func (fc *fnCtx) inlined(e ast.Expr) {
 	if fc.inl == nil {
 		fc.inl = make(map[ast.Expr]bool)
 	}
-	fc.inl[unparen(e)] = true
+	fc.inl[ast.Unparen(e)] = true
 }

@@ -8,45 +8,8 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
-// checkCall judges a call that no product consumed: a factorial call
-// whose argument is certainly past its threshold, a conversion that
-// comes after the factorial has broken, and math.Gamma.
-func (fc *fnCtx) checkCall(call *ast.CallExpr) {
-	c := fc.c
-	if c.consumed[call] {
-		return
-	}
-	if len(call.Args) == 1 && fc.isConversion(call) {
-		fc.checkConversion(call)
-		return
-	}
-	if c.isMathFunc(call, "Gamma") && len(call.Args) == 1 {
-		fc.checkGamma(call)
-		return
-	}
-	f, ok := fc.factorOf(call)
-	if !ok || f.kind != kindFactorial && f.kind != kindDouble || f.fact.Safe {
-		return
-	}
-	first := firstBadOf(f.kind, f.t) - f.off
-	r := fc.rangeOf(f.arg)
-	if r.IsEmpty() || r.Lo < first {
-		return
-	}
-	clause, definite := verdict(src(f.arg), r, first)
-	if !definite {
-		return
-	}
-	fc.report(finding{
-		node:     call,
-		cat:      catCall,
-		definite: true,
-		msg:      fmt.Sprintf("%s(%s): %s%s", f.fn.Name(), src(f.arg), factorialLimitText(f.kind, src(f.arg), f.off, f.t), clause),
-		related:  c.relatedDef(f.fn.Name(), f.fn.Pos()),
-		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
-			Result: c.pass.TypesInfo.TypeOf(call), FirstBad: first},
-	})
-}
+// The late-conversion category: a factorial converted to another type
+// after it has already wrapped or lost exactness in its own.
 
 // checkConversion judges T(v) where v is a factorial value that has
 // already broken in its own type: an integer factorial converted to
@@ -58,7 +21,7 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	if !ok {
 		return
 	}
-	inner, ok := unparen(conv.Args[0]).(*ast.CallExpr)
+	inner, ok := ast.Unparen(conv.Args[0]).(*ast.CallExpr)
 	if !ok {
 		return
 	}
@@ -82,19 +45,17 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	default:
 		return
 	}
-	r := fc.rangeOf(f.arg)
-	if r.IsEmpty() || r.Hi < first {
-		c.consumed[inner] = true
+	c.consumed[inner] = true
+	j := fc.judge(f.arg, first)
+	if j.silent {
 		return
 	}
-	c.consumed[inner] = true
-	clause, definite := verdict(src(f.arg), r, first)
 	// The conversion and the call become one helper call computing n! in
 	// the target type; a call whose value is (n+off)! is left alone.
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: conv, Result: c.pass.TypesInfo.TypeOf(conv)}
 	if f.off == 0 {
 		m.Shape, m.Args = fixes.ShapeFactorialValue, []ast.Expr{f.arg}
 	}
-	fc.report(finding{node: conv, cat: catLateConv, definite: definite, msg: msg + clause,
+	fc.report(finding{node: conv, cat: catLateConv, definite: j.definite, msg: msg + j.clause,
 		related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})
 }

@@ -3,7 +3,87 @@ package analyzer
 import (
 	"go/ast"
 	"go/token"
+	"go/types"
 )
+
+// What runs for each function that the prefilter passed: its loops go to
+// the loop categories, its recursion to factorial-recursion, its products
+// and ratios (checkProduct) and the calls no product consumed (checkCall)
+// to the category that matches their shape, then the value model.
+
+// checkFunc reports the findings of one function.
+func (c *checker) checkFunc(n ast.Node, s scan) {
+	if testHook != nil {
+		testHook(n)
+	}
+	fc := c.ctx(n)
+	body := funcBody(n)
+	if s.worthLoops() {
+		fc.eachLoop(body, fc.noteLoop)
+	}
+	if d, ok := n.(*ast.FuncDecl); ok && s.callMul {
+		if ff := c.funcs[c.declObj(d)]; ff != nil && ff.rec != nil {
+			fc.checkRecursion(ff)
+		}
+	}
+	if s.knownCall || fc.powLoops != nil {
+		fc.checkExprs(body)
+	}
+	if s.worthLoops() || s.knownCall {
+		fc.checkModel()
+	}
+	if s.knownCall {
+		fc.checkModelCalls()
+	}
+}
+
+// noteLoop reports a product loop, or records a power loop for the
+// products that use its result.
+func (fc *fnCtx) noteLoop(al *accLoop) {
+	if al.kind == kindPower {
+		if fc.powLoops == nil {
+			fc.powLoops = make(map[types.Object]*accLoop)
+		}
+		fc.powLoops[al.acc] = al
+		return
+	}
+	fc.checkAccLoop(al)
+}
+
+// checkAccLoop reports a product loop whose product can exceed its type.
+func (fc *fnCtx) checkAccLoop(al *accLoop) {
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]))
+	if !ok {
+		return
+	}
+	if al.div != nil {
+		fc.checkBinomialLoop(al, t)
+		return
+	}
+	switch al.kind {
+	case kindFactorial, kindDouble:
+		fc.checkFactorialLoop(al, t)
+	case kindFalling:
+		fc.checkFallingLoop(al, t)
+	case kindRising:
+		fc.checkRisingLoop(al, t)
+	}
+}
+
+// checkCall judges a call that no product consumed: a conversion that
+// comes after the factorial has broken (late-conversion), math.Gamma
+// (gamma-overflow) or a factorial call (factorial-call).
+func (fc *fnCtx) checkCall(call *ast.CallExpr) {
+	switch {
+	case fc.c.consumed[call]:
+	case len(call.Args) == 1 && fc.isConversion(call):
+		fc.checkConversion(call)
+	case fc.c.isMathFunc(call, "Gamma") && len(call.Args) == 1:
+		fc.checkGamma(call)
+	default:
+		fc.checkFactorialCall(call)
+	}
+}
 
 // checkExprs judges the products and ratios of known factors in body,
 // then the factorial calls, conversions and Gamma calls that no product
@@ -170,8 +250,7 @@ func (fc *fnCtx) checkChains(list []ast.Stmt) {
 			// product of its own: one finding per root cause.
 			continue
 		}
-		fc.noFix = true
+		p.chained = true
 		fc.checkProduct(chain[len(chain)-1].Lhs[0], p)
-		fc.noFix = false
 	}
 }

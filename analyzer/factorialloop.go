@@ -11,6 +11,99 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The factorial-loop category: a loop that multiplies an accumulator by
+// its induction variable (a factorial or double factorial, and the
+// falling and rising factorials below), judged by the range of the
+// largest factor where the loop starts. The loop shapes are read in
+// loops.go and accloop.go.
+
+// topRange is the range of the expression naming the largest factor of
+// a loop, where the loop starts.
+func (fc *fnCtx) topRange(al *accLoop) ranges.Interval {
+	switch {
+	case al.top == nil:
+		return ranges.Point(0)
+	case al.shape.whileLike && fc.c.objOf(al.top) == al.shape.iv:
+		return fc.entryRange(al.shape.iv, al.shape.stmt)
+	}
+	return fc.rangeOf(al.top)
+}
+
+func (fc *fnCtx) checkFactorialLoop(al *accLoop, t numType) {
+	if fc.decidedAtCalls(al.shape.stmt) {
+		return
+	}
+	first := firstBadOf(al.kind, t)
+	if al.top == nil && al.topOff < first {
+		return // a constant bound below the threshold
+	}
+	if fc.judge(fc.stripConv(al.mult), first).silent {
+		return
+	}
+	// The verdict is the top's where the loop starts (with no top, a
+	// constant bound, its range is the point 0 and the offset decides),
+	// that holds whether or not the top alone stays below its limit.
+	clause, definite := verdict(shownName(al.top), fc.topRange(al), first-al.topOff)
+	name, off := shownFactorial(al.top, al.topOff)
+	msg := factorialLimitText(al.kind, name, off, t) + clause
+	if al.top == nil && al.shape.bigEnd != nil {
+		// The largest factor is a constant beyond int64: say it as written.
+		msg = factorialConstText(al.kind, src(al.shape.bigEnd), t)
+	}
+	m := fc.loopMatch(al, t)
+	fc.reportLoop(al, finding{
+		node:     al.shape.stmt,
+		cat:      catLoop,
+		definite: definite,
+		msg:      msg,
+		match:    m,
+	})
+}
+
+// loopMatch describes a factorial loop for the fixes package.
+func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
+	m := &fixes.Match{
+		Shape:   fixes.ShapeFactorial,
+		Node:    al.shape.stmt,
+		Result:  fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]),
+		Acc:     al.acc,
+		AccInit: al.accInit,
+		Loop:    al.shape.stmt,
+		Func:    fc.node,
+	}
+	// A double factorial n!! gets the same guard as n!, with its own
+	// first bad n. The guard tests the function's argument, so it is
+	// right only where the product is what the function returns: a
+	// product that feeds a sum, a ratio or a conversion (a series term
+	// x^k/k!, 1/float64(f)) may still give a correct result past the
+	// point where the product itself no longer fits, and a guard would
+	// make that function panic.
+	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) {
+		if st := fc.seriesTermMatch(al); st != nil {
+			return st
+		}
+		m.Shape = fixes.ShapeNone
+	}
+	if al.top != nil {
+		m.Args = []ast.Expr{al.top}
+		m.Param = fc.c.objOf(al.top)
+		m.FirstBad = firstBadOf(al.kind, t) - al.topOff
+	}
+	return m
+}
+
+// returnsProduct reports whether al's product is the value of its
+// function: a factorial-valued function of this package whose loop
+// accumulates into the same variable.
+func (fc *fnCtx) returnsProduct(al *accLoop) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	return ff != nil && ff.loop != nil && ff.loop.acc == al.acc
+}
+
 // checkFallingLoop reports n·(n−1)·…·(n−k+1) formed by a loop when the
 // largest factor n and the number of factors k can make it exceed t.
 // The product grows with both, so the largest n and k decide safety and
@@ -172,7 +265,11 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 		return
 	}
 	kName := plus(src(al.count), al.coff)
-	clause, definite := verdict(kName, k, first)
+	vName := kName
+	if al.coff == 0 {
+		vName = shownName(al.count) // nothing for a literal count
+	}
+	clause, definite := verdict(vName, k, first)
 	// With x unknown, say which x the limit is measured at; a constant x
 	// already stands in "from".
 	at := ""

@@ -5,16 +5,19 @@ import (
 	"go/ast"
 	"go/token"
 
-	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 )
 
+// The factorial-ratio category: binomials, permutations, multinomials,
+// Catalan numbers, hypergeometric and binomial probabilities computed as
+// ratios or products of factorial values whose numerator overflows first.
+
 // brokenFactor returns the numerator factor that can break first: the
-// first whose argument is not bounded below its threshold, with its
-// range and first bad argument. ok is false when every numerator factor
-// is safe.
-func (fc *fnCtx) brokenFactor(num []factor) (f factor, r ranges.Interval, first int64, ok bool) {
+// first whose argument is not bounded below its threshold, with the
+// judgement of its argument and its first bad argument. ok is false
+// when every numerator factor is safe.
+func (fc *fnCtx) brokenFactor(num []factor) (f factor, j judgement, first int64, ok bool) {
 	for _, f := range num {
 		if f.kind == kindNone || f.kind == kindRising || f.kind == kindFalling {
 			continue
@@ -23,22 +26,20 @@ func (fc *fnCtx) brokenFactor(num []factor) (f factor, r ranges.Interval, first 
 			continue
 		}
 		first := firstBadOf(f.kind, f.t) - f.off
-		r := fc.rangeOf(f.arg)
-		if r.IsEmpty() || r.Hi < first {
-			continue
+		if j := fc.judge(f.arg, first); !j.silent {
+			return f, j, first, true
 		}
-		return f, r, first, true
 	}
-	return factor{}, ranges.Interval{}, 0, false
+	return factor{}, judgement{}, 0, false
 }
 
 // bang renders the factorial of an argument: n!, (n-k)!, (2*n)!.
 func bang(arg ast.Expr, off int64) string {
 	s := plus(src(arg), off)
-	if _, ok := unparen(arg).(*ast.Ident); ok && off == 0 {
+	if _, ok := ast.Unparen(arg).(*ast.Ident); ok && off == 0 {
 		return s + "!"
 	}
-	if _, ok := unparen(arg).(*ast.BasicLit); ok && off == 0 {
+	if _, ok := ast.Unparen(arg).(*ast.BasicLit); ok && off == 0 {
 		return s + "!"
 	}
 	return "(" + s + ")!"
@@ -47,7 +48,7 @@ func bang(arg ast.Expr, off int64) string {
 // checkFactorialRatio judges binomials, permutations, Catalan numbers,
 // multinomials and other products and ratios of factorial values.
 func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
-	u, r, first, ok := fc.brokenFactor(p.num)
+	u, j, first, ok := fc.brokenFactor(p.num)
 	if !ok {
 		return
 	}
@@ -62,9 +63,9 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 			dens = append(dens, f)
 		}
 	}
-	clause, definite := verdict(src(u.arg), r, first)
+	clause, definite := j.clause, j.definite
 	breaks := fmt.Sprintf("the numerator %s %s for %s ≥ %d", bang(u.arg, u.off), verb(u.t), src(u.arg), first)
-	if isConst(src(u.arg)) {
+	if _, lit := intLiteral(u.arg); lit {
 		breaks = fmt.Sprintf("the numerator %s %s, as every factorial from %s does", bang(u.arg, u.off), verb(u.t), bang(&ast.BasicLit{Value: fmt.Sprint(first + u.off)}, 0))
 	}
 	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
@@ -81,7 +82,8 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		// The code's own n, unless the numerator is a constant or an
 		// offset, where no name stands for the row.
 		n := atom(u.arg)
-		if u.off != 0 || isConst(n) {
+		_, lit := ast.Unparen(u.arg).(*ast.BasicLit)
+		if _, val := intLiteral(ast.Unparen(u.arg)); u.off != 0 || lit && val {
 			n = "n"
 		}
 		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s, although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, n, n, n, central.FirstBad-1)
@@ -90,7 +92,9 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		// argument, as the Catalan number is indexed by it.
 		half := m.Args[0]
 		cat, cv := thresholds.Catalan(u.t.Num), thresholds.CatalanValue(u.t.Num)
-		clause, definite = verdict(src(half), fc.rangeOf(half), cat.FirstBad)
+		// The numerator's verdict, told against the Catalan number's own
+		// limit, which n may stay below.
+		clause, definite = verdict(shownName(half), fc.rangeOf(half), cat.FirstBad)
 		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: the numerator %s %s for %s ≥ %d although the Catalan number itself fits up to %s = %d",
 			u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(half), cat.FirstBad, src(half), cv.FirstBad-1)
 	case shape == fixes.ShapePermutation:
@@ -117,7 +121,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		definite: definite,
 		msg:      msg + clause,
 		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
-		match:    m,
+		match:    p.fix(m),
 	})
 }
 
@@ -159,7 +163,7 @@ func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shap
 		m.Args = []ast.Expr{half}
 		return fixes.ShapeCatalan, ""
 	case len(dens) == 1:
-		if b, ok := unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
+		if b, ok := ast.Unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
 			if x, ok := fc.linear(b.X); ok && x.equal(n) {
 				m.Args = []ast.Expr{u.arg, b.Y}
 			}
@@ -185,22 +189,18 @@ func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 			d = f
 		}
 	}
-	if d.fact == nil || d.fact.Safe {
+	j, first := fc.judgeCall(d)
+	if j.silent {
 		return
 	}
-	first := d.fact.FirstBad
-	r := fc.rangeOf(d.arg)
-	if r.IsEmpty() || r.Hi < first {
-		return
-	}
-	clause, definite := verdict(src(d.arg), r, first)
+	clause, definite := j.clause, j.definite
 	msg := fmt.Sprintf("hypergeometric probability from three binomial coefficients in %s: %s(%s, …) breaks for %s ≥ %d before the division%s",
 		d.t.typeName(), d.fn.Name(), src(d.arg), src(d.arg), first, clause)
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
 	if args := fc.hyperArgs(p); args != nil && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeHypergeometric, args
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: m})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: p.fix(m)})
 }
 
 // hyperArgs returns k, N, K, n of C(K,k)C(N-K,n-k)/C(N,n), or nil.
@@ -244,15 +244,11 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 			pows = append(pows, f)
 		}
 	}
-	if b.fact == nil || b.fact.Safe {
+	j, first := fc.judgeCall(b)
+	if j.silent {
 		return
 	}
-	first := b.fact.FirstBad
-	r := fc.rangeOf(b.arg)
-	if r.IsEmpty() || r.Hi < first {
-		return
-	}
-	clause, definite := verdict(src(b.arg), r, first)
+	clause, definite := j.clause, j.definite
 	what := "C(n,k)·p^k·(1−p)^(n−k)"
 	if b.arg2 != nil && len(pows) > 0 {
 		// The code's own n, k and p: C(n, d)·p^d·(1−p)^(n−d).
@@ -266,5 +262,5 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: m})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
 }

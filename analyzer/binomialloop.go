@@ -11,6 +11,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The binomial-loop category: a multiplicative binomial loop whose
+// intermediate product overflows before the division.
+
 // maxBinomialScan bounds the values of k tried when n is bounded but k
 // is not; beyond it the loop is reported as possible.
 const maxBinomialScan = 256
@@ -37,9 +40,9 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	lim := thresholds.CentralBinomialLoop(t.Num)
 	central := thresholds.CentralBinomial(t.Num)
 	name := src(nExpr)
-	clause, _ := verdict(name, n, lim.FirstBad)
+	clause, _ := verdict(shownName(nExpr), n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
-	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: unparen(al.mult)}})
+	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: ast.Unparen(al.mult)}})
 	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
 		t.typeName(), product, verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
 	kExpr := al.count

@@ -2,12 +2,16 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/token"
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/internal/assigned"
 )
+
+// Factorial-valued functions (phase 1): a function whose result is a
+// factorial of a parameter, by a loop, a recursion or a wrapper, and its
+// fact.
 
 // facFunc is a factorial-valued function of this package.
 type facFunc struct {
@@ -105,60 +109,6 @@ func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
 	return -1
 }
 
-// recursionOf matches a return of n * f(n-1) (or n-2, a double
-// factorial) anywhere in a returned expression.
-func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
-	var ff *facFunc
-	ast.Inspect(decl.Body, func(n ast.Node) bool {
-		if ff != nil {
-			return false
-		}
-		if _, ok := n.(*ast.FuncLit); ok {
-			return false
-		}
-		ret, ok := n.(*ast.ReturnStmt)
-		if !ok || len(ret.Results) == 0 {
-			return true
-		}
-		ast.Inspect(ret.Results[0], func(m ast.Node) bool {
-			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.MUL && ff == nil {
-				ff = fc.recursiveProduct(decl, self, b)
-			}
-			return ff == nil
-		})
-		return ff == nil
-	})
-	return ff
-}
-
-func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr) *facFunc {
-	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
-		nExpr, callExpr := pair[0], pair[1]
-		v := fc.c.objOf(fc.stripConv(nExpr))
-		idx := fc.c.paramIndex(decl, v)
-		call, ok := fc.stripConv(callExpr).(*ast.CallExpr)
-		if idx < 0 || !ok || fc.c.calleeOf(call) != self || idx >= len(call.Args) {
-			continue
-		}
-		lin, ok := fc.linear(call.Args[idx])
-		if !ok || len(lin.terms) != 1 || lin.terms[0].obj != v || lin.terms[0].coef != 1 {
-			continue
-		}
-		kind := kindNone
-		switch lin.c {
-		case -1:
-			kind = kindFactorial
-		case -2:
-			kind = kindDouble
-		}
-		if kind == kindNone {
-			continue
-		}
-		return &facFunc{kind: kind, param: idx, param2: -1, rec: b, recN: fc.stripConv(nExpr)}
-	}
-	return nil
-}
-
 // loopFuncOf matches a function that returns the accumulator of a
 // product loop whose largest factor is a parameter.
 func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
@@ -238,30 +188,7 @@ func lastGoodApprox(k facKind, t numType) string {
 // statement skip: then the function's result is not a factorial of the
 // argument it was called with.
 func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip ast.Node) bool {
-	found := false
-	ast.Inspect(body, func(n ast.Node) bool {
-		if n == skip || found {
-			return false
-		}
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				if id, ok := unparen(l).(*ast.Ident); ok && info.ObjectOf(id) == v {
-					found = true
-				}
-			}
-		case *ast.IncDecStmt:
-			if id, ok := unparen(n.X).(*ast.Ident); ok && info.ObjectOf(id) == v {
-				found = true
-			}
-		case *ast.UnaryExpr:
-			if id, ok := unparen(n.X).(*ast.Ident); ok && n.Op == token.AND && info.ObjectOf(id) == v {
-				found = true
-			}
-		}
-		return !found
-	})
-	return found
+	return assigned.In(info, body, v, func(n ast.Node) bool { return n == skip })
 }
 
 // wrapperOf matches a function that returns a factorial of a parameter
@@ -279,7 +206,7 @@ func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		if !ok || len(ret.Results) == 0 {
 			return true
 		}
-		call, ok := unparen(ret.Results[0]).(*ast.CallExpr)
+		call, ok := ast.Unparen(ret.Results[0]).(*ast.CallExpr)
 		if !ok || !types.Identical(fc.c.pass.TypesInfo.TypeOf(call), resT) {
 			return false
 		}
@@ -345,4 +272,21 @@ func (c *checker) ownCtx(fn ast.Node) *fnCtx {
 		own.assumes = own.file.dirs.stmtAssumesIn(fn)
 	}
 	return own
+}
+
+// decidedAtCalls reports whether n is the product loop or the recursion
+// of this function's factorial, and every call of the function in the
+// package is either safe or certainly past its first bad value: the
+// calls past it are the findings (fact(25)), one each, and a finding at
+// the definition would only repeat them with a range the calls gave it.
+func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+		return false
+	}
+	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
 }

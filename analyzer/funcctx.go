@@ -2,13 +2,13 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/constant"
-	"go/token"
 	"go/types"
-	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
+
+// The function context: one function under analysis, with its lazily
+// run range analysis and the bound annotations that narrow it.
 
 // fnCtx is one function under analysis. Its range analysis runs lazily,
 // on the first question about a range, so functions without a candidate
@@ -22,17 +22,13 @@ type fnCtx struct {
 	assumes []stmtAssume // statement-level bound annotations
 	defs    map[types.Object][]ast.Expr
 	inl     map[ast.Expr]bool // values consumed by a larger product
-	noFix   bool              // the finding being judged has no expression to rewrite
 	// powLoops maps the accumulator of each power loop x·x·…·x to it.
 	powLoops map[types.Object]*accLoop
 	// closureAssigned and returned are gathered once per function (see
 	// closureAssigns and returns).
 	closureAssigned map[types.Object]bool
 	returned        map[*ast.BlockStmt]map[types.Object]bool
-	// gammaCalls holds the function's math.Gamma calls by line, gathered
-	// once (see gammaCallsOn).
-	gammaCalls map[token.Position][]*ast.CallExpr
-	parents    map[ast.Node]ast.Node // of the function body, for gammaEscapes
+	gamma           gammaFunc // what the Gamma categories gather once per function
 }
 
 // maxVisits bounds the range analysis of one function; past it the
@@ -81,7 +77,7 @@ func (c *checker) packageTables() map[types.Object]*ast.CompositeLit {
 // rangeOf returns the range of the integer expression e where it is
 // evaluated, narrowed by statement-level bound annotations over it.
 func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, ok := fc.intConst(e); ok {
 		return ranges.Point(v)
 	}
@@ -105,144 +101,6 @@ func (fc *fnCtx) entryRange(v types.Object, n ast.Node) ranges.Interval {
 		}
 	}
 	return iv
-}
-
-// intConst returns the value of a constant integer expression.
-func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[e]
-	if !ok || tv.Value == nil {
-		return 0, false
-	}
-	v := constant.ToInt(tv.Value)
-	if v.Kind() != constant.Int {
-		return 0, false
-	}
-	return constant.Int64Val(v)
-}
-
-// floatConst returns the value of a constant numeric expression.
-func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[unparen(e)]
-	if !ok || tv.Value == nil {
-		return 0, false
-	}
-	v := constant.ToFloat(tv.Value)
-	if v.Kind() != constant.Float && v.Kind() != constant.Int {
-		return 0, false
-	}
-	f, _ := constant.Float64Val(v)
-	return f, true
-}
-
-// shift adds d to both ends of an interval, saturating at the unbounded
-// ends.
-//
-// Special cases are:
-//
-//	shift(empty, d) = empty
-//	shift([−∞, hi], d) = [−∞, hi+d], and likewise for +∞
-func shift(iv ranges.Interval, d int64) ranges.Interval {
-	if iv.IsEmpty() {
-		return iv
-	}
-	return ranges.Interval{Lo: addSat(iv.Lo, d), Hi: addSat(iv.Hi, d)}
-}
-
-// addSat returns x+d, clamped to the int64 range.
-//
-// Special cases are:
-//
-//	addSat(math.MinInt64, d) = math.MinInt64 (−∞ stays −∞)
-//	addSat(math.MaxInt64, d) = math.MaxInt64 (+∞ stays +∞)
-func addSat(x, d int64) int64 {
-	switch {
-	case x == math.MinInt64 || x == math.MaxInt64:
-		return x
-	case d > 0 && x > math.MaxInt64-d:
-		return math.MaxInt64
-	case d < 0 && x < math.MinInt64-d:
-		return math.MinInt64
-	}
-	return x + d
-}
-
-func unparen(e ast.Expr) ast.Expr {
-	for {
-		p, ok := e.(*ast.ParenExpr)
-		if !ok {
-			return e
-		}
-		e = p.X
-	}
-}
-
-// stripConv removes parentheses and numeric conversions around e.
-func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
-	for {
-		e = unparen(e)
-		call, ok := e.(*ast.CallExpr)
-		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
-			return e
-		}
-		e = call.Args[0]
-	}
-}
-
-func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
-	tv, ok := fc.c.pass.TypesInfo.Types[call.Fun]
-	return ok && tv.IsType()
-}
-
-// objOf returns the variable an identifier denotes.
-func (c *checker) objOf(e ast.Expr) types.Object {
-	id, ok := unparen(e).(*ast.Ident)
-	if !ok {
-		return nil
-	}
-	obj := c.pass.TypesInfo.ObjectOf(id)
-	if _, ok := obj.(*types.Var); !ok {
-		return nil
-	}
-	return obj
-}
-
-// calleeOf returns the function a call statically calls, or nil.
-func (c *checker) calleeOf(call *ast.CallExpr) *types.Func {
-	var id *ast.Ident
-	switch fun := unparen(call.Fun).(type) {
-	case *ast.Ident:
-		id = fun
-	case *ast.SelectorExpr:
-		id = fun.Sel
-	case *ast.IndexExpr: // generic instantiation f[T](...)
-		switch x := fun.X.(type) {
-		case *ast.Ident:
-			id = x
-		case *ast.SelectorExpr:
-			id = x.Sel
-		}
-	case *ast.IndexListExpr:
-		switch x := fun.X.(type) {
-		case *ast.Ident:
-			id = x
-		case *ast.SelectorExpr:
-			id = x.Sel
-		}
-	}
-	if id == nil {
-		return nil
-	}
-	fn, _ := c.pass.TypesInfo.Uses[id].(*types.Func)
-	if fn != nil {
-		fn = fn.Origin()
-	}
-	return fn
-}
-
-// isMathFunc reports whether call calls the function name of package math.
-func (c *checker) isMathFunc(call *ast.CallExpr, name string) bool {
-	fn := c.calleeOf(call)
-	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
 
 // liftAssumes turns a statement-level bound on a parameter that the

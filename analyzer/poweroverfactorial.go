@@ -10,6 +10,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
+// The power-over-factorial category: x^k/k! terms (Poisson, Erlang,
+// Taylor) whose power and factorial overflow separately.
+
 // checkPowOverFactorial judges x^k/k! (with or without e^(−λ)): Poisson
 // probabilities, Erlang B and C terms, Taylor-series terms. The term is
 // small, but k! and x^k are computed separately and each overflows on
@@ -34,8 +37,8 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 		return
 	}
 	first := firstBadOf(fac.kind, fac.t) - fac.off
-	r := fc.rangeOf(fac.arg)
-	facSafe := (fac.fact != nil && fac.fact.Safe) || r.IsEmpty() || r.Hi < first
+	j := fc.judge(fac.arg, first)
+	facSafe := (fac.fact != nil && fac.fact.Safe) || j.silent
 	powText, powSafe := fc.powerLimit(pow)
 	if facSafe && powSafe {
 		return
@@ -65,7 +68,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	var msg, clause string
 	definite := false
 	if !facSafe {
-		clause, definite = verdict(src(fac.arg), r, first)
+		clause, definite = j.clause, j.definite
 		msg = fmt.Sprintf("%s in %s: the divisor %s %s for %s ≥ %d (%s), after which the term is 0 or NaN although its true value is small",
 			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
@@ -75,7 +78,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 		msg = fmt.Sprintf("%s in %s: %s", what, pow.t.typeName(), powText)
 	}
 	fc.report(finding{node: root, cat: catPowOverFac, definite: definite, msg: msg + clause,
-		related: fc.c.relatedDef(fac.fn.Name(), fac.fn.Pos()), match: m})
+		related: fc.c.relatedDef(fac.fn.Name(), fac.fn.Pos()), match: p.fix(m)})
 }
 
 // powerLimit describes where math.Pow(x, k) overflows when x is a
@@ -87,8 +90,7 @@ func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
 		return "", true
 	}
 	first := thresholds.PowerFirstBad(pow.t.Num, x)
-	r := fc.rangeOf(fc.stripConv(pow.arg2))
-	if r.IsEmpty() || r.Hi < first {
+	if fc.judge(fc.stripConv(pow.arg2), first).silent {
 		return "", true
 	}
 	return fmt.Sprintf("math.Pow(%s, %s) %s for %s ≥ %d", src(pow.arg), src(pow.arg2), verb(pow.t), src(fc.stripConv(pow.arg2)), first), false
@@ -104,9 +106,9 @@ func powerText(fc *fnCtx, pow factor) string {
 // base or exponent of x^k: in parentheses unless it is a name, a
 // selector, a literal or a call.
 func atom(e ast.Expr) string {
-	switch unparen(e).(type) {
+	switch ast.Unparen(e).(type) {
 	case *ast.Ident, *ast.BasicLit, *ast.SelectorExpr, *ast.CallExpr:
-		return src(unparen(e))
+		return src(ast.Unparen(e))
 	}
 	return "(" + src(e) + ")"
 }
@@ -122,7 +124,7 @@ func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
 
 // negated reports whether e is −x: the exponent of e^(−λ) beside λ^k.
 func (fc *fnCtx) negated(e, x ast.Expr) bool {
-	u, ok := unparen(e).(*ast.UnaryExpr)
+	u, ok := ast.Unparen(e).(*ast.UnaryExpr)
 	if !ok || u.Op != token.SUB {
 		return false
 	}
