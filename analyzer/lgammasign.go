@@ -63,7 +63,7 @@ func (fc *fnCtx) droppedSigns() map[types.Object]*lgammaValue {
 		if !ok || len(as.Lhs) != 2 || len(as.Rhs) != 1 {
 			return true
 		}
-		call, ok := unparen(as.Rhs[0]).(*ast.CallExpr)
+		call, ok := ast.Unparen(as.Rhs[0]).(*ast.CallExpr)
 		if !ok || len(call.Args) != 1 || !fc.c.isMathFunc(call, "Lgamma") {
 			return true
 		}
@@ -108,7 +108,7 @@ func (fc *fnCtx) carries(e ast.Expr, vals map[types.Object]*lgammaValue, used *[
 	if depth > maxDepth {
 		return false
 	}
-	switch x := unparen(e).(type) {
+	switch x := ast.Unparen(e).(type) {
 	case *ast.Ident:
 		obj := fc.c.objOf(x)
 		if v := vals[obj]; v != nil {
@@ -251,7 +251,7 @@ func (fc *fnCtx) integerValued(e ast.Expr, depth int) bool {
 	if depth > maxDepth {
 		return false
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, ok := fc.floatConst(e); ok {
 		return isInteger(v)
 	}

@@ -445,7 +445,7 @@ func (fc *fnCtx) corrected(res *vm.Result, h stirlingHit) bool {
 			continue
 		case *ast.BinaryExpr:
 			other := p.X
-			if unparen(other) == unparen(h.e) || other.Pos() <= h.e.Pos() && h.e.End() <= other.End() {
+			if ast.Unparen(other) == ast.Unparen(h.e) || other.Pos() <= h.e.Pos() && h.e.End() <= other.End() {
 				other = p.Y
 			}
 			ops := p.Op == token.MUL || p.Op == token.QUO
