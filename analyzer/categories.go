@@ -17,6 +17,8 @@ const (
 	catGamma      = "gamma-overflow"
 	catLateConv   = "late-conversion"
 	catDirective  = "directive"
+	catLgammaSign = "lgamma-sign"
+	catStirling   = "stirling-approximation"
 
 	catLgammaDigits   = "lgamma-digits"
 	catLgammaInteger  = "lgamma-integer"
@@ -48,6 +50,8 @@ var patterns = []struct{ id, title string }{
 	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
 	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},
 	{catLateConv, "A factorial is converted to another type after it has already wrapped or lost exactness."},
+	{catLgammaSign, "math.Exp of a math.Lgamma value whose sign was dropped stands for Γ(x) where Γ(x) can be negative."},
+	{catStirling, "A hand-written Stirling approximation stands for n!: it is off by about 1/(12n) relative, and its power n^n can overflow before n! does."},
 	{catLgammaDigits, "math.Exp of a sum or difference of log-gamma values (a binomial, Beta or gamma ratio) loses more digits than the tolerance allows over the argument's range."},
 	{catLgammaInteger, "An exponential of log-gamma values, or math.Gamma, is converted or rounded to an integer that comes out wrong."},
 	{catLgammaOverflow, "math.Exp of a log-gamma value is +Inf where the expression it feeds is finite."},
@@ -66,6 +70,40 @@ func Categories() []CategoryInfo {
 	}
 	out = append(out, CategoryInfo{ID: catDirective, Title: "An //overfact: directive is malformed, lacks its reason or names an unknown verb.", Help: baseURL + catDirective})
 	return out
+}
+
+// isDefinite reports whether a category is the definite form of a pattern:
+// its overflow is certain for every input the code allows.
+func isDefinite(category string) bool {
+	return strings.HasSuffix(category, definiteSuffix)
+}
+
+// Severities of findings, in the words SARIF uses for its levels.
+const (
+	SeverityError   = "error"   // a definite finding
+	SeverityWarning = "warning" // a possible one
+)
+
+// Severity returns how serious a finding of the category is: definite
+// findings are errors, the others warnings. Every report writer (SARIF,
+// the language server) takes its levels from here.
+func Severity(category string) string {
+	if isDefinite(category) {
+		return SeverityError
+	}
+	return SeverityWarning
+}
+
+// fixesLast holds the patterns found at a factorial's definition. Their
+// fix is a range guard, which makes every caller's ratio or term silent
+// without rewriting it; a fixing driver applies them only in a round
+// where no other fix is left, so that the rewrites come first.
+var fixesLast = map[string]bool{catLoop: true, catRecursion: true}
+
+// FixesLast reports whether the fixes of a category's findings wait until
+// no other finding has a fix to apply (see fixesLast).
+func FixesLast(category string) bool {
+	return fixesLast[strings.TrimSuffix(category, definiteSuffix)]
 }
 
 // categoryURL returns the README anchor of a category, definite or not.

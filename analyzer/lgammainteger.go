@@ -44,7 +44,7 @@ func (fc *fnCtx) integerReads(exps []*lgExp) []intRead {
 		// Down through conversions and roundings to the value read.
 		e, readsInt := ast.Expr(call), false
 		for {
-			c, ok := unparen(e).(*ast.CallExpr)
+			c, ok := ast.Unparen(e).(*ast.CallExpr)
 			if !ok || !fc.intReadOp(c) {
 				break
 			}
@@ -54,7 +54,7 @@ func (fc *fnCtx) integerReads(exps []*lgExp) []intRead {
 			}
 			e = c.Args[0]
 		}
-		inner, ok := unparen(e).(*ast.CallExpr)
+		inner, ok := ast.Unparen(e).(*ast.CallExpr)
 		if ok && readsInt && (isLg[inner] || fc.c.isMathFunc(inner, "Gamma") && len(inner.Args) == 1) {
 			out = append(out, intRead{node: call, inner: inner})
 		}

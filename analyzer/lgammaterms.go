@@ -63,7 +63,7 @@ func (c *checker) lgammaWrapper(d *ast.FuncDecl) bool {
 	if !ok || len(as.Lhs) != 2 || len(as.Rhs) != 1 {
 		return false
 	}
-	call, ok := unparen(as.Rhs[0]).(*ast.CallExpr)
+	call, ok := ast.Unparen(as.Rhs[0]).(*ast.CallExpr)
 	if !ok || !c.isMathFunc(call, "Lgamma") || len(call.Args) != 1 || c.objOf(call.Args[0]) != param || param == nil {
 		return false
 	}
@@ -96,7 +96,7 @@ func (fc *fnCtx) lgammaLocal(id *ast.Ident) ast.Expr {
 			return arg == nil
 		}
 		if len(as.Lhs) == 2 && len(as.Rhs) == 1 && fc.c.objOf(as.Lhs[0]) == obj {
-			if call, ok := unparen(as.Rhs[0]).(*ast.CallExpr); ok && fc.c.isMathFunc(call, "Lgamma") && len(call.Args) == 1 {
+			if call, ok := ast.Unparen(as.Rhs[0]).(*ast.CallExpr); ok && fc.c.isMathFunc(call, "Lgamma") && len(call.Args) == 1 {
 				arg = call.Args[0]
 			}
 		}
@@ -111,7 +111,7 @@ func (fc *fnCtx) lgammaTerms(e ast.Expr, p float64, depth int, out *[]lgTerm) (r
 	if depth > maxDepth {
 		return true
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	switch x := e.(type) {
 	case *ast.BinaryExpr:
 		switch x.Op {
@@ -274,7 +274,7 @@ func (fc *fnCtx) spanOf(res *vm.Result, s vm.Sym, at ast.Node) (symSpan, bool) {
 func affineArg(res *vm.Result, e ast.Expr) (vm.Affine, bool) {
 	t := res.Values[e]
 	if t == nil {
-		t = res.Values[unparen(e)]
+		t = res.Values[ast.Unparen(e)]
 	}
 	if t == nil {
 		return vm.Affine{}, false
@@ -297,7 +297,7 @@ func (fc *fnCtx) floatEval(e ast.Expr, env map[types.Object]float64, depth int) 
 	if depth > maxDepth {
 		return 0, false
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, ok := fc.floatConst(e); ok {
 		return v, true
 	}

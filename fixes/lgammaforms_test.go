@@ -3,7 +3,6 @@ package fixes_test
 import (
 	"path/filepath"
 	"slices"
-	"strings"
 	"testing"
 
 	"golang.org/x/tools/go/analysis/analysistest"
@@ -61,5 +60,5 @@ var lgammaDiffCases = []diffCase{
 // realAnalyzerPkg reports whether a testdata package is the real
 // analyzer's (the repository's testdata) rather than the probe's.
 func realAnalyzerPkg(p string) bool {
-	return strings.HasPrefix(p, "fix") || slices.Contains(lgammaPackages, p)
+	return analyzerPackage(p) || slices.Contains(lgammaPackages, p)
 }

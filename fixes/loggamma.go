@@ -15,16 +15,18 @@ import (
 // n! (common practice; DLMF 5.12.1 for B). The helpers keep
 // the digits the sum of large logarithms loses, stay finite where an
 // exponential of one term alone overflows, and give integers exactly.
-var expFamilies = map[Shape]family{
-	ShapeExpChoose:      {"Choose", "MustChooseInt64", "MustChooseUint64"},
-	ShapeExpBeta:        {"Beta", "", ""},
-	ShapeExpGammaRatio:  {"GammaRatio", "", ""},
-	ShapeExpFactorial:   valueFamily,
-	ShapeExpBinomialPMF: {"BinomialPMF", "", ""},
+// logFormShape reports whether s is one of these shapes, which the fixer
+// checks against the log-gamma sum itself (checkLogForm).
+func logFormShape(s Shape) bool {
+	switch s {
+	case ShapeExpChoose, ShapeExpBeta, ShapeExpGammaRatio, ShapeExpFactorial, ShapeExpBinomialPMF:
+		return true
+	}
+	return false
 }
 
 func buildExpLgamma(b *builder) error {
-	name, err := b.pick(expFamilies[b.m.Shape], b.m.Result)
+	name, err := b.pick(shapes[b.m.Shape].helpers, b.m.Result)
 	if err != nil {
 		return err
 	}

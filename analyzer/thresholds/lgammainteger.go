@@ -54,7 +54,7 @@ func integerRight(t Num, got float64, want *big.Int) bool {
 	}
 	tr := math.Trunc(got)
 	bi, _ := new(big.Float).SetFloat64(tr).Int(nil)
-	return bi.Cmp(want) == 0 && bi.CmpAbs(t.MaxInt()) <= 0 && (t.Signed || bi.Sign() >= 0)
+	return bi.Cmp(want) == 0 && bi.CmpAbs(t.maxInt()) <= 0 && (t.Signed || bi.Sign() >= 0)
 }
 
 // Factorial64 returns n! exactly, for n ≥ 0 (1 for n < 0, the empty

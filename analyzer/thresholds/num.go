@@ -92,8 +92,6 @@ func fromKind(k types.BasicKind, sizes types.Sizes) (Num, bool) {
 // String returns the type's name.
 func (t Num) String() string { return t.Name }
 
-var maxCache sync.Map // Num -> *big.Int
-
 // MaxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
 // 2^Bits−1 for integer types, the largest finite value for floats. The
 // result is a fresh copy the caller may modify.
@@ -101,7 +99,11 @@ func (t Num) MaxInt() *big.Int {
 	return new(big.Int).Set(t.maxInt())
 }
 
-// maxInt is MaxInt without the copy, for use inside the package.
+var maxCache sync.Map // Num -> *big.Int
+
+// maxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
+// 2^Bits−1 for integer types, the largest finite value for floats. It is
+// shared: callers must not modify it.
 func (t Num) maxInt() *big.Int {
 	if v, ok := maxCache.Load(t); ok {
 		return v.(*big.Int)

@@ -6,6 +6,8 @@ import (
 	"go/token"
 	"go/types"
 	"math/big"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 // Options configures Evaluate.
@@ -36,6 +38,10 @@ type Result struct {
 	// the function's variables; inside a loop, in terms of the loop's
 	// trip index too.
 	Values map[ast.Expr]*Term
+	// Logs holds, for each expression evaluated whose value is the
+	// logarithm of a term (ln Γ from math.Lgamma, math.Log, their sums
+	// and multiples), that term.
+	Logs map[ast.Expr]*Term
 	// Exprs holds, for each variable met, an expression that reads it.
 	Exprs map[Sym]ast.Expr
 	// Capped reports that the evaluation stopped at Options.MaxNodes.
@@ -117,16 +123,17 @@ type evaluator struct {
 	nodes  int
 	opaque map[types.Object]bool // assigned by closures or through their address
 	fields map[types.Object]bool // struct variables whose fields are assigned
+	sets   map[types.Object]int  // assignments of each variable, 2 for one in a loop
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
 // *ast.FuncLit, and summarises its loops. It never panics on partially
 // typed code: what it cannot type is unknown.
 func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
-	res = &Result{Values: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
+	res = &Result{Values: make(map[ast.Expr]*Term), Logs: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
 	defer func() {
 		if r := recover(); r != nil {
-			res = &Result{Values: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
+			res = &Result{Values: map[ast.Expr]*Term{}, Logs: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
 		}
 	}()
 	if opts.MaxNodes <= 0 {
@@ -142,7 +149,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), sets: make(map[types.Object]int)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -170,7 +177,7 @@ func (e *evaluator) copyEnv(en env) env {
 // those a closure assigns or whose address is taken, and the struct
 // variables whose fields are assigned.
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
-	inLit := 0
+	inLit, inLoop := 0, 0
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -179,12 +186,23 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			ast.Inspect(n.Body, visit)
 			inLit--
 			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			inLoop++
+			ast.Inspect(n, func(m ast.Node) bool { return m == n || visit(m) })
+			inLoop--
+			return false
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
 				e.noteAssign(l, inLit > 0)
+				if obj := e.objOf(l); obj != nil {
+					e.sets[obj] += 1 + 2*min(inLoop+inLit, 1)
+				}
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
+			if obj := e.objOf(n.X); obj != nil {
+				e.sets[obj] += 2
+			}
 		case *ast.UnaryExpr:
 			if n.Op == token.AND {
 				e.noteAssign(n.X, true)
@@ -415,6 +433,15 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 	}
 	for i, l := range s.Lhs {
 		if obj := e.objOf(l); obj != nil {
+			if !e.opaque[obj] && e.sets[obj] == 1 && (!e.numeric(l) || vals[i] == nil && s.Tok == token.DEFINE) {
+				// A struct variable set once, outside loops: its
+				// fields hold one value each, read as variables. A
+				// number defined once from a value the model does not
+				// know (ki := int(math.Floor(k))) is a variable of its
+				// own, as a parameter is.
+				delete(en, obj)
+				continue
+			}
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
 				continue
@@ -455,18 +482,8 @@ func (e *evaluator) addAffine(v *value, d Affine) *value {
 }
 
 func (e *evaluator) isMath(call *ast.CallExpr, name string) bool {
-	var id *ast.Ident
-	switch f := ast.Unparen(call.Fun).(type) {
-	case *ast.SelectorExpr:
-		id = f.Sel
-	case *ast.Ident:
-		id = f
-	}
-	if id == nil {
-		return false
-	}
-	fn, ok := e.info.Uses[id].(*types.Func)
-	return ok && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
+	fn := typeutil.StaticCallee(e.info, call)
+	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
 
 // eval returns the value of x in en, recording it.
@@ -475,8 +492,12 @@ func (e *evaluator) eval(x ast.Expr, en env) *value {
 		return nil
 	}
 	v := e.evalRaw(x, en)
-	if v != nil && !v.log && v.t != nil {
-		e.res.Values[x] = v.t
+	if v != nil && v.t != nil {
+		if v.log {
+			e.res.Logs[x] = v.t
+		} else {
+			e.res.Values[x] = v.t
+		}
 	}
 	return v
 }
@@ -595,6 +616,8 @@ func (e *evaluator) binary(op token.Token, a, b *value) *value {
 			return &value{t: ExpOf(oa).Div(l.t), log: true}
 		case op == token.MUL:
 			return &value{t: logScale(l.t, oa), log: true}
+		case op == token.QUO && a.log && oa.IsConst() && oa.c().Sign() != 0:
+			return &value{t: l.t.PowRat(new(big.Rat).Inv(oa.c())), log: true}
 		}
 		return nil
 	}
@@ -629,7 +652,7 @@ func logScale(t *Term, k Affine) *Term {
 		p := t.Pows[0]
 		return PowOf(p.Base, k.Scale(p.Exp.c()))
 	}
-	return nil
+	return t.PowAffine(k)
 }
 
 // call evaluates conversions, the functions of package math the
@@ -662,6 +685,8 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		if a, ok := affineOf(args[0]); ok {
 			return &value{t: ExpOf(a)}
 		}
+	case e.isMath(x, "Sqrt") && one && !args[0].log:
+		return &value{t: args[0].t.PowRat(big.NewRat(1, 2))}
 	case e.isMath(x, "Log") && one:
 		if !args[0].log {
 			return &value{t: args[0].t, log: true}

@@ -1,0 +1,134 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+)
+
+// The syntactic prefilter: one cheap walk that tells which functions may
+// hold anything to report, before any range analysis runs.
+
+// scan is what the syntactic prefilter found in a function body.
+type scan struct {
+	product   bool // a *= or x = x*y: a product loop may be here
+	loop      bool // a for or range statement
+	callMul   bool // a multiplication with a call operand: recursion may be here
+	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
+	localCall bool // a call of a function of this package, which may become factorial-valued
+	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
+}
+
+// scanAll is the syntactic prefilter. In one walk of the files it
+// records for each function (a closure counts on its own) whether it
+// multiplies and what it calls; it allocates only per function. Only
+// what it finds is analysed further, and the range analysis runs only
+// when a finding needs a range.
+//
+// It walks the syntax itself instead of asking for the shared
+// inspector: because the analyzer has facts, the driver runs it on
+// every dependency package, and an inspector built there stays alive
+// until the whole run ends (docs/patterns.md, "Cost", has the figures).
+func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
+	out := make(map[ast.Node]*scan)
+	var stack []ast.Node
+	var cur *scan
+	visit := func(n ast.Node) bool {
+		if n == nil {
+			return false
+		}
+		for len(stack) > 0 && n.Pos() >= stack[len(stack)-1].End() {
+			stack = stack[:len(stack)-1]
+			cur = nil
+			if len(stack) > 0 {
+				cur = out[stack[len(stack)-1]]
+			}
+		}
+		switch n := n.(type) {
+		case *ast.FuncDecl, *ast.FuncLit:
+			c.allFuncs = append(c.allFuncs, n)
+			cur = new(scan)
+			out[n] = cur
+			stack = append(stack, n)
+		case *ast.ForStmt, *ast.RangeStmt:
+			if cur != nil {
+				cur.loop = true
+			}
+		case *ast.AssignStmt:
+			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && isMulOrQuo(n.Rhs[0])) {
+				cur.product = true
+			}
+		case *ast.BinaryExpr:
+			if cur != nil && n.Op == token.MUL && !cur.callMul {
+				_, x := ast.Unparen(n.X).(*ast.CallExpr)
+				_, y := ast.Unparen(n.Y).(*ast.CallExpr)
+				cur.callMul = x || y
+			}
+		case *ast.CallExpr:
+			if cur == nil {
+				return true
+			}
+			if !cur.knownCall {
+				cur.knownCall = c.knownCallee(n)
+			}
+			if !cur.logCall {
+				cur.logCall = c.isMathFunc(n, "Lgamma") || c.isMathFunc(n, "Log")
+			}
+			if fn := c.calleeOf(n); fn != nil && fn.Pkg() == c.pass.Pkg {
+				cur.localCall = true
+			}
+		}
+		return true
+	}
+	for _, f := range files {
+		ast.Inspect(f, visit)
+	}
+	return out
+}
+
+// knownCallee reports whether call calls math.Gamma, math.Pow, math.Exp
+// or a function with a factorial fact.
+func (c *checker) knownCallee(call *ast.CallExpr) bool {
+	fn := c.calleeOf(call)
+	if fn == nil {
+		return false
+	}
+	if fn.Pkg() != nil && fn.Pkg().Path() == "math" {
+		switch fn.Name() {
+		case "Gamma", "Pow", "Exp":
+			return true
+		}
+		return false
+	}
+	return c.factOf(fn) != nil || c.valueFactOf(fn) != nil
+}
+
+// factOf returns the factorial fact of fn, from this package or an
+// imported one.
+func (c *checker) factOf(fn *types.Func) *FactorialFact {
+	if fn == nil {
+		return nil
+	}
+	if ff := c.funcs[fn]; ff != nil {
+		return &ff.fact
+	}
+	if fn.Pkg() == c.pass.Pkg {
+		return nil
+	}
+	f := new(FactorialFact)
+	if c.pass.ImportObjectFact(fn, f) {
+		return f
+	}
+	return nil
+}
+
+func isMulOrQuo(e ast.Expr) bool {
+	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
+	return ok && (b.Op == token.MUL || b.Op == token.QUO)
+}
+
+// worthLoops reports whether a function may hold a product loop.
+func (s *scan) worthLoops() bool { return s.loop && s.product }
+
+// worth reports whether a function may hold anything to report.
+func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall || s.logCall }
