@@ -19,7 +19,7 @@ var Analyzer = &analysis.Analyzer{
 	Doc:              doc,
 	URL:              "https://github.com/overfact/overfact",
 	Run:              run,
-	FactTypes:        []analysis.Fact{new(FactorialFact)},
+	FactTypes:        []analysis.Fact{new(FactorialFact), new(ValueFact)},
 	RunDespiteErrors: true,
 }
 
@@ -62,6 +62,12 @@ type checker struct {
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
+	// lgWrappers holds the functions of the package that return ln|Γ|
+	// of their argument (see isLgammaCall), found on first use.
+	lgWrappers map[*types.Func]bool
+	// calls holds the functions' values as values of their parameters
+	// (modelcalls.go).
+	calls *callState
 }
 
 type reportKey struct {
@@ -122,13 +128,14 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
+	c.findValueFacts(decls, scans)
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.
 	for _, n := range funcs {
 		s := scans[n]
 		// A call of this package's functions may now be a call of a
 		// factorial function found in phase 1.
-		s.knownCall = s.knownCall || s.localCall && len(c.funcs) > 0
+		s.knownCall = s.knownCall || s.localCall && (len(c.funcs) > 0 || c.calls.found())
 		if funcBody(n) != nil && s.worth() {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}

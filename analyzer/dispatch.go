@@ -32,6 +32,18 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.worthLoops() || s.knownCall {
 		fc.checkModel()
 	}
+	if s.knownCall {
+		fc.checkModelCalls()
+	}
+	if s.logCall {
+		fc.checkLgammaSign()
+	}
+	if s.logCall || s.knownCall {
+		fc.checkStirling()
+	}
+	if s.knownCall {
+		fc.checkLogGamma()
+	}
 }
 
 // noteLoop reports a product loop, or records a power loop for the

@@ -4,12 +4,14 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"go/types"
 	"math"
 	"math/big"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // modelMaxNodes caps the syntax nodes the value model evaluates in one
@@ -29,7 +31,10 @@ func (fc *fnCtx) evalModel() *vm.Result {
 // fact, in the algebra.
 func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	fact := fc.c.factOf(fc.c.calleeOf(call))
-	if fact == nil || fact.Param >= len(args) {
+	if fact == nil {
+		return fc.valueCallee(call, args)
+	}
+	if fact.Param >= len(args) {
 		return nil
 	}
 	n, ok := args[fact.Param].Affine()
@@ -163,19 +168,7 @@ func (mc *modelCtx) countRanges(f vm.Form, constK bool) (nv vm.Sym, n, k ranges.
 
 // firstAt returns the smallest integer v with α·v + β ≥ f, for α > 0.
 func firstAt(alpha, beta *big.Rat, f int64) (int64, bool) {
-	if alpha.Sign() <= 0 {
-		return 0, false
-	}
-	x := new(big.Rat).Sub(big.NewRat(f, 1), beta)
-	x.Quo(x, alpha)
-	q := new(big.Int).Quo(x.Num(), x.Denom())
-	if x.Sign() > 0 && !x.IsInt() {
-		q.Add(q, big.NewInt(1))
-	}
-	if !q.IsInt64() {
-		return 0, false
-	}
-	return q.Int64(), true
+	return firstAtRat(alpha, beta, big.NewRat(f, 1))
 }
 
 // symRange returns the range of a variable of the model at node at.
@@ -197,11 +190,52 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 			in = res.Exprs[s]
 		}
 		if in != nil {
-			return fc.rangeOf(in)
+			return fc.rangeOf(in).Meet(fc.lenLocalRange(s, at))
 		}
 		return ranges.Top()
 	}
 	return fc.entryRange(s.Obj, at)
+}
+
+// lenLocalRange is the range at at of the locals the function defines
+// once as len(x), for the model's variable len(x): a bound the code or
+// a directive puts on n := len(batch) bounds len(batch) too. Top for
+// any other variable.
+func (fc *fnCtx) lenLocalRange(s vm.Sym, at ast.Node) ranges.Interval {
+	r := ranges.Top()
+	if _, ok := s.Obj.(*types.Builtin); !ok || s.Field == nil {
+		return r
+	}
+	info := fc.c.pass.TypesInfo
+	writes := make(map[types.Object]int)
+	assigned.Each(info, fc.node, nil, func(v types.Object, _ ast.Node) bool {
+		writes[v]++
+		return true
+	})
+	ast.Inspect(fc.node, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || as.Tok != token.DEFINE || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+			return true
+		}
+		call, ok := ast.Unparen(as.Rhs[0]).(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || fc.c.objOf(call.Args[0]) != s.Field {
+			return true
+		}
+		if b, ok := info.Uses[calleeIdent(call)].(*types.Builtin); !ok || b.Name() != "len" {
+			return true
+		}
+		if v := fc.c.objOf(as.Lhs[0]); v != nil && writes[v] == 1 {
+			r = r.Meet(fc.entryRange(v, at))
+		}
+		return true
+	})
+	return r
+}
+
+// calleeIdent is the identifier a call names as its function, or nil.
+func calleeIdent(call *ast.CallExpr) *ast.Ident {
+	id, _ := ast.Unparen(call.Fun).(*ast.Ident)
+	return id
 }
 
 // counterArg rewrites a form in the trip index t as a form in the

@@ -29,11 +29,14 @@ func HypergeometricPMF(k, total, successes, draws int) float64 { panic("") }
 func PowOverFactorial(x float64, k int) float64             { panic("") }
 func PoissonPMF(k int, lambda float64) float64              { panic("") }
 func BinomialPMF(k, n int, p float64) float64               { panic("") }
+func NegativeBinomialPMF(f, s int, p float64) float64       { panic("") }
 func GammaRatio(a, b float64) float64                       { panic("") }
 func Factorial(n int) float64                               { panic("") }
 func MustFactorialInt64(n int64) int64                      { panic("") }
 func MustFactorialUint64(n uint64) uint64                   { panic("") }
 func Beta(a, b float64) float64                             { panic("") }
+func LogFactorial(n int) float64                            { panic("") }
+func LogGamma(x float64) float64                            { panic("") }
 `
 
 // fmtAPI stands in for package fmt when a range guard adds the import to a

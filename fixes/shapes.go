@@ -60,6 +60,15 @@ func init() {
 		ShapeFactorialValue:   {"converted factorial", buildValue, factorialHelpers, 1, factorialValueFactors},
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},
+		ShapeNegBinomialPMF:   {"negative binomial probability", buildTerm, family{float: "NegativeBinomialPMF"}, 3, negBinomialPMFFactors},
+		ShapeLgammaSign:       {"exponential of signed log-gamma values", buildLgammaSign, family{}, 0, nil},
+		ShapeStirling:         {"Stirling approximation", buildStirling, family{}, 0, nil},
+		ShapeLogStirling:      {"log Stirling approximation", buildStirling, family{}, 0, nil},
+		ShapeExpChoose:        {"exponential of a log-gamma binomial", buildExpLgamma, chooseHelpers, 0, nil},
+		ShapeExpBeta:          {"exponential of a log-gamma beta function", buildExpLgamma, family{float: "Beta"}, 0, nil},
+		ShapeExpGammaRatio:    {"exponential of a log-gamma ratio", buildExpLgamma, family{float: "GammaRatio"}, 0, nil},
+		ShapeExpFactorial:     {"factorial read back from an exponential", buildExpLgamma, factorialHelpers, 0, nil},
+		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
 	}
 }
@@ -107,6 +116,14 @@ func binomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, alt *
 	pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", linearOne().add(p.neg()), n.add(k.neg()))
 	return []factorPattern{b.userCall(n, k), pk, qnk}, nil,
 		&[2][]factorPattern{{b.userCall(n), pk, qnk}, {b.userCall(k), b.userCall(n.add(k.neg()))}}
+}
+
+func negBinomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // f, s, p: C(f+s−1, f) or C(f+s−1, s−1), p^s, (1−p)^f
+	f, s, p := o[0], o[1], o[2]
+	n := f.add(s).add(linearOne().neg())
+	ps, qf := b.mathCall("Pow", p, s), b.mathCall("Pow", linearOne().add(p.neg()), f)
+	return []factorPattern{b.userCall(n, f), ps, qf}, nil,
+		&[2][]factorPattern{{b.userCall(n, s.add(linearOne().neg())), ps, qf}, nil}
 }
 
 func gammaRatioFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b

@@ -16,6 +16,10 @@ type Options struct {
 	// function with a factorial fact, from the values of its arguments
 	// (nil where unknown); nil when the call is not known.
 	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// LogGamma reports whether a call of one argument returns ln|Γ| of
+	// it, as a function that returns the first result of math.Lgamma
+	// does; nil when no such function is known.
+	LogGamma func(call *ast.CallExpr) bool
 	// MaxNodes caps the syntax nodes evaluated in one function
 	// (DefaultMaxNodes when 0); past it Result.Capped is set and the
 	// rest of the function is unknown.
@@ -34,6 +38,10 @@ type Result struct {
 	// the function's variables; inside a loop, in terms of the loop's
 	// trip index too.
 	Values map[ast.Expr]*Term
+	// Logs holds, for each expression evaluated whose value is the
+	// logarithm of a term (ln Γ from math.Lgamma, math.Log, their sums
+	// and multiples), that term.
+	Logs map[ast.Expr]*Term
 	// Exprs holds, for each variable met, an expression that reads it.
 	Exprs map[Sym]ast.Expr
 	// Capped reports that the evaluation stopped at Options.MaxNodes.
@@ -125,16 +133,17 @@ type evaluator struct {
 	loops int
 	// writes counts the assignments of each variable.
 	writes map[types.Object]int
+	sets   map[types.Object]int // assignments of each variable, 2 for one in a loop
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
 // *ast.FuncLit, and summarises its loops. It never panics on partially
 // typed code: what it cannot type is unknown.
 func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
-	res = &Result{Values: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
+	res = &Result{Values: make(map[ast.Expr]*Term), Logs: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
 	defer func() {
 		if r := recover(); r != nil {
-			res = &Result{Values: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
+			res = &Result{Values: map[ast.Expr]*Term{}, Logs: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
 		}
 	}()
 	if opts.MaxNodes <= 0 {
@@ -150,7 +159,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool), sets: make(map[types.Object]int)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -191,9 +200,7 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			return false
 		case *ast.ForStmt, *ast.RangeStmt:
 			inLoop++
-			for _, c := range childNodes(n) {
-				ast.Inspect(c, visit)
-			}
+			ast.Inspect(n, func(m ast.Node) bool { return m == n || visit(m) })
 			inLoop--
 			return false
 		case *ast.AssignStmt:
@@ -207,11 +214,15 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 						}
 					}
 				}
+				if obj := e.objOf(l); obj != nil {
+					e.sets[obj] += 1 + 2*min(inLoop+inLit, 1)
+				}
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
 			if obj := e.objOf(n.X); obj != nil {
 				writes[obj]++
+				e.sets[obj] += 2
 			}
 		case *ast.UnaryExpr:
 			if n.Op == token.AND {
@@ -226,29 +237,6 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			delete(e.once, obj)
 		}
 	}
-}
-
-// childNodes returns the direct parts of a loop statement.
-func childNodes(n ast.Node) []ast.Node {
-	var out []ast.Node
-	add := func(x ast.Node) {
-		if x != nil {
-			out = append(out, x)
-		}
-	}
-	switch n := n.(type) {
-	case *ast.ForStmt:
-		add(n.Init)
-		add(n.Cond)
-		add(n.Post)
-		add(n.Body)
-	case *ast.RangeStmt:
-		add(n.Key)
-		add(n.Value)
-		add(n.X)
-		add(n.Body)
-	}
-	return out
 }
 
 func (e *evaluator) noteAssign(l ast.Expr, opaque bool) {
@@ -471,6 +459,15 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 	}
 	for i, l := range s.Lhs {
 		if obj := e.objOf(l); obj != nil {
+			if !e.opaque[obj] && e.sets[obj] == 1 && (!e.numeric(l) || vals[i] == nil && s.Tok == token.DEFINE) {
+				// A struct variable set once, outside loops: its
+				// fields hold one value each, read as variables. A
+				// number defined once from a value the model does not
+				// know (ki := int(math.Floor(k))) is a variable of its
+				// own, as a parameter is.
+				delete(en, obj)
+				continue
+			}
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
 				if e.once[obj] && e.loops == 0 {
@@ -537,8 +534,12 @@ func (e *evaluator) eval(x ast.Expr, en env) *value {
 		return nil
 	}
 	v := e.evalRaw(x, en)
-	if v != nil && !v.log && v.t != nil {
-		e.res.Values[x] = v.t
+	if v != nil && v.t != nil {
+		if v.log {
+			e.res.Logs[x] = v.t
+		} else {
+			e.res.Values[x] = v.t
+		}
 	}
 	return v
 }
@@ -657,6 +658,8 @@ func (e *evaluator) binary(op token.Token, a, b *value) *value {
 			return &value{t: ExpOf(oa).Div(l.t), log: true}
 		case op == token.MUL:
 			return &value{t: logScale(l.t, oa), log: true}
+		case op == token.QUO && a.log && oa.IsConst() && oa.c().Sign() != 0:
+			return &value{t: l.t.PowRat(new(big.Rat).Inv(oa.c())), log: true}
 		}
 		return nil
 	}
@@ -691,7 +694,7 @@ func logScale(t *Term, k Affine) *Term {
 		p := t.Pows[0]
 		return PowOf(p.Base, k.Scale(p.Exp.c()))
 	}
-	return nil
+	return t.PowAffine(k)
 }
 
 // call evaluates conversions, the functions of package math the
@@ -727,6 +730,8 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		if a, ok := affineOf(args[0]); ok {
 			return &value{t: ExpOf(a)}
 		}
+	case e.isMath(x, "Sqrt") && one && !args[0].log:
+		return &value{t: args[0].t.PowRat(big.NewRat(1, 2))}
 	case e.isMath(x, "Log") && one:
 		if !args[0].log {
 			return &value{t: args[0].t, log: true}
@@ -741,6 +746,10 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		if !args[0].log {
 			return &value{t: logScale(args[0].t, k)}
+		}
+	case e.opts.LogGamma != nil && one && e.opts.LogGamma(x):
+		if a, ok := affineOf(args[0]); ok {
+			return &value{t: GammaOf(a), log: true}
 		}
 	case e.opts.Callee != nil:
 		ts := make([]*Term, len(args))

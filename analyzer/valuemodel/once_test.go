@@ -28,7 +28,7 @@ func TestEvaluateDefinedOnce(t *testing.T) {
 		{"in a loop", `func f(n int, x float64) float64 {
 	v := 1.0
 	for i := 0; i < n; i++ {
-		r := math.Sqrt(x)
+		r := math.Sin(x)
 		v *= r
 	}
 	return v

@@ -23,7 +23,7 @@ func (l Lot) Chance(k float64) float64 {
 	a, _ := math.Lgamma(float64(l.Size + 1))
 	b, _ := math.Lgamma(float64(ki + 1))
 	c, _ := math.Lgamma(float64(l.Size - ki + 1))
-	return math.Exp(a-b-c) * math.Pow(l.Defect, float64(ki)) * math.Pow(1-l.Defect, float64(l.Size-ki)) // want `computes the binomial probability C\(l.Size, ki\)·l.Defect\^ki·\(1−l.Defect\)\^\(.*\) in float64 with C\(l.Size, ki\) formed on its own: it overflows to \+Inf for l.Size ≥ 1030`
+	return math.Exp(a-b-c) * math.Pow(l.Defect, float64(ki)) * math.Pow(1-l.Defect, float64(l.Size-ki)) // want `computes the binomial probability C\(l.Size, ki\)·l.Defect\^ki·\(1−l.Defect\)\^\(.*\) in float64 with C\(l.Size, ki\) formed on its own: it overflows to \+Inf for l.Size ≥ 1030` `math\.Exp of log-gamma values computes C\(l\.Size, ki\)·l\.Defect\^ki·\(1−l\.Defect\)\^\(-ki \+ l\.Size`
 }
 
 // Orderings is the number of ways the two suppliers' n1 and n2
@@ -32,7 +32,7 @@ func Orderings(n1, n2 int) float64 {
 	a, _ := math.Lgamma(float64(n1 + n2 + 1))
 	b, _ := math.Lgamma(float64(n1 + 1))
 	c, _ := math.Lgamma(float64(n2 + 1))
-	return math.Exp(a - b - c)
+	return math.Exp(a - b - c) // want `math\.Exp of log-gamma values computes C\(n1 \+ n2, n1\) from 3 log-gamma values whose roundin`
 }
 
 // RankShare is the share of orderings whose rank sum is at most u,
@@ -41,7 +41,7 @@ func RankShare(count float64, n1, n2 int) float64 {
 	a, _ := math.Lgamma(float64(n1 + n2 + 1))
 	b, _ := math.Lgamma(float64(n1 + 1))
 	c, _ := math.Lgamma(float64(n2 + 1))
-	all := math.Exp(a - b - c)
+	all := math.Exp(a - b - c) // want `math\.Exp of log-gamma values computes C\(n1 \+ n2, n1\) from 3 log-gamma values whose roundin`
 	return count / all // want `divides by C\(n1 \+ n2, n1\) formed on its own in float64: it overflows to \+Inf for n1 \+ n2 ≥ 1030 at n1 = \(n1 \+ n2\)/2 .*after which the quotient is 0, or NaN where count overflowed too`
 }
 
@@ -52,7 +52,7 @@ func Sample(n, d int) float64 {
 	a, _ := math.Lgamma(float64(n + 1))
 	b, _ := math.Lgamma(float64(d + 1))
 	c, _ := math.Lgamma(float64(n - d + 1))
-	return 1 / math.Exp(a-b-c)
+	return 1 / math.Exp(a-b-c) // want `math\.Exp of log-gamma values computes 1/C\(n, d\) from 3 log-gamma values whose rounding err`
 }
 
 // SmallShare serves lots of at most 500 parts: C(500, 250) fits.
@@ -63,7 +63,7 @@ func SmallShare(count float64, n, k int) float64 {
 	a, _ := math.Lgamma(float64(n + 1))
 	b, _ := math.Lgamma(float64(k + 1))
 	c, _ := math.Lgamma(float64(n - k + 1))
-	return count / math.Exp(a-b-c)
+	return count / math.Exp(a-b-c) // want `math\.Exp of log-gamma values computes a product of Γ values from 3 log-gamma values whose `
 }
 
 // LogChance stays in log space until the end.
@@ -71,5 +71,5 @@ func (l Lot) LogChance(k int) float64 {
 	a, _ := math.Lgamma(float64(l.Size + 1))
 	b, _ := math.Lgamma(float64(k + 1))
 	c, _ := math.Lgamma(float64(l.Size - k + 1))
-	return math.Exp(a - b - c + float64(k)*math.Log(l.Defect) + float64(l.Size-k)*math.Log1p(-l.Defect))
+	return math.Exp(a - b - c + float64(k)*math.Log(l.Defect) + float64(l.Size-k)*math.Log1p(-l.Defect)) // want `math\.Exp of log-gamma values computes a product of Γ values from 3 log-gamma values whose `
 }

@@ -6,7 +6,7 @@ package gammaoverflow
 import "math"
 
 // Scale multiplies by Γ(x) with nothing bounding x.
-func Scale(x, w float64) float64 {
+func Scale(x, w float64) float64 { // want Scale:`value Γ\(p0\)·\(p1\), wrong once p0 ≥ 171\.624377`
 	return w * math.Gamma(x) // want `math.Gamma`
 }
 
@@ -19,7 +19,7 @@ func Bounded(x, w float64) float64 {
 }
 
 // Count is Γ(n+1) = n! for an integer n with nothing bounding it.
-func Count(n int, w float64) float64 {
+func Count(n int, w float64) float64 { // want Count:`value \(p1\)/Γ\(p0 \+ 1\), wrong once p0 \+ 1 ≥ 171\.624377`
 	return w / math.Gamma(float64(n)+1) // want `math.Gamma`
 }
 
@@ -30,6 +30,6 @@ func Small(w float64) float64 {
 
 // Bare hands Γ(x) back untouched, where +Inf is the right answer for a
 // value past the range: silent.
-func Bare(x float64) float64 {
+func Bare(x float64) float64 { // want Bare:`value Γ\(p0\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(x)
 }

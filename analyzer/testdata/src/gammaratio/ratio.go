@@ -7,12 +7,12 @@ package gammaratio
 import "math"
 
 // Spread is Γ(a)/Γ(b) with nothing bounding a or b.
-func Spread(a, b float64) float64 {
+func Spread(a, b float64) float64 { // want Spread:`value Γ\(p0\)/Γ\(p1\), wrong once p0 ≥ 171\.624377 or p1 ≥ 171\.624377`
 	return math.Gamma(a) / math.Gamma(b) // want `ratio of math.Gamma`
 }
 
 // Mix is the Beta function Γ(a)Γ(b)/Γ(a+b).
-func Mix(a, b float64) float64 {
+func Mix(a, b float64) float64 { // want Mix:`value Γ\(p0\)·Γ\(p1\)/Γ\(p0 \+ p1\), wrong once p0 ≥ 171\.624377 or p1 ≥ 171\.624377 or p0 \+ p1 ≥ 171\.624377`
 	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want `Beta function`
 }
 
