@@ -10,7 +10,9 @@ import (
 // The factorial-call category: a call of a factorial-valued function
 // (of this package, or of another through its fact) whose argument is
 // certainly past the function's first bad value. A call whose argument
-// only may reach it is the definition's finding, not the call's.
+// only may reach it is the definition's finding, not the call's. A float
+// factorial returned as it is (return factF(200)) is +Inf, the IEEE value
+// of a number beyond the type, and is not reported.
 
 // checkFactorialCall reports a factorial call, not part of a product,
 // whose argument is certainly past its threshold.
@@ -22,7 +24,7 @@ func (fc *fnCtx) checkFactorialCall(call *ast.CallExpr) {
 	}
 	first := firstBadOf(f.kind, f.t) - f.off
 	j := fc.judge(f.arg, first)
-	if !j.definite {
+	if !j.definite || f.t.Float && fc.returnedAsIs(call) {
 		return
 	}
 	name, off := shownFactorial(f.arg, f.off)

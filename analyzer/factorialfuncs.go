@@ -27,6 +27,8 @@ type facFunc struct {
 	wrap    ast.Expr        // a wrapper's argument to the factorial it returns
 	wrapOff int64           // the largest factor is wrap+wrapOff
 	inner   *FactorialFact  // the wrapped factorial function's fact
+	prod    ast.Node        // the loop or recursion that forms the product, or nil
+	asIs    bool            // a float product that is returned as it is
 	result  numType
 	fact    FactorialFact
 }
@@ -52,6 +54,13 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 		return
 	}
 	ff.obj, ff.decl, ff.result = obj, decl, res
+	switch {
+	case ff.loop != nil:
+		ff.prod = ff.loop.shape.stmt
+	case ff.rec != nil:
+		ff.prod = ff.rec
+	}
+	ff.asIs = res.Float && ff.prod != nil && own.productAsIs(ff)
 	ff.fact = FactorialFact{Kind: kindNames[ff.kind], Param: ff.param, Param2: ff.param2, Offset: ff.offset}
 	ff.fact.FirstBad = firstBadOf(ff.kind, res) - ff.offset
 	key := own.keyRange(ff)
@@ -274,19 +283,83 @@ func (c *checker) ownCtx(fn ast.Node) *fnCtx {
 	return own
 }
 
+// returnedAsIs reports whether e, in the function of fc, is the returned
+// value itself, through parentheses, sign changes and conversions, and
+// is returned as a float.
+func (fc *fnCtx) returnedAsIs(e ast.Expr) bool {
+	return funcBody(fc.node) != nil && fc.returnedIn(e, fc.parentMap())
+}
+
+// returnedIn is returnedAsIs with the parents of e's function.
+func (fc *fnCtx) returnedIn(e ast.Expr, parents map[ast.Node]ast.Node) bool {
+	e, _ = fc.gammaUse(e, parents)
+	_, ret := parents[e].(*ast.ReturnStmt)
+	return ret && fc.floatValued(e)
+}
+
+// floatValued reports whether e has a float type: a conversion of +Inf
+// to an integer type (int64(f)) is no IEEE value but a wrong one.
+func (fc *fnCtx) floatValued(e ast.Expr) bool {
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+	return ok && t.Float
+}
+
 // decidedAtCalls reports whether n is the product loop or the recursion
-// of this function's factorial, and every call of the function in the
-// package is either safe or certainly past its first bad value: the
-// calls past it are the findings (fact(25)), one each, and a finding at
-// the definition would only repeat them with a range the calls gave it.
+// of this function's factorial and the finding, if any, belongs to the
+// callers. That is so when every call of the function in the package is
+// either safe or certainly past its first bad value: the calls past it
+// are the findings (fact(25)), one each, and a finding at the
+// definition would only repeat them with a range the calls gave it. It
+// is also so when the product is a float returned as it is (asIs): +Inf
+// is then the IEEE value of an n! beyond the type, not a wrong one, a
+// range guard would make a correct function panic, and the fact carries
+// the factorial to the callers' ratios, which are judged there.
 func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
 	d, ok := fc.node.(*ast.FuncDecl)
 	if !ok {
 		return false
 	}
 	ff := fc.c.funcs[fc.c.declObj(d)]
-	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+	if ff == nil || ff.prod != n {
 		return false
 	}
-	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
+	// A loop the value model found (no loop or rec) is judged at its
+	// definition whatever its calls are, as before.
+	return ff.asIs || fc.c.sitesDecided[ff.obj] && (ff.loop != nil || ff.rec != nil)
+}
+
+// productAsIs reports whether the product of ff reaches no arithmetic
+// in its function: the recursion n*f(n-1) is the returned value itself
+// (through parentheses and float conversions), and the loop's local
+// accumulator is, outside its updates in the loop, only returned,
+// compared or passed on, as gammaEscapes asks of a math.Gamma value, and
+// never converted to an integer type.
+func (fc *fnCtx) productAsIs(ff *facFunc) bool {
+	root := ff.decl.Body
+	parents := parentsIn(root)
+	if ff.rec != nil {
+		return fc.returnedIn(ff.rec, parents)
+	}
+	var v types.Object
+	if ff.loop != nil {
+		v = ff.loop.acc
+	} else if ret, ok := root.List[len(root.List)-1].(*ast.ReturnStmt); ok && len(ret.Results) == 1 {
+		v = fc.c.objOf(ret.Results[0]) // modelFactorialFunc's shape
+	}
+	if lv, ok := v.(*types.Var); !ok || lv.Parent() == nil || lv.Parent() == lv.Pkg().Scope() {
+		return false // a package variable is read where this function cannot see
+	}
+	asIs := true
+	ast.Inspect(root, func(n ast.Node) bool {
+		inLoop := n != nil && ff.prod.Pos() <= n.Pos() && n.End() <= ff.prod.End()
+		if a, ok := n.(*ast.AssignStmt); ok && inLoop && len(a.Lhs) == 1 && fc.c.objOf(a.Lhs[0]) == v {
+			return false // the loop's update of the product: v *= i, v = v * i
+		}
+		if id, ok := n.(*ast.Ident); ok && asIs && fc.c.pass.TypesInfo.Uses[id] == v {
+			e, _ := fc.gammaUse(id, parents)
+			asIs = fc.floatValued(e) && !fc.meetsArith(root, id, parents, map[*types.Var]bool{})
+		}
+		return asIs
+	})
+	return asIs
 }

@@ -609,7 +609,7 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 		return nil
 	}
 	off := beta.Num().Int64()
-	return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: read, wrapOff: off}
+	return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: read, wrapOff: off, prod: res.Loops[len(res.Loops)-1].Stmt}
 }
 
 // modelRatio reports a returned quotient of loop accumulators that

@@ -8,7 +8,7 @@ import "math"
 
 func fact(n float64) float64 { // want fact:"factorial of parameter 0, breaks from 171"
 	v := 1.0
-	for i := 2.0; i <= n; i++ { // want "factorial of n in float64"
+	for i := 2.0; i <= n; i++ {
 		v *= i
 	}
 	return v

@@ -13,7 +13,7 @@ func fact(n int) int { // want fact:"factorial of parameter 0"
 
 func factF(n int) float64 { // want factF:"factorial of parameter 0"
 	r := 1.0
-	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+	for i := 2; i <= n; i++ {
 		r *= float64(i)
 	}
 	return r

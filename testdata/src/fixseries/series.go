@@ -9,7 +9,7 @@ import "math"
 // factorial returns n! in float64.
 func factorial(n int) float64 { // want factorial:"factorial of parameter 0"
 	f := 1.0
-	for i := 2; i <= n; i++ { // want "factorial of n in float64"
+	for i := 2; i <= n; i++ {
 		f *= float64(i)
 	}
 	return f

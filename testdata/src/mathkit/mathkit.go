@@ -18,10 +18,12 @@ func Factorial(n int) int64 { // want Factorial:`factorial of parameter 0, break
 	return f
 }
 
-// FactorialFloat returns n! in float64, counting down.
+// FactorialFloat returns n! in float64, counting down. Returned as it
+// is, +Inf past 170! is the IEEE value of a result beyond float64: not
+// reported; its callers' arithmetic is judged through the fact.
 func FactorialFloat(n int) float64 { // want FactorialFloat:`factorial of parameter 0, breaks from 171`
 	f := 1.0
-	for i := n; i > 1; i-- { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171 \(170! ≈ 7.26e306 is the largest that fits\); n is not bounded here`
+	for i := n; i > 1; i-- {
 		f *= float64(i)
 	}
 	return f

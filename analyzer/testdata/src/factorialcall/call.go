@@ -34,3 +34,24 @@ func Past(n int64) int64 { // want Past:`factorial of parameter 0, breaks from 2
 func Table() [3]int64 {
 	return [3]int64{fact(25), fact(30), fact(5)} // want `fact\(25\)` `fact\(30\)`
 }
+
+// factF is n! in float64, returned as it is (+Inf from n = 171).
+func factF(n int) float64 { // want factF:`factorial of parameter 0, breaks from 171`
+	r := 1.0
+	for i := 2; i <= n; i++ {
+		r *= float64(i)
+	}
+	return r
+}
+
+// BigDeck returns 200! in float64 as it is: +Inf, the IEEE value of a
+// number beyond float64, not a wrong one. Silent.
+func BigDeck() float64 {
+	return factF(200)
+}
+
+// BigTable keeps 200! in a table whose later use this function does not
+// see: still reported, as before.
+func BigTable() []float64 {
+	return []float64{factF(200), factF(5)} // want `factF\(200\): factorial of 200 in float64 overflows to \+Inf`
+}

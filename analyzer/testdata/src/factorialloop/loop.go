@@ -63,3 +63,68 @@ func Reset(n int64, stop func(int64) bool) int64 {
 	}
 	return r
 }
+
+// FloatLoop returns its float64 product as it is: past 170 it is +Inf,
+// the IEEE value of a result beyond float64, not a wrong one, and a
+// guard would make the function panic there. Silent; the fact stays
+// for the callers' arithmetic.
+func FloatLoop(n float64) float64 { // want FloatLoop:`factorial of parameter 0, breaks from 171`
+	v := 1.0
+	for i := 2.0; i <= n; i++ {
+		v *= i
+	}
+	return v
+}
+
+// FloatIntCounter multiplies by float64(i) and returns the product:
+// silent, as FloatLoop.
+func FloatIntCounter(n int) float64 { // want FloatIntCounter:`factorial of parameter 0, breaks from 171`
+	r := 1.0
+	for i := 2; i <= n; i++ {
+		r *= float64(i)
+	}
+	return r
+}
+
+// Real is a named float type.
+type Real float64
+
+// NamedFloat returns a product of a named float type as it is: silent.
+func NamedFloat(n int) Real { // want NamedFloat:`factorial of parameter 0, breaks from 171`
+	r := Real(1)
+	for i := 2; i <= n; i++ {
+		r *= Real(i)
+	}
+	return r
+}
+
+// FloatRatio divides by its float product in the same function: the
+// product is +Inf from 171 while x^n/n! is finite, so the loop is
+// reported.
+func FloatRatio(x float64, n int) float64 {
+	f := 1.0
+	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
+		f *= float64(i)
+	}
+	p := 1.0
+	for i := 0; i < n; i++ {
+		p *= x
+	}
+	return p / f
+}
+
+// FloatBinom divides two results of the silent FloatLoop: the caller's
+// ratio is reported, n! is +Inf from 171 although C(n, k) fits.
+func FloatBinom(n, k float64) float64 { // want FloatBinom:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171`
+	return FloatLoop(n) / (FloatLoop(k) * FloatLoop(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
+}
+
+// FloatToCount converts its float product to an integer: past 170 the
+// +Inf becomes a wrong count, so the loop is reported.
+func FloatToCount(n int) (float64, int64) { // want FloatToCount:`factorial of parameter 0, breaks from 171`
+	r := 1.0
+	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
+		r *= float64(i)
+	}
+	return r, int64(r)
+}

@@ -37,3 +37,39 @@ func Sum(n int64) int64 {
 	}
 	return n + Sum(n-1)
 }
+
+// FloatRec returns n·(n−1)! in float64 as it is: +Inf past 170 is the
+// IEEE value of a result beyond float64, not a wrong one. Silent; the
+// fact stays for the callers' arithmetic.
+func FloatRec(n int) float64 { // want FloatRec:`factorial of parameter 0, breaks from 171`
+	if n < 2 {
+		return 1
+	}
+	return float64(n) * FloatRec(n-1)
+}
+
+// Real32 is a named float type.
+type Real32 float32
+
+// NamedRec returns its named float32 product as it is: silent.
+func NamedRec(n int) Real32 { // want NamedRec:`factorial of parameter 0, breaks from 35`
+	if n < 2 {
+		return 1
+	}
+	return Real32(n) * NamedRec(n-1)
+}
+
+// FloatRecHalf uses the product in the function's own arithmetic: the
+// halved value is wrong (+Inf) where n!/2 fits, so it is reported.
+func FloatRecHalf(n int) float64 { // want FloatRecHalf:`factorial of parameter 0, breaks from 171`
+	if n < 2 {
+		return 1
+	}
+	return float64(n) * FloatRecHalf(n-1) / 2 // want `recursive factorial of n in float64 overflows to \+Inf for n ≥ 171`
+}
+
+// FloatChoose divides results of the silent FloatRec: reported at the
+// ratio.
+func FloatChoose(n, k int) float64 { // want FloatChoose:`binomial of parameter 0, breaks from 171`
+	return FloatRec(n) / (FloatRec(k) * FloatRec(n-k)) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
+}
