@@ -51,6 +51,7 @@ func runAnalysis(args []string) int {
 	opts.Rules = rules()
 	opts.Version = moduleVersion()
 	opts.Helper = helperModule()
+	opts.FactScan = analyzer.MayCarryFacts
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}
