@@ -259,6 +259,7 @@ func (l *loader) load(p *packages.Package) {
 	case p.PkgPath == "unsafe":
 		p.Syntax, p.TypesInfo = []*ast.File{}, newInfo()
 	case l.source[p] && (len(p.CompiledGoFiles) > 0 || p.ExportFile == ""):
+		p.Errors = slices.DeleteFunc(p.Errors, buildFailure)
 		l.fromSource(p)
 	case l.source[p] || l.need[p]:
 		if len(p.CompiledGoFiles) == 0 && l.source[p] {
@@ -269,6 +270,14 @@ func (l *loader) load(p *packages.Package) {
 			p.Errors = append(p.Errors, packages.Error{Pos: "-", Msg: err.Error(), Kind: packages.UnknownError})
 		}
 	}
+}
+
+// buildFailure reports whether err is the go command's report that it
+// could not build a package's export data ("# path" and the compiler's
+// output): the type-check from source reports the same errors in the form
+// every other load gives them.
+func buildFailure(err packages.Error) bool {
+	return err.Kind == packages.ListError && strings.HasPrefix(err.Msg, "# ")
 }
 
 // fromExport reads p's types from its export data, as go/packages does.

@@ -1,6 +1,7 @@
 package driver_test
 
 import (
+	"os"
 	"path/filepath"
 	"slices"
 	"strings"
@@ -69,6 +70,32 @@ func TestLoadForFactsSameOutcome(t *testing.T) {
 		if !slices.ContainsFunc(loaded, func(s string) bool { return strings.HasPrefix(s, want) }) {
 			t.Errorf("no line starting %q in the outcome:\n%s", want, strings.Join(loaded, "\n"))
 		}
+	}
+	// A package that does not compile reports its errors once, as the
+	// load from source does, not also as go list's failed build.
+	broken := filepath.Join(t.TempDir(), "broken")
+	if err := os.MkdirAll(broken, 0o755); err != nil {
+		t.Fatal(err)
+	}
+	for name, text := range map[string]string{"go.mod": "module example.com/broken\n\ngo 1.22\n", "b.go": "package b\n\nfunc F() int { return y }\n"} {
+		if err := os.WriteFile(filepath.Join(broken, name), []byte(text), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	var errs [2][]string
+	for i, scan := range []driver.FactScan{nil, analyzer.MayCarryFacts} {
+		pkgs, err := driver.LoadForFacts(&packages.Config{Dir: broken}, []string{"."}, scan)
+		if err != nil {
+			t.Fatal(err)
+		}
+		packages.Visit(pkgs, nil, func(p *packages.Package) {
+			for _, e := range p.Errors {
+				errs[i] = append(errs[i], e.Error())
+			}
+		})
+	}
+	if len(errs[0]) == 0 || !slices.Equal(errs[0], errs[1]) {
+		t.Errorf("errors of a package that does not compile:\nevery dependency from source: %q\nas the command loads: %q", errs[0], errs[1])
 	}
 	for id, fromSource := range map[string]bool{
 		"example.com/loadfacts/plain":  false,
