@@ -6,6 +6,7 @@ import (
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // facKind is the kind of product a loop, a recursion or a function
@@ -127,13 +128,13 @@ func (fc *fnCtx) updateOf(st ast.Stmt, sh *loopShape) *accLoop {
 	case token.QUO_ASSIGN:
 		al.div = as.Rhs[0]
 	case token.ASSIGN:
-		rhs, ok := unparen(as.Rhs[0]).(*ast.BinaryExpr)
+		rhs, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 		if !ok {
 			return nil
 		}
 		if rhs.Op == token.QUO {
 			al.div = rhs.Y
-			if rhs, ok = unparen(rhs.X).(*ast.BinaryExpr); !ok {
+			if rhs, ok = ast.Unparen(rhs.X).(*ast.BinaryExpr); !ok {
 				return nil
 			}
 		}
@@ -158,33 +159,11 @@ func (fc *fnCtx) updateOf(st ast.Stmt, sh *loopShape) *accLoop {
 // other than by its update, which would make it something else than a
 // product.
 func (fc *fnCtx) assignsElsewhere(body *ast.BlockStmt, al *accLoop) bool {
-	other := false
-	ast.Inspect(body, func(n ast.Node) bool {
-		if other {
-			return false
-		}
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			if n == al.update || (al.div != nil && fc.isDivOf(n, al)) {
-				return false
-			}
-			for _, l := range n.Lhs {
-				if fc.c.objOf(l) == al.acc {
-					other = true
-				}
-			}
-		case *ast.IncDecStmt:
-			if fc.c.objOf(n.X) == al.acc {
-				other = true
-			}
-		case *ast.UnaryExpr:
-			if n.Op == token.AND && fc.c.objOf(n.X) == al.acc {
-				other = true
-			}
-		}
-		return true
-	})
-	return other
+	own := func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		return ok && (as == al.update || al.div != nil && fc.isDivOf(as, al))
+	}
+	return assigned.In(fc.c.pass.TypesInfo, body, al.acc, own)
 }
 
 func (fc *fnCtx) isDivOf(as *ast.AssignStmt, al *accLoop) bool {
@@ -495,19 +474,8 @@ func (fc *fnCtx) closureAssigns(v types.Object) bool {
 			if !ok {
 				return true
 			}
-			ast.Inspect(lit.Body, func(m ast.Node) bool {
-				switch m := m.(type) {
-				case *ast.AssignStmt:
-					for _, l := range m.Lhs {
-						if obj := fc.c.objOf(l); obj != nil {
-							fc.closureAssigned[obj] = true
-						}
-					}
-				case *ast.IncDecStmt:
-					if obj := fc.c.objOf(m.X); obj != nil {
-						fc.closureAssigned[obj] = true
-					}
-				}
+			assigned.Each(fc.c.pass.TypesInfo, lit.Body, nil, func(obj types.Object, _ ast.Node) bool {
+				fc.closureAssigned[obj] = true
 				return true
 			})
 			return false

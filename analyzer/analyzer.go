@@ -19,7 +19,7 @@ var Analyzer = &analysis.Analyzer{
 	Doc:              doc,
 	URL:              "https://github.com/overfact/overfact",
 	Run:              run,
-	FactTypes:        []analysis.Fact{new(FactorialFact)},
+	FactTypes:        []analysis.Fact{new(FactorialFact), new(ValueFact)},
 	RunDespiteErrors: true,
 }
 
@@ -57,13 +57,14 @@ type checker struct {
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
 	tablesDone bool
-	// gammaLines holds the lines with a Gamma finding: one is enough
-	// for an expression with several Gamma calls.
-	gammaLines map[token.Position]bool
+	gamma      gammaPass // the Gamma categories' lines with a finding
 	// rewritten holds the nodes that a reported fix replaces, and held
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
+	// calls holds the functions' values as values of their parameters
+	// (modelcalls.go).
+	calls *callState
 }
 
 type reportKey struct {
@@ -84,14 +85,13 @@ type fileInfo struct {
 
 func run(pass *analysis.Pass) (any, error) {
 	c := &checker{
-		pass:       pass,
-		fixer:      fixes.NewFixer(pass),
-		files:      make(map[*token.File]*fileInfo),
-		funcs:      make(map[*types.Func]*facFunc),
-		fnInfo:     make(map[ast.Node]*fnCtx),
-		reported:   make(map[reportKey]bool),
-		consumed:   make(map[*ast.CallExpr]bool),
-		gammaLines: make(map[token.Position]bool),
+		pass:     pass,
+		fixer:    fixes.NewFixer(pass),
+		files:    make(map[*token.File]*fileInfo),
+		funcs:    make(map[*types.Func]*facFunc),
+		fnInfo:   make(map[ast.Node]*fnCtx),
+		reported: make(map[reportKey]bool),
+		consumed: make(map[*ast.CallExpr]bool),
 	}
 	for _, f := range pass.Files {
 		tf := pass.Fset.File(f.Pos())
@@ -125,13 +125,14 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
+	c.findValueFacts(decls, scans)
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.
 	for _, n := range funcs {
 		s := scans[n]
 		// A call of this package's functions may now be a call of a
 		// factorial function found in phase 1.
-		s.knownCall = s.knownCall || s.localCall && len(c.funcs) > 0
+		s.knownCall = s.knownCall || s.localCall && (len(c.funcs) > 0 || c.calls.found())
 		if funcBody(n) != nil && s.worth() {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}

@@ -56,6 +56,29 @@ func TestScenarios(t *testing.T) {
 	t.Run("factorial-numbers", func(t *testing.T) { checkFactorialNumbers(t, diags) })
 	t.Run("binomial-numbers", func(t *testing.T) { checkBinomialNumbers(t, diags) })
 	t.Run("gamma-numbers", func(t *testing.T) { checkGammaNumbers(t, diags) })
+	t.Run("chain-without-fix", func(t *testing.T) { checkChainWithoutFix(t, results) })
+}
+
+// checkChainWithoutFix: a ratio built over several statements (bottling's
+// r := n!; r /= k!; r /= (n-k)!) is reported at its last link with no
+// fix, since no single expression holds its value.
+func checkChainWithoutFix(t *testing.T, results []*analysistest.Result) {
+	found := false
+	for _, r := range results {
+		for _, d := range r.Diagnostics {
+			p := r.Pass.Fset.Position(d.Pos)
+			if filepath.Base(p.Filename) != "plan.go" || p.Line != 150 || r.Pass.Pkg.Name() != "bottling" {
+				continue
+			}
+			found = true
+			if len(d.SuggestedFixes) > 0 {
+				t.Errorf("%s: the chained ratio has a fix: %q", p, d.SuggestedFixes[0].Message)
+			}
+		}
+	}
+	if !found {
+		t.Error("no finding at bottling/plan.go:150")
+	}
 }
 
 // checkCategories: every category emitted is listed, with its URL.
@@ -218,9 +241,11 @@ func checkGammaNumbers(t *testing.T, diags []analysis.Diagnostic) {
 	t.Error("no Student-t message found")
 }
 
-// TestDocMatchesPackageComment keeps Analyzer.Doc, the const doc, the
-// same text as the package comment of doc.go, its single source.
-func TestDocMatchesPackageComment(t *testing.T) {
+// TestDocIsPackageComment checks that Analyzer.Doc is the package
+// comment of doc.go, its single source, from the heading on: the
+// synopsis line that go vet and the command's usage show first, and the
+// directive syntax users read in go doc.
+func TestDocIsPackageComment(t *testing.T) {
 	f, err := parser.ParseFile(token.NewFileSet(), "doc.go", nil, parser.ParseComments|parser.PackageClauseOnly)
 	if err != nil {
 		t.Fatal(err)
@@ -231,11 +256,11 @@ func TestDocMatchesPackageComment(t *testing.T) {
 	if i < 0 {
 		t.Fatalf("package comment lacks %q", header)
 	}
-	if got, want := strings.TrimSpace(text[i+len(header):]), strings.TrimSpace(doc); got != want {
-		t.Errorf("const doc differs from the package comment:\n--- comment ---\n%s\n--- doc ---\n%s", got, want)
+	if got, want := Analyzer.Doc, strings.TrimSpace(text[i+len(header):]); got != want {
+		t.Errorf("Analyzer.Doc differs from the package comment:\n--- comment ---\n%s\n--- Doc ---\n%s", want, got)
 	}
-	if Analyzer.Doc != doc || Analyzer.Name != "overfact" {
-		t.Error("Analyzer does not use doc")
+	if !strings.HasPrefix(Analyzer.Doc, "overfact: report factorial arithmetic") || !strings.Contains(Analyzer.Doc, "//overfact:assume n <= 20") {
+		t.Errorf("Analyzer.Doc lacks its synopsis or the directive syntax:\n%s", Analyzer.Doc)
 	}
 }
 
@@ -260,6 +285,28 @@ func checkRelated(t *testing.T, fset *token.FileSet, diags []analysis.Diagnostic
 		lines := strings.Split(string(src), "\n")
 		if p.Line < 1 || p.Line > len(lines) || !strings.HasPrefix(lines[p.Line-1], "func ") {
 			t.Errorf("%s: related position %s is not a function declaration", fset.Position(d.Pos), p)
+		}
+	}
+}
+
+// TestCategoryRules checks the category rules that report writers and
+// drivers take from the analyzer instead of spelling category names: the
+// definite form (suffix ".definite", as doc.go documents) is an error and
+// the bare form a warning, and only the findings at a factorial's
+// definition, whose fix is a range guard, have their fixes applied last.
+func TestCategoryRules(t *testing.T) {
+	for _, c := range Categories() {
+		definite := strings.HasSuffix(c.ID, ".definite")
+		want := SeverityWarning
+		if definite {
+			want = SeverityError
+		}
+		if isDefinite(c.ID) != definite || Severity(c.ID) != want {
+			t.Errorf("%s: isDefinite = %v, Severity = %q", c.ID, isDefinite(c.ID), Severity(c.ID))
+		}
+		base := strings.TrimSuffix(c.ID, ".definite")
+		if got, want := FixesLast(c.ID), base == "factorial-loop" || base == "factorial-recursion"; got != want {
+			t.Errorf("FixesLast(%s) = %v, want %v", c.ID, got, want)
 		}
 	}
 }

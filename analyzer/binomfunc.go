@@ -61,9 +61,9 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 			return true
 		}
 		fact = &FactorialFact{Kind: kindNames[kindBinomial], Param: nIdx, Param2: kIdx, FirstBad: firstBadOf(kindFactorial, u.t) - u.off}
-		if _, r, _, broken := fc.brokenFactor(p.num); !broken {
+		if _, _, _, broken := fc.brokenFactor(p.num); !broken {
 			fact.Safe = true
-			r = fc.rangeOf(u.arg)
+			r := fc.rangeOf(u.arg)
 			fact.Lo, fact.Hi = r.Lo, r.Hi
 		}
 		return false

@@ -61,6 +61,40 @@ func Categories() []CategoryInfo {
 	return out
 }
 
+// isDefinite reports whether a category is the definite form of a pattern:
+// its overflow is certain for every input the code allows.
+func isDefinite(category string) bool {
+	return strings.HasSuffix(category, definiteSuffix)
+}
+
+// Severities of findings, in the words SARIF uses for its levels.
+const (
+	SeverityError   = "error"   // a definite finding
+	SeverityWarning = "warning" // a possible one
+)
+
+// Severity returns how serious a finding of the category is: definite
+// findings are errors, the others warnings. Every report writer (SARIF,
+// the language server) takes its levels from here.
+func Severity(category string) string {
+	if isDefinite(category) {
+		return SeverityError
+	}
+	return SeverityWarning
+}
+
+// fixesLast holds the patterns found at a factorial's definition. Their
+// fix is a range guard, which makes every caller's ratio or term silent
+// without rewriting it; a fixing driver applies them only in a round
+// where no other fix is left, so that the rewrites come first.
+var fixesLast = map[string]bool{catLoop: true, catRecursion: true}
+
+// FixesLast reports whether the fixes of a category's findings wait until
+// no other finding has a fix to apply (see fixesLast).
+func FixesLast(category string) bool {
+	return fixesLast[strings.TrimSuffix(category, definiteSuffix)]
+}
+
 // categoryURL returns the README anchor of a category, definite or not.
 func categoryURL(cat string) string {
 	return baseURL + strings.TrimSuffix(cat, definiteSuffix)

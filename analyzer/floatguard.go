@@ -80,7 +80,7 @@ func (fc *fnCtx) lastWrite(v *types.Var) (token.Pos, bool) {
 	ok := true
 	info := fc.c.pass.TypesInfo
 	is := func(e ast.Expr) bool {
-		id, isID := unparen(e).(*ast.Ident)
+		id, isID := ast.Unparen(e).(*ast.Ident)
 		return isID && info.ObjectOf(id) == v
 	}
 	ast.Inspect(fc.node, func(n ast.Node) bool {
@@ -105,7 +105,7 @@ func (fc *fnCtx) lastWrite(v *types.Var) (token.Pos, bool) {
 			}
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				write = write || is(l) && info.Defs[unparen(l).(*ast.Ident)] == nil
+				write = write || is(l) && info.Defs[ast.Unparen(l).(*ast.Ident)] == nil
 			}
 		case *ast.IncDecStmt:
 			write = is(n.X)
@@ -128,7 +128,7 @@ type floatRange struct{ lo, hi float64 }
 // its negation) implies: v against a constant, joined by && (or by ||
 // under a negation).
 func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRange {
-	switch c := unparen(cond).(type) {
+	switch c := ast.Unparen(cond).(type) {
 	case *ast.UnaryExpr:
 		if c.Op == token.NOT {
 			return fc.comparisons(c.X, !holds, v)
@@ -141,10 +141,10 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 			return nil
 		}
 		op, x, k := c.Op, c.X, c.Y
-		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
+		if fc.c.objOf(fc.stripConv(ast.Unparen(x))) != v {
 			op, x, k = ranges.Flip(op), c.Y, c.X
 		}
-		if fc.c.objOf(fc.stripConv(unparen(x))) != v {
+		if fc.c.objOf(fc.stripConv(ast.Unparen(x))) != v {
 			return nil
 		}
 		bound, ok := fc.floatConst(k)
@@ -176,11 +176,11 @@ func (fc *fnCtx) exits(b *ast.BlockStmt) bool {
 	case *ast.ReturnStmt:
 		return true
 	case *ast.ExprStmt:
-		call, ok := unparen(s.X).(*ast.CallExpr)
+		call, ok := ast.Unparen(s.X).(*ast.CallExpr)
 		if !ok {
 			return false
 		}
-		id, ok := unparen(call.Fun).(*ast.Ident)
+		id, ok := ast.Unparen(call.Fun).(*ast.Ident)
 		if !ok {
 			return false
 		}

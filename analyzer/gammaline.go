@@ -73,11 +73,36 @@ func (fc *fnCtx) gammaReportable(call *ast.CallExpr) bool {
 	return fc.gammaEscapes(call)
 }
 
+// gammaPass is what the two Gamma categories keep for a pass: the lines
+// with a Gamma finding, as one is enough for an expression with several
+// Gamma calls.
+type gammaPass struct {
+	lines map[token.Position]bool
+}
+
+// reported reports whether line has a Gamma finding.
+func (g *gammaPass) reported(line token.Position) bool { return g.lines[line] }
+
+// note records a Gamma finding on line.
+func (g *gammaPass) note(line token.Position) {
+	if g.lines == nil {
+		g.lines = make(map[token.Position]bool)
+	}
+	g.lines[line] = true
+}
+
+// gammaFunc is what they gather once per function: its math.Gamma calls
+// by line (gammaCallsOn) and the parents of its nodes (parentMap).
+type gammaFunc struct {
+	calls   map[token.Position][]*ast.CallExpr
+	parents map[ast.Node]ast.Node
+}
+
 // gammaCallsOn returns the math.Gamma calls of one argument on line,
 // in this function's own body (closures are functions of their own).
 func (fc *fnCtx) gammaCallsOn(line token.Position) []*ast.CallExpr {
-	if fc.gammaCalls == nil {
-		fc.gammaCalls = make(map[token.Position][]*ast.CallExpr)
+	if fc.gamma.calls == nil {
+		fc.gamma.calls = make(map[token.Position][]*ast.CallExpr)
 		ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 			switch n := n.(type) {
 			case *ast.FuncLit:
@@ -85,13 +110,13 @@ func (fc *fnCtx) gammaCallsOn(line token.Position) []*ast.CallExpr {
 			case *ast.CallExpr:
 				if fc.c.isMathFunc(n, "Gamma") && len(n.Args) == 1 {
 					l := fc.c.lineOf(n)
-					fc.gammaCalls[l] = append(fc.gammaCalls[l], n)
+					fc.gamma.calls[l] = append(fc.gamma.calls[l], n)
 				}
 			}
 			return true
 		})
 	}
-	return fc.gammaCalls[line]
+	return fc.gamma.calls[line]
 }
 
 // scaledTerm reads e as c + k·t, where t is one term written the same
@@ -101,7 +126,7 @@ func (fc *fnCtx) scaledTerm(e ast.Expr, depth int) (c, k float64, t string, ok b
 	if depth > maxDepth {
 		return 0, 0, "", false
 	}
-	e = unparen(e)
+	e = ast.Unparen(e)
 	if v, isConst := fc.floatConst(e); isConst {
 		return v, 0, "", true
 	}

@@ -59,7 +59,7 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 	}
 	sh := &loopShape{stmt: s, body: s.Body, iv: iv, step: step}
 	sh.first, sh.firstOff = fc.end(init.Rhs[0])
-	cond, ok := unparen(s.Cond).(*ast.BinaryExpr)
+	cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
 	if !ok {
 		return nil
 	}
@@ -89,7 +89,7 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 
 // whileShape handles `for n > b { ...; n-- }`.
 func (fc *fnCtx) whileShape(s *ast.ForStmt) *loopShape {
-	cond, ok := unparen(s.Cond).(*ast.BinaryExpr)
+	cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
 	if !ok {
 		return nil
 	}
@@ -149,8 +149,8 @@ func (fc *fnCtx) end(e ast.Expr) (ast.Expr, int64) {
 			return nil, math.MinInt64
 		}
 	}
-	if b, ok := unparen(e).(*ast.BinaryExpr); ok && (b.Op == token.ADD || b.Op == token.SUB) {
-		if v, ok := fc.intConst(unparen(b.Y)); ok {
+	if b, ok := ast.Unparen(e).(*ast.BinaryExpr); ok && (b.Op == token.ADD || b.Op == token.SUB) {
+		if v, ok := fc.intConst(ast.Unparen(b.Y)); ok {
 			if b.Op == token.SUB {
 				v = -v
 			}
@@ -190,7 +190,7 @@ func (fc *fnCtx) stepOf(s ast.Stmt, v types.Object) int64 {
 		}
 		switch s.Tok {
 		case token.ADD_ASSIGN, token.SUB_ASSIGN:
-			d, ok := fc.intConst(unparen(s.Rhs[0]))
+			d, ok := fc.intConst(ast.Unparen(s.Rhs[0]))
 			if !ok {
 				return 0
 			}

@@ -7,10 +7,7 @@ import (
 	"go/token"
 	"go/types"
 	"math"
-	"strconv"
 	"strings"
-
-	"github.com/overfact/overfact/analyzer/ranges"
 )
 
 // Every number in a message comes from the thresholds package or from the
@@ -46,28 +43,11 @@ func plus(name string, off int64) string {
 	return name
 }
 
-// verdict says how the range of name relates to its first bad value and
-// whether the overflow is certain.
-func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
-	switch {
-	case name == "" || isConst(name):
-		return "", iv.Lo >= firstBad
-	case iv.Lo >= firstBad && iv.Lo != math.MinInt64:
-		return fmt.Sprintf("; %s is at least %d here", name, iv.Lo), true
-	case typeLimit(iv.Hi):
-		return fmt.Sprintf("; %s is not bounded here", name), false
-	}
-	return fmt.Sprintf("; %s may reach %d here", name, iv.Hi), false
-}
-
 // factorialLimitText describes where a factorial of name+off breaks in t:
 // "factorial of n in int64 wraps for n ≥ 21 (20! ≈ 2.43e18 is the
 // largest that fits)".
 func factorialLimitText(kind facKind, name string, off int64, t numType) string {
 	first := firstBadOf(kind, t)
-	if v, err := strconv.ParseInt(name, 0, 64); err == nil {
-		name, off = "", v+off
-	}
 	what := "factorial"
 	if kind == kindDouble {
 		what = "double factorial"
@@ -112,10 +92,4 @@ func typeLimit(v int64) bool {
 		return true
 	}
 	return false
-}
-
-// isConst reports whether a rendered expression is an integer literal.
-func isConst(name string) bool {
-	_, err := strconv.ParseInt(name, 0, 64)
-	return err == nil
 }

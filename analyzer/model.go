@@ -29,7 +29,10 @@ func (fc *fnCtx) evalModel() *vm.Result {
 // fact, in the algebra.
 func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	fact := fc.c.factOf(fc.c.calleeOf(call))
-	if fact == nil || fact.Param >= len(args) {
+	if fact == nil {
+		return fc.valueCallee(call, args)
+	}
+	if fact.Param >= len(args) {
 		return nil
 	}
 	n, ok := args[fact.Param].Affine()
@@ -161,19 +164,7 @@ func (mc *modelCtx) countRanges(f vm.Form, constK bool) (nv vm.Sym, n, k ranges.
 
 // firstAt returns the smallest integer v with α·v + β ≥ f, for α > 0.
 func firstAt(alpha, beta *big.Rat, f int64) (int64, bool) {
-	if alpha.Sign() <= 0 {
-		return 0, false
-	}
-	x := new(big.Rat).Sub(big.NewRat(f, 1), beta)
-	x.Quo(x, alpha)
-	q := new(big.Int).Quo(x.Num(), x.Denom())
-	if x.Sign() > 0 && !x.IsInt() {
-		q.Add(q, big.NewInt(1))
-	}
-	if !q.IsInt64() {
-		return 0, false
-	}
-	return q.Int64(), true
+	return firstAtRat(alpha, beta, big.NewRat(f, 1))
 }
 
 // symRange returns the range of a variable of the model at node at.
@@ -440,7 +431,7 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 	clause, _ := verdict(name, n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !fits(n.Lo, k.Lo)
 	msg := fmt.Sprintf("multiplicative binomial loop computes C(%s, %s) in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		name, kName, t.typeName(), a.Obj.Name(), src(unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
+		name, kName, t.typeName(), a.Obj.Name(), src(ast.Unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
 	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg, match: mc.binomialMatch(a, f)})
 	return true
 }
@@ -478,7 +469,7 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	}
 	// The coefficient must be one operand of its own: a product whose
 	// operands are the coefficient and the two powers.
-	b, ok := unparen(e).(*ast.BinaryExpr)
+	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
 	if !ok || b.Op != token.MUL {
 		return
 	}
@@ -532,7 +523,7 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 	if !ok || len(ret.Results) != 1 {
 		return nil
 	}
-	if _, ok := unparen(ret.Results[0]).(*ast.Ident); !ok {
+	if _, ok := ast.Unparen(ret.Results[0]).(*ast.Ident); !ok {
 		return nil
 	}
 	res := fc.evalModel()
@@ -582,7 +573,7 @@ func (fc *fnCtx) modelFactorialFunc(decl *ast.FuncDecl) *facFunc {
 // C(n, k) still fits. The loops it judges are marked, so that each is
 // not reported again on its own.
 func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool) {
-	b, ok := unparen(e).(*ast.BinaryExpr)
+	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
 	if !ok || b.Op != token.QUO {
 		return
 	}
@@ -734,7 +725,7 @@ func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFa
 	if !ok || len(ret.Results) != 1 {
 		return nil
 	}
-	id, ok := unparen(ret.Results[0]).(*ast.Ident)
+	id, ok := ast.Unparen(ret.Results[0]).(*ast.Ident)
 	if !ok {
 		return nil
 	}

@@ -46,7 +46,7 @@ func (fc *fnCtx) report(f finding) {
 		Message:  f.msg,
 		Related:  f.related,
 	}
-	if f.match != nil && !fc.noFix && !fi.cgo {
+	if f.match != nil && !fi.cgo {
 		f.match.File = fi.file
 		if c.holdGuard(d, f.match) {
 			return

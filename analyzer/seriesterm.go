@@ -30,7 +30,7 @@ func (fc *fnCtx) seriesTermMatch(al *accLoop) *fixes.Match {
 			return false
 		}
 		q, ok := n.(*ast.BinaryExpr)
-		if ok && q.Op == token.QUO && fc.c.objOf(unparen(q.Y)) == al.acc && q.Pos() > al.update.End() {
+		if ok && q.Op == token.QUO && fc.c.objOf(ast.Unparen(q.Y)) == al.acc && q.Pos() > al.update.End() {
 			term = q
 		}
 		if id, ok := n.(*ast.Ident); ok && info.Uses[id] == al.acc {
@@ -46,7 +46,7 @@ func (fc *fnCtx) seriesTermMatch(al *accLoop) *fixes.Match {
 	// the counter, a Poisson term, a running power); asking it to build
 	// a fix costs a type-check, so only those that can be one are passed.
 	if !fc.powOfCounter(term.X, al.shape.iv) {
-		if _, ok := unparen(term.X).(*ast.Ident); !ok {
+		if _, ok := ast.Unparen(term.X).(*ast.Ident); !ok {
 			return nil
 		}
 	}
@@ -64,7 +64,7 @@ func (fc *fnCtx) seriesTermMatch(al *accLoop) *fixes.Match {
 // powOfCounter reports whether e holds math.Pow(·, iv) among the
 // factors it multiplies.
 func (fc *fnCtx) powOfCounter(e ast.Expr, iv types.Object) bool {
-	switch e := unparen(e).(type) {
+	switch e := ast.Unparen(e).(type) {
 	case *ast.BinaryExpr:
 		return e.Op == token.MUL && (fc.powOfCounter(e.X, iv) || fc.powOfCounter(e.Y, iv))
 	case *ast.CallExpr:

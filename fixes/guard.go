@@ -9,7 +9,7 @@ import (
 	"math"
 	"strconv"
 
-	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // No rewrite makes 25! fit an int64, so a standalone factorial gets a
@@ -29,9 +29,8 @@ func buildGuard(b *builder) error {
 		return errors.New("factorial match lacks a function body or a named parameter")
 	}
 	if m.FirstBad <= 0 {
-		m.FirstBad = factorialFirstBad(b.pass.TypesSizes, m.Result)
-	}
-	if m.FirstBad <= 0 {
+		// The analyzer computes every threshold (analyzer/thresholds)
+		// and hands it over; the fixer types none and asks nobody.
 		return errors.New("factorial match has no first bad value")
 	}
 	if _, ok := m.Param.Type().(*types.TypeParam); ok {
@@ -77,66 +76,17 @@ func buildGuard(b *builder) error {
 	return nil
 }
 
-// factorialFirstBad asks the thresholds package for the first n whose n!
-// does not fit t, or returns 0.
-func factorialFirstBad(sizes types.Sizes, t types.Type) int64 {
-	if t == nil {
-		return 0
-	}
-	num, ok := thresholds.Lookup(t, sizes)
-	if !ok {
-		return 0
-	}
-	if l := thresholds.Factorial(num); !l.None() {
-		return l.FirstBad
-	}
-	return 0
-}
-
-// assigned reports whether obj is assigned, incremented or has its
-// address taken anywhere in n.
+// assigned reports whether obj is assigned, incremented, set by a range
+// clause or has its address taken anywhere in n.
 func (b *builder) assigned(obj types.Object, n ast.Node) bool {
-	found := false
-	b.eachAssigned(n, func(v types.Object) bool {
-		found = v == obj
-		return !found
-	})
-	return found
+	return assigned.In(b.pass.TypesInfo, n, obj, nil)
 }
 
-// eachAssigned calls f with each variable assigned, incremented or
-// having its address taken in n, until f returns false.
+// eachAssigned calls f with each variable assigned, incremented, set by
+// a range clause or having its address taken in n, until f returns
+// false.
 func (b *builder) eachAssigned(n ast.Node, f func(types.Object) bool) {
-	more := true
-	visit := func(e ast.Expr) {
-		if id, ok := ast.Unparen(e).(*ast.Ident); ok && more {
-			if obj := b.pass.TypesInfo.ObjectOf(id); obj != nil {
-				more = f(obj)
-			}
-		}
-	}
-	ast.Inspect(n, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				visit(l)
-			}
-		case *ast.IncDecStmt:
-			visit(n.X)
-		case *ast.UnaryExpr:
-			if n.Op == token.AND {
-				visit(n.X)
-			}
-		case *ast.RangeStmt:
-			if n.Key != nil {
-				visit(n.Key)
-			}
-			if n.Value != nil {
-				visit(n.Value)
-			}
-		}
-		return more
-	})
+	assigned.Each(b.pass.TypesInfo, n, nil, func(v types.Object, _ ast.Node) bool { return f(v) })
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {

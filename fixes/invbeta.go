@@ -23,7 +23,7 @@ func buildInverseBeta(b *builder) error {
 	if err := b.checkShape(); err != nil {
 		return err
 	}
-	text, err := b.call("Beta", b.m.Args, b.m.Result)
+	text, err := b.call(shapes[ShapeInverseBeta].helpers.float, b.m.Args, b.m.Result)
 	if err != nil {
 		return err
 	}

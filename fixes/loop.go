@@ -36,11 +36,9 @@ import (
 // C(n, k) = (−1)^k·C(k−n−1, k), which is what the helper's Choose family
 // returns; the falling-factorial helpers take no negative n and panic
 // where the loop multiplied negative factors (docs/fixes.md).
-var loopFamilies = map[Shape]family{
-	ShapeBinomialLoop: ratioFamilies[ShapeBinomial],
-	ShapeFallingLoop:  ratioFamilies[ShapePermutation],
-}
-
+//
+// The helpers are the row's in shapes.go, those of the ratio the loop
+// computes.
 func buildLoop(b *builder) error {
 	loop, acc, init := b.m.Loop, b.m.Acc, b.m.AccInit
 	if loop == nil {
@@ -61,7 +59,7 @@ func buildLoop(b *builder) error {
 	if rhs == nil || !isOne(b.pass.TypesInfo, rhs) {
 		return fmt.Errorf("%s does not start at 1", acc.Name())
 	}
-	name, err := b.pick(loopFamilies[b.m.Shape], acc.Type())
+	name, err := b.pick(shapes[b.m.Shape].helpers, acc.Type())
 	if err != nil {
 		return err
 	}

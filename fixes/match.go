@@ -38,6 +38,7 @@ const (
 	ShapeInverseBeta            // Γ(a+b)/(Γ(a)Γ(b)) = 1/B(a,b)       Args: a, b
 	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
 	ShapeModelBinomLoop         // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
+	ShapeNegBinomialPMF         // C(f+s-1,f) p^s (1-p)^f              Args: f, s, p
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

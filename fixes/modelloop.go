@@ -85,7 +85,7 @@ func buildModelLoop(b *builder) error {
 			return err
 		}
 	}
-	name, err := b.pick(loopFamilies[ShapeBinomialLoop], acc.Type())
+	name, err := b.pick(shapes[ShapeModelBinomLoop].helpers, acc.Type())
 	if err != nil {
 		return err
 	}
@@ -214,27 +214,7 @@ func (b *builder) plain(n ast.Node) bool {
 
 // assignedIn reports whether n assigns v, takes its address or steps it.
 func (b *builder) assignedIn(v types.Object, n ast.Node) bool {
-	found := false
-	is := func(e ast.Expr) bool {
-		id, ok := ast.Unparen(e).(*ast.Ident)
-		return ok && b.pass.TypesInfo.ObjectOf(id) == v
-	}
-	ast.Inspect(n, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				found = found || is(l)
-			}
-		case *ast.IncDecStmt:
-			found = found || is(n.X)
-		case *ast.UnaryExpr:
-			found = found || n.Op == token.AND && is(n.X)
-		case *ast.RangeStmt:
-			found = found || n.Key != nil && is(n.Key) || n.Value != nil && is(n.Value)
-		}
-		return !found
-	})
-	return found
+	return b.assigned(v, n)
 }
 
 // funcBody returns the body of the match's function.

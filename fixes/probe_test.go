@@ -26,8 +26,8 @@ import (
 // matched expression. Loop probes name the accumulator first, separated by
 // a semicolon: probe:binomialloop(b; n, k). A multinomial probe may give
 // n apart after a semicolon: probe:multinomial(a, b; n). A factorial probe
-// computes the first bad value itself (with math/big) unless it ends in
-// "; auto", which leaves it to the fixer: probe:factorial(n; auto).
+// computes the first bad value itself (with math/big), as the analyzer
+// hands it over from its thresholds.
 var probe = &analysis.Analyzer{
 	Name: "probe",
 	Doc:  "describe marked statements as fix matches",
@@ -88,11 +88,7 @@ func probeMatch(pass *analysis.Pass, f *ast.File, line int, shape, operands stri
 	head, tail, semi := strings.Cut(operands, ";")
 	switch m.Shape {
 	case fixes.ShapeFactorial:
-		m, err := factorialMatch(pass, m, line, head)
-		if strings.TrimSpace(tail) == "auto" {
-			m.FirstBad = 0 // leave the limit to the thresholds package
-		}
-		return m, err
+		return factorialMatch(pass, m, line, head)
 	case fixes.ShapeBinomialLoop, fixes.ShapeFallingLoop, fixes.ShapeModelBinomLoop:
 		if !semi {
 			return m, fmt.Errorf("loop probe needs the accumulator")

@@ -35,11 +35,11 @@ func (fx *Fixer) Build(m Match) (fixes []analysis.SuggestedFix, err error) {
 	if err != nil {
 		return nil, err
 	}
-	build, ok := builders[m.Shape]
+	row, ok := shapes[m.Shape]
 	if !ok {
 		return nil, fmt.Errorf("no rewrite for shape %d", m.Shape)
 	}
-	if err := build(b); err != nil {
+	if err := row.build(b); err != nil {
 		return nil, err
 	}
 	fix, err := b.finish()
@@ -47,33 +47,6 @@ func (fx *Fixer) Build(m Match) (fixes []analysis.SuggestedFix, err error) {
 		return nil, err
 	}
 	return []analysis.SuggestedFix{fix}, nil
-}
-
-// builders maps each shape to the function that writes its fix into a
-// builder. Shapes missing here (a bare math.Gamma) have no value-preserving
-// rewrite: no float64 holds Γ(172).
-var builders map[Shape]func(*builder) error
-
-func init() {
-	builders = map[Shape]func(*builder) error{
-		ShapeBinomial:         buildRatio,
-		ShapePermutation:      buildRatio,
-		ShapeMultinomial:      buildRatio,
-		ShapeCatalan:          buildRatio,
-		ShapeHypergeometric:   buildTerm,
-		ShapePowOverFactorial: buildTerm,
-		ShapePoisson:          buildTerm,
-		ShapeBinomialPMF:      buildTerm,
-		ShapeGammaRatio:       buildTerm,
-		ShapeBeta:             buildTerm,
-		ShapeInverseBeta:      buildInverseBeta,
-		ShapeBinomialLoop:     buildLoop,
-		ShapeFallingLoop:      buildLoop,
-		ShapeFactorial:        buildGuard,
-		ShapeFactorialValue:   buildValue,
-		ShapeSeriesTerm:       buildSeriesTerm,
-		ShapeModelBinomLoop:   buildModelLoop,
-	}
 }
 
 // A builder collects the edits of one fix to one file.

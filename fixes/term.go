@@ -6,21 +6,14 @@ import "fmt"
 // the helper that evaluates it in log space, where x^k/k!, λ^k e^(−λ)/k!,
 // C(n,k) p^k (1−p)^(n−k) and Γ(a)/Γ(b) stay finite long after their
 // factors overflow (common practice; DLMF 5.2.1 and 5.12.1 for Γ and B).
-// The match's operands are already in the helpers' parameter order.
-var termHelpers = map[Shape]string{
-	ShapePowOverFactorial: "PowOverFactorial", // x, k
-	ShapePoisson:          "PoissonPMF",       // k, lambda
-	ShapeBinomialPMF:      "BinomialPMF",      // k, n, p
-	ShapeHypergeometric:   "HypergeometricPMF",
-	ShapeGammaRatio:       "GammaRatio", // a, b
-	ShapeBeta:             "Beta",       // a, b
-}
-
+// The match's operands are already in the helpers' parameter order; the
+// helper is the row's float one in shapes.go.
 func buildTerm(b *builder) error {
+	helper := shapes[b.m.Shape].helpers.float
 	if classOf(b.m.Result) != classFloat {
 		// An integer x^k/k! truncates at each division; no helper
 		// reproduces that.
-		return fmt.Errorf("%s term with non-float result %s", termHelpers[b.m.Shape], b.m.Result)
+		return fmt.Errorf("%s term with non-float result %s", helper, b.m.Result)
 	}
-	return b.rewrite(termHelpers[b.m.Shape], b.m.Args)
+	return b.rewrite(helper, b.m.Args)
 }

@@ -10,11 +10,10 @@ package fixes
 // type itself would give), and the Must helpers for integers, which
 // panic where the true n! does not fit. Where the original was right
 // (below the wrap of the inner type) the value is the same: the exact n!
-// converted.
-var valueFamily = family{"Factorial", "MustFactorialInt64", "MustFactorialUint64"}
+// converted. The helpers are the row's in shapes.go.
 
 func buildValue(b *builder) error {
-	name, err := b.pick(valueFamily, b.m.Result)
+	name, err := b.pick(shapes[ShapeFactorialValue].helpers, b.m.Result)
 	if err != nil {
 		return err
 	}

@@ -270,20 +270,6 @@ func (f *Func) At(v types.Object, n ast.Node) Interval {
 	return f.get(state{facts: *snap, live: true}, v, n)
 }
 
-// Reachable reports whether n can execute.
-func (f *Func) Reachable(n ast.Node) bool {
-	if n == nil || f.body == nil {
-		return true
-	}
-	if e, ok := n.(ast.Expr); ok {
-		if _, ok := f.exprs[e]; ok {
-			return true
-		}
-	}
-	_, reached := f.locate(n)
-	return reached
-}
-
 // locate finds the state recorded innermost around n and whether n is
 // reached. It descends from the root along the nodes that contain n, so
 // it costs the depth of n times the fan-out, not the function size.

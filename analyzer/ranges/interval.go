@@ -107,24 +107,6 @@ func (r Interval) Mul(s Interval) Interval {
 	return r.corners(s, func(a, b int64) (int64, bool) { return mulB(a, b, true) })
 }
 
-// Div returns {x/y : x ∈ r, y ∈ s, y ≠ 0} with Go's truncating
-// division, saturating.
-//
-// Special cases are:
-//
-//	r.Div([0, 0]) = empty (division by zero panics)
-func (r Interval) Div(s Interval) Interval {
-	q, _ := divideOK(r, s, true)
-	return q
-}
-
-// Rem returns {x%y : x ∈ r, y ∈ s, y ≠ 0} with Go's truncated remainder.
-//
-// Special cases are:
-//
-//	r.Rem([0, 0]) = empty (division by zero panics)
-func (r Interval) Rem(s Interval) Interval { return remainder(r, s) }
-
 // Min returns {min(x, y) : x ∈ r, y ∈ s}.
 func (r Interval) Min(s Interval) Interval {
 	if r.IsEmpty() || s.IsEmpty() {

@@ -4,6 +4,9 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"strings"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 // walker carries the abstract state through one function body in
@@ -203,16 +206,7 @@ func (w *walker) noReturn(e ast.Expr) bool {
 	if !ok {
 		return false
 	}
-	var id *ast.Ident
-	switch fun := ast.Unparen(call.Fun).(type) {
-	case *ast.Ident:
-		id = fun
-	case *ast.SelectorExpr:
-		id = fun.Sel
-	default:
-		return false
-	}
-	switch obj := w.f.info.Uses[id].(type) {
+	switch obj := typeutil.Callee(w.f.info, call).(type) {
 	case *types.Builtin:
 		return obj.Name() == "panic"
 	case *types.Func:
@@ -226,7 +220,7 @@ func (w *walker) noReturn(e ast.Expr) bool {
 		case "runtime":
 			return name == "Goexit"
 		case "log":
-			return hasPrefix(name, "Fatal") || hasPrefix(name, "Panic")
+			return strings.HasPrefix(name, "Fatal") || strings.HasPrefix(name, "Panic")
 		case "testing":
 			switch name {
 			case "Fatal", "Fatalf", "FailNow", "Skip", "Skipf", "SkipNow":
@@ -236,5 +230,3 @@ func (w *walker) noReturn(e ast.Expr) bool {
 	}
 	return false
 }
-
-func hasPrefix(s, p string) bool { return len(s) >= len(p) && s[:len(p)] == p }

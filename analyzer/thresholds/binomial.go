@@ -127,18 +127,3 @@ func simulateLoop(n, k int64, max *big.Int) bool {
 	}
 	return true
 }
-
-// BinomialFits reports whether the true C(n, k) fits t. C(n, k) is 0,
-// and fits, when k < 0 or k > n.
-func BinomialFits(t Num, n, k int64) bool {
-	return memo(cacheKey{shape: "binfits", t: t, a: n, b: k}, func() bool {
-		max := t.maxInt()
-		switch {
-		case k < 0 || n < 0 || k > n:
-			return true
-		case tooWide(n, k, max):
-			return false
-		}
-		return new(big.Int).Binomial(n, k).CmpAbs(max) <= 0
-	})
-}

@@ -28,9 +28,6 @@ func (l Limit) None() bool { return l.FirstBad == math.MaxInt64 }
 // for a missing LastGood.
 func (l Limit) LastGoodApprox() string { return approx(l.LastGood) }
 
-// PeakApprox formats Peak like LastGoodApprox.
-func (l Limit) PeakApprox() string { return approx(l.Peak) }
-
 func approx(v *big.Int) string {
 	if v == nil {
 		return "none"

@@ -94,14 +94,9 @@ func (t Num) String() string { return t.Name }
 
 var maxCache sync.Map // Num -> *big.Int
 
-// MaxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
-// 2^Bits−1 for integer types, the largest finite value for floats. The
-// result is a fresh copy the caller may modify.
-func (t Num) MaxInt() *big.Int {
-	return new(big.Int).Set(t.maxInt())
-}
-
-// maxInt is MaxInt without the copy, for use inside the package.
+// maxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
+// 2^Bits−1 for integer types, the largest finite value for floats. It is
+// shared: callers must not modify it.
 func (t Num) maxInt() *big.Int {
 	if v, ok := maxCache.Load(t); ok {
 		return v.(*big.Int)

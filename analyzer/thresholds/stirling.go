@@ -33,33 +33,6 @@ func LogFactorialBounds(n int64) (lo, hi float64) {
 	return widen(base+1/(12*x+1), base+1/(12*x), (x+0.5)*lx+x+1)
 }
 
-// StirlingLogFactorial returns Stirling's series for ln n! (DLMF 5.11.1
-// with z = n+1, written for ln n!),
-//
-//	(n+½)ln n − n + ½ln(2π) + Σ_{k=1..terms} B_{2k} / (2k(2k−1) n^(2k−1)),
-//
-// truncated after terms correction terms; terms = 0 gives the leading
-// term √(2πn)(n/e)^n.
-//
-// Special cases are:
-//
-//	StirlingLogFactorial(n ≤ 0, terms) = NaN
-//	terms above 20 are treated as 20 (the series diverges)
-func StirlingLogFactorial(n float64, terms int) float64 {
-	if !(n > 0) {
-		return math.NaN()
-	}
-	s := halfLn2Pi + (n+0.5)*math.Log(n) - n
-	inv2 := 1 / (n * n)
-	p := 1 / n
-	for k := 1; k <= min(terms, maxStirlingTerms); k++ {
-		c, _ := StirlingCoefficient(k).Float64()
-		s += c * p
-		p *= inv2
-	}
-	return s
-}
-
 const maxStirlingTerms = 20
 
 var stirlingOnce = sync.OnceValue(func() []*big.Rat {

@@ -67,7 +67,7 @@ func (f Form) String() string {
 	case GammaRatio:
 		return "a ratio of Γ values"
 	}
-	return "?"
+	return moreString(f)
 }
 
 func paren(a Affine) string {
@@ -83,16 +83,7 @@ func Recognise(t *Term) Form {
 	if t == nil || t.Coef.Cmp(ratOne) != 0 || t.SqrtPi != 0 {
 		return Form{}
 	}
-	var up, down []Affine
-	for _, g := range t.Gamma {
-		for i := 0; i < abs(g.Pow); i++ {
-			if g.Pow > 0 {
-				up = append(up, g.Arg)
-			} else {
-				down = append(down, g.Arg)
-			}
-		}
-	}
+	up, down := gammaLists(t)
 	noExp := t.Exp.IsConst() && t.Exp.c().Sign() == 0
 	if len(t.Pows) == 0 && noExp {
 		return gammaForm(up, down)

@@ -6,6 +6,8 @@ import (
 	"go/token"
 	"go/types"
 	"math/big"
+
+	"golang.org/x/tools/go/types/typeutil"
 )
 
 // Options configures Evaluate.
@@ -113,6 +115,7 @@ type evaluator struct {
 	nodes  int
 	opaque map[types.Object]bool // assigned by closures or through their address
 	fields map[types.Object]bool // struct variables whose fields are assigned
+	sets   map[types.Object]int  // assignments of each variable, 2 for one in a loop
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -138,7 +141,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), sets: make(map[types.Object]int)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -166,7 +169,7 @@ func (e *evaluator) copyEnv(en env) env {
 // those a closure assigns or whose address is taken, and the struct
 // variables whose fields are assigned.
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
-	inLit := 0
+	inLit, inLoop := 0, 0
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -175,12 +178,23 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 			ast.Inspect(n.Body, visit)
 			inLit--
 			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+			inLoop++
+			ast.Inspect(n, func(m ast.Node) bool { return m == n || visit(m) })
+			inLoop--
+			return false
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
 				e.noteAssign(l, inLit > 0)
+				if obj := e.objOf(l); obj != nil {
+					e.sets[obj] += 1 + 2*min(inLoop+inLit, 1)
+				}
 			}
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
+			if obj := e.objOf(n.X); obj != nil {
+				e.sets[obj] += 2
+			}
 		case *ast.UnaryExpr:
 			if n.Op == token.AND {
 				e.noteAssign(n.X, true)
@@ -411,6 +425,15 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 	}
 	for i, l := range s.Lhs {
 		if obj := e.objOf(l); obj != nil {
+			if !e.opaque[obj] && e.sets[obj] == 1 && (!e.numeric(l) || vals[i] == nil && s.Tok == token.DEFINE) {
+				// A struct variable set once, outside loops: its
+				// fields hold one value each, read as variables. A
+				// number defined once from a value the model does not
+				// know (ki := int(math.Floor(k))) is a variable of its
+				// own, as a parameter is.
+				delete(en, obj)
+				continue
+			}
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
 				continue
@@ -451,18 +474,8 @@ func (e *evaluator) addAffine(v *value, d Affine) *value {
 }
 
 func (e *evaluator) isMath(call *ast.CallExpr, name string) bool {
-	var id *ast.Ident
-	switch f := ast.Unparen(call.Fun).(type) {
-	case *ast.SelectorExpr:
-		id = f.Sel
-	case *ast.Ident:
-		id = f
-	}
-	if id == nil {
-		return false
-	}
-	fn, ok := e.info.Uses[id].(*types.Func)
-	return ok && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
+	fn := typeutil.StaticCallee(e.info, call)
+	return fn != nil && fn.Name() == name && fn.Pkg() != nil && fn.Pkg().Path() == "math"
 }
 
 // eval returns the value of x in en, recording it.

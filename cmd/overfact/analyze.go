@@ -49,6 +49,7 @@ func runAnalysis(args []string) int {
 		return 2
 	}
 	opts.Rules = rules()
+	opts.FixLast = analyzer.FixesLast
 	opts.Version = moduleVersion()
 	opts.Helper = helperModule()
 	opts.FactScan = analyzer.MayCarryFacts
@@ -80,17 +81,12 @@ func addAnalyzerFlags(fs *flag.FlagSet) {
 	})
 }
 
-// rules turns the analyzer's categories into SARIF rules. A category
-// ending in ".definite" overflows for every input the code allows, an
-// error; the others overflow for inputs nothing rules out, a warning.
+// rules turns the analyzer's categories into SARIF rules, each at the
+// analyzer's severity (whose words are SARIF's levels).
 func rules() []sarif.Rule {
 	var out []sarif.Rule
 	for _, c := range analyzer.Categories() {
-		level := sarif.LevelWarning
-		if strings.HasSuffix(c.ID, ".definite") {
-			level = sarif.LevelError
-		}
-		out = append(out, sarif.Rule{ID: c.ID, Title: c.Title, Help: c.Help, Level: level})
+		out = append(out, sarif.Rule{ID: c.ID, Title: c.Title, Help: c.Help, Level: analyzer.Severity(c.ID)})
 	}
 	return out
 }

@@ -1,8 +1,8 @@
 // Package lgamma computes factorials, binomial and multinomial
 // coefficients, falling and rising factorials, power-over-factorial
-// terms, gamma ratios, the beta function and the Poisson, binomial and
-// hypergeometric probabilities without the overflow of the textbook
-// formulas.
+// terms, gamma ratios, the beta function and the Poisson, binomial,
+// negative binomial and hypergeometric probabilities without the
+// overflow of the textbook formulas.
 //
 // It is the library that code rewritten by overfact imports: where
 // overfact finds n! or a ratio of factorials that wraps int64 or

@@ -44,6 +44,12 @@ type Options struct {
 	Rules      []sarif.Rule
 	Version    string // tool version written into the SARIF log
 
+	// FixLast, when set, names the categories whose fixes wait for a
+	// round in which no other finding has a fix to apply (the analyzer's
+	// FixesLast: a definition's range guard would silence the findings
+	// whose rewrites should come first).
+	FixLast func(category string) bool
+
 	// Helper, when its Path is set, is the module that fixes import; -fix
 	// makes sure it resolves from the fixed module before writing.
 	Helper Helper

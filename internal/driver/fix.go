@@ -7,7 +7,6 @@ import (
 	"go/format"
 	"go/token"
 	"sort"
-	"strings"
 
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
@@ -53,14 +52,15 @@ func findingOf(fset *token.FileSet, d analysis.Diagnostic) finding {
 // with a taken one is left for the next round; identical edits, such as
 // the same import added by two fixes, coalesce.
 //
-// The fixes of factorial definitions (loops and recursions, whose fix is
-// a range guard) are taken only in a round that takes nothing else. A
+// The fixes of the categories last names (for overfact, factorial
+// definitions: loops and recursions, whose fix is a range guard) are
+// taken only in a round that takes nothing else. A
 // guard bounds its factorial, which silences the findings of the ratios
 // and terms built from it, even in other packages; a ratio whose rewrite
 // was not yet offered (an analyzer may offer only so many fixes per
 // analysis) would then keep the guard's panic where its rewrite gives
 // the right value.
-func planFixes(roots []*checker.Action, done map[finding]bool) *fixPlan {
+func planFixes(roots []*checker.Action, done map[finding]bool, last func(category string) bool) *fixPlan {
 	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool)}
 	type candidate struct {
 		fset      *token.FileSet
@@ -82,7 +82,7 @@ func planFixes(roots []*checker.Action, done map[finding]bool) *fixPlan {
 			if len(d.SuggestedFixes) == 0 || done[findingOf(fset, d)] {
 				continue
 			}
-			if isDefinition(d) {
+			if last != nil && last(d.Category) {
 				definitions = append(definitions, candidate{fset, d, generated})
 				continue
 			}
@@ -108,12 +108,6 @@ func (p *fixPlan) take(fset *token.FileSet, d analysis.Diagnostic, generated map
 	case clashed:
 		p.clashed++
 	}
-}
-
-// isDefinition reports whether d is a factorial definition's finding.
-func isDefinition(d analysis.Diagnostic) bool {
-	cat := strings.TrimSuffix(d.Category, ".definite")
-	return cat == "factorial-loop" || cat == "factorial-recursion"
 }
 
 func generatedFiles(fset *token.FileSet, files []*ast.File) map[string]bool {

@@ -94,12 +94,40 @@ func TestDefinitionsInARoundOfTheirOwn(t *testing.T) {
 			diag("factorial-recursion.definite", at+6),
 		},
 	}
-	plan := planFixes([]*checker.Action{act}, map[finding]bool{})
+	// The analyzer's rule (analyzer.FixesLast, tested beside it): a
+	// definition's findings wait; the driver knows no category names.
+	last := func(cat string) bool {
+		return strings.HasPrefix(cat, "factorial-loop") || strings.HasPrefix(cat, "factorial-recursion")
+	}
+	plan := planFixes([]*checker.Action{act}, map[finding]bool{}, last)
 	if len(plan.taken) != 1 || plan.taken[0].category != "factorial-ratio" || plan.deferred != 2 {
 		t.Fatalf("first round took %v and deferred %d; want the ratio alone, 2 deferred", plan.taken, plan.deferred)
 	}
-	plan = planFixes([]*checker.Action{act}, map[finding]bool{plan.taken[0]: true})
+	plan = planFixes([]*checker.Action{act}, map[finding]bool{plan.taken[0]: true}, last)
 	if len(plan.taken) != 2 || plan.deferred != 0 {
 		t.Errorf("second round took %v and deferred %d; want both definitions", plan.taken, plan.deferred)
+	}
+}
+
+// TestNoCategoryWaitsByDefault checks that the driver holds no fix back
+// on its own: without Options.FixLast every category is alike.
+func TestNoCategoryWaitsByDefault(t *testing.T) {
+	fset := token.NewFileSet()
+	src := "package p\n\nvar a, b = 1, 2\n"
+	f, err := parser.ParseFile(fset, "p.go", src, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	tf := fset.File(f.FileStart)
+	at := strings.Index(src, "a")
+	var diags []analysis.Diagnostic
+	for i, cat := range []string{"factorial-loop", "factorial-ratio"} {
+		pos := tf.Pos(at + 3*i)
+		diags = append(diags, analysis.Diagnostic{Pos: pos, Category: cat, Message: cat,
+			SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: pos, End: pos + 1, NewText: []byte("x")}}}}})
+	}
+	act := &checker.Action{Package: &packages.Package{ID: "p", Fset: fset, Syntax: []*ast.File{f}}, Diagnostics: diags}
+	if plan := planFixes([]*checker.Action{act}, map[finding]bool{}, nil); len(plan.taken) != 2 || plan.deferred != 0 {
+		t.Errorf("took %v and deferred %d; want both, none deferred", plan.taken, plan.deferred)
 	}
 }

@@ -35,7 +35,7 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 	done := make(map[finding]bool)       // findings whose fix was applied
 	broken := brokenRoots(graph.Roots)   // packages with errors before any fix
 	for round := 1; ; round++ {
-		plan := planFixes(graph.Roots, done)
+		plan := planFixes(graph.Roots, done, r.opts.FixLast)
 		if round == 1 {
 			for _, id := range plan.refused {
 				r.errorf("not fixing %s: the package has errors", id)

@@ -13,10 +13,9 @@ import (
 	"sort"
 	"strings"
 	"sync"
-)
 
-// HelperPath is the import path rewritten code uses for the helper module.
-const HelperPath = "github.com/overfact/overfact/fixes/lgamma"
+	"github.com/overfact/overfact/fixes"
+)
 
 // Checker parses and type-checks in-memory packages. All of them share one
 // file set and one importer, so the standard library and the helper module
@@ -42,11 +41,11 @@ func NewChecker(helperDir string) *Checker {
 // Import implements types.Importer: the standard library from source, and
 // the helper module type-checked from its directory.
 func (c *Checker) Import(path string) (*types.Package, error) {
-	if path == HelperPath {
+	if path == fixes.HelperPath {
 		return c.importHelper()
 	}
 	if !isStd(path) {
-		return nil, fmt.Errorf("fuzz packages may import only the standard library and %s, not %q", HelperPath, path)
+		return nil, fmt.Errorf("fuzz packages may import only the standard library and %s, not %q", fixes.HelperPath, path)
 	}
 	// The source importer caches packages but still reads the package
 	// directory through go/build on every call, which would dominate an
@@ -92,7 +91,7 @@ func (c *Checker) importHelper() (*types.Package, error) {
 		files = append(files, f)
 	}
 	conf := types.Config{Importer: c, GoVersion: "go1.21"}
-	c.helper, c.helperErr = conf.Check(HelperPath, c.Fset, files, nil)
+	c.helper, c.helperErr = conf.Check(fixes.HelperPath, c.Fset, files, nil)
 	return c.helper, c.helperErr
 }
 

@@ -11,6 +11,8 @@ import (
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/passes/inspect"
 	"golang.org/x/tools/go/ast/inspector"
+
+	"github.com/overfact/overfact/fixes"
 )
 
 var helperDir = filepath.Join("..", "..", "fixes", "lgamma")
@@ -100,7 +102,7 @@ func TestOverlap(t *testing.T) {
 
 func TestHelperImport(t *testing.T) {
 	c := NewChecker(helperDir)
-	src := map[string][]byte{"a.go": []byte("package a\n\nimport _ \"" + HelperPath + "\"\n")}
+	src := map[string][]byte{"a.go": []byte("package a\n\nimport _ \"" + fixes.HelperPath + "\"\n")}
 	if _, err := c.Check("a", src); err != nil {
 		t.Errorf("importing the helper module: %v", err)
 	}

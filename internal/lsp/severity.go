@@ -1,8 +1,6 @@
 package lsp
 
 import (
-	"strings"
-
 	"golang.org/x/tools/go/analysis"
 
 	"github.com/overfact/overfact/analyzer"
@@ -13,15 +11,10 @@ func defaultAnalyzers() []*analysis.Analyzer {
 	return []*analysis.Analyzer{analyzer.Analyzer}
 }
 
-// definiteMarker ends the category of a finding that overflows for every
-// input the code allows; analyzer.Categories lists each pattern both bare
-// and with this suffix.
-const definiteMarker = ".definite"
-
-// defaultSeverity makes certain overflows errors and possible ones
-// warnings.
+// defaultSeverity takes the analyzer's severity of the category: certain
+// overflows are errors and possible ones warnings.
 func defaultSeverity(category string) int {
-	if strings.HasSuffix(category, definiteMarker) {
+	if analyzer.Severity(category) == analyzer.SeverityError {
 		return SeverityError
 	}
 	return SeverityWarning

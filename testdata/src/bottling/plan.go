@@ -48,13 +48,13 @@ func SafeWays(n, k int) int64 { // want SafeWays:`binomial of parameter 0, safe 
 
 // Orderings counts the orders in which a sample of n bottles can be
 // inspected, n!/(n-k)! for the first k.
-func Orderings(n, k int) int64 {
+func Orderings(n, k int) int64 { // want Orderings:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 21`
 	return mathkit.Factorial(n) / mathkit.Factorial(n-k) // want `permutation count n!/\(n - k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
 }
 
 // CrateSplits counts the ways to split a crate into three sample
 // groups of sizes a, b and c.
-func CrateSplits(a, b, c int) int64 {
+func CrateSplits(a, b, c int) int64 { // want CrateSplits:`value Γ\(p0 \+ p1 \+ p2 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)·Γ\(p2 \+ 1\)\), wrong once p0 \+ p1 \+ p2 ≥ 21`
 	return mathkit.Factorial(a+b+c) / (mathkit.Factorial(a) * mathkit.Factorial(b) * mathkit.Factorial(c)) // want `multinomial coefficient as a ratio of factorials in int64: the numerator \(a \+ b \+ c\)! wraps for a \+ b \+ c ≥ 21`
 }
 
@@ -65,12 +65,12 @@ func ShiftFactorial() int64 {
 }
 
 // FloatWays converts too late: the int64 factorial has already wrapped.
-func FloatWays(n int) float64 {
+func FloatWays(n int) float64 { // want FloatWays:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
 	return float64(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float64 \(which holds it up to n = 170\)`
 }
 
 // TruncatedCount converts a float factorial back to an integer.
-func TruncatedCount(n int) int64 {
+func TruncatedCount(n int) int64 { // want TruncatedCount:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
 	return int64(mathkit.FactorialFloat(n)) // want `int64\(mathkit.FactorialFloat\(n\)\) of a float64 factorial: n! is no longer exact in float64 for n ≥ 23 and exceeds int64 for n ≥ 21`
 }
 
@@ -109,7 +109,7 @@ func LineOrders(n int) int64 {
 }
 
 // FloatWays32 converts the wrapped int64 factorial to float32.
-func FloatWays32(n int) float32 {
+func FloatWays32(n int) float32 { // want FloatWays32:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
 	return float32(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float32 \(which holds it up to n = 34\)`
 }
 

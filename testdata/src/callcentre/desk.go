@@ -24,7 +24,7 @@ func RotasDown(n float64) float64 { // want RotasDown:`factorial of parameter 0,
 }
 
 // Teams counts the ways to pick k of n agents for a callback team.
-func Teams(n, k float64) float64 {
+func Teams(n, k float64) float64 { // want Teams:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171`
 	return Rotas(n) / (Rotas(k) * Rotas(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
 }
 

@@ -120,12 +120,12 @@ func Hands(n, k int64) int64 { // want Hands:`binomial of parameter 0, breaks fr
 }
 
 // Catalan counts the balanced cut sequences of n pairs.
-func Catalan(n int64) int64 {
+func Catalan(n int64) int64 { // want Catalan:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0 \+ 2\)·Γ\(p0 \+ 1\)\), wrong once 2\*p0 ≥ 21`
 	return Orderings(2*n) / (Orderings(n+1) * Orderings(n)) // want `Catalan number as \(2n\)!/\(\(n\+1\)!n!\) in int64: the numerator \(2 \* n\)! wraps for n ≥ 11 although the Catalan number itself fits up to n = 35; n is not bounded here`
 }
 
 // TwoPiles counts the orders of two piles kept apart.
-func TwoPiles(a, b int64) int64 {
+func TwoPiles(a, b int64) int64 { // want TwoPiles:`value Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\), wrong once p0 ≥ 21`
 	return Orderings(a) * Orderings(b) // want `product of factorials in int64: the factor a! alone wraps for a ≥ 21`
 }
 

@@ -18,12 +18,12 @@ func choose(n, k int) float64 { // want choose:"binomial of parameter 0"
 }
 
 // Arrivals is the chance of exactly k calls in an hour averaging lambda.
-func Arrivals(k int, lambda float64) float64 {
+func Arrivals(k int, lambda float64) float64 { // want Arrivals:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / factF(k) // want "Poisson"
 }
 
 // Load is the Erlang-style term a^k/k! of an offered load a.
-func Load(a float64, k int) float64 {
+func Load(a float64, k int) float64 { // want Load:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(a, float64(k)) / factF(k) // want "power-over-factorial"
 }
 
@@ -34,12 +34,12 @@ func Lot(k, total, bad, n int) float64 {
 }
 
 // Spread is a gamma ratio of a fill-level model.
-func Spread(a, b float64) float64 {
+func Spread(a, b float64) float64 { // want Spread:`value Γ\(p0\)/Γ\(p1\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(a) / math.Gamma(b) // want "ratio of math.Gamma"
 }
 
 // Mix is the beta function of the same model.
-func Mix(a, b float64) float64 {
+func Mix(a, b float64) float64 { // want Mix:`value Γ\(p0\)·Γ\(p1\)/Γ\(p0 \+ p1\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want "Beta function"
 }
 
@@ -56,37 +56,37 @@ func Blocking(a float64, c int) float64 {
 
 // NextLoad is a^(k+1)/k!, which is no a^k/k!: it is reported with its
 // real exponent and not rewritten.
-func NextLoad(a float64, k int) float64 {
+func NextLoad(a float64, k int) float64 { // want NextLoad:`value \(p0\)\^\(p1 \+ 1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(a, float64(k+1)) / factF(k) // want `term with a\^\(k \+ 1\) over k! in float64`
 }
 
 // PairArrivals has e^(−2λ) where a Poisson term has e^(−λ): no
 // Poisson term, so no rewrite.
-func PairArrivals(k int, lambda float64) float64 {
+func PairArrivals(k int, lambda float64) float64 { // want PairArrivals:`value \(p1\)\^\(p0\)·exp\(-2\*p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-2*lambda) / factF(k) // want `term with lambda\^k over k! in float64`
 }
 
 // Scaled is a gamma ratio with the scale v between its factors: the
 // syntax does not group the ratio apart from v, so it is not rewritten.
-func Scaled(a, b, v float64) float64 {
+func Scaled(a, b, v float64) float64 { // want Scaled:`value Γ\(p0\)·\(p2\)/Γ\(p1\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(a) * v / math.Gamma(b) // want "ratio of math.Gamma"
 }
 
 // FillMoment is the k-th moment factor of a fill-level model: the gamma
 // ratio is grouped apart from the power, so it alone is rewritten.
-func FillMoment(k int, s float64) float64 {
+func FillMoment(k int, s float64) float64 { // want FillMoment:`value 2·Γ\(1/2\*p0 \+ 3/2\)·\(p1\)\^\(p0\)/√π, wrong once 1/2\*p0 \+ 3/2 ≥ 171\.624377`
 	return math.Gamma(float64(k+3)/2) / math.Gamma(1.5) * math.Pow(s, float64(k)) // want "ratio of math.Gamma"
 }
 
 // FillDensity is the Beta density of a fill share x: its normalising
 // constant 1/B(a,b) is grouped apart from the powers.
-func FillDensity(a, b, x float64) float64 {
+func FillDensity(a, b, x float64) float64 { // want FillDensity:`value Γ\(p0 \+ p1\)·\(p2\)\^\(p0 - 1\)·\(-p2 \+ 1\)\^\(p1 - 1\)/\(Γ\(p0\)·Γ\(p1\)\), wrong once p0 \+ p1 ≥ 171\.624377`
 	return math.Gamma(a+b) / (math.Gamma(a) * math.Gamma(b)) * math.Pow(x, a-1) * math.Pow(1-x, b-1) // want "ratio of math.Gamma"
 }
 
 // Drift is the k-step growth of a fill model, Γ(k+b)/Γ(b)·g^k: the
 // gamma ratio is rewritten on its own, and stays finite when Γ(k+b) is
 // not.
-func Drift(k int, b, g float64) float64 {
+func Drift(k int, b, g float64) float64 { // want Drift:`value Γ\(p0 \+ p1\)·\(p2\)\^\(p0\)/Γ\(p1\), wrong once p0 \+ p1 ≥ 171\.624377`
 	return math.Gamma(float64(k)+b) / math.Gamma(b) * math.Pow(g, float64(k)) // want "ratio of math.Gamma"
 }

@@ -44,7 +44,7 @@ func PanicGuard(w, s float64) float64 {
 }
 
 // ScaledAfter bounds the shape and then scales it past the bound.
-func ScaledAfter(w, s float64) float64 {
+func ScaledAfter(w, s float64) float64 { // want ScaledAfter:`value \(p0\)/Γ\(100\*p1\), wrong once 100\*p1 ≥ 171\.624377`
 	if s >= 10 {
 		return 0
 	}
@@ -53,7 +53,7 @@ func ScaledAfter(w, s float64) float64 {
 }
 
 // EitherSide keeps the shape outside [50, 60], which bounds nothing.
-func EitherSide(w, s float64) float64 {
+func EitherSide(w, s float64) float64 { // want EitherSide:`value \(p0\)/Γ\(p1\), wrong once p1 ≥ 171\.624377`
 	if s < 50 || s > 60 {
 		return w / math.Gamma(s) // want `math.Gamma overflows: math.Gamma\(s\) is \+Inf for s ≥ 171.62`
 	}

@@ -11,12 +11,12 @@ import (
 
 // BallVolume returns the volume of the unit ball in d dimensions,
 // π^(d/2)/Γ(d/2+1).
-func BallVolume(d int) float64 {
+func BallVolume(d int) float64 { // want BallVolume:`value \(884279719003555/281474976710656\)\^\(1/2\*p0\)/Γ\(1/2\*p0 \+ 1\), wrong once 1/2\*p0 \+ 1 ≥ 171\.624377`
 	return math.Pow(math.Pi, float64(d)/2) / math.Gamma(float64(d)/2+1) // want `math.Gamma overflows: math.Gamma\(float64\(d\)/2 \+ 1\) is \+Inf for d ≥ 342`
 }
 
 // MixingWeight returns the Beta function B(a, b) = Γ(a)Γ(b)/Γ(a+b).
-func MixingWeight(a, b float64) float64 {
+func MixingWeight(a, b float64) float64 { // want MixingWeight:`value Γ\(p0\)·Γ\(p1\)/Γ\(p0 \+ p1\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want `Beta function as Γ\(a\)Γ\(b\)/Γ\(a\+b\) in float64: math.Gamma\(a\) is \+Inf for a ≥ 171.62.*; the product of the 2 Γ values above the line can overflow first, before any one of them is \+Inf`
 }
 
@@ -26,7 +26,7 @@ func MixingWeight(a, b float64) float64 {
 // does: with a = 1.3 and b = 2.7, at c = 170.5 the two numerator values
 // are about 5.6e305 and 7.0e296 (Γ(170.5) and Γ(166.5), from
 // ln Γ via math.Lgamma), whose product is +Inf.
-func ContinuationFactor(a, b, c float64) float64 {
+func ContinuationFactor(a, b, c float64) float64 { // want ContinuationFactor:`value Γ\(p2\)·Γ\(-p0 - p1 \+ p2\)/\(Γ\(-p0 \+ p2\)·Γ\(-p1 \+ p2\)\), wrong once p2 ≥ 171\.624377`
 	d := c - a - b
 	return math.Gamma(c) * math.Gamma(d) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64: math.Gamma\(c\) is \+Inf for c ≥ 171.62.*; the product of the 2 Γ values above the line can overflow first`
 }
@@ -50,7 +50,7 @@ func StudentNormTable(nu int) float64 {
 
 // Partition returns V^N/N! for N indistinguishable particles in a box of
 // volume V (in units of the thermal volume).
-func Partition(V float64, N int) float64 {
+func Partition(V float64, N int) float64 { // want Partition:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(V, float64(N)) / mathkit.FactorialFloat(N) // want `power-over-factorial term V\^N/N! in float64: the divisor N! overflows`
 }
 
@@ -94,7 +94,7 @@ func SpeedRatio(n int) float64 {
 }
 
 // Occupancy is n!/k! written with Gamma.
-func Occupancy(n, k int) float64 {
+func Occupancy(n, k int) float64 { // want Occupancy:`value Γ\(p0 \+ 1\)/Γ\(p1 \+ 1\), wrong once p0 \+ 1 ≥ 171\.624377`
 	return math.Gamma(float64(n+1)) / math.Gamma(float64(k+1)) // want `ratio of math.Gamma values in float64: math.Gamma\(float64\(n \+ 1\)\) is \+Inf for n ≥ 171`
 }
 
@@ -105,13 +105,13 @@ func FixedRatio() float64 {
 
 // Shape is Γ(x) of a fitted shape parameter that nothing bounds,
 // returned as it is: +Inf where Γ(x) exceeds float64 is the right value.
-func Shape(x float64) float64 {
+func Shape(x float64) float64 { // want Shape:`value Γ\(p0\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(x)
 }
 
 // ShapeWeight divides by Γ(x) of that parameter: past x ≈ 171.62 the
 // weight is 0 although its true value is not.
-func ShapeWeight(w, x float64) float64 {
+func ShapeWeight(w, x float64) float64 { // want ShapeWeight:`value \(p0\)/Γ\(p1\), wrong once p1 ≥ 171\.624377`
 	return w / math.Gamma(x) // want `math.Gamma overflows: math.Gamma\(x\) is \+Inf for x ≥ 171.62.*; x is not bounded here`
 }
 
@@ -129,7 +129,7 @@ func Arrangements(n, k int) float64 { // want Arrangements:`binomial of paramete
 }
 
 // Reports uses the int64 wrapper from another package.
-func Reports(n int) float64 {
+func Reports(n int) float64 { // want Reports:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
 	return float64(mathkit.Factorial64(n)) // want `n! is computed in int64, which wraps for n ≥ 21`
 }
 

@@ -43,12 +43,12 @@ func ErlangB(a float64, c int) float64 {
 
 // Arrivals returns the probability of exactly k calls in an interval in
 // which lambda calls arrive on average.
-func Arrivals(lambda float64, k int) float64 {
+func Arrivals(lambda float64, k int) float64 { // want Arrivals:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }
 
 // ArrivalsInt divides by an int64 factorial, which wraps much sooner.
-func ArrivalsInt(lambda float64, k int) float64 {
+func ArrivalsInt(lambda float64, k int) float64 { // want ArrivalsInt:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 21`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(mathkit.Factorial(k)) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in int64: the divisor k! wraps for k ≥ 21`
 }
 
@@ -72,7 +72,7 @@ func Doubling(k int) float64 {
 }
 
 // Backlog is the same term with a cap far past both limits.
-func Backlog(k int) float64 {
+func Backlog(k int) float64 { // want Backlog:`value \(2\)\^\(p0\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
 	if k < 0 || k > 1100 {
 		return 0
 	}
@@ -81,7 +81,7 @@ func Backlog(k int) float64 {
 
 // Surge is the Poisson chance of k calls, with the power formed by a
 // loop.
-func Surge(lambda float64, k int) float64 {
+func Surge(lambda float64, k int) float64 { // want Surge:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	p := 1.0
 	for i := 0; i < k; i++ {
 		p *= lambda

@@ -27,7 +27,7 @@ func Rotas64(n, k int) int64 {
 
 // Guarded gets its guard from the 32-bit threshold: 13! overflows int32.
 //
-// probe:factorial(n; auto)
+// probe:factorial(n)
 func Guarded(n int) int { // want "probe factorial"
 	return fact(n)
 }

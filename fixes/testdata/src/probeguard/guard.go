@@ -39,9 +39,9 @@ func Tiny(n int8) float64 { // want "probe factorial: no fix: n of type int8 nev
 	return r
 }
 
-// Count leaves the limit to the thresholds package.
+// Count overflows uint64 from 21 on (OEIS A000142).
 //
-// probe:factorial(n; auto)
+// probe:factorial(n)
 func Count(n uint64) uint64 { // want "probe factorial"
 	r := uint64(1)
 	for i := uint64(2); i <= n; i++ {
@@ -52,7 +52,7 @@ func Count(n uint64) uint64 { // want "probe factorial"
 
 // Small is n! in float32, +Inf from n = 35 on.
 //
-// probe:factorial(n; auto)
+// probe:factorial(n)
 func Small(n int) float32 { // want "probe factorial"
 	r := float32(1)
 	for i := 2; i <= n; i++ {

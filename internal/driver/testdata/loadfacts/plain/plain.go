@@ -1,15 +1,15 @@
 // Package plain has loops, products and recursion, none of them a
-// factorial: it carries no fact and comes from export data.
+// product formed in a loop nor a recursion by a product: it carries no
+// fact and comes from export data.
 package plain
 
-// Hash is an FNV-style string hash.
+// Hash is a shift-and-xor string hash.
 func Hash(s string) uint64 {
-	h := uint64(14695981039346656037)
+	h := uint64(5381)
 	for i := 0; i < len(s); i++ {
-		h ^= uint64(s[i])
-		h *= 1099511628211
+		h = h<<5 ^ h ^ uint64(s[i])
 	}
-	return h
+	return h * 33
 }
 
 // Search finds x in a sorted slice.

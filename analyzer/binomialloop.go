@@ -1,0 +1,122 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// The binomial-loop category: a multiplicative binomial loop whose
+// intermediate product overflows before the division.
+
+// maxBinomialScan bounds the values of k tried when n is bounded but k
+// is not; beyond it the loop is reported as possible.
+const maxBinomialScan = 256
+
+// checkBinomialLoop reports b = b*(n-k+i)/i and its variants in an
+// integer type (the multiplicative formula C(n,k) = ∏ (n−k+i)/i, common
+// practice; every partial product is an exact binomial, so the division
+// is exact): the product b*(n-k+i) is formed before the division, so it
+// wraps while C(n, k) itself still fits.
+func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
+	if t.Float || al.kind != kindFalling {
+		return
+	}
+	sh := al.shape
+	k := fc.endRange(al.count, al.coff)
+	nExpr := fc.binomialN(al)
+	if nExpr == nil {
+		return
+	}
+	n := fc.rangeOf(nExpr)
+	if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) {
+		return
+	}
+	lim := thresholds.CentralBinomialLoop(t.Num)
+	central := thresholds.CentralBinomial(t.Num)
+	name := src(nExpr)
+	clause, _ := verdict(shownName(nExpr), n, lim.FirstBad)
+	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
+	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: ast.Unparen(al.mult)}})
+	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		t.typeName(), product, verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
+	kExpr := al.count
+	if al.coff != 0 {
+		kExpr = nil
+	}
+	m := &fixes.Match{
+		Shape:   fixes.ShapeBinomialLoop,
+		Node:    sh.stmt,
+		Result:  fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]),
+		Acc:     al.acc,
+		AccInit: al.accInit,
+		Loop:    sh.stmt,
+		Func:    fc.node,
+	}
+	if kExpr != nil {
+		m.Args = []ast.Expr{nExpr, kExpr}
+	}
+	fc.noteCountSign(m)
+	fc.reportLoop(al, finding{node: sh.stmt, cat: catBinomLoop, definite: definite, msg: msg, match: m})
+}
+
+// binomialN finds n in the factor: the variable with coefficient +1
+// other than the induction variable and the trip count.
+func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
+	lin, ok := fc.linear(al.mult)
+	if !ok {
+		return nil
+	}
+	kObj := fc.c.objOf(al.count)
+	var nObj types.Object
+	for _, t := range lin.terms {
+		if t.obj != al.shape.iv && t.obj != kObj && t.coef == 1 {
+			nObj = t.obj
+		}
+	}
+	if nObj == nil {
+		return nil
+	}
+	var found ast.Expr
+	ast.Inspect(al.mult, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && found == nil && fc.c.pass.TypesInfo.Uses[id] == nObj {
+			found = id
+		}
+		return found == nil
+	})
+	return found
+}
+
+// binomialLoopSafe reports whether every (n, k) in the ranges keeps the
+// loop's intermediate within t. The intermediate grows with n, so the
+// largest n decides; every k up to it is tried.
+func (fc *fnCtx) binomialLoopSafe(t numType, n, k ranges.Interval) bool {
+	if !bounded(n) {
+		return false
+	}
+	lo, hi := max(k.Lo, 0), min(k.Hi, n.Hi)
+	if hi-lo > maxBinomialScan {
+		return false
+	}
+	for kk := lo; kk <= hi; kk++ {
+		if !thresholds.BinomialLoopFits(t.Num, n.Hi, kk) {
+			return false
+		}
+	}
+	return true
+}
+
+// noteCountSign records in a loop match whether its number of factors,
+// Args[1], is never negative, so that the rewrite need not keep the
+// loop's result for k < 0 (see fixes.Match.CountNonNeg).
+func (fc *fnCtx) noteCountSign(m *fixes.Match) {
+	if len(m.Args) == 2 {
+		k := fc.rangeOf(m.Args[1])
+		m.CountNonNeg = !k.IsEmpty() && k.Lo >= 0
+	}
+}

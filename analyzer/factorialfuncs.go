@@ -1,0 +1,292 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/types"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/internal/assigned"
+)
+
+// Factorial-valued functions (phase 1): a function whose result is a
+// factorial of a parameter, by a loop, a recursion or a wrapper, and its
+// fact.
+
+// facFunc is a factorial-valued function of this package.
+type facFunc struct {
+	obj     *types.Func
+	decl    *ast.FuncDecl
+	kind    facKind
+	param   int
+	param2  int
+	offset  int64
+	loop    *accLoop        // the product loop, or nil
+	rec     *ast.BinaryExpr // the recursive n*f(n-1), or nil
+	recN    ast.Expr        // its n operand
+	wrap    ast.Expr        // a wrapper's argument to the factorial it returns
+	wrapOff int64           // the largest factor is wrap+wrapOff
+	inner   *FactorialFact  // the wrapped factorial function's fact
+	result  numType
+	fact    FactorialFact
+}
+
+// findFactorialFunc decides whether decl returns a factorial of one of
+// its parameters, and if so exports the fact.
+func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
+	obj, res, own := c.numericFunc(decl)
+	if own == nil {
+		return
+	}
+	ff := own.recursionOf(decl, obj)
+	if ff == nil {
+		ff = own.loopFuncOf(decl, obj)
+	}
+	if ff == nil {
+		ff = own.wrapperOf(decl, obj)
+	}
+	if ff == nil {
+		ff = own.modelFactorialFunc(decl)
+	}
+	if ff == nil {
+		return
+	}
+	ff.obj, ff.decl, ff.result = obj, decl, res
+	ff.fact = FactorialFact{Kind: kindNames[ff.kind], Param: ff.param, Param2: ff.param2, Offset: ff.offset}
+	ff.fact.FirstBad = firstBadOf(ff.kind, res) - ff.offset
+	key := own.keyRange(ff)
+	if !key.IsEmpty() && !key.IsTop() && key.Hi < firstBadOf(ff.kind, res) && ff.kind != kindFalling && ff.kind != kindRising {
+		ff.fact.Safe = true
+		ff.fact.Lo, ff.fact.Hi = shift(key, -ff.offset).Lo, shift(key, -ff.offset).Hi
+	}
+	if ff.inner != nil && ff.inner.Safe {
+		// A wrapper of a safe function is safe on the same factors.
+		ff.fact.Safe = true
+		ff.fact.Lo, ff.fact.Hi = addSat(ff.inner.Lo, ff.inner.Offset-ff.offset), addSat(ff.inner.Hi, ff.inner.Offset-ff.offset)
+	}
+	c.funcs[obj] = ff
+	c.pass.ExportObjectFact(obj, &ff.fact)
+}
+
+// firstBadOf returns the first largest factor at which a product of the
+// kind stops fitting t.
+func firstBadOf(k facKind, t numType) int64 {
+	switch k {
+	case kindDouble:
+		return thresholds.DoubleFactorial(t.Num).FirstBad
+	case kindBinomial:
+		return thresholds.CentralBinomialRatio(t.Num).FirstBad
+	}
+	return thresholds.Factorial(t.Num).FirstBad
+}
+
+// keyRange is the range of the largest factor where it is multiplied.
+func (fc *fnCtx) keyRange(ff *facFunc) ranges.Interval {
+	if ff.rec != nil {
+		return fc.rangeOf(ff.recN)
+	}
+	if ff.wrap != nil {
+		return shift(fc.rangeOf(ff.wrap), ff.wrapOff)
+	}
+	return fc.rangeOf(fc.stripConv(ff.loop.mult))
+}
+
+// paramIndex returns the index of the parameter v of decl, or −1.
+func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
+	i := 0
+	for _, f := range decl.Type.Params.List {
+		if len(f.Names) == 0 {
+			i++
+			continue
+		}
+		for _, name := range f.Names {
+			if c.pass.TypesInfo.Defs[name] == v && v != nil {
+				return i
+			}
+			i++
+		}
+	}
+	return -1
+}
+
+// loopFuncOf matches a function that returns the accumulator of a
+// product loop whose largest factor is a parameter.
+func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	fc.eachLoop(decl.Body, func(al *accLoop) {
+		if ff != nil || al.div != nil || al.early || !fc.returns(decl.Body, al.acc) {
+			return
+		}
+		resT := self.Type().(*types.Signature).Results().At(0).Type()
+		if !types.Identical(fc.c.pass.TypesInfo.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]), resT) {
+			return
+		}
+		switch al.kind {
+		case kindFactorial, kindDouble:
+			p := fc.c.objOf(al.top)
+			idx := fc.c.paramIndex(decl, p)
+			if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, al.shape.stmt) {
+				return
+			}
+			ff = &facFunc{kind: al.kind, param: idx, param2: -1, offset: al.topOff, loop: al}
+		case kindFalling:
+			// p *= n - i for i < k: n!/(n-k)! of parameters n and k.
+			n, k := fc.c.objOf(fc.fallingBase(al)), fc.c.objOf(al.count)
+			ni, ki := fc.c.paramIndex(decl, n), fc.c.paramIndex(decl, k)
+			if ni >= 0 && ki >= 0 && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, n, al.shape.stmt) && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, k, al.shape.stmt) {
+				ff = &facFunc{kind: kindFalling, param: ni, param2: ki, loop: al}
+			}
+		case kindRising:
+			// p *= x + i for i < n: x(x+1)…(x+n-1) of parameters n and x.
+			n, x := fc.c.objOf(al.count), fc.c.objOf(al.x)
+			ni, xi := fc.c.paramIndex(decl, n), fc.c.paramIndex(decl, x)
+			if ni >= 0 && xi >= 0 && al.coff == 0 && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, n, al.shape.stmt) && !assignedOutside(fc.c.pass.TypesInfo, decl.Body, x, al.shape.stmt) {
+				ff = &facFunc{kind: kindRising, param: ni, param2: xi, loop: al}
+			}
+		}
+	})
+	return ff
+}
+
+// returns reports whether some return statement of body returns v as its
+// first result.
+func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
+	// Gathered once per body, as closureAssigns is: it is asked per loop.
+	set, ok := fc.returned[body]
+	if !ok {
+		set = make(map[types.Object]bool)
+		ast.Inspect(body, func(n ast.Node) bool {
+			switch n := n.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.ReturnStmt:
+				if len(n.Results) > 0 {
+					if obj := fc.c.objOf(n.Results[0]); obj != nil {
+						set[obj] = true
+					}
+				}
+			}
+			return true
+		})
+		if fc.returned == nil {
+			fc.returned = make(map[*ast.BlockStmt]map[types.Object]bool)
+		}
+		fc.returned[body] = set
+	}
+	return v != nil && set[v]
+}
+
+// lastGoodApprox formats the largest value of the kind that fits t.
+func lastGoodApprox(k facKind, t numType) string {
+	if k == kindDouble {
+		return thresholds.DoubleFactorial(t.Num).LastGoodApprox()
+	}
+	return thresholds.Factorial(t.Num).LastGoodApprox()
+}
+
+// assignedOutside reports whether v is assigned in body outside the
+// statement skip: then the function's result is not a factorial of the
+// argument it was called with.
+func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip ast.Node) bool {
+	return assigned.In(info, body, v, func(n ast.Node) bool { return n == skip })
+}
+
+// wrapperOf matches a function that returns a factorial of a parameter
+// computed elsewhere: return f(n+c) of a factorial function f, or
+// return math.Gamma(float64(n)+b) with an integer b ≥ 1, which is
+// (n+b−1)! in float64 since Γ(n+1) = n! (DLMF 5.4.1, from memory).
+func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	resT := self.Type().(*types.Signature).Results().At(0).Type()
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok || ff != nil {
+			return false
+		}
+		ret, ok := n.(*ast.ReturnStmt)
+		if !ok || len(ret.Results) == 0 {
+			return true
+		}
+		call, ok := ast.Unparen(ret.Results[0]).(*ast.CallExpr)
+		if !ok || !types.Identical(fc.c.pass.TypesInfo.TypeOf(call), resT) {
+			return false
+		}
+		ff = fc.wrappedCall(decl, call)
+		return false
+	})
+	return ff
+}
+
+func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
+	if fc.c.isMathFunc(call, "Gamma") && len(call.Args) == 1 {
+		aff, ok := fc.affineOf(call.Args[0], 0)
+		if !ok || aff.a != 1 || !aff.isInt || aff.b < 1 || aff.b != float64(int64(aff.b)) {
+			return nil
+		}
+		idx := fc.c.paramIndex(decl, fc.c.objOf(aff.v))
+		if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, fc.c.objOf(aff.v), nil) {
+			return nil
+		}
+		off := int64(aff.b) - 1
+		return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: aff.v, wrapOff: off}
+	}
+	f, ok := fc.factorOf(call)
+	if !ok || (f.kind != kindFactorial && f.kind != kindDouble) {
+		return nil
+	}
+	lin, ok := fc.linear(f.arg)
+	if !ok || len(lin.terms) != 1 || lin.terms[0].coef != 1 {
+		return nil
+	}
+	p := lin.terms[0].obj
+	idx := fc.c.paramIndex(decl, p)
+	if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, nil) {
+		return nil
+	}
+	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.c + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
+}
+
+// numericFunc returns the function decl declares, its numeric result
+// type and a context for it that knows only its own annotations, or a
+// nil context when the first of at most two results is not numeric.
+func (c *checker) numericFunc(decl *ast.FuncDecl) (*types.Func, numType, *fnCtx) {
+	obj := c.declObj(decl)
+	if obj == nil {
+		return nil, numType{}, nil
+	}
+	sig := obj.Type().(*types.Signature)
+	if sig.Results().Len() == 0 || sig.Results().Len() > 2 {
+		return nil, numType{}, nil
+	}
+	res, ok := c.numOf(sig.Results().At(0).Type())
+	if !ok {
+		return nil, numType{}, nil
+	}
+	return obj, res, c.ownCtx(decl)
+}
+
+// ownCtx returns a fresh context for fn with its own annotations only,
+// not the ranges its call sites give it.
+func (c *checker) ownCtx(fn ast.Node) *fnCtx {
+	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos()), entry: c.ownEntry(fn)}
+	if own.file != nil {
+		own.assumes = own.file.dirs.stmtAssumesIn(fn)
+	}
+	return own
+}
+
+// decidedAtCalls reports whether n is the product loop or the recursion
+// of this function's factorial, and every call of the function in the
+// package is either safe or certainly past its first bad value: the
+// calls past it are the findings (fact(25)), one each, and a finding at
+// the definition would only repeat them with a range the calls gave it.
+func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok {
+		return false
+	}
+	ff := fc.c.funcs[fc.c.declObj(d)]
+	if ff == nil || !fc.c.sitesDecided[ff.obj] {
+		return false
+	}
+	return ff.rec == n || ff.loop != nil && ff.loop.shape.stmt == n
+}

@@ -1,0 +1,266 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// The factorial-ratio category: binomials, permutations, multinomials,
+// Catalan numbers, hypergeometric and binomial probabilities computed as
+// ratios or products of factorial values whose numerator overflows first.
+
+// brokenFactor returns the numerator factor that can break first: the
+// first whose argument is not bounded below its threshold, with the
+// judgement of its argument and its first bad argument. ok is false
+// when every numerator factor is safe.
+func (fc *fnCtx) brokenFactor(num []factor) (f factor, j judgement, first int64, ok bool) {
+	for _, f := range num {
+		if f.kind == kindNone || f.kind == kindRising || f.kind == kindFalling {
+			continue
+		}
+		if f.fact != nil && f.fact.Safe {
+			continue
+		}
+		first := firstBadOf(f.kind, f.t) - f.off
+		if j := fc.judge(f.arg, first); !j.silent {
+			return f, j, first, true
+		}
+	}
+	return factor{}, judgement{}, 0, false
+}
+
+// bang renders the factorial of an argument: n!, (n-k)!, (2*n)!.
+func bang(arg ast.Expr, off int64) string {
+	s := plus(src(arg), off)
+	if _, ok := ast.Unparen(arg).(*ast.Ident); ok && off == 0 {
+		return s + "!"
+	}
+	if _, ok := ast.Unparen(arg).(*ast.BasicLit); ok && off == 0 {
+		return s + "!"
+	}
+	return "(" + s + ")!"
+}
+
+// checkFactorialRatio judges binomials, permutations, Catalan numbers,
+// multinomials and other products and ratios of factorial values.
+func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
+	u, j, first, ok := fc.brokenFactor(p.num)
+	if !ok {
+		return
+	}
+	var facts, dens []factor
+	for _, f := range p.num {
+		if f.kind == kindFactorial {
+			facts = append(facts, f)
+		}
+	}
+	for _, f := range p.den {
+		if f.kind == kindFactorial {
+			dens = append(dens, f)
+		}
+	}
+	clause, definite := j.clause, j.definite
+	breaks := fmt.Sprintf("the numerator %s %s for %s ≥ %d", bang(u.arg, u.off), verb(u.t), src(u.arg), first)
+	if _, lit := intLiteral(u.arg); lit {
+		breaks = fmt.Sprintf("the numerator %s %s, as every factorial from %s does", bang(u.arg, u.off), verb(u.t), bang(&ast.BasicLit{Value: fmt.Sprint(first + u.off)}, 0))
+	}
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	var msg string
+	shape := fixes.ShapeNone
+	// An unknown operand (2·n!/(k!(n−k)!)) makes the value something
+	// else than the shape, so no shape is claimed for it.
+	if len(facts) == 1 && len(p.num) == 1 && u.kind == kindFactorial && p.other == 0 {
+		shape, msg = fc.ratioShape(u, dens, m)
+	}
+	switch {
+	case shape == fixes.ShapeBinomial:
+		central := thresholds.CentralBinomial(u.t.Num)
+		// The code's own n, unless the numerator is a constant or an
+		// offset, where no name stands for the row.
+		n := atom(u.arg)
+		_, lit := ast.Unparen(u.arg).(*ast.BasicLit)
+		if _, val := intLiteral(ast.Unparen(u.arg)); u.off != 0 || lit && val {
+			n = "n"
+		}
+		msg = fmt.Sprintf("binomial coefficient as a ratio of factorials in %s: %s, although C(%s, %s/2) itself fits up to %s = %d", u.t.typeName(), breaks, n, n, n, central.FirstBad-1)
+	case shape == fixes.ShapeCatalan:
+		// The threshold is stated for n, the half of the numerator's
+		// argument, as the Catalan number is indexed by it.
+		half := m.Args[0]
+		cat, cv := thresholds.Catalan(u.t.Num), thresholds.CatalanValue(u.t.Num)
+		// The numerator's verdict, told against the Catalan number's own
+		// limit, which n may stay below.
+		clause, definite = verdict(shownName(half), fc.rangeOf(half), cat.FirstBad)
+		msg = fmt.Sprintf("Catalan number as (2n)!/((n+1)!n!) in %s: the numerator %s %s for %s ≥ %d although the Catalan number itself fits up to %s = %d",
+			u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(half), cat.FirstBad, src(half), cv.FirstBad-1)
+	case shape == fixes.ShapePermutation:
+		// The code's own n and k: fact(n) / fact(n-k) is n!/(n - k)!.
+		what, k := "n!/(n-k)!", "k"
+		if len(dens) == 1 && len(m.Args) == 2 {
+			what, k = bang(u.arg, u.off)+"/"+bang(dens[0].arg, dens[0].off), atom(m.Args[1])
+		}
+		msg = fmt.Sprintf("permutation count %s as a ratio of factorials in %s: %s, although the product of the top %s factors may still fit", what, u.t.typeName(), breaks, k)
+	case shape == fixes.ShapeMultinomial:
+		msg = fmt.Sprintf("multinomial coefficient as a ratio of factorials in %s: %s before any division", u.t.typeName(), breaks)
+	case len(p.den) == 0:
+		msg = fmt.Sprintf("product of factorials in %s: the factor %s alone %s for %s ≥ %d, and the product earlier", u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(u.arg), first)
+	default:
+		msg = fmt.Sprintf("ratio of factorials in %s: %s before the division", u.t.typeName(), breaks)
+	}
+	m.Shape = shape
+	if shape == fixes.ShapeNone {
+		m.Args = nil
+	}
+	fc.report(finding{
+		node:     root,
+		cat:      catRatio,
+		definite: definite,
+		msg:      msg + clause,
+		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
+		match:    p.fix(m),
+	})
+}
+
+// ratioShape matches the denominators of a single-factorial numerator
+// against the binomial, Catalan, permutation and multinomial forms, and
+// fills the Match arguments in the order fixes documents. The forms are
+// the textbook ones (common practice): C(n,k) = n!/(k!(n−k)!) (DLMF
+// 26.3.1), n!/(n−k)! for k-permutations, the multinomial n!/(k₁!…kₘ!)
+// with Σkᵢ = n (DLMF 26.4.2), and the Catalan number
+// (2n)!/((n+1)!n!) (OEIS A000108); section numbers from memory.
+func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shape, string) {
+	n, ok := fc.linear(u.arg)
+	if !ok || len(dens) == 0 || u.off != 0 {
+		return fixes.ShapeNone, ""
+	}
+	var lins []linear
+	sum := linear{}
+	for _, d := range dens {
+		l, ok := fc.linear(d.arg)
+		if !ok || d.off != 0 {
+			return fixes.ShapeNone, ""
+		}
+		lins = append(lins, l)
+		sum = sum.add(l)
+	}
+	switch {
+	case len(dens) == 2 && sum.equal(n):
+		k := dens[0].arg
+		if len(lins[1].terms) < len(lins[0].terms) {
+			k = dens[1].arg
+		}
+		m.Args = []ast.Expr{u.arg, k}
+		return fixes.ShapeBinomial, ""
+	case len(dens) == 2 && sum.scale(2).equal(n.scale(2).add(linear{c: 2})) && (lins[0].scale(2).equal(n) || lins[1].scale(2).equal(n)):
+		half := dens[0].arg
+		if !lins[0].scale(2).equal(n) {
+			half = dens[1].arg
+		}
+		m.Args = []ast.Expr{half}
+		return fixes.ShapeCatalan, ""
+	case len(dens) == 1:
+		if b, ok := ast.Unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
+			if x, ok := fc.linear(b.X); ok && x.equal(n) {
+				m.Args = []ast.Expr{u.arg, b.Y}
+			}
+		}
+		return fixes.ShapePermutation, ""
+	case len(dens) >= 3 && sum.equal(n):
+		for _, d := range dens {
+			m.Args = append(m.Args, d.arg)
+		}
+		m.Extra = []ast.Expr{u.arg}
+		return fixes.ShapeMultinomial, ""
+	}
+	return fixes.ShapeNone, ""
+}
+
+// checkHypergeometric judges C(K,k)·C(N−K,n−k)/C(N,n) formed from calls
+// of a binomial-valued function (the hypergeometric pmf, common
+// practice): the denominator's C(N, n), with the largest n, breaks first.
+func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
+	d := p.den[0]
+	for _, f := range p.den {
+		if f.kind == kindBinomial {
+			d = f
+		}
+	}
+	j, first := fc.judgeCall(d)
+	if j.silent {
+		return
+	}
+	clause, definite := j.clause, j.definite
+	msg := fmt.Sprintf("hypergeometric probability from three binomial coefficients in %s: %s(%s, …) breaks for %s ≥ %d before the division%s",
+		d.t.typeName(), d.fn.Name(), src(d.arg), src(d.arg), first, clause)
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if args := fc.hyperArgs(p); args != nil && p.other == 0 {
+		m.Shape, m.Args = fixes.ShapeHypergeometric, args
+	}
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: p.fix(m)})
+}
+
+// hyperArgs returns k, N, K, n of C(K,k)C(N-K,n-k)/C(N,n), or nil.
+func (fc *fnCtx) hyperArgs(p *product) []ast.Expr {
+	if len(p.num) != 2 || len(p.den) != 1 {
+		return nil
+	}
+	a, b, d := p.num[0], p.num[1], p.den[0]
+	if a.arg2 == nil || b.arg2 == nil || d.arg2 == nil {
+		return nil
+	}
+	N, ok1 := fc.linear(d.arg)
+	n, ok2 := fc.linear(d.arg2)
+	K, ok3 := fc.linear(a.arg)
+	k, ok4 := fc.linear(a.arg2)
+	K2, ok5 := fc.linear(b.arg)
+	k2, ok6 := fc.linear(b.arg2)
+	if !(ok1 && ok2 && ok3 && ok4 && ok5 && ok6) {
+		return nil
+	}
+	if !K.add(K2).equal(N) || !k.add(k2).equal(n) {
+		return nil
+	}
+	if len(K2.terms) < len(K.terms) {
+		a = b // the simpler pair is C(K, k), the other C(N-K, n-k)
+	}
+	return []ast.Expr{a.arg2, d.arg, a.arg, d.arg2}
+}
+
+// checkBinomialPMF judges C(n,k)·p^k·(1−p)^(n−k) (the binomial pmf,
+// common practice) where C(n, k) comes from a binomial-valued function
+// that breaks: the probability is small, the coefficient is not.
+func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
+	var b factor
+	var pows []factor
+	for _, f := range p.num {
+		switch {
+		case f.kind == kindBinomial:
+			b = f
+		case f.math == "Pow":
+			pows = append(pows, f)
+		}
+	}
+	j, first := fc.judgeCall(b)
+	if j.silent {
+		return
+	}
+	clause, definite := j.clause, j.definite
+	what := "C(n,k)·p^k·(1−p)^(n−k)"
+	if b.arg2 != nil && len(pows) > 0 {
+		// The code's own n, k and p: C(n, d)·p^d·(1−p)^(n−d).
+		bn, bk := fc.stripConv(b.arg), fc.stripConv(b.arg2)
+		n, k, q := atom(bn), atom(bk), atom(pows[0].arg)
+		what = fmt.Sprintf("C(%s, %s)·%s^%s·(1−%s)^(%s−%s)", src(bn), src(bk), q, k, q, n, k)
+	}
+	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
+		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
+		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
+	}
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
+}

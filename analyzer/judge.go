@@ -1,0 +1,97 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"math"
+	"strconv"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+)
+
+// A judgement is what the range of the value that decides an overflow
+// says about the first value at which the arithmetic breaks: every
+// category asks judge (or decide, with a range it already has) and
+// reports nothing when silent.
+type judgement struct {
+	silent   bool   // no value of the range reaches the first bad value
+	definite bool   // every value does: the overflow is certain
+	clause   string // the range against it, for the message: "; n may reach 30 here"
+}
+
+// judge compares the range of arg where it is evaluated with first.
+func (fc *fnCtx) judge(arg ast.Expr, first int64) judgement {
+	return decide(arg, fc.rangeOf(arg), first)
+}
+
+// judgeCall judges a call of a function that carries a fact, against
+// the first bad value the fact states; a function that bounds its own
+// parameter (or a call with no fact) is silent.
+func (fc *fnCtx) judgeCall(f factor) (judgement, int64) {
+	if f.fact == nil || f.fact.Safe {
+		return judgement{silent: true}, 0
+	}
+	return fc.judge(f.arg, f.fact.FirstBad), f.fact.FirstBad
+}
+
+// decide compares r, the range of arg, with first. A nil arg or an
+// integer literal is shown by no name: the message states its value.
+func decide(arg ast.Expr, r ranges.Interval, first int64) judgement {
+	j := judgement{silent: r.IsEmpty() || r.Hi < first}
+	if !j.silent {
+		j.clause, j.definite = verdict(shownName(arg), r, first)
+	}
+	return j
+}
+
+// shownName returns how a verdict names arg: its source, or nothing for
+// a nil arg or an integer literal, whose value the message states.
+func shownName(arg ast.Expr) string {
+	if _, lit := intLiteral(arg); arg == nil || lit {
+		return ""
+	}
+	return src(arg)
+}
+
+// verdict says how the range of name relates to its first bad value and
+// whether the overflow is certain; an empty name stands for a constant.
+func verdict(name string, iv ranges.Interval, firstBad int64) (string, bool) {
+	switch {
+	case name == "":
+		return "", iv.Lo >= firstBad
+	case iv.Lo >= firstBad && iv.Lo != math.MinInt64:
+		return fmt.Sprintf("; %s is at least %d here", name, iv.Lo), true
+	case typeLimit(iv.Hi):
+		return fmt.Sprintf("; %s is not bounded here", name), false
+	}
+	return fmt.Sprintf("; %s may reach %d here", name, iv.Hi), false
+}
+
+// intLiteral returns the value of an integer literal, signed or not,
+// as written in the source (not through parentheses).
+func intLiteral(e ast.Expr) (int64, bool) {
+	sign := ""
+	if u, ok := e.(*ast.UnaryExpr); ok && (u.Op == token.SUB || u.Op == token.ADD) {
+		sign, e = u.Op.String(), u.X
+	}
+	lit, ok := e.(*ast.BasicLit)
+	if !ok || lit.Kind != token.INT {
+		return 0, false
+	}
+	v, err := strconv.ParseInt(sign+lit.Value, 0, 64)
+	return v, err == nil
+}
+
+// shownFactorial returns how a message names the factorial of arg+off:
+// the name and offset, or, for a literal argument, no name and the
+// value.
+func shownFactorial(arg ast.Expr, off int64) (string, int64) {
+	if arg == nil {
+		return "", off
+	}
+	if v, ok := intLiteral(arg); ok {
+		return "", v + off
+	}
+	return src(arg), off
+}

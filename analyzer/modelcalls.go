@@ -1,0 +1,811 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math"
+	"math/big"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+	vm "github.com/overfact/overfact/analyzer/valuemodel"
+)
+
+// callState is what the value model knows about the functions of the
+// package as values of their parameters (ValueFact), found on demand
+// once the factorial and binomial functions are known.
+type callState struct {
+	ready bool
+	decls map[*types.Func]*ast.FuncDecl
+	facts map[*types.Func]*ValueFact // nil value: looked at, no fact
+	busy  map[*types.Func]bool
+}
+
+// findValueFacts exports a ValueFact for each function of decls whose
+// result the value model names in terms of its parameters. It runs after
+// the factorial and binomial functions are found, whose facts the model
+// reads, and computes a callee's fact before its caller's, whatever
+// their order in the source. Only functions whose scan saw a call the
+// model may know (math.Gamma, Pow or Exp, a function with a fact, one of
+// this package) or a product loop are evaluated.
+func (c *checker) findValueFacts(decls []*ast.FuncDecl, scans map[ast.Node]*scan) {
+	c.calls = &callState{
+		ready: true,
+		decls: make(map[*types.Func]*ast.FuncDecl),
+		facts: make(map[*types.Func]*ValueFact),
+		busy:  make(map[*types.Func]bool),
+	}
+	for _, d := range decls {
+		s := scans[d]
+		if obj := c.declObj(d); obj != nil && s != nil && (s.knownCall || s.localCall || s.worthLoops()) {
+			c.calls.decls[obj] = d
+		}
+	}
+	for _, d := range decls {
+		if obj := c.declObj(d); obj != nil && c.calls.decls[obj] != nil {
+			c.guard(d, func() { c.valueFactOf(obj) })
+		}
+	}
+}
+
+// valueFactOf returns the ValueFact of fn, from this package (computed
+// on first use) or an imported one; nil when there is none.
+func (c *checker) valueFactOf(fn *types.Func) *ValueFact {
+	if fn == nil {
+		return nil
+	}
+	if fn.Pkg() != c.pass.Pkg {
+		f := new(ValueFact)
+		if fn.Pkg() != nil && fn.Pkg().Path() != "math" && c.pass.ImportObjectFact(fn, f) {
+			return f
+		}
+		return nil
+	}
+	cs := c.calls
+	if cs == nil || !cs.ready || cs.busy[fn] {
+		return nil
+	}
+	if f, ok := cs.facts[fn]; ok {
+		return f
+	}
+	d := cs.decls[fn]
+	if d == nil {
+		return nil
+	}
+	cs.busy[fn] = true
+	var f *ValueFact
+	func() {
+		defer func() {
+			// An internal failure costs this function its fact only.
+			if r := recover(); r != nil {
+				f = nil
+				if debug {
+					fmt.Fprintf(debugOut, "overfact: %s: no value fact after internal error: %v\n", c.pass.Fset.Position(d.Pos()), r)
+				}
+			}
+		}()
+		f = c.computeValueFact(d, fn)
+	}()
+	delete(cs.busy, fn)
+	cs.facts[fn] = f
+	if f != nil && fn.Exported() {
+		// Only another package's code needs the fact encoded; this
+		// package's callers read cs.facts.
+		c.pass.ExportObjectFact(fn, f)
+	}
+	return f
+}
+
+// maxWeak caps the weak points one fact carries.
+const maxWeak = 8
+
+// computeValueFact names the value decl returns in terms of its
+// parameters. Every return must give that value, but for returns of a
+// constant or of math.Inf or math.NaN (edge cases and error values);
+// the value must hold a Γ factor or rest on an intermediate that breaks.
+func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
+	if c.funcs[fn] != nil || d.Body == nil {
+		return nil // a factorial or binomial function has its own fact
+	}
+	sig := fn.Type().(*types.Signature)
+	if sig.Results().Len() != 1 || sig.Params().Len() > len(placeholders) {
+		return nil
+	}
+	t, ok := c.numOf(sig.Results().At(0).Type())
+	if !ok {
+		return nil
+	}
+	fc := c.ownCtx(d)
+	res := fc.evalModel()
+	if res.Capped {
+		return nil
+	}
+	ps := make(paramSyms)
+	for i := 0; i < sig.Params().Len(); i++ {
+		ps[sig.Params().At(i)] = i
+	}
+	var value *vm.Term
+	var roots []ast.Expr
+	for _, r := range fc.modelRoots(res) {
+		if c.edgeValue(r) {
+			continue
+		}
+		v := res.Values[r]
+		if v == nil || value != nil && v.String() != value.String() {
+			return nil
+		}
+		value = v
+		roots = append(roots, r)
+	}
+	if value == nil || len(fc.returnsOutsideClosures()) != len(fc.modelRoots(res)) {
+		return nil
+	}
+	enc, ok := ps.encodeTerm(value)
+	if !ok {
+		return nil
+	}
+	f := &ValueFact{Value: enc}
+	for _, r := range roots {
+		for _, w := range fc.weakPoints(res, r, t) {
+			// A weak point must be reachable inside the function's own
+			// guards and the domain of its value (SmallChoose's n ≤ 60
+			// rules out k ≥ 171): whether the caller's value still fits
+			// there is the caller's question.
+			if len(f.Weak) >= maxWeak || !fc.weakReachable(res, r, w) {
+				continue
+			}
+			if _, ok := fc.witness(res, r, value, w, t, false); !ok {
+				continue
+			}
+			arg, ok := ps.encodeAffine(w.arg)
+			if !ok {
+				continue
+			}
+			f.Weak = appendWeak(f.Weak, WeakPoint{Arg: arg, Bad: ratText(w.bad), What: w.what, Gamma: w.gamma})
+		}
+	}
+	// A value with no variable, or with no intermediate that breaks,
+	// tells a caller nothing the calls themselves do not.
+	if _, isConst := value.IsConst(); isConst || len(f.Weak) == 0 || len(termSyms(value, vm.Int(0))) == 0 {
+		return nil
+	}
+	return f
+}
+
+func appendWeak(ws []WeakPoint, w WeakPoint) []WeakPoint {
+	for _, x := range ws {
+		if fmt.Sprint(x) == fmt.Sprint(w) {
+			return ws
+		}
+	}
+	return append(ws, w)
+}
+
+// returnsOutsideClosures counts the return statements of the function
+// itself.
+func (fc *fnCtx) returnsOutsideClosures() []*ast.ReturnStmt {
+	var out []*ast.ReturnStmt
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			out = append(out, n)
+		}
+		return true
+	})
+	return out
+}
+
+// edgeValue reports whether e is a constant or math.Inf or math.NaN: a
+// value for an edge case or an error, not the function's computation.
+func (c *checker) edgeValue(e ast.Expr) bool {
+	e = ast.Unparen(e)
+	if tv, ok := c.pass.TypesInfo.Types[e]; ok && tv.Value != nil {
+		return true
+	}
+	if call, ok := e.(*ast.CallExpr); ok {
+		if tv, ok := c.pass.TypesInfo.Types[call.Fun]; ok && tv.IsType() && len(call.Args) == 1 {
+			return c.edgeValue(call.Args[0])
+		}
+		return c.isMathFunc(call, "Inf") || c.isMathFunc(call, "NaN")
+	}
+	return false
+}
+
+// valueCallee gives the value of a call of a function with a ValueFact,
+// its parameters replaced by the arguments' values.
+func (fc *fnCtx) valueCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
+	f := fc.c.valueFactOf(fc.c.calleeOf(call))
+	if f == nil {
+		return nil
+	}
+	return f.Value.Term(affineArgs(args))
+}
+
+// affineArgs returns the arguments that are affine forms; the others
+// are the zero Affine, which a fact refuses to substitute.
+func affineArgs(args []*vm.Term) []vm.Affine {
+	out := make([]vm.Affine, len(args))
+	for i, a := range args {
+		if x, ok := a.Affine(); ok {
+			out[i] = x
+		}
+	}
+	return out
+}
+
+// weak is an intermediate of a root in the caller's variables: it is
+// wrong once arg ≥ bad.
+type weak struct {
+	arg   vm.Affine
+	bad   *big.Rat
+	what  string   // the intermediate as the code writes it (a call)
+	via   string   // the callee's own weak intermediate, when it is one
+	call  ast.Expr // the call that holds it
+	gamma bool
+}
+
+// weakPoints returns the intermediates of root that can break, in the
+// order the code evaluates them: math.Gamma values, factorial calls, and
+// the weak points of calls with a ValueFact, looking through locals
+// defined once.
+func (fc *fnCtx) weakPoints(res *vm.Result, root ast.Expr, t numType) []weak {
+	var out []weak
+	seen := make(map[ast.Node]bool)
+	var walk func(e ast.Node, depth int)
+	walk = func(e ast.Node, depth int) {
+		if depth > maxDepth || seen[e] {
+			return
+		}
+		seen[e] = true
+		ast.Inspect(e, func(n ast.Node) bool {
+			switch n := n.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.Ident:
+				if def := fc.singleDef(n); def != nil {
+					walk(def, depth+1)
+				}
+			case *ast.CallExpr:
+				for _, a := range n.Args {
+					walk(a, depth+1)
+				}
+				out = append(out, fc.callWeak(res, n)...)
+				return false
+			}
+			return true
+		})
+	}
+	walk(root, 0)
+	return out
+}
+
+// callWeak returns the weak points of one call.
+func (fc *fnCtx) callWeak(res *vm.Result, call *ast.CallExpr) []weak {
+	c := fc.c
+	argAffine := func(i int) (vm.Affine, bool) {
+		if i < 0 || i >= len(call.Args) {
+			return vm.Affine{}, false
+		}
+		return res.Values[call.Args[i]].Affine()
+	}
+	if c.isMathFunc(call, "Gamma") {
+		t, ok := c.numOf(c.pass.TypesInfo.TypeOf(call))
+		a, ok2 := argAffine(0)
+		if !ok || !ok2 || !t.Float {
+			return nil
+		}
+		bad, _ := new(big.Rat).SetString(fmt.Sprint(thresholds.GammaFirstBad(t.Num)))
+		if bad == nil {
+			return nil
+		}
+		return []weak{{arg: a, bad: bad, what: src(call), call: call, gamma: true}}
+	}
+	fn := c.calleeOf(call)
+	if ff := c.factOf(fn); ff != nil {
+		if ff.Safe || kindOfName(ff.Kind) != kindFactorial {
+			return nil
+		}
+		a, ok := argAffine(ff.Param)
+		if !ok {
+			return nil
+		}
+		return []weak{{arg: a, bad: big.NewRat(ff.FirstBad, 1), what: src(call), call: call}}
+	}
+	vf := c.valueFactOf(fn)
+	if vf == nil {
+		return nil
+	}
+	args := make([]vm.Affine, len(call.Args))
+	for i := range call.Args {
+		args[i], _ = argAffine(i)
+	}
+	var out []weak
+	for _, w := range vf.Weak {
+		a, ok := w.Arg.Affine(args)
+		bad, ok2 := parseRat(w.Bad)
+		if !ok || !ok2 {
+			continue
+		}
+		out = append(out, weak{arg: a, bad: bad, what: src(call), via: w.What, call: call, gamma: w.Gamma})
+	}
+	return out
+}
+
+// weakReachable reports whether the variables of w can reach its bad
+// value at root, as far as their ranges there tell.
+func (fc *fnCtx) weakReachable(res *vm.Result, root ast.Expr, w weak) bool {
+	v, alpha, beta, ok := oneVar(w.arg)
+	if !ok {
+		return !w.arg.IsConst() || w.arg.C.Cmp(w.bad) >= 0
+	}
+	first, ok := firstAtRat(alpha, beta, w.bad)
+	if !ok {
+		return true
+	}
+	r := fc.symRange(res, v, root)
+	return !r.IsEmpty() && r.Hi >= first
+}
+
+// firstAtRat returns the smallest integer v with α·v + β ≥ bad, α > 0.
+func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
+	if alpha.Sign() <= 0 {
+		return 0, false
+	}
+	x := new(big.Rat).Sub(bad, beta)
+	x.Quo(x, alpha)
+	q := new(big.Int).Quo(x.Num(), x.Denom())
+	if x.Sign() > 0 && !x.IsInt() {
+		q.Add(q, big.NewInt(1))
+	}
+	if !q.IsInt64() {
+		return 0, false
+	}
+	return q.Int64(), true
+}
+
+// checkModelCalls reports, at each place where a function's whole value
+// is known, a value that fits its type for some input at which an
+// intermediate it relies on (a factorial or Γ value, or one inside a
+// helper it calls) already breaks: binomial, hypergeometric and
+// negative binomial probabilities over a binomial helper built from
+// float factorials, ratios of factorial and Γ helpers.
+func (fc *fnCtx) checkModelCalls() {
+	var res *vm.Result
+	for _, root := range fc.callRoots() {
+		fc.checkLoopMultinomial(root)
+		if res == nil {
+			res = fc.evalModel()
+		}
+		fc.checkCallRoot(res, root)
+	}
+}
+
+// callRoots returns the expressions whose value is whole: returned,
+// assigned or passed to a function the model does not know, when the
+// function's own arithmetic combines them (a product or a quotient) and
+// one of their operands is a call the model knows through a fact.
+func (fc *fnCtx) callRoots() []ast.Expr {
+	var out []ast.Expr
+	c := fc.c
+	add := func(e ast.Expr) {
+		b, ok := fc.stripConv(e).(*ast.BinaryExpr)
+		if !ok || b.Op != token.MUL && b.Op != token.QUO {
+			return
+		}
+		known := false
+		ast.Inspect(b, func(n ast.Node) bool {
+			if call, ok := n.(*ast.CallExpr); ok && !known {
+				fn := c.calleeOf(call)
+				known = c.factOf(fn) != nil || c.valueFactOf(fn) != nil
+			}
+			_, lit := n.(*ast.FuncLit)
+			return !known && !lit
+		})
+		if known {
+			out = append(out, e)
+		}
+	}
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			for _, r := range n.Results {
+				add(r)
+			}
+		case *ast.AssignStmt:
+			for _, r := range n.Rhs {
+				add(r)
+			}
+		case *ast.ValueSpec:
+			for _, r := range n.Values {
+				add(r)
+			}
+		case *ast.CallExpr:
+			if tv, ok := c.pass.TypesInfo.Types[n.Fun]; ok && tv.IsType() {
+				return true
+			}
+			fn := c.calleeOf(n)
+			if fn != nil && fn.Pkg() != nil && fn.Pkg().Path() == "math" || c.factOf(fn) != nil || c.valueFactOf(fn) != nil {
+				return true
+			}
+			for _, a := range n.Args {
+				add(a)
+			}
+		}
+		return true
+	})
+	return out
+}
+
+// reportedWithin reports whether a finding starts inside n.
+func (c *checker) reportedWithin(n ast.Node) bool {
+	for k := range c.reported {
+		if n.Pos() <= k.pos && k.pos < n.End() {
+			return true
+		}
+	}
+	return false
+}
+
+// checkCallRoot judges one root.
+func (fc *fnCtx) checkCallRoot(res *vm.Result, root ast.Expr) {
+	c := fc.c
+	val := res.Values[root]
+	if val == nil || c.reportedWithin(root) || fc.checksNonFinite(root) {
+		return
+	}
+	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(root))
+	if !ok {
+		return
+	}
+	// Inside a loop, values are in the trip index: judge them in the
+	// counter, whose range the range analysis knows.
+	val = fc.tripsAsCountersTerm(res, val)
+	for _, w := range fc.weakPoints(res, root, t) {
+		w.arg = fc.tripsAsCounters(res, w.arg)
+		if !fc.weakReachable(res, root, w) {
+			continue
+		}
+		if _, ok := fc.witness(res, root, val, w, t, true); !ok {
+			continue
+		}
+		fc.reportCallRoot(res, root, val, w, t)
+		return
+	}
+}
+
+// witnessBudget caps the points the witness search tries for one weak
+// point.
+const witnessBudget = 4096
+
+// witness looks for a point, within the ranges the code allows at root,
+// where w's intermediate has broken while the true value val lies inside
+// t's range and every Γ argument and power base of val is positive: an
+// input at which the code returns a wrong value although the right one
+// fits. The variable of w's argument is solved for its first bad value;
+// the others take small values (0, 1, 2, 3, 10, ½ for floats, and the
+// ends of their ranges).
+func (fc *fnCtx) witness(res *vm.Result, root ast.Expr, val *vm.Term, w weak, t numType, fit bool) (map[vm.Sym]*big.Rat, bool) {
+	syms := termSyms(val, w.arg)
+	if len(syms) > 7 {
+		return nil, false
+	}
+	// The variable to solve for: the first of w's argument with a
+	// positive coefficient.
+	var solve *vm.Sym
+	for _, l := range w.arg.Terms {
+		if l.K.Sign() > 0 {
+			s := l.Sym
+			solve = &s
+			break
+		}
+	}
+	if solve == nil {
+		return nil, false
+	}
+	rangeOf := make(map[vm.Sym]ranges.Interval)
+	var others []vm.Sym
+	cands := make(map[vm.Sym][]*big.Rat)
+	for _, s := range syms {
+		r := fc.symRange(res, s, root)
+		if r.IsEmpty() {
+			return nil, false
+		}
+		rangeOf[s] = r
+		if s == *solve {
+			continue
+		}
+		others = append(others, s)
+		var cs []*big.Rat
+		// Small values, and values past the bad one, for variables
+		// that must exceed the one solved for (a population beside
+		// its part).
+		try := []*big.Rat{big.NewRat(1, 1), big.NewRat(2, 1), big.NewRat(0, 1), big.NewRat(3, 1), big.NewRat(10, 1)}
+		if b := new(big.Int).Quo(w.bad.Num(), w.bad.Denom()); b.IsInt64() && b.Int64() < 1<<40 {
+			try = append(try, big.NewRat(2*b.Int64()+2, 1), big.NewRat(b.Int64()+1, 1))
+		}
+		if symFloat(s) {
+			try = append(try, big.NewRat(1, 2))
+		}
+		if bounded(r) {
+			try = append(try, big.NewRat(r.Lo, 1), big.NewRat(r.Hi, 1))
+		}
+		for _, x := range try {
+			if inRange(r, x) {
+				cs = append(cs, x)
+			}
+		}
+		if len(cs) == 0 {
+			return nil, false
+		}
+		cands[s] = cs
+	}
+	lo, hi := thresholds.LogRange(t.Num)
+	margin := 1e-6 * math.Max(1, hi)
+	if !fit {
+		lo, hi, margin = math.Inf(-1), math.Inf(1), 0
+	}
+	point := make(map[vm.Sym]*big.Rat)
+	idx := make([]int, len(others))
+	for budget := 0; budget < witnessBudget; budget++ {
+		for i, s := range others {
+			point[s] = cands[s][idx[i]]
+		}
+		if fc.tryWitness(point, *solve, rangeOf[*solve], val, w, lo+margin, hi-margin) {
+			return point, true
+		}
+		// The next combination.
+		i := 0
+		for ; i < len(idx); i++ {
+			idx[i]++
+			if idx[i] < len(cands[others[i]]) {
+				break
+			}
+			idx[i] = 0
+		}
+		if i == len(idx) {
+			break
+		}
+	}
+	return nil, false
+}
+
+// tryWitness solves w's argument for the variable solve at the other
+// variables' values in point and checks the point.
+func (fc *fnCtx) tryWitness(point map[vm.Sym]*big.Rat, solve vm.Sym, r ranges.Interval, val *vm.Term, w weak, lo, hi float64) bool {
+	rest := vm.Affine{C: w.arg.C, Terms: nil}
+	var k *big.Rat
+	for _, l := range w.arg.Terms {
+		if l.Sym == solve {
+			k = l.K
+			continue
+		}
+		rest.Terms = append(rest.Terms, l)
+	}
+	rv, ok := rest.At(point)
+	if !ok || k == nil {
+		return false
+	}
+	first, ok := firstAtRat(k, rv, w.bad)
+	if !ok || first > 1<<40 {
+		return false
+	}
+	x := big.NewRat(first, 1)
+	if !inRange(r, x) {
+		return false
+	}
+	point[solve] = x
+	defer delete(point, solve)
+	if !positiveAt(val, point) {
+		return false
+	}
+	fl := make(map[vm.Sym]float64, len(point))
+	for s, v := range point {
+		fl[s], _ = v.Float64()
+	}
+	l, ok := val.LogAbs(fl)
+	return ok && l >= lo && l <= hi
+}
+
+// positiveAt reports whether every Γ argument and power base of t is
+// positive at point, where the formula is the value the code computes
+// (a count, a probability).
+func positiveAt(t *vm.Term, point map[vm.Sym]*big.Rat) bool {
+	for _, g := range t.Gamma {
+		if v, ok := g.Arg.At(point); !ok || v.Sign() <= 0 {
+			return false
+		}
+	}
+	for _, p := range t.Pows {
+		if v, ok := p.Base.At(point); !ok || v.Sign() <= 0 {
+			return false
+		}
+	}
+	return true
+}
+
+func inRange(r ranges.Interval, x *big.Rat) bool {
+	if r.Lo != math.MinInt64 && x.Cmp(big.NewRat(r.Lo, 1)) < 0 {
+		return false
+	}
+	return r.Hi == math.MaxInt64 || x.Cmp(big.NewRat(r.Hi, 1)) <= 0
+}
+
+// symFloat reports whether a variable has a float type.
+func symFloat(s vm.Sym) bool {
+	var t types.Type
+	switch {
+	case s.Field != nil:
+		t = s.Field.Type()
+	case s.Obj != nil:
+		t = s.Obj.Type()
+	default:
+		return false
+	}
+	b, ok := t.Underlying().(*types.Basic)
+	return ok && b.Info()&types.IsFloat != 0
+}
+
+// termSyms returns the variables of t and of a, each once, in order.
+func termSyms(t *vm.Term, a vm.Affine) []vm.Sym {
+	var out []vm.Sym
+	seen := make(map[vm.Sym]bool)
+	add := func(a vm.Affine) {
+		for _, s := range a.Syms() {
+			if !seen[s] {
+				seen[s] = true
+				out = append(out, s)
+			}
+		}
+	}
+	add(a)
+	add(t.Exp)
+	for _, g := range t.Gamma {
+		add(g.Arg)
+	}
+	for _, p := range t.Pows {
+		add(p.Base)
+		add(p.Exp)
+	}
+	return out
+}
+
+// reportCallRoot words the finding: what the function computes, which
+// intermediate breaks and from which input.
+func (fc *fnCtx) reportCallRoot(res *vm.Result, root ast.Expr, val *vm.Term, w weak, t numType) {
+	name := "the function literal"
+	if d, ok := fc.node.(*ast.FuncDecl); ok {
+		name = d.Name.Name
+	}
+	form := vm.RecogniseAny(val)
+	what := val.String()
+	if form.Kind != vm.Unknown && form.Kind != vm.GammaRatio {
+		what = form.String()
+	}
+	breaks := "overflows to +Inf"
+	if !t.Float {
+		breaks = "wraps"
+	} else if w.via != "" {
+		breaks = "is +Inf or NaN"
+	}
+	clause, definite := "", false
+	arg := w.arg
+	from := fmt.Sprintf("once %s ≥ %s", arg, ratString(w.bad))
+	if v, alpha, beta, ok := oneVar(arg); ok {
+		if first, ok := firstAtRat(alpha, beta, w.bad); ok {
+			from = fmt.Sprintf("from %s = %d", v.Name(), first)
+			clause, definite = verdict(v.Name(), fc.symRange(res, v, root), first)
+		}
+	} else if text, at, ok := fc.argText(res, w); ok {
+		from = fmt.Sprintf("from %s = %s", text, ratString(at))
+	}
+	via := ""
+	if w.via != "" && w.via != w.what {
+		via = fmt.Sprintf(" (its %s breaks first)", w.via)
+	}
+	msg := fmt.Sprintf("%s computes %s in %s, which fits where %s already %s %s%s%s",
+		name, what, t.typeName(), w.what, breaks, from, via, clause)
+	cat := catRatio
+	switch {
+	case form.Kind == vm.PowOverFact || form.Kind == vm.Poisson:
+		cat = catPowOverFac
+	case w.gamma:
+		cat = catGammaRatio
+	}
+	fc.report(finding{node: root, cat: cat, definite: definite, msg: msg, match: fc.callRootMatch(res, root, form)})
+}
+
+func ratString(r *big.Rat) string {
+	if r.IsInt() {
+		return r.Num().String()
+	}
+	f, _ := r.Float64()
+	return fmt.Sprintf("%.9g", f)
+}
+
+// found reports whether the package has a function with a ValueFact.
+func (cs *callState) found() bool {
+	if cs == nil {
+		return false
+	}
+	for _, f := range cs.facts {
+		if f != nil {
+			return true
+		}
+	}
+	return false
+}
+
+// tripsAsCounters rewrites a form in loops' trip indices as one in
+// their counters, as the code names them.
+func (fc *fnCtx) tripsAsCounters(res *vm.Result, a vm.Affine) vm.Affine {
+	for _, l := range res.Loops {
+		if l.Counter != nil && l.Step != nil && l.Step.Sign() != 0 {
+			a = a.Subst(l.Iter, vm.Var(vm.Sym{Obj: l.Counter}).Sub(l.From).Scale(new(big.Rat).Inv(l.Step)))
+		}
+	}
+	return a
+}
+
+// tripsAsCountersTerm is tripsAsCounters over a term.
+func (fc *fnCtx) tripsAsCountersTerm(res *vm.Result, t *vm.Term) *vm.Term {
+	for _, l := range res.Loops {
+		if l.Counter != nil && l.Step != nil && l.Step.Sign() != 0 {
+			t = t.Subst(l.Iter, vm.Var(vm.Sym{Obj: l.Counter}).Sub(l.From).Scale(new(big.Rat).Inv(l.Step)))
+		}
+	}
+	return t
+}
+
+// argText names w's argument by the call argument it is, plus a
+// constant: binomCoeff(N-K, n-k) breaks from N-K = 171. It returns the
+// argument's text and the value at which w breaks.
+func (fc *fnCtx) argText(res *vm.Result, w weak) (string, *big.Rat, bool) {
+	call, ok := w.call.(*ast.CallExpr)
+	if !ok {
+		return "", nil, false
+	}
+	for _, a := range call.Args {
+		x, ok := res.Values[a].Affine()
+		if !ok {
+			continue
+		}
+		if d := w.arg.Sub(fc.tripsAsCounters(res, x)); d.IsConst() {
+			return src(fc.stripConv(a)), new(big.Rat).Sub(w.bad, d.C), true
+		}
+	}
+	return "", nil, false
+}
+
+// checksNonFinite reports whether the function tests a variable that
+// root reads with math.IsInf or math.IsNaN: code that handles the
+// helper's +Inf or NaN itself (falling back to a log form, say) is not
+// judged on the value alone.
+func (fc *fnCtx) checksNonFinite(root ast.Expr) bool {
+	c := fc.c
+	tested := make(map[types.Object]bool)
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if call, ok := n.(*ast.CallExpr); ok && (c.isMathFunc(call, "IsInf") || c.isMathFunc(call, "IsNaN")) && len(call.Args) > 0 {
+			if obj := c.objOf(fc.stripConv(call.Args[0])); obj != nil {
+				tested[obj] = true
+			}
+		}
+		return true
+	})
+	if len(tested) == 0 {
+		return false
+	}
+	found := false
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && tested[c.pass.TypesInfo.Uses[id]] {
+			found = true
+		}
+		return !found
+	})
+	return found
+}

@@ -1,0 +1,138 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+)
+
+// checkLoopMultinomial reports a multinomial coefficient accumulated in
+// a loop over the parts, in any loop form (a list, a slice, a channel):
+//
+//	for _, a := range parts {
+//		sum += a
+//		den *= fact(a)
+//	}
+//	return fact(sum) / den
+//
+// computes (Σaᵢ)!/Π aᵢ! (DLMF 26.4.2, from memory), which fits wherever
+// one part holds nearly all of the sum, while fact(sum) breaks from the
+// factorial's first bad argument on: every sum past it gives ±Inf, NaN
+// or a wrapped value. The value model has no symbol for a product over
+// the parts, so the shape is read here: one loop adds each part to the
+// sum and multiplies the factorial of the same part into the divisor,
+// and the root divides the factorial of the sum by the divisor.
+func (fc *fnCtx) checkLoopMultinomial(root ast.Expr) {
+	c := fc.c
+	b, ok := fc.stripConv(root).(*ast.BinaryExpr)
+	if !ok || b.Op != token.QUO || c.reportedWithin(root) {
+		return
+	}
+	num, ok := fc.stripConv(b.X).(*ast.CallExpr)
+	if !ok {
+		return
+	}
+	ff := c.factOf(c.calleeOf(num))
+	if ff == nil || ff.Safe || kindOfName(ff.Kind) != kindFactorial || ff.Offset != 0 || ff.Param >= len(num.Args) {
+		return
+	}
+	sum := c.objOf(fc.stripConv(num.Args[ff.Param]))
+	den := c.objOf(fc.stripConv(b.Y))
+	if sum == nil || den == nil || sum == den {
+		return
+	}
+	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(root))
+	if !ok {
+		return
+	}
+	loop := fc.partsLoop(sum, den, root.Pos())
+	if loop == nil {
+		return
+	}
+	first := ff.FirstBad
+	r := fc.rangeOf(fc.stripConv(num.Args[ff.Param]))
+	if r.IsEmpty() || r.Hi < first {
+		return
+	}
+	name := "the function literal"
+	if d, ok := fc.node.(*ast.FuncDecl); ok {
+		name = d.Name.Name
+	}
+	clause, definite := verdict(sum.Name(), r, first)
+	breaks := verb(t)
+	msg := fmt.Sprintf("%s computes the multinomial coefficient (Σ parts)!/Π part! as %s over the loop's parts in %s, which fits where %s already %s from %s = %d%s",
+		name, src(root), t.typeName(), src(num), breaks, sum.Name(), first, clause)
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: c.relatedDef(c.calleeOf(num).Name(), c.calleeOf(num).Pos())})
+}
+
+// partsLoop returns the last loop before pos whose body adds a part to
+// sum (sum += x) and multiplies the divisor by the factorial of the same
+// part (den *= fact(x), with the factorial of num's kind), and assigns
+// neither otherwise; nil when there is none.
+func (fc *fnCtx) partsLoop(sum, den types.Object, pos token.Pos) ast.Stmt {
+	c := fc.c
+	var found ast.Stmt
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ForStmt, *ast.RangeStmt:
+		default:
+			return true
+		}
+		if n.End() > pos {
+			return false
+		}
+		var body *ast.BlockStmt
+		switch l := n.(type) {
+		case *ast.ForStmt:
+			body = l.Body
+		case *ast.RangeStmt:
+			body = l.Body
+		}
+		var added, multiplied []string
+		other := false
+		ast.Inspect(body, func(m ast.Node) bool {
+			switch s := m.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.AssignStmt:
+				for i, l := range s.Lhs {
+					obj := c.objOf(l)
+					if obj != sum && obj != den {
+						continue
+					}
+					switch {
+					case obj == sum && s.Tok == token.ADD_ASSIGN && len(s.Rhs) == len(s.Lhs):
+						added = append(added, src(fc.stripConv(s.Rhs[i])))
+					case obj == den && s.Tok == token.MUL_ASSIGN && len(s.Rhs) == len(s.Lhs):
+						call, ok := fc.stripConv(s.Rhs[i]).(*ast.CallExpr)
+						if !ok {
+							other = true
+							continue
+						}
+						ff := c.factOf(c.calleeOf(call))
+						if ff == nil || kindOfName(ff.Kind) != kindFactorial || ff.Offset != 0 || ff.Param >= len(call.Args) {
+							other = true
+							continue
+						}
+						multiplied = append(multiplied, src(fc.stripConv(call.Args[ff.Param])))
+					default:
+						other = true
+					}
+				}
+			case *ast.IncDecStmt:
+				if obj := c.objOf(s.X); obj == sum || obj == den {
+					other = true
+				}
+			}
+			return true
+		})
+		if !other && len(added) == 1 && len(multiplied) == 1 && added[0] == multiplied[0] {
+			found = n.(ast.Stmt)
+		}
+		return true
+	})
+	return found
+}

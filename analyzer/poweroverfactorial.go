@@ -1,0 +1,137 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"math"
+
+	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
+)
+
+// The power-over-factorial category: x^k/k! terms (Poisson, Erlang,
+// Taylor) whose power and factorial overflow separately.
+
+// checkPowOverFactorial judges x^k/k! (with or without e^(−λ)): Poisson
+// probabilities, Erlang B and C terms, Taylor-series terms. The term is
+// small, but k! and x^k are computed separately and each overflows on
+// its own: past k! the term is 0, past both it is NaN.
+func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
+	var pow, fac, ex factor
+	pows, exps := 0, 0
+	for _, f := range p.num {
+		switch {
+		case f.math == "Pow":
+			pow, pows = f, pows+1
+		case f.math == "Exp":
+			ex, exps = f, exps+1
+		}
+	}
+	for _, f := range p.den {
+		if f.kind != kindNone {
+			fac = f
+		}
+	}
+	if fac.kind != kindFactorial && fac.kind != kindDouble {
+		return
+	}
+	first := firstBadOf(fac.kind, fac.t) - fac.off
+	j := fc.judge(fac.arg, first)
+	facSafe := (fac.fact != nil && fac.fact.Safe) || j.silent
+	powText, powSafe := fc.powerLimit(pow)
+	if facSafe && powSafe {
+		return
+	}
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	exact := fac.kind == kindFactorial && fac.off == 0 && p.other == 0 && pows == 1 && exps <= 1 &&
+		len(p.num) == pows+exps && len(p.den) == 1 && fc.sameInt(pow.arg2, fac.arg)
+	var what string
+	switch {
+	case exact && exps == 0:
+		// The code's own names: a^c/c! for math.Pow(a, float64(c)) /
+		// factorial(c), not a textbook x^k/k!.
+		what = fmt.Sprintf("power-over-factorial term %s/%s", powerText(fc, pow), bang(fac.arg, fac.off))
+		m.Shape, m.Args = fixes.ShapePowOverFactorial, []ast.Expr{pow.arg, pow.arg2}
+	case exact && fc.negated(ex.arg, pow.arg):
+		what = fmt.Sprintf("Poisson-style term %s·e^(−%s)/%s", powerText(fc, pow), atom(pow.arg), bang(fac.arg, fac.off))
+		m.Shape, m.Args = fixes.ShapePoisson, []ast.Expr{pow.arg2, pow.arg}
+	default:
+		// Not the shape as written (x^(k+1)/k!, e^(−2λ), an extra
+		// factor): name what the code computes instead.
+		den := bang(fac.arg, fac.off)
+		if fac.kind == kindDouble {
+			den += "!"
+		}
+		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), den)
+	}
+	var msg, clause string
+	definite := false
+	if !facSafe {
+		clause, definite = j.clause, j.definite
+		msg = fmt.Sprintf("%s in %s: the divisor %s %s for %s ≥ %d (%s), after which the term is 0 or NaN although its true value is small",
+			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
+		if powText != "" {
+			msg += "; " + powText
+		}
+	} else {
+		msg = fmt.Sprintf("%s in %s: %s", what, pow.t.typeName(), powText)
+	}
+	fc.report(finding{node: root, cat: catPowOverFac, definite: definite, msg: msg + clause,
+		related: fc.c.relatedDef(fac.fn.Name(), fac.fn.Pos()), match: p.fix(m)})
+}
+
+// powerLimit describes where math.Pow(x, k) overflows when x is a
+// constant; with x unknown nothing is claimed and the power counts as
+// safe.
+func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
+	x, ok := fc.floatConst(pow.arg)
+	if !ok || math.Abs(x) <= 1 {
+		return "", true
+	}
+	first := thresholds.PowerFirstBad(pow.t.Num, x)
+	if fc.judge(fc.stripConv(pow.arg2), first).silent {
+		return "", true
+	}
+	return fmt.Sprintf("math.Pow(%s, %s) %s for %s ≥ %d", src(pow.arg), src(pow.arg2), verb(pow.t), src(fc.stripConv(pow.arg2)), first), false
+}
+
+// powerText renders math.Pow(x, e) as x^e, with the exponent's
+// conversion dropped.
+func powerText(fc *fnCtx, pow factor) string {
+	return atom(pow.arg) + "^" + atom(fc.stripConv(pow.arg2))
+}
+
+// atom renders e for a place where an operator binds tightly, as the
+// base or exponent of x^k: in parentheses unless it is a name, a
+// selector, a literal or a call.
+func atom(e ast.Expr) string {
+	switch ast.Unparen(e).(type) {
+	case *ast.Ident, *ast.BasicLit, *ast.SelectorExpr, *ast.CallExpr:
+		return src(ast.Unparen(e))
+	}
+	return "(" + src(e) + ")"
+}
+
+// sameInt reports whether the integer expressions a and b (conversions
+// aside) have the same linear form: the exponent and the factorial of
+// x^k/k! must be one k.
+func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
+	la, ok1 := fc.linear(a)
+	lb, ok2 := fc.linear(b)
+	return ok1 && ok2 && la.equal(lb)
+}
+
+// negated reports whether e is −x: the exponent of e^(−λ) beside λ^k.
+func (fc *fnCtx) negated(e, x ast.Expr) bool {
+	u, ok := ast.Unparen(e).(*ast.UnaryExpr)
+	if !ok || u.Op != token.SUB {
+		return false
+	}
+	a, ok1 := fc.affineOf(u.X, 0)
+	b, ok2 := fc.affineOf(x, 0)
+	if !ok1 || !ok2 || a.a != b.a || a.b != b.b {
+		return false
+	}
+	return a.v == nil && b.v == nil || sameVar(fc, a.v, b.v)
+}

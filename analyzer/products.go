@@ -1,0 +1,228 @@
+package analyzer
+
+import (
+	"go/ast"
+	"go/token"
+	"go/types"
+
+	"github.com/overfact/overfact/fixes"
+)
+
+// Products and ratios of known factors: factorial calls, powers,
+// exponentials and Gamma calls, followed through locals assigned once.
+
+// A factor is one operand of a product or ratio that the analyzer knows:
+// a factorial-valued call, math.Gamma, math.Pow or math.Exp.
+type factor struct {
+	kind facKind // kindFactorial … for calls with a fact; kindNone otherwise
+	math string  // "Gamma", "Pow" or "Exp" for calls of package math
+	call *ast.CallExpr
+	arg  ast.Expr // n of a factorial, x of Gamma, Pow and Exp
+	arg2 ast.Expr // k of a falling factorial or binomial, the exponent of Pow
+	off  int64    // the call's value is (arg+off)!
+	t    numType  // the type the value is computed in
+	fn   *types.Func
+	fact *FactorialFact
+}
+
+// product is a product and quotient of factors; other counts the
+// operands it does not know.
+type product struct {
+	num, den []factor
+	other    int
+	// chained marks a product built over several statements (r :=
+	// fact(n); r /= fact(k); …): no single expression holds its value,
+	// so its finding has no fix.
+	chained bool
+}
+
+// fix returns the match of p's finding, or nil where p has no
+// expression to rewrite.
+func (p *product) fix(m *fixes.Match) *fixes.Match {
+	if p.chained {
+		return nil
+	}
+	return m
+}
+
+// evalProduct splits e into known factors, following local variables
+// that are assigned exactly once.
+func (fc *fnCtx) evalProduct(e ast.Expr) *product {
+	p := new(product)
+	fc.evalInto(p, e, false, 0)
+	return p
+}
+
+func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
+	if depth > maxDepth {
+		p.other++
+		return
+	}
+	e = fc.stripConv(e)
+	switch e := e.(type) {
+	case *ast.BinaryExpr:
+		switch e.Op {
+		case token.MUL:
+			fc.evalInto(p, e.X, den, depth+1)
+			fc.evalInto(p, e.Y, den, depth+1)
+			return
+		case token.QUO:
+			fc.evalInto(p, e.X, den, depth+1)
+			fc.evalInto(p, e.Y, !den, depth+1)
+			return
+		}
+	case *ast.CallExpr:
+		if f, ok := fc.factorOf(e); ok {
+			if den {
+				p.den = append(p.den, f)
+			} else {
+				p.num = append(p.num, f)
+			}
+			return
+		}
+	case *ast.Ident:
+		if al := fc.powLoops[fc.c.objOf(e)]; al != nil && e.Pos() > al.shape.stmt.End() {
+			// The accumulator of a power loop, used after the loop.
+			t, _ := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
+			p.num = append(p.num, factor{math: "Pow", arg: al.mult, arg2: al.count, t: t})
+			return
+		}
+		if def := fc.singleDef(e); def != nil {
+			fc.inlined(def)
+			fc.evalInto(p, def, den, depth+1)
+			return
+		}
+	}
+	p.other++
+}
+
+// factorOf recognises a call as a known factor.
+func (fc *fnCtx) factorOf(call *ast.CallExpr) (factor, bool) {
+	c := fc.c
+	fn := c.calleeOf(call)
+	if fn == nil {
+		return factor{}, false
+	}
+	f := factor{call: call, fn: fn}
+	if fn.Pkg() != nil && fn.Pkg().Path() == "math" {
+		switch fn.Name() {
+		case "Gamma", "Exp":
+			if len(call.Args) != 1 {
+				return f, false
+			}
+			f.math, f.arg = fn.Name(), call.Args[0]
+		case "Pow":
+			if len(call.Args) != 2 {
+				return f, false
+			}
+			f.math, f.arg, f.arg2 = "Pow", call.Args[0], call.Args[1]
+		default:
+			return f, false
+		}
+		f.t, _ = c.numOf(c.pass.TypesInfo.TypeOf(call))
+		return f, true
+	}
+	fact := c.factOf(fn)
+	if fact == nil || fact.Param >= len(call.Args) {
+		return f, false
+	}
+	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(call))
+	if !ok {
+		return f, false
+	}
+	f.kind = kindOfName(fact.Kind)
+	f.arg, f.off, f.t, f.fact = call.Args[fact.Param], fact.Offset, t, fact
+	if fact.Param2 >= 0 && fact.Param2 < len(call.Args) {
+		f.arg2 = call.Args[fact.Param2]
+	}
+	return f, true
+}
+
+func kindOfName(s string) facKind {
+	for k, name := range kindNames {
+		if name == s {
+			return k
+		}
+	}
+	return kindNone
+}
+
+// singleDef returns the one value a local variable is ever given, or nil
+// when it is assigned more than once, in a closure, by address, or is a
+// parameter.
+func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
+	obj := fc.c.objOf(id)
+	if obj == nil || !(fc.node.Pos() <= obj.Pos() && obj.Pos() < fc.node.End()) {
+		return nil
+	}
+	if fc.defs == nil {
+		fc.collectDefs()
+	}
+	defs := fc.defs[obj]
+	if len(defs) != 1 {
+		return nil
+	}
+	return defs[0]
+}
+
+// collectDefs records every value each local variable is given; a nil
+// value stands for a change the analyzer does not follow.
+func (fc *fnCtx) collectDefs() {
+	fc.defs = make(map[types.Object][]ast.Expr)
+	info := fc.c.pass.TypesInfo
+	note := func(lhs ast.Expr, rhs ast.Expr) {
+		if obj := fc.c.objOf(lhs); obj != nil {
+			fc.defs[obj] = append(fc.defs[obj], rhs)
+		}
+	}
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			for i, l := range n.Lhs {
+				if (n.Tok == token.ASSIGN || n.Tok == token.DEFINE) && len(n.Rhs) == len(n.Lhs) {
+					note(l, n.Rhs[i])
+				} else {
+					note(l, nil)
+					note(l, nil)
+				}
+			}
+		case *ast.ValueSpec:
+			for i, name := range n.Names {
+				if obj := info.Defs[name]; obj != nil {
+					if len(n.Values) == len(n.Names) {
+						fc.defs[obj] = append(fc.defs[obj], n.Values[i])
+					} else {
+						fc.defs[obj] = append(fc.defs[obj], nil, nil)
+					}
+				}
+			}
+		case *ast.IncDecStmt:
+			note(n.X, nil)
+			note(n.X, nil)
+		case *ast.UnaryExpr:
+			if n.Op == token.AND {
+				note(n.X, nil)
+				note(n.X, nil)
+			}
+		case *ast.RangeStmt:
+			if n.Key != nil {
+				note(n.Key, nil)
+				note(n.Key, nil)
+			}
+			if n.Value != nil {
+				note(n.Value, nil)
+				note(n.Value, nil)
+			}
+		}
+		return true
+	})
+}
+
+// inlined marks a variable's value as consumed by a larger expression,
+// so that it is not also judged on its own.
+func (fc *fnCtx) inlined(e ast.Expr) {
+	if fc.inl == nil {
+		fc.inl = make(map[ast.Expr]bool)
+	}
+	fc.inl[ast.Unparen(e)] = true
+}

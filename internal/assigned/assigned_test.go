@@ -1,0 +1,95 @@
+package assigned
+
+import (
+	"go/ast"
+	"go/importer"
+	"go/parser"
+	"go/token"
+	"go/types"
+	"sort"
+	"strings"
+	"testing"
+)
+
+// The cases are the ways the Go specification lets a statement change a
+// variable (assignments, IncDec statements, range clauses) and the
+// address operator, after which any statement may.
+const src = `package p
+
+func f(xs []int) {
+	var a, b, c, d, e, g, h, k, u int
+	a = 1
+	b += 2
+	c++
+	for d = range xs {
+	}
+	for _, e = range xs {
+	}
+	p := &g
+	_ = p
+	h, _ = 1, 2
+	for i, v := range xs {
+		_, _ = i, v
+	}
+	func() { k = 1 }()
+	var s struct{ f int }
+	s.f = 1
+	_ = u
+}
+`
+
+func load(t *testing.T) (*types.Info, *ast.FuncDecl) {
+	fset := token.NewFileSet()
+	f, err := parser.ParseFile(fset, "p.go", src, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	info := &types.Info{Defs: map[*ast.Ident]types.Object{}, Uses: map[*ast.Ident]types.Object{}}
+	// The fixture declares variables only to change them: unused ones are
+	// no error here.
+	conf := &types.Config{Importer: importer.Default(), Error: func(error) {}}
+	conf.Check("p", fset, []*ast.File{f}, info)
+	return info, f.Decls[0].(*ast.FuncDecl)
+}
+
+func TestEach(t *testing.T) {
+	info, fn := load(t)
+	seen := map[string]bool{}
+	Each(info, fn.Body, nil, func(v types.Object, _ ast.Node) bool {
+		seen[v.Name()] = true
+		return true
+	})
+	var got []string
+	for n := range seen {
+		got = append(got, n)
+	}
+	sort.Strings(got)
+	// p, s, i and v are declared by := or var and count too: a
+	// declaration sets its variable.
+	if want := "a b c d e g h i k p v"; strings.Join(got, " ") != want {
+		t.Errorf("changed variables = %s, want %s", strings.Join(got, " "), want)
+	}
+}
+
+func TestInWithSkip(t *testing.T) {
+	info, fn := load(t)
+	var k, u types.Object
+	for id, obj := range info.Defs {
+		switch id.Name {
+		case "k":
+			k = obj
+		case "u":
+			u = obj
+		}
+	}
+	if !In(info, fn.Body, k, nil) {
+		t.Error("k, assigned in a closure, not found")
+	}
+	closures := func(n ast.Node) bool { _, ok := n.(*ast.FuncLit); return ok }
+	if In(info, fn.Body, k, closures) {
+		t.Error("k found although closures are skipped")
+	}
+	if In(info, fn.Body, u, nil) {
+		t.Error("u is only read, but was found assigned")
+	}
+}
