@@ -62,6 +62,9 @@ type checker struct {
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
+	// lgWrappers holds the functions of the package that return ln|Γ|
+	// of their argument (see isLgammaCall), found on first use.
+	lgWrappers map[*types.Func]bool
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState

@@ -36,7 +36,7 @@ func testdata(t *testing.T) string {
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
-	"labtables", "raffle",
+	"labtables", "raffle", "lgammadigits", "lgammainteger", "lgammaoverflow",
 }
 
 // TestScenarios runs the analyzer over every scenario package in one

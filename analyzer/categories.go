@@ -17,6 +17,12 @@ const (
 	catGamma      = "gamma-overflow"
 	catLateConv   = "late-conversion"
 	catDirective  = "directive"
+	catLgammaSign = "lgamma-sign"
+	catStirling   = "stirling-approximation"
+
+	catLgammaDigits   = "lgamma-digits"
+	catLgammaInteger  = "lgamma-integer"
+	catLgammaOverflow = "lgamma-overflow"
 
 	definiteSuffix = ".definite"
 )
@@ -44,6 +50,11 @@ var patterns = []struct{ id, title string }{
 	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
 	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},
 	{catLateConv, "A factorial is converted to another type after it has already wrapped or lost exactness."},
+	{catLgammaSign, "math.Exp of a math.Lgamma value whose sign was dropped stands for Γ(x) where Γ(x) can be negative."},
+	{catStirling, "A hand-written Stirling approximation stands for n!: it is off by about 1/(12n) relative, and its power n^n can overflow before n! does."},
+	{catLgammaDigits, "math.Exp of a sum or difference of log-gamma values (a binomial, Beta or gamma ratio) loses more digits than the tolerance allows over the argument's range."},
+	{catLgammaInteger, "An exponential of log-gamma values, or math.Gamma, is converted or rounded to an integer that comes out wrong."},
+	{catLgammaOverflow, "math.Exp of a log-gamma value is +Inf where the expression it feeds is finite."},
 }
 
 // Categories returns every category the analyzer can emit: each pattern in

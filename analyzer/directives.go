@@ -16,12 +16,20 @@ import (
 // comment "//overfact:verb args" with no space after the slashes.
 const directivePrefix = "//overfact:"
 
-// directives are the allow and assume directives of one file.
+// directives are the allow, approx and assume directives of one file.
 type directives struct {
-	allowLines  map[int]bool
-	allowFuncs  []*ast.FuncDecl
+	allow       placed
+	approx      placed // the Stirling approximation is meant (stirlingapproximation.go)
 	funcAssumes map[*ast.FuncDecl]map[types.Object]ranges.Interval
 	stmtAssumes []stmtAssume
+}
+
+// placed are the lines and functions a directive with a reason covers:
+// its own line (trailing), the next line (on a line of its own), or the
+// whole function (in its doc comment).
+type placed struct {
+	lines map[int]bool
+	funcs []*ast.FuncDecl
 }
 
 // stmtAssume is a bound declared on the line before a statement; it holds
@@ -85,7 +93,7 @@ func parseAssume(arg string) (name string, iv ranges.Interval, ok bool) {
 // parseDirectives collects the directives of f and reports malformed
 // ones. Generated files are neither reported in nor read.
 func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
-	d := &directives{allowLines: make(map[int]bool), funcAssumes: make(map[*ast.FuncDecl]map[types.Object]ranges.Interval)}
+	d := &directives{allow: placed{lines: make(map[int]bool)}, approx: placed{lines: make(map[int]bool)}, funcAssumes: make(map[*ast.FuncDecl]map[types.Object]ranges.Interval)}
 	if generated {
 		return d
 	}
@@ -106,7 +114,9 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 			fn := docOf[cg]
 			switch verb {
 			case "allow":
-				c.parseAllow(d, cm, arg, fn)
+				c.parsePlaced(&d.allow, cm, arg, fn, "//overfact:allow needs a reason, as in //overfact:allow n is at most 12 here")
+			case "approx":
+				c.parsePlaced(&d.approx, cm, arg, fn, "//overfact:approx needs a reason, as in //overfact:approx a rough size estimate is enough here")
 			case "assume":
 				if fn != nil {
 					c.parseFuncAssume(d, cm, arg, fn)
@@ -116,7 +126,7 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 					pending = append(pending, cm)
 				}
 			default:
-				c.reportDirective(cm.Pos(), cm.End(), "unknown directive //overfact:"+verb+" (known: allow, assume)")
+				c.reportDirective(cm.Pos(), cm.End(), "unknown directive //overfact:"+verb+" (known: allow, approx, assume)")
 			}
 		}
 	}
@@ -126,20 +136,22 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 	return d
 }
 
-func (c *checker) parseAllow(d *directives, cm *ast.Comment, reason string, fn *ast.FuncDecl) {
+// parsePlaced records a directive that needs a reason (missing is the
+// finding when it has none) and covers what its place says.
+func (c *checker) parsePlaced(p *placed, cm *ast.Comment, reason string, fn *ast.FuncDecl, missing string) {
 	if reason == "" {
-		c.reportDirective(cm.Pos(), cm.End(), "//overfact:allow needs a reason, as in //overfact:allow n is at most 12 here")
+		c.reportDirective(cm.Pos(), cm.End(), missing)
 		return
 	}
 	if fn != nil {
-		d.allowFuncs = append(d.allowFuncs, fn)
+		p.funcs = append(p.funcs, fn)
 		return
 	}
 	line := c.pass.Fset.Position(cm.Pos()).Line
 	if c.trailing(cm) {
-		d.allowLines[line] = true
+		p.lines[line] = true
 	} else {
-		d.allowLines[line+1] = true
+		p.lines[line+1] = true
 	}
 }
 
@@ -255,10 +267,15 @@ func (c *checker) trailing(cm *ast.Comment) bool {
 
 // allowed reports whether an allow directive covers pos.
 func (d *directives) allowed(fset *token.FileSet, pos token.Pos) bool {
-	if d.allowLines[fset.Position(pos).Line] {
+	return d.allow.covers(fset, pos)
+}
+
+// covers reports whether one of the directives covers pos.
+func (p *placed) covers(fset *token.FileSet, pos token.Pos) bool {
+	if p.lines[fset.Position(pos).Line] {
 		return true
 	}
-	for _, f := range d.allowFuncs {
+	for _, f := range p.funcs {
 		if f.Pos() <= pos && pos < f.End() {
 			return true
 		}

@@ -35,6 +35,15 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall {
 		fc.checkModelCalls()
 	}
+	if s.logCall {
+		fc.checkLgammaSign()
+	}
+	if s.logCall || s.knownCall {
+		fc.checkStirling()
+	}
+	if s.knownCall {
+		fc.checkLogGamma()
+	}
 }
 
 // noteLoop reports a product loop, or records a power loop for the

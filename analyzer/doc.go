@@ -24,6 +24,18 @@
 // math.Gamma values, math.Gamma calls past its overflow point, and
 // conversions that come after the factorial has already broken.
 //
+// It also reports the traps of hand-written log-gamma code: math.Exp of
+// log-gamma differences whose error bound passes a tolerance over the
+// arguments' range (flag -lgamma-tolerance, 1e-12 relative by default),
+// integers read back from such exponentials or from math.Gamma that come
+// out wrong (5! as 119), and exponentials of log-gamma values that are
+// +Inf where the expression they feed is finite.
+//
+// In log space it reports math.Exp of math.Lgamma values whose sign
+// was dropped where Γ can be negative, and hand-written Stirling
+// approximations standing for n! (about 1/(12n) off; n^n overflows
+// before n! does).
+//
 // A function whose result is a factorial of a parameter carries a fact,
 // so its calls are known factorial values in importing packages too. A
 // factorial function that bounds its own parameter is safe, and neither
@@ -54,6 +66,11 @@
 // declares a bound (<, <=, >, >=, ==, or A <= n <= B) that the analyzer
 // cannot see: in a function's doc comment for a parameter at entry, or
 // on the line before a statement for a variable within that statement.
+//
+//	//overfact:approx <reason>
+//
+// says, placed like allow, that a Stirling approximation is meant: its
+// error is not reported there.
 // Malformed directives and unknown verbs are reported.
 //
 // A factorial of a type parameter is judged by the type in its

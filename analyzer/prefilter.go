@@ -16,6 +16,7 @@ type scan struct {
 	callMul   bool // a multiplication with a call operand: recursion may be here
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
 	localCall bool // a call of a function of this package, which may become factorial-valued
+	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -69,6 +70,9 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 			}
 			if !cur.knownCall {
 				cur.knownCall = c.knownCallee(n)
+			}
+			if !cur.logCall {
+				cur.logCall = c.isMathFunc(n, "Lgamma") || c.isMathFunc(n, "Log")
 			}
 			if fn := c.calleeOf(n); fn != nil && fn.Pkg() == c.pass.Pkg {
 				cur.localCall = true
@@ -127,4 +131,4 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall }
+func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall || s.logCall }

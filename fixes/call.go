@@ -112,6 +112,13 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 	if err := b.checkShape(); err != nil {
 		return err
 	}
+	return b.replaceByCall(name, args)
+}
+
+// replaceByCall replaces the match's node with the call of the helper
+// name on args, deletes the definitions it absorbed and words the fix's
+// message.
+func (b *builder) replaceByCall(name string, args []ast.Expr) error {
 	text, err := b.call(name, args, b.m.Result)
 	if err != nil {
 		return err

@@ -137,19 +137,9 @@ func within(es []ast.Expr, regions []ast.Node) bool {
 // call sees the values the definitions saw.
 func (b *builder) absorbable() (map[types.Object]ast.Stmt, error) {
 	node := b.m.Node
-	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
-	var list []ast.Stmt
-	at := -1
-	for i := 1; i < len(path) && at < 0; i++ {
-		list = stmtList(path[i])
-		for j, s := range list {
-			if s == path[i-1] {
-				at = j
-			}
-		}
-	}
-	if at < 0 {
-		return nil, fmt.Errorf("the match's expression is not in a statement list")
+	list, at, err := b.enclosingList(node)
+	if err != nil {
+		return nil, err
 	}
 	defs := make(map[types.Object]ast.Stmt)
 	first := at
@@ -173,6 +163,21 @@ func (b *builder) absorbable() (map[types.Object]ast.Stmt, error) {
 		}
 	}
 	return defs, nil
+}
+
+// enclosingList returns the statement list that holds node and the
+// index of the statement there that holds it.
+func (b *builder) enclosingList(node ast.Node) ([]ast.Stmt, int, error) {
+	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
+	for i := 1; i < len(path); i++ {
+		list := stmtList(path[i])
+		for j, s := range list {
+			if s == path[i-1] {
+				return list, j, nil
+			}
+		}
+	}
+	return nil, -1, fmt.Errorf("the match's expression is not in a statement list")
 }
 
 // definedVar returns the variable s defines, if s is v := e or var v = e.

@@ -35,6 +35,8 @@ func Factorial(n int) float64                               { panic("") }
 func MustFactorialInt64(n int64) int64                      { panic("") }
 func MustFactorialUint64(n uint64) uint64                   { panic("") }
 func Beta(a, b float64) float64                             { panic("") }
+func LogFactorial(n int) float64                            { panic("") }
+func LogGamma(x float64) float64                            { panic("") }
 `
 
 // fmtAPI stands in for package fmt when a range guard adds the import to a

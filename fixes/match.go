@@ -39,6 +39,14 @@ const (
 	ShapeSeriesTerm             // num/acc, acc = k! kept by the loop   Node: the term; Acc, Loop: the running factorial (the fixer reads num itself)
 	ShapeModelBinomLoop         // a loop the value model reads as C(n,k) Args: n, k (the analyzer vouches for the trip count and the domain; see buildModelLoop)
 	ShapeNegBinomialPMF         // C(f+s-1,f) p^s (1-p)^f              Args: f, s, p
+	ShapeLgammaSign             // math.Exp(v ± …) of math.Lgamma values whose signs are dropped  Node: the Exp call; Args: the blank or unread sign identifiers
+	ShapeStirling               // √(2πn)(n/e)^n standing for n!      Node: the expression; Args: n (the analyzer vouches for the form)
+	ShapeLogStirling            // (n+½)ln n − n + ½ln 2π for ln n!    Node: the expression; Args: n (the analyzer vouches for the form)
+	ShapeExpChoose              // exp(lg(n+1) − lg(k+1) − lg(n−k+1)), as a product of exps too  Args: n, k (lg: a function the analyzer vouches returns ln|Γ|)
+	ShapeExpBeta                // exp(lg(a) + lg(b) − lg(a+b))        Args: a, b
+	ShapeExpGammaRatio          // exp(lg(a) − lg(b))                  Args: a, b
+	ShapeExpFactorial           // exp(lg(n+1)) or math.Gamma(n+1), under a conversion or rounding  Args: n
+	ShapeExpBinomialPMF         // exp(lg(n+1) − lg(k+1) − lg(n−k+1) + k·ln p + (n−k)·ln(1−p)), powers as factors too  Args: k, n, p
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

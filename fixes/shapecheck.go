@@ -158,21 +158,33 @@ func (b *builder) mathCall(name string, forms ...linear) factorPattern {
 // checkShape checks the expression of a ratio or term match against its
 // shape, with the operands read as linear forms.
 func (b *builder) checkShape() error {
+	if logFormShape(b.m.Shape) {
+		return b.checkLogForm()
+	}
 	row, ok := shapes[b.m.Shape]
 	if !ok || row.factors == nil || row.operands != anyOperands && len(b.m.Args) != row.operands || len(b.m.Args) == 0 {
 		return fmt.Errorf("shape %d with %d operands has no check", b.m.Shape, len(b.m.Args))
 	}
-	ops := make([]linear, len(b.m.Args))
-	for i, a := range b.m.Args {
-		l, ok := b.linearOf(a)
-		if !ok {
-			return fmt.Errorf("operand %s is not a sum of variables and constants", b.text(a))
-		}
-		ops[i] = l
+	ops, err := b.operandForms()
+	if err != nil {
+		return err
 	}
 	num, den, alt := row.factors(b, ops)
 	if b.shapeMatches(num, den) || alt != nil && b.shapeMatches(alt[0], alt[1]) {
 		return nil
 	}
 	return fmt.Errorf("the expression is not the %s of its operands", row.name)
+}
+
+// operandForms reads the match's operands as linear forms.
+func (b *builder) operandForms() ([]linear, error) {
+	ops := make([]linear, len(b.m.Args))
+	for i, a := range b.m.Args {
+		l, ok := b.linearOf(a)
+		if !ok {
+			return nil, fmt.Errorf("operand %s is not a sum of variables and constants", b.text(a))
+		}
+		ops[i] = l
+	}
+	return ops, nil
 }

@@ -61,6 +61,14 @@ func init() {
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},
 		ShapeNegBinomialPMF:   {"negative binomial probability", buildTerm, family{float: "NegativeBinomialPMF"}, 3, negBinomialPMFFactors},
+		ShapeLgammaSign:       {"exponential of signed log-gamma values", buildLgammaSign, family{}, 0, nil},
+		ShapeStirling:         {"Stirling approximation", buildStirling, family{}, 0, nil},
+		ShapeLogStirling:      {"log Stirling approximation", buildStirling, family{}, 0, nil},
+		ShapeExpChoose:        {"exponential of a log-gamma binomial", buildExpLgamma, chooseHelpers, 0, nil},
+		ShapeExpBeta:          {"exponential of a log-gamma beta function", buildExpLgamma, family{float: "Beta"}, 0, nil},
+		ShapeExpGammaRatio:    {"exponential of a log-gamma ratio", buildExpLgamma, family{float: "GammaRatio"}, 0, nil},
+		ShapeExpFactorial:     {"factorial read back from an exponential", buildExpLgamma, factorialHelpers, 0, nil},
+		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 	}
 }
 

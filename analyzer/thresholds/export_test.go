@@ -8,13 +8,6 @@ import (
 // Test-only exports: functions the tests check against math/big and
 // DLMF that the analyzer does not call, kept out of the package API.
 
-// MaxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
-// 2^Bits−1 for integer types, the largest finite value for floats. The
-// result is a fresh copy the caller may modify.
-func (t Num) MaxInt() *big.Int {
-	return new(big.Int).Set(t.maxInt())
-}
-
 // BinomialFits reports whether the true C(n, k) fits t. C(n, k) is 0,
 // and fits, when k < 0 or k > n.
 func BinomialFits(t Num, n, k int64) bool {

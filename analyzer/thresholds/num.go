@@ -92,6 +92,13 @@ func fromKind(k types.BasicKind, sizes types.Sizes) (Num, bool) {
 // String returns the type's name.
 func (t Num) String() string { return t.Name }
 
+// MaxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or
+// 2^Bits−1 for integer types, the largest finite value for floats. The
+// result is a fresh copy the caller may modify.
+func (t Num) MaxInt() *big.Int {
+	return new(big.Int).Set(t.maxInt())
+}
+
 var maxCache sync.Map // Num -> *big.Int
 
 // maxInt returns the largest value of t as an integer: 2^(Bits−1)−1 or

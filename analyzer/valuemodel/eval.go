@@ -16,6 +16,10 @@ type Options struct {
 	// function with a factorial fact, from the values of its arguments
 	// (nil where unknown); nil when the call is not known.
 	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// LogGamma reports whether a call of one argument returns ln|Γ| of
+	// it, as a function that returns the first result of math.Lgamma
+	// does; nil when no such function is known.
+	LogGamma func(call *ast.CallExpr) bool
 	// MaxNodes caps the syntax nodes evaluated in one function
 	// (DefaultMaxNodes when 0); past it Result.Capped is set and the
 	// rest of the function is unknown.
@@ -34,6 +38,10 @@ type Result struct {
 	// the function's variables; inside a loop, in terms of the loop's
 	// trip index too.
 	Values map[ast.Expr]*Term
+	// Logs holds, for each expression evaluated whose value is the
+	// logarithm of a term (ln Γ from math.Lgamma, math.Log, their sums
+	// and multiples), that term.
+	Logs map[ast.Expr]*Term
 	// Exprs holds, for each variable met, an expression that reads it.
 	Exprs map[Sym]ast.Expr
 	// Capped reports that the evaluation stopped at Options.MaxNodes.
@@ -122,10 +130,10 @@ type evaluator struct {
 // *ast.FuncLit, and summarises its loops. It never panics on partially
 // typed code: what it cannot type is unknown.
 func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
-	res = &Result{Values: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
+	res = &Result{Values: make(map[ast.Expr]*Term), Logs: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
 	defer func() {
 		if r := recover(); r != nil {
-			res = &Result{Values: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
+			res = &Result{Values: map[ast.Expr]*Term{}, Logs: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
 		}
 	}()
 	if opts.MaxNodes <= 0 {
@@ -484,8 +492,12 @@ func (e *evaluator) eval(x ast.Expr, en env) *value {
 		return nil
 	}
 	v := e.evalRaw(x, en)
-	if v != nil && !v.log && v.t != nil {
-		e.res.Values[x] = v.t
+	if v != nil && v.t != nil {
+		if v.log {
+			e.res.Logs[x] = v.t
+		} else {
+			e.res.Values[x] = v.t
+		}
 	}
 	return v
 }
@@ -604,6 +616,8 @@ func (e *evaluator) binary(op token.Token, a, b *value) *value {
 			return &value{t: ExpOf(oa).Div(l.t), log: true}
 		case op == token.MUL:
 			return &value{t: logScale(l.t, oa), log: true}
+		case op == token.QUO && a.log && oa.IsConst() && oa.c().Sign() != 0:
+			return &value{t: l.t.PowRat(new(big.Rat).Inv(oa.c())), log: true}
 		}
 		return nil
 	}
@@ -638,7 +652,7 @@ func logScale(t *Term, k Affine) *Term {
 		p := t.Pows[0]
 		return PowOf(p.Base, k.Scale(p.Exp.c()))
 	}
-	return nil
+	return t.PowAffine(k)
 }
 
 // call evaluates conversions, the functions of package math the
@@ -671,6 +685,8 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		if a, ok := affineOf(args[0]); ok {
 			return &value{t: ExpOf(a)}
 		}
+	case e.isMath(x, "Sqrt") && one && !args[0].log:
+		return &value{t: args[0].t.PowRat(big.NewRat(1, 2))}
 	case e.isMath(x, "Log") && one:
 		if !args[0].log {
 			return &value{t: args[0].t, log: true}
@@ -685,6 +701,10 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		if !args[0].log {
 			return &value{t: logScale(args[0].t, k)}
+		}
+	case e.opts.LogGamma != nil && one && e.opts.LogGamma(x):
+		if a, ok := affineOf(args[0]); ok {
+			return &value{t: GammaOf(a), log: true}
 		}
 	case e.opts.Callee != nil:
 		ts := make([]*Term, len(args))

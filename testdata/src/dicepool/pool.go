@@ -92,7 +92,7 @@ func ExactlyLog(n, k, p float64) float64 {
 	a, _ := math.Lgamma(n + 1)
 	b, _ := math.Lgamma(k + 1)
 	c, _ := math.Lgamma(n - k + 1)
-	coef := math.Exp(a - b - c)
+	coef := math.Exp(a - b - c) // want `math.Exp of log-gamma values computes C\(n, k\) from 3 log-gamma values .* from n = 200 with k between 1 and n`
 	return coef * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030`
 }
 
@@ -101,7 +101,7 @@ func ExactlyInline(n, k, p float64) float64 {
 	a, _ := math.Lgamma(n + 1)
 	b, _ := math.Lgamma(k + 1)
 	c, _ := math.Lgamma(n - k + 1)
-	return math.Exp(a-b-c) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030`
+	return math.Exp(a-b-c) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030` `computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) from 3 log-gamma values`
 }
 
 // ExactlyStable stays in log space to the end.
@@ -109,7 +109,7 @@ func ExactlyStable(n, k, p float64) float64 {
 	a, _ := math.Lgamma(n + 1)
 	b, _ := math.Lgamma(k + 1)
 	c, _ := math.Lgamma(n - k + 1)
-	return math.Exp(a - b - c + k*math.Log(p) + (n-k)*math.Log(1-p))
+	return math.Exp(a - b - c + k*math.Log(p) + (n-k)*math.Log(1-p)) // want `computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) from 3 log-gamma values .* from n = 200`
 }
 
 // ExactlyTable serves tables of at most 1000 dice.
