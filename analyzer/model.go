@@ -4,12 +4,14 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"go/types"
 	"math"
 	"math/big"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // modelMaxNodes caps the syntax nodes the value model evaluates in one
@@ -91,11 +93,13 @@ func (fc *fnCtx) checkModel() {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
 				break
 			}
 		}
 	}
+	fc.modelSeries(res)
+	fc.modelCountRatio(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}
@@ -186,11 +190,52 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 			in = res.Exprs[s]
 		}
 		if in != nil {
-			return fc.rangeOf(in)
+			return fc.rangeOf(in).Meet(fc.lenLocalRange(s, at))
 		}
 		return ranges.Top()
 	}
 	return fc.entryRange(s.Obj, at)
+}
+
+// lenLocalRange is the range at at of the locals the function defines
+// once as len(x), for the model's variable len(x): a bound the code or
+// a directive puts on n := len(batch) bounds len(batch) too. Top for
+// any other variable.
+func (fc *fnCtx) lenLocalRange(s vm.Sym, at ast.Node) ranges.Interval {
+	r := ranges.Top()
+	if _, ok := s.Obj.(*types.Builtin); !ok || s.Field == nil {
+		return r
+	}
+	info := fc.c.pass.TypesInfo
+	writes := make(map[types.Object]int)
+	assigned.Each(info, fc.node, nil, func(v types.Object, _ ast.Node) bool {
+		writes[v]++
+		return true
+	})
+	ast.Inspect(fc.node, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || as.Tok != token.DEFINE || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+			return true
+		}
+		call, ok := ast.Unparen(as.Rhs[0]).(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || fc.c.objOf(call.Args[0]) != s.Field {
+			return true
+		}
+		if b, ok := info.Uses[calleeIdent(call)].(*types.Builtin); !ok || b.Name() != "len" {
+			return true
+		}
+		if v := fc.c.objOf(as.Lhs[0]); v != nil && writes[v] == 1 {
+			r = r.Meet(fc.entryRange(v, at))
+		}
+		return true
+	})
+	return r
+}
+
+// calleeIdent is the identifier a call names as its function, or nil.
+func calleeIdent(call *ast.CallExpr) *ast.Ident {
+	id, _ := ast.Unparen(call.Fun).(*ast.Ident)
+	return id
 }
 
 // counterArg rewrites a form in the trip index t as a form in the
@@ -325,7 +370,7 @@ func (mc *modelCtx) runningFactorial(a *vm.Acc, t numType) bool {
 	}
 	msg := fmt.Sprintf("running factorial %s computes %s inside the sum that divides by it: in %s it %s%s (%s), after which each term is 0 or NaN although the terms are finite; the loop reaches that trip for %s ≥ %d",
 		a.Obj.Name(), vm.Recognise(vm.Factorial(arg)), t.typeName(), verb(t), at, largestFits(kindFactorial, t), v.Name(), first)
-	fc.report(finding{node: l.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
+	fc.report(finding{node: l.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause, match: fc.runningTermFix(mc.res, l, a)})
 	return true
 }
 
@@ -657,7 +702,7 @@ func (fc *fnCtx) modelWorth() bool {
 		}
 		return !open
 	})
-	return open || lgamma && pows >= 2
+	return open || lgamma && pows >= 2 || lgamma && fc.divides()
 }
 
 // fallingLoop reports an accumulator that ends as n!/(n−k)! of a loop

@@ -47,6 +47,7 @@ const (
 	ShapeExpGammaRatio          // exp(lg(a) − lg(b))                  Args: a, b
 	ShapeExpFactorial           // exp(lg(n+1)) or math.Gamma(n+1), under a conversion or rounding  Args: n
 	ShapeExpBinomialPMF         // exp(lg(n+1) − lg(k+1) − lg(n−k+1) + k·ln p + (n−k)·ln(1−p)), powers as factors too  Args: k, n, p
+	ShapeModelSeriesTerm        // num/acc in a loop, acc = k! there     Node: the quotient; Args: x, k of math.Pow(x, k) in num; Extra[0]: that call; Acc, Loop (the analyzer vouches for acc's value; see buildModelSeriesTerm)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

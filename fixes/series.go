@@ -97,13 +97,7 @@ func buildSeriesTerm(b *builder) error {
 	for _, st := range s.stmts {
 		b.deleteStmt(st)
 	}
-	for st, rest := range inits {
-		if rest == "" {
-			b.deleteStmt(st)
-		} else {
-			b.replace(st.Pos(), st.End(), rest)
-		}
-	}
+	b.applyInits(inits)
 	names := make([]string, len(s.drop))
 	for i, v := range s.drop {
 		names[i] = v.Name()

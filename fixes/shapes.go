@@ -69,6 +69,7 @@ func init() {
 		ShapeExpGammaRatio:    {"exponential of a log-gamma ratio", buildExpLgamma, family{float: "GammaRatio"}, 0, nil},
 		ShapeExpFactorial:     {"factorial read back from an exponential", buildExpLgamma, factorialHelpers, 0, nil},
 		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
+		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
 	}
 }
 

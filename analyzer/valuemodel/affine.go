@@ -9,17 +9,27 @@ import (
 )
 
 // Sym is a variable of the function: a local or parameter (Obj), a
-// numeric field of one (Obj.Field), or the iteration index of a loop
-// (Loop, counting trips from 0).
+// numeric field of one (Obj.Field), the iteration index of a loop
+// (Loop, counting trips from 0), or the value a local got from an
+// assignment the algebra cannot evaluate (Obj with Def, that
+// assignment), which is a variable of its own until the next one, or
+// the number of trips of a loop that runs until a condition of its
+// own (Def alone, the loop), or the length of a slice variable that
+// keeps one length (Obj the builtin len, Field the variable).
 type Sym struct {
 	Obj   types.Object
 	Field types.Object
 	Loop  ast.Node
+	Def   ast.Node
 }
 
 // Name renders the variable as code names it.
 func (s Sym) Name() string {
 	switch {
+	case s.Def != nil && s.Obj == nil:
+		return "trips"
+	case s.isLen():
+		return "len(" + s.Field.Name() + ")"
 	case s.Loop != nil:
 		return "t"
 	case s.Obj == nil:
@@ -46,6 +56,10 @@ func (s Sym) before(t Sym) bool {
 // (a variable and a loop starting there).
 func (s Sym) rank() int {
 	switch {
+	case s.isLen():
+		return 4
+	case s.Def != nil:
+		return 3
 	case s.Loop != nil:
 		return 2
 	case s.Field != nil:
@@ -56,6 +70,12 @@ func (s Sym) rank() int {
 
 func (s Sym) pos() int {
 	switch {
+	case s.Def != nil && s.Obj == nil:
+		return int(s.Def.Pos()) << 21
+	case s.Def != nil:
+		// The assignment first, then the variable among those it
+		// assigns (close together, within 2^20 of one another).
+		return int(s.Def.Pos())<<21 | int(s.Obj.Pos())&(1<<20-1)
 	case s.Loop != nil:
 		return int(s.Loop.Pos()) << 1
 	case s.Obj != nil:
@@ -66,6 +86,12 @@ func (s Sym) pos() int {
 		return p
 	}
 	return 0
+}
+
+// isLen reports whether s is len(Field) of a slice variable.
+func (s Sym) isLen() bool {
+	_, ok := s.Obj.(*types.Builtin)
+	return ok && s.Field != nil
 }
 
 // Lin is one term k·Sym of an affine form.

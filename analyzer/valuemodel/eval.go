@@ -123,7 +123,17 @@ type evaluator struct {
 	nodes  int
 	opaque map[types.Object]bool // assigned by closures or through their address
 	fields map[types.Object]bool // struct variables whose fields are assigned
-	sets   map[types.Object]int  // assignments of each variable, 2 for one in a loop
+	// once holds the locals defined outside every loop and assigned
+	// nowhere else: one whose value the algebra cannot say is a
+	// variable of its own (ki := int(math.Floor(k))), the same at every
+	// read.
+	once map[types.Object]bool
+	// loops is the depth of loop bodies being walked: a value assigned
+	// there changes from trip to trip.
+	loops int
+	// writes counts the assignments of each variable.
+	writes map[types.Object]int
+	sets   map[types.Object]int // assignments of each variable, 2 for one in a loop
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -149,7 +159,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), sets: make(map[types.Object]int)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool), sets: make(map[types.Object]int)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -178,6 +188,8 @@ func (e *evaluator) copyEnv(en env) env {
 // variables whose fields are assigned.
 func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 	inLit, inLoop := 0, 0
+	writes := make(map[types.Object]int)
+	e.writes = writes
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -194,6 +206,14 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
 				e.noteAssign(l, inLit > 0)
+				if id, ok := ast.Unparen(l).(*ast.Ident); ok {
+					if obj := e.info.ObjectOf(id); obj != nil {
+						writes[obj]++
+						if n.Tok == token.DEFINE && inLit == 0 && inLoop == 0 && e.info.Defs[id] != nil {
+							e.once[obj] = true
+						}
+					}
+				}
 				if obj := e.objOf(l); obj != nil {
 					e.sets[obj] += 1 + 2*min(inLoop+inLit, 1)
 				}
@@ -201,6 +221,7 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 		case *ast.IncDecStmt:
 			e.noteAssign(n.X, inLit > 0)
 			if obj := e.objOf(n.X); obj != nil {
+				writes[obj]++
 				e.sets[obj] += 2
 			}
 		case *ast.UnaryExpr:
@@ -211,6 +232,11 @@ func (e *evaluator) scanOpaque(body *ast.BlockStmt) {
 		return true
 	}
 	ast.Inspect(body, visit)
+	for obj := range e.once {
+		if writes[obj] != 1 || e.opaque[obj] {
+			delete(e.once, obj)
+		}
+	}
 }
 
 func (e *evaluator) noteAssign(l ast.Expr, opaque bool) {
@@ -444,7 +470,23 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 			}
 			if e.opaque[obj] || !e.numeric(l) {
 				en[obj] = nil
+				if e.once[obj] && e.loops == 0 {
+					// A struct defined once: its fields read as
+					// variables of their own.
+					delete(en, obj)
+				}
 				continue
+			}
+			switch {
+			case vals[i] != nil || e.loops > 0:
+			case e.once[obj]:
+				// Read from here on as the variable itself.
+				delete(en, obj)
+				continue
+			default:
+				// The value this statement gave it, a variable of
+				// its own until the next assignment.
+				vals[i] = &value{t: FromAffine(Var(Sym{Obj: obj, Def: s}))}
 			}
 			en[obj] = vals[i]
 		}
@@ -668,6 +710,9 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		return v
 	}
+	if v := e.length(x); v != nil {
+		return v
+	}
 	args := make([]*value, len(x.Args))
 	for i, a := range x.Args {
 		args[i] = e.eval(a, en)
@@ -718,4 +763,43 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 	}
 	return nil
+}
+
+// length gives len(x) of a slice variable that keeps one length in the
+// function (a parameter never assigned, or a local defined once, and
+// its address never taken) a variable of its own, Sym{Obj: len, Field:
+// x}; nil for any other call.
+func (e *evaluator) length(call *ast.CallExpr) *value {
+	id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+	if !ok || len(call.Args) != 1 {
+		return nil
+	}
+	b, ok := e.info.Uses[id].(*types.Builtin)
+	if !ok || b.Name() != "len" {
+		return nil
+	}
+	s, ok := e.lenSym(e.objOf(call.Args[0]))
+	if !ok {
+		return nil
+	}
+	if _, ok := e.res.Exprs[s]; !ok {
+		e.res.Exprs[s] = call
+	}
+	return &value{t: FromAffine(Var(s))}
+}
+
+// lenSym returns the variable len(x) for a slice variable x that keeps
+// one length in the function.
+func (e *evaluator) lenSym(x types.Object) (Sym, bool) {
+	if x == nil || e.opaque[x] {
+		return Sym{}, false
+	}
+	if _, ok := x.Type().Underlying().(*types.Slice); !ok {
+		return Sym{}, false
+	}
+	if n := e.writes[x]; n > 1 || n == 1 && !e.once[x] {
+		return Sym{}, false
+	}
+	b, ok := types.Universe.Lookup("len").(*types.Builtin)
+	return Sym{Obj: b, Field: x}, ok
 }

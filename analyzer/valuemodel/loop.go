@@ -65,6 +65,11 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		if l.Counter != nil {
 			in[l.Counter] = &value{t: FromAffine(l.From.Add(Var(l.Iter).Scale(l.Step)))}
 		}
+		if rs, ok := st.(*ast.RangeStmt); ok && rs.Value != nil {
+			if v := e.objOf(rs.Value); v != nil {
+				in[v] = nil // the element changes with the trip
+			}
+		}
 		return in
 	}
 	// Two passes: the first learns each accumulator's operands, the
@@ -80,9 +85,11 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 			l.Accs = append(l.Accs, &Acc{Obj: obj, Init: init.t})
 		}
 	}
-	l.Exits = e.exits(body)
+	l.Exits = l.Exits || e.exits(body)
+	e.loops++
 	e.trip(l, body, trip(true), roles, sites, true)
 	e.trip(l, body, trip(false), roles, sites, false)
+	e.loops--
 	e.res.Loops = append(e.res.Loops, l)
 	// Past the loop.
 	for obj, r := range roles {
@@ -136,6 +143,8 @@ func (e *evaluator) cur(obj types.Object, en env) *value {
 func (e *evaluator) opaqueLoop(st ast.Stmt, en env) {
 	e.forgetAssigned([]ast.Stmt{st}, en)
 	in := e.copyEnv(en)
+	e.loops++
+	defer func() { e.loops-- }()
 	switch s := st.(type) {
 	case *ast.ForStmt:
 		if s.Init != nil {
@@ -152,17 +161,25 @@ func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
 	l := &Loop{Stmt: st, Iter: Sym{Loop: st}}
 	switch s := st.(type) {
 	case *ast.RangeStmt:
-		if s.Value != nil || !e.numeric(s.X) {
-			return nil, nil
-		}
-		if t := e.info.TypeOf(s.X); t != nil {
-			if b, ok := t.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+		var n Affine
+		if v := e.rangeLen(s); v != nil {
+			// Over a slice that keeps its length: len(x) trips, the
+			// element unknown on each.
+			n, _ = affineOf(v)
+		} else {
+			if s.Value != nil || !e.numeric(s.X) {
 				return nil, nil
 			}
-		}
-		n, ok := affineOf(e.eval(s.X, en))
-		if !ok {
-			return nil, nil
+			if t := e.info.TypeOf(s.X); t != nil {
+				if b, ok := t.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+					return nil, nil
+				}
+			}
+			var ok bool
+			n, ok = affineOf(e.eval(s.X, en))
+			if !ok {
+				return nil, nil
+			}
 		}
 		if s.Key != nil {
 			l.Counter = e.objOf(s.Key)
@@ -173,61 +190,128 @@ func (e *evaluator) shape(st ast.Stmt, en env) (*Loop, *ast.BlockStmt) {
 		l.From, l.Step, l.Count, l.Bound, l.BoundOff = Int(0), rat(1), n, s.X, rat(-1)
 		return l, s.Body
 	case *ast.ForStmt:
-		cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
+		// for … ; cond && more; … counts by cond and may stop early
+		// on the rest: the trip count is an upper bound.
+		conds := conjuncts(s.Cond)
+		for _, c := range conds {
+			cond, ok := ast.Unparen(c).(*ast.BinaryExpr)
+			if !ok {
+				continue
+			}
+			if out, body := e.forShape(&Loop{Stmt: st, Iter: l.Iter}, s, cond, en); out != nil {
+				out.Exits = len(conds) > 1
+				return out, body
+			}
+		}
+		return e.untilShape(l, s, en)
+	}
+	return nil, nil
+}
+
+// untilShape recognises a loop that runs until a condition of its own
+// holds (for term > eps { k++; … }, for { …; if done { break } }) and
+// steps a variable by a constant once a trip: its trips are counted
+// by that variable, their number is a variable of its own (Trips), and
+// the loop may stop at any trip (Exits).
+func (e *evaluator) untilShape(l *Loop, s *ast.ForStmt, en env) (*Loop, *ast.BlockStmt) {
+	if s.Init != nil || s.Post != nil {
+		return nil, nil
+	}
+	for _, b := range s.Body.List {
+		id, ok := stepTarget(b)
 		if !ok {
-			return nil, nil
+			continue
 		}
-		if s.Init == nil && s.Post == nil {
-			// for n > 1 { …; n-- }
-			v := e.objOf(cond.X)
-			if v == nil {
-				v = e.objOf(cond.Y)
-			}
-			if v == nil {
-				return nil, nil
-			}
-			var step *big.Rat
-			for _, b := range s.Body.List {
-				if d := e.stepOf(b, v); d != nil {
-					if step != nil {
-						return nil, nil
-					}
-					step = d
-				}
-			}
-			from, ok := affineOf(e.cur(v, en))
-			if step == nil || !ok {
-				return nil, nil
-			}
-			l.Counter, l.From, l.Step = v, from, step
-			// The counter is stepped in the body: the body sees it
-			// through its role, not as the trip's counter.
-			if !e.bound(l, cond, en) {
-				return nil, nil
-			}
-			l.Counter = nil
-			return l, s.Body
-		}
-		init, ok := s.Init.(*ast.AssignStmt)
-		if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
-			return nil, nil
-		}
-		v := e.objOf(init.Lhs[0])
+		v := e.objOf(id)
 		if v == nil || e.opaque[v] {
-			return nil, nil
+			continue
 		}
-		from, ok := affineOf(e.eval(init.Rhs[0], en))
-		step := e.stepOf(s.Post, v)
-		if !ok || step == nil {
-			return nil, nil
+		step := e.stepOf(b, v)
+		from, ok := affineOf(e.cur(v, en))
+		if step == nil || !ok {
+			continue
 		}
-		l.Counter, l.From, l.Step = v, from, step
-		if !e.bound(l, cond, en) {
-			return nil, nil
-		}
+		l.From, l.Step = from, step
+		l.Count = Var(Sym{Def: s})
+		l.BoundOff = new(big.Rat)
+		l.Exits = true
 		return l, s.Body
 	}
 	return nil, nil
+}
+
+// stepTarget returns what s steps, for v++, v--, v += c and v = v + c.
+func stepTarget(s ast.Stmt) (ast.Expr, bool) {
+	switch s := s.(type) {
+	case *ast.IncDecStmt:
+		return s.X, true
+	case *ast.AssignStmt:
+		if len(s.Lhs) == 1 {
+			return s.Lhs[0], true
+		}
+	}
+	return nil, false
+}
+
+// conjuncts returns the parts cond joins with &&.
+func conjuncts(cond ast.Expr) []ast.Expr {
+	if b, ok := ast.Unparen(cond).(*ast.BinaryExpr); ok && b.Op == token.LAND {
+		return append(conjuncts(b.X), conjuncts(b.Y)...)
+	}
+	return []ast.Expr{cond}
+}
+
+// forShape recognises a for statement that counts by cond.
+func (e *evaluator) forShape(l *Loop, s *ast.ForStmt, cond *ast.BinaryExpr, en env) (*Loop, *ast.BlockStmt) {
+	if s.Init == nil && s.Post == nil {
+		// for n > 1 { …; n-- }
+		v := e.objOf(cond.X)
+		if v == nil {
+			v = e.objOf(cond.Y)
+		}
+		if v == nil {
+			return nil, nil
+		}
+		var step *big.Rat
+		for _, b := range s.Body.List {
+			if d := e.stepOf(b, v); d != nil {
+				if step != nil {
+					return nil, nil
+				}
+				step = d
+			}
+		}
+		from, ok := affineOf(e.cur(v, en))
+		if step == nil || !ok {
+			return nil, nil
+		}
+		l.Counter, l.From, l.Step = v, from, step
+		// The counter is stepped in the body: the body sees it
+		// through its role, not as the trip's counter.
+		if !e.bound(l, cond, en) {
+			return nil, nil
+		}
+		l.Counter = nil
+		return l, s.Body
+	}
+	init, ok := s.Init.(*ast.AssignStmt)
+	if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
+		return nil, nil
+	}
+	v := e.objOf(init.Lhs[0])
+	if v == nil || e.opaque[v] {
+		return nil, nil
+	}
+	from, ok := affineOf(e.eval(init.Rhs[0], en))
+	step := e.stepOf(s.Post, v)
+	if !ok || step == nil {
+		return nil, nil
+	}
+	l.Counter, l.From, l.Step = v, from, step
+	if !e.bound(l, cond, en) {
+		return nil, nil
+	}
+	return l, s.Body
 }
 
 // bound reads the loop condition counter <op> bound into the trip
@@ -752,4 +836,13 @@ func (e *evaluator) exits(body *ast.BlockStmt) bool {
 	}
 	walk(body, false)
 	return found
+}
+
+// rangeLen returns len(x) for a range over a slice variable x that
+// keeps its length, nil otherwise.
+func (e *evaluator) rangeLen(s *ast.RangeStmt) *value {
+	if l, ok := e.lenSym(e.objOf(s.X)); ok {
+		return &value{t: FromAffine(Var(l))}
+	}
+	return nil
 }

@@ -94,7 +94,9 @@ func Surge(x float64, terms int) float64 {
 	return sum
 }
 
-// ErlangBSmall serves desks of at most 150 lines.
+// ErlangBSmall serves desks of at most 150 lines: 150! fits float64,
+// but a^150 does not from a ≈ 113.5 Erlangs on, while the terms
+// a^k/k! stay finite (200^150/150! ≈ 1e83).
 func ErlangBSmall(a float64, c int) float64 {
 	if c > 150 {
 		return 0
@@ -102,7 +104,7 @@ func ErlangBSmall(a float64, c int) float64 {
 	fact, sum := 1.0, 1.0
 	for k := 1; k <= c; k++ {
 		fact *= float64(k)
-		sum += math.Pow(a, float64(k)) / fact
+		sum += math.Pow(a, float64(k)) / fact // want `series term math.Pow\(a, float64\(k\)\) / fact computes \(a\)\^\(k\)/Γ\(k \+ 1\) on the trip of k, from parts formed apart that each grow with the trips: math.Pow\(a, float64\(k\)\) holds \(a\)\^\(k\), which overflows to \+Inf`
 	}
 	return math.Pow(a, float64(c)) / fact / sum
 }
@@ -117,12 +119,14 @@ func ErlangBRatio(a float64, c int) float64 {
 	return term / sum
 }
 
-// ErlangBNight is the night desk's twenty lines.
+// ErlangBNight is the night desk's twenty lines: 20! fits, and a^20
+// leaves float64 only for a traffic past 2.6e15 Erlangs, which the
+// message names.
 func ErlangBNight(a float64) float64 {
 	fact, sum := 1.0, 1.0
 	for k := 1; k <= 20; k++ {
 		fact *= float64(k)
-		sum += math.Pow(a, float64(k)) / fact
+		sum += math.Pow(a, float64(k)) / fact // want `at a\^20, for \|a\| ≥ 2.58664e\+15`
 	}
 	return math.Pow(a, 20) / fact / sum
 }
@@ -193,13 +197,15 @@ func Ramp(lambda float64, n int) float64 {
 	return w
 }
 
-// ErlangBConverged stops adding once the terms no longer matter, long
-// before the factorial could overflow for any traffic the desk sees.
+// ErlangBConverged stops adding once the terms no longer matter; but
+// for a traffic of 171 Erlangs or more the terms are still growing at
+// k = 171, where fact is +Inf and the term NaN, so the loop never
+// stops early and the sum is NaN.
 func ErlangBConverged(a, c float64) float64 {
 	fact, sum := 1.0, 1.0
 	for k := 1.0; k <= c; k++ {
 		fact *= k
-		t := math.Pow(a, k) / fact
+		t := math.Pow(a, k) / fact // want `series term math.Pow\(a, k\) / fact computes .*fact holds k!, which overflows to \+Inf once k ≥ 171.*the loop may stop early`
 		sum += t
 		if t < 1e-16*sum {
 			break

@@ -40,10 +40,12 @@ func (p Pool) Combos() int64 {
 	return r
 }
 
-// Split divides at every step: no intermediate exceeds the result.
+// Split divides at every step, so each intermediate is C(n, c); but
+// for k > n/2 they pass C(n, n/2), which is +Inf from n = 1030 on,
+// and stay +Inf where C(n, k) fits again.
 func Split(n, k int) float64 { // want Split:`binomial of parameter 0, breaks from 1030`
 	v := 1.0
-	for c := 1; c <= k; c++ {
+	for c := 1; c <= k; c++ { // want `multiplicative binomial loop computes C\(n, k\) in float64 one ratio at a time: the running v is C\(n, c\) after each step and passes C\(n, ⌊n/2⌋\) when k > n/2`
 		v *= float64(n+1-c) / float64(c)
 	}
 	return v

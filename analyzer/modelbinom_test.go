@@ -1,0 +1,86 @@
+package analyzer
+
+import (
+	"math"
+	"math/big"
+	"testing"
+
+	"golang.org/x/tools/go/analysis/analysistest"
+)
+
+// TestModelBinomialPeak runs the running binomials of a glyph
+// rasteriser: ratios whose running value passes C(n, n/2).
+func TestModelBinomialPeak(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "fixbinompeak")
+}
+
+// TestModelBinomialPeakProbe confirms the messages' claims with the
+// code's own arithmetic beside math/big: one ratio per step in float64
+// is +Inf past C(n, n/2) for n ≥ 1030 although C(n, k) fits, and stays
+// finite for every k up to n = 1029.
+func TestModelBinomialPeakProbe(t *testing.T) {
+	maxF, _ := new(big.Float).SetFloat64(math.MaxFloat64).Int(nil)
+	ways := func(n, k int) float64 {
+		v := 1.0
+		for c := 1; c <= k; c++ {
+			v *= float64(n+1-c) / float64(c)
+		}
+		return v
+	}
+	// math/big: C(1030, 1020) fits float64.
+	if c := new(big.Int).Binomial(1030, 1020); c.Cmp(maxF) > 0 {
+		t.Fatal("C(1030, 1020) does not fit float64")
+	}
+	if v := ways(1030, 1020); !math.IsInf(v, 1) {
+		t.Errorf("ways(1030, 1020) = %v, want +Inf (the running value passed C(1030, 515))", v)
+	}
+	for k := 0; k <= 1029; k++ {
+		if v := ways(1029, k); math.IsInf(v, 0) {
+			t.Fatalf("ways(1029, %d) = %v, want finite", k, v)
+		}
+	}
+	// Weights' running value at n = 1031 (C(1030, i)) is +Inf at its
+	// last step, where C(1030, 1030) = 1.
+	w := 1.0
+	for i := 1; i < 1031; i++ {
+		w *= float64(1031-i) / float64(i)
+	}
+	if !math.IsInf(w, 1) {
+		t.Errorf("the weight C(1030, 1030) formed by ratios = %v, want +Inf", w)
+	}
+}
+
+// TestModelCountRatio runs an acceptance-sampling sheet: binomial
+// coefficients from log-gamma scaled by powers or divided into counts.
+func TestModelCountRatio(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "sampling")
+}
+
+// TestModelCountRatioProbe shows the sampling sheet's wrong values
+// beside math/big: at 3000 parts and p = 1/2 the chance of 1500
+// defects is C(3000, 1500)/2^3000 ≈ 0.0146, but the coefficient from
+// log-gamma is +Inf and 0.5^3000 is 0, so the product is NaN; and a
+// count of C(600, 300)² orderings over C(1200, 600) (a ratio ≈ 0.046)
+// is Inf/Inf.
+func TestModelCountRatioProbe(t *testing.T) {
+	lg := func(x float64) float64 { v, _ := math.Lgamma(x); return v }
+	coef := math.Exp(lg(3001) - lg(1501) - lg(1501))
+	if v := coef * math.Pow(0.5, 1500) * math.Pow(0.5, 1500); !math.IsNaN(v) {
+		t.Errorf("Chance(1500) at 3000 parts = %v, want NaN", v)
+	}
+	exact := new(big.Float).SetInt(new(big.Int).Binomial(3000, 1500))
+	exact.Quo(exact, new(big.Float).SetInt(new(big.Int).Lsh(big.NewInt(1), 3000)))
+	if f, _ := exact.Float64(); f < 0.01 || f > 0.02 {
+		t.Errorf("C(3000, 1500)/2^3000 = %v, want about 0.0146", f)
+	}
+	c := new(big.Int).Binomial(600, 300)
+	count, _ := new(big.Float).SetInt(new(big.Int).Mul(c, c)).Float64()
+	all := math.Exp(lg(1201) - lg(601) - lg(601))
+	if v := count / all; !math.IsNaN(v) {
+		t.Errorf("RankShare(C(600,300)², 600, 600) = %v, want NaN", v)
+	}
+	ratio := new(big.Float).Quo(new(big.Float).SetInt(new(big.Int).Mul(c, c)), new(big.Float).SetInt(new(big.Int).Binomial(1200, 600)))
+	if f, _ := ratio.Float64(); f < 0.04 || f > 0.05 {
+		t.Errorf("C(600,300)²/C(1200,600) = %v, want about 0.046", f)
+	}
+}
