@@ -179,17 +179,17 @@ func Lost(a float64) float64 {
 	// and Missed, without a digits label), recall 1, precision 1/3.
 	for _, want := range []string{
 		"## overflow\n\n| module |",
-		"| example.com/m | v1.0.0 | 2 | 1 | 3 | 1 | 1 | 2 | 0.50 | 0.33 |",
+		"| example.com/m | v1.0.0 | 2 | 1 | 3 | 1 | 1 | 2 | 0.500 (1/2) | 0.333 (1/3) |",
 		"p/a.go Safe [SAFE]",
 		"p/a.go Other [unlabelled]",
 		"example.com/m/p/a.go:11 Missed: nothing",
 		"Found overflow-bad functions, 1:\n- example.com/m/p/a.go:3 Bad: factorial loop",
 		"## digits\n\n| module |",
-		"| example.com/m | v1.0.0 | 1 | 1 | 3 | 1 | 0 | 2 | 1.00 | 0.33 |",
+		"| example.com/m | v1.0.0 | 1 | 1 | 3 | 1 | 0 | 2 | 1.000 (1/1) | 0.333 (1/3) |",
 		"p/a.go Bad [DIGITS-SAFE]\n    7: digits in a DIGITS-SAFE function",
 		"p/a.go Missed [unlabelled]\n    11: digits in an overflow-BAD function",
 		"Found digits-bad functions, 1:\n- example.com/m/p/a.go:19 Lost: exp of lgamma",
-		"| overflow + digits | 3 | 2 | 6 | 2 | 1 | 4 | 0.67 | 0.33 |",
+		"| overflow + digits | 3 | 2 | 6 | 2 | 1 | 4 | 0.667 (2/3) | 0.333 (2/6) |",
 	} {
 		if !strings.Contains(got, want) {
 			t.Errorf("score output lacks %q:\n%s", want, got)

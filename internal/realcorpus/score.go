@@ -117,11 +117,13 @@ func (t *tally) add(u tally) {
 	t.fp += u.fp
 }
 
+// ratio prints a/b to three decimals with the fraction beside it, so a
+// figure just under a target (18/19 = 0.947) never reads as meeting it.
 func ratio(a, b int) string {
 	if b == 0 {
 		return "n/a"
 	}
-	return fmt.Sprintf("%.2f", float64(a)/float64(b))
+	return fmt.Sprintf("%.3f (%d/%d)", float64(a)/float64(b), a, b)
 }
 
 // score matches each module's findings to its labelled functions, in
