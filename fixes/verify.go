@@ -94,7 +94,9 @@ type importerMap map[string]*types.Package
 
 // importerFor resolves imports to the packages the analysed package
 // already depends on, and the helper module and fmt (which fixes add) to
-// their declared stand-ins when it does not.
+// their declared stand-ins when it does not, or when it depends on them
+// only through packages read from export data, which hold just the part
+// of them their importers mention.
 func importerFor(pkg *types.Package) importerMap {
 	m := make(importerMap)
 	var visit func(p *types.Package)
@@ -112,7 +114,7 @@ func importerFor(pkg *types.Package) importerMap {
 	}
 	if s, err := stubs(); err == nil {
 		for path, p := range s {
-			if _, ok := m[path]; !ok {
+			if q, ok := m[path]; !ok || !q.Complete() {
 				m[path] = p
 			}
 		}

@@ -2,7 +2,9 @@
 # realcorpus.sh scores overfact against hand labels of real code: the
 # functions with factorial-like arithmetic in published Go modules, each
 # labelled BAD (silently returns a wrong value for an input its signature
-# admits while the true result fits its type) or SAFE, in
+# admits while the true result fits its type) or SAFE, and the functions
+# computing exponentials of log-gamma sums also DIGITS-BAD (off by more
+# than 1e-12 relative for an admitted input) or DIGITS-SAFE, in
 # testdata/realcorpus/labels.tsv.
 #
 # For every module@version named there it
@@ -12,15 +14,18 @@
 #      patterns of testdata/realcorpus/modules.tsv (labels cover non-test
 #      files),
 #   3. matches the findings to the labelled functions (a finding counts for
-#      the function whose lines hold it) and prints per module and in total
-#      BAD found (TP), BAD missed (FN), functions with findings that are
-#      SAFE or unlabelled (FP, each listed), recall and precision, then
-#      every missed BAD function with its shape,
+#      the function whose lines hold it), lgamma-digits findings against
+#      the digits labels and all others against the overflow labels, and
+#      prints per dimension, per module and in total BAD found (TP), BAD
+#      missed (FN), functions with findings that are not labelled bad (FP,
+#      each listed), recall and precision, then every missed BAD function
+#      with its shape, and the two dimensions combined,
 #   4. runs the probes: in a scratch copy of each module it writes an
-#      in-package test that calls each BAD function at its probe input and
-#      compares the value with an exact math/big reference; PASS means the
-#      wrong value is shown, FAIL means the label is wrong (or the probe
-#      is).
+#      in-package test that calls each BAD and DIGITS-BAD function at its
+#      probe input and compares the value with an exact math/big
+#      reference; PASS means the wrong value (or, for digits, a finite
+#      value off by more than 1e-12 relative) is shown, FAIL means the
+#      label is wrong (or the probe is).
 #
 # Run from the repository root:   scripts/realcorpus.sh
 # Output files go to $OUT (default: a new temporary directory, printed).
@@ -67,7 +72,7 @@ done
 echo "== score"
 "$work/bin/realcorpus" score -labels "$labels" -modules "$modules" "${scoreargs[@]}" | tee "$OUT/score.md"
 
-echo "== probes: each BAD function at its probe input against math/big"
+echo "== probes: each BAD and DIGITS-BAD function at its probe input against math/big"
 failed=0
 for mv in $mods; do
 	m=${mv%@*}
@@ -93,8 +98,8 @@ for mv in $mods; do
 done
 pass=$(cat "$OUT"/*.probe.txt 2>/dev/null | grep -c '^PROBE PASS' || true)
 fail=$(cat "$OUT"/*.probe.txt 2>/dev/null | grep -c '^PROBE FAIL' || true)
-bad=$(grep -v '^#' "$labels" | tail -n +2 | awk -F'\t' '$7 == "BAD"' | wc -l)
-echo "== probes: $pass PASS (wrong value shown), $fail FAIL, of $bad BAD labels"
+bad=$(grep -v '^#' "$labels" | tail -n +2 | awk -F'\t' '$7 == "BAD" || $7 == "DIGITS-BAD"' | wc -l)
+echo "== probes: $pass PASS (wrong value shown), $fail FAIL, of $bad BAD and DIGITS-BAD labels"
 [ "$fail" -eq 0 ] && [ "$pass" -eq "$bad" ] || failed=1
 echo "== results in $OUT"
 exit $failed

@@ -8,7 +8,9 @@
 # machine's load and caches do not change.
 # Then it shows that a second
 # go vet -vettool run over an unchanged module is served from the build
-# cache.
+# cache, and runs the command at the edges of its budget (bench -mode
+# edges): "overfact std" with tests, one 5 MB generated file, and -fix on
+# it, with wall time and peak RSS against their targets.
 #
 # Run from the repository root:   scripts/scale.sh [N]
 set -euo pipefail
@@ -45,3 +47,6 @@ echo "   (go vet exits 1 when the tool reports findings; first lines of its outp
 head -4 "$work/vet.out" | cut -c1-160 | sed 's/^/   /'
 vet "second run (unchanged)"
 vet "third run (unchanged)"
+
+echo "== at the edges: overfact std, one 5 MB generated file, -fix on it"
+"$work/bench" -mode edges -overfact "$work/overfact"

@@ -52,6 +52,7 @@ func runAnalysis(args []string) int {
 	opts.FixLast = analyzer.FixesLast
 	opts.Version = moduleVersion()
 	opts.Helper = helperModule()
+	opts.FactScan = analyzer.MayCarryFacts
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}

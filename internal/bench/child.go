@@ -30,16 +30,12 @@ func runChild(name string, patterns []string) error {
 	if a == nil {
 		return fmt.Errorf("unknown side %q", name)
 	}
-	start := time.Now()
-	lm := *loadFlag
-	if name == "noop-roots" {
-		lm = "roots"
-	}
-	mode, err := loadMode(lm, []*analysis.Analyzer{target})
+	stop, err := startProfiles()
 	if err != nil {
 		return err
 	}
-	pkgs, err := load(*dirFlag, mode, *testsFlag, patterns)
+	start := time.Now()
+	pkgs, err := load(*dirFlag, strategyOf(name), *testsFlag, patterns)
 	if err != nil {
 		return err
 	}
@@ -49,6 +45,9 @@ func runChild(name string, patterns []string) error {
 		return err
 	}
 	done := time.Now()
+	if err := stop(); err != nil {
+		return err
+	}
 	rep := childReport{Side: name, Packages: len(pkgs),
 		Load: seconds(loaded.Sub(start)), Analyze: seconds(done.Sub(loaded)), Total: seconds(done.Sub(start))}
 	for _, act := range g.Roots {

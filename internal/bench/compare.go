@@ -33,7 +33,7 @@ func compare(patterns []string) error {
 	}
 	fmt.Printf("packages %v from %q, tests=%v, load=%s, %d runs per side, GOMAXPROCS=%d\n",
 		patterns, *dirFlag, *testsFlag, *loadFlag, *runsFlag, runtime.GOMAXPROCS(0))
-	sides := []string{"noop", "overfact", "noop-roots"}
+	sides := []string{"noop-roots", "overfact", "overfact-source"}
 	// One discarded run per side warms the build and list caches.
 	for _, s := range sides {
 		if _, err := child(s, patterns); err != nil {
@@ -89,35 +89,33 @@ func field(ss []sample, f func(sample) float64) []float64 {
 }
 
 func printWhole(runs map[string][]sample) {
-	n, o, nr := runs["noop"], runs["overfact"], runs["noop-roots"]
-	fmt.Printf("\nwhole run, one process per run (medians of %d):\n", len(n))
-	fmt.Printf("  packages analysed: %d; overfact diagnostics: %d (test variants counted apart), errors: %d\n", o[0].Packages, o[0].Diagnostics, o[0].Errors)
-	row := func(label string, base []sample, f func(sample) float64, unit func(float64) string) {
-		a, b := median(field(o, f)), median(field(base, f))
-		fmt.Printf("  %-30s overfact %-10s noop %-10s ratio %s\n", label, unit(a), unit(b), ratio(a, b))
+	nr, o, src := runs["noop-roots"], runs["overfact"], runs["overfact-source"]
+	fmt.Printf("\nwhole run, one process per run (medians of %d):\n", len(nr))
+	fmt.Printf("  packages analysed: %d; overfact diagnostics: %d (test variants counted apart), errors: %d; from every dependency's source: %d, errors: %d\n",
+		o[0].Packages, o[0].Diagnostics, o[0].Errors, src[0].Diagnostics, src[0].Errors)
+	row := func(label, name string, side, base []sample, f func(sample) float64, unit func(float64) string) {
+		a, b := median(field(side, f)), median(field(base, f))
+		fmt.Printf("  %-30s %-15s %-10s noop %-10s ratio %s\n", label, name, unit(a), unit(b), ratio(a, b))
 	}
 	secs := func(x float64) string { return fmt.Sprintf("%.2fs", x) }
 	total := func(s sample) float64 { return s.Total }
 	hwm := func(s sample) float64 { return float64(s.PeakKiB) }
-	fmt.Println("  same packages, same load (syntax of every dependency, as the driver needs for facts):")
-	row("wall, load+analyze [target]", n, total, secs)
-	row("wall, load only", n, func(s sample) float64 { return s.Load }, secs)
-	row("wall, analyze only", n, func(s sample) float64 { return s.Analyze }, secs)
-	row("peak RSS, VmHWM [target]", n, hwm, mib)
-	row("peak RSS, rusage maxrss", n, func(s sample) float64 { return float64(s.MaxRSSKiB) }, mib)
-	fmt.Println("  against the no-op loaded as it needs itself (syntax of the named packages only):")
-	row("wall, load+analyze", nr, total, secs)
-	row("peak RSS, VmHWM", nr, hwm, mib)
+	fmt.Printf("  overfact loaded as the command loads it (-load %s), against the no-op loaded as it\n", *loadFlag)
+	fmt.Println("  needs itself (syntax of the named packages, export data for every dependency):")
+	row("wall, load+analyze [target]", "overfact", o, nr, total, secs)
+	row("wall, load only", "overfact", o, nr, func(s sample) float64 { return s.Load }, secs)
+	row("wall, analyze only", "overfact", o, nr, func(s sample) float64 { return s.Analyze }, secs)
+	row("peak RSS, VmHWM [target]", "overfact", o, nr, hwm, mib)
+	row("peak RSS, rusage maxrss", "overfact", o, nr, func(s sample) float64 { return float64(s.MaxRSSKiB) }, mib)
+	fmt.Println("  overfact with every dependency from source (the load before export data), same no-op:")
+	row("wall, load+analyze", "overfact-source", src, nr, total, secs)
+	row("peak RSS, VmHWM", "overfact-source", src, nr, hwm, mib)
 }
 
 // analysisOnly loads once and alternates the two analyzers on the same
 // packages, so loading, which dominates a whole run, is out of the figure.
 func analysisOnly(patterns []string) error {
-	mode, err := loadMode(*loadFlag, []*analysis.Analyzer{target})
-	if err != nil {
-		return err
-	}
-	pkgs, err := load(*dirFlag, mode, *testsFlag, patterns)
+	pkgs, err := load(*dirFlag, *loadFlag, *testsFlag, patterns)
 	if err != nil {
 		return err
 	}

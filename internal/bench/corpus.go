@@ -57,11 +57,7 @@ func corpus(patterns []string) error {
 		return fmt.Errorf("no packages given")
 	}
 	a := guarded(target)
-	mode, err := loadMode(*loadFlag, []*analysis.Analyzer{a})
-	if err != nil {
-		return err
-	}
-	pkgs, err := load(*dirFlag, mode, *testsFlag, patterns)
+	pkgs, err := load(*dirFlag, *loadFlag, *testsFlag, patterns)
 	if err != nil {
 		return err
 	}

@@ -6,48 +6,38 @@ import (
 	"os/exec"
 	"strings"
 
-	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/analyzer"
+	"github.com/overfact/overfact/internal/driver"
 )
-
-// loadMode picks the go/packages mode for the analyzers: checker.Analyze
-// runs fact-using analyzers on every dependency, which then needs syntax
-// for the whole import graph, as in x/tools' own checker-based drivers.
-func loadMode(flagValue string, as []*analysis.Analyzer) (packages.LoadMode, error) {
-	switch flagValue {
-	case "all":
-		return packages.LoadAllSyntax, nil
-	case "roots":
-		return packages.LoadSyntax | packages.NeedModule, nil
-	case "auto":
-		for _, a := range as {
-			if usesFacts(a) {
-				return packages.LoadAllSyntax | packages.NeedModule, nil
-			}
-		}
-		return packages.LoadSyntax | packages.NeedModule, nil
-	}
-	return 0, fmt.Errorf("unknown load mode %q", flagValue)
-}
-
-// usesFacts reports whether a or anything it requires declares facts.
-func usesFacts(a *analysis.Analyzer) bool {
-	if len(a.FactTypes) > 0 {
-		return true
-	}
-	for _, r := range a.Requires {
-		if usesFacts(r) {
-			return true
-		}
-	}
-	return false
-}
 
 // load loads the packages matching patterns from dir and fails on any
 // load or type error, so that a measurement never runs on a broken corpus.
-func load(dir string, mode packages.LoadMode, tests bool, patterns []string) ([]*packages.Package, error) {
-	cfg := &packages.Config{Mode: mode, Dir: dir, Tests: tests, Env: append(os.Environ(), "GOWORK=off")}
-	pkgs, err := packages.Load(cfg, patterns...)
+// The strategy says where the dependencies come from:
+//
+//	driver  as the command loads for overfact (driver.LoadForFacts): source
+//	        for the dependencies that may carry facts, export data for the rest
+//	source  syntax and types of every dependency from source, what
+//	        checker.Analyze documents for analyzers with facts
+//	roots   syntax of the named packages only, export data for every
+//	        dependency: what an analyzer without facts needs
+func load(dir, strategy string, tests bool, patterns []string) ([]*packages.Package, error) {
+	cfg := &packages.Config{Dir: dir, Tests: tests, Env: append(os.Environ(), "GOWORK=off")}
+	var pkgs []*packages.Package
+	var err error
+	switch strategy {
+	case "driver":
+		pkgs, err = driver.LoadForFacts(cfg, patterns, analyzer.MayCarryFacts)
+	case "source":
+		cfg.Mode = packages.LoadAllSyntax | packages.NeedModule
+		pkgs, err = packages.Load(cfg, patterns...)
+	case "roots":
+		cfg.Mode = packages.LoadSyntax | packages.NeedModule
+		pkgs, err = packages.Load(cfg, patterns...)
+	default:
+		return nil, fmt.Errorf("unknown load strategy %q", strategy)
+	}
 	if err != nil {
 		return nil, err
 	}

@@ -14,6 +14,17 @@
 //	bench -scalecase "long function:16" [-n 5] [-cpuprofile F]
 //		measures one of those sizes (kind:divisor of the full size) in this
 //		process and prints each run's analysis time in seconds.
+//	bench -mode loadcmp [-dir D] PATTERNS
+//		runs overfact over the packages with every dependency loaded from
+//		source and loaded as the command loads them, and fails unless
+//		the diagnostics, fixes and facts are the same.
+//	bench -mode genfile -dir D [-size 5242880]
+//		writes a module of one package into D whose one file is at least
+//		size bytes of generated factorial functions.
+//	bench -mode edges -overfact CMD
+//		runs the command as "overfact std" (tests included), on one 5 MB
+//		generated file and with -fix on it, and prints wall time and peak
+//		memory against their targets.
 //	bench -mode corpus [-dir D] PATTERNS
 //		runs overfact (tests included) over the packages and prints the
 //		package count, crashes, analyzer errors and every finding.
@@ -30,16 +41,19 @@ import (
 )
 
 var (
-	modeFlag  = flag.String("mode", "compare", "what to measure: compare, scale or corpus")
-	dirFlag   = flag.String("dir", "", "directory packages are loaded from (default: current)")
-	runsFlag  = flag.Int("n", 5, "number of timed runs per side; the median is reported")
-	testsFlag = flag.Bool("tests", true, "include test packages")
-	loadFlag  = flag.String("load", "auto", "load mode: auto (what the driver needs for overfact), all (syntax of every dependency) or roots (syntax of the named packages only)")
-	childFlag = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON")
-	jsonFlag  = flag.Bool("json", false, "corpus mode: print findings as JSON lines")
+	modeFlag     = flag.String("mode", "compare", "what to measure: compare, scale, loadcmp, genfile, edges or corpus")
+	dirFlag      = flag.String("dir", "", "directory packages are loaded from (default: current)")
+	runsFlag     = flag.Int("n", 5, "number of timed runs per side; the median is reported")
+	testsFlag    = flag.Bool("tests", true, "include test packages")
+	loadFlag     = flag.String("load", "driver", "how overfact's packages are loaded: driver (as the command does: source for the dependencies that may carry facts, export data for the rest), source (every dependency from source) or roots (export data for every dependency)")
+	childFlag    = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON")
+	jsonFlag     = flag.Bool("json", false, "corpus mode: print findings as JSON lines")
+	overfactFlag = flag.String("overfact", "", "edges mode: the overfact `command` to run")
+	sizeFlag     = flag.Int("size", 5<<20, "genfile mode: size in bytes of the file written")
 
 	caseTimeFlag  = flag.Duration("casetime", 5*time.Minute, "scale mode: time allowed for the runs of one size")
-	profileFlag   = flag.String("cpuprofile", "", "with -scalecase: write a CPU profile of the analysis runs to this file")
+	profileFlag   = flag.String("cpuprofile", "", "with -scalecase or -child: write a CPU profile of the analysis runs (of the whole run with -child) to this file")
+	memProfFlag   = flag.String("memprofile", "", "with -child: write a heap profile, taken when the analysis ends, to this file")
 	scaleCaseFlag = flag.String("scalecase", "", "internal: measure one scale case (kind:divisor) and print run times")
 )
 
@@ -61,6 +75,12 @@ func main() {
 		err = scale()
 	case *modeFlag == "corpus":
 		err = corpus(flag.Args())
+	case *modeFlag == "loadcmp":
+		err = loadcmp(flag.Args())
+	case *modeFlag == "genfile":
+		err = genFile(*dirFlag, *sizeFlag)
+	case *modeFlag == "edges":
+		err = edges(*overfactFlag)
 	default:
 		err = fmt.Errorf("unknown mode %q", *modeFlag)
 	}

@@ -206,11 +206,7 @@ func writeCase(dir string, c scaleCase) (gen, base *packages.Package, err error)
 			return nil, nil, err
 		}
 	}
-	mode, err := loadMode("auto", []*analysis.Analyzer{target})
-	if err != nil {
-		return nil, nil, err
-	}
-	pkgs, err := load(dir, mode, false, []string{".", "./base"})
+	pkgs, err := load(dir, "driver", false, []string{".", "./base"})
 	if err != nil {
 		return nil, nil, err
 	}

@@ -54,6 +54,12 @@ type Options struct {
 	// makes sure it resolves from the fixed module before writing.
 	Helper Helper
 
+	// FactScan, when set, tells from syntax which dependencies may carry
+	// the analyzer's facts: only those are type-checked from source, the
+	// rest come from export data (LoadForFacts). Without it every
+	// dependency of an analyzer with facts is loaded from source.
+	FactScan FactScan
+
 	// Progress, when set, receives "done/total" lines while a run over
 	// more than ProgressMin packages is in progress.
 	Progress io.Writer
@@ -153,14 +159,16 @@ func (r *run) analyze(a *analysis.Analyzer, patterns []string, overlay map[strin
 }
 
 func (r *run) load(a *analysis.Analyzer, patterns []string, overlay map[string][]byte) ([]*packages.Package, error) {
-	mode := packages.LoadSyntax | packages.NeedModule
+	cfg := &packages.Config{Mode: packages.LoadSyntax | packages.NeedModule, Dir: r.dir, Tests: r.opts.Tests, Overlay: overlay,
+		ParseFile: r.src.parseFile(overlay)}
+	var pkgs []*packages.Package
+	var err error
 	if len(a.FactTypes) > 0 {
 		// Facts flow up from dependencies, which must be analysed too.
-		mode = packages.LoadAllSyntax | packages.NeedModule
+		pkgs, err = LoadForFacts(cfg, patterns, r.opts.FactScan)
+	} else {
+		pkgs, err = packages.Load(cfg, patterns...)
 	}
-	cfg := &packages.Config{Mode: mode, Dir: r.dir, Tests: r.opts.Tests, Overlay: overlay,
-		ParseFile: r.src.parseFile(overlay)}
-	pkgs, err := packages.Load(cfg, patterns...)
 	if err == nil && len(pkgs) == 0 {
 		err = fmt.Errorf("%s matched no packages", strings.Join(patterns, " "))
 	}

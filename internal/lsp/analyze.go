@@ -1,6 +1,7 @@
 package lsp
 
 import (
+	"bytes"
 	"context"
 	"fmt"
 	"go/token"
@@ -13,6 +14,8 @@ import (
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
 	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/internal/driver"
 )
 
 // loadMode is what checker.Analyze needs: syntax and types of the analysed
@@ -70,7 +73,7 @@ func analyze(ctx context.Context, opts *Options, cache *loadCache, docs map[stri
 		Overlay: overlay,
 		Tests:   strings.HasSuffix(path, "_test.go"),
 	}
-	roots, memo, rechecked, err := load(cfg, path, cache)
+	roots, memo, rechecked, err := load(cfg, path, cache, opts.FactScan)
 	if err != nil {
 		return nil, err
 	}
@@ -177,7 +180,7 @@ func rootFailure(graph *checker.Graph, roots []*packages.Package) error {
 // then keeps. A _test.go file belongs to several package variants and is
 // always loaded afresh. The memo, nil for packages not cached, holds the
 // analyzers' outcomes on the dependencies.
-func load(cfg *packages.Config, path string, cache *loadCache) (roots []*packages.Package, memo *factMemo, rechecked bool, err error) {
+func load(cfg *packages.Config, path string, cache *loadCache, scan driver.FactScan) (roots []*packages.Package, memo *factMemo, rechecked bool, err error) {
 	if !cfg.Tests {
 		if e := cache.lookup(path, cfg.Overlay); e != nil {
 			if np, err := recheck(e.pkg, cfg.Overlay); err == nil {
@@ -185,7 +188,7 @@ func load(cfg *packages.Config, path string, cache *loadCache) (roots []*package
 			}
 		}
 	}
-	pkgs, err := packages.Load(cfg, "file="+path)
+	pkgs, err := loadFresh(cfg, path, scan)
 	if err != nil {
 		return nil, nil, false, err
 	}
@@ -203,6 +206,34 @@ func load(cfg *packages.Config, path string, cache *loadCache) (roots []*package
 		}
 	}
 	return roots, memo, false, nil
+}
+
+// loadFresh loads the packages holding path. When every open buffer holds
+// what its file on disk holds, the overlay changes nothing, and the
+// dependencies that cannot carry facts come from export data
+// (driver.LoadForFacts), as they do for the command: a cold open costs
+// about what loading the package for an analyzer without facts costs.
+// go/packages trusts no export data under an overlay, so after an edit
+// every dependency is type-checked from source, once; the cache then
+// serves the edits that follow.
+func loadFresh(cfg *packages.Config, path string, scan driver.FactScan) ([]*packages.Package, error) {
+	if scan != nil && sameAsDisk(cfg.Overlay) {
+		onDisk := *cfg
+		onDisk.Overlay = nil
+		return driver.LoadForFacts(&onDisk, []string{"file=" + path}, scan)
+	}
+	return packages.Load(cfg, "file="+path)
+}
+
+// sameAsDisk reports whether every file of overlay holds its text.
+func sameAsDisk(overlay map[string][]byte) bool {
+	for name, text := range overlay {
+		disk, err := os.ReadFile(name)
+		if err != nil || !bytes.Equal(disk, text) {
+			return false
+		}
+	}
+	return true
 }
 
 // loadProblem explains why no package holding path was loaded, using the

@@ -11,6 +11,9 @@ import (
 	"time"
 
 	"golang.org/x/tools/go/analysis"
+
+	"github.com/overfact/overfact/analyzer"
+	"github.com/overfact/overfact/internal/driver"
 )
 
 // Options configures a server. The zero value is usable.
@@ -22,6 +25,11 @@ type Options struct {
 	// analyses, so that typing does not start one analysis per keystroke;
 	// zero means 300ms, a negative value no wait.
 	Debounce time.Duration
+	// FactScan, when set, tells from syntax which dependencies may carry
+	// the analyzers' facts, so that the others come from export data
+	// (driver.LoadForFacts); nil means overfact's own scan when Analyzers
+	// is nil, and every dependency from source otherwise.
+	FactScan driver.FactScan
 	// Log receives the server's trace of its own work; nil discards it.
 	Log io.Writer
 	// Severity maps a diagnostic's category to an LSP severity
@@ -104,6 +112,9 @@ func serve(ctx context.Context, in io.Reader, out io.Writer, opts Options, analy
 func withDefaults(opts Options) Options {
 	if opts.Analyzers == nil {
 		opts.Analyzers = defaultAnalyzers()
+		if opts.FactScan == nil {
+			opts.FactScan = analyzer.MayCarryFacts
+		}
 	}
 	if opts.Debounce == 0 {
 		opts.Debounce = defaultDebounce

@@ -9,9 +9,14 @@ import (
 	"strings"
 )
 
-// A label is one hand-judged function of a published module: whether it
-// silently returns a wrong value (BAD) or not (SAFE), and for a BAD one
-// a probe call and the math/big reference it is compared with.
+// A label is one hand-judged function of a published module in one of
+// two dimensions. Overflow: whether it silently returns a wrong value
+// because an intermediate left its type's range (BAD) or not (SAFE).
+// Digits: whether its exponential of log-gamma sums loses digits past
+// the digits tolerance for some admitted input (DIGITS-BAD) or not
+// (DIGITS-SAFE). A BAD or DIGITS-BAD label carries a probe call and the
+// math/big reference it is compared with. A function has at most one
+// label per dimension.
 type label struct {
 	Module  string // module path, as on the module proxy
 	Version string // module version
@@ -19,10 +24,10 @@ type label struct {
 	File    string // file, relative to the module root
 	Func    string // Name, or Recv.Method for a method
 	Line    int    // line of the func keyword
-	Verdict string // BAD or SAFE
+	Verdict string // BAD, SAFE, DIGITS-BAD or DIGITS-SAFE
 	Shape   string // the arithmetic, in a few words
-	Probe   string // BAD: a Go expression, evaluated in the package, giving the function's value
-	Want    string // BAD: a Go expression giving the exact value (*big.Int or *big.Float)
+	Probe   string // BAD, DIGITS-BAD: a Go expression, evaluated in the package, giving the function's value
+	Want    string // BAD, DIGITS-BAD: a Go expression giving the exact value (*big.Int or *big.Float)
 
 	lineNo int // line of the labels file, for messages
 }
@@ -30,7 +35,51 @@ type label struct {
 // labelColumns is the header line of the labels file.
 var labelColumns = []string{"module", "version", "package", "file", "function", "line", "verdict", "shape", "probe", "want"}
 
-func (l label) key() string { return l.Module + "\t" + l.File + "\t" + l.Func }
+// The verdicts, by dimension.
+const (
+	verdictBad        = "BAD"
+	verdictSafe       = "SAFE"
+	verdictDigitsBad  = "DIGITS-BAD"
+	verdictDigitsSafe = "DIGITS-SAFE"
+)
+
+// The dimensions a label judges.
+const (
+	dimOverflow = "overflow"
+	dimDigits   = "digits"
+)
+
+// digitsCategory is the overfact category scored against the digits
+// labels; every other category is scored against the overflow labels.
+const digitsCategory = "lgamma-digits"
+
+// digitsTolerance is the relative error past which a DIGITS-BAD probe
+// shows lost digits: the tolerance the lgamma-digits category reports
+// against (docs/patterns.md).
+const digitsTolerance = 1e-12
+
+// dimension is the dimension the label's verdict judges.
+func (l label) dimension() string {
+	if l.Verdict == verdictDigitsBad || l.Verdict == verdictDigitsSafe {
+		return dimDigits
+	}
+	return dimOverflow
+}
+
+// bad reports whether the verdict is BAD or DIGITS-BAD.
+func (l label) bad() bool { return l.Verdict == verdictBad || l.Verdict == verdictDigitsBad }
+
+// findingDimension is the dimension a finding of category is scored in.
+func findingDimension(category string) string {
+	if category == digitsCategory {
+		return dimDigits
+	}
+	return dimOverflow
+}
+
+func (l label) key() string {
+	return l.Module + "\t" + l.File + "\t" + l.Func + "\t" + l.dimension()
+}
 
 // readLabels reads a labels file: tab-separated, one header line naming
 // labelColumns, lines starting with # ignored.
@@ -93,19 +142,19 @@ func parseLabels(r io.Reader) ([]label, error) {
 			return nil, fmt.Errorf("line %d: no shape", n)
 		}
 		switch l.Verdict {
-		case "BAD":
+		case verdictBad, verdictDigitsBad:
 			if l.Probe == "" || l.Want == "" {
-				return nil, fmt.Errorf("line %d: BAD %s has no probe or no reference", n, l.Func)
+				return nil, fmt.Errorf("line %d: %s %s has no probe or no reference", n, l.Verdict, l.Func)
 			}
-		case "SAFE":
+		case verdictSafe, verdictDigitsSafe:
 			if l.Probe != "" || l.Want != "" {
-				return nil, fmt.Errorf("line %d: SAFE %s has a probe", n, l.Func)
+				return nil, fmt.Errorf("line %d: %s %s has a probe", n, l.Verdict, l.Func)
 			}
 		default:
-			return nil, fmt.Errorf("line %d: verdict %q is neither BAD nor SAFE", n, l.Verdict)
+			return nil, fmt.Errorf("line %d: verdict %q is not BAD, SAFE, DIGITS-BAD or DIGITS-SAFE", n, l.Verdict)
 		}
 		if prev, ok := seen[l.key()]; ok {
-			return nil, fmt.Errorf("line %d: %s %s labelled again (first at line %d)", n, l.File, l.Func, prev)
+			return nil, fmt.Errorf("line %d: %s %s labelled again for %s (first at line %d)", n, l.File, l.Func, l.dimension(), prev)
 		}
 		seen[l.key()] = n
 		out = append(out, l)

@@ -1,8 +1,10 @@
 // Command realcorpus is the harness of overfact's real-code corpus: hand
 // labels of the functions with factorial-like arithmetic in published
-// modules (testdata/realcorpus/labels.tsv), probes that show each BAD
-// function's wrong value against math/big, and the score of overfact's
-// findings against the labels. scripts/realcorpus.sh drives it; the
+// modules (testdata/realcorpus/labels.tsv), in two dimensions (overflow:
+// BAD or SAFE; digits lost by exponentials of log-gamma sums: DIGITS-BAD
+// or DIGITS-SAFE), probes that show each BAD and DIGITS-BAD function's
+// wrong value against math/big, and the score of overfact's findings
+// against the labels. scripts/realcorpus.sh drives it; the
 // third-party source is fetched from the module proxy and never stored
 // in this repository.
 //
@@ -12,12 +14,12 @@
 //		lists the functions of the non-test Go files under DIR with
 //		their lines (what labels name).
 //	realcorpus probes -labels FILE -helpers DIR MODULE MODDIR
-//		writes the probe tests of MODULE's BAD labels into MODDIR, a
+//		writes the probe tests of MODULE's BAD and DIGITS-BAD labels into MODDIR, a
 //		writable copy of the module, and prints the probed packages.
 //	realcorpus score -labels FILE -modules FILE MODULE@VERSION MODDIR JSONFILE ...
 //		matches the findings of overfact -json (JSONFILE) to the labels
-//		and prints the table, the false positives and the missed BAD
-//		functions.
+//		and prints a table per dimension, the false positives and the
+//		missed BAD functions, and the dimensions combined.
 package main
 
 import (

@@ -22,7 +22,8 @@ const (
 	probeTest       = "TestOverfactProbe"
 )
 
-// writeProbes writes the probe test files of every BAD label of module
+// writeProbes writes the probe test files of every BAD and DIGITS-BAD
+// label of module
 // into dir, the root of a writable copy of that module. helpers is a
 // directory of per-package helper files (package path with / replaced
 // by _, suffix .go.txt), whose text is written beside the probes with
@@ -31,7 +32,7 @@ const (
 func writeProbes(labels []label, module, dir, helpers string) ([]string, error) {
 	byPkg := map[string][]label{}
 	for _, l := range labels {
-		if l.Module == module && l.Verdict == "BAD" {
+		if l.Module == module && l.bad() {
 			byPkg[l.Package] = append(byPkg[l.Package], l)
 		}
 	}
@@ -97,8 +98,15 @@ func probeSource(pkg string, ls []label) string {
 	b.WriteString("var (\n\t_ = math.Inf\n\t_ = big.NewInt\n)\n\n")
 	fmt.Fprintf(&b, "func %s(t *testing.T) {\n", probeTest)
 	for _, l := range ls {
-		fmt.Fprintf(&b, "\tofpRun(t, %s,\n\t\tfunc() interface{} { return %s },\n\t\tfunc() interface{} { return %s })\n",
-			strconv.Quote(probeID(l)), l.Probe, l.Want)
+		// An overflow probe shows a value off by more than 1e-6 (or NaN,
+		// ±Inf, 0); a digits probe a finite value off by more than the
+		// digits tolerance.
+		mode := "ofpOverflow"
+		if l.dimension() == dimDigits {
+			mode = fmt.Sprintf("ofpDigits(%g)", digitsTolerance)
+		}
+		fmt.Fprintf(&b, "\tofpRun(t, %s, %s,\n\t\tfunc() interface{} { return %s },\n\t\tfunc() interface{} { return %s })\n",
+			strconv.Quote(probeID(l)), mode, l.Probe, l.Want)
 	}
 	b.WriteString("}\n")
 	return b.String()
@@ -124,10 +132,22 @@ import (
 
 const ofpPrec = 512
 
-// ofpRun calls got and want and prints PASS when got is wrong: a float
-// that is NaN, infinite or off by more than 1e-6 relative, or an integer
-// that differs, while want, the exact value, fits got's type.
-func ofpRun(t *testing.T, id string, got, want func() interface{}) {
+// An ofpMode says what a probe must show. Overflow: a float that is NaN,
+// infinite or off by more than tol (1e-6) relative, or an integer that
+// differs. Digits: a finite float off by more than tol relative (a NaN
+// or infinite value is an overflow, not lost digits).
+type ofpMode struct {
+	tol    float64
+	digits bool
+}
+
+var ofpOverflow = ofpMode{tol: 1e-6}
+
+func ofpDigits(tol float64) ofpMode { return ofpMode{tol: tol, digits: true} }
+
+// ofpRun calls got and want and prints PASS when got is wrong as mode
+// asks while want, the exact value, fits got's type.
+func ofpRun(t *testing.T, id string, mode ofpMode, got, want func() interface{}) {
 	t.Helper()
 	type result struct {
 		v     interface{}
@@ -154,12 +174,14 @@ func ofpRun(t *testing.T, id string, got, want func() interface{}) {
 		fmt.Printf("PROBE FAIL %s: panics (%v), not a silent wrong value; exact %s\n", id, r.panic, ofpString(w))
 		return
 	}
-	wrong, fits, why := ofpCompare(r.v, w)
+	wrong, fits, why := ofpCompare(r.v, w, mode)
 	switch {
 	case !fits:
 		fmt.Printf("PROBE FAIL %s: the exact value %s does not fit %T\n", id, ofpString(w), r.v)
 	case wrong:
 		fmt.Printf("PROBE PASS %s: got %v, exact %s (%s)\n", id, r.v, ofpString(w), why)
+	case why != "":
+		fmt.Printf("PROBE FAIL %s: got %v, exact %s: %s\n", id, r.v, ofpString(w), why)
 	default:
 		fmt.Printf("PROBE FAIL %s: got %v, exact %s: the value is right\n", id, r.v, ofpString(w))
 	}
@@ -175,7 +197,7 @@ func ofpString(w interface{}) string {
 	return fmt.Sprint(w)
 }
 
-func ofpCompare(got, want interface{}) (wrong, fits bool, why string) {
+func ofpCompare(got, want interface{}, mode ofpMode) (wrong, fits bool, why string) {
 	if wi, ok := want.(*big.Int); ok {
 		var g *big.Int
 		var lo, hi *big.Int
@@ -193,12 +215,18 @@ func ofpCompare(got, want interface{}) (wrong, fits bool, why string) {
 		case uint32:
 			g, lo, hi = new(big.Int).SetUint64(uint64(v)), big.NewInt(0), big.NewInt(math.MaxUint32)
 		default:
-			return ofpCompare(got, new(big.Float).SetPrec(ofpPrec).SetInt(wi))
+			return ofpCompare(got, new(big.Float).SetPrec(ofpPrec).SetInt(wi), mode)
 		}
 		if wi.Cmp(lo) < 0 || wi.Cmp(hi) > 0 {
 			return false, false, ""
 		}
-		return g.Cmp(wi) != 0, true, "integer differs"
+		if mode.digits {
+			return false, true, "an integer result: no digits to lose"
+		}
+		if g.Cmp(wi) != 0 {
+			return true, true, "integer differs"
+		}
+		return false, true, ""
 	}
 	wf, ok := want.(*big.Float)
 	if !ok {
@@ -221,22 +249,26 @@ func ofpCompare(got, want interface{}) (wrong, fits bool, why string) {
 	if wf.IsInf() || new(big.Float).Abs(wf).Cmp(big.NewFloat(limit)) > 0 {
 		return false, false, ""
 	}
-	if math.IsNaN(g) {
-		return true, true, "NaN"
-	}
-	if math.IsInf(g, 0) {
+	if math.IsNaN(g) || math.IsInf(g, 0) {
+		if mode.digits {
+			return false, true, "not finite: an overflow, not lost digits"
+		}
+		if math.IsNaN(g) {
+			return true, true, "NaN"
+		}
 		return true, true, "infinite"
 	}
 	diff := new(big.Float).SetPrec(ofpPrec).Sub(new(big.Float).SetFloat64(g), wf)
 	diff.Abs(diff)
 	tol := new(big.Float).SetPrec(ofpPrec).Abs(wf)
-	tol.Mul(tol, big.NewFloat(1e-6))
+	tol.Mul(tol, big.NewFloat(mode.tol))
 	if diff.Cmp(tol) > 0 {
-		rel := "relative error > 1e-6"
-		if g == 0 {
-			rel = "zero"
+		if g == 0 && !mode.digits {
+			return true, true, "zero"
 		}
-		return true, true, rel
+		rel := new(big.Float).Quo(diff, new(big.Float).Abs(wf))
+		r, _ := rel.Float64()
+		return true, true, fmt.Sprintf("relative error %.2g > %g", r, mode.tol)
 	}
 	return false, true, ""
 }
@@ -330,5 +362,46 @@ func exLog(x interface{}) *big.Float {
 	return ofpF(math.Log(m) + float64(e)*math.Ln2)
 }
 
-var _ = exSum
+// exSqrt is the square root of x >= 0, to ofpPrec bits.
+func exSqrt(x interface{}) *big.Float { return ofpF(0).Sqrt(ofpF(x)) }
+
+// exGammaP is the regularized lower incomplete gamma function P(a, x)
+// for an integer a >= 1 and x >= 0: e^-x times the sum of x^k/k! for
+// k >= a (DLMF 8.4.11, P = 1 - Q with Q the finite sum for k < a),
+// summed until a term, past its largest at k near x, falls below
+// 2^-ofpPrec of the sum.
+func exGammaP(a int64, x float64) *big.Float {
+	term := exQuo(exPow(x, a), exFact(a))
+	sum := ofpF(term)
+	xf := ofpF(x)
+	for k := a + 1; ; k++ {
+		term.Mul(term, xf)
+		term.Quo(term, ofpF(k))
+		sum.Add(sum, term)
+		if term.Sign() == 0 || term.MantExp(nil)-sum.MantExp(nil) < -ofpPrec {
+			break
+		}
+	}
+	return sum.Mul(sum, exExp(-x))
+}
+
+// exGammaQ is the regularized upper incomplete gamma function Q(a, x)
+// for an integer a >= 1: e^-x times the sum of x^k/k! for k < a (DLMF
+// 8.4.11).
+func exGammaQ(a int64, x float64) *big.Float {
+	sum, term, xf := ofpF(1), ofpF(1), ofpF(x)
+	for k := int64(1); k < a; k++ {
+		term.Mul(term, xf)
+		term.Quo(term, ofpF(k))
+		sum.Add(sum, term)
+	}
+	return sum.Mul(sum, exExp(-x))
+}
+
+var (
+	_ = exSum
+	_ = exSqrt
+	_ = exGammaP
+	_ = exGammaQ
+)
 `

@@ -32,7 +32,7 @@ func TestLabelsFile(t *testing.T) {
 	for _, l := range labels {
 		count[l.Verdict]++
 		labelled[l.Module] = true
-		if l.Verdict != "BAD" {
+		if !l.bad() {
 			continue
 		}
 		for _, e := range []string{l.Probe, l.Want} {
@@ -41,8 +41,11 @@ func TestLabelsFile(t *testing.T) {
 			}
 		}
 	}
-	if count["BAD"] == 0 || count["SAFE"] == 0 {
-		t.Errorf("labels: %d BAD, %d SAFE; the corpus needs both", count["BAD"], count["SAFE"])
+	if count[verdictBad] == 0 || count[verdictSafe] == 0 {
+		t.Errorf("labels: %d BAD, %d SAFE; the corpus needs both", count[verdictBad], count[verdictSafe])
+	}
+	if count[verdictDigitsBad] == 0 {
+		t.Errorf("labels: no DIGITS-BAD label; the lgamma-digits findings would all count as false positives")
 	}
 	for _, m := range mods {
 		if !labelled[m.Module] {
@@ -62,7 +65,8 @@ func TestLabelsFile(t *testing.T) {
 			t.Errorf("%s: %v", h, err)
 		}
 	}
-	t.Logf("%d labels (%d BAD, %d SAFE) in %d modules", len(labels), count["BAD"], count["SAFE"], len(mods))
+	t.Logf("%d labels (%d BAD, %d SAFE, %d DIGITS-BAD, %d DIGITS-SAFE) in %d modules", len(labels),
+		count[verdictBad], count[verdictSafe], count[verdictDigitsBad], count[verdictDigitsSafe], len(mods))
 }
 
 const header = "module\tversion\tpackage\tfile\tfunction\tline\tverdict\tshape\tprobe\twant\n"
@@ -77,6 +81,8 @@ func TestParseLabelsRejects(t *testing.T) {
 		{"BAD without reference", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tBAD\tloop\tF(21)\t\n"},
 		{"SAFE with probe", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\tloop\tF(21)\texFact(21)\n"},
 		{"unknown verdict", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tMAYBE\tloop\t\t\n"},
+		{"DIGITS-BAD without probe", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tDIGITS-BAD\texp of lgamma\t\t\n"},
+		{"DIGITS-SAFE with probe", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tDIGITS-SAFE\texp of lgamma\tF(21)\texFact(21)\n"},
 		{"missing column", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tSAFE\tloop\t\n"},
 		{"bad line number", "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\tx\tSAFE\tloop\t\t\n"},
 		{"package outside module", "example.com/m\tv1.0.0\texample.com/other\tp/a.go\tF\t3\tSAFE\tloop\t\t\n"},
@@ -91,13 +97,24 @@ func TestParseLabelsRejects(t *testing.T) {
 	if _, err := parseLabels(strings.NewReader(header + good + good)); err == nil {
 		t.Errorf("a function labelled twice: accepted")
 	}
+	// One label per dimension: overflow and digits verdicts may stand
+	// side by side, two digits verdicts may not.
+	digits := "example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tF\t3\tDIGITS-SAFE\texp of lgamma\t\t\n"
+	if _, err := parseLabels(strings.NewReader(header + good + digits)); err != nil {
+		t.Errorf("an overflow and a digits label of one function rejected: %v", err)
+	}
+	if _, err := parseLabels(strings.NewReader(header + digits + digits)); err == nil {
+		t.Errorf("a function labelled twice for digits: accepted")
+	}
 	if _, err := parseLabels(strings.NewReader(good)); err == nil {
 		t.Errorf("no header: accepted")
 	}
 }
 
-// TestScore runs the matching on a module of three functions written
-// here, with findings in the form overfact -json prints.
+// TestScore runs the matching on a module of five functions written
+// here, with findings in the form overfact -json prints: lgamma-digits
+// findings are scored against the digits labels only, every other
+// category against the overflow labels only.
 func TestScore(t *testing.T) {
 	dir := t.TempDir()
 	src := `package p
@@ -117,6 +134,10 @@ func Safe(n int) int {
 }
 
 func Other() {}
+
+func Lost(a float64) float64 {
+	return a
+}
 `
 	if err := os.MkdirAll(filepath.Join(dir, "p"), 0o755); err != nil {
 		t.Fatal(err)
@@ -127,7 +148,9 @@ func Other() {}
 	labels, err := parseLabels(strings.NewReader(header +
 		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tBad\t3\tBAD\tfactorial loop\tBad(21)\texFact(21)\n" +
 		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tMissed\t11\tBAD\tnothing\tMissed(1)\tofpF(2)\n" +
-		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tSafe\t13\tSAFE\tidentity\t\t\n"))
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tSafe\t13\tSAFE\tidentity\t\t\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tBad\t3\tDIGITS-SAFE\tno exponential\t\t\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/a.go\tLost\t19\tDIGITS-BAD\texp of lgamma\tLost(1)\tofpF(2)\n"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -135,10 +158,13 @@ func Other() {}
 	js := `{"example.com/m/p": {"overfact": [
 		{"posn": "` + file + `:6:3", "message": "factorial wraps"},
 		{"posn": "` + file + `:14:9", "message": "on a safe function"},
-		{"posn": "` + file + `:17:1", "message": "on an unlabelled function"}
+		{"posn": "` + file + `:17:1", "message": "on an unlabelled function"},
+		{"category": "lgamma-digits", "posn": "` + file + `:20:9", "message": "digits lost"},
+		{"category": "lgamma-digits", "posn": "` + file + `:11:40", "message": "digits in an overflow-BAD function"},
+		{"category": "lgamma-digits", "posn": "` + file + `:7:3", "message": "digits in a DIGITS-SAFE function"}
 	]}}`
 	found, errs, err := readFindings([]byte(js), dir)
-	if err != nil || len(errs) != 0 || len(found) != 3 {
+	if err != nil || len(errs) != 0 || len(found) != 6 {
 		t.Fatalf("readFindings: %d findings, errors %v, %v", len(found), errs, err)
 	}
 	var out bytes.Buffer
@@ -146,13 +172,24 @@ func Other() {}
 		t.Fatal(err)
 	}
 	got := out.String()
-	// BAD 2, SAFE 1, findings 3, TP 1, FN 1, FP 2 (Safe and Other), recall 1/2, precision 1/3.
+	// Overflow: BAD 2, SAFE 1, findings 3, TP 1, FN 1 (Missed: its
+	// lgamma-digits finding does not count here), FP 2 (Safe and
+	// Other), recall 1/2, precision 1/3. Digits: BAD 1, SAFE 1,
+	// findings 3, TP 1 (Lost), FN 0, FP 2 (Bad, labelled DIGITS-SAFE,
+	// and Missed, without a digits label), recall 1, precision 1/3.
 	for _, want := range []string{
-		"| example.com/m | v1.0.0 | 2 | 1 | 3 | 1 | 1 | 2 | 0.50 | 0.33 |",
+		"## overflow\n\n| module |",
+		"| example.com/m | v1.0.0 | 2 | 1 | 3 | 1 | 1 | 2 | 0.500 (1/2) | 0.333 (1/3) |",
 		"p/a.go Safe [SAFE]",
 		"p/a.go Other [unlabelled]",
 		"example.com/m/p/a.go:11 Missed: nothing",
-		"Found BAD functions, 1:\n- example.com/m/p/a.go:3 Bad: factorial loop",
+		"Found overflow-bad functions, 1:\n- example.com/m/p/a.go:3 Bad: factorial loop",
+		"## digits\n\n| module |",
+		"| example.com/m | v1.0.0 | 1 | 1 | 3 | 1 | 0 | 2 | 1.000 (1/1) | 0.333 (1/3) |",
+		"p/a.go Bad [DIGITS-SAFE]\n    7: digits in a DIGITS-SAFE function",
+		"p/a.go Missed [unlabelled]\n    11: digits in an overflow-BAD function",
+		"Found digits-bad functions, 1:\n- example.com/m/p/a.go:19 Lost: exp of lgamma",
+		"| overflow + digits | 3 | 2 | 6 | 2 | 1 | 4 | 0.667 (2/3) | 0.333 (2/6) |",
 	} {
 		if !strings.Contains(got, want) {
 			t.Errorf("score output lacks %q:\n%s", want, got)
@@ -196,13 +233,19 @@ func TestProbeSource(t *testing.T) {
 // wraps, math/big), fact(21) itself must FAIL (21! = 51090942171709440000
 // does not fit int64, so a wrapped value is no labelling evidence), a
 // float64 factorial at 20 must FAIL (its value is right), and a float64
-// C(200, 2) from factorials must PASS (NaN).
+// C(200, 2) from factorials must PASS (NaN) as an overflow probe but
+// FAIL as a digits probe (NaN is an overflow, not lost digits). As
+// digits probes, B(100000, 3) from log-gamma values must PASS (exact:
+// 2/(100000·100001·100002), DLMF 5.12.1 with integer arguments) and
+// B(3, 4) must FAIL (1/60: within the digits tolerance).
 func TestProbesRun(t *testing.T) {
 	if testing.Short() {
 		t.Skip("runs the go command")
 	}
 	dir := t.TempDir()
 	src := `package p
+
+import "math"
 
 func fact(n int64) int64 {
 	f := int64(1)
@@ -223,6 +266,15 @@ func ffact(n float64) float64 {
 func choose(n, k float64) float64 { return ffact(n) / (ffact(k) * ffact(n-k)) }
 
 func ichoose(n, k int64) int64 { return fact(n) / (fact(k) * fact(n-k)) }
+
+func lbeta(a, b float64) float64 {
+	x, _ := math.Lgamma(a)
+	y, _ := math.Lgamma(b)
+	z, _ := math.Lgamma(a + b)
+	return math.Exp(x + y - z)
+}
+
+func smallBeta(a, b float64) float64 { return lbeta(a, b) }
 `
 	must := func(err error) {
 		t.Helper()
@@ -234,10 +286,13 @@ func ichoose(n, k int64) int64 { return fact(n) / (fact(k) * fact(n-k)) }
 	must(os.WriteFile(filepath.Join(dir, "go.mod"), []byte("module example.com/m\n\ngo 1.21\n"), 0o644))
 	must(os.WriteFile(filepath.Join(dir, "p", "p.go"), []byte(src), 0o644))
 	labels, err := parseLabels(strings.NewReader(header +
-		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tfact\t3\tBAD\tint64 factorial loop\tfact(21)\texFact(21)\n" +
-		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tffact\t11\tBAD\tfloat64 factorial loop, right here\tfact(20)\texFact(20)\n" +
-		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tchoose\t19\tBAD\tbinomial from factorials\tchoose(200, 2)\texBinom(200, 2)\n" +
-		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tichoose\t21\tBAD\tbinomial from factorials\tichoose(21, 1)\texBinom(21, 1)\n"))
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tfact\t5\tBAD\tint64 factorial loop\tfact(21)\texFact(21)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tffact\t13\tBAD\tfloat64 factorial loop, right here\tfact(20)\texFact(20)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tchoose\t21\tBAD\tbinomial from factorials\tchoose(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tchoose\t21\tDIGITS-BAD\tNaN is no digits loss\tchoose(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tichoose\t23\tBAD\tbinomial from factorials\tichoose(21, 1)\texBinom(21, 1)\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tlbeta\t25\tDIGITS-BAD\texp of log-gamma sums\tlbeta(100000, 3)\texQuo(2, exMul(100000, 100001, 100002))\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tsmallBeta\t32\tDIGITS-BAD\texp of log-gamma sums, small arguments\tsmallBeta(3, 4)\texQuo(1, 60)\n"))
 	must(err)
 	pkgs, err := writeProbes(labels, "example.com/m", dir, t.TempDir())
 	must(err)
@@ -252,10 +307,15 @@ func ichoose(n, k int64) int64 { return fact(n) / (fact(k) * fact(n-k)) }
 		t.Fatalf("go test: %v\n%s", err, out)
 	}
 	for _, want := range []string{
-		"PROBE FAIL example.com/m/p/p.go:3 fact: the exact value 51090942171709440000 does not fit int64",
-		"PROBE PASS example.com/m/p/p.go:21 ichoose: got -1, exact 21 (integer differs)",
-		"PROBE FAIL example.com/m/p/p.go:11 ffact: got 2432902008176640000, exact 2432902008176640000: the value is right",
-		"PROBE PASS example.com/m/p/p.go:19 choose: got NaN, exact 19900 (NaN)",
+		"PROBE FAIL example.com/m/p/p.go:5 fact: the exact value 51090942171709440000 does not fit int64",
+		"PROBE PASS example.com/m/p/p.go:23 ichoose: got -1, exact 21 (integer differs)",
+		"PROBE FAIL example.com/m/p/p.go:13 ffact: got 2432902008176640000, exact 2432902008176640000: the value is right",
+		"PROBE PASS example.com/m/p/p.go:21 choose: got NaN, exact 19900 (NaN)",
+		"PROBE FAIL example.com/m/p/p.go:21 choose: got NaN, exact 19900: not finite: an overflow, not lost digits",
+		"PROBE PASS example.com/m/p/p.go:25 lbeta: got ",
+		"exact 1.99994000139997e-15 (relative error ",
+		"PROBE FAIL example.com/m/p/p.go:32 smallBeta: got ",
+		"exact 0.016666666666666667: the value is right",
 	} {
 		if !strings.Contains(string(out), want) {
 			t.Errorf("probe output lacks %q:\n%s", want, out)

@@ -117,21 +117,47 @@ func (t *tally) add(u tally) {
 	t.fp += u.fp
 }
 
+// ratio prints a/b to three decimals with the fraction beside it, so a
+// figure just under a target (18/19 = 0.947) never reads as meeting it.
 func ratio(a, b int) string {
 	if b == 0 {
 		return "n/a"
 	}
-	return fmt.Sprintf("%.2f", float64(a)/float64(b))
+	return fmt.Sprintf("%.3f (%d/%d)", float64(a)/float64(b), a, b)
 }
 
-// score matches each module's findings to its labelled functions and
-// writes the table, the false positives and the missed BAD functions to
-// w. A finding counts for the function whose lines hold it. A BAD
-// function with a finding is found (TP), one without is missed (FN); a
-// SAFE or unlabelled function with a finding is a false positive (FP),
-// counted once per function. It returns an error if a label names a
-// function that is not at its line.
+// score matches each module's findings to its labelled functions, in
+// each dimension, and writes to w a table per dimension (overflow: the
+// findings of every category but lgamma-digits against the BAD and SAFE
+// labels; digits: the lgamma-digits findings against the DIGITS-BAD and
+// DIGITS-SAFE labels), the combined totals, the false positives and the
+// found and missed BAD functions. It returns an error if a label names
+// a function that is not at its line.
 func score(w io.Writer, labels []label, runs []moduleRun) error {
+	var all tally
+	for _, dim := range []string{dimOverflow, dimDigits} {
+		t, err := scoreDimension(w, dim, labels, runs)
+		if err != nil {
+			return err
+		}
+		all.add(t)
+	}
+	fmt.Fprintf(w, "\n## combined\n\n| dimensions | BAD | SAFE | findings | BAD found (TP) | BAD missed (FN) | FP functions | recall | precision |\n|---|---|---|---|---|---|---|---|---|\n")
+	fmt.Fprintf(w, "| overflow + digits | %d | %d | %d | %d | %d | %d | %s | %s |\n",
+		all.bad, all.safe, all.findings, all.tp, all.fn, all.fp, ratio(all.tp, all.bad), ratio(all.tp, all.tp+all.fp))
+	for _, run := range runs {
+		for _, e := range run.Errors {
+			fmt.Fprintf(w, "\nanalyzer error: %s\n", e)
+		}
+	}
+	return nil
+}
+
+// scoreDimension scores one dimension: a finding counts for the function
+// whose lines hold it. A BAD function with a finding is found (TP), one
+// without is missed (FN); a SAFE or unlabelled function with a finding
+// is a false positive (FP), counted once per function.
+func scoreDimension(w io.Writer, dim string, labels []label, runs []moduleRun) (tally, error) {
 	type fpItem struct {
 		where, verdict string
 		msgs           []string
@@ -139,12 +165,13 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 	var total tally
 	var fps []fpItem
 	var missed, found []label
+	fmt.Fprintf(w, "## %s\n\n", dim)
 	fmt.Fprintln(w, "| module | version | BAD | SAFE | findings | BAD found (TP) | BAD missed (FN) | FP functions | recall | precision |")
 	fmt.Fprintln(w, "|---|---|---|---|---|---|---|---|---|---|")
 	for _, run := range runs {
 		spans, err := moduleSpans(run.Dir)
 		if err != nil {
-			return err
+			return total, err
 		}
 		byFunc := map[string]label{}
 		for _, l := range labels {
@@ -152,7 +179,7 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 				continue
 			}
 			if l.Version != run.Version {
-				return fmt.Errorf("%s: labelled at %s, run at %s", l.Module, l.Version, run.Version)
+				return total, fmt.Errorf("%s: labelled at %s, run at %s", l.Module, l.Version, run.Version)
 			}
 			var sp *span
 			for i := range spans {
@@ -161,14 +188,21 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 				}
 			}
 			if sp == nil {
-				return fmt.Errorf("labels line %d: no function %s at %s:%d in %s@%s", l.lineNo, l.Func, l.File, l.Line, l.Module, l.Version)
+				return total, fmt.Errorf("labels line %d: no function %s at %s:%d in %s@%s", l.lineNo, l.Func, l.File, l.Line, l.Module, l.Version)
 			}
-			byFunc[l.File+"\t"+l.Func] = l
+			if l.dimension() == dim {
+				byFunc[l.File+"\t"+l.Func] = l
+			}
 		}
-		// Functions with findings, and their messages.
+		// Functions with findings of this dimension, and their messages.
 		hit := map[string][]string{}
 		var order []string
+		var t tally
 		for _, f := range run.Findings {
+			if findingDimension(f.Category) != dim {
+				continue
+			}
+			t.findings++
 			key := f.file + "\t(package level)"
 			if sp, ok := spanAt(spans, f.file, f.line); ok {
 				key = sp.File + "\t" + sp.Func
@@ -178,32 +212,29 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 			}
 			hit[key] = append(hit[key], fmt.Sprintf("%d: %s", f.line, f.Message))
 		}
-		var t tally
-		t.findings = len(run.Findings)
 		for _, l := range byFunc {
-			switch l.Verdict {
-			case "BAD":
-				t.bad++
-				if len(hit[l.File+"\t"+l.Func]) > 0 {
-					t.tp++
-					found = append(found, l)
-				} else {
-					t.fn++
-					missed = append(missed, l)
-				}
-			case "SAFE":
+			if !l.bad() {
 				t.safe++
+				continue
+			}
+			t.bad++
+			if len(hit[l.File+"\t"+l.Func]) > 0 {
+				t.tp++
+				found = append(found, l)
+			} else {
+				t.fn++
+				missed = append(missed, l)
 			}
 		}
 		for _, key := range order {
 			l, ok := byFunc[key]
-			if ok && l.Verdict == "BAD" {
+			if ok && l.bad() {
 				continue
 			}
 			t.fp++
 			verdict := "unlabelled"
 			if ok {
-				verdict = "SAFE"
+				verdict = l.Verdict
 			}
 			file, fn, _ := strings.Cut(key, "\t")
 			fps = append(fps, fpItem{where: run.Module + "/" + file + " " + fn, verdict: verdict, msgs: hit[key]})
@@ -214,12 +245,7 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 	}
 	fmt.Fprintf(w, "| **total** | | %d | %d | %d | %d | %d | %d | %s | %s |\n",
 		total.bad, total.safe, total.findings, total.tp, total.fn, total.fp, ratio(total.tp, total.bad), ratio(total.tp, total.tp+total.fp))
-	for _, run := range runs {
-		for _, e := range run.Errors {
-			fmt.Fprintf(w, "\nanalyzer error: %s\n", e)
-		}
-	}
-	fmt.Fprintf(w, "\nFalse positives (findings in SAFE or unlabelled functions), %d:\n", len(fps))
+	fmt.Fprintf(w, "\nFalse positives (%s findings in functions not labelled bad), %d:\n", dim, len(fps))
 	for _, fp := range fps {
 		fmt.Fprintf(w, "- %s [%s]\n", fp.where, fp.verdict)
 		for _, m := range fp.msgs {
@@ -227,14 +253,15 @@ func score(w io.Writer, labels []label, runs []moduleRun) error {
 		}
 	}
 	sort.Slice(found, func(i, j int) bool { return probeID(found[i]) < probeID(found[j]) })
-	fmt.Fprintf(w, "\nFound BAD functions, %d:\n", len(found))
+	fmt.Fprintf(w, "\nFound %s-bad functions, %d:\n", dim, len(found))
 	for _, l := range found {
 		fmt.Fprintf(w, "- %s: %s\n", probeID(l), l.Shape)
 	}
 	sort.Slice(missed, func(i, j int) bool { return probeID(missed[i]) < probeID(missed[j]) })
-	fmt.Fprintf(w, "\nMissed BAD functions, %d:\n", len(missed))
+	fmt.Fprintf(w, "\nMissed %s-bad functions, %d:\n", dim, len(missed))
 	for _, l := range missed {
 		fmt.Fprintf(w, "- %s: %s\n", probeID(l), l.Shape)
 	}
-	return nil
+	fmt.Fprintln(w)
+	return total, nil
 }

@@ -7,7 +7,12 @@
 // the file. After each package it reads the server's resident set size
 // (VmRSS) and peak (VmHWM) from /proc/PID/status, and prints them.
 //
-// scripts/lsp-memory.sh builds the server and runs this command.
+// With -latency it measures time instead (latency.go): a cold open of a
+// file of an existing module to its first diagnostics, and edits of a
+// generated 2,000-line file to their diagnostics.
+//
+// scripts/lsp-memory.sh and scripts/lsp-latency.sh build the server and
+// run this command.
 package main
 
 import (
@@ -60,7 +65,17 @@ func main() {
 	n := flag.Int("packages", 120, "number of packages to open, analyse and close in turn")
 	every := flag.Int("every", 10, "print the memory figures after every `n` packages")
 	limit := flag.Int("target", 1024, "the peak RSS target in MiB, for the printed ratio")
+	latency := flag.Bool("latency", false, "measure latency instead of memory: -open's cold open, then -edits edits of a generated file")
+	open := flag.String("open", "", "with -latency: a Go `file` of an existing module to open cold")
+	edits := flag.Int("edits", 20, "with -latency: edits of the generated file to time")
 	flag.Parse()
+	if *latency {
+		if err := runLatency(*server, *open, *edits); err != nil {
+			fmt.Fprintln(os.Stderr, "memclient:", err)
+			os.Exit(1)
+		}
+		return
+	}
 	if err := run(*server, *n, *every, *limit); err != nil {
 		fmt.Fprintln(os.Stderr, "memclient:", err)
 		os.Exit(1)
@@ -77,27 +92,12 @@ func run(server string, n, every, limit int) error {
 	if err != nil {
 		return err
 	}
-	cmd := exec.Command(server, "lsp")
-	cmd.Dir = dir
-	cmd.Stderr = os.Stderr
-	in, err := cmd.StdinPipe()
+	c, cmd, err := startServer(server, dir)
 	if err != nil {
-		return err
-	}
-	out, err := cmd.StdoutPipe()
-	if err != nil {
-		return err
-	}
-	if err := cmd.Start(); err != nil {
 		return err
 	}
 	defer cmd.Process.Kill()
-	c := &client{in: in, out: bufio.NewReader(out)}
 	start := time.Now()
-	if _, err := c.call("initialize", map[string]any{"processId": os.Getpid(), "rootUri": fileURI(dir), "capabilities": map[string]any{}}); err != nil {
-		return err
-	}
-	c.notify("initialized", map[string]any{})
 	peak := 0
 	for i, f := range files {
 		if err := c.session(f); err != nil {
@@ -112,6 +112,41 @@ func run(server string, n, every, limit int) error {
 			fmt.Printf("after %3d packages: RSS %5d MiB, peak RSS %5d MiB, %v\n", i+1, rss/1024, hwm/1024, time.Since(start).Round(time.Second))
 		}
 	}
+	if err := c.shutdown(cmd); err != nil {
+		return err
+	}
+	fmt.Printf("peak RSS (VmHWM) over %d packages: %d MiB; target %d MiB; ratio %.2f×\n", n, peak/1024, limit, float64(peak)/1024/float64(limit))
+	return nil
+}
+
+// startServer starts "server lsp" in dir and initializes it with dir as
+// the workspace root.
+func startServer(server, dir string) (*client, *exec.Cmd, error) {
+	cmd := exec.Command(server, "lsp")
+	cmd.Dir = dir
+	cmd.Stderr = os.Stderr
+	in, err := cmd.StdinPipe()
+	if err != nil {
+		return nil, nil, err
+	}
+	out, err := cmd.StdoutPipe()
+	if err != nil {
+		return nil, nil, err
+	}
+	if err := cmd.Start(); err != nil {
+		return nil, nil, err
+	}
+	c := &client{in: in, out: bufio.NewReader(out)}
+	if _, err := c.call("initialize", map[string]any{"processId": os.Getpid(), "rootUri": fileURI(dir), "capabilities": map[string]any{}}); err != nil {
+		cmd.Process.Kill()
+		return nil, nil, err
+	}
+	c.notify("initialized", map[string]any{})
+	return c, cmd, nil
+}
+
+// shutdown asks the server to stop and waits for it.
+func (c *client) shutdown(cmd *exec.Cmd) error {
 	if _, err := c.call("shutdown", nil); err != nil {
 		return err
 	}
@@ -119,7 +154,6 @@ func run(server string, n, every, limit int) error {
 	if err := cmd.Wait(); err != nil {
 		return fmt.Errorf("server: %v", err)
 	}
-	fmt.Printf("peak RSS (VmHWM) over %d packages: %d MiB; target %d MiB; ratio %.2f×\n", n, peak/1024, limit, float64(peak)/1024/float64(limit))
 	return nil
 }
 

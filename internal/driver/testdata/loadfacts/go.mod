@@ -1,0 +1,3 @@
+module example.com/loadfacts
+
+go 1.22
