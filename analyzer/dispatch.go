@@ -29,17 +29,18 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall || fc.powLoops != nil {
 		fc.checkExprs(body)
 	}
+	model := fc.modelOnce()
 	if s.worthLoops() || s.knownCall {
-		fc.checkModel()
+		fc.checkModel(model)
 	}
 	if s.knownCall {
-		fc.checkModelCalls()
+		fc.checkModelCalls(model)
 	}
 	if s.logCall {
 		fc.checkLgammaSign()
 	}
 	if s.logCall || s.knownCall {
-		fc.checkStirling()
+		fc.checkStirling(model)
 	}
 	if s.knownCall {
 		fc.checkLogGamma()

@@ -27,6 +27,20 @@ func (fc *fnCtx) evalModel() *vm.Result {
 	return res
 }
 
+// modelOnce returns a function that evaluates fc's value model on its
+// first call and gives that result on every later one: the checks of one
+// function (checkModel, checkModelCalls, checkStirling) share one
+// evaluation instead of walking the function once each.
+func (fc *fnCtx) modelOnce() func() *vm.Result {
+	var res *vm.Result
+	return func() *vm.Result {
+		if res == nil {
+			res = fc.evalModel()
+		}
+		return res
+	}
+}
+
 // modelCallee gives the value of a call of a function with a factorial
 // fact, in the algebra.
 func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
@@ -66,11 +80,11 @@ func (fc *fnCtx) modelCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 // checkModel reports, from the value model, what the loops of the
 // function compute where it leaves its type and no matcher reported the
 // loop: one finding per root cause.
-func (fc *fnCtx) checkModel() {
+func (fc *fnCtx) checkModel(model func() *vm.Result) {
 	if !fc.modelWorth() {
 		return
 	}
-	res := fc.evalModel()
+	res := model()
 	judged := make(map[ast.Stmt]bool)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelRatio(res, e, judged)

@@ -373,12 +373,12 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 // helper it calls) already breaks: binomial, hypergeometric and
 // negative binomial probabilities over a binomial helper built from
 // float factorials, ratios of factorial and Γ helpers.
-func (fc *fnCtx) checkModelCalls() {
+func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
 	var res *vm.Result
 	for _, root := range fc.callRoots() {
 		fc.checkLoopMultinomial(root)
 		if res == nil {
-			res = fc.evalModel()
+			res = model()
 		}
 		fc.checkCallRoot(res, root)
 	}

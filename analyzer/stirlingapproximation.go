@@ -62,11 +62,11 @@ type stirlingHit struct {
 }
 
 // checkStirling reports hand-written Stirling approximations.
-func (fc *fnCtx) checkStirling() {
+func (fc *fnCtx) checkStirling(model func() *vm.Result) {
 	if !fc.mayHoldStirling() {
 		return
 	}
-	res := fc.evalModel()
+	res := model()
 	var hits []stirlingHit
 	collect := func(m map[ast.Expr]*vm.Term, log bool) {
 		for e, t := range m {
