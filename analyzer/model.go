@@ -20,7 +20,7 @@ const modelMaxNodes = vm.DefaultMaxNodes
 
 // evalModel runs the value model over the function.
 func (fc *fnCtx) evalModel() *vm.Result {
-	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, MaxNodes: modelMaxNodes})
+	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, MaxNodes: modelMaxNodes})
 	if res.Capped && debug {
 		fmt.Fprintf(debugOut, "overfact: %s: value model stopped at %d syntax nodes; the rest of the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), modelMaxNodes)
 	}
@@ -695,8 +695,9 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 }
 
 // modelWorth is the model's own cheap prefilter: a counting loop that
-// no matcher reported, or a binomial coefficient from math.Lgamma beside
-// two math.Pow calls (the pmf). Functions whose loops are all reported
+// no matcher reported, or a binomial coefficient from math.Lgamma (or
+// from a function whose value fact is such a binomial or its
+// logarithm) beside two math.Pow calls (the pmf) or a division. Functions whose loops are all reported
 // already cost one walk of their syntax and no evaluation.
 func (fc *fnCtx) modelWorth() bool {
 	open, lgamma, pows := false, false, 0
@@ -712,6 +713,9 @@ func (fc *fnCtx) modelWorth() bool {
 				lgamma = true
 			case fc.c.isMathFunc(n, "Pow"):
 				pows++
+			case fc.formedCall(n):
+				// A binomial another function forms from log-gamma.
+				lgamma = true
 			}
 		}
 		return !open

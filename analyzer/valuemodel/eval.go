@@ -16,6 +16,11 @@ type Options struct {
 	// function with a factorial fact, from the values of its arguments
 	// (nil where unknown); nil when the call is not known.
 	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// LogCallee returns t for a call the caller knows to return ln t,
+	// such as a function that returns a sum of log-gamma values
+	// (ln C(n, k) = lgamma(n+1) − lgamma(k+1) − lgamma(n−k+1)), so that
+	// math.Exp of the call is t; nil where unknown.
+	LogCallee func(call *ast.CallExpr, args []*Term) *Term
 	// LogGamma reports whether a call of one argument returns ln|Γ| of
 	// it, as a function that returns the first result of math.Lgamma
 	// does; nil when no such function is known.
@@ -760,6 +765,11 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		}
 		if t := e.opts.Callee(x, ts); t != nil {
 			return &value{t: t}
+		}
+		if e.opts.LogCallee != nil {
+			if t := e.opts.LogCallee(x, ts); t != nil {
+				return &value{t: t, log: true}
+			}
 		}
 	}
 	return nil
