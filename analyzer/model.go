@@ -198,8 +198,16 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 			if sel, ok := n.(*ast.SelectorExpr); ok && in == nil && fc.c.objOf(sel.X) == s.Obj && fc.c.pass.TypesInfo.ObjectOf(sel.Sel) == s.Field {
 				in = sel
 			}
+			if fc.isLenOf(n, s) && in == nil {
+				in = n.(ast.Expr)
+			}
 			return in == nil
 		})
+		if in == nil && fc.isLenSym(s) {
+			if r, ok := fc.lenBefore(s, at); ok {
+				return r.Meet(fc.lenLocalRange(s, at))
+			}
+		}
 		if in == nil {
 			in = res.Exprs[s]
 		}
@@ -209,6 +217,76 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 		return ranges.Top()
 	}
 	return fc.entryRange(s.Obj, at)
+}
+
+// isLenSym reports whether s is the model's variable len(x).
+func (fc *fnCtx) isLenSym(s vm.Sym) bool {
+	b, ok := s.Obj.(*types.Builtin)
+	return ok && b.Name() == "len" && s.Field != nil
+}
+
+// isLenOf reports whether n is a call len(x) of s = len(x).
+func (fc *fnCtx) isLenOf(n ast.Node, s vm.Sym) bool {
+	call, ok := n.(*ast.CallExpr)
+	if !ok || len(call.Args) != 1 || !fc.isLenSym(s) || fc.c.objOf(call.Args[0]) != s.Field {
+		return false
+	}
+	b, ok := fc.c.pass.TypesInfo.Uses[calleeIdent(call)].(*types.Builtin)
+	return ok && b.Name() == "len"
+}
+
+// lenBefore is the range of len(x) at at from its reads in the simple
+// statements that run before at whenever at runs (earlier statements of
+// a block that holds at, outside closures and the right operands of &&
+// and ||): x keeps one length, so a bound at any of them holds at at
+// too (c := make(T, len(cp)) after a guard on len(cp)).
+func (fc *fnCtx) lenBefore(s vm.Sym, at ast.Node) (ranges.Interval, bool) {
+	r, found := ranges.Top(), false
+	var reads func(n ast.Node)
+	reads = func(n ast.Node) {
+		ast.Inspect(n, func(m ast.Node) bool {
+			switch m := m.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.BinaryExpr:
+				if m.Op == token.LAND || m.Op == token.LOR {
+					reads(m.X)
+					return false
+				}
+			}
+			if fc.isLenOf(m, s) {
+				r, found = r.Meet(fc.rangeOf(m.(ast.Expr))), true
+			}
+			return true
+		})
+	}
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if n == nil || at.Pos() < n.Pos() || at.End() > n.End() {
+			return false // not on the path to at
+		}
+		var list []ast.Stmt
+		switch b := n.(type) {
+		case *ast.BlockStmt:
+			list = b.List
+		case *ast.CaseClause:
+			list = b.Body
+		case *ast.FuncLit:
+			return false
+		}
+		for _, st := range list {
+			if st.Pos() > at.Pos() {
+				break
+			}
+			switch st.(type) {
+			case *ast.AssignStmt, *ast.DeclStmt, *ast.ExprStmt:
+				if st.End() <= at.Pos() {
+					reads(st)
+				}
+			}
+		}
+		return true
+	})
+	return r, found
 }
 
 // lenLocalRange is the range at at of the locals the function defines

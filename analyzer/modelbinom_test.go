@@ -84,3 +84,46 @@ func TestModelCountRatioProbe(t *testing.T) {
 		t.Errorf("C(600,300)²/C(1200,600) = %v, want about 0.046", f)
 	}
 }
+
+// TestPeeledWeights runs the Bézier outlines of a sign plotter, whose
+// Bernstein weights are set under a switch on the loop counter: the
+// first two outright, the rest one ratio at a time.
+func TestPeeledWeights(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "signcurve")
+}
+
+// TestPeeledWeightsProbe runs NewOutline's weights at the first bad
+// length the message names, 1031 control points, against math/big: the
+// last weight C(1030, 1030) = 1, the one before it 1030, yet the code's
+// running weight is +Inf from the central step on; at 400 points
+// (NewGlyph's bound) every weight is finite.
+func TestPeeledWeightsProbe(t *testing.T) {
+	weights := func(n int) []float64 {
+		out := make([]float64, n)
+		var w float64
+		for i := range out {
+			switch i {
+			case 0:
+				w = 1
+			case 1:
+				w = float64(n) - 1
+			default:
+				w *= float64(n-i) / float64(i)
+			}
+			out[i] = w
+		}
+		return out
+	}
+	w := weights(1031)
+	for _, i := range []int{1029, 1030} {
+		want, _ := new(big.Float).SetInt(new(big.Int).Binomial(1030, int64(i))).Float64()
+		if !math.IsInf(w[i], 1) || math.IsInf(want, 0) {
+			t.Errorf("weight %d of 1031 = %v, exact C(1030, %d) = %v: want +Inf where the exact value fits", i, w[i], i, want)
+		}
+	}
+	for i, v := range weights(400) {
+		if math.IsInf(v, 0) {
+			t.Fatalf("weight %d of 400 = %v, want finite", i, v)
+		}
+	}
+}

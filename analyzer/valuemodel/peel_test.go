@@ -1,0 +1,114 @@
+package valuemodel
+
+import (
+	"math"
+	"math/big"
+	"testing"
+)
+
+// A switch on the counter whose constant cases are the first trips and
+// whose default runs on the rest, as Bernstein weights are set: on trip
+// t ≥ 2 the weight is w(1)·∏_{i=2}^{t} (N−i)/i = C(N−1, t), checked
+// against math/big's binomial for N = 40 (the identity is common
+// practice: the multiplicative formula of C(n, k)).
+func TestPeelSwitch(t *testing.T) {
+	info, fd := load(t, `func f(c []float64) float64 {
+	var w float64
+	for i := range c {
+		switch i {
+		case 0:
+			w = 1
+		case 1:
+			w = float64(len(c)) - 1
+		default:
+			w *= float64(len(c)-i) / float64(i)
+		}
+		c[i] *= w
+	}
+	return w
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if len(res.Loops) != 1 || len(res.Loops[0].Accs) != 1 {
+		t.Fatalf("want one loop with one accumulator, got %d loops", len(res.Loops))
+	}
+	l := res.Loops[0]
+	a := l.Accs[0]
+	if len(a.Ops) != 1 || a.Guarded || !a.Ops[0].From.Equal(Int(2)) {
+		t.Fatalf("ops %+v (guarded %v), want one op from trip 2 on", a.Ops, a.Guarded)
+	}
+	if f := Recognise(a.Ops[0].After); f.Kind != Binomial {
+		t.Fatalf("after the op: %v, want a binomial", a.Ops[0].After)
+	}
+	syms := map[string]Sym{}
+	for s := range res.Exprs {
+		syms[s.Name()] = s
+	}
+	n := int64(40)
+	for trip := int64(2); trip < n; trip++ {
+		val := map[Sym]float64{syms["len(c)"]: float64(n), l.Iter: float64(trip)}
+		want, _ := new(big.Float).SetInt(new(big.Int).Binomial(n-1, trip)).Float64()
+		closeLog(t, "weight", a.Ops[0].After, val, math.Log(want))
+	}
+}
+
+// Constant cases that are not the first trips, a case that breaks, or
+// a start value that reads what the loop changes are beyond the
+// summary: the weight is then no accumulator.
+func TestPeelSwitchRefused(t *testing.T) {
+	for name, src := range map[string]string{
+		"gap": `func f(c []float64, n float64) float64 {
+	var w float64
+	for i := range c {
+		switch i {
+		case 0:
+			w = 1
+		case 2:
+			w = n
+		default:
+			w *= n / float64(i)
+		}
+	}
+	return w
+}`,
+		"break": `func f(c []float64, n float64) float64 {
+	var w float64
+	for i := range c {
+		switch i {
+		case 0:
+			w = 1
+		default:
+			if n > 3 {
+				break
+			}
+			w *= n / float64(i)
+		}
+	}
+	return w
+}`,
+		"start reads the loop": `func f(c []float64, n float64) float64 {
+	var w, s float64
+	for i := range c {
+		s += c[i]
+		switch i {
+		case 0:
+			w = s
+		default:
+			w *= n / float64(i)
+		}
+	}
+	return w
+}`,
+	} {
+		t.Run(name, func(t *testing.T) {
+			info, fd := load(t, src, "f")
+			res := Evaluate(info, fd, Options{})
+			for _, l := range res.Loops {
+				for _, a := range l.Accs {
+					if a.Obj.Name() == "w" {
+						t.Errorf("w summarised as an accumulator: %+v", a)
+					}
+				}
+			}
+		})
+	}
+}
