@@ -68,6 +68,9 @@ type checker struct {
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
+	// weights holds the fields that store running binomial weights
+	// (modelfields.go).
+	weights map[fieldPath]*weightField
 }
 
 type reportKey struct {
@@ -140,6 +143,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
 	}
+	c.checkWeightReads(funcs)
 	c.releaseGuards()
 	return nil, nil
 }

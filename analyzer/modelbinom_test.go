@@ -126,4 +126,35 @@ func TestPeeledWeightsProbe(t *testing.T) {
 			t.Fatalf("weight %d of 400 = %v, want finite", i, v)
 		}
 	}
+	// Outline.At at t = 1/2 over 1031 control points all at x = 1:
+	// Σ C(1030, i)·2^−1030 = 1 (the binomial theorem, common practice;
+	// summed here in math/big), but the code's terms are +Inf·t^i.
+	at := func(w []float64, t float64) float64 {
+		pts := make([]float64, len(w))
+		pts[0] = w[0]
+		u := t
+		for i := 1; i < len(w); i++ {
+			pts[i] = w[i] * u
+			u *= t
+		}
+		t1 := 1 - t
+		tt := t1
+		p := pts[len(pts)-1]
+		for i := len(pts) - 2; i >= 0; i-- {
+			p += pts[i] * tt
+			tt *= t1
+		}
+		return p
+	}
+	sum := new(big.Int)
+	for i := int64(0); i <= 1030; i++ {
+		sum.Add(sum, new(big.Int).Binomial(1030, i))
+	}
+	exact, _ := new(big.Rat).SetFrac(sum, new(big.Int).Lsh(big.NewInt(1), 1030)).Float64()
+	if v := at(w, 0.5); !math.IsNaN(v) && !math.IsInf(v, 0) || exact != 1 {
+		t.Errorf("Outline.At(1/2) over 1031 points = %v, exact %v: want +Inf or NaN where the exact value is 1", v, exact)
+	}
+	if v := at(weights(400), 0.5); math.Abs(v-1) > 1e-9 {
+		t.Errorf("Glyph.At(1/2) over 400 points = %v, want 1", v)
+	}
 }

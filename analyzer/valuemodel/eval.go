@@ -616,6 +616,15 @@ func (e *evaluator) evalRaw(x ast.Expr, en env) *value {
 		return e.binary(x.Op, a, b)
 	case *ast.CallExpr:
 		return e.call(x, en)
+	case *ast.CompositeLit:
+		// Point{X: a * u, …}: the elements' values, for what reads
+		// them; the literal itself has none.
+		for _, el := range x.Elts {
+			if kv, ok := el.(*ast.KeyValueExpr); ok {
+				el = kv.Value
+			}
+			e.eval(el, en)
+		}
 	}
 	return nil
 }

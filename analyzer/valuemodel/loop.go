@@ -1069,7 +1069,25 @@ func (e *evaluator) exits(body *ast.BlockStmt) bool {
 // rangeLen returns len(x) for a range over a slice variable x that
 // keeps its length, nil otherwise.
 func (e *evaluator) rangeLen(s *ast.RangeStmt) *value {
-	x := e.objOf(s.X)
+	if sl, ok := ast.Unparen(s.X).(*ast.SliceExpr); ok && sl.High == nil && sl.Max == nil && sl.Low != nil {
+		// x[lo:] of such a slice: len(x) − lo trips.
+		n := e.sliceLen(e.objOf(sl.X))
+		tv, ok := e.info.Types[sl.Low]
+		if n == nil || !ok || tv.Value == nil {
+			return nil
+		}
+		lo, ok := ratOf(tv.Value)
+		a, ok2 := affineOf(n)
+		if !ok || !ok2 {
+			return nil
+		}
+		return &value{t: FromAffine(a.Sub(Const(lo)))}
+	}
+	return e.sliceLen(e.objOf(s.X))
+}
+
+// sliceLen returns len(x) for a slice variable x that keeps its length.
+func (e *evaluator) sliceLen(x types.Object) *value {
 	if l, ok := e.lenSym(x); ok {
 		if v := e.makeLen[x]; v != nil {
 			return v

@@ -1,6 +1,7 @@
 package valuemodel
 
 import (
+	"go/ast"
 	"math"
 	"math/big"
 	"testing"
@@ -110,5 +111,39 @@ func TestPeelSwitchRefused(t *testing.T) {
 				}
 			}
 		})
+	}
+}
+
+// A range over x[1:] of a slice that keeps its length runs len(x) − 1
+// trips, and the elements of a composite literal get values: u is
+// t^(i+1) inside Pt{X: u}.
+func TestRangeTailAndLiteral(t *testing.T) {
+	info, fd := load(t, `type Pt struct{ X float64 }
+func f(c []Pt, t float64) float64 {
+	u := t
+	for i := range c[1:] {
+		c[i+1] = Pt{X: u}
+		u *= t
+	}
+	return u
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if len(res.Loops) != 1 {
+		t.Fatalf("want one loop, got %d", len(res.Loops))
+	}
+	if got := res.Loops[0].Count.String(); got != "len(c) - 1" {
+		t.Errorf("trips %s, want len(c) - 1", got)
+	}
+	if got := returned(res, fd).String(); got != "(t)^(len(c))" {
+		t.Errorf("returned %s, want (t)^(len(c))", got)
+	}
+	found := false
+	for x, v := range res.Values {
+		if id, ok := x.(*ast.Ident); ok && id.Name == "u" && v != nil && len(v.Pows) == 1 && !v.Pows[0].Exp.IsConst() {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no value for u inside the literal")
 	}
 }
