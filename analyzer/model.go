@@ -11,6 +11,7 @@ import (
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
 
@@ -643,7 +644,63 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	clause, definite := verdict(nv.Name(), n, central.FirstBad)
 	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the product is +Inf or NaN although the probability is at most 1",
 		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox())
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.formedPMFMatch(res, e, f)})
+}
+
+// formedPMFMatch offers the helper call for a binomial probability
+// whose coefficient is the call of another function whose value fact is
+// the binomial (exp of log-gamma differences, a table for small n):
+// tallykit.Choose(n, k) * math.Pow(p, k) * math.Pow(1-p, n-k) becomes
+// lgamma.BinomialPMF(k, n, p), which the fixer checks factor by factor.
+// An exponential the code takes itself (math.Exp(Lchoose(n, k))) has
+// no such factor and no fix.
+func (fc *fnCtx) formedPMFMatch(res *vm.Result, e ast.Expr, f vm.Form) *fixes.Match {
+	found := false
+	var walk func(x ast.Expr)
+	walk = func(x ast.Expr) {
+		switch x := fc.stripConv(x).(type) {
+		case *ast.BinaryExpr:
+			if x.Op == token.MUL {
+				walk(x.X)
+				walk(x.Y)
+			}
+		case *ast.CallExpr:
+			found = found || fc.formedCall(x) && !fc.c.isMathFunc(x, "Exp")
+		}
+	}
+	walk(e)
+	if !found {
+		return nil
+	}
+	m := fc.callRootMatch(res, e, f)
+	if m == nil {
+		return nil
+	}
+	// The operands as e reads them: the model's first read of a
+	// variable may lie in a guard above.
+	for i, a := range m.Args {
+		var in ast.Expr
+		ast.Inspect(e, func(n ast.Node) bool {
+			if x, ok := n.(ast.Expr); ok && in == nil && (isIdentOrSel(x)) && src(x) == src(a) {
+				in = x
+			}
+			return in == nil
+		})
+		if in == nil {
+			return nil
+		}
+		m.Args[i] = in
+	}
+	return m
+}
+
+// isIdentOrSel reports whether x is a name or a selection x.f.
+func isIdentOrSel(x ast.Expr) bool {
+	switch x.(type) {
+	case *ast.Ident, *ast.SelectorExpr:
+		return true
+	}
+	return false
 }
 
 // modelFactorialFunc recognises, from the value model, a function

@@ -26,6 +26,14 @@ func (t Tray) Sprouts(k float64) float64 {
 	return tallykit.Choose(t.Seeds, ki) * math.Pow(t.Rate, float64(ki)) * math.Pow(1-t.Rate, float64(t.Seeds-ki)) // want `computes the binomial probability C\(t.Seeds, ki\)·t.Rate\^ki·\(1−t.Rate\)\^\(.*\) in float64 with C\(t.Seeds, ki\) formed on its own: it overflows to \+Inf for t.Seeds ≥ 1030`
 }
 
+// Germinated is the chance that k of n seeds sprout at the given rate.
+func Germinated(k, n int, rate float64) float64 {
+	if k < 0 || k > n {
+		return 0
+	}
+	return tallykit.Choose(n, k) * math.Pow(rate, float64(k)) * math.Pow(1-rate, float64(n-k)) // want `computes the binomial probability C\(n, k\)·rate\^k·\(1−rate\)\^\(.*\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1030`
+}
+
 // SproutsFromLog takes the coefficient out of log space on its own
 // before the powers scale it down.
 func SproutsFromLog(n, k int, rate float64) float64 {
