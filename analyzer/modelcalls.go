@@ -247,15 +247,11 @@ func (fc *fnCtx) formedValue(res *vm.Result, roots []ast.Expr, value *vm.Term, i
 	if form.Kind != vm.Binomial || !t.Float {
 		return false
 	}
-	n, alpha, _, ok := oneVar(form.Args[0])
-	if !ok || alpha.Sign() <= 0 {
-		return false
-	}
 	// A logarithm is judged where its callers exponentiate it, in its
 	// own float type.
 	first := thresholds.CentralBinomial(t.Num).FirstBad
 	for _, r := range roots {
-		if rg := fc.symRange(res, n, r); rg.IsEmpty() || rg.Hi < first {
+		if !fc.reaches(res, form.Args[0], r, first) {
 			return false
 		}
 		if isLog {
@@ -273,6 +269,35 @@ func (fc *fnCtx) formedValue(res *vm.Result, roots []ast.Expr, value *vm.Term, i
 		}
 	}
 	return true
+}
+
+// reaches reports whether the affine form a can be at least first at
+// r, as far as its variables' ranges there tell: a variable with a
+// positive coefficient and no upper bound, or the largest value of a
+// past first.
+func (fc *fnCtx) reaches(res *vm.Result, a vm.Affine, r ast.Node, first int64) bool {
+	top := new(big.Rat)
+	if a.C != nil {
+		top.Set(a.C)
+	}
+	for _, l := range a.Terms {
+		rg := fc.symRange(res, l.Sym, r)
+		if rg.IsEmpty() {
+			return false
+		}
+		end := rg.Hi
+		if l.K.Sign() < 0 {
+			end = rg.Lo
+		}
+		if end == math.MaxInt64 && l.K.Sign() > 0 {
+			return true
+		}
+		if end == math.MinInt64 || end == math.MaxInt64 {
+			return l.K.Sign() < 0 && end == math.MinInt64
+		}
+		top.Add(top, new(big.Rat).Mul(l.K, big.NewRat(end, 1)))
+	}
+	return top.Cmp(big.NewRat(first, 1)) >= 0
 }
 
 // tableBranch accepts returns whose value the model does not know or

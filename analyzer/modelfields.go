@@ -3,6 +3,7 @@ package analyzer
 import (
 	"fmt"
 	"go/ast"
+	"go/constant"
 	"go/token"
 	"go/types"
 
@@ -47,8 +48,18 @@ type weightField struct {
 	first  int64  // the first value of nName at which it breaks
 }
 
-// pathOf returns the field path e selects.
+// pathOf returns the field path e selects; an element of a slice or
+// array held in a field (c.weights[i]) has the field's path.
 func (c *checker) pathOf(e ast.Expr) (fieldPath, bool) {
+	if ix, ok := ast.Unparen(e).(*ast.IndexExpr); ok {
+		if t := c.pass.TypesInfo.TypeOf(ix.X); t != nil {
+			switch t.Underlying().(type) {
+			case *types.Slice, *types.Array:
+				return c.pathOf(ix.X)
+			}
+		}
+		return fieldPath{}, false
+	}
 	sel, ok := ast.Unparen(e).(*ast.SelectorExpr)
 	if !ok {
 		return fieldPath{}, false
@@ -163,6 +174,9 @@ func (fc *fnCtx) checkWeightRead() {
 			w, _ = c.weightHeld(read)
 		}
 		base, ok := growingPower(res.Values[other])
+		if !ok {
+			base, ok = fc.powCall(other)
+		}
 		if w == nil || !ok || c.reportedWithin(b) {
 			continue
 		}
@@ -193,4 +207,25 @@ func growingPower(t *vm.Term) (string, bool) {
 		return p.Base.String(), true
 	}
 	return "", false
+}
+
+// powCall reports whether e is math.Pow(x, k) with an exponent that is
+// no constant and a base that is no constant of magnitude at least 1,
+// read from the syntax where the model has no value for it (a loop it
+// does not summarise). It returns the base as written.
+func (fc *fnCtx) powCall(e ast.Expr) (string, bool) {
+	call, ok := fc.stripConv(e).(*ast.CallExpr)
+	if !ok || !fc.c.isMathFunc(call, "Pow") || len(call.Args) != 2 {
+		return "", false
+	}
+	info := fc.c.pass.TypesInfo
+	if tv, ok := info.Types[call.Args[1]]; !ok || tv.Value != nil {
+		return "", false
+	}
+	if tv, ok := info.Types[call.Args[0]]; ok && tv.Value != nil {
+		if f, ok := constant.Float64Val(constant.ToFloat(tv.Value)); !ok || f >= 1 || f <= -1 {
+			return "", false
+		}
+	}
+	return src(fc.stripConv(call.Args[0])), true
 }

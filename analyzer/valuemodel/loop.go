@@ -20,7 +20,8 @@ type site struct {
 	trip   int64
 }
 
-// peel is a switch on the counter in a loop body whose constant cases
+// peel is a switch on the counter (or a tagless switch whose cases
+// compare the counter with constants) in a loop body whose constant cases
 // are the first m trips, one value each, and whose default clause runs
 // on every later trip, the way Bernstein weights are set:
 //
@@ -46,6 +47,22 @@ type peel struct {
 	m     int64
 }
 
+// counterEq returns c of a condition counter == c or c == counter, nil
+// for any other.
+func (e *evaluator) counterEq(cond ast.Expr, counter types.Object) ast.Expr {
+	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
+	if !ok || b.Op != token.EQL {
+		return nil
+	}
+	switch counter {
+	case e.objOf(b.X):
+		return b.Y
+	case e.objOf(b.Y):
+		return b.X
+	}
+	return nil
+}
+
 // peelOf recognises a peel switch among the statements of body.
 func (e *evaluator) peelOf(l *Loop, body *ast.BlockStmt) *peel {
 	if l.Counter == nil || !l.From.IsConst() || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
@@ -53,7 +70,7 @@ func (e *evaluator) peelOf(l *Loop, body *ast.BlockStmt) *peel {
 	}
 	for _, st := range body.List {
 		sw, ok := st.(*ast.SwitchStmt)
-		if !ok || sw.Init != nil || sw.Tag == nil || e.objOf(sw.Tag) != l.Counter {
+		if !ok || sw.Init != nil || sw.Tag != nil && e.objOf(sw.Tag) != l.Counter {
 			continue
 		}
 		p := &peel{sw: sw}
@@ -67,7 +84,14 @@ func (e *evaluator) peelOf(l *Loop, body *ast.BlockStmt) *peel {
 			if len(cl.List) != 1 {
 				return nil
 			}
-			tv, ok := e.info.Types[cl.List[0]]
+			x := cl.List[0]
+			if sw.Tag == nil {
+				// switch { case i == 0: … }
+				if x = e.counterEq(x, l.Counter); x == nil {
+					return nil
+				}
+			}
+			tv, ok := e.info.Types[x]
 			if !ok || tv.Value == nil {
 				return nil
 			}

@@ -1,6 +1,7 @@
 package valuemodel
 
 import (
+	"fmt"
 	"go/ast"
 	"math"
 	"math/big"
@@ -8,18 +9,19 @@ import (
 )
 
 // A switch on the counter whose constant cases are the first trips and
-// whose default runs on the rest, as Bernstein weights are set: on trip
-// t ≥ 2 the weight is w(1)·∏_{i=2}^{t} (N−i)/i = C(N−1, t), checked
-// against math/big's binomial for N = 40 (the identity is common
-// practice: the multiplicative formula of C(n, k)).
+// whose default runs on the rest, as Bernstein weights are set, also
+// written as a tagless switch comparing the counter: on trip t ≥ 2 the
+// weight is w(1)·∏_{i=2}^{t} (N−i)/i = C(N−1, t), checked against
+// math/big's binomial for N = 40 (the identity is common practice: the
+// multiplicative formula of C(n, k)).
 func TestPeelSwitch(t *testing.T) {
-	info, fd := load(t, `func f(c []float64) float64 {
+	const body = `func f(c []float64) float64 {
 	var w float64
 	for i := range c {
-		switch i {
-		case 0:
+		switch %s {
+		case %s:
 			w = 1
-		case 1:
+		case %s:
 			w = float64(len(c)) - 1
 		default:
 			w *= float64(len(c)-i) / float64(i)
@@ -27,28 +29,36 @@ func TestPeelSwitch(t *testing.T) {
 		c[i] *= w
 	}
 	return w
-}`, "f")
-	res := Evaluate(info, fd, Options{})
-	if len(res.Loops) != 1 || len(res.Loops[0].Accs) != 1 {
-		t.Fatalf("want one loop with one accumulator, got %d loops", len(res.Loops))
-	}
-	l := res.Loops[0]
-	a := l.Accs[0]
-	if len(a.Ops) != 1 || a.Guarded || !a.Ops[0].From.Equal(Int(2)) {
-		t.Fatalf("ops %+v (guarded %v), want one op from trip 2 on", a.Ops, a.Guarded)
-	}
-	if f := Recognise(a.Ops[0].After); f.Kind != Binomial {
-		t.Fatalf("after the op: %v, want a binomial", a.Ops[0].After)
-	}
-	syms := map[string]Sym{}
-	for s := range res.Exprs {
-		syms[s.Name()] = s
-	}
-	n := int64(40)
-	for trip := int64(2); trip < n; trip++ {
-		val := map[Sym]float64{syms["len(c)"]: float64(n), l.Iter: float64(trip)}
-		want, _ := new(big.Float).SetInt(new(big.Int).Binomial(n-1, trip)).Float64()
-		closeLog(t, "weight", a.Ops[0].After, val, math.Log(want))
+}`
+	for name, cases := range map[string][3]string{
+		"tagged":  {"i", "0", "1"},
+		"tagless": {"", "i == 0", "1 == i"},
+	} {
+		t.Run(name, func(t *testing.T) {
+			info, fd := load(t, fmt.Sprintf(body, cases[0], cases[1], cases[2]), "f")
+			res := Evaluate(info, fd, Options{})
+			if len(res.Loops) != 1 || len(res.Loops[0].Accs) != 1 {
+				t.Fatalf("want one loop with one accumulator, got %d loops", len(res.Loops))
+			}
+			l := res.Loops[0]
+			a := l.Accs[0]
+			if len(a.Ops) != 1 || a.Guarded || !a.Ops[0].From.Equal(Int(2)) {
+				t.Fatalf("ops %+v (guarded %v), want one op from trip 2 on", a.Ops, a.Guarded)
+			}
+			if f := Recognise(a.Ops[0].After); f.Kind != Binomial {
+				t.Fatalf("after the op: %v, want a binomial", a.Ops[0].After)
+			}
+			syms := map[string]Sym{}
+			for s := range res.Exprs {
+				syms[s.Name()] = s
+			}
+			n := int64(40)
+			for trip := int64(2); trip < n; trip++ {
+				val := map[Sym]float64{syms["len(c)"]: float64(n), l.Iter: float64(trip)}
+				want, _ := new(big.Float).SetInt(new(big.Int).Binomial(n-1, trip)).Float64()
+				closeLog(t, "weight", a.Ops[0].After, val, math.Log(want))
+			}
+		})
 	}
 }
 
