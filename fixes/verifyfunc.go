@@ -15,11 +15,12 @@ import (
 // declares nothing outside itself, and a function's signature, not its
 // body, is what the rest of the package sees. Such a fix is checked by
 // type-checking the functions it edits, from the fixed text, against the
-// package's other declarations with their function bodies dropped
+// package-level declarations they reach by name (transitively; a named
+// type with all its methods), with the function bodies of those dropped
 // (go/types does not check a function without a body), instead of the
-// whole package: the cost of a check is then the package's declarations,
-// not its code, and a package with many findings no longer pays for its
-// size once per fix.
+// whole package: the cost of a check is then what the edited functions
+// use, not the package, and a package with many findings no longer pays
+// for its size once per fix.
 //
 // What the dropped bodies would have told the full check, this one takes
 // from the pass's type information, which is theirs unchanged:
@@ -87,9 +88,12 @@ func (b *builder) scopeOfEdits() (*funcEdits, bool) {
 }
 
 // checkFunctions type-checks the fixed text of the functions fe names,
-// with the fixed file's imports, against the rest of the package without
-// function bodies. It returns errNeedsFullCheck when the fix removes an
-// import that a body it does not check still uses.
+// with the fixed file's imports, against the declarations of the package
+// they reach, without function bodies. It returns errNeedsFullCheck when
+// it cannot judge the fix: the fix removes an import that a body it does
+// not check still uses, adds a reference to a package-level variable,
+// function or method, or its excerpt does not parse (the whole file's
+// check then reports why).
 func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 	others, err := b.fx.parsedFiles()
 	if err != nil {
@@ -105,7 +109,7 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 	}
 	sf, err := parser.ParseFile(others.fset, b.tok.Name(), src, parser.SkipObjectResolution)
 	if err != nil {
-		return fmt.Errorf("fixed code does not parse: %v", err)
+		return errNeedsFullCheck
 	}
 	nImports := 0
 	for _, d := range sf.Decls {
