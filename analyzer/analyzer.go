@@ -38,20 +38,21 @@ func init() {
 
 // checker holds the state of one pass.
 type checker struct {
-	pass     *analysis.Pass
-	fixer    *fixes.Fixer // the package's fixes share it; it dies with the pass
-	files    map[*token.File]*fileInfo
-	funcs    map[*types.Func]*facFunc // factorial-valued functions of this package
-	fnInfo   map[ast.Node]*fnCtx      // per analysed function
-	reported map[reportKey]bool
+	pass      *analysis.Pass
+	fixer     *fixes.Fixer // the package's fixes share it; it dies with the pass
+	files     map[*token.File]*fileInfo
+	funcs     map[*types.Func]*facFunc // factorial-valued functions of this package
+	fnInfo    map[ast.Node]*fnCtx      // per analysed function
+	reported  map[reportKey]bool
+	consumed  map[*ast.CallExpr]bool // calls already part of a finding
+	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
+	callIndex map[*types.Func][]*ast.CallExpr
+	escapes   map[*types.Func]bool
 	// reportedPos holds the positions of reported's keys, sorted, for
 	// reportedWithin: findings come in source order, so it grows at its end.
 	reportedPos []token.Pos
-	consumed    map[*ast.CallExpr]bool // calls already part of a finding
-	allFuncs    []ast.Node             // every FuncDecl and FuncLit, in source order
-	byPos       []ast.Node             // allFuncs sorted by position across files, for enclosingFunc
-	callIndex   map[*types.Func][]*ast.CallExpr
-	escapes     map[*types.Func]bool
+	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
+	byPos []ast.Node
 	// sitesDecided holds the unexported factorial functions whose every
 	// call in the package is either always safe or always past the first
 	// bad value, with one past it: the calls are the findings, and the
