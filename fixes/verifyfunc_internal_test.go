@@ -34,6 +34,12 @@ func init() { table[0] = math.E }
 
 func first[T any](xs []T) T { return xs[0] }
 
+type counter int
+
+func (c counter) twice() int { v := int(c); return v * 2 }
+
+func (c *counter) bump() { *c += counter(c.twice()) }
+
 func f(n int) float64 {
 	b := n
 	return float64(b) * math.Sqrt(2)
@@ -64,6 +70,9 @@ func k(n int64) *big.Int { return big.NewInt(n) }
 		{"new import clashes with a declaration", [][2]string{{"\t\"strconv\"\n", "\t\"strconv\"\n\tbitsT \"math/bits\"\n"}, {"return float64(b)", "return float64(bitsT.Len(uint(b)))"}}, "", false},
 		{"signature breaks a caller", [][2]string{{"func f(n int) float64", "func f(n int) int"}, {"return float64(b) * math.Sqrt(2)", "return b"}}, "", true},
 		{"new reference to a variable", [][2]string{{"return float64(b)", "return float64(int(start) + b)"}}, "initialization cycle", true},
+		{"method", [][2]string{{"return v * 2", "return v + v"}}, "", false},
+		{"method left broken", [][2]string{{"return v * 2", "return c * 2"}}, "cannot use c * 2", false},
+		{"generic function", [][2]string{{"return xs[0]", "return xs[len(xs)-1]"}}, "", false},
 		{"two functions", [][2]string{{"return float64(b)", "return float64(b + 0)"}, {"math.Log(x)", "math.Log(x+0)"}}, "", false},
 	}
 	for _, tt := range tests {
@@ -88,6 +97,9 @@ func k(n int64) *big.Int { return big.NewInt(n) }
 			defer func() { checkHook = nil }()
 			err := b.verify()
 			if (err == nil) != (full == nil) {
+				t.Errorf("verify = %v; the whole package's check says %v", err, full)
+			} else if err != nil && err.Error() != full.Error() {
+				// The excerpt keeps the fixed file's lines and columns.
 				t.Errorf("verify = %v; the whole package's check says %v", err, full)
 			}
 			if cheap == tt.wantFull {
