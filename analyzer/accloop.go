@@ -262,18 +262,18 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 		hi, hiOff, lo, loOff = lo, loOff, hi, hiOff
 	}
 	switch {
-	case a == 1 && len(rest.terms) == 0:
+	case a == 1 && len(rest.Terms) == 0:
 		// The factor is i+c: a factorial when it starts at 1 or 2.
-		if lo == nil && loOff+rest.c <= 0 {
+		if lo == nil && loOff+rest.C <= 0 {
 			return false // a zero factor: not a factorial
 		}
-		if lo == nil && loOff+rest.c > 2 && fc.risingFromConst(al, loOff+rest.c) {
+		if lo == nil && loOff+rest.C > 2 && fc.risingFromConst(al, loOff+rest.C) {
 			return true
 		}
-		if lo != nil || loOff+rest.c > 2 {
-			return fc.classifyPartial(al, hi, hiOff+rest.c)
+		if lo != nil || loOff+rest.C > 2 {
+			return fc.classifyPartial(al, hi, hiOff+rest.C)
 		}
-		al.top, al.topOff = hi, hiOff+rest.c
+		al.top, al.topOff = hi, hiOff+rest.C
 		al.kind = kindFactorial
 		if sh.step == 2 || sh.step == -2 {
 			al.kind = kindDouble
@@ -281,7 +281,7 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 			return false
 		}
 		return true
-	case (a == 1 || a == -1) && len(rest.terms) > 0 && (sh.step == 1 || sh.step == -1):
+	case (a == 1 || a == -1) && len(rest.Terms) > 0 && (sh.step == 1 || sh.step == -1):
 		// The factor is n∓i: a falling factorial of n over the trip count.
 		al.kind = kindFalling
 		al.top = al.mult
@@ -352,7 +352,7 @@ func (fc *fnCtx) scaledSpan(sh *loopShape) *linear {
 		return nil
 	}
 	d, ok := fc.span(sh)
-	if !ok || len(d.terms) != 1 || d.terms[0].coef < 2 {
+	if !ok || len(d.Terms) != 1 || d.Terms[0].K < 2 {
 		return nil
 	}
 	return &d
@@ -368,20 +368,20 @@ func (fc *fnCtx) spanCount(sh *loopShape) (ast.Expr, int64, bool) {
 	if !ok {
 		return nil, 0, false
 	}
-	if len(d.terms) == 0 {
-		return nil, d.c, true
+	if len(d.Terms) == 0 {
+		return nil, d.C, true
 	}
-	if len(d.terms) != 1 || d.terms[0].coef != 1 {
+	if len(d.Terms) != 1 || d.Terms[0].K != 1 {
 		return nil, 0, false
 	}
-	id := identOf(fc.c.pass.TypesInfo, sh.last, d.terms[0].obj)
+	id := identOf(fc.c.pass.TypesInfo, sh.last, d.Terms[0].Sym.Object)
 	if id == nil {
-		id = identOf(fc.c.pass.TypesInfo, sh.first, d.terms[0].obj)
+		id = identOf(fc.c.pass.TypesInfo, sh.first, d.Terms[0].Sym.Object)
 	}
 	if id == nil {
 		return nil, 0, false
 	}
-	return id, d.c, true
+	return id, d.C, true
 }
 
 // span returns the trip count of a loop between two variable ends as a
@@ -401,7 +401,7 @@ func (fc *fnCtx) span(sh *loopShape) (linear, bool) {
 		return linear{}, false
 	}
 	d := h.add(l.scale(-1))
-	d.c += hiOff - loOff + 1
+	d.C += hiOff - loOff + 1
 	return d, true
 }
 

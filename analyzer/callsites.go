@@ -117,7 +117,7 @@ func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 // decl, is its parameter p minus a constant c ≥ 0.
 func (c *checker) goesDown(decl *ast.FuncDecl, arg ast.Expr, p types.Object) bool {
 	lin, ok := c.ownCtx(decl).linear(arg)
-	return ok && len(lin.terms) == 1 && lin.terms[0].obj == p && lin.terms[0].coef == 1 && lin.c <= 0
+	return ok && len(lin.Terms) == 1 && lin.Terms[0].Sym.Object == p && lin.Terms[0].K == 1 && lin.C <= 0
 }
 
 // callsOf returns the calls of fn in this package, or nil when fn is

@@ -228,14 +228,14 @@ func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 	if fc.c.isMathFunc(call, "Gamma") && len(call.Args) == 1 {
 		aff, ok := fc.affineOf(call.Args[0], 0)
-		if !ok || aff.a != 1 || !aff.isInt || aff.b < 1 || aff.b != float64(int64(aff.b)) {
+		if !ok || aff.a() != 1 || !aff.isInt || aff.b() < 1 || aff.b() != float64(int64(aff.b())) {
 			return nil
 		}
 		idx := fc.c.paramIndex(decl, fc.c.objOf(aff.v))
 		if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, fc.c.objOf(aff.v), nil) {
 			return nil
 		}
-		off := int64(aff.b) - 1
+		off := int64(aff.b()) - 1
 		return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: aff.v, wrapOff: off}
 	}
 	f, ok := fc.factorOf(call)
@@ -243,15 +243,15 @@ func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 		return nil
 	}
 	lin, ok := fc.linear(f.arg)
-	if !ok || len(lin.terms) != 1 || lin.terms[0].coef != 1 {
+	if !ok || len(lin.Terms) != 1 || lin.Terms[0].K != 1 {
 		return nil
 	}
-	p := lin.terms[0].obj
+	p := lin.Terms[0].Sym.Object
 	idx := fc.c.paramIndex(decl, p)
 	if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, nil) {
 		return nil
 	}
-	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.c + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
+	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.C + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
 }
 
 // numericFunc returns the function decl declares, its numeric result

@@ -82,10 +82,10 @@ func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
 		return ranges.Point(v)
 	}
 	iv := fc.ranges().Of(e)
-	if lin, ok := fc.linear(e); ok && len(lin.terms) == 1 && lin.terms[0].coef == 1 {
+	if lin, ok := fc.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
 		for _, a := range fc.assumes {
-			if a.obj == lin.terms[0].obj && a.from <= e.Pos() && e.End() <= a.to {
-				iv = iv.Meet(shift(a.iv, lin.c))
+			if a.obj == lin.Terms[0].Sym.Object && a.from <= e.Pos() && e.End() <= a.to {
+				iv = iv.Meet(shift(a.iv, lin.C))
 			}
 		}
 	}

@@ -165,7 +165,7 @@ func (fc *fnCtx) gammaSignRange(arg ast.Expr, shown bool) (witness float64, defi
 		w, _ := thresholds.GammaNegativeIn(math.Inf(-1), math.Inf(1))
 		return w, false, true
 	}
-	if g.aff.v == nil || g.aff.isInt && isInteger(g.aff.a) && isInteger(g.aff.b) {
+	if g.aff.v == nil || g.aff.isInt && isInteger(g.aff.a()) && isInteger(g.aff.b()) {
 		// A constant, or an integer-valued argument: at a pole Γ has no
 		// sign and math.Lgamma's +1 is as good as any.
 		if g.aff.v != nil {

@@ -130,7 +130,7 @@ func (fc *fnCtx) negated(e, x ast.Expr) bool {
 	}
 	a, ok1 := fc.affineOf(u.X, 0)
 	b, ok2 := fc.affineOf(x, 0)
-	if !ok1 || !ok2 || a.a != b.a || a.b != b.b {
+	if !ok1 || !ok2 || a.a() != b.a() || a.b() != b.b() {
 		return false
 	}
 	return a.v == nil && b.v == nil || sameVar(fc, a.v, b.v)

@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"go/ast"
-	"go/constant"
 	"go/token"
 	"go/types"
 	"strings"
@@ -253,18 +252,6 @@ func (b *builder) runningUpdate(body *ast.BlockStmt, acc types.Object, want line
 		return nil, bad
 	}
 	return update, nil
-}
-
-func constLinear(c int64) linear {
-	l := newLinear()
-	l.c = constant.MakeInt64(c)
-	return l
-}
-
-func varLinear(v types.Object) linear {
-	l := newLinear()
-	l.terms[v] = constant.MakeInt64(1)
-	return l
 }
 
 // assigns reports whether n, or a statement nested in it, assigns obj.
