@@ -462,24 +462,30 @@ func (fc *fnCtx) endRange(e ast.Expr, off int64) ranges.Interval {
 	return shift(fc.rangeOf(e), off)
 }
 
+// closureAssigned is the variables the closures of a function assign,
+// gathered once per function: asked once per loop, a walk of the whole
+// body each time made long functions quadratic.
+type closureAssigned struct{ set map[types.Object]bool }
+
+var closureAssignedKey = &stateKey[closureAssigned]{"variables closures assign"}
+
 // closureAssigns reports whether a closure in the function assigns v; a
 // call of it may then change the accumulator between the factors.
 func (fc *fnCtx) closureAssigns(v types.Object) bool {
-	// The set is gathered once per function: asked once per loop, a walk
-	// of the whole body each time made long functions quadratic.
-	if fc.closureAssigned == nil {
-		fc.closureAssigned = make(map[types.Object]bool)
+	ca := stateOf(fc, closureAssignedKey)
+	if ca.set == nil {
+		ca.set = make(map[types.Object]bool)
 		ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 			lit, ok := n.(*ast.FuncLit)
 			if !ok {
 				return true
 			}
 			assigned.Each(fc.c.pass.TypesInfo, lit.Body, nil, func(obj types.Object, _ ast.Node) bool {
-				fc.closureAssigned[obj] = true
+				ca.set[obj] = true
 				return true
 			})
 			return false
 		})
 	}
-	return v != nil && fc.closureAssigned[v]
+	return v != nil && ca.set[v]
 }

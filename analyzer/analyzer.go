@@ -48,26 +48,19 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
-	// sitesDecided holds the unexported factorial functions whose every
-	// call in the package is either always safe or always past the first
-	// bad value, with one past it: the calls are the findings, and the
-	// definition has nothing to add (see callSiteRange).
-	sitesDecided map[*types.Func]bool
 	// tables holds the package's unchanging tables (ranges.PackageTables),
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
 	tablesDone bool
-	gamma      gammaPass // the Gamma categories' lines with a finding
 	// rewritten holds the nodes that a reported fix replaces, and held
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
-	// lgWrappers holds the functions of the package that return ln|Γ|
-	// of their argument (see isLgammaCall), found on first use.
-	lgWrappers map[*types.Func]bool
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
+	// owned holds what categories keep about the pass (passStateOf).
+	owned states
 }
 
 type reportKey struct {

@@ -57,6 +57,17 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 	return entry
 }
 
+// sitesDecided holds the unexported factorial functions whose every call
+// in the package is either always safe or always past the first bad
+// value, with one past it: the calls are the findings, and the definition
+// has nothing to add (see callSiteRange).
+type sitesDecided struct{ set map[*types.Func]bool }
+
+var sitesDecidedKey = &stateKey[sitesDecided]{"functions whose call sites decide"}
+
+// sitesDecide reports whether ff's call sites decide (sitesDecided).
+func (c *checker) sitesDecide(ff *facFunc) bool { return passStateOf(c, sitesDecidedKey).set[ff.obj] }
+
 // callSiteRange joins the ranges of the argument n over every call of ff
 // outside ff itself. It reports false when the function is also used as
 // a value (then it may be called from anywhere) or never called.
@@ -64,7 +75,7 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 // A recursive function is also entered from its own calls. Those that
 // pass n − c (c ≥ 0) only go down from the outside calls, so the range
 // keeps their top and loses its bottom (fact(25) runs fact(24), …); any
-// other self-call gives up. It records in c.sitesDecided whether every
+// other self-call gives up. It records in sitesDecided whether every
 // outside call is either always safe or always past the first bad value
 // (then reported at the call itself).
 func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
@@ -106,10 +117,11 @@ func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 	if self && any && !join.IsEmpty() {
 		join = ranges.Interval{Lo: math.MinInt64, Hi: join.Hi}
 	}
-	if c.sitesDecided == nil {
-		c.sitesDecided = make(map[*types.Func]bool)
+	sd := passStateOf(c, sitesDecidedKey)
+	if sd.set == nil {
+		sd.set = make(map[*types.Func]bool)
 	}
-	c.sitesDecided[ff.obj] = any && decided && past
+	sd.set[ff.obj] = any && decided && past
 	return join, any
 }
 

@@ -157,11 +157,20 @@ func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 	return ff
 }
 
+// returned is, per body, the variables its return statements return
+// first, gathered once per body, as closureAssigns is: it is asked per
+// loop.
+type returned struct {
+	byBody map[*ast.BlockStmt]map[types.Object]bool
+}
+
+var returnedKey = &stateKey[returned]{"variables returned, per body"}
+
 // returns reports whether some return statement of body returns v as its
 // first result.
 func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
-	// Gathered once per body, as closureAssigns is: it is asked per loop.
-	set, ok := fc.returned[body]
+	r := stateOf(fc, returnedKey)
+	set, ok := r.byBody[body]
 	if !ok {
 		set = make(map[types.Object]bool)
 		ast.Inspect(body, func(n ast.Node) bool {
@@ -177,10 +186,10 @@ func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
 			}
 			return true
 		})
-		if fc.returned == nil {
-			fc.returned = make(map[*ast.BlockStmt]map[types.Object]bool)
+		if r.byBody == nil {
+			r.byBody = make(map[*ast.BlockStmt]map[types.Object]bool)
 		}
-		fc.returned[body] = set
+		r.byBody[body] = set
 	}
 	return v != nil && set[v]
 }
@@ -276,7 +285,8 @@ func (c *checker) numericFunc(decl *ast.FuncDecl) (*types.Func, numType, *fnCtx)
 // ownCtx returns a fresh context for fn with its own annotations only,
 // not the ranges its call sites give it.
 func (c *checker) ownCtx(fn ast.Node) *fnCtx {
-	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos()), entry: c.ownEntry(fn)}
+	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos())}
+	own.entry = c.ownEntry(fn)
 	if own.file != nil {
 		own.assumes = own.file.dirs.stmtAssumesIn(fn)
 	}
@@ -325,7 +335,7 @@ func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
 	}
 	// A loop the value model found (no loop or rec) is judged at its
 	// definition whatever its calls are, as before.
-	return ff.asIs || fc.c.sitesDecided[ff.obj] && (ff.loop != nil || ff.rec != nil)
+	return ff.asIs || fc.c.sitesDecide(ff) && (ff.loop != nil || ff.rec != nil)
 }
 
 // productAsIs reports whether the product of ff reaches no arithmetic

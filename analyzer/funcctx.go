@@ -13,22 +13,80 @@ import (
 // fnCtx is one function under analysis. Its range analysis runs lazily,
 // on the first question about a range, so functions without a candidate
 // cost only the syntactic scan.
+//
+// What every check asks about the function lives in two named parts:
+// its range queries and its definitions. What one category or pass
+// gathers for itself is not a field here: the owner declares a
+// stateKey beside its detector and gets its state with stateOf.
 type fnCtx struct {
-	c       *checker
-	node    ast.Node // *ast.FuncDecl or *ast.FuncLit
-	file    *fileInfo
+	c    *checker
+	node ast.Node // *ast.FuncDecl or *ast.FuncLit
+	file *fileInfo
+	rangeQueries
+	definitions
+	owned states // what categories keep about the function (stateOf)
+}
+
+// rangeQueries is the part of a function context that answers range
+// questions (rangeOf, entryRange): the ranges of the parameters at
+// entry, the range analysis run on the first question, and the
+// statement-level bound annotations that narrow it.
+type rangeQueries struct {
 	entry   map[types.Object]ranges.Interval
 	rng     *ranges.Func
-	assumes []stmtAssume // statement-level bound annotations
-	defs    map[types.Object][]ast.Expr
-	inl     map[ast.Expr]bool // values consumed by a larger product
-	// powLoops maps the accumulator of each power loop x·x·…·x to it.
-	powLoops map[types.Object]*accLoop
-	// closureAssigned and returned are gathered once per function (see
-	// closureAssigns and returns).
-	closureAssigned map[types.Object]bool
-	returned        map[*ast.BlockStmt]map[types.Object]bool
-	gamma           gammaFunc // what the Gamma categories gather once per function
+	assumes []stmtAssume
+}
+
+// definitions is the part of a function context that knows every value
+// each local variable is given (collectDefs, products.go), gathered on
+// first use (defsOf).
+type definitions struct {
+	defs map[types.Object][]ast.Expr
+}
+
+// defsOf returns the values v is given in the function, a nil value
+// standing for a change the analyzer does not follow.
+func (fc *fnCtx) defsOf(v types.Object) []ast.Expr {
+	if fc.defs == nil {
+		fc.collectDefs()
+	}
+	return fc.defs[v]
+}
+
+// A stateKey names what one category keeps about a function or a pass (a
+// cache of its own, what it noted for a later check). The owner declares
+// the key beside its detector; the state is made on first use and dies
+// with the function context (stateOf) or the pass (passStateOf).
+type stateKey[T any] struct{ name string }
+
+// states holds the owners' states, by their stateKey.
+type states struct{ m map[any]any }
+
+func stateIn[T any](s *states, k *stateKey[T]) *T {
+	if v, ok := s.m[k]; ok {
+		return v.(*T)
+	}
+	v := new(T)
+	if s.m == nil {
+		s.m = make(map[any]any)
+	}
+	s.m[k] = v
+	return v
+}
+
+// stateOf returns the owner's state for the function, made zero on
+// first use.
+func stateOf[T any](fc *fnCtx, k *stateKey[T]) *T { return stateIn(&fc.owned, k) }
+
+// passStateOf returns the owner's state for the pass, made zero on
+// first use.
+func passStateOf[T any](c *checker, k *stateKey[T]) *T { return stateIn(&c.owned, k) }
+
+// peekState returns the owner's state for the function, or nil when the
+// owner has not made it.
+func peekState[T any](fc *fnCtx, k *stateKey[T]) *T {
+	v, _ := fc.owned.m[k].(*T)
+	return v
 }
 
 // maxVisits bounds the range analysis of one function; past it the
@@ -112,15 +170,12 @@ func (fc *fnCtx) liftAssumes() {
 	if len(fc.assumes) == 0 {
 		return
 	}
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
 	sig := fc.signature()
 	if sig == nil {
 		return
 	}
 	for _, a := range fc.assumes {
-		if len(fc.defs[a.obj]) > 0 || !isParam(sig, a.obj) {
+		if len(fc.defsOf(a.obj)) > 0 || !isParam(sig, a.obj) {
 			continue
 		}
 		iv := a.iv

@@ -177,8 +177,8 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		msg += fmt.Sprintf("; the product of the %d Γ values above the line can overflow first, before any one of them is +Inf", n)
 	}
 	at := fc.valueHolding(root, worstCall)
-	fc.c.gamma.note(fc.c.lineOf(root))
-	fc.c.gamma.note(fc.c.lineOf(at))
+	fc.c.gammaLines().note(fc.c.lineOf(root))
+	fc.c.gammaLines().note(fc.c.lineOf(at))
 	fc.report(finding{node: at, cat: catGammaRatio, definite: worst.certain, msg: msg, match: p.fix(m)})
 }
 

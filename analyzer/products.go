@@ -81,7 +81,7 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 			return
 		}
 	case *ast.Ident:
-		if al := fc.powLoops[fc.c.objOf(e)]; al != nil && e.Pos() > al.shape.stmt.End() {
+		if al := fc.powerLoopOf(fc.c.objOf(e)); al != nil && e.Pos() > al.shape.stmt.End() {
 			// The accumulator of a power loop, used after the loop.
 			t, _ := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
 			p.num = append(p.num, factor{math: "Pow", arg: al.mult, arg2: al.count, t: t})
@@ -155,10 +155,7 @@ func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
 	if obj == nil || !(fc.node.Pos() <= obj.Pos() && obj.Pos() < fc.node.End()) {
 		return nil
 	}
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
-	defs := fc.defs[obj]
+	defs := fc.defsOf(obj)
 	if len(defs) != 1 {
 		return nil
 	}
@@ -218,11 +215,24 @@ func (fc *fnCtx) collectDefs() {
 	})
 }
 
+// inlinedValues is the values of a function that a larger product
+// consumes, noted by the product that reads them (inlined).
+type inlinedValues struct{ set map[ast.Expr]bool }
+
+var inlinedKey = &stateKey[inlinedValues]{"values consumed by a larger product"}
+
 // inlined marks a variable's value as consumed by a larger expression,
 // so that it is not also judged on its own.
 func (fc *fnCtx) inlined(e ast.Expr) {
-	if fc.inl == nil {
-		fc.inl = make(map[ast.Expr]bool)
+	in := stateOf(fc, inlinedKey)
+	if in.set == nil {
+		in.set = make(map[ast.Expr]bool)
 	}
-	fc.inl[ast.Unparen(e)] = true
+	in.set[ast.Unparen(e)] = true
+}
+
+// isInlined reports whether a larger product consumes e (inlined).
+func (fc *fnCtx) isInlined(e ast.Expr) bool {
+	in := peekState(fc, inlinedKey)
+	return in != nil && in.set[ast.Unparen(e)]
 }
