@@ -285,12 +285,7 @@ func (c *checker) numericFunc(decl *ast.FuncDecl) (*types.Func, numType, *fnCtx)
 // ownCtx returns a fresh context for fn with its own annotations only,
 // not the ranges its call sites give it.
 func (c *checker) ownCtx(fn ast.Node) *fnCtx {
-	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos())}
-	own.entry = c.ownEntry(fn)
-	if own.file != nil {
-		own.assumes = own.file.dirs.stmtAssumesIn(fn)
-	}
-	return own
+	return c.newCtx(fn, c.ownEntry(fn))
 }
 
 // returnedAsIs reports whether e, in the function of fc, is the returned

@@ -14,14 +14,15 @@ import (
 // on the first question about a range, so functions without a candidate
 // cost only the syntactic scan.
 //
-// What every check asks about the function lives in two named parts:
-// its range queries and its definitions. What one category or pass
+// What every check asks about the function lives in three named parts:
+// questions to the type checker, range queries and definitions. What one category or pass
 // gathers for itself is not a field here: the owner declares a
 // stateKey beside its detector and gets its state with stateOf.
 type fnCtx struct {
 	c    *checker
 	node ast.Node // *ast.FuncDecl or *ast.FuncLit
 	file *fileInfo
+	typeQueries
 	rangeQueries
 	definitions
 	owned states // what categories keep about the function (stateOf)
@@ -99,17 +100,26 @@ func peekState[T any](fc *fnCtx, k *stateKey[T]) *T {
 // go test ./analyzer/ranges -run XXX -bench BenchmarkStdlib/analyze).
 const maxVisits = 3
 
+// ctx returns the context of function n, made once per pass: its entry
+// ranges are those its call sites give it.
 func (c *checker) ctx(n ast.Node) *fnCtx {
 	if fc, ok := c.fnInfo[n]; ok {
 		return fc
 	}
-	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos())}
-	fc.entry = c.entryOf(n)
+	fc := c.newCtx(n, c.entryOf(n))
+	fc.liftAssumes()
+	c.fnInfo[n] = fc
+	return fc
+}
+
+// newCtx makes a context for function n with the given entry ranges and
+// the statement-level bound annotations of its file.
+func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fnCtx {
+	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: typeQueries{c.pass.TypesInfo}}
+	fc.entry = entry
 	if fc.file != nil {
 		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
 	}
-	fc.liftAssumes()
-	c.fnInfo[n] = fc
 	return fc
 }
 

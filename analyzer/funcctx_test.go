@@ -7,12 +7,12 @@ import (
 )
 
 // TestFuncStateOwned keeps the function context to what every check
-// asks about a function: its checker, node and file, its range queries
-// and its definitions. A cache or note of one category is declared by
+// asks about a function: its checker, node and file, its questions to
+// the type checker, its range queries and its definitions. A cache or note of one category is declared by
 // that category as a stateKey, beside its detector, and lives in owned;
 // a new field here would make the shared context carry it again.
 func TestFuncStateOwned(t *testing.T) {
-	want := []string{"c", "node", "file", "rangeQueries", "definitions", "owned"}
+	want := []string{"c", "node", "file", "typeQueries", "rangeQueries", "definitions", "owned"}
 	var got []string
 	ft := reflect.TypeOf(fnCtx{})
 	for i := 0; i < ft.NumField(); i++ {

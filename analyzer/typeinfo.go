@@ -11,9 +11,14 @@ import (
 // Questions to the type checker about one expression: its constant value,
 // whether it is a conversion, the variable it names, the function it calls.
 
+// typeQueries is the part of a function context that asks the type
+// checker about one expression; the checker's own questions (objOf,
+// calleeOf, isMathFunc) follow.
+type typeQueries struct{ info *types.Info }
+
 // intConst returns the value of a constant integer expression.
-func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[e]
+func (q typeQueries) intConst(e ast.Expr) (int64, bool) {
+	tv, ok := q.info.Types[e]
 	if !ok || tv.Value == nil {
 		return 0, false
 	}
@@ -25,8 +30,8 @@ func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
 }
 
 // floatConst returns the value of a constant numeric expression.
-func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[ast.Unparen(e)]
+func (q typeQueries) floatConst(e ast.Expr) (float64, bool) {
+	tv, ok := q.info.Types[ast.Unparen(e)]
 	if !ok || tv.Value == nil {
 		return 0, false
 	}
@@ -39,19 +44,19 @@ func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
 }
 
 // stripConv removes parentheses and numeric conversions around e.
-func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
+func (q typeQueries) stripConv(e ast.Expr) ast.Expr {
 	for {
 		e = ast.Unparen(e)
 		call, ok := e.(*ast.CallExpr)
-		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
+		if !ok || len(call.Args) != 1 || !q.isConversion(call) {
 			return e
 		}
 		e = call.Args[0]
 	}
 }
 
-func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
-	tv, ok := fc.c.pass.TypesInfo.Types[call.Fun]
+func (q typeQueries) isConversion(call *ast.CallExpr) bool {
+	tv, ok := q.info.Types[call.Fun]
 	return ok && tv.IsType()
 }
 
