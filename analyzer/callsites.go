@@ -8,6 +8,7 @@ import (
 	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // ownEntry returns the parameter ranges a function declares for itself
@@ -233,39 +234,43 @@ func (c *checker) capturedEntry(lit *ast.FuncLit, entry map[types.Object]ranges.
 // and post statements; it must also never have its address taken.
 func (c *checker) setOnce(body *ast.BlockStmt, v *types.Var) bool {
 	var post ast.Stmt
-	once := true
-	ast.Inspect(body, func(n ast.Node) bool {
-		if !once {
-			return false
-		}
+	skip := func(n ast.Node) bool {
 		if fs, ok := n.(*ast.ForStmt); ok && c.declaresLoopVar(fs, v) {
 			post = fs.Post
 		}
-		if post != nil && n == ast.Node(post) {
-			return false // the post statement sets the next iteration's copy
+		// The post statement sets the next iteration's copy.
+		return post != nil && n == ast.Node(post)
+	}
+	once := true
+	assigned.Each(c.pass.TypesInfo, body, skip, func(w types.Object, at ast.Node) bool {
+		if w != v {
+			return true
 		}
-		switch n := n.(type) {
+		switch at := at.(type) {
 		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				if id, ok := ast.Unparen(l).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
-					once = false
-				}
-			}
-		case *ast.IncDecStmt:
-			once = once && c.objOf(n.X) != v
-		case *ast.UnaryExpr:
-			once = once && !(n.Op == token.AND && c.objOf(n.X) == v)
+			once = c.declares(at, v) // its definition is no change
 		case *ast.RangeStmt:
-			if n.Tok == token.DEFINE {
-				// A range variable is one per iteration only from Go 1.22.
-				once = once && (!c.defines(n.Key, v) && !c.defines(n.Value, v) || c.perIteration(n))
-			} else {
-				once = once && c.objOf(n.Key) != v && c.objOf(n.Value) != v
-			}
+			// A range variable is one per iteration only from Go 1.22.
+			once = at.Tok == token.DEFINE && c.perIteration(at)
+		default:
+			once = false
 		}
-		return true
+		return once
 	})
 	return once
+}
+
+// declares reports whether as defines v (v := …).
+func (c *checker) declares(as *ast.AssignStmt, v types.Object) bool {
+	if as.Tok != token.DEFINE {
+		return false
+	}
+	for _, l := range as.Lhs {
+		if id, ok := l.(*ast.Ident); ok && c.pass.TypesInfo.Defs[id] == v {
+			return true
+		}
+	}
+	return false
 }
 
 // declaresLoopVar reports whether fs declares v in its init statement

@@ -9,6 +9,8 @@ import (
 	"strings"
 
 	"golang.org/x/tools/go/ast/astutil"
+
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // A sum that keeps its running factorial in the loop that adds the terms,
@@ -259,30 +261,17 @@ func (b *builder) assigns(n ast.Node, obj types.Object) bool {
 	return b.countWrites(n, obj, true) > 0
 }
 
-// writes counts the statements of the file that assign obj (its
-// address taken counts as one).
+// writes counts the changes of obj in the file (internal/assigned: an
+// assignment, ++ or --, a range clause, its address taken).
 func (b *builder) writes(obj types.Object) int {
 	return b.countWrites(b.file, obj, false)
 }
 
 func (b *builder) countWrites(root ast.Node, obj types.Object, first bool) int {
 	n := 0
-	ast.Inspect(root, func(x ast.Node) bool {
-		switch x := x.(type) {
-		case *ast.AssignStmt:
-			for _, l := range x.Lhs {
-				if b.isObj(l, obj) {
-					n++
-				}
-			}
-		case *ast.IncDecStmt:
-			if b.isObj(x.X, obj) {
-				n++
-			}
-		case *ast.UnaryExpr:
-			if x.Op == token.AND && b.isObj(x.X, obj) {
-				n++
-			}
+	assigned.Each(b.pass.TypesInfo, root, nil, func(v types.Object, _ ast.Node) bool {
+		if v == obj {
+			n++
 		}
 		return !first || n == 0
 	})
