@@ -53,11 +53,6 @@ type Form[V Var[V], N any, D Domain[N]] struct {
 	Terms []Term[V, N]
 }
 
-// Const returns the constant form c.
-func Const[V Var[V], N any, D Domain[N]](c N) Form[V, N, D] {
-	return Form[V, N, D]{C: c}
-}
-
 // Single returns the form 1·v.
 func Single[V Var[V], N any, D Domain[N]](v V) Form[V, N, D] {
 	var d D

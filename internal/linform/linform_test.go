@@ -33,7 +33,7 @@ func randRat(r *rand.Rand) *big.Rat {
 }
 
 func randForm(r *rand.Rand) ratForm {
-	f := Const[sym, *big.Rat, Rat](randRat(r))
+	f := ratForm{C: randRat(r)}
 	for i := r.Intn(4); i > 0; i-- {
 		f = f.Add(Single[sym, *big.Rat, Rat](sym(r.Intn(5))).Scale(randRat(r)))
 	}
@@ -108,7 +108,7 @@ func TestFloatKeepsNaN(t *testing.T) {
 	if len(f.Terms) != 1 {
 		t.Fatalf("NaN·x lost its term: %v", f)
 	}
-	g := Const[sym, float64, Float64](math.Inf(1)).Add(ff{C: 1})
+	g := (ff{C: math.Inf(1)}).Add(ff{C: 1})
 	if !math.IsInf(g.C, 1) {
 		t.Fatalf("+Inf + 1 = %v", g.C)
 	}
