@@ -39,19 +39,21 @@ type rangeQueries struct {
 }
 
 // definitions is the part of a function context that knows every value
-// each local variable is given (collectDefs, products.go), gathered on
-// first use (defsOf).
+// each local variable of node is given (collectDefs and singleDef,
+// products.go), gathered on first use (defsOf).
 type definitions struct {
+	q    typeQueries
+	node ast.Node
 	defs map[types.Object][]ast.Expr
 }
 
 // defsOf returns the values v is given in the function, a nil value
 // standing for a change the analyzer does not follow.
-func (fc *fnCtx) defsOf(v types.Object) []ast.Expr {
-	if fc.defs == nil {
-		fc.collectDefs()
+func (d *definitions) defsOf(v types.Object) []ast.Expr {
+	if d.defs == nil {
+		d.collectDefs()
 	}
-	return fc.defs[v]
+	return d.defs[v]
 }
 
 // A stateKey names what one category keeps about a function or a pass (a
@@ -115,7 +117,8 @@ func (c *checker) ctx(n ast.Node) *fnCtx {
 // newCtx makes a context for function n with the given entry ranges and
 // the statement-level bound annotations of its file.
 func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fnCtx {
-	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: typeQueries{c.pass.TypesInfo}}
+	q := typeQueries{c.pass.TypesInfo}
+	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: q, definitions: definitions{q: q, node: n}}
 	fc.entry = entry
 	if fc.file != nil {
 		fc.assumes = fc.file.dirs.stmtAssumesIn(n)

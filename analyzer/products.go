@@ -150,12 +150,12 @@ func kindOfName(s string) facKind {
 // singleDef returns the one value a local variable is ever given, or nil
 // when it is assigned more than once, in a closure, by address, or is a
 // parameter.
-func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
-	obj := fc.c.objOf(id)
-	if obj == nil || !(fc.node.Pos() <= obj.Pos() && obj.Pos() < fc.node.End()) {
+func (d *definitions) singleDef(id *ast.Ident) ast.Expr {
+	obj := d.q.objOf(id)
+	if obj == nil || !(d.node.Pos() <= obj.Pos() && obj.Pos() < d.node.End()) {
 		return nil
 	}
-	defs := fc.defsOf(obj)
+	defs := d.defsOf(obj)
 	if len(defs) != 1 {
 		return nil
 	}
@@ -164,15 +164,15 @@ func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
 
 // collectDefs records every value each local variable is given; a nil
 // value stands for a change the analyzer does not follow.
-func (fc *fnCtx) collectDefs() {
-	fc.defs = make(map[types.Object][]ast.Expr)
-	info := fc.c.pass.TypesInfo
+func (d *definitions) collectDefs() {
+	d.defs = make(map[types.Object][]ast.Expr)
+	info := d.q.info
 	note := func(lhs ast.Expr, rhs ast.Expr) {
-		if obj := fc.c.objOf(lhs); obj != nil {
-			fc.defs[obj] = append(fc.defs[obj], rhs)
+		if obj := d.q.objOf(lhs); obj != nil {
+			d.defs[obj] = append(d.defs[obj], rhs)
 		}
 	}
-	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+	ast.Inspect(funcBody(d.node), func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for i, l := range n.Lhs {
@@ -187,9 +187,9 @@ func (fc *fnCtx) collectDefs() {
 			for i, name := range n.Names {
 				if obj := info.Defs[name]; obj != nil {
 					if len(n.Values) == len(n.Names) {
-						fc.defs[obj] = append(fc.defs[obj], n.Values[i])
+						d.defs[obj] = append(d.defs[obj], n.Values[i])
 					} else {
-						fc.defs[obj] = append(fc.defs[obj], nil, nil)
+						d.defs[obj] = append(d.defs[obj], nil, nil)
 					}
 				}
 			}

@@ -61,12 +61,15 @@ func (q typeQueries) isConversion(call *ast.CallExpr) bool {
 }
 
 // objOf returns the variable an identifier denotes.
-func (c *checker) objOf(e ast.Expr) types.Object {
+func (c *checker) objOf(e ast.Expr) types.Object { return typeQueries{c.pass.TypesInfo}.objOf(e) }
+
+// objOf returns the variable an identifier denotes.
+func (q typeQueries) objOf(e ast.Expr) types.Object {
 	id, ok := ast.Unparen(e).(*ast.Ident)
 	if !ok {
 		return nil
 	}
-	obj := c.pass.TypesInfo.ObjectOf(id)
+	obj := q.info.ObjectOf(id)
 	if _, ok := obj.(*types.Var); !ok {
 		return nil
 	}
