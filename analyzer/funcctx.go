@@ -29,10 +29,13 @@ type fnCtx struct {
 }
 
 // rangeQueries is the part of a function context that answers range
-// questions (rangeOf, entryRange): the ranges of the parameters at
-// entry, the range analysis run on the first question, and the
-// statement-level bound annotations that narrow it.
+// questions about node (rangeOf, entryRange): the ranges of the
+// parameters at entry, the range analysis run on the first question,
+// and the statement-level bound annotations that narrow it.
 type rangeQueries struct {
+	q       typeQueries
+	node    ast.Node
+	tables  func() map[types.Object]*ast.CompositeLit // the package's tables (packageTables)
 	entry   map[types.Object]ranges.Interval
 	rng     *ranges.Func
 	assumes []stmtAssume
@@ -117,9 +120,10 @@ func (c *checker) ctx(n ast.Node) *fnCtx {
 // newCtx makes a context for function n with the given entry ranges and
 // the statement-level bound annotations of its file.
 func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fnCtx {
-	q := typeQueries{c.pass.TypesInfo}
-	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: q, definitions: definitions{q: q, node: n}}
-	fc.entry = entry
+	q := c.queries()
+	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: q,
+		rangeQueries: rangeQueries{q: q, node: n, tables: c.packageTables, entry: entry},
+		definitions:  definitions{q: q, node: n}}
 	if fc.file != nil {
 		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
 	}
@@ -127,12 +131,12 @@ func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fn
 }
 
 // ranges returns the range analysis of the function, running it once.
-func (fc *fnCtx) ranges() *ranges.Func {
-	if fc.rng == nil {
-		opts := ranges.Options{Entry: fc.entry, MaxVisits: maxVisits, Tables: fc.c.packageTables()}
-		fc.rng = ranges.Analyze(fc.c.pass.TypesInfo, fc.node, opts)
+func (r *rangeQueries) ranges() *ranges.Func {
+	if r.rng == nil {
+		opts := ranges.Options{Entry: r.entry, MaxVisits: maxVisits, Tables: r.tables()}
+		r.rng = ranges.Analyze(r.q.info, r.node, opts)
 	}
-	return fc.rng
+	return r.rng
 }
 
 // packageTables returns the package's unexported table variables that
@@ -147,14 +151,14 @@ func (c *checker) packageTables() map[types.Object]*ast.CompositeLit {
 
 // rangeOf returns the range of the integer expression e where it is
 // evaluated, narrowed by statement-level bound annotations over it.
-func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
+func (r *rangeQueries) rangeOf(e ast.Expr) ranges.Interval {
 	e = ast.Unparen(e)
-	if v, ok := fc.intConst(e); ok {
+	if v, ok := r.q.intConst(e); ok {
 		return ranges.Point(v)
 	}
-	iv := fc.ranges().Of(e)
-	if lin, ok := fc.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
-		for _, a := range fc.assumes {
+	iv := r.ranges().Of(e)
+	if lin, ok := r.q.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
+		for _, a := range r.assumes {
 			if a.obj == lin.Terms[0].Sym.Object && a.from <= e.Pos() && e.End() <= a.to {
 				iv = iv.Meet(shift(a.iv, lin.C))
 			}
@@ -164,9 +168,9 @@ func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
 }
 
 // entryRange returns the range of variable v at node n.
-func (fc *fnCtx) entryRange(v types.Object, n ast.Node) ranges.Interval {
-	iv := fc.ranges().At(v, n)
-	for _, a := range fc.assumes {
+func (r *rangeQueries) entryRange(v types.Object, n ast.Node) ranges.Interval {
+	iv := r.ranges().At(v, n)
+	for _, a := range r.assumes {
 		if a.obj == v && a.from <= n.Pos() && n.End() <= a.to {
 			iv = iv.Meet(a.iv)
 		}

@@ -31,38 +31,38 @@ const maxDepth = 16
 
 // linear returns the linear form of e, looking through parentheses and
 // numeric conversions, or false when e is not linear in variables.
-func (fc *fnCtx) linear(e ast.Expr) (linear, bool) {
-	return fc.linearDepth(e, 0)
+func (q typeQueries) linear(e ast.Expr) (linear, bool) {
+	return q.linearDepth(e, 0)
 }
 
-func (fc *fnCtx) linearDepth(e ast.Expr, depth int) (linear, bool) {
+func (q typeQueries) linearDepth(e ast.Expr, depth int) (linear, bool) {
 	if depth > maxDepth {
 		return linear{}, false
 	}
-	e = fc.stripConv(e)
-	if v, ok := fc.intConst(e); ok {
+	e = q.stripConv(e)
+	if v, ok := q.intConst(e); ok {
 		return linear{C: v}, true
 	}
 	switch e := e.(type) {
 	case *ast.Ident:
 		// Only integer variables: x + float64(i) is a rising factorial,
 		// not a falling one.
-		if obj := fc.c.objOf(e); obj != nil {
-			if t, ok := fc.c.numOf(obj.Type()); ok && !t.Float {
+		if obj := q.objOf(e); obj != nil {
+			if t, ok := q.numOf(obj.Type()); ok && !t.Float {
 				return single(obj), true
 			}
 		}
 	case *ast.UnaryExpr:
 		if e.Op == token.SUB {
-			x, ok := fc.linearDepth(e.X, depth+1)
+			x, ok := q.linearDepth(e.X, depth+1)
 			return x.scale(-1), ok
 		}
 		if e.Op == token.ADD {
-			return fc.linearDepth(e.X, depth+1)
+			return q.linearDepth(e.X, depth+1)
 		}
 	case *ast.BinaryExpr:
-		x, okx := fc.linearDepth(e.X, depth+1)
-		y, oky := fc.linearDepth(e.Y, depth+1)
+		x, okx := q.linearDepth(e.X, depth+1)
+		y, oky := q.linearDepth(e.Y, depth+1)
 		if !okx || !oky {
 			return linear{}, false
 		}

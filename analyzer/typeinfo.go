@@ -12,9 +12,16 @@ import (
 // whether it is a conversion, the variable it names, the function it calls.
 
 // typeQueries is the part of a function context that asks the type
-// checker about one expression; the checker's own questions (objOf,
-// calleeOf, isMathFunc) follow.
-type typeQueries struct{ info *types.Info }
+// checker about one expression: its constant value, whether it converts,
+// the variable it names, its numeric type (numtype.go), its linear form
+// (linear.go). The checker asks the same questions through queries.
+type typeQueries struct {
+	info  *types.Info
+	sizes types.Sizes
+}
+
+// queries returns the pass's type queries.
+func (c *checker) queries() typeQueries { return typeQueries{c.pass.TypesInfo, c.pass.TypesSizes} }
 
 // intConst returns the value of a constant integer expression.
 func (q typeQueries) intConst(e ast.Expr) (int64, bool) {
@@ -61,7 +68,7 @@ func (q typeQueries) isConversion(call *ast.CallExpr) bool {
 }
 
 // objOf returns the variable an identifier denotes.
-func (c *checker) objOf(e ast.Expr) types.Object { return typeQueries{c.pass.TypesInfo}.objOf(e) }
+func (c *checker) objOf(e ast.Expr) types.Object { return c.queries().objOf(e) }
 
 // objOf returns the variable an identifier denotes.
 func (q typeQueries) objOf(e ast.Expr) types.Object {
