@@ -48,6 +48,11 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// reportedPos holds the positions of reported's keys, sorted, for
+	// reportedWithin: findings come in source order, so it grows at its end.
+	reportedPos []token.Pos
+	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
+	byPos []ast.Node
 	// tables holds the package's unchanging tables (ranges.PackageTables),
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
@@ -61,6 +66,9 @@ type checker struct {
 	calls *callState
 	// owned holds what categories keep about the pass (passStateOf).
 	owned states
+	// weights holds the fields that store running binomial weights
+	// (modelfields.go).
+	weights map[fieldPath]*weightField
 }
 
 type reportKey struct {
@@ -133,6 +141,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
 	}
+	c.checkWeightReads(funcs)
 	c.releaseGuards()
 	return nil, nil
 }
