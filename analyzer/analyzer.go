@@ -68,6 +68,9 @@ type checker struct {
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
+	// fieldVars stand for field reads v.F of a variable in the linear
+	// forms of float counts (linearCount), one variable per v and F.
+	fieldVars map[[2]types.Object]*types.Var
 }
 
 type reportKey struct {

@@ -12,7 +12,7 @@ import (
 // fixPackages are the analysistest packages of the repository's testdata
 // whose directory names start with "fix": the real analyzer's findings
 // and their fixes, against hand-written .golden files.
-var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard", "fixconv", "fixseries", "fixexit"}
+var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard", "fixconv", "fixseries", "fixexit", "fixcounts", "fixloggamma"}
 
 func TestAnalyzerGolden(t *testing.T) {
 	t.Parallel()

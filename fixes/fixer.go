@@ -20,6 +20,8 @@ type Fixer struct {
 	checks   int // fix checks spent, at most maxVerifications
 	parsed   *parsed
 	assigned map[*ast.BlockStmt]map[types.Object]bool
+	// fieldVars stand for field reads v.F in linear forms (linearOf).
+	fieldVars map[[2]types.Object]*types.Var
 }
 
 // NewFixer returns the fixer of pass's findings.
