@@ -147,6 +147,7 @@ var diffCases = []diffCase{
 	// ln Γ(x) past 171.62, where Γ(x) is +Inf; x > 0 only (the original
 	// is kept at or below 0).
 	{pkg: "fixloggamma", fn: "Spread", loops: []string{"n := 1; n <= 900; n += 7"}, args: "float64(n) / 2", typ: "float64", ref: refLogGamma},
+	{pkg: "fixcounts", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "float64(k), float64(l) / 2", typ: "float64", ref: refPoisson},
 	{pkg: "fixcounts", fn: "Rentals", loops: []string{"n := 1; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/11"}, args: "float64(k), float64(n), 0.125", typ: "float64", ref: refBinomialPMF},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }

@@ -35,3 +35,9 @@ func Queue(l float64, n int) float64 {
 	}
 	return math.Exp(-l) * sum
 }
+
+// Arrivals is the chance that exactly x customers come when l are
+// expected, with the count kept in float64.
+func Arrivals(x, l float64) float64 { // want Arrivals:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\)`
+	return math.Exp(0-l) * math.Pow(l, x) / tally(x) // want `Poisson-style term l\^x·e\^\(−l\)/x! in float64: the divisor x! overflows to \+Inf for x ≥ 171`
+}
