@@ -66,6 +66,9 @@ type checker struct {
 	calls *callState
 	// owned holds what categories keep about the pass (passStateOf).
 	owned states
+	// fieldVars stand for field reads v.F of a variable in the linear
+	// forms of float counts (linearCount), one variable per v and F.
+	fieldVars map[[2]types.Object]*types.Var
 	// weights holds the fields that store running binomial weights
 	// (modelfields.go).
 	weights map[fieldPath]*weightField

@@ -52,7 +52,7 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 		u := p.num[0]
 		var k ast.Expr
 		var m fixes.Match
-		if sh, _ := fc.ratioShape(u, p.den, &m); sh == fixes.ShapeBinomial {
+		if sh, _ := fc.ratioShape(u, p.den, &m, fc.linear); sh == fixes.ShapeBinomial {
 			k = m.Args[1]
 		}
 		nIdx := fc.c.paramIndex(decl, fc.c.objOf(u.arg))

@@ -74,7 +74,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	// An unknown operand (2·n!/(k!(n−k)!)) makes the value something
 	// else than the shape, so no shape is claimed for it.
 	if len(facts) == 1 && len(p.num) == 1 && u.kind == kindFactorial && p.other == 0 {
-		shape, msg = fc.ratioShape(u, dens, m)
+		shape, msg = fc.ratioShape(u, dens, m, fc.linearCount)
 	}
 	switch {
 	case shape == fixes.ShapeBinomial:
@@ -131,16 +131,19 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 // the textbook ones (common practice): C(n,k) = n!/(k!(n−k)!) (DLMF
 // 26.3.1), n!/(n−k)! for k-permutations, the multinomial n!/(k₁!…kₘ!)
 // with Σkᵢ = n (DLMF 26.4.2), and the Catalan number
-// (2n)!/((n+1)!n!) (OEIS A000108); section numbers from memory.
-func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shape, string) {
-	n, ok := fc.linear(u.arg)
+// (2n)!/((n+1)!n!) (OEIS A000108); section numbers from memory. lin
+// reads the arguments as linear forms: fc.linear, or fc.linearCount for
+// the match of a finding, whose fix takes float counts where they hold
+// integers (a function's value fact claims a shape over integers only).
+func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match, lin func(ast.Expr) (linear, bool)) (fixes.Shape, string) {
+	n, ok := lin(u.arg)
 	if !ok || len(dens) == 0 || u.off != 0 {
 		return fixes.ShapeNone, ""
 	}
 	var lins []linear
 	sum := linear{}
 	for _, d := range dens {
-		l, ok := fc.linear(d.arg)
+		l, ok := lin(d.arg)
 		if !ok || d.off != 0 {
 			return fixes.ShapeNone, ""
 		}
@@ -164,7 +167,7 @@ func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shap
 		return fixes.ShapeCatalan, ""
 	case len(dens) == 1:
 		if b, ok := ast.Unparen(dens[0].arg).(*ast.BinaryExpr); ok && b.Op == token.SUB {
-			if x, ok := fc.linear(b.X); ok && x.equal(n) {
+			if x, ok := lin(b.X); ok && x.equal(n) {
 				m.Args = []ast.Expr{u.arg, b.Y}
 			}
 		}

@@ -142,8 +142,10 @@ func atom(e ast.Expr) string {
 // aside) have the same linear form: the exponent and the factorial of
 // x^k/k! must be one k.
 func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
-	la, ok1 := fc.linear(a)
-	lb, ok2 := fc.linear(b)
+	// Float counts too (linearCount): the fix runs the helper only
+	// where they hold whole numbers.
+	la, ok1 := fc.linearCount(a)
+	lb, ok2 := fc.linearCount(b)
 	return ok1 && ok2 && la.equal(lb)
 }
 
@@ -151,7 +153,10 @@ func (fc *fnCtx) sameInt(a, b ast.Expr) bool {
 func (fc *fnCtx) negated(e, x ast.Expr) bool {
 	u, ok := ast.Unparen(e).(*ast.UnaryExpr)
 	if !ok || u.Op != token.SUB {
-		return false
+		// 0 - λ, or a field read λ = v.F: compare the linear forms.
+		le, ok1 := fc.linearCount(e)
+		lx, ok2 := fc.linearCount(x)
+		return ok1 && ok2 && len(lx.Terms) > 0 && le.equal(lx.scale(-1))
 	}
 	a, ok1 := fc.affineOf(u.X, 0)
 	b, ok2 := fc.affineOf(x, 0)

@@ -78,6 +78,11 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 		return "", fmt.Errorf("%s takes %d operands, match has %d", name, params.Len(), len(args))
 	}
 	texts := make([]string, len(args))
+	if classOf(want) == classFloat {
+		// Float counts are taken only for a float result (floatcount.go).
+		b.counts = &floatCounts{}
+		defer func() { b.counts = nil }()
+	}
 	for i, a := range args {
 		pt := params.At(min(i, params.Len()-1)).Type()
 		if sig.Variadic() && i >= params.Len()-1 {
@@ -97,6 +102,9 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 	}
 	text, err := b.result(text, got, want)
 	b.shown = text
+	if err == nil && b.counts != nil && len(b.counts.floats) > 0 {
+		text, err = b.countCall(name, text, texts, b.m.Node)
+	}
 	return text, err
 }
 

@@ -60,6 +60,17 @@ func (b *builder) arg(e ast.Expr, want types.Type) (string, error) {
 	switch {
 	case from == classOther || to == classOther:
 		return "", fmt.Errorf("%s has non-numeric type %s", text, tv.Type)
+	case from == classFloat && to != classFloat && b.counts != nil && classOf(want) == classSigned:
+		// A float count: the helper gets it as an int where it holds
+		// one (countCall), and the original arithmetic is kept elsewhere.
+		conv := want.String() + "(" + text + ")"
+		var primary bool
+		switch e.(type) {
+		case *ast.Ident, *ast.SelectorExpr, *ast.CallExpr, *ast.ParenExpr, *ast.IndexExpr:
+			primary = true
+		}
+		b.counts.floats = append(b.counts.floats, countOperand{text: text, conv: conv, primary: primary})
+		return conv, nil
 	case from == classFloat && to != classFloat:
 		return "", fmt.Errorf("%s is a float where an integer is needed", text)
 	}

@@ -134,6 +134,21 @@ var diffCases = []diffCase{
 	{pkg: "fixmodel", fn: "Folded", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Odds", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},
+	// Counts kept in float64: the helper runs where they hold whole
+	// numbers in the shape's domain (integer grids up to n = 1100, past
+	// the factorial's 171 and C(n, n/2)'s 1030); elsewhere (quarters,
+	// k > n, negative n) the original's own arithmetic is kept exactly.
+	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 1100; n += 7", "k := 0; k <= n; k += 1 + n/9"}, args: "float64(n), float64(k)", typ: "float64", ref: refChoose},
+	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := -8; n <= 60; n += 3", "k := -4; k <= 70; k += 3"}, args: "float64(n) / 4, float64(k) / 4", typ: "float64", ref: refTallyChoose, noBreak: true},
+	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 40; n++", "k := n + 1; k <= n+30; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refTallyChoose, noBreak: true},
+	// e^−λ·Σ λ^k/k! with e^−λ folded into each term: right where λ^k
+	// overflows (the reference takes e^−λ from math.Exp, so λ ≤ 700).
+	{pkg: "fixcounts", fn: "Queue", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 1100; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},
+	// ln Γ(x) past 171.62, where Γ(x) is +Inf; x > 0 only (the original
+	// is kept at or below 0).
+	{pkg: "fixloggamma", fn: "Spread", loops: []string{"n := 1; n <= 900; n += 7"}, args: "float64(n) / 2", typ: "float64", ref: refLogGamma},
+	{pkg: "fixcounts", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "float64(k), float64(l) / 2", typ: "float64", ref: refPoisson},
+	{pkg: "fixcounts", fn: "Rentals", loops: []string{"n := 1; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/11"}, args: "float64(k), float64(n), 0.125", typ: "float64", ref: refBinomialPMF},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

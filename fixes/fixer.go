@@ -24,6 +24,8 @@ type Fixer struct {
 	uses     map[*types.PkgName][]token.Pos // where each import name is used
 	depNames map[string]bool                // names of the package's variables, functions and methods
 	assigned map[*ast.BlockStmt]map[types.Object]bool
+	// fieldVars stand for field reads v.F in linear forms (linearOf).
+	fieldVars map[[2]types.Object]*types.Var
 }
 
 // NewFixer returns the fixer of pass's findings.

@@ -61,6 +61,11 @@ func (b *builder) linearOf(e ast.Expr) (linear, bool) {
 			return l, false
 		}
 		return varLinear(v), true
+	case *ast.SelectorExpr:
+		// A field read v.F of a variable: one variable per v and F.
+		if v := b.fieldVar(e); v != nil {
+			return varLinear(v), true
+		}
 	case *ast.UnaryExpr:
 		x, ok := b.linearOf(e.X)
 		return x.neg(), ok && e.Op == token.SUB
@@ -180,4 +185,29 @@ func (b *builder) sum(es []ast.Expr) (linear, bool) {
 		sum = sum.add(l)
 	}
 	return sum, true
+}
+
+// fieldVar returns the variable that stands for the field read e = v.F
+// of a variable v in linear forms, the same one for every read of v.F
+// in the package, or nil when e is not such a read.
+func (b *builder) fieldVar(e *ast.SelectorExpr) *types.Var {
+	id, ok := ast.Unparen(e.X).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	base, ok := b.pass.TypesInfo.Uses[id].(*types.Var)
+	sel, okSel := b.pass.TypesInfo.Selections[e]
+	if !ok || !okSel || sel.Kind() != types.FieldVal {
+		return nil
+	}
+	key := [2]types.Object{base, sel.Obj()}
+	if v, ok := b.fx.fieldVars[key]; ok {
+		return v
+	}
+	if b.fx.fieldVars == nil {
+		b.fx.fieldVars = make(map[[2]types.Object]*types.Var)
+	}
+	v := types.NewVar(base.Pos(), base.Pkg(), base.Name()+"."+sel.Obj().Name(), sel.Obj().Type())
+	b.fx.fieldVars[key] = v
+	return v
 }

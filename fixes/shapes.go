@@ -36,9 +36,9 @@ var (
 	factorialHelpers = family{"Factorial", "MustFactorialInt64", "MustFactorialUint64"}
 )
 
-// shapes is the fixer's table: one row a shape. A shape without a row (a
-// bare math.Gamma) has no value-preserving rewrite: no float64 holds
-// Γ(172).
+// shapes is the fixer's table: one row a shape. A bare math.Gamma has
+// no value-preserving rewrite (no float64 holds Γ(172)); its row serves
+// only the logarithm of one, math.Log(math.Gamma(x)).
 var shapes map[Shape]shapeRow
 
 func init() {
@@ -70,6 +70,7 @@ func init() {
 		ShapeExpFactorial:     {"factorial read back from an exponential", buildExpLgamma, factorialHelpers, 0, nil},
 		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
+		ShapeGamma:            {"logarithm of a gamma value", buildLogOfGamma, family{float: "LogGamma"}, 1, logOfGammaFactors},
 	}
 }
 
@@ -140,6 +141,10 @@ func inverseBetaFactors(b *builder, o []linear) (num, den []factorPattern, alt *
 
 func factorialValueFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // n
 	return []factorPattern{b.converted(b.userCall(o[0]))}, nil, nil
+}
+
+func logOfGammaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // x
+	return []factorPattern{b.mathCall("Gamma", o[0])}, nil, nil
 }
 
 // linearOne is the constant form 1.

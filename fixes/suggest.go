@@ -65,8 +65,12 @@ type builder struct {
 	// absorbed are definitions of locals only the rewritten expression
 	// read; the rewrite deletes them.
 	absorbed []ast.Stmt
-	shown    string // the helper call as the fix's message shows it
-	message  string
+	// counts, while a helper call's operands are converted, collects the
+	// float operands passed to integer parameters (countCall); nil where
+	// a float operand is refused.
+	counts  *floatCounts
+	shown   string // the helper call as the fix's message shows it
+	message string
 }
 
 type span struct{ pos, end token.Pos }

@@ -15,5 +15,11 @@ func buildTerm(b *builder) error {
 		// reproduces that.
 		return fmt.Errorf("%s term with non-float result %s", helper, b.m.Result)
 	}
+	if b.m.Shape == ShapePowOverFactorial {
+		// A term of e^−λ·Σ λ^k/k! takes e^−λ in (poissonsum.go).
+		if err := b.poissonSum(); err != errNoPoissonSum {
+			return err
+		}
+	}
 	return b.rewrite(helper, b.m.Args)
 }

@@ -322,3 +322,188 @@ func smallBeta(a, b float64) float64 { return lbeta(a, b) }
 		}
 	}
 }
+
+// TestGridsFile checks the committed grids: they parse, and every grid
+// names a labelled function of the overflow dimension.
+func TestGridsFile(t *testing.T) {
+	grids, err := readGrids("../../testdata/realcorpus/grids.tsv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	labels, err := readLabels("../../testdata/realcorpus/labels.tsv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	labelled := map[string]bool{}
+	for _, l := range labels {
+		if l.dimension() == dimOverflow {
+			labelled[l.Module+"\t"+l.File+"\t"+l.Func] = true
+		}
+	}
+	for _, g := range grids {
+		if !labelled[g.Module+"\t"+g.File+"\t"+g.Func] {
+			t.Errorf("grids line %d: %s %s is not labelled", g.lineNo, g.File, g.Func)
+		}
+		if n := g.size(); n == 0 || n > 5000 {
+			t.Errorf("grids line %d: %d points", g.lineNo, n)
+		}
+	}
+}
+
+func TestParseGridVars(t *testing.T) {
+	vs, err := parseGridVars("n=0..3,170.5 k=1")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(vs) != 2 || strings.Join(vs[0].Values, ",") != "0,1,2,3,170.5" || strings.Join(vs[1].Values, ",") != "1" {
+		t.Errorf("got %+v", vs)
+	}
+	for _, bad := range []string{"", "n", "n=x", "n=3..1", "n=1 n=2", "1n=2"} {
+		if _, err := parseGridVars(bad); err == nil {
+			t.Errorf("%q accepted", bad)
+		}
+	}
+}
+
+// TestJudgeAfter checks the verdicts of the -fix mode on outputs written
+// here: a BAD function repaired at its probe and on its grid, one that
+// still returns NaN, one that now panics where its exact value fits,
+// one whose right value moved, and SAFE functions kept, changed, and
+// without a grid.
+func TestJudgeAfter(t *testing.T) {
+	ls, err := parseLabels(strings.NewReader(header +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tFixed\t1\tBAD\tb\tFixed(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tStill\t2\tBAD\tb\tStill(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tPanics\t3\tBAD\tb\tPanics(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tMoved\t4\tBAD\tb\tMoved(200, 2)\texBinom(200, 2)\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tKept\t5\tSAFE\tb\t\t\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tChanged\t6\tSAFE\tb\t\t\n" +
+		"example.com/m\tv1.0.0\texample.com/m\ta.go\tBare\t7\tSAFE\tb\t\t\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	orig := "AFTER PROBE example.com/m/a.go:1 Fixed\tvalue NaN wrong\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=10\tvalue 45 right\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=200\tvalue NaN wrong\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=2000\tvalue NaN nofit\n" +
+		"AFTER PROBE example.com/m/a.go:2 Still\tvalue NaN wrong\n" +
+		"AFTER PROBE example.com/m/a.go:3 Panics\tvalue NaN wrong\n" +
+		"AFTER PROBE example.com/m/a.go:4 Moved\tvalue NaN wrong\n" +
+		"AFTER GRID example.com/m/a.go:4 Moved\tn=3\tvalue 3 right\n" +
+		"AFTER GRID example.com/m/a.go:5 Kept\tx=1\tvalue 0.5 -\n" +
+		"AFTER GRID example.com/m/a.go:5 Kept\tx=2\tvalue +Inf -\n" +
+		"AFTER GRID example.com/m/a.go:6 Changed\tx=1\tvalue 0.5 -\n"
+	fixed := "AFTER PROBE example.com/m/a.go:1 Fixed\tvalue 19900 right\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=10\tvalue 45.00000000000001 right\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=200\tvalue 19900 right\n" +
+		"AFTER GRID example.com/m/a.go:1 Fixed\tn=2000\tpanic \"Fixed: n = 2000 overflows\"\n" +
+		"AFTER PROBE example.com/m/a.go:2 Still\tvalue NaN wrong\n" +
+		"AFTER PROBE example.com/m/a.go:3 Panics\tpanic \"no\"\n" +
+		"AFTER PROBE example.com/m/a.go:4 Moved\tvalue 19900 right\n" +
+		"AFTER GRID example.com/m/a.go:4 Moved\tn=3\tvalue 3.1 wrong\n" +
+		"AFTER GRID example.com/m/a.go:5 Kept\tx=1\tvalue 0.5 -\n" +
+		"AFTER GRID example.com/m/a.go:5 Kept\tx=2\tvalue +Inf -\n" +
+		"AFTER GRID example.com/m/a.go:6 Changed\tx=1\tvalue 0.25 -\n"
+	o, err := readAfter(strings.NewReader(orig))
+	if err != nil {
+		t.Fatal(err)
+	}
+	f, err := readAfter(strings.NewReader(fixed))
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := map[string]string{"Fixed": afterRight, "Still": afterWrong, "Panics": afterFailing, "Moved": afterChanged,
+		"Kept": afterSame, "Changed": afterChanged, "Bare": afterNoGrid}
+	for _, l := range ls {
+		if v := judgeAfter(l, o, f, false); v.verdict != want[l.Func] {
+			t.Errorf("%s: %q, want %q (%v)", l.Func, v.verdict, want[l.Func], v.notes)
+		}
+	}
+	var out bytes.Buffer
+	total := compareAfter(&out, ls, []moduleAfter{{Module: "example.com/m", Orig: o, Fixed: f}})
+	if total.bad != 4 || total.right != 1 || total.wrong != 1 || total.failing != 1 || total.badChanged != 1 || total.safe != 3 || total.safeChanged != 1 {
+		t.Errorf("totals %+v\n%s", total, out.String())
+	}
+}
+
+// TestAfterRun writes the after-fix test into an original and a "fixed"
+// copy of a small package written here (the fix is made by hand: the
+// float binomial from factorials becomes a product of ratios that stays
+// finite) and runs both with the go command: the generated grid, the
+// probe runner and the comparison must agree that the function is right
+// after the fix, with C(n, k) from math/big (exBinom).
+func TestAfterRun(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs the go command")
+	}
+	src := `package p
+
+func ffact(n float64) float64 {
+	f := 1.0
+	for i := 2.0; i <= n; i++ {
+		f *= i
+	}
+	return f
+}
+
+func choose(n, k float64) float64 { return ffact(n) / (ffact(k) * ffact(n-k)) }
+`
+	fixedSrc := strings.Replace(src, "return ffact(n) / (ffact(k) * ffact(n-k)) }", `r := 1.0
+	for i := 1.0; i <= k; i++ {
+		r = r * (n - k + i) / i
+	}
+	return r
+}`, 1)
+	labels, err := parseLabels(strings.NewReader(header +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tffact\t3\tSAFE\tfloat64 factorial loop\t\t\n" +
+		"example.com/m\tv1.0.0\texample.com/m/p\tp/p.go\tchoose\t11\tBAD\tbinomial from factorials\tchoose(200, 2)\texBinom(200, 2)\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	grids, err := parseGrids(strings.Join(gridColumns, "\t") + "\n" +
+		"example.com/m\tp/p.go\tchoose\tn=0..5,170,171,200 k=0,1,2\tk <= n\tchoose(n, k)\texBinom(int64(n), int64(k))\n")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var runs [2]afterRun
+	var dirs [2]string
+	for i, s := range []string{src, fixedSrc} {
+		dir := t.TempDir()
+		dirs[i] = dir
+		if err := os.MkdirAll(filepath.Join(dir, "p"), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		os.WriteFile(filepath.Join(dir, "go.mod"), []byte("module example.com/m\n\ngo 1.21\n"), 0o644)
+		os.WriteFile(filepath.Join(dir, "p", "p.go"), []byte(s), 0o644)
+		pkgs, err := writeAfter(labels, grids, "example.com/m", dir, dirs[0], t.TempDir())
+		if err != nil || len(pkgs) != 1 {
+			t.Fatalf("packages %v, %v", pkgs, err)
+		}
+		cmd := exec.Command("go", "test", "-count=1", "-run", "^"+afterTest+"$", "-v", "./p")
+		cmd.Dir = dir
+		cmd.Env = append(os.Environ(), "GOWORK=off", "GOFLAGS=-mod=mod", "GOTOOLCHAIN=local")
+		out, err := cmd.CombinedOutput()
+		if err != nil {
+			t.Fatalf("go test: %v\n%s", err, out)
+		}
+		if runs[i], err = readAfter(bytes.NewReader(out)); err != nil {
+			t.Fatal(err)
+		}
+	}
+	changed, err := changedFuncs(labels, "example.com/m", dirs[0], dirs[1])
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	total := compareAfter(&out, labels, []moduleAfter{{Module: "example.com/m", Orig: runs[0], Fixed: runs[1], ChangedFuncs: changed}})
+	// ffact has a generated grid (numeric signature) and is unchanged.
+	if total.right != 1 || total.safeGrid != 1 || total.points == 0 {
+		t.Errorf("totals %+v\n%s", total, out.String())
+	}
+	if p := runs[0].probes["example.com/m/p/p.go:11 choose"]; p.value != "NaN" || p.judgement != "wrong" {
+		t.Errorf("original probe %+v", p)
+	}
+	if !changed[labels[1].key()] || changed[labels[0].key()] {
+		t.Errorf("changed functions %v", changed)
+	}
+}

@@ -37,7 +37,8 @@ func Misses(f, s int, p float64) float64 { // want Misses:`value Γ\(p0 \+ p1\)`
 }
 
 // SproutedF keeps its counts in float64: the helper takes whole numbers,
-// so the probability is reported but left as it is.
+// so the fix runs it where both counts hold whole numbers and keeps the
+// original product for the other inputs.
 func SproutedF(k, n, p float64) float64 { // want SproutedF:`value Γ\(p1 \+ 1\)`
 	return choose(n, k) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `SproutedF computes C\(n, k\)·p\^k·\(1−p\)\^\(-k \+ n\) in float64, which fits where choose\(n, k\) already is \+Inf or NaN from n = 171`
 }
