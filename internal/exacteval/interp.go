@@ -469,13 +469,19 @@ func (ev *Evaluator) callInstr(fr *frame, c *ssa.CallCommon, depth int) (any, er
 		return nil, skipf("call of %T", f)
 	}
 	fn := cl.fn.(*ssa.Function)
+	if fn.Pkg != nil && fn.Pkg.Pkg.Path() == "math" && fn.Signature.Recv() == nil && fn.Parent() == nil {
+		// math's functions are evaluated to Prec bits, not interpreted:
+		// their Go bodies compute float64 approximations.
+		if fn.Name() == "init" {
+			return nil, nil
+		}
+		return mathCall(fn.Name(), args)
+	}
 	if fn.Pkg != nil && fn.Blocks == nil {
 		if fn.Name() == "init" {
 			return nil, nil
 		}
 		switch path := fn.Pkg.Pkg.Path(); path {
-		case "math":
-			return mathCall(fn.Name(), args)
 		case "fmt", "errors", "strconv":
 			if fn.Signature.Results().Len() > 1 {
 				rs := make(tuple, fn.Signature.Results().Len())
@@ -569,11 +575,16 @@ func binop(op token.Token, t types.Type, x, y any) (any, error) {
 		}
 		return intBinop(op, t, x, y)
 	case *big.Float:
+		if _, ok := y.(NaN); ok {
+			return nanBinop(op), nil
+		}
 		y, ok := y.(*big.Float)
 		if !ok {
 			return nil, skipf("%s of a float and %T", op, y)
 		}
 		return floatBinop(op, x, y)
+	case NaN:
+		return nanBinop(op), nil
 	case bool:
 		if y, ok := y.(bool); ok {
 			if r, ok := equality(op, x, y); ok {
@@ -669,8 +680,31 @@ func intBinop(op token.Token, t types.Type, x, y *big.Int) (any, error) {
 // them either way.
 var closeRel = new(big.Float).SetMantExp(big.NewFloat(1), -40)
 
-func floatBinop(op token.Token, x, y *big.Float) (any, error) {
+// nanBinop is op with a NaN operand, as IEEE 754 has it: arithmetic
+// gives NaN, every comparison but != is false.
+func nanBinop(op token.Token) any {
+	switch op {
+	case token.EQL, token.LSS, token.LEQ, token.GTR, token.GEQ:
+		return false
+	case token.NEQ:
+		return true
+	}
+	return NaN{}
+}
+
+func floatBinop(op token.Token, x, y *big.Float) (r any, err error) {
 	z := new(big.Float).SetPrec(Prec)
+	// ∞−∞, 0·∞ and ∞/∞ have no value in exact arithmetic either (an
+	// infinity here is a true division by zero or math.Inf): NaN, as
+	// IEEE 754 gives.
+	defer func() {
+		if e := recover(); e != nil {
+			if _, ok := e.(big.ErrNaN); !ok {
+				panic(e)
+			}
+			r, err = NaN{}, nil
+		}
+	}()
 	switch op {
 	case token.ADD:
 		return z.Add(x, y), nil
@@ -681,7 +715,7 @@ func floatBinop(op token.Token, x, y *big.Float) (any, error) {
 	case token.QUO:
 		if y.Sign() == 0 {
 			if x.Sign() == 0 {
-				return nil, skipf("0/0")
+				return NaN{}, nil
 			}
 			return z.SetInf(x.Sign() < 0), nil
 		}
@@ -720,6 +754,8 @@ func unop(in *ssa.UnOp, x any) (any, error) {
 	switch in.Op {
 	case token.SUB:
 		switch x := x.(type) {
+		case NaN:
+			return x, nil
 		case *big.Int:
 			return new(big.Int).Neg(x), nil
 		case *big.Float:
@@ -779,6 +815,9 @@ func convert(x any, from, to types.Type) (any, error) {
 				return nil, skipf("conversion of %s to an integer", x.Text('g', 5))
 			}
 			i, _ := x.Int(nil) // truncates
+			if x.IsInt() {
+				return i, nil
+			}
 			fi := new(big.Float).SetPrec(Prec).SetInt(i)
 			frac := new(big.Float).Sub(x, fi)
 			frac.Abs(frac)
@@ -804,7 +843,7 @@ func convert(x any, from, to types.Type) (any, error) {
 		switch x := x.(type) {
 		case *big.Int:
 			return new(big.Float).SetPrec(Prec).SetInt(x), nil
-		case *big.Float:
+		case *big.Float, NaN:
 			return x, nil
 		}
 	}

@@ -221,3 +221,46 @@ func TestEvaluate(t *testing.T) {
 		}
 	}
 }
+
+// NaN as IEEE 754 arithmetic has it (common practice): 0/0 is NaN, NaN
+// compares unequal to itself, math.IsNaN sees it, Pow(NaN, 0) = 1.
+func TestNaN(t *testing.T) {
+	const nanSrc = `package q
+
+import "math"
+
+func Ratio(a, b float64) float64 { return a / b }
+
+func Same(x float64) bool { y := x / x; return y == y }
+
+func Checked(x float64) float64 {
+	if math.IsNaN(math.Log(x)) {
+		return -1
+	}
+	return math.Pow(math.NaN(), 0)
+}
+`
+	fset := token.NewFileSet()
+	f, err := parser.ParseFile(fset, "q.go", nanSrc, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pkg, _, err := ssautil.BuildPackage(&types.Config{Importer: importer.Default()}, fset,
+		types.NewPackage("q", "q"), []*ast.File{f}, ssa.SanityCheckFunctions)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ev := New()
+	if v, err := ev.Call(pkg.Func("Ratio"), []any{Float(0), Float(0)}); err != nil || v != (NaN{}) {
+		t.Errorf("Ratio(0, 0) = %v, %v; want NaN", v, err)
+	}
+	if v, err := ev.Call(pkg.Func("Same"), []any{Float(0)}); err != nil || v != false {
+		t.Errorf("Same(0) = %v, %v; want false", v, err)
+	}
+	if v, err := ev.Call(pkg.Func("Checked"), []any{Float(-2)}); err != nil || v.(*big.Float).Cmp(big.NewFloat(-1)) != 0 {
+		t.Errorf("Checked(-2) = %v, %v; want -1", v, err)
+	}
+	if v, err := ev.Call(pkg.Func("Checked"), []any{Float(2)}); err != nil || v.(*big.Float).Cmp(big.NewFloat(1)) != 0 {
+		t.Errorf("Checked(2) = %v, %v; want 1", v, err)
+	}
+}

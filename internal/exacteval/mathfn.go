@@ -7,8 +7,10 @@ import (
 // mathCall evaluates a call of package math's function name.
 func mathCall(name string, args []any) (any, error) {
 	fs := make([]*big.Float, 0, len(args))
-	for _, a := range args {
+	for i, a := range args {
 		switch a := a.(type) {
+		case NaN:
+			return nanMath(name, args, i)
 		case *big.Float:
 			fs = append(fs, a)
 		case *big.Int: // math.Inf's sign
@@ -20,7 +22,7 @@ func mathCall(name string, args []any) (any, error) {
 	one := func(f func(*big.Float) (*big.Float, error)) (any, error) {
 		r, err := f(fs[0])
 		if err == errNaN {
-			return nil, skipf("math.%s(%s) has no real value", name, fs[0].Text('g', 10))
+			return NaN{}, nil
 		}
 		return r, err
 	}
@@ -36,7 +38,7 @@ func mathCall(name string, args []any) (any, error) {
 	case "Log2", "Log10":
 		l, err := Log(fs[0])
 		if err != nil {
-			return nil, skipf("math.%s of a negative", name)
+			return NaN{}, nil
 		}
 		base := big.NewFloat(2)
 		if name == "Log10" {
@@ -47,12 +49,12 @@ func mathCall(name string, args []any) (any, error) {
 	case "Pow":
 		r, err := Pow(fs[0], fs[1])
 		if err == errNaN {
-			return nil, skipf("math.Pow(%s, %s) has no real value", fs[0].Text('g', 10), fs[1].Text('g', 10))
+			return NaN{}, nil
 		}
 		return r, err
 	case "Sqrt":
 		if fs[0].Sign() < 0 {
-			return nil, skipf("math.Sqrt of a negative")
+			return NaN{}, nil
 		}
 		if fs[0].Sign() == 0 || fs[0].IsInf() {
 			return fs[0], nil
@@ -63,7 +65,7 @@ func mathCall(name string, args []any) (any, error) {
 	case "Lgamma":
 		l, sign, err := Lgamma(fs[0])
 		if err != nil {
-			return nil, skipf("math.Lgamma(%s)", fs[0].Text('g', 10))
+			return tuple{NaN{}, big.NewInt(1)}, nil
 		}
 		return tuple{l, big.NewInt(int64(sign))}, nil
 	case "Abs":
@@ -81,7 +83,9 @@ func mathCall(name string, args []any) (any, error) {
 		x := fs[0]
 		return x.IsInf() && (sign == 0 || sign > 0 && x.Sign() > 0 || sign < 0 && x.Sign() < 0), nil
 	case "IsNaN":
-		return false, nil // a NaN is never held: it skips the input
+		return false, nil
+	case "NaN":
+		return NaN{}, nil
 	case "Floor", "Ceil", "Trunc", "Round":
 		x := fs[0]
 		if x.IsInf() || x.IsInt() {
@@ -112,4 +116,27 @@ func mathCall(name string, args []any) (any, error) {
 		return fi, nil
 	}
 	return nil, skipf("math.%s", name)
+}
+
+// nanMath is math's function name with args[i] a NaN, by math's special
+// cases: Pow(NaN, 0) = Pow(1, NaN) = 1, IsNaN is true, IsInf false, and
+// NaN otherwise.
+func nanMath(name string, args []any, i int) (any, error) {
+	switch name {
+	case "IsNaN":
+		return true, nil
+	case "IsInf":
+		return false, nil
+	case "Pow":
+		if i == 1 {
+			if x, ok := args[0].(*big.Float); ok && x.Cmp(big.NewFloat(1)) == 0 {
+				return new(big.Float).SetPrec(Prec).SetInt64(1), nil
+			}
+		} else if y, ok := args[1].(*big.Float); ok && y.Sign() == 0 {
+			return new(big.Float).SetPrec(Prec).SetInt64(1), nil
+		}
+	case "Lgamma":
+		return tuple{NaN{}, big.NewInt(1)}, nil
+	}
+	return NaN{}, nil
 }

@@ -17,6 +17,7 @@ import (
 //	slices          slice
 //	pointers        *any
 //	functions       *closure
+//	a float NaN     NaN
 //	results of fmt, errors and strconv calls: opaque
 type (
 	// Struct is a struct value, one element per field.
@@ -33,6 +34,9 @@ type (
 		recv any // a bound method's receiver, if any
 	}
 	opaque struct{}
+	// NaN is a float with no real value: math.NaN(), 0/0, ∞−∞, the log
+	// of a negative, Γ at a pole; what IEEE 754 arithmetic gives there too.
+	NaN struct{}
 )
 
 // Int returns an integer argument.
