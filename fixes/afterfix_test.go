@@ -37,7 +37,8 @@ import (
 var (
 	scenarioSrc = []string{"bottling", "callcentre", "cardshuffle", "dice", "dicepool", "gasmodel",
 		"generic", "gentable", "inspection", "labtables", "mathkit", "oddcode", "probkit", "raffle",
-		"reliability", "sampling", "seating", "skymodel", "staffing", "tables"}
+		"ranktest", "reliability", "sampling", "seating", "signcurve", "skymodel", "staffing",
+		"tables", "tallykit"}
 	scenarioDemo = []string{"dice", "gas", "sampling", "staffing"}
 	// notScenarios are the packages of testdata/src that hold cases of one
 	// category each rather than realistic code.
