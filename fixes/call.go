@@ -104,6 +104,7 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 	b.shown = text
 	if err == nil && b.counts != nil && len(b.counts.floats) > 0 {
 		text, err = b.countCall(name, text, texts, b.m.Node)
+		b.countGuarded = err == nil
 	}
 	return text, err
 }
@@ -129,6 +130,9 @@ func (b *builder) rewrite(name string, args []ast.Expr) error {
 func (b *builder) replaceByCall(name string, args []ast.Expr) error {
 	text, err := b.call(name, args, b.m.Result)
 	if err != nil {
+		return err
+	}
+	if text, err = b.keepOutsideDomain(text, args); err != nil {
 		return err
 	}
 	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)

@@ -48,17 +48,19 @@ type countOperand struct {
 // x^k/k!, λ^k e^−λ/k! and the multinomial's parts for counts ≥ 0, the
 // binomial pmf for 0 ≤ k ≤ n, the negative binomial pmf
 // C(f+s−1, f) p^s (1−p)^f for f ≥ 0 and s ≥ 1, the hypergeometric pmf
-// for 0 ≤ k ≤ K, 0 ≤ n−k ≤ N−K).
+// for 0 ≤ k ≤ K, 0 ≤ n−k ≤ N−K; probabilities in [0, 1], rates ≥ 0).
 var countDomains = map[string]func(a []string) []string{
 	"Choose":           func(a []string) []string { return []string{"0 <= " + a[1], a[1] + " <= " + a[0]} },
 	"Falling":          func(a []string) []string { return []string{"0 <= " + a[1], a[1] + " <= " + a[0]} },
 	"PowOverFactorial": func(a []string) []string { return []string{"0 <= " + a[1]} },
-	"PoissonPMF":       func(a []string) []string { return []string{"0 <= " + a[0]} },
+	"PoissonPMF":       func(a []string) []string { return []string{"0 <= " + a[0], "0 <= " + a[1]} },
 	"Factorial":        func(a []string) []string { return []string{"0 <= " + a[0]} },
 	"Catalan":          func(a []string) []string { return []string{"0 <= " + a[0]} },
-	"BinomialPMF":      func(a []string) []string { return []string{"0 <= " + a[0], a[0] + " <= " + a[1]} },
+	"BinomialPMF": func(a []string) []string {
+		return []string{"0 <= " + a[0], a[0] + " <= " + a[1], "0 <= " + a[2], a[2] + " <= 1"}
+	},
 	"NegativeBinomialPMF": func(a []string) []string {
-		return []string{"0 <= " + a[0], "1 <= " + a[1]}
+		return []string{"0 <= " + a[0], "1 <= " + a[1], "0 <= " + a[2], a[2] + " <= 1"}
 	},
 	"HypergeometricPMF": func(a []string) []string { // k, N, K, n
 		k, total, succ, n := a[0], a[1], a[2], a[3]

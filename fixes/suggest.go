@@ -68,9 +68,12 @@ type builder struct {
 	// counts, while a helper call's operands are converted, collects the
 	// float operands passed to integer parameters (countCall); nil where
 	// a float operand is refused.
-	counts  *floatCounts
-	shown   string // the helper call as the fix's message shows it
-	message string
+	counts *floatCounts
+	// countGuarded: countCall already keeps the expression as written
+	// outside whole-numbered counts in the helper's domain.
+	countGuarded bool
+	shown        string // the helper call as the fix's message shows it
+	message      string
 }
 
 type span struct{ pos, end token.Pos }
