@@ -70,6 +70,7 @@ func init() {
 		ShapeExpFactorial:     {"factorial read back from an exponential", buildExpLgamma, factorialHelpers, 0, nil},
 		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
+		ShapeModelPoissonRun:  {"running Poisson term", buildModelPoissonRun, family{float: "PoissonTerm"}, 0, nil},
 	}
 }
 

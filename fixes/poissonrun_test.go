@@ -1,0 +1,46 @@
+package fixes_test
+
+import (
+	"math/big"
+
+	"github.com/overfact/overfact/internal/exacteval"
+)
+
+// The pharmacy's Poisson probabilities, built one factor at a time from
+// e^(−λ): the update becomes the term itself.
+func init() {
+	fixPackages = append(fixPackages, "fixpoisson")
+	diffCases = append(diffCases,
+		// Past λ ≈ 745 the original's start is 0 and so is every term;
+		// the sum itself is near 1 around k = λ.
+		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := 50; l <= 1300; l += 125", "n := 0; n <= 1500; n += 75"}, args: "float64(l), n", typ: "float64", ref: refPoissonSum},
+		diffCase{pkg: "fixpoisson", fn: "ExactArrivals", loops: []string{"l := 100; l <= 1300; l += 150", "n := 0; n <= 1500; n += 60"}, args: "float64(l), float64(n)", typ: "float64", ref: refPoissonSwapped},
+		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := 100; l <= 1300; l += 150", "n := 0; n <= 1500; n += 60"}, args: "float64(l), int32(n)", typ: "float64", ref: refPoissonSwapped},
+		// Small and negative rates: the original is right, and so must
+		// the fix be (the negative rate's terms alternate in sign).
+		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := -12; l <= 30; l += 3", "n := 0; n <= 200; n += 9"}, args: "float64(l) / 4, n", typ: "float64", ref: refPoissonSum, noBreak: true},
+		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := -12; l <= 30; l += 3", "n := 0; n <= 200; n += 9"}, args: "float64(l) / 4, int32(n)", typ: "float64", ref: refPoissonSwapped, noBreak: true},
+	)
+}
+
+// refPoissonSwapped is λ^n·e^(−λ)/n! for the arguments (λ, n), with
+// e^(−λ) from math/big (exacteval.Exp, checked against mpmath in its
+// package): refPoisson's float64 e^(−λ) is 0 past λ ≈ 745.
+func refPoissonSwapped(x []float64) *big.Float { return refPoissonTerms(x[0], int64(x[1]), false) }
+
+// refPoissonSum is Σ_{k≤n} λ^k·e^(−λ)/k! for the arguments (λ, n).
+func refPoissonSum(x []float64) *big.Float { return refPoissonTerms(x[0], int64(x[1]), true) }
+
+func refPoissonTerms(lambda float64, n int64, sum bool) *big.Float {
+	e := exacteval.Exp(new(big.Float).SetPrec(refPrec).SetFloat64(-lambda))
+	total, term := fl(0), fl(1)
+	for k := int64(0); k <= n; k++ {
+		if k > 0 {
+			term = quo(mul(term, fl(lambda)), fl(float64(k)))
+		}
+		if sum || k == n {
+			total = new(big.Float).SetPrec(refPrec).Add(total, mul(term, e))
+		}
+	}
+	return total
+}
