@@ -44,3 +44,30 @@ func refPoissonTerms(lambda float64, n int64, sum bool) *big.Float {
 	}
 	return total
 }
+
+// The boiler plant's series, summed until a term is below rounding:
+// the exit comes after the term, so the term takes the helper.
+func init() {
+	fixPackages = append(fixPackages, "fixconverge")
+	diffCases = append(diffCases,
+		// Past a = 170 the original's factorial is +Inf while the terms
+		// still grow: the sum is NaN or +Inf, e^a (less its tail) fits.
+		diffCase{pkg: "fixconverge", fn: "Steady", loops: []string{"a := 10; a <= 700; a += 45", "c := 0; c <= 1500; c += 125"}, args: "float64(a), float64(c)", typ: "float64", ref: refConverged},
+		diffCase{pkg: "fixconverge", fn: "Warmup", loops: []string{"a := 10; a <= 700; a += 45", "c := 0; c <= 1500; c += 125"}, args: "float64(a), c", typ: "float64", ref: refConverged},
+	)
+}
+
+// refConverged is Σ_{k=0}^{⌊c⌋} a^k/k! in math/big for a ≥ 0: the
+// loops stop once a term is below 1e-16 of the sum, which changes the
+// float64 result by less than 2e-16 relative (the tail after a term
+// below 1e-16·sum, with k past a, is at most that term times a
+// geometric factor), far inside the tests' 1e-12.
+func refConverged(x []float64) *big.Float {
+	a, c := x[0], int64(x[1])
+	sum, term := fl(1), fl(1)
+	for k := int64(1); k <= c; k++ {
+		term = quo(mul(term, fl(a)), fl(float64(k)))
+		sum = new(big.Float).SetPrec(refPrec).Add(sum, term)
+	}
+	return sum
+}
