@@ -9,9 +9,9 @@ import (
 	"math/big"
 
 	"github.com/overfact/overfact/analyzer/ranges"
-	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
 

@@ -1,6 +1,7 @@
 package fixes_test
 
 import (
+	"math"
 	"math/big"
 
 	"github.com/overfact/overfact/internal/exacteval"
@@ -70,4 +71,44 @@ func refConverged(x []float64) *big.Float {
 		sum = new(big.Float).SetPrec(refPrec).Add(sum, term)
 	}
 	return sum
+}
+
+// The survey tool's normalising constants: a Gamma ratio among other
+// factors takes GammaRatio and keeps the others.
+func init() {
+	fixPackages = append(fixPackages, "fixgammaamong")
+	diffCases = append(diffCases,
+		// Past ν = 343 both Gamma values are +Inf and the constant NaN;
+		// it is near 1/√(2π) there.
+		diffCase{pkg: "fixgammaamong", fn: "StudentConst", loops: []string{"nu := 1; nu <= 3000; nu += 37"}, args: "nu", typ: "float64", ref: refStudentConst},
+		diffCase{pkg: "fixgammaamong", fn: "ChiMean", loops: []string{"k := 1; k <= 3000; k += 41"}, args: "float64(k)", typ: "float64", ref: refChiMean},
+	)
+}
+
+// refStudentConst is Γ((ν+1)/2)/(√(νπ)·Γ(ν/2)) in math/big with the
+// float64 π the code multiplies by; the Gamma values by exacteval.Gamma
+// (checked against mpmath in its package).
+func refStudentConst(x []float64) *big.Float {
+	v := x[0]
+	s := new(big.Float).SetPrec(refPrec).Mul(fl(v), fl(math.Pi))
+	return quo(refGammaQuo((v+1)/2, v/2), new(big.Float).SetPrec(refPrec).Sqrt(s))
+}
+
+// refChiMean is √2·Γ((k+1)/2)/Γ(k/2) in math/big, with the float64
+// √2 the code multiplies by.
+func refChiMean(x []float64) *big.Float {
+	k := x[0]
+	return mul(fl(math.Sqrt2), refGammaQuo((k+1)/2, k/2))
+}
+
+func refGammaQuo(a, b float64) *big.Float {
+	ga, err := exacteval.Gamma(fl(a))
+	if err != nil {
+		panic(err)
+	}
+	gb, err := exacteval.Gamma(fl(b))
+	if err != nil {
+		panic(err)
+	}
+	return quo(ga, gb)
 }

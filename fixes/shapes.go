@@ -71,6 +71,7 @@ func init() {
 		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
 		ShapeModelPoissonRun:  {"running Poisson term", buildModelPoissonRun, family{float: "PoissonTerm"}, 0, nil},
+		ShapeGammaRatioAmong:  {"gamma ratio among other factors", buildGammaRatioAmong, family{float: "GammaRatio"}, 0, nil},
 	}
 }
 
