@@ -72,6 +72,7 @@ func init() {
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
 		ShapeModelPoissonRun:  {"running Poisson term", buildModelPoissonRun, family{float: "PoissonTerm"}, 0, nil},
 		ShapeGammaRatioAmong:  {"gamma ratio among other factors", buildGammaRatioAmong, family{float: "GammaRatio"}, 0, nil},
+		ShapePowOverGamma:     {"power over gamma", buildTerm, family{float: "PowOverGamma"}, 3, powOverGammaFactors},
 	}
 }
 
@@ -130,6 +131,10 @@ func negBinomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, al
 
 func gammaRatioFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
 	return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
+}
+
+func powOverGammaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // x, p, a
+	return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{b.mathCall("Gamma", o[2])}, nil
 }
 
 func betaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
