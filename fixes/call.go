@@ -123,6 +123,9 @@ func (b *builder) replaceByCall(name string, args []ast.Expr) error {
 	if err != nil {
 		return err
 	}
+	if text, err = b.keepOutsideDomain(text, args); err != nil {
+		return err
+	}
 	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)
 	for _, d := range b.absorbed {
 		b.deleteStmt(d)

@@ -78,6 +78,12 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
 	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
+	// Outside 0 ≤ k ≤ n the rewrite keeps the expression as written
+	// (fixes/domain.go): fact(0)/(fact(1)·fact(−1)) is 1 where C(0, 1)
+	// is 0, and MustFallingInt64 panics for k < 0. n stays below the
+	// guard that -fix gives fact itself (21).
+	{pkg: "fixratio", fn: "Rotas", loops: []string{"n := 0; n <= 17; n++", "k := -3; k <= n+3; k++"}, args: "n, k", typ: "int", ref: refRatioChoose, noBreak: true},
+	{pkg: "fixratio", fn: "Orders", loops: []string{"n := 0; n <= 17; n++", "k := -3; k <= n+3; k++"}, args: "n, k", typ: "int", ref: refRatioFalling, noBreak: true},
 	{pkg: "fixratio", fn: "Pairings", loops: []string{"n := 0; n <= 65; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: scaled(2, refChoose)},
 	{pkg: "fixratio", fn: "TripleShare", loops: []string{"n := 0; n <= 400; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k", typ: "float64", ref: scaled(3, refChoose)},
 	{pkg: "fixterm", fn: "Blocking", loops: []string{"a := 1; a <= 200; a *= 4", "c := 0; c <= 260; c += 5"}, args: "float64(a) / 2, c", typ: "float64", ref: refErlangB},

@@ -295,3 +295,19 @@ func TestLoopChooseReference(t *testing.T) {
 		}
 	}
 }
+
+// refRatioChoose is fact(n)/(fact(k)·fact(n−k)) with a factorial loop's
+// value (factorialBig: the empty product, 1, below 2) and
+// Go's truncated integer division, for every n and k: C(n, k) on
+// 0 ≤ k ≤ n, and what the code computes outside it.
+func refRatioChoose(x []float64) *big.Float {
+	n, k := int64(x[0]), int64(x[1])
+	den := new(big.Int).Mul(factorialBig(k), factorialBig(n-k))
+	return bf(new(big.Int).Quo(factorialBig(n), den))
+}
+
+// refRatioFalling is fact(n)/fact(n−k) the same way.
+func refRatioFalling(x []float64) *big.Float {
+	n, k := int64(x[0]), int64(x[1])
+	return bf(new(big.Int).Quo(factorialBig(n), factorialBig(n-k)))
+}
