@@ -14,13 +14,13 @@ func init() {
 	diffCases = append(diffCases,
 		// Past λ ≈ 745 the original's start is 0 and so is every term;
 		// the sum itself is near 1 around k = λ.
-		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := 50; l <= 1300; l += 125", "n := 0; n <= 1500; n += 75"}, args: "float64(l), n", typ: "float64", ref: refPoissonSum},
-		diffCase{pkg: "fixpoisson", fn: "ExactArrivals", loops: []string{"l := 100; l <= 1300; l += 150", "n := 0; n <= 1500; n += 60"}, args: "float64(l), float64(n)", typ: "float64", ref: refPoissonSwapped},
-		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := 100; l <= 1300; l += 150", "n := 0; n <= 1500; n += 60"}, args: "float64(l), int32(n)", typ: "float64", ref: refPoissonSwapped},
+		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := 50; l <= 1300; l += 250", "n := 0; n <= 1500; n += 150"}, args: "float64(l), n", typ: "float64", ref: refPoissonSum},
+		diffCase{pkg: "fixpoisson", fn: "ExactArrivals", loops: []string{"l := 100; l <= 1300; l += 300", "n := 0; n <= 1500; n += 125"}, args: "float64(l), float64(n)", typ: "float64", ref: refPoissonSwapped},
+		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := 100; l <= 1300; l += 300", "n := 0; n <= 1500; n += 125"}, args: "float64(l), int32(n)", typ: "float64", ref: refPoissonSwapped},
 		// Small and negative rates: the original is right, and so must
 		// the fix be (the negative rate's terms alternate in sign).
-		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := -12; l <= 30; l += 3", "n := 0; n <= 200; n += 9"}, args: "float64(l) / 4, n", typ: "float64", ref: refPoissonSum, noBreak: true},
-		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := -12; l <= 30; l += 3", "n := 0; n <= 200; n += 9"}, args: "float64(l) / 4, int32(n)", typ: "float64", ref: refPoissonSwapped, noBreak: true},
+		diffCase{pkg: "fixpoisson", fn: "AtMostArrivals", loops: []string{"l := -12; l <= 30; l += 6", "n := 0; n <= 200; n += 19"}, args: "float64(l) / 4, n", typ: "float64", ref: refPoissonSum, noBreak: true},
+		diffCase{pkg: "fixpoisson", fn: "Refills", loops: []string{"l := -12; l <= 30; l += 6", "n := 0; n <= 200; n += 19"}, args: "float64(l) / 4, int32(n)", typ: "float64", ref: refPoissonSwapped, noBreak: true},
 	)
 }
 
@@ -53,8 +53,8 @@ func init() {
 	diffCases = append(diffCases,
 		// Past a = 170 the original's factorial is +Inf while the terms
 		// still grow: the sum is NaN or +Inf, e^a (less its tail) fits.
-		diffCase{pkg: "fixconverge", fn: "Steady", loops: []string{"a := 10; a <= 700; a += 45", "c := 0; c <= 1500; c += 125"}, args: "float64(a), float64(c)", typ: "float64", ref: refConverged},
-		diffCase{pkg: "fixconverge", fn: "Warmup", loops: []string{"a := 10; a <= 700; a += 45", "c := 0; c <= 1500; c += 125"}, args: "float64(a), c", typ: "float64", ref: refConverged},
+		diffCase{pkg: "fixconverge", fn: "Steady", loops: []string{"a := 10; a <= 700; a += 90", "c := 0; c <= 1500; c += 250"}, args: "float64(a), float64(c)", typ: "float64", ref: refConverged},
+		diffCase{pkg: "fixconverge", fn: "Warmup", loops: []string{"a := 10; a <= 700; a += 90", "c := 0; c <= 1500; c += 250"}, args: "float64(a), c", typ: "float64", ref: refConverged},
 	)
 }
 
@@ -80,8 +80,8 @@ func init() {
 	diffCases = append(diffCases,
 		// Past ν = 343 both Gamma values are +Inf and the constant NaN;
 		// it is near 1/√(2π) there.
-		diffCase{pkg: "fixgammaamong", fn: "StudentConst", loops: []string{"nu := 1; nu <= 3000; nu += 37"}, args: "nu", typ: "float64", ref: refStudentConst},
-		diffCase{pkg: "fixgammaamong", fn: "ChiMean", loops: []string{"k := 1; k <= 3000; k += 41"}, args: "float64(k)", typ: "float64", ref: refChiMean},
+		diffCase{pkg: "fixgammaamong", fn: "StudentConst", loops: []string{"nu := 1; nu <= 3000; nu += 73"}, args: "nu", typ: "float64", ref: refStudentConst},
+		diffCase{pkg: "fixgammaamong", fn: "ChiMean", loops: []string{"k := 1; k <= 3000; k += 83"}, args: "float64(k)", typ: "float64", ref: refChiMean},
 	)
 }
 
@@ -120,10 +120,10 @@ func init() {
 	diffCases = append(diffCases,
 		// Past d = 341 the original is NaN; the volume is tiny but
 		// normal up to d ≈ 1300.
-		diffCase{pkg: "fixpowgamma", fn: "UnitBall", loops: []string{"d := 1; d <= 1290; d += 17"}, args: "float64(d) / 2", typ: "float64", ref: refUnitBall},
+		diffCase{pkg: "fixpowgamma", fn: "UnitBall", loops: []string{"d := 1; d <= 1290; d += 43"}, args: "float64(d) / 2", typ: "float64", ref: refUnitBall},
 		// Past k = 171.6 Γ(k) is +Inf: the weight is 0 or NaN where it
 		// is not small for x near k.
-		diffCase{pkg: "fixpowgamma", fn: "Weight", loops: []string{"x := 1; x <= 400; x += 33", "k := 1; k <= 400; k += 13"}, args: "float64(x), float64(k) / 2", typ: "float64", ref: refWeight},
+		diffCase{pkg: "fixpowgamma", fn: "Weight", loops: []string{"x := 1; x <= 400; x += 66", "k := 1; k <= 400; k += 26"}, args: "float64(x), float64(k) / 2", typ: "float64", ref: refWeight},
 	)
 }
 
