@@ -48,6 +48,11 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// reportedPos holds the positions of reported's keys, sorted, for
+	// reportedWithin: findings come in source order, so it grows at its end.
+	reportedPos []token.Pos
+	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
+	byPos []ast.Node
 	// sitesDecided holds the unexported factorial functions whose every
 	// call in the package is either always safe or always past the first
 	// bad value, with one past it: the calls are the findings, and the
@@ -68,6 +73,9 @@ type checker struct {
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
+	// weights holds the fields that store running binomial weights
+	// (modelfields.go).
+	weights map[fieldPath]*weightField
 }
 
 type reportKey struct {
@@ -140,6 +148,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
 	}
+	c.checkWeightReads(funcs)
 	c.releaseGuards()
 	return nil, nil
 }

@@ -21,7 +21,7 @@ const modelMaxNodes = vm.DefaultMaxNodes
 
 // evalModel runs the value model over the function.
 func (fc *fnCtx) evalModel() *vm.Result {
-	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, MaxNodes: modelMaxNodes})
+	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, MaxNodes: modelMaxNodes})
 	if res.Capped && debug {
 		fmt.Fprintf(debugOut, "overfact: %s: value model stopped at %d syntax nodes; the rest of the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), modelMaxNodes)
 	}
@@ -199,8 +199,16 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 			if sel, ok := n.(*ast.SelectorExpr); ok && in == nil && fc.c.objOf(sel.X) == s.Obj && fc.c.pass.TypesInfo.ObjectOf(sel.Sel) == s.Field {
 				in = sel
 			}
+			if fc.isLenOf(n, s) && in == nil {
+				in = n.(ast.Expr)
+			}
 			return in == nil
 		})
+		if in == nil && fc.isLenSym(s) {
+			if r, ok := fc.lenBefore(s, at); ok {
+				return r.Meet(fc.lenLocalRange(s, at))
+			}
+		}
 		if in == nil {
 			in = res.Exprs[s]
 		}
@@ -210,6 +218,76 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 		return ranges.Top()
 	}
 	return fc.entryRange(s.Obj, at)
+}
+
+// isLenSym reports whether s is the model's variable len(x).
+func (fc *fnCtx) isLenSym(s vm.Sym) bool {
+	b, ok := s.Obj.(*types.Builtin)
+	return ok && b.Name() == "len" && s.Field != nil
+}
+
+// isLenOf reports whether n is a call len(x) of s = len(x).
+func (fc *fnCtx) isLenOf(n ast.Node, s vm.Sym) bool {
+	call, ok := n.(*ast.CallExpr)
+	if !ok || len(call.Args) != 1 || !fc.isLenSym(s) || fc.c.objOf(call.Args[0]) != s.Field {
+		return false
+	}
+	b, ok := fc.c.pass.TypesInfo.Uses[calleeIdent(call)].(*types.Builtin)
+	return ok && b.Name() == "len"
+}
+
+// lenBefore is the range of len(x) at at from its reads in the simple
+// statements that run before at whenever at runs (earlier statements of
+// a block that holds at, outside closures and the right operands of &&
+// and ||): x keeps one length, so a bound at any of them holds at at
+// too (c := make(T, len(cp)) after a guard on len(cp)).
+func (fc *fnCtx) lenBefore(s vm.Sym, at ast.Node) (ranges.Interval, bool) {
+	r, found := ranges.Top(), false
+	var reads func(n ast.Node)
+	reads = func(n ast.Node) {
+		ast.Inspect(n, func(m ast.Node) bool {
+			switch m := m.(type) {
+			case *ast.FuncLit:
+				return false
+			case *ast.BinaryExpr:
+				if m.Op == token.LAND || m.Op == token.LOR {
+					reads(m.X)
+					return false
+				}
+			}
+			if fc.isLenOf(m, s) {
+				r, found = r.Meet(fc.rangeOf(m.(ast.Expr))), true
+			}
+			return true
+		})
+	}
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if n == nil || at.Pos() < n.Pos() || at.End() > n.End() {
+			return false // not on the path to at
+		}
+		var list []ast.Stmt
+		switch b := n.(type) {
+		case *ast.BlockStmt:
+			list = b.List
+		case *ast.CaseClause:
+			list = b.Body
+		case *ast.FuncLit:
+			return false
+		}
+		for _, st := range list {
+			if st.Pos() > at.Pos() {
+				break
+			}
+			switch st.(type) {
+			case *ast.AssignStmt, *ast.DeclStmt, *ast.ExprStmt:
+				if st.End() <= at.Pos() {
+					reads(st)
+				}
+			}
+		}
+		return true
+	})
+	return r, found
 }
 
 // lenLocalRange is the range at at of the locals the function defines
@@ -637,7 +715,63 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	clause, definite := verdict(nv.Name(), n, central.FirstBad)
 	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the product is +Inf or NaN although the probability is at most 1",
 		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox())
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.formedPMFMatch(res, e, f)})
+}
+
+// formedPMFMatch offers the helper call for a binomial probability
+// whose coefficient is the call of another function whose value fact is
+// the binomial (exp of log-gamma differences, a table for small n):
+// tallykit.Choose(n, k) * math.Pow(p, k) * math.Pow(1-p, n-k) becomes
+// lgamma.BinomialPMF(k, n, p), which the fixer checks factor by factor.
+// An exponential the code takes itself (math.Exp(Lchoose(n, k))) has
+// no such factor and no fix.
+func (fc *fnCtx) formedPMFMatch(res *vm.Result, e ast.Expr, f vm.Form) *fixes.Match {
+	found := false
+	var walk func(x ast.Expr)
+	walk = func(x ast.Expr) {
+		switch x := fc.stripConv(x).(type) {
+		case *ast.BinaryExpr:
+			if x.Op == token.MUL {
+				walk(x.X)
+				walk(x.Y)
+			}
+		case *ast.CallExpr:
+			found = found || fc.formedCall(x) && !fc.c.isMathFunc(x, "Exp")
+		}
+	}
+	walk(e)
+	if !found {
+		return nil
+	}
+	m := fc.callRootMatch(res, e, f)
+	if m == nil {
+		return nil
+	}
+	// The operands as e reads them: the model's first read of a
+	// variable may lie in a guard above.
+	for i, a := range m.Args {
+		var in ast.Expr
+		ast.Inspect(e, func(n ast.Node) bool {
+			if x, ok := n.(ast.Expr); ok && in == nil && (isIdentOrSel(x)) && src(x) == src(a) {
+				in = x
+			}
+			return in == nil
+		})
+		if in == nil {
+			return nil
+		}
+		m.Args[i] = in
+	}
+	return m
+}
+
+// isIdentOrSel reports whether x is a name or a selection x.f.
+func isIdentOrSel(x ast.Expr) bool {
+	switch x.(type) {
+	case *ast.Ident, *ast.SelectorExpr:
+		return true
+	}
+	return false
 }
 
 // modelFactorialFunc recognises, from the value model, a function
@@ -767,8 +901,9 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 }
 
 // modelWorth is the model's own cheap prefilter: a counting loop that
-// no matcher reported, or a binomial coefficient from math.Lgamma beside
-// two math.Pow calls (the pmf). Functions whose loops are all reported
+// no matcher reported, or a binomial coefficient from math.Lgamma (or
+// from a function whose value fact is such a binomial or its
+// logarithm) beside two math.Pow calls (the pmf) or a division. Functions whose loops are all reported
 // already cost one walk of their syntax and no evaluation.
 func (fc *fnCtx) modelWorth() bool {
 	open, lgamma, pows := false, false, 0
@@ -784,6 +919,9 @@ func (fc *fnCtx) modelWorth() bool {
 				lgamma = true
 			case fc.c.isMathFunc(n, "Pow"):
 				pows++
+			case fc.formedCall(n):
+				// A binomial another function forms from log-gamma.
+				lgamma = true
 			}
 		}
 		return !open

@@ -100,6 +100,7 @@ func (mc *modelCtx) binomialPeak(a *vm.Acc, t numType) bool {
 			central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), n, jName, jName, n)
 		// Over every step up to n the peak is always passed.
 		definite = r.Lo >= first && r.Lo != math.MinInt64 && mc.coversPeak(j, n)
+		mc.noteWeightFields(a, fmt.Sprintf("C(%s, %s)", n, jName), nv.Name(), first)
 	}
 	match := mc.binomialMatchIf(a, final)
 	fc.report(finding{node: l.Stmt, cat: catBinomLoop, definite: definite, msg: msg + clause, match: match})

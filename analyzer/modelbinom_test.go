@@ -84,3 +84,77 @@ func TestModelCountRatioProbe(t *testing.T) {
 		t.Errorf("C(600,300)²/C(1200,600) = %v, want about 0.046", f)
 	}
 }
+
+// TestPeeledWeights runs the Bézier outlines of a sign plotter, whose
+// Bernstein weights are set under a switch on the loop counter: the
+// first two outright, the rest one ratio at a time.
+func TestPeeledWeights(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "signcurve")
+}
+
+// TestPeeledWeightsProbe runs NewOutline's weights at the first bad
+// length the message names, 1031 control points, against math/big: the
+// last weight C(1030, 1030) = 1, the one before it 1030, yet the code's
+// running weight is +Inf from the central step on; at 400 points
+// (NewGlyph's bound) every weight is finite.
+func TestPeeledWeightsProbe(t *testing.T) {
+	weights := func(n int) []float64 {
+		out := make([]float64, n)
+		var w float64
+		for i := range out {
+			switch i {
+			case 0:
+				w = 1
+			case 1:
+				w = float64(n) - 1
+			default:
+				w *= float64(n-i) / float64(i)
+			}
+			out[i] = w
+		}
+		return out
+	}
+	w := weights(1031)
+	for _, i := range []int{1029, 1030} {
+		want, _ := new(big.Float).SetInt(new(big.Int).Binomial(1030, int64(i))).Float64()
+		if !math.IsInf(w[i], 1) || math.IsInf(want, 0) {
+			t.Errorf("weight %d of 1031 = %v, exact C(1030, %d) = %v: want +Inf where the exact value fits", i, w[i], i, want)
+		}
+	}
+	for i, v := range weights(400) {
+		if math.IsInf(v, 0) {
+			t.Fatalf("weight %d of 400 = %v, want finite", i, v)
+		}
+	}
+	// Outline.At at t = 1/2 over 1031 control points all at x = 1:
+	// Σ C(1030, i)·2^−1030 = 1 (the binomial theorem, common practice;
+	// summed here in math/big), but the code's terms are +Inf·t^i.
+	at := func(w []float64, t float64) float64 {
+		pts := make([]float64, len(w))
+		pts[0] = w[0]
+		u := t
+		for i := 1; i < len(w); i++ {
+			pts[i] = w[i] * u
+			u *= t
+		}
+		t1 := 1 - t
+		tt := t1
+		p := pts[len(pts)-1]
+		for i := len(pts) - 2; i >= 0; i-- {
+			p += pts[i] * tt
+			tt *= t1
+		}
+		return p
+	}
+	sum := new(big.Int)
+	for i := int64(0); i <= 1030; i++ {
+		sum.Add(sum, new(big.Int).Binomial(1030, i))
+	}
+	exact, _ := new(big.Rat).SetFrac(sum, new(big.Int).Lsh(big.NewInt(1), 1030)).Float64()
+	if v := at(w, 0.5); !math.IsNaN(v) && !math.IsInf(v, 0) || exact != 1 {
+		t.Errorf("Outline.At(1/2) over 1031 points = %v, exact %v: want +Inf or NaN where the exact value is 1", v, exact)
+	}
+	if v := at(weights(400), 0.5); math.Abs(v-1) > 1e-9 {
+		t.Errorf("Glyph.At(1/2) over 400 points = %v, want 1", v)
+	}
+}

@@ -7,6 +7,7 @@ import (
 	"go/types"
 	"math"
 	"math/big"
+	"sort"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -39,7 +40,7 @@ func (c *checker) findValueFacts(decls []*ast.FuncDecl, scans map[ast.Node]*scan
 	}
 	for _, d := range decls {
 		s := scans[d]
-		if obj := c.declObj(d); obj != nil && s != nil && (s.knownCall || s.localCall || s.worthLoops()) {
+		if obj := c.declObj(d); obj != nil && s != nil && (s.knownCall || s.localCall || s.logCall || s.worthLoops()) {
 			c.calls.decls[obj] = d
 		}
 	}
@@ -126,29 +127,81 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 	for i := 0; i < sig.Params().Len(); i++ {
 		ps[sig.Params().At(i)] = i
 	}
-	var value *vm.Term
-	var roots []ast.Expr
+	// The value of each return but the edge cases; a return whose
+	// value differs from the others' is allowed only as a table for
+	// small inputs (tableBranch), and any return may be the formula.
+	var all []ast.Expr
+	type cand struct {
+		t   *vm.Term
+		log bool
+	}
+	var cands []cand
+	valueOf := func(r ast.Expr) (*vm.Term, bool) {
+		if v := res.Values[r]; v != nil {
+			return v, false
+		}
+		return res.Logs[r], res.Logs[r] != nil
+	}
 	for _, r := range fc.modelRoots(res) {
 		if c.edgeValue(r) {
 			continue
 		}
-		v := res.Values[r]
-		if v == nil || value != nil && v.String() != value.String() {
-			return nil
+		all = append(all, r)
+		if v, lg := valueOf(r); v != nil {
+			known := false
+			for _, x := range cands {
+				known = known || x.log == lg && x.t.String() == v.String()
+			}
+			if !known {
+				cands = append(cands, cand{v, lg})
+			}
 		}
-		value = v
-		roots = append(roots, r)
 	}
-	if value == nil || len(fc.returnsOutsideClosures()) != len(fc.modelRoots(res)) {
+	if len(cands) == 0 || len(fc.returnsOutsideClosures()) != len(fc.modelRoots(res)) {
+		return nil
+	}
+	var value *vm.Term
+	var roots []ast.Expr
+	var isLog bool
+	var table *TableBranch
+	var tableSym vm.Sym
+	for _, x := range cands {
+		var others []ast.Expr
+		roots = roots[:0]
+		for _, r := range all {
+			if v, lg := valueOf(r); v != nil && lg == x.log && v.String() == x.t.String() {
+				roots = append(roots, r)
+			} else {
+				others = append(others, r)
+			}
+		}
+		if len(others) == 0 {
+			value, isLog = x.t, x.log
+			break
+		}
+		if sym, tb, ok := fc.tableBranch(res, others, x.t, t, ps); ok {
+			value, isLog, table, tableSym = x.t, x.log, tb, sym
+			break
+		}
+	}
+	if value == nil {
 		return nil
 	}
 	enc, ok := ps.encodeTerm(value)
 	if !ok {
 		return nil
 	}
-	f := &ValueFact{Value: enc}
+	f := &ValueFact{Value: enc, Log: isLog, Table: table}
 	for _, r := range roots {
+		if isLog {
+			break // a logarithm leaves no type
+		}
 		for _, w := range fc.weakPoints(res, r, t) {
+			if table != nil && !pastTable(w, tableSym, table.Max) {
+				// The table's inputs are not described by the fact:
+				// only a weak point past them is certain.
+				continue
+			}
 			// A weak point must be reachable inside the function's own
 			// guards and the domain of its value (SmallChoose's n ≤ 60
 			// rules out k ≥ 171): whether the caller's value still fits
@@ -166,12 +219,142 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 			f.Weak = appendWeak(f.Weak, WeakPoint{Arg: arg, Bad: ratText(w.bad), What: w.what, Gamma: w.gamma})
 		}
 	}
-	// A value with no variable, or with no intermediate that breaks,
-	// tells a caller nothing the calls themselves do not.
-	if _, isConst := value.IsConst(); isConst || len(f.Weak) == 0 || len(termSyms(value, vm.Int(0))) == 0 {
+	// A value with no variable, or with no Γ factor and no intermediate
+	// that breaks, tells a caller nothing the calls themselves do not.
+	// Without a weak point the fact still tells what the function
+	// returns, a logarithm or a value formed as one quantity in a float
+	// type (exp of log-gamma differences), which is +Inf exactly where
+	// it leaves the type: a caller that multiplies it by powers that
+	// underflow, or divides a count by it, is judged by that value.
+	if _, isConst := value.IsConst(); isConst || len(termSyms(value, vm.Int(0))) == 0 {
+		return nil
+	}
+	if len(f.Weak) == 0 && !fc.formedValue(res, roots, value, isLog, t) {
 		return nil
 	}
 	return f
+}
+
+// formedValue reports whether a value without weak points is worth a
+// fact: a binomial coefficient (the one form callers read from it,
+// modelPMF and modelCountRatio), in a float type or as its logarithm,
+// formed as one quantity at every root (exp of a log value, or the call
+// of another such function), and returned where n reaches the first
+// central coefficient that leaves the type, so that it breaks only
+// there and the function's own guards and edge returns do not keep it
+// below (an n ≤ 60 guard that returns NaN above).
+func (fc *fnCtx) formedValue(res *vm.Result, roots []ast.Expr, value *vm.Term, isLog bool, t numType) bool {
+	form := vm.Recognise(value)
+	if form.Kind != vm.Binomial || !t.Float {
+		return false
+	}
+	// A logarithm is judged where its callers exponentiate it, in its
+	// own float type.
+	first := thresholds.CentralBinomial(t.Num).FirstBad
+	for _, r := range roots {
+		if !fc.reaches(res, form.Args[0], r, first) {
+			return false
+		}
+		if isLog {
+			continue
+		}
+		call, ok := fc.stripConv(r).(*ast.CallExpr)
+		if !ok {
+			return false
+		}
+		if fc.c.isMathFunc(call, "Exp") && len(call.Args) == 1 && res.Logs[call.Args[0]] != nil {
+			continue
+		}
+		if !fc.formedCall(call) {
+			return false
+		}
+	}
+	return true
+}
+
+// reaches reports whether the affine form a can be at least first at
+// r, as far as its variables' ranges there tell: a variable with a
+// positive coefficient and no upper bound, or the largest value of a
+// past first.
+func (fc *fnCtx) reaches(res *vm.Result, a vm.Affine, r ast.Node, first int64) bool {
+	top := new(big.Rat)
+	if a.C != nil {
+		top.Set(a.C)
+	}
+	for _, l := range a.Terms {
+		rg := fc.symRange(res, l.Sym, r)
+		if rg.IsEmpty() {
+			return false
+		}
+		end := rg.Hi
+		if l.K.Sign() < 0 {
+			end = rg.Lo
+		}
+		if end == math.MaxInt64 && l.K.Sign() > 0 {
+			return true
+		}
+		if end == math.MinInt64 || end == math.MaxInt64 {
+			return l.K.Sign() < 0 && end == math.MinInt64
+		}
+		top.Add(top, new(big.Rat).Mul(l.K, big.NewRat(end, 1)))
+	}
+	return top.Cmp(big.NewRat(first, 1)) >= 0
+}
+
+// tableBranch accepts returns whose value the model does not know or
+// that differ from value, where each runs only for small inputs: a
+// parameter n of value's form (C(n, k), n!, a falling factorial) is at
+// most a constant there at which the form still fits t, so the function
+// returns value, the formula, wherever value leaves t. Sound for a
+// caller because every judgment of a value fact is made where the value
+// or one of its weak points breaks, which needs n past that constant,
+// outside the table's branch; a weak point that does not put n past it
+// is dropped. It returns n and the bound.
+func (fc *fnCtx) tableBranch(res *vm.Result, others []ast.Expr, value *vm.Term, t numType, ps paramSyms) (vm.Sym, *TableBranch, bool) {
+	form := vm.Recognise(value)
+	var limit int64
+	switch form.Kind {
+	case vm.Binomial:
+		limit = thresholds.CentralBinomial(t.Num).FirstBad
+	case vm.Fact, vm.Falling:
+		limit = thresholds.Factorial(t.Num).FirstBad
+	default:
+		return vm.Sym{}, nil, false
+	}
+	n, alpha, beta, ok := oneVar(form.Args[0])
+	idx, isParam := ps[n.Obj]
+	if !ok || !isParam || n.Field != nil || n.Loop != nil || alpha.Sign() <= 0 {
+		return vm.Sym{}, nil, false
+	}
+	var hi int64 = math.MinInt64
+	for _, r := range others {
+		rg := fc.symRange(res, n, r)
+		if rg.IsEmpty() {
+			continue // a return that never runs
+		}
+		if rg.Hi == math.MaxInt64 {
+			return vm.Sym{}, nil, false
+		}
+		hi = max(hi, rg.Hi)
+	}
+	// The largest argument of the form inside the table's branches.
+	top := new(big.Rat).Add(new(big.Rat).Mul(alpha, big.NewRat(hi, 1)), beta)
+	if hi == math.MinInt64 || top.Cmp(big.NewRat(limit, 1)) >= 0 {
+		return vm.Sym{}, nil, false
+	}
+	return n, &TableBranch{Param: idx, Max: hi}, true
+}
+
+// pastTable reports whether w breaks only with n past the table's
+// bound: its argument is n itself (plus a constant) with the first bad
+// n above max.
+func pastTable(w weak, n vm.Sym, max int64) bool {
+	v, alpha, beta, ok := oneVar(w.arg)
+	if !ok || v != n {
+		return false
+	}
+	first, ok := firstAtRat(alpha, beta, w.bad)
+	return ok && first > max
 }
 
 func appendWeak(ws []WeakPoint, w WeakPoint) []WeakPoint {
@@ -219,10 +402,28 @@ func (c *checker) edgeValue(e ast.Expr) bool {
 // its parameters replaced by the arguments' values.
 func (fc *fnCtx) valueCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	f := fc.c.valueFactOf(fc.c.calleeOf(call))
-	if f == nil {
+	if f == nil || f.Log {
 		return nil
 	}
 	return f.Value.Term(affineArgs(args))
+}
+
+// logCallee gives t for a call of a function whose ValueFact says it
+// returns ln t, its parameters replaced by the arguments' values.
+func (fc *fnCtx) logCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
+	f := fc.c.valueFactOf(fc.c.calleeOf(call))
+	if f == nil || !f.Log {
+		return nil
+	}
+	return f.Value.Term(affineArgs(args))
+}
+
+// formedCall reports whether call calls a function whose ValueFact is a
+// binomial formed as one quantity, with no weak point of its own (exp
+// of log-gamma differences in another function), or its logarithm.
+func (fc *fnCtx) formedCall(call *ast.CallExpr) bool {
+	f := fc.c.valueFactOf(fc.c.calleeOf(call))
+	return f != nil && len(f.Weak) == 0
 }
 
 // affineArgs returns the arguments that are affine forms; the others
@@ -444,12 +645,9 @@ func (fc *fnCtx) callRoots() []ast.Expr {
 
 // reportedWithin reports whether a finding starts inside n.
 func (c *checker) reportedWithin(n ast.Node) bool {
-	for k := range c.reported {
-		if n.Pos() <= k.pos && k.pos < n.End() {
-			return true
-		}
-	}
-	return false
+	at := c.reportedPos
+	i := sort.Search(len(at), func(i int) bool { return at[i] >= n.Pos() })
+	return i < len(at) && at[i] < n.End()
 }
 
 // checkCallRoot judges one root.

@@ -20,31 +20,43 @@ func TestModelCallScenarios(t *testing.T) {
 	analysistest.Run(t, testdata(t), Analyzer, "probkit", "inspection")
 }
 
-// TestValueFactRoundTrip encodes a ValueFact with encoding/gob, as the
+// TestValueFactRoundTrip encodes ValueFacts with encoding/gob, as the
 // unitchecker driver of go vet -vettool does between packages, and
-// decodes the same value and weak points.
+// decodes the same value and weak points, and a logarithm's fact with
+// a table branch.
 func TestValueFactRoundTrip(t *testing.T) {
-	f := ValueFact{
-		Value: FactTerm{Coef: "1", Gamma: []FactGamma{
-			{Arg: FactAffine{C: "1", Param: []int{0}, K: []string{"1"}}, Pow: 1},
-			{Arg: FactAffine{C: "1", Param: []int{1}, K: []string{"1"}}, Pow: -1},
-			{Arg: FactAffine{C: "1", Param: []int{0, 1}, K: []string{"1", "-1"}}, Pow: -1},
-		}, Pows: []FactPow{{Base: FactAffine{C: "0", Param: []int{2}, K: []string{"1"}}, Exp: FactAffine{C: "1/2", Param: []int{1}, K: []string{"1"}}}}},
-		Weak: []WeakPoint{{Arg: FactAffine{C: "0", Param: []int{0}, K: []string{"1"}}, Bad: "171", What: "fact(n)"}},
+	binom := []FactGamma{
+		{Arg: FactAffine{C: "1", Param: []int{0}, K: []string{"1"}}, Pow: 1},
+		{Arg: FactAffine{C: "1", Param: []int{1}, K: []string{"1"}}, Pow: -1},
+		{Arg: FactAffine{C: "1", Param: []int{0, 1}, K: []string{"1", "-1"}}, Pow: -1},
 	}
-	var buf bytes.Buffer
-	if err := gob.NewEncoder(&buf).Encode(&f); err != nil {
-		t.Fatal(err)
-	}
-	var got ValueFact
-	if err := gob.NewDecoder(&buf).Decode(&got); err != nil {
-		t.Fatal(err)
-	}
-	if !reflect.DeepEqual(got, f) {
-		t.Errorf("round trip of %+v gave %+v", f, got)
-	}
-	if want := "value Γ(p0 + 1)·(p2)^(p1 + 1/2)/(Γ(p1 + 1)·Γ(p0 - p1 + 1)), wrong once p0 ≥ 171"; got.String() != want {
-		t.Errorf("decoded fact reads %q, want %q", got.String(), want)
+	for _, c := range []struct {
+		f    ValueFact
+		want string
+	}{{
+		f: ValueFact{
+			Value: FactTerm{Coef: "1", Gamma: binom, Pows: []FactPow{{Base: FactAffine{C: "0", Param: []int{2}, K: []string{"1"}}, Exp: FactAffine{C: "1/2", Param: []int{1}, K: []string{"1"}}}}},
+			Weak:  []WeakPoint{{Arg: FactAffine{C: "0", Param: []int{0}, K: []string{"1"}}, Bad: "171", What: "fact(n)"}},
+		},
+		want: "value Γ(p0 + 1)·(p2)^(p1 + 1/2)/(Γ(p1 + 1)·Γ(p0 - p1 + 1)), wrong once p0 ≥ 171",
+	}, {
+		f:    ValueFact{Value: FactTerm{Coef: "1", Gamma: binom}, Log: true, Table: &TableBranch{Param: 0, Max: 20}},
+		want: "value ln Γ(p0 + 1)/(Γ(p1 + 1)·Γ(p0 - p1 + 1)), another return for p0 ≤ 20",
+	}} {
+		var buf bytes.Buffer
+		if err := gob.NewEncoder(&buf).Encode(&c.f); err != nil {
+			t.Fatal(err)
+		}
+		var got ValueFact
+		if err := gob.NewDecoder(&buf).Decode(&got); err != nil {
+			t.Fatal(err)
+		}
+		if !reflect.DeepEqual(got, c.f) {
+			t.Errorf("round trip of %+v gave %+v", c.f, got)
+		}
+		if got.String() != c.want {
+			t.Errorf("decoded fact reads %q, want %q", got.String(), c.want)
+		}
 	}
 }
 
@@ -134,5 +146,53 @@ func TestModelCallProbes(t *testing.T) {
 	}
 	if v := spread(169.7, 1); math.Abs(v-169.7) > 1e-9*169.7 {
 		t.Errorf("SpreadRatio(169.7, 1) = %v, want 169.7", v)
+	}
+}
+
+// TestTableAndLogFacts runs a seed laboratory's rank test and tray
+// probabilities over another package's binomial: a table of exact
+// values for n ≤ 20 beside exp of log-gamma differences (the formula is
+// the function's value wherever it leaves float64), and ln C(n, k)
+// from log-gamma sums, which math.Exp takes back.
+func TestTableAndLogFacts(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "tallykit", "ranktest")
+}
+
+// TestTableFactsProbe runs the arithmetic of the seed laboratory
+// (testdata/src/tallykit, ranktest) against math/big at the first bad
+// input the messages name, n = 1030: Sprouts at 515 of n seeds with
+// rate 1/2 is +Inf at 1030 (C(1030, 515)/2^1030 ≈ 0.025 by math/big),
+// and SplitShare over two lots of 515 with u = n1 = 515 sums to
+// C(1030, 515) orderings of C(1030, 515), a share of exactly 1, and
+// returns NaN. Below the limit the value is right at n = 1028; at 1029
+// math.Exp of ln C(1029, 514) ≈ 709.55 is +Inf already on amd64, whose
+// math.Exp overflows from about 709.44 rather than ln(MaxFloat64) ≈
+// 709.78 (measured with go1.26), so that n is not used as the good one.
+func TestTableFactsProbe(t *testing.T) {
+	lg := func(x float64) float64 { v, _ := math.Lgamma(x); return v }
+	choose := func(n, k int) float64 { // tallykit.Choose past its table
+		return math.Exp(lg(float64(n+1)) - lg(float64(k+1)) - lg(float64(n-k+1)))
+	}
+	exactPMF := func(n, k int) float64 {
+		x := new(big.Float).SetInt(new(big.Int).Binomial(int64(n), int64(k)))
+		x.Quo(x, new(big.Float).SetInt(new(big.Int).Lsh(big.NewInt(1), uint(n))))
+		f, _ := x.Float64()
+		return f
+	}
+	sprouts := func(n, k int) float64 {
+		return choose(n, k) * math.Pow(0.5, float64(k)) * math.Pow(0.5, float64(n-k))
+	}
+	if v, want := sprouts(1030, 515), exactPMF(1030, 515); !math.IsInf(v, 1) && !math.IsNaN(v) || want < 0.02 || want > 0.03 {
+		t.Errorf("Sprouts(515) of 1030 = %v, exact %v: want +Inf or NaN where the exact value fits", v, want)
+	}
+	if v, want := sprouts(1028, 514), exactPMF(1028, 514); math.Abs(v-want) > 1e-9*want {
+		t.Errorf("Sprouts(514) of 1028 = %v, exact %v: want the right value below the limit", v, want)
+	}
+	count := 0.0
+	for r := 0; r <= 515; r++ {
+		count += choose(515, 515-r) * choose(515, r)
+	}
+	if v := count / choose(1030, 515); !math.IsNaN(v) {
+		t.Errorf("SplitShare(515, 515, 515, 515) = %v, want NaN (the true share is 1)", v)
 	}
 }

@@ -27,6 +27,23 @@ type ValueFact struct {
 	// Weak lists the intermediates that break, each while the result
 	// can still fit: the function returns a wrong value once Arg ≥ Bad.
 	Weak []WeakPoint
+	// Log reports that the function returns the natural logarithm of
+	// Value (ln C(n, k) as a sum of log-gamma values): a caller's
+	// math.Exp of the call is Value.
+	Log bool
+	// Table, when set, is a return for small inputs that the fact does
+	// not describe (a table lookup, an exact integer product): it runs
+	// only while parameter Table.Param is at most Table.Max, where Value
+	// fits the result type, so Value is what the function returns
+	// wherever Value leaves the type.
+	Table *TableBranch
+}
+
+// TableBranch bounds the inputs of a function's other returns: they run
+// only while parameter Param is at most Max.
+type TableBranch struct {
+	Param int
+	Max   int64
 }
 
 // AFact marks ValueFact as an analysis fact.
@@ -39,7 +56,18 @@ func (f *ValueFact) String() string {
 		bad, _ := parseRat(w.Bad)
 		weak = append(weak, fmt.Sprintf("%s ≥ %s", a, ratString(bad)))
 	}
-	return fmt.Sprintf("value %s, wrong once %s", f.Value.Term(nil), strings.Join(weak, " or "))
+	v := f.Value.Term(nil).String()
+	if f.Log {
+		v = "ln " + v
+	}
+	out := fmt.Sprintf("value %s", v)
+	if len(weak) > 0 {
+		out += ", wrong once " + strings.Join(weak, " or ")
+	}
+	if f.Table != nil {
+		out += fmt.Sprintf(", another return for p%d ≤ %d", f.Table.Param, f.Table.Max)
+	}
+	return out
 }
 
 // FactTerm is a vm.Term over parameter indices.

@@ -37,7 +37,8 @@ import (
 var (
 	scenarioSrc = []string{"bottling", "callcentre", "cardshuffle", "dice", "dicepool", "gasmodel",
 		"generic", "gentable", "inspection", "labtables", "mathkit", "oddcode", "probkit", "raffle",
-		"reliability", "sampling", "seating", "skymodel", "staffing", "tables"}
+		"ranktest", "reliability", "sampling", "seating", "signcurve", "skymodel", "staffing",
+		"tables", "tallykit"}
 	scenarioDemo = []string{"dice", "gas", "sampling", "staffing"}
 	// notScenarios are the packages of testdata/src that hold cases of one
 	// category each rather than realistic code.
@@ -67,18 +68,19 @@ func TestScenarioListComplete(t *testing.T) {
 // shrink: the test fails when a listed function becomes right, and when
 // one not listed is wrong after -fix.
 var stillWrong = map[string]string{
+	"demo/gas.SpeedMoment":            "-fix leaves it wrong: (1030, 0): was NaN, now NaN, exact 0",
 	"src/callcentre.AtMost":           "reported, but -fix leaves it wrong: (750, 171): was NaN, now 0, exact 8.570353218335643e-144",
 	"src/callcentre.ErlangB":          "reported, but -fix leaves it wrong: (7, 1030): was NaN, now NaN, exact 4.03972e-1791 (underflows)",
 	"src/callcentre.ErlangBSmall":     "reported, but -fix leaves it wrong: (200, 150): was NaN, now NaN, exact 0.26318203278127515",
 	"src/callcentre.Lineups":          "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
 	"src/callcentre.LineupsDown":      "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
 	"src/callcentre.Teams":            "reported, but -fix leaves it wrong: (150.5, 200): was 0, now 0, exact 7.2444391831612224e-113",
-	"src/cardshuffle.Bridge":          "reported, but -fix leaves it wrong: (-3): was -70609262346240000, now -70609262346240000, exact 8.15915e+47 (overflows int64)",
+	"src/cardshuffle.Bridge":          "reported, but -fix leaves it wrong: (-1): was -70609262346240000, now -70609262346240000, exact 8.15915e+47 (overflows int64)",
 	"src/cardshuffle.CountDown":       "reported, but -fix leaves it wrong: (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int64)",
 	"src/cardshuffle.FullDeck":        "reported, but -fix leaves it wrong: (): was -8452693550620999680, now -8452693550620999680, exact 8.06582e+67 (overflows int64)",
 	"src/cardshuffle.LateDeck":        "reported, but -fix leaves it wrong: (): was -8452693550620999680, now -8452693550620999680, exact 8.06582e+67 (overflows int)",
 	"src/cardshuffle.Perfect":         "reported, but -fix leaves it wrong: (34): was -8719569645729742848, now -8719569645729742848, exact 4.66207e+19 (overflows int64)",
-	"src/cardshuffle.Suits":           "no finding in it (only a fact for its callers): (13): was 1932053504, now 1932053504, exact 6.22702e+09 (overflows uint32)",
+	"src/cardshuffle.Suits":           "no finding in it (only a fact for its callers): (20): was 2192834560, now 2192834560, exact 2.4329e+18 (overflows uint32)",
 	"src/cardshuffle.orderingsRec":    "no finding in it (only a fact for its callers): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int)",
 	"src/dice.StreakCount":            "reported, but -fix leaves it wrong: (20): was 8598041677517291520, now 8598041677517291520, exact 5.62e+20 (overflows int)",
 	"src/dice.fact":                   "no finding in it (only a fact for its callers): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int)",
@@ -92,41 +94,40 @@ var stillWrong = map[string]string{
 	"src/dicepool.ExactlyStepped":     "reported, but -fix leaves it wrong: (2, 150, 150.5): was NaN, now NaN, exact -0",
 	"src/dicepool.ExactlyTable":       "not reported: (2, 150, 150.5): was NaN, now NaN, exact -0",
 	"src/dicepool.Hands":              "reported, but -fix leaves it wrong: (-1, 171): was NaN, now NaN, exact -1",
-	"src/dicepool.HandsOneLoop":       "reported, but -fix leaves it wrong: (171, 0.25): was +Inf, now +Inf, exact 171",
+	"src/dicepool.HandsOneLoop":       "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 1",
 	"src/gasmodel.ContinuationFactor": "reported, but -fix leaves it wrong: (0, 750, 0.5): was NaN, now NaN, exact 1",
-	"src/gasmodel.ScaledWeight":       "reported, but -fix leaves it wrong: (-1, 50, 1030, 50): was NaN, now NaN, exact 9.3628633396306688e-24",
+	"src/gasmodel.ScaledWeight":       "reported, but -fix leaves it wrong: (0, 1030, 200, 1030): was NaN, now NaN, exact 4.74989e-448 (underflows)",
 	"src/gasmodel.WeibullKurtosis":    "reported, but -fix leaves it wrong: (100): was 2.1254459230510268, now 2.1254459230510268, exact 2.1254458865865714",
 	"src/generic.Tournament":          "reported, but -fix leaves it wrong: (): was 7034535277573963776, now 7034535277573963776, exact 1.55112e+25 (overflows int64)",
 	"src/gentable.Row":                "not reported: (21): was -1.8163880412425748e+18, now -1.8163880412425748e+18, exact 5.352384417988608e+19",
-	"src/inspection.ChanceOf":         "no finding in it (only a fact for its callers): (3, 200, 200): was NaN, now NaN, exact -7.86218e+465 (overflows float64)",
+	"src/inspection.ChanceOf":         "no finding in it (only a fact for its callers): (66, 500, 1030): was NaN, now NaN, exact 4.80185e+1589 (overflows float64)",
 	"src/inspection.Cumulative":       "not reported: (2, 150, 150.5): was NaN, now NaN, exact 1.7556e+330 (overflows float64)",
-	"src/inspection.Defective":        "reported, but -fix leaves it wrong: (3, 200, 200): was NaN, now NaN, exact -7.86218e+465 (overflows float64)",
+	"src/inspection.Defective":        "reported, but -fix leaves it wrong: (66, 500, 1030): was NaN, now NaN, exact 4.80185e+1589 (overflows float64)",
 	"src/inspection.DefectiveAt":      "reported, but -fix leaves it wrong: (-1, 200, 0): was NaN, now NaN, exact +Inf (overflows float64)",
-	"src/inspection.DefectiveChecked": "not reported: (3, 200, 200): was NaN, now NaN, exact -7.86218e+465 (overflows float64)",
+	"src/inspection.DefectiveChecked": "not reported: (66, 500, 1030): was NaN, now NaN, exact 4.80185e+1589 (overflows float64)",
 	"src/inspection.DefectiveSmall":   "not reported: (171, 3, 50): was 0, now 0, exact 1.8001240816343161e-302",
 	"src/inspection.PanelDefective":   "not reported: (171, 3, 50): was 0, now 0, exact 1.8001240816343161e-302",
 	"src/inspection.RejectsBefore":    "reported, but -fix leaves it wrong: (-1, 750, 20): was NaN, now NaN, exact -4.16161e+971 (overflows float64)",
-	"src/inspection.SpreadRatio":      "reported, but -fix leaves it wrong: (1, 300.5): was NaN, now NaN, exact 300.5",
+	"src/inspection.SpreadRatio":      "reported, but -fix leaves it wrong: (3.5, 170): was +Inf, now +Inf, exact 19774546.194733854",
 	"src/labtables.BallVolume":        "reported, but -fix leaves it wrong: (150.5, 200): was +Inf, now +Inf, exact 7.1000834818037196e+273",
 	"src/labtables.ShellVolume":       "reported, but -fix leaves it wrong: (150.5, 300.5, 700): was NaN, now NaN, exact 1.19928e+379 (overflows float64)",
 	"src/labtables.StateDensity":      "reported, but -fix leaves it wrong: (750, 12.25): was NaN, now NaN, exact 2.8147e-395 (underflows)",
 	"src/probkit.Choose":              "reported, but -fix leaves it wrong: (150.5, 200): was 0, now 0, exact 7.2444391831612224e-113",
 	"src/raffle.orderings":            "no finding in it (only a fact for its callers): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int64)",
-	"src/reliability.ChooseFloat":     "no finding in it (only a fact for its callers): (3, 1100): was NaN, now NaN, exact 0",
 	"src/seating.Arrangements64":      "reported, but -fix leaves it wrong: (-3, 25): was 2741823448618631168, now 2741823448618631168, exact -5.44443e+27 (overflows int64)",
 	"src/seating.BanquetsBig":         "reported, but -fix leaves it wrong: (25): was 3747969942055026688, now 3747969942055026688, exact 1.2926e+23 (overflows int64)",
 	"src/seating.BanquetsPast":        "reported, but -fix leaves it wrong: (25): was 3747969942055026688, now 3747969942055026688, exact 1.2926e+23 (overflows int64)",
 	"src/seating.GrandHallUnchecked":  "reported, but -fix leaves it wrong: (10): was 7324805792373932032, now 7324805792373932032, exact 7.30966e+25 (overflows uint64)",
 	"src/seating.Prizes":              "reported, but -fix leaves it wrong: (0, 35): was 1, now 1, exact 0",
 	"src/skymodel.Aperture.Taper":     "reported, but -fix leaves it wrong: (5, 200): was NaN, now NaN, exact 4.8085772465768513e+83",
-	"src/skymodel.BesselI":            "reported, but -fix leaves it wrong: (2, 12.25): was NaN, now NaN, exact 20309.028131885594",
+	"src/skymodel.BesselI":            "reported, but -fix leaves it wrong: (5, 200): was NaN, now NaN, exact 1.9158141015236869e+85",
 	"src/skymodel.Coherence":          "reported, but -fix leaves it wrong: (100): was +Inf, now +Inf, exact 2.6881171418161353e+43",
 	"src/skymodel.LowerGamma":         "reported, but -fix leaves it wrong: (-1, 3.5): was -Inf, now -Inf, exact +Inf (overflows float64)",
 	"src/skymodel.LowerGammaRatio":    "not reported: (7, 1030): was 0, now 0, exact 7.6310182658571175e-296",
 	"src/skymodel.NoiseTail":          "reported, but -fix leaves it wrong: (-1, 3.5): was -Inf, now -Inf, exact +Inf (overflows float64)",
 	"src/skymodel.PhaseRatio":         "not reported: (20, 63): was 0.9129452558603556, now 0.9129452558603556, exact 0.91294525072762765",
 	"src/staffing.Arrivals":           "reported, but -fix leaves it wrong: (-2.5, 171): was -0, now -0, exact -1.0957199839228965e-240",
-	"src/staffing.ErlangB":            "not reported: (-2.5, 171): was -0, now -0, exact -1.0957199839228965e-240",
+	"src/staffing.ErlangB":            "not reported: (1500, 100): was NaN, now NaN, exact 0.93338087966886295",
 	"src/staffing.Surge":              "reported, but -fix leaves it wrong: (-2.5, 171): was -0, now -0, exact -1.0957199839228965e-240",
 	"src/staffing.SurgeCapped":        "not reported: (750, 171): was 0, now 0, exact 2.3439267750523743e-259",
 	"src/tables.boundedByAssume":      "no finding in it (only a fact for its callers): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int64)",
@@ -144,20 +145,17 @@ var stillWrong = map[string]string{
 // not accepted outcomes: the list is what remains to fix, and like
 // stillWrong it may only shrink.
 var openViolations = map[string]string{
-	"demo/gas.SpeedMoment":            "changed while right: (-3, -1): was -Inf, now NaN, exact -Inf (overflows float64)",
-	"demo/sampling.AcceptProbability": "changed while right: (500, 5, 34.5): original p:runtime error: integer divide by zero, now NaN, exact -9.74974e+773 (overflows float64)",
+	"demo/sampling.AcceptProbability": "changed while right: (500, 5, 34.5): was a panic: runtime error: integer divide by zero, now NaN, exact -9.74974e+773 (overflows float64)",
 	"demo/sampling.Choose":            "newly panicking: (-3, 25): was 0, now panics: fact: n = 25 overflows int64 (largest is 20), exact 0",
-	"demo/sampling.LotAcceptance":     "newly panicking: (5, 62, 66, 1): was +Inf, now panics: lgamma: MustChooseInt64(-57, 66): result does not fit in int64, exact NaN",
-	"src/bottling.CrateSplits":        "newly panicking: (-1, 63, 2): was -2, now panics: Factorial: n = 64 overflows int64 (largest is 20), exact 32",
+	"demo/sampling.LotAcceptance":     "newly panicking: (12, 67, 100, 5): was NaN, now panics: lgamma: MustChooseInt64(-55, 100): result does not fit in int64, exact NaN",
+	"src/bottling.CrateSplits":        "newly panicking: (21, -3, 10): was 1, now panics: Factorial: n = 28 overflows int64 (largest is 20), exact 1644",
 	"src/bottling.DrawProbability":    "newly panicking: (7, 62, 34, -1): was 0, now panics: Factorial: n = 28 overflows int64 (largest is 20), exact NaN",
 	"src/bottling.GuardedWays":        "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
 	"src/bottling.LineOrders":         "panic not naming its arguments: (34): was -8764578968847253504, now panics: Factorial: n = 30 overflows int64 (largest is 20), exact 2.65253e+32 (overflows int64)",
-	"src/bottling.Orderings":          "newly panicking: (50, -3): was 0, now panics: Factorial: n = 50 overflows int64 (largest is 20), exact 0",
 	"src/bottling.Ways":               "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
 	"src/bottling.WaysByParts":        "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
 	"src/bottling.WaysStepwise":       "changed while right: (-3, 25): was 0, now -351, exact 0",
 	"src/cardshuffle.Hands":           "newly panicking: (-3, 25): was 0, now panics: Orderings: n = 25 overflows int64 (largest is 20), exact 0",
-	"src/gasmodel.Occupancy":          "changed while right: (-1, 21): was +Inf, now NaN, exact +Inf (overflows float64)",
 	"src/inspection.LotDraw":          "changed while right: (-1, -1, 5, 12): was 0.012820512820512818, now NaN, exact 0.012820512820512821",
 	"src/reliability.Availability":    "newly panicking: (67, 20, 100): was -2.242735828178614e+152, now panics: lgamma: MustChooseInt64(67, 30): result does not fit in int64, exact -1.071157332...",
 	"src/staffing.ArrivalsInt":        "newly panicking: (-2.5, 171): was -Inf, now panics: Factorial: n = 171 overflows int64 (largest is 20), exact -1.0957199839228965e-240",
@@ -910,7 +908,7 @@ func afterfixBudget() (inputs, steps int) {
 	if os.Getenv("OVERFACT_AFTERFIX_FULL") != "" {
 		return 400, 1_000_000
 	}
-	return 40, 100_000
+	return 24, 60_000
 }
 
 // TestAfterFixScenarios is the differential of the "After -fix"

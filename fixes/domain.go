@@ -89,31 +89,45 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		return text, nil
 	}
 	ops := make([]any, len(args))
+	exprs := make([]ast.Expr, len(args))
 	allConst := true
 	for i, a := range args {
 		if !b.plain(a) { // evaluated twice: in the test and in the call
 			return text, nil
 		}
-		tv, ok := b.pass.TypesInfo.Types[a]
+		// float64(k) < 0 is k < 0: test the count itself.
+		e := b.floatOfInt(a)
+		tv, ok := b.pass.TypesInfo.Types[e]
 		if !ok {
 			return text, nil
 		}
 		if tv.Value == nil {
 			allConst = false
 		}
-		ops[i] = operandText(b.text(a), a)
+		exprs[i] = e
+		ops[i] = operandText(b.text(e), e)
 	}
 	if allConst {
 		return text, nil
 	}
 	for _, i := range r.same {
-		if i >= len(args) || !types.Identical(b.pass.TypesInfo.TypeOf(args[i]), b.pass.TypesInfo.TypeOf(args[r.same[0]])) {
+		if i >= len(args) || !types.Identical(b.pass.TypesInfo.TypeOf(exprs[i]), b.pass.TypesInfo.TypeOf(exprs[r.same[0]])) {
 			return text, nil
 		}
 	}
-	conds := make([]string, len(r.outside))
-	for i, c := range r.outside {
-		conds[i] = fmt.Sprintf(c, ops...)
+	var conds []string
+	for _, c := range r.outside {
+		// An unsigned count is never below zero.
+		var i int
+		if n, _ := fmt.Sscanf(c, "%%[%d]s < 0", &i); n == 1 && i-1 < len(exprs) && c == fmt.Sprintf("%%[%d]s < 0", i) {
+			if t, ok := b.pass.TypesInfo.TypeOf(exprs[i-1]).Underlying().(*types.Basic); ok && t.Info()&types.IsUnsigned != 0 {
+				continue
+			}
+		}
+		conds = append(conds, fmt.Sprintf(c, ops...))
+	}
+	if len(conds) == 0 {
+		return text, nil
 	}
 	orig := b.copyText(b.m.Node)
 	if ret := b.returning(); ret != nil {

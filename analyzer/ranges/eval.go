@@ -187,6 +187,9 @@ func (w *walker) builtin(s state, name string, e *ast.CallExpr) Interval {
 				return Point(n)
 			}
 		}
+		if v, ok := w.f.lenOf(e); ok && name == "len" {
+			return w.f.get(s, v, e).Meet(Interval{0, posInf})
+		}
 		return Interval{0, posInf}
 	case "copy":
 		return Interval{0, posInf}

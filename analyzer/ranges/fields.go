@@ -2,6 +2,7 @@ package ranges
 
 import (
 	"go/ast"
+	"go/token"
 	"go/types"
 )
 
@@ -161,4 +162,34 @@ func rootIdent(e ast.Expr) (*ast.Ident, bool) {
 			return nil, false
 		}
 	}
+}
+
+// lenField keys the stand-in of len(x) among the stand-ins of x.
+var lenField = types.NewVar(token.NoPos, nil, "len", types.Typ[types.Int])
+
+// lenOf returns the stand-in for len(x) of a local slice variable x (a
+// parameter included) that the function never assigns after its
+// definition: x then has one length wherever it is in scope, and a
+// guard on len(x) bounds every later read of it. An escape of x (its
+// address taken, a closure assigning it) is an escape of its length.
+func (f *Func) lenOf(call *ast.CallExpr) (types.Object, bool) {
+	id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+	if !ok || len(call.Args) != 1 {
+		return nil, false
+	}
+	if b, ok := f.info.Uses[id].(*types.Builtin); !ok || b.Name() != "len" {
+		return nil, false
+	}
+	x, ok := ast.Unparen(call.Args[0]).(*ast.Ident)
+	if !ok {
+		return nil, false
+	}
+	v, ok := f.objOf(x).(*types.Var)
+	if !ok || v.IsField() || v.Pkg() == nil || v.Parent() == nil || v.Parent() == v.Pkg().Scope() || f.rewritten[v] {
+		return nil, false
+	}
+	if _, ok := v.Type().Underlying().(*types.Slice); !ok {
+		return nil, false
+	}
+	return f.standIn(v, lenField), true
 }

@@ -54,6 +54,7 @@ type Func struct {
 	fieldsOf  map[types.Object][]types.Object // variable → stand-ins
 
 	escapes     map[types.Object][]escape
+	rewritten   map[types.Object]bool // variables assigned after their definition
 	hasGoto     bool
 	gotoTargets map[string]bool
 	assigned    map[ast.Node][]types.Object

@@ -269,6 +269,32 @@ func mix(n int) int {
 	}
 	return n - 1/*@range (-inf, +inf)*/
 }`},
+	{"a guard on the length of a slice never reassigned bounds it", `package p
+func plot(cp []float64) int {
+	if len(cp) == 0 || len(cp) > 400 {
+		return 0
+	}
+	c := make([]float64, len(cp))
+	m := len(c)/*@range [0, +inf)*/
+	return len(cp)/*@range [0, 400]*/ + m
+}`},
+	{"the length of a reassigned slice is not carried past the assignment", `package p
+func plot(cp []float64) int {
+	if len(cp) > 400 {
+		return 0
+	}
+	cp = append(cp, 1)
+	return len(cp)/*@range [0, +inf)*/
+}`},
+	{"a slice whose address escapes loses its bound", `package p
+func grow(p *[]float64) { *p = append(*p, 0) }
+func plot(cp []float64) int {
+	if len(cp) > 400 {
+		return 0
+	}
+	grow(&cp)
+	return len(cp)/*@range [0, +inf)*/
+}`},
 	{"small type wraps", `package p
 func mix(n int8) int8 {
 	if n < 100 {

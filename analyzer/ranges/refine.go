@@ -109,6 +109,9 @@ func (w *walker) narrow(s state, target ast.Expr, op token.Token, b Interval) st
 			return w.narrowVar(s, v, t, op, b)
 		}
 	case *ast.CallExpr:
+		if v, ok := w.f.lenOf(t); ok {
+			return w.narrowVar(s, v, t, op, b)
+		}
 		tv, ok := w.f.info.Types[ast.Unparen(t.Fun)]
 		if !ok || !tv.IsType() || len(t.Args) != 1 {
 			return s

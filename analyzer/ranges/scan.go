@@ -87,6 +87,9 @@ func (f *Func) scan(body ast.Node) {
 				if id, ok := rootIdent(l); ok {
 					site(id, true)
 				}
+				if id, ok := ast.Unparen(l).(*ast.Ident); ok && (n.Tok != token.DEFINE || f.info.Defs[id] == nil) {
+					f.noteRewrite(id)
+				}
 			}
 			if n.Tok == token.DEFINE {
 				f.noteTableDecl(n.Lhs, n.Rhs)
@@ -101,6 +104,9 @@ func (f *Func) scan(body ast.Node) {
 				for _, l := range []ast.Expr{n.Key, n.Value} {
 					if id, ok := rootIdent(l); ok && l != nil {
 						site(id, true)
+					}
+					if id, ok := ast.Unparen(l).(*ast.Ident); ok {
+						f.noteRewrite(id)
 					}
 				}
 			}
@@ -207,4 +213,17 @@ func (f *Func) assignedIn(st ast.Node) []types.Object {
 	}
 	f.assigned[st] = objs
 	return objs
+}
+
+// noteRewrite records that the variable id names is assigned after its
+// definition.
+func (f *Func) noteRewrite(id *ast.Ident) {
+	obj := f.objOf(id)
+	if obj == nil {
+		return
+	}
+	if f.rewritten == nil {
+		f.rewritten = make(map[types.Object]bool)
+	}
+	f.rewritten[obj] = true
 }

@@ -16,6 +16,11 @@ type Options struct {
 	// function with a factorial fact, from the values of its arguments
 	// (nil where unknown); nil when the call is not known.
 	Callee func(call *ast.CallExpr, args []*Term) *Term
+	// LogCallee returns t for a call the caller knows to return ln t,
+	// such as a function that returns a sum of log-gamma values
+	// (ln C(n, k) = lgamma(n+1) − lgamma(k+1) − lgamma(n−k+1)), so that
+	// math.Exp of the call is t; nil where unknown.
+	LogCallee func(call *ast.CallExpr, args []*Term) *Term
 	// LogGamma reports whether a call of one argument returns ln|Γ| of
 	// it, as a function that returns the first result of math.Lgamma
 	// does; nil when no such function is known.
@@ -134,6 +139,9 @@ type evaluator struct {
 	// writes counts the assignments of each variable.
 	writes map[types.Object]int
 	sets   map[types.Object]int // assignments of each variable, 2 for one in a loop
+	// makeLen holds, for a slice variable defined once by make, the
+	// length it was made with: len of it is that value.
+	makeLen map[types.Object]*value
 }
 
 // Evaluate assigns values to the expressions of fn, a *ast.FuncDecl or
@@ -159,7 +167,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	if body == nil || info == nil {
 		return res
 	}
-	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool), sets: make(map[types.Object]int)}
+	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool), sets: make(map[types.Object]int), makeLen: make(map[types.Object]*value)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
 	return res
@@ -448,6 +456,9 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 		}
 		return
 	}
+	if len(s.Lhs) == 1 && len(s.Rhs) == 1 {
+		e.noteMake(s.Lhs[0], s.Rhs[0], en)
+	}
 	vals := make([]*value, len(s.Rhs))
 	for i, r := range s.Rhs {
 		v := e.eval(r, en)
@@ -605,6 +616,15 @@ func (e *evaluator) evalRaw(x ast.Expr, en env) *value {
 		return e.binary(x.Op, a, b)
 	case *ast.CallExpr:
 		return e.call(x, en)
+	case *ast.CompositeLit:
+		// Point{X: a * u, …}: the elements' values, for what reads
+		// them; the literal itself has none.
+		for _, el := range x.Elts {
+			if kv, ok := el.(*ast.KeyValueExpr); ok {
+				el = kv.Value
+			}
+			e.eval(el, en)
+		}
 	}
 	return nil
 }
@@ -761,6 +781,11 @@ func (e *evaluator) call(x *ast.CallExpr, en env) *value {
 		if t := e.opts.Callee(x, ts); t != nil {
 			return &value{t: t}
 		}
+		if e.opts.LogCallee != nil {
+			if t := e.opts.LogCallee(x, ts); t != nil {
+				return &value{t: t, log: true}
+			}
+		}
 	}
 	return nil
 }
@@ -778,14 +803,44 @@ func (e *evaluator) length(call *ast.CallExpr) *value {
 	if !ok || b.Name() != "len" {
 		return nil
 	}
-	s, ok := e.lenSym(e.objOf(call.Args[0]))
+	x := e.objOf(call.Args[0])
+	s, ok := e.lenSym(x)
 	if !ok {
 		return nil
+	}
+	if v := e.makeLen[x]; v != nil {
+		return v
 	}
 	if _, ok := e.res.Exprs[s]; !ok {
 		e.res.Exprs[s] = call
 	}
 	return &value{t: FromAffine(Var(s))}
+}
+
+// noteMake records the length of a slice variable defined by
+// make(T, n) outside loops: len of it is n's value there, as long as the
+// variable keeps one length (lenSym).
+func (e *evaluator) noteMake(lhs, rhs ast.Expr, en env) {
+	x := e.objOf(lhs)
+	call, ok := ast.Unparen(rhs).(*ast.CallExpr)
+	if x == nil || !ok || len(call.Args) < 2 || e.loops > 0 {
+		return
+	}
+	id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+	if !ok {
+		return
+	}
+	if b, ok := e.info.Uses[id].(*types.Builtin); !ok || b.Name() != "make" {
+		return
+	}
+	if _, ok := e.lenSym(x); !ok {
+		return
+	}
+	if v := e.eval(call.Args[1], en); v != nil && !v.log {
+		if _, ok := v.t.Affine(); ok {
+			e.makeLen[x] = v
+		}
+	}
 }
 
 // lenSym returns the variable len(x) for a slice variable x that keeps

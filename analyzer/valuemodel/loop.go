@@ -12,6 +12,125 @@ import (
 type site struct {
 	stmt  ast.Stmt
 	guard ast.Expr
+	// peeled marks a site in a peel switch: in its default clause
+	// (runs from trip peel.m on) or, with init, a plain assignment in
+	// the constant case of trip trip.
+	peeled bool
+	init   bool
+	trip   int64
+}
+
+// peel is a switch on the counter (or a tagless switch whose cases
+// compare the counter with constants) in a loop body whose constant cases
+// are the first m trips, one value each, and whose default clause runs
+// on every later trip, the way Bernstein weights are set:
+//
+//	for i, p := range c {
+//		switch i {
+//		case 0:
+//			w = 1
+//		case 1:
+//			w = n - 1
+//		default:
+//			w *= (n - i) / i
+//		}
+//		…
+//	}
+//
+// An accumulator assigned in the case of trip m−1 and multiplied in
+// the default clause is read as a loop from trip m on with that value
+// as its start (the summary holds for loops of at least m trips).
+type peel struct {
+	sw    *ast.SwitchStmt
+	cases []*ast.CaseClause // cases[t] runs on trip t
+	def   *ast.CaseClause
+	m     int64
+}
+
+// counterEq returns c of a condition counter == c or c == counter, nil
+// for any other.
+func (e *evaluator) counterEq(cond ast.Expr, counter types.Object) ast.Expr {
+	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
+	if !ok || b.Op != token.EQL {
+		return nil
+	}
+	switch counter {
+	case e.objOf(b.X):
+		return b.Y
+	case e.objOf(b.Y):
+		return b.X
+	}
+	return nil
+}
+
+// peelOf recognises a peel switch among the statements of body.
+func (e *evaluator) peelOf(l *Loop, body *ast.BlockStmt) *peel {
+	if l.Counter == nil || !l.From.IsConst() || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
+		return nil
+	}
+	for _, st := range body.List {
+		sw, ok := st.(*ast.SwitchStmt)
+		if !ok || sw.Init != nil || sw.Tag != nil && e.objOf(sw.Tag) != l.Counter {
+			continue
+		}
+		p := &peel{sw: sw}
+		at := make(map[int64]*ast.CaseClause)
+		for _, x := range sw.Body.List {
+			cl := x.(*ast.CaseClause)
+			if cl.List == nil {
+				p.def = cl
+				continue
+			}
+			if len(cl.List) != 1 {
+				return nil
+			}
+			x := cl.List[0]
+			if sw.Tag == nil {
+				// switch { case i == 0: … }
+				if x = e.counterEq(x, l.Counter); x == nil {
+					return nil
+				}
+			}
+			tv, ok := e.info.Types[x]
+			if !ok || tv.Value == nil {
+				return nil
+			}
+			c, ok := ratOf(tv.Value)
+			if !ok {
+				return nil
+			}
+			// counter = From + Step·t
+			t := new(big.Rat).Sub(c, l.From.c())
+			t.Quo(t, l.Step)
+			if !t.IsInt() || t.Sign() < 0 || !t.Num().IsInt64() || at[t.Num().Int64()] != nil {
+				return nil
+			}
+			at[t.Num().Int64()] = cl
+		}
+		p.m = int64(len(at))
+		if p.def == nil || p.m == 0 {
+			return nil
+		}
+		for t := int64(0); t < p.m; t++ {
+			if at[t] == nil {
+				return nil // the constant cases are not the first trips
+			}
+			p.cases = append(p.cases, at[t])
+		}
+		branches := false
+		ast.Inspect(sw, func(n ast.Node) bool {
+			if b, ok := n.(*ast.BranchStmt); ok && (b.Tok == token.FALLTHROUGH || b.Tok == token.BREAK) {
+				branches = true
+			}
+			_, lit := n.(*ast.FuncLit)
+			return !branches && !lit
+		})
+		if branches {
+			return nil
+		}
+		return p
+	}
+	return nil
 }
 
 // role is what a loop does to a variable declared outside its body.
@@ -32,7 +151,8 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 		e.opaqueLoop(st, en)
 		return
 	}
-	sites, ok := e.sites(body, l.Counter)
+	pl := e.peelOf(l, body)
+	sites, ok := e.sites(body, l.Counter, pl)
 	if _, stepped := sites[l.Counter]; !ok || l.Counter != nil && stepped {
 		// The body moves the counter too: the trips are not the
 		// ones the loop header counts.
@@ -46,6 +166,9 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 			continue
 		}
 		roles[obj] = e.roleOf(obj, ss, steps)
+		if roles[obj] == roleAcc && pl != nil && !e.peelStart(pl, obj, ss, sites) {
+			roles[obj] = roleOther
+		}
 	}
 	trip := func(dry bool) env {
 		in := e.copyEnv(en)
@@ -78,6 +201,12 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 	for obj, r := range roles {
 		if r == roleAcc {
 			init := e.cur(obj, en)
+			if x := peelInit(pl, obj, sites[obj]); x != nil {
+				// The value the constant case of trip m−1 assigns.
+				at := e.copyEnv(en)
+				at[l.Counter] = &value{t: FromAffine(l.From.Add(Const(new(big.Rat).Mul(l.Step, rat(pl.m-1)))))}
+				init = e.eval(x, at)
+			}
 			if init == nil || init.log {
 				roles[obj] = roleOther
 				continue
@@ -87,8 +216,8 @@ func (e *evaluator) loop(st ast.Stmt, en env) {
 	}
 	l.Exits = l.Exits || e.exits(body)
 	e.loops++
-	e.trip(l, body, trip(true), roles, sites, true)
-	e.trip(l, body, trip(false), roles, sites, false)
+	e.trip(l, body, trip(true), roles, sites, pl, true)
+	e.trip(l, body, trip(false), roles, sites, pl, false)
 	e.loops--
 	e.res.Loops = append(e.res.Loops, l)
 	// Past the loop.
@@ -412,9 +541,11 @@ func (e *evaluator) stepOf(s ast.Stmt, v types.Object) *big.Rat {
 // sites lists where the body assigns each variable: at its top level,
 // or in an if statement with no else whose condition compares the
 // counter (the site's guard); a site with a nil stmt is anywhere else.
-func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object) (map[types.Object][]site, bool) {
+func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object, pl *peel) (map[types.Object][]site, bool) {
 	out := make(map[types.Object][]site)
 	var note func(st ast.Stmt, guard ast.Expr, nested bool)
+	var mark func(s site) site
+	mark = func(s site) site { return s }
 	note = func(st ast.Stmt, guard ast.Expr, nested bool) {
 		ast.Inspect(st, func(n ast.Node) bool {
 			switch n := n.(type) {
@@ -427,7 +558,7 @@ func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object) (map[types.
 						if nested {
 							s.stmt = nil
 						}
-						out[obj] = append(out[obj], s)
+						out[obj] = append(out[obj], mark(s))
 					}
 				}
 			case *ast.IncDecStmt:
@@ -436,7 +567,7 @@ func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object) (map[types.
 					if nested {
 						s.stmt = nil
 					}
-					out[obj] = append(out[obj], s)
+					out[obj] = append(out[obj], mark(s))
 				}
 			case *ast.RangeStmt:
 				for _, x := range []ast.Expr{n.Key, n.Value} {
@@ -449,6 +580,34 @@ func (e *evaluator) sites(body *ast.BlockStmt, counter types.Object) (map[types.
 		})
 	}
 	for _, st := range body.List {
+		if pl != nil && st == pl.sw {
+			// The default clause runs from trip m on; a plain
+			// assignment in a constant case sets a start value.
+			for t, cl := range pl.cases {
+				for _, b := range cl.Body {
+					// Only a plain assignment is a start value;
+					// anything else there is beyond the summary.
+					as, ok := b.(*ast.AssignStmt)
+					plain := ok && as.Tok == token.ASSIGN && len(as.Lhs) == 1 && len(as.Rhs) == 1
+					mark = func(s site) site {
+						s.peeled, s.init, s.trip = true, plain, int64(t)
+						return s
+					}
+					note(b, nil, !plain)
+				}
+			}
+			mark = func(s site) site { s.peeled = true; return s }
+			for _, b := range pl.def.Body {
+				switch b.(type) {
+				case *ast.AssignStmt, *ast.IncDecStmt:
+					note(b, nil, false)
+				default:
+					note(b, nil, true)
+				}
+			}
+			mark = func(s site) site { return s }
+			continue
+		}
 		switch s := st.(type) {
 		case *ast.AssignStmt, *ast.IncDecStmt:
 			note(s, nil, false)
@@ -494,7 +653,7 @@ func (e *evaluator) roleOf(obj types.Object, ss []site, steps map[types.Object]A
 			return roleOther
 		}
 	}
-	if len(ss) == 1 && ss[0].guard == nil {
+	if len(ss) == 1 && ss[0].guard == nil && !ss[0].peeled {
 		if d := e.stepOf(ss[0].stmt, obj); d != nil {
 			steps[obj] = Const(d)
 			return roleStep
@@ -505,6 +664,11 @@ func (e *evaluator) roleOf(obj types.Object, ss []site, steps map[types.Object]A
 		as, ok := s.stmt.(*ast.AssignStmt)
 		if !ok {
 			return roleOther
+		}
+		if s.init {
+			// A start value, checked by peelStart.
+			sum = false
+			continue
 		}
 		if _, ok := e.accOps(as, obj); !ok {
 			acc = false
@@ -520,6 +684,54 @@ func (e *evaluator) roleOf(obj types.Object, ss []site, steps map[types.Object]A
 		return roleSum
 	}
 	return roleOther
+}
+
+// peelStart reports whether an accumulator's sites fit the peel
+// switch: without a start value in it, its ops are anywhere; with one,
+// every op is in the default clause, the case of trip m−1 assigns it,
+// and no start value reads a variable the loop body assigns.
+func (e *evaluator) peelStart(pl *peel, obj types.Object, ss []site, all map[types.Object][]site) bool {
+	if peelInit(pl, obj, ss) == nil {
+		for _, s := range ss {
+			if s.init {
+				return false
+			}
+		}
+		return true
+	}
+	for _, s := range ss {
+		if !s.peeled {
+			return false
+		}
+		if !s.init {
+			continue
+		}
+		as := s.stmt.(*ast.AssignStmt)
+		for v := range all {
+			if mentionsObj(e.info, as.Rhs[0], v) {
+				return false
+			}
+		}
+	}
+	return true
+}
+
+// peelInit returns the value the case of trip m−1 assigns obj, the
+// start of its ops in the default clause; nil when there is none.
+func peelInit(pl *peel, obj types.Object, ss []site) ast.Expr {
+	if pl == nil {
+		return nil
+	}
+	var x ast.Expr
+	for _, s := range ss {
+		if s.init && s.trip == pl.m-1 {
+			if x != nil {
+				return nil // assigned twice in that case
+			}
+			x = s.stmt.(*ast.AssignStmt).Rhs[0]
+		}
+	}
+	return x
 }
 
 // opExpr is one operand of an accumulator update, as written.
@@ -644,7 +856,7 @@ func opProduct(l *Loop, op Op, n Affine) *Term {
 // accumulator's operands; in the other it records the values the
 // accumulators take, the terms of the sums, and the value after the
 // loop.
-func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.Object]role, sites map[types.Object][]site, dry bool) {
+func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.Object]role, sites map[types.Object][]site, pl *peel, dry bool) {
 	saved := e.res
 	if dry {
 		// Record nothing from the dry pass.
@@ -656,6 +868,9 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 		}
 	}()
 	opIndex := make(map[types.Object]int)
+	// from is set while the default clause of a peel switch is walked:
+	// what it does runs from trip m on.
+	var from *Affine
 	var walk func(list []ast.Stmt, guard ast.Expr)
 	walk = func(list []ast.Stmt, guard ast.Expr) {
 		for _, st := range list {
@@ -681,6 +896,12 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 					opIndex[obj]++
 					if dry {
 						op := Op{Stmt: st, X: o.x, Mul: o.mul, By: t, From: Int(0), To: l.Count}
+						if from != nil {
+							// From trip m on; with no start value
+							// in the switch, skipped before it.
+							op.From = *from
+							a.Guarded = a.Guarded || peelInit(pl, obj, sites[obj]) == nil
+						}
 						if guard != nil {
 							op.From, op.To, t = e.guardRange(l, guard, in)
 							if t == nil {
@@ -721,11 +942,20 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 						t = t.Neg()
 					}
 				}
-				from, to := Int(0), l.Count
-				if guard != nil {
-					from, to, _ = e.guardRange(l, guard, in)
+				lo, to := Int(0), l.Count
+				if from != nil {
+					lo = *from
 				}
-				l.Sums = append(l.Sums, &SumAcc{Obj: obj, Stmt: st, Sum: Sum{Iter: l.Iter, From: from, To: to, Term: t}})
+				if guard != nil {
+					lo, to, _ = e.guardRange(l, guard, in)
+				}
+				l.Sums = append(l.Sums, &SumAcc{Obj: obj, Stmt: st, Sum: Sum{Iter: l.Iter, From: lo, To: to, Term: t}})
+			case pl != nil && st == pl.sw && from == nil:
+				e.peelTrip(pl, in, roles)
+				m := Int(pl.m)
+				from = &m
+				walk(pl.def.Body, guard)
+				from = nil
 			default:
 				if ifs, ok := st.(*ast.IfStmt); ok && ifs.Init == nil && ifs.Else == nil && l.Counter != nil && e.counterCmp(ifs.Cond, l.Counter) {
 					e.eval(ifs.Cond, in)
@@ -746,6 +976,28 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 			v = v.Mul(opProduct(l, op, op.To.Sub(op.From)))
 		}
 		a.After = v
+	}
+}
+
+// peelTrip walks the constant cases of a peel switch for the values
+// inside; what they assign is unknown past the switch but for the
+// accumulators, whose values on the trips from m on the default
+// clause gives.
+func (e *evaluator) peelTrip(pl *peel, in env, roles map[types.Object]role) {
+	saved := make(env)
+	for obj, r := range roles {
+		if r == roleAcc {
+			saved[obj] = in[obj]
+		}
+	}
+	for _, cl := range pl.cases {
+		e.block(cl.Body, e.copyEnv(in))
+		var list []ast.Stmt
+		list = append(list, cl.Body...)
+		e.forgetAssigned(list, in)
+	}
+	for obj, v := range saved {
+		in[obj] = v
 	}
 }
 
@@ -841,7 +1093,29 @@ func (e *evaluator) exits(body *ast.BlockStmt) bool {
 // rangeLen returns len(x) for a range over a slice variable x that
 // keeps its length, nil otherwise.
 func (e *evaluator) rangeLen(s *ast.RangeStmt) *value {
-	if l, ok := e.lenSym(e.objOf(s.X)); ok {
+	if sl, ok := ast.Unparen(s.X).(*ast.SliceExpr); ok && sl.High == nil && sl.Max == nil && sl.Low != nil {
+		// x[lo:] of such a slice: len(x) − lo trips.
+		n := e.sliceLen(e.objOf(sl.X))
+		tv, ok := e.info.Types[sl.Low]
+		if n == nil || !ok || tv.Value == nil {
+			return nil
+		}
+		lo, ok := ratOf(tv.Value)
+		a, ok2 := affineOf(n)
+		if !ok || !ok2 {
+			return nil
+		}
+		return &value{t: FromAffine(a.Sub(Const(lo)))}
+	}
+	return e.sliceLen(e.objOf(s.X))
+}
+
+// sliceLen returns len(x) for a slice variable x that keeps its length.
+func (e *evaluator) sliceLen(x types.Object) *value {
+	if l, ok := e.lenSym(x); ok {
+		if v := e.makeLen[x]; v != nil {
+			return v
+		}
 		return &value{t: FromAffine(Var(l))}
 	}
 	return nil

@@ -62,3 +62,78 @@ func TestGoVetValueFacts(t *testing.T) {
 		t.Errorf("go vet output lacks the probability at %s over calc.Choose:\n%s", want, stderr)
 	}
 }
+
+// tablePackages is a module whose binomial helper answers small inputs
+// from a table and the rest from log-gamma, and whose log binomial is
+// a sum of log-gamma values; their callers live in another package.
+var tablePackages = map[string]string{
+	"go.mod": "module example.com/seedlab\n\ngo 1.21\n",
+	"tally/tally.go": `package tally
+
+import "math"
+
+var small = [21]int64{1, 1, 2, 6, 24, 120, 720, 5040, 40320, 362880, 3628800}
+
+// Choose returns C(n, k), exact from the table for n <= 10.
+func Choose(n, k int) float64 {
+	if k < 0 || n < k {
+		return 0
+	}
+	if n <= 10 {
+		return float64(small[n] / (small[k] * small[n-k]))
+	}
+	return math.Exp(Lchoose(n, k))
+}
+
+// Lchoose returns ln C(n, k).
+func Lchoose(n, k int) float64 {
+	a, _ := math.Lgamma(float64(n + 1))
+	b, _ := math.Lgamma(float64(k + 1))
+	c, _ := math.Lgamma(float64(n - k + 1))
+	return a - b - c
+}
+`,
+	"trial/trial.go": `package trial
+
+import (
+	"math"
+
+	"example.com/seedlab/tally"
+)
+
+// Share is the share of the orderings of two seed lots, given a count.
+func Share(count float64, n1, n2 int) float64 {
+	return count / tally.Choose(n1+n2, n1)
+}
+
+// Sprouts is the chance that k of n seeds sprout.
+func Sprouts(k, n int, p float64) float64 {
+	return math.Exp(tally.Lchoose(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
+`,
+}
+
+// TestGoVetTableAndLogFacts runs go vet over tablePackages: the
+// findings in trial need the value of tally.Choose past its table and
+// the logarithm tally.Lchoose returns, both passed between packages.
+func TestGoVetTableAndLogFacts(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs go vet")
+	}
+	dir := writeModule(t, tablePackages)
+	_, stderr, err := goTool(t, dir, "vet", "-vettool="+overfactBin, "./...")
+	if err == nil {
+		t.Fatalf("go vet succeeded; want findings\n%s", stderr)
+	}
+	for _, want := range []string{
+		filepath.Join("trial", "trial.go") + ":11:9: divides by C(n1 + n2, n1) formed on its own",
+		filepath.Join("trial", "trial.go") + ":16:9: computes the binomial probability C(n, k)",
+	} {
+		if !strings.Contains(stderr, want) {
+			t.Errorf("go vet output lacks %q:\n%s", want, stderr)
+		}
+	}
+	if strings.Contains(stderr, filepath.Join("tally", "tally.go")) {
+		t.Errorf("go vet reports the helper itself:\n%s", stderr)
+	}
+}

@@ -62,7 +62,7 @@ func DefectOdds(n, k, p float64) float64 {
 // Tail is the same ratio where the lab's code lets k go below zero,
 // for the reflected series, and checks it: k ≥ −0.75 puts k + 1 in
 // [0.25, ∞), and n − k + 1 and n + 1 are counts.
-func Tail(n, k, p float64) float64 {
+func Tail(n, k, p float64) float64 { // want Tail:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\)`
 	if k < -0.75 {
 		return 0
 	}

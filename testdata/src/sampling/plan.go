@@ -28,7 +28,7 @@ func (l Lot) Chance(k float64) float64 {
 
 // Orderings is the number of ways the two suppliers' n1 and n2
 // deliveries interleave, from log-gamma.
-func Orderings(n1, n2 int) float64 {
+func Orderings(n1, n2 int) float64 { // want Orderings:`value Γ\(p0 \+ p1 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)\)`
 	a, _ := math.Lgamma(float64(n1 + n2 + 1))
 	b, _ := math.Lgamma(float64(n1 + 1))
 	c, _ := math.Lgamma(float64(n2 + 1))
