@@ -34,8 +34,31 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	}
 	msg += choice.clause()
 	fc.c.gammaLines().note(line)
-	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
-		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})
+	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg, match: fc.gammaCallMatch(call)})
+}
+
+// gammaCallMatch is the match of a math.Gamma call's finding: a bare
+// call has no rewrite, but a power divided by it, math.Pow(x, p) /
+// math.Gamma(a), is the value x^p/Γ(a) the helper takes in log space.
+func (fc *fnCtx) gammaCallMatch(call *ast.CallExpr) *fixes.Match {
+	m := &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}
+	var up ast.Node = call
+	for {
+		p, ok := fc.parentMap()[up].(*ast.ParenExpr)
+		if !ok {
+			break
+		}
+		up = p
+	}
+	quo, ok := fc.parentMap()[up].(*ast.BinaryExpr)
+	if !ok || quo.Op != token.QUO || quo.Y != up {
+		return m
+	}
+	pow, ok := ast.Unparen(quo.X).(*ast.CallExpr)
+	if !ok || !fc.c.isMathFunc(pow, "Pow") || len(pow.Args) != 2 {
+		return m
+	}
+	return &fixes.Match{Shape: fixes.ShapePowOverGamma, Node: quo, Args: []ast.Expr{pow.Args[0], pow.Args[1], call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(quo)}
 }
 
 // gammaEscapes reports whether the value of a bare math.Gamma call can

@@ -164,6 +164,9 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 			}
 		}
 	}
+	if m.Shape == fixes.ShapeNone {
+		m = fc.gammaRatioAmong(root, p)
+	}
 	although := ""
 	if fc.gammaRatioFinite(p, m, worst.first) {
 		although = ", although the result itself is finite"
@@ -205,6 +208,38 @@ func (fc *fnCtx) gammaMatch(root ast.Expr, p *product) *fixes.Match {
 	} else if len(p.num) == 1 && len(p.den) == 1 && p.num[0].math == "Gamma" && p.den[0].math == "Gamma" && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeGammaRatio, []ast.Expr{p.num[0].arg, p.den[0].arg}
 	}
+	return m
+}
+
+// gammaRatioAmong describes Γ(a)/Γ(b) among other factors that are
+// neither Gamma values nor factorials, Γ((ν+1)/2)/(√(νπ)·Γ(ν/2)): the
+// fixer replaces the two calls by one GammaRatio and keeps the others
+// where they are. Its Shape is ShapeNone for any other product.
+func (fc *fnCtx) gammaRatioAmong(root ast.Expr, p *product) *fixes.Match {
+	m := &fixes.Match{Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	var num, den *factor
+	for i, side := range [][]factor{p.num, p.den} {
+		for j := range side {
+			f := &side[j]
+			switch {
+			case f.kind != kindNone:
+				return m
+			case f.math != "Gamma":
+			case i == 0 && num == nil:
+				num = f
+			case i == 1 && den == nil:
+				den = f
+			default:
+				return m
+			}
+		}
+	}
+	if num == nil || den == nil {
+		return m
+	}
+	m.Shape = fixes.ShapeGammaRatioAmong
+	m.Args = []ast.Expr{num.arg, den.arg}
+	m.Extra = []ast.Expr{num.call, den.call}
 	return m
 }
 

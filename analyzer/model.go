@@ -499,8 +499,79 @@ func (mc *modelCtx) poissonRun(a *vm.Acc, t numType) bool {
 	clause, definite := j.clause, j.definite
 	msg := fmt.Sprintf("running product %s computes the Poisson terms %s^k·e^(−%s)/k! from math.Exp(-%s), which in %s loses its digits for %s > %s and is 0 for %s ≥ %s, after which every term is wrong or 0 although the terms near k = %s are not small",
 		a.Obj.Name(), lam.Name(), lam.Name(), lam.Name(), t.typeName(), lam.Name(), fmtFloat(sub), lam.Name(), fmtFloat(zero), lam.Name())
-	fc.report(finding{node: mc.loop.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
+	fc.report(finding{node: mc.loop.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause, match: mc.poissonRunFix(a, lam)})
 	return true
+}
+
+// poissonRunFix is the fix of a running Poisson product: the one
+// statement that updates it becomes the term itself, taken from the
+// helper in log space, so that the loop keeps every other use of it
+// (a sum, a return after the loop). It vouches for what the model
+// knows: after that statement on each trip the accumulator holds
+// λ^k·e^(−λ)/k! for the loop's counter k, an integer (a float counter
+// starts at an integer and steps by 1).
+func (mc *modelCtx) poissonRunFix(a *vm.Acc, lam vm.Sym) *fixes.Match {
+	l := mc.loop
+	if a.Guarded || l.Counter == nil || lam.Obj == nil || lam.Field != nil || lam.Loop != nil || lam.Def != nil {
+		return nil
+	}
+	if a.Init.Coef.Cmp(big.NewRat(1, 1)) != 0 {
+		return nil
+	}
+	stmt := a.Ops[0].Stmt
+	for _, op := range a.Ops {
+		if op.Stmt != stmt {
+			return nil
+		}
+	}
+	last := a.Ops[len(a.Ops)-1].After
+	if last == nil {
+		return nil
+	}
+	f := vm.Recognise(last)
+	if f.Kind != vm.Poisson || last.Coef.Cmp(big.NewRat(1, 1)) != 0 {
+		return nil
+	}
+	if x, ok := plainVar(f.Args[0]); !ok || x != lam {
+		return nil
+	}
+	k, ok := mc.counterArg(f.Args[1])
+	if kv, isVar := plainVar(k); !ok || !isVar || kv.Obj != l.Counter {
+		return nil
+	}
+	if ct, ok := l.Counter.Type().Underlying().(*types.Basic); !ok || ct.Info()&types.IsInteger == 0 {
+		// A float counter counts whole numbers only from a whole start
+		// by unit steps.
+		from, ok := l.From.At(nil)
+		if !ok || from == nil || !from.IsInt() || l.Step.Cmp(big.NewRat(1, 1)) != 0 {
+			return nil
+		}
+	}
+	info := mc.fc.c.pass.TypesInfo
+	var kx, lx ast.Expr
+	ast.Inspect(stmt, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok {
+			switch info.Uses[id] {
+			case l.Counter:
+				kx = id
+			case lam.Obj:
+				lx = id
+			}
+		}
+		return true
+	})
+	if kx == nil || lx == nil {
+		return nil
+	}
+	return &fixes.Match{
+		Shape:  fixes.ShapeModelPoissonRun,
+		Node:   stmt,
+		Args:   []ast.Expr{kx, lx},
+		Result: a.Obj.Type(),
+		Acc:    a.Obj,
+		Loop:   l.Stmt,
+		Func:   mc.fc.node,
+	}
 }
 
 func fmtFloat(x float64) string { return fmt.Sprintf("%.6g", x) }

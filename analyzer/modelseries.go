@@ -278,7 +278,7 @@ func (fc *fnCtx) integerArg(a vm.Affine) bool {
 // lgamma.PowOverFactorial(x, k)·… and acc goes. nil for any other
 // term.
 func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down []seriesPart) *fixes.Match {
-	if len(up) != 1 || len(down) != 1 || l.Exits {
+	if len(up) != 1 || len(down) != 1 {
 		return nil
 	}
 	call, ok := fc.stripConv(up[0].x).(*ast.CallExpr)
@@ -294,6 +294,11 @@ func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down 
 	if f.Kind != vm.Fact || !f.Args[0].Equal(k) || down[0].val.Coef.Cmp(big.NewRat(1, 1)) != 0 {
 		return nil
 	}
+	// The fixer passes a float exponent as int(k): it must be a whole
+	// number on every trip, as the trip index's integral forms are.
+	if !fc.integerArg(k) {
+		return nil
+	}
 	id, ok := ast.Unparen(down[0].x).(*ast.Ident)
 	if !ok {
 		return nil
@@ -305,7 +310,7 @@ func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down 
 			a = x
 		}
 	}
-	if a == nil || a.Init == nil {
+	if a == nil || a.Init == nil || l.Exits && !exitsAfter(l.Stmt, e, a) {
 		return nil
 	}
 	if c, ok := a.Init.IsConst(); !ok || c.Cmp(big.NewRat(1, 1)) != 0 {
@@ -337,6 +342,33 @@ func (fc *fnCtx) seriesTermFix(res *vm.Result, l *vm.Loop, e ast.Expr, up, down 
 		Loop:   l.Stmt,
 		Func:   fc.node,
 	}
+}
+
+// exitsAfter reports whether every way out of the loop's trip (break,
+// continue, goto, return) comes after the term e and after every update
+// of a: a trip that leaves early has then formed a and read the term as
+// a full trip does, and the model's value of a where the term reads it
+// holds on every trip.
+func exitsAfter(loop ast.Stmt, e ast.Expr, a *vm.Acc) bool {
+	last := e.End()
+	for _, op := range a.Ops {
+		if op.Stmt.End() > last {
+			last = op.Stmt.End()
+		}
+	}
+	ok := true
+	ast.Inspect(loop, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BranchStmt, *ast.ReturnStmt:
+			if n.Pos() < last {
+				ok = false
+			}
+		}
+		return ok
+	})
+	return ok
 }
 
 // runningTermFix finds the term of the loop that divides a power by

@@ -68,14 +68,9 @@ func TestScenarioListComplete(t *testing.T) {
 // shrink: the test fails when a listed function becomes right, and when
 // one not listed is wrong after -fix.
 var stillWrong = map[string]string{
-	"demo/gas.BallVolume":             "-fix leaves it wrong: (1500): was NaN, now NaN, exact 2.8226e-1460 (underflows)",
 	"demo/gas.SpeedMoment":            "-fix leaves it wrong: (1030, 0): was NaN, now NaN, exact 0",
-	"src/callcentre.Arrivals":         "reported, but -fix leaves it wrong: (750, 12.25): was 0, now 0, exact 1.2575833221001959e-300",
 	"src/callcentre.AtMost":           "reported, but -fix leaves it wrong: (750, 171): was NaN, now 0, exact 8.570353218335643e-144",
-	"src/callcentre.Backlog":          "reported, but -fix leaves it wrong: (750, 171): was 0, now 0, exact 8.570353218335643e-144",
-	"src/callcentre.Bursts":           "reported, but -fix leaves it wrong: (750, 171): was 0, now 0, exact 6.6196725537344685e-144",
 	"src/callcentre.ErlangB":          "reported, but -fix leaves it wrong: (7, 1030): was NaN, now NaN, exact 4.03972e-1791 (underflows)",
-	"src/callcentre.ErlangBConverged": "reported, but -fix leaves it wrong: (100, 300.5): was NaN, now NaN, exact 2.6881171418161353e+43",
 	"src/callcentre.ErlangBSmall":     "reported, but -fix leaves it wrong: (200, 150): was NaN, now NaN, exact 0.26318203278127515",
 	"src/callcentre.Lineups":          "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
 	"src/callcentre.LineupsDown":      "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
@@ -102,7 +97,6 @@ var stillWrong = map[string]string{
 	"src/dicepool.HandsOneLoop":       "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 1",
 	"src/gasmodel.ContinuationFactor": "reported, but -fix leaves it wrong: (0, 750, 0.5): was NaN, now NaN, exact 1",
 	"src/gasmodel.ScaledWeight":       "reported, but -fix leaves it wrong: (0, 1030, 200, 1030): was NaN, now NaN, exact 4.74989e-448 (underflows)",
-	"src/gasmodel.StudentNorm":        "reported, but -fix leaves it wrong: (500): was NaN, now NaN, exact 0.39874285925362041",
 	"src/gasmodel.WeibullKurtosis":    "reported, but -fix leaves it wrong: (100): was 2.1254459230510268, now 2.1254459230510268, exact 2.1254458865865714",
 	"src/generic.Tournament":          "reported, but -fix leaves it wrong: (): was 7034535277573963776, now 7034535277573963776, exact 1.55112e+25 (overflows int64)",
 	"src/gentable.Row":                "not reported: (21): was -1.8163880412425748e+18, now -1.8163880412425748e+18, exact 5.352384417988608e+19",
@@ -958,6 +952,7 @@ func TestAfterFixScenarios(t *testing.T) {
 			write(t, filepath.Join(dir, side, dirPkg, "zz_afterfix_probe.go"), probeFile(lp.Types.Name(), ps))
 		}
 	}
+	all = onlyPackages(all, os.Getenv("OVERFACT_AFTERFIX_PKGS"))
 	max, steps := afterfixBudget()
 	for _, p := range all {
 		p.inputs = inputsFor(p, max)
@@ -1075,6 +1070,27 @@ func TestAfterFixScenarios(t *testing.T) {
 	}
 }
 
+// onlyPackages keeps the probes of the packages named in list (comma
+// separated, e.g. "src/callcentre,demo/gas"; empty: all), so that one
+// package's functions can be judged without running every package. The
+// lists' entries of the packages left out are not checked.
+func onlyPackages(all []*scenProbe, list string) []*scenProbe {
+	if list == "" {
+		return all
+	}
+	keep := make(map[string]bool)
+	for _, p := range strings.Split(list, ",") {
+		keep[strings.TrimSpace(p)] = true
+	}
+	var out []*scenProbe
+	for _, p := range all {
+		if keep[p.pkg] {
+			out = append(out, p)
+		}
+	}
+	return out
+}
+
 func parseOutcome(s string) outcome {
 	switch {
 	case strings.HasPrefix(s, "p:"):
@@ -1108,6 +1124,9 @@ func printAfterfixTable(t *testing.T, pkgs []string, byPkg map[string][]*scenPro
 		var row [8]int
 		for _, pr := range byPkg[p] {
 			r := reports[pr]
+			if r == nil {
+				continue // left out by OVERFACT_AFTERFIX_PKGS
+			}
 			row[0]++
 			row[1] += r.inputs
 			for why, n := range r.skipped {

@@ -28,6 +28,8 @@ func MustCatalanInt64(n int64) int64                        { panic("") }
 func HypergeometricPMF(k, total, successes, draws int) float64 { panic("") }
 func PowOverFactorial(x float64, k int) float64             { panic("") }
 func PoissonPMF(k int, lambda float64) float64              { panic("") }
+func PoissonTerm(k int, lambda float64) float64             { panic("") }
+func PowOverGamma(x, p, a float64) float64                  { panic("") }
 func BinomialPMF(k, n int, p float64) float64               { panic("") }
 func NegativeBinomialPMF(f, s int, p float64) float64       { panic("") }
 func GammaRatio(a, b float64) float64                       { panic("") }

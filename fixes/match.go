@@ -48,6 +48,9 @@ const (
 	ShapeExpFactorial           // exp(lg(n+1)) or math.Gamma(n+1), under a conversion or rounding  Args: n
 	ShapeExpBinomialPMF         // exp(lg(n+1) − lg(k+1) − lg(n−k+1) + k·ln p + (n−k)·ln(1−p)), powers as factors too  Args: k, n, p
 	ShapeModelSeriesTerm        // num/acc in a loop, acc = k! there     Node: the quotient; Args: x, k of math.Pow(x, k) in num; Extra[0]: that call; Acc, Loop (the analyzer vouches for acc's value; see buildModelSeriesTerm)
+	ShapeModelPoissonRun        // p := math.Exp(−λ); p *= λ/k in a loop  Node: the update statement; Args: k (the loop's counter, whole-numbered), λ; Acc, Loop (the analyzer vouches that p is λ^k·e^(−λ)/k! after it; see buildModelPoissonRun)
+	ShapeGammaRatioAmong        // Γ(a)·X/(Y·Γ(b)), X and Y other factors  Node: the product; Args: a, b; Extra: the two math.Gamma calls (see buildGammaRatioAmong)
+	ShapePowOverGamma           // math.Pow(x, p)/math.Gamma(a)          Args: x, p, a
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -108,7 +108,7 @@ func buildModelSeriesTerm(b *builder) error {
 	if err != nil {
 		return err
 	}
-	call, err := b.call("PowOverFactorial", m.Args, m.Result)
+	call, err := b.powOverFactorialCall(m.Args[0], m.Args[1], quo.Pos())
 	if err != nil {
 		return err
 	}
@@ -125,6 +125,23 @@ func buildModelSeriesTerm(b *builder) error {
 	b.applyInits(inits)
 	b.message = b.rewriteMessage() + " and drop the running " + m.Acc.Name()
 	return nil
+}
+
+// powOverFactorialCall writes lgamma.PowOverFactorial(x, k) of the
+// match's result type. A float k that is not a conversion of an
+// integer is passed as int(k): the analyzer vouches that it is a whole
+// number (a float counter from a whole start by unit steps).
+func (b *builder) powOverFactorialCall(x, k ast.Expr, at token.Pos) (string, error) {
+	if classOf(b.pass.TypesInfo.TypeOf(b.floatOfInt(k))) != classFloat {
+		return b.call("PowOverFactorial", []ast.Expr{x, k}, b.m.Result)
+	}
+	xt, err := b.arg(x, types.Typ[types.Float64])
+	if err != nil {
+		return "", err
+	}
+	text, err := b.result(b.helper(at)+".PowOverFactorial("+xt+", int("+b.copyText(k)+"))", types.Typ[types.Float64], b.m.Result)
+	b.shown = text
+	return text, err
 }
 
 // isUpdate reports whether s is acc *= F or acc = acc * F (acc once

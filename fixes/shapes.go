@@ -71,6 +71,9 @@ func init() {
 		ShapeExpBinomialPMF:   {"exponential of a log-space binomial probability", buildExpLgamma, family{float: "BinomialPMF"}, 0, nil},
 		ShapeModelSeriesTerm:  {"series term", buildModelSeriesTerm, family{}, 0, nil},
 		ShapeGamma:            {"logarithm of a gamma value", buildLogOfGamma, family{float: "LogGamma"}, 1, logOfGammaFactors},
+		ShapeModelPoissonRun:  {"running Poisson term", buildModelPoissonRun, family{float: "PoissonTerm"}, 0, nil},
+		ShapeGammaRatioAmong:  {"gamma ratio among other factors", buildGammaRatioAmong, family{float: "GammaRatio"}, 0, nil},
+		ShapePowOverGamma:     {"power over gamma", buildTerm, family{float: "PowOverGamma"}, 3, powOverGammaFactors},
 	}
 }
 
@@ -129,6 +132,10 @@ func negBinomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, al
 
 func gammaRatioFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
 	return []factorPattern{b.mathCall("Gamma", o[0])}, []factorPattern{b.mathCall("Gamma", o[1])}, nil
+}
+
+func powOverGammaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // x, p, a
+	return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{b.mathCall("Gamma", o[2])}, nil
 }
 
 func betaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b

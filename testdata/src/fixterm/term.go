@@ -67,7 +67,8 @@ func PairArrivals(k int, lambda float64) float64 { // want PairArrivals:`value \
 }
 
 // Scaled is a gamma ratio with the scale v between its factors: the
-// syntax does not group the ratio apart from v, so it is not rewritten.
+// syntax does not group the ratio apart from v, so the numerator's call
+// takes the ratio, the divisor's goes, and v stays where it is.
 func Scaled(a, b, v float64) float64 { // want Scaled:`value Γ\(p0\)·\(p2\)/Γ\(p1\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(a) * v / math.Gamma(b) // want "ratio of math.Gamma"
 }

@@ -1,0 +1,27 @@
+// Package fixgammaamong holds the normalising constants of a survey
+// tool's fitted distributions: ratios of Gamma values with other
+// factors beside them.
+package fixgammaamong
+
+import "math"
+
+// StudentConst is the constant Γ((ν+1)/2)/(√(νπ)·Γ(ν/2)) of Student's
+// t density with nu degrees of freedom (common practice).
+func StudentConst(nu int) float64 { // want StudentConst:`value Γ\(1/2\*p0 \+ 1/2\)/`
+	v := float64(nu)
+	return math.Gamma((v+1)/2) / (math.Sqrt(v*math.Pi) * math.Gamma(v/2)) // want `ratio of math.Gamma values in float64`
+}
+
+// ChiMean is the mean √2·Γ((k+1)/2)/Γ(k/2) of the chi distribution
+// with k degrees of freedom (common practice).
+func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/4503599627370496·Γ`
+	return math.Sqrt2 * math.Gamma((k+1)/2) / math.Gamma(k/2) // want `ratio of math.Gamma values in float64`
+}
+
+// The function below keeps its Gamma values: two of them above the
+// line have no one partner below it.
+
+// Continuation is Gauss's Γ(c)Γ(c−a−b)/(Γ(c−a)Γ(c−b)).
+func Continuation(a, b, c float64) float64 { // want Continuation:`value Γ\(p2\)·Γ`
+	return math.Gamma(c) * math.Gamma(c-a-b) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64`
+}

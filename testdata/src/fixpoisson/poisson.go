@@ -1,0 +1,73 @@
+// Package fixpoisson is the arrivals model of a pharmacy counter:
+// Poisson probabilities of the prescriptions that come in an hour,
+// built one factor at a time from e^(−λ).
+package fixpoisson
+
+import "math"
+
+// AtMostArrivals is the chance of at most n prescriptions in an hour
+// with lambda on average.
+func AtMostArrivals(lambda float64, n int) float64 {
+	p := math.Exp(-lambda)
+	sum := p
+	for k := 1; k <= n; k++ { // want `running product p computes the Poisson terms lambda\^k·e\^\(−lambda\)/k! from math.Exp\(-lambda\)`
+		p *= lambda / float64(k)
+		sum += p
+	}
+	return sum
+}
+
+// ExactArrivals is the chance of exactly n prescriptions, the count
+// kept in float64 as the dashboard keeps it.
+func ExactArrivals(mean, n float64) float64 {
+	term := math.Exp(-mean)
+	for k := 1.0; k <= n; k++ { // want `running product term computes the Poisson terms mean\^k`
+		term *= mean / k
+	}
+	return term
+}
+
+// Refills is ExactArrivals for the refill queue, its update written
+// out.
+func Refills(rate float64, n int32) float64 {
+	t := math.Exp(-rate)
+	for i := int32(1); i <= n; i++ { // want `running product t computes the Poisson terms rate\^k`
+		t = t * rate / float64(i)
+	}
+	return t
+}
+
+// The functions below are left as they are.
+
+// QuietHours serves the night counter, at most 40 prescriptions an
+// hour: e^(−λ) never underflows.
+func QuietHours(lambda float64, n int) float64 {
+	if lambda < 0 || lambda > 40 {
+		return 0
+	}
+	p := math.Exp(-lambda)
+	for k := 1; k <= n; k++ {
+		p *= lambda / float64(k)
+	}
+	return p
+}
+
+// Weights grows a weight by lambda/k from 1: x^k/k!, with no start that
+// underflows.
+func Weights(lambda float64, n int) float64 {
+	w := 1.0
+	for k := 1; k <= n; k++ {
+		w *= lambda / float64(k)
+	}
+	return w
+}
+
+// HalfSteps counts in halves: the counter is not a whole number, so the
+// product is not a Poisson term of it.
+func HalfSteps(lambda, n float64) float64 {
+	p := math.Exp(-lambda)
+	for k := 0.5; k <= n; k++ {
+		p *= lambda / k
+	}
+	return p
+}
