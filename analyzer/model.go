@@ -116,6 +116,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 	fc.modelSeries(res)
 	fc.modelCountRatio(res)
 	fc.modelLogSum(res)
+	fc.modelZeroTimesSum(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}

@@ -290,3 +290,131 @@ func (fc *fnCtx) binomialFactor(res *vm.Result, x ast.Expr, counter types.Object
 	}
 	return binomTerm{}, false
 }
+
+// modelZeroTimesSum reports z *= s or z * s of float variables where s
+// is a sum of binomial coefficients that passes float64 (as for
+// modelLogSum) and z a sum started at 0 by loops whose trips depend on
+// a variable: with no trip z is 0, and 0·(+Inf) is NaN although the
+// product is 0. A product under a condition on z is not reported.
+func (fc *fnCtx) modelZeroTimesSum(res *vm.Result) {
+	c := fc.c
+	info := c.pass.TypesInfo
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		var x, y ast.Expr
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.AssignStmt:
+			if n.Tok != token.MUL_ASSIGN || len(n.Lhs) != 1 || len(n.Rhs) != 1 {
+				return true
+			}
+			x, y = n.Lhs[0], n.Rhs[0]
+		case *ast.BinaryExpr:
+			if n.Op != token.MUL {
+				return true
+			}
+			x, y = n.X, n.Y
+		default:
+			return true
+		}
+		t, ok := c.numOf(info.TypeOf(x))
+		if !ok || !t.Float || c.reportedAt(n.Pos()) {
+			return true
+		}
+		central := thresholds.CentralBinomial(t.Num)
+		for _, p := range [2][2]ast.Expr{{x, y}, {y, x}} {
+			z, s := c.objOf(fc.stripConv(p[0])), c.objOf(fc.stripConv(p[1]))
+			if z == nil || s == nil || z == s || !fc.zeroUntilTrips(z, n.Pos()) || fc.checksNonFinite(p[1]) {
+				continue
+			}
+			bt, ok := fc.summedBinomial(res, s, n.Pos(), central.FirstBad)
+			if !ok {
+				continue
+			}
+			msg := fmt.Sprintf("%s times %s in %s: %s is 0 when the loops that add to it run no trip, and %s, a sum of C(%s, %s), is +Inf once its terms reach C(%s, ⌊%s/2⌋) at %s ≥ %d (C(%d, %d) ≈ %s is the largest central one that fits), so the product is 0·(+Inf) = NaN although its true value is 0",
+				z.Name(), s.Name(), t.typeName(), z.Name(), s.Name(), bt.n, bt.k, bt.n, parenText(bt.n), bt.n, central.FirstBad, central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox())
+			fc.report(finding{node: n, cat: catRatio, msg: msg})
+			return false
+		}
+		return true
+	})
+}
+
+// zeroUntilTrips reports whether the float variable z, where pos reads
+// it, is a local defined as 0 that only loops add to before pos (or
+// that is multiplied, which keeps 0), each
+// loop's condition comparing its counter with a variable (so it may run
+// no trip), and that no condition around pos tests.
+func (fc *fnCtx) zeroUntilTrips(z types.Object, pos token.Pos) bool {
+	info := fc.c.pass.TypesInfo
+	zero, adds, other, tested := false, 0, false, false
+	var loops []*ast.ForStmt
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		switch n := n.(type) {
+		case nil:
+			return false
+		case *ast.ForStmt:
+			loops = append(loops, n)
+		case *ast.IfStmt:
+			if n.Pos() <= pos && pos < n.End() && mentions(info, n.Cond, z) {
+				tested = true
+			}
+		case *ast.AssignStmt:
+			if n.Pos() >= pos {
+				return true
+			}
+			for i, l := range n.Lhs {
+				if id, ok := ast.Unparen(l).(*ast.Ident); !ok || info.ObjectOf(id) != z {
+					continue
+				}
+				switch {
+				case n.Tok == token.DEFINE && len(n.Rhs) == len(n.Lhs) && isZeroConst(info, n.Rhs[i]):
+					zero = true
+				case addedTo(info, n, z) != nil && fc.inVariableLoop(loops, n):
+					adds++
+				case n.Tok == token.MUL_ASSIGN:
+					// A factor keeps 0 at 0.
+				default:
+					other = true
+				}
+			}
+		}
+		return true
+	})
+	return zero && adds > 0 && !other && !tested
+}
+
+// inVariableLoop reports whether st lies in one of the loops whose
+// condition compares a counter with a non-constant bound.
+func (fc *fnCtx) inVariableLoop(loops []*ast.ForStmt, st ast.Stmt) bool {
+	info := fc.c.pass.TypesInfo
+	for _, l := range loops {
+		if st.Pos() < l.Body.Pos() || st.End() > l.Body.End() {
+			continue
+		}
+		counter := forCounter(info, l)
+		if counter == nil {
+			continue
+		}
+		for _, cj := range conjunctsOf(l.Cond) {
+			b, ok := ast.Unparen(cj).(*ast.BinaryExpr)
+			if !ok {
+				continue
+			}
+			other := b.Y
+			if fc.c.objOf(b.X) != counter {
+				other = b.X
+			}
+			if tv, ok := info.Types[other]; ok && tv.Value == nil && fc.c.objOf(other) != counter {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// isZeroConst reports whether e is the constant 0.
+func isZeroConst(info *types.Info, e ast.Expr) bool {
+	tv, ok := info.Types[e]
+	return ok && tv.Value != nil && constant.Sign(tv.Value) == 0
+}

@@ -96,3 +96,51 @@ func ShiftCount(shifted, plain float64) float64 {
 	}
 	return count
 }
+
+// PadGuesses is the number of guesses for a swipe of length keys with
+// up to turns turns, times the ways to shift up to shifted of its keys.
+func PadGuesses(length, turns, shifted int, starts float64) float64 {
+	guesses := 0.0
+	for i := 2; i <= length; i++ {
+		for j := 1; j <= min(turns, i-1); j++ {
+			guesses += starts * float64(j)
+		}
+	}
+	var shifts float64
+	for i := 1; i <= min(shifted, length-shifted); i++ {
+		shifts += ways(float64(length), float64(i))
+	}
+	guesses *= shifts // want `guesses times shifts in float64: guesses is 0 when the loops that add to it run no trip, and shifts, a sum of C\(length, i\), is \+Inf once its terms reach C\(length, ⌊length/2⌋\) at length ≥ 1030 .* so the product is 0·\(\+Inf\) = NaN although its true value is 0`
+	return guesses
+}
+
+// GuardedPadGuesses scales only a count that is not 0.
+func GuardedPadGuesses(length, turns, shifted int, starts float64) float64 {
+	guesses := 0.0
+	for i := 2; i <= length; i++ {
+		for j := 1; j <= min(turns, i-1); j++ {
+			guesses += starts * float64(j)
+		}
+	}
+	var shifts float64
+	for i := 1; i <= min(shifted, length-shifted); i++ {
+		shifts += ways(float64(length), float64(i))
+	}
+	if guesses > 0 {
+		guesses *= shifts
+	}
+	return guesses
+}
+
+// DoubledGuesses starts from one guess and doubles it: never 0.
+func DoubledGuesses(length, shifted int) float64 {
+	guesses := 1.0
+	for i := 0; i < shifted; i++ {
+		guesses *= 2
+	}
+	var shifts float64
+	for i := 1; i <= min(shifted, length-shifted); i++ {
+		shifts += ways(float64(length), float64(i))
+	}
+	return guesses * shifts
+}
