@@ -48,6 +48,11 @@ type checker struct {
 	allFuncs  []ast.Node             // every FuncDecl and FuncLit, in source order
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
+	// reportedPos holds the positions of reported's keys, sorted, for
+	// reportedWithin: findings come in source order, so it grows at its end.
+	reportedPos []token.Pos
+	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
+	byPos []ast.Node
 	// sitesDecided holds the unexported factorial functions whose every
 	// call in the package is either always safe or always past the first
 	// bad value, with one past it: the calls are the findings, and the

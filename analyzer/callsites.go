@@ -6,6 +6,7 @@ import (
 	"go/types"
 	"go/version"
 	"math"
+	"sort"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -166,16 +167,29 @@ func (c *checker) indexCalls() {
 }
 
 // enclosingFunc returns the innermost function holding n.
+//
+// It searches the functions sorted by position backwards from the last
+// that starts at or before n: the first that also ends at or after n is
+// the innermost. A function declaration that does not hold n ends the
+// search, since every function before it lies in earlier declarations.
+// (A scan of every function per call made a package of many functions
+// cost their number times its calls.)
 func (c *checker) enclosingFunc(n ast.Node) ast.Node {
-	var best ast.Node
-	for _, f := range c.allFuncs {
-		if f.Pos() <= n.Pos() && n.End() <= f.End() {
-			if best == nil || best.Pos() <= f.Pos() {
-				best = f
-			}
+	if c.byPos == nil {
+		c.byPos = append([]ast.Node{}, c.allFuncs...)
+		sort.SliceStable(c.byPos, func(i, j int) bool { return c.byPos[i].Pos() < c.byPos[j].Pos() })
+	}
+	fs := c.byPos
+	i := sort.Search(len(fs), func(i int) bool { return fs[i].Pos() > n.Pos() })
+	for i--; i >= 0; i-- {
+		if n.End() <= fs[i].End() {
+			return fs[i]
+		}
+		if _, ok := fs[i].(*ast.FuncDecl); ok {
+			break
 		}
 	}
-	return best
+	return nil
 }
 
 // capturedEntry adds to entry the ranges of the integer variables a

@@ -6,9 +6,8 @@ import (
 	"go/types"
 	"math"
 
-	"golang.org/x/tools/go/ast/astutil"
-
 	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // floatBounds returns the bounds that the code around id puts on the
@@ -45,7 +44,7 @@ func (fc *fnCtx) floatBounds(id *ast.Ident) (lo, hi float64) {
 			lo, hi = math.Max(lo, c.lo), math.Min(hi, c.hi)
 		}
 	}
-	path, _ := astutil.PathEnclosingInterval(fc.file.file, id.Pos(), id.End())
+	path, _ := astpath.Enclosing(fc.file.file, id.Pos(), id.End())
 	for i := 1; i < len(path); i++ {
 		child := path[i-1]
 		switch p := path[i].(type) {

@@ -7,6 +7,7 @@ import (
 	"go/types"
 	"math"
 	"math/big"
+	"sort"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -644,12 +645,9 @@ func (fc *fnCtx) callRoots() []ast.Expr {
 
 // reportedWithin reports whether a finding starts inside n.
 func (c *checker) reportedWithin(n ast.Node) bool {
-	for k := range c.reported {
-		if n.Pos() <= k.pos && k.pos < n.End() {
-			return true
-		}
-	}
-	return false
+	at := c.reportedPos
+	i := sort.Search(len(at), func(i int) bool { return at[i] >= n.Pos() })
+	return i < len(at) && at[i] < n.End()
 }
 
 // checkCallRoot judges one root.

@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"sort"
 
 	"golang.org/x/tools/go/analysis"
 
@@ -38,6 +39,7 @@ func (fc *fnCtx) report(f finding) {
 		return
 	}
 	c.reported[key] = true
+	c.noteReported(pos)
 	d := analysis.Diagnostic{
 		Pos:      pos,
 		End:      f.node.End(),
@@ -175,4 +177,14 @@ func (c *checker) physicalOnly(fs []analysis.SuggestedFix) []analysis.SuggestedF
 		}
 	}
 	return fs
+}
+
+// noteReported adds pos to reportedPos, keeping it sorted.
+func (c *checker) noteReported(pos token.Pos) {
+	at := c.reportedPos
+	i := sort.Search(len(at), func(i int) bool { return at[i] > pos })
+	at = append(at, 0)
+	copy(at[i+1:], at[i:])
+	at[i] = pos
+	c.reportedPos = at
 }

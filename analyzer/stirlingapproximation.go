@@ -9,11 +9,10 @@ import (
 	"math/big"
 	"sort"
 
-	"golang.org/x/tools/go/ast/astutil"
-
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // Stirling's leading term √(2πn)(n/e)^n, written by hand where n! is
@@ -438,7 +437,7 @@ func (fc *fnCtx) corrected(res *vm.Result, h stirlingHit) bool {
 	if fc.file == nil {
 		return false
 	}
-	path, _ := astutil.PathEnclosingInterval(fc.file.file, h.e.Pos(), h.e.End())
+	path, _ := astpath.Enclosing(fc.file.file, h.e.Pos(), h.e.End())
 	for _, n := range path[1:] {
 		switch p := n.(type) {
 		case *ast.ParenExpr:
@@ -476,7 +475,7 @@ func (fc *fnCtx) dispatched(e ast.Expr, obj types.Object) bool {
 		return false
 	}
 	reads := func(cond ast.Expr) bool { return fc.identOf(cond, obj, 0) != nil }
-	path, _ := astutil.PathEnclosingInterval(fc.file.file, e.Pos(), e.End())
+	path, _ := astpath.Enclosing(fc.file.file, e.Pos(), e.End())
 	for i := 1; i < len(path); i++ {
 		child := path[i-1]
 		switch p := path[i].(type) {

@@ -6,7 +6,7 @@ import (
 	"go/token"
 	"go/types"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // covered checks that replacing the match's expression by a helper call
@@ -168,7 +168,7 @@ func (b *builder) absorbable() (map[types.Object]ast.Stmt, error) {
 // enclosingList returns the statement list that holds node and the
 // index of the statement there that holds it.
 func (b *builder) enclosingList(node ast.Node) ([]ast.Stmt, int, error) {
-	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
+	path, _ := astpath.Enclosing(b.file, node.Pos(), node.End())
 	for i := 1; i < len(path); i++ {
 		list := stmtList(path[i])
 		for j, s := range list {

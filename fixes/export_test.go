@@ -20,3 +20,15 @@ func HelperFuncs() map[string]*types.Signature {
 	}
 	return out
 }
+
+// CompareFixChecks makes every fix check also type-check the whole
+// package with the fixed file in place, and calls report with the file,
+// whether the check was made on the edited functions alone, its outcome
+// and the whole package's. The returned function undoes it. Not for
+// parallel tests.
+func CompareFixChecks(report func(file string, functionsOnly bool, got, whole error)) (undo func()) {
+	checkHook = func(b *builder, fixed []byte, cheap bool, err error) {
+		report(b.tok.Name(), cheap, err, b.checkPackage(fixed))
+	}
+	return func() { checkHook = nil }
+}

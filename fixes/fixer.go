@@ -2,6 +2,7 @@ package fixes
 
 import (
 	"go/ast"
+	"go/token"
 	"go/types"
 
 	"golang.org/x/tools/go/analysis"
@@ -19,6 +20,9 @@ type Fixer struct {
 	pass     *analysis.Pass
 	checks   int // fix checks spent, at most maxVerifications
 	parsed   *parsed
+	decls    *decls                         // parsed files without function bodies
+	uses     map[*types.PkgName][]token.Pos // where each import name is used
+	depNames map[string]bool                // names of the package's variables, functions and methods
 	assigned map[*ast.BlockStmt]map[types.Object]bool
 }
 

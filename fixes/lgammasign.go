@@ -7,7 +7,7 @@ import (
 	"go/token"
 	"strings"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // math.Exp of math.Lgamma values whose signs were dropped is |Γ(x)| (or
@@ -68,7 +68,7 @@ func buildLgammaSign(b *builder) error {
 
 // assignOf returns the assignment whose left side holds id.
 func (b *builder) assignOf(id *ast.Ident) *ast.AssignStmt {
-	path, _ := astutil.PathEnclosingInterval(b.file, id.Pos(), id.End())
+	path, _ := astpath.Enclosing(b.file, id.Pos(), id.End())
 	for _, n := range path {
 		if as, ok := n.(*ast.AssignStmt); ok {
 			for _, l := range as.Lhs {
@@ -105,7 +105,7 @@ func (b *builder) freeName(base string, decl, use token.Pos, taken map[*ast.Iden
 // inOperation reports whether e is an operand of a binary or unary
 // operator, where a product put in its place needs parentheses.
 func (b *builder) inOperation(e ast.Expr) bool {
-	path, _ := astutil.PathEnclosingInterval(b.file, e.Pos(), e.End())
+	path, _ := astpath.Enclosing(b.file, e.Pos(), e.End())
 	for _, n := range path[1:] {
 		switch n.(type) {
 		case *ast.ParenExpr:

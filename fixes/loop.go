@@ -8,7 +8,7 @@ import (
 	"go/token"
 	"go/types"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // An integer loop that builds C(n,k) multiplicatively, or the falling
@@ -152,7 +152,7 @@ func isOne(info *types.Info, e ast.Expr) bool {
 
 // next returns the statement following s in its block, or nil.
 func next(file *ast.File, s ast.Stmt) ast.Stmt {
-	path, _ := astutil.PathEnclosingInterval(file, s.Pos(), s.End())
+	path, _ := astpath.Enclosing(file, s.Pos(), s.End())
 	for _, n := range path {
 		list := stmtList(n)
 		if list == nil {

@@ -9,7 +9,7 @@ import (
 	"go/types"
 	"strings"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // A sum that keeps its running factorial in the loop that adds the terms,
@@ -407,7 +407,7 @@ func (b *builder) initsWithout(vars []types.Object) (map[ast.Stmt]string, error)
 
 // declaring returns the statement whose identifier defines v.
 func (b *builder) declaring(v types.Object) ast.Stmt {
-	path, _ := astutil.PathEnclosingInterval(b.file, v.Pos(), v.Pos())
+	path, _ := astpath.Enclosing(b.file, v.Pos(), v.Pos())
 	for _, n := range path {
 		switch n := n.(type) {
 		case *ast.AssignStmt, *ast.DeclStmt:

@@ -12,10 +12,13 @@ import (
 	"github.com/overfact/overfact/internal/textedit"
 )
 
-// verify applies the fix to the file and type-checks the package with the
-// fixed file in place, so that a fix never leaves code that does not
-// compile: a wrong conversion, a clashing name or a variable the fix left
-// unused are caught here rather than in the user's build.
+// verify applies the fix to the file and type-checks the result, so that
+// a fix never leaves code that does not compile: a wrong conversion, a
+// clashing name or a variable the fix left unused are caught here rather
+// than in the user's build. A fix that edits only function bodies and
+// imports is checked by type-checking the functions it edits against the
+// package's declarations (verifyfunc.go); any other, by type-checking the
+// whole package with the fixed file in place.
 func (b *builder) verify() error {
 	if !b.fx.spendVerification() {
 		return errVerificationsSpent
@@ -24,6 +27,28 @@ func (b *builder) verify() error {
 	if err != nil {
 		return err
 	}
+	fe, cheap := b.scopeOfEdits()
+	if cheap {
+		err = b.checkFunctions(fixed, fe)
+		if err == errNeedsFullCheck {
+			cheap = false
+		}
+	}
+	if !cheap {
+		err = b.checkPackage(fixed)
+	}
+	if checkHook != nil {
+		checkHook(b, fixed, cheap, err)
+	}
+	return err
+}
+
+// checkHook, when set (by tests), sees every fix check: whether it was
+// made on the edited functions alone, and its outcome.
+var checkHook func(b *builder, fixed []byte, cheap bool, err error)
+
+// checkPackage type-checks the package with the fixed file in place.
+func (b *builder) checkPackage(fixed []byte) error {
 	// The fixed file and the package's other files are parsed into one
 	// file set of the fixer's own (go/types compares positions, so the
 	// fixed file cannot join the pass's set under positions of its own);
@@ -43,18 +68,27 @@ func (b *builder) verify() error {
 			files = append(files, others.files[f])
 		}
 	}
+	return b.typeCheck(others.fset, files, nil)
+}
+
+// typeCheck type-checks files as the pass's package and returns the first
+// error that excuse (if any) does not excuse.
+func (b *builder) typeCheck(fset *token.FileSet, files []*ast.File, excuse func(types.Error) bool) error {
 	var first error
 	conf := types.Config{
 		Importer:  importerFor(b.pass.Pkg),
 		Sizes:     b.pass.TypesSizes,
 		GoVersion: b.pass.Pkg.GoVersion(),
 		Error: func(err error) {
+			if te, ok := err.(types.Error); ok && excuse != nil && excuse(te) {
+				return
+			}
 			if first == nil {
 				first = err
 			}
 		},
 	}
-	conf.Check(b.pass.Pkg.Path(), others.fset, files, nil)
+	conf.Check(b.pass.Pkg.Path(), fset, files, nil)
 	if first != nil {
 		return fmt.Errorf("fixed code does not type-check: %v", first)
 	}

@@ -10,9 +10,12 @@
 # go vet -vettool run over an unchanged module is served from the build
 # cache, and runs the command at the edges of its budget (bench -mode
 # edges): "overfact std" with tests, one 5 MB generated file, and -fix on
-# it, with wall time and peak RSS against their targets.
+# it, with wall time and peak RSS against their targets (medians of
+# EDGES_N runs, default 1). With BASELINE set to a commit, the edges are
+# run alternately with overfact built from that commit, and the ratios of
+# this tree to it, measured under the same load, are printed beside.
 #
-# Run from the repository root:   scripts/scale.sh [N]
+# Run from the repository root:   [BASELINE=rev] [EDGES_N=n] scripts/scale.sh [N]
 set -euo pipefail
 cd "$(dirname "$0")/.."
 n=${1:-5}
@@ -49,4 +52,12 @@ vet "second run (unchanged)"
 vet "third run (unchanged)"
 
 echo "== at the edges: overfact std, one 5 MB generated file, -fix on it"
-"$work/bench" -mode edges -overfact "$work/overfact"
+baseline=()
+if [ -n "${BASELINE:-}" ]; then
+	mkdir "$work/baseline"
+	git archive "$BASELINE" | tar -x -C "$work/baseline"
+	(cd "$work/baseline" && go build -o "$work/overfact-baseline" ./cmd/overfact)
+	baseline=(-baseline "$work/overfact-baseline")
+	echo "baseline: overfact at $(git rev-parse --short "$BASELINE")"
+fi
+"$work/bench" -mode edges -n "${EDGES_N:-1}" -overfact "$work/overfact" "${baseline[@]}"

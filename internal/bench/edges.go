@@ -1,10 +1,12 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
 	"os"
 	"os/exec"
 	"path/filepath"
+	"strings"
 	"syscall"
 	"time"
 )
@@ -13,8 +15,12 @@ import (
 // of its own timed from start to exit, with its peak memory (rusage
 // maxrss, the largest of it and its children, such as go list):
 // "overfact std" with tests, the analysis of one 5 MB generated file, and
-// -fix on it; and prints each against its target.
-func edges(overfact string) error {
+// -fix on it (each time on a fresh copy of the file); and prints the
+// medians of n runs against the targets. With a baseline command, the two
+// alternate run by run (the first in turn goes first), and the ratios of
+// the command to the baseline, measured under the same machine load, are
+// printed beside. The load average is printed before and after each case.
+func edges(overfact, baseline string, n int) error {
 	if overfact == "" {
 		return fmt.Errorf("-overfact is required")
 	}
@@ -39,6 +45,11 @@ func edges(overfact string) error {
 	if _, _, err := runMeasured(std, overfact, "std"); err != nil {
 		return err
 	}
+	sides := []string{overfact}
+	if baseline != "" {
+		sides = append(sides, baseline)
+	}
+	fresh := 0
 	for _, c := range []struct {
 		label      string
 		dir        string
@@ -48,45 +59,119 @@ func edges(overfact string) error {
 	}{
 		{"overfact std (tests included)", std, []string{"std"}, 0, 1536},
 		{"one 5 MB generated file", gen, []string{"."}, 10, 0},
-		{"the same file, -fix", gen, []string{"-fix", "."}, 30, 2048},
+		{"the same file, -fix", "", []string{"-fix", "."}, 30, 2048},
 	} {
-		wall, kib, err := runMeasured(c.dir, overfact, c.args...)
-		if err != nil {
-			return fmt.Errorf("%s: %v", c.label, err)
+		fmt.Printf("  %s: load average %s\n", c.label, loadAverage())
+		walls := make([][]float64, len(sides))
+		kibs := make([][]float64, len(sides))
+		for i := 0; i < n; i++ {
+			for j := range sides {
+				side := (i + j) % len(sides)
+				dir := c.dir
+				if dir == "" { // -fix rewrites the file: a fresh copy each run
+					fresh++
+					dir = filepath.Join(work, fmt.Sprintf("fix%d", fresh))
+					if err := copyModule(gen, dir); err != nil {
+						return err
+					}
+				}
+				wall, kib, err := runMeasured(dir, sides[side], c.args...)
+				if err != nil {
+					return fmt.Errorf("%s (%s): %v", c.label, sides[side], err)
+				}
+				walls[side] = append(walls[side], wall.Seconds())
+				kibs[side] = append(kibs[side], float64(kib))
+			}
 		}
-		mib := float64(kib) / 1024
-		line := fmt.Sprintf("  %-32s wall %7.2fs", c.label, wall.Seconds())
-		if c.maxSeconds > 0 {
-			line += fmt.Sprintf(" (target %.0fs, ratio %.2f×)", c.maxSeconds, wall.Seconds()/c.maxSeconds)
+		for side, name := range sides {
+			wall, mibs := median(walls[side]), median(kibs[side])/1024
+			line := fmt.Sprintf("  %-10s %-32s wall %7.2fs", []string{"[target]", "[baseline]"}[side], c.label, wall)
+			if c.maxSeconds > 0 {
+				line += fmt.Sprintf(" (target %.0fs, ratio %.2f×)", c.maxSeconds, wall/c.maxSeconds)
+			}
+			line += fmt.Sprintf("  peak RSS %6.0f MiB", mibs)
+			if c.maxMiB > 0 {
+				line += fmt.Sprintf(" (target %.0f MiB, ratio %.2f×)", c.maxMiB, mibs/c.maxMiB)
+			}
+			fmt.Printf("%s  (median of %d; %s)\n", line, n, name)
 		}
-		line += fmt.Sprintf("  peak RSS %6.0f MiB", mib)
-		if c.maxMiB > 0 {
-			line += fmt.Sprintf(" (target %.0f MiB, ratio %.2f×)", c.maxMiB, mib/c.maxMiB)
+		if baseline != "" {
+			fmt.Printf("  %-10s %-32s wall %s  peak RSS %s\n", "", "target / baseline",
+				ratio(median(walls[0]), median(walls[1])), ratio(median(kibs[0]), median(kibs[1])))
 		}
-		fmt.Println(line)
+		fmt.Printf("  %s: done, load average %s\n", c.label, loadAverage())
 	}
 	return nil
 }
 
+// copyModule copies the generated module in src (regular files only) to dst.
+func copyModule(src, dst string) error {
+	entries, err := os.ReadDir(src)
+	if err != nil {
+		return err
+	}
+	if err := os.MkdirAll(dst, 0o755); err != nil {
+		return err
+	}
+	for _, e := range entries {
+		if !e.Type().IsRegular() {
+			continue
+		}
+		data, err := os.ReadFile(filepath.Join(src, e.Name()))
+		if err != nil {
+			return err
+		}
+		if err := os.WriteFile(filepath.Join(dst, e.Name()), data, 0o644); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+// loadAverage returns the first three fields of /proc/loadavg, or "?".
+func loadAverage() string {
+	data, err := os.ReadFile("/proc/loadavg")
+	if err != nil {
+		return "?"
+	}
+	f := strings.Fields(string(data))
+	if len(f) < 3 {
+		return "?"
+	}
+	return strings.Join(f[:3], " ")
+}
+
 // runMeasured runs the command in dir and returns its wall time and the
 // peak RSS in KiB of it and its children. Exit status 3 (findings) is
-// success here.
+// success here; so is 1 after -fix, which stops with fixes still to apply
+// once its rounds are spent (the 5 MB file has more findings than its
+// rounds fix), and says so on its standard error, which is kept.
 func runMeasured(dir, name string, args ...string) (time.Duration, int64, error) {
 	cmd := exec.Command(name, args...)
 	cmd.Dir = dir
 	cmd.Env = append(os.Environ(), "GOWORK=off")
+	var stderr bytes.Buffer
+	cmd.Stderr = &stderr
 	start := time.Now()
 	err := cmd.Run()
 	wall := time.Since(start)
-	if ee, ok := err.(*exec.ExitError); ok && ee.ExitCode() == 3 {
+	if ee, ok := err.(*exec.ExitError); ok && (ee.ExitCode() == 3 || ee.ExitCode() == 1 && bytes.Contains(stderr.Bytes(), []byte("rounds of fixes"))) {
+		if ee.ExitCode() == 1 {
+			fmt.Printf("    (%s: %s)\n", filepath.Base(name), firstLine(stderr.String()))
+		}
 		err = nil
 	}
 	if err != nil {
-		return 0, 0, err
+		return 0, 0, fmt.Errorf("%v: %s", err, firstLine(stderr.String()))
 	}
 	var kib int64
 	if ru, ok := cmd.ProcessState.SysUsage().(*syscall.Rusage); ok {
 		kib = ru.Maxrss
 	}
 	return wall, kib, nil
+}
+
+func firstLine(s string) string {
+	line, _, _ := strings.Cut(s, "\n")
+	return line
 }

@@ -21,10 +21,11 @@
 //	bench -mode genfile -dir D [-size 5242880]
 //		writes a module of one package into D whose one file is at least
 //		size bytes of generated factorial functions.
-//	bench -mode edges -overfact CMD
+//	bench -mode edges -overfact CMD [-baseline CMD2] [-n 5]
 //		runs the command as "overfact std" (tests included), on one 5 MB
 //		generated file and with -fix on it, and prints wall time and peak
-//		memory against their targets.
+//		memory (medians of n runs) against their targets; with -baseline,
+//		alternates the two commands and prints their ratios.
 //	bench -mode corpus [-dir D] PATTERNS
 //		runs overfact (tests included) over the packages and prints the
 //		package count, crashes, analyzer errors and every finding.
@@ -49,6 +50,7 @@ var (
 	childFlag    = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON")
 	jsonFlag     = flag.Bool("json", false, "corpus mode: print findings as JSON lines")
 	overfactFlag = flag.String("overfact", "", "edges mode: the overfact `command` to run")
+	baseFlag     = flag.String("baseline", "", "edges mode: an overfact `command` to alternate with -overfact, for ratios under the same load")
 	sizeFlag     = flag.Int("size", 5<<20, "genfile mode: size in bytes of the file written")
 
 	caseTimeFlag  = flag.Duration("casetime", 5*time.Minute, "scale mode: time allowed for the runs of one size")
@@ -80,7 +82,7 @@ func main() {
 	case *modeFlag == "genfile":
 		err = genFile(*dirFlag, *sizeFlag)
 	case *modeFlag == "edges":
-		err = edges(*overfactFlag)
+		err = edges(*overfactFlag, *baseFlag, *runsFlag)
 	default:
 		err = fmt.Errorf("unknown mode %q", *modeFlag)
 	}

@@ -72,6 +72,7 @@ const ProgressMin = 50
 
 // Run analyses the packages matching patterns and returns the exit code.
 func Run(a *analysis.Analyzer, patterns []string, opts Options) int {
+	defer limitMemory()()
 	r := &run{opts: opts, src: newSources()}
 	return r.main(a, patterns)
 }

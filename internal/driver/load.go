@@ -409,7 +409,7 @@ func (l *loader) parseFile(name string) (*ast.File, error) {
 	parse := l.cfg.ParseFile
 	if parse == nil {
 		parse = func(fset *token.FileSet, name string, src []byte) (*ast.File, error) {
-			return parser.ParseFile(fset, name, src, parser.AllErrors|parser.ParseComments)
+			return parser.ParseFile(fset, name, src, parseMode)
 		}
 	}
 	pf.file, pf.err = parse(l.fset, name, src)

@@ -36,7 +36,7 @@ func (s *sources) parseFile(overlay map[string][]byte) func(*token.FileSet, stri
 		if _, ok := overlay[name]; !ok {
 			s.record(name, src)
 		}
-		return parser.ParseFile(fset, name, src, parser.AllErrors|parser.ParseComments)
+		return parser.ParseFile(fset, name, src, parseMode)
 	}
 }
 
