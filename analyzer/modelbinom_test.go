@@ -198,3 +198,34 @@ func TestModelLogSumProbe(t *testing.T) {
 		t.Fatalf("the exact sum %v fits float64: past float64 is where its log2 alone is finite", f)
 	}
 }
+
+// TestModelZeroTimesSumProbe shows keybits.PadGuesses's wrong value:
+// with no turns the swipe count is 0, and with 600 of 1200 keys
+// shifted the float64 sum of C(1200, i), i ≤ 600, is +Inf, so the
+// product is NaN where the exact product is 0 (0 times the finite
+// math/big sum).
+func TestModelZeroTimesSumProbe(t *testing.T) {
+	guesses := 0.0 // turns = 0: the inner loop runs no trip
+	var shifts float64
+	exact := new(big.Int)
+	for i := int64(1); i <= 600; i++ {
+		w := 1.0
+		n := 1200.0
+		for d := 1.0; d <= float64(i); d++ {
+			w *= n
+			w /= d
+			n--
+		}
+		shifts += w
+		exact.Add(exact, new(big.Int).Binomial(1200, i))
+	}
+	if got := guesses * shifts; !math.IsNaN(got) {
+		t.Fatalf("PadGuesses(1200, 0, 600, s) in float64 = %v, want NaN", got)
+	}
+	// The +Inf is the sum's own, not only the helper's: the exact sum
+	// is past float64 too (so only a guard on guesses, or log space,
+	// keeps the product right).
+	if f, _ := new(big.Float).SetInt(exact).Float64(); !math.IsInf(f, 1) {
+		t.Fatalf("the exact sum %v fits float64", f)
+	}
+}
