@@ -262,18 +262,18 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 		hi, hiOff, lo, loOff = lo, loOff, hi, hiOff
 	}
 	switch {
-	case a == 1 && len(rest.terms) == 0:
+	case a == 1 && len(rest.Terms) == 0:
 		// The factor is i+c: a factorial when it starts at 1 or 2.
-		if lo == nil && loOff+rest.c <= 0 {
+		if lo == nil && loOff+rest.C <= 0 {
 			return false // a zero factor: not a factorial
 		}
-		if lo == nil && loOff+rest.c > 2 && fc.risingFromConst(al, loOff+rest.c) {
+		if lo == nil && loOff+rest.C > 2 && fc.risingFromConst(al, loOff+rest.C) {
 			return true
 		}
-		if lo != nil || loOff+rest.c > 2 {
-			return fc.classifyPartial(al, hi, hiOff+rest.c)
+		if lo != nil || loOff+rest.C > 2 {
+			return fc.classifyPartial(al, hi, hiOff+rest.C)
 		}
-		al.top, al.topOff = hi, hiOff+rest.c
+		al.top, al.topOff = hi, hiOff+rest.C
 		al.kind = kindFactorial
 		if sh.step == 2 || sh.step == -2 {
 			al.kind = kindDouble
@@ -281,7 +281,7 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 			return false
 		}
 		return true
-	case (a == 1 || a == -1) && len(rest.terms) > 0 && (sh.step == 1 || sh.step == -1):
+	case (a == 1 || a == -1) && len(rest.Terms) > 0 && (sh.step == 1 || sh.step == -1):
 		// The factor is n∓i: a falling factorial of n over the trip count.
 		al.kind = kindFalling
 		al.top = al.mult
@@ -352,7 +352,7 @@ func (fc *fnCtx) scaledSpan(sh *loopShape) *linear {
 		return nil
 	}
 	d, ok := fc.span(sh)
-	if !ok || len(d.terms) != 1 || d.terms[0].coef < 2 {
+	if !ok || len(d.Terms) != 1 || d.Terms[0].K < 2 {
 		return nil
 	}
 	return &d
@@ -368,20 +368,20 @@ func (fc *fnCtx) spanCount(sh *loopShape) (ast.Expr, int64, bool) {
 	if !ok {
 		return nil, 0, false
 	}
-	if len(d.terms) == 0 {
-		return nil, d.c, true
+	if len(d.Terms) == 0 {
+		return nil, d.C, true
 	}
-	if len(d.terms) != 1 || d.terms[0].coef != 1 {
+	if len(d.Terms) != 1 || d.Terms[0].K != 1 {
 		return nil, 0, false
 	}
-	id := identOf(fc.c.pass.TypesInfo, sh.last, d.terms[0].obj)
+	id := identOf(fc.c.pass.TypesInfo, sh.last, d.Terms[0].Sym.Object)
 	if id == nil {
-		id = identOf(fc.c.pass.TypesInfo, sh.first, d.terms[0].obj)
+		id = identOf(fc.c.pass.TypesInfo, sh.first, d.Terms[0].Sym.Object)
 	}
 	if id == nil {
 		return nil, 0, false
 	}
-	return id, d.c, true
+	return id, d.C, true
 }
 
 // span returns the trip count of a loop between two variable ends as a
@@ -401,7 +401,7 @@ func (fc *fnCtx) span(sh *loopShape) (linear, bool) {
 		return linear{}, false
 	}
 	d := h.add(l.scale(-1))
-	d.c += hiOff - loOff + 1
+	d.C += hiOff - loOff + 1
 	return d, true
 }
 
@@ -462,24 +462,30 @@ func (fc *fnCtx) endRange(e ast.Expr, off int64) ranges.Interval {
 	return shift(fc.rangeOf(e), off)
 }
 
+// closureAssigned is the variables the closures of a function assign,
+// gathered once per function: asked once per loop, a walk of the whole
+// body each time made long functions quadratic.
+type closureAssigned struct{ set map[types.Object]bool }
+
+var closureAssignedKey = &stateKey[closureAssigned]{"variables closures assign"}
+
 // closureAssigns reports whether a closure in the function assigns v; a
 // call of it may then change the accumulator between the factors.
 func (fc *fnCtx) closureAssigns(v types.Object) bool {
-	// The set is gathered once per function: asked once per loop, a walk
-	// of the whole body each time made long functions quadratic.
-	if fc.closureAssigned == nil {
-		fc.closureAssigned = make(map[types.Object]bool)
+	ca := stateOf(fc, closureAssignedKey)
+	if ca.set == nil {
+		ca.set = make(map[types.Object]bool)
 		ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 			lit, ok := n.(*ast.FuncLit)
 			if !ok {
 				return true
 			}
 			assigned.Each(fc.c.pass.TypesInfo, lit.Body, nil, func(obj types.Object, _ ast.Node) bool {
-				fc.closureAssigned[obj] = true
+				ca.set[obj] = true
 				return true
 			})
 			return false
 		})
 	}
-	return v != nil && fc.closureAssigned[v]
+	return v != nil && ca.set[v]
 }

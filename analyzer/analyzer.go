@@ -53,29 +53,22 @@ type checker struct {
 	reportedPos []token.Pos
 	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
 	byPos []ast.Node
-	// sitesDecided holds the unexported factorial functions whose every
-	// call in the package is either always safe or always past the first
-	// bad value, with one past it: the calls are the findings, and the
-	// definition has nothing to add (see callSiteRange).
-	sitesDecided map[*types.Func]bool
 	// tables holds the package's unchanging tables (ranges.PackageTables),
 	// found the first time a function is range-analysed.
 	tables     map[types.Object]*ast.CompositeLit
 	tablesDone bool
-	gamma      gammaPass // the Gamma categories' lines with a finding
 	// rewritten holds the nodes that a reported fix replaces, and held
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
-	// lgWrappers holds the functions of the package that return ln|Γ|
-	// of their argument (see isLgammaCall), found on first use.
-	lgWrappers map[*types.Func]bool
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
 	// weights holds the fields that store running binomial weights
 	// (modelfields.go).
 	weights map[fieldPath]*weightField
+	// owned holds what categories keep about the pass (passStateOf).
+	owned states
 }
 
 type reportKey struct {

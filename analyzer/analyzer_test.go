@@ -36,14 +36,20 @@ func testdata(t *testing.T) string {
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
-	"labtables", "raffle", "lgammadigits", "lgammainteger", "lgammaoverflow",
+	"labtables", "raffle",
 }
+
+// logSpacePackages are the category packages beside the analyzer of the
+// categories no realistic scenario above exercises (the log-space ones):
+// TestScenarios checks their diagnostics with the scenarios'.
+var logSpacePackages = []string{"lgammasign", "lgammadigits", "lgammainteger", "lgammaoverflow", "stirlingapproximation"}
 
 // TestScenarios runs the analyzer over every scenario package in one
 // load, checks the // want expectations, and then checks the emitted
 // diagnostics against the category list and against math/big.
 func TestScenarios(t *testing.T) {
 	results := analysistest.Run(t, testdata(t), Analyzer, scenarios...)
+	results = append(results, analysistest.Run(t, analysistest.TestData(), Analyzer, logSpacePackages...)...)
 	var diags []analysis.Diagnostic
 	for _, r := range results {
 		diags = append(diags, r.Diagnostics...)

@@ -74,9 +74,9 @@ func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
 	}
 	kObj := fc.c.objOf(al.count)
 	var nObj types.Object
-	for _, t := range lin.terms {
-		if t.obj != al.shape.iv && t.obj != kObj && t.coef == 1 {
-			nObj = t.obj
+	for _, t := range lin.Terms {
+		if t.Sym.Object != al.shape.iv && t.Sym.Object != kObj && t.K == 1 {
+			nObj = t.Sym.Object
 		}
 	}
 	if nObj == nil {

@@ -9,6 +9,7 @@ import (
 	"sort"
 
 	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // ownEntry returns the parameter ranges a function declares for itself
@@ -58,6 +59,17 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 	return entry
 }
 
+// sitesDecided holds the unexported factorial functions whose every call
+// in the package is either always safe or always past the first bad
+// value, with one past it: the calls are the findings, and the definition
+// has nothing to add (see callSiteRange).
+type sitesDecided struct{ set map[*types.Func]bool }
+
+var sitesDecidedKey = &stateKey[sitesDecided]{"functions whose call sites decide"}
+
+// sitesDecide reports whether ff's call sites decide (sitesDecided).
+func (c *checker) sitesDecide(ff *facFunc) bool { return passStateOf(c, sitesDecidedKey).set[ff.obj] }
+
 // callSiteRange joins the ranges of the argument n over every call of ff
 // outside ff itself. It reports false when the function is also used as
 // a value (then it may be called from anywhere) or never called.
@@ -65,7 +77,7 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 // A recursive function is also entered from its own calls. Those that
 // pass n − c (c ≥ 0) only go down from the outside calls, so the range
 // keeps their top and loses its bottom (fact(25) runs fact(24), …); any
-// other self-call gives up. It records in c.sitesDecided whether every
+// other self-call gives up. It records in sitesDecided whether every
 // outside call is either always safe or always past the first bad value
 // (then reported at the call itself).
 func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
@@ -107,10 +119,11 @@ func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 	if self && any && !join.IsEmpty() {
 		join = ranges.Interval{Lo: math.MinInt64, Hi: join.Hi}
 	}
-	if c.sitesDecided == nil {
-		c.sitesDecided = make(map[*types.Func]bool)
+	sd := passStateOf(c, sitesDecidedKey)
+	if sd.set == nil {
+		sd.set = make(map[*types.Func]bool)
 	}
-	c.sitesDecided[ff.obj] = any && decided && past
+	sd.set[ff.obj] = any && decided && past
 	return join, any
 }
 
@@ -118,7 +131,7 @@ func (c *checker) callSiteRange(ff *facFunc) (ranges.Interval, bool) {
 // decl, is its parameter p minus a constant c ≥ 0.
 func (c *checker) goesDown(decl *ast.FuncDecl, arg ast.Expr, p types.Object) bool {
 	lin, ok := c.ownCtx(decl).linear(arg)
-	return ok && len(lin.terms) == 1 && lin.terms[0].obj == p && lin.terms[0].coef == 1 && lin.c <= 0
+	return ok && len(lin.Terms) == 1 && lin.Terms[0].Sym.Object == p && lin.Terms[0].K == 1 && lin.C <= 0
 }
 
 // callsOf returns the calls of fn in this package, or nil when fn is
@@ -235,39 +248,43 @@ func (c *checker) capturedEntry(lit *ast.FuncLit, entry map[types.Object]ranges.
 // and post statements; it must also never have its address taken.
 func (c *checker) setOnce(body *ast.BlockStmt, v *types.Var) bool {
 	var post ast.Stmt
-	once := true
-	ast.Inspect(body, func(n ast.Node) bool {
-		if !once {
-			return false
-		}
+	skip := func(n ast.Node) bool {
 		if fs, ok := n.(*ast.ForStmt); ok && c.declaresLoopVar(fs, v) {
 			post = fs.Post
 		}
-		if post != nil && n == ast.Node(post) {
-			return false // the post statement sets the next iteration's copy
+		// The post statement sets the next iteration's copy.
+		return post != nil && n == ast.Node(post)
+	}
+	once := true
+	assigned.Each(c.pass.TypesInfo, body, skip, func(w types.Object, at ast.Node) bool {
+		if w != v {
+			return true
 		}
-		switch n := n.(type) {
+		switch at := at.(type) {
 		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				if id, ok := ast.Unparen(l).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
-					once = false
-				}
-			}
-		case *ast.IncDecStmt:
-			once = once && c.objOf(n.X) != v
-		case *ast.UnaryExpr:
-			once = once && !(n.Op == token.AND && c.objOf(n.X) == v)
+			once = c.declares(at, v) // its definition is no change
 		case *ast.RangeStmt:
-			if n.Tok == token.DEFINE {
-				// A range variable is one per iteration only from Go 1.22.
-				once = once && (!c.defines(n.Key, v) && !c.defines(n.Value, v) || c.perIteration(n))
-			} else {
-				once = once && c.objOf(n.Key) != v && c.objOf(n.Value) != v
-			}
+			// A range variable is one per iteration only from Go 1.22.
+			once = at.Tok == token.DEFINE && c.perIteration(at)
+		default:
+			once = false
 		}
-		return true
+		return once
 	})
 	return once
+}
+
+// declares reports whether as defines v (v := …).
+func (c *checker) declares(as *ast.AssignStmt, v types.Object) bool {
+	if as.Tok != token.DEFINE {
+		return false
+	}
+	for _, l := range as.Lhs {
+		if id, ok := l.(*ast.Ident); ok && c.pass.TypesInfo.Defs[id] == v {
+			return true
+		}
+	}
+	return false
 }
 
 // declaresLoopVar reports whether fs declares v in its init statement

@@ -14,6 +14,7 @@ import (
 var categoryPackages = []string{
 	"factorialloop", "factorialrecursion", "factorialcall", "factorialratio", "binomialloop",
 	"poweroverfactorial", "gammaratio", "gammaoverflow", "lateconversion",
+	"lgammasign", "lgammadigits", "lgammainteger", "lgammaoverflow", "stirlingapproximation",
 }
 
 func TestCategories(t *testing.T) {

@@ -3,7 +3,6 @@ package analyzer
 import (
 	"go/ast"
 	"go/token"
-	"go/types"
 )
 
 // What runs for each function that the prefilter passed: its loops go to
@@ -26,7 +25,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 			fc.checkRecursion(ff)
 		}
 	}
-	if s.knownCall || fc.powLoops != nil {
+	if s.knownCall || peekState(fc, powerLoopsKey) != nil {
 		fc.checkExprs(body)
 	}
 	model := fc.modelOnce()
@@ -51,10 +50,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 // products that use its result.
 func (fc *fnCtx) noteLoop(al *accLoop) {
 	if al.kind == kindPower {
-		if fc.powLoops == nil {
-			fc.powLoops = make(map[types.Object]*accLoop)
-		}
-		fc.powLoops[al.acc] = al
+		fc.notePowerLoop(al)
 		return
 	}
 	fc.checkAccLoop(al)
@@ -137,7 +133,7 @@ func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
 		}
 	}
 	for _, r := range prods {
-		if !fc.inl[r.e] {
+		if !fc.isInlined(r.e) {
 			fc.checkProduct(r.e, r.p)
 		}
 	}
@@ -227,9 +223,6 @@ func (fc *fnCtx) judged(p *product) bool {
 // The finding is placed at the last re-assignment and has no fix, as no
 // single expression holds the value.
 func (fc *fnCtx) checkChains(list []ast.Stmt) {
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
 	for i, st := range list {
 		init, ok := st.(*ast.AssignStmt)
 		if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 || (init.Tok != token.DEFINE && init.Tok != token.ASSIGN) {
@@ -248,7 +241,7 @@ func (fc *fnCtx) checkChains(list []ast.Stmt) {
 		}
 		// Every change of v must be the start or a link of the chain:
 		// collectDefs notes a start once and each link twice.
-		if len(chain) == 0 || len(fc.defs[v]) != 1+2*len(chain) {
+		if len(chain) == 0 || len(fc.defsOf(v)) != 1+2*len(chain) {
 			continue
 		}
 		p := fc.evalProduct(init.Rhs[0])

@@ -157,11 +157,20 @@ func (fc *fnCtx) loopFuncOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 	return ff
 }
 
+// returned is, per body, the variables its return statements return
+// first, gathered once per body, as closureAssigns is: it is asked per
+// loop.
+type returned struct {
+	byBody map[*ast.BlockStmt]map[types.Object]bool
+}
+
+var returnedKey = &stateKey[returned]{"variables returned, per body"}
+
 // returns reports whether some return statement of body returns v as its
 // first result.
 func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
-	// Gathered once per body, as closureAssigns is: it is asked per loop.
-	set, ok := fc.returned[body]
+	r := stateOf(fc, returnedKey)
+	set, ok := r.byBody[body]
 	if !ok {
 		set = make(map[types.Object]bool)
 		ast.Inspect(body, func(n ast.Node) bool {
@@ -177,10 +186,10 @@ func (fc *fnCtx) returns(body *ast.BlockStmt, v types.Object) bool {
 			}
 			return true
 		})
-		if fc.returned == nil {
-			fc.returned = make(map[*ast.BlockStmt]map[types.Object]bool)
+		if r.byBody == nil {
+			r.byBody = make(map[*ast.BlockStmt]map[types.Object]bool)
 		}
-		fc.returned[body] = set
+		r.byBody[body] = set
 	}
 	return v != nil && set[v]
 }
@@ -228,14 +237,14 @@ func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 	if fc.c.isMathFunc(call, "Gamma") && len(call.Args) == 1 {
 		aff, ok := fc.affineOf(call.Args[0], 0)
-		if !ok || aff.a != 1 || !aff.isInt || aff.b < 1 || aff.b != float64(int64(aff.b)) {
+		if !ok || aff.a() != 1 || !aff.isInt || aff.b() < 1 || aff.b() != float64(int64(aff.b())) {
 			return nil
 		}
 		idx := fc.c.paramIndex(decl, fc.c.objOf(aff.v))
 		if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, fc.c.objOf(aff.v), nil) {
 			return nil
 		}
-		off := int64(aff.b) - 1
+		off := int64(aff.b()) - 1
 		return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: aff.v, wrapOff: off}
 	}
 	f, ok := fc.factorOf(call)
@@ -243,15 +252,15 @@ func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 		return nil
 	}
 	lin, ok := fc.linear(f.arg)
-	if !ok || len(lin.terms) != 1 || lin.terms[0].coef != 1 {
+	if !ok || len(lin.Terms) != 1 || lin.Terms[0].K != 1 {
 		return nil
 	}
-	p := lin.terms[0].obj
+	p := lin.Terms[0].Sym.Object
 	idx := fc.c.paramIndex(decl, p)
 	if idx < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, p, nil) {
 		return nil
 	}
-	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.c + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
+	return &facFunc{kind: f.kind, param: idx, param2: -1, offset: lin.C + f.off, wrap: f.arg, wrapOff: f.off, inner: f.fact}
 }
 
 // numericFunc returns the function decl declares, its numeric result
@@ -276,11 +285,7 @@ func (c *checker) numericFunc(decl *ast.FuncDecl) (*types.Func, numType, *fnCtx)
 // ownCtx returns a fresh context for fn with its own annotations only,
 // not the ranges its call sites give it.
 func (c *checker) ownCtx(fn ast.Node) *fnCtx {
-	own := &fnCtx{c: c, node: fn, file: c.fileOf(fn.Pos()), entry: c.ownEntry(fn)}
-	if own.file != nil {
-		own.assumes = own.file.dirs.stmtAssumesIn(fn)
-	}
-	return own
+	return c.newCtx(fn, c.ownEntry(fn))
 }
 
 // returnedAsIs reports whether e, in the function of fc, is the returned
@@ -325,7 +330,7 @@ func (fc *fnCtx) decidedAtCalls(n ast.Node) bool {
 	}
 	// A loop the value model found (no loop or rec) is judged at its
 	// definition whatever its calls are, as before.
-	return ff.asIs || fc.c.sitesDecided[ff.obj] && (ff.loop != nil || ff.rec != nil)
+	return ff.asIs || fc.c.sitesDecide(ff) && (ff.loop != nil || ff.rec != nil)
 }
 
 // productAsIs reports whether the product of ff reaches no arithmetic

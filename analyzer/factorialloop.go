@@ -162,14 +162,14 @@ func (fc *fnCtx) fallingAffine(al *accLoop, t numType) (string, bool, bool) {
 		cnt = *al.span
 	} else {
 		cnt, ok2 = fc.linear(al.count)
-		cnt.c += al.coff
+		cnt.C += al.coff
 	}
-	if !ok1 || !ok2 || len(top.terms) != 1 || len(cnt.terms) != 1 || top.terms[0].obj != cnt.terms[0].obj {
+	if !ok1 || !ok2 || len(top.Terms) != 1 || len(cnt.Terms) != 1 || top.Terms[0].Sym.Object != cnt.Terms[0].Sym.Object {
 		return "", false, false
 	}
-	v := top.terms[0].obj
-	a, b := top.terms[0].coef, top.c+al.topOff
-	c, d := cnt.terms[0].coef, cnt.c
+	v := top.Terms[0].Sym.Object
+	a, b := top.Terms[0].K, top.C+al.topOff
+	c, d := cnt.Terms[0].K, cnt.C
 	first := thresholds.FallingAffineFirstBad(t.Num, a, b, c, d)
 	start := thresholds.FallingAffineStart(a, b, c, d)
 	id := identOf(fc.c.pass.TypesInfo, al.top, v)

@@ -150,12 +150,12 @@ func (fc *fnCtx) ratioShape(u factor, dens []factor, m *fixes.Match) (fixes.Shap
 	switch {
 	case len(dens) == 2 && sum.equal(n):
 		k := dens[0].arg
-		if len(lins[1].terms) < len(lins[0].terms) {
+		if len(lins[1].Terms) < len(lins[0].Terms) {
 			k = dens[1].arg
 		}
 		m.Args = []ast.Expr{u.arg, k}
 		return fixes.ShapeBinomial, ""
-	case len(dens) == 2 && sum.scale(2).equal(n.scale(2).add(linear{c: 2})) && (lins[0].scale(2).equal(n) || lins[1].scale(2).equal(n)):
+	case len(dens) == 2 && sum.scale(2).equal(n.scale(2).add(linear{C: 2})) && (lins[0].scale(2).equal(n) || lins[1].scale(2).equal(n)):
 		half := dens[0].arg
 		if !lins[0].scale(2).equal(n) {
 			half = dens[1].arg
@@ -224,7 +224,7 @@ func (fc *fnCtx) hyperArgs(p *product) []ast.Expr {
 	if !K.add(K2).equal(N) || !k.add(k2).equal(n) {
 		return nil
 	}
-	if len(K2.terms) < len(K.terms) {
+	if len(K2.Terms) < len(K.Terms) {
 		a = b // the simpler pair is C(K, k), the other C(N-K, n-k)
 	}
 	return []ast.Expr{a.arg2, d.arg, a.arg, d.arg2}

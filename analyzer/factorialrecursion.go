@@ -83,11 +83,11 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 			continue
 		}
 		lin, ok := fc.linear(call.Args[idx])
-		if !ok || len(lin.terms) != 1 || lin.terms[0].obj != v || lin.terms[0].coef != 1 {
+		if !ok || len(lin.Terms) != 1 || lin.Terms[0].Sym.Object != v || lin.Terms[0].K != 1 {
 			continue
 		}
 		kind := kindNone
-		switch lin.c {
+		switch lin.C {
 		case -1:
 			kind = kindFactorial
 		case -2:

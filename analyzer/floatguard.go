@@ -7,6 +7,7 @@ import (
 	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/assigned"
 	"github.com/overfact/overfact/internal/astpath"
 )
 
@@ -77,44 +78,36 @@ func (fc *fnCtx) floatBounds(id *ast.Ident) (lo, hi float64) {
 func (fc *fnCtx) lastWrite(v *types.Var) (token.Pos, bool) {
 	var last token.Pos
 	ok := true
-	info := fc.c.pass.TypesInfo
-	is := func(e ast.Expr) bool {
-		id, isID := ast.Unparen(e).(*ast.Ident)
-		return isID && info.ObjectOf(id) == v
-	}
+	var closures []*ast.FuncLit
 	ast.Inspect(fc.node, func(n ast.Node) bool {
-		if !ok {
-			return false
+		if lit, isLit := n.(*ast.FuncLit); isLit && n != fc.node {
+			closures = append(closures, lit)
 		}
-		write := false
-		switch n := n.(type) {
-		case *ast.FuncLit:
-			if n != fc.node {
-				ast.Inspect(n.Body, func(m ast.Node) bool {
-					if as, isAs := m.(*ast.AssignStmt); isAs {
-						for _, l := range as.Lhs {
-							ok = ok && !is(l)
-						}
-					}
-					if inc, isInc := m.(*ast.IncDecStmt); isInc {
-						ok = ok && !is(inc.X)
-					}
-					return ok
-				})
+		return true
+	})
+	inClosure := func(n ast.Node) bool {
+		for _, lit := range closures {
+			if lit.Pos() <= n.Pos() && n.End() <= lit.End() {
+				return true
 			}
-		case *ast.AssignStmt:
-			for _, l := range n.Lhs {
-				write = write || is(l) && info.Defs[ast.Unparen(l).(*ast.Ident)] == nil
-			}
-		case *ast.IncDecStmt:
-			write = is(n.X)
-		case *ast.RangeStmt:
-			write = n.Key != nil && is(n.Key) || n.Value != nil && is(n.Value)
-		case *ast.UnaryExpr:
-			ok = ok && !(n.Op == token.AND && is(n.X))
 		}
-		if write && n.Pos() > last {
-			last = n.Pos()
+		return false
+	}
+	assigned.Each(fc.c.pass.TypesInfo, fc.node, nil, func(w types.Object, at ast.Node) bool {
+		if w != v {
+			return true
+		}
+		switch as, isAs := at.(*ast.AssignStmt); {
+		case inClosure(at):
+			ok = false
+		case isAs && fc.c.declares(as, v):
+			// its definition, not a change
+		default:
+			if _, isAddr := at.(*ast.UnaryExpr); isAddr {
+				ok = false
+			} else if at.Pos() > last {
+				last = at.Pos()
+			}
 		}
 		return ok
 	})

@@ -13,22 +13,86 @@ import (
 // fnCtx is one function under analysis. Its range analysis runs lazily,
 // on the first question about a range, so functions without a candidate
 // cost only the syntactic scan.
+//
+// What every check asks about the function lives in three named parts:
+// questions to the type checker, range queries and definitions. What one category or pass
+// gathers for itself is not a field here: the owner declares a
+// stateKey beside its detector and gets its state with stateOf.
 type fnCtx struct {
-	c       *checker
-	node    ast.Node // *ast.FuncDecl or *ast.FuncLit
-	file    *fileInfo
+	c    *checker
+	node ast.Node // *ast.FuncDecl or *ast.FuncLit
+	file *fileInfo
+	typeQueries
+	rangeQueries
+	definitions
+	owned states // what categories keep about the function (stateOf)
+}
+
+// rangeQueries is the part of a function context that answers range
+// questions about node (rangeOf, entryRange): the ranges of the
+// parameters at entry, the range analysis run on the first question,
+// and the statement-level bound annotations that narrow it.
+type rangeQueries struct {
+	q       typeQueries
+	node    ast.Node
+	tables  func() map[types.Object]*ast.CompositeLit // the package's tables (packageTables)
 	entry   map[types.Object]ranges.Interval
 	rng     *ranges.Func
-	assumes []stmtAssume // statement-level bound annotations
-	defs    map[types.Object][]ast.Expr
-	inl     map[ast.Expr]bool // values consumed by a larger product
-	// powLoops maps the accumulator of each power loop x·x·…·x to it.
-	powLoops map[types.Object]*accLoop
-	// closureAssigned and returned are gathered once per function (see
-	// closureAssigns and returns).
-	closureAssigned map[types.Object]bool
-	returned        map[*ast.BlockStmt]map[types.Object]bool
-	gamma           gammaFunc // what the Gamma categories gather once per function
+	assumes []stmtAssume
+}
+
+// definitions is the part of a function context that knows every value
+// each local variable of node is given (collectDefs and singleDef,
+// products.go), gathered on first use (defsOf).
+type definitions struct {
+	q    typeQueries
+	node ast.Node
+	defs map[types.Object][]ast.Expr
+}
+
+// defsOf returns the values v is given in the function, a nil value
+// standing for a change the analyzer does not follow.
+func (d *definitions) defsOf(v types.Object) []ast.Expr {
+	if d.defs == nil {
+		d.collectDefs()
+	}
+	return d.defs[v]
+}
+
+// A stateKey names what one category keeps about a function or a pass (a
+// cache of its own, what it noted for a later check). The owner declares
+// the key beside its detector; the state is made on first use and dies
+// with the function context (stateOf) or the pass (passStateOf).
+type stateKey[T any] struct{ name string }
+
+// states holds the owners' states, by their stateKey.
+type states struct{ m map[any]any }
+
+func stateIn[T any](s *states, k *stateKey[T]) *T {
+	if v, ok := s.m[k]; ok {
+		return v.(*T)
+	}
+	v := new(T)
+	if s.m == nil {
+		s.m = make(map[any]any)
+	}
+	s.m[k] = v
+	return v
+}
+
+// stateOf returns the owner's state for the function, made zero on
+// first use.
+func stateOf[T any](fc *fnCtx, k *stateKey[T]) *T { return stateIn(&fc.owned, k) }
+
+// passStateOf returns the owner's state for the pass, made zero on
+// first use.
+func passStateOf[T any](c *checker, k *stateKey[T]) *T { return stateIn(&c.owned, k) }
+
+// peekState returns the owner's state for the function, or nil when the
+// owner has not made it.
+func peekState[T any](fc *fnCtx, k *stateKey[T]) *T {
+	v, _ := fc.owned.m[k].(*T)
+	return v
 }
 
 // maxVisits bounds the range analysis of one function; past it the
@@ -41,27 +105,38 @@ type fnCtx struct {
 // go test ./analyzer/ranges -run XXX -bench BenchmarkStdlib/analyze).
 const maxVisits = 3
 
+// ctx returns the context of function n, made once per pass: its entry
+// ranges are those its call sites give it.
 func (c *checker) ctx(n ast.Node) *fnCtx {
 	if fc, ok := c.fnInfo[n]; ok {
 		return fc
 	}
-	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos())}
-	fc.entry = c.entryOf(n)
-	if fc.file != nil {
-		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
-	}
+	fc := c.newCtx(n, c.entryOf(n))
 	fc.liftAssumes()
 	c.fnInfo[n] = fc
 	return fc
 }
 
-// ranges returns the range analysis of the function, running it once.
-func (fc *fnCtx) ranges() *ranges.Func {
-	if fc.rng == nil {
-		opts := ranges.Options{Entry: fc.entry, MaxVisits: maxVisits, Tables: fc.c.packageTables()}
-		fc.rng = ranges.Analyze(fc.c.pass.TypesInfo, fc.node, opts)
+// newCtx makes a context for function n with the given entry ranges and
+// the statement-level bound annotations of its file.
+func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fnCtx {
+	q := c.queries()
+	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: q,
+		rangeQueries: rangeQueries{q: q, node: n, tables: c.packageTables, entry: entry},
+		definitions:  definitions{q: q, node: n}}
+	if fc.file != nil {
+		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
 	}
-	return fc.rng
+	return fc
+}
+
+// ranges returns the range analysis of the function, running it once.
+func (r *rangeQueries) ranges() *ranges.Func {
+	if r.rng == nil {
+		opts := ranges.Options{Entry: r.entry, MaxVisits: maxVisits, Tables: r.tables()}
+		r.rng = ranges.Analyze(r.q.info, r.node, opts)
+	}
+	return r.rng
 }
 
 // packageTables returns the package's unexported table variables that
@@ -76,16 +151,16 @@ func (c *checker) packageTables() map[types.Object]*ast.CompositeLit {
 
 // rangeOf returns the range of the integer expression e where it is
 // evaluated, narrowed by statement-level bound annotations over it.
-func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
+func (r *rangeQueries) rangeOf(e ast.Expr) ranges.Interval {
 	e = ast.Unparen(e)
-	if v, ok := fc.intConst(e); ok {
+	if v, ok := r.q.intConst(e); ok {
 		return ranges.Point(v)
 	}
-	iv := fc.ranges().Of(e)
-	if lin, ok := fc.linear(e); ok && len(lin.terms) == 1 && lin.terms[0].coef == 1 {
-		for _, a := range fc.assumes {
-			if a.obj == lin.terms[0].obj && a.from <= e.Pos() && e.End() <= a.to {
-				iv = iv.Meet(shift(a.iv, lin.c))
+	iv := r.ranges().Of(e)
+	if lin, ok := r.q.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
+		for _, a := range r.assumes {
+			if a.obj == lin.Terms[0].Sym.Object && a.from <= e.Pos() && e.End() <= a.to {
+				iv = iv.Meet(shift(a.iv, lin.C))
 			}
 		}
 	}
@@ -93,9 +168,9 @@ func (fc *fnCtx) rangeOf(e ast.Expr) ranges.Interval {
 }
 
 // entryRange returns the range of variable v at node n.
-func (fc *fnCtx) entryRange(v types.Object, n ast.Node) ranges.Interval {
-	iv := fc.ranges().At(v, n)
-	for _, a := range fc.assumes {
+func (r *rangeQueries) entryRange(v types.Object, n ast.Node) ranges.Interval {
+	iv := r.ranges().At(v, n)
+	for _, a := range r.assumes {
 		if a.obj == v && a.from <= n.Pos() && n.End() <= a.to {
 			iv = iv.Meet(a.iv)
 		}
@@ -112,15 +187,12 @@ func (fc *fnCtx) liftAssumes() {
 	if len(fc.assumes) == 0 {
 		return
 	}
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
 	sig := fc.signature()
 	if sig == nil {
 		return
 	}
 	for _, a := range fc.assumes {
-		if len(fc.defs[a.obj]) > 0 || !isParam(sig, a.obj) {
+		if len(fc.defsOf(a.obj)) > 0 || !isParam(sig, a.obj) {
 			continue
 		}
 		iv := a.iv

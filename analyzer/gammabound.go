@@ -8,6 +8,7 @@ import (
 	"math"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // Bounds of Gamma arguments, shared by the two Gamma categories: the
@@ -15,12 +16,29 @@ import (
 
 // affine is x = a·v + b with v a single variable (an integer converted to
 // float, or a float), as Gamma arguments are written: float64(n)+1,
-// (nu+1)/2.
+// (nu+1)/2. The form is internal/linform's in IEEE float64 arithmetic,
+// as the code computes it (NaN and ±Inf included); v is the variable as
+// written, for its range and for messages.
 type affine struct {
-	a, b  float64
-	v     ast.Expr // nil for a constant
-	isInt bool     // v is an integer variable
+	form  floatForm // at most one term, the variable of v
+	v     ast.Expr  // nil for a constant
+	isInt bool      // v is an integer variable
 }
+
+type floatForm = linform.Form[linform.Obj, float64, linform.Float64]
+
+// a returns the coefficient of the variable (0 for a constant).
+func (x affine) a() float64 {
+	if len(x.form.Terms) == 0 {
+		return 0
+	}
+	return x.form.Terms[0].K
+}
+
+// b returns the constant.
+func (x affine) b() float64 { return x.form.C }
+
+func constAffine(b float64) affine { return affine{form: floatForm{C: b}} }
 
 // affineOf returns the affine form of a float expression.
 func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
@@ -29,10 +47,10 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 	}
 	e = ast.Unparen(e)
 	if v, ok := fc.floatConst(e); ok {
-		return affine{b: v}, true
+		return constAffine(v), true
 	}
 	if v, ok := fc.specialConst(e); ok {
-		return affine{b: v}, true
+		return constAffine(v), true
 	}
 	switch x := e.(type) {
 	case *ast.CallExpr:
@@ -40,7 +58,8 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 			return fc.affineOf(x.Args[0], depth+1)
 		}
 	case *ast.Ident:
-		if fc.c.objOf(x) == nil {
+		obj := fc.c.objOf(x)
+		if obj == nil {
 			return affine{}, false
 		}
 		if def := fc.singleDef(x); def != nil {
@@ -49,7 +68,8 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 			}
 		}
 		t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(x))
-		return affine{a: 1, v: x, isInt: ok && !t.Float}, ok
+		one := linform.Single[linform.Obj, float64, linform.Float64](linform.Obj{Object: obj})
+		return affine{form: one, v: x, isInt: ok && !t.Float}, ok
 	case *ast.BinaryExpr:
 		l, ok1 := fc.affineOf(x.X, depth+1)
 		r, ok2 := fc.affineOf(x.Y, depth+1)
@@ -58,23 +78,33 @@ func (fc *fnCtx) affineOf(e ast.Expr, depth int) (affine, bool) {
 			// do, and those are rare enough to leave.
 			return affine{}, false
 		}
-		v, isInt := l.v, l.isInt
-		if v == nil {
-			v, isInt = r.v, r.isInt
+		out := affine{v: l.v, isInt: l.isInt}
+		if out.v == nil {
+			out.v, out.isInt = r.v, r.isInt
 		}
 		switch x.Op {
 		case token.ADD:
-			return affine{l.a + r.a, l.b + r.b, v, isInt}, true
+			out.form = l.form.Add(r.form)
+			return out, true
 		case token.SUB:
-			return affine{l.a - r.a, l.b - r.b, v, isInt}, true
+			out.form = l.form.Sub(r.form)
+			return out, true
 		case token.MUL:
 			if l.v == nil {
-				return affine{r.a * l.b, r.b * l.b, v, isInt}, true
+				out.form = r.form.Scale(l.b())
+			} else {
+				out.form = l.form.Scale(r.b())
 			}
-			return affine{l.a * r.b, l.b * r.b, v, isInt}, true
+			return out, true
 		case token.QUO:
-			if r.v == nil && r.b != 0 {
-				return affine{l.a / r.b, l.b / r.b, v, isInt}, true
+			if r.v == nil && r.b() != 0 {
+				// Divided, not scaled by 1/d: x/3 and x·(1/3) round
+				// differently, and the code divides.
+				out.form = floatForm{C: l.b() / r.b()}
+				for _, t := range l.form.Terms {
+					out.form.Terms = append(out.form.Terms, linform.Term[linform.Obj, float64]{Sym: t.Sym, K: t.K / r.b()})
+				}
+				return out, true
 			}
 		}
 	}
@@ -120,17 +150,17 @@ func (fc *fnCtx) gammaBoundOf(arg ast.Expr) (gammaBound, bool) {
 	if aff.v == nil {
 		vlo, vhi = 0, 0
 	}
-	g.lo, g.hi = aff.a*vlo+aff.b, aff.a*vhi+aff.b
-	if aff.a < 0 {
+	g.lo, g.hi = aff.a()*vlo+aff.b(), aff.a()*vhi+aff.b()
+	if aff.a() < 0 {
 		g.lo, g.hi = g.hi, g.lo
 	}
 	if aff.v == nil {
-		g.lo, g.hi = aff.b, aff.b
+		g.lo, g.hi = aff.b(), aff.b()
 	}
 	g.certain = g.lo >= g.first
 	g.reachable = g.hi >= g.first
-	if aff.a > 0 {
-		g.firstV = (g.first - aff.b) / aff.a
+	if aff.a() > 0 {
+		g.firstV = (g.first - aff.b()) / aff.a()
 		if aff.isInt {
 			g.firstV = math.Ceil(g.firstV)
 		}
@@ -145,7 +175,7 @@ func floatNum(sizes types.Sizes) thresholds.Num {
 
 // describe renders where the Gamma call breaks, in terms of its variable.
 func (g gammaBound) describe(call string) string {
-	if g.aff.v == nil || g.aff.a <= 0 {
+	if g.aff.v == nil || g.aff.a() <= 0 {
 		return fmt.Sprintf("%s is +Inf for arguments ≥ %.10g", call, g.first)
 	}
 	return fmt.Sprintf("%s is +Inf for %s ≥ %.10g (Γ(x) overflows float64 from x = %.10g)", call, src(g.aff.v), g.firstV, g.first)

@@ -80,6 +80,11 @@ type gammaPass struct {
 	lines map[token.Position]bool
 }
 
+var gammaPassKey = &stateKey[gammaPass]{"the Gamma categories' lines with a finding"}
+
+// gammaLines returns the pass's gammaPass.
+func (c *checker) gammaLines() *gammaPass { return passStateOf(c, gammaPassKey) }
+
 // reported reports whether line has a Gamma finding.
 func (g *gammaPass) reported(line token.Position) bool { return g.lines[line] }
 
@@ -98,11 +103,14 @@ type gammaFunc struct {
 	parents map[ast.Node]ast.Node
 }
 
+var gammaFuncKey = &stateKey[gammaFunc]{"the Gamma categories' calls and parents"}
+
 // gammaCallsOn returns the math.Gamma calls of one argument on line,
 // in this function's own body (closures are functions of their own).
 func (fc *fnCtx) gammaCallsOn(line token.Position) []*ast.CallExpr {
-	if fc.gamma.calls == nil {
-		fc.gamma.calls = make(map[token.Position][]*ast.CallExpr)
+	g := stateOf(fc, gammaFuncKey)
+	if g.calls == nil {
+		g.calls = make(map[token.Position][]*ast.CallExpr)
 		ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 			switch n := n.(type) {
 			case *ast.FuncLit:
@@ -110,13 +118,13 @@ func (fc *fnCtx) gammaCallsOn(line token.Position) []*ast.CallExpr {
 			case *ast.CallExpr:
 				if fc.c.isMathFunc(n, "Gamma") && len(n.Args) == 1 {
 					l := fc.c.lineOf(n)
-					fc.gamma.calls[l] = append(fc.gamma.calls[l], n)
+					g.calls[l] = append(g.calls[l], n)
 				}
 			}
 			return true
 		})
 	}
-	return fc.gamma.calls[line]
+	return g.calls[line]
 }
 
 // scaledTerm reads e as c + k·t, where t is one term written the same

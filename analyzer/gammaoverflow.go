@@ -18,7 +18,7 @@ import (
 // checkGamma judges a math.Gamma call no product consumed.
 func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	line := fc.c.lineOf(call)
-	if fc.c.gamma.reported(line) || !fc.gammaReportable(call) {
+	if fc.c.gammaLines().reported(line) || !fc.gammaReportable(call) {
 		return
 	}
 	first := thresholds.GammaFirstBad(floatNum(fc.c.pass.TypesSizes))
@@ -33,7 +33,7 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 		msg = fmt.Sprintf("math.Gamma overflows: %s; the argument is not bounded here", g.describe("math.Gamma("+src(call.Args[0])+")"))
 	}
 	msg += choice.clause()
-	fc.c.gamma.note(line)
+	fc.c.gammaLines().note(line)
 	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg,
 		match: &fixes.Match{Shape: fixes.ShapeGamma, Node: call, Args: []ast.Expr{call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(call)}})
 }
@@ -62,10 +62,11 @@ func (fc *fnCtx) gammaEscapes(call *ast.CallExpr) bool {
 // parentMap returns the parents of the nodes of the function body, built
 // once per function: a line of several Gamma calls asks for each of them.
 func (fc *fnCtx) parentMap() map[ast.Node]ast.Node {
-	if fc.gamma.parents == nil {
-		fc.gamma.parents = parentsIn(funcBody(fc.node))
+	g := stateOf(fc, gammaFuncKey)
+	if g.parents == nil {
+		g.parents = parentsIn(funcBody(fc.node))
 	}
-	return fc.gamma.parents
+	return g.parents
 }
 
 // valueHolding returns where a finding about the product at root is

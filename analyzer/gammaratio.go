@@ -61,7 +61,7 @@ func (fc *fnCtx) gammaRatioFinite(p *product, m *fixes.Match, first float64) boo
 				continue
 			}
 			a, ok := fc.affineOf(f.arg, 0)
-			if !ok || a.v == nil && (math.IsNaN(a.b) || math.IsInf(a.b, 0)) {
+			if !ok || a.v == nil && (math.IsNaN(a.b()) || math.IsInf(a.b(), 0)) {
 				return false
 			}
 			if i == 0 {
@@ -83,7 +83,7 @@ func (fc *fnCtx) gammaRatioFinite(p *product, m *fixes.Match, first float64) boo
 		sum := 0.0
 		for i, side := range [][]affine{num, den} {
 			for _, a := range side {
-				lg, _ := math.Lgamma(a.b)
+				lg, _ := math.Lgamma(a.b())
 				if math.IsInf(lg, 0) || math.IsNaN(lg) {
 					return false
 				}
@@ -109,13 +109,13 @@ func (fc *fnCtx) gammaRatioFinite(p *product, m *fixes.Match, first float64) boo
 			sign = -1
 		}
 		for _, a := range side {
-			delta += sign * a.b
+			delta += sign * a.b()
 			if a.v != nil {
 				var key any = src(a.v)
 				if obj := fc.c.objOf(a.v); obj != nil {
 					key = obj
 				}
-				rate[key] += sign * a.a
+				rate[key] += sign * a.a()
 			}
 		}
 	}
@@ -177,8 +177,8 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 		msg += fmt.Sprintf("; the product of the %d Γ values above the line can overflow first, before any one of them is +Inf", n)
 	}
 	at := fc.valueHolding(root, worstCall)
-	fc.c.gamma.note(fc.c.lineOf(root))
-	fc.c.gamma.note(fc.c.lineOf(at))
+	fc.c.gammaLines().note(fc.c.lineOf(root))
+	fc.c.gammaLines().note(fc.c.lineOf(at))
 	fc.report(finding{node: at, cat: catGammaRatio, definite: worst.certain, msg: msg, match: p.fix(m)})
 }
 
@@ -244,7 +244,7 @@ func (fc *fnCtx) betaArgs(two, one []factor, other int) (a, b ast.Expr, ok bool)
 	lb, ok2 := fc.affineOf(two[1].arg, 0)
 	ls, ok3 := fc.affineOf(one[0].arg, 0)
 	if ok1 && ok2 && ok3 && (la.v == nil || lb.v == nil || sameVar(fc, la.v, lb.v)) {
-		if la.a+lb.a == ls.a && la.b+lb.b == ls.b {
+		if la.a()+lb.a() == ls.a() && la.b()+lb.b() == ls.b() {
 			return two[0].arg, two[1].arg, true
 		}
 	}

@@ -38,9 +38,16 @@ func (fc *fnCtx) judgeCall(f factor) (judgement, int64) {
 // decide compares r, the range of arg, with first. A nil arg or an
 // integer literal is shown by no name: the message states its value.
 func decide(arg ast.Expr, r ranges.Interval, first int64) judgement {
+	return decideName(shownName(arg), r, first)
+}
+
+// decideName compares r, the range of the variable name, with first; an
+// empty name stands for a constant. The value model's rules judge
+// variables of the model, which have a name and no expression.
+func decideName(name string, r ranges.Interval, first int64) judgement {
 	j := judgement{silent: r.IsEmpty() || r.Hi < first}
 	if !j.silent {
-		j.clause, j.definite = verdict(shownName(arg), r, first)
+		j.clause, j.definite = verdict(name, r, first)
 	}
 	return j
 }

@@ -24,7 +24,7 @@ func TestLgammaToleranceFlag(t *testing.T) {
 	if err := Analyzer.Flags.Set("lgamma-tolerance", "1e-6"); err != nil {
 		t.Fatal(err)
 	}
-	res := analysistest.Run(t, testdata(t), Analyzer, "lgammatolerance")
+	res := analysistest.Run(t, analysistest.TestData(), Analyzer, "lgammatolerance")
 	re := regexp.MustCompile(`from n = (\d+) `)
 	terms := []thresholds.LogGammaTerm{{P: 1, C: 1, K: []float64{1, 0}}, {P: -1, C: 1, K: []float64{0, 1}}, {P: -1, C: 1, K: []float64{1, -1}}}
 	bound := func(n float64) float64 {

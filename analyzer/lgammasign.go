@@ -55,9 +55,6 @@ func (fc *fnCtx) checkLgammaSign() {
 func (fc *fnCtx) droppedSigns() map[types.Object]*lgammaValue {
 	var out map[types.Object]*lgammaValue
 	info := fc.c.pass.TypesInfo
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
 	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 		as, ok := n.(*ast.AssignStmt)
 		if !ok || len(as.Lhs) != 2 || len(as.Rhs) != 1 {
@@ -69,7 +66,7 @@ func (fc *fnCtx) droppedSigns() map[types.Object]*lgammaValue {
 		}
 		v := fc.c.objOf(as.Lhs[0])
 		sign, ok := as.Lhs[1].(*ast.Ident)
-		if v == nil || !ok || len(fc.defs[v]) != 2 {
+		if v == nil || !ok || len(fc.defsOf(v)) != 2 {
 			return true // the value changes elsewhere: not followed
 		}
 		if sign.Name != "_" {
@@ -165,7 +162,7 @@ func (fc *fnCtx) gammaSignRange(arg ast.Expr, shown bool) (witness float64, defi
 		w, _ := thresholds.GammaNegativeIn(math.Inf(-1), math.Inf(1))
 		return w, false, true
 	}
-	if g.aff.v == nil || g.aff.isInt && isInteger(g.aff.a) && isInteger(g.aff.b) {
+	if g.aff.v == nil || g.aff.isInt && isInteger(g.aff.a()) && isInteger(g.aff.b()) {
 		// A constant, or an integer-valued argument: at a pole Γ has no
 		// sign and math.Lgamma's +1 is as good as any.
 		if g.aff.v != nil {

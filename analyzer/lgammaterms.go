@@ -32,6 +32,12 @@ type lgExp struct {
 	rest  bool // the argument adds something else too (k·ln p)
 }
 
+// lgWrappers is the functions of the package that return ln|Γ| of their
+// argument, found on first use (isLgammaCall).
+type lgWrappers struct{ set map[*types.Func]bool }
+
+var lgWrappersKey = &stateKey[lgWrappers]{"the package's log-gamma wrappers"}
+
 // isLgammaCall reports whether call returns ln|Γ| of its one argument:
 // a call of a function of this package that returns the first result
 // of math.Lgamma of its parameter.
@@ -40,15 +46,16 @@ func (c *checker) isLgammaCall(call *ast.CallExpr) bool {
 	if fn == nil || fn.Pkg() != c.pass.Pkg || len(call.Args) != 1 {
 		return false
 	}
-	if c.lgWrappers == nil {
-		c.lgWrappers = make(map[*types.Func]bool)
+	w := passStateOf(c, lgWrappersKey)
+	if w.set == nil {
+		w.set = make(map[*types.Func]bool)
 		for _, n := range c.allFuncs {
 			if d, ok := n.(*ast.FuncDecl); ok && d.Recv == nil && c.lgammaWrapper(d) {
-				c.lgWrappers[c.declObj(d)] = true
+				w.set[c.declObj(d)] = true
 			}
 		}
 	}
-	return c.lgWrappers[fn]
+	return w.set[fn]
 }
 
 // lgammaWrapper reports whether d is func f(x T) T { v, _ :=
@@ -81,12 +88,9 @@ func (fc *fnCtx) lgammaLocal(id *ast.Ident) ast.Expr {
 	if obj == nil {
 		return nil
 	}
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
 	// A two-value assignment is noted as two unknown values; any other
 	// change of the variable adds more.
-	if len(fc.defs[obj]) != 2 {
+	if len(fc.defsOf(obj)) != 2 {
 		return nil
 	}
 	var arg ast.Expr

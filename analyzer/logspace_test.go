@@ -10,13 +10,6 @@ import (
 	"golang.org/x/tools/go/analysis/analysistest"
 )
 
-// The scenario packages of the log-space categories (lgammasign.go,
-// stirlingapproximation.go) run with the others; their fixes are
-// checked against .golden files by the fixes package's tests.
-func init() {
-	scenarios = append(scenarios, "lgamma-sign", "stirling-approximation")
-}
-
 var (
 	signWitness  = regexp.MustCompile(`as at .* = (-?[0-9.e+-]+), where Γ is (-?[0-9.e+-]+)`)
 	stirlingErr  = regexp.MustCompile(`it is ([0-9.e+-]+)% below .*? at \S+ = ([0-9]+)(?: and ([0-9.e+-]+)% at \S+ = ([0-9]+))?`)
@@ -31,7 +24,7 @@ var (
 // math.Pow(n, n+h/2) is +Inf, next to the last n with math.Gamma(n+1)
 // finite.
 func TestLogSpaceNumbers(t *testing.T) {
-	results := analysistest.Run(t, testdata(t), Analyzer, "lgamma-sign", "stirling-approximation")
+	results := analysistest.Run(t, analysistest.TestData(), Analyzer, "lgammasign", "stirlingapproximation")
 	checked := 0
 	for _, r := range results {
 		for _, d := range r.Diagnostics {

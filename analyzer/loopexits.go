@@ -81,14 +81,14 @@ func (fc *fnCtx) exitsPast(al *accLoop, first int64) bool {
 		return false
 	}
 	lin, ok := fc.linear(fc.stripConv(al.mult))
-	if !ok || len(lin.terms) != 1 || lin.terms[0].obj != sh.iv || lin.terms[0].coef != 1 {
+	if !ok || len(lin.Terms) != 1 || lin.Terms[0].Sym.Object != sh.iv || lin.Terms[0].K != 1 {
 		return false
 	}
 	for _, x := range al.exits {
 		// Before the update of this trip, the factors multiplied in
 		// run up to iv - step; the exit must see that past first.
 		lo := fc.entryRange(sh.iv, x).Lo
-		if lo == math.MinInt64 || lo-sh.step+lin.c < first {
+		if lo == math.MinInt64 || lo-sh.step+lin.C < first {
 			return false
 		}
 	}

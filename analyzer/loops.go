@@ -200,8 +200,8 @@ func (fc *fnCtx) stepOf(s ast.Stmt, v types.Object) int64 {
 			return d
 		case token.ASSIGN:
 			lin, ok := fc.linear(s.Rhs[0])
-			if ok && len(lin.terms) == 1 && lin.terms[0].obj == v && lin.terms[0].coef == 1 {
-				return lin.c
+			if ok && len(lin.Terms) == 1 && lin.Terms[0].Sym.Object == v && lin.Terms[0].K == 1 {
+				return lin.C
 			}
 		}
 	}

@@ -379,10 +379,11 @@ func (mc *modelCtx) factorialLoop(a *vm.Acc, t numType) bool {
 	}
 	fc := mc.fc
 	r := fc.symRange(mc.res, v, mc.loop.Stmt)
-	if r.IsEmpty() || r.Hi < first {
+	j := decideName(v.Name(), r, first)
+	if j.silent {
 		return true
 	}
-	clause, definite := verdict(v.Name(), r, first)
+	clause, definite := j.clause, j.definite
 	var msg string
 	if alpha.Cmp(big.NewRat(1, 1)) == 0 {
 		msg = factorialLimitText(kindFactorial, v.Name(), beta.Num().Int64(), t)
@@ -448,10 +449,11 @@ func (mc *modelCtx) runningFactorial(a *vm.Acc, t numType) bool {
 	}
 	fc := mc.fc
 	r := fc.symRange(mc.res, v, l.Stmt)
-	if r.IsEmpty() || r.Hi < first {
+	j := decideName(v.Name(), r, first)
+	if j.silent {
 		return true
 	}
-	clause, definite := verdict(v.Name(), r, first)
+	clause, definite := j.clause, j.definite
 	jBad := tBad
 	if l.Counter != nil {
 		jv, _ := l.From.Add(vm.Int(tBad).Scale(l.Step)).At(nil)
@@ -492,10 +494,11 @@ func (mc *modelCtx) poissonRun(a *vm.Acc, t numType) bool {
 	fc := mc.fc
 	r := fc.symRange(mc.res, lam, mc.loop.Stmt)
 	first := int64(math.Ceil(sub))
-	if r.IsEmpty() || r.Hi < first {
+	j := decideName(lam.Name(), r, first)
+	if j.silent {
 		return true
 	}
-	clause, definite := verdict(lam.Name(), r, first)
+	clause, definite := j.clause, j.definite
 	msg := fmt.Sprintf("running product %s computes the Poisson terms %s^k·e^(−%s)/k! from math.Exp(-%s), which in %s loses its digits for %s > %s and is 0 for %s ≥ %s, after which every term is wrong or 0 although the terms near k = %s are not small",
 		a.Obj.Name(), lam.Name(), lam.Name(), lam.Name(), t.typeName(), lam.Name(), fmtFloat(sub), lam.Name(), fmtFloat(zero), lam.Name())
 	fc.report(finding{node: mc.loop.Stmt, cat: catPowOverFac, definite: definite, msg: msg + clause})
@@ -813,10 +816,11 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 		judged[l.Stmt] = true
 	}
 	n := fc.symRange(res, nv, e)
-	if n.IsEmpty() || n.Hi < first {
+	j := decideName(nv.Name(), n, first)
+	if j.silent {
 		return
 	}
-	clause, definite := verdict(nv.Name(), n, first)
+	clause, definite := j.clause, j.definite
 	den := "its divisor"
 	if d := vm.Recognise(res.Values[b.Y]); d.Kind != vm.Unknown && d.Kind != vm.GammaRatio {
 		den = d.String()

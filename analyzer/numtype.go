@@ -28,11 +28,14 @@ func (t numType) typeName() string {
 // A type parameter is described by the type in its constraint whose n!
 // breaks first: an instantiation with that type is the first to
 // overflow, so it decides whether the generic code is safe.
-func (c *checker) numOf(t types.Type) (numType, bool) {
+func (c *checker) numOf(t types.Type) (numType, bool) { return c.queries().numOf(t) }
+
+// numOf returns the fixed-size numeric type of t (see checker.numOf).
+func (q typeQueries) numOf(t types.Type) (numType, bool) {
 	if t == nil {
 		return numType{}, false
 	}
-	if n, ok := thresholds.Lookup(t, c.pass.TypesSizes); ok {
+	if n, ok := thresholds.Lookup(t, q.sizes); ok {
 		return numType{Num: n}, true
 	}
 	tp, ok := types.Unalias(t).(*types.TypeParam)
@@ -46,7 +49,7 @@ func (c *checker) numOf(t types.Type) (numType, bool) {
 	var best numType
 	found := false
 	eachTerm(iface, 0, func(t types.Type) {
-		n, ok := thresholds.Lookup(t, c.pass.TypesSizes)
+		n, ok := thresholds.Lookup(t, q.sizes)
 		if !ok {
 			return
 		}

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"go/types"
 	"math"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -12,6 +13,30 @@ import (
 
 // The power-over-factorial category: x^k/k! terms (Poisson, Erlang,
 // Taylor) whose power and factorial overflow separately.
+
+// powerLoops is what the category keeps about a function: the power
+// loops x·x·…·x by their accumulator, noted when the loops are read
+// (noteLoop) for the products that divide their result by a factorial
+// after the loop.
+type powerLoops struct{ byAcc map[types.Object]*accLoop }
+
+var powerLoopsKey = &stateKey[powerLoops]{"power loops by accumulator"}
+
+func (fc *fnCtx) notePowerLoop(al *accLoop) {
+	pl := stateOf(fc, powerLoopsKey)
+	if pl.byAcc == nil {
+		pl.byAcc = make(map[types.Object]*accLoop)
+	}
+	pl.byAcc[al.acc] = al
+}
+
+// powerLoopOf returns the power loop whose accumulator is v, or nil.
+func (fc *fnCtx) powerLoopOf(v types.Object) *accLoop {
+	if pl := peekState(fc, powerLoopsKey); pl != nil {
+		return pl.byAcc[v]
+	}
+	return nil
+}
 
 // checkPowOverFactorial judges x^k/k! (with or without e^(−λ)): Poisson
 // probabilities, Erlang B and C terms, Taylor-series terms. The term is
@@ -130,7 +155,7 @@ func (fc *fnCtx) negated(e, x ast.Expr) bool {
 	}
 	a, ok1 := fc.affineOf(u.X, 0)
 	b, ok2 := fc.affineOf(x, 0)
-	if !ok1 || !ok2 || a.a != b.a || a.b != b.b {
+	if !ok1 || !ok2 || a.a() != b.a() || a.b() != b.b() {
 		return false
 	}
 	return a.v == nil && b.v == nil || sameVar(fc, a.v, b.v)

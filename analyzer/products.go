@@ -81,7 +81,7 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 			return
 		}
 	case *ast.Ident:
-		if al := fc.powLoops[fc.c.objOf(e)]; al != nil && e.Pos() > al.shape.stmt.End() {
+		if al := fc.powerLoopOf(fc.c.objOf(e)); al != nil && e.Pos() > al.shape.stmt.End() {
 			// The accumulator of a power loop, used after the loop.
 			t, _ := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
 			p.num = append(p.num, factor{math: "Pow", arg: al.mult, arg2: al.count, t: t})
@@ -150,15 +150,12 @@ func kindOfName(s string) facKind {
 // singleDef returns the one value a local variable is ever given, or nil
 // when it is assigned more than once, in a closure, by address, or is a
 // parameter.
-func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
-	obj := fc.c.objOf(id)
-	if obj == nil || !(fc.node.Pos() <= obj.Pos() && obj.Pos() < fc.node.End()) {
+func (d *definitions) singleDef(id *ast.Ident) ast.Expr {
+	obj := d.q.objOf(id)
+	if obj == nil || !(d.node.Pos() <= obj.Pos() && obj.Pos() < d.node.End()) {
 		return nil
 	}
-	if fc.defs == nil {
-		fc.collectDefs()
-	}
-	defs := fc.defs[obj]
+	defs := d.defsOf(obj)
 	if len(defs) != 1 {
 		return nil
 	}
@@ -167,15 +164,15 @@ func (fc *fnCtx) singleDef(id *ast.Ident) ast.Expr {
 
 // collectDefs records every value each local variable is given; a nil
 // value stands for a change the analyzer does not follow.
-func (fc *fnCtx) collectDefs() {
-	fc.defs = make(map[types.Object][]ast.Expr)
-	info := fc.c.pass.TypesInfo
+func (d *definitions) collectDefs() {
+	d.defs = make(map[types.Object][]ast.Expr)
+	info := d.q.info
 	note := func(lhs ast.Expr, rhs ast.Expr) {
-		if obj := fc.c.objOf(lhs); obj != nil {
-			fc.defs[obj] = append(fc.defs[obj], rhs)
+		if obj := d.q.objOf(lhs); obj != nil {
+			d.defs[obj] = append(d.defs[obj], rhs)
 		}
 	}
-	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+	ast.Inspect(funcBody(d.node), func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.AssignStmt:
 			for i, l := range n.Lhs {
@@ -190,9 +187,9 @@ func (fc *fnCtx) collectDefs() {
 			for i, name := range n.Names {
 				if obj := info.Defs[name]; obj != nil {
 					if len(n.Values) == len(n.Names) {
-						fc.defs[obj] = append(fc.defs[obj], n.Values[i])
+						d.defs[obj] = append(d.defs[obj], n.Values[i])
 					} else {
-						fc.defs[obj] = append(fc.defs[obj], nil, nil)
+						d.defs[obj] = append(d.defs[obj], nil, nil)
 					}
 				}
 			}
@@ -218,11 +215,24 @@ func (fc *fnCtx) collectDefs() {
 	})
 }
 
+// inlinedValues is the values of a function that a larger product
+// consumes, noted by the product that reads them (inlined).
+type inlinedValues struct{ set map[ast.Expr]bool }
+
+var inlinedKey = &stateKey[inlinedValues]{"values consumed by a larger product"}
+
 // inlined marks a variable's value as consumed by a larger expression,
 // so that it is not also judged on its own.
 func (fc *fnCtx) inlined(e ast.Expr) {
-	if fc.inl == nil {
-		fc.inl = make(map[ast.Expr]bool)
+	in := stateOf(fc, inlinedKey)
+	if in.set == nil {
+		in.set = make(map[ast.Expr]bool)
 	}
-	fc.inl[ast.Unparen(e)] = true
+	in.set[ast.Unparen(e)] = true
+}
+
+// isInlined reports whether a larger product consumes e (inlined).
+func (fc *fnCtx) isInlined(e ast.Expr) bool {
+	in := peekState(fc, inlinedKey)
+	return in != nil && in.set[ast.Unparen(e)]
 }

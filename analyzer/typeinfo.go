@@ -11,9 +11,21 @@ import (
 // Questions to the type checker about one expression: its constant value,
 // whether it is a conversion, the variable it names, the function it calls.
 
+// typeQueries is the part of a function context that asks the type
+// checker about one expression: its constant value, whether it converts,
+// the variable it names, its numeric type (numtype.go), its linear form
+// (linear.go). The checker asks the same questions through queries.
+type typeQueries struct {
+	info  *types.Info
+	sizes types.Sizes
+}
+
+// queries returns the pass's type queries.
+func (c *checker) queries() typeQueries { return typeQueries{c.pass.TypesInfo, c.pass.TypesSizes} }
+
 // intConst returns the value of a constant integer expression.
-func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[e]
+func (q typeQueries) intConst(e ast.Expr) (int64, bool) {
+	tv, ok := q.info.Types[e]
 	if !ok || tv.Value == nil {
 		return 0, false
 	}
@@ -25,8 +37,8 @@ func (fc *fnCtx) intConst(e ast.Expr) (int64, bool) {
 }
 
 // floatConst returns the value of a constant numeric expression.
-func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
-	tv, ok := fc.c.pass.TypesInfo.Types[ast.Unparen(e)]
+func (q typeQueries) floatConst(e ast.Expr) (float64, bool) {
+	tv, ok := q.info.Types[ast.Unparen(e)]
 	if !ok || tv.Value == nil {
 		return 0, false
 	}
@@ -39,29 +51,32 @@ func (fc *fnCtx) floatConst(e ast.Expr) (float64, bool) {
 }
 
 // stripConv removes parentheses and numeric conversions around e.
-func (fc *fnCtx) stripConv(e ast.Expr) ast.Expr {
+func (q typeQueries) stripConv(e ast.Expr) ast.Expr {
 	for {
 		e = ast.Unparen(e)
 		call, ok := e.(*ast.CallExpr)
-		if !ok || len(call.Args) != 1 || !fc.isConversion(call) {
+		if !ok || len(call.Args) != 1 || !q.isConversion(call) {
 			return e
 		}
 		e = call.Args[0]
 	}
 }
 
-func (fc *fnCtx) isConversion(call *ast.CallExpr) bool {
-	tv, ok := fc.c.pass.TypesInfo.Types[call.Fun]
+func (q typeQueries) isConversion(call *ast.CallExpr) bool {
+	tv, ok := q.info.Types[call.Fun]
 	return ok && tv.IsType()
 }
 
 // objOf returns the variable an identifier denotes.
-func (c *checker) objOf(e ast.Expr) types.Object {
+func (c *checker) objOf(e ast.Expr) types.Object { return c.queries().objOf(e) }
+
+// objOf returns the variable an identifier denotes.
+func (q typeQueries) objOf(e ast.Expr) types.Object {
 	id, ok := ast.Unparen(e).(*ast.Ident)
 	if !ok {
 		return nil
 	}
-	obj := c.pass.TypesInfo.ObjectOf(id)
+	obj := q.info.ObjectOf(id)
 	if _, ok := obj.(*types.Var); !ok {
 		return nil
 	}

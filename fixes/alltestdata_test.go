@@ -35,7 +35,7 @@ func srcPackages(t *testing.T, root string) []string {
 func testdataTree(t *testing.T) (dir string, patterns []string) {
 	t.Helper()
 	root := filepath.Join("..", "testdata", "src")
-	pkgs := srcPackages(t, root)
+	pkgs := append(srcPackages(t, root), analyzerCases...)
 	dir = gopath(t, root, pkgs...)
 	for _, p := range pkgs {
 		patterns = append(patterns, p+"/...")

@@ -10,8 +10,9 @@ import (
 )
 
 // fixPackages are the analysistest packages of the repository's testdata
-// whose directory names start with "fix": the real analyzer's findings
-// and their fixes, against hand-written .golden files.
+// whose directory names start with "fix", and the category packages
+// others add (caseDir finds those beside the analyzer): the real
+// analyzer's findings and their fixes, against hand-written .golden files.
 var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard", "fixconv", "fixseries", "fixexit"}
 
 func TestAnalyzerGolden(t *testing.T) {

@@ -192,7 +192,7 @@ func TestDifferential(t *testing.T) {
 		}
 		dir := gopath(t, root, some...)
 		for _, p := range some {
-			copyDir(t, filepath.Join(root, p), filepath.Join(mod, "orig", p), false)
+			copyDir(t, caseDir(root, p), filepath.Join(mod, "orig", p), false)
 		}
 		applyFirstFixes(t, dir, a, some...)
 		for _, p := range some {
@@ -233,8 +233,8 @@ func analyzerPackage(p string) bool {
 	return false
 }
 
-// pkgIdent turns a package directory named after a category
-// (lgamma-sign) into an identifier for the generated program's imports.
+// pkgIdent turns a package directory whose name has a hyphen into an
+// identifier for the generated program's imports.
 func pkgIdent(p string) string { return strings.ReplaceAll(p, "-", "_") }
 
 func diffPackages(cases []diffCase) []string {

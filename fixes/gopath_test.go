@@ -3,6 +3,7 @@ package fixes_test
 import (
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 
@@ -18,10 +19,24 @@ func gopath(t *testing.T, srcRoot string, pkgs ...string) string {
 	t.Helper()
 	dir := t.TempDir()
 	for _, p := range pkgs {
-		copyDir(t, filepath.Join(srcRoot, p), filepath.Join(dir, "src", p), true)
+		copyDir(t, caseDir(srcRoot, p), filepath.Join(dir, "src", p), true)
 	}
 	copyDir(t, "lgamma", filepath.Join(dir, "src", filepath.FromSlash(fixes.HelperPath)), false)
 	return dir
+}
+
+// analyzerCases are the log-space categories' case packages. They live
+// beside the analyzer, in analyzer/testdata/src, one per category; the
+// fixer's golden and differential tests build them too.
+var analyzerCases = []string{"lgammasign", "lgammadigits", "lgammainteger", "lgammaoverflow", "stirlingapproximation"}
+
+// caseDir returns the directory of the testdata package p: beside the
+// analyzer for one of analyzerCases, under srcRoot otherwise.
+func caseDir(srcRoot, p string) string {
+	if slices.Contains(analyzerCases, p) {
+		return filepath.Join("..", "analyzer", "testdata", "src", p)
+	}
+	return filepath.Join(srcRoot, p)
 }
 
 // copyDir copies the files of from into to; goldens only when withGolden,

@@ -6,18 +6,33 @@ import (
 	"go/token"
 	"go/types"
 	"math"
+	"math/big"
+
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // linear is an expression c + Σ coef·v over variables v, with exact
-// constants (go/constant keeps 1.0/6 as the rational 1/6). Comparing operands as linear forms lets the fixer see that
-// n-k and -(k-n) are the same, or that a+b+c is the n of a multinomial.
-type linear struct {
-	c     constant.Value
-	terms map[types.Object]constant.Value
-}
+// rational coefficients (1.0/6 stays the rational 1/6). Comparing operands
+// as linear forms lets the fixer see that n-k and -(k-n) are the same, or
+// that a+b+c is the n of a multinomial. Its arithmetic is
+// internal/linform's; the methods below convert.
+type linear linform.Form[linform.Obj, *big.Rat, linform.Rat]
 
-func newLinear() linear {
-	return linear{c: constant.MakeInt64(0), terms: make(map[types.Object]constant.Value)}
+type lform = linform.Form[linform.Obj, *big.Rat, linform.Rat]
+
+func newLinear() linear { return linear{C: linform.SharedInt(0)} }
+
+// ratOf returns a numeric constant as an exact rational; false for
+// anything else (a string, a complex number, an overflowing float).
+func ratOf(v constant.Value) (*big.Rat, bool) {
+	switch x := constant.Val(constant.ToFloat(v)).(type) {
+	case *big.Rat:
+		return x, true
+	case *big.Float:
+		r, _ := x.Rat(nil)
+		return r, r != nil
+	}
+	return nil, false
 }
 
 // linearOf reads e as a linear form. It reports false for anything but
@@ -29,8 +44,9 @@ func (b *builder) linearOf(e ast.Expr) (linear, bool) {
 		if k := tv.Value.Kind(); k != constant.Int && k != constant.Float {
 			return l, false
 		}
-		l.c = tv.Value
-		return l, true
+		c, ok := ratOf(tv.Value)
+		l.C = c
+		return l, ok
 	}
 	switch e := e.(type) {
 	case *ast.ParenExpr:
@@ -41,11 +57,13 @@ func (b *builder) linearOf(e ast.Expr) (linear, bool) {
 		}
 	case *ast.Ident:
 		v, ok := b.pass.TypesInfo.Uses[e].(*types.Var)
-		l.terms[v] = constant.MakeInt64(1)
-		return l, ok
+		if !ok {
+			return l, false
+		}
+		return varLinear(v), true
 	case *ast.UnaryExpr:
 		x, ok := b.linearOf(e.X)
-		return x.scale(constant.MakeInt64(-1)), ok && e.Op == token.SUB
+		return x.neg(), ok && e.Op == token.SUB
 	case *ast.BinaryExpr:
 		return b.linearBinary(e)
 	}
@@ -64,16 +82,16 @@ func (b *builder) linearBinary(e *ast.BinaryExpr) (linear, bool) {
 	case token.SUB:
 		return x.add(y.neg()), true
 	case token.MUL:
-		if len(y.terms) == 0 {
-			return x.scale(y.c), true
+		if len(y.Terms) == 0 {
+			return x.scaleRat(y.C), true
 		}
-		if len(x.terms) == 0 {
-			return y.scale(x.c), true
+		if len(x.Terms) == 0 {
+			return y.scaleRat(x.C), true
 		}
 	case token.QUO:
 		// Only float division is exact; an integer (v+1)/2 truncates.
-		if len(y.terms) == 0 && constant.Sign(y.c) != 0 && classOf(b.pass.TypesInfo.TypeOf(e)) == classFloat {
-			return x.scale(constant.BinaryOp(constant.MakeInt64(1), token.QUO, y.c)), true
+		if len(y.Terms) == 0 && ratDomain.Sign(y.C) != 0 && classOf(b.pass.TypesInfo.TypeOf(e)) == classFloat {
+			return x.scaleRat(new(big.Rat).Inv(y.C)), true
 		}
 	}
 	return x, false
@@ -91,36 +109,31 @@ func (b *builder) isNumericConversion(e *ast.CallExpr) bool {
 	return to != classOther && from != classOther && (to == classFloat || from != classFloat)
 }
 
+var ratDomain linform.Rat
+
+// scale returns k·l; k is a numeric constant.
 func (l linear) scale(k constant.Value) linear {
-	out := linear{c: constant.BinaryOp(l.c, token.MUL, k), terms: make(map[types.Object]constant.Value)}
-	for v, c := range l.terms {
-		out.terms[v] = constant.BinaryOp(c, token.MUL, k)
+	r, ok := ratOf(k)
+	if !ok {
+		panic("fixes: scaling a linear form by a non-numeric constant")
 	}
-	return out
+	return l.scaleRat(r)
 }
 
-func (l linear) neg() linear { return l.scale(constant.MakeInt64(-1)) }
+func (l linear) scaleRat(k *big.Rat) linear { return linear(lform(l).Scale(k)) }
 
-func (l linear) add(m linear) linear {
-	out := l.scale(constant.MakeInt64(1))
-	out.c = constant.BinaryOp(out.c, token.ADD, m.c)
-	for v, c := range m.terms {
-		if old, ok := out.terms[v]; ok {
-			c = constant.BinaryOp(old, token.ADD, c)
-		}
-		out.terms[v] = c
-	}
-	return out
-}
+func (l linear) neg() linear { return linear(lform(l).Neg()) }
+
+func (l linear) add(m linear) linear { return linear(lform(l).Add(lform(m))) }
 
 func (l linear) equal(m linear) bool {
-	d := l.add(m.neg())
-	for _, c := range d.terms {
-		if constant.Sign(c) != 0 {
-			return false
-		}
-	}
-	return closeConst(l.c, m.c)
+	return lform(l).Sub(lform(m)).IsConst() && closeConst(l.C, m.C)
+}
+
+func constLinear(c int64) linear { return linear{C: linform.SharedInt(c)} }
+
+func varLinear(v types.Object) linear {
+	return linear(linform.Single[linform.Obj, *big.Rat, linform.Rat](linform.Obj{Object: v}))
 }
 
 // closeConst reports whether two constants are equal, or (for floats)
@@ -128,16 +141,23 @@ func (l linear) equal(m linear) bool {
 // untyped 5.0/6 passed to math.Pow rounded to float64, which need not be
 // exactly 1 − float64(1.0/6), yet the two differ far inside the 1e-12 the
 // fixes promise.
-func closeConst(a, b constant.Value) bool {
-	if constant.Compare(a, token.EQL, b) {
+func closeConst(a, b *big.Rat) bool {
+	if ratDomain.Sign(ratDomain.Add(a, new(big.Rat).Neg(orZero(b)))) == 0 {
 		return true
 	}
-	if a.Kind() != constant.Float && b.Kind() != constant.Float {
+	if orZero(a).IsInt() && orZero(b).IsInt() {
 		return false
 	}
-	x, _ := constant.Float64Val(a)
-	y, _ := constant.Float64Val(b)
+	x, _ := orZero(a).Float64()
+	y, _ := orZero(b).Float64()
 	return math.Abs(x-y) <= 4e-16*math.Max(math.Abs(x), math.Abs(y))
+}
+
+func orZero(r *big.Rat) *big.Rat {
+	if r == nil {
+		return new(big.Rat)
+	}
+	return r
 }
 
 // sumIs reports whether the operands add up to n identically.

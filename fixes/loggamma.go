@@ -104,8 +104,7 @@ func (b *builder) checkLogForm() error {
 
 // logPattern returns the log-gamma terms of the match's shape.
 func (b *builder) logPattern(o []linear) ([]wterm, error) {
-	one := newLinear()
-	one.c = constantOne
+	one := linearOne()
 	p, m := constant.MakeInt64(1), constant.MakeInt64(-1)
 	switch {
 	case b.m.Shape == ShapeExpChoose && len(o) == 2:

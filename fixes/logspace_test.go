@@ -9,26 +9,26 @@ import (
 // their fixes, written by hand from the identities in lgammasign.go and
 // stirling.go, and run in the differential test against math/big.
 func init() {
-	fixPackages = append(fixPackages, "lgamma-sign", "stirling-approximation")
+	fixPackages = append(fixPackages, "lgammasign", "stirlingapproximation")
 	diffCases = append(diffCases,
 		// Γ at half-integers and integers, negative ones included, where
 		// the dropped sign is wrong on (−1, 0), (−3, −2), …
-		diffCase{pkg: "lgamma-sign", fn: "PowerLawDerivative", loops: []string{"k := -13; k <= 9; k++"}, args: "1, float64(k) / 2, 0.5, 1", typ: "float64", ref: refPowerLaw},
-		diffCase{pkg: "lgamma-sign", fn: "RelaxationWeight", loops: []string{"k := -13; k <= 9; k++"}, args: "float64(k) / 2", typ: "float64", ref: refRelaxation},
-		diffCase{pkg: "lgamma-sign", fn: "ShellVolume", loops: []string{"d := -13; d <= 20; d++"}, args: "d", typ: "float64", ref: refShellVolume},
-		diffCase{pkg: "lgamma-sign", fn: "HalfStep", loops: []string{"k := -3; k <= -2; k++"}, args: "float64(k) / 2", typ: "float64", ref: refHalfStep},
-		diffCase{pkg: "lgamma-sign", fn: "Reflected", loops: []string{"n := 0; n <= 10; n++", "k := -3; k <= 8; k++"}, args: "float64(n), float64(k) / 2", typ: "float64", ref: refReflected},
+		diffCase{pkg: "lgammasign", fn: "PowerLawDerivative", loops: []string{"k := -13; k <= 9; k++"}, args: "1, float64(k) / 2, 0.5, 1", typ: "float64", ref: refPowerLaw},
+		diffCase{pkg: "lgammasign", fn: "RelaxationWeight", loops: []string{"k := -13; k <= 9; k++"}, args: "float64(k) / 2", typ: "float64", ref: refRelaxation},
+		diffCase{pkg: "lgammasign", fn: "ShellVolume", loops: []string{"d := -13; d <= 20; d++"}, args: "d", typ: "float64", ref: refShellVolume},
+		diffCase{pkg: "lgammasign", fn: "HalfStep", loops: []string{"k := -3; k <= -2; k++"}, args: "float64(k) / 2", typ: "float64", ref: refHalfStep},
+		diffCase{pkg: "lgammasign", fn: "Reflected", loops: []string{"n := 0; n <= 10; n++", "k := -3; k <= 8; k++"}, args: "float64(n), float64(k) / 2", typ: "float64", ref: refReflected},
 		// n! by Stirling's formula: 1/(12n) off everywhere, +Inf from
 		// 144 where it forms n^n.
-		diffCase{pkg: "stirling-approximation", fn: "Shuffles", loops: []string{"n := 1; n <= 175; n++"}, args: "n", typ: "float64", ref: refFactorial},
-		diffCase{pkg: "stirling-approximation", fn: "OddsTable", loops: []string{"n := 1; n <= 12; n++"}, args: "n", typ: "float64", ref: refFactorial, call: "OddsTable()[n]"},
-		diffCase{pkg: "stirling-approximation", fn: "ErlangWeight", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
-		diffCase{pkg: "stirling-approximation", fn: "StaffingBound", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
-		diffCase{pkg: "stirling-approximation", fn: "LargeQueue", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
-		diffCase{pkg: "stirling-approximation", fn: "DropletCount", loops: []string{"n := 1; n <= 175; n++"}, args: "float64(n)", typ: "float64", ref: refFactorial},
-		diffCase{pkg: "stirling-approximation", fn: "DropletEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "float64(n)", typ: "float64", ref: refLogFactorial},
-		diffCase{pkg: "stirling-approximation", fn: "MixingEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
-		diffCase{pkg: "stirling-approximation", fn: "Microstates", loops: []string{"n := 100; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
+		diffCase{pkg: "stirlingapproximation", fn: "Shuffles", loops: []string{"n := 1; n <= 175; n++"}, args: "n", typ: "float64", ref: refFactorial},
+		diffCase{pkg: "stirlingapproximation", fn: "OddsTable", loops: []string{"n := 1; n <= 12; n++"}, args: "n", typ: "float64", ref: refFactorial, call: "OddsTable()[n]"},
+		diffCase{pkg: "stirlingapproximation", fn: "ErlangWeight", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
+		diffCase{pkg: "stirlingapproximation", fn: "StaffingBound", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
+		diffCase{pkg: "stirlingapproximation", fn: "LargeQueue", loops: []string{"a := 1; a <= 16; a *= 2", "c := 1; c <= 170; c += 3"}, args: "float64(a) / 2, c", typ: "float64", ref: refPowFact},
+		diffCase{pkg: "stirlingapproximation", fn: "DropletCount", loops: []string{"n := 1; n <= 175; n++"}, args: "float64(n)", typ: "float64", ref: refFactorial},
+		diffCase{pkg: "stirlingapproximation", fn: "DropletEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "float64(n)", typ: "float64", ref: refLogFactorial},
+		diffCase{pkg: "stirlingapproximation", fn: "MixingEntropy", loops: []string{"n := 1; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
+		diffCase{pkg: "stirlingapproximation", fn: "Microstates", loops: []string{"n := 100; n <= 3000; n += 7"}, args: "n", typ: "float64", ref: refLogFactorial},
 	)
 }
 

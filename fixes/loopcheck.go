@@ -4,9 +4,10 @@ import (
 	"errors"
 	"fmt"
 	"go/ast"
-	"go/constant"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // checkLoop checks on its own that the loop computes what the match says,
@@ -39,8 +40,7 @@ func (b *builder) checkLoop(loop ast.Stmt, acc types.Object) error {
 	if err != nil {
 		return err
 	}
-	one := newLinear()
-	one.c = constantOne
+	one := linearOne()
 	// F and G as functions of j: substitute i = lo + j.
 	jf, restF := split(f, iv, lo)
 	fOK := jf == -1 && restF.equal(n) || jf == 1 && restF.equal(n.add(k.neg()).add(one))
@@ -63,17 +63,17 @@ func (b *builder) checkLoop(loop ast.Stmt, acc types.Object) error {
 // split writes l, a form in the induction variable iv, as c·j + rest with
 // i = lo + j, and returns c (0 when not ±1 or 0) and rest.
 func split(l linear, iv types.Object, lo linear) (int64, linear) {
-	coef, ok := l.terms[iv]
-	rest := l.add(newLinear())
-	delete(rest.terms, iv)
-	if !ok {
+	v := linform.Obj{Object: iv}
+	coef, ok := lform(l).Coef(v)
+	rest := linear(lform(l).Without(v))
+	if !ok || !coef.IsInt() || !coef.Num().IsInt64() {
 		return 0, rest
 	}
-	c, exact := constant.Int64Val(constant.ToInt(coef))
-	if !exact || c != 1 && c != -1 {
+	c := coef.Num().Int64()
+	if c != 1 && c != -1 {
 		return 0, rest
 	}
-	return c, rest.add(lo.scale(coef))
+	return c, rest.add(lo.scaleRat(coef))
 }
 
 // counter reads the loop's induction variable, its first value, its trip
@@ -109,8 +109,7 @@ func (b *builder) counter(loop ast.Stmt) (types.Object, linear, linear, *ast.Blo
 		}
 		count := hi.add(lo.neg())
 		if cond.Op == token.LEQ {
-			one := newLinear()
-			one.c = constantOne
+			one := linearOne()
 			count = count.add(one)
 		}
 		return b.pass.TypesInfo.Defs[id], lo, count, l.Body, nil

@@ -147,7 +147,7 @@ func (b *builder) modelBody(loop ast.Stmt, acc types.Object) ([]types.Object, er
 			return false
 		}
 		if id, ok := n.(*ast.Ident); ok {
-			if obj := b.pass.TypesInfo.Uses[id]; obj != nil && b.assignedIn(obj, loop) && !(loop.Pos() <= obj.Pos() && obj.Pos() < loop.End()) && obj != acc {
+			if obj := b.pass.TypesInfo.Uses[id]; obj != nil && b.assigned(obj, loop) && !(loop.Pos() <= obj.Pos() && obj.Pos() < loop.End()) && obj != acc {
 				bad = fmt.Errorf("the loop's header reads %s, which the loop steps", obj.Name())
 			}
 		}
@@ -210,11 +210,6 @@ func (b *builder) plain(n ast.Node) bool {
 		return ok
 	})
 	return ok
-}
-
-// assignedIn reports whether n assigns v, takes its address or steps it.
-func (b *builder) assignedIn(v types.Object, n ast.Node) bool {
-	return b.assigned(v, n)
 }
 
 // funcBody returns the body of the match's function.
@@ -366,10 +361,10 @@ func (b *builder) entryValueAt(e ast.Expr, pos token.Pos) error {
 		case *ast.FuncLit:
 			// A closure may run at any time: one that assigns the
 			// operand makes its value unknown.
-			changed = b.assignedIn(v, n)
+			changed = b.assigned(v, n)
 			return false
 		case *ast.AssignStmt, *ast.IncDecStmt, *ast.UnaryExpr, *ast.RangeStmt:
-			changed = b.assignedIn(v, n)
+			changed = b.assigned(v, n)
 		case *ast.SelectorExpr:
 			// A field written through any path, or a call that could
 			// write it through a pointer, is a change too.

@@ -4,11 +4,11 @@ import (
 	"errors"
 	"fmt"
 	"go/ast"
-	"go/constant"
 	"go/token"
 	"go/types"
 	"strings"
 
+	"github.com/overfact/overfact/internal/assigned"
 	"github.com/overfact/overfact/internal/astpath"
 )
 
@@ -255,47 +255,22 @@ func (b *builder) runningUpdate(body *ast.BlockStmt, acc types.Object, want line
 	return update, nil
 }
 
-func constLinear(c int64) linear {
-	l := newLinear()
-	l.c = constant.MakeInt64(c)
-	return l
-}
-
-func varLinear(v types.Object) linear {
-	l := newLinear()
-	l.terms[v] = constant.MakeInt64(1)
-	return l
-}
-
 // assigns reports whether n, or a statement nested in it, assigns obj.
 func (b *builder) assigns(n ast.Node, obj types.Object) bool {
 	return b.countWrites(n, obj, true) > 0
 }
 
-// writes counts the statements of the file that assign obj (its
-// address taken counts as one).
+// writes counts the changes of obj in the file (internal/assigned: an
+// assignment, ++ or --, a range clause, its address taken).
 func (b *builder) writes(obj types.Object) int {
 	return b.countWrites(b.file, obj, false)
 }
 
 func (b *builder) countWrites(root ast.Node, obj types.Object, first bool) int {
 	n := 0
-	ast.Inspect(root, func(x ast.Node) bool {
-		switch x := x.(type) {
-		case *ast.AssignStmt:
-			for _, l := range x.Lhs {
-				if b.isObj(l, obj) {
-					n++
-				}
-			}
-		case *ast.IncDecStmt:
-			if b.isObj(x.X, obj) {
-				n++
-			}
-		case *ast.UnaryExpr:
-			if x.Op == token.AND && b.isObj(x.X, obj) {
-				n++
-			}
+	assigned.Each(b.pass.TypesInfo, root, nil, func(v types.Object, _ ast.Node) bool {
+		if v == obj {
+			n++
 		}
 		return !first || n == 0
 	})

@@ -3,14 +3,11 @@ package fixes
 import (
 	"fmt"
 	"go/ast"
-	"go/constant"
 	"go/token"
 	"go/types"
 
 	"golang.org/x/tools/go/types/typeutil"
 )
-
-var constantOne = constant.MakeInt64(1)
 
 // The analyzer finds the shapes; before replacing an expression, the
 // fixer checks on its own that the expression is that shape of the match's

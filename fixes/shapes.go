@@ -144,7 +144,5 @@ func factorialValueFactors(b *builder, o []linear) (num, den []factorPattern, al
 
 // linearOne is the constant form 1.
 func linearOne() linear {
-	one := newLinear()
-	one.c = constantOne
-	return one
+	return constLinear(1)
 }

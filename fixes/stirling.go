@@ -135,28 +135,15 @@ func (b *builder) absorbChain(keep map[types.Object]bool) ([]ast.Node, error) {
 // it is reading the operand, and it stays where it is.
 func (b *builder) aliasOf(v types.Object, keep map[types.Object]bool) bool {
 	var def ast.Expr
-	writes := 0
 	ast.Inspect(b.funcBody(), func(n ast.Node) bool {
 		if s, ok := n.(ast.Stmt); ok && b.definedVar(s) == v {
 			if as, ok := s.(*ast.AssignStmt); ok {
 				def = as.Rhs[0]
 			}
 		}
-		if as, ok := n.(*ast.AssignStmt); ok {
-			for _, l := range as.Lhs {
-				if id, ok := l.(*ast.Ident); ok && (b.pass.TypesInfo.Uses[id] == v || b.pass.TypesInfo.Defs[id] == v) {
-					writes++
-				}
-			}
-		}
-		if inc, ok := n.(*ast.IncDecStmt); ok {
-			if id, ok := inc.X.(*ast.Ident); ok && b.pass.TypesInfo.Uses[id] == v {
-				writes++
-			}
-		}
 		return true
 	})
-	if def == nil || writes != 1 {
+	if def == nil || b.countWrites(b.funcBody(), v, false) != 1 {
 		return false
 	}
 	e := ast.Unparen(def)

@@ -6,6 +6,8 @@ import (
 	"go/types"
 	"math/big"
 	"strings"
+
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // Sym is a variable of the function: a local or parameter (Obj), a
@@ -40,9 +42,10 @@ func (s Sym) Name() string {
 	return s.Obj.Name()
 }
 
-// before orders variables by position, ties broken by kind, so that
-// two different variables never compare equal.
-func (s Sym) before(t Sym) bool {
+// Before orders variables by position, ties broken by kind, so that
+// two different variables never compare equal (the order of the terms
+// of an Affine).
+func (s Sym) Before(t Sym) bool {
 	if p, q := s.pos(), t.pos(); p != q {
 		return p < q
 	}
@@ -95,68 +98,31 @@ func (s Sym) isLen() bool {
 }
 
 // Lin is one term k·Sym of an affine form.
-type Lin struct {
-	Sym Sym
-	K   *big.Rat
-}
+type Lin = linform.Term[Sym, *big.Rat]
+
+// form is the shared implementation of linear forms over the value
+// model's variables, with exact rational coefficients.
+type form = linform.Form[Sym, *big.Rat, linform.Rat]
 
 // Affine is C + Σ K·Sym with rational coefficients, terms sorted by
-// the position of their variable and no zero coefficient.
-type Affine struct {
-	C     *big.Rat
-	Terms []Lin
-}
+// the position of their variable and no zero coefficient. Its
+// arithmetic is internal/linform's; the methods below convert.
+type Affine form
+
+var ratDomain linform.Rat
 
 func rat(n int64) *big.Rat { return big.NewRat(n, 1) }
 
-// smallRats holds the integers −64…64 as rationals that are only ever
-// read: forms share them instead of allocating.
-var smallRats = func() (out [129]*big.Rat) {
-	for i := range out {
-		out[i] = big.NewRat(int64(i-64), 1)
-	}
-	return out
-}()
-
 // shared returns n as a rational the caller must not modify.
-func shared(n int64) *big.Rat {
-	if n >= -64 && n <= 64 {
-		return smallRats[n+64]
-	}
-	return big.NewRat(n, 1)
-}
+func shared(n int64) *big.Rat { return linform.SharedInt(n) }
 
 var ratOne = shared(1)
 
-// smallInt64 returns r as an int64 when it is an integer of at most
-// 2^30 in size, where sums and products of two stay exact in int64.
-func smallInt64(r *big.Rat) (int64, bool) {
-	if !r.IsInt() || !r.Num().IsInt64() {
-		return 0, false
-	}
-	v := r.Num().Int64()
-	return v, v >= -1<<30 && v <= 1<<30
-}
-
 // addRat returns x+y, shared when both are small integers.
-func addRat(x, y *big.Rat) *big.Rat {
-	if a, ok := smallInt64(x); ok {
-		if b, ok := smallInt64(y); ok {
-			return shared(a + b)
-		}
-	}
-	return new(big.Rat).Add(x, y)
-}
+func addRat(x, y *big.Rat) *big.Rat { return ratDomain.Add(x, y) }
 
 // mulRat returns x·y, shared when both are small integers.
-func mulRat(x, y *big.Rat) *big.Rat {
-	if a, ok := smallInt64(x); ok {
-		if b, ok := smallInt64(y); ok {
-			return shared(a * b)
-		}
-	}
-	return new(big.Rat).Mul(x, y)
-}
+func mulRat(x, y *big.Rat) *big.Rat { return ratDomain.Mul(x, y) }
 
 // Const returns the constant form c.
 func Const(c *big.Rat) Affine { return Affine{C: new(big.Rat).Set(c)} }
@@ -165,7 +131,7 @@ func Const(c *big.Rat) Affine { return Affine{C: new(big.Rat).Set(c)} }
 func Int(n int64) Affine { return Affine{C: shared(n)} }
 
 // Var returns the form 1·s.
-func Var(s Sym) Affine { return Affine{C: shared(0), Terms: []Lin{{s, ratOne}}} }
+func Var(s Sym) Affine { return Affine(linform.Single[Sym, *big.Rat, linform.Rat](s)) }
 
 // c returns the constant of a, which the caller must not modify.
 func (a Affine) c() *big.Rat {
@@ -175,59 +141,25 @@ func (a Affine) c() *big.Rat {
 	return a.C
 }
 
-// Add returns a+b, merging the two sorted term lists.
-func (a Affine) Add(b Affine) Affine {
-	out := Affine{C: addRat(a.c(), b.c())}
-	if len(a.Terms)+len(b.Terms) > 0 {
-		out.Terms = make([]Lin, 0, len(a.Terms)+len(b.Terms))
-	}
-	i, j := 0, 0
-	for i < len(a.Terms) || j < len(b.Terms) {
-		switch {
-		case j == len(b.Terms) || i < len(a.Terms) && a.Terms[i].Sym.before(b.Terms[j].Sym):
-			out.Terms = append(out.Terms, a.Terms[i])
-			i++
-		case i == len(a.Terms) || b.Terms[j].Sym.before(a.Terms[i].Sym):
-			out.Terms = append(out.Terms, b.Terms[j])
-			j++
-		default: // the same variable
-			if k := addRat(a.Terms[i].K, b.Terms[j].K); k.Sign() != 0 {
-				out.Terms = append(out.Terms, Lin{a.Terms[i].Sym, k})
-			}
-			i++
-			j++
-		}
-	}
-	return out
-}
+// Add returns a+b.
+func (a Affine) Add(b Affine) Affine { return Affine(form(a).Add(form(b))) }
 
 // Scale returns r·a.
-func (a Affine) Scale(r *big.Rat) Affine {
-	out := Affine{C: mulRat(a.c(), r)}
-	if r.Sign() == 0 {
-		return out
-	}
-	for _, l := range a.Terms {
-		out.Terms = append(out.Terms, Lin{l.Sym, mulRat(l.K, r)})
-	}
-	return out
-}
+func (a Affine) Scale(r *big.Rat) Affine { return Affine(form(a).Scale(r)) }
 
 // Sub returns a−b.
-func (a Affine) Sub(b Affine) Affine { return a.Add(b.Scale(shared(-1))) }
+func (a Affine) Sub(b Affine) Affine { return Affine(form(a).Sub(form(b))) }
 
 // Shift returns a+n.
-func (a Affine) Shift(n int64) Affine { return a.Add(Int(n)) }
+func (a Affine) Shift(n int64) Affine { return Affine(form(a).Shift(n)) }
 
 // IsConst reports whether a has no variable.
-func (a Affine) IsConst() bool { return len(a.Terms) == 0 }
+func (a Affine) IsConst() bool { return form(a).IsConst() }
 
 // Coef returns the coefficient of s (0 when absent).
 func (a Affine) Coef(s Sym) *big.Rat {
-	for _, l := range a.Terms {
-		if l.Sym == s {
-			return l.K
-		}
+	if k, ok := form(a).Coef(s); ok {
+		return k
 	}
 	return new(big.Rat)
 }
@@ -236,19 +168,10 @@ func (a Affine) Coef(s Sym) *big.Rat {
 func (a Affine) Has(s Sym) bool { return a.Coef(s).Sign() != 0 }
 
 // Equal reports whether a and b are the same form.
-func (a Affine) Equal(b Affine) bool {
-	d := a.Sub(b)
-	return d.IsConst() && d.c().Sign() == 0
-}
+func (a Affine) Equal(b Affine) bool { return form(a).Equal(form(b)) }
 
 // Subst replaces s by v in a.
-func (a Affine) Subst(s Sym, v Affine) Affine {
-	k := a.Coef(s)
-	if k.Sign() == 0 {
-		return a
-	}
-	return a.Sub(Var(s).Scale(k)).Add(v.Scale(k))
-}
+func (a Affine) Subst(s Sym, v Affine) Affine { return Affine(form(a).Subst(s, form(v))) }
 
 // Integral reports whether every coefficient and the constant are
 // integers.
@@ -265,13 +188,7 @@ func (a Affine) Integral() bool {
 }
 
 // Syms returns the variables of a.
-func (a Affine) Syms() []Sym {
-	var out []Sym
-	for _, l := range a.Terms {
-		out = append(out, l.Sym)
-	}
-	return out
-}
+func (a Affine) Syms() []Sym { return form(a).Syms() }
 
 // String renders a as code would: "2*k + 1", "n - k".
 func (a Affine) String() string {

@@ -257,7 +257,7 @@ func (l *loader) check(order []*packages.Package) {
 func (l *loader) load(p *packages.Package) {
 	switch {
 	case p.PkgPath == "unsafe":
-		p.Syntax, p.TypesInfo = []*ast.File{}, newInfo()
+		p.Syntax, p.TypesInfo = []*ast.File{}, NewTypesInfo()
 	case l.source[p] && (len(p.CompiledGoFiles) > 0 || p.ExportFile == ""):
 		p.Errors = slices.DeleteFunc(p.Errors, buildFailure)
 		l.fromSource(p)
@@ -341,7 +341,7 @@ func (l *loader) fromSource(p *packages.Package) {
 		appendError(err)
 	}
 	p.Syntax = files
-	p.TypesInfo = newInfo()
+	p.TypesInfo = NewTypesInfo()
 	importer := importerFunc(func(path string) (*types.Package, error) {
 		if path == "unsafe" {
 			return types.Unsafe, nil
@@ -432,7 +432,10 @@ func parallel(n int, f func(int)) {
 	wg.Wait()
 }
 
-func newInfo() *types.Info {
+// NewTypesInfo returns a types.Info with every map the analysis API
+// promises a pass (the driver, the language server and the fuzz target
+// type-check with it).
+func NewTypesInfo() *types.Info {
 	return &types.Info{
 		Types:        make(map[ast.Expr]types.TypeAndValue),
 		Defs:         make(map[*ast.Ident]types.Object),

@@ -15,6 +15,7 @@ import (
 	"sync"
 
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/driver"
 )
 
 // Checker parses and type-checks in-memory packages. All of them share one
@@ -125,7 +126,7 @@ func (c *Checker) Check(path string, src map[string][]byte) (*Package, error) {
 	if len(files) == 0 {
 		return nil, fmt.Errorf("no files")
 	}
-	info := newInfo()
+	info := driver.NewTypesInfo()
 	conf := types.Config{Importer: c, GoVersion: "go1.26", Sizes: types.SizesFor("gc", "amd64")}
 	pkg, err := conf.Check(path, c.Fset, files, info)
 	if err != nil {

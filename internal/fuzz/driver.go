@@ -27,20 +27,6 @@ type Package struct {
 	Info  *types.Info
 }
 
-// newInfo returns a types.Info with every map the analysis API promises.
-func newInfo() *types.Info {
-	return &types.Info{
-		Types:        map[ast.Expr]types.TypeAndValue{},
-		Instances:    map[*ast.Ident]types.Instance{},
-		Defs:         map[*ast.Ident]types.Object{},
-		Uses:         map[*ast.Ident]types.Object{},
-		Implicits:    map[ast.Node]types.Object{},
-		Selections:   map[*ast.SelectorExpr]*types.Selection{},
-		Scopes:       map[ast.Node]*types.Scope{},
-		FileVersions: map[*ast.File]string{},
-	}
-}
-
 // Run runs a, after what it requires, on pkg and returns a's diagnostics.
 // Facts about other packages are never present (dependencies are not
 // analysed), which is what an analyzer sees for any package without

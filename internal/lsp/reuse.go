@@ -17,6 +17,8 @@ import (
 	"sync"
 
 	"golang.org/x/tools/go/packages"
+
+	"github.com/overfact/overfact/internal/driver"
 )
 
 // loadCache keeps the last few packages loaded with their dependencies, so
@@ -217,16 +219,7 @@ func recheck(pkg *packages.Package, overlay map[string][]byte) (*packages.Packag
 		}
 		files = append(files, f)
 	}
-	info := &types.Info{
-		Types:        make(map[ast.Expr]types.TypeAndValue),
-		Defs:         make(map[*ast.Ident]types.Object),
-		Uses:         make(map[*ast.Ident]types.Object),
-		Implicits:    make(map[ast.Node]types.Object),
-		Instances:    make(map[*ast.Ident]types.Instance),
-		Scopes:       make(map[ast.Node]*types.Scope),
-		Selections:   make(map[*ast.SelectorExpr]*types.Selection),
-		FileVersions: make(map[*ast.File]string),
-	}
+	info := driver.NewTypesInfo()
 	var typeErrors []types.Error
 	tc := &types.Config{
 		Importer: importerFunc(func(path string) (*types.Package, error) {

@@ -14,12 +14,10 @@ import (
 	"golang.org/x/tools/go/analysis"
 )
 
-// Levels of a result (§3.27.10).
-const (
-	LevelError   = "error"
-	LevelWarning = "warning"
-	LevelNote    = "note"
-)
+// LevelWarning is the level of a result (§3.27.10) whose rule names
+// none. Rules take their levels from the analyzer's severities, which are
+// SARIF's words ("error", "warning").
+const LevelWarning = "warning"
 
 // A Rule describes one category of finding; it becomes a
 // reportingDescriptor whose id is the diagnostic category.
@@ -82,9 +80,6 @@ func NewBuilder(tool ToolComponent, rules []Rule, root string) (*Builder, error)
 	}
 	return b, nil
 }
-
-// Log returns the log built so far.
-func (b *Builder) Log() *Log { return &b.log }
 
 // Write encodes the log as indented JSON.
 func (b *Builder) Write(w io.Writer) error {

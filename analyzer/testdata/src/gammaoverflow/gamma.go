@@ -33,3 +33,19 @@ func Small(w float64) float64 {
 func Bare(x float64) float64 { // want Bare:`value Γ\(p0\), wrong once p0 ≥ 171\.624377`
 	return math.Gamma(x)
 }
+
+// ClosureRanges bounds x, but a closure made before the bound sets x by
+// ranging over xs and runs after it: the bound no longer holds.
+func ClosureRanges(x, w float64, xs []float64) {
+	next := func() {
+		for _, x = range xs {
+		}
+	}
+	if x > 170 {
+		return
+	}
+	next()
+	weighted = w * math.Gamma(x) // want `math.Gamma`
+}
+
+var weighted float64
