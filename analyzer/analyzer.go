@@ -64,11 +64,11 @@ type checker struct {
 	// calls holds the functions' values as values of their parameters
 	// (modelcalls.go).
 	calls *callState
+	// owned holds what categories keep about the pass (passStateOf).
+	owned states
 	// weights holds the fields that store running binomial weights
 	// (modelfields.go).
 	weights map[fieldPath]*weightField
-	// owned holds what categories keep about the pass (passStateOf).
-	owned states
 }
 
 type reportKey struct {
