@@ -115,6 +115,8 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 	}
 	fc.modelSeries(res)
 	fc.modelCountRatio(res)
+	fc.modelLogSum(res)
+	fc.modelZeroTimesSum(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}
@@ -1007,16 +1009,6 @@ func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFa
 	if f.Kind != vm.Binomial {
 		return nil
 	}
-	var idx [2]int
-	for i, a := range f.Args {
-		v, ok := plainVar(a)
-		if !ok || v.Field != nil || v.Obj == nil {
-			return nil
-		}
-		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, nil) {
-			return nil
-		}
-	}
 	var acc *vm.Acc
 	var loop *vm.Loop
 	for _, l := range m.Loops {
@@ -1028,6 +1020,19 @@ func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFa
 	}
 	if acc == nil || loop.Counter == nil || loop.Exits || acc.Guarded {
 		return nil
+	}
+	// A parameter stepped by the loop itself (r *= n; r /= d; n--) is
+	// one the model follows from its value at entry; one assigned
+	// anywhere else is not the argument any more.
+	var idx [2]int
+	for i, a := range f.Args {
+		v, ok := plainVar(a)
+		if !ok || v.Field != nil || v.Obj == nil {
+			return nil
+		}
+		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, loop.Stmt) {
+			return nil
+		}
 	}
 	first := thresholds.CentralBinomial(res.Num).FirstBad
 	for _, op := range acc.Ops {

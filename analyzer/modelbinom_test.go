@@ -158,3 +158,74 @@ func TestPeeledWeightsProbe(t *testing.T) {
 		t.Errorf("Glyph.At(1/2) over 400 points = %v, want 1", v)
 	}
 }
+
+// TestModelLogSum runs a depot's door-code ratings: logarithms of float
+// sums of binomial coefficients (reported), the same sums bounded, cut
+// at three terms, kept in log space or returned as they are (silent).
+func TestModelLogSum(t *testing.T) {
+	analysistest.Run(t, testdata(t), Analyzer, "keybits")
+}
+
+// TestModelLogSumProbe shows keybits.ShiftBits's wrong value beside
+// math/big: with 600 shifted and 600 plain keys the float64 sum of
+// C(1200, i), i ≤ 600, is +Inf, so its log2 is +Inf, while the exact
+// sum (math/big) has a log2 just below 1200.
+func TestModelLogSumProbe(t *testing.T) {
+	// The scenario's ways: multiply, divide, step n.
+	ways := func(n, k float64) float64 {
+		r := 1.0
+		for d := 1.0; d <= k; d++ {
+			r *= n
+			r /= d
+			n--
+		}
+		return r
+	}
+	var count float64
+	exact := new(big.Int)
+	for i := int64(0); i <= 600; i++ {
+		count += ways(1200, float64(i))
+		exact.Add(exact, new(big.Int).Binomial(1200, i))
+	}
+	if got := math.Log2(count); !math.IsInf(got, 1) {
+		t.Fatalf("ShiftBits(600, 600) in float64 = %v, want +Inf", got)
+	}
+	bits := exact.BitLen() // ⌈log2⌉ of the exact sum
+	if bits < 1190 || bits > 1200 {
+		t.Fatalf("exact sum has %d bits, want just below 1200 (Σ_{i≤600} C(1200, i) > 2^1199)", bits)
+	}
+	if f, _ := new(big.Float).SetInt(exact).Float64(); !math.IsInf(f, 1) {
+		t.Fatalf("the exact sum %v fits float64: past float64 is where its log2 alone is finite", f)
+	}
+}
+
+// TestModelZeroTimesSumProbe shows keybits.PadGuesses's wrong value:
+// with no turns the swipe count is 0, and with 600 of 1200 keys
+// shifted the float64 sum of C(1200, i), i ≤ 600, is +Inf, so the
+// product is NaN where the exact product is 0 (0 times the finite
+// math/big sum).
+func TestModelZeroTimesSumProbe(t *testing.T) {
+	guesses := 0.0 // turns = 0: the inner loop runs no trip
+	var shifts float64
+	exact := new(big.Int)
+	for i := int64(1); i <= 600; i++ {
+		w := 1.0
+		n := 1200.0
+		for d := 1.0; d <= float64(i); d++ {
+			w *= n
+			w /= d
+			n--
+		}
+		shifts += w
+		exact.Add(exact, new(big.Int).Binomial(1200, i))
+	}
+	if got := guesses * shifts; !math.IsNaN(got) {
+		t.Fatalf("PadGuesses(1200, 0, 600, s) in float64 = %v, want NaN", got)
+	}
+	// The +Inf is the sum's own, not only the helper's: the exact sum
+	// is past float64 too (so only a guard on guesses, or log space,
+	// keeps the product right).
+	if f, _ := new(big.Float).SetInt(exact).Float64(); !math.IsInf(f, 1) {
+		t.Fatalf("the exact sum %v fits float64", f)
+	}
+}
