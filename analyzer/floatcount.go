@@ -77,13 +77,22 @@ func (c *checker) fieldVar(e *ast.SelectorExpr) *types.Var {
 		return nil
 	}
 	key := [2]types.Object{base, field}
-	if v, ok := c.fieldVars[key]; ok {
+	fv := passStateOf(c, fieldVarsKey)
+	if v, ok := fv.vars[key]; ok {
 		return v
 	}
-	if c.fieldVars == nil {
-		c.fieldVars = make(map[[2]types.Object]*types.Var)
+	if fv.vars == nil {
+		fv.vars = make(map[[2]types.Object]*types.Var)
 	}
 	v := types.NewVar(base.Pos(), base.Pkg(), base.Name()+"."+field.Name(), field.Type())
-	c.fieldVars[key] = v
+	fv.vars[key] = v
 	return v
 }
+
+// fieldVars holds the variables that stand for field reads v.F in the
+// linear forms of float counts, one per v and F, for the pass.
+type fieldVars struct {
+	vars map[[2]types.Object]*types.Var
+}
+
+var fieldVarsKey = &stateKey[fieldVars]{"variables standing for field reads in float counts"}
