@@ -174,27 +174,6 @@ func (t *Term) Affine() (Affine, bool) {
 	return Affine{}, false
 }
 
-// Has reports whether t depends on s.
-func (t *Term) Has(s Sym) bool {
-	if t == nil {
-		return false
-	}
-	if t.Exp.Has(s) {
-		return true
-	}
-	for _, g := range t.Gamma {
-		if g.Arg.Has(s) {
-			return true
-		}
-	}
-	for _, p := range t.Pows {
-		if p.Base.Has(s) || p.Exp.Has(s) {
-			return true
-		}
-	}
-	return false
-}
-
 // Subst replaces s by v everywhere in t.
 func (t *Term) Subst(s Sym, v Affine) *Term {
 	if t == nil {
