@@ -61,17 +61,8 @@ type checker struct {
 	// the findings whose guard waits for them (holdGuard).
 	rewritten []ast.Node
 	held      []heldGuard
-	// calls holds the functions' values as values of their parameters
-	// (modelcalls.go).
-	calls *callState
 	// owned holds what categories keep about the pass (passStateOf).
 	owned states
-	// fieldVars stand for field reads v.F of a variable in the linear
-	// forms of float counts (linearCount), one variable per v and F.
-	fieldVars map[[2]types.Object]*types.Var
-	// weights holds the fields that store running binomial weights
-	// (modelfields.go).
-	weights map[fieldPath]*weightField
 }
 
 type reportKey struct {
@@ -139,7 +130,7 @@ func run(pass *analysis.Pass) (any, error) {
 		s := scans[n]
 		// A call of this package's functions may now be a call of a
 		// factorial function found in phase 1.
-		s.knownCall = s.knownCall || s.localCall && (len(c.funcs) > 0 || c.calls.found())
+		s.knownCall = s.knownCall || s.localCall && (len(c.funcs) > 0 || passStateOf(c, callStateKey).found())
 		if funcBody(n) != nil && s.worth() {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}

@@ -2,7 +2,6 @@ package analyzer
 
 import (
 	"go/ast"
-	"go/token"
 	"go/types"
 )
 
@@ -18,45 +17,22 @@ func (fc *fnCtx) linearCount(e ast.Expr) (linear, bool) {
 	if l, ok := fc.linear(e); ok {
 		return l, true
 	}
-	return fc.linearCountDepth(e, 0)
+	return fc.linearOf(e, 0, fc.c.countTerm)
 }
 
-func (fc *fnCtx) linearCountDepth(e ast.Expr, depth int) (linear, bool) {
-	if depth > maxDepth {
-		return linear{}, false
-	}
-	e = ast.Unparen(e)
-	if v, ok := fc.intConst(e); ok {
-		return linear{C: v}, true
-	}
+// countTerm reads a term of a float count: a numeric variable, or a
+// field read x.Number of a local formula value.
+func (c *checker) countTerm(e ast.Expr) (linear, bool) {
 	switch e := e.(type) {
 	case *ast.Ident:
-		if obj := fc.c.objOf(e); obj != nil {
-			if _, ok := fc.c.numOf(obj.Type()); ok {
+		if obj := c.objOf(e); obj != nil {
+			if _, ok := c.numOf(obj.Type()); ok {
 				return single(obj), true
 			}
 		}
 	case *ast.SelectorExpr:
-		// x.Number of a local formula value: a count read from a field.
-		if v := fc.c.fieldVar(e); v != nil {
+		if v := c.fieldVar(e); v != nil {
 			return single(v), true
-		}
-	case *ast.UnaryExpr:
-		if e.Op == token.SUB {
-			x, ok := fc.linearCountDepth(e.X, depth+1)
-			return x.scale(-1), ok
-		}
-	case *ast.BinaryExpr:
-		x, okx := fc.linearCountDepth(e.X, depth+1)
-		y, oky := fc.linearCountDepth(e.Y, depth+1)
-		if !okx || !oky {
-			return linear{}, false
-		}
-		switch e.Op {
-		case token.ADD:
-			return x.add(y), true
-		case token.SUB:
-			return x.add(y.scale(-1)), true
 		}
 	}
 	return linear{}, false
@@ -77,13 +53,22 @@ func (c *checker) fieldVar(e *ast.SelectorExpr) *types.Var {
 		return nil
 	}
 	key := [2]types.Object{base, field}
-	if v, ok := c.fieldVars[key]; ok {
+	fv := passStateOf(c, fieldVarsKey)
+	if v, ok := fv.vars[key]; ok {
 		return v
 	}
-	if c.fieldVars == nil {
-		c.fieldVars = make(map[[2]types.Object]*types.Var)
+	if fv.vars == nil {
+		fv.vars = make(map[[2]types.Object]*types.Var)
 	}
 	v := types.NewVar(base.Pos(), base.Pkg(), base.Name()+"."+field.Name(), field.Type())
-	c.fieldVars[key] = v
+	fv.vars[key] = v
 	return v
 }
+
+// fieldVars holds the variables that stand for field reads v.F in the
+// linear forms of float counts, one per v and F, for the pass.
+type fieldVars struct {
+	vars map[[2]types.Object]*types.Var
+}
+
+var fieldVarsKey = &stateKey[fieldVars]{"variables standing for field reads in float counts"}

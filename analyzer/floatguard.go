@@ -6,9 +6,9 @@ import (
 	"go/types"
 	"math"
 
-	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/internal/assigned"
 	"github.com/overfact/overfact/internal/astpath"
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // floatBounds returns the bounds that the code around id puts on the
@@ -134,7 +134,7 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 		}
 		op, x, k := c.Op, c.X, c.Y
 		if fc.c.objOf(fc.stripConv(ast.Unparen(x))) != v {
-			op, x, k = ranges.Flip(op), c.Y, c.X
+			op, x, k = tokenop.Flip(op), c.Y, c.X
 		}
 		if fc.c.objOf(fc.stripConv(ast.Unparen(x))) != v {
 			return nil
@@ -144,7 +144,7 @@ func (fc *fnCtx) comparisons(cond ast.Expr, holds bool, v *types.Var) []floatRan
 			return nil
 		}
 		if !holds {
-			op = ranges.Negate(op)
+			op = tokenop.Negate(op)
 		}
 		switch op {
 		case token.LSS, token.LEQ:

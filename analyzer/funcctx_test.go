@@ -13,13 +13,49 @@ import (
 // a new field here would make the shared context carry it again.
 func TestFuncStateOwned(t *testing.T) {
 	want := []string{"c", "node", "file", "typeQueries", "rangeQueries", "definitions", "owned"}
-	var got []string
-	ft := reflect.TypeOf(fnCtx{})
-	for i := 0; i < ft.NumField(); i++ {
-		got = append(got, ft.Field(i).Name)
-	}
-	if !slices.Equal(got, want) {
+	if got := fieldNames(fnCtx{}); !slices.Equal(got, want) {
 		t.Errorf("fnCtx fields are %v, want %v: declare category state with a stateKey (funcctx.go)", got, want)
+	}
+}
+
+// TestPassStateOwned keeps the checker to what the pass shares: its
+// files, the functions and facts of phase 1, the index of calls, the
+// findings and the guards they hold back, the fixer and the package's
+// tables. What one category or the value model gathers over the pass (a
+// summary of fields, the functions' values, the variables of float
+// counts) is declared by its owner as a stateKey and lives in owned
+// (passStateOf).
+func TestPassStateOwned(t *testing.T) {
+	want := []string{"pass", "fixer", "files", "funcs", "fnInfo", "reported", "consumed", "allFuncs", "callIndex", "escapes",
+		"reportedPos", "byPos", "tables", "tablesDone", "rewritten", "held", "owned"}
+	if got := fieldNames(checker{}); !slices.Equal(got, want) {
+		t.Errorf("checker fields are %v, want %v: declare pass state with a stateKey (funcctx.go)", got, want)
+	}
+}
+
+// fieldNames returns the names of the fields of the struct v, in order.
+func fieldNames(v any) []string {
+	var names []string
+	t := reflect.TypeOf(v)
+	for i := 0; i < t.NumField(); i++ {
+		names = append(names, t.Field(i).Name)
+	}
+	return names
+}
+
+// TestPassStateOfMakesOnce checks that an owner's pass state is made
+// once per pass and is its own: another pass starts afresh.
+func TestPassStateOfMakesOnce(t *testing.T) {
+	type notes struct{ n int }
+	k := &stateKey[notes]{"pass notes"}
+	c, d := &checker{}, &checker{}
+	passStateOf(c, k).n++
+	passStateOf(c, k).n++
+	if got := passStateOf(c, k).n; got != 2 {
+		t.Errorf("pass state = %d, want 2", got)
+	}
+	if got := passStateOf(d, k).n; got != 0 {
+		t.Errorf("another pass sees the state: %d", got)
 	}
 }
 

@@ -36,33 +36,41 @@ func (q typeQueries) linear(e ast.Expr) (linear, bool) {
 }
 
 func (q typeQueries) linearDepth(e ast.Expr, depth int) (linear, bool) {
+	return q.linearOf(e, depth, nil)
+}
+
+// linearOf is the one recursion over the sums, differences, negations
+// and constant multiples that make a linear form. With counts nil it
+// reads integer expressions: terms are integer variables, and numeric
+// conversions are looked through. With counts set it reads float counts
+// (linearCount, floatcount.go): counts reads the terms, and no
+// conversion is looked through, since int(x) of a float x is not x; nor
+// are products read, which no float-count shape has.
+func (q typeQueries) linearOf(e ast.Expr, depth int, counts func(ast.Expr) (linear, bool)) (linear, bool) {
 	if depth > maxDepth {
 		return linear{}, false
 	}
-	e = q.stripConv(e)
+	if counts != nil {
+		e = ast.Unparen(e)
+	} else {
+		e = q.stripConv(e)
+	}
 	if v, ok := q.intConst(e); ok {
 		return linear{C: v}, true
 	}
 	switch e := e.(type) {
-	case *ast.Ident:
-		// Only integer variables: x + float64(i) is a rising factorial,
-		// not a falling one.
-		if obj := q.objOf(e); obj != nil {
-			if t, ok := q.numOf(obj.Type()); ok && !t.Float {
-				return single(obj), true
-			}
-		}
 	case *ast.UnaryExpr:
 		if e.Op == token.SUB {
-			x, ok := q.linearDepth(e.X, depth+1)
+			x, ok := q.linearOf(e.X, depth+1, counts)
 			return x.scale(-1), ok
 		}
-		if e.Op == token.ADD {
-			return q.linearDepth(e.X, depth+1)
+		if e.Op == token.ADD && counts == nil {
+			return q.linearOf(e.X, depth+1, counts)
 		}
+		return linear{}, false
 	case *ast.BinaryExpr:
-		x, okx := q.linearDepth(e.X, depth+1)
-		y, oky := q.linearDepth(e.Y, depth+1)
+		x, okx := q.linearOf(e.X, depth+1, counts)
+		y, oky := q.linearOf(e.Y, depth+1, counts)
 		if !okx || !oky {
 			return linear{}, false
 		}
@@ -72,11 +80,27 @@ func (q typeQueries) linearDepth(e ast.Expr, depth int) (linear, bool) {
 		case token.SUB:
 			return x.add(y.scale(-1)), true
 		case token.MUL:
+			if counts != nil {
+				break
+			}
 			if len(x.Terms) == 0 {
 				return y.scale(x.C), true
 			}
 			if len(y.Terms) == 0 {
 				return x.scale(y.C), true
+			}
+		}
+		return linear{}, false
+	}
+	if counts != nil {
+		return counts(e)
+	}
+	// Only integer variables: x + float64(i) is a rising factorial, not a
+	// falling one.
+	if id, ok := e.(*ast.Ident); ok {
+		if obj := q.objOf(id); obj != nil {
+			if t, ok := q.numOf(obj.Type()); ok && !t.Float {
+				return single(obj), true
 			}
 		}
 	}

@@ -7,7 +7,7 @@ import (
 	"go/types"
 	"math"
 
-	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // loopShape describes how a loop's induction variable runs: from first to
@@ -68,7 +68,7 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 		if fc.c.objOf(cond.Y) != iv {
 			return nil
 		}
-		op, bound = ranges.Flip(op), cond.X
+		op, bound = tokenop.Flip(op), cond.X
 	}
 	var adj int64
 	switch {

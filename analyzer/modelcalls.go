@@ -24,6 +24,8 @@ type callState struct {
 	busy  map[*types.Func]bool
 }
 
+var callStateKey = &stateKey[callState]{"functions' values as values of their parameters"}
+
 // findValueFacts exports a ValueFact for each function of decls whose
 // result the value model names in terms of its parameters. It runs after
 // the factorial and binomial functions are found, whose facts the model
@@ -32,7 +34,8 @@ type callState struct {
 // model may know (math.Gamma, Pow or Exp, a function with a fact, one of
 // this package) or a product loop are evaluated.
 func (c *checker) findValueFacts(decls []*ast.FuncDecl, scans map[ast.Node]*scan) {
-	c.calls = &callState{
+	cs := passStateOf(c, callStateKey)
+	*cs = callState{
 		ready: true,
 		decls: make(map[*types.Func]*ast.FuncDecl),
 		facts: make(map[*types.Func]*ValueFact),
@@ -41,11 +44,11 @@ func (c *checker) findValueFacts(decls []*ast.FuncDecl, scans map[ast.Node]*scan
 	for _, d := range decls {
 		s := scans[d]
 		if obj := c.declObj(d); obj != nil && s != nil && (s.knownCall || s.localCall || s.logCall || s.worthLoops()) {
-			c.calls.decls[obj] = d
+			cs.decls[obj] = d
 		}
 	}
 	for _, d := range decls {
-		if obj := c.declObj(d); obj != nil && c.calls.decls[obj] != nil {
+		if obj := c.declObj(d); obj != nil && cs.decls[obj] != nil {
 			c.guard(d, func() { c.valueFactOf(obj) })
 		}
 	}
@@ -64,8 +67,8 @@ func (c *checker) valueFactOf(fn *types.Func) *ValueFact {
 		}
 		return nil
 	}
-	cs := c.calls
-	if cs == nil || !cs.ready || cs.busy[fn] {
+	cs := passStateOf(c, callStateKey)
+	if !cs.ready || cs.busy[fn] {
 		return nil
 	}
 	if f, ok := cs.facts[fn]; ok {
@@ -928,9 +931,6 @@ func ratString(r *big.Rat) string {
 
 // found reports whether the package has a function with a ValueFact.
 func (cs *callState) found() bool {
-	if cs == nil {
-		return false
-	}
 	for _, f := range cs.facts {
 		if f != nil {
 			return true

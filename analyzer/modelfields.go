@@ -48,6 +48,13 @@ type weightField struct {
 	first  int64  // the first value of nName at which it breaks
 }
 
+// weightFields is the package-local field summary, by field path.
+type weightFields struct {
+	fields map[fieldPath]*weightField
+}
+
+var weightFieldsKey = &stateKey[weightFields]{"fields that store running binomial weights"}
+
 // pathOf returns the field path e selects; an element of a slice or
 // array held in a field (c.weights[i]) has the field's path.
 func (c *checker) pathOf(e ast.Expr) (fieldPath, bool) {
@@ -82,6 +89,7 @@ func (c *checker) pathOf(e ast.Expr) (fieldPath, bool) {
 // stored into inside its loop: c[i].Control.X = p.At.X * w.
 func (mc *modelCtx) noteWeightFields(a *vm.Acc, form string, nName string, first int64) {
 	c := mc.fc.c
+	wf := passStateOf(c, weightFieldsKey)
 	name := "the function literal"
 	if d, ok := mc.fc.node.(*ast.FuncDecl); ok {
 		name = d.Name.Name
@@ -98,11 +106,11 @@ func (mc *modelCtx) noteWeightFields(a *vm.Acc, form string, nName string, first
 		if t, ok := c.numOf(c.pass.TypesInfo.TypeOf(as.Lhs[0])); !ok || !t.Float {
 			return true
 		}
-		if c.weights == nil {
-			c.weights = make(map[fieldPath]*weightField)
+		if wf.fields == nil {
+			wf.fields = make(map[fieldPath]*weightField)
 		}
-		if c.weights[p] == nil {
-			c.weights[p] = &weightField{writer: name, acc: a.Obj.Name(), form: form, nName: nName, first: first}
+		if wf.fields[p] == nil {
+			wf.fields[p] = &weightField{writer: name, acc: a.Obj.Name(), form: form, nName: nName, first: first}
 		}
 		return true
 	})
@@ -125,7 +133,7 @@ func (c *checker) weightHeld(e ast.Expr) (*weightField, bool) {
 	if !ok {
 		return nil, false
 	}
-	w := c.weights[p]
+	w := passStateOf(c, weightFieldsKey).fields[p]
 	return w, w != nil
 }
 
@@ -133,7 +141,7 @@ func (c *checker) weightHeld(e ast.Expr) (*weightField, bool) {
 // checked (so that each weight's writer was judged, whatever the order
 // of the source), the products of a weight field with a growing power.
 func (c *checker) checkWeightReads(funcs []ast.Node) {
-	if len(c.weights) == 0 {
+	if len(passStateOf(c, weightFieldsKey).fields) == 0 {
 		return
 	}
 	for _, n := range funcs {

@@ -104,7 +104,6 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 	b.shown = text
 	if err == nil && b.counts != nil && len(b.counts.floats) > 0 {
 		text, err = b.countCall(name, text, texts, b.m.Node)
-		b.countGuarded = err == nil
 	}
 	return text, err
 }

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"go/ast"
 	"go/types"
+	"regexp"
+	"strconv"
 	"strings"
 
 	"golang.org/x/tools/go/ast/astutil"
@@ -35,46 +37,143 @@ import (
 // the helper would have differed from it; whatever it computes there is
 // what the code always computed.
 
-// A domainRule is the test, over the match's operands in the order
-// match.go documents, that the operands are outside the domain: its
-// disjuncts (%[1]s is the first operand), the operands that are
-// compared with each other (which must have one type), and the domain
-// in words for the directive's reason.
-type domainRule struct {
-	outside []string
-	same    []int
-	domain  string
+// The domain is the helper's: it is written once, over the helper's
+// operands in the order of its parameters (%[1]s is the first), as
+// bounds that all hold inside it, and tested two ways. A rewrite of the
+// row's expression on the code's own operands tests that they leave it
+// (k < 0 || k > n, keepOutsideDomain); a call given float counts tests
+// that they are integers inside it (countCall, floatcount.go). Either
+// way one mechanism, keepAsWritten, keeps the expression as written.
+
+// A bound is lo ≤ hi, or lo < hi when strict.
+type bound struct {
+	lo, hi string
+	strict bool
 }
 
-var domainRules = map[Shape]domainRule{
-	ShapeBinomial:       {[]string{"%[2]s < 0", "%[2]s > %[1]s"}, []int{0, 1}, "0 ≤ k ≤ n"},
-	ShapePermutation:    {[]string{"%[2]s < 0", "%[2]s > %[1]s"}, []int{0, 1}, "0 ≤ k ≤ n"},
-	ShapeCatalan:        {[]string{"%[1]s < 0"}, nil, "n ≥ 0"},
-	ShapeFactorialValue: {[]string{"%[1]s < 0"}, nil, "n ≥ 0"},
-	// Outside its support the hypergeometric probability is 0, as the
-	// helper says; only a lot that cannot exist has no value there.
-	ShapeHypergeometric:   {[]string{"%[2]s < 0", "%[3]s < 0", "%[3]s > %[2]s", "%[4]s < 0", "%[4]s > %[2]s"}, []int{1, 2, 3}, "0 ≤ successes, draws ≤ total"},
-	ShapePowOverFactorial: {[]string{"%[2]s < 0"}, nil, "k ≥ 0"},
-	ShapePoisson:          {[]string{"%[1]s < 0", "%[2]s < 0"}, nil, "k ≥ 0, λ ≥ 0"},
-	ShapeBinomialPMF:      {[]string{"%[1]s < 0", "%[1]s > %[2]s", "%[3]s < 0", "%[3]s > 1"}, []int{0, 1}, "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
-	ShapeNegBinomialPMF:   {[]string{"%[1]s < 0", "%[2]s < 1", "%[3]s < 0", "%[3]s > 1"}, nil, "f ≥ 0, s ≥ 1, 0 ≤ p ≤ 1"},
-	ShapeBeta:             {[]string{"%[1]s <= 0", "%[2]s <= 0"}, nil, "positive arguments"},
-	ShapeInverseBeta:      {[]string{"%[1]s <= 0", "%[2]s <= 0"}, nil, "positive arguments"},
-}
-
-// domainRuleOf returns the rule of the match's shape; a multinomial's
-// has one disjunct per part.
-func (b *builder) domainRuleOf() (domainRule, bool) {
-	if b.m.Shape == ShapeMultinomial {
-		var r domainRule
-		for i := range b.m.Args {
-			r.outside = append(r.outside, fmt.Sprintf("%%[%d]s < 0", i+1))
-		}
-		r.domain = "parts ≥ 0"
-		return r, len(r.outside) > 0
+// inside is the bound as a test that holds inside the domain: 0 <= k.
+func (d bound) inside(ops []any) string {
+	op := " <= "
+	if d.strict {
+		op = " < "
 	}
-	r, ok := domainRules[b.m.Shape]
-	return r, ok
+	return fill(d.lo, ops) + op + fill(d.hi, ops)
+}
+
+// outside is the bound as a test that holds outside the domain, the
+// operand first: k < 0, k > n.
+func (d bound) outside(ops []any) string {
+	if _, err := strconv.Atoi(d.lo); err == nil {
+		op := " < "
+		if d.strict {
+			op = " <= "
+		}
+		return fill(d.hi, ops) + op + d.lo
+	}
+	op := " > "
+	if d.strict {
+		op = " >= "
+	}
+	return fill(d.lo, ops) + op + fill(d.hi, ops)
+}
+
+// fill returns a side of a bound with the operands in place of their
+// references; a constant side stays as it is.
+func fill(side string, ops []any) string {
+	if !strings.Contains(side, "%") {
+		return side
+	}
+	return fmt.Sprintf(side, ops...)
+}
+
+// atLeastZero returns the operand i of the bound 0 ≤ %[i]s, if it is one.
+func (d bound) atLeastZero() (int, bool) {
+	var i int
+	if d.lo != "0" || d.strict {
+		return 0, false
+	}
+	if n, _ := fmt.Sscanf(d.hi, "%%[%d]s", &i); n != 1 || d.hi != fmt.Sprintf("%%[%d]s", i) {
+		return 0, false
+	}
+	return i - 1, true
+}
+
+var operandRef = regexp.MustCompile(`%\[(\d+)\]s`)
+
+// operands returns the operands the bound names, from 0.
+func (d bound) operands() []int {
+	var out []int
+	for _, m := range operandRef.FindAllStringSubmatch(d.lo+" "+d.hi, -1) {
+		i, _ := strconv.Atoi(m[1])
+		out = append(out, i-1)
+	}
+	return out
+}
+
+// A domain is where a helper computes what the textbook formula of its
+// shape computes (common practice: C(n,k) = n!/(k!(n−k)!) for
+// 0 ≤ k ≤ n, n!/(n−k)! for 0 ≤ k ≤ n, x^k/k!, λ^k e^−λ/k! and the
+// multinomial's parts for counts ≥ 0, the binomial pmf for 0 ≤ k ≤ n,
+// the negative binomial pmf C(f+s−1, f) p^s (1−p)^f for f ≥ 0 and
+// s ≥ 1; probabilities in [0, 1], rates ≥ 0, B(a, b) for positive
+// arguments): its bounds, in words for the directive's reason. counts,
+// where set, are the bounds float counts are tested against instead.
+type domain struct {
+	bounds []bound
+	words  string
+	counts []bound
+}
+
+var (
+	kUpToN     = []bound{{"0", "%[2]s", false}, {"%[2]s", "%[1]s", false}}
+	nAtLeast0  = []bound{{"0", "%[1]s", false}}
+	pmfBetween = []bound{{"0", "%[1]s", false}, {"%[1]s", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "1", false}}
+)
+
+// domains holds the domain of each helper with one, by the name of its
+// float helper.
+var domains = map[string]domain{
+	"Choose":           {bounds: kUpToN, words: "0 ≤ k ≤ n"},
+	"Falling":          {bounds: kUpToN, words: "0 ≤ k ≤ n"},
+	"Catalan":          {bounds: nAtLeast0, words: "n ≥ 0"},
+	"Factorial":        {bounds: nAtLeast0, words: "n ≥ 0"},
+	"PowOverFactorial": {bounds: []bound{{"0", "%[2]s", false}}, words: "k ≥ 0"},
+	"PoissonPMF":       {bounds: []bound{{"0", "%[1]s", false}, {"0", "%[2]s", false}}, words: "k ≥ 0, λ ≥ 0"},
+	"BinomialPMF":      {bounds: pmfBetween, words: "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
+	"NegativeBinomialPMF": {bounds: []bound{{"0", "%[1]s", false}, {"1", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "1", false}},
+		words: "f ≥ 0, s ≥ 1, 0 ≤ p ≤ 1"},
+	// Operands k, N, K, n. Outside its support the hypergeometric
+	// probability is 0, as the helper says; only a lot that cannot exist
+	// has no value there. Float counts are held to the support:
+	// 0 ≤ k ≤ K, k ≤ n, 0 ≤ n−k ≤ N−K.
+	"HypergeometricPMF": {
+		bounds: []bound{{"0", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "%[2]s", false}, {"0", "%[4]s", false}, {"%[4]s", "%[2]s", false}},
+		words:  "0 ≤ successes, draws ≤ total",
+		counts: []bound{{"0", "%[1]s", false}, {"%[1]s", "%[3]s", false}, {"%[1]s", "%[4]s", false}, {"%[4]s-%[1]s", "%[2]s-%[3]s", false}},
+	},
+	"Beta": {bounds: []bound{{"0", "%[1]s", true}, {"0", "%[2]s", true}}, words: "positive arguments"},
+}
+
+// domainOf returns the domain of the helper name over n operands; a
+// multinomial's has one bound per part.
+func domainOf(name string, n int) (domain, bool) {
+	if name == "Multinomial" {
+		d := domain{words: "parts ≥ 0"}
+		for i := range n {
+			d.bounds = append(d.bounds, bound{"0", fmt.Sprintf("%%[%d]s", i+1), false})
+		}
+		return d, n > 0
+	}
+	d, ok := domains[name]
+	return d, ok
+}
+
+// domainShapes are the shapes whose rewrite tests the code's operands
+// against the domain of the row's helper (keepOutsideDomain).
+var domainShapes = map[Shape]bool{
+	ShapeBinomial: true, ShapePermutation: true, ShapeMultinomial: true, ShapeCatalan: true, ShapeFactorialValue: true,
+	ShapeHypergeometric: true, ShapePowOverFactorial: true, ShapePoisson: true, ShapeBinomialPMF: true,
+	ShapeNegBinomialPMF: true, ShapeBeta: true,
 }
 
 // keepOutsideDomain makes the node's own expression run where the
@@ -82,15 +181,14 @@ func (b *builder) domainRuleOf() (domainRule, bool) {
 // returns the node, or by wrapping text, the helper call replacing it,
 // which it returns. It changes nothing where that cannot be written
 // faithfully (operands with effects evaluated twice, locals the rewrite
-// deletes) or is never needed (constant operands).
+// deletes), is never needed (constant operands) or is done already (a
+// call on float counts, countCall).
 func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error) {
-	r, ok := b.domainRuleOf()
-	if !ok || len(b.absorbed) > 0 {
+	if !domainShapes[b.m.Shape] || len(b.absorbed) > 0 || b.keptAsWritten {
 		return text, nil
 	}
-	if b.countGuarded {
-		// countCall already keeps the expression as written outside
-		// whole-numbered counts in the helper's domain.
+	d, ok := domainOf(shapes[b.m.Shape].helpers.float, len(args))
+	if !ok {
 		return text, nil
 	}
 	ops := make([]any, len(args))
@@ -115,39 +213,80 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	if allConst {
 		return text, nil
 	}
-	for _, i := range r.same {
-		if i >= len(args) || !types.Identical(b.pass.TypesInfo.TypeOf(exprs[i]), b.pass.TypesInfo.TypeOf(exprs[r.same[0]])) {
-			return text, nil
+	var conds []string
+	for _, bd := range d.bounds {
+		// The operands a bound compares are compared as they are: they
+		// must have one type.
+		if ix := bd.operands(); len(ix) > 1 {
+			for _, i := range ix {
+				if i >= len(exprs) || !types.Identical(b.pass.TypesInfo.TypeOf(exprs[i]), b.pass.TypesInfo.TypeOf(exprs[ix[0]])) {
+					return text, nil
+				}
+			}
 		}
 	}
-	var conds []string
-	for _, c := range r.outside {
+	for _, bd := range d.bounds {
 		// An unsigned count is never below zero.
-		var i int
-		if n, _ := fmt.Sscanf(c, "%%[%d]s < 0", &i); n == 1 && i-1 < len(exprs) && c == fmt.Sprintf("%%[%d]s < 0", i) {
-			if t, ok := b.pass.TypesInfo.TypeOf(exprs[i-1]).Underlying().(*types.Basic); ok && t.Info()&types.IsUnsigned != 0 {
+		if i, ok := bd.atLeastZero(); ok && i < len(exprs) {
+			if t, ok := b.pass.TypesInfo.TypeOf(exprs[i]).Underlying().(*types.Basic); ok && t.Info()&types.IsUnsigned != 0 {
 				continue
 			}
 		}
-		conds = append(conds, fmt.Sprintf(c, ops...))
+		conds = append(conds, bd.outside(ops))
 	}
 	if len(conds) == 0 {
 		return text, nil
 	}
-	orig := b.copyText(b.m.Node)
-	if ret := b.returning(); ret != nil {
-		ind := b.indentOf(ret.Pos())
-		b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t//overfact:allow outside %[3]s the expression as written\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
-			ind, strings.Join(conds, " || "), r.domain, orig))
-		return text, nil
+	return b.keepAsWritten(text, b.m.Node, conds, false, "outside "+d.words+" the expression as written")
+}
+
+// keepAsWritten returns text, the helper call that replaces node, so
+// that node runs as written where the helper's value would differ from
+// it, with a directive giving why (the kept expression is what the code
+// computed before on those inputs). With inside, the helper runs where
+// every condition holds:
+//
+//	func() float64 {
+//		if conds {
+//			return text
+//		}
+//		//overfact:allow why
+//		return node
+//	}()
+//
+// otherwise the expression as written runs where any condition holds,
+// before the return statement that returns the match's node, or in a
+// function literal:
+//
+//	func() float64 {
+//		if conds {
+//			//overfact:allow why
+//			return node
+//		}
+//		return text
+//	}()
+func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, inside bool, why string) (string, error) {
+	b.keptAsWritten = true
+	orig := b.copyText(node)
+	if !inside && node == b.m.Node {
+		if ret := b.returning(); ret != nil {
+			ind := b.indentOf(ret.Pos())
+			b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t//overfact:allow %[3]s\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
+				ind, strings.Join(conds, " || "), why, orig))
+			return text, nil
+		}
 	}
 	name, err := b.typeName(b.m.Result)
 	if err != nil {
 		return "", err
 	}
-	ind := b.indentOf(b.m.Node.Pos())
-	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t//overfact:allow outside %[4]s the expression as written\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
-		name, ind, strings.Join(conds, " || "), r.domain, orig, text), nil
+	ind := b.indentOf(node.Pos())
+	if inside {
+		return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\treturn %[4]s\n%[2]s\t}\n%[2]s\t//overfact:allow %[6]s\n%[2]s\treturn %[5]s\n%[2]s}()",
+			name, ind, strings.Join(conds, " && "), text, orig, why), nil
+	}
+	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t//overfact:allow %[4]s\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
+		name, ind, strings.Join(conds, " || "), why, orig, text), nil
 }
 
 // returning returns the return statement whose only result is the

@@ -53,7 +53,7 @@ func buildLogOfGamma(b *builder) error {
 			x = "(" + x + ")"
 		}
 	}
-	g, err := b.guarded([]string{x + " > 0"}, text, log, "arguments at or below 0 keep the original arithmetic")
+	g, err := b.keepAsWritten(text, log, []string{x + " > 0"}, true, "arguments at or below 0 keep the original arithmetic")
 	if err != nil {
 		return err
 	}

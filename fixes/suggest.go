@@ -69,11 +69,11 @@ type builder struct {
 	// float operands passed to integer parameters (countCall); nil where
 	// a float operand is refused.
 	counts *floatCounts
-	// countGuarded: countCall already keeps the expression as written
-	// outside whole-numbered counts in the helper's domain.
-	countGuarded bool
-	shown        string // the helper call as the fix's message shows it
-	message      string
+	// keptAsWritten: a test already keeps the expression as written
+	// where the helper's value would differ (keepAsWritten).
+	keptAsWritten bool
+	shown         string // the helper call as the fix's message shows it
+	message       string
 }
 
 type span struct{ pos, end token.Pos }

@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 func (w *walker) assign(s state, st *ast.AssignStmt) state {
@@ -13,7 +15,7 @@ func (w *walker) assign(s state, st *ast.AssignStmt) state {
 		if len(st.Lhs) != 1 || len(st.Rhs) != 1 {
 			return s
 		}
-		return w.update(s, st.Lhs[0], opOf(st.Tok), w.eval(s, st.Rhs[0]))
+		return w.update(s, st.Lhs[0], tokenop.OfAssign(st.Tok), w.eval(s, st.Rhs[0]))
 	}
 	// Go evaluates every operand before assigning any.
 	vals := make([]Interval, len(st.Lhs))
@@ -120,34 +122,6 @@ func (w *walker) update(s state, l ast.Expr, op token.Token, r Interval) state {
 		return s
 	}
 	return w.store(s, l, arith(op, cur, r, k, w.f.opts.NoWrap))
-}
-
-func opOf(tok token.Token) token.Token {
-	switch tok {
-	case token.ADD_ASSIGN:
-		return token.ADD
-	case token.SUB_ASSIGN:
-		return token.SUB
-	case token.MUL_ASSIGN:
-		return token.MUL
-	case token.QUO_ASSIGN:
-		return token.QUO
-	case token.REM_ASSIGN:
-		return token.REM
-	case token.AND_ASSIGN:
-		return token.AND
-	case token.OR_ASSIGN:
-		return token.OR
-	case token.XOR_ASSIGN:
-		return token.XOR
-	case token.SHL_ASSIGN:
-		return token.SHL
-	case token.SHR_ASSIGN:
-		return token.SHR
-	case token.AND_NOT_ASSIGN:
-		return token.AND_NOT
-	}
-	return token.ILLEGAL
 }
 
 func (w *walker) decl(s state, st *ast.DeclStmt) state {

@@ -5,6 +5,8 @@ import (
 	"go/constant"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // refine2 returns the states in which cond holds and fails, both from
@@ -45,7 +47,7 @@ func (w *walker) refine2(s state, cond ast.Expr) (t, f state) {
 			yt, yf := w.refine2(xf, c.Y)
 			return xt.join(yt), yf
 		case token.EQL, token.NEQ, token.LSS, token.LEQ, token.GTR, token.GEQ:
-			return w.compare(s, c.X, c.Op, c.Y), w.compare(s, c.X, Negate(c.Op), c.Y)
+			return w.compare(s, c.X, c.Op, c.Y), w.compare(s, c.X, tokenop.Negate(c.Op), c.Y)
 		}
 	}
 	return s, s
@@ -61,7 +63,7 @@ func (w *walker) compare(s state, x ast.Expr, op token.Token, y ast.Expr) state 
 		return dead
 	}
 	s = w.narrow(s, x, op, yr)
-	s = w.narrow(s, y, Flip(op), xr)
+	s = w.narrow(s, y, tokenop.Flip(op), xr)
 	s = w.relate(s, x, op, y)
 	return w.propagate(s, x)
 }
@@ -236,39 +238,4 @@ func strictAbove(v int64, noWrap bool) int64 {
 		return v
 	}
 	return v + 1
-}
-
-// Negate returns the comparison that holds where op does not (NaN aside,
-// for floats).
-func Negate(op token.Token) token.Token {
-	switch op {
-	case token.EQL:
-		return token.NEQ
-	case token.NEQ:
-		return token.EQL
-	case token.LSS:
-		return token.GEQ
-	case token.LEQ:
-		return token.GTR
-	case token.GTR:
-		return token.LEQ
-	case token.GEQ:
-		return token.LSS
-	}
-	return op
-}
-
-// Flip turns the comparison x op y into y op' x.
-func Flip(op token.Token) token.Token {
-	switch op {
-	case token.LSS:
-		return token.GTR
-	case token.LEQ:
-		return token.GEQ
-	case token.GTR:
-		return token.LSS
-	case token.GEQ:
-		return token.LEQ
-	}
-	return op
 }

@@ -97,9 +97,6 @@ func (s Sym) isLen() bool {
 	return ok && s.Field != nil
 }
 
-// Lin is one term k·Sym of an affine form.
-type Lin = linform.Term[Sym, *big.Rat]
-
 // form is the shared implementation of linear forms over the value
 // model's variables, with exact rational coefficients.
 type form = linform.Form[Sym, *big.Rat, linform.Rat]

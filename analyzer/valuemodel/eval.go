@@ -8,6 +8,8 @@ import (
 	"math/big"
 
 	"golang.org/x/tools/go/types/typeutil"
+
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // Options configures Evaluate.
@@ -464,7 +466,7 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 		v := e.eval(r, en)
 		if s.Tok != token.ASSIGN && s.Tok != token.DEFINE {
 			cur := e.eval(s.Lhs[i], en)
-			v = e.binary(opOf(s.Tok), cur, v)
+			v = e.binary(tokenop.OfAssign(s.Tok), cur, v)
 		}
 		vals[i] = v
 	}
@@ -502,21 +504,6 @@ func (e *evaluator) assign(s *ast.AssignStmt, en env) {
 			en[obj] = vals[i]
 		}
 	}
-}
-
-// opOf maps an assignment operator to its binary operator.
-func opOf(tok token.Token) token.Token {
-	switch tok {
-	case token.ADD_ASSIGN:
-		return token.ADD
-	case token.SUB_ASSIGN:
-		return token.SUB
-	case token.MUL_ASSIGN:
-		return token.MUL
-	case token.QUO_ASSIGN:
-		return token.QUO
-	}
-	return token.ILLEGAL
 }
 
 func affineOf(v *value) (Affine, bool) {

@@ -5,6 +5,8 @@ import (
 	"go/token"
 	"go/types"
 	"math/big"
+
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // site is one assignment of a variable in a loop body; guard is the
@@ -451,7 +453,7 @@ func (e *evaluator) bound(l *Loop, cond *ast.BinaryExpr, en env) bool {
 		if e.objOf(cond.Y) != l.Counter {
 			return false
 		}
-		op, b = flip(op), cond.X
+		op, b = tokenop.Flip(op), cond.X
 	}
 	bv, ok := affineOf(e.eval(b, en))
 	if !ok {
@@ -475,20 +477,6 @@ func (e *evaluator) bound(l *Loop, cond *ast.BinaryExpr, en env) bool {
 	l.Count = span.Scale(new(big.Rat).Inv(l.Step))
 	l.Bound, l.BoundOff = b, off
 	return true
-}
-
-func flip(op token.Token) token.Token {
-	switch op {
-	case token.LSS:
-		return token.GTR
-	case token.GTR:
-		return token.LSS
-	case token.LEQ:
-		return token.GEQ
-	case token.GEQ:
-		return token.LEQ
-	}
-	return op
 }
 
 // stepOf returns the constant by which s changes v, or nil.
@@ -1011,7 +999,7 @@ func (e *evaluator) guardRange(l *Loop, cond ast.Expr, en env) (Affine, Affine, 
 	}
 	op, x := b.Op, b.Y
 	if e.objOf(b.X) != l.Counter {
-		op, x = flip(op), b.X
+		op, x = tokenop.Flip(op), b.X
 	}
 	bv, ok := affineOf(e.eval(x, en))
 	if !ok || bv.Has(l.Iter) {
@@ -1020,7 +1008,7 @@ func (e *evaluator) guardRange(l *Loop, cond ast.Expr, en env) (Affine, Affine, 
 	// counter = From + Step·t
 	tAt := bv.Sub(l.From).Scale(l.Step) // the trip on which counter = bound
 	if l.Step.Sign() < 0 {
-		op = flip(op)
+		op = tokenop.Flip(op)
 	}
 	switch op {
 	case token.LEQ:

@@ -174,27 +174,6 @@ func (t *Term) Affine() (Affine, bool) {
 	return Affine{}, false
 }
 
-// Has reports whether t depends on s.
-func (t *Term) Has(s Sym) bool {
-	if t == nil {
-		return false
-	}
-	if t.Exp.Has(s) {
-		return true
-	}
-	for _, g := range t.Gamma {
-		if g.Arg.Has(s) {
-			return true
-		}
-	}
-	for _, p := range t.Pows {
-		if p.Base.Has(s) || p.Exp.Has(s) {
-			return true
-		}
-	}
-	return false
-}
-
 // Subst replaces s by v everywhere in t.
 func (t *Term) Subst(s Sym, v Affine) *Term {
 	if t == nil {
@@ -376,27 +355,22 @@ func (t *Term) String() string {
 	if t.Coef.Cmp(ratOne) != 0 || (len(t.Gamma) == 0 && len(t.Pows) == 0 && t.SqrtPi == 0) {
 		num = append(num, ratString(t.Coef))
 	}
-	if t.SqrtPi != 0 {
-		s := "√π"
-		if abs64(int64(t.SqrtPi)) != 1 {
-			s += "^" + ratString(rat(abs64(int64(t.SqrtPi))))
+	// put writes s^k above the line for k > 0 and s^−k below it.
+	put := func(s string, k int64) {
+		if abs64(k) != 1 {
+			s += "^" + ratString(rat(abs64(k)))
 		}
-		if t.SqrtPi > 0 {
+		if k > 0 {
 			num = append(num, s)
 		} else {
 			den = append(den, s)
 		}
 	}
+	if t.SqrtPi != 0 {
+		put("√π", int64(t.SqrtPi))
+	}
 	for _, g := range t.Gamma {
-		s := "Γ(" + g.Arg.String() + ")"
-		if abs64(int64(g.Pow)) != 1 {
-			s += "^" + ratString(rat(abs64(int64(g.Pow))))
-		}
-		if g.Pow > 0 {
-			num = append(num, s)
-		} else {
-			den = append(den, s)
-		}
+		put("Γ("+g.Arg.String()+")", int64(g.Pow))
 	}
 	for _, p := range t.Pows {
 		e := p.Exp

@@ -80,3 +80,47 @@ func TestDevelopersNamesEveryFile(t *testing.T) {
 		}
 	}
 }
+
+// TestDevelopersNamesEveryPackage checks the layout table against the
+// folders that hold Go code: every such folder outside testdata has a
+// row, its own or an enclosing folder's, and every folder a row names
+// exists.
+func TestDevelopersNamesEveryPackage(t *testing.T) {
+	doc, err := os.ReadFile(filepath.Join("..", "..", "DEVELOPERS.md"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	rows := map[string]bool{}
+	for _, m := range regexp.MustCompile("(?m)^\\| `([a-z0-9_./-]+)/` \\|").FindAllStringSubmatch(string(doc), -1) {
+		rows[m[1]] = true
+	}
+	root := filepath.Join("..", "..")
+	for dir := range rows {
+		if fi, err := os.Stat(filepath.Join(root, dir)); err != nil || !fi.IsDir() {
+			t.Errorf("DEVELOPERS.md has a row for %s/, which is no folder", dir)
+		}
+	}
+	err = filepath.WalkDir(root, func(path string, d os.DirEntry, err error) error {
+		if err != nil {
+			return err
+		}
+		if d.IsDir() && (d.Name() == "testdata" || strings.HasPrefix(d.Name(), ".") && path != root) {
+			return filepath.SkipDir
+		}
+		if d.IsDir() || !strings.HasSuffix(path, ".go") {
+			return nil
+		}
+		rel, _ := filepath.Rel(root, filepath.Dir(path))
+		rel = filepath.ToSlash(rel)
+		for p := rel; p != "." && p != "/"; p = filepath.ToSlash(filepath.Dir(p)) {
+			if rows[p] {
+				return nil
+			}
+		}
+		t.Errorf("DEVELOPERS.md's layout table has no row for %s/ or a folder holding it", rel)
+		return filepath.SkipDir
+	})
+	if err != nil {
+		t.Fatal(err)
+	}
+}
