@@ -115,6 +115,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	if shape == fixes.ShapeNone {
 		m.Args = nil
 	}
+	m.EmptyBelow = emptyBelowAll(append([]factor{u}, dens...))
 	fc.report(finding{
 		node:     root,
 		cat:      catRatio,
@@ -266,4 +267,15 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
+}
+
+// emptyBelowAll reports whether every factor is a call of a factorial
+// function that returns 1 for negative arguments (FactorialFact.EmptyBelow).
+func emptyBelowAll(fs []factor) bool {
+	for _, f := range fs {
+		if f.fact == nil || !f.fact.EmptyBelow || f.off != 0 || f.call == nil || len(f.call.Args) != 1 {
+			return false
+		}
+	}
+	return len(fs) > 0
 }

@@ -85,7 +85,11 @@ func (b *builder) domainRuleOf() (domainRule, bool) {
 // deletes) or is never needed (constant operands).
 func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error) {
 	r, ok := b.domainRuleOf()
-	if !ok || len(b.absorbed) > 0 {
+	if !ok {
+		return text, nil
+	}
+	quotient, err := b.emptyQuotient()
+	if err != nil || quotient == "" && len(b.absorbed) > 0 {
 		return text, nil
 	}
 	if b.countGuarded {
@@ -135,10 +139,15 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		return text, nil
 	}
 	orig := b.copyText(b.m.Node)
+	note := "//overfact:allow outside " + r.domain + " the expression as written"
+	if quotient != "" {
+		orig = quotient
+		note = "// outside " + r.domain + ", as the code computed it: the factorial of a negative number is 1"
+	}
 	if ret := b.returning(); ret != nil {
 		ind := b.indentOf(ret.Pos())
-		b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t//overfact:allow outside %[3]s the expression as written\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
-			ind, strings.Join(conds, " || "), r.domain, orig))
+		b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t%[3]s\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
+			ind, strings.Join(conds, " || "), note, orig))
 		return text, nil
 	}
 	name, err := b.typeName(b.m.Result)
@@ -146,8 +155,42 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		return "", err
 	}
 	ind := b.indentOf(b.m.Node.Pos())
-	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t//overfact:allow outside %[4]s the expression as written\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
-		name, ind, strings.Join(conds, " || "), r.domain, orig, text), nil
+	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t%[4]s\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
+		name, ind, strings.Join(conds, " || "), note, orig, text), nil
+}
+
+// emptyQuotient returns, for an integer ratio whose factorial functions
+// return 1 below zero (Match.EmptyBelow), the call of the exact
+// quotient on the arguments of the expression's factorial calls: what
+// the expression computes outside the helper's domain, without calling
+// those functions, which a range guard may make panic for a large
+// argument (fact(25) in fact(−3)/(fact(25)·fact(−28)), whose value 0
+// fits). "" where it does not apply.
+func (b *builder) emptyQuotient() (string, error) {
+	switch b.m.Shape {
+	case ShapeBinomial, ShapePermutation, ShapeMultinomial, ShapeCatalan:
+	default:
+		return "", nil
+	}
+	e, ok := b.m.Node.(ast.Expr)
+	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned || !ok {
+		return "", nil
+	}
+	var num, den []ast.Expr
+	if !b.factors(e, false, &num, &den) || len(num) != 1 {
+		return "", nil
+	}
+	var args []ast.Expr
+	for _, f := range append(num, den...) {
+		c, _ := b.callOf(f)
+		if c == nil || len(c.Args) != 1 {
+			return "", nil
+		}
+		args = append(args, c.Args[0])
+	}
+	shown := b.shown
+	defer func() { b.shown = shown }()
+	return b.call("MustFactorialQuotientInt64", args, b.m.Result)
 }
 
 // returning returns the return statement whose only result is the
