@@ -73,7 +73,7 @@ func checkChainWithoutFix(t *testing.T, results []*analysistest.Result) {
 	for _, r := range results {
 		for _, d := range r.Diagnostics {
 			p := r.Pass.Fset.Position(d.Pos)
-			if filepath.Base(p.Filename) != "plan.go" || p.Line != 150 || r.Pass.Pkg.Name() != "bottling" {
+			if filepath.Base(p.Filename) != "plan.go" || p.Line != 152 || r.Pass.Pkg.Name() != "bottling" {
 				continue
 			}
 			found = true
@@ -83,7 +83,7 @@ func checkChainWithoutFix(t *testing.T, results []*analysistest.Result) {
 		}
 	}
 	if !found {
-		t.Error("no finding at bottling/plan.go:150")
+		t.Error("no finding at bottling/plan.go:152")
 	}
 }
 

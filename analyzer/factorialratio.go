@@ -50,6 +50,7 @@ func bang(arg ast.Expr, off int64) string {
 func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	u, j, first, ok := fc.brokenFactor(p.num)
 	if !ok {
+		fc.checkBrokenDivisor(root, p)
 		return
 	}
 	var facts, dens []factor
@@ -278,4 +279,57 @@ func emptyBelowAll(fs []factor) bool {
 		}
 	}
 	return len(fs) > 0
+}
+
+// checkBrokenDivisor judges an integer binomial, permutation or
+// multinomial whose numerator is bounded below its threshold but one of
+// whose divisors is not: with n ≤ 20, C(n, k) = n!/(k!(n−k)!) is in
+// range, but for k > n or k < 0 (k ≥ 21, or n − k ≥ 21) the divisor
+// wraps first, to 0 from 66! on (a division by zero), or to a value
+// below the numerator's (a wrong quotient), where the true quotient is
+// a small number (0 for a factorial function that returns 1 below
+// zero). A float divisor overflows to +Inf, and the quotient 0 is then
+// right: not reported.
+func (fc *fnCtx) checkBrokenDivisor(root ast.Expr, p *product) {
+	if len(p.num) != 1 || p.other != 0 || p.num[0].kind != kindFactorial || p.num[0].t.Float || p.num[0].fact == nil {
+		return
+	}
+	u := p.num[0]
+	var dens []factor
+	for _, f := range p.den {
+		if f.kind != kindFactorial || f.fact == nil {
+			return
+		}
+		dens = append(dens, f)
+	}
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	shape, _ := fc.ratioShape(u, dens, m, fc.linearCount)
+	if shape != fixes.ShapeBinomial && shape != fixes.ShapePermutation && shape != fixes.ShapeMultinomial {
+		return
+	}
+	for _, d := range dens {
+		j, first := fc.judgeCall(d)
+		if j.silent {
+			continue
+		}
+		m.Shape = shape
+		m.EmptyBelow = emptyBelowAll(append([]factor{u}, dens...))
+		fc.report(finding{
+			node:     root,
+			cat:      catRatio,
+			definite: false,
+			msg: fmt.Sprintf("%s as a ratio of factorials in %s: the divisor %s %s for %s ≥ %d, where the numerator %s still fits%s",
+				shapeWords[shape], d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, bang(u.arg, u.off), j.clause),
+			related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()),
+			match:   p.fix(m),
+		})
+		return
+	}
+}
+
+// shapeWords names the integer ratios checkBrokenDivisor judges.
+var shapeWords = map[fixes.Shape]string{
+	fixes.ShapeBinomial:    "binomial coefficient",
+	fixes.ShapePermutation: "permutation count",
+	fixes.ShapeMultinomial: "multinomial coefficient",
 }
