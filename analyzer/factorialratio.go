@@ -116,13 +116,19 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	if shape == fixes.ShapeNone {
 		m.Args = nil
 	}
-	m.EmptyBelow = emptyBelowAll(append([]factor{u}, dens...))
+	fc.reportRatio(root, p, m, append([]factor{u}, dens...), u, definite, msg+clause)
+}
+
+// reportRatio reports a ratio's finding, its definition related and its
+// match told whether every factorial function returns 1 below zero.
+func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []factor, def factor, definite bool, msg string) {
+	m.EmptyBelow = emptyBelowAll(fs)
 	fc.report(finding{
 		node:     root,
 		cat:      catRatio,
 		definite: definite,
-		msg:      msg + clause,
-		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
+		msg:      msg,
+		related:  fc.c.relatedDef(def.fn.Name(), def.fn.Pos()),
 		match:    p.fix(m),
 	})
 }
@@ -313,16 +319,9 @@ func (fc *fnCtx) checkBrokenDivisor(root ast.Expr, p *product) {
 			continue
 		}
 		m.Shape = shape
-		m.EmptyBelow = emptyBelowAll(append([]factor{u}, dens...))
-		fc.report(finding{
-			node:     root,
-			cat:      catRatio,
-			definite: false,
-			msg: fmt.Sprintf("%s as a ratio of factorials in %s: the divisor %s %s for %s ≥ %d, where the numerator %s still fits%s",
-				shapeWords[shape], d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, bang(u.arg, u.off), j.clause),
-			related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()),
-			match:   p.fix(m),
-		})
+		fc.reportRatio(root, p, m, append([]factor{u}, dens...), d, false,
+			fmt.Sprintf("%s as a ratio of factorials in %s: the divisor %s %s for %s ≥ %d, where the numerator %s still fits%s",
+				shapeWords[shape], d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, bang(u.arg, u.off), j.clause))
 		return
 	}
 }
