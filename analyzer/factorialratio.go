@@ -123,13 +123,20 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 // match told whether every factorial function returns 1 below zero.
 func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []factor, def factor, definite bool, msg string) {
 	m.EmptyBelow = emptyBelowAll(fs)
+	match := p.fix(m)
+	if p.chained && p.chainStart != nil && m.EmptyBelow && m.Shape != fixes.ShapeNone {
+		// r := fact(n); r /= fact(k); r /= fact(n-k): the start takes the
+		// whole value and the links go, exact outside the helper's domain
+		// as well since the factorial functions return 1 below zero.
+		m.Node, m.Chain, match = p.chainStart, p.chainLinks, m
+	}
 	fc.report(finding{
 		node:     root,
 		cat:      catRatio,
 		definite: definite,
 		msg:      msg,
 		related:  fc.c.relatedDef(def.fn.Name(), def.fn.Pos()),
-		match:    p.fix(m),
+		match:    match,
 	})
 }
 

@@ -89,6 +89,18 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		return text, nil
 	}
 	quotient, err := b.emptyQuotient()
+	// Where the test cannot be written, the rewrite stands alone; not
+	// for a chain, whose links it deletes: outside the domain its value
+	// would change.
+	alone := func() (string, error) {
+		if len(b.m.Chain) > 0 {
+			return "", fmt.Errorf("no exact value outside %s for a value built over several statements", r.domain)
+		}
+		return text, nil
+	}
+	if len(b.m.Chain) > 0 && (err != nil || quotient == "") {
+		return alone()
+	}
 	if err != nil || quotient == "" && len(b.absorbed) > 0 {
 		return text, nil
 	}
@@ -102,13 +114,13 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	allConst := true
 	for i, a := range args {
 		if !b.plain(a) { // evaluated twice: in the test and in the call
-			return text, nil
+			return alone()
 		}
 		// float64(k) < 0 is k < 0: test the count itself.
 		e := b.floatOfInt(a)
 		tv, ok := b.pass.TypesInfo.Types[e]
 		if !ok {
-			return text, nil
+			return alone()
 		}
 		if tv.Value == nil {
 			allConst = false
@@ -121,7 +133,7 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	}
 	for _, i := range r.same {
 		if i >= len(args) || !types.Identical(b.pass.TypesInfo.TypeOf(exprs[i]), b.pass.TypesInfo.TypeOf(exprs[r.same[0]])) {
-			return text, nil
+			return alone()
 		}
 	}
 	var conds []string
@@ -172,12 +184,11 @@ func (b *builder) emptyQuotient() (string, error) {
 	default:
 		return "", nil
 	}
-	e, ok := b.m.Node.(ast.Expr)
-	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned || !ok {
+	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned {
 		return "", nil
 	}
 	var num, den []ast.Expr
-	if !b.factors(e, false, &num, &den) || len(num) != 1 {
+	if !b.nodeFactors(&num, &den) || len(num) != 1 {
 		return "", nil
 	}
 	var args []ast.Expr

@@ -85,6 +85,11 @@ type Match struct {
 	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
 	// arguments, with no need to call the functions themselves.
 	EmptyBelow bool
+	// Chain, when Node is the value first assigned to a variable r
+	// (r := fact(n)), holds the statements right after it that complete
+	// the match's value, r /= fact(k), r *= …: their right sides are
+	// further factors (divisors for /=), and the rewrite deletes them.
+	Chain []ast.Stmt
 
 	// For ShapeFactorial: the enclosing function, the parameter whose
 	// range decides overflow, and the first bad value of that parameter.
