@@ -11,7 +11,9 @@ import (
 
 // The factorial-ratio category: binomials, permutations, multinomials,
 // Catalan numbers, hypergeometric and binomial probabilities computed as
-// ratios or products of factorial values whose numerator overflows first.
+// ratios or products of factorial values whose numerator overflows first,
+// and integer ratios whose bounded numerator fits but whose divisor wraps
+// (checkBrokenDivisor).
 
 // brokenFactor returns the numerator factor that can break first: the
 // first whose argument is not bounded below its threshold, with the
