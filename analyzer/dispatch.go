@@ -254,6 +254,27 @@ func (fc *fnCtx) checkChains(list []ast.Stmt) {
 			continue
 		}
 		p.chained = true
+		if consecutive(list[i+1:], chain) {
+			p.chainStart = init.Rhs[0]
+			for _, as := range chain {
+				p.chainLinks = append(p.chainLinks, as)
+			}
+		}
 		fc.checkProduct(chain[len(chain)-1].Lhs[0], p)
 	}
+}
+
+// consecutive reports whether the chain's links are the first statements
+// of rest, in order: nothing reads the value between its start and its
+// last link.
+func consecutive(rest []ast.Stmt, chain []*ast.AssignStmt) bool {
+	if len(chain) > len(rest) {
+		return false
+	}
+	for i, as := range chain {
+		if rest[i] != ast.Stmt(as) {
+			return false
+		}
+	}
+	return true
 }

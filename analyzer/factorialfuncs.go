@@ -73,6 +73,7 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 		ff.fact.Safe = true
 		ff.fact.Lo, ff.fact.Hi = addSat(ff.inner.Lo, ff.inner.Offset-ff.offset), addSat(ff.inner.Hi, ff.inner.Offset-ff.offset)
 	}
+	ff.fact.EmptyBelow = own.emptyBelow(ff)
 	c.funcs[obj] = ff
 	c.pass.ExportObjectFact(obj, &ff.fact)
 }

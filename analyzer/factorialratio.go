@@ -11,7 +11,9 @@ import (
 
 // The factorial-ratio category: binomials, permutations, multinomials,
 // Catalan numbers, hypergeometric and binomial probabilities computed as
-// ratios or products of factorial values whose numerator overflows first.
+// ratios or products of factorial values whose numerator overflows first,
+// and integer ratios whose bounded numerator fits but whose divisor wraps
+// (checkBrokenDivisor).
 
 // brokenFactor returns the numerator factor that can break first: the
 // first whose argument is not bounded below its threshold, with the
@@ -50,6 +52,7 @@ func bang(arg ast.Expr, off int64) string {
 func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	u, j, first, ok := fc.brokenFactor(p.num)
 	if !ok {
+		fc.checkBrokenDivisor(root, p)
 		return
 	}
 	var facts, dens []factor
@@ -115,13 +118,27 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	if shape == fixes.ShapeNone {
 		m.Args = nil
 	}
+	fc.reportRatio(root, p, m, append([]factor{u}, dens...), u, definite, msg+clause)
+}
+
+// reportRatio reports a ratio's finding, its definition related and its
+// match told whether every factorial function returns 1 below zero.
+func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []factor, def factor, definite bool, msg string) {
+	m.EmptyBelow = emptyBelowAll(fs)
+	match := p.fix(m)
+	if p.chained && p.chainStart != nil && m.EmptyBelow && m.Shape != fixes.ShapeNone {
+		// r := fact(n); r /= fact(k); r /= fact(n-k): the start takes the
+		// whole value and the links go, exact outside the helper's domain
+		// as well since the factorial functions return 1 below zero.
+		m.Node, m.Chain, match = p.chainStart, p.chainLinks, m
+	}
 	fc.report(finding{
 		node:     root,
 		cat:      catRatio,
 		definite: definite,
-		msg:      msg + clause,
-		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
-		match:    p.fix(m),
+		msg:      msg,
+		related:  fc.c.relatedDef(def.fn.Name(), def.fn.Pos()),
+		match:    match,
 	})
 }
 
@@ -266,4 +283,61 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
+}
+
+// emptyBelowAll reports whether every factor is a call of a factorial
+// function that returns 1 for negative arguments (FactorialFact.EmptyBelow).
+func emptyBelowAll(fs []factor) bool {
+	for _, f := range fs {
+		if f.fact == nil || !f.fact.EmptyBelow || f.off != 0 || f.call == nil || len(f.call.Args) != 1 {
+			return false
+		}
+	}
+	return len(fs) > 0
+}
+
+// checkBrokenDivisor judges an integer binomial, permutation or
+// multinomial whose numerator is bounded below its threshold but one of
+// whose divisors is not: with n ≤ 20, C(n, k) = n!/(k!(n−k)!) is in
+// range, but for k > n or k < 0 (k ≥ 21, or n − k ≥ 21) the divisor
+// wraps first, to 0 from 66! on (a division by zero), or to a value
+// below the numerator's (a wrong quotient), where the true quotient is
+// a small number (0 for a factorial function that returns 1 below
+// zero). A float divisor overflows to +Inf, and the quotient 0 is then
+// right: not reported.
+func (fc *fnCtx) checkBrokenDivisor(root ast.Expr, p *product) {
+	if len(p.num) != 1 || p.other != 0 || p.num[0].kind != kindFactorial || p.num[0].t.Float || p.num[0].fact == nil {
+		return
+	}
+	u := p.num[0]
+	var dens []factor
+	for _, f := range p.den {
+		if f.kind != kindFactorial || f.fact == nil {
+			return
+		}
+		dens = append(dens, f)
+	}
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	shape, _ := fc.ratioShape(u, dens, m, fc.linearCount)
+	if shape != fixes.ShapeBinomial && shape != fixes.ShapePermutation && shape != fixes.ShapeMultinomial {
+		return
+	}
+	for _, d := range dens {
+		j, first := fc.judgeCall(d)
+		if j.silent {
+			continue
+		}
+		m.Shape = shape
+		fc.reportRatio(root, p, m, append([]factor{u}, dens...), d, false,
+			fmt.Sprintf("%s as a ratio of factorials in %s: the divisor %s %s for %s ≥ %d, where the numerator %s still fits%s",
+				shapeWords[shape], d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, bang(u.arg, u.off), j.clause))
+		return
+	}
+}
+
+// shapeWords names the integer ratios checkBrokenDivisor judges.
+var shapeWords = map[fixes.Shape]string{
+	fixes.ShapeBinomial:    "binomial coefficient",
+	fixes.ShapePermutation: "permutation count",
+	fixes.ShapeMultinomial: "multinomial coefficient",
 }

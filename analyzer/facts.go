@@ -29,6 +29,13 @@ type FactorialFact struct {
 	// FirstBad is the first n at which the result stops fitting the
 	// result type; for a binomial function, the first n of C(n, n/2).
 	FirstBad int64
+	// EmptyBelow says that the function returns 1, the empty product,
+	// for every negative n, and reaches its product by no other path: a
+	// loop that runs no trip there, a recursion that stops there. Only a
+	// factorial of Offset 0 carries it. Outside the helpers' domain (C(n,
+	// k) with k > n) its callers' quotients are then numbers the fixer
+	// can compute exactly (fixes.Match.EmptyBelow).
+	EmptyBelow bool
 }
 
 // AFact marks FactorialFact as an analysis fact.

@@ -34,6 +34,11 @@ type product struct {
 	// fact(n); r /= fact(k); …): no single expression holds its value,
 	// so its finding has no fix.
 	chained bool
+	// For a chain whose links follow its start directly: the start's
+	// value (fact(n) of r := fact(n)) and the links, which a ratio's fix
+	// may absorb (see reportRatio).
+	chainStart ast.Expr
+	chainLinks []ast.Stmt
 }
 
 // fix returns the match of p's finding, or nil where p has no

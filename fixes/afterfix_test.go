@@ -68,6 +68,8 @@ func TestScenarioListComplete(t *testing.T) {
 // shrink: the test fails when a listed function becomes right, and when
 // one not listed is wrong after -fix.
 var stillWrong = map[string]string{
+	"src/bottling.DrawProbability":    "-fix leaves it wrong outside the lot's domain: (100, 20, 1100, 0): was a panic (integer divide by zero), now panics: MustChooseInt64(1100, 100) does not fit, exact 1.4229671736221535e+14",
+	"demo/sampling.fact":              "no finding in it (only a fact for its callers, all bounded once Choose no longer calls it): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int64)",
 	"demo/gas.SpeedMoment":            "-fix leaves it wrong: (1030, 0): was NaN, now NaN, exact 0",
 	"src/callcentre.AtMost":           "reported, but -fix leaves it wrong: (750, 171): was NaN, now 0, exact 8.570353218335643e-144",
 	"src/callcentre.ErlangB":          "reported, but -fix leaves it wrong: (7, 1030): was NaN, now NaN, exact 4.03972e-1791 (underflows)",
@@ -146,16 +148,8 @@ var stillWrong = map[string]string{
 // stillWrong it may only shrink.
 var openViolations = map[string]string{
 	"demo/sampling.AcceptProbability": "changed while right: (500, 5, 34.5): was a panic: runtime error: integer divide by zero, now NaN, exact -9.74974e+773 (overflows float64)",
-	"demo/sampling.Choose":            "newly panicking: (-3, 25): was 0, now panics: fact: n = 25 overflows int64 (largest is 20), exact 0",
 	"demo/sampling.LotAcceptance":     "newly panicking: (12, 67, 100, 5): was NaN, now panics: lgamma: MustChooseInt64(-55, 100): result does not fit in int64, exact NaN",
-	"src/bottling.CrateSplits":        "newly panicking: (21, -3, 10): was 1, now panics: Factorial: n = 28 overflows int64 (largest is 20), exact 1644",
-	"src/bottling.DrawProbability":    "newly panicking: (7, 62, 34, -1): was 0, now panics: Factorial: n = 28 overflows int64 (largest is 20), exact NaN",
-	"src/bottling.GuardedWays":        "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
 	"src/bottling.LineOrders":         "panic not naming its arguments: (34): was -8764578968847253504, now panics: Factorial: n = 30 overflows int64 (largest is 20), exact 2.65253e+32 (overflows int64)",
-	"src/bottling.Ways":               "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
-	"src/bottling.WaysByParts":        "newly panicking: (-3, 25): was 0, now panics: Factorial: n = 25 overflows int64 (largest is 20), exact 0",
-	"src/bottling.WaysStepwise":       "changed while right: (-3, 25): was 0, now -351, exact 0",
-	"src/cardshuffle.Hands":           "newly panicking: (-3, 25): was 0, now panics: Orderings: n = 25 overflows int64 (largest is 20), exact 0",
 	"src/inspection.LotDraw":          "changed while right: (-1, -1, 5, 12): was 0.012820512820512818, now NaN, exact 0.012820512820512821",
 	"src/reliability.Availability":    "newly panicking: (67, 20, 100): was -2.242735828178614e+152, now panics: lgamma: MustChooseInt64(67, 30): result does not fit in int64, exact -1.071157332...",
 	"src/staffing.ArrivalsInt":        "newly panicking: (-2.5, 171): was -Inf, now panics: Factorial: n = 171 overflows int64 (largest is 20), exact -1.0957199839228965e-240",

@@ -135,7 +135,7 @@ func (b *builder) replaceByCall(name string, args []ast.Expr) error {
 		return err
 	}
 	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)
-	for _, d := range b.absorbed {
+	for _, d := range append(b.absorbed, b.m.Chain...) {
 		b.deleteStmt(d)
 	}
 	b.message = b.rewriteMessage()

@@ -18,6 +18,13 @@ import (
 func (b *builder) covered() error {
 	node := b.m.Node
 	regions := []ast.Node{node}
+	for _, s := range b.m.Chain {
+		as, ok := s.(*ast.AssignStmt)
+		if !ok || len(as.Rhs) != 1 || as.Tok != token.MUL_ASSIGN && as.Tok != token.QUO_ASSIGN {
+			return fmt.Errorf("a link of the chain is not r *= x or r /= x")
+		}
+		regions = append(regions, as.Rhs[0])
+	}
 	locals := make(map[types.Object]bool)
 	operands := append(append([]ast.Expr(nil), b.m.Args...), b.m.Extra...)
 	if !within(operands, regions) {

@@ -184,11 +184,27 @@ var domainShapes = map[Shape]bool{
 // deletes), is never needed (constant operands) or is done already (a
 // call on float counts, countCall).
 func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error) {
-	if !domainShapes[b.m.Shape] || len(b.absorbed) > 0 || b.keptAsWritten {
+	if !domainShapes[b.m.Shape] || b.keptAsWritten {
 		return text, nil
 	}
 	d, ok := domainOf(shapes[b.m.Shape].helpers.float, len(args))
 	if !ok {
+		return text, nil
+	}
+	quotient, err := b.emptyQuotient()
+	// Where the test cannot be written, the rewrite stands alone; not
+	// for a chain, whose links it deletes: outside the domain its value
+	// would change.
+	alone := func() (string, error) {
+		if len(b.m.Chain) > 0 {
+			return "", fmt.Errorf("no exact value outside %s for a value built over several statements", d.words)
+		}
+		return text, nil
+	}
+	if len(b.m.Chain) > 0 && (err != nil || quotient == "") {
+		return alone()
+	}
+	if err != nil || quotient == "" && len(b.absorbed) > 0 {
 		return text, nil
 	}
 	ops := make([]any, len(args))
@@ -196,13 +212,13 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	allConst := true
 	for i, a := range args {
 		if !b.plain(a) { // evaluated twice: in the test and in the call
-			return text, nil
+			return alone()
 		}
 		// float64(k) < 0 is k < 0: test the count itself.
 		e := b.floatOfInt(a)
 		tv, ok := b.pass.TypesInfo.Types[e]
 		if !ok {
-			return text, nil
+			return alone()
 		}
 		if tv.Value == nil {
 			allConst = false
@@ -220,7 +236,7 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		if ix := bd.operands(); len(ix) > 1 {
 			for _, i := range ix {
 				if i >= len(exprs) || !types.Identical(b.pass.TypesInfo.TypeOf(exprs[i]), b.pass.TypesInfo.TypeOf(exprs[ix[0]])) {
-					return text, nil
+					return alone()
 				}
 			}
 		}
@@ -236,6 +252,9 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	}
 	if len(conds) == 0 {
 		return text, nil
+	}
+	if quotient != "" {
+		return b.keepAs(text, b.m.Node, quotient, conds, false, "// outside "+d.words+", as the code computed it: the factorial of a negative number is 1")
 	}
 	return b.keepAsWritten(text, b.m.Node, conds, false, "outside "+d.words+" the expression as written")
 }
@@ -266,13 +285,20 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 //		return text
 //	}()
 func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, inside bool, why string) (string, error) {
+	return b.keepAs(text, node, b.copyText(node), conds, inside, "//overfact:allow "+why)
+}
+
+// keepAs is keepAsWritten with orig, what runs in node's place where the
+// helper's value would differ (node as written, or an exact equivalent
+// that avoids calls a guard may make panic), and the comment line above
+// it.
+func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string, inside bool, note string) (string, error) {
 	b.keptAsWritten = true
-	orig := b.copyText(node)
 	if !inside && node == b.m.Node {
 		if ret := b.returning(); ret != nil {
 			ind := b.indentOf(ret.Pos())
-			b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t//overfact:allow %[3]s\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
-				ind, strings.Join(conds, " || "), why, orig))
+			b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t%[3]s\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
+				ind, strings.Join(conds, " || "), note, orig))
 			return text, nil
 		}
 	}
@@ -282,11 +308,44 @@ func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, insi
 	}
 	ind := b.indentOf(node.Pos())
 	if inside {
-		return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\treturn %[4]s\n%[2]s\t}\n%[2]s\t//overfact:allow %[6]s\n%[2]s\treturn %[5]s\n%[2]s}()",
-			name, ind, strings.Join(conds, " && "), text, orig, why), nil
+		return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\treturn %[4]s\n%[2]s\t}\n%[2]s\t%[6]s\n%[2]s\treturn %[5]s\n%[2]s}()",
+			name, ind, strings.Join(conds, " && "), text, orig, note), nil
 	}
-	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t//overfact:allow %[4]s\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
-		name, ind, strings.Join(conds, " || "), why, orig, text), nil
+	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t%[4]s\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
+		name, ind, strings.Join(conds, " || "), note, orig, text), nil
+}
+
+// emptyQuotient returns, for an integer ratio whose factorial functions
+// return 1 below zero (Match.EmptyBelow), the call of the exact
+// quotient on the arguments of the expression's factorial calls: what
+// the expression computes outside the helper's domain, without calling
+// those functions, which a range guard may make panic for a large
+// argument (fact(25) in fact(−3)/(fact(25)·fact(−28)), whose value 0
+// fits). "" where it does not apply.
+func (b *builder) emptyQuotient() (string, error) {
+	switch b.m.Shape {
+	case ShapeBinomial, ShapePermutation, ShapeMultinomial, ShapeCatalan:
+	default:
+		return "", nil
+	}
+	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned {
+		return "", nil
+	}
+	var num, den []ast.Expr
+	if !b.nodeFactors(&num, &den) || len(num) != 1 {
+		return "", nil
+	}
+	var args []ast.Expr
+	for _, f := range append(num, den...) {
+		c, _ := b.callOf(f)
+		if c == nil || len(c.Args) != 1 {
+			return "", nil
+		}
+		args = append(args, c.Args[0])
+	}
+	shown := b.shown
+	defer func() { b.shown = shown }()
+	return b.call("MustFactorialQuotientInt64", args, b.m.Result)
 }
 
 // returning returns the return statement whose only result is the

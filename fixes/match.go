@@ -78,6 +78,18 @@ type Match struct {
 	// trip leaves, its accumulator at 1, where the helper would say 0 or
 	// panic for k < 0.
 	CountNonNeg bool
+	// EmptyBelow, for the ratio shapes, tells that every factorial
+	// function the expression calls (with one argument each) returns 1,
+	// the empty product, for every negative argument and n! otherwise, so
+	// that outside the helper's domain the expression's value is the
+	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
+	// arguments, with no need to call the functions themselves.
+	EmptyBelow bool
+	// Chain, when Node is the value first assigned to a variable r
+	// (r := fact(n)), holds the statements right after it that complete
+	// the match's value, r /= fact(k), r *= …: their right sides are
+	// further factors (divisors for /=), and the rewrite deletes them.
+	Chain []ast.Stmt
 
 	// For ShapeFactorial: the enclosing function, the parameter whose
 	// range decides overflow, and the first bad value of that parameter.

@@ -22,11 +22,26 @@ type factorPattern func(ast.Expr) bool
 // the num patterns and divides by exactly the den patterns, in any order.
 func (b *builder) shapeMatches(num, den []factorPattern) bool {
 	var gotNum, gotDen []ast.Expr
-	e, ok := b.m.Node.(ast.Expr)
-	if !ok || !b.factors(e, false, &gotNum, &gotDen) {
+	if !b.nodeFactors(&gotNum, &gotDen) {
 		return false
 	}
 	return assign(gotNum, num) && assign(gotDen, den)
+}
+
+// nodeFactors splits the match's value into the factors it multiplies
+// and divides by: its expression's, then its chain's (Match.Chain).
+func (b *builder) nodeFactors(num, den *[]ast.Expr) bool {
+	e, ok := b.m.Node.(ast.Expr)
+	if !ok || !b.factors(e, false, num, den) {
+		return false
+	}
+	for _, s := range b.m.Chain {
+		as, ok := s.(*ast.AssignStmt)
+		if !ok || len(as.Rhs) != 1 || !b.factors(as.Rhs[0], as.Tok == token.QUO_ASSIGN, num, den) {
+			return false
+		}
+	}
+	return true
 }
 
 // factors splits e into the factors it multiplies (num) and divides by

@@ -33,12 +33,14 @@ func SmallLot() int64 {
 	return mathkit.Factorial(12) / (mathkit.Factorial(5) * mathkit.Factorial(7))
 }
 
-// GuardedWays refuses lots the int64 factorials cannot hold.
+// GuardedWays refuses lots the int64 factorials cannot hold, but not
+// samples larger than the lot: k! wraps for k ≥ 21 (to 0 from 66!, a
+// division by zero), where C(n, k) is 0.
 func GuardedWays(n, k int) int64 { // want GuardedWays:`binomial of parameter 0, safe for \[-inf, 20\]`
 	if n > 20 {
 		return -1
 	}
-	return mathkit.Factorial(n) / (mathkit.Factorial(k) * mathkit.Factorial(n-k))
+	return mathkit.Factorial(n) / (mathkit.Factorial(k) * mathkit.Factorial(n-k)) // want `binomial coefficient as a ratio of factorials in int64: the divisor k! wraps for k ≥ 21, where the numerator n! still fits; k is not bounded here`
 }
 
 // SafeWays uses the guarded factorial, whose values are always right.

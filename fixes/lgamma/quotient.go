@@ -1,0 +1,88 @@
+package lgamma
+
+// Quotients of factorials as code computes them with a factorial
+// function of its own: a loop from 2 up to n, or a recursion that stops
+// at n ≤ 1, returns the empty product 1 for every n below 2, negative n
+// included. Outside the domain of Choose, Falling and Multinomial (k > n,
+// a negative part) such code still computes a number, fact(5)/fact(7)·
+// fact(−2) = 0 or fact(28)/(fact(21)·fact(−3)·fact(10)) = 1644, and a fix
+// must keep it: these functions compute it exactly, rounded toward zero
+// as Go's integer division is.
+
+import (
+	"math"
+	"math/big"
+	"sort"
+)
+
+// FactorialQuotientInt64 returns num!/(den₁!·den₂!·…) rounded toward
+// zero, where the factorial of a negative number is 1 (the empty
+// product), and true when the quotient fits in an int64; 0 and false
+// when it does not.
+//
+// Accuracy: exact (checked against math/big in quotient_test.go).
+//
+// Special cases are:
+//
+//	FactorialQuotientInt64(n) = n!, n! ≤ MaxInt64
+//	FactorialQuotientInt64(n, k, n−k) = C(n, k) for 0 ≤ k ≤ n
+//	FactorialQuotientInt64(n, d…) = 0 when some d > max(n, 0)
+func FactorialQuotientInt64(num int64, den ...int64) (int64, bool) {
+	n := uint64(max(num, 0))
+	ds := make([]uint64, 0, len(den))
+	for _, d := range den {
+		if d > 1 { // 0!, 1! and the empty product are 1
+			ds = append(ds, uint64(d))
+		}
+	}
+	sort.Slice(ds, func(i, j int) bool { return ds[i] > ds[j] })
+	if len(ds) > 0 && ds[0] > n {
+		// The largest divisor alone exceeds the numerator; the others
+		// are at least 1.
+		return 0, true
+	}
+	// The logarithm rules out the quotients far from int64 before any
+	// big arithmetic: below 1 (zero) and beyond 2^63 (no fit). The margin
+	// covers the rounding of LogFactorial, within a few ulps of values up
+	// to ln n!.
+	l, scale := LogFactorial(int(n)), LogFactorial(int(n))
+	for _, d := range ds {
+		ld := LogFactorial(int(d))
+		l -= ld
+		scale += ld
+	}
+	margin := 1 + scale*0x1p-40
+	switch {
+	case l < -margin:
+		return 0, true
+	case l > 63*math.Ln2+margin:
+		return 0, false
+	}
+	// n!/ds[0]! is the product of the factors above the largest divisor.
+	lo := int64(2)
+	if len(ds) > 0 {
+		lo = int64(ds[0]) + 1
+	}
+	q := new(big.Int).MulRange(lo, int64(n)) // 1 when lo > n
+	d := big.NewInt(1)
+	for _, x := range ds[min(1, len(ds)):] {
+		d.Mul(d, new(big.Int).MulRange(2, int64(x)))
+	}
+	q.Quo(q, d)
+	if !q.IsInt64() {
+		return 0, false
+	}
+	return q.Int64(), true
+}
+
+// MustFactorialQuotientInt64 is like FactorialQuotientInt64 but panics
+// when the quotient does not fit in an int64.
+//
+// Accuracy: exact (checked against math/big in quotient_test.go).
+func MustFactorialQuotientInt64(num int64, den ...int64) int64 {
+	r, ok := FactorialQuotientInt64(num, den...)
+	if !ok {
+		panic(mustError("MustFactorialQuotientInt64", args(append([]int64{num}, den...)...), "", "int64"))
+	}
+	return r
+}

@@ -1,0 +1,80 @@
+package lgamma
+
+import (
+	"fmt"
+	"math/big"
+	"testing"
+)
+
+// emptyFact is x! by its definition, with the empty product 1 for x < 2,
+// in math/big.
+func emptyFact(x int64) *big.Int {
+	r := big.NewInt(1)
+	for i := int64(2); i <= x; i++ {
+		r.Mul(r, big.NewInt(i))
+	}
+	return r
+}
+
+// quotientRef is num!/(den₁!·…) rounded toward zero, in math/big.
+func quotientRef(num int64, den ...int64) *big.Int {
+	d := big.NewInt(1)
+	for _, x := range den {
+		d.Mul(d, emptyFact(x))
+	}
+	return new(big.Int).Quo(emptyFact(num), d)
+}
+
+func TestFactorialQuotientInt64AgainstBig(t *testing.T) {
+	check := func(num int64, den ...int64) {
+		t.Helper()
+		want := quotientRef(num, den...)
+		got, ok := FactorialQuotientInt64(num, den...)
+		if ok != want.IsInt64() || ok && got != want.Int64() {
+			t.Errorf("FactorialQuotientInt64(%d, %v) = %d, %v; math/big says %s", num, den, got, ok, want)
+		}
+	}
+	vals := []int64{-30, -3, -1, 0, 1, 2, 3, 5, 10, 13, 20, 21, 25, 28, 34, 40, 62, 66, 67, 100}
+	for _, n := range vals {
+		check(n)
+		for _, a := range vals {
+			check(n, a)
+			for _, b := range vals {
+				check(n, a, b)
+				check(n, a, b, 3)
+			}
+		}
+	}
+	// Near the int64 boundary and with long products.
+	check(1000, 999)
+	check(1000, 990)
+	check(1000, 996, 2)
+	check(1000, 995, 2)
+	check(3000, 1500, 1500)
+	check(68, 34, 34)
+}
+
+func TestMustFactorialQuotientInt64PanicNamesArguments(t *testing.T) {
+	defer func() {
+		r := recover()
+		want := "lgamma: MustFactorialQuotientInt64(25, -5): result does not fit in int64"
+		if fmt.Sprint(r) != want {
+			t.Errorf("panic %q, want %q", r, want)
+		}
+	}()
+	MustFactorialQuotientInt64(25, -5)
+}
+
+func TestFactorialQuotientInt64Binomial(t *testing.T) {
+	// Inside 0 ≤ k ≤ n the quotient is C(n, k), which ChooseInt64 computes
+	// by another formula.
+	for n := int64(0); n <= 70; n++ {
+		for k := int64(0); k <= n; k++ {
+			q, qok := FactorialQuotientInt64(n, k, n-k)
+			c, cok := ChooseInt64(n, k)
+			if q != c || qok != cok {
+				t.Fatalf("(%d, %d): quotient %d %v, ChooseInt64 %d %v", n, k, q, qok, c, cok)
+			}
+		}
+	}
+}
