@@ -52,8 +52,13 @@ var domainRules = map[Shape]domainRule{
 	ShapeCatalan:        {[]string{"%[1]s < 0"}, nil, "n ≥ 0"},
 	ShapeFactorialValue: {[]string{"%[1]s < 0"}, nil, "n ≥ 0"},
 	// Outside its support the hypergeometric probability is 0, as the
-	// helper says; only a lot that cannot exist has no value there.
-	ShapeHypergeometric:   {[]string{"%[2]s < 0", "%[3]s < 0", "%[3]s > %[2]s", "%[4]s < 0", "%[4]s > %[2]s"}, []int{1, 2, 3}, "0 ≤ successes, draws ≤ total"},
+	// helper says, but the code's own binomials need not be: one over
+	// factorial loops, whose empty product is 1 below 2, is
+	// 1/(k!·(−d)!·…) ≠ 0 for k > n. The helper runs only where each of
+	// the three binomials is in its own domain: 0 ≤ k ≤ successes and
+	// 0 ≤ draws − k ≤ total − successes, which imply 0 ≤ draws ≤ total
+	// (tested before the differences, which then cannot wrap).
+	ShapeHypergeometric:   {[]string{"%[1]s < 0", "%[1]s > %[3]s", "%[1]s > %[4]s", "%[4]s > %[2]s", "%[4]s-%[1]s > %[2]s-%[3]s"}, []int{0, 1, 2, 3}, "0 ≤ k ≤ successes, 0 ≤ draws − k ≤ total − successes"},
 	ShapePowOverFactorial: {[]string{"%[2]s < 0"}, nil, "k ≥ 0"},
 	ShapePoisson:          {[]string{"%[1]s < 0", "%[2]s < 0"}, nil, "k ≥ 0, λ ≥ 0"},
 	ShapeBinomialPMF:      {[]string{"%[1]s < 0", "%[1]s > %[2]s", "%[3]s < 0", "%[3]s > 1"}, []int{0, 1}, "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
@@ -80,12 +85,18 @@ func (b *builder) domainRuleOf() (domainRule, bool) {
 // keepOutsideDomain makes the node's own expression run where the
 // operands leave the helper's domain: before the return statement that
 // returns the node, or by wrapping text, the helper call replacing it,
-// which it returns. It changes nothing where that cannot be written
-// faithfully (operands with effects evaluated twice, locals the rewrite
-// deletes) or is never needed (constant operands).
+// which it returns. Locals the rewrite deletes (hit := C(bad, k) read
+// by return hit·miss/C(total, n)) move into the branch when they are
+// the statements just before the return. It changes nothing where that
+// cannot be written faithfully (operands with effects evaluated twice,
+// deleted locals elsewhere) or is never needed (constant operands).
 func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error) {
 	r, ok := b.domainRuleOf()
-	if !ok || len(b.absorbed) > 0 {
+	if !ok {
+		return text, nil
+	}
+	defs, ok := b.absorbedBeforeReturn(args)
+	if !ok {
 		return text, nil
 	}
 	if b.countGuarded {
@@ -137,8 +148,15 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	orig := b.copyText(b.m.Node)
 	if ret := b.returning(); ret != nil {
 		ind := b.indentOf(ret.Pos())
-		b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t//overfact:allow outside %[3]s the expression as written\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
-			ind, strings.Join(conds, " || "), r.domain, orig))
+		var locals strings.Builder
+		for _, d := range defs {
+			fmt.Fprintf(&locals, "%s\t%s\n", ind, b.copyText(d))
+		}
+		b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[5]s%[1]s\t//overfact:allow outside %[3]s the expression as written\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
+			ind, strings.Join(conds, " || "), r.domain, orig, locals.String()))
+		return text, nil
+	}
+	if len(defs) > 0 {
 		return text, nil
 	}
 	name, err := b.typeName(b.m.Result)
@@ -179,4 +197,42 @@ func operandText(text string, e ast.Expr) string {
 		return text
 	}
 	return "(" + text + ")"
+}
+
+// absorbedBeforeReturn returns the definitions the rewrite deletes, in
+// source order, when the as-written branch can hold them: none, or the
+// statements just before the return statement that returns the node,
+// defining no variable an operand reads (the test runs before them).
+func (b *builder) absorbedBeforeReturn(args []ast.Expr) ([]ast.Stmt, bool) {
+	if len(b.absorbed) == 0 {
+		return nil, true
+	}
+	ret := b.returning()
+	if ret == nil {
+		return nil, false
+	}
+	list, at, err := b.enclosingList(ret)
+	if err != nil || at < len(b.absorbed) {
+		return nil, false
+	}
+	defs := list[at-len(b.absorbed) : at]
+	mine := make(map[ast.Stmt]bool)
+	for _, d := range b.absorbed {
+		mine[d] = true
+	}
+	defined := make(map[types.Object]bool)
+	for _, d := range defs {
+		if !mine[d] {
+			return nil, false
+		}
+		defined[b.definedVar(d)] = true
+	}
+	for _, a := range args {
+		for _, v := range b.vars(a) {
+			if defined[v] {
+				return nil, false
+			}
+		}
+	}
+	return defs, true
 }
