@@ -89,11 +89,20 @@ func buildSeriesTerm(b *builder) error {
 	if err != nil {
 		return err
 	}
-	text, err := b.call(form.helper, s.args, m.Result)
-	if err != nil {
-		return err
+	folded := false
+	if form.helper == "PowOverFactorial" {
+		// A term of e^−λ·Σ λ^k/k! takes e^−λ in (poissonsum.go).
+		if folded, err = b.foldPoissonTerm(term, s.args[0], s.args[1]); err != nil {
+			return err
+		}
 	}
-	b.replace(term.Pos(), term.End(), text)
+	if !folded {
+		text, err := b.call(form.helper, s.args, m.Result)
+		if err != nil {
+			return err
+		}
+		b.replace(term.Pos(), term.End(), text)
+	}
 	for _, st := range s.stmts {
 		b.deleteStmt(st)
 	}
@@ -102,7 +111,10 @@ func buildSeriesTerm(b *builder) error {
 	for i, v := range s.drop {
 		names[i] = v.Name()
 	}
-	b.message = b.rewriteMessage() + " and drop the running " + strings.Join(names, " and ")
+	if !folded {
+		b.message = b.rewriteMessage()
+	}
+	b.message += " and drop the running " + strings.Join(names, " and ")
 	return nil
 }
 
