@@ -143,7 +143,9 @@ func betaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]fa
 }
 
 func inverseBetaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
-	return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, nil
+	// Or through a function whose value is Γ (the analyzer's value fact).
+	return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])},
+		&[2][]factorPattern{{b.userCall(o[0].add(o[1]))}, {b.userCall(o[0]), b.userCall(o[1])}}
 }
 
 func factorialValueFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // n
