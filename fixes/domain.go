@@ -60,7 +60,7 @@ var domainRules = map[Shape]domainRule{
 	// (tested before the differences, which then cannot wrap).
 	ShapeHypergeometric:   {[]string{"%[1]s < 0", "%[1]s > %[3]s", "%[1]s > %[4]s", "%[4]s > %[2]s", "%[4]s-%[1]s > %[2]s-%[3]s"}, []int{0, 1, 2, 3}, "0 ≤ k ≤ successes, 0 ≤ draws − k ≤ total − successes"},
 	ShapePowOverFactorial: {[]string{"%[2]s < 0"}, nil, "k ≥ 0"},
-	ShapePoisson:          {[]string{"%[1]s < 0", "%[2]s < 0"}, nil, "k ≥ 0, λ ≥ 0"},
+	ShapePoisson:          {[]string{"%[1]s < 0"}, nil, "k ≥ 0"},
 	ShapeBinomialPMF:      {[]string{"%[1]s < 0", "%[1]s > %[2]s", "%[3]s < 0", "%[3]s > 1"}, []int{0, 1}, "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
 	ShapeNegBinomialPMF:   {[]string{"%[1]s < 0", "%[2]s < 1", "%[3]s < 0", "%[3]s > 1"}, nil, "f ≥ 0, s ≥ 1, 0 ≤ p ≤ 1"},
 	ShapeBeta:             {[]string{"%[1]s <= 0", "%[2]s <= 0"}, nil, "positive arguments"},

@@ -54,6 +54,7 @@ var countDomains = map[string]func(a []string) []string{
 	"Falling":          func(a []string) []string { return []string{"0 <= " + a[1], a[1] + " <= " + a[0]} },
 	"PowOverFactorial": func(a []string) []string { return []string{"0 <= " + a[1]} },
 	"PoissonPMF":       func(a []string) []string { return []string{"0 <= " + a[0], "0 <= " + a[1]} },
+	"PoissonTerm":      func(a []string) []string { return []string{"0 <= " + a[0]} },
 	"Factorial":        func(a []string) []string { return []string{"0 <= " + a[0]} },
 	"Catalan":          func(a []string) []string { return []string{"0 <= " + a[0]} },
 	"BinomialPMF": func(a []string) []string {

@@ -16,12 +16,13 @@ import (
 // λ ≈ 709, e^−λ underflows to 0 while the sum of λ^k/k! (about e^λ)
 // overflows to +Inf, and the product is NaN where the probability is
 // between 0 and 1. So where the sum is read only through that product,
-// e^−λ goes into each term, λ^k e^−λ/k! = PoissonPMF(k, λ) (common
-// practice), and the product becomes the sum itself:
+// e^−λ goes into each term, λ^k e^−λ/k! = PoissonTerm(k, λ) (common
+// practice; the probability PoissonPMF(k, λ) for λ ≥ 0, the term of the
+// alternating sum the code forms for λ < 0), and the product becomes the sum itself:
 //
 //	sum := 0.0                       sum := 0.0
 //	for k := 0; k <= n; k++ {        for k := 0; k <= n; k++ {
-//		sum += math.Pow(l, float64(k)) / fact(k)   →   sum += lgamma.PoissonPMF(k, l)
+//		sum += math.Pow(l, float64(k)) / fact(k)   →   sum += lgamma.PoissonTerm(k, l)
 //	}                                }
 //	return math.Exp(-l) * sum        return sum
 //
@@ -49,7 +50,7 @@ func (b *builder) poissonSum() error {
 	if err := b.checkShape(); err != nil {
 		return err
 	}
-	text, err := b.call("PoissonPMF", []ast.Expr{k, x}, b.m.Result)
+	text, err := b.call("PoissonTerm", []ast.Expr{k, x}, b.m.Result)
 	if err != nil {
 		return err
 	}

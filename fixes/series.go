@@ -144,8 +144,9 @@ var seriesForms = []seriesForm{
 		}
 		return nil
 	}},
-	// math.Exp(−λ)·math.Pow(λ, k)/k!, any order → PoissonPMF(k, λ)
-	{"PoissonPMF", func(b *builder, s *seriesTerm, num ast.Expr) []ast.Expr {
+	// math.Exp(−λ)·math.Pow(λ, k)/k!, any order → PoissonTerm(k, λ), the
+	// probability for λ ≥ 0 and the formula below
+	{"PoissonTerm", func(b *builder, s *seriesTerm, num ast.Expr) []ast.Expr {
 		var fs, den []ast.Expr
 		if !b.factors(num, false, &fs, &den) || len(fs) != 2 || len(den) != 0 {
 			return nil

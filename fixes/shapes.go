@@ -49,7 +49,7 @@ func init() {
 		ShapeCatalan:          {"Catalan number", buildRatio, family{"Catalan", "MustCatalanInt64", ""}, 1, catalanFactors},
 		ShapeHypergeometric:   {"hypergeometric probability", buildTerm, family{float: "HypergeometricPMF"}, 4, hypergeometricFactors},
 		ShapePowOverFactorial: {"power over factorial", buildTerm, family{float: "PowOverFactorial"}, 2, powOverFactorialFactors},
-		ShapePoisson:          {"Poisson term", buildTerm, family{float: "PoissonPMF"}, 2, poissonFactors},
+		ShapePoisson:          {"Poisson term", buildTerm, family{float: "PoissonTerm"}, 2, poissonFactors},
 		ShapeBinomialPMF:      {"binomial probability", buildTerm, family{float: "BinomialPMF"}, 3, binomialPMFFactors},
 		ShapeGammaRatio:       {"gamma ratio", buildTerm, family{float: "GammaRatio"}, 2, gammaRatioFactors},
 		ShapeBeta:             {"beta function", buildTerm, family{float: "Beta"}, 2, betaFactors},
