@@ -687,16 +687,16 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if !ok || b.Op != token.MUL {
 		return
 	}
-	coef := false
+	var coef ast.Expr
 	ast.Inspect(e, func(n ast.Node) bool {
-		if x, ok := n.(ast.Expr); ok && !coef {
+		if x, ok := n.(ast.Expr); ok && coef == nil {
 			if g := vm.Recognise(res.Values[x]); g.Kind == vm.Binomial {
-				coef = true
+				coef = x
 			}
 		}
-		return !coef
+		return coef == nil
 	})
-	if !coef {
+	if coef == nil {
 		return
 	}
 	// A coefficient from a loop already reported (its product breaks
@@ -713,14 +713,31 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 		return
 	}
 	n := fc.symRange(res, nv, e)
-	central := thresholds.CentralBinomial(t.Num)
+	central, reach := thresholds.CentralBinomial(t.Num), "fits"
+	if fc.expFormed(coef) {
+		central, reach = thresholds.CentralBinomialExp(t.Num), "math.Exp reaches"
+	}
 	if n.IsEmpty() || n.Hi < central.FirstBad {
 		return
 	}
 	clause, definite := verdict(nv.Name(), n, central.FirstBad)
-	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the product is +Inf or NaN although the probability is at most 1",
-		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox())
+	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that %s), after which the product is +Inf or NaN although the probability is at most 1",
+		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), reach)
 	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.formedPMFMatch(res, e, f)})
+}
+
+// expFormed reports whether x is math.Exp of something, directly or as
+// the one value of a local: an exponential of log-gamma values, which
+// is +Inf from CentralBinomialExp on, where math.Exp stops.
+func (fc *fnCtx) expFormed(x ast.Expr) bool {
+	x = fc.stripConv(x)
+	if id, ok := x.(*ast.Ident); ok {
+		if d := fc.singleDef(id); d != nil {
+			x = fc.stripConv(d)
+		}
+	}
+	call, ok := x.(*ast.CallExpr)
+	return ok && fc.c.isMathFunc(call, "Exp")
 }
 
 // formedPMFMatch offers the helper call for a binomial probability

@@ -223,7 +223,10 @@ func (fc *fnCtx) modelCountRatio(res *vm.Result) {
 				// n a sum of variables (n1 + n2): unknown range.
 				r = ranges.Top()
 			}
-			central := thresholds.CentralBinomial(t.Num)
+			central, reach := thresholds.CentralBinomial(t.Num), "fits"
+			if fc.expFormed(y) {
+				central, reach = thresholds.CentralBinomialExp(t.Num), "math.Exp reaches"
+			}
 			if r.IsEmpty() || bounded(r) && r.Hi < central.FirstBad {
 				return true
 			}
@@ -232,8 +235,8 @@ func (fc *fnCtx) modelCountRatio(res *vm.Result) {
 			if ok {
 				clause, _ = verdict(nv.Name(), r, central.FirstBad)
 			}
-			msg := fmt.Sprintf("divides by C(%s, %s) formed on its own in %s: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), after which the quotient is 0, or NaN where %s overflowed too, although the ratio is finite%s",
-				f.Args[0], f.Args[1], t.typeName(), verb(t), name, central.FirstBad, f.Args[1], parenAffine(f.Args[0]), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), src(n.X), clause)
+			msg := fmt.Sprintf("divides by C(%s, %s) formed on its own in %s: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that %s), after which the quotient is 0, or NaN where %s overflowed too, although the ratio is finite%s",
+				f.Args[0], f.Args[1], t.typeName(), verb(t), name, central.FirstBad, f.Args[1], parenAffine(f.Args[0]), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), reach, src(n.X), clause)
 			fc.report(finding{node: n, cat: catRatio, msg: msg})
 		}
 		return true

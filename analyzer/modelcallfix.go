@@ -28,6 +28,8 @@ func (fc *fnCtx) callRootMatch(res *vm.Result, root ast.Expr, form vm.Form) *fix
 		shape = fixes.ShapeHypergeometric
 	case vm.NegBinomialPMF: // form and shape: f, s, p
 		shape = fixes.ShapeNegBinomialPMF
+	case vm.InvBeta: // form and shape: a, b
+		shape = fixes.ShapeInverseBeta
 	default:
 		return nil
 	}

@@ -139,16 +139,22 @@ var domains = map[string]domain{
 	"Factorial":        {bounds: nAtLeast0, words: "n ≥ 0"},
 	"PowOverFactorial": {bounds: []bound{{"0", "%[2]s", false}}, words: "k ≥ 0"},
 	"PoissonPMF":       {bounds: []bound{{"0", "%[1]s", false}, {"0", "%[2]s", false}}, words: "k ≥ 0, λ ≥ 0"},
-	"BinomialPMF":      {bounds: pmfBetween, words: "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
+	// λ^k e^−λ / k! is what the helper computes for any λ.
+	"PoissonTerm": {bounds: []bound{{"0", "%[1]s", false}}, words: "k ≥ 0"},
+	"BinomialPMF": {bounds: pmfBetween, words: "0 ≤ k ≤ n, 0 ≤ p ≤ 1"},
 	"NegativeBinomialPMF": {bounds: []bound{{"0", "%[1]s", false}, {"1", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "1", false}},
 		words: "f ≥ 0, s ≥ 1, 0 ≤ p ≤ 1"},
 	// Operands k, N, K, n. Outside its support the hypergeometric
-	// probability is 0, as the helper says; only a lot that cannot exist
-	// has no value there. Float counts are held to the support:
-	// 0 ≤ k ≤ K, k ≤ n, 0 ≤ n−k ≤ N−K.
+	// probability is 0, as the helper says, but the code's own binomials
+	// need not be: one over factorial loops, whose empty product is 1
+	// below 2, is 1/(k!·(−d)!·…) ≠ 0 for k > n. The helper runs only
+	// where each of the three binomials is in its own domain:
+	// 0 ≤ k ≤ K and 0 ≤ n − k ≤ N − K, which imply 0 ≤ n ≤ N (tested
+	// before the differences, which then cannot wrap). Float counts are
+	// held to the support: 0 ≤ k ≤ K, k ≤ n, 0 ≤ n−k ≤ N−K.
 	"HypergeometricPMF": {
-		bounds: []bound{{"0", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "%[2]s", false}, {"0", "%[4]s", false}, {"%[4]s", "%[2]s", false}},
-		words:  "0 ≤ successes, draws ≤ total",
+		bounds: []bound{{"0", "%[1]s", false}, {"%[1]s", "%[3]s", false}, {"%[1]s", "%[4]s", false}, {"%[4]s", "%[2]s", false}, {"%[4]s-%[1]s", "%[2]s-%[3]s", false}},
+		words:  "0 ≤ k ≤ successes, 0 ≤ draws − k ≤ total − successes",
 		counts: []bound{{"0", "%[1]s", false}, {"%[1]s", "%[3]s", false}, {"%[1]s", "%[4]s", false}, {"%[4]s-%[1]s", "%[2]s-%[3]s", false}},
 	},
 	"Beta": {bounds: []bound{{"0", "%[1]s", true}, {"0", "%[2]s", true}}, words: "positive arguments"},
@@ -173,7 +179,7 @@ func domainOf(name string, n int) (domain, bool) {
 var domainShapes = map[Shape]bool{
 	ShapeBinomial: true, ShapePermutation: true, ShapeMultinomial: true, ShapeCatalan: true, ShapeFactorialValue: true,
 	ShapeHypergeometric: true, ShapePowOverFactorial: true, ShapePoisson: true, ShapeBinomialPMF: true,
-	ShapeNegBinomialPMF: true, ShapeBeta: true,
+	ShapeNegBinomialPMF: true, ShapeBeta: true, ShapeInverseBeta: true,
 }
 
 // keepOutsideDomain makes the node's own expression run where the
@@ -204,8 +210,17 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	if len(b.m.Chain) > 0 && (err != nil || quotient == "") {
 		return alone()
 	}
-	if err != nil || quotient == "" && len(b.absorbed) > 0 {
+	if err != nil {
 		return text, nil
+	}
+	// Locals the rewrite deletes (hit := C(bad, k) read by return
+	// hit·miss/C(total, n)) move into the branch when they are the
+	// statements just before the return; the exact quotient reads none.
+	var defs []ast.Stmt
+	if quotient == "" {
+		if defs, ok = b.absorbedBeforeReturn(args); !ok || len(defs) > 0 && b.returning() == nil {
+			return text, nil
+		}
 	}
 	ops := make([]any, len(args))
 	exprs := make([]ast.Expr, len(args))
@@ -256,7 +271,13 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	if quotient != "" {
 		return b.keepAs(text, b.m.Node, quotient, conds, false, "// outside "+d.words+", as the code computed it: the factorial of a negative number is 1")
 	}
-	return b.keepAsWritten(text, b.m.Node, conds, false, "outside "+d.words+" the expression as written")
+	var note strings.Builder
+	for _, def := range defs { // defs only where a return statement returns the node
+		ind := b.indentOf(b.returning().Pos())
+		fmt.Fprintf(&note, "%s\n%s\t", b.copyText(def), ind)
+	}
+	note.WriteString("//overfact:allow outside " + d.words + " the expression as written")
+	return b.keepAs(text, b.m.Node, b.copyText(b.m.Node), conds, false, note.String())
 }
 
 // keepAsWritten returns text, the helper call that replaces node, so
@@ -377,4 +398,42 @@ func operandText(text string, e ast.Expr) string {
 		return text
 	}
 	return "(" + text + ")"
+}
+
+// absorbedBeforeReturn returns the definitions the rewrite deletes, in
+// source order, when the as-written branch can hold them: none, or the
+// statements just before the return statement that returns the node,
+// defining no variable an operand reads (the test runs before them).
+func (b *builder) absorbedBeforeReturn(args []ast.Expr) ([]ast.Stmt, bool) {
+	if len(b.absorbed) == 0 {
+		return nil, true
+	}
+	ret := b.returning()
+	if ret == nil {
+		return nil, false
+	}
+	list, at, err := b.enclosingList(ret)
+	if err != nil || at < len(b.absorbed) {
+		return nil, false
+	}
+	defs := list[at-len(b.absorbed) : at]
+	mine := make(map[ast.Stmt]bool)
+	for _, d := range b.absorbed {
+		mine[d] = true
+	}
+	defined := make(map[types.Object]bool)
+	for _, d := range defs {
+		if !mine[d] {
+			return nil, false
+		}
+		defined[b.definedVar(d)] = true
+	}
+	for _, a := range args {
+		for _, v := range b.vars(a) {
+			if defined[v] {
+				return nil, false
+			}
+		}
+	}
+	return defs, true
 }

@@ -28,7 +28,12 @@ func buildInverseBeta(b *builder) error {
 		return err
 	}
 	b.shown = "1/" + text
-	b.replace(b.m.Node.Pos(), b.m.Node.End(), b.shown)
+	// Below zero Γ is finite where lgamma.Beta is NaN: the expression as
+	// written runs there (domain.go).
+	if text, err = b.keepOutsideDomain(b.shown, b.m.Args); err != nil {
+		return err
+	}
+	b.replace(b.m.Node.Pos(), b.m.Node.End(), text)
 	for _, d := range b.absorbed {
 		b.deleteStmt(d)
 	}

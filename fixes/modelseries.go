@@ -108,6 +108,21 @@ func buildModelSeriesTerm(b *builder) error {
 	if err != nil {
 		return err
 	}
+	if ast.Unparen(quo.X) == pow {
+		// A term of e^−λ·Σ λ^k/k! takes e^−λ in (poissonsum.go).
+		folded, err := b.foldPoissonTerm(quo, m.Args[0], m.Args[1])
+		if err != nil {
+			return err
+		}
+		if folded {
+			for _, st := range updates {
+				b.deleteStmt(st)
+			}
+			b.applyInits(inits)
+			b.message += " and drop the running " + m.Acc.Name()
+			return nil
+		}
+	}
 	call, err := b.powOverFactorialCall(m.Args[0], m.Args[1], quo.Pos())
 	if err != nil {
 		return err

@@ -16,12 +16,13 @@ import (
 // λ ≈ 709, e^−λ underflows to 0 while the sum of λ^k/k! (about e^λ)
 // overflows to +Inf, and the product is NaN where the probability is
 // between 0 and 1. So where the sum is read only through that product,
-// e^−λ goes into each term, λ^k e^−λ/k! = PoissonPMF(k, λ) (common
-// practice), and the product becomes the sum itself:
+// e^−λ goes into each term, λ^k e^−λ/k! = PoissonTerm(k, λ) (common
+// practice; the probability PoissonPMF(k, λ) for λ ≥ 0, the term of the
+// alternating sum the code forms for λ < 0), and the product becomes the sum itself:
 //
 //	sum := 0.0                       sum := 0.0
 //	for k := 0; k <= n; k++ {        for k := 0; k <= n; k++ {
-//		sum += math.Pow(l, float64(k)) / fact(k)   →   sum += lgamma.PoissonPMF(k, l)
+//		sum += math.Pow(l, float64(k)) / fact(k)   →   sum += lgamma.PoissonTerm(k, l)
 //	}                                }
 //	return math.Exp(-l) * sum        return sum
 //
@@ -39,21 +40,78 @@ var errNoPoissonSum = errors.New("not a Poisson sum scaled by e^−λ after its 
 func (b *builder) poissonSum() error {
 	node := b.m.Node
 	x, k := b.m.Args[0], b.m.Args[1]
+	product, accRead, err := b.poissonScale(node, x)
+	if err != nil {
+		return err
+	}
+	if err := b.covered(); err != nil {
+		return err
+	}
+	if err := b.checkShape(); err != nil {
+		return err
+	}
+	text, err := b.call("PoissonTerm", []ast.Expr{k, x}, b.m.Result)
+	if err != nil {
+		return err
+	}
+	b.replace(node.Pos(), node.End(), text)
+	b.foldedScale(product, accRead)
+	return nil
+}
+
+// foldPoissonTerm rewrites term, x^k/k! in a series builder's loop, as
+// PoissonTerm(k, x), x^k·e^−x/k! at any real x (negative rates
+// included, where PoissonPMF is NaN), where its sum is read only
+// through e^−x·sum after the loop (poissonScale), and that product as
+// the sum. It reports false, with nothing written, where the sum is no
+// such Poisson sum or k is not an integer.
+func (b *builder) foldPoissonTerm(term, x, k ast.Expr) (bool, error) {
+	if classOf(b.pass.TypesInfo.TypeOf(b.floatOfInt(k))) == classFloat {
+		return false, nil
+	}
+	product, accRead, err := b.poissonScale(term, x)
+	if err == errNoPoissonSum {
+		return false, nil
+	} else if err != nil {
+		return false, err
+	}
+	text, err := b.call("PoissonTerm", []ast.Expr{k, x}, b.m.Result)
+	if err != nil {
+		return false, err
+	}
+	b.replace(term.Pos(), term.End(), text)
+	b.foldedScale(product, accRead)
+	return true, nil
+}
+
+// foldedScale replaces the product e^−λ·sum by the sum and words the
+// fix.
+func (b *builder) foldedScale(product *ast.BinaryExpr, accRead ast.Expr) {
+	b.replace(product.Pos(), product.End(), b.copyText(accRead))
+	b.message = "Rewrite each term as " + b.shown + ", with e^−λ folded in, and the scaled sum as " + b.text(accRead) + " (imports " + HelperPath + ")"
+}
+
+// poissonScale checks that node, a term x^k/k!, is the whole right side
+// of sum += in its loop's body, sum a float starting at 0 read nowhere
+// else but in one product e^−x·sum after the loop, with nothing x reads
+// assigned from the loop to it, and returns that product and its read
+// of sum; errNoPoissonSum where that does not hold.
+func (b *builder) poissonScale(node ast.Node, x ast.Expr) (*ast.BinaryExpr, ast.Expr, error) {
 	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
 	if len(path) < 3 {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	as, ok := path[1].(*ast.AssignStmt)
 	if !ok || as.Tok != token.ADD_ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 || ast.Unparen(as.Rhs[0]) != node {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	id, ok := as.Lhs[0].(*ast.Ident)
 	if !ok {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	acc, ok := b.pass.TypesInfo.Uses[id].(*types.Var)
 	if !ok || classOf(acc.Type()) != classFloat {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	// The loop whose body holds the update directly.
 	var loop ast.Stmt
@@ -73,15 +131,15 @@ func (b *builder) poissonSum() error {
 		}
 	}
 	if loop == nil {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	list, at, err := b.enclosingList(loop)
 	if err != nil {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	lambda, ok := b.linearOf(x)
 	if !ok {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	// Every use of acc: its definition at 0, the update, and one product.
 	var product *ast.BinaryExpr
@@ -101,11 +159,11 @@ func (b *builder) poissonSum() error {
 		})
 	}
 	if product == nil {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	body := b.enclosingBody(loop)
 	if body == nil {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	startsAtZero := false
 	ok = true
@@ -122,7 +180,7 @@ func (b *builder) poissonSum() error {
 		return ok
 	})
 	if !ok || !startsAtZero {
-		return errNoPoissonSum
+		return nil, nil, errNoPoissonSum
 	}
 	for _, v := range b.vars(x) {
 		for _, s := range list[at:] {
@@ -130,24 +188,11 @@ func (b *builder) poissonSum() error {
 				break
 			}
 			if b.assigned(v, s) {
-				return errNoPoissonSum
+				return nil, nil, errNoPoissonSum
 			}
 		}
 	}
-	if err := b.covered(); err != nil {
-		return err
-	}
-	if err := b.checkShape(); err != nil {
-		return err
-	}
-	text, err := b.call("PoissonPMF", []ast.Expr{k, x}, b.m.Result)
-	if err != nil {
-		return err
-	}
-	b.replace(node.Pos(), node.End(), text)
-	b.replace(product.Pos(), product.End(), b.copyText(accRead))
-	b.message = "Rewrite each term as " + b.shown + ", with e^−λ folded in, and the scaled sum as " + b.text(accRead) + " (imports " + HelperPath + ")"
-	return nil
+	return product, accRead, nil
 }
 
 // isExpOf reports whether e is math.Exp(E) with E the linear form want.

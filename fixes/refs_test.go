@@ -99,6 +99,10 @@ func refBinomialPMF(x []float64) *big.Float {
 }
 
 // refHypergeometric is C(K,k) C(N−K,n−k) / C(N,n) for (k, N, K, n).
+// Its cases take inputs where each binomial is in its domain (n − k ≤
+// N − K among them): outside, the rewritten code keeps the expression
+// as written, whose own arithmetic (a binomial over factorial loops is
+// not 0 past its domain) the after-fix differential judges.
 func refHypergeometric(x []float64) *big.Float {
 	k, total, bad, n := int64(x[0]), int64(x[1]), int64(x[2]), int64(x[3])
 	num := new(big.Int).Mul(chooseBig(bad, k), chooseBig(total-bad, n-k))

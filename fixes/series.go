@@ -89,11 +89,20 @@ func buildSeriesTerm(b *builder) error {
 	if err != nil {
 		return err
 	}
-	text, err := b.call(form.helper, s.args, m.Result)
-	if err != nil {
-		return err
+	folded := false
+	if form.helper == "PowOverFactorial" {
+		// A term of e^−λ·Σ λ^k/k! takes e^−λ in (poissonsum.go).
+		if folded, err = b.foldPoissonTerm(term, s.args[0], s.args[1]); err != nil {
+			return err
+		}
 	}
-	b.replace(term.Pos(), term.End(), text)
+	if !folded {
+		text, err := b.call(form.helper, s.args, m.Result)
+		if err != nil {
+			return err
+		}
+		b.replace(term.Pos(), term.End(), text)
+	}
 	for _, st := range s.stmts {
 		b.deleteStmt(st)
 	}
@@ -102,7 +111,10 @@ func buildSeriesTerm(b *builder) error {
 	for i, v := range s.drop {
 		names[i] = v.Name()
 	}
-	b.message = b.rewriteMessage() + " and drop the running " + strings.Join(names, " and ")
+	if !folded {
+		b.message = b.rewriteMessage()
+	}
+	b.message += " and drop the running " + strings.Join(names, " and ")
 	return nil
 }
 
@@ -132,8 +144,9 @@ var seriesForms = []seriesForm{
 		}
 		return nil
 	}},
-	// math.Exp(−λ)·math.Pow(λ, k)/k!, any order → PoissonPMF(k, λ)
-	{"PoissonPMF", func(b *builder, s *seriesTerm, num ast.Expr) []ast.Expr {
+	// math.Exp(−λ)·math.Pow(λ, k)/k!, any order → PoissonTerm(k, λ), the
+	// probability for λ ≥ 0 and the formula below
+	{"PoissonTerm", func(b *builder, s *seriesTerm, num ast.Expr) []ast.Expr {
 		var fs, den []ast.Expr
 		if !b.factors(num, false, &fs, &den) || len(fs) != 2 || len(den) != 0 {
 			return nil

@@ -49,7 +49,7 @@ func init() {
 		ShapeCatalan:          {"Catalan number", buildRatio, family{"Catalan", "MustCatalanInt64", ""}, 1, catalanFactors},
 		ShapeHypergeometric:   {"hypergeometric probability", buildTerm, family{float: "HypergeometricPMF"}, 4, hypergeometricFactors},
 		ShapePowOverFactorial: {"power over factorial", buildTerm, family{float: "PowOverFactorial"}, 2, powOverFactorialFactors},
-		ShapePoisson:          {"Poisson term", buildTerm, family{float: "PoissonPMF"}, 2, poissonFactors},
+		ShapePoisson:          {"Poisson term", buildTerm, family{float: "PoissonTerm"}, 2, poissonFactors},
 		ShapeBinomialPMF:      {"binomial probability", buildTerm, family{float: "BinomialPMF"}, 3, binomialPMFFactors},
 		ShapeGammaRatio:       {"gamma ratio", buildTerm, family{float: "GammaRatio"}, 2, gammaRatioFactors},
 		ShapeBeta:             {"beta function", buildTerm, family{float: "Beta"}, 2, betaFactors},
@@ -143,7 +143,9 @@ func betaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]fa
 }
 
 func inverseBetaFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
-	return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])}, nil
+	// Or through a function whose value is Γ (the analyzer's value fact).
+	return []factorPattern{b.mathCall("Gamma", o[0].add(o[1]))}, []factorPattern{b.mathCall("Gamma", o[0]), b.mathCall("Gamma", o[1])},
+		&[2][]factorPattern{{b.userCall(o[0].add(o[1]))}, {b.userCall(o[0]), b.userCall(o[1])}}
 }
 
 func factorialValueFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // n

@@ -1,6 +1,9 @@
 package thresholds
 
-import "math"
+import (
+	"math"
+	"math/big"
+)
 
 // Exponentials of log-gamma values that overflow.
 //
@@ -46,4 +49,31 @@ func ExpLgammaFirstBadFloat(eval func(v float64) float64, from, to float64) (flo
 		return from, true
 	}
 	return bisect64(from, to, bad), true
+}
+
+// CentralBinomialExp returns the first n at which C(n, ⌊n/2⌋) formed
+// as math.Exp of its logarithm (exp of log-gamma differences) is +Inf in
+// t. math.Exp is +Inf past ExpMaxArg, which the platform's math.Exp may
+// put below ln of the largest float64 (amd64: about 709.44, against
+// 709.78), so the exponential can stop one or two n before the
+// coefficient itself stops fitting (CentralBinomial). For other types
+// than float64 it is CentralBinomial. LastGood is the coefficient at
+// the n before, the largest central one whose exponential is finite.
+func CentralBinomialExp(t Num) Limit {
+	lim := CentralBinomial(t)
+	if !t.Float || t.Bits != 64 || lim.FirstBad == math.MaxInt64 {
+		return lim
+	}
+	return memoLimit(cacheKey{shape: "cbin-exp", t: t}, func() Limit {
+		// math.Exp(x) is +Inf exactly for x > ExpMaxArg, that is for a
+		// coefficient past e^ExpMaxArg, which math.Exp(ExpMaxArg) is to
+		// an ulp; consecutive central coefficients differ by a factor
+		// near 2, so the ulp cannot move n.
+		edge := new(big.Float).SetFloat64(math.Exp(ExpMaxArg()))
+		n := lim.FirstBad
+		for n > 1 && new(big.Float).SetInt(central(n-1)).Cmp(edge) > 0 {
+			n--
+		}
+		return exactLimit(n, central)
+	})
 }

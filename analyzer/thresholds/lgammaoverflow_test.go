@@ -2,6 +2,7 @@ package thresholds
 
 import (
 	"math"
+	"math/big"
 	"testing"
 )
 
@@ -35,5 +36,48 @@ func TestExpLgammaFirstBad(t *testing.T) {
 	}
 	if _, ok := ExpLgammaFirstBad(func(n int64) float64 { return math.Exp(lgammaOf(float64(n) + 1)) }, 0, 170); ok {
 		t.Error("a first bad n below 171")
+	}
+}
+
+// TestCentralBinomialExp: the first n at which math.Exp of ln C(n, ⌊n/2⌋)
+// is +Inf, against ln C computed from the exact coefficient with
+// math/big (mantissa and binary exponent, so the logarithm is good to
+// an ulp) and against the log-gamma difference as code computes it;
+// C(1029, 514) ≈ 1.43e308 is the largest central coefficient that fits
+// float64 (math/big), so the limit is at most 1030.
+func TestCentralBinomialExp(t *testing.T) {
+	f64 := mustNamed(t, "float64", nil)
+	lim := CentralBinomialExp(f64)
+	if lim.FirstBad > CentralBinomial(f64).FirstBad || lim.FirstBad < CentralBinomial(f64).FirstBad-2 {
+		t.Fatalf("FirstBad = %d, CentralBinomial's %d", lim.FirstBad, CentralBinomial(f64).FirstBad)
+	}
+	t.Logf("C(n, ⌊n/2⌋) as an exponential is +Inf from n = %d (the coefficient from %d)", lim.FirstBad, CentralBinomial(f64).FirstBad)
+	lnBig := func(n int64) float64 {
+		c := new(big.Float).SetInt(new(big.Int).Binomial(n, n/2))
+		mant := new(big.Float)
+		e := c.MantExp(mant)
+		m, _ := mant.Float64()
+		return math.Log(m) + float64(e)*math.Ln2
+	}
+	lnGamma := func(n int64) float64 {
+		a, _ := math.Lgamma(float64(n) + 1)
+		b, _ := math.Lgamma(float64(n/2) + 1)
+		c, _ := math.Lgamma(float64(n-n/2) + 1)
+		return a - b - c
+	}
+	for n := int64(1000); n <= 1040; n++ {
+		want := n >= lim.FirstBad
+		if got := math.IsInf(math.Exp(lnBig(n)), 1); got != want {
+			t.Errorf("n = %d: exp(ln C) from math/big is +Inf: %v, want %v", n, got, want)
+		}
+		if got := math.IsInf(math.Exp(lnGamma(n)), 1); got != want {
+			t.Errorf("n = %d: exp of log-gamma values is +Inf: %v, want %v", n, got, want)
+		}
+	}
+	if lim.LastGood.Cmp(new(big.Int).Binomial(lim.FirstBad-1, (lim.FirstBad-1)/2)) != 0 {
+		t.Errorf("LastGood = %v", lim.LastGood)
+	}
+	if f32 := mustNamed(t, "float32", nil); CentralBinomialExp(f32).FirstBad != CentralBinomial(f32).FirstBad {
+		t.Error("float32: not CentralBinomial")
 	}
 }

@@ -95,7 +95,7 @@ func ExactlyLog(n, k, p float64) float64 {
 	b, _ := math.Lgamma(k + 1)
 	c, _ := math.Lgamma(n - k + 1)
 	coef := math.Exp(a - b - c) // want `math.Exp of log-gamma values computes C\(n, k\) from 3 log-gamma values .* from n = 200 with k between 1 and n`
-	return coef * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030`
+	return coef * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1029`
 }
 
 // ExactlyInline writes the same in one expression.
@@ -103,7 +103,7 @@ func ExactlyInline(n, k, p float64) float64 {
 	a, _ := math.Lgamma(n + 1)
 	b, _ := math.Lgamma(k + 1)
 	c, _ := math.Lgamma(n - k + 1)
-	return math.Exp(a-b-c) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1030` `computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) from 3 log-gamma values`
+	return math.Exp(a-b-c) * math.Pow(p, k) * math.Pow(1-p, n-k) // want `binomial probability .* overflows to \+Inf for n ≥ 1029` `computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) from 3 log-gamma values`
 }
 
 // ExactlyStable stays in log space to the end.

@@ -47,3 +47,14 @@ func SproutedF(k, n, p float64) float64 { // want SproutedF:`value Γ\(p1 \+ 1\)
 func Trays(n int) float64 {
 	return float64(n) * 2.5
 }
+
+// Gamma is the Gamma function under the name the germination sheets use.
+func Gamma(x float64) float64 { // want Gamma:`value Γ\(p0\), wrong once p0 ≥ 171.62`
+	return math.Gamma(x)
+}
+
+// Spread is the normalising constant 1/B(a, b) of the Beta model of the
+// sprouting rate, over Gamma: below zero the expression as written stays.
+func Spread(a, b float64) float64 { // want Spread:`value Γ\(p0 \+ p1\)/\(Γ\(p0\)·Γ\(p1\)\)`
+	return Gamma(a+b) / (Gamma(a) * Gamma(b)) // want `Spread computes 1/B\(a, b\) in float64, which fits where Gamma\(a \+ b\) already is \+Inf or NaN from a \+ b = 171.624377`
+}

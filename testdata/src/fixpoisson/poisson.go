@@ -71,3 +71,29 @@ func HalfSteps(lambda, n float64) float64 {
 	}
 	return p
 }
+
+// WalkIns is the chance of at most n walk-in customers in an hour with
+// lambda on average, summed as e^(−λ)·Σ λ^k/k! over a running factorial
+// (the k = 0 term divides by 0! = 1): the term folds e^(−λ) in, which
+// holds for a negative lambda too.
+func WalkIns(lambda float64, n int) float64 {
+	f, sum := 1.0, 0.0
+	for k := 0; k <= n; k++ { // want `running factorial f computes k! inside the sum`
+		if k > 0 {
+			f *= float64(k)
+		}
+		sum += math.Pow(lambda, float64(k)) / f
+	}
+	return math.Exp(-lambda) * sum
+}
+
+// Tickets is the chance of between 1 and n support tickets in an hour,
+// the same sum from k = 1 over a factorial loop of its own.
+func Tickets(lambda float64, n int) float64 {
+	f, sum := 1.0, 0.0
+	for k := 1; k <= n; k++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
+		f *= float64(k)
+		sum += math.Pow(lambda, float64(k)) / f
+	}
+	return math.Exp(-lambda) * sum
+}

@@ -40,7 +40,7 @@ func SproutsFromLog(n, k int, rate float64) float64 {
 	if k < 0 || k > n {
 		return 0
 	}
-	return math.Exp(tallykit.Lchoose(n, k)) * math.Pow(rate, float64(k)) * math.Pow(1-rate, float64(n-k)) // want `computes the binomial probability C\(n, k\)·rate\^k·\(1−rate\)\^\(n - k\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1030`
+	return math.Exp(tallykit.Lchoose(n, k)) * math.Pow(rate, float64(k)) * math.Pow(1-rate, float64(n-k)) // want `computes the binomial probability C\(n, k\)·rate\^k·\(1−rate\)\^\(n - k\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1029`
 }
 
 // SproutsLog keeps the whole probability in log space: safe.

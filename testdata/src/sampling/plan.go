@@ -23,7 +23,7 @@ func (l Lot) Chance(k float64) float64 {
 	a, _ := math.Lgamma(float64(l.Size + 1))
 	b, _ := math.Lgamma(float64(ki + 1))
 	c, _ := math.Lgamma(float64(l.Size - ki + 1))
-	return math.Exp(a-b-c) * math.Pow(l.Defect, float64(ki)) * math.Pow(1-l.Defect, float64(l.Size-ki)) // want `computes the binomial probability C\(l.Size, ki\)·l.Defect\^ki·\(1−l.Defect\)\^\(.*\) in float64 with C\(l.Size, ki\) formed on its own: it overflows to \+Inf for l.Size ≥ 1030` `math\.Exp of log-gamma values computes C\(l\.Size, ki\)·l\.Defect\^ki·\(1−l\.Defect\)\^\(-ki \+ l\.Size`
+	return math.Exp(a-b-c) * math.Pow(l.Defect, float64(ki)) * math.Pow(1-l.Defect, float64(l.Size-ki)) // want `computes the binomial probability C\(l.Size, ki\)·l.Defect\^ki·\(1−l.Defect\)\^\(.*\) in float64 with C\(l.Size, ki\) formed on its own: it overflows to \+Inf for l.Size ≥ 1029` `math\.Exp of log-gamma values computes C\(l\.Size, ki\)·l\.Defect\^ki·\(1−l\.Defect\)\^\(-ki \+ l\.Size`
 }
 
 // Orderings is the number of ways the two suppliers' n1 and n2
@@ -42,7 +42,7 @@ func RankShare(count float64, n1, n2 int) float64 {
 	b, _ := math.Lgamma(float64(n1 + 1))
 	c, _ := math.Lgamma(float64(n2 + 1))
 	all := math.Exp(a - b - c) // want `math\.Exp of log-gamma values computes C\(n1 \+ n2, n1\) from 3 log-gamma values whose roundin`
-	return count / all // want `divides by C\(n1 \+ n2, n1\) formed on its own in float64: it overflows to \+Inf for n1 \+ n2 ≥ 1030 at n1 = \(n1 \+ n2\)/2 .*after which the quotient is 0, or NaN where count overflowed too`
+	return count / all // want `divides by C\(n1 \+ n2, n1\) formed on its own in float64: it overflows to \+Inf for n1 \+ n2 ≥ 1029 at n1 = \(n1 \+ n2\)/2 .*after which the quotient is 0, or NaN where count overflowed too`
 }
 
 // Sample is the chance that a sample of m parts of a lot of n holds
