@@ -56,9 +56,26 @@ func (fc *fnCtx) gammaCallMatch(call *ast.CallExpr) *fixes.Match {
 	}
 	pow, ok := ast.Unparen(quo.X).(*ast.CallExpr)
 	if !ok || !fc.c.isMathFunc(pow, "Pow") || len(pow.Args) != 2 {
+		if pm := fc.productChain(call); pm != nil {
+			return pm
+		}
 		return m
 	}
 	return &fixes.Match{Shape: fixes.ShapePowOverGamma, Node: quo, Args: []ast.Expr{pow.Args[0], pow.Args[1], call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(quo)}
+}
+
+// productChain describes the largest product (or quotient) around e in
+// which e is a factor, for the fixer to take in log space: the powers
+// and Gamma values among its factors become products that keep their
+// logarithms (fixes/logproduct.go), which changes no value the float64
+// arithmetic got right. nil where e is no factor of a product; the
+// fixer checks the factors.
+func (fc *fnCtx) productChain(e ast.Expr) *fixes.Match {
+	top := fc.productRoot(e)
+	if ast.Unparen(top) == ast.Unparen(e) {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapeProductChain, Node: top, Result: fc.c.pass.TypesInfo.TypeOf(top)}
 }
 
 // gammaEscapes reports whether the value of a bare math.Gamma call can
