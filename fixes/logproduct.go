@@ -69,19 +69,25 @@ func buildLogSpaceTerm(b *builder) error {
 		if !ok {
 			continue
 		}
-		v, ok := b.pass.TypesInfo.Uses[id].(*types.Var)
+		v, ok := b.pass.TypesInfo.ObjectOf(id).(*types.Var)
 		if !ok || lp.set[v] {
 			continue
 		}
 		if err := lp.qualifies(v, body); err != nil {
+			// A product written in one expression is still taken in
+			// log space where its parts alone are not carried.
+			if lp.chainableIn(term, true) && lp.leaves(term) >= 2 {
+				return buildProductChain(b)
+			}
 			return err
 		}
 		lp.set[v] = true
 		names = append(names, v.Name())
 	}
-	if len(lp.set) == 0 || !lp.chainable(term) {
+	if len(lp.set) == 0 || !lp.chainable(term) && !lp.assignsPart(body, term) {
 		return errors.New("no part of the term is a running product the fixer can carry in log space")
 	}
+	names = append(names, lp.copies(body)...)
 	if b.commentIn(body) {
 		// The rewrite replaces statements whole; a comment inside one
 		// would go.
@@ -95,6 +101,61 @@ func buildLogSpaceTerm(b *builder) error {
 	sort.Strings(names)
 	b.message = fmt.Sprintf("Carry %s as products in log space (%s.Product) (imports %s)", strings.Join(names, ", "), lp.pkg, HelperPath)
 	return nil
+}
+
+// copies adds to the carried variables those whose every value is a
+// product of carried ones (norm := g), until none is left, and returns
+// their names: a Gamma value kept under a second name is carried under
+// both.
+func (lp *logProducts) copies(body *ast.BlockStmt) []string {
+	var names []string
+	for more := true; more; {
+		more = false
+		ast.Inspect(body, func(n ast.Node) bool {
+			as, ok := n.(*ast.AssignStmt)
+			if !ok || as.Tok != token.DEFINE || len(as.Lhs) != len(as.Rhs) {
+				return true
+			}
+			for i, l := range as.Lhs {
+				id, ok := l.(*ast.Ident)
+				if !ok || !lp.chainable(as.Rhs[i]) {
+					continue
+				}
+				v, ok := lp.b.pass.TypesInfo.Defs[id].(*types.Var)
+				if ok && !lp.set[v] && lp.qualifies(v, body) == nil {
+					lp.set[v] = true
+					names = append(names, v.Name())
+					more = true
+				}
+			}
+			return true
+		})
+	}
+	return names
+}
+
+// assignsPart reports whether e is (in) the value an assignment gives a
+// carried variable.
+func (lp *logProducts) assignsPart(body *ast.BlockStmt, e ast.Expr) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || found {
+			return !found
+		}
+		for i, l := range as.Lhs {
+			if !lp.isPart(ast.Unparen(l)) {
+				continue
+			}
+			r := as.Rhs[0]
+			if len(as.Lhs) == len(as.Rhs) {
+				r = as.Rhs[i]
+			}
+			found = found || r.Pos() <= e.Pos() && e.End() <= r.End()
+		}
+		return !found
+	})
+	return found
 }
 
 // logProducts is one log-space rewrite: the variables it carries as
@@ -125,7 +186,7 @@ func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
 		return fmt.Errorf("%s is not declared by :=", v.Name())
 	}
 	var bad error
-	self := false
+	self, products := false, true
 	assigned.Each(b.pass.TypesInfo, body, nil, func(obj types.Object, at ast.Node) bool {
 		if obj != v {
 			return true
@@ -144,9 +205,13 @@ func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
 				return false
 			}
 			for i, l := range as.Lhs {
-				if b.isObj(l, v) && b.mentionsObj(as.Rhs[i], v) && as.Tok == token.ASSIGN {
+				if !b.isObj(l, v) {
+					continue
+				}
+				if b.mentionsObj(as.Rhs[i], v) && as.Tok == token.ASSIGN {
 					self = true
 				}
+				products = products && lp.chainableIn(as.Rhs[i], true)
 			}
 		default:
 			bad = fmt.Errorf("%s is changed by %s", v.Name(), as.Tok)
@@ -157,8 +222,8 @@ func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
 	if bad != nil {
 		return bad
 	}
-	if !self {
-		return fmt.Errorf("%s is not a running product", v.Name())
+	if !self && !products {
+		return fmt.Errorf("%s is neither a running product nor a product of powers, Gamma values and exponentials", v.Name())
 	}
 	return nil
 }
@@ -172,42 +237,52 @@ func (lp *logProducts) isPart(e ast.Expr) bool {
 // chainable reports whether e is a product (or quotient, negation,
 // parenthesis) with a carried variable among its direct factors: it
 // becomes a Product expression.
-func (lp *logProducts) chainable(e ast.Expr) bool {
+func (lp *logProducts) chainable(e ast.Expr) bool { return lp.chainableIn(e, lp.calls) }
+
+// chainableIn is chainable with calls of math.Pow, math.Gamma and
+// math.Exp taken as products of their own when calls is set: inside a
+// value that becomes a Product anyway.
+func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 	switch x := e.(type) {
 	case *ast.Ident:
 		return lp.isPart(x)
 	case *ast.CallExpr:
-		return lp.calls && lp.leaf(x) != ""
+		return calls && lp.isLeaf(x)
 	case *ast.ParenExpr:
-		return lp.chainable(x.X)
+		return lp.chainableIn(x.X, calls)
 	case *ast.UnaryExpr:
-		return x.Op == token.SUB && lp.chainable(x.X)
+		return x.Op == token.SUB && lp.chainableIn(x.X, calls)
 	case *ast.BinaryExpr:
-		return (x.Op == token.MUL || x.Op == token.QUO) && (lp.chainable(x.X) || lp.chainable(x.Y))
+		return (x.Op == token.MUL || x.Op == token.QUO) && (lp.chainableIn(x.X, calls) || lp.chainableIn(x.Y, calls))
 	}
 	return false
 }
 
-// leaf writes a call of math.Pow or math.Gamma as the Product that
-// holds its value; "" for any other expression.
-func (lp *logProducts) leaf(e ast.Expr) string {
+// isLeaf reports whether e is a call of math.Pow, math.Gamma or
+// math.Exp.
+func (lp *logProducts) isLeaf(e ast.Expr) bool {
 	c, fn := lp.b.callOf(e)
-	switch {
-	case c == nil:
+	return c != nil && (len(c.Args) == 2 && isMath(fn, "Pow") || len(c.Args) == 1 && (isMath(fn, "Gamma") || isMath(fn, "Exp")))
+}
+
+// leaf writes a call of math.Pow, math.Gamma or math.Exp as the
+// Product that holds its value; "" for any other expression.
+func (lp *logProducts) leaf(e ast.Expr) string {
+	if !lp.isLeaf(e) {
 		return ""
-	case len(c.Args) == 2 && isMath(fn, "Pow"):
-		return lp.pkg + ".PowProduct(" + lp.spliced(c.Args[0]) + ", " + lp.spliced(c.Args[1]) + ")"
-	case len(c.Args) == 1 && isMath(fn, "Gamma"):
-		return lp.pkg + ".GammaProduct(" + lp.spliced(c.Args[0]) + ")"
 	}
-	return ""
+	c, fn := lp.b.callOf(e)
+	if fn.Name() == "Pow" {
+		return lp.pkg + ".PowProduct(" + lp.spliced(c.Args[0]) + ", " + lp.spliced(c.Args[1]) + ")"
+	}
+	return lp.pkg + "." + fn.Name() + "Product(" + lp.spliced(c.Args[0]) + ")"
 }
 
 // product writes e as a Product expression: a chain of its factors, a
 // power from PowProduct, a Gamma value from GammaProduct, any other
 // value from ProductOf.
 func (lp *logProducts) product(e ast.Expr) string {
-	if lp.chainable(e) {
+	if lp.chainableIn(e, true) {
 		return lp.chain(e)
 	}
 	if l := lp.leaf(e); l != "" {
@@ -240,7 +315,7 @@ func (lp *logProducts) apply(left string, op token.Token, y ast.Expr) string {
 	if op == token.QUO || op == token.QUO_ASSIGN {
 		name = "Quo"
 	}
-	if lp.chainable(y) || lp.leaf(y) != "" {
+	if lp.chainableIn(y, true) {
 		return left + "." + name + "(" + lp.product(y) + ")"
 	}
 	return left + "." + name + "Float(" + lp.spliced(y) + ")"
@@ -375,7 +450,7 @@ func (lp *logProducts) leaves(e ast.Expr) int {
 	case *ast.BinaryExpr:
 		n := 0
 		for _, y := range []ast.Expr{x.X, x.Y} {
-			if lp.chainable(y) {
+			if lp.chainableIn(y, true) {
 				n += lp.leaves(y)
 			}
 		}

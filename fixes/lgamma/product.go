@@ -18,8 +18,8 @@ import "math"
 
 // A Product is a product of float64 factors: the float64 value formed
 // as the code forms it, and the natural logarithm of its magnitude
-// (double-double) with its sign. Make one with ProductOf, PowProduct or
-// GammaProduct; the zero Product holds 0 as if it had lost its range
+// (double-double) with its sign. Make one with ProductOf, PowProduct,
+// GammaProduct or ExpProduct; the zero Product holds 0 as if it had lost its range
 // and is not a product of anything.
 type Product struct {
 	v    float64 // the product as float64 arithmetic forms it
@@ -72,6 +72,25 @@ func GammaProduct(a float64) Product {
 		return ProductOf(v)
 	}
 	r := Product{v: v, l: lnAbsGammaDD(a), neg: GammaSign(a) < 0}
+	r.lost = !settled(r.v, r.l)
+	return r
+}
+
+// ExpProduct returns the product holding e^x: math.Exp(x) and x, so
+// that an exponential below or above float64 (e^-800 before a factor of
+// e^700) keeps its value in a product whose other factors bring it back.
+//
+// Special cases are (as math.Exp's):
+//
+//	ExpProduct(+Inf) holds +Inf
+//	ExpProduct(-Inf) holds 0
+//	ExpProduct(NaN) holds NaN
+func ExpProduct(x float64) Product {
+	v := math.Exp(x)
+	if math.IsInf(x, 0) || math.IsNaN(x) {
+		return ProductOf(v)
+	}
+	r := Product{v: v, l: dd{x, 0}}
 	r.lost = !settled(r.v, r.l)
 	return r
 }

@@ -93,6 +93,13 @@ func TestProductOutOfRange(t *testing.T) {
 	if got := ProductOf(1e-200).MulFloat(1e-200).MulFloat(1e300).MulFloat(1e150).Float64(); relOff(got, wantU) > 1e-15 {
 		t.Errorf("1e-200·1e-200·1e300·1e150 = %v, want %s (math/big)", got, wantU.Text('g', 17))
 	}
+	// e^-750·e^700·1e30: the first factor underflows to 0 alone; the
+	// product is e^-50·1e30.
+	wantE := refExp(bf(-50))
+	wantE.Mul(wantE, bf(1e30))
+	if got := ExpProduct(-750).Mul(ExpProduct(700)).MulFloat(1e30).Float64(); relOff(got, wantE) > 1e-15 {
+		t.Errorf("e^-750·e^700·1e30 = %v, want %s (math/big)", got, wantE.Text('g', 17))
+	}
 	// A product that is past float64 is +Inf, one below it 0.
 	if got := PowProduct(10, 400).Float64(); !math.IsInf(got, 1) {
 		t.Errorf("10^400 = %v, want +Inf", got)
