@@ -26,6 +26,10 @@ type Product struct {
 	l    dd      // ln of its magnitude: −Inf for a zero factor, +Inf for an infinite one
 	neg  bool    // the sign of the product (of a zero or infinity too)
 	lost bool    // some step of v left the normal range where the product did not
+	// under: some step of v was below the normal range where the
+	// product was too; v is the float64 value there, but with bits lost,
+	// so a step that brings it back into the normal range loses it.
+	under bool
 }
 
 // ProductOf returns the product of the one factor x.
@@ -53,9 +57,7 @@ func PowProduct(x, p float64) Product {
 	if p == 0 || x == 0 || math.IsInf(x, 0) || math.IsInf(p, 0) || math.IsNaN(v) {
 		return ProductOf(v)
 	}
-	r := Product{v: v, l: ddLog(dd{math.Abs(x), 0}).mulF(p), neg: x < 0 && math.Mod(p, 2) != 0}
-	r.lost = !settled(r.v, r.l)
-	return r
+	return Product{v: v, l: ddLog(dd{math.Abs(x), 0}).mulF(p), neg: x < 0 && math.Mod(p, 2) != 0}.mark(false)
 }
 
 // GammaProduct returns the product holding Γ(a): math.Gamma(a) and
@@ -71,9 +73,7 @@ func GammaProduct(a float64) Product {
 	if a == 0 || isPole(a) || math.IsInf(a, 0) || math.IsNaN(a) {
 		return ProductOf(v)
 	}
-	r := Product{v: v, l: lnAbsGammaDD(a), neg: GammaSign(a) < 0}
-	r.lost = !settled(r.v, r.l)
-	return r
+	return Product{v: v, l: lnAbsGammaDD(a), neg: GammaSign(a) < 0}.mark(false)
 }
 
 // ExpProduct returns the product holding e^x: math.Exp(x) and x, so
@@ -90,25 +90,21 @@ func ExpProduct(x float64) Product {
 	if math.IsInf(x, 0) || math.IsNaN(x) {
 		return ProductOf(v)
 	}
-	r := Product{v: v, l: dd{x, 0}}
-	r.lost = !settled(r.v, r.l)
-	return r
+	return Product{v: v, l: dd{x, 0}}.mark(false)
 }
 
 // Mul returns the product p·q; its float64 value is p's times q's, as
 // the expression p * q forms it.
 func (p Product) Mul(q Product) Product {
-	r := Product{v: p.v * q.v, l: p.l.add(q.l), neg: p.neg != q.neg}
-	r.lost = p.lost || q.lost || !settled(r.v, r.l)
-	return r
+	r := Product{v: p.v * q.v, l: p.l.add(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
+	return r.mark(p.under || q.under)
 }
 
 // Quo returns the quotient p/q; its float64 value is p's over q's, as
 // the expression p / q forms it.
 func (p Product) Quo(q Product) Product {
-	r := Product{v: p.v / q.v, l: p.l.sub(q.l), neg: p.neg != q.neg}
-	r.lost = p.lost || q.lost || !settled(r.v, r.l)
-	return r
+	r := Product{v: p.v / q.v, l: p.l.sub(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
+	return r.mark(p.under || q.under)
 }
 
 // MulFloat returns p·x, p.Mul(ProductOf(x)).
@@ -127,8 +123,9 @@ func (p Product) Neg() Product {
 //
 // Where every step that formed the product's float64 value stayed a
 // normal float64, or was the zero, infinity or NaN the exact product
-// is, Float64 returns that value, bit for bit what the same arithmetic
-// on float64 gives; elsewhere it returns e^ln|p| with the product's
+// is, or was below (above) the normal range where the exact product was
+// too and stayed there, Float64 returns that value, bit for bit what the
+// same arithmetic on float64 gives; elsewhere it returns e^ln|p| with the product's
 // sign, which is ±Inf or 0 only where the product itself leaves
 // float64.
 //
@@ -145,6 +142,33 @@ func (p Product) Float64() float64 {
 	r := expOf(p.l)
 	if p.neg {
 		r = -r
+	}
+	return r
+}
+
+// lnMinNormal and lnMax bound ln|x| over the normal float64 range:
+// ln 2^-1022 and ln MaxFloat64 (rounded outward).
+const (
+	lnMinNormal = -708.3964185322641
+	lnMax       = 709.782712893384
+)
+
+// mark sets r.lost where r's float64 value is not the product's (see
+// settled), and r.under where it is below the normal range with the
+// product; under says whether a factor was, so that a value brought
+// back into the normal range from there counts as lost.
+func (r Product) mark(under bool) Product {
+	a := math.Abs(r.v)
+	normal := a >= 0x1p-1022 && a <= math.MaxFloat64
+	switch {
+	case settled(r.v, r.l):
+		r.lost = r.lost || under && normal
+	case a < 0x1p-1022 && r.l.hi < lnMinNormal:
+		r.under = true // 0 or subnormal where the product is too
+	case math.IsInf(r.v, 0) && r.l.hi > lnMax:
+		// ±Inf where the product overflows too: the value to return.
+	default:
+		r.lost = true
 	}
 	return r
 }

@@ -38,6 +38,15 @@ func TestProductKeepsFloat64(t *testing.T) {
 	if got := ProductOf(0).MulFloat(math.Inf(1)).Float64(); !math.IsNaN(got) {
 		t.Errorf("0·Inf = %v, want NaN", got)
 	}
+	// Below the normal range where the exact product is too, the
+	// float64 value is kept, subnormal bits and all; brought back into
+	// the range, it is not.
+	if got, want := ProductOf(1e-200).MulFloat(1e-120).Float64(), 1e-200*v1e120(); math.Float64bits(got) != math.Float64bits(want) {
+		t.Errorf("1e-200·1e-120 = %v, want the float64 product %v", got, want)
+	}
+	if got := ProductOf(1e-200).MulFloat(1e-120).MulFloat(1e300).Float64(); math.Abs(got-1e-20) > 1e-35 {
+		t.Errorf("1e-200·1e-120·1e300 = %v, want 1e-20", got)
+	}
 	if got := PowProduct(-2, 0.5).Float64(); !math.IsNaN(got) {
 		t.Errorf("PowProduct(-2, 0.5) = %v, want NaN as math.Pow", got)
 	}
@@ -148,3 +157,7 @@ func TestProductBesselSeries(t *testing.T) {
 		}
 	}
 }
+
+// v1e120 keeps 1e-120 a float64 variable, so that 1e-200*v1e120() is
+// float64 arithmetic, not an exact constant expression.
+func v1e120() float64 { return 1e-120 }
