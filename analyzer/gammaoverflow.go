@@ -50,15 +50,42 @@ func (fc *fnCtx) gammaCallMatch(call *ast.CallExpr) *fixes.Match {
 		}
 		up = p
 	}
-	quo, ok := fc.parentMap()[up].(*ast.BinaryExpr)
-	if !ok || quo.Op != token.QUO || quo.Y != up {
-		return m
+	if quo, ok := fc.parentMap()[up].(*ast.BinaryExpr); ok && quo.Op == token.QUO && quo.Y == up {
+		if pow, ok := ast.Unparen(quo.X).(*ast.CallExpr); ok && fc.c.isMathFunc(pow, "Pow") && len(pow.Args) == 2 {
+			return &fixes.Match{Shape: fixes.ShapePowOverGamma, Node: quo, Args: []ast.Expr{pow.Args[0], pow.Args[1], call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(quo)}
+		}
 	}
-	pow, ok := ast.Unparen(quo.X).(*ast.CallExpr)
-	if !ok || !fc.c.isMathFunc(pow, "Pow") || len(pow.Args) != 2 {
-		return m
+	if pm := fc.productChain(call); pm != nil {
+		return pm
 	}
-	return &fixes.Match{Shape: fixes.ShapePowOverGamma, Node: quo, Args: []ast.Expr{pow.Args[0], pow.Args[1], call.Args[0]}, Result: fc.c.pass.TypesInfo.TypeOf(quo)}
+	return m
+}
+
+// productChain describes the largest product (or quotient) around e in
+// which e is a factor, for the fixer to take in log space: the powers,
+// Gamma values and exponentials among its factors become products that
+// keep their logarithms (fixes/logproduct.go), which changes no value
+// the float64 arithmetic got right. Where that product is the value of
+// a local variable (g := math.Gamma(x), w *= Γ(a)/Γ(b)), the variable is
+// carried too, with the copies and products made of it. nil where e is
+// no factor of a product and no variable's value; the fixer checks the
+// factors and the variable.
+func (fc *fnCtx) productChain(e ast.Expr) *fixes.Match {
+	top := fc.productRoot(e)
+	if as, ok := fc.parentMap()[top].(*ast.AssignStmt); ok && len(as.Lhs) == len(as.Rhs) {
+		for i, r := range as.Rhs {
+			if r != top {
+				continue
+			}
+			if id, ok := ast.Unparen(as.Lhs[i]).(*ast.Ident); ok && as.Tok != token.ADD_ASSIGN && as.Tok != token.SUB_ASSIGN {
+				return &fixes.Match{Shape: fixes.ShapeLogSpaceTerm, Node: top, Args: []ast.Expr{id}, Result: fc.c.pass.TypesInfo.TypeOf(top), Func: fc.node}
+			}
+		}
+	}
+	if ast.Unparen(top) == ast.Unparen(e) {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapeProductChain, Node: top, Result: fc.c.pass.TypesInfo.TypeOf(top)}
 }
 
 // gammaEscapes reports whether the value of a bare math.Gamma call can

@@ -167,6 +167,11 @@ func (fc *fnCtx) checkGammaRatio(root ast.Expr, p *product) {
 	if m.Shape == fixes.ShapeNone {
 		m = fc.gammaRatioAmong(root, p)
 	}
+	if m.Shape == fixes.ShapeNone {
+		if pm := fc.productChain(worstCall); pm != nil {
+			m = pm
+		}
+	}
 	although := ""
 	if fc.gammaRatioFinite(p, m, worst.first) {
 		although = ", although the result itself is finite"

@@ -163,8 +163,31 @@ func (fc *fnCtx) seriesTerm(res *vm.Result, l *vm.Loop, e ast.Expr) bool {
 	}
 	msg := fmt.Sprintf("series term %s computes %s on %s, from parts formed apart that each grow with the trips: %s; past that the term is +Inf, 0 or NaN although it is finite%s",
 		src(e), what, trip, strings.Join(why, "; "), exits)
-	fc.report(finding{node: e, cat: catPowOverFac, msg: msg, match: fc.seriesTermFix(res, l, e, up, down)})
+	m := fc.seriesTermFix(res, l, e, up, down)
+	if m == nil {
+		m = fc.logSpaceTermFix(e, up, down)
+	}
+	fc.report(finding{node: e, cat: catPowOverFac, msg: msg, match: m})
 	return true
+}
+
+// logSpaceTermFix describes, for the fixer, a term whose growing parts
+// the rewrite carries as products in log space (fixes/logproduct.go):
+// the fixer checks on its own that each is a running product it can
+// carry, and the rewrite keeps every value the float64 arithmetic got
+// right, so the model vouches for nothing here.
+func (fc *fnCtx) logSpaceTermFix(e ast.Expr, up, down []seriesPart) *fixes.Match {
+	var args []ast.Expr
+	for _, p := range append(up, down...) {
+		args = append(args, ast.Unparen(p.x))
+	}
+	return &fixes.Match{
+		Shape:  fixes.ShapeLogSpaceTerm,
+		Node:   e,
+		Args:   args,
+		Result: fc.c.pass.TypesInfo.TypeOf(e),
+		Func:   fc.node,
+	}
 }
 
 // formedApart reports whether x is a value the code keeps as a number

@@ -4,8 +4,8 @@ import "go/types"
 
 // Test-only exports.
 
-// HelperFuncs lists the helper functions fixes may emit, for tests that
-// check them against the helper module.
+// HelperFuncs lists the helper functions fixes may emit, methods as
+// Type.Method, for tests that check them against the helper module.
 func HelperFuncs() map[string]*types.Signature {
 	pkgs, err := stubs()
 	if err != nil {
@@ -14,8 +14,15 @@ func HelperFuncs() map[string]*types.Signature {
 	out := make(map[string]*types.Signature)
 	scope := pkgs[HelperPath].Scope()
 	for _, name := range scope.Names() {
-		if fn, ok := scope.Lookup(name).(*types.Func); ok {
-			out[name] = fn.Type().(*types.Signature)
+		switch obj := scope.Lookup(name).(type) {
+		case *types.Func:
+			out[name] = obj.Type().(*types.Signature)
+		case *types.TypeName:
+			if n, ok := obj.Type().(*types.Named); ok {
+				for i := 0; i < n.NumMethods(); i++ {
+					out[name+"."+n.Method(i).Name()] = n.Method(i).Type().(*types.Signature)
+				}
+			}
 		}
 	}
 	return out

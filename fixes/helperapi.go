@@ -40,6 +40,19 @@ func MustFactorialUint64(n uint64) uint64                   { panic("") }
 func Beta(a, b float64) float64                             { panic("") }
 func LogFactorial(n int) float64                            { panic("") }
 func LogGamma(x float64) float64                            { panic("") }
+
+type Product struct{ v float64 }
+
+func ProductOf(x float64) Product                          { panic("") }
+func PowProduct(x, p float64) Product                      { panic("") }
+func GammaProduct(a float64) Product                       { panic("") }
+func ExpProduct(x float64) Product                         { panic("") }
+func (p Product) Mul(q Product) Product                    { panic("") }
+func (p Product) Quo(q Product) Product                    { panic("") }
+func (p Product) MulFloat(x float64) Product               { panic("") }
+func (p Product) QuoFloat(x float64) Product               { panic("") }
+func (p Product) Neg() Product                             { panic("") }
+func (p Product) Float64() float64                         { panic("") }
 `
 
 // fmtAPI stands in for package fmt when a range guard adds the import to a

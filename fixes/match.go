@@ -51,6 +51,8 @@ const (
 	ShapeModelPoissonRun        // p := math.Exp(−λ); p *= λ/k in a loop  Node: the update statement; Args: k (the loop's counter, whole-numbered), λ; Acc, Loop (the analyzer vouches that p is λ^k·e^(−λ)/k! after it; see buildModelPoissonRun)
 	ShapeGammaRatioAmong        // Γ(a)·X/(Y·Γ(b)), X and Y other factors  Node: the product; Args: a, b; Extra: the two math.Gamma calls (see buildGammaRatioAmong)
 	ShapePowOverGamma           // math.Pow(x, p)/math.Gamma(a)          Args: x, p, a
+	ShapeLogSpaceTerm           // a series term over running products    Node: the term; Args: its parts (the variables carried as lgamma.Product, math.Pow calls); Func (see buildLogSpaceTerm)
+	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -74,6 +74,8 @@ func init() {
 		ShapeModelPoissonRun:  {"running Poisson term", buildModelPoissonRun, family{float: "PoissonTerm"}, 0, nil},
 		ShapeGammaRatioAmong:  {"gamma ratio among other factors", buildGammaRatioAmong, family{float: "GammaRatio"}, 0, nil},
 		ShapePowOverGamma:     {"power over gamma", buildTerm, family{float: "PowOverGamma"}, 3, powOverGammaFactors},
+		ShapeLogSpaceTerm:     {"series term over running products", buildLogSpaceTerm, family{float: "ProductOf"}, 0, nil},
+		ShapeProductChain:     {"product of powers and gamma values", buildProductChain, family{float: "GammaProduct"}, 0, nil},
 	}
 }
 

@@ -37,7 +37,8 @@ func Warmup(x float64, n int) float64 {
 	return sum
 }
 
-// The functions below keep their loops.
+// The functions below are not x^k/k! on every trip: they keep their
+// loops and running products, carried in log space.
 
 // Gusts skips the odd trips before it updates the factorial: on the
 // next trip the factorial lags behind k, so the term is not x^k/k!.

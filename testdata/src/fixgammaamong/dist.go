@@ -18,8 +18,8 @@ func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/450359
 	return math.Sqrt2 * math.Gamma((k+1)/2) / math.Gamma(k/2) // want `ratio of math.Gamma values in float64`
 }
 
-// The function below keeps its Gamma values: two of them above the
-// line have no one partner below it.
+// The function below has two Gamma values above the line and no one
+// partner below it for each: it is taken as a product in log space.
 
 // Continuation is Gauss's Γ(c)Γ(c−a−b)/(Γ(c−a)Γ(c−b)).
 func Continuation(a, b, c float64) float64 { // want Continuation:`value Γ\(p2\)·Γ`

@@ -17,15 +17,14 @@ func Weight(x, k float64) float64 { // want Weight:`value \(p0\)\^\(p1 - 1\)/Γ\
 	return math.Pow(x, k-1) / (math.Gamma(k)) // want `math.Gamma overflows`
 }
 
-// The functions below keep their Gamma values.
-
-// Radius divides by the power: the Gamma value is above the line.
-func Radius(d, r float64) float64 { // want Radius:`value Γ`
-	return math.Gamma(d/2+1) / math.Pow(r, d) // want `math.Gamma overflows`
-}
-
 // Ball of radius r: two powers over the Gamma value, the product
-// formed before the division.
+// formed before the division: each factor is carried in log space.
 func Ball(d, r float64) float64 { // want Ball:`value \(p1\)\^\(p0\)`
 	return math.Pow(r, d) * math.Pow(math.Pi, d/2) / math.Gamma(d/2+1) // want `math.Gamma overflows`
+}
+
+// Radius divides by the power: the Gamma value is above the line, and
+// the quotient is taken in log space too.
+func Radius(d, r float64) float64 { // want Radius:`value Γ`
+	return math.Gamma(d/2+1) / math.Pow(r, d) // want `math.Gamma overflows`
 }

@@ -1,0 +1,190 @@
+package lgamma
+
+// Products carried in log space beside float64 arithmetic: the parts of
+// a series term that code keeps in running products of their own,
+//
+//	pw *= half * half; f1 *= float64(n + k); f2 *= float64(k)
+//	sum += pw / (f1 * f2)                      // Bessel I_n
+//
+// leave float64 one by one (pw reaches +Inf, f1 and f2 too), and the
+// term becomes +Inf, 0 or NaN where it is finite. A Product forms the
+// same float64 value the code forms, operation by operation, and beside
+// it the logarithm of the magnitude in double-double and the sign; it
+// answers the float64 value wherever every step of it stayed a normal
+// float64 (or the zero, infinity or NaN the exact product is), and the
+// exponential of the logarithm elsewhere.
+
+import "math"
+
+// A Product is a product of float64 factors: the float64 value formed
+// as the code forms it, and the natural logarithm of its magnitude
+// (double-double) with its sign. Make one with ProductOf, PowProduct,
+// GammaProduct or ExpProduct; the zero Product holds 0 as if it had lost its range
+// and is not a product of anything.
+type Product struct {
+	v    float64 // the product as float64 arithmetic forms it
+	l    dd      // ln of its magnitude: −Inf for a zero factor, +Inf for an infinite one
+	neg  bool    // the sign of the product (of a zero or infinity too)
+	lost bool    // some step of v left the normal range where the product did not
+	// under: some step of v was below the normal range where the
+	// product was too; v is the float64 value there, but with bits lost,
+	// so a step that brings it back into the normal range loses it.
+	under bool
+}
+
+// ProductOf returns the product of the one factor x.
+//
+// Special cases are:
+//
+//	ProductOf(±0) holds ±0 (log −Inf)
+//	ProductOf(±Inf) holds ±Inf (log +Inf)
+//	ProductOf(NaN) holds NaN
+func ProductOf(x float64) Product {
+	return Product{v: x, l: ddLog(dd{math.Abs(x), 0}), neg: math.Signbit(x)}
+}
+
+// PowProduct returns the product holding x^p: math.Pow(x, p) and
+// p·ln|x|, so that a power past float64 keeps its value in a product
+// whose other factors bring it back.
+//
+// Special cases are (as math.Pow's):
+//
+//	PowProduct(x, p) holds math.Pow(x, p) where x is ±0 or ±Inf, p is
+//	    ±Inf, p is 0 or either is NaN
+//	PowProduct(x, p) holds NaN for finite x < 0 and finite p not an integer
+func PowProduct(x, p float64) Product {
+	v := math.Pow(x, p)
+	if p == 0 || x == 0 || math.IsInf(x, 0) || math.IsInf(p, 0) || math.IsNaN(v) {
+		return ProductOf(v)
+	}
+	return Product{v: v, l: ddLog(dd{math.Abs(x), 0}).mulF(p), neg: x < 0 && math.Mod(p, 2) != 0}.mark(false)
+}
+
+// GammaProduct returns the product holding Γ(a): math.Gamma(a) and
+// ln|Γ(a)|, so that a Gamma value past float64 keeps its value in a
+// product whose other factors bring it back.
+//
+// Special cases are (as math.Gamma's):
+//
+//	GammaProduct(a) holds math.Gamma(a) where a is ±0, a negative
+//	    integer, ±Inf or NaN
+func GammaProduct(a float64) Product {
+	v := math.Gamma(a)
+	if a == 0 || isPole(a) || math.IsInf(a, 0) || math.IsNaN(a) {
+		return ProductOf(v)
+	}
+	return Product{v: v, l: lnAbsGammaDD(a), neg: GammaSign(a) < 0}.mark(false)
+}
+
+// ExpProduct returns the product holding e^x: math.Exp(x) and x, so
+// that an exponential below or above float64 (e^-800 before a factor of
+// e^700) keeps its value in a product whose other factors bring it back.
+//
+// Special cases are (as math.Exp's):
+//
+//	ExpProduct(+Inf) holds +Inf
+//	ExpProduct(-Inf) holds 0
+//	ExpProduct(NaN) holds NaN
+func ExpProduct(x float64) Product {
+	v := math.Exp(x)
+	if math.IsInf(x, 0) || math.IsNaN(x) {
+		return ProductOf(v)
+	}
+	return Product{v: v, l: dd{x, 0}}.mark(false)
+}
+
+// Mul returns the product p·q; its float64 value is p's times q's, as
+// the expression p * q forms it.
+func (p Product) Mul(q Product) Product {
+	r := Product{v: p.v * q.v, l: p.l.add(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
+	return r.mark(p.under || q.under)
+}
+
+// Quo returns the quotient p/q; its float64 value is p's over q's, as
+// the expression p / q forms it.
+func (p Product) Quo(q Product) Product {
+	r := Product{v: p.v / q.v, l: p.l.sub(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
+	return r.mark(p.under || q.under)
+}
+
+// MulFloat returns p·x, p.Mul(ProductOf(x)).
+func (p Product) MulFloat(x float64) Product { return p.Mul(ProductOf(x)) }
+
+// QuoFloat returns p/x, p.Quo(ProductOf(x)).
+func (p Product) QuoFloat(x float64) Product { return p.Quo(ProductOf(x)) }
+
+// Neg returns −p.
+func (p Product) Neg() Product {
+	p.v, p.neg = -p.v, !p.neg
+	return p
+}
+
+// Float64 returns the value of the product.
+//
+// Where every step that formed the product's float64 value stayed a
+// normal float64, or was the zero, infinity or NaN the exact product
+// is, or was below (above) the normal range where the exact product was
+// too and stayed there, Float64 returns that value, bit for bit what the
+// same arithmetic on float64 gives; elsewhere it returns e^ln|p| with the product's
+// sign, which is ±Inf or 0 only where the product itself leaves
+// float64.
+//
+// Accuracy: where the float64 steps left their range, within a few
+// ulps of the product of the factors as given (each factor's logarithm
+// is carried to about 2^-104 relative).
+func (p Product) Float64() float64 {
+	if !p.lost {
+		return p.v
+	}
+	if math.IsNaN(p.l.hi) {
+		return math.NaN()
+	}
+	r := expOf(p.l)
+	if p.neg {
+		r = -r
+	}
+	return r
+}
+
+// lnMinNormal and lnMax bound ln|x| over the normal float64 range:
+// ln 2^-1022 and ln MaxFloat64 (rounded outward).
+const (
+	lnMinNormal = -708.3964185322641
+	lnMax       = 709.782712893384
+)
+
+// mark sets r.lost where r's float64 value is not the product's (see
+// settled), and r.under where it is below the normal range with the
+// product; under says whether a factor was, so that a value brought
+// back into the normal range from there counts as lost.
+func (r Product) mark(under bool) Product {
+	a := math.Abs(r.v)
+	normal := a >= 0x1p-1022 && a <= math.MaxFloat64
+	switch {
+	case settled(r.v, r.l):
+		r.lost = r.lost || under && normal
+	case a < 0x1p-1022 && r.l.hi < lnMinNormal:
+		r.under = true // 0 or subnormal where the product is too
+	case math.IsInf(r.v, 0) && r.l.hi > lnMax:
+		// ±Inf where the product overflows too: the value to return.
+	default:
+		r.lost = true
+	}
+	return r
+}
+
+// settled reports whether v, formed by float64 arithmetic, is the
+// product whose log-magnitude is l: a normal float64 for a finite l,
+// the zero, infinity or NaN an infinite or NaN l says it is.
+func settled(v float64, l dd) bool {
+	a := math.Abs(v)
+	switch {
+	case math.IsNaN(l.hi):
+		return math.IsNaN(v)
+	case math.IsInf(l.hi, -1):
+		return a == 0
+	case math.IsInf(l.hi, 1):
+		return math.IsInf(v, 0)
+	}
+	return a >= 0x1p-1022 && a <= math.MaxFloat64
+}

@@ -1,0 +1,163 @@
+package lgamma
+
+import (
+	"math"
+	"math/big"
+	"math/rand"
+	"testing"
+)
+
+// TestProductKeepsFloat64 checks the contract that a product whose
+// float64 steps stay normal is the float64 arithmetic itself, bit for
+// bit: random chains of products and quotients of moderate factors.
+func TestProductKeepsFloat64(t *testing.T) {
+	r := rand.New(rand.NewSource(7))
+	for i := 0; i < 2000; i++ {
+		x := (r.Float64()*2 - 1) * math.Pow(10, float64(r.Intn(20)-10))
+		p, v := ProductOf(x), x
+		for j := 0; j < 20; j++ {
+			y := (r.Float64()*2 - 1) * math.Pow(10, float64(r.Intn(8)-4))
+			if r.Intn(2) == 0 {
+				p, v = p.MulFloat(y), v*y
+			} else {
+				p, v = p.QuoFloat(y), v/y
+			}
+		}
+		if got := p.Float64(); math.Float64bits(got) != math.Float64bits(v) && math.Abs(v) >= 0x1p-1022 {
+			t.Fatalf("chain %d: Float64() = %v, float64 arithmetic gives %v", i, got, v)
+		}
+	}
+	// The specials as IEEE arithmetic forms them: −1·0 is −0, and 1/−0
+	// is −Inf (IEEE 754 §6.3, common practice); 0·Inf is NaN.
+	if got := ProductOf(-1).MulFloat(0); !(got.Float64() == 0 && math.Signbit(got.Float64())) {
+		t.Errorf("ProductOf(-1).MulFloat(0) = %v, want -0", got.Float64())
+	}
+	if got := ProductOf(1).Quo(ProductOf(-1).MulFloat(0)).Float64(); !math.IsInf(got, -1) {
+		t.Errorf("1/(-1·0) = %v, want -Inf", got)
+	}
+	if got := ProductOf(0).MulFloat(math.Inf(1)).Float64(); !math.IsNaN(got) {
+		t.Errorf("0·Inf = %v, want NaN", got)
+	}
+	// Below the normal range where the exact product is too, the
+	// float64 value is kept, subnormal bits and all; brought back into
+	// the range, it is not.
+	if got, want := ProductOf(1e-200).MulFloat(1e-120).Float64(), 1e-200*v1e120(); math.Float64bits(got) != math.Float64bits(want) {
+		t.Errorf("1e-200·1e-120 = %v, want the float64 product %v", got, want)
+	}
+	if got := ProductOf(1e-200).MulFloat(1e-120).MulFloat(1e300).Float64(); math.Abs(got-1e-20) > 1e-35 {
+		t.Errorf("1e-200·1e-120·1e300 = %v, want 1e-20", got)
+	}
+	if got := PowProduct(-2, 0.5).Float64(); !math.IsNaN(got) {
+		t.Errorf("PowProduct(-2, 0.5) = %v, want NaN as math.Pow", got)
+	}
+	if got := PowProduct(-3, 501).QuoFloat(1e200).QuoFloat(1e200).Float64(); !(got < 0) {
+		t.Errorf("(-3)^501/1e400 = %v, want a negative value", got)
+	}
+}
+
+// TestProductOutOfRange checks products whose parts leave float64 while
+// the product does not, against math/big: a running power over two
+// running factorials (the terms of the Bessel series I_n), a power and
+// a Gamma value each past float64, and a product whose float64 steps
+// underflow.
+func TestProductOutOfRange(t *testing.T) {
+	// (x/2)^(n+2k)/((n+k)!·k!) for n = 5, x = 200, k = 400, formed as
+	// the series forms it: factor by factor.
+	n, half, k := 5, 100.0, 400
+	pw, f1, f2 := PowProduct(half, float64(n)), ProductOf(1), ProductOf(1)
+	want := new(big.Float).SetPrec(refPrec).SetFloat64(math.Pow(half, float64(n)))
+	wantDen := bf(1)
+	for i := 2; i <= n; i++ {
+		f1 = f1.MulFloat(float64(i))
+		wantDen.Mul(wantDen, bf(float64(i)))
+	}
+	for j := 1; j <= k; j++ {
+		pw = pw.MulFloat(half * half)
+		f1 = f1.MulFloat(float64(n + j))
+		f2 = f2.MulFloat(float64(j))
+		want.Mul(want, bf(half*half))
+		wantDen.Mul(wantDen, bf(float64(n+j)))
+		wantDen.Mul(wantDen, bf(float64(j)))
+	}
+	want.Quo(want, wantDen)
+	if off := relOff(pw.Quo(f1.Mul(f2)).Float64(), want); off > 1e-14 {
+		t.Errorf("Bessel term k = %d: %v, want %s (math/big), relative error %.3g", k, pw.Quo(f1.Mul(f2)).Float64(), want.Text('g', 17), off)
+	}
+	// 1500^400/Γ(500.5): both past float64, the quotient about 1.3e146.
+	l := bnew().Mul(bf(400), refLog(bf(1500)))
+	wantPG := refExp(l.Sub(l, refLnGamma(bf(500.5))))
+	if got := PowProduct(1500, 400).Quo(GammaProduct(500.5)).Float64(); relOff(got, wantPG) > 1e-14 {
+		t.Errorf("1500^400/Γ(500.5) = %v, want %s (math/big)", got, wantPG.Text('g', 17))
+	}
+	// Γ(−170.5)·Γ(171.5) = −π (reflection, DLMF 5.5.3): Γ(−170.5) is
+	// subnormal in float64, Γ(171.5) is +Inf.
+	if got := GammaProduct(-170.5).Mul(GammaProduct(171.5)).Float64(); math.Abs(got+math.Pi) > 4e-15*math.Pi {
+		t.Errorf("Γ(-170.5)·Γ(171.5) = %v, want -π (DLMF 5.5.3)", got)
+	}
+	// 1e-200 · 1e-200 · 1e300 · 1e150 = 1e50: the second step underflows.
+	wantU := bf(1e-200)
+	for _, y := range []float64{1e-200, 1e300, 1e150} {
+		wantU.Mul(wantU, bf(y))
+	}
+	if got := ProductOf(1e-200).MulFloat(1e-200).MulFloat(1e300).MulFloat(1e150).Float64(); relOff(got, wantU) > 1e-15 {
+		t.Errorf("1e-200·1e-200·1e300·1e150 = %v, want %s (math/big)", got, wantU.Text('g', 17))
+	}
+	// e^-750·e^700·1e30: the first factor underflows to 0 alone; the
+	// product is e^-50·1e30.
+	wantE := refExp(bf(-50))
+	wantE.Mul(wantE, bf(1e30))
+	if got := ExpProduct(-750).Mul(ExpProduct(700)).MulFloat(1e30).Float64(); relOff(got, wantE) > 1e-15 {
+		t.Errorf("e^-750·e^700·1e30 = %v, want %s (math/big)", got, wantE.Text('g', 17))
+	}
+	// A product that is past float64 is +Inf, one below it 0.
+	if got := PowProduct(10, 400).Float64(); !math.IsInf(got, 1) {
+		t.Errorf("10^400 = %v, want +Inf", got)
+	}
+	if got := PowProduct(-10, 401).QuoFloat(1e10).Float64(); !math.IsInf(got, -1) {
+		t.Errorf("(-10)^401/1e10 = %v, want -Inf", got)
+	}
+	if got := ProductOf(1e-300).MulFloat(1e-300).Float64(); got != 0 {
+		t.Errorf("1e-300·1e-300 = %v, want 0", got)
+	}
+}
+
+// TestProductBesselSeries sums I_n(x) = Σ (x/2)^(n+2k)/(k!(n+k)!) (DLMF
+// 10.25.2) with its parts in running Products, as the rewritten series
+// of the fixer does, against mpmath's besseli at 30 digits
+// (python3 -c "import mpmath; mpmath.mp.dps=30; print(mpmath.besseli(5,200))"
+// and likewise for the others): where the powers and factorials leave
+// float64, the sum keeps its value.
+func TestProductBesselSeries(t *testing.T) {
+	for _, c := range []struct {
+		n    int
+		x    float64
+		want float64 // mpmath.besseli(n, x)
+	}{
+		{5, 200, 1.91581410152368694542527678232e+85},
+		{10, 20, 3540200.20901952109905289138245},
+		{34, 150.5, 1.61230414974119794160610867116e+62},
+		{150, 34.5, 4.09112749128605370070613330426e-77}, // 150! alone is +Inf
+	} {
+		half := c.x / 2
+		pw := PowProduct(half, float64(c.n))
+		f1 := ProductOf(1)
+		for i := 2; i <= c.n; i++ {
+			f1 = f1.MulFloat(float64(i))
+		}
+		f2 := ProductOf(1)
+		sum := pw.Quo(f1).Float64()
+		for k := 1; k < 400; k++ {
+			pw = pw.MulFloat(half * half)
+			f1 = f1.MulFloat(float64(c.n + k))
+			f2 = f2.MulFloat(float64(k))
+			sum += pw.Quo(f1.Mul(f2)).Float64()
+		}
+		if off := math.Abs(sum-c.want) / c.want; off > 1e-13 {
+			t.Errorf("I_%d(%g) = %v, want %v (mpmath), relative error %.3g", c.n, c.x, sum, c.want, off)
+		}
+	}
+}
+
+// v1e120 keeps 1e-120 a float64 variable, so that 1e-200*v1e120() is
+// float64 arithmetic, not an exact constant expression.
+func v1e120() float64 { return 1e-120 }

@@ -1,0 +1,460 @@
+package fixes
+
+import (
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"sort"
+	"strings"
+
+	"github.com/overfact/overfact/internal/assigned"
+)
+
+// A series term whose parts the code keeps in running products of their
+// own, each of which may leave float64 while the term does not,
+//
+//	half := x / 2
+//	pw := math.Pow(half, float64(n))
+//	f1, f2 := 1.0, 1.0
+//	for k := 1; k < 200; k++ {
+//		pw *= half * half
+//		f1 *= float64(n + k)
+//		f2 *= float64(k)
+//		sum += pw / (f1 * f2)                  // Bessel I_n
+//	}
+//
+// keeps its loop and its running products, carried by the helper's
+// Product, which forms the same float64 value step by step and beside it
+// the logarithm of the magnitude (DLMF 4.2 for ln of a product; common
+// practice):
+//
+//	pw := lgamma.PowProduct(half, float64(n))
+//	f1, f2 := lgamma.ProductOf(1.0), lgamma.ProductOf(1.0)
+//	for k := 1; k < 200; k++ {
+//		pw = pw.MulFloat(half * half)
+//		f1 = f1.MulFloat(float64(n + k))
+//		f2 = f2.MulFloat(float64(k))
+//		sum += pw.Quo(f1.Mul(f2)).Float64()
+//	}
+//
+// Every operation of the original is the same float64 operation in the
+// Product, in the same order, and Float64 returns that value wherever
+// no step of it left the normal range: the rewrite changes no value the
+// code got right, whatever the parts hold, so the fixer needs nothing
+// of the value model but which variables are the parts. A part is a
+// local float64 variable declared by := and changed only by *=, /= and
+// plain assignments (one value a target), at least once from its own
+// value; every read of it becomes a Product expression, and where a
+// float64 is needed its Float64. math.Pow calls among the factors of a
+// product become PowProduct, so that a power past float64 keeps its
+// value too.
+func buildLogSpaceTerm(b *builder) error {
+	term, ok := b.m.Node.(ast.Expr)
+	if !ok || b.m.Func == nil {
+		return errors.New("log-space term match lacks its term or function")
+	}
+	if !types.Identical(b.pass.TypesInfo.TypeOf(term), types.Typ[types.Float64]) {
+		return fmt.Errorf("series term of type %s, not float64", b.pass.TypesInfo.TypeOf(term))
+	}
+	body := b.funcBody()
+	if body == nil {
+		return errors.New("the term's function has no body")
+	}
+	lp := &logProducts{b: b, set: make(map[types.Object]bool), pkg: b.helper(term.Pos())}
+	var names []string
+	for _, a := range b.m.Args {
+		id, ok := ast.Unparen(a).(*ast.Ident)
+		if !ok {
+			continue
+		}
+		v, ok := b.pass.TypesInfo.ObjectOf(id).(*types.Var)
+		if !ok || lp.set[v] {
+			continue
+		}
+		if err := lp.qualifies(v, body); err != nil {
+			// A product written in one expression is still taken in
+			// log space where its parts alone are not carried.
+			if lp.chainableIn(term, true) && lp.leaves(term) >= 2 {
+				return buildProductChain(b)
+			}
+			return err
+		}
+		lp.set[v] = true
+		names = append(names, v.Name())
+	}
+	if len(lp.set) == 0 || !lp.chainable(term) && !lp.assignsPart(body, term) {
+		return errors.New("no part of the term is a running product the fixer can carry in log space")
+	}
+	names = append(names, lp.copies(body)...)
+	if b.commentIn(body) {
+		// The rewrite replaces statements whole; a comment inside one
+		// would go.
+		for _, s := range lp.statements(body) {
+			if b.commentIn(s) {
+				return errors.New("a comment inside a statement the rewrite replaces")
+			}
+		}
+	}
+	lp.rewrite(body)
+	sort.Strings(names)
+	b.message = fmt.Sprintf("Carry %s as products in log space (%s.Product) (imports %s)", strings.Join(names, ", "), lp.pkg, HelperPath)
+	return nil
+}
+
+// copies adds to the carried variables those whose every value is a
+// product of carried ones (norm := g), until none is left, and returns
+// their names: a Gamma value kept under a second name is carried under
+// both.
+func (lp *logProducts) copies(body *ast.BlockStmt) []string {
+	var names []string
+	for more := true; more; {
+		more = false
+		ast.Inspect(body, func(n ast.Node) bool {
+			as, ok := n.(*ast.AssignStmt)
+			if !ok || as.Tok != token.DEFINE || len(as.Lhs) != len(as.Rhs) {
+				return true
+			}
+			for i, l := range as.Lhs {
+				id, ok := l.(*ast.Ident)
+				if !ok || !lp.chainable(as.Rhs[i]) {
+					continue
+				}
+				v, ok := lp.b.pass.TypesInfo.Defs[id].(*types.Var)
+				if ok && !lp.set[v] && lp.qualifies(v, body) == nil {
+					lp.set[v] = true
+					names = append(names, v.Name())
+					more = true
+				}
+			}
+			return true
+		})
+	}
+	return names
+}
+
+// assignsPart reports whether e is (in) the value an assignment gives a
+// carried variable.
+func (lp *logProducts) assignsPart(body *ast.BlockStmt, e ast.Expr) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || found {
+			return !found
+		}
+		for i, l := range as.Lhs {
+			if !lp.isPart(ast.Unparen(l)) {
+				continue
+			}
+			r := as.Rhs[0]
+			if len(as.Lhs) == len(as.Rhs) {
+				r = as.Rhs[i]
+			}
+			found = found || r.Pos() <= e.Pos() && e.End() <= r.End()
+		}
+		return !found
+	})
+	return found
+}
+
+// logProducts is one log-space rewrite: the variables it carries as
+// Products and the name of the helper's import.
+type logProducts struct {
+	b   *builder
+	set map[types.Object]bool
+	pkg string
+	// calls: math.Pow and math.Gamma calls are products of their own
+	// (a product of them written in one expression); otherwise they are
+	// carried only as factors of a product with a carried variable.
+	calls bool
+}
+
+// qualifies checks that v is a running product the rewrite can carry: a
+// float64 local declared by :=, whose every change is an assignment of
+// one value to it or a *= or /=, at least one of them from its own
+// value.
+func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
+	b := lp.b
+	if !types.Identical(v.Type(), types.Typ[types.Float64]) {
+		return fmt.Errorf("%s is not a float64", v.Name())
+	}
+	if v.Pos() < body.Pos() || v.Pos() >= body.End() {
+		return fmt.Errorf("%s is not a local of the term's function", v.Name())
+	}
+	if d, ok := b.declaring(v).(*ast.AssignStmt); !ok || d.Tok != token.DEFINE {
+		return fmt.Errorf("%s is not declared by :=", v.Name())
+	}
+	var bad error
+	self, products := false, true
+	assigned.Each(b.pass.TypesInfo, body, nil, func(obj types.Object, at ast.Node) bool {
+		if obj != v {
+			return true
+		}
+		as, ok := at.(*ast.AssignStmt)
+		if !ok {
+			bad = fmt.Errorf("%s is changed other than by an assignment", v.Name())
+			return false
+		}
+		switch as.Tok {
+		case token.MUL_ASSIGN, token.QUO_ASSIGN:
+			self = true
+		case token.ASSIGN, token.DEFINE:
+			if len(as.Lhs) != len(as.Rhs) {
+				bad = fmt.Errorf("%s is assigned from a call of several results", v.Name())
+				return false
+			}
+			for i, l := range as.Lhs {
+				if !b.isObj(l, v) {
+					continue
+				}
+				if b.mentionsObj(as.Rhs[i], v) && as.Tok == token.ASSIGN {
+					self = true
+				}
+				products = products && lp.chainableIn(as.Rhs[i], true)
+			}
+		default:
+			bad = fmt.Errorf("%s is changed by %s", v.Name(), as.Tok)
+			return false
+		}
+		return true
+	})
+	if bad != nil {
+		return bad
+	}
+	if !self && !products {
+		return fmt.Errorf("%s is neither a running product nor a product of powers, Gamma values and exponentials", v.Name())
+	}
+	return nil
+}
+
+// isPart reports whether e is a variable the rewrite carries.
+func (lp *logProducts) isPart(e ast.Expr) bool {
+	id, ok := e.(*ast.Ident)
+	return ok && lp.set[lp.b.pass.TypesInfo.ObjectOf(id)]
+}
+
+// chainable reports whether e is a product (or quotient, negation,
+// parenthesis) with a carried variable among its direct factors: it
+// becomes a Product expression.
+func (lp *logProducts) chainable(e ast.Expr) bool { return lp.chainableIn(e, lp.calls) }
+
+// chainableIn is chainable with calls of math.Pow, math.Gamma and
+// math.Exp taken as products of their own when calls is set: inside a
+// value that becomes a Product anyway.
+func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
+	switch x := e.(type) {
+	case *ast.Ident:
+		return lp.isPart(x)
+	case *ast.CallExpr:
+		return calls && lp.isLeaf(x)
+	case *ast.ParenExpr:
+		return lp.chainableIn(x.X, calls)
+	case *ast.UnaryExpr:
+		return x.Op == token.SUB && lp.chainableIn(x.X, calls)
+	case *ast.BinaryExpr:
+		return (x.Op == token.MUL || x.Op == token.QUO) && (lp.chainableIn(x.X, calls) || lp.chainableIn(x.Y, calls))
+	}
+	return false
+}
+
+// isLeaf reports whether e is a call of math.Pow, math.Gamma or
+// math.Exp.
+func (lp *logProducts) isLeaf(e ast.Expr) bool {
+	c, fn := lp.b.callOf(e)
+	return c != nil && (len(c.Args) == 2 && isMath(fn, "Pow") || len(c.Args) == 1 && (isMath(fn, "Gamma") || isMath(fn, "Exp")))
+}
+
+// leaf writes a call of math.Pow, math.Gamma or math.Exp as the
+// Product that holds its value; "" for any other expression.
+func (lp *logProducts) leaf(e ast.Expr) string {
+	if !lp.isLeaf(e) {
+		return ""
+	}
+	c, fn := lp.b.callOf(e)
+	if fn.Name() == "Pow" {
+		return lp.pkg + ".PowProduct(" + lp.spliced(c.Args[0]) + ", " + lp.spliced(c.Args[1]) + ")"
+	}
+	return lp.pkg + "." + fn.Name() + "Product(" + lp.spliced(c.Args[0]) + ")"
+}
+
+// product writes e as a Product expression: a chain of its factors, a
+// power from PowProduct, a Gamma value from GammaProduct, any other
+// value from ProductOf.
+func (lp *logProducts) product(e ast.Expr) string {
+	if lp.chainableIn(e, true) {
+		return lp.chain(e)
+	}
+	if l := lp.leaf(e); l != "" {
+		return l
+	}
+	return lp.pkg + ".ProductOf(" + lp.spliced(e) + ")"
+}
+
+// chain writes a chainable e as the Product operations that form the
+// same float64 operations in the same order.
+func (lp *logProducts) chain(e ast.Expr) string {
+	switch x := e.(type) {
+	case *ast.Ident:
+		return x.Name
+	case *ast.CallExpr:
+		return lp.leaf(x)
+	case *ast.ParenExpr:
+		return lp.chain(x.X)
+	case *ast.UnaryExpr:
+		return lp.chain(x.X) + ".Neg()"
+	case *ast.BinaryExpr:
+		return lp.apply(lp.product(x.X), x.Op, x.Y)
+	}
+	panic("chain of an expression that is not chainable")
+}
+
+// apply writes left op y, left a Product expression.
+func (lp *logProducts) apply(left string, op token.Token, y ast.Expr) string {
+	name := "Mul"
+	if op == token.QUO || op == token.QUO_ASSIGN {
+		name = "Quo"
+	}
+	if lp.chainableIn(y, true) {
+		return left + "." + name + "(" + lp.product(y) + ")"
+	}
+	return left + "." + name + "Float(" + lp.spliced(y) + ")"
+}
+
+// spliced returns the source of e with every read of a carried variable
+// rewritten: each largest chainable expression in it becomes its chain
+// read back as a float64.
+func (lp *logProducts) spliced(e ast.Expr) string {
+	b := lp.b
+	var out strings.Builder
+	at := e.Pos()
+	ast.Inspect(e, func(n ast.Node) bool {
+		x, ok := n.(ast.Expr)
+		if !ok || !lp.chainable(x) {
+			return true
+		}
+		out.Write(b.src[b.offset(at):b.offset(x.Pos())])
+		out.WriteString(lp.chain(x) + ".Float64()")
+		at = x.End()
+		return false
+	})
+	out.Write(b.src[b.offset(at):b.offset(e.End())])
+	b.copied = append(b.copied, span{e.Pos(), e.End()})
+	return out.String()
+}
+
+// statements returns the assignments to carried variables, which the
+// rewrite replaces.
+func (lp *logProducts) statements(body *ast.BlockStmt) []ast.Stmt {
+	var out []ast.Stmt
+	ast.Inspect(body, func(n ast.Node) bool {
+		if as, ok := n.(*ast.AssignStmt); ok {
+			for _, l := range as.Lhs {
+				if lp.isPart(ast.Unparen(l)) {
+					out = append(out, as)
+					break
+				}
+			}
+		}
+		return true
+	})
+	return out
+}
+
+// rewrite edits the function body: the assignments to carried variables
+// take Products, every other read of one reads a Product back.
+func (lp *logProducts) rewrite(body *ast.BlockStmt) {
+	b := lp.b
+	var visit func(n ast.Node) bool
+	visit = func(n ast.Node) bool {
+		switch x := n.(type) {
+		case *ast.AssignStmt:
+			if (x.Tok == token.MUL_ASSIGN || x.Tok == token.QUO_ASSIGN) && lp.isPart(ast.Unparen(x.Lhs[0])) {
+				v := ast.Unparen(x.Lhs[0]).(*ast.Ident).Name
+				b.replace(x.Pos(), x.End(), v+" = "+lp.apply(v, x.Tok, x.Rhs[0]))
+				return false
+			}
+			for i, l := range x.Lhs {
+				if lp.isPart(ast.Unparen(l)) {
+					r := x.Rhs[i]
+					b.replace(r.Pos(), r.End(), lp.product(r))
+					continue
+				}
+				ast.Inspect(l, visit)
+				if len(x.Lhs) == len(x.Rhs) {
+					ast.Inspect(x.Rhs[i], visit)
+				}
+			}
+			if len(x.Lhs) != len(x.Rhs) {
+				for _, r := range x.Rhs {
+					ast.Inspect(r, visit)
+				}
+			}
+			return false
+		case ast.Expr:
+			if lp.chainable(x) {
+				b.replace(x.Pos(), x.End(), lp.chain(x)+".Float64()")
+				return false
+			}
+		}
+		return true
+	}
+	ast.Inspect(body, visit)
+}
+
+// A product of powers and Gamma values written in one expression,
+//
+//	math.Pow(r, d) * math.Pow(math.Pi, d/2) / math.Gamma(d/2+1)
+//	math.Gamma(c) * math.Gamma(d) / (math.Gamma(c-a) * math.Gamma(c-b))
+//
+// is the same chain of Products with each call the Product that holds
+// its value (PowProduct, GammaProduct):
+//
+//	lgamma.PowProduct(r, d).Mul(lgamma.PowProduct(math.Pi, d/2)).Quo(lgamma.GammaProduct(d/2 + 1)).Float64()
+//
+// which keeps the float64 value wherever no step of it left the normal
+// range, and takes the logarithms where one did (a power or a Gamma
+// value past float64 whose quotient is not). The analyzer names the
+// expression; the fixer checks that two of its factors at least are
+// such calls.
+func buildProductChain(b *builder) error {
+	e, ok := b.m.Node.(ast.Expr)
+	if !ok {
+		return errors.New("product match lacks its expression")
+	}
+	if !types.Identical(b.pass.TypesInfo.TypeOf(e), types.Typ[types.Float64]) {
+		return fmt.Errorf("product of type %s, not float64", b.pass.TypesInfo.TypeOf(e))
+	}
+	lp := &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(e.Pos()), calls: true}
+	if !lp.chainable(e) || lp.leaves(e) < 2 {
+		return fmt.Errorf("not a product of two or more powers and Gamma values: %s", b.text(e))
+	}
+	if b.commentIn(e) {
+		return errors.New("a comment inside the product")
+	}
+	b.replace(e.Pos(), e.End(), lp.chain(e)+".Float64()")
+	b.message = fmt.Sprintf("Take the product in log space where its factors leave float64 (%s.Product) (imports %s)", lp.pkg, HelperPath)
+	return nil
+}
+
+// leaves counts the direct factors of a chainable e that are calls of
+// math.Pow or math.Gamma.
+func (lp *logProducts) leaves(e ast.Expr) int {
+	switch x := e.(type) {
+	case *ast.CallExpr:
+		return 1
+	case *ast.ParenExpr:
+		return lp.leaves(x.X)
+	case *ast.UnaryExpr:
+		return lp.leaves(x.X)
+	case *ast.BinaryExpr:
+		n := 0
+		for _, y := range []ast.Expr{x.X, x.Y} {
+			if lp.chainableIn(y, true) {
+				n += lp.leaves(y)
+			}
+		}
+		return n
+	}
+	return 0
+}
