@@ -203,17 +203,13 @@ func (b *builder) removeUnusedImports() {
 }
 
 func (b *builder) removesAllUses(pn *types.PkgName) bool {
-	any := false
-	for id, obj := range b.pass.TypesInfo.Uses {
-		if obj != pn {
-			continue
-		}
-		if !b.deletes(id.Pos()) {
+	uses := b.fx.importUses()[pn]
+	for _, p := range uses {
+		if !b.deletes(p) {
 			return false
 		}
-		any = true
 	}
-	return any
+	return len(uses) > 0
 }
 
 // deletes reports whether the fix drops the source at p.

@@ -7,7 +7,7 @@ import (
 	"go/token"
 	"go/types"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // A Poisson CDF is often summed as e^−λ · Σ λ^k/k!: the terms λ^k/k!
@@ -39,7 +39,7 @@ var errNoPoissonSum = errors.New("not a Poisson sum scaled by e^−λ after its 
 func (b *builder) poissonSum() error {
 	node := b.m.Node
 	x, k := b.m.Args[0], b.m.Args[1]
-	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
+	path, _ := astpath.Enclosing(b.file, node.Pos(), node.End())
 	if len(path) < 3 {
 		return errNoPoissonSum
 	}
@@ -158,7 +158,7 @@ func (b *builder) isExpOf(e ast.Expr, want linear) bool {
 
 // enclosingBody returns the body of the function that holds n.
 func (b *builder) enclosingBody(n ast.Node) *ast.BlockStmt {
-	path, _ := astutil.PathEnclosingInterval(b.file, n.Pos(), n.End())
+	path, _ := astpath.Enclosing(b.file, n.Pos(), n.End())
 	for _, p := range path {
 		switch f := p.(type) {
 		case *ast.FuncLit:
@@ -173,7 +173,7 @@ func (b *builder) enclosingBody(n ast.Node) *ast.BlockStmt {
 // definedAsZero reports whether the definition of the variable named by
 // id gives it the value 0 (v := 0.0, var v float64, var v = 0).
 func (b *builder) definedAsZero(body *ast.BlockStmt, id *ast.Ident) bool {
-	path, _ := astutil.PathEnclosingInterval(b.file, id.Pos(), id.End())
+	path, _ := astpath.Enclosing(b.file, id.Pos(), id.End())
 	for _, p := range path {
 		switch s := p.(type) {
 		case *ast.AssignStmt:
