@@ -264,23 +264,40 @@ func (p *fixPlan) check(e edit) (dup, clash bool) {
 // to the start of its replacement. eol is the file's line ending, which
 // inserted text takes (textedit.Apply).
 func moved(off int, edits []edit, eol string) int {
+	return newShifter(edits, eol).at(off)
+}
+
+// A shifter maps offsets through one round's edits of a file: sorted
+// once, with the sum of the length changes before each, so that carrying
+// every finding of a file through the edits costs a binary search each
+// instead of a pass over the edits.
+type shifter struct {
+	edits []edit
+	delta []int // delta[i]: the change in length of edits[:i]
+}
+
+func newShifter(edits []edit, eol string) *shifter {
 	sorted := append([]edit(nil), edits...)
 	sort.SliceStable(sorted, func(i, j int) bool {
 		return sorted[i].Start < sorted[j].Start || sorted[i].Start == sorted[j].Start && sorted[i].End < sorted[j].End
 	})
-	delta := 0
-	for _, e := range sorted {
-		n := len(textedit.WithLineEnding(e.Text, eol))
-		switch {
-		case e.Start > off:
-			return off + delta
-		case e.Start == e.End || e.End <= off:
-			delta += n - (e.End - e.Start)
-		default: // e.Start <= off < e.End
-			return e.Start + delta
+	delta := make([]int, len(sorted)+1)
+	for i, e := range sorted {
+		delta[i+1] = delta[i] + len(textedit.WithLineEnding(e.Text, eol)) - (e.End - e.Start)
+	}
+	return &shifter{sorted, delta}
+}
+
+// at is moved(off) for the shifter's edits. The edits of a round do not
+// overlap, so only the last edit starting at or before off can hold it.
+func (s *shifter) at(off int) int {
+	k := sort.Search(len(s.edits), func(i int) bool { return s.edits[i].Start > off })
+	if k > 0 {
+		if e := s.edits[k-1]; e.Start < e.End && off < e.End { // e.Start <= off < e.End
+			return e.Start + s.delta[k-1]
 		}
 	}
-	return off + delta
+	return off + s.delta[k]
 }
 
 // gofmtIfClean returns fixed gofmt-ed when the original was gofmt-clean,

@@ -139,11 +139,17 @@ func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, do
 		all = append(all, f)
 	}
 	clear(done)
+	type shift struct{ edits, pruned *shifter }
+	shifts := make(map[string]shift) // by file, made once per round
 	for _, f := range all {
 		if edits, ok := plan.files[f.file]; ok {
-			eol := textedit.LineEnding(originals[f.file])
-			f.offset = moved(f.offset, edits, eol)
-			f.offset = moved(f.offset, pruned[f.file], eol)
+			sh, ok := shifts[f.file]
+			if !ok {
+				eol := textedit.LineEnding(originals[f.file])
+				sh = shift{newShifter(edits, eol), newShifter(pruned[f.file], eol)}
+				shifts[f.file] = sh
+			}
+			f.offset = sh.pruned.at(sh.edits.at(f.offset))
 		}
 		done[f] = true
 	}
