@@ -3,6 +3,7 @@ package fixes
 import (
 	"go/ast"
 	"go/token"
+	"sort"
 	"strings"
 
 	"golang.org/x/tools/go/analysis"
@@ -19,7 +20,7 @@ import (
 // that line is. The comments of a deleted import go with the import.
 func (b *builder) keepComments() {
 	above := make([][]string, len(b.edits)) // by edit: comments for above its line
-	for _, cg := range b.file.Comments {
+	for _, cg := range b.commentsInEdits() {
 		for _, c := range cg.List {
 			i := b.deletingEdit(c)
 			if i < 0 {
@@ -47,6 +48,32 @@ func (b *builder) keepComments() {
 	}
 }
 
+// commentsInEdits returns the file's comment groups that overlap an edit
+// which deletes source, in order: only those can hold a comment the fix
+// deletes. Each edit's are found by binary search, so that a fix costs
+// what it edits, not the file's comments.
+func (b *builder) commentsInEdits() []*ast.CommentGroup {
+	groups := b.file.Comments
+	var at []int
+	for _, e := range b.edits {
+		if e.End <= e.Pos {
+			continue
+		}
+		i := sort.Search(len(groups), func(i int) bool { return groups[i].End() > e.Pos })
+		for ; i < len(groups) && groups[i].Pos() < e.End; i++ {
+			at = append(at, i)
+		}
+	}
+	sort.Ints(at)
+	var out []*ast.CommentGroup
+	for k, i := range at {
+		if k == 0 || at[k-1] != i {
+			out = append(out, groups[i])
+		}
+	}
+	return out
+}
+
 // deletingEdit returns the index of the edit that deletes comment c
 // without the fix copying it, or -1.
 func (b *builder) deletingEdit(c *ast.Comment) int {
@@ -70,7 +97,11 @@ func (b *builder) deletingEdit(c *ast.Comment) int {
 func (b *builder) inImportDecl(p token.Pos) bool {
 	line := b.line(p)
 	for _, d := range b.file.Decls {
-		if g, ok := d.(*ast.GenDecl); ok && g.Tok == token.IMPORT && b.line(g.Pos()) <= line && line <= b.line(g.End()) {
+		g, ok := d.(*ast.GenDecl)
+		if !ok || g.Tok != token.IMPORT {
+			return false // imports come before every other declaration
+		}
+		if b.line(g.Pos()) <= line && line <= b.line(g.End()) {
 			return true
 		}
 	}

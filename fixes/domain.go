@@ -8,7 +8,7 @@ import (
 	"strconv"
 	"strings"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // A helper computes its quantity on the quantity's domain: C(n, k) for
@@ -372,7 +372,7 @@ func (b *builder) emptyQuotient() (string, error) {
 // returning returns the return statement whose only result is the
 // match's node, if it is one that starts its line.
 func (b *builder) returning() *ast.ReturnStmt {
-	path, _ := astutil.PathEnclosingInterval(b.file, b.m.Node.Pos(), b.m.Node.End())
+	path, _ := astpath.Enclosing(b.file, b.m.Node.Pos(), b.m.Node.End())
 	for i, n := range path {
 		if n == b.m.Node {
 			if i+1 < len(path) {

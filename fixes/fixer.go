@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"sync/atomic"
 
 	"golang.org/x/tools/go/analysis"
 )
@@ -18,7 +19,10 @@ import (
 // on the fixer's account.
 type Fixer struct {
 	pass     *analysis.Pass
-	checks   int // fix checks spent, at most maxVerifications
+	checks   int                           // fix checks spent
+	budget   int                           // fix checks allowed; 0: no bound (see SetCheckBudget)
+	importer importerMap                   // the package's imports and the fixes' stand-ins
+	funcs    map[*ast.File][]*ast.FuncDecl // each file's functions, in order
 	parsed   *parsed
 	decls    *decls                         // parsed files without function bodies
 	uses     map[*types.PkgName][]token.Pos // where each import name is used
@@ -28,20 +32,43 @@ type Fixer struct {
 	fieldVars map[[2]types.Object]*types.Var
 }
 
-// NewFixer returns the fixer of pass's findings.
+// NewFixer returns the fixer of pass's findings, with the budget of fix
+// checks SetCheckBudget last set.
 func NewFixer(pass *analysis.Pass) *Fixer {
-	return &Fixer{pass: pass}
+	return &Fixer{pass: pass, budget: int(checkBudget.Load())}
+}
+
+// checkBudget is the number of fix checks each Fixer made from now on
+// allows; 0 lifts the bound.
+var checkBudget atomic.Int64
+
+func init() { checkBudget.Store(maxVerifications) }
+
+// SetCheckBudget sets the number of fixes a package may check (and so
+// offer) in one analysis, for the Fixers made from now on: n > 0 bounds
+// them, n <= 0 lifts the bound. It returns the previous setting (0 for
+// none). The default, maxVerifications, keeps the analysis of a package
+// with thousands of findings quick where every analysis is shown at
+// once (go vet, the editor); a run that applies every fix it can, the
+// command's -fix, lifts it: a fix check costs what the edited functions
+// reach, not the package (verifyfunc.go), so checking every fix of a
+// package costs about as much as building them.
+func SetCheckBudget(n int) (previous int) {
+	if n < 0 {
+		n = 0
+	}
+	return int(checkBudget.Swap(int64(n)))
 }
 
 // verificationsLeft reports whether the package may still check a fix.
 func (fx *Fixer) verificationsLeft() bool {
-	return fx.checks < maxVerifications
+	return fx.budget <= 0 || fx.checks < fx.budget
 }
 
 // spendVerification reports whether the package may check one more fix,
 // and counts it.
 func (fx *Fixer) spendVerification() bool {
-	if fx.checks >= maxVerifications {
+	if !fx.verificationsLeft() {
 		return false
 	}
 	fx.checks++

@@ -5,6 +5,7 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"sort"
 	"strconv"
 	"strings"
 
@@ -67,6 +68,16 @@ func (b *builder) free(name string, pos token.Pos) bool {
 }
 
 func (b *builder) scopeAt(pos token.Pos) *types.Scope {
+	// The scope of the function declaration that holds pos, found by
+	// binary search: the package scope's Innermost tries every function
+	// of the file in turn, which costs a file's functions per fix.
+	funcs := b.fx.funcsOf(b.file)
+	i := sort.Search(len(funcs), func(i int) bool { return funcs[i].End() > pos })
+	if i < len(funcs) {
+		if fs := b.pass.TypesInfo.Scopes[funcs[i].Type]; fs != nil && fs.Contains(pos) {
+			return fs.Innermost(pos)
+		}
+	}
 	if s := b.pass.Pkg.Scope().Innermost(pos); s != nil {
 		return s
 	}
@@ -203,17 +214,13 @@ func (b *builder) removeUnusedImports() {
 }
 
 func (b *builder) removesAllUses(pn *types.PkgName) bool {
-	any := false
-	for id, obj := range b.pass.TypesInfo.Uses {
-		if obj != pn {
-			continue
-		}
-		if !b.deletes(id.Pos()) {
+	uses := b.fx.importUses()[pn]
+	for _, p := range uses {
+		if !b.deletes(p) {
 			return false
 		}
-		any = true
 	}
-	return any
+	return len(uses) > 0
 }
 
 // deletes reports whether the fix drops the source at p.

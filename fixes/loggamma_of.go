@@ -4,7 +4,7 @@ import (
 	"errors"
 	"go/ast"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // The log of a gamma value, math.Log(math.Gamma(x)), is +Inf from
@@ -26,7 +26,7 @@ func buildLogOfGamma(b *builder) error {
 	if len(b.m.Args) != 1 || classOf(b.m.Result) != classFloat {
 		return errors.New("a bare math.Gamma: no float64 holds Γ(172)")
 	}
-	path, _ := astutil.PathEnclosingInterval(b.file, b.m.Node.Pos(), b.m.Node.End())
+	path, _ := astpath.Enclosing(b.file, b.m.Node.Pos(), b.m.Node.End())
 	var log *ast.CallExpr
 	for i := 1; i < len(path); i++ {
 		if _, ok := path[i].(*ast.ParenExpr); ok {

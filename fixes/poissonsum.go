@@ -7,7 +7,7 @@ import (
 	"go/token"
 	"go/types"
 
-	"golang.org/x/tools/go/ast/astutil"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // A Poisson CDF is often summed as e^−λ · Σ λ^k/k!: the terms λ^k/k!
@@ -97,7 +97,7 @@ func (b *builder) foldedScale(product *ast.BinaryExpr, accRead ast.Expr) {
 // assigned from the loop to it, and returns that product and its read
 // of sum; errNoPoissonSum where that does not hold.
 func (b *builder) poissonScale(node ast.Node, x ast.Expr) (*ast.BinaryExpr, ast.Expr, error) {
-	path, _ := astutil.PathEnclosingInterval(b.file, node.Pos(), node.End())
+	path, _ := astpath.Enclosing(b.file, node.Pos(), node.End())
 	if len(path) < 3 {
 		return nil, nil, errNoPoissonSum
 	}
@@ -203,7 +203,7 @@ func (b *builder) isExpOf(e ast.Expr, want linear) bool {
 
 // enclosingBody returns the body of the function that holds n.
 func (b *builder) enclosingBody(n ast.Node) *ast.BlockStmt {
-	path, _ := astutil.PathEnclosingInterval(b.file, n.Pos(), n.End())
+	path, _ := astpath.Enclosing(b.file, n.Pos(), n.End())
 	for _, p := range path {
 		switch f := p.(type) {
 		case *ast.FuncLit:
@@ -218,7 +218,7 @@ func (b *builder) enclosingBody(n ast.Node) *ast.BlockStmt {
 // definedAsZero reports whether the definition of the variable named by
 // id gives it the value 0 (v := 0.0, var v float64, var v = 0).
 func (b *builder) definedAsZero(body *ast.BlockStmt, id *ast.Ident) bool {
-	path, _ := astutil.PathEnclosingInterval(b.file, id.Pos(), id.End())
+	path, _ := astpath.Enclosing(b.file, id.Pos(), id.End())
 	for _, p := range path {
 		switch s := p.(type) {
 		case *ast.AssignStmt:

@@ -23,15 +23,22 @@ func (b *builder) verify() error {
 	if !b.fx.spendVerification() {
 		return errVerificationsSpent
 	}
-	fixed, err := apply(b.src, b.tok, b.edits)
-	if err != nil {
-		return err
-	}
+	// The cheap check reads the edited functions' text alone, so that
+	// its cost does not grow with the file: the whole fixed file is
+	// built only for the full check (and for tests that watch checks).
+	var err error
 	fe, cheap := b.scopeOfEdits()
 	if cheap {
-		err = b.checkFunctions(fixed, fe)
+		err = b.checkFunctions(fe)
 		if err == errNeedsFullCheck {
 			cheap = false
+		}
+	}
+	var fixed []byte
+	if !cheap || checkHook != nil {
+		var aerr error
+		if fixed, aerr = apply(b.src, b.tok, b.edits); aerr != nil {
+			return aerr
 		}
 	}
 	if !cheap {
@@ -76,7 +83,7 @@ func (b *builder) checkPackage(fixed []byte) error {
 func (b *builder) typeCheck(fset *token.FileSet, files []*ast.File, excuse func(types.Error) bool) error {
 	var first error
 	conf := types.Config{
-		Importer:  importerFor(b.pass.Pkg),
+		Importer:  b.fx.importerMap(),
 		Sizes:     b.pass.TypesSizes,
 		GoVersion: b.pass.Pkg.GoVersion(),
 		Error: func(err error) {
@@ -156,6 +163,14 @@ func importerFor(pkg *types.Package) importerMap {
 	return m
 }
 
+// importerMap returns importerFor the fixer's package, made once.
+func (fx *Fixer) importerMap() importerMap {
+	if fx.importer == nil {
+		fx.importer = importerFor(fx.pass.Pkg)
+	}
+	return fx.importer
+}
+
 func (m importerMap) Import(path string) (*types.Package, error) {
 	if p, ok := m[path]; ok {
 		return p, nil
@@ -173,14 +188,15 @@ func apply(src []byte, tok *token.File, edits []analysis.TextEdit) ([]byte, erro
 	return textedit.Apply(src, es)
 }
 
-// maxVerifications bounds the fixes type-checked in one package. Each
-// check type-checks the whole package, so without a bound a package with
-// thousands of findings would cost thousands of type-checks and analysis
-// time would grow with the square of the package. With it, fix checking
-// costs at most this many type-checks of the package: linear in its size.
-// Findings past the bound are still reported, without a fix; after the
-// first fixes are applied, the next analysis offers fixes for the rest
-// (the command's -fix does so in its later rounds).
+// maxVerifications is the default bound on the fixes type-checked in one
+// package (SetCheckBudget). A check that cannot be confined to the edited
+// functions type-checks the whole package, so without a bound a package
+// with thousands of such findings would cost thousands of type-checks,
+// and analysis time would grow with the square of the package. With it,
+// fix checking costs at most this many type-checks of the package:
+// linear in its size. Findings past the bound are still reported, without
+// a fix; after the first fixes are applied, the next analysis offers
+// fixes for the rest.
 const maxVerifications = 32
 
-var errVerificationsSpent = fmt.Errorf("this package's %d fix checks are spent; apply the fixes offered so far and analyse again", maxVerifications)
+var errVerificationsSpent = fmt.Errorf("this package's fix checks are spent; apply the fixes offered so far and analyse again")

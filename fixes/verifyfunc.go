@@ -8,6 +8,8 @@ import (
 	"go/token"
 	"go/types"
 	"sort"
+
+	"github.com/overfact/overfact/internal/textedit"
 )
 
 // A fix that edits only function bodies and the file's imports cannot
@@ -65,12 +67,7 @@ func (b *builder) scopeOfEdits() (*funcEdits, bool) {
 			break
 		}
 	}
-	var funcs []*ast.FuncDecl
-	for _, d := range b.file.Decls {
-		if fd, ok := d.(*ast.FuncDecl); ok {
-			funcs = append(funcs, fd)
-		}
-	}
+	funcs := b.fx.funcsOf(b.file)
 	// b.edits are sorted by position; so are funcs.
 	for _, e := range b.edits {
 		if e.End <= fe.headerEnd {
@@ -87,6 +84,25 @@ func (b *builder) scopeOfEdits() (*funcEdits, bool) {
 	return fe, true
 }
 
+// funcsOf returns the functions declared in f, in order, listed once per
+// file: each fix looks up the ones it edits.
+func (fx *Fixer) funcsOf(f *ast.File) []*ast.FuncDecl {
+	if funcs, ok := fx.funcs[f]; ok {
+		return funcs
+	}
+	var funcs []*ast.FuncDecl
+	for _, d := range f.Decls {
+		if fd, ok := d.(*ast.FuncDecl); ok {
+			funcs = append(funcs, fd)
+		}
+	}
+	if fx.funcs == nil {
+		fx.funcs = make(map[*ast.File][]*ast.FuncDecl)
+	}
+	fx.funcs[f] = funcs
+	return funcs
+}
+
 // checkFunctions type-checks the fixed text of the functions fe names,
 // with the fixed file's imports, against the declarations of the package
 // they reach, without function bodies. It returns errNeedsFullCheck when
@@ -94,7 +110,7 @@ func (b *builder) scopeOfEdits() (*funcEdits, bool) {
 // not check still uses, adds a reference to a package-level variable,
 // function or method, or its excerpt does not parse (the whole file's
 // check then reports why).
-func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
+func (b *builder) checkFunctions(fe *funcEdits) error {
 	others, err := b.fx.parsedFiles()
 	if err != nil {
 		return err
@@ -103,7 +119,7 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 	if err != nil {
 		return err
 	}
-	src, err := b.excerpt(fixed, fe)
+	src, err := b.excerpt(fe)
 	if err != nil {
 		return err
 	}
@@ -137,7 +153,7 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 	for _, d := range sf.Decls {
 		seeds = append(seeds, mentions(d)...)
 	}
-	imp := importerFor(b.pass.Pkg)
+	imp := b.fx.importerMap()
 	for _, spec := range sf.Imports {
 		if spec.Name != nil {
 			seeds = append(seeds, spec.Name.Name)
@@ -156,7 +172,20 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 	reached := decls.reach(seeds, replaced)
 	// The fixed file: its new imports and edited functions, and the
 	// declarations reached of the rest of the package as parsed before
-	// the fix, imports of the other files kept.
+	// the fix, imports of the other files kept. Only the declarations
+	// reached are visited, so that a check costs what the edited
+	// functions reach, not the package.
+	byFile := make(map[*ast.File][]ast.Decl)
+	for d := range reached {
+		if _, ok := replaced[d]; !ok {
+			f := decls.fileOf[d]
+			byFile[f] = append(byFile[f], d)
+		}
+	}
+	for i := range touched {
+		orig := decls.bodyless[fe.touched[i]]
+		byFile[b.file] = append(byFile[b.file], orig)
+	}
 	files := make([]*ast.File, 0, len(b.pass.Files))
 	for _, f := range b.pass.Files {
 		pf := decls.files[f]
@@ -165,19 +194,16 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 		if f == b.file {
 			nf = *sf
 			nf.Decls = append([]ast.Decl(nil), sf.Decls[:nImports]...)
+		} else {
+			nf.Decls = append(nf.Decls, decls.imports[f]...)
 		}
-		for _, d := range pf.Decls {
-			if g, ok := d.(*ast.GenDecl); ok && g.Tok == token.IMPORT {
-				if f != b.file {
-					nf.Decls = append(nf.Decls, d)
-				}
-				continue
-			}
+		ds := byFile[f]
+		sort.Slice(ds, func(i, j int) bool { return ds[i].Pos() < ds[j].Pos() })
+		for _, d := range ds {
 			if r, ok := replaced[d]; ok && f == b.file {
-				nf.Decls = append(nf.Decls, r)
-			} else if reached[d] {
-				nf.Decls = append(nf.Decls, d)
+				d = r
 			}
+			nf.Decls = append(nf.Decls, d)
 		}
 		files = append(files, &nf)
 	}
@@ -190,40 +216,51 @@ func (b *builder) checkFunctions(fixed []byte, fe *funcEdits) error {
 var errNeedsFullCheck = fmt.Errorf("the fix needs a check of the whole package")
 
 // excerpt returns the fixed file's import header and the fixed text of
-// the functions fe names, each at the line and column it has in the
-// fixed file (what lies between is left out, its line breaks kept), so
-// that the check reports the positions the whole file would.
-func (b *builder) excerpt(fixed []byte, fe *funcEdits) ([]byte, error) {
-	// shift returns the offset in fixed of orig's offset off, counting
-	// the edits that end at or before it.
-	shift := func(off int) int {
-		d := 0
-		for _, e := range b.edits {
-			if b.tok.Offset(e.End) > off {
-				break
-			}
-			d += len(e.NewText) - (b.tok.Offset(e.End) - b.tok.Offset(e.Pos))
-		}
-		return off + d
-	}
-	hdr := shift(b.tok.Offset(fe.headerEnd))
+// the functions fe names, each preceded by a line directive that gives
+// it the line and column it has in the fixed file, so that the check
+// reports the positions the whole file would. It is built from the
+// original text and the fix's edits, at a cost that does not depend on
+// the text left out. It returns errNeedsFullCheck when an edit before a
+// function ends on the line the function starts on (its column in the
+// fixed text is then not its column in the original).
+func (b *builder) excerpt(fe *funcEdits) ([]byte, error) {
 	var out bytes.Buffer
-	out.Grow(hdr)
-	out.Write(fixed[:hdr])
-	at := hdr
-	for _, fd := range fe.touched {
-		start := shift(b.tok.Offset(fd.Pos()))
-		// The function starts after everything before it: its own edits
-		// lie inside its body, after its start.
-		end := shift(b.tok.Offset(fd.End()))
-		if start < at || end < start || end > len(fixed) {
-			return nil, fmt.Errorf("fix edits overlap the functions they edit")
+	i := 0        // the next edit to apply
+	lines := 0    // line breaks the edits applied so far add
+	lastEnd := -1 // the original line of the end of the last edit applied
+	// piece writes the original text [start, end) with the edits inside
+	// it applied; edits are sorted, and each lies inside one piece
+	// (scopeOfEdits).
+	piece := func(start, end token.Pos) error {
+		var es []textedit.Edit
+		for ; i < len(b.edits) && b.edits[i].Pos >= start && b.edits[i].End <= end; i++ {
+			e := b.edits[i]
+			es = append(es, textedit.Edit{Start: b.offset(e.Pos) - b.offset(start), End: b.offset(e.End) - b.offset(start), Text: string(e.NewText)})
+			lines += bytes.Count(e.NewText, []byte{'\n'}) - bytes.Count(b.src[b.offset(e.Pos):b.offset(e.End)], []byte{'\n'})
+			lastEnd = b.tok.PositionFor(e.End, false).Line
 		}
-		out.Write(bytes.Repeat([]byte{'\n'}, bytes.Count(fixed[at:start], []byte{'\n'})))
-		col := start - (bytes.LastIndexByte(fixed[:start], '\n') + 1)
-		out.Write(bytes.Repeat([]byte{' '}, col))
-		out.Write(fixed[start:end])
-		at = end
+		text, err := textedit.Apply(b.src[b.offset(start):b.offset(end)], es)
+		if err != nil {
+			return err
+		}
+		out.Write(text)
+		return nil
+	}
+	if err := piece(token.Pos(b.tok.Base()), fe.headerEnd); err != nil {
+		return nil, err
+	}
+	for _, fd := range fe.touched {
+		at := b.tok.PositionFor(fd.Pos(), false)
+		if at.Line == lastEnd {
+			return nil, errNeedsFullCheck
+		}
+		fmt.Fprintf(&out, "\n//line %s:%d:%d\n", b.tok.Name(), at.Line+lines, at.Column)
+		if err := piece(fd.Pos(), fd.End()); err != nil {
+			return nil, err
+		}
+	}
+	if i != len(b.edits) {
+		return nil, fmt.Errorf("fix edits overlap the functions they edit")
 	}
 	return out.Bytes(), nil
 }
@@ -294,8 +331,10 @@ func (fx *Fixer) importUses() map[*types.PkgName][]token.Pos {
 // dropped bodies may have been the only users of; and an index of their
 // declarations by the names they declare.
 type decls struct {
-	files    map[*ast.File]*ast.File // by the pass's file
-	bodyless map[ast.Decl]ast.Decl   // by the pass's declaration
+	files    map[*ast.File]*ast.File  // by the pass's file
+	imports  map[*ast.File][]ast.Decl // the import declarations, by the pass's file
+	fileOf   map[ast.Decl]*ast.File   // the pass's file of each declaration
+	bodyless map[ast.Decl]ast.Decl    // by the pass's declaration
 	excused  map[token.Pos]bool
 	byName   map[string][]ast.Decl // package-level declarations by name
 	methods  map[string][]ast.Decl // methods by their receiver's type name
@@ -311,6 +350,7 @@ func (fx *Fixer) declsOnly() (*decls, error) {
 		return nil, err
 	}
 	d := &decls{files: make(map[*ast.File]*ast.File), bodyless: make(map[ast.Decl]ast.Decl),
+		imports: make(map[*ast.File][]ast.Decl), fileOf: make(map[ast.Decl]*ast.File),
 		excused: make(map[token.Pos]bool), byName: make(map[string][]ast.Decl),
 		methods: make(map[string][]ast.Decl), names: make(map[ast.Decl][]string)}
 	for orig, pf := range p.files {
@@ -321,6 +361,10 @@ func (fx *Fixer) declsOnly() (*decls, error) {
 				decl = withoutBody(fd)
 			}
 			f.Decls[i] = decl
+			d.fileOf[decl] = orig
+			if g, ok := decl.(*ast.GenDecl); ok && g.Tok == token.IMPORT {
+				d.imports[orig] = append(d.imports[orig], decl)
+			}
 			if len(orig.Decls) == len(pf.Decls) {
 				d.bodyless[orig.Decls[i]] = decl
 			}

@@ -74,6 +74,11 @@ func k(n int64) *big.Int { return big.NewInt(n) }
 		{"method left broken", [][2]string{{"return v * 2", "return c * 2"}}, "cannot use c * 2", false},
 		{"generic function", [][2]string{{"return xs[0]", "return xs[len(xs)-1]"}}, "", false},
 		{"two functions", [][2]string{{"return float64(b)", "return float64(b + 0)"}, {"math.Log(x)", "math.Log(x+0)"}}, "", false},
+		// The excerpt places each function at its line in the fixed file:
+		// an import added above moves the error a line down, a line
+		// added inside the first function moves the second's.
+		{"error below an added import", [][2]string{{"\t\"strconv\"\n", "\t\"strconv\"\n\t\"math/big\"\n"}, {"return float64(b)", "return float64(big.NewInt(int64(n)).BitLen())"}}, "declared and not used", false},
+		{"error below an edited function", [][2]string{{"return float64(b)", "_ = b\n\treturn float64(b)"}, {"math.Log(x)", "math.Log(y)"}}, "undefined: y", false},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

@@ -8,6 +8,7 @@ import (
 	"text/tabwriter"
 
 	"github.com/overfact/overfact/analyzer"
+	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/driver"
 	"github.com/overfact/overfact/internal/sarif"
 )
@@ -53,6 +54,14 @@ func runAnalysis(args []string) int {
 	opts.Version = moduleVersion()
 	opts.Helper = helperModule()
 	opts.FactScan = analyzer.MayCarryFacts
+	if opts.Fix || opts.Diff {
+		// -fix applies every fix it can; checking them all costs what
+		// their functions reach, so the budget that keeps go vet and
+		// the editor quick on a package with thousands of findings
+		// would only make -fix re-analyse the package once per 32 fixes.
+		fixes.SetCheckBudget(0)
+		opts.FixesComplete = true
+	}
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}

@@ -9,6 +9,10 @@ import (
 
 	"golang.org/x/tools/go/analysis"
 	"golang.org/x/tools/go/analysis/checker"
+
+	"github.com/overfact/overfact/analyzer"
+	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/driver"
 )
 
 // childReport is what one measured process prints on its standard output.
@@ -26,6 +30,9 @@ type childReport struct {
 // runChild loads the packages once, runs one side once and reports. Each
 // side runs in a process of its own so that its peak memory is its own.
 func runChild(name string, patterns []string) error {
+	if name == "fix" {
+		return runFixChild(patterns)
+	}
 	a := side(name)
 	if a == nil {
 		return fmt.Errorf("unknown side %q", name)
@@ -66,4 +73,23 @@ func runChild(name string, patterns []string) error {
 	}
 	runtime.KeepAlive(pkgs)
 	return json.NewEncoder(os.Stdout).Encode(rep)
+}
+
+// runFixChild runs the command's -fix once over patterns, in -dir, as
+// the command runs it (the budget of fix checks lifted), under the
+// profiles asked for, and exits with its code. The module must already
+// provide the helper module the fixes import (overfact helper).
+func runFixChild(patterns []string) error {
+	stop, err := startProfiles()
+	if err != nil {
+		return err
+	}
+	fixes.SetCheckBudget(0)
+	code := driver.Run(analyzer.Analyzer, patterns, driver.Options{Dir: *dirFlag, Tests: *testsFlag, Fix: true, FixesComplete: true,
+		FixLast: analyzer.FixesLast, FactScan: analyzer.MayCarryFacts, Stdout: os.Stdout, Stderr: os.Stderr})
+	if err := stop(); err != nil {
+		return err
+	}
+	os.Exit(code)
+	return nil
 }

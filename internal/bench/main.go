@@ -47,11 +47,12 @@ var (
 	runsFlag     = flag.Int("n", 5, "number of timed runs per side; the median is reported")
 	testsFlag    = flag.Bool("tests", true, "include test packages")
 	loadFlag     = flag.String("load", "driver", "how overfact's packages are loaded: driver (as the command does: source for the dependencies that may carry facts, export data for the rest), source (every dependency from source) or roots (export data for every dependency)")
-	childFlag    = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON")
+	childFlag    = flag.String("child", "", "internal: run one side (noop or overfact) once and report JSON; fix: run the command's -fix once")
 	jsonFlag     = flag.Bool("json", false, "corpus mode: print findings as JSON lines")
 	overfactFlag = flag.String("overfact", "", "edges mode: the overfact `command` to run")
 	baseFlag     = flag.String("baseline", "", "edges mode: an overfact `command` to alternate with -overfact, for ratios under the same load")
 	sizeFlag     = flag.Int("size", 5<<20, "genfile mode: size in bytes of the file written")
+	helperFlag   = flag.String("helper", "fixes/lgamma", "edges mode: the helper module's `dir` (of this checkout), copied into the generated module for -fix")
 
 	caseTimeFlag  = flag.Duration("casetime", 5*time.Minute, "scale mode: time allowed for the runs of one size")
 	profileFlag   = flag.String("cpuprofile", "", "with -scalecase or -child: write a CPU profile of the analysis runs (of the whole run with -child) to this file")

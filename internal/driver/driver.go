@@ -50,6 +50,13 @@ type Options struct {
 	// whose rewrites should come first).
 	FixLast func(category string) bool
 
+	// FixesComplete says that the analyzer offers a fix for every
+	// finding it can fix in each analysis (no budget of fix checks holds
+	// any back): a round of -fix whose other fixes are all taken then
+	// takes the FixLast categories' fixes too (see planFixes), and a
+	// large package is fixed in two analyses instead of three.
+	FixesComplete bool
+
 	// Helper, when its Path is set, is the module that fixes import; -fix
 	// makes sure it resolves from the fixed module before writing.
 	Helper Helper

@@ -60,7 +60,15 @@ func findingOf(fset *token.FileSet, d analysis.Diagnostic) finding {
 // was not yet offered (an analyzer may offer only so many fixes per
 // analysis) would then keep the guard's panic where its rewrite gives
 // the right value.
-func planFixes(roots []*checker.Action, done map[finding]bool, last func(category string) bool) *fixPlan {
+//
+// When complete is set (the analyzer offered a fix for every finding it
+// could fix: no budget held any back), a round whose other fixes are all
+// taken, none clashing, takes the definitions' fixes too, except those in
+// a function another fix of the round edits: every rewrite a guard could
+// pre-empt is then in the round, and a definition judged by its own
+// function is judged the same after rewrites elsewhere. That saves the
+// analysis of the whole package that a round of its own would cost.
+func planFixes(roots []*checker.Action, done map[finding]bool, last func(category string) bool, complete bool) *fixPlan {
 	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool)}
 	type candidate struct {
 		fset      *token.FileSet
@@ -68,6 +76,7 @@ func planFixes(roots []*checker.Action, done map[finding]bool, last func(categor
 		generated map[string]bool
 	}
 	var definitions []candidate
+	funcs := make(funcSpans)
 	for _, act := range roots {
 		if act.Err != nil || len(act.Diagnostics) == 0 {
 			continue
@@ -78,6 +87,9 @@ func planFixes(roots []*checker.Action, done map[finding]bool, last func(categor
 		}
 		fset := act.Package.Fset
 		generated := generatedFiles(fset, act.Package.Syntax)
+		if complete {
+			funcs.add(fset, act.Package.Syntax)
+		}
 		for _, d := range act.Diagnostics {
 			if len(d.SuggestedFixes) == 0 || done[findingOf(fset, d)] {
 				continue
@@ -89,14 +101,83 @@ func planFixes(roots []*checker.Action, done map[finding]bool, last func(categor
 			p.take(fset, d, generated)
 		}
 	}
-	if len(p.taken) > 0 {
+	if len(p.taken) > 0 && (!complete || p.clashed > 0) {
 		p.deferred = len(definitions)
 		return p
 	}
+	edited := make(map[funcSpan]bool) // the functions the round's other fixes edit
+	for name, edits := range p.files {
+		for _, e := range edits {
+			if fn, ok := funcs.at(name, e.Start); ok {
+				edited[fn] = true
+			}
+		}
+	}
 	for _, c := range definitions {
+		if len(edited) > 0 && funcs.editsAny(c.fset, c.d, edited) {
+			p.deferred++
+			continue
+		}
 		p.take(c.fset, c.d, c.generated)
 	}
 	return p
+}
+
+// A funcSpan is the extent of a function declaration: its file and the
+// offsets of its start and end.
+type funcSpan struct {
+	file       string
+	start, end int
+}
+
+// funcSpans lists the function declarations of files, by physical file
+// name, in order.
+type funcSpans map[string][]funcSpan
+
+func (fs funcSpans) add(fset *token.FileSet, files []*ast.File) {
+	for _, f := range files {
+		tf := fset.File(f.FileStart)
+		if tf == nil {
+			continue
+		}
+		name := tf.Name()
+		if _, ok := fs[name]; ok {
+			continue // a test variant's copy of a file
+		}
+		spans := []funcSpan{}
+		for _, d := range f.Decls {
+			if fd, ok := d.(*ast.FuncDecl); ok {
+				spans = append(spans, funcSpan{name, tf.Offset(fd.Pos()), tf.Offset(fd.End())})
+			}
+		}
+		fs[name] = spans
+	}
+}
+
+// at returns the function of file that holds offset off.
+func (fs funcSpans) at(file string, off int) (funcSpan, bool) {
+	spans := fs[file]
+	i := sort.Search(len(spans), func(i int) bool { return spans[i].end > off })
+	if i < len(spans) && spans[i].start <= off {
+		return spans[i], true
+	}
+	return funcSpan{}, false
+}
+
+// editsAny reports whether d lies in, or its fix edits, one of the
+// functions in edited.
+func (fs funcSpans) editsAny(fset *token.FileSet, d analysis.Diagnostic, edited map[funcSpan]bool) bool {
+	at := []token.Pos{d.Pos}
+	for _, te := range d.SuggestedFixes[0].TextEdits {
+		at = append(at, te.Pos)
+	}
+	for _, pos := range at {
+		p := fset.PositionFor(pos, false)
+		if fn, ok := fs.at(p.Filename, p.Offset); ok && edited[fn] {
+			return true
+		}
+	}
+	return false
 }
 
 // take adds the first fix of d to the plan, unless it clashes.
@@ -183,23 +264,40 @@ func (p *fixPlan) check(e edit) (dup, clash bool) {
 // to the start of its replacement. eol is the file's line ending, which
 // inserted text takes (textedit.Apply).
 func moved(off int, edits []edit, eol string) int {
+	return newShifter(edits, eol).at(off)
+}
+
+// A shifter maps offsets through one round's edits of a file: sorted
+// once, with the sum of the length changes before each, so that carrying
+// every finding of a file through the edits costs a binary search each
+// instead of a pass over the edits.
+type shifter struct {
+	edits []edit
+	delta []int // delta[i]: the change in length of edits[:i]
+}
+
+func newShifter(edits []edit, eol string) *shifter {
 	sorted := append([]edit(nil), edits...)
 	sort.SliceStable(sorted, func(i, j int) bool {
 		return sorted[i].Start < sorted[j].Start || sorted[i].Start == sorted[j].Start && sorted[i].End < sorted[j].End
 	})
-	delta := 0
-	for _, e := range sorted {
-		n := len(textedit.WithLineEnding(e.Text, eol))
-		switch {
-		case e.Start > off:
-			return off + delta
-		case e.Start == e.End || e.End <= off:
-			delta += n - (e.End - e.Start)
-		default: // e.Start <= off < e.End
-			return e.Start + delta
+	delta := make([]int, len(sorted)+1)
+	for i, e := range sorted {
+		delta[i+1] = delta[i] + len(textedit.WithLineEnding(e.Text, eol)) - (e.End - e.Start)
+	}
+	return &shifter{sorted, delta}
+}
+
+// at is moved(off) for the shifter's edits. The edits of a round do not
+// overlap, so only the last edit starting at or before off can hold it.
+func (s *shifter) at(off int) int {
+	k := sort.Search(len(s.edits), func(i int) bool { return s.edits[i].Start > off })
+	if k > 0 {
+		if e := s.edits[k-1]; e.Start < e.End && off < e.End { // e.Start <= off < e.End
+			return e.Start + s.delta[k-1]
 		}
 	}
-	return off + delta
+	return off + s.delta[k]
 }
 
 // gofmtIfClean returns fixed gofmt-ed when the original was gofmt-clean,

@@ -99,11 +99,11 @@ func TestDefinitionsInARoundOfTheirOwn(t *testing.T) {
 	last := func(cat string) bool {
 		return strings.HasPrefix(cat, "factorial-loop") || strings.HasPrefix(cat, "factorial-recursion")
 	}
-	plan := planFixes([]*checker.Action{act}, map[finding]bool{}, last)
+	plan := planFixes([]*checker.Action{act}, map[finding]bool{}, last, false)
 	if len(plan.taken) != 1 || plan.taken[0].category != "factorial-ratio" || plan.deferred != 2 {
 		t.Fatalf("first round took %v and deferred %d; want the ratio alone, 2 deferred", plan.taken, plan.deferred)
 	}
-	plan = planFixes([]*checker.Action{act}, map[finding]bool{plan.taken[0]: true}, last)
+	plan = planFixes([]*checker.Action{act}, map[finding]bool{plan.taken[0]: true}, last, false)
 	if len(plan.taken) != 2 || plan.deferred != 0 {
 		t.Errorf("second round took %v and deferred %d; want both definitions", plan.taken, plan.deferred)
 	}
@@ -127,7 +127,60 @@ func TestNoCategoryWaitsByDefault(t *testing.T) {
 			SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: pos, End: pos + 1, NewText: []byte("x")}}}}})
 	}
 	act := &checker.Action{Package: &packages.Package{ID: "p", Fset: fset, Syntax: []*ast.File{f}}, Diagnostics: diags}
-	if plan := planFixes([]*checker.Action{act}, map[finding]bool{}, nil); len(plan.taken) != 2 || plan.deferred != 0 {
+	if plan := planFixes([]*checker.Action{act}, map[finding]bool{}, nil, false); len(plan.taken) != 2 || plan.deferred != 0 {
 		t.Errorf("took %v and deferred %d; want both, none deferred", plan.taken, plan.deferred)
+	}
+}
+
+// TestDefinitionsJoinACompleteRound checks that, when the analyzer offers
+// every fix it can (Options.FixesComplete), a round whose other fixes are
+// all taken takes the definitions' fixes too, except one in a function
+// another fix of the round edits; and that a clash among the other fixes
+// defers every definition, as without FixesComplete.
+func TestDefinitionsJoinACompleteRound(t *testing.T) {
+	fset := token.NewFileSet()
+	src := "package p\n\nfunc f() { a := 1; _ = a }\n\nfunc g() { b := 2; _ = b }\n\nfunc h() { c := 3; d := 4; _, _ = c, d }\n"
+	f, err := parser.ParseFile(fset, "p.go", src, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	tf := fset.File(f.FileStart)
+	diag := func(cat, at, text string) analysis.Diagnostic {
+		pos := tf.Pos(strings.Index(src, at))
+		return analysis.Diagnostic{Pos: pos, Category: cat, Message: cat + " " + at,
+			SuggestedFixes: []analysis.SuggestedFix{{TextEdits: []analysis.TextEdit{{Pos: pos, End: pos + 1, NewText: []byte(text)}}}}}
+	}
+	last := func(cat string) bool { return cat == "factorial-loop" || cat == "factorial-recursion" }
+	plan := func(complete bool, diags ...analysis.Diagnostic) *fixPlan {
+		act := &checker.Action{Package: &packages.Package{ID: "p", Fset: fset, Syntax: []*ast.File{f}}, Diagnostics: diags}
+		return planFixes([]*checker.Action{act}, map[finding]bool{}, last, complete)
+	}
+	messages := func(p *fixPlan) []string {
+		var out []string
+		for _, at := range p.takenAt {
+			out = append(out, at[strings.LastIndex(at, ": ")+2:])
+		}
+		return out
+	}
+	diags := []analysis.Diagnostic{
+		diag("factorial-loop", "a :=", "x"),      // in f, which no other fix edits
+		diag("factorial-ratio", "b :=", "y"),     // in g
+		diag("factorial-ratio", "c :=", "z"),     // in h
+		diag("factorial-recursion", "d :=", "w"), // in h too
+	}
+	p := plan(true, diags...)
+	if got, want := strings.Join(messages(p), ", "), "factorial-ratio b :=, factorial-ratio c :=, factorial-loop a :="; got != want || p.deferred != 1 {
+		t.Errorf("complete round took %q and deferred %d; want %q and 1 (the definition in h)", got, p.deferred, want)
+	}
+	p = plan(false, diags...)
+	if got, want := strings.Join(messages(p), ", "), "factorial-ratio b :=, factorial-ratio c :="; got != want || p.deferred != 2 {
+		t.Errorf("round took %q and deferred %d; want %q and 2", got, p.deferred, want)
+	}
+	// Two ratio fixes replacing the same byte differently clash: the one
+	// left for the next round may be pre-empted by a guard, so every
+	// definition waits.
+	p = plan(true, append(diags, diag("factorial-ratio", "b :=", "v"))...)
+	if p.clashed != 1 || p.deferred != 2 {
+		t.Errorf("round with a clash: %d clashed, %d deferred; want 1 and 2", p.clashed, p.deferred)
 	}
 }

@@ -14,10 +14,10 @@ import (
 // maxFixRounds bounds the rounds of -fix. A round applies every fix it
 // can; fixes whose edits overlap a taken one (typically two fixes adding
 // different imports at one place), and the findings an analyzer offered
-// no fix for yet (overfact checks at most 32 fixes per package and
-// analysis), are left for the next round, which re-analyses the edited
-// text in memory. Rounds go on until one finds nothing left to apply,
-// 16 at most: over 500 fixes in one package.
+// no fix for yet (where a budget of fix checks holds fixes back: the
+// command lifts overfact's for -fix), are left for the next round, which
+// re-analyses the edited text in memory. Rounds go on until one finds
+// nothing left to apply, 16 at most.
 const maxFixRounds = 16
 
 // maxHeldBackShown bounds the findings a run lists when it stops with
@@ -35,7 +35,7 @@ func (r *run) fix(a *analysis.Analyzer, patterns []string, graph *checker.Graph)
 	done := make(map[finding]bool)       // findings whose fix was applied
 	broken := brokenRoots(graph.Roots)   // packages with errors before any fix
 	for round := 1; ; round++ {
-		plan := planFixes(graph.Roots, done, r.opts.FixLast)
+		plan := planFixes(graph.Roots, done, r.opts.FixLast, r.opts.FixesComplete)
 		if round == 1 {
 			for _, id := range plan.refused {
 				r.errorf("not fixing %s: the package has errors", id)
@@ -139,11 +139,17 @@ func (r *run) applyPlan(plan *fixPlan, contents, originals map[string][]byte, do
 		all = append(all, f)
 	}
 	clear(done)
+	type shift struct{ edits, pruned *shifter }
+	shifts := make(map[string]shift) // by file, made once per round
 	for _, f := range all {
 		if edits, ok := plan.files[f.file]; ok {
-			eol := textedit.LineEnding(originals[f.file])
-			f.offset = moved(f.offset, edits, eol)
-			f.offset = moved(f.offset, pruned[f.file], eol)
+			sh, ok := shifts[f.file]
+			if !ok {
+				eol := textedit.LineEnding(originals[f.file])
+				sh = shift{newShifter(edits, eol), newShifter(pruned[f.file], eol)}
+				shifts[f.file] = sh
+			}
+			f.offset = sh.pruned.at(sh.edits.at(f.offset))
 		}
 		done[f] = true
 	}

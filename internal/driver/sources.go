@@ -91,8 +91,20 @@ func withSources(a *analysis.Analyzer, overlay map[string][]byte, src *sources) 
 		if disk == nil {
 			disk = os.ReadFile
 		}
+		// A pass reads a file once (and checks its hash once): every fix
+		// of its findings reads the file, and with thousands of them in
+		// a large file the reads, not the fixes, would cost the most.
+		// The text kept is the one the positions describe, which a later
+		// read could only refuse.
+		var mu sync.Mutex
+		read := make(map[string][]byte)
 		pass.ReadFile = func(name string) ([]byte, error) {
 			if content, ok := overlay[name]; ok {
+				return content, nil
+			}
+			mu.Lock()
+			defer mu.Unlock()
+			if content, ok := read[name]; ok {
 				return content, nil
 			}
 			content, err := disk(name)
@@ -104,6 +116,7 @@ func withSources(a *analysis.Analyzer, overlay map[string][]byte, src *sources) 
 					return nil, err
 				}
 			}
+			read[name] = content
 			return content, nil
 		}
 		return a.Run(pass)
