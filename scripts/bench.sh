@@ -26,7 +26,7 @@ echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null ||
 
 mkdir -p "$work/mod"
 (cd "$work/mod" && go mod init bench.example/run >/dev/null 2>&1 && go get -t gonum.org/v1/gonum/...@v0.17.0 >/dev/null 2>&1)
-GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./internal/bench # the checkout builds in its workspace
+GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./harness/bench # the checkout builds in its workspace
 
 echo "== overfact against a no-op analyzer on export data, gonum.org/v1/gonum/... (tests included)"
 (cd "$work/mod" && "$work/bench" -mode compare -n "$n" -dir "$work/mod" gonum.org/v1/gonum/...)

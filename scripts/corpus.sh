@@ -19,7 +19,7 @@ trap 'chmod -R u+w "$work" 2>/dev/null; rm -rf "$work/gonum-fix" "$work/mods"' E
 export GOWORK=off GOFLAGS=-mod=mod
 
 echo "== building (overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)})"
-GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./internal/bench # the checkout builds in its workspace
+GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./harness/bench # the checkout builds in its workspace
 GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/overfact" ./cmd/overfact
 
 # module DIR PATH VERSION makes DIR a throwaway module that requires

@@ -18,7 +18,7 @@ trap 'chmod -R u+w "$work" 2>/dev/null; rm -rf "$work"' EXIT
 export GOWORK=off GOFLAGS=-mod=mod
 
 echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version)"
-GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./internal/bench # the checkout builds in its workspace
+GOWORK="$PWD/go.work" GOFLAGS= go build -o "$work/bench" ./harness/bench # the checkout builds in its workspace
 
 module() { # DIR PATH VERSION: a throwaway module requiring PATH@VERSION and its tests' imports
 	mkdir -p "$1"

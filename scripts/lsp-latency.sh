@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # lsp-latency.sh measures how long "overfact lsp" makes an editor wait:
-# internal/lsp/memclient -latency starts the server as an editor would and
+# cmd/overfact/internal/lsp/memclient -latency starts the server as an editor would and
 #   - opens gonum v0.17.0's stat/distuv/binomial.go cold (a fresh server,
 #     twice: the first may also build gonum's export data into the go
 #     build cache) and times the first diagnostics (target 1.5 s);
@@ -17,7 +17,7 @@ trap 'chmod -R u+w "$work" 2>/dev/null; rm -rf "$work"' EXIT
 
 echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version); nproc $(nproc)"
 go build -o "$work/overfact" ./cmd/overfact
-go build -o "$work/memclient" ./internal/lsp/memclient
+go build -o "$work/memclient" ./cmd/overfact/internal/lsp/memclient
 # A scratch copy of gonum (the module cache is read-only), its
 # dependencies downloaded, as a checkout an editor opens would be.
 src=$(cd "$work" && GOWORK=off GOFLAGS=-mod=mod go mod download -json gonum.org/v1/gonum@v0.17.0 | awk -F'"' '/"Dir"/{print $4}')

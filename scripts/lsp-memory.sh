@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # lsp-memory.sh measures the memory of the language server over a long
-# editing session: internal/lsp/memclient writes a module of N small
+# editing session: cmd/overfact/internal/lsp/memclient writes a module of N small
 # packages (default 120, each importing fmt and math, each with a finding
 # that has a quick fix) into a temporary directory, starts "overfact lsp"
 # on it as an editor would, and for each package in turn opens its file,
@@ -17,5 +17,5 @@ trap 'rm -rf "$work"' EXIT
 
 echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version); nproc $(nproc)"
 go build -o "$work/overfact" ./cmd/overfact
-go build -o "$work/memclient" ./internal/lsp/memclient
+go build -o "$work/memclient" ./cmd/overfact/internal/lsp/memclient
 "$work/memclient" -server "$work/overfact" -packages "${1:-120}"

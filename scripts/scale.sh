@@ -23,7 +23,7 @@ work=$(mktemp -d "${TMPDIR:-/tmp}/overfact-scale.XXXXXX")
 trap 'rm -rf "$work"' EXIT
 
 echo "overfact at ${OVERFACT_REV:-$(git describe --always --dirty 2>/dev/null || echo unknown)}; $(go version); nproc $(nproc)"
-go build -o "$work/bench" ./internal/bench
+go build -o "$work/bench" ./harness/bench
 "$work/bench" -mode scale -n "$n" -casetime "${CASETIME:-2m}"
 
 echo "== go vet -vettool twice over an unchanged module"

@@ -8,7 +8,7 @@ import (
 	"os"
 	"os/signal"
 
-	"github.com/overfact/overfact/internal/lsp"
+	"github.com/overfact/overfact/cmd/overfact/internal/lsp"
 )
 
 // runLSP implements "overfact lsp": a language server on stdin and

@@ -28,7 +28,7 @@ var interfaceMethods = map[string]bool{
 // the tests and not of the API. Struct fields are left out (encoding/json
 // reads them), and so are methods that satisfy an interface or a type
 // constraint (called through it, they have no direct use), and packages
-// that only tests import (internal/fuzz, internal/modproxy: their API is
+// that only tests import (harness/fuzz, internal/modproxy: their API is
 // for tests by design).
 func TestNoTestOnlyExports(t *testing.T) {
 	if testing.Short() {

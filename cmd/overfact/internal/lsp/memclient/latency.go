@@ -10,7 +10,7 @@ import (
 )
 
 // debounce is the server's default wait after a change (defaultDebounce
-// in internal/lsp); the edit target is set beyond it.
+// in cmd/overfact/internal/lsp); the edit target is set beyond it.
 const debounce = 300 * time.Millisecond
 
 // runLatency measures, with a fresh server each time, a cold open of
@@ -106,7 +106,7 @@ func editLoop(server string, edits int) error {
 		if len(d.Diagnostics) != len(first.Diagnostics) {
 			return fmt.Errorf("edit %d: %d diagnostics, want %d", v, len(d.Diagnostics), len(first.Diagnostics))
 		}
-		beyond = append(beyond, (time.Since(start) - debounce).Seconds()*1000)
+		beyond = append(beyond, (time.Since(start)-debounce).Seconds()*1000)
 	}
 	slices.Sort(beyond)
 	fmt.Printf("edit → diagnostics on the %d-line file, %d edits: beyond the %v debounce median %.0fms, max %.0fms; target 100ms; ratio %.2f×\n",

@@ -29,7 +29,7 @@ import (
 //
 // Run it with
 //
-//	go test -run '^$' -fuzz FuzzServe -fuzztime 10m -parallel 1 ./internal/lsp
+//	go test -run '^$' -fuzz FuzzServe -fuzztime 10m -parallel 1 ./cmd/overfact/internal/lsp
 func FuzzServe(f *testing.F) {
 	for _, s := range fuzzSeeds() {
 		f.Add([]byte(s))

@@ -32,7 +32,7 @@ func Report(n float64) string {
 // in one invocation, so their ratios are measured under the same machine
 // load:
 //
-//	go test -run '^$' -bench Analyze -benchtime 5x ./internal/lsp
+//	go test -run '^$' -bench Analyze -benchtime 5x ./cmd/overfact/internal/lsp
 func BenchmarkAnalyze(b *testing.B) {
 	for _, bc := range []struct {
 		name string

@@ -51,7 +51,7 @@ func TestNeovim(t *testing.T) {
 	if err != nil {
 		t.Skip("nvim not on PATH; install it with: apt-get install -y neovim")
 	}
-	root, err := filepath.Abs(filepath.Join("..", ".."))
+	root, err := filepath.Abs(filepath.Join("..", "..", "..", ".."))
 	if err != nil {
 		t.Fatal(err)
 	}

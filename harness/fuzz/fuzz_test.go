@@ -25,7 +25,7 @@ var sharedChecker = NewChecker(helperDir)
 //
 // Run it with
 //
-//	go test -run XXX -fuzz FuzzAnalyzer -fuzztime 10m -parallel 1 ./internal/fuzz
+//	go test -run XXX -fuzz FuzzAnalyzer -fuzztime 10m -parallel 1 ./harness/fuzz
 func FuzzAnalyzer(f *testing.F) {
 	root := filepath.Join("..", "..", "testdata", "src")
 	err := filepath.WalkDir(root, func(path string, d fs.DirEntry, err error) error {
