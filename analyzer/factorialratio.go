@@ -120,7 +120,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		cat:      catRatio,
 		definite: definite,
 		msg:      msg + clause,
-		related:  fc.c.relatedDef(u.fn.Name(), u.fn.Pos()),
+		related:  fc.c.relatedDef(u.def()),
 		match:    p.fix(m),
 	})
 }
