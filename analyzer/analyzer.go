@@ -123,6 +123,7 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
+	c.findFactorialTables(scans)
 	c.findValueFacts(decls, scans)
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.

@@ -24,6 +24,7 @@ type facFunc struct {
 	loop    *accLoop        // the product loop, or nil
 	rec     *ast.BinaryExpr // the recursive n*f(n-1), or nil
 	recN    ast.Expr        // its n operand
+	stored  bool            // the recursion's product is stored (a memo) and then returned
 	wrap    ast.Expr        // a wrapper's argument to the factorial it returns
 	wrapOff int64           // the largest factor is wrap+wrapOff
 	inner   *FactorialFact  // the wrapped factorial function's fact
@@ -344,7 +345,8 @@ func (fc *fnCtx) productAsIs(ff *facFunc) bool {
 	root := ff.decl.Body
 	parents := parentsIn(root)
 	if ff.rec != nil {
-		return fc.returnedIn(ff.rec, parents)
+		// A memo's product is stored and returned as it is.
+		return fc.returnedIn(ff.rec, parents) || ff.stored && fc.floatValued(ff.rec)
 	}
 	var v types.Object
 	if ff.loop != nil {

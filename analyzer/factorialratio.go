@@ -126,7 +126,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []factor, def factor, definite bool, msg string) {
 	m.EmptyBelow = emptyBelowAll(fs)
 	match := p.fix(m)
-	if p.chained && p.chainStart != nil && m.EmptyBelow && m.Shape != fixes.ShapeNone {
+	if p.chained && !p.tabled && p.chainStart != nil && m.EmptyBelow && m.Shape != fixes.ShapeNone {
 		// r := fact(n); r /= fact(k); r /= fact(n-k): the start takes the
 		// whole value and the links go, exact outside the helper's domain
 		// as well since the factorial functions return 1 below zero.
@@ -137,7 +137,7 @@ func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []fac
 		cat:      catRatio,
 		definite: definite,
 		msg:      msg,
-		related:  fc.c.relatedDef(def.fn.Name(), def.fn.Pos()),
+		related:  fc.c.relatedDef(def.def()),
 		match:    match,
 	})
 }
@@ -220,7 +220,7 @@ func (fc *fnCtx) checkHypergeometric(root ast.Expr, p *product) {
 	if args := fc.hyperArgs(p); args != nil && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeHypergeometric, args
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.fn.Name(), d.fn.Pos()), match: p.fix(m)})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(d.def()), match: p.fix(m)})
 }
 
 // hyperArgs returns k, N, K, n of C(K,k)C(N-K,n-k)/C(N,n), or nil.
@@ -282,7 +282,7 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.fn.Name(), b.fn.Pos()), match: p.fix(m)})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.def()), match: p.fix(m)})
 }
 
 // emptyBelowAll reports whether every factor is a call of a factorial

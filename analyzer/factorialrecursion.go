@@ -27,7 +27,7 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	}
 	name, off := shownFactorial(ff.recN, 0)
 	shape := fixes.ShapeFactorial
-	if ff.kind != kindFactorial && ff.kind != kindDouble {
+	if ff.kind != kindFactorial && ff.kind != kindDouble || ff.stored {
 		shape = fixes.ShapeNone
 	}
 	fc.report(finding{
@@ -70,7 +70,65 @@ func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		})
 		return ff == nil
 	})
+	if ff == nil {
+		ff = fc.storedRecursion(decl, self)
+	}
 	return ff
+}
+
+// storedRecursion matches the memoised form of the recursion: n * f(n-1)
+// assigned to a local that the function returns, or to an element
+// cache[n] of a cache indexed by the parameter that it returns as
+// cache[n] (the lookup that returns an earlier element returns an
+// earlier product, a factorial too).
+func (fc *fnCtx) storedRecursion(decl *ast.FuncDecl, self *types.Func) *facFunc {
+	var ff *facFunc
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok || ff != nil {
+			return false
+		}
+		a, ok := n.(*ast.AssignStmt)
+		if !ok || len(a.Lhs) != 1 || len(a.Rhs) != 1 || (a.Tok != token.ASSIGN && a.Tok != token.DEFINE) {
+			return true
+		}
+		b, ok := ast.Unparen(a.Rhs[0]).(*ast.BinaryExpr)
+		if !ok || b.Op != token.MUL {
+			return true
+		}
+		cand := fc.recursiveProduct(decl, self, b)
+		if cand != nil && fc.returnsStore(decl, a.Lhs[0], cand.recN) {
+			cand.stored = true
+			ff = cand
+		}
+		return ff == nil
+	})
+	return ff
+}
+
+// returnsStore reports whether the function returns what lhs holds: a
+// local it returns, or cache[n] for the parameter n, returned as
+// cache[n].
+func (fc *fnCtx) returnsStore(decl *ast.FuncDecl, lhs, n ast.Expr) bool {
+	if v, ok := fc.c.objOf(lhs).(*types.Var); ok && v.Parent() != v.Pkg().Scope() {
+		return fc.returns(decl.Body, v)
+	}
+	ix, ok := ast.Unparen(lhs).(*ast.IndexExpr)
+	p := fc.c.objOf(n)
+	if !ok || p == nil || fc.c.objOf(ix.Index) != p || fc.c.objOf(ix.X) == nil {
+		return false
+	}
+	found := false
+	ast.Inspect(decl.Body, func(m ast.Node) bool {
+		if _, ok := m.(*ast.FuncLit); ok || found {
+			return false
+		}
+		if ret, ok := m.(*ast.ReturnStmt); ok && len(ret.Results) == 1 {
+			r, ok := ast.Unparen(ret.Results[0]).(*ast.IndexExpr)
+			found = ok && fc.c.objOf(r.X) == fc.c.objOf(ix.X) && fc.c.objOf(r.Index) == p
+		}
+		return !found
+	})
+	return found
 }
 
 func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr) *facFunc {

@@ -103,7 +103,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 		msg = fmt.Sprintf("%s in %s: %s", what, pow.t.typeName(), powText)
 	}
 	fc.report(finding{node: root, cat: catPowOverFac, definite: definite, msg: msg + clause,
-		related: fc.c.relatedDef(fac.fn.Name(), fac.fn.Pos()), match: p.fix(m)})
+		related: fc.c.relatedDef(fac.def()), match: p.fix(m)})
 }
 
 // powerLimit describes where math.Pow(x, k) overflows when x is a

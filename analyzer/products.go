@@ -23,6 +23,17 @@ type factor struct {
 	t    numType  // the type the value is computed in
 	fn   *types.Func
 	fact *FactorialFact
+	// table is the factorial table a read t[e] comes from (fn is nil).
+	table *facTable
+}
+
+// def names the definition a finding on f points to: the factorial
+// function, or the table that holds the factorials.
+func (f factor) def() (string, token.Pos) {
+	if f.table != nil {
+		return f.table.obj.Name(), f.table.obj.Pos()
+	}
+	return f.fn.Name(), f.fn.Pos()
 }
 
 // product is a product and quotient of factors; other counts the
@@ -39,12 +50,15 @@ type product struct {
 	// may absorb (see reportRatio).
 	chainStart ast.Expr
 	chainLinks []ast.Stmt
+	// tabled marks a product with a factor read from a factorial table
+	// (factorialtables.go): the fixes rewrite calls, so it has no fix.
+	tabled bool
 }
 
 // fix returns the match of p's finding, or nil where p has no
 // expression to rewrite.
 func (p *product) fix(m *fixes.Match) *fixes.Match {
-	if p.chained {
+	if p.chained || p.tabled {
 		return nil
 	}
 	return m
@@ -83,6 +97,17 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 			} else {
 				p.num = append(p.num, f)
 			}
+			return
+		}
+	case *ast.IndexExpr:
+		if tbl := fc.tableOf(e); tbl != nil {
+			f := factor{kind: kindFactorial, arg: e.Index, t: tbl.elem, fact: &tbl.fact, table: tbl}
+			if den {
+				p.den = append(p.den, f)
+			} else {
+				p.num = append(p.num, f)
+			}
+			p.tabled = true
 			return
 		}
 	case *ast.Ident:

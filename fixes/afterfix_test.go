@@ -38,7 +38,7 @@ var (
 	scenarioSrc = []string{"bottling", "callcentre", "cardshuffle", "dice", "dicepool", "gasmodel",
 		"generic", "gentable", "inspection", "labtables", "mathkit", "oddcode", "probkit", "raffle",
 		"ranktest", "reliability", "sampling", "seating", "signcurve", "skymodel", "staffing",
-		"tables", "tallykit", "keybits"}
+		"tables", "tallykit", "keybits", "switchboard"}
 	scenarioDemo = []string{"dice", "gas", "sampling", "staffing"}
 	// notScenarios are the packages of testdata/src that hold cases of one
 	// category each rather than realistic code.

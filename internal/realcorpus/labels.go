@@ -207,7 +207,7 @@ func readModules(path string) ([]corpusModule, error) {
 			return nil, fmt.Errorf("%s:%d: need a module, a version and package patterns", path, n+1)
 		}
 		for _, p := range m.Patterns {
-			if p != m.Module+"/..." && !strings.HasPrefix(p, m.Module+"/") {
+			if p != m.Module && p != m.Module+"/..." && !strings.HasPrefix(p, m.Module+"/") {
 				return nil, fmt.Errorf("%s:%d: pattern %s is outside module %s", path, n+1, p, m.Module)
 			}
 		}

@@ -1,0 +1,39 @@
+package analyzer
+
+import (
+	"math"
+	"math/big"
+	"testing"
+)
+
+// The table cases are in testdata/src/factorialratio/tables.go, checked
+// with the category's other cases by TestCategories.
+
+// TestFactorialTablesProbe shows two of those cases' wrong values beside
+// math/big: Sprouts(200, 100, 1/2) from a float64 table is NaN (200! is
+// +Inf, so is 100!·100!) where the exact C(200, 100)/2^200 is about
+// 0.056, and RowPlans(25, 2) from an int64 table is not 25·24 = 600,
+// as 25! and 23! have wrapped.
+func TestFactorialTablesProbe(t *testing.T) {
+	var tray [500]float64
+	tray[0] = 1
+	for i := 1; i < len(tray); i++ {
+		tray[i] = tray[i-1] * float64(i)
+	}
+	got := tray[200] / (tray[100] * tray[100]) * math.Pow(0.5, 100) * math.Pow(0.5, 100)
+	exact, _ := new(big.Rat).SetFrac(new(big.Int).Binomial(200, 100), new(big.Int).Lsh(big.NewInt(1), 200)).Float64()
+	if !math.IsNaN(got) || !(exact > 0.05 && exact < 0.06) {
+		t.Errorf("Sprouts(200, 100, 1/2) = %v, exact %v: want NaN where the exact value is about 0.056", got, exact)
+	}
+	orders := make([]int64, 26)
+	orders[0] = 1
+	run := int64(1)
+	for i := 1; i <= 25; i++ {
+		run *= int64(i)
+		orders[i] = run
+	}
+	want := new(big.Int).Quo(new(big.Int).MulRange(1, 25), new(big.Int).MulRange(1, 23))
+	if plans := orders[25] / orders[23]; !want.IsInt64() || plans == want.Int64() {
+		t.Errorf("RowPlans(25, 2) = %d, exact %v: want a wrong value where the exact one fits int64", plans, want)
+	}
+}

@@ -1,0 +1,72 @@
+package factorialratio
+
+// Factorial tables (analyzer/factorialtables.go), as a seed bank scores
+// its germination trials: the chance that exactly k of n seeds in a tray
+// sprout, the ways to pick a sample of trays, and the orders in which
+// trays can be checked, from tables of factorials filled once by a loop.
+// Findings on tables have no fix.
+
+import "math"
+
+// trayFact holds n! for the trays' seed counts, filled by init.
+var trayFact [500]float64
+
+func init() {
+	trayFact[0] = 1
+	for i := 1; i < len(trayFact); i++ {
+		trayFact[i] = trayFact[i-1] * float64(i)
+	}
+}
+
+// Sprouts is the chance that exactly k of n seeds sprout when each does
+// with chance p.
+func Sprouts(n, k int, p float64) float64 {
+	ways := trayFact[n] / (trayFact[k] * trayFact[n-k])
+	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171 before the division; n is not bounded here`
+}
+
+// SampleWays is the number of ways to pick k of n trays, from a table
+// of factorials up to n built for the call.
+func SampleWays(n, k int) float64 {
+	f := make([]float64, n+1)
+	f[0] = 1
+	for i := 1; i <= n; i++ {
+		f[i] = float64(i) * f[i-1]
+	}
+	return f[n] / (f[k] * f[n-k]) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171, although C\(n, n/2\) itself fits up to n = 1029`
+}
+
+// RowPlans is the number of orders in which the trays of a row can be
+// checked, n!/(n-k)! for the first k of them, from a table kept as the
+// running product goes.
+func RowPlans(n, k int) int64 {
+	orders := make([]int64, n+1)
+	orders[0] = 1
+	run := int64(1)
+	for i := 1; i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2\.43e18 is the largest that fits\); n is not bounded here`
+		run *= int64(i)
+		orders[i] = run
+	}
+	return orders[n] / orders[n-k] // want `permutation count n!/\(n - k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
+}
+
+// shelfFact holds 0! to 20!, all of which fit int64.
+var shelfFact [21]int64
+
+func init() {
+	shelfFact[0] = 1
+	for i := 1; i <= 20; i++ {
+		shelfFact[i] = shelfFact[i-1] * int64(i)
+	}
+}
+
+// ShelfOrders is the number of orders of a shelf's boxes; a shelf holds
+// at most 20 boxes, the table's last entry.
+func ShelfOrders(boxes int) int64 {
+	return shelfFact[boxes] / shelfFact[0]
+}
+
+// PairWays is C(n, 2) from the exact table, n at most 20.
+func PairWays(n int) int64 {
+	return shelfFact[n] / (shelfFact[2] * shelfFact[n-2])
+}
