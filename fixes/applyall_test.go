@@ -41,26 +41,26 @@ func applyFirstFixes(t *testing.T, dir string, a *analysis.Analyzer, pkgs ...str
 	return applyFirstFixesSeen(t, dir, a, nil, pkgs...)
 }
 
-// applyFirstFixesSeen is applyFirstFixes that also shows each fixed
-// diagnostic to seen, with its package's files.
-func applyFirstFixesSeen(t *testing.T, dir string, a *analysis.Analyzer, seenFix func(*token.FileSet, []*ast.File, analysis.Diagnostic), pkgs ...string) (applied, skipped int) {
+// applyFirstFixesSeen is applyFirstFixes that also shows each
+// diagnostic, fixed or not, to seen, with its package's files.
+func applyFirstFixesSeen(t *testing.T, dir string, a *analysis.Analyzer, seen func(*token.FileSet, []*ast.File, analysis.Diagnostic), pkgs ...string) (applied, skipped int) {
 	t.Helper()
-	return applyResults(t, analysistest.Run(quiet{}, dir, a, pkgs...), seenFix)
+	return applyResults(t, analysistest.Run(quiet{}, dir, a, pkgs...), seen)
 }
 
 // applyResults applies the first fixes of an analysistest run in place.
-func applyResults(t *testing.T, results []*analysistest.Result, seenFix func(*token.FileSet, []*ast.File, analysis.Diagnostic)) (applied, skipped int) {
+func applyResults(t *testing.T, results []*analysistest.Result, seenEach func(*token.FileSet, []*ast.File, analysis.Diagnostic)) (applied, skipped int) {
 	t.Helper()
 	edits := make(map[string][]fileEdit)
 	seen := make(map[string]bool)
 	for _, r := range results {
 		fset := r.Action.Package.Fset
 		for _, d := range r.Diagnostics {
+			if seenEach != nil {
+				seenEach(fset, r.Action.Package.Syntax, d)
+			}
 			if len(d.SuggestedFixes) == 0 {
 				continue
-			}
-			if seenFix != nil {
-				seenFix(fset, r.Action.Package.Syntax, d)
 			}
 			fix := d.SuggestedFixes[0]
 			key := fset.Position(d.Pos).String() + fix.Message
