@@ -299,6 +299,10 @@ func (fc *fnCtx) binomialFactor(res *vm.Result, x ast.Expr, counter types.Object
 func (fc *fnCtx) modelZeroTimesSum(res *vm.Result) {
 	c := fc.c
 	info := c.pass.TypesInfo
+	zeros, sums := zeroSumCandidates(info, funcBody(fc.node))
+	if len(zeros) == 0 || len(sums) == 0 {
+		return
+	}
 	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 		var x, y ast.Expr
 		switch n := n.(type) {
@@ -324,7 +328,7 @@ func (fc *fnCtx) modelZeroTimesSum(res *vm.Result) {
 		central := thresholds.CentralBinomial(t.Num)
 		for _, p := range [2][2]ast.Expr{{x, y}, {y, x}} {
 			z, s := c.objOf(fc.stripConv(p[0])), c.objOf(fc.stripConv(p[1]))
-			if z == nil || s == nil || z == s || !fc.zeroUntilTrips(z, n.Pos()) || fc.checksNonFinite(p[1]) {
+			if z == nil || s == nil || z == s || !zeros[z] || !sums[s] || !fc.zeroUntilTrips(z, n.Pos()) || fc.checksNonFinite(p[1]) {
 				continue
 			}
 			bt, ok := fc.summedBinomial(res, s, n.Pos(), central.FirstBad)
@@ -338,6 +342,39 @@ func (fc *fnCtx) modelZeroTimesSum(res *vm.Result) {
 		}
 		return true
 	})
+}
+
+// zeroSumCandidates returns, from one walk of body, the locals defined
+// as 0 and the variables something is added to (s += x, s = s + x):
+// the only ones zeroUntilTrips and summedBinomial, which each walk the
+// whole body, can accept, so that a long function's many products do
+// not each cost a walk.
+func zeroSumCandidates(info *types.Info, body ast.Node) (zeros, sums map[types.Object]bool) {
+	zeros, sums = make(map[types.Object]bool), make(map[types.Object]bool)
+	ast.Inspect(body, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok {
+			return true
+		}
+		for i, l := range as.Lhs {
+			id, ok := ast.Unparen(l).(*ast.Ident)
+			if !ok {
+				continue
+			}
+			obj := info.ObjectOf(id)
+			if obj == nil {
+				continue
+			}
+			if as.Tok == token.DEFINE && len(as.Rhs) == len(as.Lhs) && isZeroConst(info, as.Rhs[i]) {
+				zeros[obj] = true
+			}
+			if addedTo(info, as, obj) != nil {
+				sums[obj] = true
+			}
+		}
+		return true
+	})
+	return zeros, sums
 }
 
 // zeroUntilTrips reports whether the float variable z, where pos reads
