@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // Factorial tables (phase 1): a slice or array whose element i a loop
@@ -265,41 +267,23 @@ func (c *checker) dropChangedTables(byVar map[types.Object]*facTable) {
 		if funcBody(n) == nil {
 			continue
 		}
-		ast.Inspect(funcBody(n), func(m ast.Node) bool {
-			var lhs []ast.Expr
-			switch m := m.(type) {
-			case *ast.AssignStmt:
-				lhs = m.Lhs
-			case *ast.IncDecStmt:
-				lhs = []ast.Expr{m.X}
-			case *ast.UnaryExpr:
-				if m.Op == token.AND {
-					lhs = []ast.Expr{m.X} // &t, &t[i]: written through a pointer
-				}
-			case *ast.RangeStmt:
-				lhs = []ast.Expr{m.Key, m.Value}
+		assigned.EachTarget(funcBody(n), nil, func(e ast.Expr, m ast.Node) bool {
+			if v := q.objOf(e); v != nil && byVar[v] != nil {
+				whole[v]++
+				return true
 			}
-			for _, e := range lhs {
-				if e == nil {
-					continue
-				}
-				if v := q.objOf(e); v != nil && byVar[v] != nil {
-					whole[v]++
-					continue
-				}
-				ix, ok := ast.Unparen(e).(*ast.IndexExpr)
-				if !ok {
-					continue
-				}
-				tbl := byVar[q.objOf(ix.X)]
-				if tbl == nil {
-					continue
-				}
-				inFill := tbl.fill.Pos() <= ix.Pos() && ix.End() <= tbl.fill.End()
-				k, isConst := q.intConst(ix.Index)
-				if !inFill && !(isConst && n == tbl.in && k >= 0 && c.isStart(m)) {
-					byVar[tbl.obj] = nil
-				}
+			ix, ok := ast.Unparen(e).(*ast.IndexExpr)
+			if !ok {
+				return true
+			}
+			tbl := byVar[q.objOf(ix.X)]
+			if tbl == nil {
+				return true
+			}
+			inFill := tbl.fill.Pos() <= ix.Pos() && ix.End() <= tbl.fill.End()
+			k, isConst := q.intConst(ix.Index)
+			if !inFill && !(isConst && n == tbl.in && k >= 0 && c.isStart(m)) {
+				byVar[tbl.obj] = nil
 			}
 			return true
 		})

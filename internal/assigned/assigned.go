@@ -28,18 +28,28 @@ import (
 // tells the nodes whose subtree is not walked (a loop's own update, a
 // closure).
 func Each(info *types.Info, root ast.Node, skip func(ast.Node) bool, f func(v types.Object, at ast.Node) bool) {
+	EachTarget(root, skip, func(e ast.Expr, at ast.Node) bool {
+		if id, ok := ast.Unparen(e).(*ast.Ident); ok {
+			if obj := info.ObjectOf(id); obj != nil {
+				return f(obj, at)
+			}
+		}
+		return true
+	})
+}
+
+// EachTarget is Each for what is written rather than the variables: it
+// calls f with each expression root assigns to, increments, ranges into
+// or takes the address of, as written (a[i] and s.f included, a blank
+// identifier too), and the node that writes it, until f returns false.
+func EachTarget(root ast.Node, skip func(ast.Node) bool, f func(target ast.Expr, at ast.Node) bool) {
 	if root == nil {
 		return
 	}
 	more := true
 	visit := func(e ast.Expr, at ast.Node) {
-		if e == nil || !more {
-			return
-		}
-		if id, ok := ast.Unparen(e).(*ast.Ident); ok {
-			if obj := info.ObjectOf(id); obj != nil {
-				more = f(obj, at)
-			}
+		if e != nil && more {
+			more = f(e, at)
 		}
 	}
 	ast.Inspect(root, func(n ast.Node) bool {

@@ -93,3 +93,24 @@ func TestInWithSkip(t *testing.T) {
 		t.Error("u is only read, but was found assigned")
 	}
 }
+
+// TestEachTarget checks that the written expressions are visited as
+// written, field selectors and blank identifiers included, in source
+// order, and that the walk stops when f returns false.
+func TestEachTarget(t *testing.T) {
+	_, fn := load(t)
+	var got []string
+	EachTarget(fn.Body, nil, func(e ast.Expr, _ ast.Node) bool {
+		got = append(got, types.ExprString(e))
+		return true
+	})
+	want := "a b c d _ e p g _ h _ i v _ _ k s.f _"
+	if strings.Join(got, " ") != want {
+		t.Errorf("targets = %s, want %s", strings.Join(got, " "), want)
+	}
+	n := 0
+	EachTarget(fn.Body, nil, func(ast.Expr, ast.Node) bool { n++; return n < 3 })
+	if n != 3 {
+		t.Errorf("walk went on to %d targets after f returned false at the third", n)
+	}
+}
