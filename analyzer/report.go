@@ -50,6 +50,7 @@ func (fc *fnCtx) report(f finding) {
 	}
 	if f.match != nil && !fi.cgo {
 		f.match.File = fi.file
+		f.match.NonNeg = fc.nonNegative(f.match.Args)
 		if c.holdGuard(d, f.match) {
 			return
 		}
@@ -187,4 +188,26 @@ func (c *checker) noteReported(pos token.Pos) {
 	copy(at[i+1:], at[i:])
 	at[i] = pos
 	c.reportedPos = at
+}
+
+// nonNegative returns the operands of a match, and the integers inside
+// their conversions, that the range analysis (not the //overfact:assume
+// annotations, which are the user's word, not the code's) shows are
+// never negative where they are evaluated.
+func (fc *fnCtx) nonNegative(args []ast.Expr) map[ast.Expr]bool {
+	var out map[ast.Expr]bool
+	for _, a := range args {
+		e := fc.stripConv(a)
+		if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e)); !ok || t.Float {
+			continue
+		}
+		if iv := fc.ranges().Of(ast.Unparen(e)); iv.IsEmpty() || iv.Lo < 0 {
+			continue
+		}
+		if out == nil {
+			out = make(map[ast.Expr]bool)
+		}
+		out[a], out[e] = true, true
+	}
+	return out
 }

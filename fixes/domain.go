@@ -262,6 +262,10 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 			if t, ok := b.pass.TypesInfo.TypeOf(exprs[i]).Underlying().(*types.Basic); ok && t.Info()&types.IsUnsigned != 0 {
 				continue
 			}
+			// Nor one the analyzer's ranges show is not (Match.NonNeg).
+			if b.m.NonNeg[args[i]] || b.m.NonNeg[exprs[i]] {
+				continue
+			}
 		}
 		conds = append(conds, bd.outside(ops))
 	}

@@ -87,6 +87,11 @@ type Match struct {
 	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
 	// arguments, with no need to call the functions themselves.
 	EmptyBelow bool
+	// NonNeg holds the operands (Args, and the integer inside a
+	// conversion float64(k)) that the analyzer's range analysis shows
+	// are never negative where they are evaluated (a loop counter from
+	// 0): a test of the helper's domain leaves out their k < 0.
+	NonNeg map[ast.Expr]bool
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are
