@@ -275,13 +275,12 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	if quotient != "" {
 		return b.keepAs(text, b.m.Node, quotient, conds, false, "// outside "+d.words+", as the code computed it: the factorial of a negative number is 1")
 	}
-	var note strings.Builder
-	for _, def := range defs { // defs only where a return statement returns the node
-		ind := b.indentOf(b.returning().Pos())
-		fmt.Fprintf(&note, "%s\n%s\t", b.copyText(def), ind)
+	var lead []string
+	for _, def := range defs {
+		lead = append(lead, b.copyText(def))
 	}
-	note.WriteString("//overfact:allow outside " + d.words + " the expression as written")
-	return b.keepAs(text, b.m.Node, b.copyText(b.m.Node), conds, false, note.String())
+	lead = append(lead, "//overfact:allow outside "+d.words+" the expression as written")
+	return b.keepAs(text, b.m.Node, b.copyText(b.m.Node), conds, false, lead...)
 }
 
 // keepAsWritten returns text, the helper call that replaces node, so
@@ -315,15 +314,16 @@ func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, insi
 
 // keepAs is keepAsWritten with orig, what runs in node's place where the
 // helper's value would differ (node as written, or an exact equivalent
-// that avoids calls a guard may make panic), and the comment line above
-// it.
-func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string, inside bool, note string) (string, error) {
+// that avoids calls a guard may make panic), and lead, the lines that
+// branch runs before it returns orig: definitions it reads, then the
+// comment that says why. keepAs indents them.
+func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string, inside bool, lead ...string) (string, error) {
 	b.keptAsWritten = true
 	if !inside && node == b.m.Node {
 		if ret := b.returning(); ret != nil {
 			ind := b.indentOf(ret.Pos())
 			b.replace(ret.Pos(), ret.Pos(), fmt.Sprintf("if %[2]s {\n%[1]s\t%[3]s\n%[1]s\treturn %[4]s\n%[1]s}\n%[1]s",
-				ind, strings.Join(conds, " || "), note, orig))
+				ind, strings.Join(conds, " || "), strings.Join(lead, "\n"+ind+"\t"), orig))
 			return text, nil
 		}
 	}
@@ -334,10 +334,10 @@ func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string
 	ind := b.indentOf(node.Pos())
 	if inside {
 		return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\treturn %[4]s\n%[2]s\t}\n%[2]s\t%[6]s\n%[2]s\treturn %[5]s\n%[2]s}()",
-			name, ind, strings.Join(conds, " && "), text, orig, note), nil
+			name, ind, strings.Join(conds, " && "), text, orig, strings.Join(lead, "\n"+ind+"\t")), nil
 	}
 	return fmt.Sprintf("func() %[1]s {\n%[2]s\tif %[3]s {\n%[2]s\t\t%[4]s\n%[2]s\t\treturn %[5]s\n%[2]s\t}\n%[2]s\treturn %[6]s\n%[2]s}()",
-		name, ind, strings.Join(conds, " || "), note, orig, text), nil
+		name, ind, strings.Join(conds, " || "), strings.Join(lead, "\n"+ind+"\t\t"), orig, text), nil
 }
 
 // emptyQuotient returns, for an integer ratio whose factorial functions
