@@ -405,10 +405,10 @@ func (fc *fnCtx) span(sh *loopShape) (linear, bool) {
 	return d, true
 }
 
-// identOf returns an identifier in e that denotes obj.
-func identOf(info *types.Info, e ast.Expr, obj types.Object) *ast.Ident {
+// identOf returns an identifier in n that reads obj.
+func identOf(info *types.Info, n ast.Node, obj types.Object) *ast.Ident {
 	var found *ast.Ident
-	ast.Inspect(e, func(n ast.Node) bool {
+	ast.Inspect(n, func(n ast.Node) bool {
 		if id, ok := n.(*ast.Ident); ok && found == nil && info.Uses[id] == obj {
 			found = id
 		}

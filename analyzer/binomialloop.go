@@ -82,14 +82,10 @@ func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
 	if nObj == nil {
 		return nil
 	}
-	var found ast.Expr
-	ast.Inspect(al.mult, func(n ast.Node) bool {
-		if id, ok := n.(*ast.Ident); ok && found == nil && fc.c.pass.TypesInfo.Uses[id] == nObj {
-			found = id
-		}
-		return found == nil
-	})
-	return found
+	if id := identOf(fc.c.pass.TypesInfo, al.mult, nObj); id != nil {
+		return id
+	}
+	return nil
 }
 
 // binomialLoopSafe reports whether every (n, k) in the ranges keeps the

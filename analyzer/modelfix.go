@@ -12,9 +12,14 @@ import (
 // or returns nil where the model cannot vouch that one helper call
 // computes the same value as the loop wherever the loop was right:
 //
-//   - n and k are each one parameter, receiver or field of one, of an
-//     integer type (a float operand could hold a fraction, which the
-//     integer helpers would drop), read as they are;
+//   - n and k are each one variable or a field of one, read as they
+//     are: a parameter or receiver (its entry value), or a local the
+//     model reads as the value it holds where the loop starts (the one
+//     definition it has, or the last assignment the algebra could not
+//     evaluate, n = math.Trunc(n)); an integer, or a float, which may hold
+//     a fraction the integer helpers would drop, so that the fixer keeps
+//     the loop as written wherever a float operand is no integer in the
+//     helper's domain;
 //   - the loop runs exactly k trips: its trip count is k and it has no
 //     early exit; over a negative k it runs none and leaves 1, where
 //     C(n, k) is 0, so unless k ≥ 0 where it starts (CountNonNeg) the
@@ -47,17 +52,28 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		if v.Field != nil {
 			typ = v.Field.Type()
 		}
-		if b, ok := typ.Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 {
+		b, ok := typ.Underlying().(*types.Basic)
+		if !ok || b.Info()&(types.IsInteger|types.IsFloat) == 0 {
 			return nil
 		}
-		r := fc.symRange(mc.res, v, l.Stmt)
-		if r.IsEmpty() {
-			return nil
-		}
-		if i == 1 {
-			countNonNeg = r.Lo >= 0
+		if b.Info()&types.IsInteger != 0 {
+			r := fc.symRange(mc.res, v, l.Stmt)
+			if r.IsEmpty() {
+				return nil
+			}
+			if i == 1 {
+				countNonNeg = r.Lo >= 0
+			}
 		}
 		e := mc.res.Exprs[v]
+		if e == nil && v.Def != nil && v.Field == nil {
+			// A local the algebra reads as the value of its last
+			// assignment: the loop reads that value, so a read of the
+			// variable in the loop names it.
+			if id := identOf(fc.c.pass.TypesInfo, l.Stmt, v.Obj); id != nil {
+				e = id
+			}
+		}
 		if e == nil {
 			return nil
 		}

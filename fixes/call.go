@@ -67,15 +67,29 @@ func (b *builder) checked(text string, got, want types.Type) (string, error) {
 }
 
 // call returns the text of a call of the helper function name on args,
-// converted to the type want.
+// converted to the type want; where float operands are passed as
+// counts, an expression that calls it only where they are integers in
+// the helper's domain (countConds).
 func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, error) {
+	text, conds, err := b.countedCall(name, args, want)
+	if err == nil && conds != nil {
+		text, err = b.keepAsWritten(text, b.m.Node, conds, true, countsKept)
+	}
+	return text, err
+}
+
+// countedCall returns the text of a call of the helper function name on
+// args, converted to the type want, and, where float operands are
+// passed as counts, the tests under which it computes the value
+// (countConds); nil tests where there are no float counts.
+func (b *builder) countedCall(name string, args []ast.Expr, want types.Type) (string, []string, error) {
 	sig := helperFunc(name)
 	if sig == nil {
-		return "", fmt.Errorf("helper has no function %s", name)
+		return "", nil, fmt.Errorf("helper has no function %s", name)
 	}
 	params := sig.Params()
 	if len(args) == 0 || !sig.Variadic() && len(args) != params.Len() {
-		return "", fmt.Errorf("%s takes %d operands, match has %d", name, params.Len(), len(args))
+		return "", nil, fmt.Errorf("%s takes %d operands, match has %d", name, params.Len(), len(args))
 	}
 	texts := make([]string, len(args))
 	if classOf(want) == classFloat {
@@ -90,7 +104,7 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 		}
 		t, err := b.arg(a, pt)
 		if err != nil {
-			return "", err
+			return "", nil, err
 		}
 		texts[i] = t
 	}
@@ -98,14 +112,16 @@ func (b *builder) call(name string, args []ast.Expr, want types.Type) (string, e
 	got := sig.Results().At(0).Type()
 	if classOf(got) != classFloat && b.narrow(want) {
 		b.shown = fmt.Sprintf("%s(%s), checked to fit", types.TypeString(want, types.RelativeTo(b.pass.Pkg)), text)
-		return b.checked(text, got, want)
+		text, err := b.checked(text, got, want)
+		return text, nil, err
 	}
 	text, err := b.result(text, got, want)
 	b.shown = text
-	if err == nil && b.counts != nil && len(b.counts.floats) > 0 {
-		text, err = b.countCall(name, text, texts, b.m.Node)
+	if err != nil || b.counts == nil || len(b.counts.floats) == 0 {
+		return text, nil, err
 	}
-	return text, err
+	conds, err := b.countConds(name, texts)
+	return text, conds, err
 }
 
 // rewrite replaces the match's node with the call of the helper name and

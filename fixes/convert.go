@@ -62,7 +62,7 @@ func (b *builder) arg(e ast.Expr, want types.Type) (string, error) {
 		return "", fmt.Errorf("%s has non-numeric type %s", text, tv.Type)
 	case from == classFloat && to != classFloat && b.counts != nil && classOf(want) == classSigned:
 		// A float count: the helper gets it as an int where it holds
-		// one (countCall), and the original arithmetic is kept elsewhere.
+		// one (countConds), and the original arithmetic is kept elsewhere.
 		conv := want.String() + "(" + text + ")"
 		var primary bool
 		switch e.(type) {

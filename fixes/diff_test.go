@@ -139,6 +139,10 @@ var diffCases = []diffCase{
 	{pkg: "fixmodel", fn: "DrawsUp", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Folded", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
 	{pkg: "fixmodel", fn: "Odds", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose},
+	// Float operands: the helper serves the whole numbers of its domain
+	// (the loop stays for the others; this grid holds whole numbers).
+	{pkg: "fixmodel", fn: "Scaled", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Scaled(float64(n), float64(k))"},
+	{pkg: "fixbinompeak", fn: "Combin", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Combin(float64(n), float64(k))"},
 	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},
 	// Counts kept in float64: the helper runs where they hold whole
 	// numbers in the shape's domain (integer grids up to n = 1100, past

@@ -42,7 +42,7 @@ import (
 // bounds that all hold inside it, and tested two ways. A rewrite of the
 // row's expression on the code's own operands tests that they leave it
 // (k < 0 || k > n, keepOutsideDomain); a call given float counts tests
-// that they are integers inside it (countCall, floatcount.go). Either
+// that they are integers inside it (countConds, floatcount.go). Either
 // way one mechanism, keepAsWritten, keeps the expression as written.
 
 // A bound is lo ≤ hi, or lo < hi when strict.
@@ -188,7 +188,7 @@ var domainShapes = map[Shape]bool{
 // which it returns. It changes nothing where that cannot be written
 // faithfully (operands with effects evaluated twice, locals the rewrite
 // deletes), is never needed (constant operands) or is done already (a
-// call on float counts, countCall).
+// call on float counts, countConds).
 func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error) {
 	if !domainShapes[b.m.Shape] || b.keptAsWritten {
 		return text, nil

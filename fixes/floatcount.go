@@ -3,7 +3,6 @@ package fixes
 import (
 	"errors"
 	"fmt"
-	"go/ast"
 )
 
 // Float counts. Code that keeps counts in float64 (spreadsheet formulas,
@@ -40,18 +39,20 @@ type countOperand struct {
 	primary bool   // the operand needs no parentheses (a name, field, call)
 }
 
-// countCall wraps text, the call of the float helper name on the
-// converted operands args, so that it runs only where the float counts
-// hold integers in the helper's domain (domain.go), keeping the original
-// expression node elsewhere (see above). It refuses when the rewrite
-// deletes locals the kept expression reads.
-func (b *builder) countCall(name, text string, args []string, node ast.Node) (string, error) {
+// countsKept is the reason the allow directive of a kept branch gives.
+const countsKept = "counts that are not integers in the shape's domain keep the original arithmetic"
+
+// countConds returns the tests, joined by &&, under which the call of
+// the helper name on the converted operands args computes the value:
+// every float count holds an integer (float64(int(k)) == k) and the
+// operands lie in the helper's domain.
+func (b *builder) countConds(name string, args []string) ([]string, error) {
 	d, ok := domainOf(name, len(args))
 	if !ok {
-		return "", fmt.Errorf("%s takes no counts", name)
+		return nil, fmt.Errorf("%s takes no counts", name)
 	}
 	if len(b.absorbed) > 0 {
-		return "", errors.New("float counts: the kept expression reads locals the rewrite deletes")
+		return nil, errors.New("float counts: the kept expression reads locals the rewrite deletes")
 	}
 	var conds []string
 	seen := map[string]bool{}
@@ -77,5 +78,5 @@ func (b *builder) countCall(name, text string, args []string, node ast.Node) (st
 	for _, bd := range bounds {
 		conds = append(conds, bd.inside(ops))
 	}
-	return b.keepAsWritten(text, node, conds, true, "counts that are not integers in the shape's domain keep the original arithmetic")
+	return conds, nil
 }

@@ -125,24 +125,42 @@ func onlyUpdates(info *types.Info, loop ast.Stmt, acc types.Object) bool {
 // initValue returns the expression init assigns to acc, if init is a
 // single-variable assignment, short declaration or var declaration.
 func initValue(info *types.Info, init ast.Stmt, acc types.Object) ast.Expr {
+	if e, n := assignedValue(info, init, acc); n == 1 {
+		return e
+	}
+	return nil
+}
+
+// assignedValue returns the expression init assigns to acc, if init is
+// an assignment, short declaration or var declaration with one value
+// per variable (r := 1.0, or n, r := 0.0, 1.0), and the number of
+// variables it assigns.
+func assignedValue(info *types.Info, init ast.Stmt, acc types.Object) (ast.Expr, int) {
 	switch s := init.(type) {
 	case *ast.AssignStmt:
-		if len(s.Lhs) == 1 && len(s.Rhs) == 1 && (s.Tok == token.ASSIGN || s.Tok == token.DEFINE) {
-			if id, ok := s.Lhs[0].(*ast.Ident); ok && info.ObjectOf(id) == acc {
-				return s.Rhs[0]
+		if len(s.Lhs) == len(s.Rhs) && (s.Tok == token.ASSIGN || s.Tok == token.DEFINE) {
+			for i, l := range s.Lhs {
+				if id, ok := l.(*ast.Ident); ok && info.ObjectOf(id) == acc {
+					return s.Rhs[i], len(s.Lhs)
+				}
 			}
 		}
 	case *ast.DeclStmt:
 		g, ok := s.Decl.(*ast.GenDecl)
 		if !ok || len(g.Specs) != 1 {
-			return nil
+			return nil, 0
 		}
 		v, ok := g.Specs[0].(*ast.ValueSpec)
-		if ok && len(v.Names) == 1 && len(v.Values) == 1 && info.Defs[v.Names[0]] == acc {
-			return v.Values[0]
+		if !ok || len(v.Names) != len(v.Values) {
+			return nil, 0
+		}
+		for i, n := range v.Names {
+			if info.Defs[n] == acc {
+				return v.Values[i], len(v.Names)
+			}
 		}
 	}
-	return nil
+	return nil, 0
 }
 
 func isOne(info *types.Info, e ast.Expr) bool {

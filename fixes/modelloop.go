@@ -6,6 +6,7 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"strings"
 )
 
 // A loop the value model reads as C(n, k), in any of the arrangements
@@ -47,7 +48,7 @@ func buildModelLoop(b *builder) error {
 	if loop == nil || acc == nil || init == nil || len(b.m.Args) != 2 {
 		return errors.New("model loop match lacks the loop, the accumulator, its initialisation or n and k")
 	}
-	rhs := initValue(b.pass.TypesInfo, init, acc)
+	rhs, _ := assignedValue(b.pass.TypesInfo, init, acc)
 	if rhs == nil || !isOne(b.pass.TypesInfo, rhs) {
 		return fmt.Errorf("%s does not start at 1", acc.Name())
 	}
@@ -70,28 +71,42 @@ func buildModelLoop(b *builder) error {
 		}
 		drop = append(drop, d)
 	}
-	guarded := !b.m.CountNonNeg && classOf(b.pass.TypesInfo.TypeOf(b.m.Args[1])) != classUnsigned
+	name, err := b.pick(shapes[ShapeModelBinomLoop].helpers, acc.Type())
+	if err != nil {
+		return err
+	}
+	call, conds, err := b.countedCall(name, b.m.Args, acc.Type())
+	if err != nil {
+		return err
+	}
+	// Float counts: the loop stays, as written, for the counts that are
+	// no integers in the helper's domain; the domain's k ≥ 0 stands in
+	// for the loop's condition for running.
+	guarded := conds == nil && !b.m.CountNonNeg && classOf(b.pass.TypesInfo.TypeOf(b.m.Args[1])) != classUnsigned
 	// The call goes at the initialisation when nothing but those
 	// definitions separates it from the loop, else at the loop; under
 	// its condition, always at the loop.
 	at := loop.Pos()
-	if between, ok := b.between(init, loop); ok && sameStmts(between, drop) && !guarded {
+	if between, ok := b.between(init, loop); ok && sameStmts(between, drop) && !guarded && conds == nil {
 		at = rhs.Pos()
 	} else if b.mentioned(acc, init.End(), loop.Pos()) {
 		return fmt.Errorf("%s changes between its initialisation and the loop", acc.Name())
 	}
 	for _, a := range b.m.Args {
-		if err := b.entryValueAt(a, at); err != nil {
+		if err := b.valueAt(a, at, loop); err != nil {
 			return err
 		}
 	}
-	name, err := b.pick(shapes[ShapeModelBinomLoop].helpers, acc.Type())
-	if err != nil {
-		return err
-	}
-	call, err := b.call(name, b.m.Args, acc.Type())
-	if err != nil {
-		return err
+	if conds != nil {
+		if rawString(loop) {
+			return errors.New("the loop holds a raw string, which moving it into a branch would change")
+		}
+		indent := b.indentOf(loop.Pos())
+		kept := strings.ReplaceAll(b.copyText(loop), "\n", "\n\t")
+		b.replace(loop.Pos(), loop.End(), fmt.Sprintf("if %[2]s {\n%[1]s\t%[3]s = %[4]s\n%[1]s} else {\n%[1]s\t//overfact:allow %[5]s\n%[1]s\t%[6]s\n%[1]s}",
+			indent, strings.Join(conds, " && "), acc.Name(), call, countsKept, kept))
+		b.message = b.rewriteMessage() + ", where the counts are integers in its domain"
+		return nil
 	}
 	if at == rhs.Pos() {
 		b.replace(rhs.Pos(), rhs.End(), call)
@@ -328,6 +343,38 @@ func sameStmts(a, b []ast.Stmt) bool {
 	return true
 }
 
+// valueAt checks that the operand e holds at pos the value the model
+// read: at the loop, the value any variable (or field of one) holds
+// where the loop starts, which the analyzer vouches for, so long as
+// the loop leaves it alone and e names the same variable there; before
+// it, the entry value of a parameter or receiver (entryValueAt).
+func (b *builder) valueAt(e ast.Expr, pos token.Pos, loop ast.Stmt) error {
+	if pos != loop.Pos() {
+		return b.entryValueAt(e, pos)
+	}
+	root := ast.Unparen(e)
+	if sel, ok := root.(*ast.SelectorExpr); ok {
+		root = ast.Unparen(sel.X)
+	}
+	id, ok := root.(*ast.Ident)
+	if !ok {
+		return fmt.Errorf("%s is not a variable or a field of one", b.text(e))
+	}
+	v := b.pass.TypesInfo.ObjectOf(id)
+	if _, obj := b.scopeAt(pos).LookupParent(id.Name, pos); v == nil || obj != v {
+		return fmt.Errorf("%s names another variable where the call goes", id.Name)
+	}
+	if b.assigned(v, loop) {
+		return fmt.Errorf("the loop changes %s", id.Name)
+	}
+	if _, isSel := ast.Unparen(e).(*ast.SelectorExpr); isSel {
+		// A field may change through a pointer: only an entry value
+		// is vouched for.
+		return b.entryValueAt(e, pos)
+	}
+	return nil
+}
+
 // entryValueAt checks that the operand e, a parameter or receiver or a
 // field of one, names the same variable at pos and still holds the
 // value it had when the function was entered.
@@ -398,6 +445,19 @@ func (b *builder) isLHS(e ast.Expr) bool {
 			found = found || ast.Unparen(n.X) == e
 		case *ast.UnaryExpr:
 			found = found || n.Op == token.AND && ast.Unparen(n.X) == e
+		}
+		return !found
+	})
+	return found
+}
+
+// rawString reports whether n holds a raw string literal, whose lines
+// an indentation added to the code around it would change.
+func rawString(n ast.Node) bool {
+	found := false
+	ast.Inspect(n, func(x ast.Node) bool {
+		if l, ok := x.(*ast.BasicLit); ok && l.Kind == token.STRING && strings.HasPrefix(l.Value, "`") {
+			found = true
 		}
 		return !found
 	})

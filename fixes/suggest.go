@@ -66,7 +66,7 @@ type builder struct {
 	// read; the rewrite deletes them.
 	absorbed []ast.Stmt
 	// counts, while a helper call's operands are converted, collects the
-	// float operands passed to integer parameters (countCall); nil where
+	// float operands passed to integer parameters (countConds); nil where
 	// a float operand is refused.
 	counts *floatCounts
 	// keptAsWritten: a test already keeps the expression as written

@@ -97,7 +97,8 @@ func Logged(n, k int) float64 { // want Logged:"binomial of parameter 0, breaks 
 }
 
 // Scaled counts in float64 operands, which may hold fractions: the
-// integer helper would drop them.
+// integer helper serves the whole numbers of its domain, and the loop
+// stays, as written, for the others.
 func Scaled(n, k float64) float64 { // want Scaled:"binomial of parameter 0, breaks from 1021"
 	if n < 0 || k < 0 {
 		return 0
