@@ -142,6 +142,9 @@ var diffCases = []diffCase{
 	// Float operands: the helper serves the whole numbers of its domain
 	// (the loop stays for the others; this grid holds whole numbers).
 	{pkg: "fixmodel", fn: "Scaled", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Scaled(float64(n), float64(k))"},
+	// Stepped leaves 1 for a negative k (a loop of no trips): k ≥ 0 here.
+	{pkg: "fixmodel", fn: "Stepped", loops: []string{"n := -3; n <= 1060; n += 7", "k := 0; k <= n+3; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Stepped(float64(n), float64(k))"},
+	{pkg: "fixmodel", fn: "Ticket.Ways", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Ticket{Pool: float64(n), Picks: float64(k)}.Ways()"},
 	{pkg: "fixbinompeak", fn: "Combin", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Combin(float64(n), float64(k))"},
 	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},
 	// Counts kept in float64: the helper runs where they hold whole

@@ -344,10 +344,11 @@ func sameStmts(a, b []ast.Stmt) bool {
 }
 
 // valueAt checks that the operand e holds at pos the value the model
-// read: at the loop, the value any variable (or field of one) holds
-// where the loop starts, which the analyzer vouches for, so long as
-// the loop leaves it alone and e names the same variable there; before
-// it, the entry value of a parameter or receiver (entryValueAt).
+// read: at the loop, the value a variable holds where the loop starts,
+// which the analyzer vouches for, so long as e names the same variable
+// there (a variable the loop steps is read after it nowhere, which
+// buildModelLoop checks); before it, the entry value of a parameter or
+// receiver or a field of one (entryValueAt).
 func (b *builder) valueAt(e ast.Expr, pos token.Pos, loop ast.Stmt) error {
 	if pos != loop.Pos() {
 		return b.entryValueAt(e, pos)
@@ -363,9 +364,6 @@ func (b *builder) valueAt(e ast.Expr, pos token.Pos, loop ast.Stmt) error {
 	v := b.pass.TypesInfo.ObjectOf(id)
 	if _, obj := b.scopeAt(pos).LookupParent(id.Name, pos); v == nil || obj != v {
 		return fmt.Errorf("%s names another variable where the call goes", id.Name)
-	}
-	if b.assigned(v, loop) {
-		return fmt.Errorf("the loop changes %s", id.Name)
 	}
 	if _, isSel := ast.Unparen(e).(*ast.SelectorExpr); isSel {
 		// A field may change through a pointer: only an entry value

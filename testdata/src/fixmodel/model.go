@@ -4,6 +4,8 @@
 // replaced by one helper call, and the others left as they are.
 package fixmodel
 
+import "math"
+
 // Draws counts the ways to draw k balls of n, stepping the top factor
 // down in a float64 of its own.
 func Draws(n, k int) float64 { // want Draws:"binomial of parameter 0, breaks from 1021"
@@ -173,3 +175,38 @@ func Odds(n, k int) float64 { // want Odds:"binomial of parameter 0, breaks from
 	}
 	return r
 }
+
+// Stepped counts down in its float64 operands themselves, the top
+// factor in the parameter n, which nothing reads after the loop.
+func Stepped(n, k float64) float64 { // want Stepped:"binomial of parameter 0, breaks from 1021"
+	if k > n {
+		return 0
+	} else if k == 0 {
+		return 1
+	}
+	var r float64 = 1
+	for d := float64(1); d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r *= n
+		r /= d
+		n--
+	}
+	return r
+}
+
+// Ways reads the ticket's counts, cut to whole numbers in locals that
+// are assigned again before the loop.
+func (t Ticket) Ways() float64 {
+	n, k, r := 0.0, 0.0, 1.0
+	n, k = t.Pool, t.Picks
+	n, k = math.Trunc(n), math.Trunc(k)
+	if k < 0 || k > n {
+		return 0
+	}
+	for d := 1.0; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64`
+		r = r * (n - k + d) / d
+	}
+	return r
+}
+
+// Ticket is a lottery ticket's pool size and number of picks.
+type Ticket struct{ Pool, Picks float64 }
