@@ -19,6 +19,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	body := funcBody(n)
 	if s.worthLoops() {
 		fc.eachLoop(body, fc.noteLoop)
+		fc.checkTableFills()
 	}
 	if d, ok := n.(*ast.FuncDecl); ok && s.callMul {
 		if ff := c.funcs[c.declObj(d)]; ff != nil && ff.rec != nil {

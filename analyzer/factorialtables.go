@@ -1,6 +1,7 @@
 package analyzer
 
 import (
+	"fmt"
 	"go/ast"
 	"go/token"
 	"go/types"
@@ -303,4 +304,41 @@ func (c *checker) isStart(m ast.Node) bool {
 	}
 	v, ok := c.queries().intConst(c.queries().stripConv(as.Rhs[0]))
 	return ok && v == 1
+}
+
+// checkTableFills reports the loops of this function that fill an
+// integer factorial table past the last index whose factorial fits its
+// element type: every element from there on has wrapped, whoever reads
+// it (a table returned or kept in a package variable is read outside).
+// A float table is left to its readers: its elements past the limit are
+// +Inf, as the factorials they stand for are, and only a ratio of them
+// goes wrong (products.go).
+func (fc *fnCtx) checkTableFills() {
+	for _, tbl := range passStateOf(fc.c, tablesKey).byVar {
+		if tbl == nil || tbl.in != fc.node || tbl.elem.Float || tbl.fact.Safe {
+			continue
+		}
+		cond, ok := tbl.fill.Cond.(*ast.BinaryExpr)
+		if !ok {
+			continue
+		}
+		// The last index the loop stores: hi for i <= hi, hi−1 for i < hi.
+		off := int64(0)
+		if cond.Op == token.LSS {
+			off = -1
+		}
+		first := tbl.fact.FirstBad
+		name, last := shownFactorial(cond.Y, off)
+		if name == "" && last < first {
+			continue
+		}
+		r := fc.endRange(cond.Y, off)
+		if r.IsEmpty() || r.Hi < first && !typeLimit(r.Hi) {
+			continue
+		}
+		clause, definite := verdict(shownName(cond.Y), fc.rangeOf(cond.Y), first-off)
+		msg := fmt.Sprintf("loop fills the factorial table %s with i! at index i up to %s: the %s",
+			tbl.obj.Name(), plus(name, last), factorialLimitText(kindFactorial, name, last, tbl.elem))
+		fc.report(finding{node: tbl.fill, cat: catLoop, definite: definite, msg: msg + clause})
+	}
 }

@@ -37,3 +37,25 @@ func TestFactorialTablesProbe(t *testing.T) {
 		t.Errorf("RowPlans(25, 2) = %d, exact %v: want a wrong value where the exact one fits int64", plans, want)
 	}
 }
+
+// TestFactorialTableFillProbe shows the fill the table-fill finding
+// names (TrayOrders in testdata/src/factorialratio/tables.go) beside
+// math/big: its element n is n! up to n = 20 and wrong from 21 on, the
+// first index the message gives.
+func TestFactorialTableFillProbe(t *testing.T) {
+	tbl := make([]int64, 26)
+	tbl[0] = 1
+	for i := 1; i < len(tbl); i++ {
+		tbl[i] = tbl[i-1] * int64(i)
+	}
+	firstWrong := -1
+	for i := range tbl {
+		exact := new(big.Int).MulRange(1, int64(i))
+		if (!exact.IsInt64() || exact.Int64() != tbl[i]) && firstWrong < 0 {
+			firstWrong = i
+		}
+	}
+	if firstWrong != 21 {
+		t.Errorf("first wrong element of the int64 factorial table: %d, want 21 (the message's n ≥ 21)", firstWrong)
+	}
+}

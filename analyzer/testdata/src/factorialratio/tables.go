@@ -70,3 +70,39 @@ func ShelfOrders(boxes int) int64 {
 func PairWays(n int) int64 {
 	return shelfFact[n] / (shelfFact[2] * shelfFact[n-2])
 }
+
+// TrayOrders returns the orders in which 0..n trays can be checked, a
+// table of n! in int64 filled for any n: from 21 trays on its elements
+// have wrapped, whoever reads them.
+func TrayOrders(n int) []int64 {
+	t := make([]int64, n+1)
+	t[0] = 1
+	for i := 1; i <= n; i++ { // want `loop fills the factorial table t with i! at index i up to n: the factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2\.43e18 is the largest that fits\); n is not bounded here`
+		t[i] = t[i-1] * int64(i)
+	}
+	return t
+}
+
+// benchOrders holds the orders of a bench's 0..24 trays: past 20 they
+// have wrapped.
+var benchOrders [25]uint64
+
+func init() {
+	benchOrders[0] = 1
+	for i := 1; i < len(benchOrders); i++ { // want `loop fills the factorial table benchOrders with i! at index i up to len\(benchOrders\)-1: the factorial of len\(benchOrders\)-1 in uint64 wraps`
+		benchOrders[i] = benchOrders[i-1] * uint64(i)
+	}
+}
+
+// ShelfOrders stops at the largest shelf that fits: no finding.
+func ShelfOrders(n int) []int64 {
+	if n > 20 {
+		n = 20
+	}
+	t := make([]int64, n+1)
+	t[0] = 1
+	for i := 1; i <= n; i++ {
+		t[i] = t[i-1] * int64(i)
+	}
+	return t
+}
