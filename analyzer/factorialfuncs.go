@@ -24,6 +24,7 @@ type facFunc struct {
 	loop    *accLoop        // the product loop, or nil
 	rec     *ast.BinaryExpr // the recursive n*f(n-1), or nil
 	recN    ast.Expr        // its n operand
+	recCall *ast.CallExpr   // its recursive call, for a falling factorial f(n-1, k-1)
 	stored  bool            // the recursion's product is stored (a memo) and then returned
 	wrap    ast.Expr        // a wrapper's argument to the factorial it returns
 	wrapOff int64           // the largest factor is wrap+wrapOff

@@ -1,11 +1,15 @@
 package analyzer
 
 import (
+	"fmt"
 	"go/ast"
 	"go/token"
 	"go/types"
+	"math"
 
+	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/tokenop"
 )
 
 // The factorial-recursion category: a function that returns n times
@@ -15,11 +19,15 @@ import (
 // checkRecursion reports a recursive factorial whose parameter is not
 // bounded below the first value that breaks its result type.
 func (fc *fnCtx) checkRecursion(ff *facFunc) {
-	// The analysis of this pass has its own ranges; ff.recN is the same
-	// node in both, so asking for its range here is sound.
 	if fc.decidedAtCalls(ff.rec) {
 		return
 	}
+	if ff.kind == kindFalling {
+		fc.checkFallingRecursion(ff)
+		return
+	}
+	// The analysis of this pass has its own ranges; ff.recN is the same
+	// node in both, so asking for its range here is sound.
 	first := firstBadOf(ff.kind, ff.result)
 	j := fc.judge(ff.recN, first)
 	if j.silent {
@@ -64,7 +72,7 @@ func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		}
 		ast.Inspect(ret.Results[0], func(m ast.Node) bool {
 			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.MUL && ff == nil {
-				ff = fc.recursiveProduct(decl, self, b)
+				ff = fc.recursiveProduct(decl, self, b, fc.stripConv(ret.Results[0]) == b)
 			}
 			return ff == nil
 		})
@@ -95,7 +103,7 @@ func (fc *fnCtx) storedRecursion(decl *ast.FuncDecl, self *types.Func) *facFunc 
 		if !ok || b.Op != token.MUL {
 			return true
 		}
-		cand := fc.recursiveProduct(decl, self, b)
+		cand := fc.recursiveProduct(decl, self, b, true)
 		if cand != nil && fc.returnsStore(decl, a.Lhs[0], cand.recN) {
 			cand.stored = true
 			ff = cand
@@ -131,7 +139,12 @@ func (fc *fnCtx) returnsStore(decl *ast.FuncDecl, lhs, n ast.Expr) bool {
 	return found
 }
 
-func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr) *facFunc {
+// recursiveProduct matches b as n * f(n-1) (or n-2), f the function
+// itself, with every other parameter passed on as it is: n!, or n!!.
+// Where b is the whole value returned (whole), it also matches
+// n * f(n-1, k-1) in a function that returns 1 when k reaches 0: the
+// falling factorial of k factors from n down.
+func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.BinaryExpr, whole bool) *facFunc {
 	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
 		nExpr, callExpr := pair[0], pair[1]
 		v := fc.c.objOf(fc.stripConv(nExpr))
@@ -142,6 +155,14 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 		}
 		lin, ok := fc.linear(call.Args[idx])
 		if !ok || len(lin.Terms) != 1 || lin.Terms[0].Sym.Object != v || lin.Terms[0].K != 1 {
+			continue
+		}
+		if !fc.passesThrough(decl, call, idx, -1) {
+			// f(n-1, k-1)·n is no n!: the other count steps too, and
+			// the recursion stops on it (n!/(n−k)!, C(n, k)·k/n…).
+			if j := fc.fallingCount(decl, call, idx); lin.C == -1 && whole && j >= 0 {
+				return &facFunc{kind: kindFalling, param: idx, param2: j, rec: b, recN: fc.stripConv(nExpr), recCall: call}
+			}
 			continue
 		}
 		kind := kindNone
@@ -157,4 +178,142 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 		return &facFunc{kind: kind, param: idx, param2: -1, rec: b, recN: fc.stripConv(nExpr)}
 	}
 	return nil
+}
+
+// passesThrough reports whether the recursive call passes every
+// parameter but those at idx and skip on unchanged, each to its own
+// place (or the function has no other parameter).
+func (fc *fnCtx) passesThrough(decl *ast.FuncDecl, call *ast.CallExpr, idx, skip int) bool {
+	for j, a := range call.Args {
+		if j == idx || j == skip {
+			continue
+		}
+		if fc.c.paramIndex(decl, fc.c.objOf(ast.Unparen(a))) != j {
+			return false
+		}
+	}
+	return true
+}
+
+// fallingCount returns the index of the parameter k that the recursive
+// call passes on as k-1, every other one but n (at idx) as it is, in a
+// function whose first statements include if k == 0 (k <= 0, k < 1)
+// { return 1 }: the count of a falling factorial's factors. It returns
+// -1 where there is none.
+func (fc *fnCtx) fallingCount(decl *ast.FuncDecl, call *ast.CallExpr, idx int) int {
+	for j, a := range call.Args {
+		if j == idx {
+			continue
+		}
+		lin, ok := fc.linear(a)
+		if !ok || len(lin.Terms) != 1 || lin.Terms[0].K != 1 || lin.C != -1 {
+			continue
+		}
+		k := lin.Terms[0].Sym.Object
+		if fc.c.paramIndex(decl, k) != j || !fc.passesThrough(decl, call, idx, j) || !fc.stopsAtZero(decl, k) {
+			continue
+		}
+		return j
+	}
+	return -1
+}
+
+// stopsAtZero reports whether a statement of the function's body is
+// if k == 0 { return 1 } (or k <= 0, k < 1, 0 == k), with 1 a constant.
+func (fc *fnCtx) stopsAtZero(decl *ast.FuncDecl, k types.Object) bool {
+	for _, st := range decl.Body.List {
+		ifs, ok := st.(*ast.IfStmt)
+		if !ok || ifs.Init != nil || len(ifs.Body.List) != 1 {
+			continue
+		}
+		ret, ok := ifs.Body.List[0].(*ast.ReturnStmt)
+		if !ok || len(ret.Results) != 1 {
+			continue
+		}
+		if one, ok := fc.c.queries().intConst(fc.stripConv(ret.Results[0])); !ok || one != 1 {
+			continue
+		}
+		c, ok := ast.Unparen(ifs.Cond).(*ast.BinaryExpr)
+		if !ok {
+			continue
+		}
+		x, y, op := c.X, c.Y, c.Op
+		if fc.c.objOf(ast.Unparen(y)) == k {
+			x, y, op = y, x, tokenop.Flip(op)
+		}
+		v, ok := fc.c.queries().intConst(y)
+		if !ok || fc.c.objOf(ast.Unparen(x)) != k {
+			continue
+		}
+		if op == token.EQL && v == 0 || op == token.LEQ && v == 0 || op == token.LSS && v == 1 {
+			return true
+		}
+	}
+	return false
+}
+
+// checkFallingRecursion reports n * f(n-1, k-1), the falling factorial
+// of k factors from n down, where the ranges of n and k let it leave
+// its type: when k reaches n it is n! itself.
+func (fc *fnCtx) checkFallingRecursion(ff *facFunc) {
+	t := ff.result
+	// k where the recursion multiplies: the parameter in f(n-1, k-1).
+	lin, ok := fc.linear(ff.recCall.Args[ff.param2])
+	if !ok || len(lin.Terms) != 1 {
+		return
+	}
+	kID := identOf(fc.c.pass.TypesInfo, ff.recCall.Args[ff.param2], lin.Terms[0].Sym.Object)
+	if kID == nil {
+		return
+	}
+	n, k := fc.rangeOf(ff.recN), fc.rangeOf(kID)
+	if n.IsEmpty() || k.IsEmpty() || bounded(n) && bounded(k) && thresholds.FallingFits(t.Num, n.Hi, min(k.Hi, n.Hi)) || fc.c.fallingCallsFit(ff) {
+		return
+	}
+	nName, kName := src(ff.recN), kID.Name
+	var msg string
+	if finite(k) && k.Hi > 0 {
+		msg = fmt.Sprintf("recursive falling factorial of %s factors from %s down in %s %s: with %s = %d, for %s ≥ %d", kName, nName, t.typeName(), verb(t), kName, k.Hi, nName, thresholds.FallingFirstBad(t.Num, k.Hi))
+	} else {
+		msg = fmt.Sprintf("recursive falling factorial of %s factors from %s down in %s %s: when %s = %s it is %s!, which %s for %s ≥ %d", kName, nName, t.typeName(), verb(t), kName, nName, nName, verb(t), nName, thresholds.Factorial(t.Num).FirstBad)
+	}
+	definite := n.Lo > 0 && k.Lo > 0 && n.Lo != math.MinInt64 && !thresholds.FallingFits(t.Num, n.Lo, min(k.Lo, n.Lo))
+	switch {
+	case definite:
+		msg += fmt.Sprintf("; the product always exceeds %s here", t.Name)
+	case !finite(n):
+		msg += fmt.Sprintf("; %s is not bounded here", nName)
+	case !finite(k):
+		msg += fmt.Sprintf("; %s is not bounded here", kName)
+	default:
+		msg += fmt.Sprintf("; %s may reach %d and %s may reach %d here", nName, n.Hi, kName, k.Hi)
+	}
+	fc.report(finding{node: ff.rec, cat: catRecursion, definite: definite, msg: msg})
+}
+
+// fallingCallsFit reports whether every call of an unexported falling
+// recursion, all of them in this package and none through a value of
+// it, passes an n and a k whose ranges keep the product within its
+// type: the recursion only steps both down from there.
+func (c *checker) fallingCallsFit(ff *facFunc) bool {
+	if ff.obj.Exported() || c.escapes[ff.obj] {
+		return false
+	}
+	outside := 0
+	for _, call := range c.callsOf(ff.obj) {
+		if ff.decl.Pos() <= call.Pos() && call.End() <= ff.decl.End() {
+			continue
+		}
+		outer := c.enclosingFunc(call)
+		if outer == nil || max(ff.param, ff.param2) >= len(call.Args) {
+			return false
+		}
+		at := c.ctx(outer)
+		n, k := at.rangeOf(call.Args[ff.param]), at.rangeOf(call.Args[ff.param2])
+		if !bounded(n) || !bounded(k) || n.Lo < 0 || !thresholds.FallingFits(ff.result.Num, n.Hi, min(k.Hi, n.Hi)) {
+			return false
+		}
+		outside++
+	}
+	return outside > 0
 }

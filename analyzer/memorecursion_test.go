@@ -53,3 +53,30 @@ func TestMemoRecursionProbe(t *testing.T) {
 		t.Fatalf("exact BusyShare(%d, %d) = %v, want a share in (0, 1)", load, lines, share)
 	}
 }
+
+// TestFallingRecursionProbe shows the falling-factorial recursion of
+// testdata/src/factorialrecursion/counts.go (Legs: n·f(n−1, k−1), 1 at
+// k = 0) beside math/big: Legs(100, 2) = 9900 fits, so no guard on n
+// alone may refuse it, and Legs(n, n) = n! first wraps int64 at n = 21,
+// the n the message names.
+func TestFallingRecursionProbe(t *testing.T) {
+	var legs func(n, k int64) int64
+	legs = func(n, k int64) int64 {
+		if k == 0 {
+			return 1
+		}
+		return n * legs(n-1, k-1)
+	}
+	if got, want := legs(100, 2), new(big.Int).MulRange(99, 100); !want.IsInt64() || got != want.Int64() {
+		t.Errorf("Legs(100, 2) = %d, exact %v", got, want)
+	}
+	first := int64(-1)
+	for n := int64(1); n <= 25 && first < 0; n++ {
+		if exact := new(big.Int).MulRange(1, n); !exact.IsInt64() || exact.Int64() != legs(n, n) {
+			first = n
+		}
+	}
+	if first != 21 {
+		t.Errorf("Legs(n, n) first wraps at n = %d, want 21 (the message's n ≥ 21)", first)
+	}
+}
