@@ -185,6 +185,9 @@ func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
 	case powNum >= 1 && facDen == 1 && facNum == 0:
 		fc.consume(p)
 		fc.checkPowOverFactorial(root, p)
+	case powNum >= 1 && facDen >= 2 && facNum == 0 && binDen == 0:
+		fc.consume(p)
+		fc.checkPowOverFactorials(root, p)
 	case binNum == 2 && binDen == 1 && facNum == 0 && facDen == 0:
 		fc.consume(p)
 		fc.checkHypergeometric(root, p)

@@ -165,3 +165,62 @@ func (fc *fnCtx) negated(e, x ast.Expr) bool {
 	}
 	return a.v == nil && b.v == nil || sameVar(fc, a.v, b.v)
 }
+
+// checkPowOverFactorials judges a power over a product of factorials,
+// each computed on its own, as a Bessel series writes its terms:
+//
+//	math.Pow(x/2, float64(2*k+n)) / (fact(k) * fact(k+n))   // J_n
+//
+// A factorial past its limit is +Inf, and so is the divisor; the term
+// is 0 there, or NaN where the power overflowed too, although its true
+// value is finite (the product of the factorials leaves the type even
+// before either does). The message names the factorial that breaks,
+// the first one whose range reaches its limit.
+func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
+	var pow factor
+	for _, f := range p.num {
+		if f.math == "Pow" {
+			pow = f
+		}
+	}
+	var dens []string
+	var worst *factor
+	var wj judgement
+	var first int64
+	for i, f := range p.den {
+		if f.kind == kindNone {
+			continue
+		}
+		if f.kind != kindFactorial && f.kind != kindDouble {
+			return
+		}
+		dens = append(dens, bang(f.arg, f.off))
+		fb := firstBadOf(f.kind, f.t) - f.off
+		j := fc.judge(f.arg, fb)
+		if f.fact != nil && f.fact.Safe || j.silent || worst != nil && (wj.definite || !j.definite) {
+			continue
+		}
+		worst, wj, first = &p.den[i], j, fb
+	}
+	if worst == nil {
+		return
+	}
+	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), joinDot(dens))
+	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
+		what, worst.t.typeName(), bang(worst.arg, worst.off), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
+	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
+		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})
+}
+
+// joinDot writes factors as a product: "k!·(k+n)!".
+func joinDot(fs []string) string {
+	out := ""
+	for i, f := range fs {
+		if i > 0 {
+			out += "·"
+		}
+		out += f
+	}
+	return out
+}
