@@ -47,6 +47,7 @@ func ProductOf(x float64) Product                          { panic("") }
 func PowProduct(x, p float64) Product                      { panic("") }
 func GammaProduct(a float64) Product                       { panic("") }
 func ExpProduct(x float64) Product                         { panic("") }
+func FactorialProduct(v, n float64) Product                { panic("") }
 func (p Product) Mul(q Product) Product                    { panic("") }
 func (p Product) Quo(q Product) Product                    { panic("") }
 func (p Product) MulFloat(x float64) Product               { panic("") }

@@ -259,17 +259,44 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 }
 
 // isLeaf reports whether e is a call of math.Pow, math.Gamma or
-// math.Exp.
+// math.Exp, or of a factorial function (Match.Factorials).
 func (lp *logProducts) isLeaf(e ast.Expr) bool {
+	if lp.factorialCall(e) != nil {
+		return true
+	}
 	c, fn := lp.b.callOf(e)
 	return c != nil && (len(c.Args) == 2 && isMath(fn, "Pow") || len(c.Args) == 1 && (isMath(fn, "Gamma") || isMath(fn, "Exp")))
 }
 
+// factorialCall returns the match's factorial call that e is, or nil.
+func (lp *logProducts) factorialCall(e ast.Expr) *FactorialCall {
+	for i, f := range lp.b.m.Factorials {
+		if f.Call == ast.Unparen(e) {
+			return &lp.b.m.Factorials[i]
+		}
+	}
+	return nil
+}
+
 // leaf writes a call of math.Pow, math.Gamma or math.Exp as the
-// Product that holds its value; "" for any other expression.
+// Product that holds its value, and a factorial function's call as the
+// Product of the value it returns with the count's ln n! beside it; ""
+// for any other expression.
 func (lp *logProducts) leaf(e ast.Expr) string {
 	if !lp.isLeaf(e) {
 		return ""
+	}
+	if f := lp.factorialCall(e); f != nil {
+		count := "float64(" + lp.spliced(f.Arg) + ")"
+		if f.Off != 0 {
+			count = fmt.Sprintf("%s%+d", count, f.Off)
+		}
+		args := make([]string, len(f.Call.Args))
+		for i, a := range f.Call.Args {
+			args[i] = lp.spliced(a)
+		}
+		call := lp.b.copyText(f.Call.Fun) + "(" + strings.Join(args, ", ") + ")"
+		return lp.pkg + ".FactorialProduct(" + call + ", " + count + ")"
 	}
 	c, fn := lp.b.callOf(e)
 	if fn.Name() == "Pow" {

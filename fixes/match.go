@@ -92,6 +92,12 @@ type Match struct {
 	// are never negative where they are evaluated (a loop counter from
 	// 0): a test of the helper's domain leaves out their k < 0.
 	NonNeg map[ast.Expr]bool
+	// Factorials, for ShapeProductChain, are the calls among the
+	// expression's factors of functions that return a factorial, each
+	// with the count it is the factorial of: the chain carries each as
+	// lgamma.FactorialProduct(call, count), the code's own value with
+	// ln count! beside it.
+	Factorials []FactorialCall
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are
@@ -103,4 +109,12 @@ type Match struct {
 	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
 	Param    types.Object
 	FirstBad int64
+}
+
+// A FactorialCall is a call of a function that returns (Arg+Off)!, as
+// the analyzer's facts say.
+type FactorialCall struct {
+	Call *ast.CallExpr
+	Arg  ast.Expr
+	Off  int64
 }

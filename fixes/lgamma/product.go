@@ -93,6 +93,25 @@ func ExpProduct(x float64) Product {
 	return Product{v: v, l: dd{x, 0}}.mark(false)
 }
 
+// FactorialProduct returns the product holding n!, whose float64 value
+// v the code formed itself (a factorial function's result, +Inf past
+// 170!), with ln n! beside it, so that a factorial past float64 keeps
+// its value in a product whose other factors bring it back. n is a
+// count as a float64; where it is no integer ≥ 0 (a function that
+// takes fractions or negative counts computes something else there) the
+// product holds v alone, as ProductOf(v) does.
+//
+// Special cases are:
+//
+//	FactorialProduct(v, n) holds v alone for n < 0, a fraction, ±Inf or NaN
+//	FactorialProduct(v, n) holds NaN for v NaN
+func FactorialProduct(v, n float64) Product {
+	if n < 0 || n != math.Trunc(n) || math.IsInf(n, 0) || math.IsNaN(v) {
+		return ProductOf(v)
+	}
+	return Product{v: v, l: lnAbsGammaDD(n + 1)}.mark(false)
+}
+
 // Mul returns the product p·q; its float64 value is p's times q's, as
 // the expression p * q forms it.
 func (p Product) Mul(q Product) Product {

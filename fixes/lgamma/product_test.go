@@ -161,3 +161,36 @@ func TestProductBesselSeries(t *testing.T) {
 // v1e120 keeps 1e-120 a float64 variable, so that 1e-200*v1e120() is
 // float64 arithmetic, not an exact constant expression.
 func v1e120() float64 { return 1e-120 }
+
+// TestFactorialProduct checks the product of a factorial the code formed
+// itself: where v is n! as float64 forms it the product keeps v bit for
+// bit; past 170! (v = +Inf) a quotient that fits takes the logarithms
+// (math/big: 200!/(100!·100!) = C(200, 100) ≈ 9.05e58); for a fraction or
+// a negative count the product holds v alone.
+func TestFactorialProduct(t *testing.T) {
+	fact := func(n int) float64 {
+		r := 1.0
+		for i := 2; i <= n; i++ {
+			r *= float64(i)
+		}
+		return r
+	}
+	for n := 0; n <= 170; n += 17 {
+		if got := FactorialProduct(fact(n), float64(n)).Float64(); got != fact(n) {
+			t.Errorf("FactorialProduct(%d!, %d) = %v, want the code's own %v", n, n, got, fact(n))
+		}
+	}
+	q := FactorialProduct(fact(200), 200).Quo(FactorialProduct(fact(100), 100).Mul(FactorialProduct(fact(100), 100))).Float64()
+	want := new(big.Float).SetPrec(refPrec).SetInt(new(big.Int).Binomial(200, 100))
+	if off := relOff(q, want); off > 1e-14 {
+		t.Errorf("200!/(100!·100!) = %v, want %s (math/big), relative error %.3g", q, want.Text('g', 17), off)
+	}
+	for _, n := range []float64{-1, 2.5, math.Inf(1)} {
+		if got := FactorialProduct(7, n).Float64(); got != 7 {
+			t.Errorf("FactorialProduct(7, %v) = %v, want 7, the value alone", n, got)
+		}
+	}
+	if got := FactorialProduct(math.NaN(), 3).Float64(); !math.IsNaN(got) {
+		t.Errorf("FactorialProduct(NaN, 3) = %v, want NaN", got)
+	}
+}
