@@ -89,6 +89,13 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 			den += "!"
 		}
 		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), den)
+		if fac.kind == kindFactorial && fac.t.Float && fac.call != nil && fac.fact != nil {
+			// The term in log space, the factorial the value its
+			// function returns with ln n! beside it (see
+			// checkPowOverFactorials).
+			m.Shape = fixes.ShapeProductChain
+			m.Factorials = []fixes.FactorialCall{{Call: fac.call, Arg: fac.arg, Off: fac.off}}
+		}
 	}
 	var msg, clause string
 	definite := false

@@ -1,6 +1,9 @@
 package fixes_test
 
-import "math/big"
+import (
+	"math"
+	"math/big"
+)
 
 // The sonar array's Bessel series: a power over a product of
 // factorials, each computed on its own.
@@ -11,6 +14,12 @@ func init() {
 		// power too, and the original's sum is NaN; the exact finite
 		// sum is J_n(x) to rounding. x stays at most 10, where the
 		// series' cancellation costs less than 1e-12 relative.
+		// Terms with one float factorial function that no other row
+		// rewrites, taken in log space as written: a^(k+1)/k! and
+		// λ^k·e^(−2λ)/k!.
+		diffCase{pkg: "fixterm", fn: "NextLoad", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refShiftedPowFact},
+		diffCase{pkg: "fixseries", fn: "Decay", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refShiftedPowFact},
+		diffCase{pkg: "fixterm", fn: "PairArrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPairPoisson},
 		diffCase{pkg: "fixbessel", fn: "Beam", loops: []string{"n := 0; n <= 3; n++", "xi := 1; xi <= 20; xi += 3", "terms := 20; terms <= 300; terms += 70"}, args: "n, float64(xi)/2, terms", typ: "float64", ref: refBesselSeries},
 	)
 }
@@ -34,4 +43,18 @@ func refBesselSeries(a []float64) *big.Float {
 		sum.Add(sum, t)
 	}
 	return sum
+}
+
+// refShiftedPowFact is a^(k+1)/k! for (a, k).
+func refShiftedPowFact(x []float64) *big.Float {
+	return mul(refPowFact(x), fl(x[0]))
+}
+
+// refPairPoisson is λ^k·e^(−2λ)/k! for (k, λ); e^(−2λ) comes from
+// math.Exp, whose error (under 1 ulp) is far inside the tests'
+// tolerance, and underflows to 0 where the exact term is below
+// float64's range anyway.
+func refPairPoisson(x []float64) *big.Float {
+	k, lambda := int64(x[0]), x[1]
+	return mul(quo(powBig(lambda, k), bf(factorialBig(k))), fl(math.Exp(-2*lambda)))
 }

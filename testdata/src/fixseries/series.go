@@ -17,7 +17,8 @@ func factorial(n int) float64 { // want factorial:"factorial of parameter 0"
 
 // Decay is the kiln's cooling term a^(k+1)/k!. Past k = 170 the divisor
 // is +Inf, and for a ≤ 1 the term is then below the smallest float64, so
-// 0 is its correctly rounded value.
+// 0 is its correctly rounded value; for a larger a it is not, and the
+// rewrite takes the product in log space.
 func Decay(a float64, k int) float64 { // want Decay:`value \(p0\)\^\(p1 \+ 1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(a, float64(k+1)) / factorial(k) // want `term with a\^\(k \+ 1\) over k! in float64`
 }

@@ -55,13 +55,14 @@ func Blocking(a float64, c int) float64 {
 }
 
 // NextLoad is a^(k+1)/k!, which is no a^k/k!: it is reported with its
-// real exponent and not rewritten.
+// real exponent and taken in log space as it is written (a product of
+// Products), not as lgamma.PowOverFactorial.
 func NextLoad(a float64, k int) float64 { // want NextLoad:`value \(p0\)\^\(p1 \+ 1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
 	return math.Pow(a, float64(k+1)) / factF(k) // want `term with a\^\(k \+ 1\) over k! in float64`
 }
 
 // PairArrivals has e^(−2λ) where a Poisson term has e^(−λ): no
-// Poisson term, so no rewrite.
+// Poisson term, so the product is taken in log space as it is written.
 func PairArrivals(k int, lambda float64) float64 { // want PairArrivals:`value \(p1\)\^\(p0\)·exp\(-2\*p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-2*lambda) / factF(k) // want `term with lambda\^k over k! in float64`
 }
