@@ -5,6 +5,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+
+	"github.com/overfact/overfact/fixes"
 )
 
 // checkLoopMultinomial reports a multinomial coefficient accumulated in
@@ -63,7 +65,41 @@ func (fc *fnCtx) checkLoopMultinomial(root ast.Expr) {
 	breaks := verb(t)
 	msg := fmt.Sprintf("%s computes the multinomial coefficient (Σ parts)!/Π part! as %s over the loop's parts in %s, which fits where %s already %s from %s = %d%s",
 		name, src(root), t.typeName(), src(num), breaks, sum.Name(), first, clause)
-	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: c.relatedDef(c.calleeOf(num).Name(), c.calleeOf(num).Pos())})
+	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: c.relatedDef(c.calleeOf(num).Name(), c.calleeOf(num).Pos()),
+		match: fc.multinomialLogMatch(root, num, den, loop, t)})
+}
+
+// multinomialLogMatch offers to carry the divisor of a float multinomial
+// in log space (ShapeLogSpaceTerm): den becomes an lgamma.Product, each
+// factorial call the value its function returns with ln n! beside it
+// (lgamma.FactorialProduct), so that the quotient keeps every value the
+// code got right and takes the logarithms where a factorial is +Inf.
+// nil for an integer result, whose wrapped factorials are finite.
+func (fc *fnCtx) multinomialLogMatch(root ast.Expr, num *ast.CallExpr, den types.Object, loop ast.Stmt, t numType) *fixes.Match {
+	if !t.Float {
+		return nil
+	}
+	c := fc.c
+	facs := []fixes.FactorialCall{{Call: num, Arg: num.Args[c.factOf(c.calleeOf(num)).Param]}}
+	ast.Inspect(loop, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || len(as.Lhs) != 1 || len(as.Rhs) != 1 || c.objOf(as.Lhs[0]) != den {
+			return true
+		}
+		call, ok := fc.stripConv(as.Rhs[0]).(*ast.CallExpr)
+		if as.Tok != token.MUL_ASSIGN || !ok {
+			return true
+		}
+		if ff := c.factOf(c.calleeOf(call)); ff != nil && kindOfName(ff.Kind) == kindFactorial && ff.Offset == 0 && ff.Param < len(call.Args) {
+			facs = append(facs, fixes.FactorialCall{Call: call, Arg: call.Args[ff.Param]})
+		}
+		return true
+	})
+	if len(facs) < 2 {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapeLogSpaceTerm, Node: root, Result: c.pass.TypesInfo.TypeOf(root),
+		Args: []ast.Expr{fc.stripConv(root.(*ast.BinaryExpr).Y)}, Func: fc.node, Factorials: facs}
 }
 
 // partsLoop returns the last loop before pos whose body adds a part to

@@ -288,6 +288,12 @@ func (lp *logProducts) leaf(e ast.Expr) string {
 	}
 	if f := lp.factorialCall(e); f != nil {
 		count := "float64(" + lp.spliced(f.Arg) + ")"
+		if types.Identical(lp.b.pass.TypesInfo.TypeOf(f.Arg), types.Typ[types.Float64]) {
+			count = lp.spliced(f.Arg)
+			if _, ok := ast.Unparen(f.Arg).(*ast.Ident); !ok && f.Off != 0 {
+				count = "(" + count + ")"
+			}
+		}
 		if f.Off != 0 {
 			count = fmt.Sprintf("%s%+d", count, f.Off)
 		}

@@ -5,10 +5,12 @@ import (
 	"math/big"
 )
 
-// The sonar array's Bessel series: a power over a product of
-// factorials, each computed on its own.
+// The sonar array's Bessel series, a power over a product of
+// factorials each computed on its own, and the ferry's boarding orders,
+// a multinomial whose divisor is a running product of factorials: float
+// factorial functions carried in log space (lgamma.FactorialProduct).
 func init() {
-	fixPackages = append(fixPackages, "fixbessel")
+	fixPackages = append(fixPackages, "fixbessel", "fixparts")
 	diffCases = append(diffCases,
 		// Past k = 170 each factorial is +Inf, past k ≈ 220 (x = 10) the
 		// power too, and the original's sum is NaN; the exact finite
@@ -20,6 +22,10 @@ func init() {
 		diffCase{pkg: "fixterm", fn: "NextLoad", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refShiftedPowFact},
 		diffCase{pkg: "fixseries", fn: "Decay", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refShiftedPowFact},
 		diffCase{pkg: "fixterm", fn: "PairArrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPairPoisson},
+		// A multinomial over a loop's parts, its divisor a running
+		// product of float factorials: past 170 parts in all, fact(total)
+		// is +Inf while the coefficient may fit.
+		diffCase{pkg: "fixparts", fn: "Boardings", loops: []string{"a := 0; a <= 300; a += 37", "b := 0; b <= 200; b += 41", "c := 0; c <= 60; c += 13"}, args: "float64(a), float64(b), float64(c)", typ: "float64", ref: refMultinomial},
 		diffCase{pkg: "fixbessel", fn: "Beam", loops: []string{"n := 0; n <= 3; n++", "xi := 1; xi <= 20; xi += 3", "terms := 20; terms <= 300; terms += 70"}, args: "n, float64(xi)/2, terms", typ: "float64", ref: refBesselSeries},
 	)
 }
