@@ -104,6 +104,7 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 		}
 	}
 	var pending []*ast.Comment // statement-level assumes
+	text := &fileText{c: c}
 	for _, cg := range f.Comments {
 		for _, cm := range cg.List {
 			if !strings.HasPrefix(cm.Text, directivePrefix) {
@@ -114,13 +115,13 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 			fn := docOf[cg]
 			switch verb {
 			case "allow":
-				c.parsePlaced(&d.allow, cm, arg, fn, "//overfact:allow needs a reason, as in //overfact:allow n is at most 12 here")
+				c.parsePlaced(&d.allow, text, cm, arg, fn, "//overfact:allow needs a reason, as in //overfact:allow n is at most 12 here")
 			case "approx":
-				c.parsePlaced(&d.approx, cm, arg, fn, "//overfact:approx needs a reason, as in //overfact:approx a rough size estimate is enough here")
+				c.parsePlaced(&d.approx, text, cm, arg, fn, "//overfact:approx needs a reason, as in //overfact:approx a rough size estimate is enough here")
 			case "assume":
 				if fn != nil {
 					c.parseFuncAssume(d, cm, arg, fn)
-				} else if c.trailing(cm) {
+				} else if text.trailing(cm) {
 					c.reportDirective(cm.Pos(), cm.End(), "//overfact:assume belongs in a function's doc comment or on its own line before a statement")
 				} else {
 					pending = append(pending, cm)
@@ -138,7 +139,7 @@ func (c *checker) parseDirectives(f *ast.File, generated bool) *directives {
 
 // parsePlaced records a directive that needs a reason (missing is the
 // finding when it has none) and covers what its place says.
-func (c *checker) parsePlaced(p *placed, cm *ast.Comment, reason string, fn *ast.FuncDecl, missing string) {
+func (c *checker) parsePlaced(p *placed, text *fileText, cm *ast.Comment, reason string, fn *ast.FuncDecl, missing string) {
 	if reason == "" {
 		c.reportDirective(cm.Pos(), cm.End(), missing)
 		return
@@ -148,7 +149,7 @@ func (c *checker) parsePlaced(p *placed, cm *ast.Comment, reason string, fn *ast
 		return
 	}
 	line := c.pass.Fset.Position(cm.Pos()).Line
-	if c.trailing(cm) {
+	if text.trailing(cm) {
 		p.lines[line] = true
 	} else {
 		p.lines[line+1] = true
@@ -247,16 +248,33 @@ func (c *checker) identIn(st ast.Stmt, name string) types.Object {
 	return obj
 }
 
+// fileText is the text of the file whose directives are parsed, read
+// the first time a directive's place needs it and kept for the others:
+// a file with thousands of directives (as -fix leaves where it keeps an
+// expression as written) is read once, whether or not the pass's
+// ReadFile caches (go vet's and the editor's do not).
+type fileText struct {
+	c    *checker
+	src  []byte
+	read bool
+}
+
 // trailing reports whether code precedes the comment on its line.
-func (c *checker) trailing(cm *ast.Comment) bool {
-	tf := c.pass.Fset.File(cm.Pos())
-	if tf == nil || c.pass.ReadFile == nil {
+func (t *fileText) trailing(cm *ast.Comment) bool {
+	tf := t.c.pass.Fset.File(cm.Pos())
+	if tf == nil || t.c.pass.ReadFile == nil {
 		return false
 	}
-	src, err := c.pass.ReadFile(tf.Name())
-	if err != nil {
+	if !t.read {
+		t.read = true
+		if src, err := t.c.pass.ReadFile(tf.Name()); err == nil {
+			t.src = src
+		}
+	}
+	if t.src == nil {
 		return false
 	}
+	src := t.src
 	start := tf.Offset(tf.LineStart(tf.Line(cm.Pos())))
 	end := tf.Offset(cm.Pos())
 	if start < 0 || end > len(src) || start > end {

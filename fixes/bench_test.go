@@ -61,7 +61,7 @@ func BenchmarkBuild(b *testing.B) {
 // benchPass writes a package of n files, each with ten binomial ratios
 // marked for the probe, loads it and returns a pass over it with the
 // probe's matches.
-func benchPass(b *testing.B, n int) (*analysis.Pass, []fixes.Match) {
+func benchPass(b testing.TB, n int) (*analysis.Pass, []fixes.Match) {
 	dir := b.TempDir()
 	pkgDir := filepath.Join(dir, "src", "bench")
 	if err := os.MkdirAll(pkgDir, 0o755); err != nil {
@@ -106,4 +106,35 @@ func benchPass(b *testing.B, n int) (*analysis.Pass, []fixes.Match) {
 		}
 	}
 	return pass, matches
+}
+
+// TestFixerReadsEachFileOnce checks that the fixes of one pass read each
+// file once between them, through a ReadFile that does not cache (go
+// vet's and the editor's do not): every fix starts from its file's text,
+// and a read per fix costs findings × file size.
+func TestFixerReadsEachFileOnce(t *testing.T) {
+	pass, matches := benchPass(t, 3)
+	reads := make(map[string]int)
+	pass.ReadFile = func(name string) ([]byte, error) {
+		reads[name]++
+		return os.ReadFile(name)
+	}
+	fx := fixes.NewFixer(pass)
+	built := 0
+	for _, m := range matches {
+		if _, err := fx.Build(m); err == nil {
+			built++
+		}
+	}
+	if built < len(matches)/2 {
+		t.Fatalf("%d of %d fixes built; the probe's binomials should build", built, len(matches))
+	}
+	if len(reads) != 3 {
+		t.Errorf("read %d files, want the package's 3: %v", len(reads), reads)
+	}
+	for name, n := range reads {
+		if n != 1 {
+			t.Errorf("%s read %d times, want once", filepath.Base(name), n)
+		}
+	}
 }

@@ -1,6 +1,7 @@
 package fixes
 
 import (
+	"errors"
 	"go/ast"
 	"go/token"
 	"go/types"
@@ -19,6 +20,7 @@ import (
 // on the fixer's account.
 type Fixer struct {
 	pass     *analysis.Pass
+	sources  map[string][]byte             // the files' text, read once (source)
 	checks   int                           // fix checks spent
 	budget   int                           // fix checks allowed; 0: no bound (see SetCheckBudget)
 	importer importerMap                   // the package's imports and the fixes' stand-ins
@@ -36,6 +38,30 @@ type Fixer struct {
 // checks SetCheckBudget last set.
 func NewFixer(pass *analysis.Pass) *Fixer {
 	return &Fixer{pass: pass, budget: int(checkBudget.Load())}
+}
+
+// source returns the text of the named file, read with the pass's
+// ReadFile the first time a fix asks for it and kept for the others:
+// every fix starts from its file's text, and where ReadFile does not
+// cache (go vet, the editor), thousands of fixes in one large file each
+// read the whole file.
+func (fx *Fixer) source(name string) ([]byte, error) {
+	if src, ok := fx.sources[name]; ok {
+		return src, nil
+	}
+	read := fx.pass.ReadFile
+	if read == nil {
+		return nil, errors.New("pass cannot read files")
+	}
+	src, err := read(name)
+	if err != nil {
+		return nil, err
+	}
+	if fx.sources == nil {
+		fx.sources = make(map[string][]byte)
+	}
+	fx.sources[name] = src
+	return src, nil
 }
 
 // checkBudget is the number of fix checks each Fixer made from now on

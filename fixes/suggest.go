@@ -92,11 +92,7 @@ func newBuilder(fx *Fixer, m Match) (*builder, error) {
 	if tok == nil {
 		return nil, errors.New("file has no position information")
 	}
-	read := pass.ReadFile
-	if read == nil {
-		return nil, errors.New("pass cannot read files")
-	}
-	src, err := read(tok.Name())
+	src, err := fx.source(tok.Name())
 	if err != nil {
 		return nil, err
 	}

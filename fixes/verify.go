@@ -116,7 +116,7 @@ func (fx *Fixer) parsedFiles() (*parsed, error) {
 	p := &parsed{fset: token.NewFileSet(), files: make(map[*ast.File]*ast.File)}
 	for _, f := range pass.Files {
 		name := pass.Fset.File(f.FileStart).Name()
-		src, err := pass.ReadFile(name)
+		src, err := fx.source(name)
 		if err != nil {
 			return nil, err
 		}

@@ -115,6 +115,16 @@ func shared(n int64) *big.Rat { return linform.SharedInt(n) }
 
 var ratOne = shared(1)
 
+// isOne reports whether r is 1, as r.Cmp(ratOne) == 0 does without its
+// allocations (Cmp scales both operands into new integers): the model
+// asks it of every coefficient and exponent it normalises.
+func isOne(r *big.Rat) bool { return r.IsInt() && r.Num().IsInt64() && r.Num().Int64() == 1 }
+
+// isUnit reports whether r is 1 or -1, without allocating.
+func isUnit(r *big.Rat) bool {
+	return r.IsInt() && r.Num().IsInt64() && (r.Num().Int64() == 1 || r.Num().Int64() == -1)
+}
+
 // addRat returns x+y, shared when both are small integers.
 func addRat(x, y *big.Rat) *big.Rat { return ratDomain.Add(x, y) }
 

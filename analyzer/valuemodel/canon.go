@@ -71,7 +71,7 @@ func (f Form) String() string {
 }
 
 func paren(a Affine) string {
-	if len(a.Terms) == 1 && a.c().Sign() == 0 && a.Terms[0].K.Cmp(ratOne) == 0 || a.IsConst() {
+	if len(a.Terms) == 1 && a.c().Sign() == 0 && isOne(a.Terms[0].K) || a.IsConst() {
 		return a.String()
 	}
 	return "(" + a.String() + ")"
@@ -80,7 +80,7 @@ func paren(a Affine) string {
 // Recognise names the canonical form of t, whatever the order its
 // factors were written in; Kind Unknown when it is none of them.
 func Recognise(t *Term) Form {
-	if t == nil || t.Coef.Cmp(ratOne) != 0 || t.SqrtPi != 0 {
+	if t == nil || !isOne(t.Coef) || t.SqrtPi != 0 {
 		return Form{}
 	}
 	up, down := gammaLists(t)
@@ -141,7 +141,7 @@ func gammaForm(up, down []Affine) Form {
 	case len(up) == 1 && len(down) == 0:
 		return Form{Fact, []Affine{up[0].Shift(-1)}}
 	case len(up) == 1 && len(down) == 1:
-		if x := down[0]; len(x.Terms) == 1 && x.Terms[0].K.Cmp(ratOne) == 0 && x.c().Sign() == 0 && !up[0].Sub(x).IsConst() {
+		if x := down[0]; len(x.Terms) == 1 && isOne(x.Terms[0].K) && x.c().Sign() == 0 && !up[0].Sub(x).IsConst() {
 			// Γ(x+n)/Γ(x) over a bare variable x: the rising factorial.
 			return Form{Rising, []Affine{x, up[0].Sub(x)}}
 		}

@@ -697,7 +697,7 @@ func logScale(t *Term, k Affine) *Term {
 	if k.IsConst() && k.c().IsInt() {
 		return t.PowInt(k.c().Num().Int64())
 	}
-	if t.Coef.Cmp(ratOne) == 0 && len(t.Gamma) == 0 && t.SqrtPi == 0 && len(t.Pows) == 1 && t.Pows[0].Exp.IsConst() && t.Exp.IsConst() && t.Exp.c().Sign() == 0 {
+	if isOne(t.Coef) && len(t.Gamma) == 0 && t.SqrtPi == 0 && len(t.Pows) == 1 && t.Pows[0].Exp.IsConst() && t.Exp.IsConst() && t.Exp.c().Sign() == 0 {
 		p := t.Pows[0]
 		return PowOf(p.Base, k.Scale(p.Exp.c()))
 	}

@@ -60,7 +60,7 @@ func gammaLists(t *Term) (up, down []Affine) {
 // negative binomial probability of f failures before the s-th success
 // (common practice), however the binomial's k is named.
 func recogniseNegBinomial(t *Term) Form {
-	if t.Coef.Cmp(ratOne) != 0 || t.SqrtPi != 0 || len(t.Pows) != 2 || !t.Exp.IsConst() || t.Exp.c().Sign() != 0 {
+	if !isOne(t.Coef) || t.SqrtPi != 0 || len(t.Pows) != 2 || !t.Exp.IsConst() || t.Exp.c().Sign() != 0 {
 		return Form{}
 	}
 	up, down := gammaLists(t)
@@ -89,7 +89,7 @@ func recogniseNegBinomial(t *Term) Form {
 // the hypergeometric probability C(K,k)·C(N−K,n−k)/C(N,n) (common
 // practice), in any order of its factors.
 func recogniseHypergeometric(t *Term) Form {
-	if t.Coef.Cmp(ratOne) != 0 || t.SqrtPi != 0 || len(t.Pows) != 0 || !t.Exp.IsConst() || t.Exp.c().Sign() != 0 {
+	if !isOne(t.Coef) || t.SqrtPi != 0 || len(t.Pows) != 0 || !t.Exp.IsConst() || t.Exp.c().Sign() != 0 {
 		return Form{}
 	}
 	up, down := gammaLists(t)

@@ -67,7 +67,7 @@ func (e *evaluator) counterEq(cond ast.Expr, counter types.Object) ast.Expr {
 
 // peelOf recognises a peel switch among the statements of body.
 func (e *evaluator) peelOf(l *Loop, body *ast.BlockStmt) *peel {
-	if l.Counter == nil || !l.From.IsConst() || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
+	if l.Counter == nil || !l.From.IsConst() || !isUnit(l.Step) {
 		return nil
 	}
 	for _, st := range body.List {
@@ -994,7 +994,7 @@ func (e *evaluator) peelTrip(pl *peel, in env, roles map[types.Object]role) {
 // the third result is nil when the condition is not of that form.
 func (e *evaluator) guardRange(l *Loop, cond ast.Expr, en env) (Affine, Affine, *Term) {
 	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
-	if !ok || l.Step.Cmp(ratOne) != 0 && l.Step.Cmp(rat(-1)) != 0 {
+	if !ok || !isUnit(l.Step) {
 		return Int(0), l.Count, nil
 	}
 	op, x := b.Op, b.Y

@@ -18,7 +18,7 @@ func ProductOver(f *Term, t Sym, n Affine) *Term {
 	}
 	out := One()
 	// The coefficient: c^n.
-	if f.Coef.Cmp(ratOne) != 0 {
+	if !isOne(f.Coef) {
 		c := new(big.Rat).Abs(f.Coef)
 		if f.Coef.Sign() < 0 {
 			if !n.IsConst() {
@@ -28,7 +28,7 @@ func ProductOver(f *Term, t Sym, n Affine) *Term {
 				out = out.Neg()
 			}
 		}
-		if c.Cmp(ratOne) != 0 {
+		if !isOne(c) {
 			out = out.Mul(powN(Const(c), Int(1), n))
 		}
 	}
@@ -75,14 +75,14 @@ func ProductOver(f *Term, t Sym, n Affine) *Term {
 		if alpha.Sign() > 0 {
 			x := beta.Scale(new(big.Rat).Inv(alpha))
 			r = GammaOf(x.Add(n)).Div(GammaOf(x))
-			if alpha.Cmp(ratOne) != 0 {
+			if !isOne(alpha) {
 				r = r.Mul(powN(Const(alpha), Int(1), n))
 			}
 		} else {
 			a := new(big.Rat).Neg(alpha)
 			x := beta.Scale(new(big.Rat).Inv(a))
 			r = GammaOf(x.Shift(1)).Div(GammaOf(x.Shift(1).Sub(n)))
-			if a.Cmp(ratOne) != 0 {
+			if !isOne(a) {
 				r = r.Mul(powN(Const(a), Int(1), n))
 			}
 		}

@@ -38,7 +38,7 @@ func (t *Term) PowAffine(k Affine) *Term {
 		return nil
 	}
 	out := One()
-	if t.Coef.Cmp(ratOne) != 0 {
+	if !isOne(t.Coef) {
 		out.Pows = append(out.Pows, Power{Const(t.Coef), k})
 	}
 	if t.SqrtPi != 0 || len(t.Gamma) > 0 {

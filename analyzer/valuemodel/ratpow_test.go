@@ -74,3 +74,25 @@ func TestPowRatLimits(t *testing.T) {
 		t.Errorf("√4 = %v, want 2", got)
 	}
 }
+
+// TestIsOneAgreesWithCmp checks the allocation-free tests of 1 and ±1
+// against math/big's own comparison, on integers and fractions around
+// them, values beyond int64 and the zero Rat.
+func TestIsOneAgreesWithCmp(t *testing.T) {
+	huge, _ := new(big.Rat).SetString("18446744073709551617") // 2^64 + 1
+	cases := []*big.Rat{new(big.Rat), huge, new(big.Rat).Neg(huge)}
+	for _, n := range []int64{-3, -2, -1, 0, 1, 2, 3} {
+		for _, d := range []int64{1, 2, 3, -1, -2} {
+			cases = append(cases, big.NewRat(n, d))
+		}
+	}
+	for _, r := range cases {
+		if got, want := isOne(r), r.Cmp(big.NewRat(1, 1)) == 0; got != want {
+			t.Errorf("isOne(%v) = %v, want %v", r, got, want)
+		}
+		abs := new(big.Rat).Abs(r)
+		if got, want := isUnit(r), abs.Cmp(big.NewRat(1, 1)) == 0; got != want {
+			t.Errorf("isUnit(%v) = %v, want %v", r, got, want)
+		}
+	}
+}

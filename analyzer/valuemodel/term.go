@@ -167,7 +167,7 @@ func (t *Term) Affine() (Affine, bool) {
 		return Const(t.Coef), true
 	case 1:
 		p := t.Pows[0]
-		if p.Exp.IsConst() && p.Exp.c().Cmp(ratOne) == 0 {
+		if p.Exp.IsConst() && isOne(p.Exp.c()) {
 			return p.Base.Scale(t.Coef), true
 		}
 	}
@@ -352,7 +352,7 @@ func (t *Term) String() string {
 		return "?"
 	}
 	var num, den []string
-	if t.Coef.Cmp(ratOne) != 0 || (len(t.Gamma) == 0 && len(t.Pows) == 0 && t.SqrtPi == 0) {
+	if !isOne(t.Coef) || (len(t.Gamma) == 0 && len(t.Pows) == 0 && t.SqrtPi == 0) {
 		num = append(num, ratString(t.Coef))
 	}
 	// put writes s^k above the line for k > 0 and s^−k below it.
@@ -379,7 +379,7 @@ func (t *Term) String() string {
 			e = e.Scale(shared(-1))
 		}
 		s := "(" + p.Base.String() + ")"
-		if !(e.IsConst() && e.c().Cmp(ratOne) == 0) {
+		if !(e.IsConst() && isOne(e.c())) {
 			s += "^(" + e.String() + ")"
 		}
 		if neg {
@@ -417,7 +417,7 @@ func (t *Term) normPows() bool {
 		case b.IsConst() && b.c().Sign() > 0 && b.c().IsInt():
 			r, m := intRoot(b.c().Num())
 			b, e = Const(new(big.Rat).SetInt(r)), e.Scale(rat(m))
-		case !b.IsConst() && new(big.Rat).Abs(b.Terms[0].K).Cmp(ratOne) != 0:
+		case !b.IsConst() && !isUnit(b.Terms[0].K):
 			// (k·x + c)^e = |k|^e · (x·k/|k| + c/|k|)^e, kept exact when
 			// e is a small integer; the sign stays in the base, where
 			// it keeps the base positive.

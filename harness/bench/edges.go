@@ -47,15 +47,15 @@ func edges(overfact, baseline string, n int) error {
 	if err != nil {
 		return err
 	}
-	if _, _, err := runMeasured(gen, overfact, "helper", "-from", helper); err != nil {
+	if _, _, _, err := runMeasured(gen, overfact, "helper", "-from", helper); err != nil {
 		return fmt.Errorf("copying the helper module into the generated one: %v", err)
 	}
 	// A warm-up run builds what go list -export needs into the build
 	// cache, as any earlier build of the same code would have.
-	if _, _, err := runMeasured(std, overfact, "std"); err != nil {
+	if _, _, _, err := runMeasured(std, overfact, "std"); err != nil {
 		return err
 	}
-	if _, _, err := runMeasured(gen, overfact, "-test=false", "."); err != nil {
+	if _, _, _, err := runMeasured(gen, overfact, "-test=false", "."); err != nil {
 		return err
 	}
 	// -fix runs in one directory, the generated module copied back into
@@ -67,7 +67,7 @@ func edges(overfact, baseline string, n int) error {
 	if err := copyModule(gen, fixDir); err != nil {
 		return err
 	}
-	if _, _, err := runMeasured(fixDir, overfact, "-test=false", "."); err != nil {
+	if _, _, _, err := runMeasured(fixDir, overfact, "-test=false", "."); err != nil {
 		return err
 	}
 	sides := []string{overfact}
@@ -87,6 +87,7 @@ func edges(overfact, baseline string, n int) error {
 	} {
 		fmt.Printf("  %s: load average %s\n", c.label, loadAverage())
 		walls := make([][]float64, len(sides))
+		cpus := make([][]float64, len(sides))
 		kibs := make([][]float64, len(sides))
 		for i := 0; i < n; i++ {
 			for j := range sides {
@@ -98,11 +99,12 @@ func edges(overfact, baseline string, n int) error {
 						return err
 					}
 				}
-				wall, kib, err := runMeasured(dir, sides[side], c.args...)
+				wall, cpu, kib, err := runMeasured(dir, sides[side], c.args...)
 				if err != nil {
 					return fmt.Errorf("%s (%s): %v", c.label, sides[side], err)
 				}
 				walls[side] = append(walls[side], wall.Seconds())
+				cpus[side] = append(cpus[side], cpu.Seconds())
 				kibs[side] = append(kibs[side], float64(kib))
 			}
 		}
@@ -112,6 +114,7 @@ func edges(overfact, baseline string, n int) error {
 			if c.maxSeconds > 0 {
 				line += fmt.Sprintf(" (target %.0fs, ratio %.2f×)", c.maxSeconds, wall/c.maxSeconds)
 			}
+			line += fmt.Sprintf("  CPU %7.2fs", median(cpus[side]))
 			line += fmt.Sprintf("  peak RSS %6.0f MiB", mibs)
 			if c.maxMiB > 0 {
 				line += fmt.Sprintf(" (target %.0f MiB, ratio %.2f×)", c.maxMiB, mibs/c.maxMiB)
@@ -119,8 +122,8 @@ func edges(overfact, baseline string, n int) error {
 			fmt.Printf("%s  (median of %d; %s)\n", line, n, name)
 		}
 		if baseline != "" {
-			fmt.Printf("  %-10s %-32s wall %s  peak RSS %s\n", "", "target / baseline",
-				ratio(median(walls[0]), median(walls[1])), ratio(median(kibs[0]), median(kibs[1])))
+			fmt.Printf("  %-10s %-32s wall %s  CPU %s  peak RSS %s\n", "", "target / baseline",
+				ratio(median(walls[0]), median(walls[1])), ratio(median(cpus[0]), median(cpus[1])), ratio(median(kibs[0]), median(kibs[1])))
 		}
 		fmt.Printf("  %s: done, load average %s\n", c.label, loadAverage())
 	}
@@ -166,20 +169,20 @@ func loadAverage() string {
 	return strings.Join(f[:3], " ")
 }
 
-// runMeasured runs the command in dir and returns its wall time and the
-// peak RSS in KiB of it and its children. Exit status 3 (findings) is
+// runMeasured runs the command in dir and returns its wall time, the CPU
+// time (user and system) and the peak RSS in KiB of it and its children. Exit status 3 (findings) is
 // success here; so is 1 after -fix, which stops with fixes still to apply
 // once its rounds are spent (the 5 MB file has more findings than its
 // rounds fix), and says so on its standard error, which is kept.
-func runMeasured(dir, name string, args ...string) (time.Duration, int64, error) {
+func runMeasured(dir, name string, args ...string) (wall, cpu time.Duration, kib int64, err error) {
 	cmd := exec.Command(name, args...)
 	cmd.Dir = dir
 	cmd.Env = append(os.Environ(), "GOWORK=off")
 	var stderr bytes.Buffer
 	cmd.Stderr = &stderr
 	start := time.Now()
-	err := cmd.Run()
-	wall := time.Since(start)
+	err = cmd.Run()
+	wall = time.Since(start)
 	if ee, ok := err.(*exec.ExitError); ok && (ee.ExitCode() == 3 || ee.ExitCode() == 1 && bytes.Contains(stderr.Bytes(), []byte("rounds of fixes"))) {
 		if ee.ExitCode() == 1 {
 			fmt.Printf("    (%s: %s)\n", filepath.Base(name), firstLine(stderr.String()))
@@ -187,13 +190,12 @@ func runMeasured(dir, name string, args ...string) (time.Duration, int64, error)
 		err = nil
 	}
 	if err != nil {
-		return 0, 0, fmt.Errorf("%v: %s", err, firstLine(stderr.String()))
+		return 0, 0, 0, fmt.Errorf("%v: %s", err, firstLine(stderr.String()))
 	}
-	var kib int64
 	if ru, ok := cmd.ProcessState.SysUsage().(*syscall.Rusage); ok {
 		kib = ru.Maxrss
 	}
-	return wall, kib, nil
+	return wall, cmd.ProcessState.UserTime() + cmd.ProcessState.SystemTime(), kib, nil
 }
 
 func firstLine(s string) string {

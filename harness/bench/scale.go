@@ -11,6 +11,7 @@ import (
 	"runtime/pprof"
 	"strconv"
 	"strings"
+	"syscall"
 	"time"
 
 	"golang.org/x/tools/go/analysis"
@@ -36,10 +37,10 @@ const (
 func scale() error {
 	fmt.Printf("analysis time of overfact (median of up to %d runs, %v per size at most) against input size\n", *runsFlag, *caseTimeFlag)
 	for _, kind := range []string{"long function", "many functions"} {
-		var base, allocBase float64
+		var base, allocBase, cpuBase float64
 		for _, div := range []int{16, 4, 1} {
 			c := makeCase(kind, div)
-			times, allocs, err := scaleChild(kind, div)
+			times, allocs, cpus, err := scaleChild(kind, div)
 			if cs, ok := err.(*cutShort); ok {
 				per := cs.ran.Seconds() / float64(c.units)
 				fmt.Printf("  %-15s %6d %-5s %2d×  first run unfinished after %.0fs of analysis: per 1000 %s more than %.3fms, per-unit ratio to 1× more than %s\n",
@@ -51,11 +52,12 @@ func scale() error {
 			}
 			per := median(times) / float64(c.units)
 			allocPer := median(allocs) / float64(c.units)
+			cpuPer := median(cpus) / float64(c.units)
 			if base == 0 {
-				base, allocBase = per, allocPer
+				base, allocBase, cpuBase = per, allocPer, cpuPer
 			}
-			fmt.Printf("  %-15s %6d %-5s %2d×  %d runs, median %.2fs, per 1000 %s %.3fms, per-unit ratio to 1× %s; allocations per 1000 %s %.0f, ratio %s\n",
-				kind, c.units, c.unit, 16/div, len(times), median(times), c.unit, per*1e6, ratio(per, base), c.unit, allocPer*1000, ratio(allocPer, allocBase))
+			fmt.Printf("  %-15s %6d %-5s %2d×  %d runs, median %.2fs, per 1000 %s %.3fms, per-unit ratio to 1× %s; allocations per 1000 %s %.0f, ratio %s; CPU per 1000 %s %.3fms, ratio %s\n",
+				kind, c.units, c.unit, 16/div, len(times), median(times), c.unit, per*1e6, ratio(per, base), c.unit, allocPer*1000, ratio(allocPer, allocBase), c.unit, cpuPer*1e6, ratio(cpuPer, cpuBase))
 		}
 	}
 	return nil
@@ -64,12 +66,13 @@ func scale() error {
 // scaleChild measures one case in a child process, which is killed when
 // the case's time is up: checker.Analyze cannot be interrupted, and a
 // superlinear analyzer would otherwise never finish the largest cases.
-// It returns the analysis times of the runs that finished, and the heap
-// allocations each made for the generated package.
-func scaleChild(kind string, div int) (times, allocs []float64, err error) {
+// It returns the analysis times of the runs that finished, the heap
+// allocations each made for the generated package, and the CPU time
+// (user and system) of the process during each.
+func scaleChild(kind string, div int) (times, allocs, cpus []float64, err error) {
 	exe, err := os.Executable()
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
 	ctx, cancel := context.WithTimeout(context.Background(), *caseTimeFlag)
 	defer cancel()
@@ -77,10 +80,10 @@ func scaleChild(kind string, div int) (times, allocs []float64, err error) {
 	cmd.Stderr = os.Stderr
 	out, err := cmd.StdoutPipe()
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
 	if err := cmd.Start(); err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
 	var loaded time.Time
 	sc := bufio.NewScanner(out)
@@ -90,24 +93,25 @@ func scaleChild(kind string, div int) (times, allocs []float64, err error) {
 			continue
 		}
 		f := strings.Fields(sc.Text())
-		if len(f) != 2 {
-			return nil, nil, fmt.Errorf("bad child output %q", sc.Text())
+		if len(f) != 3 {
+			return nil, nil, nil, fmt.Errorf("bad child output %q", sc.Text())
 		}
 		t, err1 := strconv.ParseFloat(f[0], 64)
 		a, err2 := strconv.ParseFloat(f[1], 64)
-		if err1 != nil || err2 != nil {
-			return nil, nil, fmt.Errorf("bad child output %q", sc.Text())
+		c, err3 := strconv.ParseFloat(f[2], 64)
+		if err1 != nil || err2 != nil || err3 != nil {
+			return nil, nil, nil, fmt.Errorf("bad child output %q", sc.Text())
 		}
-		times, allocs = append(times, t), append(allocs, a)
+		times, allocs, cpus = append(times, t), append(allocs, a), append(cpus, c)
 	}
 	if err := cmd.Wait(); err != nil && ctx.Err() == nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
 	if len(times) == 0 && !loaded.IsZero() {
 		// A lower bound on the first run, which was cut short.
-		return nil, nil, &cutShort{time.Since(loaded)}
+		return nil, nil, nil, &cutShort{time.Since(loaded)}
 	}
-	return times, allocs, nil
+	return times, allocs, cpus, nil
 }
 
 // cutShort reports a case whose first run did not finish in time.
@@ -156,17 +160,30 @@ func runScaleCase(spec string) error {
 		if err != nil {
 			return err
 		}
+		cpu0 := cpuTime()
 		allocs, g, err := analyzeCounted(pkg)
 		if err != nil {
 			return err
 		}
+		cpu := cpuTime() - cpu0
 		d, err := ownTime(g, pkg)
 		if err != nil {
 			return err
 		}
-		fmt.Println(d.Seconds(), int64(allocs)-int64(baseAllocs))
+		fmt.Println(d.Seconds(), int64(allocs)-int64(baseAllocs), cpu.Seconds())
 	}
 	return nil
+}
+
+// cpuTime returns the user and system CPU time of the process so far: on
+// a machine shared with other work it moves far less than the wall time
+// (the collector's work on an idle second core counts in it too).
+func cpuTime() time.Duration {
+	var ru syscall.Rusage
+	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err != nil {
+		return 0
+	}
+	return time.Duration(ru.Utime.Nano() + ru.Stime.Nano())
 }
 
 // analyzeCounted runs overfact on pkg and its dependencies and returns

@@ -23,12 +23,13 @@ type edit struct {
 // fixPlan is the set of fixes taken in one round, their edits per file.
 type fixPlan struct {
 	files    map[string][]edit
-	accepted map[string]bool // fix keys, to drop the copy a test variant reports
-	taken    []finding       // the findings whose fixes were taken
-	takenAt  []string        // where they are and what they say, for messages
-	clashed  int             // fixes left for a later round: their edits overlap a taken fix
-	deferred int             // definitions' fixes left for a later round (see planFixes)
-	refused  []string        // packages not fixed because they have errors
+	near     map[string]editIndex // files' edits by where they lie, to check a new edit against
+	accepted map[string]bool      // fix keys, to drop the copy a test variant reports
+	taken    []finding            // the findings whose fixes were taken
+	takenAt  []string             // where they are and what they say, for messages
+	clashed  int                  // fixes left for a later round: their edits overlap a taken fix
+	deferred int                  // definitions' fixes left for a later round (see planFixes)
+	refused  []string             // packages not fixed because they have errors
 }
 
 // A finding is where a diagnostic lies, by physical file and byte offset,
@@ -69,7 +70,7 @@ func findingOf(fset *token.FileSet, d analysis.Diagnostic) finding {
 // function is judged the same after rewrites elsewhere. That saves the
 // analysis of the whole package that a round of its own would cost.
 func planFixes(roots []*checker.Action, done map[finding]bool, last func(category string) bool, complete bool) *fixPlan {
-	p := &fixPlan{files: make(map[string][]edit), accepted: make(map[string]bool)}
+	p := &fixPlan{files: make(map[string][]edit), near: make(map[string]editIndex), accepted: make(map[string]bool)}
 	type candidate struct {
 		fset      *token.FileSet
 		d         analysis.Diagnostic
@@ -241,22 +242,76 @@ func (p *fixPlan) add(fset *token.FileSet, fix analysis.SuggestedFix, generated 
 	}
 	p.accepted[key] = true
 	for _, e := range fresh {
-		p.files[e.file] = append(p.files[e.file], e)
+		p.keep(e)
 	}
 	return added
 }
 
-// check reports whether e equals a taken edit or clashes with one.
+// keep adds e to the taken edits of its file.
+func (p *fixPlan) keep(e edit) {
+	idx, ok := p.near[e.file]
+	if !ok {
+		idx = make(editIndex)
+		p.near[e.file] = idx
+	}
+	idx.add(e, len(p.files[e.file]))
+	p.files[e.file] = append(p.files[e.file], e)
+}
+
+// check reports whether e equals a taken edit or clashes with one: the
+// first taken edit of its file, in the order taken, that does either
+// decides. Only the edits near e can (see editIndex).
 func (p *fixPlan) check(e edit) (dup, clash bool) {
-	for _, f := range p.files[e.file] {
-		if f == e {
-			return true, false
-		}
-		if e.Clashes(f.Edit) {
-			return false, true
+	taken := p.files[e.file]
+	first := p.near[e.file].first(e, func(i int) bool {
+		return taken[i] == e || e.Clashes(taken[i].Edit)
+	})
+	switch {
+	case first < 0:
+		return false, false
+	case taken[first] == e:
+		return true, false
+	}
+	return false, true
+}
+
+// An editIndex lists the edits of one file by the stretches of
+// editStretch bytes they touch, as indices into the file's edits in the
+// order taken. An edit equal to another, or clashing with it (they touch
+// the same bytes, or insert at one point), touches a stretch the other
+// touches too, so a new edit need only be compared with the edits of its
+// own stretches: a round that takes tens of thousands of fixes in one
+// file would otherwise compare every edit with every other.
+type editIndex map[int][]int
+
+const editStretch = 4096
+
+// stretches returns the first and last stretch e touches, its end
+// included (an insertion touches the stretch of its point).
+func stretches(e edit) (lo, hi int) {
+	return e.Start / editStretch, max(e.Start, e.End) / editStretch
+}
+
+func (x editIndex) add(e edit, i int) {
+	lo, hi := stretches(e)
+	for s := lo; s <= hi; s++ {
+		x[s] = append(x[s], i)
+	}
+}
+
+// first returns the smallest index among the edits sharing a stretch
+// with e for which match holds, or -1.
+func (x editIndex) first(e edit, match func(i int) bool) int {
+	found := -1
+	lo, hi := stretches(e)
+	for s := lo; s <= hi; s++ {
+		for _, i := range x[s] {
+			if (found < 0 || i < found) && match(i) {
+				found = i
+			}
 		}
 	}
-	return false, false
+	return found
 }
 
 // moved returns the offset in the edited text of the byte at offset off

@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/parser"
 	"go/token"
+	"math/rand/v2"
 	"strings"
 	"testing"
 
@@ -182,5 +183,58 @@ func TestDefinitionsJoinACompleteRound(t *testing.T) {
 	p = plan(true, append(diags, diag("factorial-ratio", "b :=", "v"))...)
 	if p.clashed != 1 || p.deferred != 2 {
 		t.Errorf("round with a clash: %d clashed, %d deferred; want 1 and 2", p.clashed, p.deferred)
+	}
+}
+
+// TestEditIndexAgreesWithScan checks the plan's check of a new edit
+// against the definition it replaces: the first taken edit of the file,
+// in the order taken, that equals the new edit or clashes with it
+// (textedit.Edit.Clashes) decides. Random edits, insertions and
+// replacements, some spanning several of the index's stretches, some
+// duplicated, are offered in turn.
+func TestEditIndexAgreesWithScan(t *testing.T) {
+	rng := rand.New(rand.NewPCG(14, 1))
+	for trial := 0; trial < 20; trial++ {
+		p := &fixPlan{files: make(map[string][]edit), near: make(map[string]editIndex), accepted: make(map[string]bool)}
+		var offered []edit
+		for n := 0; n < 400; n++ {
+			var e edit
+			if n > 0 && rng.IntN(8) == 0 {
+				e = offered[rng.IntN(len(offered))] // the same edit again, as two fixes adding one import
+			} else {
+				start := rng.IntN(20 * editStretch)
+				end := start
+				switch rng.IntN(3) {
+				case 1:
+					end += 1 + rng.IntN(64)
+				case 2:
+					end += 1 + rng.IntN(3*editStretch)
+				}
+				e = edit{file: "p.go", Edit: textedit.Edit{Start: start, End: end, Text: []string{"a", "b"}[rng.IntN(2)]}}
+			}
+			offered = append(offered, e)
+			wantDup, wantClash := false, false
+			for _, f := range p.files[e.file] {
+				if f == e {
+					wantDup = true
+					break
+				}
+				if e.Clashes(f.Edit) {
+					wantClash = true
+					break
+				}
+			}
+			dup, clash := p.check(e)
+			if dup != wantDup || clash != wantClash {
+				t.Fatalf("trial %d, edit %d %+v: check = dup %v, clash %v; the scan of every taken edit says dup %v, clash %v",
+					trial, n, e, dup, clash, wantDup, wantClash)
+			}
+			// A fix's own edits are not checked against each other
+			// (two insertions at one point apply in the fix's order):
+			// now and then one is kept although it clashes.
+			if !dup && (!clash || rng.IntN(10) == 0) {
+				p.keep(e)
+			}
+		}
 	}
 }
