@@ -120,6 +120,13 @@ var diffCases = []diffCase{
 	{pkg: "fixguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, noBreak: true},
 	{pkg: "fixguard", fn: "Pairings", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
 	{pkg: "fixguard", fn: "PairingsRec", loops: []string{"n := 0; n <= 25; n++"}, args: "int32(n)", typ: "int32", ref: refDoubleFactorial, guard: true},
+	// Guards before a product loop whose product the function returns,
+	// times a constant: the grids cross each first bad value, and
+	// LateSlots' stays below its own early return at n > 40.
+	{pkg: "fixguard", fn: "Swaps", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: scaled(2, refFactorial), guard: true},
+	{pkg: "fixguard", fn: "OddBays", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
+	{pkg: "fixguard", fn: "LateSlots", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refProductFrom(4), guard: true},
+	{pkg: "fixguard", fn: "Wear", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refRisingFrom(5), guard: true},
 	// Right before the fixes wherever the factorial inside them overflows
 	// (the term or sum is finite, or below the smallest float64): no fix
 	// may make them panic there.
