@@ -133,7 +133,6 @@ var stillWrong = map[string]string{
 var openViolations = map[string]string{
 	"demo/sampling.AcceptProbability": "changed while right: (500, 5, 34.5): was a panic: runtime error: integer divide by zero, now NaN, exact -9.74974e+773 (overflows float64)",
 	"demo/sampling.LotAcceptance":     "newly panicking: (12, 67, 100, 5): was NaN, now panics: lgamma: MustChooseInt64(-55, 100): result does not fit in int64, exact NaN",
-	"src/bottling.LineOrders":         "panic not naming its arguments: (34): was -8764578968847253504, now panics: Factorial: n = 30 overflows int64 (largest is 20), exact 2.65253e+32 (overflows int64)",
 	"src/reliability.Availability":    "newly panicking: (67, 20, 100): was -2.242735828178614e+152, now panics: lgamma: MustChooseInt64(67, 30): result does not fit in int64, exact -1.071157332...",
 }
 

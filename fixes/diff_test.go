@@ -127,6 +127,9 @@ var diffCases = []diffCase{
 	{pkg: "fixguard", fn: "OddBays", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
 	{pkg: "fixguard", fn: "LateSlots", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refProductFrom(4), guard: true},
 	{pkg: "fixguard", fn: "Wear", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refRisingFrom(5), guard: true},
+	// A clamped argument: the guard at the entry tests the caller's n.
+	{pkg: "fixguard", fn: "Capped", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refFactorialTo(25), guard: true},
+	{pkg: "fixguard", fn: "Line", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refFactorialTo(30), guard: true},
 	// Right before the fixes wherever the factorial inside them overflows
 	// (the term or sum is finite, or below the smallest float64): no fix
 	// may make them panic there.

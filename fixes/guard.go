@@ -44,7 +44,7 @@ func buildGuard(b *builder) error {
 	if _, obj := b.scopeAt(body.Lbrace+1).LookupParent(m.Param.Name(), body.Lbrace+1); obj != m.Param {
 		return fmt.Errorf("%s is not visible where the function starts", m.Param.Name())
 	}
-	if b.assignedInBody(m.Param, body) {
+	if b.assignedInBody(m.Param, body) && !m.EntryGuard {
 		// The guard tests the value the function was called with.
 		return fmt.Errorf("%s is assigned in the function, so its first value does not bound the factorial", m.Param.Name())
 	}
@@ -139,12 +139,7 @@ func buildLoopGuard(b *builder) error {
 	if _, obj := b.scopeAt(m.Loop.Pos()).LookupParent(m.Param.Name(), m.Loop.Pos()); obj != m.Param {
 		return fmt.Errorf("%s is not visible before the loop", m.Param.Name())
 	}
-	before := false
-	assigned.Each(b.pass.TypesInfo, body, func(n ast.Node) bool { return n.Pos() >= m.Loop.Pos() }, func(v types.Object, at ast.Node) bool {
-		before = before || v == m.Param && at.Pos() < m.Loop.Pos()
-		return !before
-	})
-	if before {
+	if assigned.Before(b.pass.TypesInfo, body, m.Param, m.Loop.Pos()) {
 		return fmt.Errorf("%s is assigned before the loop, so the guard would not test the argument", m.Param.Name())
 	}
 	// The guard goes at the start of the loop's line, above the comment

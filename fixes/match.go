@@ -105,4 +105,9 @@ type Match struct {
 	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
 	Param    types.Object
 	FirstBad int64
+	// EntryGuard, for ShapeFactorial, tells that the analyzer's range
+	// analysis shows the guard on Param's value at the function's entry
+	// exact although the function assigns Param later (a clamp before
+	// the product): it fires exactly where the product leaves the type.
+	EntryGuard bool
 }

@@ -124,8 +124,10 @@ func Wear(n int32) int32 {
 	return w
 }
 
-// Capped clamps its argument before the loop: a guard there would test
-// the clamped value, not the caller's, so none is offered.
+// Capped clamps its argument before the loop: a guard there would name
+// the clamped value, not the caller's, so the guard goes at the entry,
+// where it tests the caller's n; the range analysis shows that n ≥ 21
+// there is exactly where the clamped n is 21 or more.
 func Capped(n int64) int64 {
 	if n > 25 {
 		n = 25
@@ -145,4 +147,28 @@ func Halved(n int64) int64 {
 		r *= i
 	}
 	return r / 2
+}
+
+// Line is the orders of a segment of at most 30 units, by Orderings:
+// Orderings' own guard would name 30 for any longer segment, so the call
+// gets a guard on the caller's n.
+func Line(n int64) int64 {
+	if n > 30 {
+		n = 30
+	}
+	return Orderings(n) // want `Orderings\(n\): factorial of n in int64 wraps for n ≥ 21 .*; n may reach 30 here, after Line reassigns it`
+}
+
+// Floored counts at least 30 units: every call wraps, whatever its
+// argument, and no guard can tell a right call from a wrong one, so none
+// is offered.
+func Floored(n int64) int64 {
+	if n < 30 {
+		n = 30
+	}
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 .*; n is at least 30 here`
+		r *= i
+	}
+	return r
 }
