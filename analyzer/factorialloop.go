@@ -111,7 +111,16 @@ func (fc *fnCtx) loopGuard(m *fixes.Match, al *accLoop, t numType, param ast.Exp
 	if t.Float || !ok || sig == nil || first <= 0 || first == math.MaxInt64 || !isParam(sig, fc.c.objOf(id)) || !fc.productReturned(al) {
 		return
 	}
-	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeLoopGuard, []ast.Expr{id}, fc.c.objOf(id), first
+	p := fc.c.objOf(id)
+	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeLoopGuard, []ast.Expr{id}, p, first
+	if assigned.Before(fc.c.pass.TypesInfo, funcBody(fc.node), p, al.shape.stmt.Pos()) {
+		// A guard before the loop would name the assigned value: test
+		// the caller's at the entry where that is exact, or nowhere.
+		m.Shape, m.EntryGuard = fixes.ShapeNone, false
+		if fc.entryGuardHolds(p, al.shape.stmt, first) {
+			m.Shape, m.EntryGuard = fixes.ShapeFactorial, true
+		}
+	}
 }
 
 // productReturned reports whether every return that can follow the loop
@@ -136,7 +145,12 @@ func (fc *fnCtx) productReturned(al *accLoop) bool {
 	ast.Inspect(d.Body, func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.FuncLit:
+			// A closure (a deferred one included) may change the
+			// product after the loop.
+			others = others || mentions(fc.c.pass.TypesInfo, n, al.acc)
 			return false
+		case *ast.UnaryExpr:
+			others = others || n.Op == token.AND && fc.c.objOf(n.X) == al.acc
 		case *ast.BranchStmt:
 			others = others || n.Tok == token.GOTO
 		case *ast.ReturnStmt:
@@ -499,10 +513,24 @@ func (fc *fnCtx) fallingSpan(al *accLoop) (ast.Expr, ast.Expr) {
 	if sh.step != 1 || sh.first == nil || sh.last == nil || al.top == nil || al.topOff != 0 || al.count == nil || al.coff != 0 {
 		return nil, nil
 	}
-	if fc.c.objOf(fc.stripConv(al.mult)) != sh.iv {
+	if fc.c.objOf(fc.stripConv(al.mult)) != sh.iv && !fc.neverNegative(al.top) {
+		// A factor written off the counter (p *= i + 1 for i from n−k
+		// to n−1) is the fixer's to check; over a negative n the
+		// falling helpers panic where the loop multiplied negative
+		// factors, so only a top that is never negative is handed over.
 		return nil, nil
 	}
 	return al.top, al.count
+}
+
+// neverNegative reports whether the integer e is unsigned or never
+// negative where it is evaluated.
+func (fc *fnCtx) neverNegative(e ast.Expr) bool {
+	if b, ok := fc.c.pass.TypesInfo.TypeOf(e).Underlying().(*types.Basic); ok && b.Info()&types.IsUnsigned != 0 {
+		return true
+	}
+	iv := fc.rangeOf(e)
+	return !iv.IsEmpty() && iv.Lo >= 0
 }
 
 // fallingTop returns the expression that names a falling factorial's

@@ -113,6 +113,10 @@ var diffCases = []diffCase{
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// Factors written off the counter; k past n, where the falling
+	// factorial is 0 (the unsigned loop start wraps for k > n+2).
+	{pkg: "fixloop", fn: "Picks", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refFalling},
+	{pkg: "fixloop", fn: "Draws", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refFalling},
 	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
 	// A float64 n! returned as it is is +Inf exactly where n! is beyond
