@@ -80,7 +80,7 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 	// x^k/k!, 1/float64(f)) may still give a correct result past the
 	// point where the product itself no longer fits, and a guard would
 	// make that function panic.
-	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) || !fc.entryGuardExact(al, t) {
+	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) || !fc.entryGuardExact(al, t) || !t.Float && !fc.productReturned(al) {
 		if st := fc.seriesTermMatch(al); st != nil {
 			return st
 		}
@@ -224,19 +224,29 @@ func (fc *fnCtx) oncePerCall(loop ast.Stmt) bool {
 // accTimesConst reports whether e is acc, or acc times an integer
 // constant of at least 1, in any order and parentheses.
 func (fc *fnCtx) accTimesConst(e ast.Expr, acc types.Object) bool {
-	switch e := ast.Unparen(e).(type) {
-	case *ast.Ident:
-		return fc.c.objOf(e) == acc
-	case *ast.BinaryExpr:
-		if e.Op != token.MUL {
-			return false
-		}
-		if c, ok := fc.intConst(e.Y); ok && c >= 1 {
-			return fc.accTimesConst(e.X, acc)
-		}
-		if c, ok := fc.intConst(e.X); ok && c >= 1 {
-			return fc.accTimesConst(e.Y, acc)
-		}
+	return fc.timesConst(e, func(x ast.Expr) bool {
+		id, ok := x.(*ast.Ident)
+		return ok && fc.c.objOf(id) == acc
+	})
+}
+
+// timesConst reports whether e is a value that is accepts, or one times an
+// integer constant of at least 1, in any order and parentheses: a value
+// that leaves an integer type wherever the accepted one does.
+func (fc *fnCtx) timesConst(e ast.Expr, is func(ast.Expr) bool) bool {
+	e = ast.Unparen(e)
+	if is(e) {
+		return true
+	}
+	b, ok := e.(*ast.BinaryExpr)
+	if !ok || b.Op != token.MUL {
+		return false
+	}
+	if c, ok := fc.intConst(b.Y); ok && c >= 1 {
+		return fc.timesConst(b.X, is)
+	}
+	if c, ok := fc.intConst(b.X); ok && c >= 1 {
+		return fc.timesConst(b.Y, is)
 	}
 	return false
 }

@@ -27,7 +27,7 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	}
 	name, off := shownFactorial(ff.recN, 0)
 	shape := fixes.ShapeFactorial
-	if ff.kind != kindFactorial && ff.kind != kindDouble || ff.stored {
+	if ff.kind != kindFactorial && ff.kind != kindDouble || ff.stored || !fc.recursionGuardExact(ff, first) {
 		shape = fixes.ShapeNone
 	}
 	fc.report(finding{
@@ -157,4 +157,36 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 		return &facFunc{kind: kind, param: idx, param2: -1, rec: b, recN: fc.stripConv(nExpr)}
 	}
 	return nil
+}
+
+// recursionGuardExact reports whether a guard at the function's entry,
+// n ≥ first, fires exactly where the recursion's result leaves its type:
+// the recursive return gives the product itself (times a positive
+// constant, not n*f(n-1) % m), and every other return is a base case, a
+// constant of 1 or more reached only for n ≤ 1, so that the value at n is
+// n! (or n!!) times that constant. A return for large n (if n > 100 {
+// return 0 }) keeps the guard out: it would fire where 0 was returned.
+func (fc *fnCtx) recursionGuardExact(ff *facFunc, first int64) bool {
+	p := fc.c.objOf(ff.recN)
+	ok, found := p != nil, false
+	ast.Inspect(ff.decl.Body, func(n ast.Node) bool {
+		ret, isRet := n.(*ast.ReturnStmt)
+		switch {
+		case !ok:
+			return false
+		case !isRet:
+			_, lit := n.(*ast.FuncLit)
+			return !lit
+		case len(ret.Results) != 1:
+			ok = false
+		case fc.timesConst(ret.Results[0], func(e ast.Expr) bool { return e == ff.rec }):
+			found = true
+		default:
+			c, isConst := fc.intConst(ret.Results[0])
+			iv := fc.entryRange(p, ret)
+			ok = iv.IsEmpty() || isConst && c >= 1 && iv.Hi <= 1
+		}
+		return false
+	})
+	return ok && found
 }

@@ -173,3 +173,17 @@ func Rounds(n, rounds int64) int64 { // want Rounds:`factorial of parameter 0, b
 	}
 	return r
 }
+
+// LastDigits returns n!, or on request its last three digits, which fit
+// whatever n is: a guard would make that call panic, so none is offered
+// although the function returns its product elsewhere.
+func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of parameter 0, breaks from 21`
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+		r *= i
+	}
+	if short {
+		return r % 1000
+	}
+	return r
+}
