@@ -5,6 +5,7 @@ import (
 	"go/ast"
 
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // The factorial-call category: a call of a factorial-valued function
@@ -24,6 +25,10 @@ func (fc *fnCtx) checkFactorialCall(call *ast.CallExpr) {
 	}
 	first := firstBadOf(f.kind, f.t) - f.off
 	j := fc.judge(f.arg, first)
+	if !j.definite && !j.silent && !f.t.Float {
+		fc.checkClampedCall(call, f, first, j)
+		return
+	}
 	if !j.definite || f.t.Float && fc.returnedAsIs(call) {
 		return
 	}
@@ -36,5 +41,40 @@ func (fc *fnCtx) checkFactorialCall(call *ast.CallExpr) {
 		related:  c.relatedDef(f.fn.Name(), f.fn.Pos()),
 		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
 			Result: c.pass.TypesInfo.TypeOf(call), FirstBad: first},
+	})
+}
+
+// checkClampedCall reports an integer factorial call that only may
+// reach its limit, return f(n), where the function assigns its
+// parameter n before passing it (if n > 30 { n = 30 }): the factorial
+// function's own guard would name the value passed to it, which the
+// caller's caller never passed, so the call gets the guard on the
+// caller's argument at the entry, where the range analysis shows that
+// exact (entryGuardHolds).
+func (fc *fnCtx) checkClampedCall(call *ast.CallExpr, f factor, first int64, j judgement) {
+	d, isDecl := fc.node.(*ast.FuncDecl)
+	body, sig := funcBody(fc.node), fc.signature()
+	id, ok := ast.Unparen(f.arg).(*ast.Ident)
+	if !isDecl || !ok || body == nil || sig == nil || !isParam(sig, fc.c.objOf(id)) {
+		return
+	}
+	p := fc.c.objOf(id)
+	var ret *ast.ReturnStmt
+	for _, s := range body.List {
+		if r, ok := s.(*ast.ReturnStmt); ok && len(r.Results) == 1 && ast.Unparen(r.Results[0]) == call {
+			ret = r
+		}
+	}
+	if ret == nil || !assigned.Before(fc.c.pass.TypesInfo, body, p, ret.Pos()) || !fc.entryGuardHolds(p, ret, first) {
+		return
+	}
+	name, off := shownFactorial(f.arg, f.off)
+	fc.report(finding{
+		node:    call,
+		cat:     catCall,
+		msg:     fmt.Sprintf("%s(%s): %s%s, after %s reassigns it", f.fn.Name(), src(f.arg), factorialLimitText(f.kind, name, off, f.t), j.clause, d.Name.Name),
+		related: fc.c.relatedDef(f.fn.Name(), f.fn.Pos()),
+		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
+			Result: fc.c.pass.TypesInfo.TypeOf(call), Func: fc.node, Param: p, FirstBad: first, EntryGuard: true},
 	})
 }

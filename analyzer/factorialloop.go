@@ -4,11 +4,13 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"go/types"
 	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // The factorial-loop category: a loop that multiplies an accumulator by
@@ -78,7 +80,7 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 	// x^k/k!, 1/float64(f)) may still give a correct result past the
 	// point where the product itself no longer fits, and a guard would
 	// make that function panic.
-	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) {
+	if al.kind != kindFactorial && al.kind != kindDouble || !fc.returnsProduct(al) || !fc.entryGuardExact(al, t) || !t.Float && !fc.productReturned(al) {
 		if st := fc.seriesTermMatch(al); st != nil {
 			return st
 		}
@@ -88,8 +90,165 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		m.Args = []ast.Expr{al.top}
 		m.Param = fc.c.objOf(al.top)
 		m.FirstBad = firstBadOf(al.kind, t) - al.topOff
+		if m.Shape == fixes.ShapeNone && (al.kind == kindFactorial || al.kind == kindDouble) {
+			fc.loopGuard(m, al, t, al.top, m.FirstBad)
+		}
 	}
 	return m
+}
+
+// loopGuard makes m a range guard before the loop (ShapeLoopGuard) when
+// the loop's product decides the function's integer result and the
+// parameter v, named by param, decides the product: the loop's product
+// leaves t exactly when the loop starts with v ≥ first, and the
+// function then returns that product times a positive constant, which
+// leaves t too. The guard then panics only where the function would
+// return a wrapped value, and everywhere it would. A float result is
+// left alone: +Inf may still serve a caller.
+func (fc *fnCtx) loopGuard(m *fixes.Match, al *accLoop, t numType, param ast.Expr, first int64) {
+	id, ok := ast.Unparen(param).(*ast.Ident)
+	sig := fc.signature()
+	if t.Float || !ok || sig == nil || first <= 0 || first == math.MaxInt64 || !isParam(sig, fc.c.objOf(id)) || !fc.productReturned(al) {
+		return
+	}
+	p := fc.c.objOf(id)
+	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeLoopGuard, []ast.Expr{id}, p, first
+	if assigned.Before(fc.c.pass.TypesInfo, funcBody(fc.node), p, al.shape.stmt.Pos()) {
+		// A guard before the loop would name the assigned value: test
+		// the caller's at the entry where that is exact, or nowhere.
+		m.Shape, m.EntryGuard = fixes.ShapeNone, false
+		if fc.entryGuardHolds(p, al.shape.stmt, first) {
+			m.Shape, m.EntryGuard = fixes.ShapeFactorial, true
+		}
+	}
+}
+
+// productReturned reports whether every return that can follow the loop
+// returns its product times a positive integer constant (p, p * 2): the
+// loop runs at most once per call (no loop or closure around it, no
+// goto), runs to its end (no early exit), starts its accumulator at 1 or
+// more, and nothing after it changes the accumulator.
+func (fc *fnCtx) productReturned(al *accLoop) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	loop := al.shape.stmt
+	if !ok || d.Body == nil || al.early || al.div != nil {
+		return false
+	}
+	if iv := fc.entryRange(al.acc, loop); iv.IsEmpty() || iv.Lo < 1 {
+		return false
+	}
+	info := fc.c.pass.TypesInfo
+	if !fc.oncePerCall(loop) || assigned.In(info, d.Body, al.acc, func(n ast.Node) bool { return n.End() <= loop.End() }) {
+		return false
+	}
+	returned, others := 0, false
+	ast.Inspect(d.Body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			// A closure (a deferred one included) may change the
+			// product after the loop.
+			others = others || mentions(fc.c.pass.TypesInfo, n, al.acc)
+			return false
+		case *ast.UnaryExpr:
+			others = others || n.Op == token.AND && fc.c.objOf(n.X) == al.acc
+		case *ast.BranchStmt:
+			others = others || n.Tok == token.GOTO
+		case *ast.ReturnStmt:
+			if n.Pos() < loop.Pos() {
+				return false // before the loop: the guard is not reached there
+			}
+			if n.Pos() < loop.End() {
+				others = true
+				return false
+			}
+			if len(n.Results) == 1 && fc.accTimesConst(n.Results[0], al.acc) {
+				returned++
+			} else {
+				others = true
+			}
+		}
+		return !others
+	})
+	return returned > 0 && !others
+}
+
+// entryGuardExact reports whether a guard at the function's entry on
+// the loop's top parameter fires only where the loop runs: the loop is a
+// statement of the function's body itself (not inside a condition,
+// another loop or a closure), and no return before it can run with the
+// parameter at its first bad value or above. Otherwise the guard goes
+// before the loop (loopGuard), or nowhere.
+func (fc *fnCtx) entryGuardExact(al *accLoop, t numType) bool {
+	body, loop := funcBody(fc.node), al.shape.stmt
+	p := fc.c.objOf(al.top)
+	if body == nil || p == nil {
+		return false
+	}
+	top := false
+	for _, s := range body.List {
+		top = top || s == loop
+	}
+	first := firstBadOf(al.kind, t) - al.topOff
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			if iv := fc.entryRange(p, n); n.Pos() < loop.Pos() && !iv.IsEmpty() && iv.Hi >= first {
+				top = false
+			}
+		}
+		return top && n != nil && n.Pos() < loop.Pos()
+	})
+	return top
+}
+
+// oncePerCall reports whether the loop statement lies in no other loop
+// and no closure of its function, so that it starts once per call at
+// most.
+func (fc *fnCtx) oncePerCall(loop ast.Stmt) bool {
+	once := true
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if n == nil || n == loop || !once || n.Pos() > loop.Pos() || n.End() < loop.End() {
+			return false
+		}
+		switch n.(type) {
+		case *ast.ForStmt, *ast.RangeStmt, *ast.FuncLit:
+			once = false
+		}
+		return once
+	})
+	return once
+}
+
+// accTimesConst reports whether e is acc, or acc times an integer
+// constant of at least 1, in any order and parentheses.
+func (fc *fnCtx) accTimesConst(e ast.Expr, acc types.Object) bool {
+	return fc.timesConst(e, func(x ast.Expr) bool {
+		id, ok := x.(*ast.Ident)
+		return ok && fc.c.objOf(id) == acc
+	})
+}
+
+// timesConst reports whether e is a value that is accepts, or one times an
+// integer constant of at least 1, in any order and parentheses: a value
+// that leaves an integer type wherever the accepted one does.
+func (fc *fnCtx) timesConst(e ast.Expr, is func(ast.Expr) bool) bool {
+	e = ast.Unparen(e)
+	if is(e) {
+		return true
+	}
+	b, ok := e.(*ast.BinaryExpr)
+	if !ok || b.Op != token.MUL {
+		return false
+	}
+	if c, ok := fc.intConst(b.Y); ok && c >= 1 {
+		return fc.timesConst(b.X, is)
+	}
+	if c, ok := fc.intConst(b.X); ok && c >= 1 {
+		return fc.timesConst(b.Y, is)
+	}
+	return false
 }
 
 // returnsProduct reports whether al's product is the value of its
@@ -113,7 +272,7 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		// Only the joint reading applies: no expression counts the
 		// factors for the bounds of the top and the count to judge.
 		if msg, definite, _ := fc.fallingAffine(al, t); msg != "" {
-			fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
+			fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.fallingGuard(al, t)})
 		}
 		return
 	}
@@ -140,6 +299,8 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
 	} else if n, k := fc.fallingSpan(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
+	} else if judged {
+		m = fc.fallingGuard(al, t)
 	}
 	fc.noteCountSign(m)
 	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
@@ -153,29 +314,16 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 // the message (empty when the loop fits), whether the overflow is
 // certain, and false when the loop is not of this form.
 func (fc *fnCtx) fallingAffine(al *accLoop, t numType) (string, bool, bool) {
-	if al.top == nil || al.count == nil && al.span == nil {
+	id, first, ok := fc.fallingAffineLimit(al, t)
+	if !ok {
 		return "", false, false
 	}
-	top, ok1 := fc.linear(al.top)
-	cnt, ok2 := linear{}, true
-	if al.span != nil {
-		cnt = *al.span
-	} else {
-		cnt, ok2 = fc.linear(al.count)
-		cnt.C += al.coff
-	}
-	if !ok1 || !ok2 || len(top.Terms) != 1 || len(cnt.Terms) != 1 || top.Terms[0].Sym.Object != cnt.Terms[0].Sym.Object {
-		return "", false, false
-	}
-	v := top.Terms[0].Sym.Object
+	v := fc.c.objOf(id)
+	top, _ := fc.linear(al.top)
+	cnt, _ := fc.fallingCount(al)
 	a, b := top.Terms[0].K, top.C+al.topOff
 	c, d := cnt.Terms[0].K, cnt.C
-	first := thresholds.FallingAffineFirstBad(t.Num, a, b, c, d)
 	start := thresholds.FallingAffineStart(a, b, c, d)
-	id := identOf(fc.c.pass.TypesInfo, al.top, v)
-	if first == math.MaxInt64 || start == math.MaxInt64 || id == nil {
-		return "", false, false
-	}
 	vr := fc.rangeOf(id)
 	// Below the start either the loop makes no trips (the count is what
 	// starts it: MirroredHalls at n ≤ 0) or some factor is not positive,
@@ -193,6 +341,55 @@ func (fc *fnCtx) fallingAffine(al *accLoop, t numType) (string, bool, bool) {
 	msg := fmt.Sprintf("falling factorial of %s factors down from %s in %s %s for %s ≥ %d%s",
 		affineText(v.Name(), c, d), affineText(v.Name(), a, b), t.typeName(), verb(t), v.Name(), first, clause)
 	return msg, definite, true
+}
+
+// fallingGuard is the match of a falling-factorial loop with no rewrite
+// of its own: a range guard where one variable decides the product
+// (fallingAffineLimit).
+func (fc *fnCtx) fallingGuard(al *accLoop, t numType) *fixes.Match {
+	m := fc.bareLoopMatch(al, t)
+	if id, first, ok := fc.fallingAffineLimit(al, t); ok {
+		fc.loopGuard(m, al, t, id, first)
+	}
+	return m
+}
+
+// fallingCount is the number of factors of a falling-factorial loop as
+// a linear form.
+func (fc *fnCtx) fallingCount(al *accLoop) (linear, bool) {
+	if al.span != nil {
+		return *al.span, true
+	}
+	if al.count == nil {
+		return linear{}, false
+	}
+	cnt, ok := fc.linear(al.count)
+	cnt.C += al.coff
+	return cnt, ok
+}
+
+// fallingAffineLimit reads a falling factorial whose largest factor and
+// number of factors are both affine in one variable v (see
+// fallingAffine): the identifier naming v in the top, and the first v
+// whose product does not fit t; false when the loop is not of this form.
+func (fc *fnCtx) fallingAffineLimit(al *accLoop, t numType) (*ast.Ident, int64, bool) {
+	if al.top == nil {
+		return nil, 0, false
+	}
+	top, ok1 := fc.linear(al.top)
+	cnt, ok2 := fc.fallingCount(al)
+	if !ok1 || !ok2 || len(top.Terms) != 1 || len(cnt.Terms) != 1 || top.Terms[0].Sym.Object != cnt.Terms[0].Sym.Object {
+		return nil, 0, false
+	}
+	v := top.Terms[0].Sym.Object
+	a, b := top.Terms[0].K, top.C+al.topOff
+	c, d := cnt.Terms[0].K, cnt.C
+	first := thresholds.FallingAffineFirstBad(t.Num, a, b, c, d)
+	id := identOf(fc.c.pass.TypesInfo, al.top, v)
+	if first == math.MaxInt64 || thresholds.FallingAffineStart(a, b, c, d) == math.MaxInt64 || id == nil {
+		return nil, 0, false
+	}
+	return id, first, true
 }
 
 // bareLoopMatch is the match of a loop reported without a rewrite of its own.
@@ -261,7 +458,8 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 		x = int64(xv)
 	}
 	first := thresholds.RisingFirstBad(t.Num, x)
-	if bounded(k) && k.Hi < first {
+	if k.Hi < first {
+		// A count of zero or less makes no trips: only its top decides.
 		return
 	}
 	kName := plus(src(al.count), al.coff)
@@ -277,8 +475,12 @@ func (fc *fnCtx) checkRisingLoop(al *accLoop, t numType) {
 		at = fmt.Sprintf(" at %s = %d", src(al.x), x)
 	}
 	msg := fmt.Sprintf("rising factorial of %s factors from %s in %s %s for %s ≥ %d%s%s", kName, src(al.x), t.typeName(), verb(t), kName, first, at, clause)
-	m := fc.loopMatch(al, t)
-	m.Shape, m.Args, m.Param, m.FirstBad = fixes.ShapeNone, nil, nil, 0
+	m := fc.bareLoopMatch(al, t)
+	if xconst && x >= 1 && float64(x) == xv {
+		// With x a whole constant the limit is exact, and the product
+		// grows with the count from there.
+		fc.loopGuard(m, al, t, al.count, first-al.coff)
+	}
 	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite && xconst, msg: msg, match: m})
 }
 
@@ -321,10 +523,24 @@ func (fc *fnCtx) fallingSpan(al *accLoop) (ast.Expr, ast.Expr) {
 	if sh.step != 1 || sh.first == nil || sh.last == nil || al.top == nil || al.topOff != 0 || al.count == nil || al.coff != 0 {
 		return nil, nil
 	}
-	if fc.c.objOf(fc.stripConv(al.mult)) != sh.iv {
+	if fc.c.objOf(fc.stripConv(al.mult)) != sh.iv && !fc.neverNegative(al.top) {
+		// A factor written off the counter (p *= i + 1 for i from n−k
+		// to n−1) is the fixer's to check; over a negative n the
+		// falling helpers panic where the loop multiplied negative
+		// factors, so only a top that is never negative is handed over.
 		return nil, nil
 	}
 	return al.top, al.count
+}
+
+// neverNegative reports whether the integer e is unsigned or never
+// negative where it is evaluated.
+func (fc *fnCtx) neverNegative(e ast.Expr) bool {
+	if b, ok := fc.c.pass.TypesInfo.TypeOf(e).Underlying().(*types.Basic); ok && b.Info()&types.IsUnsigned != 0 {
+		return true
+	}
+	iv := fc.rangeOf(e)
+	return !iv.IsEmpty() && iv.Lo >= 0
 }
 
 // fallingTop returns the expression that names a falling factorial's

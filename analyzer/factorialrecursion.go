@@ -35,7 +35,7 @@ func (fc *fnCtx) checkRecursion(ff *facFunc) {
 	}
 	name, off := shownFactorial(ff.recN, 0)
 	shape := fixes.ShapeFactorial
-	if ff.kind != kindFactorial && ff.kind != kindDouble || ff.stored {
+	if ff.kind != kindFactorial && ff.kind != kindDouble || ff.stored || !fc.recursionGuardExact(ff, first) {
 		shape = fixes.ShapeNone
 	}
 	fc.report(finding{
@@ -71,6 +71,11 @@ func (fc *fnCtx) recursionOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 			return true
 		}
 		ast.Inspect(ret.Results[0], func(m ast.Node) bool {
+			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.REM {
+				// n * f(n-1) % m: every value is below m, and so the
+				// product below n·m; no factorial.
+				return false
+			}
 			if b, ok := m.(*ast.BinaryExpr); ok && b.Op == token.MUL && ff == nil {
 				ff = fc.recursiveProduct(decl, self, b, fc.stripConv(ret.Results[0]) == b)
 			}
@@ -160,7 +165,7 @@ func (fc *fnCtx) recursiveProduct(decl *ast.FuncDecl, self *types.Func, b *ast.B
 		if !fc.passesThrough(decl, call, idx, -1) {
 			// f(n-1, k-1)·n is no n!: the other count steps too, and
 			// the recursion stops on it (n!/(n−k)!, C(n, k)·k/n…).
-			if j := fc.fallingCount(decl, call, idx); lin.C == -1 && whole && j >= 0 {
+			if j := fc.recursionCount(decl, call, idx); lin.C == -1 && whole && j >= 0 {
 				return &facFunc{kind: kindFalling, param: idx, param2: j, rec: b, recN: fc.stripConv(nExpr), recCall: call}
 			}
 			continue
@@ -195,12 +200,12 @@ func (fc *fnCtx) passesThrough(decl *ast.FuncDecl, call *ast.CallExpr, idx, skip
 	return true
 }
 
-// fallingCount returns the index of the parameter k that the recursive
+// recursionCount returns the index of the parameter k that the recursive
 // call passes on as k-1, every other one but n (at idx) as it is, in a
 // function whose first statements include if k == 0 (k <= 0, k < 1)
 // { return 1 }: the count of a falling factorial's factors. It returns
 // -1 where there is none.
-func (fc *fnCtx) fallingCount(decl *ast.FuncDecl, call *ast.CallExpr, idx int) int {
+func (fc *fnCtx) recursionCount(decl *ast.FuncDecl, call *ast.CallExpr, idx int) int {
 	for j, a := range call.Args {
 		if j == idx {
 			continue
@@ -316,4 +321,36 @@ func (c *checker) fallingCallsFit(ff *facFunc) bool {
 		outside++
 	}
 	return outside > 0
+}
+
+// recursionGuardExact reports whether a guard at the function's entry,
+// n ≥ first, fires exactly where the recursion's result leaves its type:
+// the recursive return gives the product itself (times a positive
+// constant, not n*f(n-1) % m), and every other return is a base case, a
+// constant of 1 or more reached only for n ≤ 1, so that the value at n is
+// n! (or n!!) times that constant. A return for large n (if n > 100 {
+// return 0 }) keeps the guard out: it would fire where 0 was returned.
+func (fc *fnCtx) recursionGuardExact(ff *facFunc, first int64) bool {
+	p := fc.c.objOf(ff.recN)
+	ok, found := p != nil, false
+	ast.Inspect(ff.decl.Body, func(n ast.Node) bool {
+		ret, isRet := n.(*ast.ReturnStmt)
+		switch {
+		case !ok:
+			return false
+		case !isRet:
+			_, lit := n.(*ast.FuncLit)
+			return !lit
+		case len(ret.Results) != 1:
+			ok = false
+		case fc.timesConst(ret.Results[0], func(e ast.Expr) bool { return e == ff.rec }):
+			found = true
+		default:
+			c, isConst := fc.intConst(ret.Results[0])
+			iv := fc.entryRange(p, ret)
+			ok = iv.IsEmpty() || isConst && c >= 1 && iv.Hi <= 1
+		}
+		return false
+	})
+	return ok && found
 }

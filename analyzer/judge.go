@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"go/types"
 	"math"
 	"strconv"
 
@@ -101,4 +102,49 @@ func shownFactorial(arg ast.Expr, off int64) (string, int64) {
 		return "", v + off
 	}
 	return src(arg), off
+}
+
+// entryGuardHolds reports whether a guard at the function's entry may
+// test parameter p against first when the function assigns p before
+// site, a statement of the function's body itself where the product is
+// formed and p's value decides it: clamped, if n > 30 { n = 30 }, the
+// value at site is not the caller's, and a guard there would name a
+// value the caller never passed. The guard p ≥ first at entry is exact
+// when two range analyses from entry, with p ≥ first and with p < first,
+// show that the first reaches site on every path (no earlier return
+// runs) with p at first or above there, and the second never does. A
+// clamp to a floor past the limit (if n < 40 { n = 40 }) fails the
+// second: every call is wrong, and no guard tells a right one from a
+// wrong one.
+func (fc *fnCtx) entryGuardHolds(p types.Object, site ast.Stmt, first int64) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok || d.Body == nil || first == math.MinInt64 {
+		return false
+	}
+	atTop := false
+	for _, s := range d.Body.List {
+		atTop = atTop || s == site
+	}
+	if !atTop {
+		return false
+	}
+	with := func(iv ranges.Interval) *fnCtx {
+		entry := fc.c.ownEntry(d)
+		if old, ok := entry[p]; ok {
+			iv = iv.Meet(old)
+		}
+		entry[p] = iv
+		return fc.c.newCtx(d, entry)
+	}
+	past, below := with(ranges.Interval{Lo: first, Hi: math.MaxInt64}), with(ranges.Interval{Lo: math.MinInt64, Hi: first - 1})
+	reached := true
+	ast.Inspect(d.Body, func(n ast.Node) bool {
+		if ret, ok := n.(*ast.ReturnStmt); ok && ret.Pos() < site.Pos() && !past.ranges().At(p, ret).IsEmpty() {
+			reached = false
+		}
+		_, lit := n.(*ast.FuncLit)
+		return reached && !lit && n != nil && n.Pos() < site.Pos()
+	})
+	hi, lo := past.entryRange(p, site), below.entryRange(p, site)
+	return reached && !hi.IsEmpty() && hi.Lo >= first && (lo.IsEmpty() || lo.Hi < first)
 }

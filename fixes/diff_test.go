@@ -113,6 +113,10 @@ var diffCases = []diffCase{
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// Factors written off the counter; k past n, where the falling
+	// factorial is 0 (the unsigned loop start wraps for k > n+2).
+	{pkg: "fixloop", fn: "Picks", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refFalling},
+	{pkg: "fixloop", fn: "Draws", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refFalling},
 	{pkg: "fixguard", fn: "Orderings", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: refFactorial, guard: true},
 	{pkg: "fixguard", fn: "Rec", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refFactorial, guard: true},
 	// A float64 n! returned as it is is +Inf exactly where n! is beyond
@@ -120,6 +124,16 @@ var diffCases = []diffCase{
 	{pkg: "fixguard", fn: "Spread", loops: []string{"n := 0; n <= 180; n++"}, args: "n", typ: "float64", ref: refFactorial, noBreak: true},
 	{pkg: "fixguard", fn: "Pairings", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
 	{pkg: "fixguard", fn: "PairingsRec", loops: []string{"n := 0; n <= 25; n++"}, args: "int32(n)", typ: "int32", ref: refDoubleFactorial, guard: true},
+	// Guards before a product loop whose product the function returns,
+	// times a constant: the grids cross each first bad value, and
+	// LateSlots' stays below its own early return at n > 40.
+	{pkg: "fixguard", fn: "Swaps", loops: []string{"n := 0; n <= 30; n++"}, args: "int64(n)", typ: "int64", ref: scaled(2, refFactorial), guard: true},
+	{pkg: "fixguard", fn: "OddBays", loops: []string{"n := 0; n <= 45; n++"}, args: "int64(n)", typ: "int64", ref: refDoubleFactorial, guard: true},
+	{pkg: "fixguard", fn: "LateSlots", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refProductFrom(4), guard: true},
+	{pkg: "fixguard", fn: "Wear", loops: []string{"n := 0; n <= 20; n++"}, args: "int32(n)", typ: "int32", ref: refRisingFrom(5), guard: true},
+	// A clamped argument: the guard at the entry tests the caller's n.
+	{pkg: "fixguard", fn: "Capped", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refFactorialTo(25), guard: true},
+	{pkg: "fixguard", fn: "Line", loops: []string{"n := 0; n <= 40; n++"}, args: "int64(n)", typ: "int64", ref: refFactorialTo(30), guard: true},
 	// Right before the fixes wherever the factorial inside them overflows
 	// (the term or sum is finite, or below the smallest float64): no fix
 	// may make them panic there.

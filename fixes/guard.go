@@ -10,6 +10,7 @@ import (
 	"strconv"
 
 	"github.com/overfact/overfact/internal/assigned"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // No rewrite makes 25! fit an int64, so a standalone factorial gets a
@@ -43,24 +44,12 @@ func buildGuard(b *builder) error {
 	if _, obj := b.scopeAt(body.Lbrace+1).LookupParent(m.Param.Name(), body.Lbrace+1); obj != m.Param {
 		return fmt.Errorf("%s is not visible where the function starts", m.Param.Name())
 	}
-	if b.assignedInBody(m.Param, body) {
+	if b.assignedInBody(m.Param, body) && !m.EntryGuard {
 		// The guard tests the value the function was called with.
 		return fmt.Errorf("%s is assigned in the function, so its first value does not bound the factorial", m.Param.Name())
 	}
-	verb := "%d"
-	if classOf(m.Param.Type()) == classFloat {
-		verb = "%v"
-	}
-	result := "its result type"
-	if m.Result != nil {
-		result = types.TypeString(m.Result, types.RelativeTo(b.pass.Pkg))
-	}
-	p := m.Param.Name()
-	msg := fmt.Sprintf("%s: %s = %s overflows %s (largest is %d)", funcName(m.Func), p, verb, result, m.FirstBad-1)
-	fmtName := b.use("fmt", "fmt", body.Lbrace+1)
 	indent := b.indentOf(body.Lbrace) + "\t"
-	guard := fmt.Sprintf("\n%sif %s >= %d {\n%s\tpanic(%s.Sprintf(%s, %s))\n%s}",
-		indent, p, m.FirstBad, indent, fmtName, strconv.Quote(msg), p, indent)
+	guard := "\n" + indent + b.guardText(body.Lbrace+1, indent)
 	// The guard goes after the brace's line, below any comment ending
 	// that line, unless a statement shares the line with the brace.
 	at := b.lineEnd(body.Lbrace) - 1
@@ -69,11 +58,122 @@ func buildGuard(b *builder) error {
 		guard += "\n" + indent
 	}
 	b.insert(at, guard)
-	b.message = fmt.Sprintf("Add a range guard: panic when %s >= %d, where the result overflows %s", p, m.FirstBad, result)
+	b.guardMessage()
+	return nil
+}
+
+// guardText is the guard's if statement, to stand at pos indented by
+// indent: it panics naming the parameter's value and the limit.
+func (b *builder) guardText(pos token.Pos, indent string) string {
+	m := b.m
+	verb := "%d"
+	if classOf(m.Param.Type()) == classFloat {
+		verb = "%v"
+	}
+	p := m.Param.Name()
+	msg := fmt.Sprintf("%s: %s = %s overflows %s (largest is %d)", funcName(m.Func), p, verb, b.resultName(), m.FirstBad-1)
+	fmtName := b.use("fmt", "fmt", pos)
+	return fmt.Sprintf("if %s >= %d {\n%s\tpanic(%s.Sprintf(%s, %s))\n%s}",
+		p, m.FirstBad, indent, fmtName, strconv.Quote(msg), p, indent)
+}
+
+func (b *builder) resultName() string {
+	if b.m.Result == nil {
+		return "its result type"
+	}
+	return types.TypeString(b.m.Result, types.RelativeTo(b.pass.Pkg))
+}
+
+func (b *builder) guardMessage() {
+	b.message = fmt.Sprintf("Add a range guard: panic when %s >= %d, where the result overflows %s", b.m.Param.Name(), b.m.FirstBad, b.resultName())
 	if b.added["fmt"] {
 		b.message += " (imports fmt)"
 	}
+}
+
+// buildLoopGuard puts the range guard right before a product loop whose
+// product, times a positive constant, the function returns (the
+// analyzer vouches for that, and that the product leaves the result
+// type exactly when the loop starts with Param ≥ FirstBad):
+//
+//	f := int64(1)
+//	if n >= 21 {
+//		panic(fmt.Sprintf("CountDown: n = %d overflows int64 (largest is 20)", n))
+//	}
+//	for n > 1 { f *= int64(n); n-- }
+//	return f * 1
+//
+// Placed there, the guard fires only where the loop runs, after the
+// function's own early returns, and it tests the value the function was
+// called with: the parameter must not be assigned before the loop, nor
+// may the loop run more than once per call (no loop or closure around
+// it), which the fixer checks itself.
+func buildLoopGuard(b *builder) error {
+	m := b.m
+	body := funcBody(m.Func)
+	if body == nil || m.Loop == nil || m.Param == nil || m.Param.Name() == "" || m.Param.Name() == "_" || m.FirstBad <= 0 {
+		return errors.New("loop guard lacks a function body, a loop, a named parameter or a first bad value")
+	}
+	if _, ok := m.Param.Type().(*types.TypeParam); ok {
+		return fmt.Errorf("%s has the type parameter %s", m.Param.Name(), m.Param.Type())
+	}
+	if !reaches(m.Param.Type(), m.FirstBad) {
+		return fmt.Errorf("%s of type %s never reaches %d", m.Param.Name(), m.Param.Type(), m.FirstBad)
+	}
+	path, _ := astpath.Enclosing(b.file, m.Loop.Pos(), m.Loop.End())
+	inList := false
+	if len(path) > 1 {
+		for _, s := range stmtList(path[1]) {
+			inList = inList || s == m.Loop
+		}
+	}
+	for i := 1; i < len(path) && path[i] != body; i++ {
+		switch path[i].(type) {
+		case *ast.ForStmt, *ast.RangeStmt, *ast.FuncLit:
+			return errors.New("the loop may run more than once per call")
+		}
+	}
+	if len(path) < 2 || path[0] != m.Loop || !inList {
+		return errors.New("the loop is not a statement of a block")
+	}
+	if _, obj := b.scopeAt(m.Loop.Pos()).LookupParent(m.Param.Name(), m.Loop.Pos()); obj != m.Param {
+		return fmt.Errorf("%s is not visible before the loop", m.Param.Name())
+	}
+	if assigned.Before(b.pass.TypesInfo, body, m.Param, m.Loop.Pos()) {
+		return fmt.Errorf("%s is assigned before the loop, so the guard would not test the argument", m.Param.Name())
+	}
+	// The guard goes at the start of the loop's line, above the comment
+	// lines right before the loop, which speak of it.
+	start := b.tok.LineStart(b.line(m.Loop.Pos()))
+	for _, c := range b.srcBetween(start, m.Loop.Pos()) {
+		if c != ' ' && c != '\t' {
+			return errors.New("the loop shares its line with another statement")
+		}
+	}
+	for _, cg := range b.file.Comments {
+		if cg.End() < start && b.line(cg.End()) == b.line(start)-1 && b.commentAlone(cg) {
+			start = b.tok.LineStart(b.line(cg.Pos()))
+		}
+	}
+	indent := b.indentOf(m.Loop.Pos())
+	b.insert(start, indent+b.guardText(start, indent)+"\n")
+	b.guardMessage()
 	return nil
+}
+
+// srcBetween returns the source between two positions.
+func (b *builder) srcBetween(from, to token.Pos) []byte {
+	return b.src[b.offset(from):b.offset(to)]
+}
+
+// commentAlone reports whether cg begins its line.
+func (b *builder) commentAlone(cg *ast.CommentGroup) bool {
+	for _, c := range b.srcBetween(b.tok.LineStart(b.line(cg.Pos())), cg.Pos()) {
+		if c != ' ' && c != '\t' {
+			return false
+		}
+	}
+	return true
 }
 
 // assigned reports whether obj is assigned, incremented, set by a range

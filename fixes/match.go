@@ -53,6 +53,7 @@ const (
 	ShapePowOverGamma           // math.Pow(x, p)/math.Gamma(a)          Args: x, p, a
 	ShapeLogSpaceTerm           // a series term over running products    Node: the term; Args: its parts (the variables carried as lgamma.Product, math.Pow calls); Func (see buildLogSpaceTerm)
 	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
+	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.
@@ -104,11 +105,17 @@ type Match struct {
 	// further factors (divisors for /=), and the rewrite deletes them.
 	Chain []ast.Stmt
 
-	// For ShapeFactorial: the enclosing function, the parameter whose
-	// range decides overflow, and the first bad value of that parameter.
+	// For ShapeFactorial and ShapeLoopGuard: the enclosing function, the
+	// parameter whose range decides overflow, and the first bad value of
+	// that parameter.
 	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
 	Param    types.Object
 	FirstBad int64
+	// EntryGuard, for ShapeFactorial, tells that the analyzer's range
+	// analysis shows the guard on Param's value at the function's entry
+	// exact although the function assigns Param later (a clamp before
+	// the product): it fires exactly where the product leaves the type.
+	EntryGuard bool
 }
 
 // A FactorialCall is a call of a function that returns (Arg+Off)!, as

@@ -315,3 +315,23 @@ func refRatioFalling(x []float64) *big.Float {
 	n, k := int64(x[0]), int64(x[1])
 	return bf(new(big.Int).Quo(factorialBig(n), factorialBig(n-k)))
 }
+
+// refProductFrom returns the reference a·(a+1)·…·n, the empty product 1
+// for n < a (math/big).
+func refProductFrom(a int64) func([]float64) *big.Float {
+	return func(x []float64) *big.Float {
+		if n := int64(x[0]); n >= a {
+			return bf(new(big.Int).MulRange(a, n))
+		}
+		return bf(big.NewInt(1))
+	}
+}
+
+// refRisingFrom returns the reference x(x+1)…(x+n−1) for a fixed x, the
+// rising factorial of n factors (DLMF 5.2.5, from memory), 1 for n ≤ 0
+// (math/big).
+func refRisingFrom(x int64) func([]float64) *big.Float {
+	return func(v []float64) *big.Float {
+		return refProductFrom(x)([]float64{float64(x + int64(v[0]) - 1)})
+	}
+}

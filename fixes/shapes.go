@@ -57,6 +57,7 @@ func init() {
 		ShapeBinomialLoop:     {"binomial loop", buildLoop, chooseHelpers, 0, nil},
 		ShapeFallingLoop:      {"falling-factorial loop", buildLoop, fallingHelpers, 0, nil},
 		ShapeFactorial:        {"factorial", buildGuard, family{}, 0, nil},
+		ShapeLoopGuard:        {"product loop", buildLoopGuard, family{}, 0, nil},
 		ShapeFactorialValue:   {"converted factorial", buildValue, factorialHelpers, 1, factorialValueFactors},
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},

@@ -87,3 +87,15 @@ func In(info *types.Info, root ast.Node, v types.Object, skip func(ast.Node) boo
 	})
 	return found
 }
+
+// Before reports whether root may change v at a node that starts before
+// pos: the statements that run before the one at pos, when no loop
+// encloses both.
+func Before(info *types.Info, root ast.Node, v types.Object, pos token.Pos) bool {
+	found := false
+	Each(info, root, func(n ast.Node) bool { return n.Pos() >= pos }, func(obj types.Object, at ast.Node) bool {
+		found = obj == v && at.Pos() < pos
+		return !found
+	})
+	return found
+}

@@ -107,7 +107,7 @@ func LineOrders(n int) int64 {
 	if n > 30 {
 		n = 30
 	}
-	return mathkit.Factorial(n)
+	return mathkit.Factorial(n) // want `Factorial\(n\): factorial of n in int64 wraps for n ≥ 21 .*; n may reach 30 here, after LineOrders reassigns it`
 }
 
 // FloatWays32 converts the wrapped int64 factorial to float32.

@@ -65,3 +65,110 @@ func WearFrom(x float64, n int) float64 { // want WearFrom:"rising-factorial of 
 	}
 	return p
 }
+
+// The guards below go right before a product loop whose product, times
+// a positive constant, the function returns: there they test the value
+// the caller passed (nothing assigns it before the loop) and fire only
+// where the loop runs, after the function's own early returns.
+
+// Swaps counts the orders in which n worn units of two twin rigs can be
+// swapped out, counting n down in place: 2·n!, wrong in int64 from
+// n = 21 on (2·20! still fits).
+func Swaps(n int64) int64 {
+	s := int64(1)
+	for n > 1 { // want `factorial of n in int64 wraps for n ≥ 21`
+		s *= n
+		n--
+	}
+	return 2 * s
+}
+
+// OddBays counts the orders of the odd-numbered bays of a rig of n
+// bays, n!! in int64, wrong from n = 34 on; a negative count is refused
+// before the loop.
+func OddBays(n int64) int64 {
+	if n < 0 {
+		return 0
+	}
+	r := int64(1)
+	// Every second bay, from the top.
+	for i := n; i > 1; i -= 2 { // want `double factorial of n in int64 wraps for n ≥ 34`
+		r *= i
+	}
+	return r * 1
+}
+
+// LateSlots counts the orders of the slots after the first three of a
+// plan of n slots, 4·5·…·n = n!/3!, in int64: it first passes int64 at
+// n = 22 (21!/6 ≈ 8.5e18 still fits). Plans past 40 slots are refused
+// with −1, which the guard must keep.
+func LateSlots(n int64) int64 {
+	if n > 40 {
+		return -1
+	}
+	p := int64(1)
+	for i := int64(4); i <= n; i++ { // want `falling factorial of n-3 factors down from n in int64 wraps for n ≥ 22`
+		p *= i
+	}
+	return p
+}
+
+// Wear is the rising factorial 5·6·…·(n+4) = (n+4)!/4! of a wear model
+// in int32: it first passes int32 at n = 10 (13!/24 ≈ 2.6e8 fits, 14!/24
+// ≈ 3.6e9 does not).
+func Wear(n int32) int32 {
+	w := int32(1)
+	for i := int32(0); i < n; i++ { // want `rising factorial of n factors from 5 in int32 wraps for n ≥ 10`
+		w *= 5 + i
+	}
+	return w
+}
+
+// Capped clamps its argument before the loop: a guard there would name
+// the clamped value, not the caller's, so the guard goes at the entry,
+// where it tests the caller's n; the range analysis shows that n ≥ 21
+// there is exactly where the clamped n is 21 or more.
+func Capped(n int64) int64 {
+	if n > 25 {
+		n = 25
+	}
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+		r *= i
+	}
+	return r
+}
+
+// Halved returns half the product, not the product times a constant:
+// no guard.
+func Halved(n int64) int64 {
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+		r *= i
+	}
+	return r / 2
+}
+
+// Line is the orders of a segment of at most 30 units, by Orderings:
+// Orderings' own guard would name 30 for any longer segment, so the call
+// gets a guard on the caller's n.
+func Line(n int64) int64 {
+	if n > 30 {
+		n = 30
+	}
+	return Orderings(n) // want `Orderings\(n\): factorial of n in int64 wraps for n ≥ 21 .*; n may reach 30 here, after Line reassigns it`
+}
+
+// Floored counts at least 30 units: every call wraps, whatever its
+// argument, and no guard can tell a right call from a wrong one, so none
+// is offered.
+func Floored(n int64) int64 {
+	if n < 30 {
+		n = 30
+	}
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 .*; n is at least 30 here`
+		r *= i
+	}
+	return r
+}

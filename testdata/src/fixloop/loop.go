@@ -52,3 +52,39 @@ func RollsUp(n, k int) int {
 	}
 	return p
 }
+
+// Picks is RollsUp in uint64 with its factor written off the counter,
+// (i − 1) for i from n−k+2 to n+1: the fixer reads the factor against
+// the counter itself. For k > n the product holds the factor 0 where
+// n−k+2 does not wrap, and the falling factorial is 0 for every k > n.
+func Picks(n, k uint64) uint64 {
+	p := uint64(1)
+	for i := n - k + 2; i <= n+1; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
+		p *= i - 1
+	}
+	return p
+}
+
+// Draws is Picks in int64 for counts the caller checked: n is never
+// negative at the loop, where the helper takes it.
+func Draws(n, k int64) int64 {
+	if n < 0 || k < 0 {
+		return 0
+	}
+	p := int64(1)
+	for i := n - k; i < n; i++ { // want `falling factorial of k factors from n down in int64 wraps`
+		p *= i + 1
+	}
+	return p
+}
+
+// Shifted is Draws without the check: over a negative n the loop
+// multiplies negative factors, which the falling helpers do not take, so
+// it has no fix.
+func Shifted(n, k int64) (p int64) {
+	p = 1
+	for i := n - k; i <= n-1; i++ { // want `falling factorial of k factors from n down in int64 wraps`
+		p *= 1 + i
+	}
+	return p
+}

@@ -128,3 +128,62 @@ func FloatToCount(n int) (float64, int64) { // want FloatToCount:`factorial of p
 	}
 	return r, int64(r)
 }
+
+// Tripled returns three times its product: 3·20! still fits uint64,
+// 21! alone does not, so a guard before the loop is exact.
+func Tripled(n uint64) uint64 {
+	r := uint64(1)
+	for i := uint64(1); i <= n; i++ { // want `factorial of n in uint64 wraps for n ≥ 21`
+		r *= i
+	}
+	return 3 * r
+}
+
+// Share divides by its product instead of returning it: no guard.
+func Share(n int64) int64 {
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+		r *= i
+	}
+	return 1000 / r
+}
+
+// Staged multiplies in its product only for an even count: the guard
+// goes before the loop, where the count is known to be even, and an odd
+// count keeps its answer 1.
+func Staged(n int) int { // want Staged:`factorial of parameter 0, breaks from 21`
+	r := 1
+	if n%2 == 0 {
+		for i := 2; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21`
+			r *= i
+		}
+	}
+	return r
+}
+
+// Rounds runs its loop once per round: a guard before the loop would
+// test the argument on every round, and none is offered.
+func Rounds(n, rounds int64) int64 { // want Rounds:`factorial of parameter 0, breaks from 21`
+	var r int64
+	for j := int64(0); j < rounds; j++ {
+		r = 1
+		for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+			r *= i
+		}
+	}
+	return r
+}
+
+// LastDigits returns n!, or on request its last three digits, which fit
+// whatever n is: a guard would make that call panic, so none is offered
+// although the function returns its product elsewhere.
+func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of parameter 0, breaks from 21`
+	r := int64(1)
+	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+		r *= i
+	}
+	if short {
+		return r % 1000
+	}
+	return r
+}

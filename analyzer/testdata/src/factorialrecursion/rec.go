@@ -73,3 +73,33 @@ func FloatRecHalf(n int) float64 { // want FloatRecHalf:`factorial of parameter 
 func FloatChoose(n, k int) float64 { // want FloatChoose:`binomial of parameter 0, breaks from 171`
 	return FloatRec(n) / (FloatRec(k) * FloatRec(n-k)) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
 }
+
+// Thousandths keeps n! modulo 1000 at every step: every value is below
+// 1000 and the product below 1000·n, so it is no factorial and has no
+// finding (a guard would make a right answer panic).
+func Thousandths(n int64) int64 {
+	if n < 2 {
+		return 1
+	}
+	return n * Thousandths(n-1) % 1000
+}
+
+// Refusing returns 0 past 100: a guard at its start would fire where it
+// returned 0, so none is offered.
+func Refusing(n int64) int64 { // want Refusing:`factorial of parameter 0, breaks from 21`
+	if n > 100 {
+		return 0
+	}
+	if n < 2 {
+		return 1
+	}
+	return n * Refusing(n-1) // want `recursive factorial of n in int64 wraps for n ≥ 21 .*; n may reach 100 here`
+}
+
+// Doubled is twice n!, with its base case first: the guard is exact.
+func Doubled(n int64) int64 { // want Doubled:`factorial of parameter 0, breaks from 21`
+	if n <= 1 {
+		return 2
+	}
+	return n * Doubled(n-1) // want `recursive factorial of n in int64 wraps for n ≥ 21`
+}
