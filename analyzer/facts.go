@@ -36,6 +36,16 @@ type FactorialFact struct {
 	// k) with k > n) its callers' quotients are then numbers the fixer
 	// can compute exactly (fixes.Match.EmptyBelow).
 	EmptyBelow bool
+	// Form, for a binomial of a signed integer type, says what the
+	// function computes outside 0 ≤ k ≤ n too, with integers that do
+	// not wrap: "loop" for a multiplicative loop from 1 over k trips
+	// (the generalised C(n, k) for k ≥ 0, 1 for k < 0), "factorials"
+	// for n!/(k!(n−k)!) over factorial functions with EmptyBelow; ""
+	// where it is not known. A caller's float expression kept as written
+	// outside a helper's domain takes the call's value from the float
+	// helper of that form (fixes.Match.IntBinomials) rather than calling
+	// the function, whose own fix panics where C(n, k) leaves its type.
+	Form string
 }
 
 // AFact marks FactorialFact as an analysis fact.

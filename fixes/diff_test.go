@@ -155,6 +155,15 @@ var diffCases = []diffCase{
 	{pkg: "fixloggamma", fn: "Spread", loops: []string{"n := 1; n <= 900; n += 7"}, args: "float64(n) / 2", typ: "float64", ref: refLogGamma},
 	{pkg: "fixcounts", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "float64(k), float64(l) / 2", typ: "float64", ref: refPoisson},
 	{pkg: "fixcounts", fn: "Rentals", loops: []string{"n := 1; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/11"}, args: "float64(k), float64(n), 0.125", typ: "float64", ref: refBinomialPMF},
+	// Binomial probabilities over integer binomial functions, on a grid
+	// that leaves their domain (p = 1.5, k past n, a load smaller than
+	// its flawed pots): the expression kept as written takes each count
+	// from the float helper of its function's form, where the
+	// functions' own fixes would panic.
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := -3; k <= n+3; k += 1 + n/9"}, args: "n, k, 1.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k, 0.25", typ: "float64", ref: refBinomialPMFnk},
+	{pkg: "fixkept", fn: "Flawed", loops: []string{"total := 40; total <= 120; total += 20", "k := 0; k <= 30; k += 3"}, args: "total, 70, 30, k", typ: "float64", ref: refKeptHypergeometric},
+	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := -3; n <= 60; n += 2", "k := -3; k <= n+3; k += 1 + n/9"}, args: "int64(n), int64(k), 1.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

@@ -280,7 +280,11 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		lead = append(lead, b.copyText(def))
 	}
 	lead = append(lead, "//overfact:allow outside "+d.words+" the expression as written")
-	return b.keepAs(text, b.m.Node, b.copyText(b.m.Node), conds, false, lead...)
+	orig, err := b.asWritten(b.m.Node)
+	if err != nil {
+		return "", err
+	}
+	return b.keepAs(text, b.m.Node, orig, conds, false, lead...)
 }
 
 // keepAsWritten returns text, the helper call that replaces node, so
@@ -309,7 +313,60 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 //		return text
 //	}()
 func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, inside bool, why string) (string, error) {
-	return b.keepAs(text, node, b.copyText(node), conds, inside, "//overfact:allow "+why)
+	orig, err := b.asWritten(node)
+	if err != nil {
+		return "", err
+	}
+	return b.keepAs(text, node, orig, conds, inside, "//overfact:allow "+why)
+}
+
+// asWritten returns node's source for the branch that runs it as
+// written, each float conversion of an integer binomial function's call
+// in it (Match.IntBinomials) taken from the float helper of the
+// function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
+// the value the call had before its function's own fix, which panics
+// where C(n, k) leaves the integer type. The value is the same wherever
+// the call's result fitted, and the one the integers meant elsewhere.
+func (b *builder) asWritten(node ast.Node) (string, error) {
+	text := b.copyText(node)
+	if len(b.m.IntBinomials) == 0 || classOf(b.m.Result) != classFloat {
+		return text, nil
+	}
+	var out strings.Builder
+	at := node.Pos()
+	var err error
+	ast.Inspect(node, func(n ast.Node) bool {
+		conv, ok := n.(*ast.CallExpr)
+		if !ok || err != nil {
+			return err == nil
+		}
+		to := b.pass.TypesInfo.TypeOf(conv)
+		if !b.isNumericConversion(conv) || classOf(to) != classFloat {
+			return true
+		}
+		call, _ := ast.Unparen(conv.Args[0]).(*ast.CallExpr)
+		bin, ok := b.m.IntBinomials[call]
+		if !ok {
+			return true
+		}
+		name := "ChooseFactorials"
+		if bin.Loop {
+			name = "ChooseLoop"
+		}
+		shown := b.shown
+		var helper string
+		helper, err = b.call(name, []ast.Expr{bin.N, bin.K}, to)
+		b.shown = shown
+		out.Write(b.src[b.offset(at):b.offset(conv.Pos())])
+		out.WriteString(helper)
+		at = conv.End()
+		return false
+	})
+	if err != nil {
+		return "", err
+	}
+	out.Write(b.src[b.offset(at):b.offset(node.End())])
+	return out.String(), nil
 }
 
 // keepAs is keepAsWritten with orig, what runs in node's place where the

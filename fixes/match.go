@@ -92,6 +92,15 @@ type Match struct {
 	// are never negative where they are evaluated (a loop counter from
 	// 0): a test of the helper's domain leaves out their k < 0.
 	NonNeg map[ast.Expr]bool
+	// IntBinomials maps the calls in Node of integer functions whose
+	// value is C(n, k) in a form known outside 0 ≤ k ≤ n too to their
+	// operands and form. A float expression kept as written where the
+	// operands leave a helper's domain takes those calls' values from the
+	// float helper of the form (lgamma.ChooseLoop, ChooseFactorials)
+	// instead of calling them: the functions' own fixes panic where
+	// C(n, k) leaves their integer type, where the original float64(…)
+	// of the call had a value.
+	IntBinomials map[*ast.CallExpr]IntBinomial
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are
@@ -103,4 +112,14 @@ type Match struct {
 	Func     ast.Node // *ast.FuncDecl or *ast.FuncLit
 	Param    types.Object
 	FirstBad int64
+}
+
+// IntBinomial is a call of an integer binomial function
+// (Match.IntBinomials): its operands n and k, and its form.
+type IntBinomial struct {
+	N, K ast.Expr
+	// Loop: the multiplicative loop from 1 over k trips, the generalised
+	// C(n, k) for k ≥ 0 and 1 for k < 0; otherwise n!/(k!(n−k)!) over
+	// factorial functions that return 1 below 2, rounded toward zero.
+	Loop bool
 }

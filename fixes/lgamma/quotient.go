@@ -86,3 +86,30 @@ func MustFactorialQuotientInt64(num int64, den ...int64) int64 {
 	}
 	return r
 }
+
+// ChooseFactorials returns, as a float64, what n!/(k!·(n−k)!) computes
+// with a factorial function whose value below 2 is the empty product 1,
+// the quotient rounded toward zero as Go's integer division rounds it:
+// C(n, k) for 0 ≤ k ≤ n; elsewhere one of k and n−k is below 0 (its
+// factorial is 1) and the quotient is 1 where every factorial in it is
+// 1 (k ≤ 1 and n−k ≤ 1: 0!/(1!·(−1)!), or n < 0), and 0 where the
+// other divisor exceeds the numerator. It is the value such a binomial
+// function computes without wrapping, where MustFactorialQuotientInt64
+// panics because it leaves int64.
+//
+// Accuracy: as Choose's (checked against math/big in quotient_test.go).
+//
+// Special cases are:
+//
+//	ChooseFactorials(n, k) = Choose(n, k) for 0 ≤ k ≤ n
+//	ChooseFactorials(n, k) = 1 for k ≤ 1, n−k ≤ 1 and k or n−k below 0
+//	ChooseFactorials(n, k) = 0 otherwise
+func ChooseFactorials(n, k int) float64 {
+	switch {
+	case 0 <= k && k <= n:
+		return Choose(n, k)
+	case k <= 1 && n-k <= 1:
+		return 1
+	}
+	return 0
+}

@@ -2,6 +2,7 @@ package lgamma
 
 import (
 	"fmt"
+	"math"
 	"math/big"
 	"testing"
 )
@@ -74,6 +75,22 @@ func TestFactorialQuotientInt64Binomial(t *testing.T) {
 			c, cok := ChooseInt64(n, k)
 			if q != c || qok != cok {
 				t.Fatalf("(%d, %d): quotient %d %v, ChooseInt64 %d %v", n, k, q, qok, c, cok)
+			}
+		}
+	}
+}
+
+// TestChooseFactorialsAgainstBig compares ChooseFactorials with
+// n!/(k!·(n−k)!) in math/big, the factorial of a number below 2 being
+// the empty product 1 and the quotient rounded toward zero (quotientRef),
+// rounded to float64 by math/big: within one ulp, as Choose is.
+func TestChooseFactorialsAgainstBig(t *testing.T) {
+	for _, n := range []int64{-40, -5, -2, -1, 0, 1, 2, 3, 20, 21, 34, 62, 67, 100, 171, 400} {
+		for _, k := range []int64{-41, -6, -3, -2, -1, 0, 1, 2, 3, 10, 30, 67, 100, 200, 401} {
+			want, _ := new(big.Float).SetInt(quotientRef(n, k, n-k)).Float64()
+			got := ChooseFactorials(int(n), int(k))
+			if got != want && !(math.Abs(got-want) <= math.Abs(want)*0x1p-52) {
+				t.Errorf("ChooseFactorials(%d, %d) = %g; math/big gives %g", n, k, got, want)
 			}
 		}
 	}
