@@ -162,6 +162,10 @@ var diffCases = []diffCase{
 	// functions' own fixes would panic.
 	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := -3; k <= n+3; k += 1 + n/9"}, args: "n, k, 1.5", typ: "float64", ref: keptPMF(loopChooseBig)},
 	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k, 0.25", typ: "float64", ref: refBinomialPMFnk},
+	// k past n with a p whose power leaves float64: the count is 0, and
+	// so is the product, where the float64 arithmetic says 0·Inf = NaN.
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "int64(n), int64(k), 150.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
 	{pkg: "fixkept", fn: "Flawed", loops: []string{"total := 40; total <= 120; total += 20", "k := 0; k <= 30; k += 3"}, args: "total, 70, 30, k", typ: "float64", ref: refKeptHypergeometric},
 	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := -3; n <= 60; n += 2", "k := -3; k <= n+3; k += 1 + n/9"}, args: "int64(n), int64(k), 1.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},

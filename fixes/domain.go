@@ -320,25 +320,36 @@ func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, insi
 	return b.keepAs(text, node, orig, conds, inside, "//overfact:allow "+why)
 }
 
+// productShapes are the shapes whose expression kept as written is a
+// count times powers, which is 0 where the count is (k > n) however far
+// the powers leave float64 (p outside [0, 1]).
+var productShapes = map[Shape]bool{ShapeBinomialPMF: true, ShapeNegBinomialPMF: true}
+
 // asWritten returns node's source for the branch that runs it as
-// written, each float conversion of an integer binomial function's call
-// in it (Match.IntBinomials) taken from the float helper of the
-// function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
-// the value the call had before its function's own fix, which panics
-// where C(n, k) leaves the integer type. The value is the same wherever
-// the call's result fitted, and the one the integers meant elsewhere.
+// written, in two respects not as written where the code's own float
+// arithmetic would lose a value the expression has:
+//
+//   - each float conversion of an integer binomial function's call in it
+//     (Match.IntBinomials) is taken from the float helper of the
+//     function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
+//     the value the call had before its function's own fix, which panics
+//     where C(n, k) leaves the integer type;
+//   - a binomial probability's float64 product (productShapes) is
+//     formed as the helper's Product chain (buildProductChain), which is
+//     the same float64 operations wherever they stay in range, and the
+//     product's value where a factor leaves float64 and the product does
+//     not: C(2, 150)·150.5^150·(−149.5)^−148 is 0, not 0·Inf = NaN.
 func (b *builder) asWritten(node ast.Node) (string, error) {
-	text := b.copyText(node)
-	if len(b.m.IntBinomials) == 0 || classOf(b.m.Result) != classFloat {
-		return text, nil
+	e, ok := node.(ast.Expr)
+	if !ok || classOf(b.m.Result) != classFloat {
+		return b.copyText(node), nil
 	}
-	var out strings.Builder
-	at := node.Pos()
+	subs := make(map[ast.Expr]string)
 	var err error
-	ast.Inspect(node, func(n ast.Node) bool {
+	ast.Inspect(e, func(n ast.Node) bool {
 		conv, ok := n.(*ast.CallExpr)
-		if !ok || err != nil {
-			return err == nil
+		if !ok || err != nil || len(b.m.IntBinomials) == 0 {
+			return err == nil && len(b.m.IntBinomials) > 0
 		}
 		to := b.pass.TypesInfo.TypeOf(conv)
 		if !b.isNumericConversion(conv) || classOf(to) != classFloat {
@@ -354,19 +365,24 @@ func (b *builder) asWritten(node ast.Node) (string, error) {
 			name = "ChooseLoop"
 		}
 		shown := b.shown
-		var helper string
-		helper, err = b.call(name, []ast.Expr{bin.N, bin.K}, to)
+		subs[conv], err = b.call(name, []ast.Expr{bin.N, bin.K}, to)
 		b.shown = shown
-		out.Write(b.src[b.offset(at):b.offset(conv.Pos())])
-		out.WriteString(helper)
-		at = conv.End()
 		return false
 	})
 	if err != nil {
 		return "", err
 	}
-	out.Write(b.src[b.offset(at):b.offset(node.End())])
-	return out.String(), nil
+	if len(subs) == 0 && !productShapes[b.m.Shape] {
+		return b.copyText(node), nil
+	}
+	// Without calls, no part of the expression is a chain: spliced writes
+	// it with subs alone.
+	lp := &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(e.Pos()), subs: subs}
+	if chain := (&logProducts{b: b, set: lp.set, pkg: lp.pkg, calls: true, subs: subs}); productShapes[b.m.Shape] &&
+		types.Identical(b.pass.TypesInfo.TypeOf(e), types.Typ[types.Float64]) && chain.chainable(e) && chain.leaves(e) >= 1 && !b.commentIn(e) {
+		return chain.chain(e) + ".Float64()", nil
+	}
+	return lp.spliced(e), nil
 }
 
 // keepAs is keepAsWritten with orig, what runs in node's place where the

@@ -168,6 +168,10 @@ type logProducts struct {
 	// (a product of them written in one expression); otherwise they are
 	// carried only as factors of a product with a carried variable.
 	calls bool
+	// subs are expressions to write as the given text wherever the
+	// chain takes them as they are (a count from a float helper in an
+	// expression kept as written, asWritten).
+	subs map[ast.Expr]string
 }
 
 // qualifies checks that v is a running product the rewrite can carry: a
@@ -330,11 +334,18 @@ func (lp *logProducts) spliced(e ast.Expr) string {
 	at := e.Pos()
 	ast.Inspect(e, func(n ast.Node) bool {
 		x, ok := n.(ast.Expr)
-		if !ok || !lp.chainable(x) {
+		if !ok {
 			return true
 		}
+		text, sub := lp.subs[x]
+		if !sub {
+			if !lp.chainable(x) {
+				return true
+			}
+			text = lp.chain(x) + ".Float64()"
+		}
 		out.Write(b.src[b.offset(at):b.offset(x.Pos())])
-		out.WriteString(lp.chain(x) + ".Float64()")
+		out.WriteString(text)
 		at = x.End()
 		return false
 	})
