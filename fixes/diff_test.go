@@ -147,6 +147,10 @@ var diffCases = []diffCase{
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 1100; n += 7", "k := 0; k <= n; k += 1 + n/9"}, args: "float64(n), float64(k)", typ: "float64", ref: refChoose},
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := -8; n <= 60; n += 3", "k := -4; k <= 70; k += 3"}, args: "float64(n) / 4, float64(k) / 4", typ: "float64", ref: refTallyChoose, noBreak: true},
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 40; n++", "k := n + 1; k <= n+30; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refTallyChoose, noBreak: true},
+	// Past 170 the factorials alone overflow: fractions (the floors'
+	// ratio) and k > n (n!/k!) are taken in log space, where the original
+	// divides +Inf by +Inf.
+	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 680; n <= 1200; n += 61", "k := 40; k <= 3000; k += 217"}, args: "float64(n) / 4, float64(k) / 4", typ: "float64", ref: refTallyChoose},
 	// e^−λ·Σ λ^k/k! with e^−λ folded into each term: right where λ^k
 	// overflows (the reference takes e^−λ from math.Exp, so λ ≤ 700).
 	{pkg: "fixcounts", fn: "Queue", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 1100; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},

@@ -329,6 +329,8 @@ var productShapes = map[Shape]bool{ShapeBinomialPMF: true, ShapeNegBinomialPMF: 
 // written, in two respects not as written where the code's own float
 // arithmetic would lose a value the expression has:
 //
+//   - a float ratio of factorial functions that return ⌊x⌋!
+//     (Match.Floor) is their exact quotient in log space (emptyQuotient);
 //   - each float conversion of an integer binomial function's call in it
 //     (Match.IntBinomials) is taken from the float helper of the
 //     function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
@@ -343,6 +345,14 @@ func (b *builder) asWritten(node ast.Node) (string, error) {
 	e, ok := node.(ast.Expr)
 	if !ok || classOf(b.m.Result) != classFloat {
 		return b.copyText(node), nil
+	}
+	if node == b.m.Node && b.m.Floor {
+		shown, counts := b.shown, b.counts
+		q, err := b.emptyQuotient()
+		b.shown, b.counts = shown, counts
+		if err != nil || q != "" {
+			return q, err
+		}
 	}
 	subs := make(map[ast.Expr]string)
 	var err error
@@ -419,14 +429,22 @@ func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string
 // the expression computes outside the helper's domain, without calling
 // those functions, which a range guard may make panic for a large
 // argument (fact(25) in fact(−3)/(fact(25)·fact(−28)), whose value 0
-// fits). "" where it does not apply.
+// fits). For a float ratio whose functions return ⌊x⌋! (Match.Floor)
+// it is the quotient in log space, lgamma.FloorFactorialQuotient, which
+// the factorials' overflow does not turn into NaN (rotas(171)/
+// (rotas(700)·rotas(−529)) is 171!/700!, below float64: 0, not
+// +Inf/+Inf). "" where it does not apply.
 func (b *builder) emptyQuotient() (string, error) {
 	switch b.m.Shape {
 	case ShapeBinomial, ShapePermutation, ShapeMultinomial, ShapeCatalan:
 	default:
 		return "", nil
 	}
-	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned {
+	name := "MustFactorialQuotientInt64"
+	switch {
+	case classOf(b.m.Result) == classFloat && b.m.Floor:
+		name = "FloorFactorialQuotient"
+	case !b.m.EmptyBelow || classOf(b.m.Result) != classSigned:
 		return "", nil
 	}
 	var num, den []ast.Expr
@@ -443,7 +461,7 @@ func (b *builder) emptyQuotient() (string, error) {
 	}
 	shown := b.shown
 	defer func() { b.shown = shown }()
-	return b.call("MustFactorialQuotientInt64", args, b.m.Result)
+	return b.call(name, args, b.m.Result)
 }
 
 // returning returns the return statement whose only result is the

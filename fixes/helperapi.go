@@ -26,6 +26,7 @@ func MustFallingUint64(n, k uint64) uint64                  { panic("") }
 func Multinomial(ks ...int) float64                         { panic("") }
 func MustMultinomialInt64(ks ...int64) int64                { panic("") }
 func MustFactorialQuotientInt64(num int64, den ...int64) int64 { panic("") }
+func FloorFactorialQuotient(num float64, den ...float64) float64 { panic("") }
 func Catalan(n int) float64                                 { panic("") }
 func MustCatalanInt64(n int64) int64                        { panic("") }
 func HypergeometricPMF(k, total, successes, draws int) float64 { panic("") }

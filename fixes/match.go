@@ -87,6 +87,12 @@ type Match struct {
 	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
 	// arguments, with no need to call the functions themselves.
 	EmptyBelow bool
+	// Floor, for the ratio shapes, tells that every
+	// factorial function returns ⌊x⌋! for every x, fractions included
+	// (a loop from 2 up to x by one): outside the helper's domain a float
+	// expression's value is lgamma.FloorFactorialQuotient of the calls'
+	// arguments, which no factorial's overflow turns into NaN.
+	Floor bool
 	// NonNeg holds the operands (Args, and the integer inside a
 	// conversion float64(k)) that the analyzer's range analysis shows
 	// are never negative where they are evaluated (a loop counter from
