@@ -70,7 +70,6 @@ func TestScenarioListComplete(t *testing.T) {
 var stillWrong = map[string]string{
 	"src/bottling.DrawProbability":    "-fix leaves it wrong outside the lot's domain: (100, 20, 1100, 0): was a panic (integer divide by zero), now panics: MustChooseInt64(1100, 100) does not fit, exact 1.4229671736221535e+14",
 	"demo/sampling.fact":              "no finding in it (only a fact for its callers, all bounded once Choose no longer calls it): (21): was -4249290049419214848, now -4249290049419214848, exact 5.10909e+19 (overflows int64)",
-	"demo/gas.SpeedMoment":            "-fix leaves it wrong: (1030, 0): was NaN, now NaN, exact 0",
 	"src/callcentre.Lineups":          "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
 	"src/callcentre.LineupsDown":      "reported, but -fix leaves it wrong: (171, 700): was NaN, now NaN, exact 0",
 	"src/cardshuffle.Bridge":          "reported, but -fix leaves it wrong: (-1): was -70609262346240000, now -70609262346240000, exact 8.15915e+47 (overflows int64)",
