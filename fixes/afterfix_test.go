@@ -893,7 +893,8 @@ func afterfixBudget() (inputs, steps int) {
 // Every function that was wrong must be right after (the value where it
 // fits, within 1e-9 relative for floats; a panic naming the arguments
 // where it does not), except those stillWrong lists; every input that
-// was right must stay right.
+// was right must stay right. OVERFACT_AFTERFIX_FUNC=pkg.Func,… logs every
+// input of the functions named that is not right before and after.
 func TestAfterFixScenarios(t *testing.T) {
 	t.Parallel()
 	if testing.Short() {
