@@ -2,6 +2,7 @@ package analyzer
 
 import (
 	"go/ast"
+	"go/types"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -33,6 +34,12 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 	c.pass.ExportObjectFact(obj, fact)
 }
 
+// The forms of a binomial function (FactorialFact.Form).
+const (
+	binomialLoop       = "loop"
+	binomialFactorials = "factorials"
+)
+
 // binomialRatioFunc matches return n!/(k!(n-k)!) over parameters n, k.
 func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 	var fact *FactorialFact
@@ -61,6 +68,9 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 			return true
 		}
 		fact = &FactorialFact{Kind: kindNames[kindBinomial], Param: nIdx, Param2: kIdx, FirstBad: firstBadOf(kindFactorial, u.t) - u.off}
+		if !u.t.Float && u.t.Signed && len(decl.Body.List) == 1 && decl.Body.List[0] == ret && emptyBelowAll(append([]factor{u}, p.den...)) {
+			fact.Form = binomialFactorials
+		}
 		if _, _, _, broken := fc.brokenFactor(p.num); !broken {
 			fact.Safe = true
 			r := fc.rangeOf(u.arg)
@@ -86,6 +96,9 @@ func (fc *fnCtx) binomialLoopFunc(decl *ast.FuncDecl, res numType) *FactorialFac
 			return
 		}
 		fact = &FactorialFact{Kind: kindNames[kindBinomial], Param: nIdx, Param2: kIdx, FirstBad: thresholds.CentralBinomialLoop(res.Num).FirstBad}
+		if res.Signed && al.coff == 0 && fc.isOne(initOf(al.accInit)) && fc.onlyLoop(decl.Body, al) {
+			fact.Form = binomialLoop
+		}
 		n := fc.rangeOf(nExpr)
 		k := fc.endRange(al.count, al.coff)
 		if fc.binomialLoopSafe(res, n, k) {
@@ -93,4 +106,45 @@ func (fc *fnCtx) binomialLoopFunc(decl *ast.FuncDecl, res numType) *FactorialFac
 		}
 	})
 	return fact
+}
+
+// onlyLoop reports whether body is the loop's accumulator set to its
+// start, the loop and the accumulator returned, and nothing else: no
+// statement that returns another value or changes a parameter first, so
+// that the loop's value is the function's for every input.
+func (fc *fnCtx) onlyLoop(body *ast.BlockStmt, al *accLoop) bool {
+	if len(body.List) != 3 || body.List[0] != al.accInit || body.List[1] != al.shape.stmt {
+		return false
+	}
+	ret, ok := body.List[2].(*ast.ReturnStmt)
+	return ok && len(ret.Results) == 1 && fc.c.objOf(ret.Results[0]) == al.acc
+}
+
+// intBinomials returns the calls in a float match's node of binomial
+// functions whose form is known (FactorialFact.Form), for the fixer's
+// expression kept as written (fixes.Match.IntBinomials).
+func (fc *fnCtx) intBinomials(m *fixes.Match) map[*ast.CallExpr]fixes.IntBinomial {
+	if m.Node == nil || m.Result == nil {
+		return nil
+	}
+	if b, ok := m.Result.Underlying().(*types.Basic); !ok || b.Info()&types.IsFloat == 0 {
+		return nil
+	}
+	var out map[*ast.CallExpr]fixes.IntBinomial
+	ast.Inspect(m.Node, func(n ast.Node) bool {
+		call, ok := n.(*ast.CallExpr)
+		if !ok {
+			return true
+		}
+		fact := fc.c.factOf(fc.c.calleeOf(call))
+		if fact == nil || fact.Form == "" || kindOfName(fact.Kind) != kindBinomial || max(fact.Param, fact.Param2) >= len(call.Args) || fact.Param2 < 0 {
+			return true
+		}
+		if out == nil {
+			out = make(map[*ast.CallExpr]fixes.IntBinomial)
+		}
+		out[call] = fixes.IntBinomial{N: call.Args[fact.Param], K: call.Args[fact.Param2], Loop: fact.Form == binomialLoop}
+		return true
+	})
+	return out
 }

@@ -122,3 +122,71 @@ func initOf(s ast.Stmt) ast.Expr {
 	}
 	return nil
 }
+
+// countsUpToParam reports whether ff's body is acc := 1, the loop
+// for i := c; i <= n; i++ { acc *= i } with c the constant 1 or 2 and n
+// the parameter itself, and return acc: the factors are the whole
+// numbers from c to ⌊n⌋, so the product is ⌊n⌋! for a fraction n as
+// well, and 1 below 2 (FactorialFact.Floor). A float counter's loop is
+// read here from its syntax, as the value model reads it.
+func (fc *fnCtx) countsUpToParam(ff *facFunc) bool {
+	list := ff.decl.Body.List
+	if len(list) != 3 {
+		return false
+	}
+	acc := fc.c.objOf(assignedIdent(list[0]))
+	if acc == nil || !fc.isOne(initOf(list[0])) || !fc.returnsObj(list[2], acc) {
+		return false
+	}
+	loop, ok := list[1].(*ast.ForStmt)
+	if !ok || len(loop.Body.List) != 1 {
+		return false
+	}
+	init, ok := loop.Init.(*ast.AssignStmt)
+	if !ok || len(init.Lhs) != 1 || len(init.Rhs) != 1 {
+		return false
+	}
+	i := fc.c.objOf(init.Lhs[0])
+	if c, ok := fc.floatConst(init.Rhs[0]); !ok || c != 1 && c != 2 || i == nil {
+		return false
+	}
+	post, ok := loop.Post.(*ast.IncDecStmt)
+	if !ok || post.Tok != token.INC || fc.c.objOf(post.X) != i {
+		return false
+	}
+	cond, ok := ast.Unparen(loop.Cond).(*ast.BinaryExpr)
+	if !ok || cond.Op != token.LEQ || fc.c.objOf(cond.X) != i || fc.c.paramIndex(ff.decl, fc.c.objOf(cond.Y)) != ff.param {
+		return false
+	}
+	// acc *= i, or acc = acc * i
+	up, ok := loop.Body.List[0].(*ast.AssignStmt)
+	if !ok || len(up.Lhs) != 1 || len(up.Rhs) != 1 || fc.c.objOf(up.Lhs[0]) != acc {
+		return false
+	}
+	switch up.Tok {
+	case token.MUL_ASSIGN:
+		return fc.c.objOf(fc.stripConv(up.Rhs[0])) == i
+	case token.ASSIGN:
+		m, ok := ast.Unparen(up.Rhs[0]).(*ast.BinaryExpr)
+		return ok && m.Op == token.MUL && fc.c.objOf(m.X) == acc && fc.c.objOf(fc.stripConv(m.Y)) == i
+	}
+	return false
+}
+
+// assignedIdent returns the one variable a definition or assignment
+// statement sets (acc := 1, var acc = 1.0), or nil.
+func assignedIdent(s ast.Stmt) ast.Expr {
+	switch s := s.(type) {
+	case *ast.AssignStmt:
+		if len(s.Lhs) == 1 {
+			return s.Lhs[0]
+		}
+	case *ast.DeclStmt:
+		if g, ok := s.Decl.(*ast.GenDecl); ok && len(g.Specs) == 1 {
+			if v, ok := g.Specs[0].(*ast.ValueSpec); ok && len(v.Names) == 1 {
+				return v.Names[0]
+			}
+		}
+	}
+	return nil
+}

@@ -76,6 +76,7 @@ func (c *checker) findFactorialFunc(decl *ast.FuncDecl) {
 		ff.fact.Lo, ff.fact.Hi = addSat(ff.inner.Lo, ff.inner.Offset-ff.offset), addSat(ff.inner.Hi, ff.inner.Offset-ff.offset)
 	}
 	ff.fact.EmptyBelow = own.emptyBelow(ff)
+	ff.fact.Floor = ff.offset == 0 && ff.kind == kindFactorial && own.countsUpToParam(ff)
 	c.funcs[obj] = ff
 	c.pass.ExportObjectFact(obj, &ff.fact)
 }

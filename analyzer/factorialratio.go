@@ -125,6 +125,7 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 // match told whether every factorial function returns 1 below zero.
 func (fc *fnCtx) reportRatio(root ast.Expr, p *product, m *fixes.Match, fs []factor, def factor, definite bool, msg string) {
 	m.EmptyBelow = emptyBelowAll(fs)
+	m.Floor = floorAll(fs)
 	match := p.fix(m)
 	if p.chained && !p.tabled && p.chainStart != nil && m.EmptyBelow && m.Shape != fixes.ShapeNone {
 		// r := fact(n); r /= fact(k); r /= fact(n-k): the start takes the
@@ -290,6 +291,17 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 func emptyBelowAll(fs []factor) bool {
 	for _, f := range fs {
 		if f.fact == nil || !f.fact.EmptyBelow || f.off != 0 || f.call == nil || len(f.call.Args) != 1 {
+			return false
+		}
+	}
+	return len(fs) > 0
+}
+
+// floorAll reports whether every factor is a call of a factorial
+// function that returns ⌊x⌋! for every x (FactorialFact.Floor).
+func floorAll(fs []factor) bool {
+	for _, f := range fs {
+		if f.fact == nil || !f.fact.Floor {
 			return false
 		}
 	}

@@ -36,6 +36,23 @@ type FactorialFact struct {
 	// k) with k > n) its callers' quotients are then numbers the fixer
 	// can compute exactly (fixes.Match.EmptyBelow).
 	EmptyBelow bool
+	// Floor says that the function returns ⌊n⌋! for every n, fractions
+	// included, and 1 below 2: EmptyBelow, with a loop that counts up by
+	// one from the constant 1 or 2 while the counter is at most n itself
+	// (for i := 2.0; i <= n; i++). A quotient of such functions in
+	// float64 is then a number the fixer can compute in log space
+	// wherever the code's factorials overflow (fixes.Match.Floor).
+	Floor bool
+	// Form, for a binomial of a signed integer type, says what the
+	// function computes outside 0 ≤ k ≤ n too, with integers that do
+	// not wrap: "loop" for a multiplicative loop from 1 over k trips
+	// (the generalised C(n, k) for k ≥ 0, 1 for k < 0), "factorials"
+	// for n!/(k!(n−k)!) over factorial functions with EmptyBelow; ""
+	// where it is not known. A caller's float expression kept as written
+	// outside a helper's domain takes the call's value from the float
+	// helper of that form (fixes.Match.IntBinomials) rather than calling
+	// the function, whose own fix panics where C(n, k) leaves its type.
+	Form string
 }
 
 // AFact marks FactorialFact as an analysis fact.

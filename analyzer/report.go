@@ -51,6 +51,7 @@ func (fc *fnCtx) report(f finding) {
 	if f.match != nil && !fi.cgo {
 		f.match.File = fi.file
 		f.match.NonNeg = fc.nonNegative(f.match.Args)
+		f.match.IntBinomials = fc.intBinomials(f.match)
 		if c.holdGuard(d, f.match) {
 			return
 		}

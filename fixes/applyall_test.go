@@ -163,7 +163,8 @@ func dropUnusedImports(src []byte) ([]byte, error) {
 		}
 		return true
 	})
-	for _, spec := range f.Imports {
+	// DeleteNamedImport shortens f.Imports in place: range over a copy.
+	for _, spec := range append([]*ast.ImportSpec(nil), f.Imports...) {
 		path, _ := strconv.Unquote(spec.Path.Value)
 		name := filepath.Base(path)
 		if spec.Name != nil {

@@ -168,6 +168,10 @@ var diffCases = []diffCase{
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 1100; n += 7", "k := 0; k <= n; k += 1 + n/9"}, args: "float64(n), float64(k)", typ: "float64", ref: refChoose},
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := -8; n <= 60; n += 3", "k := -4; k <= 70; k += 3"}, args: "float64(n) / 4, float64(k) / 4", typ: "float64", ref: refTallyChoose, noBreak: true},
 	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 0; n <= 40; n++", "k := n + 1; k <= n+30; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refTallyChoose, noBreak: true},
+	// Past 170 the factorials alone overflow: fractions (the floors'
+	// ratio) and k > n (n!/k!) are taken in log space, where the original
+	// divides +Inf by +Inf.
+	{pkg: "fixcounts", fn: "Stalls", loops: []string{"n := 680; n <= 1200; n += 61", "k := 40; k <= 3000; k += 217"}, args: "float64(n) / 4, float64(k) / 4", typ: "float64", ref: refTallyChoose},
 	// e^−λ·Σ λ^k/k! with e^−λ folded into each term: right where λ^k
 	// overflows (the reference takes e^−λ from math.Exp, so λ ≤ 700).
 	{pkg: "fixcounts", fn: "Queue", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 1100; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},
@@ -176,6 +180,19 @@ var diffCases = []diffCase{
 	{pkg: "fixloggamma", fn: "Spread", loops: []string{"n := 1; n <= 900; n += 7"}, args: "float64(n) / 2", typ: "float64", ref: refLogGamma},
 	{pkg: "fixcounts", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "float64(k), float64(l) / 2", typ: "float64", ref: refPoisson},
 	{pkg: "fixcounts", fn: "Rentals", loops: []string{"n := 1; n <= 1100; n += 37", "k := 0; k <= n; k += 1 + n/11"}, args: "float64(k), float64(n), 0.125", typ: "float64", ref: refBinomialPMF},
+	// Binomial probabilities over integer binomial functions, on a grid
+	// that leaves their domain (p = 1.5, k past n, a load smaller than
+	// its flawed pots): the expression kept as written takes each count
+	// from the float helper of its function's form, where the
+	// functions' own fixes would panic.
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := -3; k <= n+3; k += 1 + n/9"}, args: "n, k, 1.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 100; n += 3", "k := 0; k <= n; k += 1 + n/9"}, args: "n, k, 0.25", typ: "float64", ref: refBinomialPMFnk},
+	// k past n with a p whose power leaves float64: the count is 0, and
+	// so is the product, where the float64 arithmetic says 0·Inf = NaN.
+	{pkg: "fixkept", fn: "Cracked", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "int64(n), int64(k), 150.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
+	{pkg: "fixkept", fn: "Flawed", loops: []string{"total := 40; total <= 120; total += 20", "k := 0; k <= 30; k += 3"}, args: "total, 70, 30, k", typ: "float64", ref: refKeptHypergeometric},
+	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := -3; n <= 60; n += 2", "k := -3; k <= n+3; k += 1 + n/9"}, args: "int64(n), int64(k), 1.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

@@ -280,7 +280,11 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 		lead = append(lead, b.copyText(def))
 	}
 	lead = append(lead, "//overfact:allow outside "+d.words+" the expression as written")
-	return b.keepAs(text, b.m.Node, b.copyText(b.m.Node), conds, false, lead...)
+	orig, err := b.asWritten(b.m.Node)
+	if err != nil {
+		return "", err
+	}
+	return b.keepAs(text, b.m.Node, orig, conds, false, lead...)
 }
 
 // keepAsWritten returns text, the helper call that replaces node, so
@@ -309,7 +313,86 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 //		return text
 //	}()
 func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, inside bool, why string) (string, error) {
-	return b.keepAs(text, node, b.copyText(node), conds, inside, "//overfact:allow "+why)
+	orig, err := b.asWritten(node)
+	if err != nil {
+		return "", err
+	}
+	return b.keepAs(text, node, orig, conds, inside, "//overfact:allow "+why)
+}
+
+// productShapes are the shapes whose expression kept as written is a
+// count times powers, which is 0 where the count is (k > n) however far
+// the powers leave float64 (p outside [0, 1]).
+var productShapes = map[Shape]bool{ShapeBinomialPMF: true, ShapeNegBinomialPMF: true}
+
+// asWritten returns node's source for the branch that runs it as
+// written, in two respects not as written where the code's own float
+// arithmetic would lose a value the expression has:
+//
+//   - a float ratio of factorial functions that return ⌊x⌋!
+//     (Match.Floor) is their exact quotient in log space (emptyQuotient);
+//   - each float conversion of an integer binomial function's call in it
+//     (Match.IntBinomials) is taken from the float helper of the
+//     function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
+//     the value the call had before its function's own fix, which panics
+//     where C(n, k) leaves the integer type;
+//   - a binomial probability's float64 product (productShapes) is
+//     formed as the helper's Product chain (buildProductChain), which is
+//     the same float64 operations wherever they stay in range, and the
+//     product's value where a factor leaves float64 and the product does
+//     not: C(2, 150)·150.5^150·(−149.5)^−148 is 0, not 0·Inf = NaN.
+func (b *builder) asWritten(node ast.Node) (string, error) {
+	e, ok := node.(ast.Expr)
+	if !ok || classOf(b.m.Result) != classFloat {
+		return b.copyText(node), nil
+	}
+	if node == b.m.Node && b.m.Floor {
+		shown, counts := b.shown, b.counts
+		q, err := b.emptyQuotient()
+		b.shown, b.counts = shown, counts
+		if err != nil || q != "" {
+			return q, err
+		}
+	}
+	subs := make(map[ast.Expr]string)
+	var err error
+	ast.Inspect(e, func(n ast.Node) bool {
+		conv, ok := n.(*ast.CallExpr)
+		if !ok || err != nil || len(b.m.IntBinomials) == 0 {
+			return err == nil && len(b.m.IntBinomials) > 0
+		}
+		to := b.pass.TypesInfo.TypeOf(conv)
+		if !b.isNumericConversion(conv) || classOf(to) != classFloat {
+			return true
+		}
+		call, _ := ast.Unparen(conv.Args[0]).(*ast.CallExpr)
+		bin, ok := b.m.IntBinomials[call]
+		if !ok {
+			return true
+		}
+		name := "ChooseFactorials"
+		if bin.Loop {
+			name = "ChooseLoop"
+		}
+		shown := b.shown
+		subs[conv], err = b.call(name, []ast.Expr{bin.N, bin.K}, to)
+		b.shown = shown
+		return false
+	})
+	if err != nil {
+		return "", err
+	}
+	if len(subs) == 0 && !productShapes[b.m.Shape] {
+		return b.copyText(node), nil
+	}
+	// Without calls, no part of the expression is a chain: spliced writes
+	// it with subs alone.
+	lp := &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(e.Pos()), subs: subs}
+	if chain := (&logProducts{b: b, set: lp.set, pkg: lp.pkg, calls: true, subs: subs}); productShapes[b.m.Shape] &&
+		types.Identical(b.pass.TypesInfo.TypeOf(e), types.Typ[types.Float64]) && chain.chainable(e) && chain.leaves(e) >= 1 && !b.commentIn(e) {
+		return chain.chain(e) + ".Float64()", nil
+	}
+	return lp.spliced(e), nil
 }
 
 // keepAs is keepAsWritten with orig, what runs in node's place where the
@@ -346,14 +429,22 @@ func (b *builder) keepAs(text string, node ast.Node, orig string, conds []string
 // the expression computes outside the helper's domain, without calling
 // those functions, which a range guard may make panic for a large
 // argument (fact(25) in fact(−3)/(fact(25)·fact(−28)), whose value 0
-// fits). "" where it does not apply.
+// fits). For a float ratio whose functions return ⌊x⌋! (Match.Floor)
+// it is the quotient in log space, lgamma.FloorFactorialQuotient, which
+// the factorials' overflow does not turn into NaN (rotas(171)/
+// (rotas(700)·rotas(−529)) is 171!/700!, below float64: 0, not
+// +Inf/+Inf). "" where it does not apply.
 func (b *builder) emptyQuotient() (string, error) {
 	switch b.m.Shape {
 	case ShapeBinomial, ShapePermutation, ShapeMultinomial, ShapeCatalan:
 	default:
 		return "", nil
 	}
-	if !b.m.EmptyBelow || classOf(b.m.Result) != classSigned {
+	name := "MustFactorialQuotientInt64"
+	switch {
+	case classOf(b.m.Result) == classFloat && b.m.Floor:
+		name = "FloorFactorialQuotient"
+	case !b.m.EmptyBelow || classOf(b.m.Result) != classSigned:
 		return "", nil
 	}
 	var num, den []ast.Expr
@@ -370,7 +461,7 @@ func (b *builder) emptyQuotient() (string, error) {
 	}
 	shown := b.shown
 	defer func() { b.shown = shown }()
-	return b.call("MustFactorialQuotientInt64", args, b.m.Result)
+	return b.call(name, args, b.m.Result)
 }
 
 // returning returns the return statement whose only result is the

@@ -18,12 +18,15 @@ const helperAPI = `package lgamma
 func Choose(n, k int) float64                               { panic("") }
 func MustChooseInt64(n, k int64) int64                      { panic("") }
 func MustChooseUint64(n, k uint64) uint64                   { panic("") }
+func ChooseLoop(n, k int) float64                           { panic("") }
+func ChooseFactorials(n, k int) float64                     { panic("") }
 func Falling(n, k int) float64                              { panic("") }
 func MustFallingInt64(n, k int64) int64                     { panic("") }
 func MustFallingUint64(n, k uint64) uint64                  { panic("") }
 func Multinomial(ks ...int) float64                         { panic("") }
 func MustMultinomialInt64(ks ...int64) int64                { panic("") }
 func MustFactorialQuotientInt64(num int64, den ...int64) int64 { panic("") }
+func FloorFactorialQuotient(num float64, den ...float64) float64 { panic("") }
 func Catalan(n int) float64                                 { panic("") }
 func MustCatalanInt64(n int64) int64                        { panic("") }
 func HypergeometricPMF(k, total, successes, draws int) float64 { panic("") }

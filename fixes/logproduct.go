@@ -10,6 +10,7 @@ import (
 	"strings"
 
 	"github.com/overfact/overfact/internal/assigned"
+	"github.com/overfact/overfact/internal/astpath"
 )
 
 // A series term whose parts the code keeps in running products of their
@@ -168,6 +169,10 @@ type logProducts struct {
 	// (a product of them written in one expression); otherwise they are
 	// carried only as factors of a product with a carried variable.
 	calls bool
+	// subs are expressions to write as the given text wherever the
+	// chain takes them as they are (a count from a float helper in an
+	// expression kept as written, asWritten).
+	subs map[ast.Expr]string
 }
 
 // qualifies checks that v is a running product the rewrite can carry: a
@@ -363,11 +368,18 @@ func (lp *logProducts) spliced(e ast.Expr) string {
 	at := e.Pos()
 	ast.Inspect(e, func(n ast.Node) bool {
 		x, ok := n.(ast.Expr)
-		if !ok || !lp.chainable(x) {
+		if !ok {
 			return true
 		}
+		text, sub := lp.subs[x]
+		if !sub {
+			if !lp.chainable(x) {
+				return true
+			}
+			text = lp.chain(x) + ".Float64()"
+		}
 		out.Write(b.src[b.offset(at):b.offset(x.Pos())])
-		out.WriteString(lp.chain(x) + ".Float64()")
+		out.WriteString(text)
 		at = x.End()
 		return false
 	})
@@ -490,4 +502,56 @@ func (lp *logProducts) leaves(e ast.Expr) int {
 		return n
 	}
 	return 0
+}
+
+// buildGammaRatio rewrites Γ(a)/Γ(b) into lgamma.GammaRatio, except
+// where the ratio is a factor of a float64 product with powers or other
+// Gamma values, Γ((k+3)/2)/Γ(3/2)·s^k: the ratio alone may be +Inf
+// where the product is finite or 0 (s = 0 gives +Inf·0 = NaN), so the
+// whole product is taken as a Product chain (buildProductChain), which
+// keeps the float64 value wherever its steps stay in range.
+func buildGammaRatio(b *builder) error {
+	if top := b.enclosingProduct(); top != nil {
+		node := b.m.Node
+		b.m.Node = top
+		if err := buildProductChain(b); err == nil {
+			return nil
+		}
+		b.m.Node = node
+	}
+	return buildTerm(b)
+}
+
+// enclosingProduct returns the largest product or quotient of float64
+// factors that holds the match's node as a factor and has other calls
+// of math.Pow, math.Gamma or math.Exp among its factors; nil where
+// there is none.
+func (b *builder) enclosingProduct() ast.Expr {
+	path, _ := astpath.Enclosing(b.file, b.m.Node.Pos(), b.m.Node.End())
+	var top ast.Expr
+	for i, n := range path {
+		if n == b.m.Node {
+			for _, up := range path[i+1:] {
+				switch x := up.(type) {
+				case *ast.ParenExpr:
+					continue
+				case *ast.BinaryExpr:
+					if x.Op == token.MUL || x.Op == token.QUO {
+						top = x
+						continue
+					}
+				}
+				break
+			}
+			break
+		}
+	}
+	if top == nil || !types.Identical(b.pass.TypesInfo.TypeOf(top), types.Typ[types.Float64]) {
+		return nil
+	}
+	lp := &logProducts{b: b, set: map[types.Object]bool{}, calls: true}
+	if !lp.chainable(top) || lp.leaves(top) <= lp.leaves(b.m.Node.(ast.Expr)) {
+		return nil
+	}
+	return top
 }

@@ -88,6 +88,12 @@ type Match struct {
 	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
 	// arguments, with no need to call the functions themselves.
 	EmptyBelow bool
+	// Floor, for the ratio shapes, tells that every
+	// factorial function returns ⌊x⌋! for every x, fractions included
+	// (a loop from 2 up to x by one): outside the helper's domain a float
+	// expression's value is lgamma.FloorFactorialQuotient of the calls'
+	// arguments, which no factorial's overflow turns into NaN.
+	Floor bool
 	// NonNeg holds the operands (Args, and the integer inside a
 	// conversion float64(k)) that the analyzer's range analysis shows
 	// are never negative where they are evaluated (a loop counter from
@@ -99,6 +105,15 @@ type Match struct {
 	// lgamma.FactorialProduct(call, count), the code's own value with
 	// ln count! beside it.
 	Factorials []FactorialCall
+	// IntBinomials maps the calls in Node of integer functions whose
+	// value is C(n, k) in a form known outside 0 ≤ k ≤ n too to their
+	// operands and form. A float expression kept as written where the
+	// operands leave a helper's domain takes those calls' values from the
+	// float helper of the form (lgamma.ChooseLoop, ChooseFactorials)
+	// instead of calling them: the functions' own fixes panic where
+	// C(n, k) leaves their integer type, where the original float64(…)
+	// of the call had a value.
+	IntBinomials map[*ast.CallExpr]IntBinomial
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are
@@ -124,4 +139,14 @@ type FactorialCall struct {
 	Call *ast.CallExpr
 	Arg  ast.Expr
 	Off  int64
+}
+
+// IntBinomial is a call of an integer binomial function
+// (Match.IntBinomials): its operands n and k, and its form.
+type IntBinomial struct {
+	N, K ast.Expr
+	// Loop: the multiplicative loop from 1 over k trips, the generalised
+	// C(n, k) for k ≥ 0 and 1 for k < 0; otherwise n!/(k!(n−k)!) over
+	// factorial functions that return 1 below 2, rounded toward zero.
+	Loop bool
 }

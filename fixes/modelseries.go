@@ -95,6 +95,15 @@ func buildModelSeriesTerm(b *builder) error {
 		return fmt.Errorf("the loop does not update %s", m.Acc.Name())
 	}
 	if b.uses(m.Acc) != nupd+1 {
+		// The running factorial is read after the loop too (Erlang B's
+		// a^c/c!/Σ): no helper call can take its place there, but it can
+		// be carried in log space with every read (ShapeLogSpaceTerm).
+		if id, ok := ast.Unparen(quo.Y).(*ast.Ident); ok && m.Func != nil {
+			b.m.Args = []ast.Expr{id}
+			if err := buildLogSpaceTerm(b); err == nil {
+				return nil
+			}
+		}
 		return fmt.Errorf("%s is read outside the term and its updates", m.Acc.Name())
 	}
 	writes := nupd

@@ -335,3 +335,42 @@ func refRisingFrom(x int64) func([]float64) *big.Float {
 		return refProductFrom(x)([]float64{float64(x + int64(v[0]) - 1)})
 	}
 }
+
+// powZBig is x^e for any integer e, in math/big.
+func powZBig(x float64, e int64) *big.Float {
+	if e < 0 {
+		return quo(fl(1), powBig(x, -e))
+	}
+	return powBig(x, e)
+}
+
+// keptPMF is count·p^k·(1−p)^(n−k) for (n, k, p), count being what the
+// code's binomial function computes for (n, k) without wrapping: the
+// expression a binomial probability keeps as written for p outside
+// [0, 1] and k outside 0..n.
+func keptPMF(count func(n, k int64) *big.Int) func([]float64) *big.Float {
+	return func(x []float64) *big.Float {
+		n, k, p := int64(x[0]), int64(x[1]), x[2]
+		return mul(mul(bf(count(n, k)), powZBig(p, k)), powZBig(1-p, n-k))
+	}
+}
+
+// ratioChooseBig is n!/(k!(n−k)!) over factorials that are 1 below 2,
+// rounded toward zero, as Go's integer division rounds.
+func ratioChooseBig(n, k int64) *big.Int {
+	d := new(big.Int).Mul(factorialBig(k), factorialBig(n-k))
+	return new(big.Int).Quo(factorialBig(n), d)
+}
+
+// refKeptHypergeometric is C(K,k)·C(N−K,n−k)/C(N,n) for (N, K, n, k)
+// with each binomial the multiplicative loop's value (loopChooseBig),
+// the generalised coefficient where N − K < 0.
+func refKeptHypergeometric(x []float64) *big.Float {
+	total, bad, n, k := int64(x[0]), int64(x[1]), int64(x[2]), int64(x[3])
+	num := new(big.Int).Mul(loopChooseBig(bad, k), loopChooseBig(total-bad, n-k))
+	return quo(bf(num), bf(loopChooseBig(total, n)))
+}
+
+// refBinomialPMFnk is refBinomialPMF with the operands in the order
+// (n, k, p).
+func refBinomialPMFnk(x []float64) *big.Float { return refBinomialPMF([]float64{x[1], x[0], x[2]}) }

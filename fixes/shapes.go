@@ -51,7 +51,7 @@ func init() {
 		ShapePowOverFactorial: {"power over factorial", buildTerm, family{float: "PowOverFactorial"}, 2, powOverFactorialFactors},
 		ShapePoisson:          {"Poisson term", buildTerm, family{float: "PoissonTerm"}, 2, poissonFactors},
 		ShapeBinomialPMF:      {"binomial probability", buildTerm, family{float: "BinomialPMF"}, 3, binomialPMFFactors},
-		ShapeGammaRatio:       {"gamma ratio", buildTerm, family{float: "GammaRatio"}, 2, gammaRatioFactors},
+		ShapeGammaRatio:       {"gamma ratio", buildGammaRatio, family{float: "GammaRatio"}, 2, gammaRatioFactors},
 		ShapeBeta:             {"beta function", buildTerm, family{float: "Beta"}, 2, betaFactors},
 		ShapeInverseBeta:      {"inverse beta function", buildInverseBeta, family{float: "Beta"}, 2, inverseBetaFactors},
 		ShapeBinomialLoop:     {"binomial loop", buildLoop, chooseHelpers, 0, nil},

@@ -231,3 +231,30 @@ func MustChooseUint64(n, k uint64) uint64 {
 	}
 	return r
 }
+
+// ChooseLoop returns, as a float64, what the multiplicative loop
+//
+//	c := 1
+//	for i := 1; i <= k; i++ {
+//		c = c * (n - k + i) / i
+//	}
+//
+// computes in integers that do not wrap: every division is exact, c is
+// C(n−k+i, i) after step i, so the loop ends at the generalised C(n, k)
+// of Choose for every n and k ≥ 0 (0 for 0 ≤ n < k, where a factor is
+// 0), and at its start, 1, for k < 0, where it runs no trip. It is the
+// value such a binomial function computes without wrapping, where
+// MustChooseInt64 panics because it leaves int64.
+//
+// Accuracy: as Choose's (checked against math/big in exact_test.go).
+//
+// Special cases are:
+//
+//	ChooseLoop(n, k < 0) = 1
+//	ChooseLoop(n, k ≥ 0) = Choose(n, k)
+func ChooseLoop(n, k int) float64 {
+	if k < 0 {
+		return 1
+	}
+	return Choose(n, k)
+}

@@ -179,3 +179,27 @@ func TestCatalanOverflow(t *testing.T) {
 		t.Errorf("Catalan overflow at %d: Catalan(%d) = %g, Catalan(%d) = %g", last+1, last, Catalan(last), last+1, Catalan(last+1))
 	}
 }
+
+// TestChooseLoopAgainstBig runs the multiplicative loop the helper
+// stands for in math/big (no wrapping, Go's truncating division) and
+// compares its value, rounded to float64 by math/big, with ChooseLoop's:
+// within one ulp, as Choose is.
+func TestChooseLoopAgainstBig(t *testing.T) {
+	loop := func(n, k int64) *big.Int {
+		c := big.NewInt(1)
+		for i := int64(1); i <= k; i++ {
+			c.Mul(c, big.NewInt(n-k+i))
+			c.Quo(c, big.NewInt(i))
+		}
+		return c
+	}
+	for _, n := range []int64{-700, -155, -67, -30, -3, -1, 0, 1, 2, 5, 20, 21, 62, 67, 100, 171, 1030} {
+		for _, k := range []int64{-5, -1, 0, 1, 2, 3, 10, 30, 34, 66, 67, 100, 171, 500} {
+			want, _ := new(big.Float).SetInt(loop(n, k)).Float64()
+			got := ChooseLoop(int(n), int(k))
+			if got != want && !(math.Abs(got-want) <= math.Abs(want)*0x1p-52) {
+				t.Errorf("ChooseLoop(%d, %d) = %g; the loop in math/big gives %g", n, k, got, want)
+			}
+		}
+	}
+}

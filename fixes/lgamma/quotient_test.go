@@ -2,6 +2,7 @@ package lgamma
 
 import (
 	"fmt"
+	"math"
 	"math/big"
 	"testing"
 )
@@ -76,5 +77,57 @@ func TestFactorialQuotientInt64Binomial(t *testing.T) {
 				t.Fatalf("(%d, %d): quotient %d %v, ChooseInt64 %d %v", n, k, q, qok, c, cok)
 			}
 		}
+	}
+}
+
+// TestChooseFactorialsAgainstBig compares ChooseFactorials with
+// n!/(k!·(n−k)!) in math/big, the factorial of a number below 2 being
+// the empty product 1 and the quotient rounded toward zero (quotientRef),
+// rounded to float64 by math/big: within one ulp, as Choose is.
+func TestChooseFactorialsAgainstBig(t *testing.T) {
+	for _, n := range []int64{-40, -5, -2, -1, 0, 1, 2, 3, 20, 21, 34, 62, 67, 100, 171, 400} {
+		for _, k := range []int64{-41, -6, -3, -2, -1, 0, 1, 2, 3, 10, 30, 67, 100, 200, 401} {
+			want, _ := new(big.Float).SetInt(quotientRef(n, k, n-k)).Float64()
+			got := ChooseFactorials(int(n), int(k))
+			if got != want && !(math.Abs(got-want) <= math.Abs(want)*0x1p-52) {
+				t.Errorf("ChooseFactorials(%d, %d) = %g; math/big gives %g", n, k, got, want)
+			}
+		}
+	}
+}
+
+// TestFloorFactorialQuotientAgainstBig compares FloorFactorialQuotient
+// with ⌊num⌋!/∏⌊den⌋! in math/big (emptyFact: the factorial below 2 is
+// 1), rounded to float64 by math/big: within 4 ulps, 0 or +Inf where
+// the quotient leaves float64.
+func TestFloorFactorialQuotientAgainstBig(t *testing.T) {
+	xs := []float64{-49.5, -3, -0.5, 0, 1, 1.5, 2, 2.5, 3, 12.25, 20, 34.5, 150.5, 170, 171, 200, 300.5, 700, 1030, 1500}
+	floor := func(x float64) int64 {
+		if x < 2 {
+			return 0
+		}
+		return int64(x)
+	}
+	check := func(num float64, den ...float64) {
+		t.Helper()
+		q := new(big.Float).SetPrec(300).SetInt(emptyFact(floor(num)))
+		for _, d := range den {
+			q.Quo(q, new(big.Float).SetPrec(300).SetInt(emptyFact(floor(d))))
+		}
+		want, _ := q.Float64() // ±Inf past float64, 0 below it
+		got := FloorFactorialQuotient(num, den...)
+		if got != want && !(math.Abs(got-want) <= 4*math.Abs(want)*0x1p-52) {
+			t.Errorf("FloorFactorialQuotient(%v, %v) = %g; math/big gives %g", num, den, got, want)
+		}
+	}
+	for _, n := range xs {
+		check(n)
+		for _, k := range xs {
+			check(n, k)
+			check(n, k, n-k)
+		}
+	}
+	if got := FloorFactorialQuotient(math.NaN(), 3); math.Abs(got-1.0/6) > 0x1p-54 {
+		t.Errorf("FloorFactorialQuotient(NaN, 3) = %g, want 1/3! (the loop runs no trip for NaN)", got)
 	}
 }

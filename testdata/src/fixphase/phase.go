@@ -31,8 +31,9 @@ func Sinh(x float64, terms int) float64 {
 	return sum
 }
 
-// SinhTail also returns the last factorial, which the rewrite would
-// lose: it is left as it is.
+// SinhTail also returns the last factorial, which no helper call can
+// stand for: the factorial is carried in log space, read back where it
+// is returned.
 func SinhTail(x float64, terms int) (float64, float64) {
 	sum := x
 	fact := 1.0

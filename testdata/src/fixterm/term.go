@@ -75,7 +75,8 @@ func Scaled(a, b, v float64) float64 { // want Scaled:`value Γ\(p0\)·\(p2\)/Γ
 }
 
 // FillMoment is the k-th moment factor of a fill-level model: the gamma
-// ratio is grouped apart from the power, so it alone is rewritten.
+// ratio is grouped apart from the power, and the product of the two is
+// taken as one Product chain, which is 0 for s = 0 where Γ overflows.
 func FillMoment(k int, s float64) float64 { // want FillMoment:`value 2·Γ\(1/2\*p0 \+ 3/2\)·\(p1\)\^\(p0\)/√π, wrong once 1/2\*p0 \+ 3/2 ≥ 171\.624377`
 	return math.Gamma(float64(k+3)/2) / math.Gamma(1.5) * math.Pow(s, float64(k)) // want "ratio of math.Gamma"
 }
@@ -87,8 +88,8 @@ func FillDensity(a, b, x float64) float64 { // want FillDensity:`value Γ\(p0 \+
 }
 
 // Drift is the k-step growth of a fill model, Γ(k+b)/Γ(b)·g^k: the
-// gamma ratio is rewritten on its own, and stays finite when Γ(k+b) is
-// not.
+// product is taken as one Product chain, and stays finite when Γ(k+b)
+// is not.
 func Drift(k int, b, g float64) float64 { // want Drift:`value Γ\(p0 \+ p1\)·\(p2\)\^\(p0\)/Γ\(p1\), wrong once p0 \+ p1 ≥ 171\.624377`
 	return math.Gamma(float64(k)+b) / math.Gamma(b) * math.Pow(g, float64(k)) // want "ratio of math.Gamma"
 }
