@@ -68,7 +68,8 @@ func TestSpecialCases(t *testing.T) {
 		{"LogFalling(5, -1)", LogFalling(5, -1), nan},
 		{"LogFalling(5, 6)", LogFalling(5, 6), ninf},
 		{"LogFalling(5, 0)", LogFalling(5, 0), 0},
-		{"Falling(-1, 0)", Falling(-1, 0), nan},
+		{"Falling(-1, 0)", Falling(-1, 0), 1},
+		{"Falling(-3, 2)", Falling(-3, 2), 12},
 		{"Falling(5, -1)", Falling(5, -1), nan},
 		{"Falling(5, 6)", Falling(5, 6), 0},
 		{"Falling(5, 0)", Falling(5, 0), 1},
@@ -224,8 +225,8 @@ func TestIntegerDomain(t *testing.T) {
 	if _, ok := FallingInt64(5, -1); ok {
 		t.Error("FallingInt64(5, -1) ok")
 	}
-	if _, ok := FallingInt64(-5, 1); ok {
-		t.Error("FallingInt64(-5, 1) ok")
+	if v, ok := FallingInt64(-5, 1); !ok || v != -5 {
+		t.Errorf("FallingInt64(-5, 1) = %d, %v; want -5, true (the one factor)", v, ok)
 	}
 	if v, ok := FallingUint64(3, 5); !ok || v != 0 {
 		t.Errorf("FallingUint64(3, 5) = %d, %v; want 0, true", v, ok)

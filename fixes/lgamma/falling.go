@@ -48,28 +48,49 @@ func LogFalling(n, k int) float64 {
 	return lnFallingDD(uint64(n), uint64(k)).float()
 }
 
-// Falling returns the falling factorial n!/(n−k)! = n(n−1)…(n−k+1).
+// Falling returns the falling factorial n(n−1)…(n−k+1), which is
+// n!/(n−k)! for n ≥ 0; for a negative n it is the product of the k
+// negative factors, (−1)^k·m(m−1)…(m−k+1) with m = k−1−n.
 //
 // Accuracy: within 1 ulp for all n and k up to MaxInt64, exact below
-// 2^64; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+// 2^64; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp
+// (n ≥ 0; a negative n takes the same computation for m).
 //
 // Special cases are:
 //
 //	Falling(n, 0) = 1
-//	Falling(n, k > n) = 0
-//	Falling(n < 0, k) = NaN
+//	Falling(n, k > n) = 0 for n ≥ 0
 //	Falling(n, k < 0) = NaN
-//	Falling(n, k) = +Inf if the result overflows
+//	Falling(n, k) = ±Inf if the result overflows
 func Falling(n, k int) float64 {
 	switch {
-	case n < 0 || k < 0:
+	case k < 0:
 		return math.NaN()
+	case n < 0:
+		m, neg := negativeTop(int64(n), int64(k))
+		r := integerResult(lnFallingDD(m, uint64(k)), func() (uint64, bool) {
+			return fallingU(m, uint64(k), math.MaxUint64)
+		})
+		if neg {
+			r = -r
+		}
+		return r
 	case k > n:
 		return 0
 	}
 	return integerResult(lnFallingDD(uint64(n), uint64(k)), func() (uint64, bool) {
 		return fallingU(uint64(n), uint64(k), math.MaxUint64)
 	})
+}
+
+// negativeTop returns, for a negative n and k ≥ 0, the m ≥ k whose
+// falling factorial is the magnitude of n's, and the sign: the factors
+// n, n−1, …, n−k+1 are −|n|, −(|n|+1), …, −(|n|+k−1), so their product
+// is (−1)^k·(|n|+k−1)(|n|+k−2)…|n|, the falling factorial of k factors
+// from m = |n|+k−1 (common practice). m is formed in uint64, where it
+// always fits (|n| ≤ 2^63, k−1 < 2^63).
+func negativeTop(n, k int64) (m uint64, neg bool) {
+	return uint64(-(n+1)) + 1 + uint64(k-1), k%2 == 1
 }
 
 // fallingU returns n(n−1)…(n−k+1) if it is at most limit. The partial
@@ -89,43 +110,53 @@ func fallingU(n, k, limit uint64) (uint64, bool) {
 	return r, true
 }
 
-// FallingInt64 returns n!/(n−k)! and true when it fits in an int64, and
-// 0 and false when it does not or n or k is negative. For k > n the
-// result is 0 and true.
+// FallingInt64 returns the falling factorial n(n−1)…(n−k+1) (n!/(n−k)!
+// for n ≥ 0, the product of k negative factors for n < 0, see Falling)
+// and true when it fits in an int64, and 0 and false when it does not
+// or k is negative. For k > n ≥ 0 the result is 0 and true.
 //
 // Accuracy: exact (checked against math/big in exact_test.go and in
-// the mpmath sweep).
+// the mpmath sweep; negative n in falling_neg_test.go).
 //
 // Special cases are:
 //
 //	FallingInt64(n, 0) = 1, true
 //	FallingInt64(n, k > n) = 0, true for n ≥ 0
-//	FallingInt64(n, k) = 0, false if n or k is negative
+//	FallingInt64(n, k) = 0, false if k is negative
 func FallingInt64(n, k int64) (int64, bool) {
-	if n < 0 || k < 0 {
+	switch {
+	case k < 0:
 		return 0, false
+	case n < 0:
+		m, neg := negativeTop(n, k)
+		if !neg {
+			r, ok := fallingU(m, uint64(k), math.MaxInt64)
+			return int64(r), ok
+		}
+		// −2^63 fits: the magnitude may reach 2^63.
+		r, ok := fallingU(m, uint64(k), 1<<63)
+		if !ok {
+			return 0, false
+		}
+		return int64(0 - r), true
 	}
 	r, ok := fallingU(uint64(n), uint64(k), math.MaxInt64)
 	return int64(r), ok
 }
 
-// MustFallingInt64 is like FallingInt64 but panics when n or k is
-// negative or the result does not fit in an int64.
+// MustFallingInt64 is like FallingInt64 but panics when k is negative
+// or the result does not fit in an int64; the message names n and k.
 //
 // Accuracy: exact (checked against math/big in exact_test.go and in
 // the mpmath sweep).
 //
 // Special cases are:
 //
-//	MustFallingInt64(n, k) panics if n or k is negative
+//	MustFallingInt64(n, k) panics if k is negative
 func MustFallingInt64(n, k int64) int64 {
 	r, ok := FallingInt64(n, k)
 	if !ok {
-		d := nonNegative("n", n)
-		if d == "" {
-			d = nonNegative("k", k)
-		}
-		panic(mustError("MustFallingInt64", args(n, k), d, "int64"))
+		panic(mustError("MustFallingInt64", args(n, k), nonNegative("k", k), "int64"))
 	}
 	return r
 }
