@@ -171,12 +171,18 @@ func ChooseInt64(n, k int64) (int64, bool) {
 		return 0, true
 	}
 	m, neg := generalised(n, k)
+	return signedInt64(m, uint64(k), neg, chooseU)
+}
+
+// signedInt64 returns f(m, k), or −f(m, k) where neg, in int64 with ok
+// where it fits: −2^63 fits although 2^63 does not. f computes its
+// value in uint64 and reports whether it is at most limit.
+func signedInt64(m, k uint64, neg bool, f func(m, k, limit uint64) (uint64, bool)) (int64, bool) {
 	if !neg {
-		r, ok := chooseU(m, uint64(k), math.MaxInt64)
+		r, ok := f(m, k, math.MaxInt64)
 		return int64(r), ok
 	}
-	// −2^63 fits although 2^63 does not.
-	r, ok := chooseU(m, uint64(k), 1<<63)
+	r, ok := f(m, k, 1<<63)
 	if !ok {
 		return 0, false
 	}

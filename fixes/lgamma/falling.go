@@ -67,7 +67,9 @@ func Falling(n, k int) float64 {
 	case k < 0:
 		return math.NaN()
 	case n < 0:
-		m, neg := negativeTop(int64(n), int64(k))
+		// The k factors −|n|, −(|n|+1), …: (−1)^k·m(m−1)…(m−k+1) for
+		// m = k−1−n, the m of the generalised binomial (generalised).
+		m, neg := generalised(int64(n), int64(k))
 		r := integerResult(lnFallingDD(m, uint64(k)), func() (uint64, bool) {
 			return fallingU(m, uint64(k), math.MaxUint64)
 		})
@@ -81,16 +83,6 @@ func Falling(n, k int) float64 {
 	return integerResult(lnFallingDD(uint64(n), uint64(k)), func() (uint64, bool) {
 		return fallingU(uint64(n), uint64(k), math.MaxUint64)
 	})
-}
-
-// negativeTop returns, for a negative n and k ≥ 0, the m ≥ k whose
-// falling factorial is the magnitude of n's, and the sign: the factors
-// n, n−1, …, n−k+1 are −|n|, −(|n|+1), …, −(|n|+k−1), so their product
-// is (−1)^k·(|n|+k−1)(|n|+k−2)…|n|, the falling factorial of k factors
-// from m = |n|+k−1 (common practice). m is formed in uint64, where it
-// always fits (|n| ≤ 2^63, k−1 < 2^63).
-func negativeTop(n, k int64) (m uint64, neg bool) {
-	return uint64(-(n+1)) + 1 + uint64(k-1), k%2 == 1
 }
 
 // fallingU returns n(n−1)…(n−k+1) if it is at most limit. The partial
@@ -124,24 +116,12 @@ func fallingU(n, k, limit uint64) (uint64, bool) {
 //	FallingInt64(n, k > n) = 0, true for n ≥ 0
 //	FallingInt64(n, k) = 0, false if k is negative
 func FallingInt64(n, k int64) (int64, bool) {
-	switch {
-	case k < 0:
+	if k < 0 {
 		return 0, false
-	case n < 0:
-		m, neg := negativeTop(n, k)
-		if !neg {
-			r, ok := fallingU(m, uint64(k), math.MaxInt64)
-			return int64(r), ok
-		}
-		// −2^63 fits: the magnitude may reach 2^63.
-		r, ok := fallingU(m, uint64(k), 1<<63)
-		if !ok {
-			return 0, false
-		}
-		return int64(0 - r), true
 	}
-	r, ok := fallingU(uint64(n), uint64(k), math.MaxInt64)
-	return int64(r), ok
+	// For n < 0, (−1)^k·m(m−1)…(m−k+1) with m = k−1−n (see Falling).
+	m, neg := generalised(n, k)
+	return signedInt64(m, uint64(k), neg, fallingU)
 }
 
 // MustFallingInt64 is like FallingInt64 but panics when k is negative
