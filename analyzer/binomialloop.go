@@ -37,14 +37,8 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) {
 		return
 	}
-	lim := thresholds.CentralBinomialLoop(t.Num)
-	central := thresholds.CentralBinomial(t.Num)
-	name := src(nExpr)
-	clause, _ := verdict(shownName(nExpr), n, lim.FirstBad)
-	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
 	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: ast.Unparen(al.mult)}})
-	msg := fmt.Sprintf("multiplicative binomial loop in %s: the product %s %s before the division for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		t.typeName(), product, verb(t), name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause)
+	msg, definite := binomialProductText("loop", t, product, "the division", nExpr, n, k)
 	kExpr := al.count
 	if al.coff != 0 {
 		kExpr = nil
@@ -115,4 +109,19 @@ func (fc *fnCtx) noteCountSign(m *fixes.Match) {
 		k := fc.rangeOf(m.Args[1])
 		m.CountNonNeg = !k.IsEmpty() && k.Lo >= 0
 	}
+}
+
+// binomialProductText describes a multiplicative binomial whose product
+// is formed before the division (form: "loop" or "recursion"), the
+// products of C(m−1, j−1)·m for C(n, k), against the thresholds of the
+// type, and reports whether the overflow is certain: n and k each one
+// value whose products leave the type.
+func binomialProductText(form string, t numType, product, division string, nExpr ast.Expr, n, k ranges.Interval) (string, bool) {
+	lim := thresholds.CentralBinomialLoop(t.Num)
+	central := thresholds.CentralBinomial(t.Num)
+	name := src(nExpr)
+	clause, _ := verdict(shownName(nExpr), n, lim.FirstBad)
+	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
+	return fmt.Sprintf("multiplicative binomial %s in %s: the product %s %s before %s for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		form, t.typeName(), product, verb(t), division, name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause), definite
 }

@@ -24,6 +24,8 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if d, ok := n.(*ast.FuncDecl); ok && s.callMul {
 		if ff := c.funcs[c.declObj(d)]; ff != nil && ff.rec != nil {
 			fc.checkRecursion(ff)
+		} else if ff == nil {
+			fc.checkBinomialRecursion(d)
 		}
 	}
 	if s.knownCall || peekState(fc, powerLoopsKey) != nil {

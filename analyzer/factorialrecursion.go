@@ -7,6 +7,7 @@ import (
 	"go/types"
 	"math"
 
+	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/tokenop"
@@ -301,26 +302,109 @@ func (fc *fnCtx) checkFallingRecursion(ff *facFunc) {
 // it, passes an n and a k whose ranges keep the product within its
 // type: the recursion only steps both down from there.
 func (c *checker) fallingCallsFit(ff *facFunc) bool {
-	if ff.obj.Exported() || c.escapes[ff.obj] {
+	return c.callsFit(ff.obj, ff.decl, ff.param, ff.param2, func(n, k ranges.Interval) bool {
+		return n.Lo >= 0 && thresholds.FallingFits(ff.result.Num, n.Hi, min(k.Hi, n.Hi))
+	})
+}
+
+// callsFit reports whether fn is unexported, never used as a value, and
+// called from outside its own body at least once, each call passing
+// bounded ranges of its parameters ni and ki that fit accepts.
+func (c *checker) callsFit(fn *types.Func, decl *ast.FuncDecl, ni, ki int, fit func(n, k ranges.Interval) bool) bool {
+	if fn == nil || fn.Exported() {
+		return false
+	}
+	calls := c.callsOf(fn)
+	if c.funcs[fn] == nil {
+		// Not a factorial function: the pass's index of calls does not
+		// hold it (a binomial recursion, asked about rarely).
+		calls = c.callsOfOther(fn)
+	}
+	if calls == nil {
 		return false
 	}
 	outside := 0
-	for _, call := range c.callsOf(ff.obj) {
-		if ff.decl.Pos() <= call.Pos() && call.End() <= ff.decl.End() {
+	for _, call := range calls {
+		if decl.Pos() <= call.Pos() && call.End() <= decl.End() {
 			continue
 		}
 		outer := c.enclosingFunc(call)
-		if outer == nil || max(ff.param, ff.param2) >= len(call.Args) {
+		if outer == nil || max(ni, ki) >= len(call.Args) {
 			return false
 		}
 		at := c.ctx(outer)
-		n, k := at.rangeOf(call.Args[ff.param]), at.rangeOf(call.Args[ff.param2])
-		if !bounded(n) || !bounded(k) || n.Lo < 0 || !thresholds.FallingFits(ff.result.Num, n.Hi, min(k.Hi, n.Hi)) {
+		n, k := at.rangeOf(call.Args[ni]), at.rangeOf(call.Args[ki])
+		if !bounded(n) || !bounded(k) || !fit(n, k) {
 			return false
 		}
 		outside++
 	}
 	return outside > 0
+}
+
+// checkBinomialRecursion reports the multiplicative binomial written as
+// a recursion, return f(n-1, k-1) * n / k in a function that returns 1
+// at k == 0, in an integer type: C(n−1, k−1)·n is formed before the
+// division, as in the binomial loop's b*(n−k+i) (the same products, one
+// per level), so it wraps while C(n, k) still fits. A recursion with no
+// such return is left alone.
+func (fc *fnCtx) checkBinomialRecursion(decl *ast.FuncDecl) {
+	self, _ := fc.c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
+	if self == nil || decl.Body == nil {
+		return
+	}
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok {
+			return false
+		}
+		ret, ok := n.(*ast.ReturnStmt)
+		if !ok || len(ret.Results) != 1 {
+			return true
+		}
+		quo, ok := fc.stripConv(ret.Results[0]).(*ast.BinaryExpr)
+		if !ok || quo.Op != token.QUO {
+			return true
+		}
+		mul, ok := ast.Unparen(quo.X).(*ast.BinaryExpr)
+		if !ok || mul.Op != token.MUL {
+			return true
+		}
+		fc.judgeBinomialRecursion(decl, self, mul, quo)
+		return false
+	})
+}
+
+// judgeBinomialRecursion judges mul = f(n-1, k-1) * n (either order)
+// divided by k in quo.
+func (fc *fnCtx) judgeBinomialRecursion(decl *ast.FuncDecl, self *types.Func, mul, quo *ast.BinaryExpr) {
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(quo))
+	if !ok || t.Float {
+		return // a float recursion: the value model's judgment
+	}
+	for _, pair := range [2][2]ast.Expr{{mul.X, mul.Y}, {mul.Y, mul.X}} {
+		nExpr := fc.stripConv(pair[0])
+		idx := fc.c.paramIndex(decl, fc.c.objOf(nExpr))
+		call, ok := fc.stripConv(pair[1]).(*ast.CallExpr)
+		if idx < 0 || !ok || fc.c.calleeOf(call) != self || idx >= len(call.Args) {
+			continue
+		}
+		lin, ok := fc.linear(call.Args[idx])
+		if !ok || len(lin.Terms) != 1 || fc.c.paramIndex(decl, lin.Terms[0].Sym.Object) != idx || lin.Terms[0].K != 1 || lin.C != -1 {
+			continue
+		}
+		j := fc.recursionCount(decl, call, idx)
+		if j < 0 || fc.c.paramIndex(decl, fc.c.objOf(fc.stripConv(quo.Y))) != j {
+			continue
+		}
+		n, k := fc.rangeOf(nExpr), fc.rangeOf(fc.stripConv(quo.Y))
+		if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) ||
+			fc.c.callsFit(self, decl, idx, j, func(n, k ranges.Interval) bool { return fc.binomialLoopSafe(t, n, k) }) {
+			return
+		}
+		msg, definite := binomialProductText("recursion", t, src(mul), "the division by "+src(quo.Y), nExpr, n, k)
+		fc.report(finding{node: mul, cat: catRecursion, definite: definite, msg: msg})
+		return
+	}
 }
 
 // recursionGuardExact reports whether a guard at the function's entry,
@@ -353,4 +437,28 @@ func (fc *fnCtx) recursionGuardExact(ff *facFunc, first int64) bool {
 		return false
 	})
 	return ok && found
+}
+
+// callsOfOther returns the calls of fn in the package, or nil when fn
+// is also used as a value (then it may be called from anywhere).
+func (c *checker) callsOfOther(fn *types.Func) []*ast.CallExpr {
+	var calls []*ast.CallExpr
+	called := make(map[*ast.Ident]bool)
+	for _, f := range c.pass.Files {
+		ast.Inspect(f, func(n ast.Node) bool {
+			if call, ok := n.(*ast.CallExpr); ok && c.calleeOf(call) == fn {
+				calls = append(calls, call)
+				if id, ok := ast.Unparen(call.Fun).(*ast.Ident); ok {
+					called[id] = true
+				}
+			}
+			return true
+		})
+	}
+	for id, obj := range c.pass.TypesInfo.Uses {
+		if obj == fn && !called[id] {
+			return nil
+		}
+	}
+	return calls
 }

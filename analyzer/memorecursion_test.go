@@ -80,3 +80,33 @@ func TestFallingRecursionProbe(t *testing.T) {
 		t.Errorf("Legs(n, n) first wraps at n = %d, want 21 (the message's n ≥ 21)", first)
 	}
 }
+
+// TestBinomialRecursionProbe shows Crews (C(n, k) as C(n−1, k−1)·n/k,
+// testdata/src/factorialrecursion/counts.go) beside math/big: at k = n/2
+// some product C(m−1, j−1)·m it forms first leaves int64 at n = 62, the
+// n the message names, while C(n, n/2) itself fits up to n = 66
+// (central binomials, OEIS A001405, from memory: C(66, 33) ≈ 7.2e18).
+func TestBinomialRecursionProbe(t *testing.T) {
+	maxInt64 := new(big.Int).SetInt64(math.MaxInt64)
+	first := int64(-1)
+	for n := int64(2); n <= 70 && first < 0; n++ {
+		k := n / 2
+		for j := int64(1); j <= k; j++ {
+			m := n - k + j
+			p := new(big.Int).Mul(new(big.Int).Binomial(m-1, j-1), big.NewInt(m))
+			if p.Cmp(maxInt64) > 0 {
+				first = n
+				break
+			}
+		}
+	}
+	if first != 62 {
+		t.Errorf("first n whose recursion products at k = n/2 leave int64: %d, want 62", first)
+	}
+	if c := new(big.Int).Binomial(66, 33); !c.IsInt64() {
+		t.Errorf("C(66, 33) = %v does not fit int64", c)
+	}
+	if c := new(big.Int).Binomial(67, 33); c.IsInt64() {
+		t.Errorf("C(67, 33) = %v fits int64", c)
+	}
+}

@@ -28,20 +28,35 @@ func podium(n, k int) int { // want podium:`falling-factorial of parameter 0, br
 	return n * podium(n-1, k-1)
 }
 
-// Squads is C(n, k) by the recursion C(n−1, k−1)·n/k: no factorial of n
-// (C(100, 1) = 100 is formed as C(99, 0)·100/1), so no factorial
-// finding; the threshold of its intermediate is not n!'s.
-func Squads(n, k int64) int64 {
-	if k == 0 {
-		return 1
-	}
-	return Squads(n-1, k-1) * n / k
-}
-
 // Laps is n! with a modulus passed on unchanged: still n!.
 func Laps(n, m int64) int64 { // want Laps:`factorial of parameter 0, breaks from 21`
 	if n < 2 {
 		return 1
 	}
 	return n * Laps(n-1, m) // want `recursive factorial of n in int64 wraps for n ≥ 21`
+}
+
+// Crews is C(n, k) by the recursion C(n−1, k−1)·n/k: the product is
+// formed before the division, as in a multiplicative binomial loop.
+func Crews(n, k int64) int64 {
+	if k == 0 {
+		return 1
+	}
+	return Crews(n-1, k-1) * n / k // want `multiplicative binomial recursion in int64: the product Crews\(n-1, k-1\) \* n wraps before the division by k for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
+}
+
+// Relays picks relay teams of at most 4 from at most 40 runners: the
+// products stay small.
+func Relays(n, k int64) int64 {
+	if n < 0 || n > 40 || k < 0 || k > 4 {
+		return 0
+	}
+	return relays(n, k)
+}
+
+func relays(n, k int64) int64 {
+	if k == 0 {
+		return 1
+	}
+	return relays(n-1, k-1) * n / k
 }
