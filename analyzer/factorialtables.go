@@ -1,10 +1,12 @@
 package analyzer
 
 import (
+	"cmp"
 	"fmt"
 	"go/ast"
 	"go/token"
 	"go/types"
+	"slices"
 
 	"github.com/overfact/overfact/internal/assigned"
 )
@@ -314,10 +316,16 @@ func (c *checker) isStart(m ast.Node) bool {
 // +Inf, as the factorials they stand for are, and only a ratio of them
 // goes wrong (products.go).
 func (fc *fnCtx) checkTableFills() {
+	// The function's integer tables, in the order of their fills, so
+	// that the findings come in source order whatever the map's order.
+	var fills []*facTable
 	for _, tbl := range passStateOf(fc.c, tablesKey).byVar {
-		if tbl == nil || tbl.in != fc.node || tbl.elem.Float || tbl.fact.Safe {
-			continue
+		if tbl != nil && tbl.in == fc.node && !tbl.elem.Float && !tbl.fact.Safe {
+			fills = append(fills, tbl)
 		}
+	}
+	slices.SortFunc(fills, func(a, b *facTable) int { return cmp.Compare(a.fill.Pos(), b.fill.Pos()) })
+	for _, tbl := range fills {
 		cond, ok := tbl.fill.Cond.(*ast.BinaryExpr)
 		if !ok {
 			continue

@@ -66,7 +66,7 @@ func (fc *fnCtx) checkLoopMultinomial(root ast.Expr) {
 	msg := fmt.Sprintf("%s computes the multinomial coefficient (Σ parts)!/Π part! as %s over the loop's parts in %s, which fits where %s already %s from %s = %d%s",
 		name, src(root), t.typeName(), src(num), breaks, sum.Name(), first, clause)
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: c.relatedDef(c.calleeOf(num).Name(), c.calleeOf(num).Pos()),
-		match: fc.multinomialLogMatch(root, num, den, loop, t)})
+		match: fc.multinomialLogMatch(root, num, num.Args[ff.Param], den, loop, t)})
 }
 
 // multinomialLogMatch offers to carry the divisor of a float multinomial
@@ -75,12 +75,12 @@ func (fc *fnCtx) checkLoopMultinomial(root ast.Expr) {
 // (lgamma.FactorialProduct), so that the quotient keeps every value the
 // code got right and takes the logarithms where a factorial is +Inf.
 // nil for an integer result, whose wrapped factorials are finite.
-func (fc *fnCtx) multinomialLogMatch(root ast.Expr, num *ast.CallExpr, den types.Object, loop ast.Stmt, t numType) *fixes.Match {
+func (fc *fnCtx) multinomialLogMatch(root ast.Expr, num *ast.CallExpr, total ast.Expr, den types.Object, loop ast.Stmt, t numType) *fixes.Match {
 	if !t.Float {
 		return nil
 	}
 	c := fc.c
-	facs := []fixes.FactorialCall{{Call: num, Arg: num.Args[c.factOf(c.calleeOf(num)).Param]}}
+	facs := []fixes.FactorialCall{{Call: num, Arg: total}}
 	ast.Inspect(loop, func(n ast.Node) bool {
 		as, ok := n.(*ast.AssignStmt)
 		if !ok || len(as.Lhs) != 1 || len(as.Rhs) != 1 || c.objOf(as.Lhs[0]) != den {

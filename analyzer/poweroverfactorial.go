@@ -6,6 +6,7 @@ import (
 	"go/token"
 	"go/types"
 	"math"
+	"strings"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -212,7 +213,7 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	if worst == nil {
 		return
 	}
-	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), joinDot(dens))
+	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), strings.Join(dens, "·"))
 	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
 		what, worst.t.typeName(), bang(worst.arg, worst.off), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
 	// The fix takes the product in log space, each factorial the
@@ -231,16 +232,4 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	}
 	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
 		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})
-}
-
-// joinDot writes factors as a product: "k!·(k+n)!".
-func joinDot(fs []string) string {
-	out := ""
-	for i, f := range fs {
-		if i > 0 {
-			out += "·"
-		}
-		out += f
-	}
-	return out
 }
