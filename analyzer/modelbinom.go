@@ -103,8 +103,31 @@ func (mc *modelCtx) binomialPeak(a *vm.Acc, t numType) bool {
 		mc.noteWeightFields(a, fmt.Sprintf("C(%s, %s)", n, jName), nv.Name(), first)
 	}
 	match := mc.binomialMatchIf(a, final)
+	if match == nil {
+		match = mc.runningWeightMatch(a)
+	}
 	fc.report(finding{node: l.Stmt, cat: catBinomLoop, definite: definite, msg: msg + clause, match: match})
 	return true
+}
+
+// runningWeightMatch describes, for the fixer, the running product
+// whose steps the code reads: carried as a product in log space
+// (fixes/logproduct.go) it forms the same float values step by step and
+// keeps the logarithm beside them, so a step past the peak is the
+// binomial it stands for again once that fits. nil where the update is
+// no assignment to the accumulator.
+func (mc *modelCtx) runningWeightMatch(a *vm.Acc) *fixes.Match {
+	op := a.Ops[0]
+	as, ok := op.Stmt.(*ast.AssignStmt)
+	if !ok || len(as.Lhs) != 1 {
+		return nil
+	}
+	info := mc.fc.c.pass.TypesInfo
+	id, ok := ast.Unparen(as.Lhs[0]).(*ast.Ident)
+	if !ok || info.ObjectOf(id) != a.Obj {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapeLogSpaceTerm, Node: op.X, Args: []ast.Expr{id}, Result: info.TypeOf(op.X), Func: mc.fc.node}
 }
 
 // staysRising reports whether the last step j(Count−1) stays on the

@@ -159,6 +159,10 @@ var diffCases = []diffCase{
 	// Stepped leaves 1 for a negative k (a loop of no trips): k ≥ 0 here.
 	{pkg: "fixmodel", fn: "Stepped", loops: []string{"n := -3; n <= 1060; n += 7", "k := 0; k <= n+3; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Stepped(float64(n), float64(k))"},
 	{pkg: "fixmodel", fn: "Ticket.Ways", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Ticket{Pool: float64(n), Picks: float64(k)}.Ways()"},
+	// A table of running weights C(n−1, k) whose steps the code reads:
+	// past C(n−1, ⌊(n−1)/2⌋)'s limit the original stays +Inf where the
+	// weight fits again (C(1099, 984) ≈ 1e160).
+	{pkg: "fixbinompeak", fn: "Weights", loops: []string{"n := 2; n <= 1100; n += 37", "k := 0; k < n; k += 1 + n/9"}, args: "n-1, k", typ: "float64", ref: refChoose, call: "Weights(n)[k]"},
 	{pkg: "fixbinompeak", fn: "Combin", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Combin(float64(n), float64(k))"},
 	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},
 	// Counts kept in float64: the helper runs where they hold whole

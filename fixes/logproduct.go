@@ -56,8 +56,8 @@ func buildLogSpaceTerm(b *builder) error {
 	if !ok || b.m.Func == nil {
 		return errors.New("log-space term match lacks its term or function")
 	}
-	if !types.Identical(b.pass.TypesInfo.TypeOf(term), types.Typ[types.Float64]) {
-		return fmt.Errorf("series term of type %s, not float64", b.pass.TypesInfo.TypeOf(term))
+	if !isFloat64Kind(b.pass.TypesInfo.TypeOf(term)) {
+		return fmt.Errorf("series term of type %s, not of float64's kind", b.pass.TypesInfo.TypeOf(term))
 	}
 	body := b.funcBody()
 	if body == nil {
@@ -88,6 +88,7 @@ func buildLogSpaceTerm(b *builder) error {
 	if len(lp.set) == 0 || !lp.chainable(term) && !lp.assignsPart(body, term) {
 		return errors.New("no part of the term is a running product the fixer can carry in log space")
 	}
+	names = append(names, lp.partners(body)...)
 	names = append(names, lp.copies(body)...)
 	if b.commentIn(body) {
 		// The rewrite replaces statements whole; a comment inside one
@@ -99,6 +100,9 @@ func buildLogSpaceTerm(b *builder) error {
 		}
 	}
 	lp.rewrite(body)
+	if lp.err != nil {
+		return lp.err
+	}
 	sort.Strings(names)
 	b.message = fmt.Sprintf("Carry %s as products in log space (%s.Product) (imports %s)", strings.Join(names, ", "), lp.pkg, HelperPath)
 	return nil
@@ -128,6 +132,52 @@ func (lp *logProducts) copies(body *ast.BlockStmt) []string {
 					names = append(names, v.Name())
 					more = true
 				}
+			}
+			return true
+		})
+	}
+	return names
+}
+
+// partners adds to the carried variables the locals that are direct
+// factors, beside a carried one, of a product the rewrite turns into a
+// Product, and whose every value is a product of powers, Gamma values
+// and exponentials (top := math.Pow(x, k/2-1) * math.Exp(-x/2) read in
+// top / bottom, bottom carried), until none is left, and returns their
+// names: such a factor may leave float64 on its own where the product
+// does not, and as a Product it keeps its float64 value wherever it
+// stayed in range.
+func (lp *logProducts) partners(body *ast.BlockStmt) []string {
+	var names []string
+	var walk func(e ast.Expr) bool
+	walk = func(e ast.Expr) bool {
+		more := false
+		switch x := ast.Unparen(e).(type) {
+		case *ast.UnaryExpr:
+			if x.Op == token.SUB {
+				more = walk(x.X)
+			}
+		case *ast.BinaryExpr:
+			if x.Op == token.MUL || x.Op == token.QUO {
+				more = walk(x.X)
+				more = walk(x.Y) || more
+			}
+		case *ast.Ident:
+			v, ok := lp.b.pass.TypesInfo.Uses[x].(*types.Var)
+			if ok && !lp.set[v] && lp.qualifies(v, body) == nil {
+				lp.set[v] = true
+				names = append(names, v.Name())
+				more = true
+			}
+		}
+		return more
+	}
+	for more := true; more; {
+		more = false
+		ast.Inspect(body, func(n ast.Node) bool {
+			if x, ok := n.(*ast.BinaryExpr); ok && lp.chainable(x) {
+				more = walk(x) || more
+				return false
 			}
 			return true
 		})
@@ -173,6 +223,60 @@ type logProducts struct {
 	// chain takes them as they are (a count from a float helper in an
 	// expression kept as written, asWritten).
 	subs map[ast.Expr]string
+	// err is the first type the rewrite could not name in the file.
+	err error
+}
+
+// isFloat64Kind reports whether t is float64 or a named type over it
+// (type Length float64): a Product carries either.
+func isFloat64Kind(t types.Type) bool {
+	b, ok := t.Underlying().(*types.Basic)
+	return ok && b.Kind() == types.Float64
+}
+
+// asFloat64 returns text, the source of e, as a float64: converted
+// where e is of a named type over float64.
+// A conversion of a literal or a float64 to the named type, Length(1),
+// is written as what it converts.
+func (lp *logProducts) asFloat64(e ast.Expr, text string) string {
+	info := lp.b.pass.TypesInfo
+	t := info.TypeOf(e)
+	if t == nil || !isFloat64Kind(t) || types.Identical(t, types.Typ[types.Float64]) || isLiteral(e) {
+		return text
+	}
+	if c, ok := ast.Unparen(e).(*ast.CallExpr); ok && len(c.Args) == 1 && info.Types[c.Fun].IsType() {
+		x := c.Args[0]
+		if xt := info.TypeOf(x); xt != nil && (types.Identical(xt, types.Typ[types.Float64]) || isLiteral(x)) {
+			return lp.spliced(x)
+		}
+	}
+	return "float64(" + text + ")"
+}
+
+// isLiteral reports whether e is a number as written, signed or not.
+func isLiteral(e ast.Expr) bool {
+	switch x := ast.Unparen(e).(type) {
+	case *ast.BasicLit:
+		return true
+	case *ast.UnaryExpr:
+		return (x.Op == token.SUB || x.Op == token.ADD) && isLiteral(x.X)
+	}
+	return false
+}
+
+// read writes a chainable x as its Product's float64 value, converted
+// to x's own type where that is a named type over float64 (Length).
+func (lp *logProducts) read(x ast.Expr) string {
+	text := lp.chain(x) + ".Float64()"
+	t := lp.b.pass.TypesInfo.TypeOf(x)
+	if t == nil || types.Identical(t, types.Typ[types.Float64]) || !isFloat64Kind(t) {
+		return text
+	}
+	name, err := lp.b.typeName(t)
+	if err != nil && lp.err == nil {
+		lp.err = err
+	}
+	return name + "(" + text + ")"
 }
 
 // qualifies checks that v is a running product the rewrite can carry: a
@@ -181,17 +285,30 @@ type logProducts struct {
 // value.
 func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
 	b := lp.b
-	if !types.Identical(v.Type(), types.Typ[types.Float64]) {
-		return fmt.Errorf("%s is not a float64", v.Name())
+	if !isFloat64Kind(v.Type()) {
+		return fmt.Errorf("%s is not of float64's kind", v.Name())
 	}
 	if v.Pos() < body.Pos() || v.Pos() >= body.End() {
 		return fmt.Errorf("%s is not a local of the term's function", v.Name())
 	}
-	if d, ok := b.declaring(v).(*ast.AssignStmt); !ok || d.Tok != token.DEFINE {
-		return fmt.Errorf("%s is not declared by :=", v.Name())
+	self, products := false, true
+	switch d := b.declaring(v).(type) {
+	case *ast.AssignStmt:
+		if d.Tok != token.DEFINE {
+			return fmt.Errorf("%s is not declared by :=", v.Name())
+		}
+	case *ast.DeclStmt:
+		spec := varSpec(d, v)
+		if spec == nil || len(spec.Names) != 1 || len(spec.Values) > 1 {
+			return fmt.Errorf("%s is not declared alone", v.Name())
+		}
+		for _, e := range spec.Values {
+			products = lp.chainableIn(e, true)
+		}
+	default:
+		return fmt.Errorf("%s is not declared by := or var", v.Name())
 	}
 	var bad error
-	self, products := false, true
 	assigned.Each(b.pass.TypesInfo, body, nil, func(obj types.Object, at ast.Node) bool {
 		if obj != v {
 			return true
@@ -229,6 +346,25 @@ func (lp *logProducts) qualifies(v *types.Var, body *ast.BlockStmt) error {
 	}
 	if !self && !products {
 		return fmt.Errorf("%s is neither a running product nor a product of powers, Gamma values and exponentials", v.Name())
+	}
+	return nil
+}
+
+// varSpec returns the spec of the var declaration d that declares v,
+// or nil.
+func varSpec(d *ast.DeclStmt, v types.Object) *ast.ValueSpec {
+	g, ok := d.Decl.(*ast.GenDecl)
+	if !ok || g.Tok != token.VAR {
+		return nil
+	}
+	for _, s := range g.Specs {
+		if vs, ok := s.(*ast.ValueSpec); ok {
+			for _, n := range vs.Names {
+				if n.Pos() == v.Pos() {
+					return vs
+				}
+			}
+		}
 	}
 	return nil
 }
@@ -326,7 +462,7 @@ func (lp *logProducts) product(e ast.Expr) string {
 	if l := lp.leaf(e); l != "" {
 		return l
 	}
-	return lp.pkg + ".ProductOf(" + lp.spliced(e) + ")"
+	return lp.pkg + ".ProductOf(" + lp.asFloat64(e, lp.spliced(e)) + ")"
 }
 
 // chain writes a chainable e as the Product operations that form the
@@ -356,7 +492,7 @@ func (lp *logProducts) apply(left string, op token.Token, y ast.Expr) string {
 	if lp.chainableIn(y, true) {
 		return left + "." + name + "(" + lp.product(y) + ")"
 	}
-	return left + "." + name + "Float(" + lp.spliced(y) + ")"
+	return left + "." + name + "Float(" + lp.asFloat64(y, lp.spliced(y)) + ")"
 }
 
 // spliced returns the source of e with every read of a carried variable
@@ -376,7 +512,7 @@ func (lp *logProducts) spliced(e ast.Expr) string {
 			if !lp.chainable(x) {
 				return true
 			}
-			text = lp.chain(x) + ".Float64()"
+			text = lp.read(x)
 		}
 		out.Write(b.src[b.offset(at):b.offset(x.Pos())])
 		out.WriteString(text)
@@ -393,17 +529,33 @@ func (lp *logProducts) spliced(e ast.Expr) string {
 func (lp *logProducts) statements(body *ast.BlockStmt) []ast.Stmt {
 	var out []ast.Stmt
 	ast.Inspect(body, func(n ast.Node) bool {
-		if as, ok := n.(*ast.AssignStmt); ok {
-			for _, l := range as.Lhs {
+		switch x := n.(type) {
+		case *ast.AssignStmt:
+			for _, l := range x.Lhs {
 				if lp.isPart(ast.Unparen(l)) {
-					out = append(out, as)
+					out = append(out, x)
 					break
 				}
+			}
+		case *ast.DeclStmt:
+			if lp.declared(x) != nil {
+				out = append(out, x)
 			}
 		}
 		return true
 	})
 	return out
+}
+
+// declared returns the spec of d that declares a carried variable, or
+// nil.
+func (lp *logProducts) declared(d *ast.DeclStmt) *ast.ValueSpec {
+	for v := range lp.set {
+		if spec := varSpec(d, v); spec != nil {
+			return spec
+		}
+	}
+	return nil
 }
 
 // rewrite edits the function body: the assignments to carried variables
@@ -413,6 +565,19 @@ func (lp *logProducts) rewrite(body *ast.BlockStmt) {
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
 		switch x := n.(type) {
+		case *ast.DeclStmt:
+			// var w T, or var w = e: the Product of its value, 0 by
+			// default.
+			spec := lp.declared(x)
+			if spec == nil {
+				return true
+			}
+			value := lp.pkg + ".ProductOf(0)"
+			if len(spec.Values) == 1 {
+				value = lp.product(spec.Values[0])
+			}
+			b.replace(spec.Names[0].Pos(), spec.End(), spec.Names[0].Name+" = "+value)
+			return false
 		case *ast.AssignStmt:
 			if (x.Tok == token.MUL_ASSIGN || x.Tok == token.QUO_ASSIGN) && lp.isPart(ast.Unparen(x.Lhs[0])) {
 				v := ast.Unparen(x.Lhs[0]).(*ast.Ident).Name
@@ -438,7 +603,7 @@ func (lp *logProducts) rewrite(body *ast.BlockStmt) {
 			return false
 		case ast.Expr:
 			if lp.chainable(x) {
-				b.replace(x.Pos(), x.End(), lp.chain(x)+".Float64()")
+				b.replace(x.Pos(), x.End(), lp.read(x))
 				return false
 			}
 		}

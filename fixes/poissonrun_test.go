@@ -82,7 +82,32 @@ func init() {
 		// it is near 1/√(2π) there.
 		diffCase{pkg: "fixgammaamong", fn: "StudentConst", loops: []string{"nu := 1; nu <= 3000; nu += 73"}, args: "nu", typ: "float64", ref: refStudentConst},
 		diffCase{pkg: "fixgammaamong", fn: "ChiMean", loops: []string{"k := 1; k <= 3000; k += 83"}, args: "float64(k)", typ: "float64", ref: refChiMean},
+		// Past k = 343 the normaliser is +Inf, and past x^(k/2−1) ≈
+		// 1e308 the numerator too: the density is 0 or NaN where it is
+		// near its peak, 1/√(4πk) at x ≈ k.
+		diffCase{pkg: "fixgammaamong", fn: "ChiSquareDensity", loops: []string{"k := 2; k <= 1400; k += 46", "x := 1; x <= 1400; x += 97"}, args: "float64(k), float64(x)", typ: "float64", ref: refChiSquareDensity},
 	)
+}
+
+// refChiSquareDensity is x^(k/2−1)·e^(−x/2)/(2^(k/2)·Γ(k/2)) (common
+// practice), for (k, x), with the exponential, the powers and the Gamma
+// value by exacteval (checked against mpmath in its package).
+func refChiSquareDensity(x []float64) *big.Float {
+	k, at := x[0], x[1]
+	num, err := exacteval.Pow(fl(at), fl(k/2-1))
+	if err != nil {
+		panic(err)
+	}
+	num = mul(num, exacteval.Exp(fl(-at/2)))
+	two, err := exacteval.Pow(fl(2), fl(k/2))
+	if err != nil {
+		panic(err)
+	}
+	g, err := exacteval.Gamma(fl(k / 2))
+	if err != nil {
+		panic(err)
+	}
+	return quo(num, mul(two, g))
 }
 
 // refStudentConst is Γ((ν+1)/2)/(√(νπ)·Γ(ν/2)) in math/big with the

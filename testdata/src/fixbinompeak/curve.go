@@ -2,7 +2,10 @@
 // weights for outline curves of any degree and the counting helpers of
 // its hinting tables, written with one ratio per step of a running
 // binomial. Its .golden file shows the loop whose value the helper
-// computes replaced by one call, and the others left as they are.
+// computes replaced by one call, the running weights whose steps the
+// code reads carried as products in log space (each step the same
+// float64 value wherever it stayed in range, the binomial it stands for
+// again past the peak), and the others left as they are.
 package fixbinompeak
 
 import "math"
@@ -160,6 +163,25 @@ func Spread(pts []Point) []Length {
 	for i := range pts { // want `running product w computes C\(len\(pts\), i \+ 1\) one ratio at a time`
 		w *= Length(len(pts)-i) / Length(i+1)
 		out[i+1] = w
+	}
+	return out
+}
+
+// Tint scales each point by its Bernstein weight, the running weight
+// declared without a value and its first two steps given by a switch.
+func Tint(pts []Point) []Point {
+	out := make([]Point, len(pts))
+	var w Length
+	for i, p := range pts { // want `running product w computes C\(len\(pts\) - 1, i\) one ratio at a time in float64`
+		switch i {
+		case 0:
+			w = 1
+		case 1:
+			w = Length(len(pts)) - 1
+		default:
+			w *= Length(len(pts)-i) / Length(i)
+		}
+		out[i] = Point{X: p.X * w, Y: p.Y * w}
 	}
 	return out
 }

@@ -25,3 +25,16 @@ func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/450359
 func Continuation(a, b, c float64) float64 { // want Continuation:`value Γ\(p2\)·Γ`
 	return math.Gamma(c) * math.Gamma(c-a-b) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64`
 }
+
+// ChiSquareDensity is the density of the chi-square distribution with k
+// degrees of freedom at x, x^(k/2−1)·e^(−x/2)/(2^(k/2)·Γ(k/2)) (common
+// practice), its numerator and its normaliser formed apart: each leaves
+// float64 for large k where their quotient does not.
+func ChiSquareDensity(k, x float64) float64 { // want ChiSquareDensity:`value \(p1\)\^\(1/2\*p0 - 1\)·exp`
+	if x < 0 {
+		return 0
+	}
+	num := math.Pow(x, k/2-1) * math.Exp(-x/2)
+	norm := math.Pow(2, k/2) * math.Gamma(k/2) // want `math.Gamma overflows: math.Gamma\(k / 2\) is \+Inf for k ≥ 343.2487539`
+	return num / norm
+}
