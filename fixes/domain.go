@@ -321,9 +321,17 @@ func (b *builder) keepAsWritten(text string, node ast.Node, conds []string, insi
 }
 
 // productShapes are the shapes whose expression kept as written is a
-// count times powers, which is 0 where the count is (k > n) however far
-// the powers leave float64 (p outside [0, 1]).
-var productShapes = map[Shape]bool{ShapeBinomialPMF: true, ShapeNegBinomialPMF: true}
+// product the helper's Product chain forms with the same float64
+// operations wherever they stay in range: a count times powers, which
+// is 0 where the count is (k > n) however far the powers leave float64
+// (p outside [0, 1]), and products of Gamma values and powers outside
+// the helper's domain, Γ(a)Γ(b)/Γ(a+b) for a negative b, whose Gamma
+// values leave float64 where the product does not (Γ(200)·Γ(−50.5) over
+// Γ(149.5)).
+var productShapes = map[Shape]bool{
+	ShapeBinomialPMF: true, ShapeNegBinomialPMF: true,
+	ShapeBeta: true, ShapeInverseBeta: true, ShapeGammaRatio: true, ShapePowOverGamma: true,
+}
 
 // asWritten returns node's source for the branch that runs it as
 // written, in two respects not as written where the code's own float
@@ -336,8 +344,8 @@ var productShapes = map[Shape]bool{ShapeBinomialPMF: true, ShapeNegBinomialPMF: 
 //     function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
 //     the value the call had before its function's own fix, which panics
 //     where C(n, k) leaves the integer type;
-//   - a binomial probability's float64 product (productShapes) is
-//     formed as the helper's Product chain (buildProductChain), which is
+//   - a binomial probability's float64 product, or one of Gamma values
+//     (productShapes), is formed as the helper's Product chain (buildProductChain), which is
 //     the same float64 operations wherever they stay in range, and the
 //     product's value where a factor leaves float64 and the product does
 //     not: C(2, 150)·150.5^150·(−149.5)^−148 is 0, not 0·Inf = NaN.

@@ -126,6 +126,20 @@ func refChiMean(x []float64) *big.Float {
 	return mul(fl(math.Sqrt2), refGammaQuo((k+1)/2, k/2))
 }
 
+// refBetaGamma is Γ(a)Γ(b)/Γ(a+b) (DLMF 5.12.1) for any a and b off
+// the poles, negative ones included, with the Gamma values from
+// exacteval.Gamma (checked against mpmath in its package).
+func refBetaGamma(x []float64) *big.Float {
+	g := func(v float64) *big.Float {
+		r, err := exacteval.Gamma(fl(v))
+		if err != nil {
+			panic(err)
+		}
+		return r
+	}
+	return quo(mul(g(x[0]), g(x[1])), g(x[0]+x[1]))
+}
+
 func refGammaQuo(a, b float64) *big.Float {
 	ga, err := exacteval.Gamma(fl(a))
 	if err != nil {
