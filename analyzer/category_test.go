@@ -12,7 +12,7 @@ import (
 // the fixed file as .golden. The realistic scenario packages of the
 // repository's testdata (TestScenarios) are the integration test.
 var categoryPackages = []string{
-	"factorialloop", "factorialrecursion", "factorialcall", "factorialratio", "binomialloop",
+	"factorialloop", "factorialrecursion", "factorialcall", "factorialratio", "binomialloop", "pascalrule",
 	"poweroverfactorial", "gammaratio", "gammaoverflow", "lateconversion",
 	"lgammasign", "lgammadigits", "lgammainteger", "lgammaoverflow", "stirlingapproximation",
 }

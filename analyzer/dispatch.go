@@ -28,6 +28,12 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 			fc.checkBinomialRecursion(d)
 		}
 	}
+	if s.sum {
+		if d, ok := n.(*ast.FuncDecl); ok {
+			fc.checkPascalRecursion(d)
+		}
+		fc.checkPascalTables(body)
+	}
 	if s.knownCall || peekState(fc, powerLoopsKey) != nil {
 		fc.checkExprs(body)
 	}

@@ -17,6 +17,7 @@ type scan struct {
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
 	localCall bool // a call of a function of this package, which may become factorial-valued
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
+	sum       bool // a sum of two calls or of two index expressions: Pascal's rule may be here (pascalrule.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -63,6 +64,9 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				_, x := ast.Unparen(n.X).(*ast.CallExpr)
 				_, y := ast.Unparen(n.Y).(*ast.CallExpr)
 				cur.callMul = x || y
+			}
+			if cur != nil && n.Op == token.ADD && !cur.sum {
+				cur.sum = sameKind(ast.Unparen(n.X), ast.Unparen(n.Y))
 			}
 		case *ast.CallExpr:
 			if cur == nil {
@@ -122,6 +126,20 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 	return nil
 }
 
+// sameKind reports whether x and y are both calls or both index
+// expressions.
+func sameKind(x, y ast.Expr) bool {
+	switch x.(type) {
+	case *ast.CallExpr:
+		_, ok := y.(*ast.CallExpr)
+		return ok
+	case *ast.IndexExpr:
+		_, ok := y.(*ast.IndexExpr)
+		return ok
+	}
+	return false
+}
+
 func isMulOrQuo(e ast.Expr) bool {
 	b, ok := ast.Unparen(e).(*ast.BinaryExpr)
 	return ok && (b.Op == token.MUL || b.Op == token.QUO)
@@ -131,4 +149,6 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthLoops() || s.callMul || s.knownCall || s.logCall }
+func (s *scan) worth() bool {
+	return s.worthLoops() || s.callMul || s.knownCall || s.logCall || s.sum
+}

@@ -36,6 +36,12 @@ func CentralBinomialLoop(t Num) Limit {
 	})
 }
 
+// ChooseFits reports whether the true C(n, k) fits the integer type t,
+// for 0 ≤ k ≤ n.
+func ChooseFits(t Num, n, k int64) bool {
+	return new(big.Int).Binomial(n, k).CmpAbs(t.maxInt()) <= 0
+}
+
 // central returns C(n, ⌊n/2⌋) exactly.
 func central(n int64) *big.Int { return new(big.Int).Binomial(n, n/2) }
 

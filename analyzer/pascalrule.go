@@ -1,0 +1,269 @@
+package analyzer
+
+import (
+	"fmt"
+	"go/ast"
+	"go/token"
+	"go/types"
+	"math"
+
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
+)
+
+// The pascal-rule category: a binomial coefficient built by Pascal's
+// rule, C(n, k) = C(n−1, k−1) + C(n−1, k) (common practice; DLMF
+// 26.3.5), in an integer type, written as a recursion
+//
+//	func ways(n, k int) int64 {
+//		if k == 0 || k == n {
+//			return 1
+//		}
+//		return ways(n-1, k-1) + ways(n-1, k)
+//	}
+//
+// or as a table filled row by row,
+//
+//	c[i][j] = c[i-1][j-1] + c[i-1][j]
+//
+// Every entry is the sum of two smaller ones, so no intermediate leaves
+// the type before the coefficient does; but the coefficient itself
+// wraps silently where it leaves the type, from C(n, ⌊n/2⌋) on
+// (thresholds.CentralBinomial: n = 67 for int64), into a value that
+// later sums carry on. A sum reduced modulo something, or an entry
+// changed again in the same trip (a saturation, a reduction), is left
+// alone. Floats are left alone too: their sums reach +Inf only where
+// the coefficient is past float64, which is IEEE's answer.
+//
+// There is no fix: no integer type holds the coefficients past the
+// threshold, and a guard would refuse the rows that fit.
+
+// checkPascalRecursion reports a recursion that returns (or stores) the
+// sum of its own values at (n−1, k−1) and (n−1, k).
+func (fc *fnCtx) checkPascalRecursion(decl *ast.FuncDecl) {
+	self, _ := fc.c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
+	if self == nil || decl.Body == nil {
+		return
+	}
+	done := false
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		if done {
+			return false
+		}
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BinaryExpr:
+			if n.Op == token.REM {
+				return false // reduced modulo m: its values stay small
+			}
+			if n.Op == token.ADD {
+				done = fc.judgePascalRecursion(decl, self, n)
+				return !done
+			}
+		}
+		return true
+	})
+}
+
+// judgePascalRecursion judges sum = f(…n−1…k−1…) + f(…n−1…k…), either
+// order, every other argument passed through.
+func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum *ast.BinaryExpr) bool {
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(sum))
+	if !ok || t.Float {
+		return false
+	}
+	a, okA := fc.stripConv(sum.X).(*ast.CallExpr)
+	b, okB := fc.stripConv(sum.Y).(*ast.CallExpr)
+	if !okA || !okB || fc.c.calleeOf(a) != self || fc.c.calleeOf(b) != self || len(a.Args) != len(b.Args) {
+		return false
+	}
+	ni, ki := -1, -1
+	for i := range a.Args {
+		da, okA := fc.paramShift(decl, a.Args[i], i)
+		db, okB := fc.paramShift(decl, b.Args[i], i)
+		switch {
+		case !okA || !okB:
+			return false
+		case da == -1 && db == -1:
+			if ni >= 0 {
+				return false
+			}
+			ni = i
+		case da+db == -1:
+			if ki >= 0 {
+				return false
+			}
+			ki = i
+		case da != 0 || db != 0:
+			return false
+		}
+	}
+	if ni < 0 || ki < 0 {
+		return false
+	}
+	params := self.Type().(*types.Signature).Params()
+	nObj, kObj := params.At(ni), params.At(ki)
+	if nObj.Name() == "" || kObj.Name() == "" || nObj.Name() == "_" || kObj.Name() == "_" {
+		return false
+	}
+	n, k := fc.entryRange(nObj, sum), fc.entryRange(kObj, sum)
+	if pascalFits(t, n, k) || fc.c.callsFit(self, decl, ni, ki, func(n, k ranges.Interval) bool { return pascalFits(t, n, k) }) {
+		return false
+	}
+	first := thresholds.CentralBinomial(t.Num)
+	clause, definite := verdict(nObj.Name(), n, first.FirstBad)
+	msg := fmt.Sprintf("recursion computes C(%s, %s) by Pascal's rule (%s) in %s: the sum %s where C(%s, %s) leaves %s, from %s = %d at %s = ⌊%s/2⌋ (C(%d, %d) ≈ %s is the largest central one that fits), and every call above it adds the wrapped value on",
+		nObj.Name(), kObj.Name(), src(sum), t.typeName(), verb(t), nObj.Name(), kObj.Name(), t.Name,
+		nObj.Name(), first.FirstBad, kObj.Name(), nObj.Name(), first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
+	fc.report(finding{node: sum, cat: catPascal, definite: definite && k.Lo <= (first.FirstBad)/2, msg: msg + clause})
+	return true
+}
+
+// paramShift reads arg, the i-th argument of a recursive call, as the
+// function's i-th parameter plus a constant.
+func (fc *fnCtx) paramShift(decl *ast.FuncDecl, arg ast.Expr, i int) (int64, bool) {
+	lin, ok := fc.linear(arg)
+	if !ok || len(lin.Terms) != 1 || lin.Terms[0].K != 1 || fc.c.paramIndex(decl, lin.Terms[0].Sym.Object) != i {
+		return 0, false
+	}
+	return lin.C, true
+}
+
+// pascalFits reports whether every C(n, k) over the ranges fits t: the
+// largest is C(n.Hi, min(k.Hi, ⌊n.Hi/2⌋)).
+func pascalFits(t numType, n, k ranges.Interval) bool {
+	if n.IsEmpty() || k.IsEmpty() || n.Hi == math.MaxInt64 {
+		return false
+	}
+	if n.Hi < thresholds.CentralBinomial(t.Num).FirstBad {
+		return true
+	}
+	kk := min(max(k.Hi, 0), n.Hi/2)
+	if k.Lo > n.Hi/2 && k.Lo != math.MinInt64 {
+		kk = n.Hi - min(k.Lo, n.Hi)
+	}
+	if kk >= 64 {
+		// C(n, kk) ≥ C(2kk, kk) ≥ 2^kk for kk ≤ n/2: past every
+		// integer type, and not worth computing for a large n.
+		return false
+	}
+	return thresholds.ChooseFits(t.Num, n.Hi, kk)
+}
+
+// checkPascalTables reports the tables body fills by Pascal's rule,
+// t[i][j] = t[i-1][j-1] + t[i-1][j] (either order, any offsets of the
+// two indexes that keep the rule's shape).
+func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.BlockStmt:
+			for _, st := range n.List {
+				if as, ok := st.(*ast.AssignStmt); ok && !fc.changedAgain(n, as) {
+					fc.judgePascalTable(as)
+				}
+			}
+		}
+		return true
+	})
+}
+
+// changedAgain reports whether another statement of block assigns to
+// what as assigns to (a reduction c[i][j] %= m, a saturation).
+func (fc *fnCtx) changedAgain(block *ast.BlockStmt, as *ast.AssignStmt) bool {
+	if len(as.Lhs) != 1 {
+		return true
+	}
+	target := src(as.Lhs[0])
+	again := false
+	for _, st := range block.List {
+		ast.Inspect(st, func(n ast.Node) bool {
+			if o, ok := n.(*ast.AssignStmt); ok && o != as {
+				for _, l := range o.Lhs {
+					again = again || src(l) == target
+				}
+			}
+			return !again
+		})
+	}
+	return again
+}
+
+// judgePascalTable judges one assignment t[I][J] = t[I−1][J−1] + t[I−1][J].
+func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
+	if as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return
+	}
+	sum, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
+	if !ok || sum.Op != token.ADD {
+		return
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(sum))
+	if !ok || t.Float {
+		return
+	}
+	base, row, col, ok := index2(as.Lhs[0])
+	if !ok {
+		return
+	}
+	var shifts [2][2]int64
+	for i, e := range []ast.Expr{sum.X, sum.Y} {
+		b, r, c, ok := index2(ast.Unparen(e))
+		if !ok || src(b) != src(base) {
+			return
+		}
+		dr, ok1 := fc.shiftOf(r, row)
+		dc, ok2 := fc.shiftOf(c, col)
+		if !ok1 || !ok2 {
+			return
+		}
+		shifts[i] = [2]int64{dr, dc}
+	}
+	if shifts[0][0] != -1 || shifts[1][0] != -1 || shifts[0][1]+shifts[1][1] != -1 || shifts[0][1]*shifts[1][1] != 0 {
+		return
+	}
+	rv, ok := fc.linear(row)
+	if !ok || len(rv.Terms) != 1 || rv.Terms[0].K != 1 {
+		return
+	}
+	ri, ci := fc.rangeOf(row), fc.rangeOf(col)
+	if pascalFits(t, ri, ci) {
+		return
+	}
+	first := thresholds.CentralBinomial(t.Num)
+	name := src(row)
+	clause, definite := verdict(name, ri, first.FirstBad)
+	msg := fmt.Sprintf("table %s is filled by Pascal's rule (%s = %s) in %s: with ones on its edges the entry %s is C(%s, %s), which %s where it leaves %s, from row %s = %d at %s = ⌊%s/2⌋ (C(%d, %d) ≈ %s is the largest central one that fits), and the rows below add the wrapped entries on",
+		src(base), src(as.Lhs[0]), src(sum), t.typeName(), src(as.Lhs[0]), name, src(col), verb(t), t.Name,
+		name, first.FirstBad, src(col), name, first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
+	fc.report(finding{node: as, cat: catPascal, definite: definite && ci.Lo <= first.FirstBad/2 && ci.Hi >= ri.Lo/2, msg: msg + clause})
+}
+
+// index2 splits b[r][c] into its parts.
+func index2(e ast.Expr) (b, r, c ast.Expr, ok bool) {
+	outer, ok := e.(*ast.IndexExpr)
+	if !ok {
+		return nil, nil, nil, false
+	}
+	inner, ok := ast.Unparen(outer.X).(*ast.IndexExpr)
+	if !ok {
+		return nil, nil, nil, false
+	}
+	return inner.X, inner.Index, outer.Index, true
+}
+
+// shiftOf returns a − b where that is a constant of linear forms.
+func (fc *fnCtx) shiftOf(a, b ast.Expr) (int64, bool) {
+	la, ok1 := fc.linear(a)
+	lb, ok2 := fc.linear(b)
+	if !ok1 || !ok2 {
+		return 0, false
+	}
+	d := la.add(lb.scale(-1))
+	if len(d.Terms) != 0 {
+		return 0, false
+	}
+	return d.C, true
+}
