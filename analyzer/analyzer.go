@@ -109,7 +109,7 @@ func run(pass *analysis.Pass) (any, error) {
 	var decls []*ast.FuncDecl
 	for _, n := range funcs {
 		if d, ok := n.(*ast.FuncDecl); ok && d.Body != nil {
-			if s := scans[d]; s.worth() || s.localCall {
+			if s := scans[d]; s.worthProducts() || s.localCall {
 				decls = append(decls, d)
 			}
 		}

@@ -34,6 +34,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 		}
 		fc.checkPascalTables(body)
 	}
+	if !s.worthProducts() {
+		return
+	}
 	if s.knownCall || peekState(fc, powerLoopsKey) != nil {
 		fc.checkExprs(body)
 	}

@@ -126,16 +126,27 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 	return nil
 }
 
-// sameKind reports whether x and y are both calls or both index
-// expressions.
+// sameKind reports whether x and y may be the two terms of Pascal's
+// rule: calls of one function by the same name, or entries of
+// two-dimensional tables (t[i-1][j-1] + t[i-1][j]).
 func sameKind(x, y ast.Expr) bool {
-	switch x.(type) {
+	switch x := x.(type) {
 	case *ast.CallExpr:
-		_, ok := y.(*ast.CallExpr)
-		return ok
+		y, ok := y.(*ast.CallExpr)
+		if !ok {
+			return false
+		}
+		fx, okX := ast.Unparen(x.Fun).(*ast.Ident)
+		fy, okY := ast.Unparen(y.Fun).(*ast.Ident)
+		return okX && okY && fx.Name == fy.Name
 	case *ast.IndexExpr:
-		_, ok := y.(*ast.IndexExpr)
-		return ok
+		y, ok := y.(*ast.IndexExpr)
+		if !ok {
+			return false
+		}
+		_, inX := ast.Unparen(x.X).(*ast.IndexExpr)
+		_, inY := ast.Unparen(y.X).(*ast.IndexExpr)
+		return inX && inY
 	}
 	return false
 }
@@ -149,6 +160,10 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool {
-	return s.worthLoops() || s.callMul || s.knownCall || s.logCall || s.sum
+func (s *scan) worth() bool { return s.worthProducts() || s.sum }
+
+// worthProducts reports whether a function may hold anything to report
+// but Pascal's rule: only these run the value model.
+func (s *scan) worthProducts() bool {
+	return s.worthLoops() || s.callMul || s.knownCall || s.logCall
 }
