@@ -9,6 +9,7 @@ import (
 
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
+	"github.com/overfact/overfact/fixes"
 )
 
 // The pascal-rule category: a binomial coefficient built by Pascal's
@@ -35,8 +36,11 @@ import (
 // alone. Floats are left alone too: their sums reach +Inf only where
 // the coefficient is past float64, which is IEEE's answer.
 //
-// There is no fix: no integer type holds the coefficients past the
-// threshold, and a guard would refuse the rows that fit.
+// No integer type holds the coefficients past the threshold, so there is
+// no rewrite. A recursion whose edges are ones gets a guard before the
+// statement that sums (fixes.ShapePascalGuard), which panics exactly
+// where C(n, k) leaves the type; a table gets none, since a guard on its
+// size would refuse the rows that fit.
 
 // checkPascalRecursion reports a recursion that returns (or stores) the
 // sum of its own values at (n−1, k−1) and (n−1, k).
@@ -108,7 +112,7 @@ func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum 
 		return false
 	}
 	n, k := fc.entryRange(nObj, sum), fc.entryRange(kObj, sum)
-	if pascalFits(t, n, k) || fc.c.callsFit(self, decl, ni, ki, func(n, k ranges.Interval) bool { return pascalFits(t, n, k) }) {
+	if pascalFits(t, n, k) || fc.pascalGuarded(decl, nObj, kObj) || fc.c.callsFit(self, decl, ni, ki, func(n, k ranges.Interval) bool { return pascalFits(t, n, k) }) {
 		return false
 	}
 	first := thresholds.CentralBinomial(t.Num)
@@ -116,8 +120,86 @@ func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum 
 	msg := fmt.Sprintf("recursion computes C(%s, %s) by Pascal's rule (%s) in %s: the sum %s where C(%s, %s) leaves %s, from %s = %d at %s = ⌊%s/2⌋ (C(%d, %d) ≈ %s is the largest central one that fits), and every call above it adds the wrapped value on",
 		nObj.Name(), kObj.Name(), src(sum), t.typeName(), verb(t), nObj.Name(), kObj.Name(), t.Name,
 		nObj.Name(), first.FirstBad, kObj.Name(), nObj.Name(), first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
-	fc.report(finding{node: sum, cat: catPascal, definite: definite && k.Lo <= (first.FirstBad)/2, msg: msg + clause})
+	fc.report(finding{node: sum, cat: catPascal, definite: definite && k.Lo <= (first.FirstBad)/2, msg: msg + clause, match: fc.pascalGuard(decl, sum, ni, ki)})
 	return true
+}
+
+// pascalGuard describes, for the fixer, the guard before the statement
+// that sums (fixes/pascalguard.go): it panics where C(n, k) leaves the
+// type, which is exactly where the recursion's value is wrong when its
+// edges are ones, every constant it returns 0 or 1 and some 1. nil
+// otherwise: with other edges the entries are other multiples.
+func (fc *fnCtx) pascalGuard(decl *ast.FuncDecl, sum *ast.BinaryExpr, ni, ki int) *fixes.Match {
+	ones, ok := false, true
+	ast.Inspect(decl.Body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.ReturnStmt:
+			for _, r := range n.Results {
+				if v, isConst := fc.intConst(r); isConst {
+					ones = ones || v == 1
+					ok = ok && (v == 0 || v == 1)
+				}
+			}
+		}
+		return ok
+	})
+	var st ast.Stmt
+	for up := fc.parentMap()[sum]; up != nil && st == nil; up = fc.parentMap()[up] {
+		st, _ = up.(ast.Stmt)
+	}
+	names := paramIdents(decl)
+	if !ok || !ones || st == nil || max(ni, ki) >= len(names) || names[ni] == nil || names[ki] == nil {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapePascalGuard, Node: st, Args: []ast.Expr{names[ni], names[ki]},
+		Result: fc.c.pass.TypesInfo.TypeOf(sum), Func: decl}
+}
+
+// paramIdents returns the identifiers that declare decl's parameters,
+// in order, nil for an unnamed one.
+func paramIdents(decl *ast.FuncDecl) []*ast.Ident {
+	var out []*ast.Ident
+	for _, f := range decl.Type.Params.List {
+		if len(f.Names) == 0 {
+			out = append(out, nil)
+		}
+		out = append(out, f.Names...)
+	}
+	return out
+}
+
+// pascalGuarded reports whether the function checks with the helper
+// module whether C(n, k) fits before it sums, and panics where it does
+// not: an if statement that calls lgamma.ChooseInt64 or ChooseUint64
+// of n and k and whose body panics or returns (the guard of
+// ShapePascalGuard).
+func (fc *fnCtx) pascalGuarded(decl *ast.FuncDecl, n, k types.Object) bool {
+	found := false
+	ast.Inspect(decl.Body, func(x ast.Node) bool {
+		ifs, ok := x.(*ast.IfStmt)
+		if !ok || found {
+			return !found
+		}
+		if !fc.exits(ifs.Body) {
+			return true
+		}
+		ast.Inspect(ifs, func(y ast.Node) bool {
+			call, ok := y.(*ast.CallExpr)
+			if !ok || len(call.Args) != 2 || found {
+				return !found
+			}
+			fn := fc.c.calleeOf(call)
+			if fn == nil || fn.Pkg() == nil || fn.Pkg().Path() != fixes.HelperPath || fn.Name() != "ChooseInt64" && fn.Name() != "ChooseUint64" {
+				return true
+			}
+			found = fc.c.objOf(fc.stripConv(call.Args[0])) == n && fc.c.objOf(fc.stripConv(call.Args[1])) == k
+			return !found
+		})
+		return !found
+	})
+	return found
 }
 
 // paramShift reads arg, the i-th argument of a recursive call, as the

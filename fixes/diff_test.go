@@ -166,6 +166,11 @@ var diffCases = []diffCase{
 	// A table of running weights C(n−1, k) whose steps the code reads:
 	// past C(n−1, ⌊(n−1)/2⌋)'s limit the original stays +Inf where the
 	// weight fits again (C(1099, 984) ≈ 1e160).
+	// Pascal's rule with a memo: right wherever C(n, k) fits, wrapped
+	// past it (from n = 67 in int64, 34 in int32), where the guard must
+	// panic.
+	{pkg: "fixpascal", fn: "Picks", loops: []string{"n := 0; n <= 72; n++", "k := -1; k <= n+1; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refChoose, guard: true},
+	{pkg: "fixpascal", fn: "SmallPicks", loops: []string{"n := 0; n <= 38; n++", "k := -1; k <= n+1; k++"}, args: "n, k", typ: "int32", ref: refChoose, guard: true, call: "SmallPicks(k, n)"},
 	{pkg: "fixbinompeak", fn: "Weights", loops: []string{"n := 2; n <= 1100; n += 37", "k := 0; k < n; k += 1 + n/9"}, args: "n-1, k", typ: "float64", ref: refChoose, call: "Weights(n)[k]"},
 	{pkg: "fixbinompeak", fn: "Combin", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Combin(float64(n), float64(k))"},
 	{pkg: "fixmodel", fn: "Unchecked", loops: []string{"n := -30; n <= 1060; n += 7", "k := -3; k <= n+3 || k <= 25; k += 1 + max(n, 0)/45"}, args: "n, k", typ: "float64", ref: refLoopChoose},

@@ -120,34 +120,55 @@ func buildLoopGuard(b *builder) error {
 	if !reaches(m.Param.Type(), m.FirstBad) {
 		return fmt.Errorf("%s of type %s never reaches %d", m.Param.Name(), m.Param.Type(), m.FirstBad)
 	}
-	path, _ := astpath.Enclosing(b.file, m.Loop.Pos(), m.Loop.End())
+	start, err := b.beforeStmt(body, m.Loop, true, m.Param)
+	if err != nil {
+		return err
+	}
+	indent := b.indentOf(m.Loop.Pos())
+	b.insert(start, indent+b.guardText(start, indent)+"\n")
+	b.guardMessage()
+	return nil
+}
+
+// beforeStmt returns where a guard goes before st, a statement of a
+// block of body that runs once per call where once is set (no loop or
+// closure around it), and checks that the guard would test the
+// arguments: each of params is visible there and not assigned before
+// it. The guard goes at the start of st's line, above the comment lines
+// right before st, which speak of it.
+func (b *builder) beforeStmt(body *ast.BlockStmt, st ast.Stmt, once bool, params ...types.Object) (token.Pos, error) {
+	path, _ := astpath.Enclosing(b.file, st.Pos(), st.End())
 	inList := false
 	if len(path) > 1 {
 		for _, s := range stmtList(path[1]) {
-			inList = inList || s == m.Loop
+			inList = inList || s == st
 		}
 	}
 	for i := 1; i < len(path) && path[i] != body; i++ {
 		switch path[i].(type) {
-		case *ast.ForStmt, *ast.RangeStmt, *ast.FuncLit:
-			return errors.New("the loop may run more than once per call")
+		case *ast.ForStmt, *ast.RangeStmt:
+			if once {
+				return 0, errors.New("the statement may run more than once per call")
+			}
+		case *ast.FuncLit:
+			return 0, errors.New("the statement is inside a function literal")
 		}
 	}
-	if len(path) < 2 || path[0] != m.Loop || !inList {
-		return errors.New("the loop is not a statement of a block")
+	if len(path) < 2 || path[0] != st || !inList {
+		return 0, errors.New("the statement is not a statement of a block")
 	}
-	if _, obj := b.scopeAt(m.Loop.Pos()).LookupParent(m.Param.Name(), m.Loop.Pos()); obj != m.Param {
-		return fmt.Errorf("%s is not visible before the loop", m.Param.Name())
+	for _, p := range params {
+		if _, obj := b.scopeAt(st.Pos()).LookupParent(p.Name(), st.Pos()); obj != p {
+			return 0, fmt.Errorf("%s is not visible before the statement", p.Name())
+		}
+		if assigned.Before(b.pass.TypesInfo, body, p, st.Pos()) {
+			return 0, fmt.Errorf("%s is assigned before the statement, so the guard would not test the argument", p.Name())
+		}
 	}
-	if assigned.Before(b.pass.TypesInfo, body, m.Param, m.Loop.Pos()) {
-		return fmt.Errorf("%s is assigned before the loop, so the guard would not test the argument", m.Param.Name())
-	}
-	// The guard goes at the start of the loop's line, above the comment
-	// lines right before the loop, which speak of it.
-	start := b.tok.LineStart(b.line(m.Loop.Pos()))
-	for _, c := range b.srcBetween(start, m.Loop.Pos()) {
+	start := b.tok.LineStart(b.line(st.Pos()))
+	for _, c := range b.srcBetween(start, st.Pos()) {
 		if c != ' ' && c != '\t' {
-			return errors.New("the loop shares its line with another statement")
+			return 0, errors.New("the statement shares its line with another statement")
 		}
 	}
 	for _, cg := range b.file.Comments {
@@ -155,10 +176,7 @@ func buildLoopGuard(b *builder) error {
 			start = b.tok.LineStart(b.line(cg.Pos()))
 		}
 	}
-	indent := b.indentOf(m.Loop.Pos())
-	b.insert(start, indent+b.guardText(start, indent)+"\n")
-	b.guardMessage()
-	return nil
+	return start, nil
 }
 
 // srcBetween returns the source between two positions.

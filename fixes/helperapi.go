@@ -18,6 +18,8 @@ const helperAPI = `package lgamma
 func Choose(n, k int) float64                               { panic("") }
 func MustChooseInt64(n, k int64) int64                      { panic("") }
 func MustChooseUint64(n, k uint64) uint64                   { panic("") }
+func ChooseInt64(n, k int64) (int64, bool)                  { panic("") }
+func ChooseUint64(n, k uint64) (uint64, bool)               { panic("") }
 func ChooseLoop(n, k int) float64                           { panic("") }
 func ChooseFactorials(n, k int) float64                     { panic("") }
 func Falling(n, k int) float64                              { panic("") }

@@ -54,6 +54,7 @@ const (
 	ShapeLogSpaceTerm           // a series term over running products    Node: the term; Args: its parts (the variables carried as lgamma.Product, math.Pow calls); Func (see buildLogSpaceTerm)
 	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
 	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
+	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared; Func (see buildPascalGuard)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

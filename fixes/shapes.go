@@ -58,6 +58,7 @@ func init() {
 		ShapeFallingLoop:      {"falling-factorial loop", buildLoop, fallingHelpers, 0, nil},
 		ShapeFactorial:        {"factorial", buildGuard, family{}, 0, nil},
 		ShapeLoopGuard:        {"product loop", buildLoopGuard, family{}, 0, nil},
+		ShapePascalGuard:      {"Pascal's-rule recursion", buildPascalGuard, family{signed: "ChooseInt64", unsigned: "ChooseUint64"}, 0, nil},
 		ShapeFactorialValue:   {"converted factorial", buildValue, factorialHelpers, 1, factorialValueFactors},
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},
