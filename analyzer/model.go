@@ -994,7 +994,7 @@ func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
 		clause, _ := verdict(nv.Name(), n, first)
 		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d at %s = %s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, kName, nv.Name(), clause)
 	}
-	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg})
+	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg, match: mc.loopMatch(fixes.ShapeModelFallingLoop, a, f)})
 	return true
 }
 

@@ -54,6 +54,7 @@ const (
 	ShapeLogSpaceTerm           // a series term over running products    Node: the term; Args: its parts (the variables carried as lgamma.Product, math.Pow calls); Func (see buildLogSpaceTerm)
 	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
 	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
+	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

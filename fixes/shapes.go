@@ -61,6 +61,7 @@ func init() {
 		ShapeFactorialValue:   {"converted factorial", buildValue, factorialHelpers, 1, factorialValueFactors},
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},
+		ShapeModelFallingLoop: {"falling-factorial loop", buildModelLoop, fallingHelpers, 0, nil},
 		ShapeNegBinomialPMF:   {"negative binomial probability", buildTerm, family{float: "NegativeBinomialPMF"}, 3, negBinomialPMFFactors},
 		ShapeLgammaSign:       {"exponential of signed log-gamma values", buildLgammaSign, family{}, 0, nil},
 		ShapeStirling:         {"Stirling approximation", buildStirling, family{}, 0, nil},

@@ -210,3 +210,23 @@ func (t Ticket) Ways() float64 {
 
 // Ticket is a lottery ticket's pool size and number of picks.
 type Ticket struct{ Pool, Picks float64 }
+
+// Queues counts the ordered queues of k of n ticket holders, in float64
+// counts: a falling factorial of k factors, which past the last holder
+// multiplies by 0 (after +Inf from 171 holders on, so NaN as written).
+func Queues(n, k float64) float64 {
+	q := 1.0
+	for i := 0.0; i < k; i++ { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n`
+		q *= n - i
+	}
+	return q
+}
+
+// QueuesDown counts the same queues from the top factor down.
+func QueuesDown(n, k float64) float64 {
+	q := 1.0
+	for i := n; i > n-k; i-- { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n`
+		q *= i
+	}
+	return q
+}
