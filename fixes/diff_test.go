@@ -204,6 +204,13 @@ var diffCases = []diffCase{
 	// written); for a negative n its k factors are all negative.
 	{pkg: "fixmodel", fn: "Queues", loops: []string{"n := -10; n <= 250; n += 13", "k := 0; k <= n+40; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refProductDown},
 	{pkg: "fixmodel", fn: "QueuesDown", loops: []string{"n := -10; n <= 250; n += 13", "k := 0; k <= n+40; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refProductDown},
+	// A binomial probability over a coefficient its loop multiplies up:
+	// past C(1029, 514) the coefficient is +Inf and the product NaN or
+	// +Inf; for k > n it is 0 where a power of p = 150.5 is +Inf.
+	{pkg: "fixmodel", fn: "Winners", loops: []string{"n := 0; n <= 2000; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k, 0.375", typ: "float64", ref: refBinomialPMFnk},
+	{pkg: "fixmodel", fn: "Winners", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixmodel", fn: "Prizes", loops: []string{"n := 0; n <= 2000; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k, 0.375", typ: "float64", ref: refBinomialPMFnk},
+	{pkg: "fixmodel", fn: "Prizes", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

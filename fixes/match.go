@@ -115,6 +115,17 @@ type Match struct {
 	// C(n, k) leaves their integer type, where the original float64(…)
 	// of the call had a value.
 	IntBinomials map[*ast.CallExpr]IntBinomial
+	// Coefficient, for ShapeBinomialPMF, is a variable Node reads whose
+	// value there the analyzer's value model shows is C(n, k) of the
+	// operands wherever the expression is in the helper's domain (a
+	// local a binomial loop multiplied up): the shape check takes it as
+	// the coefficient factor, and the rewrite keeps it for the
+	// expression as written outside the domain.
+	Coefficient ast.Expr
+	// CoefficientLoop, where Coefficient is the accumulator of a
+	// binomial loop the model reads, is that loop's own match
+	// (ShapeModelBinomLoop), which the fix rewrites too.
+	CoefficientLoop *Match
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are

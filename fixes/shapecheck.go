@@ -146,6 +146,14 @@ func (b *builder) userCall(forms ...linear) factorPattern {
 	}
 }
 
+// coefficient accepts what p accepts, or the variable the analyzer
+// vouches holds the shape's coefficient (Match.Coefficient).
+func (b *builder) coefficient(p factorPattern) factorPattern {
+	return func(e ast.Expr) bool {
+		return b.m.Coefficient != nil && ast.Unparen(e) == b.m.Coefficient || p(e)
+	}
+}
+
 // converted accepts what p accepts, or a conversion of it: factors keeps
 // a float-to-integer conversion, which drops a fraction, as one factor.
 func (b *builder) converted(p factorPattern) factorPattern {

@@ -122,7 +122,7 @@ func poissonFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][
 func binomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // k, n, p
 	k, n, p := o[0], o[1], o[2]
 	pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", linearOne().add(p.neg()), n.add(k.neg()))
-	return []factorPattern{b.userCall(n, k), pk, qnk}, nil,
+	return []factorPattern{b.coefficient(b.userCall(n, k)), pk, qnk}, nil,
 		&[2][]factorPattern{{b.userCall(n), pk, qnk}, {b.userCall(k), b.userCall(n.add(k.neg()))}}
 }
 

@@ -230,3 +230,27 @@ func QueuesDown(n, k float64) float64 {
 	}
 	return q
 }
+
+// Winners is the chance that exactly k of n tickets win, each with
+// probability p, over a coefficient its loop builds one ratio at a time.
+func Winners(n, k int, p float64) float64 {
+	ways := 1.0
+	for j := 0; j < k; j++ {
+		ways *= float64(n-j) / float64(j+1)
+	}
+	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `computes the binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) in float64 with C\(n, k\) formed on its own`
+}
+
+// Prizes is Winners over a coefficient that multiplies before it
+// divides: the loop breaks first and is the finding, and its fix takes
+// the probability with it.
+func Prizes(n, k int, p float64) float64 {
+	ways := 1.0
+	top := float64(n)
+	for j := 1; j <= k; j++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product ways\*\(top\)`
+		ways *= top
+		ways /= float64(j)
+		top--
+	}
+	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}
