@@ -778,7 +778,7 @@ func (fc *fnCtx) loopPMFMatch(res *vm.Result, e ast.Expr, f vm.Form, coef ast.Ex
 	if m == nil {
 		return nil
 	}
-	m.Coefficient = id
+	m.Vouched = id
 	// The loop that forms it, rewritten with the expression.
 	obj := fc.c.pass.TypesInfo.Uses[id]
 	for _, l := range res.Loops {

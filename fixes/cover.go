@@ -27,8 +27,8 @@ func (b *builder) covered() error {
 	}
 	locals := make(map[types.Object]bool)
 	operands := append(append([]ast.Expr(nil), b.m.Args...), b.m.Extra...)
-	if b.m.Coefficient != nil {
-		operands = append(operands, b.m.Coefficient)
+	if b.m.Vouched != nil {
+		operands = append(operands, b.m.Vouched)
 	}
 	if !within(operands, regions) {
 		defs, err := b.absorbable()

@@ -77,6 +77,9 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
+	// The power multiplied up by a loop: +Inf from lambda^k past
+	// float64, the term NaN or 0 where it is not.
+	{pkg: "fixterm", fn: "Walkins", loops: []string{"k := -3; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoissonLoop},
 	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
 	// Outside 0 ≤ k ≤ n the rewrite keeps the expression as written
 	// (fixes/domain.go): fact(0)/(fact(1)·fact(−1)) is 1 where C(0, 1)

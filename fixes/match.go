@@ -115,13 +115,15 @@ type Match struct {
 	// C(n, k) leaves their integer type, where the original float64(…)
 	// of the call had a value.
 	IntBinomials map[*ast.CallExpr]IntBinomial
-	// Coefficient, for ShapeBinomialPMF, is a variable Node reads whose
-	// value there the analyzer's value model shows is C(n, k) of the
-	// operands wherever the expression is in the helper's domain (a
-	// local a binomial loop multiplied up): the shape check takes it as
-	// the coefficient factor, and the rewrite keeps it for the
-	// expression as written outside the domain.
-	Coefficient ast.Expr
+	// Vouched is a variable Node reads whose value there the analyzer
+	// shows is the factor the shape's check expects in its place,
+	// wherever the expression is in the helper's domain: the coefficient
+	// C(n, k) of a binomial probability (a local a binomial loop
+	// multiplied up), the power x^k of a power over a factorial or a
+	// Poisson term (a loop's running product x·x·…·x). The check takes
+	// it as that factor, and the rewrite keeps it for the expression as
+	// written outside the domain.
+	Vouched ast.Expr
 	// CoefficientLoop, where Coefficient is the accumulator of a
 	// binomial loop the model reads, is that loop's own match
 	// (ShapeModelBinomLoop), which the fix rewrites too.

@@ -98,6 +98,15 @@ func refPoisson(x []float64) *big.Float {
 	return mul(quo(powBig(lambda, k), bf(factorialBig(k))), fl(math.Exp(-lambda)))
 }
 
+// refPoissonLoop is refPoisson for k ≥ 0, and e^−λ for k < 0, where a
+// power loop of k trips and a factorial loop from 2 to k leave 1.
+func refPoissonLoop(x []float64) *big.Float {
+	if x[0] < 0 {
+		return fl(math.Exp(-x[1]))
+	}
+	return refPoisson(x)
+}
+
 // refBinomialPMF is C(n,k) p^k (1−p)^(n−k) for (k, n, p), with 1−p exact.
 func refBinomialPMF(x []float64) *big.Float {
 	k, n, p := int64(x[0]), int64(x[1]), x[2]

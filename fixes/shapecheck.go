@@ -146,11 +146,11 @@ func (b *builder) userCall(forms ...linear) factorPattern {
 	}
 }
 
-// coefficient accepts what p accepts, or the variable the analyzer
-// vouches holds the shape's coefficient (Match.Coefficient).
-func (b *builder) coefficient(p factorPattern) factorPattern {
+// vouched accepts what p accepts, or the variable the analyzer vouches
+// holds p's factor (Match.Vouched).
+func (b *builder) vouched(p factorPattern) factorPattern {
 	return func(e ast.Expr) bool {
-		return b.m.Coefficient != nil && ast.Unparen(e) == b.m.Coefficient || p(e)
+		return b.m.Vouched != nil && ast.Unparen(e) == b.m.Vouched || p(e)
 	}
 }
 
