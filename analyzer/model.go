@@ -779,12 +779,16 @@ func (fc *fnCtx) loopPMFMatch(res *vm.Result, e ast.Expr, f vm.Form, coef ast.Ex
 		return nil
 	}
 	m.Vouched = id
-	// The loop that forms it, rewritten with the expression.
+	// The loop that forms it, rewritten with the expression. A loop the
+	// binomial loop's rules do not vouch for (an early exit, a trip
+	// count other than k) vouches for no coefficient either.
 	obj := fc.c.pass.TypesInfo.Uses[id]
 	for _, l := range res.Loops {
 		for _, a := range l.Accs {
 			if a.Obj == obj && a.Obj != nil {
-				m.CoefficientLoop = (&modelCtx{fc: fc, res: res, loop: l}).binomialMatchIf(a, vm.Recognise(a.After))
+				if m.CoefficientLoop = (&modelCtx{fc: fc, res: res, loop: l}).binomialMatchIf(a, vm.Recognise(a.After)); m.CoefficientLoop == nil {
+					return nil
+				}
 			}
 		}
 	}
