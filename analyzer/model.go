@@ -646,8 +646,39 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !fits(n.Lo, k.Lo)
 	msg := fmt.Sprintf("multiplicative binomial loop computes C(%s, %s) in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
 		name, kName, t.typeName(), a.Obj.Name(), src(ast.Unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
-	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg, match: mc.binomialMatch(a, f)})
+	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg, match: mc.loopOrPMFMatch(a, f)})
 	return true
+}
+
+// loopOrPMFMatch is the binomial loop's match, or, where its accumulator
+// is the coefficient of a binomial probability the function returns
+// (c·p^k·(1−p)^(n−k)), the probability's (loopPMFMatch), which rewrites
+// the loop with it: rewritten alone, the loop would leave that product
+// 0·Inf = NaN where k > n and a power of p leaves float64.
+func (mc *modelCtx) loopOrPMFMatch(a *vm.Acc, f vm.Form) *fixes.Match {
+	lm := mc.binomialMatch(a, f)
+	if lm == nil {
+		return nil
+	}
+	fc := mc.fc
+	for _, e := range fc.modelRoots(mc.res) {
+		pf := vm.Recognise(mc.res.Values[e])
+		if pf.Kind != vm.BinomialPMF {
+			continue
+		}
+		if coef := fc.pmfCoefficient(mc.res, e); coef != nil && fc.c.pass.TypesInfo.Uses[identOfExpr(coef)] == a.Obj {
+			if m := fc.loopPMFMatch(mc.res, e, pf, coef); m != nil && m.CoefficientLoop != nil {
+				return m
+			}
+		}
+	}
+	return lm
+}
+
+// identOfExpr returns e as a name, or nil.
+func identOfExpr(e ast.Expr) *ast.Ident {
+	id, _ := ast.Unparen(e).(*ast.Ident)
+	return id
 }
 
 // modelRoots returns the returned expressions of the function, outside
@@ -687,15 +718,7 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if !ok || b.Op != token.MUL {
 		return
 	}
-	var coef ast.Expr
-	ast.Inspect(e, func(n ast.Node) bool {
-		if x, ok := n.(ast.Expr); ok && coef == nil {
-			if g := vm.Recognise(res.Values[x]); g.Kind == vm.Binomial {
-				coef = x
-			}
-		}
-		return coef == nil
-	})
+	coef := fc.pmfCoefficient(res, e)
 	if coef == nil {
 		return
 	}
@@ -723,7 +746,68 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	clause, definite := verdict(nv.Name(), n, central.FirstBad)
 	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that %s), after which the product is +Inf or NaN although the probability is at most 1",
 		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), reach)
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.formedPMFMatch(res, e, f)})
+	m := fc.formedPMFMatch(res, e, f)
+	if m == nil {
+		m = fc.loopPMFMatch(res, e, f, coef)
+	}
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: m})
+}
+
+// loopPMFMatch offers the helper call for a binomial probability whose
+// coefficient is a local that a loop multiplies up to C(n, k), which the
+// model vouches for where the product reads it:
+//
+//	c := 1.0
+//	for j := 1; j <= k; j++ { c *= float64(n+1-j) / float64(j) }
+//	return c * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+//
+// becomes lgamma.BinomialPMF(k, n, p) inside the helper's domain; the
+// loop stays, for the expression as written outside it (k > n, where
+// c is 0 and a power may be +Inf). The coefficient must be one of the
+// product's own factors, a plain name, and the form's C(n, k).
+func (fc *fnCtx) loopPMFMatch(res *vm.Result, e ast.Expr, f vm.Form, coef ast.Expr) *fixes.Match {
+	id, ok := ast.Unparen(coef).(*ast.Ident)
+	if !ok {
+		return nil
+	}
+	c := vm.Recognise(res.Values[id])
+	if c.Kind != vm.Binomial || len(c.Args) != 2 || !c.Args[0].Equal(f.Args[0]) || !c.Args[1].Equal(f.Args[1]) {
+		return nil
+	}
+	m := fc.readIn(fc.callRootMatch(res, e, f), e)
+	if m == nil {
+		return nil
+	}
+	m.Vouched = id
+	// The loop that forms it, rewritten with the expression. A loop the
+	// binomial loop's rules do not vouch for (an early exit, a trip
+	// count other than k) vouches for no coefficient either.
+	obj := fc.c.pass.TypesInfo.Uses[id]
+	for _, l := range res.Loops {
+		for _, a := range l.Accs {
+			if a.Obj == obj && a.Obj != nil {
+				if m.CoefficientLoop = (&modelCtx{fc: fc, res: res, loop: l}).binomialMatchIf(a, vm.Recognise(a.After)); m.CoefficientLoop == nil {
+					return nil
+				}
+			}
+		}
+	}
+	return m
+}
+
+// pmfCoefficient returns the first expression in e, a binomial
+// probability, whose value is a binomial coefficient, or nil.
+func (fc *fnCtx) pmfCoefficient(res *vm.Result, e ast.Expr) ast.Expr {
+	var coef ast.Expr
+	ast.Inspect(e, func(n ast.Node) bool {
+		if x, ok := n.(ast.Expr); ok && coef == nil {
+			if g := vm.Recognise(res.Values[x]); g.Kind == vm.Binomial {
+				coef = x
+			}
+		}
+		return coef == nil
+	})
+	return coef
 }
 
 // expFormed reports whether x is math.Exp of something, directly or as
@@ -765,12 +849,16 @@ func (fc *fnCtx) formedPMFMatch(res *vm.Result, e ast.Expr, f vm.Form) *fixes.Ma
 	if !found {
 		return nil
 	}
-	m := fc.callRootMatch(res, e, f)
+	return fc.readIn(fc.callRootMatch(res, e, f), e)
+}
+
+// readIn returns m with its operands as e reads them (the model's first
+// read of a variable may lie in a guard or loop above), or nil where e
+// does not read one of them.
+func (fc *fnCtx) readIn(m *fixes.Match, e ast.Expr) *fixes.Match {
 	if m == nil {
 		return nil
 	}
-	// The operands as e reads them: the model's first read of a
-	// variable may lie in a guard above.
 	for i, a := range m.Args {
 		var in ast.Expr
 		ast.Inspect(e, func(n ast.Node) bool {
@@ -994,7 +1082,7 @@ func (mc *modelCtx) fallingLoop(a *vm.Acc, t numType) bool {
 		clause, _ := verdict(nv.Name(), n, first)
 		msg = fmt.Sprintf("falling factorial %s of %s factors in %s %s for %s ≥ %d at %s = %s%s", f, kName, t.typeName(), verb(t), nv.Name(), first, kName, nv.Name(), clause)
 	}
-	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg})
+	fc.report(finding{node: mc.loop.Stmt, cat: catLoop, definite: definite, msg: msg, match: mc.loopMatch(fixes.ShapeModelFallingLoop, a, f)})
 	return true
 }
 

@@ -34,6 +34,14 @@ import (
 // does nothing else, the stepped variables unread after the loop, and
 // that n and k still hold their entry values where the call goes.
 func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
+	return mc.loopMatch(fixes.ShapeModelBinomLoop, a, f)
+}
+
+// loopMatch is binomialMatch for the row shape, whose helpers compute
+// f: C(n, k), or n!/(n−k)! for a falling-factorial loop of k trips,
+// which over a negative n is the product of the k negative factors the
+// helpers' Falling family returns too.
+func (mc *modelCtx) loopMatch(shape fixes.Shape, a *vm.Acc, f vm.Form) *fixes.Match {
 	l, fc := mc.loop, mc.fc
 	if l.Counter == nil || l.Exits || len(l.Accs) != 1 || len(l.Sums) > 0 || a.Guarded || len(f.Args) != 2 {
 		return nil
@@ -84,7 +92,7 @@ func (mc *modelCtx) binomialMatch(a *vm.Acc, f vm.Form) *fixes.Match {
 		return nil
 	}
 	return &fixes.Match{
-		Shape:   fixes.ShapeModelBinomLoop,
+		Shape:   shape,
 		Node:    l.Stmt,
 		Args:    args,
 		Result:  a.Obj.Type(),

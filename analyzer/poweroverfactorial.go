@@ -10,6 +10,7 @@ import (
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // The power-over-factorial category: x^k/k! terms (Poisson, Erlang,
@@ -98,6 +99,9 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 			m.Factorials = []fixes.FactorialCall{{Call: fac.call, Arg: fac.arg, Off: fac.off}}
 		}
 	}
+	if pow.acc != nil && m.Shape != fixes.ShapeProductChain {
+		m = fc.loopPowerMatch(m, root, pow)
+	}
 	var msg, clause string
 	definite := false
 	if !facSafe {
@@ -112,6 +116,69 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	}
 	fc.report(finding{node: root, cat: catPowOverFac, definite: definite, msg: msg + clause,
 		related: fc.c.relatedDef(fac.def()), match: p.fix(m)})
+}
+
+// loopPowerMatch offers m, a power over a factorial or Poisson term
+// whose power x^k a loop multiplies up (p *= x over k trips), with the
+// loop's accumulator vouched for as that power (Match.Vouched) and the
+// operands x and k as root reads them:
+//
+//	p := 1.0
+//	for i := 0; i < k; i++ { p *= lambda }
+//	return p * math.Exp(-lambda) / fact(k)
+//
+// becomes lgamma.PoissonTerm(k, lambda). Neither operand, nor the
+// accumulator, may change between the loop's start and root: root's k
+// must be the loop's trip count. ShapeNone where that cannot be shown.
+func (fc *fnCtx) loopPowerMatch(m *fixes.Match, root ast.Expr, pow factor) *fixes.Match {
+	none := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: m.Result}
+	if m.Shape != fixes.ShapePoisson && m.Shape != fixes.ShapePowOverFactorial {
+		return none
+	}
+	info := fc.c.pass.TypesInfo
+	acc := fc.c.objOf(pow.acc)
+	watched := map[types.Object]bool{}
+	for _, a := range m.Args {
+		if !isIdentOrSel(ast.Unparen(fc.stripConv(a))) {
+			return none
+		}
+		for _, v := range fc.exprVars(a) {
+			watched[v] = true
+		}
+	}
+	changed := false
+	assigned.Each(info, funcBody(fc.node), nil, func(v types.Object, at ast.Node) bool {
+		from := pow.loop.Pos() // the operands, from the loop's start
+		if v == acc {
+			from = pow.loop.End() // the accumulator, after its loop
+		}
+		if (watched[v] || v == acc) && at.Pos() >= from && at.Pos() < root.Pos() {
+			changed = true
+		}
+		return !changed
+	})
+	if changed {
+		return none
+	}
+	m.Vouched = pow.acc
+	if m = fc.readIn(m, root); m == nil {
+		return none
+	}
+	return m
+}
+
+// exprVars returns the variables e reads.
+func (fc *fnCtx) exprVars(e ast.Expr) []types.Object {
+	var out []types.Object
+	ast.Inspect(e, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok {
+			if v, ok := fc.c.pass.TypesInfo.Uses[id].(*types.Var); ok {
+				out = append(out, v)
+			}
+		}
+		return true
+	})
+	return out
 }
 
 // powerLimit describes where math.Pow(x, k) overflows when x is a

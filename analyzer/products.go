@@ -25,6 +25,10 @@ type factor struct {
 	fact *FactorialFact
 	// table is the factorial table a read t[e] comes from (fn is nil).
 	table *facTable
+	// acc, for a power x^k a loop multiplies up, is the read of its
+	// accumulator in the product, and loop that loop.
+	acc  *ast.Ident
+	loop ast.Stmt
 }
 
 // def names the definition a finding on f points to: the factorial
@@ -114,7 +118,13 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 		if al := fc.powerLoopOf(fc.c.objOf(e)); al != nil && e.Pos() > al.shape.stmt.End() {
 			// The accumulator of a power loop, used after the loop.
 			t, _ := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
-			p.num = append(p.num, factor{math: "Pow", arg: al.mult, arg2: al.count, t: t})
+			f := factor{math: "Pow", arg: al.mult, arg2: al.count, t: t}
+			if al.coff == 0 {
+				// The loop runs count trips exactly: its product is
+				// the power a fix may take for it.
+				f.acc, f.loop = e, al.shape.stmt
+			}
+			p.num = append(p.num, f)
 			return
 		}
 		if def := fc.singleDef(e); def != nil {

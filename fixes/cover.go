@@ -27,6 +27,9 @@ func (b *builder) covered() error {
 	}
 	locals := make(map[types.Object]bool)
 	operands := append(append([]ast.Expr(nil), b.m.Args...), b.m.Extra...)
+	if b.m.Vouched != nil {
+		operands = append(operands, b.m.Vouched)
+	}
 	if !within(operands, regions) {
 		defs, err := b.absorbable()
 		if err != nil {

@@ -77,6 +77,9 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
+	// The power multiplied up by a loop: +Inf from lambda^k past
+	// float64, the term NaN or 0 where it is not.
+	{pkg: "fixterm", fn: "Walkins", loops: []string{"k := -3; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoissonLoop},
 	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
 	// Outside 0 ≤ k ≤ n the rewrite keeps the expression as written
 	// (fixes/domain.go): fact(0)/(fact(1)·fact(−1)) is 1 where C(0, 1)
@@ -206,6 +209,24 @@ var diffCases = []diffCase{
 	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "int64(n), int64(k), 150.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
 	{pkg: "fixkept", fn: "Flawed", loops: []string{"total := 40; total <= 120; total += 20", "k := 0; k <= 30; k += 3"}, args: "total, 70, 30, k", typ: "float64", ref: refKeptHypergeometric},
 	{pkg: "fixkept", fn: "Glazed", loops: []string{"n := -3; n <= 60; n += 2", "k := -3; k <= n+3; k += 1 + n/9"}, args: "int64(n), int64(k), 1.5", typ: "float64", ref: keptPMF(ratioChooseBig)},
+	// A sum of binomial probabilities with p outside [0, 1]: the terms
+	// alternate in sign and leave float64 (−33.5^300 ≈ 1e457), so the
+	// original's float64 sum is +Inf − Inf = NaN where the true sum, led
+	// by its largest term, overflows too: the fixed loop panics there.
+	{pkg: "fixkept", fn: "Passed", loops: []string{"n := 300; n <= 600; n += 100", "c := 0; c <= 5; c++"}, args: "n, c, 34.5", typ: "float64", ref: refKeptPMFSum},
+	{pkg: "fixkept", fn: "Passed", loops: []string{"n := 0; n <= 100; n += 3", "c := 0; c <= n; c += 1 + n/9"}, args: "n, c, 0.25", typ: "float64", ref: refKeptPMFSum},
+	// Falling-factorial loops over float counts, k past n included: the
+	// loop multiplies by 0 there, after +Inf from n = 171 on (NaN as
+	// written); for a negative n its k factors are all negative.
+	{pkg: "fixmodel", fn: "Queues", loops: []string{"n := -10; n <= 250; n += 13", "k := 0; k <= n+40; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refProductDown},
+	{pkg: "fixmodel", fn: "QueuesDown", loops: []string{"n := -10; n <= 250; n += 13", "k := 0; k <= n+40; k += 7"}, args: "float64(n), float64(k)", typ: "float64", ref: refProductDown},
+	// A binomial probability over a coefficient its loop multiplies up:
+	// past C(1029, 514) the coefficient is +Inf and the product NaN or
+	// +Inf; for k > n it is 0 where a power of p = 150.5 is +Inf.
+	{pkg: "fixmodel", fn: "Winners", loops: []string{"n := 0; n <= 2000; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k, 0.375", typ: "float64", ref: refBinomialPMFnk},
+	{pkg: "fixmodel", fn: "Winners", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
+	{pkg: "fixmodel", fn: "Prizes", loops: []string{"n := 0; n <= 2000; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k, 0.375", typ: "float64", ref: refBinomialPMFnk},
+	{pkg: "fixmodel", fn: "Prizes", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(loopChooseBig)},
 	{pkg: "fixmodel", fn: "Desk.Tickets", loops: []string{"n := -2; n <= 70; n++", "k := -2; k <= n+2; k++"}, args: "n, k", typ: "int64", ref: refChoose, call: "Desk{N: int64(n), K: int64(k)}.Tickets()"},
 }
 

@@ -3,6 +3,7 @@ package fixes
 import (
 	"fmt"
 	"go/ast"
+	"go/token"
 	"go/types"
 	"regexp"
 	"strconv"
@@ -125,8 +126,11 @@ type domain struct {
 }
 
 var (
-	kUpToN     = []bound{{"0", "%[2]s", false}, {"%[2]s", "%[1]s", false}}
-	nAtLeast0  = []bound{{"0", "%[1]s", false}}
+	kUpToN    = []bound{{"0", "%[2]s", false}, {"%[2]s", "%[1]s", false}}
+	nAtLeast0 = []bound{{"0", "%[1]s", false}}
+	// loopTrips is the domain of a model loop's float counts: n whole
+	// and k ≥ 0 whole, the loop's trip count (buildModelLoop).
+	loopTrips  = []bound{{"0", "%[2]s", false}}
 	pmfBetween = []bound{{"0", "%[1]s", false}, {"%[1]s", "%[2]s", false}, {"0", "%[3]s", false}, {"%[3]s", "1", false}}
 )
 
@@ -284,7 +288,86 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	if err != nil {
 		return "", err
 	}
+	if fn := b.summandOf(); (b.m.Shape == ShapeBinomialPMF || b.m.Shape == ShapeNegBinomialPMF) && fn != "" {
+		var refused []string
+		orig, refused = b.refuseInfiniteTerm(fn, orig, exprs)
+		lead = append(lead, refused...)
+	}
 	return b.keepAs(text, b.m.Node, orig, conds, false, lead...)
+}
+
+// summandOf returns the name of the function in which the match's node
+// is what a loop adds to (or subtracts from) a float sum, sum += node;
+// "" where it is not.
+func (b *builder) summandOf() string {
+	node, ok := b.m.Node.(ast.Expr)
+	if !ok {
+		return ""
+	}
+	path, _ := astpath.Enclosing(b.file, node.Pos(), node.End())
+	if len(path) < 2 || path[0] != node {
+		return ""
+	}
+	as, ok := path[1].(*ast.AssignStmt)
+	if !ok || len(as.Rhs) != 1 || as.Rhs[0] != node || (as.Tok != token.ADD_ASSIGN && as.Tok != token.SUB_ASSIGN) ||
+		classOf(b.pass.TypesInfo.TypeOf(as.Lhs[0])) != classFloat {
+		return ""
+	}
+	loop := false
+	for _, n := range path[2:] {
+		switch n := n.(type) {
+		case *ast.ForStmt, *ast.RangeStmt:
+			loop = true
+		case *ast.FuncLit:
+			return ""
+		case *ast.FuncDecl:
+			if loop {
+				return n.Name.Name
+			}
+			return ""
+		}
+	}
+	return ""
+}
+
+// refuseInfiniteTerm makes a term of a sum, kept as written outside the
+// helper's domain, refuse to run where its own value leaves float64: a
+// binomial probability's terms for p outside [0, 1] alternate in sign
+// (1 − p < 0), and two of them past float64 add to +Inf − Inf = NaN,
+// not to the sum, whose true value there (C(500, d)·34.5^d·(−33.5)^(500−d)
+// summed over d ≤ 5 is about −9.7e773) the loop cannot form in float64
+// either. It returns the term's value and the lines that form it and
+// panic naming the operands where it is ±Inf.
+func (b *builder) refuseInfiniteTerm(fn, orig string, exprs []ast.Expr) (string, []string) {
+	pos := b.m.Node.Pos()
+	name := b.freeName("term", pos, pos, nil)
+	var labels, values []string
+	for _, e := range exprs {
+		if e == nil {
+			continue
+		}
+		op := e
+		for {
+			c, ok := ast.Unparen(op).(*ast.CallExpr)
+			if !ok || !b.isNumericConversion(c) {
+				break
+			}
+			op = c.Args[0]
+		}
+		verb := "%d"
+		if classOf(b.pass.TypesInfo.TypeOf(op)) == classFloat {
+			verb = "%v"
+		}
+		labels = append(labels, b.text(ast.Unparen(op))+" = "+verb)
+		values = append(values, b.text(op))
+	}
+	msg := fmt.Sprintf("%s: %s: a term of the sum overflows float64", fn, strings.Join(labels, ", "))
+	return name, []string{
+		name + " := " + orig,
+		fmt.Sprintf("if %s.IsInf(%s, 0) {", b.use("math", "math", pos), name),
+		fmt.Sprintf("\tpanic(%s.Sprintf(%s, %s))", b.use("fmt", "fmt", pos), strconv.Quote(msg), strings.Join(values, ", ")),
+		"}",
+	}
 }
 
 // keepAsWritten returns text, the helper call that replaces node, so

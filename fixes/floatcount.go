@@ -68,7 +68,10 @@ func (b *builder) countConds(name string, args []string) ([]string, error) {
 		conds = append(conds, fmt.Sprintf("float64(%s) == %s", c.conv, x))
 	}
 	bounds := d.bounds
-	if d.counts != nil {
+	switch {
+	case b.countBounds != nil:
+		bounds = b.countBounds
+	case d.counts != nil:
 		bounds = d.counts
 	}
 	ops := make([]any, len(args))

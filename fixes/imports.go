@@ -106,7 +106,11 @@ func (b *builder) addImport(path, base, name string) {
 		b.insert(b.file.Name.End(), "\n\nimport "+spec)
 	case len(decl.Specs) == 0:
 		b.insert(decl.Lparen+1, "\n\t"+spec+"\n")
+	case !decl.Lparen.IsValid() && b.listed:
+		// A second import of this fix: the list is made already.
+		b.insert(placeImport(decl.Specs, path, spec))
 	case !decl.Lparen.IsValid():
+		b.listed = true
 		// import "math" becomes a parenthesised list. The parentheses
 		// are edits of their own, identical in every fix, so that fixes
 		// adding different imports to the same declaration merge. The

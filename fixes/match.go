@@ -55,6 +55,7 @@ const (
 	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
 	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
 	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared; Func (see buildPascalGuard)
+	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.
@@ -115,6 +116,19 @@ type Match struct {
 	// C(n, k) leaves their integer type, where the original float64(…)
 	// of the call had a value.
 	IntBinomials map[*ast.CallExpr]IntBinomial
+	// Vouched is a variable Node reads whose value there the analyzer
+	// shows is the factor the shape's check expects in its place,
+	// wherever the expression is in the helper's domain: the coefficient
+	// C(n, k) of a binomial probability (a local a binomial loop
+	// multiplied up), the power x^k of a power over a factorial or a
+	// Poisson term (a loop's running product x·x·…·x). The check takes
+	// it as that factor, and the rewrite keeps it for the expression as
+	// written outside the domain.
+	Vouched ast.Expr
+	// CoefficientLoop, where Coefficient is the accumulator of a
+	// binomial loop the model reads, is that loop's own match
+	// (ShapeModelBinomLoop), which the fix rewrites too.
+	CoefficientLoop *Match
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are

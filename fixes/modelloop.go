@@ -71,11 +71,17 @@ func buildModelLoop(b *builder) error {
 		}
 		drop = append(drop, d)
 	}
-	name, err := b.pick(shapes[ShapeModelBinomLoop].helpers, acc.Type())
+	name, err := b.pick(shapes[b.m.Shape].helpers, acc.Type())
 	if err != nil {
 		return err
 	}
+	// A loop of exactly k trips has the helper's value for every whole n
+	// and k ≥ 0, k > n included: its factors reach 0 there (n+1−j at
+	// j = n+1, n − i at i = n), as the helpers' 0 says, even where the
+	// product had left float64 before (+Inf·0 = NaN).
+	b.countBounds = loopTrips
 	call, conds, err := b.countedCall(name, b.m.Args, acc.Type())
+	b.countBounds = nil
 	if err != nil {
 		return err
 	}

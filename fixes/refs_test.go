@@ -56,6 +56,17 @@ func powBig(x float64, k int64) *big.Float {
 
 func refChoose(x []float64) *big.Float { return bf(chooseBig(int64(x[0]), int64(x[1]))) }
 
+// refProductDown is n(n−1)…(n−k+1), the k factors down from n, for a
+// whole n of either sign and k ≥ 0, multiplied out in math/big.
+func refProductDown(x []float64) *big.Float {
+	n, k := int64(x[0]), int64(x[1])
+	r := big.NewInt(1)
+	for i := int64(0); i < k; i++ {
+		r.Mul(r, big.NewInt(n-i))
+	}
+	return bf(r)
+}
+
 func refFalling(x []float64) *big.Float { return bf(fallingBig(int64(x[0]), int64(x[1]))) }
 
 func refFactorial(x []float64) *big.Float { return bf(factorialBig(int64(x[0]))) }
@@ -85,6 +96,15 @@ func refPowFact(x []float64) *big.Float {
 func refPoisson(x []float64) *big.Float {
 	k, lambda := int64(x[0]), x[1]
 	return mul(quo(powBig(lambda, k), bf(factorialBig(k))), fl(math.Exp(-lambda)))
+}
+
+// refPoissonLoop is refPoisson for k ≥ 0, and e^−λ for k < 0, where a
+// power loop of k trips and a factorial loop from 2 to k leave 1.
+func refPoissonLoop(x []float64) *big.Float {
+	if x[0] < 0 {
+		return fl(math.Exp(-x[1]))
+	}
+	return refPoisson(x)
 }
 
 // refBinomialPMF is C(n,k) p^k (1−p)^(n−k) for (k, n, p), with 1−p exact.
@@ -353,6 +373,17 @@ func keptPMF(count func(n, k int64) *big.Int) func([]float64) *big.Float {
 		n, k, p := int64(x[0]), int64(x[1]), x[2]
 		return mul(mul(bf(count(n, k)), powZBig(p, k)), powZBig(1-p, n-k))
 	}
+}
+
+// refKeptPMFSum is Σ_{k=0}^{c} C(n, k)·p^k·(1−p)^(n−k) for (n, c, p),
+// each count the multiplicative loop's (loopChooseBig), in math/big.
+func refKeptPMFSum(x []float64) *big.Float {
+	n, c, p := int64(x[0]), int64(x[1]), x[2]
+	sum := fl(0)
+	for k := int64(0); k <= c; k++ {
+		sum = new(big.Float).SetPrec(refPrec).Add(sum, keptPMF(loopChooseBig)([]float64{float64(n), float64(k), p}))
+	}
+	return sum
 }
 
 // ratioChooseBig is n!/(k!(n−k)!) over factorials that are 1 below 2,

@@ -146,6 +146,14 @@ func (b *builder) userCall(forms ...linear) factorPattern {
 	}
 }
 
+// vouched accepts what p accepts, or the variable the analyzer vouches
+// holds p's factor (Match.Vouched).
+func (b *builder) vouched(p factorPattern) factorPattern {
+	return func(e ast.Expr) bool {
+		return b.m.Vouched != nil && ast.Unparen(e) == b.m.Vouched || p(e)
+	}
+}
+
 // converted accepts what p accepts, or a conversion of it: factors keeps
 // a float-to-integer conversion, which drops a fraction, as one factor.
 func (b *builder) converted(p factorPattern) factorPattern {

@@ -62,6 +62,7 @@ func init() {
 		ShapeFactorialValue:   {"converted factorial", buildValue, factorialHelpers, 1, factorialValueFactors},
 		ShapeSeriesTerm:       {"series term", buildSeriesTerm, family{}, 0, nil},
 		ShapeModelBinomLoop:   {"binomial loop", buildModelLoop, chooseHelpers, 0, nil},
+		ShapeModelFallingLoop: {"falling-factorial loop", buildModelLoop, fallingHelpers, 0, nil},
 		ShapeNegBinomialPMF:   {"negative binomial probability", buildTerm, family{float: "NegativeBinomialPMF"}, 3, negBinomialPMFFactors},
 		ShapeLgammaSign:       {"exponential of signed log-gamma values", buildLgammaSign, family{}, 0, nil},
 		ShapeStirling:         {"Stirling approximation", buildStirling, family{}, 0, nil},
@@ -112,17 +113,17 @@ func hypergeometricFactors(b *builder, o []linear) (num, den []factorPattern, al
 }
 
 func powOverFactorialFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // x, k
-	return []factorPattern{b.mathCall("Pow", o[0], o[1])}, []factorPattern{b.userCall(o[1])}, nil
+	return []factorPattern{b.vouched(b.mathCall("Pow", o[0], o[1]))}, []factorPattern{b.userCall(o[1])}, nil
 }
 
 func poissonFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // k, lambda
-	return []factorPattern{b.mathCall("Pow", o[1], o[0]), b.mathCall("Exp", o[1].neg())}, []factorPattern{b.userCall(o[0])}, nil
+	return []factorPattern{b.vouched(b.mathCall("Pow", o[1], o[0])), b.mathCall("Exp", o[1].neg())}, []factorPattern{b.userCall(o[0])}, nil
 }
 
 func binomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // k, n, p
 	k, n, p := o[0], o[1], o[2]
 	pk, qnk := b.mathCall("Pow", p, k), b.mathCall("Pow", linearOne().add(p.neg()), n.add(k.neg()))
-	return []factorPattern{b.userCall(n, k), pk, qnk}, nil,
+	return []factorPattern{b.vouched(b.userCall(n, k)), pk, qnk}, nil,
 		&[2][]factorPattern{{b.userCall(n), pk, qnk}, {b.userCall(k), b.userCall(n.add(k.neg()))}}
 }
 

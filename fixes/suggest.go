@@ -62,6 +62,10 @@ type builder struct {
 	copied  []span            // source the fix deletes but re-emits verbatim
 	imports map[string]string // import path → name the fix uses
 	added   map[string]bool   // import paths the fix adds
+	listed  bool              // the fix made the file's one unparenthesised import a list
+	// countBounds, where set, are the bounds float counts are tested
+	// against instead of the helper's domain (countConds).
+	countBounds []bound
 	// absorbed are definitions of locals only the rewritten expression
 	// read; the rewrite deletes them.
 	absorbed []ast.Stmt

@@ -21,5 +21,28 @@ func buildTerm(b *builder) error {
 			return err
 		}
 	}
-	return b.rewrite(helper, b.m.Args)
+	if err := b.rewrite(helper, b.m.Args); err != nil {
+		return err
+	}
+	b.rewriteCoefficientLoop()
+	return nil
+}
+
+// rewriteCoefficientLoop rewrites, with the expression, the binomial
+// loop that forms its coefficient (Match.CoefficientLoop), which the
+// expression as written still reads outside the helper's domain: left
+// as it was, that loop would be the next finding, and one fix would not
+// leave the code settled. Where the loop's own rewrite is refused, the
+// fix goes without it.
+func (b *builder) rewriteCoefficientLoop() {
+	lm := b.m.CoefficientLoop
+	if lm == nil || !b.keptAsWritten {
+		return
+	}
+	m, edits, message, shown := b.m, len(b.edits), b.message, b.shown
+	b.m = *lm
+	if err := buildModelLoop(b); err != nil {
+		b.edits = b.edits[:edits]
+	}
+	b.m, b.message, b.shown = m, message, shown
 }

@@ -48,3 +48,15 @@ func Flawed(total, bad, n, k int) float64 {
 func Glazed(n, k int64, p float64) float64 {
 	return float64(pairs(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int64: pairs`
 }
+
+// Passed is the chance that at most c of n pots crack: Cracked's terms
+// summed. For p outside [0, 1] the terms alternate in sign, and where
+// they leave float64 their sum would be +Inf − Inf = NaN: the fixed loop
+// refuses such a term, naming its operands.
+func Passed(n, c int, p float64) float64 {
+	sum := 0.0
+	for k := 0; k <= c; k++ {
+		sum += float64(ways(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int: ways`
+	}
+	return sum
+}

@@ -210,3 +210,47 @@ func (t Ticket) Ways() float64 {
 
 // Ticket is a lottery ticket's pool size and number of picks.
 type Ticket struct{ Pool, Picks float64 }
+
+// Queues counts the ordered queues of k of n ticket holders, in float64
+// counts: a falling factorial of k factors, which past the last holder
+// multiplies by 0 (after +Inf from 171 holders on, so NaN as written).
+func Queues(n, k float64) float64 {
+	q := 1.0
+	for i := 0.0; i < k; i++ { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n`
+		q *= n - i
+	}
+	return q
+}
+
+// QueuesDown counts the same queues from the top factor down.
+func QueuesDown(n, k float64) float64 {
+	q := 1.0
+	for i := n; i > n-k; i-- { // want `falling factorial n!/\(n - k\)! of k factors in float64 overflows to \+Inf for n ≥ 171 at k = n`
+		q *= i
+	}
+	return q
+}
+
+// Winners is the chance that exactly k of n tickets win, each with
+// probability p, over a coefficient its loop builds one ratio at a time.
+func Winners(n, k int, p float64) float64 {
+	ways := 1.0
+	for j := 0; j < k; j++ {
+		ways *= float64(n-j) / float64(j+1)
+	}
+	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `computes the binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) in float64 with C\(n, k\) formed on its own`
+}
+
+// Prizes is Winners over a coefficient that multiplies before it
+// divides: the loop breaks first and is the finding, and its fix takes
+// the probability with it.
+func Prizes(n, k int, p float64) float64 {
+	ways := 1.0
+	top := float64(n)
+	for j := 1; j <= k; j++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product ways\*\(top\)`
+		ways *= top
+		ways /= float64(j)
+		top--
+	}
+	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+}

@@ -93,3 +93,23 @@ func FillDensity(a, b, x float64) float64 { // want FillDensity:`value Γ\(p0 \+
 func Drift(k int, b, g float64) float64 { // want Drift:`value Γ\(p0 \+ p1\)·\(p2\)\^\(p0\)/Γ\(p1\), wrong once p0 \+ p1 ≥ 171\.624377`
 	return math.Gamma(float64(k)+b) / math.Gamma(b) * math.Pow(g, float64(k)) // want "ratio of math.Gamma"
 }
+
+// Walkins is Arrivals with the power of lambda multiplied up by a loop:
+// the loop's product is lambda^k where the term reads it.
+func Walkins(k int, lambda float64) float64 { // want Walkins:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
+	pw := 1.0
+	for i := 1; i <= k; i++ {
+		pw *= lambda
+	}
+	return pw * math.Exp(-lambda) / factF(k) // want "Poisson"
+}
+
+// Tally is Load over a power its loop forms, counted down from k: the
+// term itself does not read a, so no helper call can stand for it.
+func Tally(a float64, k int) float64 { // want Tally:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+	pw := 1.0
+	for j := k; j > 0; j-- {
+		pw *= a
+	}
+	return pw / factF(k) // want "power-over-factorial"
+}
