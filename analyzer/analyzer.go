@@ -135,6 +135,7 @@ func run(pass *analysis.Pass) (any, error) {
 		if funcBody(n) != nil && s.worth() {
 			c.guard(n, func() { c.checkFunc(n, *s) })
 		}
+		c.forgetRanges(n)
 	}
 	c.checkWeightReads(funcs)
 	c.releaseGuards()

@@ -3,6 +3,7 @@ package analyzer
 import (
 	"go/ast"
 	"go/types"
+	"maps"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -39,6 +40,51 @@ type rangeQueries struct {
 	entry   map[types.Object]ranges.Interval
 	rng     *ranges.Func
 	assumes []stmtAssume
+	ran     *ranAnalyses // the pass's range analyses, shared by contexts of one function
+}
+
+// ranAnalyses holds the range analyses run in a pass, by function, each
+// with the entry ranges it ran from. A function is analysed with its own
+// annotations to find its facts (ownCtx, callSiteRange) and with the
+// ranges its call sites give it to judge it (ctx); where those entries
+// are equal, as for every exported function, the analysis is the same
+// (ranges.Analyze depends on nothing else that differs between them: the
+// type information, the package's tables and maxVisits are the pass's)
+// and runs once.
+type ranAnalyses struct {
+	byNode map[ast.Node][]ranAnalysis
+}
+
+type ranAnalysis struct {
+	entry map[types.Object]ranges.Interval // a copy, which no context changes
+	rng   *ranges.Func
+}
+
+var ranAnalysesKey = &stateKey[ranAnalyses]{"range analyses"}
+
+// find returns the analysis of n from entry, if one ran.
+func (ra *ranAnalyses) find(n ast.Node, entry map[types.Object]ranges.Interval) *ranges.Func {
+	for _, a := range ra.byNode[n] {
+		if maps.Equal(a.entry, entry) {
+			return a.rng
+		}
+	}
+	return nil
+}
+
+// forgetRanges drops the range analyses of n kept for a later context
+// of it, once n is judged: a context made after that analyses afresh, so
+// that the analyses of phase 1 do not outlive the pass's use of them. The
+// context n was judged in keeps its own.
+func (c *checker) forgetRanges(n ast.Node) {
+	delete(passStateOf(c, ranAnalysesKey).byNode, n)
+}
+
+func (ra *ranAnalyses) add(n ast.Node, entry map[types.Object]ranges.Interval, rng *ranges.Func) {
+	if ra.byNode == nil {
+		ra.byNode = make(map[ast.Node][]ranAnalysis)
+	}
+	ra.byNode[n] = append(ra.byNode[n], ranAnalysis{entry, rng})
 }
 
 // definitions is the part of a function context that knows every value
@@ -122,7 +168,7 @@ func (c *checker) ctx(n ast.Node) *fnCtx {
 func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fnCtx {
 	q := c.queries()
 	fc := &fnCtx{c: c, node: n, file: c.fileOf(n.Pos()), typeQueries: q,
-		rangeQueries: rangeQueries{q: q, node: n, tables: c.packageTables, entry: entry},
+		rangeQueries: rangeQueries{q: q, node: n, tables: c.packageTables, entry: entry, ran: passStateOf(c, ranAnalysesKey)},
 		definitions:  definitions{q: q, node: n}}
 	if fc.file != nil {
 		fc.assumes = fc.file.dirs.stmtAssumesIn(n)
@@ -133,8 +179,12 @@ func (c *checker) newCtx(n ast.Node, entry map[types.Object]ranges.Interval) *fn
 // ranges returns the range analysis of the function, running it once.
 func (r *rangeQueries) ranges() *ranges.Func {
 	if r.rng == nil {
-		opts := ranges.Options{Entry: r.entry, MaxVisits: maxVisits, Tables: r.tables()}
-		r.rng = ranges.Analyze(r.q.info, r.node, opts)
+		if r.rng = r.ran.find(r.node, r.entry); r.rng == nil {
+			entry := maps.Clone(r.entry)
+			opts := ranges.Options{Entry: entry, MaxVisits: maxVisits, Tables: r.tables()}
+			r.rng = ranges.Analyze(r.q.info, r.node, opts)
+			r.ran.add(r.node, entry, r.rng)
+		}
 	}
 	return r.rng
 }

@@ -47,20 +47,35 @@ const metaMode = packages.NeedName | packages.NeedFiles | packages.NeedCompiledG
 // export data have no Syntax and no TypesInfo; checker.Analyze runs the
 // analyzer on them with no files, which exports nothing.
 //
-// With an overlay, or without a scan, it is packages.Load with
-// packages.LoadAllSyntax: export data is built from the files on disk
-// only as go/packages trusts it.
+// With an overlay of Go files (the later rounds of -fix), export data is
+// built from the files on disk, which go/packages therefore never
+// trusts: here the packages the overlay reaches (those with an overlaid
+// file in their directory, and every package importing one of them) come
+// from source, and the rest as without an overlay (see exportBeyond).
+// With any other overlay, or without a scan, it is packages.Load with
+// packages.LoadAllSyntax.
 func LoadForFacts(cfg *packages.Config, patterns []string, scan FactScan) ([]*packages.Package, error) {
-	if scan == nil || len(cfg.Overlay) > 0 {
+	if scan == nil || !goFilesOnly(cfg.Overlay) {
 		full := *cfg
 		full.Mode = packages.LoadAllSyntax | packages.NeedModule
 		return packages.Load(&full, patterns...)
 	}
 	meta := *cfg
 	meta.Mode = metaMode
+	if len(cfg.Overlay) > 0 {
+		// go list -export would compile the overlaid packages, for
+		// export data that is not read: they come from source.
+		meta.Mode &^= packages.NeedExportFile
+	}
 	roots, err := packages.Load(&meta, patterns...)
 	if err != nil {
 		return nil, err
+	}
+	order := postorder(roots)
+	if len(cfg.Overlay) > 0 {
+		if err := exportBeyond(cfg, order); err != nil {
+			return nil, err
+		}
 	}
 	l := &loader{cfg: cfg, fset: cfg.Fset, parsed: make(map[string]*parsedFile)}
 	if l.fset == nil {
@@ -69,7 +84,6 @@ func LoadForFacts(cfg *packages.Config, patterns []string, scan FactScan) ([]*pa
 	if l.goroot, err = goroot(cfg); err != nil {
 		return nil, err
 	}
-	order := postorder(roots)
 	isRoot := make(map[*packages.Package]bool, len(roots))
 	for _, p := range roots {
 		isRoot[p] = true
@@ -77,6 +91,71 @@ func LoadForFacts(cfg *packages.Config, patterns []string, scan FactScan) ([]*pa
 	l.decide(order, isRoot, scan)
 	l.check(order)
 	return roots, nil
+}
+
+// goFilesOnly reports whether every file of overlay is a Go file: an
+// overlaid go.mod, go.sum or go.work could change which package an
+// import names, and with it any package's export data.
+func goFilesOnly(overlay map[string][]byte) bool {
+	for name := range overlay {
+		if filepath.Ext(name) != ".go" {
+			return false
+		}
+	}
+	return true
+}
+
+// exportBeyond gives the packages of order (a graph go list described
+// under cfg's overlay, without export data) the export data of the
+// files on disk wherever the overlay cannot reach: a package none of
+// whose directories holds an overlaid file and none of whose imports the
+// overlay reaches is the package go list describes without the overlay,
+// and its export data, built from the disk, describes it. Those are
+// asked of go list by import path, without the overlay; the others, test
+// variants among them (go list names them by path only as part of their
+// test), keep no export file and come from source, as with
+// packages.LoadAllSyntax. So does a package whose listing differs in its
+// files, or which go list could not build.
+func exportBeyond(cfg *packages.Config, order []*packages.Package) error {
+	overlaid := make(map[string]bool) // directories
+	for name := range cfg.Overlay {
+		overlaid[filepath.Dir(name)] = true
+	}
+	reached := make(map[*packages.Package]bool, len(order))
+	want := make(map[string]*packages.Package)
+	for _, p := range order {
+		files := slices.Concat(p.GoFiles, p.CompiledGoFiles, p.OtherFiles, p.IgnoredFiles)
+		r := len(files) == 0
+		for _, f := range files {
+			r = r || overlaid[filepath.Dir(f)]
+		}
+		for _, imp := range p.Imports {
+			r = r || reached[imp]
+		}
+		reached[p] = r
+		if !r && p.ID == p.PkgPath && p.PkgPath != "unsafe" {
+			want[p.PkgPath] = p
+		}
+	}
+	if len(want) == 0 {
+		return nil
+	}
+	disk := *cfg
+	disk.Overlay, disk.Tests = nil, false
+	disk.Mode = packages.NeedName | packages.NeedFiles | packages.NeedCompiledGoFiles | packages.NeedExportFile
+	listed, err := packages.Load(&disk, slices.Sorted(maps.Keys(want))...)
+	if err != nil {
+		return err
+	}
+	for _, q := range listed {
+		p := want[q.PkgPath]
+		if p == nil || q.ExportFile == "" || len(q.Errors) > 0 ||
+			!slices.Equal(p.GoFiles, q.GoFiles) || !slices.Equal(p.CompiledGoFiles, q.CompiledGoFiles) {
+			continue
+		}
+		p.ExportFile = q.ExportFile
+	}
+	return nil
 }
 
 // loader type-checks a graph that go list described, each package from
@@ -401,10 +480,13 @@ func (l *loader) parseFile(name string) (*ast.File, error) {
 		return pf.file, pf.err
 	}
 	defer close(pf.ready)
-	src, err := os.ReadFile(name)
-	if err != nil {
-		pf.err = err
-		return nil, err
+	src, ok := l.cfg.Overlay[name]
+	if !ok {
+		var err error
+		if src, err = os.ReadFile(name); err != nil {
+			pf.err = err
+			return nil, err
+		}
 	}
 	parse := l.cfg.ParseFile
 	if parse == nil {

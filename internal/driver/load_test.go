@@ -25,33 +25,10 @@ import (
 // diagnostic, fix and fact must be the same, and the second load must
 // really have taken the package without facts from export data.
 func TestLoadForFactsSameOutcome(t *testing.T) {
-	t.Setenv("GOWORK", "off")
-	t.Setenv("GOFLAGS", "-mod=mod")
-	t.Setenv("GOPROXY", "off")
-	dir, err := filepath.Abs(filepath.Join("testdata", "loadfacts"))
-	if err != nil {
-		t.Fatal(err)
-	}
+	dir := loadFactsModule(t)
 	patterns := []string{"./app", "./combin"}
-	run := func(scan driver.FactScan) ([]string, map[string]*packages.Package) {
-		cfg := &packages.Config{Dir: dir, Tests: true}
-		pkgs, err := driver.LoadForFacts(cfg, patterns, scan)
-		if err != nil {
-			t.Fatal(err)
-		}
-		if n := packages.PrintErrors(pkgs); n > 0 {
-			t.Fatalf("%d load errors", n)
-		}
-		byID := make(map[string]*packages.Package)
-		packages.Visit(pkgs, nil, func(p *packages.Package) { byID[p.ID] = p })
-		g, err := checker.Analyze([]*analysis.Analyzer{analyzer.Analyzer}, pkgs, nil)
-		if err != nil {
-			t.Fatal(err)
-		}
-		return driver.Outcome(g), byID
-	}
-	source, _ := run(nil)
-	loaded, byID := run(analyzer.MayCarryFacts)
+	source, _ := loadOutcome(t, dir, patterns, nil, nil)
+	loaded, byID := loadOutcome(t, dir, patterns, nil, analyzer.MayCarryFacts)
 	if !slices.Equal(source, loaded) {
 		t.Errorf("outcomes differ\nevery dependency from source:\n%s\nas the command loads:\n%s",
 			strings.Join(source, "\n"), strings.Join(loaded, "\n"))
@@ -107,12 +84,120 @@ func TestLoadForFactsSameOutcome(t *testing.T) {
 		"example.com/loadfacts/stats [example.com/loadfacts/combin.test]": true,
 		"example.com/loadfacts/app":                                       true,
 	} {
-		p := byID[id]
-		switch {
-		case p == nil:
-			t.Errorf("%s was not loaded", id)
-		case (p.Syntax != nil) != fromSource:
-			t.Errorf("%s: loaded from source: %v, want %v", id, p.Syntax != nil, fromSource)
+		checkFromSource(t, byID, id, fromSource)
+	}
+}
+
+// TestLoadForFactsOverlaySameOutcome loads the module of
+// TestLoadForFactsSameOutcome under overlays as the later rounds of -fix
+// make them: every dependency from source (packages.LoadAllSyntax, what
+// go/packages does under any overlay), and as the command loads, where
+// only what the overlay reaches comes from source. The overlays give a
+// dependency a range guard and a new import (fmt, which the files on disk
+// do not import), and turn a dependency whose export data on disk carries
+// no fact into one that carries a factorial: the outcomes must be the
+// same, and must be those of the overlaid text, not of the disk's.
+func TestLoadForFactsOverlaySameOutcome(t *testing.T) {
+	dir := loadFactsModule(t)
+	patterns := []string{"./app"}
+	onDisk, _ := loadOutcome(t, dir, patterns, nil, analyzer.MayCarryFacts)
+	// Each overlay is the file on disk with one edit.
+	edited := func(file, old, new string) map[string][]byte {
+		name := filepath.Join(dir, file)
+		text, err := os.ReadFile(name)
+		if err != nil {
+			t.Fatal(err)
 		}
+		if !strings.Contains(string(text), old) {
+			t.Fatalf("%s does not hold %q", file, old)
+		}
+		return map[string][]byte{name: []byte(strings.Replace(string(text), old, new, 1))}
+	}
+	for _, c := range []struct {
+		name       string
+		overlay    map[string][]byte
+		fromSource map[string]bool
+	}{
+		{"a guard and a new import in a dependency",
+			edited("combin/combin.go", "func Factorial(n int) int {\n", `import "fmt"
+
+func Factorial(n int) int {
+	if n >= 21 {
+		panic(fmt.Sprintf("Factorial: n = %d overflows int (largest is 20)", n))
+	}
+`), map[string]bool{
+				"example.com/loadfacts/combin": true, "example.com/loadfacts/stats": true, "example.com/loadfacts/app": true,
+				"example.com/loadfacts/plain": false, "fmt": false,
+			}},
+		// Search now returns x!, the product 2·3·…·x (its definition).
+		{"a dependency without facts on disk gains one",
+			edited("plain/plain.go", "\treturn lo\n", "\tf := 1\n\tfor i := 2; i <= x; i++ {\n\t\tf *= i\n\t}\n\treturn f\n"), map[string]bool{
+				"example.com/loadfacts/plain": true, "example.com/loadfacts/app": true,
+				"example.com/loadfacts/ledger": false,
+			}},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			source, _ := loadOutcome(t, dir, patterns, c.overlay, nil)
+			loaded, byID := loadOutcome(t, dir, patterns, c.overlay, analyzer.MayCarryFacts)
+			if !slices.Equal(source, loaded) {
+				t.Errorf("outcomes differ\nevery dependency from source:\n%s\nas the command loads:\n%s",
+					strings.Join(source, "\n"), strings.Join(loaded, "\n"))
+			}
+			if slices.Equal(loaded, onDisk) {
+				t.Errorf("the outcome under the overlay is the one of the files on disk:\n%s", strings.Join(loaded, "\n"))
+			}
+			for id, fromSource := range c.fromSource {
+				checkFromSource(t, byID, id, fromSource)
+			}
+		})
+	}
+}
+
+// loadOutcome loads patterns from dir with tests, under overlay, every
+// dependency from source (scan nil) or as the command loads them, runs
+// the analyzer and returns its outcome and the packages by ID.
+func loadOutcome(t *testing.T, dir string, patterns []string, overlay map[string][]byte, scan driver.FactScan) ([]string, map[string]*packages.Package) {
+	t.Helper()
+	cfg := &packages.Config{Dir: dir, Tests: true, Overlay: overlay}
+	pkgs, err := driver.LoadForFacts(cfg, patterns, scan)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n := packages.PrintErrors(pkgs); n > 0 {
+		t.Fatalf("%d load errors", n)
+	}
+	byID := make(map[string]*packages.Package)
+	packages.Visit(pkgs, nil, func(p *packages.Package) { byID[p.ID] = p })
+	g, err := checker.Analyze([]*analysis.Analyzer{analyzer.Analyzer}, pkgs, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return driver.Outcome(g), byID
+}
+
+// loadFactsModule returns the directory of the module the load tests
+// share, with the go command kept to it (no workspace, no proxy).
+func loadFactsModule(t *testing.T) string {
+	t.Helper()
+	t.Setenv("GOWORK", "off")
+	t.Setenv("GOFLAGS", "-mod=mod")
+	t.Setenv("GOPROXY", "off")
+	dir, err := filepath.Abs(filepath.Join("testdata", "loadfacts"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return dir
+}
+
+// checkFromSource checks that package id was loaded, from source or
+// from export data as fromSource says.
+func checkFromSource(t *testing.T, byID map[string]*packages.Package, id string, fromSource bool) {
+	t.Helper()
+	p := byID[id]
+	switch {
+	case p == nil:
+		t.Errorf("%s was not loaded", id)
+	case (p.Syntax != nil) != fromSource:
+		t.Errorf("%s: loaded from source: %v, want %v", id, p.Syntax != nil, fromSource)
 	}
 }
