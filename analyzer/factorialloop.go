@@ -93,6 +93,14 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		if m.Shape == fixes.ShapeNone && (al.kind == kindFactorial || al.kind == kindDouble) {
 			fc.loopGuard(m, al, t, al.top, m.FirstBad)
 		}
+		if m.Shape == fixes.ShapeFactorial && al.shape.whileLike && m.Param == al.shape.iv &&
+			!assigned.Before(fc.c.pass.TypesInfo, funcBody(fc.node), m.Param, al.shape.stmt.Pos()) {
+			// The loop counts the parameter itself down from the value
+			// it was called with (for n > 1 { f *= n; n-- }): the guard
+			// at the entry tests the loop's first factor, although the
+			// loop assigns the parameter.
+			m.EntryGuard = true
+		}
 	}
 	return m
 }

@@ -189,7 +189,8 @@ func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of pa
 }
 
 // CountDown counts its parameter down in the loop's post statement, with
-// no init statement: the loop still starts from the argument.
+// no init statement: the loop still starts from the argument, which a
+// guard at the entry tests.
 func CountDown(n int64) int64 { // want CountDown:`factorial of parameter 0, breaks from 21`
 	f := int64(1)
 	for ; n > 1; n-- { // want `factorial of n in int64 wraps for n ≥ 21`
