@@ -53,7 +53,12 @@ type accLoop struct {
 	// n+1 to 3*n: no expression in the source counts them, so count is
 	// nil and only span describes them.
 	span *linear
-	x    ast.Expr // rising: the base x
+	// from+fromOff is the smallest factor of a product between two ends
+	// that are variables of their own, lo·(lo+1)·…·hi: neither a count
+	// nor a span describes it, and it is top! where from ≤ 2.
+	from    ast.Expr
+	fromOff int64
+	x       ast.Expr // rising: the base x
 	// exits are where the loop can end before its test stops it, or
 	// skip its update (see leavesEarly); early is set while any of them
 	// may cut the product short.
@@ -271,7 +276,7 @@ func (fc *fnCtx) classify(al *accLoop) bool {
 			return true
 		}
 		if lo != nil || loOff+rest.C > 2 {
-			return fc.classifyPartial(al, hi, hiOff+rest.C)
+			return fc.classifyPartial(al, hi, hiOff+rest.C, lo, loOff+rest.C)
 		}
 		al.top, al.topOff = hi, hiOff+rest.C
 		al.kind = kindFactorial
@@ -321,8 +326,9 @@ func (fc *fnCtx) risingFromConst(al *accLoop, start int64) bool {
 }
 
 // classifyPartial handles i+c starting above 2 or at a variable: the
-// product of the factors down from the largest is a falling factorial.
-func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
+// product of the factors down from the largest is a falling factorial;
+// lo+loOff is the smallest factor.
+func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64, lo ast.Expr, loOff int64) bool {
 	sh := al.shape
 	if hi == nil || (sh.step != 1 && sh.step != -1) {
 		return false
@@ -335,7 +341,10 @@ func (fc *fnCtx) classifyPartial(al *accLoop, hi ast.Expr, hiOff int64) bool {
 		al.count, al.coff, ok = fc.spanCount(sh)
 		if !ok && al.div == nil {
 			al.span = fc.scaledSpan(sh)
-			return al.span != nil
+			if al.span == nil && lo != nil {
+				al.from, al.fromOff = lo, loOff
+			}
+			return al.span != nil || al.from != nil
 		}
 		// A constant count is fine for a product; a binomial loop's
 		// messages name its k.

@@ -36,7 +36,8 @@ func testdata(t *testing.T) string {
 var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
-	"labtables", "raffle",
+	"labtables", "raffle", "pickroute", "linkbudget", "gameodds", "clinicq", "germtrial",
+	"linebroaden",
 }
 
 // logSpacePackages are the category packages beside the analyzer of the

@@ -39,6 +39,7 @@ func (c *checker) entryOf(n ast.Node) map[types.Object]ranges.Interval {
 	if !ok {
 		if lit, ok := n.(*ast.FuncLit); ok {
 			c.capturedEntry(lit, entry)
+			c.closureSiteEntry(lit, entry)
 		}
 		return entry
 	}
@@ -214,12 +215,7 @@ func (c *checker) enclosingFunc(n ast.Node) ast.Node {
 //
 //	for n := 3; n <= 6; n++ { t.Run(…, func(t *testing.T) { … n … }) }
 func (c *checker) capturedEntry(lit *ast.FuncLit, entry map[types.Object]ranges.Interval) {
-	var outer ast.Node
-	for _, f := range c.allFuncs {
-		if f != lit && f.Pos() <= lit.Pos() && lit.End() <= f.End() && (outer == nil || outer.Pos() <= f.Pos()) {
-			outer = f
-		}
-	}
+	outer := c.enclosingFuncOutside(lit)
 	if outer == nil || funcBody(outer) == nil {
 		return
 	}
@@ -241,6 +237,110 @@ func (c *checker) capturedEntry(lit *ast.FuncLit, entry map[types.Object]ranges.
 		entry[v] = c.ctx(outer).entryRange(v, lit)
 		return true
 	})
+}
+
+// closureSiteEntry adds to entry the ranges of a closure's integer
+// parameters joined over its calls, where the closure is bound once to a
+// local variable that is only ever called, directly in the function that
+// binds it: those calls are all there can be, as for an unexported
+// function (callSiteRange), so
+//
+//	f := func(n int) int { … n! … }
+//	for n := 0; n < 10; n++ { t[n] = f(2*n) / (f(n+1) * f(n)) }
+//
+// enters f with n in [0, 18].
+func (c *checker) closureSiteEntry(lit *ast.FuncLit, entry map[types.Object]ranges.Interval) {
+	outer := c.enclosingFuncOutside(lit)
+	sig, _ := c.pass.TypesInfo.TypeOf(lit).(*types.Signature)
+	if outer == nil || funcBody(outer) == nil || sig == nil || sig.Variadic() {
+		return
+	}
+	body := funcBody(outer)
+	v := c.boundTo(body, lit)
+	if v == nil || !c.setOnce(body, v) {
+		return
+	}
+	var calls []*ast.CallExpr
+	called := make(map[*ast.Ident]bool)
+	ast.Inspect(body, func(n ast.Node) bool {
+		if call, ok := n.(*ast.CallExpr); ok {
+			if id, ok := ast.Unparen(call.Fun).(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v {
+				called[id] = true
+				calls = append(calls, call)
+			}
+		}
+		return true
+	})
+	escapes := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && c.pass.TypesInfo.Uses[id] == v && !called[id] {
+			escapes = true
+		}
+		return !escapes
+	})
+	if escapes || len(calls) == 0 {
+		return
+	}
+	fc := c.ctx(outer)
+	for i := 0; i < sig.Params().Len(); i++ {
+		p := sig.Params().At(i)
+		if t, ok := c.numOf(p.Type()); !ok || t.Float {
+			continue
+		}
+		join := ranges.Empty()
+		for _, call := range calls {
+			if c.enclosingFunc(call) != outer || i >= len(call.Args) {
+				return
+			}
+			join = join.Join(fc.rangeOf(call.Args[i]))
+		}
+		if old, ok := entry[p]; ok {
+			join = join.Meet(old)
+		}
+		entry[p] = join
+	}
+}
+
+// enclosingFuncOutside returns the innermost function holding lit other
+// than lit itself.
+func (c *checker) enclosingFuncOutside(lit *ast.FuncLit) ast.Node {
+	var outer ast.Node
+	for _, f := range c.allFuncs {
+		if f != ast.Node(lit) && f.Pos() <= lit.Pos() && lit.End() <= f.End() && (outer == nil || outer.Pos() <= f.Pos()) {
+			outer = f
+		}
+	}
+	return outer
+}
+
+// boundTo returns the local variable that body binds lit to where it
+// declares it (f := func…, var f = func…), or nil.
+func (c *checker) boundTo(body *ast.BlockStmt, lit *ast.FuncLit) *types.Var {
+	var v *types.Var
+	ast.Inspect(body, func(n ast.Node) bool {
+		switch n := n.(type) {
+		case *ast.AssignStmt:
+			if n.Tok == token.DEFINE && len(n.Lhs) == len(n.Rhs) {
+				for i, r := range n.Rhs {
+					if ast.Unparen(r) == ast.Expr(lit) {
+						if id, ok := n.Lhs[i].(*ast.Ident); ok {
+							v, _ = c.pass.TypesInfo.Defs[id].(*types.Var)
+						}
+					}
+				}
+			}
+		case *ast.ValueSpec:
+			if len(n.Names) == len(n.Values) {
+				for i, r := range n.Values {
+					if ast.Unparen(r) == ast.Expr(lit) {
+						v, _ = c.pass.TypesInfo.Defs[n.Names[i]].(*types.Var)
+					}
+				}
+			}
+		}
+		return v == nil
+	})
+	return v
 }
 
 // setOnce reports whether v is set only by its declaration, or, for a

@@ -93,6 +93,14 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		if m.Shape == fixes.ShapeNone && (al.kind == kindFactorial || al.kind == kindDouble) {
 			fc.loopGuard(m, al, t, al.top, m.FirstBad)
 		}
+		if m.Shape == fixes.ShapeFactorial && al.shape.whileLike && m.Param == al.shape.iv &&
+			!assigned.Before(fc.c.pass.TypesInfo, funcBody(fc.node), m.Param, al.shape.stmt.Pos()) {
+			// The loop counts the parameter itself down from the value
+			// it was called with (for n > 1 { f *= n; n-- }): the guard
+			// at the entry tests the loop's first factor, although the
+			// loop assigns the parameter.
+			m.EntryGuard = true
+		}
 	}
 	return m
 }
@@ -268,6 +276,10 @@ func (fc *fnCtx) returnsProduct(al *accLoop) bool {
 // The product grows with both, so the largest n and k decide safety and
 // the smallest decide certainty.
 func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
+	if al.from != nil {
+		fc.checkRangeProduct(al, t)
+		return
+	}
 	if al.span != nil {
 		// Only the joint reading applies: no expression counts the
 		// factors for the bounds of the top and the count to judge.
@@ -295,7 +307,11 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		return
 	}
 	m := fc.bareLoopMatch(al, t)
-	if n := fc.fallingBase(al); n != nil {
+	if !t.Float && !fc.productReturned(al) {
+		// The integer helper panics where the product leaves t, but a
+		// product divided or reduced afterwards (n!/(n−k)! over k!, a
+		// binomial) may give a result that fits: leave it as written.
+	} else if n := fc.fallingBase(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
 	} else if n, k := fc.fallingSpan(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, k}
@@ -304,6 +320,27 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	}
 	fc.noteCountSign(m)
 	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: m})
+}
+
+// checkRangeProduct reports lo·(lo+1)·…·hi formed by a loop whose ends
+// are variables of their own, for v := lo; v <= hi; v++ { p *= v }:
+// where lo can be 1 or 2 the product is hi!, so it breaks from the
+// factorial's first bad hi on. A smallest factor that cannot be 1 or 2
+// leaves it alone: above, no count bounds the product; below, a factor
+// is 0 or every factor negative.
+func (fc *fnCtx) checkRangeProduct(al *accLoop, t numType) {
+	lo := shift(fc.rangeOf(al.from), al.fromOff)
+	hi := shift(fc.rangeOf(al.top), al.topOff)
+	first := thresholds.Factorial(t.Num).FirstBad
+	if lo.IsEmpty() || hi.IsEmpty() || lo.Lo > 2 || lo.Hi < 1 || hi.Hi < first {
+		return
+	}
+	clause, definite := verdict(shownName(al.top), fc.topRange(al), first-al.topOff)
+	definite = definite && lo.Hi <= 2 && lo.Lo >= 1
+	loName, hiName := plus(src(al.from), al.fromOff), plus(src(al.top), al.topOff)
+	msg := fmt.Sprintf("product of the factors from %s up to %s in %s %s: with %s at 1 or 2 it is %s!, which %s for %s ≥ %d%s",
+		loName, hiName, t.typeName(), verb(t), loName, hiName, verb(t), hiName, first, clause)
+	fc.reportLoop(al, finding{node: al.shape.stmt, cat: catLoop, definite: definite, msg: msg, match: fc.bareLoopMatch(al, t)})
 }
 
 // fallingAffine judges a falling factorial whose largest factor and

@@ -33,7 +33,7 @@ type loopShape struct {
 func (fc *fnCtx) shapeOf(s ast.Stmt) *loopShape {
 	switch s := s.(type) {
 	case *ast.ForStmt:
-		if s.Init == nil && s.Post == nil {
+		if s.Init == nil {
 			return fc.whileShape(s)
 		}
 		return fc.forShape(s)
@@ -87,7 +87,8 @@ func (fc *fnCtx) forShape(s *ast.ForStmt) *loopShape {
 	return sh
 }
 
-// whileShape handles `for n > b { ...; n-- }`.
+// whileShape handles `for n > b { ...; n-- }` and `for ; n > b; n-- {`,
+// both counting down the variable the loop found.
 func (fc *fnCtx) whileShape(s *ast.ForStmt) *loopShape {
 	cond, ok := ast.Unparen(s.Cond).(*ast.BinaryExpr)
 	if !ok {
@@ -98,7 +99,11 @@ func (fc *fnCtx) whileShape(s *ast.ForStmt) *loopShape {
 		return nil
 	}
 	var step int64
-	for _, st := range s.Body.List {
+	steps := s.Body.List
+	if s.Post != nil {
+		steps = []ast.Stmt{s.Post}
+	}
+	for _, st := range steps {
 		if d := fc.stepOf(st, iv); d != 0 {
 			step = d
 		}

@@ -8,6 +8,8 @@ import (
 	"math"
 	"math/big"
 
+	"golang.org/x/tools/go/analysis"
+
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
@@ -21,7 +23,7 @@ const modelMaxNodes = vm.DefaultMaxNodes
 
 // evalModel runs the value model over the function.
 func (fc *fnCtx) evalModel() *vm.Result {
-	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, MaxNodes: modelMaxNodes})
+	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, LogGamma: fc.c.isLgammaCall, MaxNodes: modelMaxNodes})
 	if res.Capped && debug {
 		fmt.Fprintf(debugOut, "overfact: %s: value model stopped at %d syntax nodes; the rest of the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), modelMaxNodes)
 	}
@@ -699,13 +701,15 @@ func (fc *fnCtx) modelRoots(res *vm.Result) []ast.Expr {
 	return out
 }
 
-// modelPMF reports a binomial probability C(n, k)·p^k·(1−p)^(n−k) whose
-// coefficient is formed in a float type on its own, by a loop or as
-// exp of log-gamma differences: past the central limit it is +Inf, and
-// the product +Inf or NaN, although the probability is at most 1.
+// modelPMF reports a binomial probability C(n, k)·p^k·(1−p)^(n−k), or
+// a negative binomial one C(f+s−1, f)·p^s·(1−p)^f, whose coefficient is
+// formed in a float type on its own, by a loop or as exp of log-gamma
+// differences: past the central limit it is +Inf, and the product +Inf
+// or NaN (+Inf times powers that underflow to 0), although the
+// probability is at most 1.
 func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
-	f := vm.Recognise(res.Values[e])
-	if f.Kind != vm.BinomialPMF || fc.c.reportedAt(e.Pos()) {
+	f := vm.RecogniseAny(res.Values[e])
+	if f.Kind != vm.BinomialPMF && f.Kind != vm.NegBinomialPMF || fc.c.reportedAt(e.Pos()) {
 		return
 	}
 	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(e))
@@ -731,11 +735,33 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 			}
 		}
 	}
-	nv, ok := plainVar(f.Args[0])
-	if !ok {
-		return
+	// The coefficient's top n, its range, and the count at which C(n, ·)
+	// is central.
+	var top, half string
+	var n ranges.Interval
+	kind := "binomial"
+	switch f.Kind {
+	case vm.BinomialPMF:
+		nv, ok := plainVar(f.Args[0])
+		if !ok {
+			return
+		}
+		n = fc.symRange(res, nv, e)
+		top, half = nv.Name(), fmt.Sprintf("%s = %s/2", f.Args[1], nv.Name())
+	case vm.NegBinomialPMF:
+		fv, okF := plainVar(f.Args[0])
+		sv, okS := plainVar(f.Args[1])
+		if !okF || !okS {
+			return
+		}
+		fr, sr := fc.symRange(res, fv, e), fc.symRange(res, sv, e)
+		if fr.IsEmpty() || sr.IsEmpty() {
+			return
+		}
+		n = shift(fr.Add(sr), -1)
+		top = fmt.Sprintf("%s + %s - 1", fv.Name(), sv.Name())
+		half, kind = fmt.Sprintf("%s = %s - 1", fv.Name(), sv.Name()), "negative binomial"
 	}
-	n := fc.symRange(res, nv, e)
 	central, reach := thresholds.CentralBinomial(t.Num), "fits"
 	if fc.expFormed(coef) {
 		central, reach = thresholds.CentralBinomialExp(t.Num), "math.Exp reaches"
@@ -743,14 +769,15 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if n.IsEmpty() || n.Hi < central.FirstBad {
 		return
 	}
-	clause, definite := verdict(nv.Name(), n, central.FirstBad)
-	msg := fmt.Sprintf("computes the binomial probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that %s), after which the product is +Inf or NaN although the probability is at most 1",
-		f, t.typeName(), f.Args[0], f.Args[1], verb(t), nv.Name(), central.FirstBad, f.Args[1], nv.Name(), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), reach)
+	clause, definite := verdict(top, n, central.FirstBad)
+	coefArgs := vm.Recognise(res.Values[coef]).Args
+	msg := fmt.Sprintf("computes the %s probability %s in %s with C(%s, %s) formed on its own: it %s for %s ≥ %d at %s (C(%d, %d) ≈ %s is the largest central one that %s), after which the product is +Inf or NaN although the probability is at most 1",
+		kind, f, t.typeName(), coefArgs[0], coefArgs[1], verb(t), top, central.FirstBad, half, central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), reach)
 	m := fc.formedPMFMatch(res, e, f)
-	if m == nil {
+	if m == nil && f.Kind == vm.BinomialPMF {
 		m = fc.loopPMFMatch(res, e, f, coef)
 	}
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: m})
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: m, related: fc.coefDef(coef)})
 }
 
 // loopPMFMatch offers the helper call for a binomial probability whose
@@ -808,6 +835,32 @@ func (fc *fnCtx) pmfCoefficient(res *vm.Result, e ast.Expr) ast.Expr {
 		return coef == nil
 	})
 	return coef
+}
+
+// coefDef points at the function of this package whose call forms the
+// coefficient coef (a log-gamma wrapper, a function with a value fact),
+// directly or in the one definition of the local coef names; nil when
+// the coefficient calls none.
+func (fc *fnCtx) coefDef(coef ast.Expr) []analysis.RelatedInformation {
+	x := fc.stripConv(coef)
+	if id, ok := x.(*ast.Ident); ok {
+		if d := fc.singleDef(id); d != nil {
+			x = d
+		}
+	}
+	var fn *types.Func
+	ast.Inspect(x, func(n ast.Node) bool {
+		if call, ok := n.(*ast.CallExpr); ok && fn == nil {
+			if g := fc.c.calleeOf(call); g != nil && g.Pkg() == fc.c.pass.Pkg {
+				fn = g
+			}
+		}
+		return fn == nil
+	})
+	if fn == nil {
+		return nil
+	}
+	return fc.c.relatedDef(fn.Name(), fn.Pos())
 }
 
 // expFormed reports whether x is math.Exp of something, directly or as
@@ -1026,7 +1079,7 @@ func (fc *fnCtx) modelWorth() bool {
 			open = open || !fc.c.reportedAt(n.Pos())
 		case *ast.CallExpr:
 			switch {
-			case fc.c.isMathFunc(n, "Lgamma"):
+			case fc.c.isMathFunc(n, "Lgamma"), fc.c.isLgammaCall(n):
 				lgamma = true
 			case fc.c.isMathFunc(n, "Pow"):
 				pows++

@@ -7,6 +7,7 @@ import (
 	"go/types"
 
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // checkLoopMultinomial reports a multinomial coefficient accumulated in
@@ -105,10 +106,17 @@ func (fc *fnCtx) multinomialLogMatch(root ast.Expr, num *ast.CallExpr, total ast
 // partsLoop returns the last loop before pos whose body adds a part to
 // sum (sum += x) and multiplies the divisor by the factorial of the same
 // part (den *= fact(x), with the factorial of num's kind), and assigns
-// neither otherwise; nil when there is none.
+// neither otherwise; nil when there is none. The two updates may also
+// sit in two loops over the same collection, each assigning only its
+// own variable, with the part the element each loop ranges over:
+//
+//	for _, a := range parts { sum += a }
+//	for _, a := range parts { den *= fact(a) }
+//
+// then it returns the loop of the divisor.
 func (fc *fnCtx) partsLoop(sum, den types.Object, pos token.Pos) ast.Stmt {
-	c := fc.c
-	var found ast.Stmt
+	var found, sumLoop, denLoop ast.Stmt
+	var sumOver, denOver string
 	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
 		switch n.(type) {
 		case *ast.FuncLit:
@@ -120,55 +128,107 @@ func (fc *fnCtx) partsLoop(sum, den types.Object, pos token.Pos) ast.Stmt {
 		if n.End() > pos {
 			return false
 		}
-		var body *ast.BlockStmt
-		switch l := n.(type) {
-		case *ast.ForStmt:
-			body = l.Body
-		case *ast.RangeStmt:
-			body = l.Body
-		}
-		var added, multiplied []string
-		other := false
-		ast.Inspect(body, func(m ast.Node) bool {
-			switch s := m.(type) {
-			case *ast.FuncLit:
-				return false
-			case *ast.AssignStmt:
-				for i, l := range s.Lhs {
-					obj := c.objOf(l)
-					if obj != sum && obj != den {
-						continue
-					}
-					switch {
-					case obj == sum && s.Tok == token.ADD_ASSIGN && len(s.Rhs) == len(s.Lhs):
-						added = append(added, src(fc.stripConv(s.Rhs[i])))
-					case obj == den && s.Tok == token.MUL_ASSIGN && len(s.Rhs) == len(s.Lhs):
-						call, ok := fc.stripConv(s.Rhs[i]).(*ast.CallExpr)
-						if !ok {
-							other = true
-							continue
-						}
-						ff := c.factOf(c.calleeOf(call))
-						if ff == nil || kindOfName(ff.Kind) != kindFactorial || ff.Offset != 0 || ff.Param >= len(call.Args) {
-							other = true
-							continue
-						}
-						multiplied = append(multiplied, src(fc.stripConv(call.Args[ff.Param])))
-					default:
-						other = true
-					}
-				}
-			case *ast.IncDecStmt:
-				if obj := c.objOf(s.X); obj == sum || obj == den {
-					other = true
-				}
-			}
-			return true
-		})
-		if !other && len(added) == 1 && len(multiplied) == 1 && added[0] == multiplied[0] {
+		u := fc.partsUpdates(n.(ast.Stmt), sum, den)
+		switch {
+		case u.other:
+		case len(u.added) == 1 && len(u.multiplied) == 1 && u.added[0] == u.multiplied[0]:
 			found = n.(ast.Stmt)
+		case len(u.added) == 1 && len(u.multiplied) == 0 && u.added[0] == u.elem && u.over != "":
+			sumLoop, sumOver = n.(ast.Stmt), u.over
+		case len(u.added) == 0 && len(u.multiplied) == 1 && u.multiplied[0] == u.elem && u.over != "":
+			denLoop, denOver = n.(ast.Stmt), u.over
 		}
 		return true
 	})
+	if found == nil && sumLoop != nil && denLoop != nil && sumOver == denOver && !fc.collectionAssigned(sumLoop, denLoop) {
+		return denLoop
+	}
 	return found
+}
+
+// partUpdates are the updates of a parts loop's sum and divisor: the
+// parts added to the sum and the arguments of the factorials multiplied
+// into the divisor, as written, whether either is assigned otherwise,
+// and for a range loop over a variable, that variable and the element.
+type partUpdates struct {
+	added, multiplied []string
+	other             bool
+	over, elem        string
+}
+
+func (fc *fnCtx) partsUpdates(loop ast.Stmt, sum, den types.Object) partUpdates {
+	c := fc.c
+	var u partUpdates
+	var body *ast.BlockStmt
+	switch l := loop.(type) {
+	case *ast.ForStmt:
+		body = l.Body
+	case *ast.RangeStmt:
+		body = l.Body
+		if id, ok := ast.Unparen(l.X).(*ast.Ident); ok && l.Value != nil && c.objOf(id) != nil {
+			u.over, u.elem = id.Name, src(l.Value)
+		}
+	}
+	ast.Inspect(body, func(m ast.Node) bool {
+		switch s := m.(type) {
+		case *ast.FuncLit:
+			return false
+		case *ast.AssignStmt:
+			for i, l := range s.Lhs {
+				obj := c.objOf(l)
+				if obj != sum && obj != den {
+					continue
+				}
+				switch {
+				case obj == sum && s.Tok == token.ADD_ASSIGN && len(s.Rhs) == len(s.Lhs):
+					u.added = append(u.added, src(fc.stripConv(s.Rhs[i])))
+				case obj == den && s.Tok == token.MUL_ASSIGN && len(s.Rhs) == len(s.Lhs):
+					call, ok := fc.stripConv(s.Rhs[i]).(*ast.CallExpr)
+					if !ok {
+						u.other = true
+						continue
+					}
+					ff := c.factOf(c.calleeOf(call))
+					if ff == nil || kindOfName(ff.Kind) != kindFactorial || ff.Offset != 0 || ff.Param >= len(call.Args) {
+						u.other = true
+						continue
+					}
+					u.multiplied = append(u.multiplied, src(fc.stripConv(call.Args[ff.Param])))
+				default:
+					u.other = true
+				}
+			}
+		case *ast.IncDecStmt:
+			if obj := c.objOf(s.X); obj == sum || obj == den {
+				u.other = true
+			}
+		}
+		return true
+	})
+	return u
+}
+
+// collectionAssigned reports whether the variable the two range loops
+// run over may change after its definition (a new slice, its address
+// taken) or an element of it is stored to: the loops might then see
+// different parts.
+func (fc *fnCtx) collectionAssigned(a, b ast.Stmt) bool {
+	info := fc.c.pass.TypesInfo
+	for _, l := range []ast.Stmt{a, b} {
+		obj := fc.c.objOf(ast.Unparen(l.(*ast.RangeStmt).X))
+		changed := false
+		assigned.EachTarget(funcBody(fc.node), nil, func(target ast.Expr, at ast.Node) bool {
+			if ix, ok := ast.Unparen(target).(*ast.IndexExpr); ok {
+				target = ix.X
+			}
+			if id, ok := ast.Unparen(target).(*ast.Ident); ok && info.Uses[id] == obj {
+				changed = true
+			}
+			return !changed
+		})
+		if changed {
+			return true
+		}
+	}
+	return false
 }

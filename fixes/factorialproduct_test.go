@@ -26,6 +26,8 @@ func init() {
 		// product of float factorials: past 170 parts in all, fact(total)
 		// is +Inf while the coefficient may fit.
 		diffCase{pkg: "fixparts", fn: "Boardings", loops: []string{"a := 0; a <= 300; a += 37", "b := 0; b <= 200; b += 41", "c := 0; c <= 60; c += 13"}, args: "float64(a), float64(b), float64(c)", typ: "float64", ref: refMultinomial},
+		// The same with the total and the divisor each in a loop of its own.
+		diffCase{pkg: "fixparts", fn: "BoardingsTwoPass", loops: []string{"a := 0; a <= 300; a += 37", "b := 0; b <= 200; b += 41", "c := 0; c <= 60; c += 13"}, args: "float64(a), float64(b), float64(c)", typ: "float64", ref: refMultinomial},
 		diffCase{pkg: "fixbessel", fn: "Beam", loops: []string{"n := 0; n <= 3; n++", "xi := 1; xi <= 20; xi += 3", "terms := 20; terms <= 300; terms += 70"}, args: "n, float64(xi)/2, terms", typ: "float64", ref: refBesselSeries},
 	)
 }

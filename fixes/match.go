@@ -144,7 +144,8 @@ type Match struct {
 	// EntryGuard, for ShapeFactorial, tells that the analyzer's range
 	// analysis shows the guard on Param's value at the function's entry
 	// exact although the function assigns Param later (a clamp before
-	// the product): it fires exactly where the product leaves the type.
+	// the product, or the loop counting Param itself down from its
+	// entry value): it fires exactly where the product leaves the type.
 	EntryGuard bool
 }
 

@@ -54,9 +54,7 @@ func (b *builder) poissonSum() error {
 	if err != nil {
 		return err
 	}
-	b.replace(node.Pos(), node.End(), text)
-	b.foldedScale(product, accRead)
-	return nil
+	return b.foldScaled(node, text, x, product, accRead, true)
 }
 
 // foldPoissonTerm rewrites term, x^k/k! in a series builder's loop, as
@@ -79,16 +77,40 @@ func (b *builder) foldPoissonTerm(term, x, k ast.Expr) (bool, error) {
 	if err != nil {
 		return false, err
 	}
-	b.replace(term.Pos(), term.End(), text)
-	b.foldedScale(product, accRead)
-	return true, nil
+	return true, b.foldScaled(term, text, x, product, accRead, false)
 }
 
-// foldedScale replaces the product e^−λ·sum by the sum and words the
-// fix.
-func (b *builder) foldedScale(product *ast.BinaryExpr, accRead ast.Expr) {
-	b.replace(product.Pos(), product.End(), b.copyText(accRead))
+// foldScaled replaces term by text, its PoissonTerm call, and the
+// product e^−λ·sum by the sum, and words the fix. With asWritten, for
+// λ < 0 both run as written: each term times e^−λ = e^|λ| leaves
+// float64 from |λ| ≈ 709 on, with alternating signs, and the folded sum
+// is NaN where the code's own e^−λ·sum is an infinity of the right
+// sign; a rate below zero is outside what the fold is for. A series
+// builder's term reads running products its fix removes, and cannot run
+// as written: it folds at every λ.
+func (b *builder) foldScaled(term ast.Node, text string, x ast.Expr, product *ast.BinaryExpr, accRead ast.Expr, asWritten bool) error {
+	if !asWritten {
+		b.replace(term.Pos(), term.End(), text)
+		b.replace(product.Pos(), product.End(), b.copyText(accRead))
+		b.message = "Rewrite each term as " + b.shown + ", with e^−λ folded in, and the scaled sum as " + b.text(accRead) + " (imports " + HelperPath + ")"
+		return nil
+	}
+	kept := b.keptAsWritten
+	defer func() { b.keptAsWritten = kept }()
+	conds := []string{operandText(b.copyText(x), x) + " < 0"}
+	const why = "//overfact:allow below λ = 0 the sum as written"
+	termText, err := b.keepAs(text, term, b.copyText(term), conds, false, why)
+	if err != nil {
+		return err
+	}
+	sumText, err := b.keepAs(b.copyText(accRead), product, b.copyText(product), conds, false, why)
+	if err != nil {
+		return err
+	}
+	b.replace(term.Pos(), term.End(), termText)
+	b.replace(product.Pos(), product.End(), sumText)
 	b.message = "Rewrite each term as " + b.shown + ", with e^−λ folded in, and the scaled sum as " + b.text(accRead) + " (imports " + HelperPath + ")"
+	return nil
 }
 
 // poissonScale checks that node, a term x^k/k!, is the whole right side

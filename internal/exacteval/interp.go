@@ -365,7 +365,11 @@ func (ev *Evaluator) instr(fr *frame, instr ssa.Instruction, depth int) (any, er
 		}
 		return &closure{fn: in.Fn.(*ssa.Function), env: bs}, nil
 	case *ssa.Call:
-		return ev.callInstr(fr, in.Common(), depth)
+		v, err := ev.callInstr(fr, in.Common(), depth)
+		if err == nil && lgammaSignLost(in, v) {
+			return nil, skipf("math.Lgamma sign dropped where Γ < 0")
+		}
+		return v, err
 	}
 	return nil, skipf("instruction %T", instr)
 }
@@ -444,6 +448,30 @@ func (ev *Evaluator) slice(fr *frame, in *ssa.Slice) (any, error) {
 		return nil, &PanicError{What: "slice bounds out of range"}
 	}
 	return slice{arr: s.arr, off: s.off + lo, len: hi - lo, cap: max - lo}, nil
+}
+
+// lgammaSignLost reports whether call is math.Lgamma of an argument
+// where Γ < 0 whose sign result the code never reads. The code then
+// computes with |Γ|, and whether it means |Γ| or Γ is not in the code:
+// no value of it is the reference there.
+func lgammaSignLost(call *ssa.Call, v any) bool {
+	fn := call.Common().StaticCallee()
+	if fn == nil || fn.Pkg == nil || fn.Pkg.Pkg.Path() != "math" || fn.Name() != "Lgamma" {
+		return false
+	}
+	t, ok := v.(tuple)
+	if !ok || len(t) != 2 {
+		return false
+	}
+	if sign, ok := t[1].(*big.Int); !ok || sign.Sign() >= 0 {
+		return false
+	}
+	for _, r := range *call.Referrers() {
+		if ex, ok := r.(*ssa.Extract); ok && ex.Index == 1 && len(*ex.Referrers()) > 0 {
+			return false
+		}
+	}
+	return true
 }
 
 func (ev *Evaluator) callInstr(fr *frame, c *ssa.CallCommon, depth int) (any, error) {

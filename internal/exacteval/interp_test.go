@@ -7,6 +7,7 @@ import (
 	"go/parser"
 	"go/token"
 	"go/types"
+	"math"
 	"math/big"
 	"testing"
 
@@ -118,6 +119,16 @@ func Gen[T int64 | float64](n T) T {
 }
 
 func UseGen(n int64) int64 { return Gen(n) }
+
+func GammaAbs(x float64) float64 {
+	lg, _ := math.Lgamma(x)
+	return math.Exp(lg)
+}
+
+func GammaSigned(x float64) float64 {
+	lg, sign := math.Lgamma(x)
+	return float64(sign) * math.Exp(lg)
+}
 `
 
 func build(t *testing.T) *ssa.Package {
@@ -219,6 +230,33 @@ func TestEvaluate(t *testing.T) {
 		} else {
 			t.Logf("%s skipped: %s", c.name, se.Reason)
 		}
+	}
+}
+
+// TestLgammaSignLost: where Γ < 0 and the code drops math.Lgamma's sign,
+// the code means |Γ| or Γ and no value of it is the reference: skipped.
+// Γ(5/2) = 3√π/4 and Γ(−1/2) = −2√π (DLMF 5.4.6 with 5.5.1).
+func TestLgammaSignLost(t *testing.T) {
+	pkg := build(t)
+	ev := New()
+	sqrtPi := math.Sqrt(math.Pi)
+	near := func(v any, want float64) bool {
+		f, ok := v.(*big.Float)
+		if !ok {
+			return false
+		}
+		got, _ := f.Float64()
+		return math.Abs(got-want) <= 1e-15*math.Abs(want)
+	}
+	if v, err := ev.Call(pkg.Func("GammaAbs"), []any{Float(2.5)}); err != nil || !near(v, 0.75*sqrtPi) {
+		t.Errorf("GammaAbs(2.5) = %v, %v; want 3√π/4", v, err)
+	}
+	var se *SkipError
+	if _, err := ev.Call(pkg.Func("GammaAbs"), []any{Float(-0.5)}); !errors.As(err, &se) {
+		t.Errorf("GammaAbs(-0.5): %v, want skipped (the sign of Γ(−1/2) < 0 dropped)", err)
+	}
+	if v, err := ev.Call(pkg.Func("GammaSigned"), []any{Float(-0.5)}); err != nil || !near(v, -2*sqrtPi) {
+		t.Errorf("GammaSigned(-0.5) = %v, %v; want −2√π", v, err)
 	}
 }
 

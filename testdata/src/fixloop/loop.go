@@ -88,3 +88,19 @@ func Shifted(n, k int64) (p int64) {
 	}
 	return p
 }
+
+// Interleavings divides the falling factorial by k! after both loops:
+// C(n, k) may fit where the numerator wraps, and a helper that panics
+// past the numerator's range would refuse it, so the numerator's loop
+// has no fix.
+func Interleavings(n, k uint64) uint64 {
+	num := uint64(1)
+	for i := uint64(0); i < k; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
+		num *= n - i
+	}
+	den := uint64(1)
+	for i := uint64(2); i <= k; i++ { // want `factorial of k in uint64 wraps for k ≥ 21`
+		den *= i
+	}
+	return num / den
+}

@@ -24,3 +24,17 @@ func Boardings(parts ...float64) float64 {
 	}
 	return fact(total) / den // want `Boardings computes the multinomial coefficient \(Σ parts\)!/Π part! as fact\(total\) / den over the loop's parts in float64`
 }
+
+// BoardingsTwoPass counts the same orders with the total and the divisor
+// each taken in a loop of its own over the kinds.
+func BoardingsTwoPass(parts ...float64) float64 {
+	total := 0.0
+	for _, p := range parts {
+		total += p
+	}
+	den := 1.0
+	for _, p := range parts {
+		den *= fact(p)
+	}
+	return fact(total) / den // want `BoardingsTwoPass computes the multinomial coefficient \(Σ parts\)!/Π part! as fact\(total\) / den over the loop's parts in float64`
+}

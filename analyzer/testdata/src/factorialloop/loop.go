@@ -187,3 +187,79 @@ func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of pa
 	}
 	return r
 }
+
+// CountDown counts its parameter down in the loop's post statement, with
+// no init statement: the loop still starts from the argument, which a
+// guard at the entry tests.
+func CountDown(n int64) int64 { // want CountDown:`factorial of parameter 0, breaks from 21`
+	f := int64(1)
+	for ; n > 1; n-- { // want `factorial of n in int64 wraps for n ≥ 21`
+		f *= n
+	}
+	return f
+}
+
+// SmallTable's closure is called only with arguments below 19, by the
+// function that binds it (Catalan numbers, (2n)!/((n+1)!·n!), OEIS A000108).
+func SmallTable() [10]int64 {
+	var t [10]int64
+	fact := func(n int64) int64 {
+		v := int64(1)
+		for i := int64(2); i <= n; i++ {
+			v *= i
+		}
+		return v
+	}
+	for n := int64(0); n < 10; n++ {
+		t[n] = fact(2*n) / (fact(n+1) * fact(n))
+	}
+	return t
+}
+
+// LooseTable's closure escapes as a value: its calls are not all there
+// can be, and its parameter is not bounded.
+func LooseTable(apply func(func(int64) int64)) {
+	fact := func(n int64) int64 {
+		v := int64(1)
+		for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
+			v *= i
+		}
+		return v
+	}
+	apply(fact)
+}
+
+// Span multiplies the integers from lo to hi, ends of their own: with lo
+// at 1 it is hi!, possible.
+func Span(lo, hi int64) int64 {
+	p := int64(1)
+	for v := lo; v <= hi; v++ { // want `product of the factors from lo up to hi in int64 wraps: with lo at 1 or 2 it is hi!, which wraps for hi ≥ 21; hi is not bounded here`
+		p *= v
+	}
+	return p
+}
+
+// SpanSmall bounds its top: silent.
+func SpanSmall(lo, hi int64) int64 {
+	if hi > 20 {
+		return 0
+	}
+	p := int64(1)
+	for v := lo; v <= hi; v++ {
+		p *= v
+	}
+	return p
+}
+
+// SpanAbove starts above 2: a product of hi-lo+1 factors with no bound
+// on their number, not a factorial; left alone.
+func SpanAbove(lo, hi int64) int64 {
+	if lo < 3 {
+		return 0
+	}
+	p := int64(1)
+	for v := lo; v <= hi; v++ {
+		p *= v
+	}
+	return p
+}

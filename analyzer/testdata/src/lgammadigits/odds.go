@@ -11,7 +11,7 @@ func logGamma(x float64) float64 {
 }
 
 // Tickets counts the ways to draw k balls from a drum of n.
-func Tickets(n, k int) float64 {
+func Tickets(n, k int) float64 { // want Tickets:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\)`
 	return math.Exp(logGamma(float64(n)+1) - logGamma(float64(k)+1) - logGamma(float64(n-k)+1)) // want `computes C\(n, k\) from 3 log-gamma values .* passes the tolerance 1e-12 from n = 249 with k between 0 and n, .* at n = 1e\+09; n is not bounded here`
 }
 

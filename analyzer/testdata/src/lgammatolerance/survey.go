@@ -11,13 +11,13 @@ func lnGamma(x float64) float64 {
 }
 
 // Samples counts the samples of k households from a census of n.
-func Samples(n, k int) float64 {
+func Samples(n, k int) float64 { // want Samples:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\)`
 	return math.Exp(lnGamma(float64(n)+1) - lnGamma(float64(k)+1) - lnGamma(float64(n-k)+1)) // want `passes the tolerance 1e-06 from n = \d+ `
 }
 
 // DistrictSamples serves districts of at most a million households:
 // past 1e-12, within 1e-6.
-func DistrictSamples(n, k int) float64 {
+func DistrictSamples(n, k int) float64 { // want DistrictSamples:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\)`
 	if n < 0 || n > 1000000 {
 		return 0
 	}

@@ -1,0 +1,26 @@
+package gameodds
+
+// partitionMemo caches Stirling numbers of the second kind.
+type partitionMemo struct {
+	memo map[[2]int]int64
+}
+
+// Stirling2 counts the ways to split n distinct tokens into k non-empty groups.
+func (m *partitionMemo) Stirling2(n, k int) int64 {
+	if n == k {
+		return 1
+	}
+	if k == 0 || k > n {
+		return 0
+	}
+	key := [2]int{n, k}
+	if v, ok := m.memo[key]; ok {
+		return v
+	}
+	v := int64(k)*m.Stirling2(n-1, k) + m.Stirling2(n-1, k-1)
+	if m.memo == nil {
+		m.memo = map[[2]int]int64{}
+	}
+	m.memo[key] = v
+	return v
+}
