@@ -43,7 +43,8 @@ import (
 // size would refuse the rows that fit.
 
 // checkPascalRecursion reports a recursion that returns (or stores) the
-// sum of its own values at (n−1, k−1) and (n−1, k).
+// sum of its own values at (n−1, k−1) and (n−1, k), or the derangement
+// recurrence (n−1)·(f(n−1) + f(n−2)) (derangement.go).
 func (fc *fnCtx) checkPascalRecursion(decl *ast.FuncDecl) {
 	self, _ := fc.c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
 	if self == nil || decl.Body == nil {
@@ -63,6 +64,10 @@ func (fc *fnCtx) checkPascalRecursion(decl *ast.FuncDecl) {
 			}
 			if n.Op == token.ADD {
 				done = fc.judgePascalRecursion(decl, self, n)
+				return !done
+			}
+			if n.Op == token.MUL {
+				done = fc.judgeDerangementRecursion(decl, self, n)
 				return !done
 			}
 		}
@@ -235,7 +240,8 @@ func pascalFits(t numType, n, k ranges.Interval) bool {
 
 // checkPascalTables reports the tables body fills by Pascal's rule,
 // t[i][j] = t[i-1][j-1] + t[i-1][j] (either order, any offsets of the
-// two indexes that keep the rule's shape).
+// two indexes that keep the rule's shape), or with derangement numbers
+// (derangement.go).
 func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 	ast.Inspect(body, func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -245,6 +251,7 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 			for _, st := range n.List {
 				if as, ok := st.(*ast.AssignStmt); ok && !fc.changedAgain(n, as) {
 					fc.judgePascalTable(as)
+					fc.judgeDerangementTable(as)
 				}
 			}
 		}

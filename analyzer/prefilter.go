@@ -127,8 +127,9 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 }
 
 // sameKind reports whether x and y may be the two terms of Pascal's
-// rule: calls of one function by the same name, or entries of
-// two-dimensional tables (t[i-1][j-1] + t[i-1][j]).
+// rule or of the derangement recurrence: calls of one function by the
+// same name, entries of two-dimensional tables (t[i-1][j-1] +
+// t[i-1][j]), or two entries of one table (d[i-1] + d[i-2]).
 func sameKind(x, y ast.Expr) bool {
 	switch x := x.(type) {
 	case *ast.CallExpr:
@@ -136,9 +137,8 @@ func sameKind(x, y ast.Expr) bool {
 		if !ok {
 			return false
 		}
-		fx, okX := ast.Unparen(x.Fun).(*ast.Ident)
-		fy, okY := ast.Unparen(y.Fun).(*ast.Ident)
-		return okX && okY && fx.Name == fy.Name
+		fx, fy := funcName(x.Fun), funcName(y.Fun)
+		return fx != "" && fx == fy
 	case *ast.IndexExpr:
 		y, ok := y.(*ast.IndexExpr)
 		if !ok {
@@ -146,9 +146,27 @@ func sameKind(x, y ast.Expr) bool {
 		}
 		_, inX := ast.Unparen(x.X).(*ast.IndexExpr)
 		_, inY := ast.Unparen(y.X).(*ast.IndexExpr)
-		return inX && inY
+		if inX && inY {
+			return true
+		}
+		// d[i-1] + d[i-2]: two entries of one table (derangements).
+		bx, okX := ast.Unparen(x.X).(*ast.Ident)
+		by, okY := ast.Unparen(y.X).(*ast.Ident)
+		return okX && okY && bx.Name == by.Name
 	}
 	return false
+}
+
+// funcName returns the name a call's function is written with (f, or
+// m of p.m), or "".
+func funcName(fun ast.Expr) string {
+	switch f := calledName(fun).(type) {
+	case *ast.Ident:
+		return f.Name
+	case *ast.SelectorExpr:
+		return f.Sel.Name
+	}
+	return ""
 }
 
 func isMulOrQuo(e ast.Expr) bool {

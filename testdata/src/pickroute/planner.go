@@ -41,7 +41,7 @@ func (p *Planner) Derangements(n int) int64 {
 	if v, ok := p.cache[n]; ok {
 		return v
 	}
-	v := int64(n-1) * (p.Derangements(n-1) + p.Derangements(n-2))
+	v := int64(n-1) * (p.Derangements(n-1) + p.Derangements(n-2)) // want `recursion computes the derangement number D\(n\) = \(n-1\)·\(D\(n-1\) \+ D\(n-2\)\) in int64: it wraps for n ≥ 21`
 	p.cache[n] = v
 	return v
 }
