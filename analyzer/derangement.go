@@ -86,11 +86,8 @@ func (fc *fnCtx) judgeDerangementRecursion(decl *ast.FuncDecl, self *types.Func,
 	return false
 }
 
-// judgeDerangementTable judges one assignment d[I] = (I−1)·(d[I−1] + d[I−2]).
+// judgeDerangementTable judges one table step (tableStep) d[I] = (I−1)·(d[I−1] + d[I−2]).
 func (fc *fnCtx) judgeDerangementTable(as *ast.AssignStmt) {
-	if as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
-		return
-	}
 	mul, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 	if !ok || mul.Op != token.MUL {
 		return

@@ -125,7 +125,7 @@ func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum 
 	msg := fmt.Sprintf("recursion computes C(%s, %s) by Pascal's rule (%s) in %s: the sum %s where C(%s, %s) leaves %s, from %s = %d at %s = ⌊%s/2⌋ (C(%d, %d) ≈ %s is the largest central one that fits), and every call above it adds the wrapped value on",
 		nObj.Name(), kObj.Name(), src(sum), t.typeName(), verb(t), nObj.Name(), kObj.Name(), t.Name,
 		nObj.Name(), first.FirstBad, kObj.Name(), nObj.Name(), first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
-	fc.report(finding{node: sum, cat: catPascal, definite: definite && k.Lo <= (first.FirstBad)/2, msg: msg + clause, match: fc.pascalGuard(decl, sum, ni, ki)})
+	fc.report(finding{node: sum, cat: catPascal, definite: definite && pascalAlwaysPast(t, n, k), msg: msg + clause, match: fc.pascalGuard(decl, sum, ni, ki)})
 	return true
 }
 
@@ -217,6 +217,21 @@ func (fc *fnCtx) paramShift(decl *ast.FuncDecl, arg ast.Expr, i int) (int64, boo
 	return lin.C, true
 }
 
+// pascalAlwaysPast reports whether every C(n, k) over the ranges leaves
+// t: C(n, ·) is smallest at the ends of k's range and grows with n, so
+// it is enough that both ends at n.Lo leave it, with 0 ≤ k ≤ n.Lo.
+func pascalAlwaysPast(t numType, n, k ranges.Interval) bool {
+	if n.IsEmpty() || k.IsEmpty() || k.Lo < 0 || k.Hi > n.Lo {
+		return false
+	}
+	for _, kk := range []int64{k.Lo, k.Hi} {
+		if m := min(kk, n.Lo-kk); m < 64 && thresholds.ChooseFits(t.Num, n.Lo, m) {
+			return false
+		}
+	}
+	return true
+}
+
 // pascalFits reports whether every C(n, k) over the ranges fits t: the
 // largest is C(n.Hi, min(k.Hi, ⌊n.Hi/2⌋)).
 func pascalFits(t numType, n, k ranges.Interval) bool {
@@ -249,7 +264,7 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 			return false
 		case *ast.BlockStmt:
 			for _, st := range n.List {
-				if as, ok := st.(*ast.AssignStmt); ok && !fc.changedAgain(n, as) {
+				if as, ok := st.(*ast.AssignStmt); ok && tableStep(as) && !fc.changedAgain(n, as) {
 					fc.judgePascalTable(as)
 					fc.judgeDerangementTable(as)
 				}
@@ -257,6 +272,18 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 		}
 		return true
 	})
+}
+
+// tableStep reports whether as may be a step of a table filled by a
+// recurrence: one table entry assigned a sum or a product. Only such
+// statements are compared with the rest of their block.
+func tableStep(as *ast.AssignStmt) bool {
+	if as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return false
+	}
+	_, entry := as.Lhs[0].(*ast.IndexExpr)
+	b, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
+	return entry && ok && (b.Op == token.ADD || b.Op == token.MUL)
 }
 
 // changedAgain reports whether another statement of block assigns to
@@ -280,11 +307,8 @@ func (fc *fnCtx) changedAgain(block *ast.BlockStmt, as *ast.AssignStmt) bool {
 	return again
 }
 
-// judgePascalTable judges one assignment t[I][J] = t[I−1][J−1] + t[I−1][J].
+// judgePascalTable judges one table step (tableStep) t[I][J] = t[I−1][J−1] + t[I−1][J].
 func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
-	if as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
-		return
-	}
 	sum, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 	if !ok || sum.Op != token.ADD {
 		return
