@@ -87,7 +87,9 @@ func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum 
 	if !okA || !okB || fc.c.calleeOf(a) != self || fc.c.calleeOf(b) != self || len(a.Args) != len(b.Args) {
 		return false
 	}
-	ni, ki := -1, -1
+	// ni, ki: Pascal's rule, shifts (−1, −1) and (−1, 0) in either call;
+	// ri, ci: lattice paths, shifts (−1, 0) and (0, −1), one per call.
+	ni, ki, ri, ci := -1, -1, -1, -1
 	for i := range a.Args {
 		da, okA := fc.paramShift(decl, a.Args[i], i)
 		db, okB := fc.paramShift(decl, b.Args[i], i)
@@ -99,14 +101,21 @@ func (fc *fnCtx) judgePascalRecursion(decl *ast.FuncDecl, self *types.Func, sum 
 				return false
 			}
 			ni = i
-		case da+db == -1:
-			if ki >= 0 {
-				return false
-			}
-			ki = i
+		case da == -1 && db == 0 && ri < 0:
+			ri = i
+		case da == 0 && db == -1 && ci < 0:
+			ci = i
 		case da != 0 || db != 0:
 			return false
 		}
+	}
+	switch {
+	case ni >= 0 && ri >= 0 && ci < 0:
+		ki = ri
+	case ni >= 0 && ci >= 0 && ri < 0:
+		ki = ci
+	case ni < 0 && ri >= 0 && ci >= 0:
+		return fc.judgeLatticeRecursion(decl, self, sum, t, ri, ci)
 	}
 	if ni < 0 || ki < 0 {
 		return false
@@ -181,6 +190,15 @@ func paramIdents(decl *ast.FuncDecl) []*ast.Ident {
 // of n and k and whose body panics or returns (the guard of
 // ShapePascalGuard).
 func (fc *fnCtx) pascalGuarded(decl *ast.FuncDecl, n, k types.Object) bool {
+	return fc.chooseGuarded(decl, func(nArg, kArg ast.Expr) bool {
+		return fc.c.objOf(fc.stripConv(nArg)) == n && fc.c.objOf(fc.stripConv(kArg)) == k
+	})
+}
+
+// chooseGuarded reports whether decl holds an if statement that leaves
+// the function (panics or returns) and calls lgamma.ChooseInt64 or
+// ChooseUint64 with arguments args accepts.
+func (fc *fnCtx) chooseGuarded(decl *ast.FuncDecl, args func(n, k ast.Expr) bool) bool {
 	found := false
 	ast.Inspect(decl.Body, func(x ast.Node) bool {
 		ifs, ok := x.(*ast.IfStmt)
@@ -199,12 +217,57 @@ func (fc *fnCtx) pascalGuarded(decl *ast.FuncDecl, n, k types.Object) bool {
 			if fn == nil || fn.Pkg() == nil || fn.Pkg().Path() != fixes.HelperPath || fn.Name() != "ChooseInt64" && fn.Name() != "ChooseUint64" {
 				return true
 			}
-			found = fc.c.objOf(fc.stripConv(call.Args[0])) == n && fc.c.objOf(fc.stripConv(call.Args[1])) == k
+			found = args(call.Args[0], call.Args[1])
 			return !found
 		})
 		return !found
 	})
 	return found
+}
+
+// judgeLatticeRecursion judges sum = f(…r−1…c…) + f(…r…c−1…), the count
+// of lattice paths C(r + c, r) when the edges are ones (common practice:
+// a path's last step comes from the left or from below), which wraps
+// where that count leaves t, from r + c = thresholds.CentralBinomial at
+// r = c. It reports whether the sum was judged.
+func (fc *fnCtx) judgeLatticeRecursion(decl *ast.FuncDecl, self *types.Func, sum *ast.BinaryExpr, t numType, ri, ci int) bool {
+	params := self.Type().(*types.Signature).Params()
+	rObj, cObj := params.At(ri), params.At(ci)
+	if rObj.Name() == "" || cObj.Name() == "" || rObj.Name() == "_" || cObj.Name() == "_" {
+		return false
+	}
+	fits := func(r, c ranges.Interval) bool {
+		if r.IsEmpty() || c.IsEmpty() || r.Hi == math.MaxInt64 || c.Hi == math.MaxInt64 {
+			return false
+		}
+		r.Hi, c.Hi = max(r.Hi, 0), max(c.Hi, 0)
+		return pascalFits(t, ranges.Interval{Lo: 0, Hi: r.Hi + c.Hi}, ranges.Interval{Lo: 0, Hi: min(r.Hi, c.Hi)})
+	}
+	r, c := fc.entryRange(rObj, sum), fc.entryRange(cObj, sum)
+	guarded := fc.chooseGuarded(decl, func(n, k ast.Expr) bool {
+		add, ok := ast.Unparen(n).(*ast.BinaryExpr)
+		return ok && add.Op == token.ADD && fc.c.objOf(fc.stripConv(k)) == rObj &&
+			fc.c.objOf(fc.stripConv(add.X)) == rObj && fc.c.objOf(fc.stripConv(add.Y)) == cObj
+	})
+	if fits(r, c) || guarded || fc.c.callsFit(self, decl, ri, ci, fits) {
+		return true
+	}
+	first := thresholds.CentralBinomial(t.Num)
+	total := rObj.Name() + " + " + cObj.Name()
+	var both ranges.Interval
+	if !r.IsEmpty() && !c.IsEmpty() {
+		both = r.Add(c)
+	}
+	clause, _ := verdict(total, both, first.FirstBad)
+	msg := fmt.Sprintf("recursion counts lattice paths, C(%s, %s), by the rule %s in %s: the sum %s where C(%s, %s) leaves %s, from %s = %d at %s = %s (C(%d, %d) ≈ %s is the largest central one that fits), and every call above it adds the wrapped value on",
+		total, rObj.Name(), src(sum), t.typeName(), verb(t), total, rObj.Name(), t.Name,
+		total, first.FirstBad, rObj.Name(), cObj.Name(), first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
+	m := fc.pascalGuard(decl, sum, ri, ci)
+	if m != nil {
+		m.PathCount = true
+	}
+	fc.report(finding{node: sum, cat: catPascal, msg: msg + clause, match: m})
+	return true
 }
 
 // paramShift reads arg, the i-th argument of a recursive call, as the

@@ -173,6 +173,8 @@ var diffCases = []diffCase{
 	// past it (from n = 67 in int64, 34 in int32), where the guard must
 	// panic.
 	{pkg: "fixpascal", fn: "Picks", loops: []string{"n := 0; n <= 72; n++", "k := -1; k <= n+1; k++"}, args: "int64(n), int64(k)", typ: "int64", ref: refChoose, guard: true},
+	// Lattice paths C(r+c, r): wrong from r + c = 67 at r = c.
+	{pkg: "fixpascal", fn: "Routes", loops: []string{"r := -1; r <= 40; r++", "c := -1; c <= 40; c += 3"}, args: "int64(r + c), int64(r)", typ: "int64", ref: refChoose, guard: true, call: "Routes(int64(r), int64(c))"},
 	{pkg: "fixpascal", fn: "SmallPicks", loops: []string{"n := 0; n <= 38; n++", "k := -1; k <= n+1; k++"}, args: "n, k", typ: "int32", ref: refChoose, guard: true, call: "SmallPicks(k, n)"},
 	{pkg: "fixbinompeak", fn: "Weights", loops: []string{"n := 2; n <= 1100; n += 37", "k := 0; k < n; k += 1 + n/9"}, args: "n-1, k", typ: "float64", ref: refChoose, call: "Weights(n)[k]"},
 	{pkg: "fixbinompeak", fn: "Combin", loops: []string{"n := -3; n <= 1060; n += 7", "k := -2; k <= n+3; k += 1 + n/45"}, args: "n, k", typ: "float64", ref: refChoose, call: "Combin(float64(n), float64(k))"},

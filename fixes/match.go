@@ -54,7 +54,7 @@ const (
 	ShapeLogSpaceTerm           // a series term over running products    Node: the term; Args: its parts (the variables carried as lgamma.Product, math.Pow calls); Func (see buildLogSpaceTerm)
 	ShapeProductChain           // a product of math.Pow and math.Gamma values  Node: the product (see buildProductChain)
 	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
-	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared; Func (see buildPascalGuard)
+	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared (r, c of C(r+c, r) with PathCount); Func (see buildPascalGuard)
 	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
 )
 
@@ -147,6 +147,9 @@ type Match struct {
 	// the product, or the loop counting Param itself down from its
 	// entry value): it fires exactly where the product leaves the type.
 	EntryGuard bool
+	// PathCount, for ShapePascalGuard, tells that Args are r and c of
+	// lattice paths f(r-1, c) + f(r, c-1), whose value is C(r+c, r).
+	PathCount bool
 }
 
 // A FactorialCall is a call of a function that returns (Arg+Off)!, as

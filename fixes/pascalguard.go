@@ -76,15 +76,23 @@ func buildPascalGuard(b *builder) error {
 	if b.narrow(m.Result) {
 		value, check = "v", fmt.Sprintf("(!ok || %s(%s(v)) != v)", wide, result)
 	}
+	// Lattice paths count C(r+c, r) with n = r, k = c here.
+	top, shownTop, low, shownLow := widened(wide, n), n.Name(), widened(wide, k), k.Name()
 	cond := check
 	if class == classSigned {
 		cond = n.Name() + " >= 0 && " + check
 	}
-	msg := fmt.Sprintf("%s: C(%s, %s) overflows %s at %s = %%d, %s = %%d", funcName(m.Func), n.Name(), k.Name(), result, n.Name(), k.Name())
+	if m.PathCount {
+		top, shownTop, low, shownLow = widened(wide, n)+"+"+widened(wide, k), n.Name()+" + "+k.Name(), widened(wide, n), n.Name()
+		if class == classSigned {
+			cond = n.Name() + " >= 0 && " + k.Name() + " >= 0 && " + check
+		}
+	}
+	msg := fmt.Sprintf("%s: C(%s, %s) overflows %s at %s = %%d, %s = %%d", funcName(m.Func), shownTop, shownLow, result, n.Name(), k.Name())
 	guard := fmt.Sprintf("%[1]sif %[2]s, ok := %[3]s.%[4]s(%[5]s, %[6]s); %[7]s {\n%[1]s\tpanic(%[8]s.Sprintf(%[9]s, %[10]s, %[11]s))\n%[1]s}\n",
-		indent, value, pkg, helper, widened(wide, n), widened(wide, k), cond, fmtName, strconv.Quote(msg), n.Name(), k.Name())
+		indent, value, pkg, helper, top, low, cond, fmtName, strconv.Quote(msg), n.Name(), k.Name())
 	b.insert(start, guard)
-	b.message = fmt.Sprintf("Add a range guard: panic where C(%s, %s) overflows %s (imports %s)", n.Name(), k.Name(), result, HelperPath)
+	b.message = fmt.Sprintf("Add a range guard: panic where C(%s, %s) overflows %s (imports %s)", shownTop, shownLow, result, HelperPath)
 	return nil
 }
 

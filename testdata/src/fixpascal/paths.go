@@ -1,5 +1,6 @@
 // Package fixpascal is a seating planner's counting helpers: the ways
-// to pick k of n guests for a table, by Pascal's rule with a memo. Its
+// to pick k of n guests for a table, by Pascal's rule with a memo, and
+// the walks across its hall, by the lattice-path rule. Its
 // .golden file shows the range guard put before each sum, which panics
 // exactly where the count leaves its type.
 package fixpascal
@@ -38,5 +39,24 @@ func SmallPicks(k, n int) int32 {
 	}
 	v := SmallPicks(k-1, n-1) + SmallPicks(k, n-1) // want `recursion computes C\(n, k\) by Pascal's rule .* in int32: the sum wraps where C\(n, k\) leaves int32, from n = 34`
 	small[[2]int{n, k}] = v
+	return v
+}
+
+var routes = map[[2]int64]int64{}
+
+// Routes counts the walks from one corner of a hall of r by c tiles to
+// the other, one tile right or up at a time, with a memo.
+func Routes(r, c int64) int64 {
+	if r < 0 || c < 0 {
+		return 0
+	}
+	if r == 0 || c == 0 {
+		return 1
+	}
+	if v, ok := routes[[2]int64{r, c}]; ok {
+		return v
+	}
+	v := Routes(r-1, c) + Routes(r, c-1) // want `recursion counts lattice paths, C\(r \+ c, r\), by the rule Routes\(r-1, c\) \+ Routes\(r, c-1\) in int64`
+	routes[[2]int64{r, c}] = v
 	return v
 }

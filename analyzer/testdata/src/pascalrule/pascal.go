@@ -56,13 +56,24 @@ func Fib(n int) uint64 {
 	return Fib(n-1) + Fib(n-2)
 }
 
-// Paths counts lattice paths, a sum over two different parameters, not
-// Pascal's rule as written here: silent.
+// Paths counts lattice paths through a grid of r by c blocks, C(r+c, r),
+// a sum over two different parameters.
 func Paths(r, c int) int64 {
 	if r == 0 || c == 0 {
 		return 1
 	}
-	return Paths(r-1, c) + Paths(r, c-1)
+	return Paths(r-1, c) + Paths(r, c-1) // want `recursion counts lattice paths, C\(r \+ c, r\), by the rule Paths\(r-1, c\) \+ Paths\(r, c-1\) in int64: the sum wraps where C\(r \+ c, r\) leaves int64, from r \+ c = 67 at r = c`
+}
+
+// SmallPaths stops at a 16-by-16 grid: silent.
+func SmallPaths(r, c int) int64 {
+	if r < 0 || c < 0 || r > 16 || c > 16 {
+		return 0
+	}
+	if r == 0 || c == 0 {
+		return 1
+	}
+	return SmallPaths(r-1, c) + SmallPaths(r, c-1)
 }
 
 // Triangle fills rows 0 … n.
