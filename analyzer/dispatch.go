@@ -28,10 +28,10 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 			fc.checkBinomialRecursion(d)
 		}
 	}
-	if s.sum {
-		if d, ok := n.(*ast.FuncDecl); ok {
-			fc.checkPascalRecursion(d)
-		}
+	if d, ok := n.(*ast.FuncDecl); ok && s.sumCalls {
+		fc.checkPascalRecursion(d)
+	}
+	if s.sumTable {
 		fc.checkPascalTables(body)
 	}
 	if !s.worthProducts() {

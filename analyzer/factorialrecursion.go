@@ -388,8 +388,7 @@ func (fc *fnCtx) judgeBinomialRecursion(decl *ast.FuncDecl, self *types.Func, mu
 		if idx < 0 || !ok || fc.c.calleeOf(call) != self || idx >= len(call.Args) {
 			continue
 		}
-		lin, ok := fc.linear(call.Args[idx])
-		if !ok || len(lin.Terms) != 1 || fc.c.paramIndex(decl, lin.Terms[0].Sym.Object) != idx || lin.Terms[0].K != 1 || lin.C != -1 {
+		if d, ok := fc.paramShift(decl, call.Args[idx], idx); !ok || d != -1 {
 			continue
 		}
 		j := fc.recursionCount(decl, call, idx)

@@ -17,7 +17,8 @@ type scan struct {
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
 	localCall bool // a call of a function of this package, which may become factorial-valued
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
-	sum       bool // a sum of two calls or of two index expressions: Pascal's rule may be here (pascalrule.go)
+	sumCalls  bool // a sum of two calls of one name: a Pascal's-rule or derangement recursion may be here (pascalrule.go)
+	sumTable  bool // a sum of two entries of one table: a table filled by such a rule may be here
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -65,8 +66,10 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				_, y := ast.Unparen(n.Y).(*ast.CallExpr)
 				cur.callMul = x || y
 			}
-			if cur != nil && n.Op == token.ADD && !cur.sum {
-				cur.sum = sameKind(ast.Unparen(n.X), ast.Unparen(n.Y))
+			if cur != nil && n.Op == token.ADD {
+				calls, table := sameKind(ast.Unparen(n.X), ast.Unparen(n.Y))
+				cur.sumCalls = cur.sumCalls || calls
+				cur.sumTable = cur.sumTable || table
 			}
 		case *ast.CallExpr:
 			if cur == nil {
@@ -128,33 +131,32 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 
 // sameKind reports whether x and y may be the two terms of Pascal's
 // rule or of the derangement recurrence: calls of one function by the
-// same name, entries of two-dimensional tables (t[i-1][j-1] +
-// t[i-1][j]), or two entries of one table (d[i-1] + d[i-2]).
-func sameKind(x, y ast.Expr) bool {
+// same name (calls), or entries of two-dimensional tables
+// (t[i-1][j-1] + t[i-1][j]) or of one table (d[i-1] + d[i-2]) (table).
+func sameKind(x, y ast.Expr) (calls, table bool) {
 	switch x := x.(type) {
 	case *ast.CallExpr:
 		y, ok := y.(*ast.CallExpr)
 		if !ok {
-			return false
+			return false, false
 		}
 		fx, fy := funcName(x.Fun), funcName(y.Fun)
-		return fx != "" && fx == fy
+		return fx != "" && fx == fy, false
 	case *ast.IndexExpr:
 		y, ok := y.(*ast.IndexExpr)
 		if !ok {
-			return false
+			return false, false
 		}
 		_, inX := ast.Unparen(x.X).(*ast.IndexExpr)
 		_, inY := ast.Unparen(y.X).(*ast.IndexExpr)
 		if inX && inY {
-			return true
+			return false, true
 		}
-		// d[i-1] + d[i-2]: two entries of one table (derangements).
 		bx, okX := ast.Unparen(x.X).(*ast.Ident)
 		by, okY := ast.Unparen(y.X).(*ast.Ident)
-		return okX && okY && bx.Name == by.Name
+		return false, okX && okY && bx.Name == by.Name
 	}
-	return false
+	return false, false
 }
 
 // funcName returns the name a call's function is written with (f, or
@@ -178,7 +180,7 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthProducts() || s.sum }
+func (s *scan) worth() bool { return s.worthProducts() || s.sumCalls || s.sumTable }
 
 // worthProducts reports whether a function may hold anything to report
 // but Pascal's rule: only these run the value model.
