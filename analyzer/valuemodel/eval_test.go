@@ -355,3 +355,42 @@ func TestCounterMovedInBody(t *testing.T) {
 		t.Errorf("value %v, want unknown", v)
 	}
 }
+
+// A logarithm inside a loop body is evaluated in the loop's dry trip
+// too: the incomplete gamma series returns sum·exp(a·ln x − x) from
+// inside its loop, and its prefactor is x^a·e^(−x) (the series form of
+// the lower incomplete gamma function, DLMF 8.7.1, from memory), not a
+// function the model gave up on.
+func TestLogInsideLoop(t *testing.T) {
+	info, fd := load(t, `func f(a, x float64) float64 {
+	ap, del := a, 1/a
+	sum := del
+	for n := 0; n < 200; n++ {
+		ap++
+		del *= x / ap
+		sum += del
+		if math.Abs(del) < math.Abs(sum)*3e-14 {
+			return sum * math.Exp(-x+a*math.Log(x))
+		}
+	}
+	return math.NaN()
+}`, "f")
+	res := Evaluate(info, fd, Options{})
+	if res.Capped {
+		t.Fatal("capped")
+	}
+	var exp *ast.CallExpr
+	ast.Inspect(fd.Body, func(n ast.Node) bool {
+		if c, ok := n.(*ast.CallExpr); ok {
+			if sel, ok := c.Fun.(*ast.SelectorExpr); ok && sel.Sel.Name == "Exp" {
+				exp = c
+			}
+		}
+		return true
+	})
+	got := res.Values[exp]
+	if got == nil || len(got.Gamma) != 0 || len(got.Pows) != 1 ||
+		got.Pows[0].Base.String() != "x" || got.Pows[0].Exp.String() != "a" || got.Exp.String() != "-x" {
+		t.Errorf("exp(a·ln x − x) = %v, want x^a·e^(−x)", got)
+	}
+}

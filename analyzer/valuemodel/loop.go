@@ -848,7 +848,7 @@ func (e *evaluator) trip(l *Loop, body *ast.BlockStmt, in env, roles map[types.O
 	saved := e.res
 	if dry {
 		// Record nothing from the dry pass.
-		e.res = &Result{Values: make(map[ast.Expr]*Term), Exprs: saved.Exprs}
+		e.res = &Result{Values: make(map[ast.Expr]*Term), Logs: make(map[ast.Expr]*Term), Exprs: saved.Exprs}
 	}
 	defer func() {
 		if dry {
