@@ -3,6 +3,7 @@ package analyzer
 import (
 	"go/ast"
 	"go/token"
+	"math"
 	"math/big"
 	"path/filepath"
 	"slices"
@@ -21,8 +22,11 @@ import (
 // b = (n - k + i) * b / i, its unexported factorial multiplies an int up
 // to an argument nothing bounds, and its NumPermutations multiplies the
 // factors n-k+1 to n, which wrap at k = n from n = 21 (checked below
-// against math/big); those three, and nothing else in the package, are
-// reported.
+// against math/big); its GeneralizedBinomial is math.Exp of
+// LogGeneralizedBinomial, a sum of three log-gamma values in another
+// function, whose rounding leaves more than 1e-12 relative error in
+// C(n, k) for large n (lgamma-digits; checked below against math/big).
+// Those four, and nothing else in the package, are reported.
 func TestGonumCorpus(t *testing.T) {
 	if testing.Short() {
 		t.Skip("loads gonum")
@@ -46,7 +50,7 @@ func TestGonumCorpus(t *testing.T) {
 		}
 	}
 	sort.Strings(got)
-	want := []string{"combin.go Binomial binomial-loop", "combin.go NumPermutations factorial-loop", "combin.go factorial factorial-loop"}
+	want := []string{"combin.go Binomial binomial-loop", "combin.go GeneralizedBinomial lgamma-digits", "combin.go NumPermutations factorial-loop", "combin.go factorial factorial-loop"}
 	if !slices.Equal(got, want) {
 		t.Errorf("findings in gonum stat/combin:\n got %q\nwant %q", got, want)
 	}
@@ -64,6 +68,24 @@ func TestNumPermutationsWraps(t *testing.T) {
 		got := big.NewInt(int64(combin.NumPermutations(tc.n, tc.n)))
 		if (got.Cmp(exact) != 0) != tc.wrong {
 			t.Errorf("NumPermutations(%d, %d) = %v, exact %v", tc.n, tc.n, got, exact)
+		}
+	}
+}
+
+// TestGeneralizedBinomialDigits shows the GeneralizedBinomial finding is
+// a real loss of digits: C(10⁶, 20), exact in math/big, is off by more
+// than the 1e-12 relative tolerance of lgamma-digits, while C(30, 15)
+// (first n of the finding: 249) is within it.
+func TestGeneralizedBinomialDigits(t *testing.T) {
+	for _, tc := range []struct {
+		n, k int64
+		over bool
+	}{{30, 15, false}, {1000000, 20, true}} {
+		exact := new(big.Float).SetInt(new(big.Int).Binomial(tc.n, tc.k))
+		got := big.NewFloat(combin.GeneralizedBinomial(float64(tc.n), float64(tc.k)))
+		rel, _ := new(big.Float).Quo(new(big.Float).Sub(got, exact), exact).Float64()
+		if (math.Abs(rel) > 1e-12) != tc.over {
+			t.Errorf("GeneralizedBinomial(%d, %d): relative error %g", tc.n, tc.k, rel)
 		}
 	}
 }

@@ -53,31 +53,55 @@ func (fc *fnCtx) checkLgammaDigits(res *vm.Result, exps []*lgExp, done map[ast.N
 	}
 }
 
+// lgForm is one p·ln Γ(aff) of an exponent, its argument an affine
+// form of the function's variables.
+type lgForm struct {
+	p   float64
+	aff vm.Affine
+}
+
+// lgForms returns the terms of x with their arguments as affine forms: a
+// log-gamma call of this function is one term, a call of a function
+// that returns a log-gamma sum is that sum's terms in the caller's
+// variables (Result.Logs), and rest reports that such a sum also holds
+// something other than log-gamma values (a ln x).
+func lgForms(res *vm.Result, x *lgExp) (forms []lgForm, rest, ok bool) {
+	for _, t := range x.terms {
+		if t.call == nil {
+			a, ok := affineArg(res, t.arg)
+			if !ok {
+				return nil, false, false
+			}
+			forms = append(forms, lgForm{t.p, a})
+			continue
+		}
+		lt := res.Logs[t.call]
+		if lt == nil || len(lt.Gamma) == 0 {
+			return nil, false, false
+		}
+		for _, g := range lt.Gamma {
+			forms = append(forms, lgForm{t.p * float64(g.Pow), g.Arg})
+		}
+		rest = rest || len(lt.Pows) > 0 || !lt.Exp.IsConst()
+	}
+	return forms, rest, true
+}
+
 func (fc *fnCtx) lgammaDigitsOf(res *vm.Result, g *lgGroup) {
-	count := 0
-	for _, x := range g.exps {
-		count += len(x.terms)
-	}
-	if count < 2 {
-		return // one value: exp(ln Γ(x)) is +Inf before it errs by 1e-12
-	}
 	// The variables, in order of first appearance, and each term's
 	// argument as an affine form over them.
 	var spans []symSpan
 	index := make(map[vm.Sym]int)
-	type formTerm struct {
-		p   float64
-		aff vm.Affine
-	}
-	var forms [][]formTerm
+	var forms [][]lgForm
+	count, rest := 0, false
 	for _, x := range g.exps {
-		var ft []formTerm
-		for _, t := range x.terms {
-			a, ok := affineArg(res, t.arg)
-			if !ok {
-				return
-			}
-			for _, l := range a.Terms {
+		ft, r, ok := lgForms(res, x)
+		if !ok {
+			return
+		}
+		rest = rest || r || x.rest
+		for _, f := range ft {
+			for _, l := range f.aff.Terms {
 				if _, seen := index[l.Sym]; seen {
 					continue
 				}
@@ -88,9 +112,18 @@ func (fc *fnCtx) lgammaDigitsOf(res *vm.Result, g *lgGroup) {
 				index[l.Sym] = len(spans)
 				spans = append(spans, sp)
 			}
-			ft = append(ft, formTerm{t.p, a})
 		}
+		count += len(ft)
 		forms = append(forms, ft)
+	}
+	if count < 2 {
+		// One value alone: exp(ln Γ(x)) is +Inf before it errs by
+		// 1e-12. Beside powers (k·ln λ − λ − ln Γ(k+1), the Poisson pmf
+		// in log space, the form a rewrite is advised to take) its
+		// error is that of any exponential of a sum of terms of that
+		// size, not a loss of this form: left to the caller's
+		// judgement (docs/patterns.md, lgamma-digits).
+		return
 	}
 	if len(spans) == 0 || len(spans) > 6 {
 		return // constants only, or more corners than worth trying
@@ -162,7 +195,7 @@ func (fc *fnCtx) lgammaDigitsOf(res *vm.Result, g *lgGroup) {
 		exp = fmt.Sprintf("a product of %d math.Exp calls of log-gamma values", len(g.exps))
 	}
 	msg := fmt.Sprintf("%s computes %s from %d log-gamma values whose rounding errors add up: the bound on its relative error passes the tolerance %g from %s = %d%s, where it is %.4g",
-		exp, what, countTerms(g.exps), lgammaTolerance, dv.name, first, with, at)
+		exp, what, count, lgammaTolerance, dv.name, first, with, at)
 	// The bound further on: at the top of the range, or at 10⁹ where
 	// nothing bounds the variable.
 	far := float64(to)
@@ -172,22 +205,11 @@ func (fc *fnCtx) lgammaDigitsOf(res *vm.Result, g *lgGroup) {
 	if top, ok := bound(far); ok && top > at && far > float64(first) {
 		msg += fmt.Sprintf(", and %.2g at %s = %g", top, dv.name, far)
 	}
-	for _, x := range g.exps {
-		if x.rest {
-			msg += "; the exponent's other terms add rounding errors of their own, not counted in the bound"
-			break
-		}
+	if rest {
+		msg += "; the exponent's other terms add rounding errors of their own, not counted in the bound"
 	}
 	msg += clause
 	fc.report(finding{node: g.root, cat: catLgammaDigits, definite: definite, msg: msg, match: fc.lgammaMatch(res, g.root)})
-}
-
-func countTerms(exps []*lgExp) int {
-	n := 0
-	for _, x := range exps {
-		n += len(x.terms)
-	}
-	return n
 }
 
 // lowerEnds names the lower ends of the named variables, assumed 0

@@ -19,10 +19,13 @@ import (
 // return v }). This file finds those exponentials and evaluates them as
 // the program does.
 
-// lgTerm is one p·ln Γ(arg) of an exponent.
+// lgTerm is one p·ln Γ(arg) of an exponent, or p times the value of
+// a call whose ValueFact says it returns a logarithm (call set, arg
+// nil): ln C(n, k) summed from log-gamma values in another function.
 type lgTerm struct {
-	p   float64
-	arg ast.Expr
+	p    float64
+	arg  ast.Expr
+	call *ast.CallExpr
 }
 
 // lgExp is a math.Exp call whose argument holds log-gamma values.
@@ -30,6 +33,10 @@ type lgExp struct {
 	call  *ast.CallExpr
 	terms []lgTerm
 	rest  bool // the argument adds something else too (k·ln p)
+	// facts reports that some terms are calls of functions that return
+	// log-gamma sums: only lgamma-digits reads those (their arguments
+	// are the callee's, not expressions of this function).
+	facts bool
 }
 
 // lgWrappers is the functions of the package that return ln|Γ| of their
@@ -147,6 +154,10 @@ func (fc *fnCtx) lgammaTerms(e ast.Expr, p float64, depth int, out *[]lgTerm) (r
 		if len(x.Args) == 1 && fc.isConversion(x) {
 			return fc.lgammaTerms(x.Args[0], p, depth+1, out)
 		}
+		if f := fc.c.valueFactOf(fc.c.calleeOf(x)); f != nil && f.Log {
+			*out = append(*out, lgTerm{p: p, call: x})
+			return false
+		}
 	case *ast.Ident:
 		if arg := fc.lgammaLocal(x); arg != nil {
 			*out = append(*out, lgTerm{p: p, arg: arg})
@@ -172,7 +183,11 @@ func (fc *fnCtx) lgammaExps() []*lgExp {
 				var terms []lgTerm
 				rest := fc.lgammaTerms(n.Args[0], 1, 0, &terms)
 				if len(terms) > 0 {
-					out = append(out, &lgExp{call: n, terms: terms, rest: rest})
+					x := &lgExp{call: n, terms: terms, rest: rest}
+					for _, t := range terms {
+						x.facts = x.facts || t.call != nil
+					}
+					out = append(out, x)
 				}
 			}
 		}
@@ -185,16 +200,22 @@ func (fc *fnCtx) lgammaExps() []*lgExp {
 // exponentials that overflow first (one root cause), then integers read
 // back from them, then the digits their sums lose.
 func (fc *fnCtx) checkLogGamma() {
-	exps := fc.lgammaExps()
+	all := fc.lgammaExps()
+	var exps []*lgExp // those whose terms are all of this function
+	for _, x := range all {
+		if !x.facts {
+			exps = append(exps, x)
+		}
+	}
 	convs := fc.integerReads(exps)
-	if len(exps) == 0 && len(convs) == 0 {
+	if len(all) == 0 && len(convs) == 0 {
 		return
 	}
-	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogGamma: fc.c.isLgammaCall, MaxNodes: modelMaxNodes})
+	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, LogGamma: fc.c.isLgammaCall, MaxNodes: modelMaxNodes})
 	done := make(map[ast.Node]bool)
 	fc.checkLgammaOverflow(res, exps, done)
 	fc.checkLgammaInteger(res, convs, done)
-	fc.checkLgammaDigits(res, exps, done)
+	fc.checkLgammaDigits(res, all, done)
 }
 
 // productRoot returns the outermost product or quotient that e is a

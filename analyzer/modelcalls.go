@@ -232,7 +232,10 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 	if _, isConst := value.IsConst(); isConst || len(termSyms(value, vm.Int(0))) == 0 {
 		return nil
 	}
-	if len(f.Weak) == 0 && !fc.formedValue(res, roots, value, isLog, t) {
+	// A logarithm of a product of Γ values (ln B(a, b) summed from
+	// log-gamma values) is worth a fact too: the digits its sum loses
+	// are judged where a caller exponentiates it (lgammadigits.go).
+	if len(f.Weak) == 0 && !fc.formedValue(res, roots, value, isLog, t) && !(isLog && len(value.Gamma) >= 2) {
 		return nil
 	}
 	return f

@@ -96,8 +96,12 @@ func (t LogGammaTerm) at(v []float64) float64 {
 // ln Γ is convex on x > 0 (common practice: Γ is log-convex, the
 // Bohr–Mollerup theorem), Σ|pᵢ|·ln Γ(xᵢ) is convex over the box and its
 // largest value is at a corner; |ln Γ| ≤ ln Γ − 2·LgammaMin() turns that
-// into a bound on A. It reports false when an argument is not positive
-// at some corner (the box holds a pole) or a bound is infinite.
+// into a bound on A. A corner where some argument is not positive (a
+// pole of Γ, where the code's own guards return early: C(n, k) for
+// k > n) is left out, so where the box holds such corners the result is
+// the bound at the corners where every argument is positive, a value
+// the bound takes, not its largest over the box. It reports false when
+// no corner has every argument positive or a bound is infinite.
 //
 // Special cases are:
 //
@@ -130,6 +134,7 @@ func ExpLogGammaError(exps [][]LogGammaTerm, lo, hi []float64) (float64, bool) {
 // it with coefficients that are not powers of two, and the largest
 // argument-rounding term R.
 func cornerMax(terms []LogGammaTerm, lo, hi []float64) (a, a2, r float64, ok bool) {
+	feasible := false
 	minLg := LgammaMin()
 	d := len(lo)
 	v := make([]float64, d)
@@ -141,11 +146,18 @@ func cornerMax(terms []LogGammaTerm, lo, hi []float64) (a, a2, r float64, ok boo
 			}
 		}
 		var sa, sa2, sr float64
+		pole := false
+		for _, t := range terms {
+			if x := t.at(v); !(x > 0) || math.IsInf(x, 0) {
+				pole = true
+			}
+		}
+		if pole {
+			continue
+		}
+		feasible = true
 		for _, t := range terms {
 			x := t.at(v)
-			if !(x > 0) || math.IsInf(x, 0) {
-				return 0, 0, 0, false
-			}
 			lg, _ := math.Lgamma(x)
 			w := math.Abs(t.P) * (lg - 2*minLg)
 			sa += w
@@ -158,7 +170,7 @@ func cornerMax(terms []LogGammaTerm, lo, hi []float64) (a, a2, r float64, ok boo
 		}
 		a, a2, r = math.Max(a, sa), math.Max(a2, sa2), math.Max(r, sr)
 	}
-	if math.IsInf(a, 0) || math.IsNaN(a) {
+	if !feasible || math.IsInf(a, 0) || math.IsNaN(a) {
 		return 0, 0, 0, false
 	}
 	return a, a2, r, true

@@ -91,12 +91,30 @@ func TestExpLogGammaFirstBinomial(t *testing.T) {
 	}
 }
 
-// TestExpLogGammaErrorPoles: a box that holds a non-positive argument
-// has no bound.
+// TestExpLogGammaErrorPoles: a box whose every corner holds a
+// non-positive argument has no bound; where only some corners do (C(n, k)
+// over 0 ≤ k ≤ K with K < k at a corner, a case the code's guards
+// return early for), the bound is the one at the corners where every
+// argument is positive.
 func TestExpLogGammaErrorPoles(t *testing.T) {
 	terms := []LogGammaTerm{{P: 1, C: 0, K: []float64{1}}}
-	if _, ok := ExpLogGammaError([][]LogGammaTerm{terms}, []float64{0}, []float64{5}); ok {
+	if _, ok := ExpLogGammaError([][]LogGammaTerm{terms}, []float64{0}, []float64{0}); ok {
 		t.Error("Γ(0) gave a bound")
+	}
+	// ln Γ(K+1) − ln Γ(k+1) − ln Γ(K−k+1) over K = 500, 0 ≤ k ≤ 1000:
+	// the corner k = 1000 holds Γ(−499); the corners k = 0 are C(500, 0),
+	// whose three terms sum, in absolute value, to
+	// ln 500! + ln 0! + ln 500! (the largest A, with |ln Γ| taken as
+	// ln Γ − 2·LgammaMin()).
+	binom := []LogGammaTerm{
+		{P: 1, C: 1, K: []float64{1, 0}},
+		{P: -1, C: 1, K: []float64{0, 1}},
+		{P: -1, C: 1, K: []float64{1, -1}},
+	}
+	got, ok := ExpLogGammaError([][]LogGammaTerm{binom}, []float64{500, 0}, []float64{500, 1000})
+	want, wok := ExpLogGammaError([][]LogGammaTerm{binom}, []float64{500, 0}, []float64{500, 0})
+	if !ok || !wok || got != want {
+		t.Errorf("bound with a pole corner: %g, %v; at the corners without one: %g, %v", got, ok, want, wok)
 	}
 	if b, ok := ExpLogGammaError(nil, nil, nil); !ok || b != 0 {
 		t.Errorf("empty product: %g, %v", b, ok)

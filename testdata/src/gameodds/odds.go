@@ -30,14 +30,15 @@ func lg(x float64) float64 {
 
 // NegBinomialPMF is the chance of k failures before the r-th success.
 func NegBinomialPMF(k, r int, p float64) float64 {
-	c := math.Exp(lg(float64(k+r)) - lg(float64(k+1)) - lg(float64(r)))
+	c := math.Exp(lg(float64(k+r)) - lg(float64(k+1)) - lg(float64(r))) // want `math.Exp of log-gamma values computes C\(k \+ r - 1, r - 1\) from 3 log-gamma values`
 	return c * math.Pow(p, float64(r)) * math.Pow(1-p, float64(k)) // want `computes the negative binomial probability C\(k \+ r - 1`
 }
 
-// NegBinomialLogPMF is the same probability kept in log space until the end.
+// NegBinomialLogPMF is the same probability kept in log space until the
+// end: no overflow, but its three log-gamma values lose digits as k grows.
 func NegBinomialLogPMF(k, r int, p float64) float64 {
 	l := lg(float64(k+r)) - lg(float64(k+1)) - lg(float64(r))
-	return math.Exp(l + float64(r)*math.Log(p) + float64(k)*math.Log1p(-p))
+	return math.Exp(l + float64(r)*math.Log(p) + float64(k)*math.Log1p(-p)) // want `math.Exp of log-gamma values computes a product of Γ values from 3 log-gamma values`
 }
 
 // Multinomial counts the ways to deal piles of the given sizes.

@@ -13,7 +13,7 @@ func BlockErrorProb(n, t int, p float64) float64 {
 
 // BitErrorLog is the probability of exactly k errors in n bits.
 func BitErrorLog(n, k int, p float64) float64 {
-	return math.Exp(logChoose(n, k) + float64(k)*math.Log(p) + float64(n-k)*math.Log1p(-p))
+	return math.Exp(logChoose(n, k) + float64(k)*math.Log(p) + float64(n-k)*math.Log1p(-p)) // want `math.Exp of log-gamma values computes a product of Γ values from 3 log-gamma values`
 }
 
 // Burst models bursts of errors arriving at a constant rate.

@@ -40,15 +40,17 @@ func SproutsFromLog(n, k int, rate float64) float64 {
 	if k < 0 || k > n {
 		return 0
 	}
-	return math.Exp(tallykit.Lchoose(n, k)) * math.Pow(rate, float64(k)) * math.Pow(1-rate, float64(n-k)) // want `computes the binomial probability C\(n, k\)·rate\^k·\(1−rate\)\^\(n - k\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1029`
+	return math.Exp(tallykit.Lchoose(n, k)) * math.Pow(rate, float64(k)) * math.Pow(1-rate, float64(n-k)) // want `computes the binomial probability C\(n, k\)·rate\^k·\(1−rate\)\^\(n - k\) in float64 with C\(n, k\) formed on its own: it overflows to \+Inf for n ≥ 1029` `math.Exp of log-gamma values computes C\(n, k\)·rate\^k·\(1−rate\)\^\(n - k\) from 3 log-gamma values`
 }
 
-// SproutsLog keeps the whole probability in log space: safe.
+// SproutsLog keeps the whole probability in log space: it cannot
+// overflow, but the log-gamma sum inside Lchoose loses digits as n grows
+// (lgamma-digits reads it through Lchoose's fact).
 func SproutsLog(n, k int, rate float64) float64 {
 	if k < 0 || k > n {
 		return 0
 	}
-	return math.Exp(tallykit.Lchoose(n, k) + float64(k)*math.Log(rate) + float64(n-k)*math.Log1p(-rate))
+	return math.Exp(tallykit.Lchoose(n, k) + float64(k)*math.Log(rate) + float64(n-k)*math.Log1p(-rate)) // want `math.Exp of log-gamma values computes a product of Γ values from 3 log-gamma values`
 }
 
 // SmallTray serves the trays of the bench, at most 500 seeds: C(500,

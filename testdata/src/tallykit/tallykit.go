@@ -39,7 +39,7 @@ func Choose(n, k int) float64 { // want Choose:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 
 		}
 		return float64(num / smallFact[k])
 	}
-	return math.Exp(lchoose(n, k))
+	return math.Exp(lchoose(n, k)) // want `math.Exp of log-gamma values computes C\(n, k\) from 3 log-gamma values .* from n = 249`
 }
 
 // Lchoose returns ln C(n, k).
@@ -71,7 +71,7 @@ func WideChoose(n, k int) float64 {
 	if n < 2048 {
 		return pascal(n, k)
 	}
-	return math.Exp(lchoose(n, k))
+	return math.Exp(lchoose(n, k)) // want `math.Exp of log-gamma values computes C\(n, k\) from 3 log-gamma values .* from n = 2048 .*n is at least 2048 here`
 }
 
 // pascal is row n of Pascal's triangle, entry k, built in float64.
