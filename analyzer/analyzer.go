@@ -7,6 +7,9 @@ import (
 	"go/types"
 	"io"
 	"os"
+	"path/filepath"
+	"runtime"
+	"strings"
 
 	"golang.org/x/tools/go/analysis"
 
@@ -147,10 +150,26 @@ func run(pass *analysis.Pass) (any, error) {
 func (c *checker) guard(n ast.Node, f func()) {
 	defer func() {
 		if r := recover(); r != nil && debug {
-			fmt.Fprintf(debugOut, "overfact: %s: skipped function after internal error: %v\n", c.pass.Fset.Position(n.Pos()), r)
+			fmt.Fprintf(debugOut, "overfact: %s: skipped function after internal error: %v%s\n", c.pass.Fset.Position(n.Pos()), r, panicSite())
 		}
 	}()
 	f()
+}
+
+// panicSite names the innermost function of this module on the stack
+// of a panic being recovered, for the -debug log of an internal error.
+func panicSite() string {
+	pcs := make([]uintptr, 64)
+	frames := runtime.CallersFrames(pcs[:runtime.Callers(3, pcs)])
+	for {
+		f, more := frames.Next()
+		if strings.HasPrefix(f.Function, "github.com/overfact/overfact/") {
+			return fmt.Sprintf(" (in %s, %s:%d)", f.Function[strings.LastIndex(f.Function, "/")+1:], filepath.Base(f.File), f.Line)
+		}
+		if !more {
+			return ""
+		}
+	}
 }
 
 func funcBody(n ast.Node) *ast.BlockStmt {

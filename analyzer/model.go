@@ -24,7 +24,11 @@ const modelMaxNodes = vm.DefaultMaxNodes
 // evalModel runs the value model over the function.
 func (fc *fnCtx) evalModel() *vm.Result {
 	res := vm.Evaluate(fc.c.pass.TypesInfo, fc.node, vm.Options{Callee: fc.modelCallee, LogCallee: fc.logCallee, LogGamma: fc.c.isLgammaCall, MaxNodes: modelMaxNodes})
-	if res.Capped && debug {
+	switch {
+	case !debug || !res.Capped:
+	case res.Failed != "":
+		fmt.Fprintf(debugOut, "overfact: %s: value model failed (%s); the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), res.Failed)
+	default:
 		fmt.Fprintf(debugOut, "overfact: %s: value model stopped at %d syntax nodes; the rest of the function is not modelled\n", fc.c.pass.Fset.Position(fc.node.Pos()), modelMaxNodes)
 	}
 	return res

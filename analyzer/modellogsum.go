@@ -453,5 +453,12 @@ func (fc *fnCtx) inVariableLoop(loops []*ast.ForStmt, st ast.Stmt) bool {
 // isZeroConst reports whether e is the constant 0.
 func isZeroConst(info *types.Info, e ast.Expr) bool {
 	tv, ok := info.Types[e]
-	return ok && tv.Value != nil && constant.Sign(tv.Value) == 0
+	if !ok || tv.Value == nil {
+		return false
+	}
+	switch tv.Value.Kind() {
+	case constant.Int, constant.Float, constant.Complex:
+		return constant.Sign(tv.Value) == 0
+	}
+	return false // a bool or string constant (x == true) is no number
 }

@@ -4,6 +4,9 @@ import (
 	"bytes"
 	"fmt"
 	"go/ast"
+	"go/parser"
+	"go/token"
+	"go/types"
 	"os"
 	"path/filepath"
 	"strings"
@@ -87,7 +90,28 @@ func fine(n int) int64 {
 	}
 	defer func() { debugOut, debug, testHook = oldOut, oldDebug, nil }()
 	analysistest.Run(t, writePkg(t, "boom", src), Analyzer, "boom")
-	if !strings.Contains(log.String(), "skipped function after internal error: injected failure") {
+	if !strings.Contains(log.String(), "skipped function after internal error: injected failure (in analyzer.") {
 		t.Errorf("debug log = %q", log.String())
+	}
+}
+
+// TestZeroConstKinds: a bool constant beside numeric ones (found :=
+// false, next to sum := 0.0) is not asked for its sign; gonum's lapack
+// and graph packages lost eleven functions to that panic.
+func TestZeroConstKinds(t *testing.T) {
+	fset := token.NewFileSet()
+	f, err := parser.ParseFile(fset, "z.go", "package z\nvar a, b, c, d, e = false, 0, 0.0, 1, \"\"\n", 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	info := &types.Info{Types: make(map[ast.Expr]types.TypeAndValue)}
+	if _, err := new(types.Config).Check("z", fset, []*ast.File{f}, info); err != nil {
+		t.Fatal(err)
+	}
+	vals := f.Decls[0].(*ast.GenDecl).Specs[0].(*ast.ValueSpec).Values
+	for i, want := range []bool{false, true, true, false, false} {
+		if got := isZeroConst(info, vals[i]); got != want {
+			t.Errorf("isZeroConst(%s) = %v", types.ExprString(vals[i]), got)
+		}
 	}
 }

@@ -10,7 +10,11 @@
 # mathx/beta.go and stats/tdist.go golang.org/x/perf/internal/stats
 # copies): mathx.Beta, the coefficient bt of mathx.BetaInc reproduced
 # from its source line (with b = a and x = 0.4995), and
-# stats.TDist.PDF at 0.
+# stats.TDist.PDF at 0. Also the exponentials of log-gamma sums summed
+# in another function: gonum's combin.GeneralizedBinomial (exp of
+# LogGeneralizedBinomial) and mathext.Beta (exp of internal Lbeta),
+# go-moremath's mathx.Choose past its table (exp of lchoose) and
+# stats.HypergeometicDist.PMF (exp of three Lchoose values).
 #
 #   scripts/lgamma-digits-probe.sh     # seconds, after the module download
 set -euo pipefail
@@ -30,6 +34,8 @@ import (
 
 	"github.com/aclements/go-moremath/mathx"
 	"github.com/aclements/go-moremath/stats"
+	"gonum.org/v1/gonum/mathext"
+	"gonum.org/v1/gonum/stat/combin"
 	"gonum.org/v1/gonum/stat/distuv"
 )
 
@@ -48,6 +54,13 @@ func main() {
 	for _, a := range []float64{1e3, 1e5, 1e7, 1e9} {
 		fmt.Printf("beta %g %.17g\n", a, mathx.Beta(a, 3.5))
 		fmt.Printf("tpdf %g %.17g\n", a, stats.TDist{V: a}.PDF(0))
+	}
+	for _, n := range []float64{1e3, 1e5, 1e7} {
+		fmt.Printf("gbinom %g %.17g\n", n, combin.GeneralizedBinomial(n, 20))
+		fmt.Printf("choose %g %.17g\n", n, mathx.Choose(int(n), 20))
+		fmt.Printf("gbeta %g %.17g\n", n, mathext.Beta(n, 3.5))
+		h := stats.HypergeometicDist{N: int(n), K: int(n) / 2, Draws: 10}
+		fmt.Printf("hyper %g %.17g\n", n, h.PMF(5))
 	}
 	for _, a := range []float64{1e3, 1e5, 1e7} {
 		// BetaInc's coefficient, as mathx/beta.go:44 writes it.
@@ -78,8 +91,18 @@ for line in open(sys.argv[1]):
         t = mpmath.mpf(0.4995)
         ref = mpmath.exp(mpmath.loggamma(2 * x) - 2 * mpmath.loggamma(x) + x * mpmath.log(t) + x * mpmath.log(1 - t))
         what = 'BetaInc coefficient bt, a = b = %s' % mpmath.nstr(x, 3)
+    elif kind in ('gbinom', 'choose'):
+        ref = mpmath.binomial(x, 20)
+        what = '%s(%s, 20)' % ('combin.GeneralizedBinomial' if kind == 'gbinom' else 'mathx.Choose', mpmath.nstr(x, 3))
+    elif kind == 'gbeta':
+        ref = mpmath.beta(x, mpmath.mpf(3.5))
+        what = 'mathext.Beta(%s, 3.5)' % mpmath.nstr(x, 3)
+    elif kind == 'hyper':
+        big = int(x)
+        ref = mpmath.binomial(big // 2, 5) * mpmath.binomial(big - big // 2, 5) / mpmath.binomial(big, 10)
+        what = 'HypergeometicDist{N: %s, K: N/2, Draws: 10}.PMF(5)' % mpmath.nstr(x, 3)
     else:
         ref = mpmath.exp(mpmath.loggamma((x + 1) / 2) - mpmath.loggamma(x / 2)) / mpmath.sqrt(x * mpmath.pi)
         what = 'stats.TDist{V: %s}.PDF(0)' % mpmath.nstr(x, 3)
-    print('%-40s relative error %s' % (what, mpmath.nstr(abs(v - ref) / ref, 3)))
+    print('%-52s relative error %s' % (what, mpmath.nstr(abs(v - ref) / ref, 3)))
 PY

@@ -1,6 +1,7 @@
 package valuemodel
 
 import (
+	"fmt"
 	"go/ast"
 	"go/constant"
 	"go/token"
@@ -51,8 +52,12 @@ type Result struct {
 	Logs map[ast.Expr]*Term
 	// Exprs holds, for each variable met, an expression that reads it.
 	Exprs map[Sym]ast.Expr
-	// Capped reports that the evaluation stopped at Options.MaxNodes.
+	// Capped reports that the evaluation stopped at Options.MaxNodes,
+	// or failed (Failed).
 	Capped bool
+	// Failed, when not empty, is the internal failure that stopped the
+	// evaluation: the result is empty and Capped is set.
+	Failed string
 }
 
 // Loop summarises a counting loop: trip t runs from 0 to Count−1 and
@@ -153,7 +158,7 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	res = &Result{Values: make(map[ast.Expr]*Term), Logs: make(map[ast.Expr]*Term), Exprs: make(map[Sym]ast.Expr)}
 	defer func() {
 		if r := recover(); r != nil {
-			res = &Result{Values: map[ast.Expr]*Term{}, Logs: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true}
+			res = &Result{Values: map[ast.Expr]*Term{}, Logs: map[ast.Expr]*Term{}, Exprs: map[Sym]ast.Expr{}, Capped: true, Failed: fmt.Sprint(r)}
 		}
 	}()
 	if opts.MaxNodes <= 0 {

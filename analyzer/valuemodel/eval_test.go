@@ -312,6 +312,13 @@ func TestBounded(t *testing.T) {
 	if res := Evaluate(info, &ast.FuncDecl{}, Options{}); res == nil {
 		t.Error("nil result for an empty declaration")
 	}
+	// An internal failure (here a caller's callee hook that panics)
+	// leaves the function unmodelled and says why.
+	info, fd = load(t, "func g(n int) int { return n }\nfunc f(n int) int { return g(n) * 2 }", "f")
+	res = Evaluate(info, fd, Options{Callee: func(*ast.CallExpr, []*Term) *Term { panic("hook failed") }})
+	if !res.Capped || res.Failed != "hook failed" || len(res.Values) != 0 {
+		t.Errorf("failed evaluation: capped %v, failed %q, %d values", res.Capped, res.Failed, len(res.Values))
+	}
 }
 
 // A loop that can stop early is marked, so that its trip count is
