@@ -9,6 +9,7 @@ import (
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
 )
 
 // A sum of binomial coefficients whose logarithm is the value wanted
@@ -70,9 +71,36 @@ func (fc *fnCtx) modelLogSum(res *vm.Result) {
 		}
 		msg := fmt.Sprintf("math.%s of %s, a sum of C(%s, %s) accumulated in %s: its terms reach C(%s, ⌊%s/2⌋), which %s for %s ≥ %d (C(%d, %d) ≈ %s is the largest central one that fits), so the sum and its logarithm are +Inf although the logarithm of the sum is at most %s·ln 2%s",
 			name, obj.Name(), bt.n, bt.k, t.typeName(), bt.n, parenText(bt.n), verb(t), bt.n, central.FirstBad, central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), parenText(bt.n), clause)
-		fc.report(finding{node: call, cat: catRatio, msg: msg})
+		m := &fixes.Match{Shape: fixes.ShapeLogSum, Node: call, Acc: obj, Func: fc.node, Result: obj.Type(), Binomials: fc.binomialCalls(res)}
+		fc.report(finding{node: call, cat: catRatio, msg: msg, match: m})
 		return true
 	})
+}
+
+// binomialCalls returns the calls in the function of float functions
+// whose value is C(n, k), by their binomial fact or their value fact,
+// with their operands n and k.
+func (fc *fnCtx) binomialCalls(res *vm.Result) []fixes.BinomialCall {
+	var out []fixes.BinomialCall
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok {
+			return false
+		}
+		call, ok := n.(*ast.CallExpr)
+		if !ok {
+			return true
+		}
+		if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(call)); !ok || !t.Float {
+			return true
+		}
+		if fact := fc.c.factOf(fc.c.calleeOf(call)); fact != nil && kindOfName(fact.Kind) == kindBinomial && fact.Param < len(call.Args) && fact.Param2 >= 0 && fact.Param2 < len(call.Args) {
+			out = append(out, fixes.BinomialCall{Call: call, N: call.Args[fact.Param], K: call.Args[fact.Param2]})
+		} else if f := vm.Recognise(res.Values[call]); f.Kind == vm.Binomial && len(call.Args) == 2 {
+			out = append(out, fixes.BinomialCall{Call: call, N: call.Args[0], K: call.Args[1]})
+		}
+		return true
+	})
+	return out
 }
 
 // parenText wraps s in parentheses unless it is one name.

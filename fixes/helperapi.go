@@ -59,6 +59,17 @@ func (p Product) MulFloat(x float64) Product               { panic("") }
 func (p Product) QuoFloat(x float64) Product               { panic("") }
 func (p Product) Neg() Product                             { panic("") }
 func (p Product) Float64() float64                         { panic("") }
+func ChooseProduct(v, n, k float64) Product                { panic("") }
+
+type Sum struct{ v float64 }
+
+func SumOf(x float64) Sum                                  { panic("") }
+func (s Sum) Add(p Product) Sum                            { panic("") }
+func (s Sum) AddFloat(x float64) Sum                       { panic("") }
+func (s Sum) Float64() float64                             { panic("") }
+func (s Sum) Log() float64                                 { panic("") }
+func (s Sum) Log2() float64                                { panic("") }
+func (s Sum) Log10() float64                               { panic("") }
 `
 
 // fmtAPI stands in for package fmt when a range guard adds the import to a

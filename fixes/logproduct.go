@@ -388,6 +388,9 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 	case *ast.Ident:
 		return lp.isPart(x)
 	case *ast.CallExpr:
+		if in := lp.sameTypeConv(x); in != nil {
+			return lp.chainableIn(in, calls)
+		}
 		return calls && lp.isLeaf(x)
 	case *ast.ParenExpr:
 		return lp.chainableIn(x.X, calls)
@@ -402,7 +405,7 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 // isLeaf reports whether e is a call of math.Pow, math.Gamma or
 // math.Exp, or of a factorial function (Match.Factorials).
 func (lp *logProducts) isLeaf(e ast.Expr) bool {
-	if lp.factorialCall(e) != nil {
+	if lp.factorialCall(e) != nil || lp.binomialCall(e) != nil {
 		return true
 	}
 	c, fn := lp.b.callOf(e)
@@ -419,6 +422,46 @@ func (lp *logProducts) factorialCall(e ast.Expr) *FactorialCall {
 	return nil
 }
 
+// sameTypeConv returns x of a conversion float64(x) whose x is a
+// float64 already (a conversion that changes nothing), or nil.
+func (lp *logProducts) sameTypeConv(c *ast.CallExpr) ast.Expr {
+	info := lp.b.pass.TypesInfo
+	if tv, ok := info.Types[c.Fun]; !ok || !tv.IsType() || len(c.Args) != 1 {
+		return nil
+	}
+	if !types.Identical(info.TypeOf(c), types.Typ[types.Float64]) || !types.Identical(info.TypeOf(c.Args[0]), types.Typ[types.Float64]) {
+		return nil
+	}
+	return c.Args[0]
+}
+
+// binomialCall returns the match's binomial call that e is, or nil.
+func (lp *logProducts) binomialCall(e ast.Expr) *BinomialCall {
+	for i, f := range lp.b.m.Binomials {
+		if f.Call == ast.Unparen(e) {
+			return &lp.b.m.Binomials[i]
+		}
+	}
+	return nil
+}
+
+// count writes a count as a float64 operand of a helper call.
+func (lp *logProducts) count(e ast.Expr) string {
+	if types.Identical(lp.b.pass.TypesInfo.TypeOf(e), types.Typ[types.Float64]) {
+		return lp.spliced(e)
+	}
+	return "float64(" + lp.spliced(e) + ")"
+}
+
+// callText writes a call as the code writes it, its arguments spliced.
+func (lp *logProducts) callText(c *ast.CallExpr) string {
+	args := make([]string, len(c.Args))
+	for i, a := range c.Args {
+		args[i] = lp.spliced(a)
+	}
+	return lp.b.copyText(c.Fun) + "(" + strings.Join(args, ", ") + ")"
+}
+
 // leaf writes a call of math.Pow, math.Gamma or math.Exp as the
 // Product that holds its value, and a factorial function's call as the
 // Product of the value it returns with the count's ln n! beside it; ""
@@ -428,22 +471,17 @@ func (lp *logProducts) leaf(e ast.Expr) string {
 		return ""
 	}
 	if f := lp.factorialCall(e); f != nil {
-		count := "float64(" + lp.spliced(f.Arg) + ")"
-		if types.Identical(lp.b.pass.TypesInfo.TypeOf(f.Arg), types.Typ[types.Float64]) {
-			count = lp.spliced(f.Arg)
-			if _, ok := ast.Unparen(f.Arg).(*ast.Ident); !ok && f.Off != 0 {
-				count = "(" + count + ")"
-			}
+		count := lp.count(f.Arg)
+		if _, ok := ast.Unparen(f.Arg).(*ast.Ident); !ok && f.Off != 0 && !strings.HasPrefix(count, "float64(") {
+			count = "(" + count + ")"
 		}
 		if f.Off != 0 {
 			count = fmt.Sprintf("%s%+d", count, f.Off)
 		}
-		args := make([]string, len(f.Call.Args))
-		for i, a := range f.Call.Args {
-			args[i] = lp.spliced(a)
-		}
-		call := lp.b.copyText(f.Call.Fun) + "(" + strings.Join(args, ", ") + ")"
-		return lp.pkg + ".FactorialProduct(" + call + ", " + count + ")"
+		return lp.pkg + ".FactorialProduct(" + lp.callText(f.Call) + ", " + count + ")"
+	}
+	if f := lp.binomialCall(e); f != nil {
+		return lp.pkg + ".ChooseProduct(" + lp.callText(f.Call) + ", " + lp.count(f.N) + ", " + lp.count(f.K) + ")"
 	}
 	c, fn := lp.b.callOf(e)
 	if fn.Name() == "Pow" {
@@ -472,6 +510,9 @@ func (lp *logProducts) chain(e ast.Expr) string {
 	case *ast.Ident:
 		return x.Name
 	case *ast.CallExpr:
+		if in := lp.sameTypeConv(x); in != nil {
+			return lp.chain(in)
+		}
 		return lp.leaf(x)
 	case *ast.ParenExpr:
 		return lp.chain(x.X)

@@ -56,6 +56,7 @@ const (
 	ShapeLoopGuard              // an integer product loop whose product, times a positive constant, is the function's result  Loop: the loop; Param, FirstBad: the range guard put before it (see buildLoopGuard)
 	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared (r, c of C(r+c, r) with PathCount); Func (see buildPascalGuard)
 	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
+	ShapeLogSum                 // math.Log(s) of a float sum s += term   Node: the math.Log, Log2 or Log10 call; Acc: s; Binomials (see buildLogSum)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.
@@ -107,6 +108,11 @@ type Match struct {
 	// lgamma.FactorialProduct(call, count), the code's own value with
 	// ln count! beside it.
 	Factorials []FactorialCall
+	// Binomials, for ShapeLogSum, are the calls among the summed terms'
+	// factors of functions that return C(N, K), as the analyzer's facts
+	// say: the sum carries each as lgamma.ChooseProduct(call, N, K), the
+	// code's own value with ln C(N, K) beside it.
+	Binomials []BinomialCall
 	// IntBinomials maps the calls in Node of integer functions whose
 	// value is C(n, k) in a form known outside 0 ≤ k ≤ n too to their
 	// operands and form. A float expression kept as written where the
@@ -158,6 +164,13 @@ type FactorialCall struct {
 	Call *ast.CallExpr
 	Arg  ast.Expr
 	Off  int64
+}
+
+// A BinomialCall is a call of a function that returns C(N, K), as the
+// analyzer's facts say.
+type BinomialCall struct {
+	Call *ast.CallExpr
+	N, K ast.Expr
 }
 
 // IntBinomial is a call of an integer binomial function

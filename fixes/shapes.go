@@ -79,6 +79,7 @@ func init() {
 		ShapePowOverGamma:     {"power over gamma", buildTerm, family{float: "PowOverGamma"}, 3, powOverGammaFactors},
 		ShapeLogSpaceTerm:     {"series term over running products", buildLogSpaceTerm, family{float: "ProductOf"}, 0, nil},
 		ShapeProductChain:     {"product of powers and gamma values", buildProductChain, family{float: "GammaProduct"}, 0, nil},
+		ShapeLogSum:           {"logarithm of a sum", buildLogSum, family{float: "SumOf"}, 0, nil},
 	}
 }
 

@@ -112,6 +112,26 @@ func FactorialProduct(v, n float64) Product {
 	return Product{v: v, l: lnAbsGammaDD(n + 1)}.mark(false)
 }
 
+// ChooseProduct returns the product holding C(n, k), whose float64
+// value v the code formed itself (a binomial function's result, +Inf
+// where its running product left float64), with ln C(n, k) =
+// ln n! − ln k! − ln (n−k)! beside it, so that a binomial past float64
+// keeps its value in a product or a sum (Sum) that brings it back. n
+// and k are counts as float64s; where they are not integers with
+// 0 ≤ k ≤ n (a function that takes fractions or k > n computes
+// something else there) the product holds v alone, as ProductOf(v) does.
+//
+// Special cases are:
+//
+//	ChooseProduct(v, n, k) holds v alone for k < 0, k > n, a fraction, ±Inf or NaN
+//	ChooseProduct(v, n, k) holds NaN for v NaN
+func ChooseProduct(v, n, k float64) Product {
+	if k < 0 || k > n || n != math.Trunc(n) || k != math.Trunc(k) || math.IsInf(n, 0) || math.IsNaN(v) {
+		return ProductOf(v)
+	}
+	return Product{v: v, l: lnAbsGammaDD(n + 1).sub(lnAbsGammaDD(k + 1)).sub(lnAbsGammaDD(n - k + 1))}.mark(false)
+}
+
 // Mul returns the product p·q; its float64 value is p's times q's, as
 // the expression p * q forms it.
 func (p Product) Mul(q Product) Product {
