@@ -52,3 +52,60 @@ func TestPascalRuleThresholds(t *testing.T) {
 		}
 	}
 }
+
+// triangleFirstWrongRow fills a Stirling triangle in the machine type T,
+// as the code the category reports does, beside the same triangle in
+// math/big, and returns the first row holding an entry that differs.
+func triangleFirstWrongRow[T int32 | int64 | uint64](tr thresholds.Triangle, limit int) int64 {
+	prev, exact := []T{1}, []*big.Int{big.NewInt(1)}
+	for i := 1; i <= limit; i++ {
+		row, ex := make([]T, i+1), make([]*big.Int, i+1)
+		for j := 0; j <= i; j++ {
+			w := j
+			if tr == thresholds.StirlingFirst {
+				w = i - 1
+			}
+			ex[j] = new(big.Int)
+			if j < i {
+				row[j] = T(w) * prev[j]
+				ex[j].Mul(big.NewInt(int64(w)), exact[j])
+			}
+			if j > 0 {
+				row[j] += prev[j-1]
+				ex[j].Add(ex[j], exact[j-1])
+			}
+			var got big.Int
+			if _, unsigned := any(row[j]).(uint64); unsigned {
+				got.SetUint64(uint64(row[j]))
+			} else {
+				got.SetInt64(int64(row[j]))
+			}
+			if got.Cmp(ex[j]) != 0 {
+				return int64(i)
+			}
+		}
+		prev, exact = row, ex
+	}
+	return -1
+}
+
+// TestTriangleThresholds checks the rows the Stirling-number messages
+// name (stirlingnumbers.go) against triangles filled in the machine type
+// and in math/big.
+func TestTriangleThresholds(t *testing.T) {
+	for _, tr := range []thresholds.Triangle{thresholds.StirlingSecond, thresholds.StirlingFirst} {
+		for name, got := range map[string]int64{
+			"int32":  triangleFirstWrongRow[int32](tr, 80),
+			"int64":  triangleFirstWrongRow[int64](tr, 80),
+			"uint64": triangleFirstWrongRow[uint64](tr, 80),
+		} {
+			num, ok := thresholds.Named(name, nil)
+			if !ok {
+				t.Fatalf("no type %s", name)
+			}
+			if want := thresholds.TriangleLimitRow(tr, num); got != want {
+				t.Errorf("triangle %d, %s: first wrong at row %d, the threshold says %d", tr, name, got, want)
+			}
+		}
+	}
+}
