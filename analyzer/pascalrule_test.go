@@ -7,6 +7,14 @@ import (
 	"github.com/overfact/overfact/analyzer/thresholds"
 )
 
+// machineBig returns a machine integer's value as math/big holds it.
+func machineBig[T int32 | int64 | uint64](v T) *big.Int {
+	if _, unsigned := any(v).(uint64); unsigned {
+		return new(big.Int).SetUint64(uint64(v))
+	}
+	return big.NewInt(int64(v))
+}
+
 // pascalFirstWrongRow fills Pascal's triangle in the machine type T,
 // as the category's code does, and returns the first row holding an
 // entry that differs from the exact C(i, j) of math/big.
@@ -19,13 +27,7 @@ func pascalFirstWrongRow[T int32 | int64 | uint64](limit int) int64 {
 			row[j] = prev[j-1] + prev[j]
 		}
 		for j, v := range row {
-			var got big.Int
-			if _, unsigned := any(v).(uint64); unsigned {
-				got.SetUint64(uint64(v))
-			} else {
-				got.SetInt64(int64(v))
-			}
-			if got.Cmp(new(big.Int).Binomial(int64(i), int64(j))) != 0 {
+			if machineBig(v).Cmp(new(big.Int).Binomial(int64(i), int64(j))) != 0 {
 				return int64(i)
 			}
 		}
@@ -74,13 +76,7 @@ func triangleFirstWrongRow[T int32 | int64 | uint64](tr thresholds.Triangle, lim
 				row[j] += prev[j-1]
 				ex[j].Add(ex[j], exact[j-1])
 			}
-			var got big.Int
-			if _, unsigned := any(row[j]).(uint64); unsigned {
-				got.SetUint64(uint64(row[j]))
-			} else {
-				got.SetInt64(int64(row[j]))
-			}
-			if got.Cmp(ex[j]) != 0 {
+			if machineBig(row[j]).Cmp(ex[j]) != 0 {
 				return int64(i)
 			}
 		}

@@ -11,7 +11,7 @@ import (
 
 // scan is what the syntactic prefilter found in a function body.
 type scan struct {
-	product   bool // a *= or x = x*y: a product loop may be here
+	product   bool // a *= or x = x*y (or t = append(t, x*y)): a product loop may be here
 	loop      bool // a for or range statement
 	callMul   bool // a multiplication with a call operand: recursion may be here
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
@@ -57,7 +57,7 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				cur.loop = true
 			}
 		case *ast.AssignStmt:
-			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && isMulOrQuo(n.Rhs[0])) {
+			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && (isMulOrQuo(n.Rhs[0]) || appendsProduct(n.Rhs[0]))) {
 				cur.product = true
 			}
 		case *ast.BinaryExpr:
@@ -179,6 +179,17 @@ func funcName(fun ast.Expr) string {
 		return f.Sel.Name
 	}
 	return ""
+}
+
+// appendsProduct reports whether e is append(t, x*y), the step of a
+// table grown by append (factorialtables.go).
+func appendsProduct(e ast.Expr) bool {
+	call, ok := ast.Unparen(e).(*ast.CallExpr)
+	if !ok || len(call.Args) != 2 {
+		return false
+	}
+	id, ok := call.Fun.(*ast.Ident)
+	return ok && id.Name == "append" && isMulOrQuo(call.Args[1])
 }
 
 func isMulOrQuo(e ast.Expr) bool {
