@@ -6,6 +6,7 @@ import (
 	"go/token"
 	"go/types"
 
+	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
@@ -159,12 +160,8 @@ type partUpdates struct {
 func (fc *fnCtx) partsUpdates(loop ast.Stmt, sum, den types.Object) partUpdates {
 	c := fc.c
 	var u partUpdates
-	var body *ast.BlockStmt
-	switch l := loop.(type) {
-	case *ast.ForStmt:
-		body = l.Body
-	case *ast.RangeStmt:
-		body = l.Body
+	body := loopBody(loop)
+	if l, ok := loop.(*ast.RangeStmt); ok {
 		if id, ok := ast.Unparen(l.X).(*ast.Ident); ok && l.Value != nil && c.objOf(id) != nil {
 			u.over, u.elem = id.Name, src(l.Value)
 		}
@@ -231,4 +228,152 @@ func (fc *fnCtx) collectionAssigned(a, b ast.Stmt) bool {
 		}
 	}
 	return false
+}
+
+// checkBinomialPartsLoops reports an integer multinomial coefficient
+// built as a product of binomial coefficients over a loop's parts,
+//
+//	for _, c := range counts {
+//		total += c
+//		res *= binom(total, c)
+//	}
+//
+// (or res = res * binom(total+c, c) before total += c): after the loop
+// res is (Σ parts)!/Π part! (DLMF 26.4.2, from memory, as the product of
+// C(s_i, c_i) over the running sums s_i; common practice), where binom
+// is a function whose fact says it computes C(n, k). Every factor may fit
+// while the product does not: with parts of 1 the factors are 1, 2, …,
+// and the product is N! for a total N, which leaves the type from
+// thresholds.Factorial on; with two equal halves it is C(N, ⌊N/2⌋),
+// from thresholds.CentralBinomial on. The product then wraps silently.
+// Floats are left alone: their product is +Inf only where the
+// multinomial is past float64, which is IEEE's answer. No fix: no
+// integer type holds the multinomial past the threshold.
+func (fc *fnCtx) checkBinomialPartsLoops() {
+	c := fc.c
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if _, lit := n.(*ast.FuncLit); lit {
+			return false
+		}
+		body := loopBody(n)
+		if body == nil {
+			return true
+		}
+		for i, st := range body.List {
+			acc, call, ok := fc.productStep(st)
+			if !ok {
+				continue
+			}
+			t, ok := c.numOf(acc.Type())
+			if !ok || t.Float {
+				continue
+			}
+			ff := c.factOf(c.calleeOf(call))
+			if ff == nil || kindOfName(ff.Kind) != kindBinomial || ff.Offset != 0 || ff.Param2 < 0 || max(ff.Param, ff.Param2) >= len(call.Args) {
+				continue
+			}
+			nArg, part := call.Args[ff.Param], fc.stripConv(call.Args[ff.Param2])
+			total := fc.runningTotal(body.List, i, nArg, part)
+			if total == nil || total == acc {
+				continue
+			}
+			first := thresholds.Factorial(t.Num)
+			halves := thresholds.CentralBinomial(t.Num)
+			r := fc.rangeOf(fc.stripConv(nArg))
+			if r.IsEmpty() || r.Hi < first.FirstBad || ff.Safe && ff.Hi < first.FirstBad {
+				continue
+			}
+			clause, _ := verdict(total.Name(), r, first.FirstBad)
+			msg := fmt.Sprintf("loop multiplies %s into %s over the parts %s in %s: the product is the multinomial coefficient (Σ parts)!/Π part!, which wraps where it leaves %s: from %s = %d with parts of 1, whose factors 1, 2, … all fit, where it is %d! (%d! ≈ %s is the largest that fits), and from %s = %d with two equal parts, where it is C(%d, %d)",
+				src(call), acc.Name(), src(part), t.typeName(), t.Name, total.Name(), first.FirstBad, first.FirstBad, first.FirstBad-1, first.LastGoodApprox(),
+				total.Name(), halves.FirstBad, halves.FirstBad, halves.FirstBad/2)
+			fc.report(finding{node: st, cat: catRatio, msg: msg + clause, related: c.relatedDef(c.calleeOf(call).Name(), c.calleeOf(call).Pos())})
+		}
+		return true
+	})
+}
+
+// productStep matches st as acc *= call or acc = acc * call (either
+// order), a conversion of the call allowed.
+func (fc *fnCtx) productStep(st ast.Stmt) (types.Object, *ast.CallExpr, bool) {
+	as, ok := st.(*ast.AssignStmt)
+	if !ok || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return nil, nil, false
+	}
+	acc := fc.c.objOf(as.Lhs[0])
+	if acc == nil {
+		return nil, nil, false
+	}
+	rhs := as.Rhs[0]
+	if as.Tok == token.ASSIGN {
+		b, ok := ast.Unparen(rhs).(*ast.BinaryExpr)
+		if !ok || b.Op != token.MUL {
+			return nil, nil, false
+		}
+		switch acc {
+		case fc.c.objOf(b.X):
+			rhs = b.Y
+		case fc.c.objOf(b.Y):
+			rhs = b.X
+		default:
+			return nil, nil, false
+		}
+	} else if as.Tok != token.MUL_ASSIGN {
+		return nil, nil, false
+	}
+	call, ok := fc.stripConv(rhs).(*ast.CallExpr)
+	return acc, call, ok
+}
+
+// runningTotal returns the variable total of a statement total += part
+// among stmts when nArg is the running sum including the part at stmts[at]:
+// total itself where the addition comes before, total + part where it
+// comes after (conversions aside, the part as written). total must not
+// be assigned otherwise in stmts.
+func (fc *fnCtx) runningTotal(stmts []ast.Stmt, at int, nArg, part ast.Expr) types.Object {
+	var total types.Object
+	after := false
+	for j, st := range stmts {
+		as, ok := st.(*ast.AssignStmt)
+		if !ok || as.Tok != token.ADD_ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 || src(fc.stripConv(as.Rhs[0])) != src(part) {
+			continue
+		}
+		if total != nil {
+			return nil
+		}
+		total, after = fc.c.objOf(as.Lhs[0]), j > at
+	}
+	if total == nil {
+		return nil
+	}
+	for _, st := range stmts {
+		other := false
+		assigned.EachTarget(st, nil, func(e ast.Expr, m ast.Node) bool {
+			if fc.c.objOf(e) == total {
+				as, ok := m.(*ast.AssignStmt)
+				other = !ok || as.Tok != token.ADD_ASSIGN || src(fc.stripConv(as.Rhs[0])) != src(part)
+			}
+			return !other
+		})
+		if other {
+			return nil
+		}
+	}
+	n := fc.stripConv(nArg)
+	if !after {
+		if fc.c.objOf(n) != total {
+			return nil
+		}
+		return total
+	}
+	b, ok := n.(*ast.BinaryExpr)
+	if !ok || b.Op != token.ADD {
+		return nil
+	}
+	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
+		if fc.c.objOf(fc.stripConv(pair[0])) == total && src(fc.stripConv(pair[1])) == src(part) {
+			return total
+		}
+	}
+	return nil
 }

@@ -1,0 +1,82 @@
+package factorialratio
+
+// Multinomial coefficients as products of binomial coefficients over a
+// loop's parts (analyzer/modelmultinomial.go), as a seed bank counts the
+// ways to share seed lots among its trays. The thresholds are checked
+// against products formed in the machine type and math/big by
+// TestBinomialPartsThresholds.
+
+// lotChoose is C(n, k) by the multiplicative loop.
+func lotChoose(n, k int64) int64 { // want lotChoose:`binomial of parameter 0`
+	r := int64(1)
+	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop`
+		r = r * (n - k + i) / i
+	}
+	return r
+}
+
+// LotShares counts the ways to share the lots among trays, the running
+// total updated first.
+func LotShares(lots []int64) int64 {
+	ways, total := int64(1), int64(0)
+	for _, l := range lots {
+		total += l
+		ways *= lotChoose(total, l) // want `loop multiplies lotChoose\(total, l\) into ways over the parts l in int64: the product is the multinomial coefficient \(Σ parts\)!/Π part!, which wraps where it leaves int64: from total = 21 with parts of 1, whose factors 1, 2, … all fit, where it is 21! \(20! ≈ 2\.43e18 is the largest that fits\), and from total = 67 with two equal parts, where it is C\(67, 33\)`
+	}
+	return ways
+}
+
+// TrayShares takes the sum after the product, by index.
+func TrayShares(sizes []int) int64 {
+	ways := int64(1)
+	seen := 0
+	for i := 0; i < len(sizes); i++ {
+		ways = ways * lotChoose(int64(seen+sizes[i]), int64(sizes[i])) // want `loop multiplies lotChoose\(int64\(seen\+sizes\[i\]\), int64\(sizes\[i\]\)\) into ways over the parts sizes\[i\] in int64: the product is the multinomial coefficient`
+		seen += sizes[i]
+	}
+	return ways
+}
+
+// FloatShares keeps the product in float64, whose +Inf past the type is
+// IEEE's answer: silent.
+func FloatShares(lots []int64) float64 {
+	ways, total := 1.0, int64(0)
+	for _, l := range lots {
+		total += l
+		ways *= float64(lotChoose(total, l))
+	}
+	return ways
+}
+
+// PairShares picks pairs, not the parts: no multinomial, silent.
+func PairShares(lots []int64) int64 {
+	ways, total := int64(1), int64(0)
+	for _, l := range lots {
+		total += l
+		ways *= lotChoose(total, 2)
+	}
+	return ways
+}
+
+// ModShares reduces the product modulo a prime: silent.
+func ModShares(lots []int64) int64 {
+	ways, total := int64(1), int64(0)
+	for _, l := range lots {
+		total += l
+		ways = ways * lotChoose(total, l) % 1_000_000_007
+	}
+	return ways
+}
+
+// FewShares shares at most 20 seeds in all: silent.
+func FewShares(lots [4]int64) int64 {
+	ways, total := int64(1), int64(0)
+	for _, l := range lots {
+		total += l
+		if l < 0 || total > 20 {
+			return 0
+		}
+		ways *= lotChoose(total, l)
+	}
+	return ways
+}
