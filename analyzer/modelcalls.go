@@ -582,6 +582,7 @@ func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
 	var res *vm.Result
 	for _, root := range fc.callRoots() {
 		fc.checkLoopMultinomial(root)
+		fc.checkBinomialProduct(root)
 		if res == nil {
 			res = model()
 		}

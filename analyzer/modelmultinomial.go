@@ -5,7 +5,9 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"strings"
 
+	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
@@ -376,4 +378,115 @@ func (fc *fnCtx) runningTotal(stmts []ast.Stmt, at int, nArg, part ast.Expr) typ
 		}
 	}
 	return nil
+}
+
+// checkBinomialProduct reports an integer product of binomial
+// coefficients in one expression, binom(n, k) * binom(n-k, j) (a
+// trinomial) or any product of calls of functions whose fact says they
+// compute C(n, k), with arguments linear in at most three variables:
+// it wraps where the product leaves the type while every factor still
+// fits, which thresholds.ChooseProductWitness finds (the first such
+// input by its largest argument, confirmed with math/big). Floats are
+// left alone (+Inf past float64 is IEEE's answer), and so is a product
+// with other factors. No fix: no integer type holds the product there.
+func (fc *fnCtx) checkBinomialProduct(root ast.Expr) {
+	c := fc.c
+	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(root))
+	if !ok || t.Float || c.reportedWithin(root) {
+		return
+	}
+	var calls []*ast.CallExpr
+	var flatten func(e ast.Expr) bool
+	flatten = func(e ast.Expr) bool {
+		switch e := fc.stripConv(e).(type) {
+		case *ast.BinaryExpr:
+			return e.Op == token.MUL && flatten(e.X) && flatten(e.Y)
+		case *ast.CallExpr:
+			calls = append(calls, e)
+			return true
+		}
+		return false
+	}
+	if b, ok := fc.stripConv(root).(*ast.BinaryExpr); !ok || b.Op != token.MUL || !flatten(b) || len(calls) < 2 {
+		return
+	}
+	var vars []types.Object
+	index := func(v types.Object) int {
+		for i, w := range vars {
+			if w == v {
+				return i
+			}
+		}
+		vars = append(vars, v)
+		return len(vars) - 1
+	}
+	var lins [][2]linear
+	for _, call := range calls {
+		ff := c.factOf(c.calleeOf(call))
+		if ff == nil || kindOfName(ff.Kind) != kindBinomial || ff.Offset != 0 || ff.Param2 < 0 || max(ff.Param, ff.Param2) >= len(call.Args) {
+			return
+		}
+		n, ok1 := fc.linear(call.Args[ff.Param])
+		k, ok2 := fc.linear(call.Args[ff.Param2])
+		if !ok1 || !ok2 {
+			return
+		}
+		for _, l := range []linear{n, k} {
+			for _, term := range l.Terms {
+				index(term.Sym.Object)
+			}
+		}
+		lins = append(lins, [2]linear{n, k})
+	}
+	if len(vars) == 0 || len(vars) > 3 {
+		return
+	}
+	form := func(l linear) thresholds.IntForm {
+		f := thresholds.IntForm{C: l.C, Coef: make([]int64, len(vars))}
+		for _, term := range l.Terms {
+			f.Coef[index(term.Sym.Object)] += term.K
+		}
+		return f
+	}
+	var ns, ks []thresholds.IntForm
+	for _, nk := range lins {
+		ns, ks = append(ns, form(nk[0])), append(ks, form(nk[1]))
+	}
+	lo, hi := make([]int64, len(vars)), make([]int64, len(vars))
+	for i, v := range vars {
+		r := fc.varRange(root, v)
+		if r.IsEmpty() {
+			return
+		}
+		lo[i], hi[i] = r.Lo, r.Hi
+	}
+	x, factors, product, ok := thresholds.ChooseProductWitness(t.Num, ns, ks, lo, hi)
+	if !ok {
+		return
+	}
+	var at, vals []string
+	for i, v := range vars {
+		at = append(at, fmt.Sprintf("%s = %d", v.Name(), x[i]))
+	}
+	for i, f := range factors {
+		vals = append(vals, fmt.Sprintf("%s ≈ %s", src(calls[i]), thresholds.Approx(f)))
+	}
+	msg := fmt.Sprintf("product of binomial coefficients %s in %s wraps where it leaves %s while every factor fits: first at %s by the largest argument, where %s fit and the product ≈ %s does not",
+		src(root), t.typeName(), t.Name, strings.Join(at, ", "), strings.Join(vals, " and "), thresholds.Approx(product))
+	fc.report(finding{node: root, cat: catRatio, msg: msg})
+}
+
+// varRange returns the range of v at the first read of it within root.
+func (fc *fnCtx) varRange(root ast.Node, v types.Object) ranges.Interval {
+	var read *ast.Ident
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && read == nil && fc.c.pass.TypesInfo.Uses[id] == v {
+			read = id
+		}
+		return read == nil
+	})
+	if read == nil {
+		return ranges.Empty()
+	}
+	return fc.rangeOf(read)
 }

@@ -336,6 +336,7 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 					fc.judgePascalTable(as)
 					fc.judgeDerangementTable(as)
 					fc.judgeTriangleTable(as)
+					fc.judgeBellTable(as)
 				}
 			}
 		}
@@ -376,33 +377,54 @@ func (fc *fnCtx) changedAgain(block *ast.BlockStmt, as *ast.AssignStmt) bool {
 	return again
 }
 
-// judgePascalTable judges one table step (tableStep) t[I][J] = t[I−1][J−1] + t[I−1][J].
-func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
+// tableSum is a table step t[I][J] = t[…][…] + t[…][…] in an integer
+// type: the sum, its type, the assigned entry's parts and each term's
+// shifts (row, column) from it.
+type tableSum struct {
+	sum            *ast.BinaryExpr
+	t              numType
+	base, row, col ast.Expr
+	shifts         [2][2]int64
+}
+
+// tableSumOf reads as as a tableSum.
+func (fc *fnCtx) tableSumOf(as *ast.AssignStmt) (tableSum, bool) {
+	var ts tableSum
 	sum, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 	if !ok || sum.Op != token.ADD {
-		return
+		return ts, false
 	}
 	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(sum))
 	if !ok || t.Float {
-		return
+		return ts, false
 	}
 	base, row, col, ok := index2(as.Lhs[0])
 	if !ok {
-		return
+		return ts, false
 	}
-	var shifts [2][2]int64
+	ts = tableSum{sum: sum, t: t, base: base, row: row, col: col}
 	for i, e := range []ast.Expr{sum.X, sum.Y} {
 		b, r, c, ok := index2(ast.Unparen(e))
 		if !ok || src(b) != src(base) {
-			return
+			return ts, false
 		}
 		dr, ok1 := fc.shiftOf(r, row)
 		dc, ok2 := fc.shiftOf(c, col)
 		if !ok1 || !ok2 {
-			return
+			return ts, false
 		}
-		shifts[i] = [2]int64{dr, dc}
+		ts.shifts[i] = [2]int64{dr, dc}
 	}
+	return ts, true
+}
+
+// judgePascalTable judges one table step (tableStep) t[I][J] = t[I−1][J−1] + t[I−1][J].
+func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
+	ts, ok := fc.tableSumOf(as)
+	if !ok {
+		return
+	}
+	sum, t, base, row, col, shifts := ts.sum, ts.t, ts.base, ts.row, ts.col, ts.shifts
 	if shifts[0][0] != -1 || shifts[1][0] != -1 || shifts[0][1]+shifts[1][1] != -1 || shifts[0][1]*shifts[1][1] != 0 {
 		return
 	}

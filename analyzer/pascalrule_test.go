@@ -105,3 +105,38 @@ func TestTriangleThresholds(t *testing.T) {
 		}
 	}
 }
+
+// TestBellTriangleThresholds fills the Bell triangle in each machine
+// type, as BellRows in testdata/src/pascalrule/stirling.go does, beside
+// the same triangle in math/big, and checks that the first row holding
+// a wrong entry is the one the message names.
+func TestBellTriangleThresholds(t *testing.T) {
+	check := func(name string, got int64) {
+		num, _ := thresholds.Named(name, nil)
+		if l, _ := thresholds.BellTriangleLimit(num); got != l.FirstBad {
+			t.Errorf("%s: the Bell triangle is first wrong at row %d, the threshold says %d", name, got, l.FirstBad)
+		}
+	}
+	check("int32", bellFirstWrongRow[int32](60))
+	check("int64", bellFirstWrongRow[int64](60))
+	check("uint64", bellFirstWrongRow[uint64](60))
+}
+
+func bellFirstWrongRow[T int32 | int64 | uint64](limit int) int64 {
+	prev, exact := []T{1}, []*big.Int{big.NewInt(1)}
+	for i := 1; i <= limit; i++ {
+		row, ex := make([]T, i+1), make([]*big.Int, i+1)
+		row[0], ex[0] = prev[i-1], exact[i-1]
+		for j := 1; j <= i; j++ {
+			row[j] = row[j-1] + prev[j-1]
+			ex[j] = new(big.Int).Add(ex[j-1], exact[j-1])
+		}
+		for j := range row {
+			if machineBig(row[j]).Cmp(ex[j]) != 0 {
+				return int64(i)
+			}
+		}
+		prev, exact = row, ex
+	}
+	return -1
+}

@@ -33,6 +33,10 @@ import (
 // ranges whose entries fit, and floats are left alone. No fix: no
 // integer type holds the entries past the row, and no helper computes
 // them.
+//
+// The Bell triangle, t[i][j] = t[i][j-1] + t[i-1][j-1] with each row
+// started by the end of the one before, is read here too: its rows run
+// through the Bell numbers, B(n) = Σ_k S(n, k).
 
 // triangleName is how messages name the triangle's entries.
 func triangleName(tr thresholds.Triangle, signed bool, n, k string) string {
@@ -197,4 +201,56 @@ func (fc *fnCtx) judgeTriangleTable(as *ast.AssignStmt) {
 		fc.report(finding{node: as, cat: catPascal, definite: definite, msg: msg + clause})
 		return
 	}
+}
+
+// judgeBellTable judges one table step (tableStep) of the Bell triangle,
+// t[I][J] = t[I][J−1] + t[I−1][J−1] (either order), in a function that
+// also starts each row with the end of the one before, t[I][0] =
+// t[I−1][I−1]: row I then runs from the Bell number B(I) to B(I+1)
+// (thresholds.BellTriangleLimit), and wraps from the first row whose
+// entries leave the type. Other edges give another triangle: silent.
+func (fc *fnCtx) judgeBellTable(as *ast.AssignStmt) {
+	ts, ok := fc.tableSumOf(as)
+	if !ok {
+		return
+	}
+	sum, t, base, row, col, shifts := ts.sum, ts.t, ts.base, ts.row, ts.col, ts.shifts
+	if shifts[0][1] != -1 || shifts[1][1] != -1 || shifts[0][0]+shifts[1][0] != -1 || shifts[0][0]*shifts[1][0] != 0 || !fc.startsBellRows(base) {
+		return
+	}
+	ri := fc.rangeOf(row)
+	first, firstK := thresholds.BellTriangleLimit(t.Num)
+	if bounded(ri) && ri.Hi < first.FirstBad {
+		return
+	}
+	name := src(row)
+	clause, definite := verdict(name, ri, first.FirstBad)
+	msg := fmt.Sprintf("table %s is filled as the Bell triangle (%s = %s) in %s: each row starting with the end of the one before, row %s runs from the Bell number B(%s) to B(%s+1), and the entry %s wraps where it leaves %s, from row %s = %d at %s = %d (the largest entry of row %d, B(%d) ≈ %s, fits), and the rows below carry the wrapped entries on",
+		src(base), src(as.Lhs[0]), src(sum), t.typeName(), name, name, name, src(as.Lhs[0]), t.Name,
+		name, first.FirstBad, src(col), firstK, first.FirstBad-1, first.FirstBad, first.LastGoodApprox())
+	fc.report(finding{node: as, cat: catPascal, definite: definite, msg: msg + clause})
+}
+
+// startsBellRows reports whether the function assigns t[I][0] =
+// t[I−1][I−1] for some row index I: each row of a Bell triangle starts
+// with the last entry of the row before.
+func (fc *fnCtx) startsBellRows(base ast.Expr) bool {
+	found := false
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok || found || len(as.Lhs) != 1 || len(as.Rhs) != 1 || as.Tok != token.ASSIGN {
+			return !found
+		}
+		b, r, c, ok1 := index2(as.Lhs[0])
+		pb, pr, pc, ok2 := index2(ast.Unparen(as.Rhs[0]))
+		if !ok1 || !ok2 || src(b) != src(base) || src(pb) != src(base) {
+			return true
+		}
+		zero, isConst := fc.intConst(c)
+		dr, ok3 := fc.shiftOf(pr, r)
+		dc, ok4 := fc.shiftOf(pc, r)
+		found = isConst && zero == 0 && ok3 && ok4 && dr == -1 && dc == -1
+		return !found
+	})
+	return found
 }

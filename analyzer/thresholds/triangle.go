@@ -146,3 +146,37 @@ func TriangleLimitRow(tr Triangle, t Num) int64 {
 	l, _ := TriangleLimit(tr, t)
 	return l.FirstBad
 }
+
+// BellTriangleLimit returns the first row n of the Bell triangle
+// (Aitken's array, OEIS A011971: a(0, 0) = 1, a(n, 0) = a(n−1, n−1),
+// a(n, k) = a(n, k−1) + a(n−1, k−1); common practice) holding an entry
+// that does not fit t, and the smallest k of that row whose entry does
+// not. Row n runs from the Bell number B(n) at k = 0 to B(n+1) at k = n
+// (OEIS A000110), so LastGood and Peak, the largest entry of row n−1,
+// are B(n). int64: row 25 (B(26) ≈ 4.92e19 at its end).
+func BellTriangleLimit(t Num) (Limit, int64) {
+	type result struct {
+		l Limit
+		k int64
+	}
+	r := memo(cacheKey{shape: "belltri", t: t}, func() result {
+		lim := t.maxInt()
+		prev := []*big.Int{big.NewInt(1)}
+		for n := int64(1); n <= triangleCap; n++ {
+			cur := make([]*big.Int, n+1)
+			cur[0] = new(big.Int).Set(prev[n-1])
+			for k := int64(1); k <= n; k++ {
+				cur[k] = new(big.Int).Add(cur[k-1], prev[k-1])
+			}
+			for k, v := range cur {
+				if v.CmpAbs(lim) > 0 {
+					peak := new(big.Int).Set(prev[n-1])
+					return result{Limit{FirstBad: n, LastGood: peak, Peak: peak}, int64(k)}
+				}
+			}
+			prev = cur
+		}
+		return result{Limit{FirstBad: math.MaxInt64}, -1}
+	})
+	return r.l.clone(), r.k
+}

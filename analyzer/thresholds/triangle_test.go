@@ -129,3 +129,37 @@ func TestTriangleFits(t *testing.T) {
 		}
 	}
 }
+
+// TestBellTriangleLimit checks the Bell triangle's first row past each
+// type against the Bell numbers as sums of Stirling numbers of the
+// second kind, B(n) = Σ_k S(n, k) (DLMF 26.7.1), from the closed form:
+// row n's entries lie between B(n) and B(n+1), its last entry B(n+1).
+func TestBellTriangleLimit(t *testing.T) {
+	bell := func(n int64) *big.Int {
+		sum := new(big.Int)
+		for k := int64(0); k <= n; k++ {
+			sum.Add(sum, stirling2Closed(n, k))
+		}
+		return sum
+	}
+	// OEIS A000110, from memory: B(10) = 115975.
+	if got := bell(10); got.Int64() != 115975 {
+		t.Errorf("B(10) = %v, want 115975", got)
+	}
+	for _, name := range []string{"int32", "int64", "uint64"} {
+		num, _ := Named(name, nil)
+		lim := num.maxInt()
+		l, k := BellTriangleLimit(num)
+		// Row n−1 ends with B(n), which must fit; row n ends with
+		// B(n+1), which must not.
+		if bell(l.FirstBad).CmpAbs(lim) > 0 || bell(l.FirstBad+1).CmpAbs(lim) <= 0 {
+			t.Errorf("%s: row %d is not the first whose last entry B(n+1) leaves the type", name, l.FirstBad)
+		}
+		if l.LastGood.Cmp(bell(l.FirstBad)) != 0 {
+			t.Errorf("%s: LastGood %v, want B(%d) = %v", name, l.LastGood, l.FirstBad, bell(l.FirstBad))
+		}
+		if k < 1 || k > l.FirstBad {
+			t.Errorf("%s: first k past the type %d, want within row %d", name, k, l.FirstBad)
+		}
+	}
+}

@@ -80,3 +80,29 @@ func FewShares(lots [4]int64) int64 {
 	}
 	return ways
 }
+
+// Splits counts the ways to sow k of n seeds in one bed and j of the
+// rest in another, a trinomial n!/(k!·j!·(n−k−j)!). The input the
+// message names is checked against a math/big scan by
+// TestChooseProductWitness (analyzer/thresholds).
+func Splits(n, k, j int64) int64 {
+	return lotChoose(n, k) * lotChoose(n-k, j) // want `product of binomial coefficients lotChoose\(n, k\) \* lotChoose\(n-k, j\) in int64 wraps where it leaves int64 while every factor fits: first at n = \d+, k = \d+, j = \d+ by the largest argument, where lotChoose\(n, k\) ≈ \S+ and lotChoose\(n-k, j\) ≈ \S+ fit and the product ≈ \S+ does not`
+}
+
+// FloatSplits multiplies in float64: silent.
+func FloatSplits(n, k, j int64) float64 {
+	return float64(lotChoose(n, k)) * float64(lotChoose(n-k, j))
+}
+
+// SmallSplits sows at most 30 seeds, whose trinomials fit int64: silent.
+func SmallSplits(n, k, j int64) int64 {
+	if n < 0 || n > 30 || k < 0 || k > 30 || j < 0 || j > 30 {
+		return 0
+	}
+	return lotChoose(n, k) * lotChoose(n-k, j)
+}
+
+// ScaledSplit has a factor besides the binomials: left to other rules.
+func ScaledSplit(n, k, w int64) int64 {
+	return w * lotChoose(n, k) * lotChoose(n, k)
+}

@@ -141,3 +141,45 @@ func FewCycles() [13][13]int64 {
 	}
 	return c
 }
+
+// BellRows fills the Bell triangle, each row started by the end of the
+// one before: row i runs from B(i) to B(i+1).
+func BellRows(n int) [][]int64 {
+	a := make([][]int64, n+1)
+	a[0] = []int64{1}
+	for i := 1; i <= n; i++ {
+		a[i] = make([]int64, i+1)
+		a[i][0] = a[i-1][i-1]
+		for j := 1; j <= i; j++ {
+			a[i][j] = a[i][j-1] + a[i-1][j-1] // want `table a is filled as the Bell triangle \(a\[i\]\[j\] = a\[i\]\[j-1\] \+ a\[i-1\]\[j-1\]\) in int64: .* from row i = 25 at j = \d+ \(the largest entry of row 24, B\(25\) ≈ 4\.64e18, fits\)`
+		}
+	}
+	return a
+}
+
+// OnesRows starts every row with 1: another triangle, silent.
+func OnesRows(n int) [][]int64 {
+	a := make([][]int64, n+1)
+	a[0] = []int64{1}
+	for i := 1; i <= n; i++ {
+		a[i] = make([]int64, i+1)
+		a[i][0] = 1
+		for j := 1; j <= i; j++ {
+			a[i][j] = a[i][j-1] + a[i-1][j-1]
+		}
+	}
+	return a
+}
+
+// FewBellRows stops at row 20: silent.
+func FewBellRows() [21][21]int64 {
+	var a [21][21]int64
+	a[0][0] = 1
+	for i := 1; i <= 20; i++ {
+		a[i][0] = a[i-1][i-1]
+		for j := 1; j <= i; j++ {
+			a[i][j] = a[i][j-1] + a[i-1][j-1]
+		}
+	}
+	return a
+}
