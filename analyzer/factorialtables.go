@@ -189,8 +189,9 @@ func (c *checker) appendFill(fn ast.Node, loop *ast.ForStmt) *facTable {
 	if init, ok := loop.Init.(*ast.AssignStmt); ok && len(init.Lhs) == 1 && len(init.Rhs) == 1 {
 		post, ok := loop.Post.(*ast.IncDecStmt)
 		v, isConst := q.intConst(init.Rhs[0])
-		if ok && isConst && post.Tok == token.INC && q.objOf(post.X) == q.objOf(init.Lhs[0]) && !branches(loop.Body) {
-			idx, lo = q.objOf(init.Lhs[0]), v
+		i := q.objOf(init.Lhs[0])
+		if ok && isConst && post.Tok == token.INC && q.objOf(post.X) == i && i != nil && !branches(loop.Body) && !assignedOutside(c.pass.TypesInfo, loop.Body, i, nil) {
+			idx, lo = i, v
 		}
 	}
 	for i, st := range loop.Body.List {

@@ -267,7 +267,7 @@ func (fc *fnCtx) checkBinomialPartsLoops() {
 				continue
 			}
 			t, ok := c.numOf(acc.Type())
-			if !ok || t.Float {
+			if !ok || t.Float || fc.guardsIn(body, acc) {
 				continue
 			}
 			ff := c.factOf(c.calleeOf(call))
@@ -293,6 +293,20 @@ func (fc *fnCtx) checkBinomialPartsLoops() {
 		}
 		return true
 	})
+}
+
+// guardsIn reports whether body holds an if statement whose condition
+// reads acc and whose body leaves the loop or the function (an overflow
+// check before the product, if res > max/b { … }).
+func (fc *fnCtx) guardsIn(body *ast.BlockStmt, acc types.Object) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		if ifs, ok := n.(*ast.IfStmt); ok && !found {
+			found = mentions(fc.c.pass.TypesInfo, ifs.Cond, acc) && (fc.exits(ifs.Body) || branches(ifs.Body))
+		}
+		return !found
+	})
+	return found
 }
 
 // productStep matches st as acc *= call or acc = acc * call (either

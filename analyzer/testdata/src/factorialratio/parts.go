@@ -106,3 +106,17 @@ func SmallSplits(n, k, j int64) int64 {
 func ScaledSplit(n, k, w int64) int64 {
 	return w * lotChoose(n, k) * lotChoose(n, k)
 }
+
+// CheckedShares refuses a product past int64 before forming it: silent.
+func CheckedShares(lots []int64) (int64, bool) {
+	ways, total := int64(1), int64(0)
+	for _, l := range lots {
+		total += l
+		b := lotChoose(total, l)
+		if ways > (1<<63-1)/b {
+			return 0, false
+		}
+		ways *= lotChoose(total, l)
+	}
+	return ways, true
+}
