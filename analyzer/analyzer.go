@@ -117,6 +117,9 @@ func run(pass *analysis.Pass) (any, error) {
 			}
 		}
 	}
+	// Tables first: a function that returns a table's element is a
+	// factorial function (wrapperOf).
+	c.findFactorialTables(scans)
 	for _, d := range decls {
 		c.guard(d, func() { c.findFactorialFunc(d) })
 	}
@@ -126,7 +129,6 @@ func run(pass *analysis.Pass) (any, error) {
 			c.guard(d, func() { c.findBinomialFunc(d, s.knownCall || s.localCall && len(c.funcs) > 0, s.worthLoops()) })
 		}
 	}
-	c.findFactorialTables(scans)
 	c.findValueFacts(decls, scans)
 	// Phase 2: report, function by function, only where a cheap syntactic
 	// scan found something worth the range analysis.

@@ -214,7 +214,8 @@ func assignedOutside(info *types.Info, body *ast.BlockStmt, v types.Object, skip
 }
 
 // wrapperOf matches a function that returns a factorial of a parameter
-// computed elsewhere: return f(n+c) of a factorial function f, or
+// computed elsewhere: return f(n+c) of a factorial function f, return
+// t[n+c] of a factorial table t (factorialtables.go), or
 // return math.Gamma(float64(n)+b) with an integer b ≥ 1, which is
 // (n+b−1)! in float64 since Γ(n+1) = n! (DLMF 5.4.1, from memory).
 func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
@@ -228,11 +229,17 @@ func (fc *fnCtx) wrapperOf(decl *ast.FuncDecl, self *types.Func) *facFunc {
 		if !ok || len(ret.Results) == 0 {
 			return true
 		}
-		call, ok := ast.Unparen(ret.Results[0]).(*ast.CallExpr)
-		if !ok || !types.Identical(fc.c.pass.TypesInfo.TypeOf(call), resT) {
+		if !types.Identical(fc.c.pass.TypesInfo.TypeOf(ret.Results[0]), resT) {
 			return false
 		}
-		ff = fc.wrappedCall(decl, call)
+		switch e := ast.Unparen(ret.Results[0]).(type) {
+		case *ast.CallExpr:
+			ff = fc.wrappedCall(decl, e)
+		case *ast.IndexExpr:
+			if tbl := fc.tableOf(e); tbl != nil {
+				ff = fc.wrappedFactor(decl, factor{kind: kindFactorial, arg: e.Index, fact: &tbl.fact})
+			}
+		}
 		return false
 	})
 	return ff
@@ -252,7 +259,16 @@ func (fc *fnCtx) wrappedCall(decl *ast.FuncDecl, call *ast.CallExpr) *facFunc {
 		return &facFunc{kind: kindFactorial, param: idx, param2: -1, offset: off, wrap: aff.v, wrapOff: off}
 	}
 	f, ok := fc.factorOf(call)
-	if !ok || (f.kind != kindFactorial && f.kind != kindDouble) {
+	if !ok {
+		return nil
+	}
+	return fc.wrappedFactor(decl, f)
+}
+
+// wrappedFactor returns the factorial function decl is when it returns
+// the factor f (a call, a table's element) of one of its parameters.
+func (fc *fnCtx) wrappedFactor(decl *ast.FuncDecl, f factor) *facFunc {
+	if f.kind != kindFactorial && f.kind != kindDouble {
 		return nil
 	}
 	lin, ok := fc.linear(f.arg)

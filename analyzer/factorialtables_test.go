@@ -4,6 +4,8 @@ import (
 	"math"
 	"math/big"
 	"testing"
+
+	"github.com/overfact/overfact/analyzer/thresholds"
 )
 
 // The table cases are in testdata/src/factorialratio/tables.go, checked
@@ -57,5 +59,34 @@ func TestFactorialTableFillProbe(t *testing.T) {
 	}
 	if firstWrong != 21 {
 		t.Errorf("first wrong element of the int64 factorial table: %d, want 21 (the message's n ≥ 21)", firstWrong)
+	}
+}
+
+// appendFirstWrong grows a table by append as the append-grown cases in
+// testdata/src/factorialratio/tables.go do (CheckOrders, RackOrders) and
+// returns the first index whose element is not math/big's m!.
+func appendFirstWrong[T int64 | uint64](limit int) int64 {
+	f := []T{1}
+	for len(f) <= limit {
+		m := len(f)
+		f = append(f, f[m-1]*T(m))
+	}
+	for i, v := range f {
+		if machineBig(v).Cmp(new(big.Int).MulRange(1, int64(i))) != 0 {
+			return int64(i)
+		}
+	}
+	return -1
+}
+
+// TestAppendTableProbe checks the index the append-grown tables'
+// messages give, the first factorial past the type (thresholds.Factorial),
+// against a table grown in the machine type and math/big.
+func TestAppendTableProbe(t *testing.T) {
+	for name, got := range map[string]int64{"int64": appendFirstWrong[int64](30), "uint64": appendFirstWrong[uint64](30)} {
+		num, _ := thresholds.Named(name, nil)
+		if want := thresholds.Factorial(num).FirstBad; got != want {
+			t.Errorf("%s: the grown table is first wrong at %d, the threshold says %d", name, got, want)
+		}
 	}
 }

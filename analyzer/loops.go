@@ -274,3 +274,15 @@ func (fc *fnCtx) walkClauses(body *ast.BlockStmt, before [][]ast.Stmt, depth int
 
 // maxNesting bounds the statement nesting the loop search descends into.
 const maxNesting = 1000
+
+// loopBody returns the body of a for or range statement, nil for any
+// other node.
+func loopBody(n ast.Node) *ast.BlockStmt {
+	switch l := n.(type) {
+	case *ast.ForStmt:
+		return l.Body
+	case *ast.RangeStmt:
+		return l.Body
+	}
+	return nil
+}

@@ -581,9 +581,11 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 // negative binomial probabilities over a binomial helper built from
 // float factorials, ratios of factorial and Γ helpers.
 func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
+	fc.checkBinomialPartsLoops()
 	var res *vm.Result
 	for _, root := range fc.callRoots() {
 		fc.checkLoopMultinomial(root)
+		fc.checkBinomialProduct(root)
 		if res == nil {
 			res = model()
 		}

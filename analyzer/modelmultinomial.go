@@ -5,7 +5,10 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"strings"
 
+	"github.com/overfact/overfact/analyzer/ranges"
+	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
@@ -159,12 +162,8 @@ type partUpdates struct {
 func (fc *fnCtx) partsUpdates(loop ast.Stmt, sum, den types.Object) partUpdates {
 	c := fc.c
 	var u partUpdates
-	var body *ast.BlockStmt
-	switch l := loop.(type) {
-	case *ast.ForStmt:
-		body = l.Body
-	case *ast.RangeStmt:
-		body = l.Body
+	body := loopBody(loop)
+	if l, ok := loop.(*ast.RangeStmt); ok {
 		if id, ok := ast.Unparen(l.X).(*ast.Ident); ok && l.Value != nil && c.objOf(id) != nil {
 			u.over, u.elem = id.Name, src(l.Value)
 		}
@@ -231,4 +230,277 @@ func (fc *fnCtx) collectionAssigned(a, b ast.Stmt) bool {
 		}
 	}
 	return false
+}
+
+// checkBinomialPartsLoops reports an integer multinomial coefficient
+// built as a product of binomial coefficients over a loop's parts,
+//
+//	for _, c := range counts {
+//		total += c
+//		res *= binom(total, c)
+//	}
+//
+// (or res = res * binom(total+c, c) before total += c): after the loop
+// res is (Σ parts)!/Π part! (DLMF 26.4.2, from memory, as the product of
+// C(s_i, c_i) over the running sums s_i; common practice), where binom
+// is a function whose fact says it computes C(n, k). Every factor may fit
+// while the product does not: with parts of 1 the factors are 1, 2, …,
+// and the product is N! for a total N, which leaves the type from
+// thresholds.Factorial on; with two equal halves it is C(N, ⌊N/2⌋),
+// from thresholds.CentralBinomial on. The product then wraps silently.
+// Floats are left alone: their product is +Inf only where the
+// multinomial is past float64, which is IEEE's answer. No fix: no
+// integer type holds the multinomial past the threshold.
+func (fc *fnCtx) checkBinomialPartsLoops() {
+	c := fc.c
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if _, lit := n.(*ast.FuncLit); lit {
+			return false
+		}
+		body := loopBody(n)
+		if body == nil {
+			return true
+		}
+		for i, st := range body.List {
+			acc, call, ok := fc.productStep(st)
+			if !ok {
+				continue
+			}
+			t, ok := c.numOf(acc.Type())
+			if !ok || t.Float || fc.guardsIn(body, acc) {
+				continue
+			}
+			ff := c.factOf(c.calleeOf(call))
+			if ff == nil || kindOfName(ff.Kind) != kindBinomial || ff.Offset != 0 || ff.Param2 < 0 || max(ff.Param, ff.Param2) >= len(call.Args) {
+				continue
+			}
+			nArg, part := call.Args[ff.Param], fc.stripConv(call.Args[ff.Param2])
+			total := fc.runningTotal(body.List, i, nArg, part)
+			if total == nil || total == acc {
+				continue
+			}
+			first := thresholds.Factorial(t.Num)
+			halves := thresholds.CentralBinomial(t.Num)
+			r := fc.rangeOf(fc.stripConv(nArg))
+			if r.IsEmpty() || r.Hi < first.FirstBad || ff.Safe && ff.Hi < first.FirstBad {
+				continue
+			}
+			clause, _ := verdict(total.Name(), r, first.FirstBad)
+			msg := fmt.Sprintf("loop multiplies %s into %s over the parts %s in %s: the product is the multinomial coefficient (Σ parts)!/Π part!, which wraps where it leaves %s: from %s = %d with parts of 1, whose factors 1, 2, … all fit, where it is %d! (%d! ≈ %s is the largest that fits), and from %s = %d with two equal parts, where it is C(%d, %d)",
+				src(call), acc.Name(), src(part), t.typeName(), t.Name, total.Name(), first.FirstBad, first.FirstBad, first.FirstBad-1, first.LastGoodApprox(),
+				total.Name(), halves.FirstBad, halves.FirstBad, halves.FirstBad/2)
+			fc.report(finding{node: st, cat: catRatio, msg: msg + clause, related: c.relatedDef(c.calleeOf(call).Name(), c.calleeOf(call).Pos())})
+		}
+		return true
+	})
+}
+
+// guardsIn reports whether body holds an if statement whose condition
+// reads acc and whose body leaves the loop or the function (an overflow
+// check before the product, if res > max/b { … }).
+func (fc *fnCtx) guardsIn(body *ast.BlockStmt, acc types.Object) bool {
+	found := false
+	ast.Inspect(body, func(n ast.Node) bool {
+		if ifs, ok := n.(*ast.IfStmt); ok && !found {
+			found = mentions(fc.c.pass.TypesInfo, ifs.Cond, acc) && (fc.exits(ifs.Body) || branches(ifs.Body))
+		}
+		return !found
+	})
+	return found
+}
+
+// productStep matches st as acc *= call or acc = acc * call (either
+// order), a conversion of the call allowed.
+func (fc *fnCtx) productStep(st ast.Stmt) (types.Object, *ast.CallExpr, bool) {
+	as, ok := st.(*ast.AssignStmt)
+	if !ok || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return nil, nil, false
+	}
+	acc := fc.c.objOf(as.Lhs[0])
+	if acc == nil {
+		return nil, nil, false
+	}
+	rhs := as.Rhs[0]
+	if as.Tok == token.ASSIGN {
+		b, ok := ast.Unparen(rhs).(*ast.BinaryExpr)
+		if !ok || b.Op != token.MUL {
+			return nil, nil, false
+		}
+		switch acc {
+		case fc.c.objOf(b.X):
+			rhs = b.Y
+		case fc.c.objOf(b.Y):
+			rhs = b.X
+		default:
+			return nil, nil, false
+		}
+	} else if as.Tok != token.MUL_ASSIGN {
+		return nil, nil, false
+	}
+	call, ok := fc.stripConv(rhs).(*ast.CallExpr)
+	return acc, call, ok
+}
+
+// runningTotal returns the variable total of a statement total += part
+// among stmts when nArg is the running sum including the part at stmts[at]:
+// total itself where the addition comes before, total + part where it
+// comes after (conversions aside, the part as written). total must not
+// be assigned otherwise in stmts.
+func (fc *fnCtx) runningTotal(stmts []ast.Stmt, at int, nArg, part ast.Expr) types.Object {
+	var total types.Object
+	after := false
+	for j, st := range stmts {
+		as, ok := st.(*ast.AssignStmt)
+		if !ok || as.Tok != token.ADD_ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 || src(fc.stripConv(as.Rhs[0])) != src(part) {
+			continue
+		}
+		if total != nil {
+			return nil
+		}
+		total, after = fc.c.objOf(as.Lhs[0]), j > at
+	}
+	if total == nil {
+		return nil
+	}
+	for _, st := range stmts {
+		other := false
+		assigned.EachTarget(st, nil, func(e ast.Expr, m ast.Node) bool {
+			if fc.c.objOf(e) == total {
+				as, ok := m.(*ast.AssignStmt)
+				other = !ok || as.Tok != token.ADD_ASSIGN || src(fc.stripConv(as.Rhs[0])) != src(part)
+			}
+			return !other
+		})
+		if other {
+			return nil
+		}
+	}
+	n := fc.stripConv(nArg)
+	if !after {
+		if fc.c.objOf(n) != total {
+			return nil
+		}
+		return total
+	}
+	b, ok := n.(*ast.BinaryExpr)
+	if !ok || b.Op != token.ADD {
+		return nil
+	}
+	for _, pair := range [2][2]ast.Expr{{b.X, b.Y}, {b.Y, b.X}} {
+		if fc.c.objOf(fc.stripConv(pair[0])) == total && src(fc.stripConv(pair[1])) == src(part) {
+			return total
+		}
+	}
+	return nil
+}
+
+// checkBinomialProduct reports an integer product of binomial
+// coefficients in one expression, binom(n, k) * binom(n-k, j) (a
+// trinomial) or any product of calls of functions whose fact says they
+// compute C(n, k), with arguments linear in at most three variables:
+// it wraps where the product leaves the type while every factor still
+// fits, which thresholds.ChooseProductWitness finds (the first such
+// input by its largest argument, confirmed with math/big). Floats are
+// left alone (+Inf past float64 is IEEE's answer), and so is a product
+// with other factors. No fix: no integer type holds the product there.
+func (fc *fnCtx) checkBinomialProduct(root ast.Expr) {
+	c := fc.c
+	t, ok := c.numOf(c.pass.TypesInfo.TypeOf(root))
+	if !ok || t.Float || c.reportedWithin(root) {
+		return
+	}
+	var calls []*ast.CallExpr
+	var flatten func(e ast.Expr) bool
+	flatten = func(e ast.Expr) bool {
+		switch e := fc.stripConv(e).(type) {
+		case *ast.BinaryExpr:
+			return e.Op == token.MUL && flatten(e.X) && flatten(e.Y)
+		case *ast.CallExpr:
+			calls = append(calls, e)
+			return true
+		}
+		return false
+	}
+	if b, ok := fc.stripConv(root).(*ast.BinaryExpr); !ok || b.Op != token.MUL || !flatten(b) || len(calls) < 2 {
+		return
+	}
+	var vars []types.Object
+	index := func(v types.Object) int {
+		for i, w := range vars {
+			if w == v {
+				return i
+			}
+		}
+		vars = append(vars, v)
+		return len(vars) - 1
+	}
+	var lins [][2]linear
+	for _, call := range calls {
+		ff := c.factOf(c.calleeOf(call))
+		if ff == nil || kindOfName(ff.Kind) != kindBinomial || ff.Offset != 0 || ff.Param2 < 0 || max(ff.Param, ff.Param2) >= len(call.Args) {
+			return
+		}
+		n, ok1 := fc.linear(call.Args[ff.Param])
+		k, ok2 := fc.linear(call.Args[ff.Param2])
+		if !ok1 || !ok2 {
+			return
+		}
+		for _, l := range []linear{n, k} {
+			for _, term := range l.Terms {
+				index(term.Sym.Object)
+			}
+		}
+		lins = append(lins, [2]linear{n, k})
+	}
+	if len(vars) == 0 || len(vars) > 3 {
+		return
+	}
+	form := func(l linear) thresholds.IntForm {
+		f := thresholds.IntForm{C: l.C, Coef: make([]int64, len(vars))}
+		for _, term := range l.Terms {
+			f.Coef[index(term.Sym.Object)] += term.K
+		}
+		return f
+	}
+	var ns, ks []thresholds.IntForm
+	for _, nk := range lins {
+		ns, ks = append(ns, form(nk[0])), append(ks, form(nk[1]))
+	}
+	lo, hi := make([]int64, len(vars)), make([]int64, len(vars))
+	for i, v := range vars {
+		r := fc.varRange(root, v)
+		if r.IsEmpty() {
+			return
+		}
+		lo[i], hi[i] = r.Lo, r.Hi
+	}
+	x, factors, product, ok := thresholds.ChooseProductWitness(t.Num, ns, ks, lo, hi)
+	if !ok {
+		return
+	}
+	var at, vals []string
+	for i, v := range vars {
+		at = append(at, fmt.Sprintf("%s = %d", v.Name(), x[i]))
+	}
+	for i, f := range factors {
+		vals = append(vals, fmt.Sprintf("%s ≈ %s", src(calls[i]), thresholds.Approx(f)))
+	}
+	msg := fmt.Sprintf("product of binomial coefficients %s in %s wraps where it leaves %s while every factor fits: first at %s by the largest argument, where %s fit and the product ≈ %s does not",
+		src(root), t.typeName(), t.Name, strings.Join(at, ", "), strings.Join(vals, " and "), thresholds.Approx(product))
+	fc.report(finding{node: root, cat: catRatio, msg: msg})
+}
+
+// varRange returns the range of v at the first read of it within root.
+func (fc *fnCtx) varRange(root ast.Node, v types.Object) ranges.Interval {
+	var read *ast.Ident
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && read == nil && fc.c.pass.TypesInfo.Uses[id] == v {
+			read = id
+		}
+		return read == nil
+	})
+	if read == nil {
+		return ranges.Empty()
+	}
+	return fc.rangeOf(read)
 }

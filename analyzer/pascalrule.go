@@ -43,7 +43,8 @@ import (
 // size would refuse the rows that fit.
 
 // checkPascalRecursion reports a recursion that returns (or stores) the
-// sum of its own values at (n−1, k−1) and (n−1, k), or the derangement
+// sum of its own values at (n−1, k−1) and (n−1, k), one of them weighed
+// for Stirling numbers (stirlingnumbers.go), or the derangement
 // recurrence (n−1)·(f(n−1) + f(n−2)) (derangement.go).
 func (fc *fnCtx) checkPascalRecursion(decl *ast.FuncDecl) {
 	self, _ := fc.c.pass.TypesInfo.Defs[decl.Name].(*types.Func)
@@ -63,7 +64,11 @@ func (fc *fnCtx) checkPascalRecursion(decl *ast.FuncDecl) {
 				return false // reduced modulo m: its values stay small
 			}
 			if n.Op == token.ADD {
-				done = fc.judgePascalRecursion(decl, self, n)
+				done = fc.judgePascalRecursion(decl, self, n) || fc.judgeTriangleRecursion(decl, self, n)
+				return !done
+			}
+			if n.Op == token.SUB {
+				done = fc.judgeTriangleRecursion(decl, self, n)
 				return !done
 			}
 			if n.Op == token.MUL {
@@ -318,8 +323,8 @@ func pascalFits(t numType, n, k ranges.Interval) bool {
 
 // checkPascalTables reports the tables body fills by Pascal's rule,
 // t[i][j] = t[i-1][j-1] + t[i-1][j] (either order, any offsets of the
-// two indexes that keep the rule's shape), or with derangement numbers
-// (derangement.go).
+// two indexes that keep the rule's shape), with Stirling numbers
+// (stirlingnumbers.go) or with derangement numbers (derangement.go).
 func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 	ast.Inspect(body, func(n ast.Node) bool {
 		switch n := n.(type) {
@@ -330,6 +335,8 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 				if as, ok := st.(*ast.AssignStmt); ok && tableStep(as) && !fc.changedAgain(n, as) {
 					fc.judgePascalTable(as)
 					fc.judgeDerangementTable(as)
+					fc.judgeTriangleTable(as)
+					fc.judgeBellTable(as)
 				}
 			}
 		}
@@ -338,7 +345,7 @@ func (fc *fnCtx) checkPascalTables(body *ast.BlockStmt) {
 }
 
 // tableStep reports whether as may be a step of a table filled by a
-// recurrence: one table entry assigned a sum or a product. Only such
+// recurrence: one table entry assigned a sum, a difference or a product. Only such
 // statements are compared with the rest of their block.
 func tableStep(as *ast.AssignStmt) bool {
 	if as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
@@ -346,7 +353,7 @@ func tableStep(as *ast.AssignStmt) bool {
 	}
 	_, entry := as.Lhs[0].(*ast.IndexExpr)
 	b, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
-	return entry && ok && (b.Op == token.ADD || b.Op == token.MUL)
+	return entry && ok && (b.Op == token.ADD || b.Op == token.SUB || b.Op == token.MUL)
 }
 
 // changedAgain reports whether another statement of block assigns to
@@ -370,33 +377,54 @@ func (fc *fnCtx) changedAgain(block *ast.BlockStmt, as *ast.AssignStmt) bool {
 	return again
 }
 
-// judgePascalTable judges one table step (tableStep) t[I][J] = t[I−1][J−1] + t[I−1][J].
-func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
+// tableSum is a table step t[I][J] = t[…][…] + t[…][…] in an integer
+// type: the sum, its type, the assigned entry's parts and each term's
+// shifts (row, column) from it.
+type tableSum struct {
+	sum            *ast.BinaryExpr
+	t              numType
+	base, row, col ast.Expr
+	shifts         [2][2]int64
+}
+
+// tableSumOf reads as as a tableSum.
+func (fc *fnCtx) tableSumOf(as *ast.AssignStmt) (tableSum, bool) {
+	var ts tableSum
 	sum, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
 	if !ok || sum.Op != token.ADD {
-		return
+		return ts, false
 	}
 	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(sum))
 	if !ok || t.Float {
-		return
+		return ts, false
 	}
 	base, row, col, ok := index2(as.Lhs[0])
 	if !ok {
-		return
+		return ts, false
 	}
-	var shifts [2][2]int64
+	ts = tableSum{sum: sum, t: t, base: base, row: row, col: col}
 	for i, e := range []ast.Expr{sum.X, sum.Y} {
 		b, r, c, ok := index2(ast.Unparen(e))
 		if !ok || src(b) != src(base) {
-			return
+			return ts, false
 		}
 		dr, ok1 := fc.shiftOf(r, row)
 		dc, ok2 := fc.shiftOf(c, col)
 		if !ok1 || !ok2 {
-			return
+			return ts, false
 		}
-		shifts[i] = [2]int64{dr, dc}
+		ts.shifts[i] = [2]int64{dr, dc}
 	}
+	return ts, true
+}
+
+// judgePascalTable judges one table step (tableStep) t[I][J] = t[I−1][J−1] + t[I−1][J].
+func (fc *fnCtx) judgePascalTable(as *ast.AssignStmt) {
+	ts, ok := fc.tableSumOf(as)
+	if !ok {
+		return
+	}
+	sum, t, base, row, col, shifts := ts.sum, ts.t, ts.base, ts.row, ts.col, ts.shifts
 	if shifts[0][0] != -1 || shifts[1][0] != -1 || shifts[0][1]+shifts[1][1] != -1 || shifts[0][1]*shifts[1][1] != 0 {
 		return
 	}

@@ -11,13 +11,13 @@ import (
 
 // scan is what the syntactic prefilter found in a function body.
 type scan struct {
-	product   bool // a *= or x = x*y: a product loop may be here
+	product   bool // a *= or x = x*y (or t = append(t, x*y)): a product loop may be here
 	loop      bool // a for or range statement
 	callMul   bool // a multiplication with a call operand: recursion may be here
 	knownCall bool // a call of math.Gamma, Pow or Exp or of a factorial-valued function
 	localCall bool // a call of a function of this package, which may become factorial-valued
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
-	sumCalls  bool // a sum of two calls of one name: a Pascal's-rule or derangement recursion may be here (pascalrule.go)
+	sumCalls  bool // a sum (or difference) of two calls of one name, one maybe weighed: a Pascal's-rule, Stirling or derangement recursion may be here (pascalrule.go)
 	sumTable  bool // a sum of two entries of one table: a table filled by such a rule may be here
 }
 
@@ -57,7 +57,7 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				cur.loop = true
 			}
 		case *ast.AssignStmt:
-			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && isMulOrQuo(n.Rhs[0])) {
+			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && (isMulOrQuo(n.Rhs[0]) || appendsProduct(n.Rhs[0]))) {
 				cur.product = true
 			}
 		case *ast.BinaryExpr:
@@ -66,7 +66,7 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				_, y := ast.Unparen(n.Y).(*ast.CallExpr)
 				cur.callMul = x || y
 			}
-			if cur != nil && n.Op == token.ADD {
+			if cur != nil && (n.Op == token.ADD || n.Op == token.SUB) {
 				calls, table := sameKind(ast.Unparen(n.X), ast.Unparen(n.Y))
 				cur.sumCalls = cur.sumCalls || calls
 				cur.sumTable = cur.sumTable || table
@@ -130,10 +130,20 @@ func (c *checker) factOf(fn *types.Func) *FactorialFact {
 }
 
 // sameKind reports whether x and y may be the two terms of Pascal's
-// rule or of the derangement recurrence: calls of one function by the
+// rule, of a Stirling-number rule (one of them weighed) or of the
+// derangement recurrence: calls of one function by the
 // same name (calls), or entries of two-dimensional tables
 // (t[i-1][j-1] + t[i-1][j]) or of one table (d[i-1] + d[i-2]) (table).
 func sameKind(x, y ast.Expr) (calls, table bool) {
+	// A weighted term, w·f(…) or w·t[…][…] (Stirling numbers), is
+	// compared by each of its factors.
+	for _, pair := range [2][2]ast.Expr{{x, y}, {y, x}} {
+		if m, ok := pair[1].(*ast.BinaryExpr); ok && m.Op == token.MUL {
+			c1, t1 := sameKind(pair[0], ast.Unparen(m.X))
+			c2, t2 := sameKind(pair[0], ast.Unparen(m.Y))
+			return c1 || c2, t1 || t2
+		}
+	}
 	switch x := x.(type) {
 	case *ast.CallExpr:
 		y, ok := y.(*ast.CallExpr)
@@ -169,6 +179,17 @@ func funcName(fun ast.Expr) string {
 		return f.Sel.Name
 	}
 	return ""
+}
+
+// appendsProduct reports whether e is append(t, x*y), the step of a
+// table grown by append (factorialtables.go).
+func appendsProduct(e ast.Expr) bool {
+	call, ok := ast.Unparen(e).(*ast.CallExpr)
+	if !ok || len(call.Args) != 2 {
+		return false
+	}
+	id, ok := call.Fun.(*ast.Ident)
+	return ok && id.Name == "append" && isMulOrQuo(call.Args[1])
 }
 
 func isMulOrQuo(e ast.Expr) bool {

@@ -28,6 +28,9 @@ func (l Limit) None() bool { return l.FirstBad == math.MaxInt64 }
 // for a missing LastGood.
 func (l Limit) LastGoodApprox() string { return approx(l.LastGood) }
 
+// Approx formats v as LastGoodApprox does.
+func Approx(v *big.Int) string { return approx(v) }
+
 func approx(v *big.Int) string {
 	if v == nil {
 		return "none"

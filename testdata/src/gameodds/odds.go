@@ -47,7 +47,7 @@ func Multinomial(counts ...int) uint64 {
 	total := uint64(0)
 	for _, c := range counts {
 		total += uint64(c)
-		res *= binom(total, uint64(c))
+		res *= binom(total, uint64(c)) // want `loop multiplies binom\(total, uint64\(c\)\) into res over the parts c in uint64: the product is the multinomial coefficient \(Σ parts\)!/Π part!, which wraps where it leaves uint64: from total = 21 with parts of 1, whose factors 1, 2, … all fit, where it is 21! \(20! ≈ 2\.43e18 is the largest that fits\), and from total = 68 with two equal parts`
 	}
 	return res
 }

@@ -17,7 +17,7 @@ func (m *partitionMemo) Stirling2(n, k int) int64 {
 	if v, ok := m.memo[key]; ok {
 		return v
 	}
-	v := int64(k)*m.Stirling2(n-1, k) + m.Stirling2(n-1, k-1)
+	v := int64(k)*m.Stirling2(n-1, k) + m.Stirling2(n-1, k-1) // want `recursion computes the Stirling numbers of the second kind, S\(n, k\), .* in int64: the sum wraps where the entry leaves int64, from n = 26 at k = 9`
 	if m.memo == nil {
 		m.memo = map[[2]int]int64{}
 	}

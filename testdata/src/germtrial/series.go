@@ -36,7 +36,7 @@ func regGammaP(s, x float64) float64 {
 
 var factCache = []float64{1}
 
-func cachedFact(n int) float64 {
+func cachedFact(n int) float64 { // want cachedFact:`factorial of parameter 0, breaks from 171`
 	for len(factCache) <= n {
 		m := len(factCache)
 		factCache = append(factCache, factCache[m-1]*float64(m))
@@ -46,5 +46,5 @@ func cachedFact(n int) float64 {
 
 // germinationPoisson is the chance that k seedlings emerge in a plot with the given mean.
 func germinationPoisson(mean float64, k int) float64 {
-	return math.Exp(-mean) * math.Pow(mean, float64(k)) / cachedFact(k)
+	return math.Exp(-mean) * math.Pow(mean, float64(k)) / cachedFact(k) // want `Poisson-style term mean\^k·e\^\(−mean\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }

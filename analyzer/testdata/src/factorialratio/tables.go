@@ -27,7 +27,7 @@ func Sprouts(n, k int, p float64) float64 {
 
 // SampleWays is the number of ways to pick k of n trays, from a table
 // of factorials up to n built for the call.
-func SampleWays(n, k int) float64 {
+func SampleWays(n, k int) float64 { // want SampleWays:`binomial of parameter 0, breaks from 171`
 	f := make([]float64, n+1)
 	f[0] = 1
 	for i := 1; i <= n; i++ {
@@ -105,4 +105,71 @@ func ShelfOrders(n int) []int64 {
 		t[i] = t[i-1] * int64(i)
 	}
 	return t
+}
+
+// seedFact grows as larger trays come in: element m is appended as
+// seedFact[m-1]·m, so seedFact[m] is m!.
+var seedFact = []float64{1}
+
+// seedFactorial returns n!, growing the table as far as n first.
+func seedFactorial(n int) float64 { // want seedFactorial:`factorial of parameter 0, breaks from 171`
+	for len(seedFact) <= n {
+		m := len(seedFact)
+		seedFact = append(seedFact, seedFact[m-1]*float64(m))
+	}
+	return seedFact[n]
+}
+
+// TrayPicks is the number of ways to pick k of a tray's n seeds.
+func TrayPicks(n, k int) float64 { // want TrayPicks:`binomial of parameter 0, breaks from 171`
+	return seedFactorial(n) / (seedFactorial(k) * seedFactorial(n-k)) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
+}
+
+// CheckOrders grows an int64 table of the orders of 0..n trays by
+// append, indexed by the loop.
+func CheckOrders(n int) []int64 {
+	f := []int64{1}
+	for i := 1; i <= n; i++ { // want `loop fills the factorial table f with i! at index i up to n: the factorial of n in int64 wraps for n ≥ 21`
+		f = append(f, f[i-1]*int64(i))
+	}
+	return f
+}
+
+// RackOrders grows its table by its own length, reading it after.
+func RackOrders(n, k int) uint64 {
+	r := []uint64{1, 1}
+	for len(r) <= n { // want `loop fills the factorial table r with i! at index i up to n: the factorial of n in uint64 wraps for n ≥ 21`
+		r = append(r, r[len(r)-1]*uint64(len(r)))
+	}
+	return r[n] / r[n-k] // want `permutation count n!/\(n - k\)! as a ratio of factorials in uint64: the numerator n! wraps for n ≥ 21`
+}
+
+// ShortOrders stops at 20 trays, all of whose orders fit int64: silent.
+func ShortOrders() []int64 {
+	f := []int64{1}
+	for len(f) <= 20 {
+		f = append(f, f[len(f)-1]*int64(len(f)))
+	}
+	return f
+}
+
+// Doubling starts at 2, so its elements are 2·m!, no factorials: silent.
+func Doubling(n int) []int64 {
+	f := []int64{2}
+	for i := 1; i <= n; i++ {
+		f = append(f, f[i-1]*int64(i))
+	}
+	return f
+}
+
+// SkipOdd may skip an append, so the index is not the length: silent.
+func SkipOdd(n int) []int64 {
+	f := []int64{1}
+	for i := 1; i <= n; i++ {
+		if i%2 == 1 {
+			continue
+		}
+		f = append(f, f[i-1]*int64(i))
+	}
+	return f
 }
