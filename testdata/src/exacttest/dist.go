@@ -2,7 +2,7 @@ package exacttest
 
 import "math"
 
-func factF(n int) float64 {
+func factF(n int) float64 { // want factF:`factorial of parameter 0,`
 	f := 1.0
 	for i := 2; i <= n; i++ {
 		f *= float64(i)
@@ -28,7 +28,7 @@ func lchoose(n, k int) float64 {
 // of n from N items of which K are marked.
 func HypergeomCDF(k, N, K, n int) float64 {
 	lo := max(0, n-(N-K))
-	p := math.Exp(lchoose(K, lo) + lchoose(N-K, n-lo) - lchoose(N, n))
+	p := math.Exp(lchoose(K, lo) + lchoose(N-K, n-lo) - lchoose(N, n)) // want `math\.Exp of log-gamma values computes Γ ratio`
 	sum := 0.0
 	for x := lo; x <= k; x++ {
 		sum += p

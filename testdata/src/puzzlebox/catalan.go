@@ -3,17 +3,17 @@ package puzzlebox
 // Count is a number of arrangements.
 type Count uint64
 
-func factorial(n int) Count {
+func factorial(n int) Count { // want factorial:`factorial of parameter 0,`
 	f := Count(1)
-	for i := 2; i <= n; i++ {
+	for i := 2; i <= n; i++ { // want `factorial of n in uint64 wraps for`
 		f *= Count(i)
 	}
 	return f
 }
 
 // Catalan is the nth Catalan number, (2n)!/((n+1)! n!).
-func Catalan(n int) Count {
-	return factorial(2*n) / (factorial(n+1) * factorial(n))
+func Catalan(n int) Count { // want Catalan:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0`
+	return factorial(2*n) / (factorial(n+1) * factorial(n)) // want `Catalan number as \(2n\)!/\(\(n\+1\)!n!\) in uint64: the`
 }
 
 // CatalanRec steps C(k+1) = C(k)·2(2k+1)/(k+2).

@@ -6,11 +6,11 @@ import (
 	"sort"
 )
 
-func ifact(n int) int {
+func ifact(n int) int { // want ifact:`factorial of parameter 0,`
 	if n < 2 {
 		return 1
 	}
-	return n * ifact(n-1)
+	return n * ifact(n-1) // want `recursive factorial of n in int wraps`
 }
 
 // Multinomial is (sum of counts)!/Π count!.
@@ -21,12 +21,12 @@ func Multinomial(counts ...int) int {
 		total += c
 		den *= ifact(c)
 	}
-	return ifact(total) / den
+	return ifact(total) / den // want `Multinomial computes the multinomial coefficient \(Σ parts\)!/Π`
 }
 
 // FallingPower is n·(n−1)···(n−k+1), the ordered picks of k from n.
-func FallingPower(n, k int) int64 {
-	return int64(ifact(n) / ifact(n-k))
+func FallingPower(n, k int) int64 { // want FallingPower:`value Γ\(p0 \+ 1\)/Γ\(p0`
+	return int64(ifact(n) / ifact(n-k)) // want `permutation count n!/\(n - k\)! as a`
 }
 
 var errTooMany = errors.New("puzzlebox: count overflows uint64")

@@ -6,10 +6,10 @@ import "math"
 // traffic erlangs offered.
 func ErlangC(agents int, traffic float64) float64 {
 	n := float64(agents)
-	top := math.Pow(traffic, n) / factorial(agents) * n / (n - traffic)
+	top := math.Pow(traffic, n) / factorial(agents) * n / (n - traffic) // want `term with traffic\^n over agents! in float64:`
 	sum := 0.0
 	for k := 0; k < agents; k++ {
-		sum += math.Pow(traffic, float64(k)) / factorial(k)
+		sum += math.Pow(traffic, float64(k)) / factorial(k) // want `power-over-factorial term traffic\^k/k! in float64: the divisor`
 	}
 	return top / (sum + top)
 }
@@ -54,9 +54,9 @@ type TrunkGroup struct {
 func (g *TrunkGroup) Blocking() float64 {
 	den := 0.0
 	for i := 0; i <= g.Lines; i++ {
-		den += math.Pow(g.Offered, float64(i)) / math.Gamma(float64(i+1))
+		den += math.Pow(g.Offered, float64(i)) / math.Gamma(float64(i+1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(i \+ 1\)\) is \+Inf` `series term math\.Pow\(g\.Offered, float64\(i\)\) / math\.Gamma\(float64\(i\+1\)\) computes`
 	}
-	return math.Pow(g.Offered, float64(g.Lines)) / math.Gamma(float64(g.Lines+1)) / den
+	return math.Pow(g.Offered, float64(g.Lines)) / math.Gamma(float64(g.Lines+1)) / den // want `math\.Gamma overflows: math\.Gamma\(float64\(g\.Lines \+ 1\)\) is \+Inf`
 }
 
 // OverflowCalls is the traffic lost by the group, from the recurrence.

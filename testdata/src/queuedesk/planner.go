@@ -35,7 +35,7 @@ type arrivals struct {
 	memo map[int]float64
 }
 
-func (c *arrivals) fact(n int) float64 {
+func (c *arrivals) fact(n int) float64 { // want fact:`factorial of parameter 0,`
 	if n < 2 {
 		return 1
 	}
@@ -50,8 +50,8 @@ func (c *arrivals) fact(n int) float64 {
 var arrivalCache = &arrivals{memo: map[int]float64{}}
 
 // ArrivalProb is the chance of exactly k arrivals at Poisson rate rate.
-func ArrivalProb(k int, rate float64) float64 {
-	return math.Pow(rate, float64(k)) * math.Exp(-rate) / arrivalCache.fact(k)
+func ArrivalProb(k int, rate float64) float64 { // want ArrivalProb:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\),`
+	return math.Pow(rate, float64(k)) * math.Exp(-rate) / arrivalCache.fact(k) // want `Poisson-style term rate\^k·e\^\(−rate\)/k! in float64: the divisor`
 }
 
 // ArrivalProbSafe evaluates small cases directly and the rest in log space.

@@ -11,7 +11,7 @@ func AcceptProb(lot, defectives, sample, accept int) float64 {
 	for x := 0; x <= accept && x <= defectives; x++ {
 		good := chooseU(uint64(lot-defectives), uint64(sample-x))
 		bad := chooseU(uint64(defectives), uint64(x))
-		p += float64(good) * float64(bad) / total
+		p += float64(good) * float64(bad) / total // want `hypergeometric probability from three binomial coefficients in`
 	}
 	return p
 }
@@ -27,13 +27,13 @@ func (s SinglePlan) OC(q float64) float64 {
 	n := s.SampleSize
 	pa := 0.0
 	for i := 0; i <= s.AcceptNum; i++ {
-		pa += chooseGamma(n, i) * math.Pow(q, float64(i)) * math.Pow(1-q, float64(n-i))
+		pa += chooseGamma(n, i) * math.Pow(q, float64(i)) * math.Pow(1-q, float64(n-i)) // want `OC computes C\(s\.SampleSize, i\)·q\^i·\(1−q\)\^\(-i \+ s\.SampleSize\) in`
 	}
 	return pa
 }
 
 func poissonTerm(k int, m float64) float64 {
-	return math.Pow(m, float64(k)) * math.Exp(-m) / float64(factU(uint64(k)))
+	return math.Pow(m, float64(k)) * math.Exp(-m) / float64(factU(uint64(k))) // want `Poisson-style term m\^k·e\^\(−m\)/\(uint64\(k\)\)! in uint64: the divisor`
 }
 
 // DoublePlan accepts on the first sample at AcceptFirst defects or fewer.

@@ -7,8 +7,8 @@ import "math"
 func KOutOfN(k, n int, p float64) float64 {
 	r := 0.0
 	for i := k; i <= n; i++ {
-		c := floatFact(n) / (floatFact(i) * floatFact(n-i))
-		r += c * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i))
+		c := floatFact(n) / (floatFact(i) * floatFact(n-i))            // want `KOutOfN computes C\(n, i\) in float64, which`
+		r += c * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `ratio of factorials in float64: the numerator`
 	}
 	return r
 }

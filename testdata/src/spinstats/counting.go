@@ -9,17 +9,17 @@ import (
 // Level is a number of single-particle states.
 type Level int64
 
-func fact64(n int64) int64 {
+func fact64(n int64) int64 { // want fact64:`factorial of parameter 0,`
 	out := int64(1)
-	for ; n > 1; n-- {
+	for ; n > 1; n-- { // want `factorial of n in int64 wraps for`
 		out *= n
 	}
 	return out
 }
 
 // BoseEinsteinStates counts the ways to put particles bosons in g states.
-func BoseEinsteinStates(particles int64, g Level) int64 {
-	return fact64(particles+int64(g)-1) / (fact64(particles) * fact64(int64(g)-1))
+func BoseEinsteinStates(particles int64, g Level) int64 { // want BoseEinsteinStates:`value Γ\(p0 \+ p1\)/\(Γ\(p0`
+	return fact64(particles+int64(g)-1) / (fact64(particles) * fact64(int64(g)-1)) // want `binomial coefficient as a ratio of factorials`
 }
 
 // FermiDiracStates counts the ways to put particles fermions in g
@@ -56,9 +56,9 @@ func LatticeGasStates(sites, particles uint) (uint64, bool) {
 }
 
 // BoseGasCount is BoseEinsteinStates as a float from log-gamma values.
-func BoseGasCount(particles, levels int) float64 {
+func BoseGasCount(particles, levels int) float64 { // want BoseGasCount:`value Γ\(p0 \+ p1\)/\(Γ\(p0`
 	a, _ := math.Lgamma(float64(particles + levels))
 	b, _ := math.Lgamma(float64(particles + 1))
 	c, _ := math.Lgamma(float64(levels))
-	return math.Exp(a - b - c)
+	return math.Exp(a - b - c) // want `math\.Exp of log-gamma values computes C\(particles \+`
 }

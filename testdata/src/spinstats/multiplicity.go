@@ -8,9 +8,9 @@ func MaxwellBoltzmannMultiplicity(occ []int) float64 {
 	den := 1.0
 	for _, k := range occ {
 		n += k
-		den *= math.Gamma(float64(k + 1))
+		den *= math.Gamma(float64(k + 1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(k \+ 1\)\) is \+Inf`
 	}
-	return math.Gamma(float64(n+1)) / den
+	return math.Gamma(float64(n+1)) / den // want `math\.Gamma overflows: math\.Gamma\(float64\(n \+ 1\)\) is \+Inf`
 }
 
 // LogMultiplicity is the logarithm of MaxwellBoltzmannMultiplicity.

@@ -12,8 +12,8 @@ func RotorZ(jmax int, beta float64) float64 {
 }
 
 // IdealGasZ is z1^N/N! for N indistinguishable particles.
-func IdealGasZ(n int, z1 float64) float64 {
-	return math.Pow(z1, float64(n)) / math.Gamma(float64(n+1))
+func IdealGasZ(n int, z1 float64) float64 { // want IdealGasZ:`value \(p1\)\^\(p0\)/Γ\(p0 \+ 1\),`
+	return math.Pow(z1, float64(n)) / math.Gamma(float64(n+1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(n \+ 1\)\) is \+Inf`
 }
 
 // IdealGasLogZ is the logarithm of IdealGasZ.
