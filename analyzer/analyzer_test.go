@@ -37,7 +37,7 @@ var scenarios = []string{
 	"cardshuffle", "mathkit", "bottling", "staffing", "gasmodel", "dice",
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
 	"labtables", "raffle", "pickroute", "linkbudget", "gameodds", "clinicq", "germtrial",
-	"linebroaden",
+	"linebroaden", "sparecheck", "queuedesk", "spinstats", "puzzlebox", "exacttest",
 }
 
 // logSpacePackages are the category packages beside the analyzer of the

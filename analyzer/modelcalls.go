@@ -9,6 +9,8 @@ import (
 	"math/big"
 	"sort"
 
+	"golang.org/x/tools/go/analysis"
+
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
@@ -923,7 +925,11 @@ func (fc *fnCtx) reportCallRoot(res *vm.Result, root ast.Expr, val *vm.Term, w w
 	case w.gamma:
 		cat = catGammaRatio
 	}
-	fc.report(finding{node: root, cat: cat, definite: definite, msg: msg, match: fc.callRootMatch(res, root, form)})
+	var related []analysis.RelatedInformation
+	if w.call != nil {
+		related = fc.coefDef(w.call) // the package function whose call breaks first
+	}
+	fc.report(finding{node: root, cat: cat, definite: definite, msg: msg, related: related, match: fc.callRootMatch(res, root, form)})
 }
 
 func ratString(r *big.Rat) string {

@@ -1,0 +1,28 @@
+package exacttest
+
+// Table is a 2×2 contingency table.
+type Table struct {
+	A, B, C, D int
+}
+
+func hyperPMF(a, b, c, d int) float64 {
+	n := a + b + c + d
+	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / // want `ratio of factorials in float64: the numerator`
+		(factF(n) * factF(a) * factF(b) * factF(c) * factF(d))
+}
+
+// FisherExact is the two-sided p-value of Fisher's exact test.
+func (t Table) FisherExact() float64 {
+	row1, col1 := t.A+t.B, t.A+t.C
+	n := t.A + t.B + t.C + t.D
+	obs := hyperPMF(t.A, t.B, t.C, t.D)
+	p := 0.0
+	for a := max(0, row1+col1-n); a <= min(row1, col1); a++ {
+		b, c := row1-a, col1-a
+		d := n - a - b - c
+		if q := hyperPMF(a, b, c, d); q <= obs*(1+1e-7) {
+			p += q
+		}
+	}
+	return p
+}

@@ -1,0 +1,52 @@
+package exacttest
+
+import (
+	"math"
+)
+
+// SignTest is the two-sided p-value of the sign test.
+func SignTest(plus, minus int) float64 {
+	n := plus + minus
+	k := min(plus, minus)
+	c, p := 1.0, 0.0
+	for i := 0; i <= k; i++ {
+		p += c
+		c = c * float64(n-i) / float64(i+1)
+	}
+	return math.Min(1, 2*p*math.Pow(0.5, float64(n)))
+}
+
+// SignTestLog is SignTest with the terms in log space.
+func SignTestLog(plus, minus int) float64 {
+	n := plus + minus
+	k := min(plus, minus)
+	ln2 := math.Log(2)
+	p := 0.0
+	for i := 0; i <= k; i++ {
+		p += math.Exp(lchoose(n, i) - float64(n)*ln2)
+	}
+	return math.Min(1, 2*p)
+}
+
+func wilcoxonCounts(n int) []uint64 {
+	top := n * (n + 1) / 2
+	c := make([]uint64, top+1)
+	c[0] = 1
+	for r := 1; r <= n; r++ {
+		for s := top; s >= r; s-- {
+			c[s] += c[s-r]
+		}
+	}
+	return c
+}
+
+// WilcoxonP is the exact lower-tail p-value P(W <= w) of the signed-rank
+// statistic for n pairs.
+func WilcoxonP(w, n int) float64 {
+	c := wilcoxonCounts(n)
+	sum := 0.0
+	for s := 0; s <= w && s < len(c); s++ {
+		sum += float64(c[s])
+	}
+	return sum / math.Pow(2, float64(n))
+}

@@ -1,0 +1,47 @@
+package spinstats
+
+import "math"
+
+// MaxwellBoltzmannMultiplicity is N!/(n1! n2! ...) for the occupations.
+func MaxwellBoltzmannMultiplicity(occ []int) float64 {
+	n := 0
+	den := 1.0
+	for _, k := range occ {
+		n += k
+		den *= math.Gamma(float64(k + 1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(k \+ 1\)\) is \+Inf`
+	}
+	return math.Gamma(float64(n+1)) / den // want `math\.Gamma overflows: math\.Gamma\(float64\(n \+ 1\)\) is \+Inf`
+}
+
+// LogMultiplicity is the logarithm of MaxwellBoltzmannMultiplicity.
+func LogMultiplicity(occ []int) float64 {
+	n := 0
+	s := 0.0
+	for _, k := range occ {
+		n += k
+		g, _ := math.Lgamma(float64(k + 1))
+		s -= g
+	}
+	g, _ := math.Lgamma(float64(n + 1))
+	return s + g
+}
+
+// Oscillators is an Einstein solid of N oscillators sharing Quanta quanta.
+type Oscillators struct {
+	N      int
+	Quanta int
+}
+
+// Multiplicity is C(Quanta+N-1, Quanta), as a running product.
+func (o Oscillators) Multiplicity() float64 {
+	w := 1.0
+	for i := 1; i <= o.Quanta; i++ {
+		w *= float64(o.N-1+i) / float64(i)
+	}
+	return w
+}
+
+// Entropy is ln of the multiplicity, in units of k_B.
+func (o Oscillators) Entropy() float64 {
+	return math.Log(o.Multiplicity())
+}
