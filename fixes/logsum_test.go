@@ -13,7 +13,7 @@ func init() {
 	fixPackages = append(fixPackages, "keybits")
 	diffCases = append(diffCases,
 		diffCase{pkg: "keybits", fn: "ShiftBits", loops: []string{"a := 0; a <= 900; a += 53", "b := 0; b <= 900; b += 61"}, args: "float64(a), float64(b)", typ: "float64", ref: refShiftBits},
-		diffCase{pkg: "keybits", fn: "SwipeBits", loops: []string{"l := 2; l <= 1400; l += 233", "t := 1; t <= 1400; t += 311"}, args: "float64(l), float64(t)", typ: "float64", ref: refSwipeBits, call: "SwipeBits(l, t, 10, 4.5)"},
+		diffCase{pkg: "keybits", fn: "SwipeBits", loops: []string{"l := 2; l <= 1400; l += 233", "t := 1; t <= 1500; t += 1 + t*4"}, args: "float64(l), float64(t)", typ: "float64", ref: refSwipeBits, call: "SwipeBits(l, t, 10, 4.5)"},
 	)
 }
 
@@ -27,28 +27,44 @@ func log2Big(x *big.Float) float64 {
 }
 
 // refShiftBits is log2 Σ_{i ≤ min(a, b)} C(a+b, i), the sum exact in
-// math/big (DLMF 26.3.1 for each C(n, i)).
+// math/big, each C(n, i+1) = C(n, i)·(n−i)/(i+1) from the one before
+// (DLMF 26.3.1 and 26.3.5).
 func refShiftBits(x []float64) *big.Float {
 	a, b := int64(x[0]), int64(x[1])
-	s := new(big.Int)
+	n := a + b
+	s, c := new(big.Int), big.NewInt(1)
 	for i := int64(0); i <= min(a, b); i++ {
-		s.Add(s, chooseBig(a+b, i))
-	}
-	if s.Sign() == 0 {
-		return fl(math.Inf(-1))
+		s.Add(s, c)
+		c.Mul(c, big.NewInt(n-i))
+		c.Quo(c, big.NewInt(i+1))
 	}
 	return fl(log2Big(bf(s)))
 }
 
 // refSwipeBits is log10 of Σ_{i=2}^{l} Σ_{j=1}^{min(t, i−1)}
-// C(i−1, j−1)·10·4.5^j, exact in math/big (4.5 is a dyadic rational),
-// for SwipeBits(l, t, 10, 4.5).
+// C(i−1, j−1)·10·d^j with d = 4.5, for SwipeBits(l, t, 10, 4.5): a full
+// row (t ≥ i−1) is d·((1+d)^(i−1) − d^(i−1)) by the binomial theorem
+// (common practice: Σ_m C(r, m)·d^m = (1+d)^r, less its
+// last term d^r), a partial one summed term by term; 4.5 and 5.5 are
+// dyadic, so every product is exact to the reference's precision.
 func refSwipeBits(x []float64) *big.Float {
 	l, t := int64(x[0]), int64(x[1])
+	d, d1 := fl(4.5), fl(5.5)
 	s := new(big.Float).SetPrec(refPrec)
+	pd, pd1 := fl(1), fl(1) // d^(i−1), (1+d)^(i−1)
 	for i := int64(2); i <= l; i++ {
-		for j := int64(1); j <= min(t, i-1); j++ {
-			s.Add(s, mul(mul(bf(chooseBig(i-1, j-1)), fl(10)), powBig(4.5, j)))
+		pd, pd1 = mul(pd, d), mul(pd1, d1)
+		if t >= i-1 {
+			row := new(big.Float).SetPrec(refPrec).Sub(pd1, pd)
+			s.Add(s, mul(mul(row, d), fl(10)))
+			continue
+		}
+		c, pw := big.NewInt(1), fl(1) // C(i−1, j−1), d^j
+		for j := int64(1); j <= t; j++ {
+			pw = mul(pw, d)
+			s.Add(s, mul(mul(bf(c), pw), fl(10)))
+			c.Mul(c, big.NewInt(i-j))
+			c.Quo(c, big.NewInt(j))
 		}
 	}
 	if s.Sign() == 0 {
