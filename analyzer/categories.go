@@ -44,7 +44,7 @@ type CategoryInfo struct {
 var patterns = []struct{ id, title string }{
 	{catLoop, "A loop multiplies an accumulator by its induction variable (a factorial, double, falling or rising factorial) and the product exceeds its type."},
 	{catRecursion, "A recursive function returns n times itself at n-1 and the factorial exceeds its result type."},
-	{catCall, "A call of a factorial-valued function receives an argument whose factorial cannot fit the result type."},
+	{catCall, "A call of a factorial-valued function receives an argument whose factorial cannot fit the result type, or a float factorial or binomial value that can be +Inf reaches a logarithm that is finite."},
 	{catRatio, "A binomial, permutation, multinomial, Catalan or hypergeometric value is computed as a ratio of factorials whose numerator overflows first."},
 	{catBinomLoop, "A multiplicative binomial loop overflows in its intermediate product before the division, even where the coefficient fits."},
 	{catPascal, "A count built by a triangle rule, a binomial coefficient by Pascal's rule C(n, k) = C(n-1, k-1) + C(n-1, k), a Stirling number by k·S(n-1, k) + S(n-1, k-1) or a Bell number by the Bell triangle, in a recursion or a table wraps in an integer type once the count leaves it."},
@@ -61,8 +61,8 @@ var patterns = []struct{ id, title string }{
 
 // Categories returns every category the analyzer can emit: each pattern in
 // its possible and its definite form, and the category of malformed
-// directives. (factorial-call is emitted only in its definite form; the
-// bare form is listed so that every definite category has one.)
+// directives. (factorial-call's possible form is only the logarithm of
+// a float factorial or binomial call, checkLogOfValue.)
 func Categories() []CategoryInfo {
 	var out []CategoryInfo
 	for _, p := range patterns {

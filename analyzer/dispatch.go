@@ -55,6 +55,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	}
 	if s.knownCall {
 		fc.checkLogGamma()
+		fc.checkLogOfValue()
 	}
 }
 

@@ -3,7 +3,9 @@ package analyzer
 import (
 	"fmt"
 	"go/ast"
+	"go/types"
 
+	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
@@ -76,5 +78,53 @@ func (fc *fnCtx) checkClampedCall(call *ast.CallExpr, f factor, first int64, j j
 		related: fc.c.relatedDef(f.fn.Name(), f.fn.Pos()),
 		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
 			Result: fc.c.pass.TypesInfo.TypeOf(call), Func: fc.node, Param: p, FirstBad: first, EntryGuard: true},
+	})
+}
+
+// checkLogOfValue reports math.Log, Log2 or Log10 of a call of a float
+// factorial or binomial function (through its fact) whose argument may
+// reach the point where the value is +Inf: the IEEE value of a number
+// past float64, but its logarithm is finite (ln 171! ≈ 711.7), so the
+// logarithm the code wants is +Inf although it fits. The same value
+// returned, stored or compared is right and not reported.
+func (fc *fnCtx) checkLogOfValue() {
+	c := fc.c
+	fc.eachLogCall(func(log *ast.CallExpr, name string) {
+		inner, ok := fc.stripConv(log.Args[0]).(*ast.CallExpr)
+		if !ok {
+			return
+		}
+		f, ok := fc.factorOf(inner)
+		if !ok || f.fact == nil || f.fact.Safe || !f.t.Float || !types.Identical(c.pass.TypesInfo.TypeOf(inner), types.Typ[types.Float64]) {
+			return
+		}
+		m := &fixes.Match{Shape: fixes.ShapeLogOfValue, Node: log, Result: c.pass.TypesInfo.TypeOf(log), Func: fc.node}
+		var msg string
+		switch {
+		case f.kind == kindFactorial:
+			first := firstBadOf(f.kind, f.t) - f.off
+			j := fc.judge(f.arg, first)
+			if j.silent {
+				return
+			}
+			shown, off := shownFactorial(f.arg, f.off)
+			msg = fmt.Sprintf("math.%s of %s, whose value is %s!: the %s, so the logarithm is +Inf where ln %s! is finite%s",
+				name, src(inner), parenText(plus(shown, off)), factorialLimitText(f.kind, shown, off, f.t), parenText(plus(shown, off)), j.clause)
+			m.Factorials = []fixes.FactorialCall{{Call: inner, Arg: f.arg, Off: f.off}}
+		case f.kind == kindBinomial && f.arg2 != nil:
+			central := thresholds.CentralBinomial(f.t.Num)
+			j := fc.judge(f.arg, central.FirstBad)
+			if j.silent {
+				return
+			}
+			n, k := src(fc.stripConv(f.arg)), src(fc.stripConv(f.arg2))
+			msg = fmt.Sprintf("math.%s of %s, whose value is C(%s, %s): it %s for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), so the logarithm is +Inf where ln C(%s, %s) is finite%s",
+				name, src(inner), n, k, verb(f.t), n, central.FirstBad, k, parenText(n), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), n, k, j.clause)
+			m.Binomials = []fixes.BinomialCall{{Call: inner, N: f.arg, K: f.arg2}}
+		default:
+			return
+		}
+		fc.report(finding{node: log, cat: catCall, msg: msg, related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})
+		return
 	})
 }

@@ -23,6 +23,27 @@ import (
 // logFuncs are the math logarithms whose argument is judged.
 var logFuncs = [...]string{"Log", "Log2", "Log10"}
 
+// eachLogCall calls f with each call of math.Log, Log2 or Log10 in the
+// function's body (outside closures) at no position reported yet, and
+// the function's name.
+func (fc *fnCtx) eachLogCall(f func(call *ast.CallExpr, name string)) {
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		if _, ok := n.(*ast.FuncLit); ok {
+			return false
+		}
+		call, ok := n.(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || fc.c.reportedAt(call.Pos()) {
+			return true
+		}
+		for _, name := range logFuncs {
+			if fc.c.isMathFunc(call, name) {
+				f(call, name)
+			}
+		}
+		return true
+	})
+}
+
 // binomTerm is the binomial factor of a term a loop adds to a sum.
 type binomTerm struct {
 	n, k string // as written (or as the model names them)
@@ -35,35 +56,19 @@ type binomTerm struct {
 // below the first central coefficient past the type.
 func (fc *fnCtx) modelLogSum(res *vm.Result) {
 	c := fc.c
-	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
-		if _, ok := n.(*ast.FuncLit); ok {
-			return false
-		}
-		call, ok := n.(*ast.CallExpr)
-		if !ok || len(call.Args) != 1 || c.reportedAt(call.Pos()) {
-			return true
-		}
-		name := ""
-		for _, f := range logFuncs {
-			if c.isMathFunc(call, f) {
-				name = f
-			}
-		}
-		if name == "" {
-			return true
-		}
+	fc.eachLogCall(func(call *ast.CallExpr, name string) {
 		obj := c.objOf(fc.stripConv(call.Args[0]))
 		if obj == nil {
-			return true
+			return
 		}
 		t, ok := c.numOf(obj.Type())
 		if !ok || !t.Float || fc.checksNonFinite(call.Args[0]) {
-			return true
+			return
 		}
 		central := thresholds.CentralBinomial(t.Num)
 		bt, ok := fc.summedBinomial(res, obj, call.Pos(), central.FirstBad)
 		if !ok {
-			return true
+			return
 		}
 		clause := ""
 		if id, isID := ast.Unparen(bt.nx).(*ast.Ident); isID {
@@ -73,7 +78,7 @@ func (fc *fnCtx) modelLogSum(res *vm.Result) {
 			name, obj.Name(), bt.n, bt.k, t.typeName(), bt.n, parenText(bt.n), verb(t), bt.n, central.FirstBad, central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), parenText(bt.n), clause)
 		m := &fixes.Match{Shape: fixes.ShapeLogSum, Node: call, Acc: obj, Func: fc.node, Result: obj.Type(), Binomials: fc.binomialCalls(res)}
 		fc.report(finding{node: call, cat: catRatio, msg: msg, match: m})
-		return true
+		return
 	})
 }
 

@@ -60,6 +60,9 @@ func (p Product) QuoFloat(x float64) Product               { panic("") }
 func (p Product) Neg() Product                             { panic("") }
 func (p Product) Float64() float64                         { panic("") }
 func ChooseProduct(v, n, k float64) Product                { panic("") }
+func (p Product) Log() float64                             { panic("") }
+func (p Product) Log2() float64                            { panic("") }
+func (p Product) Log10() float64                           { panic("") }
 
 type Sum struct{ v float64 }
 

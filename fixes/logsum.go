@@ -53,6 +53,11 @@ func buildLogSum(b *builder) error {
 	if body == nil {
 		return errors.New("the sum's function has no body")
 	}
+	for _, f := range b.m.Binomials {
+		if !b.plain(f.N) || !b.plain(f.K) {
+			return errors.New("a binomial's operands have effects the rewrite would repeat")
+		}
+	}
 	ls := &logSum{b: b, sum: sum, lp: &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(call.Pos()), calls: true}}
 	if err := ls.writes(body); err != nil {
 		return err

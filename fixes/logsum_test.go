@@ -10,9 +10,15 @@ import (
 // patterns' Σ C(i−1, j−1)·starts·degree^j. Past C(1030, 515) the
 // original's sum is +Inf; the exact logarithm is about a thousand.
 func init() {
-	fixPackages = append(fixPackages, "keybits")
+	fixPackages = append(fixPackages, "keybits", "fixlogvalue")
 	diffCases = append(diffCases,
 		diffCase{pkg: "keybits", fn: "ShiftBits", loops: []string{"a := 0; a <= 900; a += 53", "b := 0; b <= 900; b += 61"}, args: "float64(a), float64(b)", typ: "float64", ref: refShiftBits},
+		// The logarithm of a float factorial or binomial helper's value
+		// (buildLogOfValue): +Inf past 170! and C(1029, 514) in the
+		// original, ln n! and ln C(n, k) (a few thousand) exact.
+		diffCase{pkg: "fixlogvalue", fn: "OrderNats", loops: []string{"n := 0; n <= 2000; n += 37"}, args: "n", typ: "float64", ref: refLnFactorial},
+		diffCase{pkg: "fixlogvalue", fn: "SproutNats", loops: []string{"n := 0; n <= 2400; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k", typ: "float64", ref: refLnChoose},
+		diffCase{pkg: "fixlogvalue", fn: "SproutBits", loops: []string{"n := 0; n <= 2400; n += 97", "k := 0; k <= n; k += 1 + n/7"}, args: "n, k", typ: "float64", ref: refLog2Choose},
 		diffCase{pkg: "keybits", fn: "SwipeBits", loops: []string{"l := 2; l <= 1400; l += 233", "t := 1; t <= 1500; t += 1 + t*4"}, args: "float64(l), float64(t)", typ: "float64", ref: refSwipeBits, call: "SwipeBits(l, t, 10, 4.5)"},
 	)
 }
@@ -71,4 +77,19 @@ func refSwipeBits(x []float64) *big.Float {
 		return fl(math.Inf(-1))
 	}
 	return fl(log2Big(s) * math.Log10(2))
+}
+
+// refLnFactorial is ln n! from n! exact in math/big.
+func refLnFactorial(x []float64) *big.Float {
+	return fl(log2Big(bf(factorialBig(int64(x[0])))) * math.Ln2)
+}
+
+// refLnChoose is ln C(n, k) from C(n, k) exact in math/big.
+func refLnChoose(x []float64) *big.Float {
+	return fl(log2Big(bf(chooseBig(int64(x[0]), int64(x[1])))) * math.Ln2)
+}
+
+// refLog2Choose is log2 C(n, k) from C(n, k) exact in math/big.
+func refLog2Choose(x []float64) *big.Float {
+	return fl(log2Big(bf(chooseBig(int64(x[0]), int64(x[1])))))
 }

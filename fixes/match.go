@@ -57,6 +57,7 @@ const (
 	ShapePascalGuard            // f(n-1, k-1) + f(n-1, k) in an integer type  Node: the statement that sums; Args: the parameters n, k as declared (r, c of C(r+c, r) with PathCount); Func (see buildPascalGuard)
 	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
 	ShapeLogSum                 // math.Log(s) of a float sum s += term   Node: the math.Log, Log2 or Log10 call; Acc: s; Binomials (see buildLogSum)
+	ShapeLogOfValue             // math.Log(f(n)) of a float factorial or binomial function's call  Node: the math.Log, Log2 or Log10 call; Factorials or Binomials: that call (see buildLogOfValue)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -80,6 +80,7 @@ func init() {
 		ShapeLogSpaceTerm:     {"series term over running products", buildLogSpaceTerm, family{float: "ProductOf"}, 0, nil},
 		ShapeProductChain:     {"product of powers and gamma values", buildProductChain, family{float: "GammaProduct"}, 0, nil},
 		ShapeLogSum:           {"logarithm of a sum", buildLogSum, family{float: "SumOf"}, 0, nil},
+		ShapeLogOfValue:       {"logarithm of a factorial value", buildLogOfValue, family{float: "FactorialProduct"}, 0, nil},
 	}
 }
 

@@ -185,6 +185,52 @@ func (p Product) Float64() float64 {
 	return r
 }
 
+// Log returns the natural logarithm of the product.
+//
+// Where the product's float64 value is a normal positive float64, Log
+// returns math.Log of it, bit for bit what the code's math.Log gives;
+// where that value left float64 (+Inf for 171! or C(1100, 550), 0 below
+// the range) while the product is positive, the carried logarithm,
+// within a few ulps of the logarithm of the product of the factors as
+// given; elsewhere (a negative or NaN product) math.Log of the value.
+//
+// Special cases are:
+//
+//	Log of a product holding 0 is −Inf
+//	Log of a negative product is NaN
+func (p Product) Log() float64 {
+	if p.logOfFloat() {
+		return math.Log(p.Float64())
+	}
+	return p.l.float()
+}
+
+// Log2 returns the base-2 logarithm of the product, as Log does
+// (math.Log2 of its float64 value where Log takes math.Log).
+func (p Product) Log2() float64 {
+	if p.logOfFloat() {
+		return math.Log2(p.Float64())
+	}
+	return p.l.div(dd{math.Ln2, lnTwoLo}).float()
+}
+
+// Log10 returns the base-10 logarithm of the product, as Log does
+// (math.Log10 of its float64 value where Log takes math.Log).
+func (p Product) Log10() float64 {
+	if p.logOfFloat() {
+		return math.Log10(p.Float64())
+	}
+	return p.l.div(dd{math.Ln10, lnTenLo}).float()
+}
+
+// logOfFloat reports whether the product's logarithm is its float64
+// value's own: a normal positive value, or no positive finite
+// logarithm carried.
+func (p Product) logOfFloat() bool {
+	v := p.Float64()
+	return v >= 0x1p-1022 && v <= math.MaxFloat64 || p.neg || math.IsNaN(p.l.hi) || math.IsInf(p.l.hi, 0)
+}
+
 // lnMinNormal and lnMax bound ln|x| over the normal float64 range:
 // ln 2^-1022 and ln MaxFloat64 (rounded outward).
 const (

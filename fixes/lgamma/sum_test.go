@@ -136,3 +136,46 @@ func TestChooseProduct(t *testing.T) {
 		t.Errorf("fractional n: %v, want the value as given", got)
 	}
 }
+
+// TestProductLog: the logarithm of n! and of C(n, k) carried beside a
+// float64 value that passed the range, against math/big (log2 of the
+// exact integer), and math.Log of the value, bit for bit, where the
+// value is a normal positive float64.
+func TestProductLog(t *testing.T) {
+	fact := func(n int64) float64 {
+		r := 1.0
+		for i := int64(2); i <= n; i++ {
+			r *= float64(i)
+		}
+		return r
+	}
+	for _, n := range []int64{0, 1, 20, 170, 171, 500, 3000} {
+		p := FactorialProduct(fact(n), float64(n))
+		want := log2Big(new(big.Int).MulRange(1, max(n, 1)))
+		if n == 0 {
+			want = 0
+		}
+		if got := p.Log2(); math.Abs(got-want) > 1e-13*math.Max(1, want) {
+			t.Errorf("log2 %d! = %v, exact %v", n, got, want)
+		}
+		if got := p.Log(); math.Abs(got-want*math.Ln2) > 1e-13*math.Max(1, want) {
+			t.Errorf("ln %d! = %v, exact %v", n, got, want*math.Ln2)
+		}
+		if v := fact(n); !math.IsInf(v, 0) && p.Log10() != math.Log10(v) {
+			t.Errorf("log10 %d!: %v, math.Log10 %v", n, p.Log10(), math.Log10(v))
+		}
+	}
+	for _, c := range []struct{ n, k int64 }{{10, 3}, {1100, 550}, {5000, 17}, {5000, 2500}} {
+		p := ChooseProduct(naiveChoose(float64(c.n), float64(c.k)), float64(c.n), float64(c.k))
+		want := log2Big(new(big.Int).Binomial(c.n, c.k))
+		if got := p.Log2(); math.Abs(got-want) > 1e-13*want {
+			t.Errorf("log2 C(%d, %d) = %v, exact %v", c.n, c.k, got, want)
+		}
+	}
+	if got := ProductOf(-2).Log(); !math.IsNaN(got) {
+		t.Errorf("log of −2: %v, want NaN", got)
+	}
+	if got := ProductOf(0).Log(); !math.IsInf(got, -1) {
+		t.Errorf("log of 0: %v, want −Inf", got)
+	}
+}
