@@ -52,7 +52,8 @@ type checker struct {
 	callIndex map[*types.Func][]*ast.CallExpr
 	escapes   map[*types.Func]bool
 	// reportedPos holds the positions of reported's keys, sorted, for
-	// reportedWithin: findings come in source order, so it grows at its end.
+	// reportedAt and reportedWithin: findings come in source order, so it
+	// grows at its end.
 	reportedPos []token.Pos
 	// byPos holds allFuncs sorted by position across files, for enclosingFunc.
 	byPos []ast.Node

@@ -128,14 +128,11 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 	}
 }
 
-// reportedAt reports whether a finding of any category starts at pos.
+// reportedAt reports whether a finding of any category starts at pos:
+// every finding is of a pattern's category (directives are reported
+// apart), so one search of reportedPos answers for all of them.
 func (c *checker) reportedAt(pos token.Pos) bool {
-	for _, p := range patterns {
-		if c.reported[reportKey{pos, p.id}] || c.reported[reportKey{pos, p.id + definiteSuffix}] {
-			return true
-		}
-	}
-	return false
+	return c.reportedIn(pos, pos+1)
 }
 
 // modelCtx is one loop of the model being judged.

@@ -655,9 +655,14 @@ func (fc *fnCtx) callRoots() []ast.Expr {
 
 // reportedWithin reports whether a finding starts inside n.
 func (c *checker) reportedWithin(n ast.Node) bool {
+	return c.reportedIn(n.Pos(), n.End())
+}
+
+// reportedIn reports whether a finding starts in [pos, end).
+func (c *checker) reportedIn(pos, end token.Pos) bool {
 	at := c.reportedPos
-	i := sort.Search(len(at), func(i int) bool { return at[i] >= n.Pos() })
-	return i < len(at) && at[i] < n.End()
+	i := sort.Search(len(at), func(i int) bool { return at[i] >= pos })
+	return i < len(at) && at[i] < end
 }
 
 // checkCallRoot judges one root.

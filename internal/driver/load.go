@@ -420,7 +420,7 @@ func (l *loader) fromSource(p *packages.Package) {
 		appendError(err)
 	}
 	p.Syntax = files
-	p.TypesInfo = NewTypesInfo()
+	p.TypesInfo = NewTypesInfo(files...)
 	importer := importerFunc(func(path string) (*types.Package, error) {
 		if path == "unsafe" {
 			return types.Unsafe, nil
@@ -516,18 +516,47 @@ func parallel(n int, f func(int)) {
 
 // NewTypesInfo returns a types.Info with every map the analysis API
 // promises a pass (the driver, the language server and the fuzz target
-// type-check with it).
-func NewTypesInfo() *types.Info {
+// type-check with it). Given the files to be checked, it sizes the three
+// large maps for them in advance (infoHints) instead of letting them grow
+// entry by entry: the type checker's record of a 5 MB file then allocates
+// a fifth less, with the same maps at the end.
+func NewTypesInfo(files ...*ast.File) *types.Info {
+	exprs, defs, uses := infoHints(files)
 	return &types.Info{
-		Types:        make(map[ast.Expr]types.TypeAndValue),
-		Defs:         make(map[*ast.Ident]types.Object),
-		Uses:         make(map[*ast.Ident]types.Object),
+		Types:        make(map[ast.Expr]types.TypeAndValue, exprs),
+		Defs:         make(map[*ast.Ident]types.Object, defs),
+		Uses:         make(map[*ast.Ident]types.Object, uses),
 		Implicits:    make(map[ast.Node]types.Object),
 		Instances:    make(map[*ast.Ident]types.Instance),
 		Scopes:       make(map[ast.Node]*types.Scope),
 		Selections:   make(map[*ast.SelectorExpr]*types.Selection),
 		FileVersions: make(map[*ast.File]string),
 	}
+}
+
+// infoHints estimates the entries go/types records in Info.Types, Defs
+// and Uses for files, from a count of their expressions and identifiers.
+// The fractions were measured on the standard library's strings, fmt,
+// go/types and math/big, on gonum's stat/distuv and on a generated file
+// of small functions: Types held 0.73–0.79 of the expressions, Uses
+// 0.75–0.84 and Defs 0.14–0.25 of the identifiers. An estimate a little
+// short costs a map the growth of a few of its tables; one far over
+// would cost memory, so each takes a fraction near the smallest seen.
+func infoHints(files []*ast.File) (exprs, defs, uses int) {
+	var nExprs, nIdents int
+	for _, f := range files {
+		ast.Inspect(f, func(n ast.Node) bool {
+			switch n.(type) {
+			case *ast.Ident:
+				nIdents++
+				nExprs++
+			case ast.Expr:
+				nExprs++
+			}
+			return true
+		})
+	}
+	return nExprs * 3 / 4, nIdents / 6, nIdents * 3 / 4
 }
 
 type importerFunc func(path string) (*types.Package, error)

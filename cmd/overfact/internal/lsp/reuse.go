@@ -219,7 +219,7 @@ func recheck(pkg *packages.Package, overlay map[string][]byte) (*packages.Packag
 		}
 		files = append(files, f)
 	}
-	info := driver.NewTypesInfo()
+	info := driver.NewTypesInfo(files...)
 	var typeErrors []types.Error
 	tc := &types.Config{
 		Importer: importerFunc(func(path string) (*types.Package, error) {
