@@ -104,6 +104,24 @@ func (fc *fnCtx) keyRange(ff *facFunc) ranges.Interval {
 	return fc.rangeOf(fc.stripConv(ff.loop.mult))
 }
 
+// paramObj returns the idx-th parameter of decl, or nil.
+func (c *checker) paramObj(decl *ast.FuncDecl, idx int) types.Object {
+	i := 0
+	for _, f := range decl.Type.Params.List {
+		if len(f.Names) == 0 {
+			i++
+			continue
+		}
+		for _, name := range f.Names {
+			if i == idx {
+				return c.pass.TypesInfo.Defs[name]
+			}
+			i++
+		}
+	}
+	return nil
+}
+
 // paramIndex returns the index of the parameter v of decl, or −1.
 func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
 	i := 0

@@ -216,7 +216,7 @@ func (fc *fnCtx) recursionCount(decl *ast.FuncDecl, call *ast.CallExpr, idx int)
 			continue
 		}
 		k := lin.Terms[0].Sym.Object
-		if fc.c.paramIndex(decl, k) != j || !fc.passesThrough(decl, call, idx, j) || !fc.stopsAtZero(decl, k) {
+		if fc.c.paramIndex(decl, k) != j || !fc.passesThrough(decl, call, idx, j) || !fc.stopsAtZero(decl, k, fc.c.paramObj(decl, idx)) {
 			continue
 		}
 		return j
@@ -225,8 +225,11 @@ func (fc *fnCtx) recursionCount(decl *ast.FuncDecl, call *ast.CallExpr, idx int)
 }
 
 // stopsAtZero reports whether a statement of the function's body is
-// if k == 0 { return 1 } (or k <= 0, k < 1, 0 == k), with 1 a constant.
-func (fc *fnCtx) stopsAtZero(decl *ast.FuncDecl, k types.Object) bool {
+// if k == 0 { return 1 } (or k <= 0, k < 1, 0 == k), with 1 a constant,
+// or that test or'ed with k == n (n the recursion's other parameter,
+// when known): C(n, 0) = C(n, n) = 1 (common practice), the textbook
+// base cases of the binomial recursion.
+func (fc *fnCtx) stopsAtZero(decl *ast.FuncDecl, k, n types.Object) bool {
 	for _, st := range decl.Body.List {
 		ifs, ok := st.(*ast.IfStmt)
 		if !ok || ifs.Init != nil || len(ifs.Body.List) != 1 {
@@ -239,23 +242,55 @@ func (fc *fnCtx) stopsAtZero(decl *ast.FuncDecl, k types.Object) bool {
 		if one, ok := fc.c.queries().intConst(fc.stripConv(ret.Results[0])); !ok || one != 1 {
 			continue
 		}
-		c, ok := ast.Unparen(ifs.Cond).(*ast.BinaryExpr)
-		if !ok {
-			continue
+		zero, others := false, true
+		for _, d := range disjunctsOf(ifs.Cond) {
+			switch {
+			case fc.zeroTest(d, k):
+				zero = true
+			case n == nil || !fc.equalTest(d, k, n):
+				others = false
+			}
 		}
-		x, y, op := c.X, c.Y, c.Op
-		if fc.c.objOf(ast.Unparen(y)) == k {
-			x, y, op = y, x, tokenop.Flip(op)
-		}
-		v, ok := fc.c.queries().intConst(y)
-		if !ok || fc.c.objOf(ast.Unparen(x)) != k {
-			continue
-		}
-		if op == token.EQL && v == 0 || op == token.LEQ && v == 0 || op == token.LSS && v == 1 {
+		if zero && others {
 			return true
 		}
 	}
 	return false
+}
+
+// disjunctsOf splits a || b || … into its parts.
+func disjunctsOf(e ast.Expr) []ast.Expr {
+	if b, ok := ast.Unparen(e).(*ast.BinaryExpr); ok && b.Op == token.LOR {
+		return append(disjunctsOf(b.X), disjunctsOf(b.Y)...)
+	}
+	return []ast.Expr{e}
+}
+
+// zeroTest reports whether e is k == 0, k <= 0 or k < 1 (either side).
+func (fc *fnCtx) zeroTest(e ast.Expr, k types.Object) bool {
+	c, ok := ast.Unparen(e).(*ast.BinaryExpr)
+	if !ok {
+		return false
+	}
+	x, y, op := c.X, c.Y, c.Op
+	if fc.c.objOf(ast.Unparen(y)) == k {
+		x, y, op = y, x, tokenop.Flip(op)
+	}
+	v, ok := fc.c.queries().intConst(y)
+	if !ok || fc.c.objOf(ast.Unparen(x)) != k {
+		return false
+	}
+	return op == token.EQL && v == 0 || op == token.LEQ && v == 0 || op == token.LSS && v == 1
+}
+
+// equalTest reports whether e is k == n (either side).
+func (fc *fnCtx) equalTest(e ast.Expr, k, n types.Object) bool {
+	c, ok := ast.Unparen(e).(*ast.BinaryExpr)
+	if !ok || c.Op != token.EQL {
+		return false
+	}
+	x, y := fc.c.objOf(ast.Unparen(c.X)), fc.c.objOf(ast.Unparen(c.Y))
+	return x == k && y == n || x == n && y == k
 }
 
 // checkFallingRecursion reports n * f(n-1, k-1), the falling factorial

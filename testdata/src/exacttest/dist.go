@@ -14,7 +14,7 @@ func binomInt(n, k int) int {
 	if k == 0 || k == n {
 		return 1
 	}
-	return binomInt(n-1, k-1) * n / k
+	return binomInt(n-1, k-1) * n / k // want `multiplicative binomial recursion in int: the product binomInt\(n-1, k-1\) \* n wraps before the division by k for n ≥ 62 at k = n/2`
 }
 
 func lchoose(n, k int) float64 {

@@ -40,3 +40,21 @@ func Shuffles(n int) int64 {
 	}
 	return int64(n-1) * (Shuffles(n-1) + Shuffles(n-3))
 }
+
+// Squads is the same recursion with both textbook base cases,
+// C(n, 0) = C(n, n) = 1: the product still wraps first.
+func Squads(n, k int) int {
+	if k == 0 || k == n {
+		return 1
+	}
+	return Squads(n-1, k-1) * n / k // want `multiplicative binomial recursion in int: the product Squads\(n-1, k-1\) \* n wraps before the division by k for n ≥ 62 at k = n/2`
+}
+
+// Pairs returns 1 for k == 2 as well, which is not C(n, 2): not the
+// binomial recursion, so no claim about C(n, k) is made.
+func Pairs(n, k int) int {
+	if k == 0 || k == 2 {
+		return 1
+	}
+	return Pairs(n-1, k-1) * n / k
+}
