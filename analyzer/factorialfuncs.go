@@ -106,38 +106,47 @@ func (fc *fnCtx) keyRange(ff *facFunc) ranges.Interval {
 
 // paramObj returns the idx-th parameter of decl, or nil.
 func (c *checker) paramObj(decl *ast.FuncDecl, idx int) types.Object {
-	i := 0
-	for _, f := range decl.Type.Params.List {
-		if len(f.Names) == 0 {
-			i++
-			continue
+	var obj types.Object
+	eachParam(decl, func(i int, name *ast.Ident) bool {
+		if i == idx && name != nil {
+			obj = c.pass.TypesInfo.Defs[name]
 		}
-		for _, name := range f.Names {
-			if i == idx {
-				return c.pass.TypesInfo.Defs[name]
-			}
-			i++
-		}
-	}
-	return nil
+		return i < idx
+	})
+	return obj
 }
 
 // paramIndex returns the index of the parameter v of decl, or −1.
 func (c *checker) paramIndex(decl *ast.FuncDecl, v types.Object) int {
+	at := -1
+	eachParam(decl, func(i int, name *ast.Ident) bool {
+		if v != nil && name != nil && c.pass.TypesInfo.Defs[name] == v {
+			at = i
+		}
+		return at < 0
+	})
+	return at
+}
+
+// eachParam calls f with each parameter's index and name (nil for an
+// unnamed one) until f returns false.
+func eachParam(decl *ast.FuncDecl, f func(i int, name *ast.Ident) bool) {
 	i := 0
-	for _, f := range decl.Type.Params.List {
-		if len(f.Names) == 0 {
+	for _, fl := range decl.Type.Params.List {
+		if len(fl.Names) == 0 {
+			if !f(i, nil) {
+				return
+			}
 			i++
 			continue
 		}
-		for _, name := range f.Names {
-			if c.pass.TypesInfo.Defs[name] == v && v != nil {
-				return i
+		for _, name := range fl.Names {
+			if !f(i, name) {
+				return
 			}
 			i++
 		}
 	}
-	return -1
 }
 
 // loopFuncOf matches a function that returns the accumulator of a
