@@ -99,6 +99,13 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 			m.Factorials = []fixes.FactorialCall{{Call: fac.call, Arg: fac.arg, Off: fac.off}}
 		}
 	}
+	if (m.Shape == fixes.ShapePoisson || m.Shape == fixes.ShapePowOverFactorial) && fac.call != nil && fac.fact != nil && fac.fact.EmptyBelow {
+		// Outside the helper's domain the fix keeps the term as written,
+		// and may need to know that the divisor is the empty product there
+		// (Match.EmptyBelow).
+		m.EmptyBelow = true
+		m.Factorials = []fixes.FactorialCall{{Call: fac.call, Arg: fac.arg, Off: fac.off}}
+	}
 	if pow.acc != nil && m.Shape != fixes.ShapeProductChain {
 		m = fc.loopPowerMatch(m, root, pow)
 	}

@@ -81,6 +81,13 @@ var diffCases = []diffCase{
 	// float64, the term NaN or 0 where it is not.
 	{pkg: "fixterm", fn: "Walkins", loops: []string{"k := -3; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoissonLoop},
 	{pkg: "fixterm", fn: "Load", loops: []string{"a := 1; a <= 200; a *= 4", "k := 0; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFact},
+	// A factorial of 16 bits called on uint16(k): for k < 0 the
+	// conversion wraps and the original divides by the factorial of
+	// 2^16 − |k| wrapped to 16 bits (0: its factors hold 2^16 many times
+	// over), where the term is its power over the empty product; the
+	// original's loop of up to 65535 trips stays quick.
+	{pkg: "fixterm", fn: "Clicks", loops: []string{"k := -4; k <= 260; k += 3", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoissonSigned},
+	{pkg: "fixterm", fn: "Spread16", loops: []string{"a := 1; a <= 200; a *= 4", "k := -4; k <= 260; k += 5"}, args: "float64(a) / 2, k", typ: "float64", ref: refPowFactSigned},
 	// Outside 0 ≤ k ≤ n the rewrite keeps the expression as written
 	// (fixes/domain.go): fact(0)/(fact(1)·fact(−1)) is 1 where C(0, 1)
 	// is 0, and MustFallingInt64 panics for k < 0. n stays below the

@@ -283,8 +283,12 @@ func (b *builder) keepOutsideDomain(text string, args []ast.Expr) (string, error
 	for _, def := range defs {
 		lead = append(lead, b.copyText(def))
 	}
+	empty, why := b.wrappedEmptyDivisor(d, exprs, conds)
+	if why != "" {
+		lead = append(lead, why)
+	}
 	lead = append(lead, "//overfact:allow outside "+d.words+" the expression as written")
-	orig, err := b.asWritten(b.m.Node)
+	orig, err := b.asWrittenWith(b.m.Node, empty)
 	if err != nil {
 		return "", err
 	}
@@ -370,6 +374,41 @@ func (b *builder) refuseInfiniteTerm(fn, orig string, exprs []ast.Expr) (string,
 	}
 }
 
+// wrappedEmptyDivisor returns, for a term x^k/k! kept as written where
+// its one bound, k ≥ 0, fails (conds), the divisor's factorial call
+// mapped to the empty product 1, and the comment that says why, when
+// the call's argument converts the signed count to an unsigned type:
+// factU(uint64(k)) for k < 0. There the conversion wraps to 2⁶⁴ − |k|,
+// where the function runs about 2⁶⁴ trips or its own range guard
+// panics naming a number the caller never passed, and never returns the
+// value the term means; the function returns 1 for every argument below
+// 2 (Match.EmptyBelow), the factorial of a negative count in the code's
+// own reading, which the helper's fix inside the domain shares (it
+// reads the count as k, not as uint64(k)). nil where that does not
+// apply.
+func (b *builder) wrappedEmptyDivisor(d domain, exprs []ast.Expr, conds []string) (map[ast.Expr]string, string) {
+	if b.m.Shape != ShapePoisson && b.m.Shape != ShapePowOverFactorial || !b.m.EmptyBelow ||
+		len(b.m.Factorials) != 1 || len(d.bounds) != 1 || len(conds) != 1 {
+		return nil, ""
+	}
+	i, ok := d.bounds[0].atLeastZero()
+	f := b.m.Factorials[0]
+	if !ok || i >= len(exprs) || f.Off != 0 || f.Call == nil || len(f.Call.Args) != 1 {
+		return nil, ""
+	}
+	conv, ok := ast.Unparen(f.Call.Args[0]).(*ast.CallExpr)
+	if !ok || !b.isNumericConversion(conv) || classOf(b.pass.TypesInfo.TypeOf(conv)) != classUnsigned ||
+		classOf(b.pass.TypesInfo.TypeOf(conv.Args[0])) != classSigned {
+		return nil, ""
+	}
+	count := exprs[i]
+	if types.ExprString(ast.Unparen(conv.Args[0])) != types.ExprString(ast.Unparen(count)) {
+		return nil, ""
+	}
+	return map[ast.Expr]string{f.Call: "1"}, fmt.Sprintf("// %s! of a negative %s is the empty product 1, which %s returns below 2; %s would wrap",
+		operandText(b.text(count), count), b.text(count), b.text(f.Call.Fun), b.text(conv))
+}
+
 // keepAsWritten returns text, the helper call that replaces node, so
 // that node runs as written where the helper's value would differ from
 // it, with a directive giving why (the kept expression is what the code
@@ -433,9 +472,18 @@ var productShapes = map[Shape]bool{
 //     product's value where a factor leaves float64 and the product does
 //     not: C(2, 150)·150.5^150·(−149.5)^−148 is 0, not 0·Inf = NaN.
 func (b *builder) asWritten(node ast.Node) (string, error) {
+	return b.asWrittenWith(node, nil)
+}
+
+// asWrittenWith is asWritten with the expressions of subs (of a float
+// node) written as their texts there.
+func (b *builder) asWrittenWith(node ast.Node, subs map[ast.Expr]string) (string, error) {
 	e, ok := node.(ast.Expr)
 	if !ok || classOf(b.m.Result) != classFloat {
 		return b.copyText(node), nil
+	}
+	if subs == nil {
+		subs = make(map[ast.Expr]string)
 	}
 	if node == b.m.Node && b.m.Floor {
 		shown, counts := b.shown, b.counts
@@ -445,7 +493,6 @@ func (b *builder) asWritten(node ast.Node) (string, error) {
 			return q, err
 		}
 	}
-	subs := make(map[ast.Expr]string)
 	var err error
 	ast.Inspect(e, func(n ast.Node) bool {
 		conv, ok := n.(*ast.CallExpr)

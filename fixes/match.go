@@ -90,7 +90,9 @@ type Match struct {
 	// the empty product, for every negative argument and n! otherwise, so
 	// that outside the helper's domain the expression's value is the
 	// exact quotient lgamma.MustFactorialQuotientInt64 of the calls'
-	// arguments, with no need to call the functions themselves.
+	// arguments, with no need to call the functions themselves. For the
+	// term shapes (ShapePoisson, ShapePowOverFactorial) it tells the same
+	// of the divisor's function, whose call is Factorials[0].
 	EmptyBelow bool
 	// Floor, for the ratio shapes, tells that every
 	// factorial function returns ⌊x⌋! for every x, fractions included
@@ -107,7 +109,8 @@ type Match struct {
 	// expression's factors of functions that return a factorial, each
 	// with the count it is the factorial of: the chain carries each as
 	// lgamma.FactorialProduct(call, count), the code's own value with
-	// ln count! beside it.
+	// ln count! beside it. For the term shapes with EmptyBelow it is the
+	// divisor's one call.
 	Factorials []FactorialCall
 	// Binomials, for ShapeLogSum, are the calls among the summed terms'
 	// factors of functions that return C(N, K), as the analyzer's facts

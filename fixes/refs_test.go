@@ -107,6 +107,27 @@ func refPoissonLoop(x []float64) *big.Float {
 	return refPoisson(x)
 }
 
+// powSigned is x^k for a whole k of either sign, in math/big.
+func powSigned(x float64, k int64) *big.Float {
+	if k < 0 {
+		return quo(fl(1), powBig(x, -k))
+	}
+	return powBig(x, k)
+}
+
+// refPoissonSigned is λ^k e^(−λ)/k! for (k, λ) with k! the empty
+// product 1 below 2 (factorialBig), so that for k < 0 it is λ^k e^(−λ),
+// the power math.Pow takes for a negative exponent.
+func refPoissonSigned(x []float64) *big.Float {
+	k, lambda := int64(x[0]), x[1]
+	return mul(quo(powSigned(lambda, k), bf(factorialBig(k))), fl(math.Exp(-lambda)))
+}
+
+// refPowFactSigned is a^k/k! for (a, k), k! as in refPoissonSigned.
+func refPowFactSigned(x []float64) *big.Float {
+	return quo(powSigned(x[0], int64(x[1])), bf(factorialBig(int64(x[1]))))
+}
+
 // refBinomialPMF is C(n,k) p^k (1−p)^(n−k) for (k, n, p), with 1−p exact.
 func refBinomialPMF(x []float64) *big.Float {
 	k, n, p := int64(x[0]), int64(x[1]), x[2]

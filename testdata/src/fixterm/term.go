@@ -113,3 +113,27 @@ func Tally(a float64, k int) float64 { // want Tally:`value \(p0\)\^\(p1\)/Γ\(p
 	}
 	return pw / factF(k) // want "power-over-factorial"
 }
+
+// clicks16 is n! on the support desk's hand-held tally counter, whose
+// registers hold 16 bits.
+func clicks16(n uint16) uint16 { // want clicks16:"factorial of parameter 0, breaks from 9"
+	r := uint16(1)
+	for n > 1 { // want "factorial of n in uint16 wraps"
+		r *= n
+		n--
+	}
+	return r
+}
+
+// Clicks is the chance of exactly k clicks in a minute averaging
+// lambda, the count handed to the counter's factorial as a register
+// value: for k < 0 uint16(k) wraps, and the term keeps its power over
+// the empty product instead.
+func Clicks(k int, lambda float64) float64 { // want Clicks:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 9`
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(clicks16(uint16(k))) // want "Poisson"
+}
+
+// Spread16 is Load over the counter's factorial.
+func Spread16(a float64, k int) float64 { // want Spread16:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 9`
+	return math.Pow(a, float64(k)) / float64(clicks16(uint16(k))) // want "power-over-factorial"
+}
