@@ -132,7 +132,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 // reportedAt reports whether a finding of any category starts at pos.
 func (c *checker) reportedAt(pos token.Pos) bool {
 	for _, p := range patterns {
-		if c.reported[reportKey{pos, p.id}] || c.reported[reportKey{pos, p.id + definiteSuffix}] {
+		if c.reportedAs(pos, p.id) {
 			return true
 		}
 	}

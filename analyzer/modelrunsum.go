@@ -40,7 +40,10 @@ func (fc *fnCtx) modelRunningSum(res *vm.Result) {
 	for _, l := range res.Loops {
 		// A loop of a constant number of trips sums a truncated
 		// series for small arguments: precision first, it is not judged.
-		if l.Counter == nil || l.Exits || l.Count.IsConst() {
+		// A loop reported already for a running factorial inside the
+		// sum is left to that finding, whose fix may fold the prefactor
+		// in; a running binomial's fix leaves the sum as it is.
+		if l.Counter == nil || l.Exits || l.Count.IsConst() || fc.c.reportedAs(l.Stmt.Pos(), catPowOverFac) {
 			continue
 		}
 		for _, s := range l.Sums {
@@ -161,6 +164,11 @@ func powerSeriesTerm(t *vm.Term) (string, vm.Affine, bool) {
 // series: past 4000 terms the partial sum is e^x to float64's precision
 // wherever e^x is near its range (PowerSeriesFirstBad).
 const powerSeriesTerms = 4000
+
+// reportedAs reports whether a finding of category cat starts at pos.
+func (c *checker) reportedAs(pos token.Pos, cat string) bool {
+	return c.reported[reportKey{pos, cat}] || c.reported[reportKey{pos, cat + definiteSuffix}]
+}
 
 // reportedIn reports whether a finding starts inside st: a sum whose
 // term is reported already is left to that finding.

@@ -29,7 +29,7 @@ func ErlangC(a float64, n int) float64 {
 		if k > 0 {
 			fct *= float64(k)
 		}
-		sum += math.Pow(a, float64(k)) / fct // want `sums the running term`
+		sum += math.Pow(a, float64(k)) / fct
 	}
 	top := math.Pow(a, float64(n)) / (fct * float64(n)) * float64(n) / (float64(n) - a)
 	return top / (sum + top)
