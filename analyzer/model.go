@@ -123,6 +123,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 	fc.modelCountRatio(res)
 	fc.modelLogSum(res)
 	fc.modelZeroTimesSum(res)
+	fc.modelRunningSum(res)
 	for _, e := range fc.modelRoots(res) {
 		fc.modelPMF(res, e)
 	}

@@ -73,6 +73,7 @@ func (s Sum) Float64() float64                             { panic("") }
 func (s Sum) Log() float64                                 { panic("") }
 func (s Sum) Log2() float64                                { panic("") }
 func (s Sum) Log10() float64                               { panic("") }
+func (s Sum) Product() Product                             { panic("") }
 `
 
 // fmtAPI stands in for package fmt when a range guard adds the import to a

@@ -59,6 +59,28 @@ func (s Sum) Add(p Product) Sum {
 // AddFloat returns s + x, s.Add(ProductOf(x)).
 func (s Sum) AddFloat(x float64) Sum { return s.Add(ProductOf(x)) }
 
+// Product returns the sum as a Product, for a prefactor or a ratio that
+// brings a sum past float64 back into range,
+//
+//	math.Exp(-lt) * sum        →  ExpProduct(-lt).Mul(sumLog.Product()).Float64()
+//	last / (sum + last)        →  lastLog.Quo(sumLog.Add(lastLog).Product()).Float64()
+//
+// Its float64 value is the float64 sum, and its logarithm the one the
+// Sum carries: Product.Float64 of the product, or of products formed
+// from it, is the float64 arithmetic's own wherever the sum and the
+// other factors stayed normal float64s.
+//
+// Special cases are:
+//
+//	Product of the empty sum holds 0
+//	Product of a sum with a negative or NaN term holds the float64 sum alone, as ProductOf
+func (s Sum) Product() Product {
+	if !s.set || s.bad || math.IsNaN(s.l.hi) {
+		return ProductOf(s.v)
+	}
+	return Product{v: s.v, l: s.l}.mark(false)
+}
+
 // logAddExp returns ln(e^a + e^b).
 func logAddExp(a, b dd) dd {
 	if a.hi < b.hi {

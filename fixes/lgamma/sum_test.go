@@ -179,3 +179,90 @@ func TestProductLog(t *testing.T) {
 		t.Errorf("log of 0: %v, want −Inf", got)
 	}
 }
+
+// TestSumProductBinomialTail: the two-sided sign test's tail,
+// 2·Σ_{i<m} C(n, i)·0.5^n, the binomial running product c = c·(n−i)/(i+1)
+// summed as code forms it and scaled after the loop. Past C(1030, 515)
+// the float64 sum is +Inf and the scaled value NaN or +Inf; carried as a
+// Sum, the sum's Product times PowProduct(0.5, n) is within 1e-12
+// relative of the exact tail (math/big: the sum of the integer
+// binomials, each from the one before, times 2^(1−n), exact in a
+// big.Float), and bit for bit the float64 value where the sum stays
+// finite.
+func TestSumProductBinomialTail(t *testing.T) {
+	for _, c := range []struct{ n, m int64 }{{20, 6}, {100, 40}, {600, 100}, {1100, 500}, {2000, 1000}, {5000, 2400}} {
+		s, c64, plain := SumOf(0), ProductOf(1), 0.0
+		cf := 1.0
+		exact, ck := new(big.Int), big.NewInt(1)
+		for i := int64(0); i < c.m; i++ {
+			s = s.Add(c64)
+			plain += cf
+			exact.Add(exact, ck)
+			c64 = c64.MulFloat(float64(c.n - i)).QuoFloat(float64(i + 1))
+			cf = cf * float64(c.n-i) / float64(i+1)
+			ck.Mul(ck, big.NewInt(c.n-i)).Quo(ck, big.NewInt(i+1))
+		}
+		got := ProductOf(2).Mul(s.Product()).Mul(PowProduct(0.5, float64(c.n))).Float64()
+		e := new(big.Float).SetPrec(200).SetInt(exact)
+		want, _ := e.SetMantExp(e, int(1-c.n)).Float64()
+		if math.Abs(got-want) > 1e-12*want {
+			t.Errorf("n=%d m=%d: tail %v, exact %v", c.n, c.m, got, want)
+		}
+		if p := 2 * plain * math.Pow(0.5, float64(c.n)); !math.IsInf(plain, 0) && got != p {
+			t.Errorf("n=%d m=%d: finite sum: %v, float64 arithmetic %v", c.n, c.m, got, p)
+		}
+	}
+}
+
+// TestSumProductRatio: Erlang's C formula's ratio last/(sum + last), the
+// terms a^k/k! carried as one running Product (t = t·a/(k+1)) and summed,
+// against the same running term and sum in 300-bit big.Float (the ratio
+// itself near 1 where a is near c). Where the float64 running term
+// passes float64 (a = 800, c = 720) the ratio is NaN in float64 and
+// within 1e-12 of the exact one here; where it stays in range the value
+// is the float64 arithmetic's own, bit for bit.
+func TestSumProductRatio(t *testing.T) {
+	for _, c := range []struct {
+		a float64
+		c int
+	}{{5, 8}, {60, 70}, {150, 160}, {800, 720}, {1000, 1200}, {3000, 2900}} {
+		s, term, plain, tf := SumOf(0), ProductOf(1), 0.0, 1.0
+		bs, bt := new(big.Float).SetPrec(300), new(big.Float).SetPrec(300).SetInt64(1)
+		ba := new(big.Float).SetPrec(300).SetFloat64(c.a)
+		for k := 0; k < c.c; k++ {
+			s = s.Add(term)
+			plain += tf
+			bs.Add(bs, bt)
+			term = term.Mul(ProductOf(c.a / float64(k+1)))
+			tf *= c.a / float64(k+1)
+			bt.Mul(bt, ba).Quo(bt, new(big.Float).SetPrec(300).SetInt64(int64(k+1)))
+		}
+		got := term.Quo(s.Add(term).Product()).Float64()
+		den := new(big.Float).SetPrec(300).Add(bs, bt)
+		want, _ := new(big.Float).SetPrec(300).Quo(bt, den).Float64()
+		// The helper multiplies by the rounded a/(k+1) as the code does;
+		// the reference divides exactly: 1e-12 covers c roundings.
+		if math.Abs(got-want) > 1e-12*want {
+			t.Errorf("a=%v c=%d: ratio %v, exact %v", c.a, c.c, got, want)
+		}
+		if p := tf / (plain + tf); !math.IsInf(plain+tf, 0) && !math.IsNaN(p) && got != p {
+			t.Errorf("a=%v c=%d: finite sum: %v, float64 arithmetic %v", c.a, c.c, got, p)
+		}
+	}
+}
+
+// TestSumProductSpecialCases: the empty sum, a sum with a negative term
+// (the float64 sum alone), and a normal sum (its float64 value).
+func TestSumProductSpecialCases(t *testing.T) {
+	if got := (Sum{}).Product().Float64(); got != 0 {
+		t.Errorf("empty sum: %v, want 0", got)
+	}
+	neg := SumOf(-1).Add(PowProduct(10, 400))
+	if got := neg.Product().QuoFloat(1e300).Float64(); !math.IsInf(got, 1) {
+		t.Errorf("−1 + 10^400 over 1e300 (a negative term): %v, want +Inf as the float64 sum gives", got)
+	}
+	a, b := 0.1, 0.2
+	if got := SumOf(a).AddFloat(b).Product().MulFloat(3).Float64(); got != (a+b)*3 {
+		t.Errorf("(0.1 + 0.2)·3 = %v, want %v", got, (a+b)*3)
+	}
+}

@@ -111,12 +111,14 @@ func ErlangBSmall(a float64, c int) float64 {
 	return math.Pow(a, float64(c)) / fact / sum
 }
 
-// ErlangBRatio builds each term from the last: no factorial is formed.
+// ErlangBRatio builds each term from the last: no factorial is formed,
+// but past a ≈ 709.78 the sum of a^k/k! is +Inf, and so is the last
+// term, while their ratio is a probability.
 func ErlangBRatio(a float64, c int) float64 {
 	term, sum := 1.0, 1.0
 	for k := 1; k <= c; k++ {
 		term *= a / float64(k)
-		sum += term
+		sum += term // want `sum sums the running term a\^k/k! in float64`
 	}
 	return term / sum
 }

@@ -10,7 +10,7 @@ func SignTest(plus, minus int) float64 {
 	k := min(plus, minus)
 	c, p := 1.0, 0.0
 	for i := 0; i <= k; i++ {
-		p += c
+		p += c // want `sums the running term`
 		c = c * float64(n-i) / float64(i+1)
 	}
 	return math.Min(1, 2*p*math.Pow(0.5, float64(n)))

@@ -36,7 +36,7 @@ func MMcWaitingTime(c int, lambda, mu float64) float64 {
 	}
 	term, sum := 1.0, 0.0
 	for k := 0; k < c; k++ {
-		sum += term
+		sum += term // want `sums the running term`
 		term *= a / float64(k+1)
 	}
 	last := term / (1 - rho)

@@ -58,7 +58,7 @@ func StandbyReliability(n int, lambda, t float64) float64 {
 	term, sum := 1.0, 1.0
 	for i := 1; i <= n; i++ {
 		term *= lt / float64(i)
-		sum += term
+		sum += term // want `sums the running term`
 	}
 	return math.Exp(-lt) * sum
 }

@@ -36,7 +36,7 @@ func ErlangB(a float64, c int) float64 {
 	num := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c)
 	den := 0.0
 	for k := 0; k <= c; k++ {
-		den += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k)
+		den += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k) // want `sums the running term`
 	}
 	return num / den
 }
@@ -100,12 +100,13 @@ func SurgeCapped(lambda float64, k int) float64 {
 }
 
 // ErlangCIncremental builds each term from the last, term *= a/k: no
-// factorial is ever formed, so nothing is reported.
+// factorial is ever formed, but past a ≈ 709.78 the sum of a^k/k! is
+// +Inf, and so is last, while their ratio is a probability.
 func ErlangCIncremental(a float64, c int) float64 {
 	term, sum := 1.0, 1.0
 	for k := 1; k < c; k++ {
 		term *= a / float64(k)
-		sum += term
+		sum += term // want `sums the running term`
 	}
 	last := term * a / float64(c) * float64(c) / (float64(c) - a)
 	return last / (sum + last)
