@@ -12,6 +12,7 @@ import (
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/fixes"
 )
 
 // A series summed in float64 from a running term, whose sum a small
@@ -121,7 +122,35 @@ func (fc *fnCtx) reportRunningSum(res *vm.Result, l *vm.Loop, s *vm.SumAcc, t nu
 	if _, _, ok := powerSeriesTerm(s.Sum.Term); !ok {
 		cat = catBinomLoop
 	}
-	fc.report(finding{node: s.Stmt, cat: cat, definite: j.definite, msg: msg})
+	fc.report(finding{node: s.Stmt, cat: cat, definite: j.definite, msg: msg, match: fc.runSumMatch(s, scaled)})
+}
+
+// runSumMatch describes the sum for the fixer (ShapeRunSum): the read
+// after the loop, the sum, and the float64 locals the added term
+// multiplies, the running terms the fixer carries; nil where the sum's
+// statement adds nothing it can name.
+func (fc *fnCtx) runSumMatch(s *vm.SumAcc, scaled ast.Expr) *fixes.Match {
+	as, ok := s.Stmt.(*ast.AssignStmt)
+	if !ok {
+		return nil
+	}
+	term := addedTo(fc.c.pass.TypesInfo, as, s.Obj)
+	if term == nil {
+		return nil
+	}
+	var args []ast.Expr
+	ast.Inspect(term, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok {
+			if v, ok := fc.c.pass.TypesInfo.Uses[id].(*types.Var); ok && !v.IsField() && v.Parent() != fc.c.pass.Pkg.Scope() && !isParam(fc.signature(), v) {
+				args = append(args, id)
+			}
+		}
+		return true
+	})
+	if len(args) == 0 {
+		return nil
+	}
+	return &fixes.Match{Shape: fixes.ShapeRunSum, Node: scaled, Acc: s.Obj, Args: args, Result: fc.c.pass.TypesInfo.TypeOf(scaled), Func: fc.node}
 }
 
 // powerSeriesTerm recognises c·x^k/k! where x is a product or ratio of

@@ -225,6 +225,11 @@ type logProducts struct {
 	subs map[ast.Expr]string
 	// err is the first type the rewrite could not name in the file.
 	err error
+	// names, where set, are the Product expressions carried variables
+	// are read as (a Sum's sumLog.Product()); otherwise their names.
+	names map[types.Object]string
+	// skip are statements the rewrite leaves to its caller.
+	skip map[ast.Node]bool
 }
 
 // isFloat64Kind reports whether t is float64 or a named type over it
@@ -508,6 +513,9 @@ func (lp *logProducts) product(e ast.Expr) string {
 func (lp *logProducts) chain(e ast.Expr) string {
 	switch x := e.(type) {
 	case *ast.Ident:
+		if name, ok := lp.names[lp.b.pass.TypesInfo.ObjectOf(x)]; ok {
+			return name
+		}
 		return x.Name
 	case *ast.CallExpr:
 		if in := lp.sameTypeConv(x); in != nil {
@@ -605,6 +613,9 @@ func (lp *logProducts) rewrite(body *ast.BlockStmt) {
 	b := lp.b
 	var visit func(n ast.Node) bool
 	visit = func(n ast.Node) bool {
+		if lp.skip[n] {
+			return false
+		}
 		switch x := n.(type) {
 		case *ast.DeclStmt:
 			// var w T, or var w = e: the Product of its value, 0 by

@@ -168,6 +168,10 @@ func (ls *logSum) assign(x *ast.AssignStmt, isSum func(ast.Expr) bool) error {
 	if at < 0 {
 		return nil
 	}
+	if x.Tok == token.DEFINE && len(x.Lhs) == len(x.Rhs) {
+		ls.decl = x // term, sum := 1.0, 1.0
+		return nil
+	}
 	if len(x.Lhs) != 1 || len(x.Rhs) != 1 {
 		return errors.New("the sum is set in a multiple assignment")
 	}

@@ -58,6 +58,7 @@ const (
 	ShapeModelFallingLoop       // a loop the value model reads as n!/(n-k)!  Args: n, k (the analyzer vouches for the trip count; see buildModelLoop)
 	ShapeLogSum                 // math.Log(s) of a float sum s += term   Node: the math.Log, Log2 or Log10 call; Acc: s; Binomials (see buildLogSum)
 	ShapeLogOfValue             // math.Log(f(n)) of a float factorial or binomial function's call  Node: the math.Log, Log2 or Log10 call; Factorials or Binomials: that call (see buildLogOfValue)
+	ShapeRunSum                 // s += term of a running term, read after the loop as a product with s  Node: that read; Acc: s; Args: the running terms (see buildRunSum)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.

@@ -81,6 +81,7 @@ func init() {
 		ShapeProductChain:     {"product of powers and gamma values", buildProductChain, family{float: "GammaProduct"}, 0, nil},
 		ShapeLogSum:           {"logarithm of a sum", buildLogSum, family{float: "SumOf"}, 0, nil},
 		ShapeLogOfValue:       {"logarithm of a factorial value", buildLogOfValue, family{float: "FactorialProduct"}, 0, nil},
+		ShapeRunSum:           {"running sum scaled after its loop", buildRunSum, family{float: "SumOf"}, 0, nil},
 	}
 }
 

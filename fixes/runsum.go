@@ -1,0 +1,121 @@
+package fixes
+
+import (
+	"errors"
+	"fmt"
+	"go/ast"
+	"go/types"
+)
+
+// A series whose running term and sum pass float64 while the value the
+// code reads after the loop, the sum scaled down, does not,
+//
+//	term, sum := 1.0, 1.0
+//	for i := 1; i <= n; i++ {
+//		term *= lt / float64(i)
+//		sum += term
+//	}
+//	return math.Exp(-lt) * sum
+//
+// carries the running term as a Product, the sum beside its float64
+// value as a Sum (fixes/logsum.go), and reads the scaled sum as a
+// Product chain over the Sum's Product:
+//
+//	term, sum := lgamma.ProductOf(1.0), 1.0
+//	sumLog := lgamma.SumOf(sum)
+//	for i := 1; i <= n; i++ {
+//		term = term.MulFloat(lt / float64(i))
+//		sumLog = sumLog.Add(term)
+//		sum = sumLog.Float64()
+//	}
+//	return lgamma.ExpProduct(-lt).Mul(sumLog.Product()).Float64()
+//
+// Every float64 operation of the original is the same operation in the
+// Products and the Sum, in the same order, and each answers that value
+// wherever no step left the normal range: nothing right changes. The
+// read must be a product or quotient with the sum among its factors
+// and none of the running terms; the sum obeys buildLogSum's rules, and
+// each term it adds is a product over the carried terms.
+func buildRunSum(b *builder) error {
+	node, ok := b.m.Node.(ast.Expr)
+	if !ok || b.m.Func == nil {
+		return errors.New("running-sum match lacks its read or its function")
+	}
+	sum, ok := b.m.Acc.(*types.Var)
+	if !ok || !types.Identical(sum.Type(), types.Typ[types.Float64]) {
+		return errors.New("the sum is not a float64 variable")
+	}
+	body := b.funcBody()
+	if body == nil {
+		return errors.New("the sum's function has no body")
+	}
+	pkg := b.helper(node.Pos())
+	lp := &logProducts{b: b, set: map[types.Object]bool{}, pkg: pkg, skip: map[ast.Node]bool{}}
+	for _, a := range b.m.Args {
+		id, ok := ast.Unparen(a).(*ast.Ident)
+		if !ok {
+			continue
+		}
+		v, ok := b.pass.TypesInfo.ObjectOf(id).(*types.Var)
+		if !ok || lp.set[v] || v == sum {
+			continue
+		}
+		if err := lp.qualifies(v, body); err != nil {
+			return err
+		}
+		lp.set[v] = true
+	}
+	if len(lp.set) == 0 {
+		return errors.New("no running term the fixer can carry in log space")
+	}
+	ls := &logSum{b: b, sum: sum, lp: lp}
+	if err := ls.writes(body); err != nil {
+		return err
+	}
+	if ls.decl == nil || len(ls.adds) == 0 {
+		return errors.New("the sum has no declaration or no addition the fixer can rewrite")
+	}
+	for i, t := range ls.terms {
+		if ls.defs[i] != nil || !lp.chainableIn(ast.Unparen(t), false) {
+			return fmt.Errorf("a term the fixer cannot carry in log space: %s", b.text(t))
+		}
+	}
+	name := sum.Name() + "Log"
+	if !b.free(name, ls.decl.End()) || !b.free(name, node.Pos()) || declaresName(body, name) {
+		return fmt.Errorf("the name %s is taken", name)
+	}
+	read := &logProducts{b: b, set: map[types.Object]bool{sum: true}, pkg: pkg, calls: true, names: map[types.Object]string{sum: name + ".Product()"}}
+	if !read.chainableIn(node, true) || node.Pos() < ls.decl.End() {
+		return fmt.Errorf("the read of the sum is not a product the fixer can carry: %s", b.text(node))
+	}
+	for v := range lp.set {
+		if b.mentionsObj(node, v) {
+			return fmt.Errorf("the read of the sum reads the running term %s too", v.Name())
+		}
+	}
+	for _, st := range append(append([]ast.Stmt{ls.decl}, ls.adds...), ls.resets...) {
+		if _, _, err := b.enclosingList(st); err != nil || b.commentIn(st) {
+			return fmt.Errorf("a statement of the sum the fixer cannot rewrite whole: %s", b.text(st))
+		}
+	}
+	if b.commentIn(node) {
+		return errors.New("a comment inside the read of the sum")
+	}
+	for _, st := range ls.adds {
+		lp.skip[st] = true
+	}
+	lp.rewrite(body)
+	if lp.err != nil {
+		return lp.err
+	}
+	b.insert(ls.decl.End(), "\n"+b.indentOf(ls.decl.Pos())+name+" := "+pkg+".SumOf("+sum.Name()+")")
+	for _, st := range ls.resets {
+		b.insert(st.End(), "\n"+b.indentOf(st.Pos())+name+" = "+pkg+".SumOf("+sum.Name()+")")
+	}
+	for i, st := range ls.adds {
+		b.replace(st.Pos(), st.End(), name+" = "+name+".Add("+lp.product(ast.Unparen(ls.terms[i]))+")\n"+b.indentOf(st.Pos())+sum.Name()+" = "+name+".Float64()")
+	}
+	b.replace(node.Pos(), node.End(), read.chain(node)+".Float64()")
+	b.message = fmt.Sprintf("Carry the running term and the sum %s in log space (%s.Product, %s.Sum), so that the sum scaled after the loop stays finite where it is (imports %s)", sum.Name(), pkg, pkg, HelperPath)
+	return nil
+}
