@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"go/ast"
+	"go/token"
 	"go/types"
 )
 
@@ -84,14 +85,11 @@ func buildRunSum(b *builder) error {
 	if !b.free(name, ls.decl.End()) || !b.free(name, node.Pos()) || declaresName(body, name) {
 		return fmt.Errorf("the name %s is taken", name)
 	}
-	read := &logProducts{b: b, set: map[types.Object]bool{sum: true}, pkg: pkg, calls: true, names: map[types.Object]string{sum: name + ".Product()"}}
-	if !read.chainableIn(node, true) || node.Pos() < ls.decl.End() {
-		return fmt.Errorf("the read of the sum is not a product the fixer can carry: %s", b.text(node))
-	}
-	for v := range lp.set {
-		if b.mentionsObj(node, v) {
-			return fmt.Errorf("the read of the sum reads the running term %s too", v.Name())
-		}
+	lp.copies(body)
+	ls.dropSumCopies(body)
+	readText, err := ls.scaledRead(node, name)
+	if err != nil {
+		return err
 	}
 	for _, st := range append(append([]ast.Stmt{ls.decl}, ls.adds...), ls.resets...) {
 		if _, _, err := b.enclosingList(st); err != nil || b.commentIn(st) {
@@ -104,6 +102,7 @@ func buildRunSum(b *builder) error {
 	for _, st := range ls.adds {
 		lp.skip[st] = true
 	}
+	lp.skip[node] = true
 	lp.rewrite(body)
 	if lp.err != nil {
 		return lp.err
@@ -115,7 +114,67 @@ func buildRunSum(b *builder) error {
 	for i, st := range ls.adds {
 		b.replace(st.Pos(), st.End(), name+" = "+name+".Add("+lp.product(ast.Unparen(ls.terms[i]))+")\n"+b.indentOf(st.Pos())+sum.Name()+" = "+name+".Float64()")
 	}
-	b.replace(node.Pos(), node.End(), read.chain(node)+".Float64()")
+	b.replace(node.Pos(), node.End(), readText)
 	b.message = fmt.Sprintf("Carry the running term and the sum %s in log space (%s.Product, %s.Sum), so that the sum scaled after the loop stays finite where it is (imports %s)", sum.Name(), pkg, pkg, HelperPath)
 	return nil
+}
+
+// scaledRead writes the read of the sum after the loop: a product with
+// the sum among its factors and no running term, as the Product chain
+// over name.Product(); or a quotient num / (sum + x), num and x products
+// over the running terms (Erlang C's last / (sum + last)), as num's
+// chain over name.Add(x).Product(): the same float64 addition and
+// division, each carried in log space.
+func (ls *logSum) scaledRead(node ast.Expr, name string) (string, error) {
+	b, lp, sum := ls.b, ls.lp, ls.sum
+	if node.Pos() < ls.decl.End() {
+		return "", errors.New("the sum is read before it is declared")
+	}
+	if q, ok := ast.Unparen(node).(*ast.BinaryExpr); ok && q.Op == token.QUO {
+		if add, ok := ast.Unparen(q.Y).(*ast.BinaryExpr); ok && add.Op == token.ADD {
+			x := add.Y
+			if id, ok := ast.Unparen(add.Y).(*ast.Ident); ok && b.pass.TypesInfo.Uses[id] == sum {
+				x = add.X
+			} else if id, ok := ast.Unparen(add.X).(*ast.Ident); !ok || b.pass.TypesInfo.Uses[id] != sum {
+				x = nil
+			}
+			if x != nil && lp.chainableIn(ast.Unparen(q.X), false) && lp.chainableIn(ast.Unparen(x), false) && !b.mentionsObj(q.X, sum) && !b.mentionsObj(x, sum) {
+				return lp.product(ast.Unparen(q.X)) + ".Quo(" + name + ".Add(" + lp.product(ast.Unparen(x)) + ").Product()).Float64()", nil
+			}
+		}
+	}
+	read := &logProducts{b: b, set: map[types.Object]bool{sum: true}, pkg: lp.pkg, calls: true, names: map[types.Object]string{sum: name + ".Product()"}}
+	if !read.chainableIn(node, true) {
+		return "", fmt.Errorf("the read of the sum is not a product the fixer can carry: %s", b.text(node))
+	}
+	for v := range lp.set {
+		if b.mentionsObj(node, v) {
+			return "", fmt.Errorf("the read of the sum reads the running term %s too", v.Name())
+		}
+	}
+	return read.chain(node) + ".Float64()", nil
+}
+
+// dropSumCopies takes off the carried variables those assigned a value
+// that reads the sum (pw := last / (sum + last)): the sum stays a
+// float64 and its reads are the caller's to write.
+func (ls *logSum) dropSumCopies(body *ast.BlockStmt) {
+	b := ls.b
+	ast.Inspect(body, func(n ast.Node) bool {
+		as, ok := n.(*ast.AssignStmt)
+		if !ok {
+			return true
+		}
+		for i, l := range as.Lhs {
+			id, ok := ast.Unparen(l).(*ast.Ident)
+			if !ok {
+				continue
+			}
+			v := b.pass.TypesInfo.ObjectOf(id)
+			if ls.lp.set[v] && (len(as.Lhs) != len(as.Rhs) || b.mentionsObj(as.Rhs[i], ls.sum)) {
+				delete(ls.lp.set, v)
+			}
+		}
+		return true
+	})
 }
