@@ -49,7 +49,7 @@ func (fc *fnCtx) modelRunningSum(res *vm.Result) {
 		}
 		for _, s := range l.Sums {
 			t, ok := fc.c.numOf(s.Obj.Type())
-			if !ok || !t.Float || t.Num.Bits != 64 || fc.reportedIn(s.Stmt) {
+			if !ok || !t.Float || t.Num.Bits != 64 || fc.c.reportedWithin(s.Stmt) {
 				continue
 			}
 			scaled := fc.scaledRead(res, l.Stmt, s)
@@ -197,17 +197,6 @@ const powerSeriesTerms = 4000
 // reportedAs reports whether a finding of category cat starts at pos.
 func (c *checker) reportedAs(pos token.Pos, cat string) bool {
 	return c.reported[reportKey{pos, cat}] || c.reported[reportKey{pos, cat + definiteSuffix}]
-}
-
-// reportedIn reports whether a finding starts inside st: a sum whose
-// term is reported already is left to that finding.
-func (fc *fnCtx) reportedIn(st ast.Stmt) bool {
-	found := false
-	ast.Inspect(st, func(n ast.Node) bool {
-		found = found || n != nil && fc.c.reportedAt(n.Pos())
-		return !found
-	})
-	return found
 }
 
 // groupText wraps s in parentheses when it is more than one operand.

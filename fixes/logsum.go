@@ -42,9 +42,9 @@ func buildLogSum(b *builder) error {
 	if call == nil || len(call.Args) != 1 || !(isMath(fn, "Log") || isMath(fn, "Log2") || isMath(fn, "Log10")) {
 		return errors.New("log-sum match lacks its math.Log call")
 	}
-	sum, ok := b.m.Acc.(*types.Var)
-	if !ok || !types.Identical(sum.Type(), types.Typ[types.Float64]) {
-		return errors.New("the sum is not a float64 variable")
+	sum, err := b.sumVar()
+	if err != nil {
+		return err
 	}
 	if id, ok := ast.Unparen(call.Args[0]).(*ast.Ident); !ok || b.pass.TypesInfo.Uses[id] != sum {
 		return fmt.Errorf("math.%s does not take the sum itself", fn.Name())
@@ -53,10 +53,8 @@ func buildLogSum(b *builder) error {
 	if body == nil {
 		return errors.New("the sum's function has no body")
 	}
-	for _, f := range b.m.Binomials {
-		if !b.plain(f.N) || !b.plain(f.K) {
-			return errors.New("a binomial's operands have effects the rewrite would repeat")
-		}
+	if err := b.plainBinomials(); err != nil {
+		return err
 	}
 	ls := &logSum{b: b, sum: sum, lp: &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(call.Pos()), calls: true}}
 	if err := ls.writes(body); err != nil {
@@ -65,39 +63,84 @@ func buildLogSum(b *builder) error {
 	if ls.decl == nil || !ls.carries {
 		return errors.New("no term of the sum holds a value the fixer can carry in log space")
 	}
-	name := sum.Name() + "Log"
-	if !b.free(name, ls.decl.End()) || !b.free(name, call.Pos()) || declaresName(body, name) {
-		return fmt.Errorf("the name %s is taken", name)
-	}
 	if call.Pos() < ls.decl.End() {
 		return errors.New("the logarithm is taken before the sum is declared")
 	}
-	for _, st := range append(append([]ast.Stmt{ls.decl}, ls.adds...), ls.resets...) {
-		if _, _, err := b.enclosingList(st); err != nil || b.commentIn(st) {
-			return fmt.Errorf("a statement of the sum the fixer cannot rewrite whole: %s", b.text(st))
-		}
+	name, err := ls.logName(body, call.Pos())
+	if err != nil {
+		return err
+	}
+	if err := ls.wholeStatements(); err != nil {
+		return err
 	}
 	pkg := ls.lp.pkg
-	b.insert(ls.decl.End(), "\n"+b.indentOf(ls.decl.Pos())+name+" := "+pkg+".SumOf("+sum.Name()+")")
-	for _, st := range ls.resets {
-		b.insert(st.End(), "\n"+b.indentOf(st.Pos())+name+" = "+pkg+".SumOf("+sum.Name()+")")
-	}
-	for i, st := range ls.adds {
-		var term string
+	ls.emit(name, func(i int) string {
 		if def := ls.defs[i]; def != nil {
 			// t := E; s += t: the local becomes the Product of E.
 			r := def.Rhs[0]
 			b.replace(r.Pos(), r.End(), ls.lp.product(r))
-			term = b.text(ls.terms[i])
-		} else {
-			term = ls.lp.product(ls.terms[i])
+			return b.text(ls.terms[i])
 		}
-		indent := b.indentOf(st.Pos())
-		b.replace(st.Pos(), st.End(), name+" = "+name+".Add("+term+")\n"+indent+sum.Name()+" = "+name+".Float64()")
-	}
+		return ls.lp.product(ls.terms[i])
+	})
 	b.replace(call.Pos(), call.End(), name+"."+fn.Name()+"()")
 	b.message = fmt.Sprintf("Carry the sum %s in log space beside its float64 value (%s.Sum), so that its logarithm stays finite where the sum passes float64 (imports %s)", sum.Name(), pkg, HelperPath)
 	return nil
+}
+
+// sumVar returns the match's sum, a float64 variable.
+func (b *builder) sumVar() (*types.Var, error) {
+	sum, ok := b.m.Acc.(*types.Var)
+	if !ok || !types.Identical(sum.Type(), types.Typ[types.Float64]) {
+		return nil, errors.New("the sum is not a float64 variable")
+	}
+	return sum, nil
+}
+
+// plainBinomials refuses a match whose binomial calls have operands
+// with effects: the rewrite writes them again beside the call.
+func (b *builder) plainBinomials() error {
+	for _, f := range b.m.Binomials {
+		if !b.plain(f.N) || !b.plain(f.K) {
+			return errors.New("a binomial's operands have effects the rewrite would repeat")
+		}
+	}
+	return nil
+}
+
+// logName returns the name of the Sum carried beside the sum, s + "Log",
+// when it is free wherever the rewrite declares or reads it.
+func (ls *logSum) logName(body *ast.BlockStmt, read token.Pos) (string, error) {
+	name := ls.sum.Name() + "Log"
+	if !ls.b.free(name, ls.decl.End()) || !ls.b.free(name, read) || declaresName(body, name) {
+		return "", fmt.Errorf("the name %s is taken", name)
+	}
+	return name, nil
+}
+
+// wholeStatements refuses a sum whose statements are not statements of
+// a block or hold a comment: the rewrite replaces them whole.
+func (ls *logSum) wholeStatements() error {
+	for _, st := range append(append([]ast.Stmt{ls.decl}, ls.adds...), ls.resets...) {
+		if _, _, err := ls.b.enclosingList(st); err != nil || ls.b.commentIn(st) {
+			return fmt.Errorf("a statement of the sum the fixer cannot rewrite whole: %s", ls.b.text(st))
+		}
+	}
+	return nil
+}
+
+// emit declares the Sum name beside the sum, restarts it where the sum
+// is, and turns each s += t into name = name.Add(term(i)); s =
+// name.Float64().
+func (ls *logSum) emit(name string, term func(i int) string) {
+	b, pkg, s := ls.b, ls.lp.pkg, ls.sum.Name()
+	b.insert(ls.decl.End(), "\n"+b.indentOf(ls.decl.Pos())+name+" := "+pkg+".SumOf("+s+")")
+	for _, st := range ls.resets {
+		b.insert(st.End(), "\n"+b.indentOf(st.Pos())+name+" = "+pkg+".SumOf("+s+")")
+	}
+	for i, st := range ls.adds {
+		b.replace(st.Pos(), st.End(), name+" = "+name+".Add("+term(i)+")\n"+b.indentOf(st.Pos())+s+" = "+name+".Float64()")
+	}
 }
 
 // logSum is what buildLogSum reads of the sum's writes.

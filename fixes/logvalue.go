@@ -43,10 +43,8 @@ func buildLogOfValue(b *builder) error {
 	if !types.Identical(b.pass.TypesInfo.TypeOf(arg), types.Typ[types.Float64]) {
 		return fmt.Errorf("the call's value is a %s, not a float64", b.pass.TypesInfo.TypeOf(arg))
 	}
-	for _, f := range b.m.Binomials {
-		if !b.plain(f.N) || !b.plain(f.K) {
-			return errors.New("the binomial's operands have effects the rewrite would repeat")
-		}
+	if err := b.plainBinomials(); err != nil {
+		return err
 	}
 	for _, f := range b.m.Factorials {
 		if !b.plain(f.Arg) {

@@ -42,9 +42,9 @@ func buildRunSum(b *builder) error {
 	if !ok || b.m.Func == nil {
 		return errors.New("running-sum match lacks its read or its function")
 	}
-	sum, ok := b.m.Acc.(*types.Var)
-	if !ok || !types.Identical(sum.Type(), types.Typ[types.Float64]) {
-		return errors.New("the sum is not a float64 variable")
+	sum, err := b.sumVar()
+	if err != nil {
+		return err
 	}
 	body := b.funcBody()
 	if body == nil {
@@ -81,9 +81,9 @@ func buildRunSum(b *builder) error {
 			return fmt.Errorf("a term the fixer cannot carry in log space: %s", b.text(t))
 		}
 	}
-	name := sum.Name() + "Log"
-	if !b.free(name, ls.decl.End()) || !b.free(name, node.Pos()) || declaresName(body, name) {
-		return fmt.Errorf("the name %s is taken", name)
+	name, err := ls.logName(body, node.Pos())
+	if err != nil {
+		return err
 	}
 	lp.copies(body)
 	ls.dropSumCopies(body)
@@ -91,10 +91,8 @@ func buildRunSum(b *builder) error {
 	if err != nil {
 		return err
 	}
-	for _, st := range append(append([]ast.Stmt{ls.decl}, ls.adds...), ls.resets...) {
-		if _, _, err := b.enclosingList(st); err != nil || b.commentIn(st) {
-			return fmt.Errorf("a statement of the sum the fixer cannot rewrite whole: %s", b.text(st))
-		}
+	if err := ls.wholeStatements(); err != nil {
+		return err
 	}
 	if b.commentIn(node) {
 		return errors.New("a comment inside the read of the sum")
@@ -107,13 +105,7 @@ func buildRunSum(b *builder) error {
 	if lp.err != nil {
 		return lp.err
 	}
-	b.insert(ls.decl.End(), "\n"+b.indentOf(ls.decl.Pos())+name+" := "+pkg+".SumOf("+sum.Name()+")")
-	for _, st := range ls.resets {
-		b.insert(st.End(), "\n"+b.indentOf(st.Pos())+name+" = "+pkg+".SumOf("+sum.Name()+")")
-	}
-	for i, st := range ls.adds {
-		b.replace(st.Pos(), st.End(), name+" = "+name+".Add("+lp.product(ast.Unparen(ls.terms[i]))+")\n"+b.indentOf(st.Pos())+sum.Name()+" = "+name+".Float64()")
-	}
+	ls.emit(name, func(i int) string { return lp.product(ast.Unparen(ls.terms[i])) })
 	b.replace(node.Pos(), node.End(), readText)
 	b.message = fmt.Sprintf("Carry the running term and the sum %s in log space (%s.Product, %s.Sum), so that the sum scaled after the loop stays finite where it is (imports %s)", sum.Name(), pkg, pkg, HelperPath)
 	return nil

@@ -211,7 +211,7 @@ func (p Product) Log2() float64 {
 	if p.logOfFloat() {
 		return math.Log2(p.Float64())
 	}
-	return p.l.div(dd{math.Ln2, lnTwoLo}).float()
+	return logIn(p.l, lnTwo)
 }
 
 // Log10 returns the base-10 logarithm of the product, as Log does
@@ -220,7 +220,7 @@ func (p Product) Log10() float64 {
 	if p.logOfFloat() {
 		return math.Log10(p.Float64())
 	}
-	return p.l.div(dd{math.Ln10, lnTenLo}).float()
+	return logIn(p.l, lnTen)
 }
 
 // logOfFloat reports whether the product's logarithm is its float64

@@ -121,7 +121,7 @@ func (s Sum) Log2() float64 {
 	if s.logOfFloat() {
 		return math.Log2(s.v)
 	}
-	return s.scaled(dd{math.Ln2, lnTwoLo})
+	return logIn(s.l, lnTwo)
 }
 
 // Log10 returns the base-10 logarithm of the sum, as Log does
@@ -130,16 +130,23 @@ func (s Sum) Log10() float64 {
 	if s.logOfFloat() {
 		return math.Log10(s.v)
 	}
-	return s.scaled(dd{math.Ln10, lnTenLo})
+	return logIn(s.l, lnTen)
 }
 
-// scaled returns the carried logarithm over ln b, for the base b.
-func (s Sum) scaled(lnb dd) float64 {
-	if math.IsInf(s.l.hi, 0) {
-		return s.l.hi
+// logIn returns the logarithm l (a natural one) in the base whose
+// natural logarithm is lnb; ±Inf stays as it is.
+func logIn(l, lnb dd) float64 {
+	if math.IsInf(l.hi, 0) {
+		return l.hi
 	}
-	return s.l.div(lnb).float()
+	return l.div(lnb).float()
 }
+
+// lnTwo and lnTen are ln 2 and ln 10 in double-double.
+var (
+	lnTwo = dd{math.Ln2, lnTwoLo}
+	lnTen = dd{math.Ln10, lnTenLo}
+)
 
 // logOfFloat reports whether the logarithm is the float64 sum's own.
 func (s Sum) logOfFloat() bool {
