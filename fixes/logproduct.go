@@ -541,6 +541,8 @@ func (lp *logProducts) apply(left string, op token.Token, y ast.Expr) string {
 	if lp.chainableIn(y, true) {
 		return left + "." + name + "(" + lp.product(y) + ")"
 	}
+	// The call's parentheses group y: its own would be doubled.
+	y = ast.Unparen(y)
 	return left + "." + name + "Float(" + lp.asFloat64(y, lp.spliced(y)) + ")"
 }
 
