@@ -22,7 +22,7 @@ var Analyzer = &analysis.Analyzer{
 	Doc:              doc,
 	URL:              "https://github.com/overfact/overfact",
 	Run:              run,
-	FactTypes:        []analysis.Fact{new(FactorialFact), new(ValueFact)},
+	FactTypes:        []analysis.Fact{new(FactorialFact), new(ValueFact), new(WrongValueFact)},
 	RunDespiteErrors: true,
 }
 
@@ -145,6 +145,8 @@ func run(pass *analysis.Pass) (any, error) {
 	}
 	c.checkWeightReads(funcs)
 	c.releaseGuards()
+	// Last: the callers of the functions found wrong above.
+	c.checkWrongCallers()
 	return nil, nil
 }
 

@@ -25,6 +25,8 @@ const (
 	catLgammaInteger  = "lgamma-integer"
 	catLgammaOverflow = "lgamma-overflow"
 
+	catWrongCallee = "wrong-callee"
+
 	definiteSuffix = ".definite"
 )
 
@@ -57,6 +59,7 @@ var patterns = []struct{ id, title string }{
 	{catLgammaDigits, "math.Exp of a sum or difference of log-gamma values (a binomial, Beta or gamma ratio) loses more digits than the tolerance allows over the argument's range."},
 	{catLgammaInteger, "An exponential of log-gamma values, or math.Gamma, is converted or rounded to an integer that comes out wrong."},
 	{catLgammaOverflow, "math.Exp of a log-gamma value is +Inf where the expression it feeds is finite."},
+	{catWrongCallee, "A function returns, or builds its result from, the value of a call whose callee is reported wrong for inputs this caller does not rule out; the callee's fix makes it right."},
 }
 
 // Categories returns every category the analyzer can emit: each pattern in

@@ -227,17 +227,7 @@ var gammaMaps = map[string]bool{
 
 // storedIn returns the local variable e is assigned to, or nil.
 func (fc *fnCtx) storedIn(e ast.Expr, parents map[ast.Node]ast.Node) *types.Var {
-	var lhs []ast.Expr
-	var rhs []ast.Expr
-	switch p := parents[e].(type) {
-	case *ast.AssignStmt:
-		lhs, rhs = p.Lhs, p.Rhs
-	case *ast.ValueSpec:
-		for _, n := range p.Names {
-			lhs = append(lhs, n)
-		}
-		rhs = p.Values
-	}
+	lhs, rhs := assignedPairs(parents[e])
 	if len(lhs) != len(rhs) {
 		return nil
 	}

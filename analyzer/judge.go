@@ -23,7 +23,9 @@ type judgement struct {
 
 // judge compares the range of arg where it is evaluated with first.
 func (fc *fnCtx) judge(arg ast.Expr, first int64) judgement {
-	return decide(arg, fc.rangeOf(arg), first)
+	j := decide(arg, fc.rangeOf(arg), first)
+	fc.noteJudged(arg, first, j)
+	return j
 }
 
 // judgeCall judges a call of a function that carries a fact, against

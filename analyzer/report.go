@@ -40,6 +40,7 @@ func (fc *fnCtx) report(f finding) {
 	}
 	c.reported[key] = true
 	c.noteReported(pos)
+	fc.noteWrongValue(f)
 	d := analysis.Diagnostic{
 		Pos:      pos,
 		End:      f.node.End(),

@@ -150,8 +150,8 @@ func (f *Func) forget(s state, obj types.Object) state {
 	return f.assignVar(s, obj, Top())
 }
 
-// rootIdent returns the variable at the root of a selector chain x.a.b.
-func rootIdent(e ast.Expr) (*ast.Ident, bool) {
+// RootIdent returns the variable at the root of a selector chain x.a.b.
+func RootIdent(e ast.Expr) (*ast.Ident, bool) {
 	for {
 		switch x := ast.Unparen(e).(type) {
 		case *ast.Ident:

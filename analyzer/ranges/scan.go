@@ -79,12 +79,12 @@ func (f *Func) scan(body ast.Node) {
 				f.gotoTargets[n.Label.Name] = true
 			}
 		case *ast.UnaryExpr:
-			if id, ok := rootIdent(n.X); ok && n.Op == token.AND {
+			if id, ok := RootIdent(n.X); ok && n.Op == token.AND {
 				site(id, false)
 			}
 		case *ast.AssignStmt:
 			for _, l := range n.Lhs {
-				if id, ok := rootIdent(l); ok {
+				if id, ok := RootIdent(l); ok {
 					site(id, true)
 				}
 				if id, ok := ast.Unparen(l).(*ast.Ident); ok && (n.Tok != token.DEFINE || f.info.Defs[id] == nil) {
@@ -95,14 +95,14 @@ func (f *Func) scan(body ast.Node) {
 				f.noteTableDecl(n.Lhs, n.Rhs)
 			}
 		case *ast.IncDecStmt:
-			if id, ok := rootIdent(n.X); ok {
+			if id, ok := RootIdent(n.X); ok {
 				site(id, true)
 			}
 		case *ast.RangeStmt:
 			loops = append(loops, n)
 			if n.Tok == token.ASSIGN {
 				for _, l := range []ast.Expr{n.Key, n.Value} {
-					if id, ok := rootIdent(l); ok && l != nil {
+					if id, ok := RootIdent(l); ok && l != nil {
 						site(id, true)
 					}
 					if id, ok := ast.Unparen(l).(*ast.Ident); ok {
@@ -111,7 +111,7 @@ func (f *Func) scan(body ast.Node) {
 				}
 			}
 		case *ast.SelectorExpr:
-			if id, ok := rootIdent(n.X); ok && f.pointerMethod(n) {
+			if id, ok := RootIdent(n.X); ok && f.pointerMethod(n) {
 				site(id, false)
 			}
 		}

@@ -38,6 +38,9 @@ var demoFindings = []expected{
 	// overflow separately although the term is small.
 	{finding{"staffing/erlang.go", 22, "power-over-factorial"}, "math.Pow(a, float64(k)) / factorial(k)"},
 	{finding{"staffing/erlang.go", 24, "power-over-factorial"}, "math.Pow(a, float64(c)) / factorial(c)"},
+	// ErlangC returns c·B/(c − a(1 − B)) of ErlangB's value, NaN where
+	// ErlangB's is.
+	{finding{"staffing/erlang.go", 30, "wrong-callee"}, "ErlangB(c, a)"},
 	// n * fact(n-1) in int64 wraps from n = 21.
 	{finding{"sampling/plan.go", 13, "factorial-recursion"}, "n * fact(n-1)"},
 	// fact(n) / (fact(k) * fact(n-k)): the numerator wraps first.

@@ -10,12 +10,12 @@ import (
 )
 
 // Ways returns C(n, k), the number of samples of k bottles from n.
-func Ways(n, k int) int64 { // want Ways:`binomial of parameter 0, breaks from 21`
+func Ways(n, k int) int64 { // want Ways:`binomial of parameter 0, breaks from 21` Ways:`wrong for n ≥ 21`
 	return mathkit.Factorial(n) / (mathkit.Factorial(k) * mathkit.Factorial(n-k)) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
 }
 
 // WaysStepwise is Ways written through local variables.
-func WaysStepwise(n, k int) int64 { // want WaysStepwise:`binomial of parameter 0`
+func WaysStepwise(n, k int) int64 { // want WaysStepwise:`binomial of parameter 0` WaysStepwise:`wrong for some n or some k`
 	num := mathkit.Factorial(n)
 	den := mathkit.Factorial(k) * mathkit.Factorial(n-k)
 	return num / den // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
@@ -23,7 +23,7 @@ func WaysStepwise(n, k int) int64 { // want WaysStepwise:`binomial of parameter 
 
 // DrawProbability is the hypergeometric probability of d defectives in
 // a sample of n from a lot of N bottles holding D defectives.
-func DrawProbability(d, N, D, n int) float64 {
+func DrawProbability(d, N, D, n int) float64 { // want DrawProbability:`wrong for N ≥ 21`
 	return float64(Ways(D, d)*Ways(N-D, n-d)) / float64(Ways(N, n)) // want `hypergeometric probability from three binomial coefficients in int64: Ways\(N, …\) breaks for N ≥ 21 before the division; N is not bounded here`
 }
 
@@ -36,7 +36,7 @@ func SmallLot() int64 {
 // GuardedWays refuses lots the int64 factorials cannot hold, but not
 // samples larger than the lot: k! wraps for k ≥ 21 (to 0 from 66!, a
 // division by zero), where C(n, k) is 0.
-func GuardedWays(n, k int) int64 { // want GuardedWays:`binomial of parameter 0, safe for \[-inf, 20\]`
+func GuardedWays(n, k int) int64 { // want GuardedWays:`binomial of parameter 0, safe for \[-inf, 20\]` GuardedWays:`wrong for k ≥ 21`
 	if n > 20 {
 		return -1
 	}
@@ -50,13 +50,13 @@ func SafeWays(n, k int) int64 { // want SafeWays:`binomial of parameter 0, safe 
 
 // Orderings counts the orders in which a sample of n bottles can be
 // inspected, n!/(n-k)! for the first k.
-func Orderings(n, k int) int64 { // want Orderings:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 21`
+func Orderings(n, k int) int64 { // want Orderings:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 21` Orderings:`wrong for n ≥ 21`
 	return mathkit.Factorial(n) / mathkit.Factorial(n-k) // want `permutation count n!/\(n - k\)! as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`
 }
 
 // CrateSplits counts the ways to split a crate into three sample
 // groups of sizes a, b and c.
-func CrateSplits(a, b, c int) int64 { // want CrateSplits:`value Γ\(p0 \+ p1 \+ p2 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)·Γ\(p2 \+ 1\)\), wrong once p0 \+ p1 \+ p2 ≥ 21`
+func CrateSplits(a, b, c int) int64 { // want CrateSplits:`value Γ\(p0 \+ p1 \+ p2 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)·Γ\(p2 \+ 1\)\), wrong once p0 \+ p1 \+ p2 ≥ 21` CrateSplits:`wrong for a ≥ 21 or b ≥ 21 or c ≥ 21`
 	return mathkit.Factorial(a+b+c) / (mathkit.Factorial(a) * mathkit.Factorial(b) * mathkit.Factorial(c)) // want `multinomial coefficient as a ratio of factorials in int64: the numerator \(a \+ b \+ c\)! wraps for a \+ b \+ c ≥ 21`
 }
 
@@ -67,12 +67,12 @@ func ShiftFactorial() int64 {
 }
 
 // FloatWays converts too late: the int64 factorial has already wrapped.
-func FloatWays(n int) float64 { // want FloatWays:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
+func FloatWays(n int) float64 { // want FloatWays:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21` FloatWays:`wrong for n ≥ 21`
 	return float64(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float64 \(which holds it up to n = 170\)`
 }
 
 // TruncatedCount converts a float factorial back to an integer.
-func TruncatedCount(n int) int64 { // want TruncatedCount:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
+func TruncatedCount(n int) int64 { // want TruncatedCount:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 171` TruncatedCount:`wrong for n ≥ 171`
 	return int64(mathkit.FactorialFloat(n)) // want `int64\(mathkit.FactorialFloat\(n\)\) of a float64 factorial: n! is no longer exact in float64 for n ≥ 23 and exceeds int64 for n ≥ 21`
 }
 
@@ -103,7 +103,7 @@ func CrateOrders() int64 {
 
 // LineOrders is the factorial of the bottles on a line segment, which
 // can be long enough to wrap but is not known to be.
-func LineOrders(n int) int64 {
+func LineOrders(n int) int64 { // want LineOrders:`wrong for some n`
 	if n > 30 {
 		n = 30
 	}
@@ -111,7 +111,7 @@ func LineOrders(n int) int64 {
 }
 
 // FloatWays32 converts the wrapped int64 factorial to float32.
-func FloatWays32(n int) float32 { // want FloatWays32:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
+func FloatWays32(n int) float32 { // want FloatWays32:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21` FloatWays32:`wrong for n ≥ 21`
 	return float32(mathkit.Factorial(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float32 \(which holds it up to n = 34\)`
 }
 
@@ -146,7 +146,7 @@ func BatchWaysUnchecked(batch []int) int64 {
 
 // WaysByParts divides the numerator down step by step; the numerator
 // has wrapped before the first division.
-func WaysByParts(n, k int) int64 {
+func WaysByParts(n, k int) int64 { // want WaysByParts:`wrong for some n or some k`
 	r := mathkit.Factorial(n)
 	r /= mathkit.Factorial(k)
 	r /= mathkit.Factorial(n - k) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21`

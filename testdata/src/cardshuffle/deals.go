@@ -5,7 +5,7 @@ var dealMemo = map[[2]int]int64{}
 
 // Deals counts the hands of k cards dealt from a pack of n, by Pascal's
 // rule over the last card (in the hand or not), remembering each count.
-func Deals(n, k int) int64 {
+func Deals(n, k int) int64 { // want Deals:`wrong for some n or some k`
 	if k < 0 || k > n {
 		return 0
 	}

@@ -3,7 +3,7 @@
 package cardshuffle
 
 // Orderings returns the number of ways to order n cards.
-func Orderings(n int64) int64 { // want Orderings:`factorial of parameter 0, breaks from 21`
+func Orderings(n int64) int64 { // want Orderings:`factorial of parameter 0, breaks from 21` Orderings:`wrong for some n`
 	f := int64(1)
 	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2.43e18 is the largest that fits\); n is not bounded here`
 		f *= i
@@ -24,7 +24,7 @@ func orderingsRec(n int) int { // want orderingsRec:`factorial of parameter 0, b
 func SevenCards() int { return orderingsRec(7) }
 
 // Arrangements is the recursive form with the base case last.
-func Arrangements(n uint32) uint32 { // want Arrangements:`factorial of parameter 0, breaks from 13`
+func Arrangements(n uint32) uint32 { // want Arrangements:`factorial of parameter 0, breaks from 13` Arrangements:`wrong for n ≥ 13`
 	if n > 1 {
 		return n * Arrangements(n-1) // want `recursive factorial of n in uint32 wraps for n ≥ 13 \(12! ≈ 4.79e8 is the largest that fits\); n is not bounded here`
 	}
@@ -54,7 +54,7 @@ func FullDeck() int64 {
 
 // Bridge counts hands of 13 from a deck that is always at least 40
 // cards.
-func Bridge(n int) int64 {
+func Bridge(n int) int64 { // want Bridge:`wrong for some n`
 	if n < 40 {
 		n = 40
 	}
@@ -87,7 +87,7 @@ func Guarded(n int) int64 {
 }
 
 // Perfect counts the perfect shuffles of a deck: odd double factorial.
-func Perfect(n int) int64 {
+func Perfect(n int) int64 { // want Perfect:`wrong for some n`
 	f := int64(1)
 	for i := n; i > 1; i -= 2 { // want `double factorial of n in int64 wraps for n ≥ 34 \(33!! ≈ 6.33e18 is the largest that fits\)`
 		f *= int64(i)
@@ -96,7 +96,7 @@ func Perfect(n int) int64 {
 }
 
 // TopCards counts ordered draws of k cards from n: a falling factorial.
-func TopCards(n, k int) int64 {
+func TopCards(n, k int) int64 { // want TopCards:`wrong for some n or some k`
 	p := int64(1)
 	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= int64(n - i)
@@ -105,7 +105,7 @@ func TopCards(n, k int) int64 {
 }
 
 // CountDown counts orders with a while-style loop.
-func CountDown(n int) int64 {
+func CountDown(n int) int64 { // want CountDown:`wrong for some n`
 	f := int64(1)
 	for n > 1 { // want `factorial of n in int64 wraps for n ≥ 21`
 		f = int64(n) * f
@@ -115,17 +115,17 @@ func CountDown(n int) int64 {
 }
 
 // Hands returns C(n, k), the number of k-card hands from n cards.
-func Hands(n, k int64) int64 { // want Hands:`binomial of parameter 0, breaks from 21`
+func Hands(n, k int64) int64 { // want Hands:`binomial of parameter 0, breaks from 21` Hands:`wrong for n ≥ 21`
 	return Orderings(n) / (Orderings(k) * Orderings(n-k)) // want `binomial coefficient as a ratio of factorials in int64`
 }
 
 // Catalan counts the balanced cut sequences of n pairs.
-func Catalan(n int64) int64 { // want Catalan:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0 \+ 2\)·Γ\(p0 \+ 1\)\), wrong once 2\*p0 ≥ 21`
+func Catalan(n int64) int64 { // want Catalan:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0 \+ 2\)·Γ\(p0 \+ 1\)\), wrong once 2\*p0 ≥ 21` Catalan:`wrong for n ≥ 10\.5`
 	return Orderings(2*n) / (Orderings(n+1) * Orderings(n)) // want `Catalan number as \(2n\)!/\(\(n\+1\)!n!\) in int64: the numerator \(2 \* n\)! wraps for n ≥ 11 although the Catalan number itself fits up to n = 35; n is not bounded here`
 }
 
 // TwoPiles counts the orders of two piles kept apart.
-func TwoPiles(a, b int64) int64 { // want TwoPiles:`value Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\), wrong once p0 ≥ 21`
+func TwoPiles(a, b int64) int64 { // want TwoPiles:`value Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\), wrong once p0 ≥ 21` TwoPiles:`wrong for a ≥ 21 or b ≥ 21`
 	return Orderings(a) * Orderings(b) // want `product of factorials in int64: the factor a! alone wraps for a ≥ 21`
 }
 
@@ -144,7 +144,7 @@ func Euchre(k int64) int64 {
 
 // Interleavings counts riffle interleavings as a recursive double
 // factorial.
-func Interleavings(n int64) int64 { // want Interleavings:`double-factorial of parameter 0, breaks from 34`
+func Interleavings(n int64) int64 { // want Interleavings:`double-factorial of parameter 0, breaks from 34` Interleavings:`wrong for n ≥ 34`
 	if n <= 1 {
 		return 1
 	}
@@ -174,7 +174,7 @@ func Jokers(n uint32) uint32 { // want Jokers:`factorial of parameter 0, safe fo
 
 // Draws counts ordered draws of k cards from n: a falling factorial
 // function.
-func Draws(n, k int64) int64 { // want Draws:`falling-factorial of parameter 0, breaks from 21`
+func Draws(n, k int64) int64 { // want Draws:`falling-factorial of parameter 0, breaks from 21` Draws:`wrong for some n or some k`
 	p := int64(1)
 	for i := int64(0); i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= n - i

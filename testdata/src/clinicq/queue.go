@@ -21,7 +21,7 @@ func factorial(n float64) float64 { // want factorial:`factorial of parameter 0`
 }
 
 // WaitProb is the chance an arriving patient has to wait (Erlang C).
-func (q Queue) WaitProb() float64 {
+func (q Queue) WaitProb() float64 { // want WaitProb:`wrong for some q`
 	a := q.Arrival / q.Service
 	c := float64(q.Servers)
 	sum := 0.0
@@ -33,7 +33,7 @@ func (q Queue) WaitProb() float64 {
 }
 
 // IdleProb is the chance that every doctor is free.
-func (q Queue) IdleProb() float64 {
+func (q Queue) IdleProb() float64 { // want IdleProb:`wrong for some q`
 	a := q.Arrival / q.Service
 	c := q.Servers
 	rho := a / float64(c)

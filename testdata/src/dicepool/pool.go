@@ -32,7 +32,7 @@ type Pool struct {
 }
 
 // Combos counts the winning faces of the pool in integers.
-func (p Pool) Combos() int64 {
+func (p Pool) Combos() int64 { // want Combos:`wrong for some p`
 	r := int64(1)
 	for i := int64(1); i <= p.K; i++ { // want `multiplicative binomial loop computes C\(p.N, p.K\) in int64: the product r\*\(p.N - p.K \+ i\) wraps before the division for p.N ≥ 62 at p.K = p.N/2, although C\(p.N, p.N/2\) itself fits up to p.N = 66; p.N is not bounded here`
 		r = r * (p.N - p.K + i) / i
@@ -80,7 +80,7 @@ func BucketWays(n, k int) float64 { // want BucketWays:`binomial of parameter 0,
 
 // Exactly is the chance that exactly k of n dice succeed, each with
 // probability p.
-func Exactly(n, k int, p float64) float64 {
+func Exactly(n, k int, p float64) float64 { // want Exactly:`wrong for some n or some k`
 	c := 1.0
 	for j := 1; j <= k; j++ {
 		c *= float64(n+1-j) / float64(j)
@@ -199,12 +199,12 @@ func MidHands(n, k float64) float64 {
 }
 
 // Chance is the chance that exactly k of n dice succeed, over Ways.
-func Chance(n, k int, p float64) float64 {
+func Chance(n, k int, p float64) float64 { // want Chance:`wrong for n ≥ 1021`
 	return Ways(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in float64: Ways\(n, …\) breaks for n ≥ 1021 although the probability itself is at most 1; n is not bounded here`
 }
 
 // ChanceSplit is Chance over Split, which divides at every step.
-func ChanceSplit(n, k int, p float64) float64 {
+func ChanceSplit(n, k int, p float64) float64 { // want ChanceSplit:`wrong for n ≥ 1030`
 	return Split(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability .* in float64: Split\(n, …\) breaks for n ≥ 1030`
 }
 
@@ -215,7 +215,7 @@ func ChanceBucket(n, k int, p float64) float64 {
 
 // ExactlyStepped forms the coefficient by multiplying first: the loop
 // is the one finding, from n = 1021, before C(n, k) itself breaks.
-func ExactlyStepped(n, k int, p float64) float64 {
+func ExactlyStepped(n, k int, p float64) float64 { // want ExactlyStepped:`wrong for some n or some k`
 	c := 1.0
 	m := float64(n)
 	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product c\*\(m\)`

@@ -17,7 +17,7 @@ func fact(n int) float64 { // want fact:`factorial of parameter 0`
 }
 
 // Beam sums J_n(x) over terms terms of its series.
-func Beam(n int, x float64, terms int) float64 {
+func Beam(n int, x float64, terms int) float64 { // want Beam:`wrong for some terms or some n`
 	sum := 0.0
 	for k := 0; k < terms; k++ {
 		sum += math.Pow(-1, float64(k)) * math.Pow(x/2, float64(2*k+n)) / (fact(k) * fact(k+n)) // want `term with \(x / 2\)\^\(2\*k \+ n\) over k!·\(k \+ n\)! in float64`

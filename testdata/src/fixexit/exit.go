@@ -67,7 +67,7 @@ func Capped(n int) int {
 }
 
 // Until multiplies 1..n but stops at the crate numbered stop.
-func Until(n, stop int) int {
+func Until(n, stop int) int { // want Until:`wrong for some n`
 	r := 1
 	for i := 1; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21`
 		if i == stop {
@@ -79,7 +79,7 @@ func Until(n, stop int) int {
 }
 
 // Thirty multiplies 1..30 unless a crate numbered stop comes first.
-func Thirty(stop int) int {
+func Thirty(stop int) int { // want Thirty:`wrong for some stop`
 	r := 1
 	for i := 1; i <= 30; i++ { // want `^factorial of 30 in int wraps \(20! ≈ 2.43e18 is the largest that fits\); the loop can also leave before it gets there$`
 		if i == stop {
@@ -92,7 +92,7 @@ func Thirty(stop int) int {
 
 // OddCrates multiplies the odd crate numbers only: 25 gives 25!! in
 // full, which fits an int.
-func OddCrates(n int) int {
+func OddCrates(n int) int { // want OddCrates:`wrong for some n`
 	r := 1
 	for i := 1; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21`
 		if i%2 == 0 {
@@ -105,7 +105,7 @@ func OddCrates(n int) int {
 
 // Past leaves its loop only long after the product has wrapped: it is
 // n! wherever it is right, and gets the range guard.
-func Past(n int) int { // want Past:"factorial of parameter 0, breaks from 21"
+func Past(n int) int { // want Past:"factorial of parameter 0, breaks from 21" Past:`wrong for some n`
 	r := 1
 	for i := 2; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21`
 		if i > 1000 {

@@ -7,14 +7,14 @@ import "math"
 
 // StudentConst is the constant Γ((ν+1)/2)/(√(νπ)·Γ(ν/2)) of Student's
 // t density with nu degrees of freedom (common practice).
-func StudentConst(nu int) float64 { // want StudentConst:`value Γ\(1/2\*p0 \+ 1/2\)/`
+func StudentConst(nu int) float64 { // want StudentConst:`value Γ\(1/2\*p0 \+ 1/2\)/` StudentConst:`wrong for nu ≥ 342\.248754`
 	v := float64(nu)
 	return math.Gamma((v+1)/2) / (math.Sqrt(v*math.Pi) * math.Gamma(v/2)) // want `ratio of math.Gamma values in float64`
 }
 
 // ChiMean is the mean √2·Γ((k+1)/2)/Γ(k/2) of the chi distribution
 // with k degrees of freedom (common practice).
-func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/4503599627370496·Γ`
+func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/4503599627370496·Γ` ChiMean:`wrong for k ≥ 342\.248754`
 	return math.Sqrt2 * math.Gamma((k+1)/2) / math.Gamma(k/2) // want `ratio of math.Gamma values in float64`
 }
 
@@ -22,7 +22,7 @@ func ChiMean(k float64) float64 { // want ChiMean:`value 6369051672525773/450359
 // partner below it for each: it is taken as a product in log space.
 
 // Continuation is Gauss's Γ(c)Γ(c−a−b)/(Γ(c−a)Γ(c−b)).
-func Continuation(a, b, c float64) float64 { // want Continuation:`value Γ\(p2\)·Γ`
+func Continuation(a, b, c float64) float64 { // want Continuation:`value Γ\(p2\)·Γ` Continuation:`wrong for c ≥ 171\.624377`
 	return math.Gamma(c) * math.Gamma(c-a-b) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64`
 }
 

@@ -34,18 +34,18 @@ func pairs(n, k int64) int64 { // want pairs:`binomial of parameter 0, breaks fr
 }
 
 // Cracked is the chance that k of n pots crack, each with probability p.
-func Cracked(n, k int, p float64) float64 {
+func Cracked(n, k int, p float64) float64 { // want Cracked:`wrong for n ≥ 62`
 	return float64(ways(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int: ways`
 }
 
 // Flawed is the chance that a sample of n pots from a load of total
 // holding bad flawed ones shows k of them.
-func Flawed(total, bad, n, k int) float64 {
+func Flawed(total, bad, n, k int) float64 { // want Flawed:`wrong for total ≥ 62`
 	return float64(ways(bad, k)) * float64(ways(total-bad, n-k)) / float64(ways(total, n)) // want `hypergeometric probability from three binomial coefficients in int`
 }
 
 // Glazed is Cracked over the factorial count.
-func Glazed(n, k int64, p float64) float64 {
+func Glazed(n, k int64, p float64) float64 { // want Glazed:`wrong for n ≥ 21`
 	return float64(pairs(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int64: pairs`
 }
 
@@ -53,7 +53,7 @@ func Glazed(n, k int64, p float64) float64 {
 // summed. For p outside [0, 1] the terms alternate in sign, and where
 // they leave float64 their sum would be +Inf − Inf = NaN: the fixed loop
 // refuses such a term, naming its operands.
-func Passed(n, c int, p float64) float64 {
+func Passed(n, c int, p float64) float64 { // want Passed:`wrong for n ≥ 62`
 	sum := 0.0
 	for k := 0; k <= c; k++ {
 		sum += float64(ways(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int: ways`

@@ -24,7 +24,7 @@ func picks(n, k int) float64 { // want picks:`binomial of parameter 0`
 }
 
 // OrderNats is ln n!, the information in the order of n seeds.
-func OrderNats(n int) float64 {
+func OrderNats(n int) float64 { // want OrderNats:`wrong for n ≥ 171`
 	return math.Log(arrangements(n)) // want `math\.Log of arrangements\(n\), whose value is n!: the factorial of n in float64 overflows to \+Inf for n ≥ 171 \(170! ≈ 7\.26e306 is the largest that fits\), so the logarithm is \+Inf where ln n! is finite; n is not bounded here`
 }
 
@@ -34,7 +34,7 @@ func SproutNats(n, k int) float64 { // want SproutNats:`value ln Γ\(p0 \+ 1\)/\
 }
 
 // SproutBits is the same in bits, the count converted first.
-func SproutBits(n, k int) float64 {
+func SproutBits(n, k int) float64 { // want SproutBits:`wrong for n ≥ 1030`
 	return math.Log2(float64(picks(n, k))) // want `math\.Log2 of picks\(n, k\), whose value is C\(n, k\)`
 }
 

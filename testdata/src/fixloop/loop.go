@@ -4,7 +4,7 @@
 package fixloop
 
 // Ways counts the ways k dice of n show a six.
-func Ways(n, k int) int { // want Ways:"binomial of parameter 0"
+func Ways(n, k int) int { // want Ways:"binomial of parameter 0" Ways:`wrong for some n or some k`
 	b := 1
 	for i := 1; i <= k; i++ { // want "multiplicative binomial loop"
 		b = b * (n - k + i) / i
@@ -14,7 +14,7 @@ func Ways(n, k int) int { // want Ways:"binomial of parameter 0"
 
 // WaysChecked refuses a negative k first, so the rewrite needs no
 // condition of its own.
-func WaysChecked(n, k int) int { // want WaysChecked:"binomial of parameter 0"
+func WaysChecked(n, k int) int { // want WaysChecked:"binomial of parameter 0" WaysChecked:`wrong for some n or some k`
 	if k < 0 {
 		return 0
 	}
@@ -26,7 +26,7 @@ func WaysChecked(n, k int) int { // want WaysChecked:"binomial of parameter 0"
 }
 
 // WaysU counts in unsigned arithmetic.
-func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
+func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0" WaysU:`wrong for some n or some k`
 	b := uint64(1)
 	for i := uint64(1); i <= k; i++ { // want "multiplicative binomial loop"
 		b = b * (n - k + i) / i
@@ -36,7 +36,7 @@ func WaysU(n, k uint64) uint64 { // want WaysU:"binomial of parameter 0"
 
 // Rolls counts the ordered ways k dice of n can be picked one after
 // another: n(n−1)…(n−k+1).
-func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0"
+func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0" Rolls:`wrong for some n or some k`
 	p := 1
 	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int wraps`
 		p *= n - i
@@ -45,7 +45,7 @@ func Rolls(n, k int) int { // want Rolls:"falling-factorial of parameter 0"
 }
 
 // RollsUp is Rolls counted up to n: (n−k+1)(n−k+2)…n.
-func RollsUp(n, k int) int {
+func RollsUp(n, k int) int { // want RollsUp:`wrong for some n or some k`
 	p := 1
 	for i := n - k + 1; i <= n; i++ { // want `falling factorial of k factors from n down in int wraps`
 		p *= i
@@ -57,7 +57,7 @@ func RollsUp(n, k int) int {
 // (i − 1) for i from n−k+2 to n+1: the fixer reads the factor against
 // the counter itself. For k > n the product holds the factor 0 where
 // n−k+2 does not wrap, and the falling factorial is 0 for every k > n.
-func Picks(n, k uint64) uint64 {
+func Picks(n, k uint64) uint64 { // want Picks:`wrong for some n or some k`
 	p := uint64(1)
 	for i := n - k + 2; i <= n+1; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
 		p *= i - 1
@@ -67,7 +67,7 @@ func Picks(n, k uint64) uint64 {
 
 // Draws is Picks in int64 for counts the caller checked: n is never
 // negative at the loop, where the helper takes it.
-func Draws(n, k int64) int64 {
+func Draws(n, k int64) int64 { // want Draws:`wrong for some n or some k`
 	if n < 0 || k < 0 {
 		return 0
 	}
@@ -81,7 +81,7 @@ func Draws(n, k int64) int64 {
 // Shifted is Draws without the check: over a negative n the loop
 // multiplies negative factors, which the falling helpers do not take, so
 // it has no fix.
-func Shifted(n, k int64) (p int64) {
+func Shifted(n, k int64) (p int64) { // want Shifted:`wrong for some n or some k`
 	p = 1
 	for i := n - k; i <= n-1; i++ { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= 1 + i
@@ -93,7 +93,7 @@ func Shifted(n, k int64) (p int64) {
 // C(n, k) may fit where the numerator wraps, and a helper that panics
 // past the numerator's range would refuse it, so the numerator's loop
 // has no fix.
-func Interleavings(n, k uint64) uint64 {
+func Interleavings(n, k uint64) uint64 { // want Interleavings:`wrong for some n or some k`
 	num := uint64(1)
 	for i := uint64(0); i < k; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
 		num *= n - i

@@ -40,7 +40,7 @@ type Desk struct {
 }
 
 // Tickets counts the tickets of the desk in integers.
-func (p Desk) Tickets() int64 {
+func (p Desk) Tickets() int64 { // want Tickets:`wrong for some p`
 	if p.N < 0 || p.K < 0 {
 		return 0
 	}
@@ -68,7 +68,7 @@ func Unchecked(n, k int) float64 { // want Unchecked:"binomial of parameter 0, b
 
 // Remaining reads the stepped factor after the loop: it is n−k there,
 // which the rewrite would lose.
-func Remaining(n, k int) (float64, float64) {
+func Remaining(n, k int) (float64, float64) { // want Remaining:`wrong for some n or some k`
 	if n < 0 || k < 0 {
 		return 0, 0
 	}
@@ -145,7 +145,7 @@ func Mirrored(n, k int) float64 {
 
 // Reload refreshes the desk after checking it: the call may change p.N
 // and p.K through the pointer, so the count is left to the loop.
-func (p *Desk) Reload() int64 {
+func (p *Desk) Reload() int64 { // want Reload:`wrong for some p`
 	if p.N < 0 || p.K < 0 {
 		return 0
 	}
@@ -195,7 +195,7 @@ func Stepped(n, k float64) float64 { // want Stepped:"binomial of parameter 0, b
 
 // Ways reads the ticket's counts, cut to whole numbers in locals that
 // are assigned again before the loop.
-func (t Ticket) Ways() float64 {
+func (t Ticket) Ways() float64 { // want Ways:`wrong for some t`
 	n, k, r := 0.0, 0.0, 1.0
 	n, k = t.Pool, t.Picks
 	n, k = math.Trunc(n), math.Trunc(k)
@@ -233,7 +233,7 @@ func QueuesDown(n, k float64) float64 {
 
 // Winners is the chance that exactly k of n tickets win, each with
 // probability p, over a coefficient its loop builds one ratio at a time.
-func Winners(n, k int, p float64) float64 {
+func Winners(n, k int, p float64) float64 { // want Winners:`wrong for some n or some k`
 	ways := 1.0
 	for j := 0; j < k; j++ {
 		ways *= float64(n-j) / float64(j+1)
@@ -244,7 +244,7 @@ func Winners(n, k int, p float64) float64 {
 // Prizes is Winners over a coefficient that multiplies before it
 // divides: the loop breaks first and is the finding, and its fix takes
 // the probability with it.
-func Prizes(n, k int, p float64) float64 {
+func Prizes(n, k int, p float64) float64 { // want Prizes:`wrong for some n or some k`
 	ways := 1.0
 	top := float64(n)
 	for j := 1; j <= k; j++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product ways\*\(top\)`

@@ -8,7 +8,7 @@ package fixpascal
 var picks = map[[2]int64]int64{}
 
 // Picks counts the ways to seat k of n guests at the head table.
-func Picks(n, k int64) int64 {
+func Picks(n, k int64) int64 { // want Picks:`wrong for some n or some k`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -27,7 +27,7 @@ func Picks(n, k int64) int64 {
 var small = map[[2]int]int32{}
 
 // SmallPicks is Picks over int32 counts, the k argument first.
-func SmallPicks(k, n int) int32 {
+func SmallPicks(k, n int) int32 { // want SmallPicks:`wrong for some k or some n`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -46,7 +46,7 @@ var routes = map[[2]int64]int64{}
 
 // Routes counts the walks from one corner of a hall of r by c tiles to
 // the other, one tile right or up at a time, with a memo.
-func Routes(r, c int64) int64 {
+func Routes(r, c int64) int64 { // want Routes:`wrong for some r or some c`
 	if r < 0 || c < 0 {
 		return 0
 	}

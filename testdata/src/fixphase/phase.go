@@ -8,7 +8,7 @@ import "math"
 
 // Sine is sin x by its Taylor series, the factorial (2k+1)! updated
 // on every trip but the first.
-func Sine(x float64, terms int) float64 {
+func Sine(x float64, terms int) float64 { // want Sine:`wrong for some terms`
 	sum, fact, sign := 0.0, 1.0, 1.0
 	for k := 0; k < terms; k++ {
 		if k > 0 {
@@ -21,7 +21,7 @@ func Sine(x float64, terms int) float64 {
 }
 
 // Sinh is sinh x by its Taylor series from the second term on.
-func Sinh(x float64, terms int) float64 {
+func Sinh(x float64, terms int) float64 { // want Sinh:`wrong for some terms`
 	sum := x
 	fact := 1.0
 	for k := 1; k < terms; k++ { // want `running factorial fact computes \(2\*k \+ 1\)! inside the sum that divides by it: in float64 it overflows to \+Inf from k = 85`
@@ -34,7 +34,7 @@ func Sinh(x float64, terms int) float64 {
 // SinhTail also returns the last factorial, which no helper call can
 // stand for: the factorial is carried in log space, read back where it
 // is returned.
-func SinhTail(x float64, terms int) (float64, float64) {
+func SinhTail(x float64, terms int) (float64, float64) { // want SinhTail:`wrong for some terms`
 	sum := x
 	fact := 1.0
 	for k := 1; k < terms; k++ { // want `running factorial fact computes \(2\*k \+ 1\)! inside the sum that divides by it`

@@ -7,7 +7,7 @@ import "math"
 
 // AtMostArrivals is the chance of at most n prescriptions in an hour
 // with lambda on average.
-func AtMostArrivals(lambda float64, n int) float64 {
+func AtMostArrivals(lambda float64, n int) float64 { // want AtMostArrivals:`wrong for some n`
 	p := math.Exp(-lambda)
 	sum := p
 	for k := 1; k <= n; k++ { // want `running product p computes the Poisson terms lambda\^k·e\^\(−lambda\)/k! from math.Exp\(-lambda\)`
@@ -29,7 +29,7 @@ func ExactArrivals(mean, n float64) float64 {
 
 // Refills is ExactArrivals for the refill queue, its update written
 // out.
-func Refills(rate float64, n int32) float64 {
+func Refills(rate float64, n int32) float64 { // want Refills:`wrong for some n`
 	t := math.Exp(-rate)
 	for i := int32(1); i <= n; i++ { // want `running product t computes the Poisson terms rate\^k`
 		t = t * rate / float64(i)
@@ -76,7 +76,7 @@ func HalfSteps(lambda, n float64) float64 {
 // lambda on average, summed as e^(−λ)·Σ λ^k/k! over a running factorial
 // (the k = 0 term divides by 0! = 1): the term folds e^(−λ) in, which
 // holds for a negative lambda too.
-func WalkIns(lambda float64, n int) float64 {
+func WalkIns(lambda float64, n int) float64 { // want WalkIns:`wrong for some n`
 	f, sum := 1.0, 0.0
 	for k := 0; k <= n; k++ { // want `running factorial f computes k! inside the sum`
 		if k > 0 {
@@ -89,7 +89,7 @@ func WalkIns(lambda float64, n int) float64 {
 
 // Tickets is the chance of between 1 and n support tickets in an hour,
 // the same sum from k = 1 over a factorial loop of its own.
-func Tickets(lambda float64, n int) float64 {
+func Tickets(lambda float64, n int) float64 { // want Tickets:`wrong for some n`
 	f, sum := 1.0, 0.0
 	for k := 1; k <= n; k++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
 		f *= float64(k)

@@ -20,7 +20,7 @@ func factF(n int) float64 { // want factF:"factorial of parameter 0"
 }
 
 // Rotas counts the ways to pick k agents out of n.
-func Rotas(n, k int) int { // want Rotas:"binomial of parameter 0"
+func Rotas(n, k int) int { // want Rotas:"binomial of parameter 0" Rotas:`wrong for n ≥ 21`
 	return fact(n) / (fact(k) * fact(n-k)) // want "binomial coefficient"
 }
 
@@ -30,17 +30,17 @@ func RotaShare(n, k int) float64 { // want RotaShare:"binomial of parameter 0"
 }
 
 // Orders counts ordered picks of k agents out of n.
-func Orders(n, k int) int { // want Orders:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 21`
+func Orders(n, k int) int { // want Orders:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 21` Orders:`wrong for n ≥ 21`
 	return fact(n) / fact(n-k) // want "permutation count"
 }
 
 // Shifts counts the ways to split a+b+c agents into three named shifts.
-func Shifts(a, b, c int) float64 { // want Shifts:`value Γ\(p0 \+ p1 \+ p2 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)·Γ\(p2 \+ 1\)\), wrong once p0 \+ p1 \+ p2 ≥ 171`
+func Shifts(a, b, c int) float64 { // want Shifts:`value Γ\(p0 \+ p1 \+ p2 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(p1 \+ 1\)·Γ\(p2 \+ 1\)\), wrong once p0 \+ p1 \+ p2 ≥ 171` Shifts:`wrong for a ≥ 171 or b ≥ 171 or c ≥ 171`
 	return factF(a+b+c) / (factF(a) * factF(b) * factF(c)) // want "multinomial coefficient"
 }
 
 // Queues counts well-formed call/answer sequences of n pairs.
-func Queues(n int) int { // want Queues:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0 \+ 2\)·Γ\(p0 \+ 1\)\), wrong once 2\*p0 ≥ 21`
+func Queues(n int) int { // want Queues:`value Γ\(2\*p0 \+ 1\)/\(Γ\(p0 \+ 2\)·Γ\(p0 \+ 1\)\), wrong once 2\*p0 ≥ 21` Queues:`wrong for n ≥ 10\.5`
 	return fact(2*n) / (fact(n+1) * fact(n)) // want "Catalan number"
 }
 
@@ -53,26 +53,26 @@ func fact32(n int32) int32 { // want fact32:"factorial of parameter 0"
 }
 
 // Rotas32 is Rotas in int32: the helper's int64 is checked to fit.
-func Rotas32(n, k int32) int32 { // want Rotas32:"binomial of parameter 0"
+func Rotas32(n, k int32) int32 { // want Rotas32:"binomial of parameter 0" Rotas32:`wrong for n ≥ 13`
 	return fact32(n) / (fact32(k) * fact32(n-k)) // want "binomial coefficient"
 }
 
 // Pairings counts picks of k agents out of n, each pick staffed on
 // either of two sites. The syntax groups the binomial apart from the 2,
 // so the binomial alone is rewritten.
-func Pairings(n, k int) int { // want Pairings:`value 2·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 21`
+func Pairings(n, k int) int { // want Pairings:`value 2·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 21` Pairings:`wrong for n ≥ 21`
 	return 2 * (fact(n) / (fact(k) * fact(n-k))) // want "binomial coefficient"
 }
 
 // PairingsFlat is Pairings with the 2 inside the numerator: the
 // expression is no binomial as written, so it is reported as a plain
 // ratio, without a fix.
-func PairingsFlat(n, k int) int { // want PairingsFlat:`value 2·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 21`
+func PairingsFlat(n, k int) int { // want PairingsFlat:`value 2·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 21` PairingsFlat:`wrong for n ≥ 21`
 	return 2 * fact(n) / (fact(k) * fact(n-k)) // want `ratio of factorials in int: the numerator n! wraps`
 }
 
 // TripleShare is RotaShare for three shifts; the factor 3 comes after
 // the binomial, which is rewritten on its own.
-func TripleShare(n, k int) float64 { // want TripleShare:`value 3·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171`
+func TripleShare(n, k int) float64 { // want TripleShare:`value 3·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171` TripleShare:`wrong for n ≥ 171`
 	return factF(n) / (factF(k) * factF(n-k)) * 3 // want "binomial coefficient"
 }

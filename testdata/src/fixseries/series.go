@@ -19,7 +19,7 @@ func factorial(n int) float64 { // want factorial:"factorial of parameter 0"
 // is +Inf, and for a ≤ 1 the term is then below the smallest float64, so
 // 0 is its correctly rounded value; for a larger a it is not, and the
 // rewrite takes the product in log space.
-func Decay(a float64, k int) float64 { // want Decay:`value \(p0\)\^\(p1 \+ 1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+func Decay(a float64, k int) float64 { // want Decay:`value \(p0\)\^\(p1 \+ 1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171` Decay:`wrong for k ≥ 171`
 	return math.Pow(a, float64(k+1)) / factorial(k) // want `term with a\^\(k \+ 1\) over k! in float64`
 }
 
@@ -30,7 +30,7 @@ func Label(n int) float64 { // want Label:"factorial of parameter 0"
 
 // ExpSeries sums 1 + x + x^2/2! + ... + x^terms/terms!, keeping the
 // factorial in the loop that sums the terms.
-func ExpSeries(x float64, terms int) float64 {
+func ExpSeries(x float64, terms int) float64 { // want ExpSeries:`wrong for some terms`
 	sum, fact := 1.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		fact *= float64(k)
@@ -41,7 +41,7 @@ func ExpSeries(x float64, terms int) float64 {
 
 // Tail is 1/n!, the weight of the n-th term, from an integer product
 // converted at the end.
-func Tail(n int) float64 {
+func Tail(n int) float64 { // want Tail:`wrong for some n`
 	p := 1.0
 	for i := 1; i <= n; i++ { // want "factorial of n in float64"
 		p *= float64(i)
@@ -52,7 +52,7 @@ func Tail(n int) float64 {
 // ExpTail sums the same series and also returns the last factorial, so
 // the running factorial stays: only the terms could be rewritten, and a
 // fix that kept half the loop's state is not offered.
-func ExpTail(x float64, terms int) (float64, float64) {
+func ExpTail(x float64, terms int) (float64, float64) { // want ExpTail:`wrong for some terms`
 	sum, fact := 1.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		fact *= float64(k)
@@ -63,7 +63,7 @@ func ExpTail(x float64, terms int) (float64, float64) {
 
 // Lagged adds x^k/(k-1)!: the term reads the factorial before its
 // update, so it is no x^k/k! and keeps its loop as written.
-func Lagged(x float64, terms int) float64 {
+func Lagged(x float64, terms int) float64 { // want Lagged:`wrong for some terms`
 	sum, fact := 0.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		sum += math.Pow(x, float64(k)) / fact
@@ -73,7 +73,7 @@ func Lagged(x float64, terms int) float64 {
 }
 
 // Shifted adds x^(k+1)/k!, whose power is not the factorial's count.
-func Shifted(x float64, terms int) float64 {
+func Shifted(x float64, terms int) float64 { // want Shifted:`wrong for some terms`
 	sum, fact := 0.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		fact *= float64(k)
@@ -84,7 +84,7 @@ func Shifted(x float64, terms int) float64 {
 
 // CoolingSum is ExpSeries written with its own declarations and the
 // update spelled out in full, over an int64 count.
-func CoolingSum(rate float64, steps int64) float64 {
+func CoolingSum(rate float64, steps int64) float64 { // want CoolingSum:`wrong for some steps`
 	var sum float64 = 1
 	f := 1.0
 	for j := int64(1); j <= steps; j++ { // want "factorial of steps in float64"
@@ -96,7 +96,7 @@ func CoolingSum(rate float64, steps int64) float64 {
 
 // CoolingPower keeps the power beside the factorial, as x^k/k! is often
 // written: both overflow long before their quotient does.
-func CoolingPower(x float64, terms int) float64 {
+func CoolingPower(x float64, terms int) float64 { // want CoolingPower:`wrong for some terms`
 	sum, fact, pow := 1.0, 1.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		fact *= float64(k)
@@ -108,7 +108,7 @@ func CoolingPower(x float64, terms int) float64 {
 
 // LateCount is the chance that a kiln sees at most n cracks in a batch
 // whose mean is lambda: a Poisson sum with its factorial in the loop.
-func LateCount(lambda float64, n int) float64 {
+func LateCount(lambda float64, n int) float64 { // want LateCount:`wrong for some n`
 	cdf, fact := math.Exp(-lambda), 1.0
 	for k := 1; k <= n; k++ { // want "factorial of n in float64"
 		fact *= float64(k)
@@ -119,7 +119,7 @@ func LateCount(lambda float64, n int) float64 {
 
 // PowerFirst reads the power before it is updated, so its term is
 // x^(k-1)/k! and it keeps its loop.
-func PowerFirst(x float64, terms int) float64 {
+func PowerFirst(x float64, terms int) float64 { // want PowerFirst:`wrong for some terms`
 	sum, fact, pow := 0.0, 1.0, 1.0
 	for k := 1; k <= terms; k++ { // want "factorial of terms in float64"
 		fact *= float64(k)

@@ -3,7 +3,7 @@ package gameodds
 import "math"
 
 // HandCount is the number of distinct hands of the given size.
-func HandCount(deck, hand int) int64 {
+func HandCount(deck, hand int) int64 { // want HandCount:`wrong for some deck or some hand`
 	r := int64(1)
 	n := int64(deck)
 	for d := int64(1); d <= int64(hand); d++ { // want `multiplicative binomial loop computes C\(deck`
@@ -29,7 +29,7 @@ func lg(x float64) float64 {
 }
 
 // NegBinomialPMF is the chance of k failures before the r-th success.
-func NegBinomialPMF(k, r int, p float64) float64 {
+func NegBinomialPMF(k, r int, p float64) float64 { // want NegBinomialPMF:`wrong for some k or some r`
 	c := math.Exp(lg(float64(k+r)) - lg(float64(k+1)) - lg(float64(r))) // want `math.Exp of log-gamma values computes C\(k \+ r - 1, r - 1\) from 3 log-gamma values`
 	return c * math.Pow(p, float64(r)) * math.Pow(1-p, float64(k)) // want `computes the negative binomial probability C\(k \+ r - 1`
 }

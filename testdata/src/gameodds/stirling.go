@@ -6,7 +6,7 @@ type partitionMemo struct {
 }
 
 // Stirling2 counts the ways to split n distinct tokens into k non-empty groups.
-func (m *partitionMemo) Stirling2(n, k int) int64 {
+func (m *partitionMemo) Stirling2(n, k int) int64 { // want Stirling2:`wrong for some m or some n or some k`
 	if n == k {
 		return 1
 	}

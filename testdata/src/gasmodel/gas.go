@@ -26,14 +26,14 @@ func MixingWeight(a, b float64) float64 { // want MixingWeight:`value Γ\(p0\)·
 // does: with a = 1.3 and b = 2.7, at c = 170.5 the two numerator values
 // are about 5.6e305 and 7.0e296 (Γ(170.5) and Γ(166.5), from
 // ln Γ via math.Lgamma), whose product is +Inf.
-func ContinuationFactor(a, b, c float64) float64 { // want ContinuationFactor:`value Γ\(p2\)·Γ\(-p0 - p1 \+ p2\)/\(Γ\(-p0 \+ p2\)·Γ\(-p1 \+ p2\)\), wrong once p2 ≥ 171\.624377`
+func ContinuationFactor(a, b, c float64) float64 { // want ContinuationFactor:`value Γ\(p2\)·Γ\(-p0 - p1 \+ p2\)/\(Γ\(-p0 \+ p2\)·Γ\(-p1 \+ p2\)\), wrong once p2 ≥ 171\.624377` ContinuationFactor:`wrong for c ≥ 171\.624377`
 	d := c - a - b
 	return math.Gamma(c) * math.Gamma(d) / (math.Gamma(c-a) * math.Gamma(c-b)) // want `ratio of math.Gamma values in float64: math.Gamma\(c\) is \+Inf for c ≥ 171.62.*; the product of the 2 Γ values above the line can overflow first`
 }
 
 // StudentNorm returns the normalising constant of Student's t density
 // with nu degrees of freedom.
-func StudentNorm(nu int) float64 { // want StudentNorm:`value Γ\(1/2\*p0 \+ 1/2\)/\(Γ\(1/2\*p0\)·\(884279719003555/281474976710656\)\^\(1/2\)·\(p0\)\^\(1/2\)\), wrong once 1/2\*p0 \+ 1/2 ≥ 171\.624377 or 1/2\*p0 ≥ 171\.624377`
+func StudentNorm(nu int) float64 { // want StudentNorm:`value Γ\(1/2\*p0 \+ 1/2\)/\(Γ\(1/2\*p0\)·\(884279719003555/281474976710656\)\^\(1/2\)·\(p0\)\^\(1/2\)\), wrong once 1/2\*p0 \+ 1/2 ≥ 171\.624377 or 1/2\*p0 ≥ 171\.624377` StudentNorm:`wrong for nu ≥ 342\.248754`
 	v := float64(nu)
 	return math.Gamma((v+1)/2) / (math.Sqrt(v*math.Pi) * math.Gamma(v/2)) // want `ratio of math.Gamma values in float64: math.Gamma\(\(v \+ 1\) / 2\) is \+Inf for nu ≥ 343 .* although the result itself is finite; nu is not bounded here`
 }
@@ -50,7 +50,7 @@ func StudentNormTable(nu int) float64 {
 
 // Partition returns V^N/N! for N indistinguishable particles in a box of
 // volume V (in units of the thermal volume).
-func Partition(V float64, N int) float64 { // want Partition:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+func Partition(V float64, N int) float64 { // want Partition:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171` Partition:`wrong for N ≥ 171`
 	return math.Pow(V, float64(N)) / mathkit.FactorialFloat(N) // want `power-over-factorial term V\^N/N! in float64: the divisor N! overflows`
 }
 
@@ -94,7 +94,7 @@ func SpeedRatio(n int) float64 {
 }
 
 // Occupancy is n!/k! written with Gamma.
-func Occupancy(n, k int) float64 { // want Occupancy:`value Γ\(p0 \+ 1\)/Γ\(p1 \+ 1\), wrong once p0 \+ 1 ≥ 171\.624377`
+func Occupancy(n, k int) float64 { // want Occupancy:`value Γ\(p0 \+ 1\)/Γ\(p1 \+ 1\), wrong once p0 \+ 1 ≥ 171\.624377` Occupancy:`wrong for n ≥ 170\.624377 or k ≥ 170\.624377`
 	return math.Gamma(float64(n+1)) / math.Gamma(float64(k+1)) // want `ratio of math.Gamma values in float64: math.Gamma\(float64\(n \+ 1\)\) is \+Inf for n ≥ 171`
 }
 
@@ -129,7 +129,7 @@ func Arrangements(n, k int) float64 { // want Arrangements:`binomial of paramete
 }
 
 // Reports uses the int64 wrapper from another package.
-func Reports(n int) float64 { // want Reports:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
+func Reports(n int) float64 { // want Reports:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21` Reports:`wrong for n ≥ 21`
 	return float64(mathkit.Factorial64(n)) // want `n! is computed in int64, which wraps for n ≥ 21`
 }
 

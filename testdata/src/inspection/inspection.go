@@ -11,13 +11,13 @@ import (
 
 // Defective is the chance of exactly k defective items among n drawn
 // when each is defective with probability p.
-func Defective(k, n int, p float64) float64 { // want Defective:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1 ≥ 171`
+func Defective(k, n int, p float64) float64 { // want Defective:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1 ≥ 171` Defective:`wrong for n ≥ 171`
 	return probkit.Choose(float64(n), float64(k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `Defective computes C\(n, k\)·p\^k·\(1−p\)\^\(-k \+ n\) in float64, which fits where probkit.Choose\(float64\(n\), float64\(k\)\) already is \+Inf or NaN from n = 171 \(its Fact\(n\) breaks first\); n is not bounded here`
 }
 
 // LotDraw is the chance that a sample of n items from a lot of size
 // total with bad defective items shows exactly k of them.
-func LotDraw(k, total, bad, n int) float64 { // want LotDraw:`value Γ\(p2 \+ 1\)·Γ\(p1 - p2 \+ 1\)·Γ\(p3 \+ 1\)·Γ\(p1 - p3 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p2 \+ 1\)·Γ\(-p0 \+ p3 \+ 1\)·Γ\(p0 \+ p1 - p2 - p3 \+ 1\)·Γ\(p1 \+ 1\)\), wrong once p2 ≥ 171`
+func LotDraw(k, total, bad, n int) float64 { // want LotDraw:`value Γ\(p2 \+ 1\)·Γ\(p1 - p2 \+ 1\)·Γ\(p3 \+ 1\)·Γ\(p1 - p3 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p2 \+ 1\)·Γ\(-p0 \+ p3 \+ 1\)·Γ\(p0 \+ p1 - p2 - p3 \+ 1\)·Γ\(p1 \+ 1\)\), wrong once p2 ≥ 171` LotDraw:`wrong for total ≥ 171 or n ≥ 171`
 	hit := probkit.Choose(float64(bad), float64(k))
 	miss := probkit.Choose(float64(total-bad), float64(n-k))
 	return hit * miss / probkit.Choose(float64(total), float64(n)) // want `LotDraw computes C\(bad, k\)·C\(.*\)/C\(total, n\) in float64, which fits where probkit.Choose\(float64\(bad\), float64\(k\)\) already is \+Inf or NaN from bad = 171`
@@ -66,16 +66,18 @@ func PanelDefective(k, n int, p float64) float64 {
 	return probkit.SmallChoose(float64(n), float64(k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
 }
 
-// ChanceOf passes Defective's value on: Defective is the one to fix.
-func ChanceOf(k, n int, p float64) float64 { // want ChanceOf:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1 ≥ 171`
-	return Defective(k, n, p)
+// ChanceOf passes Defective's value on, wrong where Defective's is: it
+// is reported as Defective's caller, and Defective's fix makes it right.
+func ChanceOf(k, n int, p float64) float64 { // want ChanceOf:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1 ≥ 171` ChanceOf:`wrong for n ≥ 171`
+	return Defective(k, n, p) // want `ChanceOf returns Defective\(k, n, p\)'s value, which is wrong from n = 171 \(reported at inspection/inspection\.go:15\); n is not bounded here`
 }
 
-// Cumulative sums Defective's terms: the terms are Defective's.
-func Cumulative(k, n int, p float64) float64 {
+// Cumulative sums Defective's terms: NaN where one of them is, reported
+// as Defective's caller.
+func Cumulative(k, n int, p float64) float64 { // want Cumulative:`wrong for n ≥ 171`
 	sum := 0.0
 	for i := 0; i <= k; i++ {
-		sum += Defective(i, n, p)
+		sum += Defective(i, n, p) // want `Cumulative builds its result from Defective\(i, n, p\), which is wrong from n = 171 \(reported at inspection/inspection\.go:15\); n is not bounded here`
 	}
 	return sum
 }
@@ -100,7 +102,7 @@ func logDefective(k, n int, p float64) float64 {
 // DefectiveAt takes the count of defects as a reading that the desk
 // rounds down: k is defined once, from a value the model does not know,
 // and read as a variable of its own.
-func DefectiveAt(reading float64, n int, p float64) float64 {
+func DefectiveAt(reading float64, n int, p float64) float64 { // want DefectiveAt:`wrong for some n`
 	k := int(math.Floor(reading))
 	return probkit.Choose(float64(n), float64(k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `DefectiveAt computes C\(n, k\)·p\^k·\(1−p\)\^\(n - k\) in float64, which fits where probkit.Choose\(float64\(n\), float64\(k\)\) already is \+Inf or NaN from n = 171`
 }

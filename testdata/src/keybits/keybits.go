@@ -35,7 +35,7 @@ func ShiftBits(shifted, plain float64) float64 {
 // SwipeBits is the number of bits of a swipe pattern of up to length
 // keys with up to turns turns on a pad of starts keys whose keys have
 // degree neighbours on average.
-func SwipeBits(length, turns int, starts, degree float64) float64 {
+func SwipeBits(length, turns int, starts, degree float64) float64 { // want SwipeBits:`wrong for some length or some turns`
 	count := 0.0
 	for i := 2; i <= length; i++ {
 		most := min(turns, i-1)
@@ -99,7 +99,7 @@ func ShiftCount(shifted, plain float64) float64 {
 
 // PadGuesses is the number of guesses for a swipe of length keys with
 // up to turns turns, times the ways to shift up to shifted of its keys.
-func PadGuesses(length, turns, shifted int, starts float64) float64 {
+func PadGuesses(length, turns, shifted int, starts float64) float64 { // want PadGuesses:`wrong for some length or some turns or some shifted`
 	guesses := 0.0
 	for i := 2; i <= length; i++ {
 		for j := 1; j <= min(turns, i-1); j++ {

@@ -3,7 +3,7 @@ package linkbudget
 import "math"
 
 // BlockErrorProb is the chance that a block of n bits has more than t bit errors.
-func BlockErrorProb(n, t int, p float64) float64 {
+func BlockErrorProb(n, t int, p float64) float64 { // want BlockErrorProb:`wrong for n ≥ 171`
 	ok := 0.0
 	for k := 0; k <= t; k++ {
 		ok += choose(n, k) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n`
@@ -23,7 +23,7 @@ type Burst struct {
 }
 
 // ProbAtMost is the chance of at most k bursts in one window.
-func (b Burst) ProbAtMost(k int) float64 {
+func (b Burst) ProbAtMost(k int) float64 { // want ProbAtMost:`wrong for some k`
 	lam := b.Rate * b.Window
 	s := 0.0
 	for i := 0; i <= k; i++ {

@@ -10,7 +10,7 @@ import (
 var ErrRange = errors.New("mathkit: argument out of range")
 
 // Factorial returns n! in int64.
-func Factorial(n int) int64 { // want Factorial:`factorial of parameter 0, breaks from 21`
+func Factorial(n int) int64 { // want Factorial:`factorial of parameter 0, breaks from 21` Factorial:`wrong for some n`
 	f := int64(1)
 	for i := 2; i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2.43e18 is the largest that fits\); n is not bounded here`
 		f *= int64(i)

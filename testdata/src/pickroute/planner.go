@@ -10,7 +10,7 @@ type Planner struct {
 }
 
 // RouteCount is the number of distinct orders in which the picks can be visited.
-func (p *Planner) RouteCount() uint64 {
+func (p *Planner) RouteCount() uint64 { // want RouteCount:`wrong for some p`
 	r := uint64(1)
 	for n := uint64(p.Picks); n > 1; n-- { // want `factorial of uint64\(p\.Picks\) in uint64 wraps for uint64\(p\.Picks\) ≥ 21`
 		r *= n
@@ -19,7 +19,7 @@ func (p *Planner) RouteCount() uint64 {
 }
 
 // AisleChoices counts the ways to pick which aisles get visited.
-func (p *Planner) AisleChoices() int64 {
+func (p *Planner) AisleChoices() int64 { // want AisleChoices:`wrong for some p`
 	n := int64(p.Aisles)
 	r := int64(1)
 	for i := int64(0); i < int64(p.Picks); i++ { // want `multiplicative binomial loop in int64: the product r \* \(n - i\) wraps b`
@@ -34,7 +34,7 @@ func catalanPaths(n int) uint64 {
 }
 
 // Derangements counts re-slottings where no item keeps its bin.
-func (p *Planner) Derangements(n int) int64 {
+func (p *Planner) Derangements(n int) int64 { // want Derangements:`wrong for some p or some n`
 	if p.cache == nil {
 		p.cache = map[int]int64{0: 1, 1: 0}
 	}

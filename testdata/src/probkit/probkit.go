@@ -17,7 +17,7 @@ func Fact(n float64) float64 { // want Fact:`factorial of parameter 0, breaks fr
 }
 
 // Choose returns C(n, k), the number of ways to draw k of n items.
-func Choose(n, k float64) float64 { // want Choose:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171`
+func Choose(n, k float64) float64 { // want Choose:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171` Choose:`wrong for n ≥ 171`
 	return Fact(n) / (Fact(k) * Fact(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
 }
 

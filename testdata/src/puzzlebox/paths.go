@@ -3,7 +3,7 @@ package puzzlebox
 import "math/big"
 
 // LatticePaths counts monotone paths across a w×h grid.
-func LatticePaths(w, h int) int64 { // want LatticePaths:`binomial of parameter 1,`
+func LatticePaths(w, h int) int64 { // want LatticePaths:`binomial of parameter 1,` LatticePaths:`wrong for some w or some h`
 	r := int64(1)
 	for i := 0; i < w; i++ { // want `multiplicative binomial loop in int64: the product`
 		r = r * int64(w+h-i) / int64(i+1)
@@ -86,7 +86,7 @@ func derangements(n int) int64 {
 }
 
 // DerangementProb is the chance that a shuffle of n hats returns none to its owner.
-func DerangementProb(n int) float64 {
+func DerangementProb(n int) float64 { // want DerangementProb:`wrong for some n`
 	f := 1.0
 	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to`
 		f *= float64(i)

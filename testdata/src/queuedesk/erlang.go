@@ -4,7 +4,7 @@ import "math"
 
 // ErlangC is the probability that a call waits, with agents agents and
 // traffic erlangs offered.
-func ErlangC(agents int, traffic float64) float64 {
+func ErlangC(agents int, traffic float64) float64 { // want ErlangC:`wrong for some agents`
 	n := float64(agents)
 	top := math.Pow(traffic, n) / factorial(agents) * n / (n - traffic) // want `term with traffic\^n over agents! in float64:`
 	sum := 0.0
@@ -28,7 +28,7 @@ func ErlangCStable(agents int, traffic float64) float64 {
 }
 
 // MMcWaitingTime is the mean wait in queue of an M/M/c system.
-func MMcWaitingTime(c int, lambda, mu float64) float64 {
+func MMcWaitingTime(c int, lambda, mu float64) float64 { // want MMcWaitingTime:`wrong for some c`
 	a := lambda / mu
 	rho := a / float64(c)
 	if rho >= 1 {
@@ -51,7 +51,7 @@ type TrunkGroup struct {
 }
 
 // Blocking is the Erlang B loss probability.
-func (g *TrunkGroup) Blocking() float64 {
+func (g *TrunkGroup) Blocking() float64 { // want Blocking:`wrong for some g`
 	den := 0.0
 	for i := 0; i <= g.Lines; i++ {
 		den += math.Pow(g.Offered, float64(i)) / math.Gamma(float64(i+1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(i \+ 1\)\) is \+Inf` `series term math\.Pow\(g\.Offered, float64\(i\)\) / math\.Gamma\(float64\(i\+1\)\) computes`

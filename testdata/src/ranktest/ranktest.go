@@ -18,7 +18,7 @@ type Tray struct {
 }
 
 // Sprouts is the probability that exactly k seeds of the tray sprout.
-func (t Tray) Sprouts(k float64) float64 {
+func (t Tray) Sprouts(k float64) float64 { // want Sprouts:`wrong for some t`
 	ki := int(math.Floor(k))
 	if ki < 0 || ki > t.Seeds {
 		return 0
@@ -27,7 +27,7 @@ func (t Tray) Sprouts(k float64) float64 {
 }
 
 // Germinated is the chance that k of n seeds sprout at the given rate.
-func Germinated(k, n int, rate float64) float64 {
+func Germinated(k, n int, rate float64) float64 { // want Germinated:`wrong for some k or some n`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -36,7 +36,7 @@ func Germinated(k, n int, rate float64) float64 {
 
 // SproutsFromLog takes the coefficient out of log space on its own
 // before the powers scale it down.
-func SproutsFromLog(n, k int, rate float64) float64 {
+func SproutsFromLog(n, k int, rate float64) float64 { // want SproutsFromLog:`wrong for some n or some k`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -64,7 +64,7 @@ func SmallTray(n, k int, rate float64) float64 {
 
 // TiedShare is the share of the orderings of two lots of n1 and n2
 // seeds whose rank sum is at most the one observed, given their count.
-func TiedShare(count float64, n1, n2 int) float64 {
+func TiedShare(count float64, n1, n2 int) float64 { // want TiedShare:`wrong for some n1 or some n2`
 	return count / tallykit.Choose(n1+n2, n1) // want `divides by C\(n1 \+ n2, n1\) formed on its own in float64: it overflows to \+Inf for n1 \+ n2 ≥ 1030 at n1 = \(n1 \+ n2\)/2 .*after which the quotient is 0, or NaN where count overflowed too`
 }
 
@@ -72,7 +72,7 @@ func TiedShare(count float64, n1, n2 int) float64 {
 // lot among the first n1 ranks, a sum of products of binomials, and
 // divides the count by all of them: Inf/Inf once the lots pass C(1030,
 // 515), although the share is at most 1.
-func SplitShare(a, b, n1, u int) float64 {
+func SplitShare(a, b, n1, u int) float64 { // want SplitShare:`wrong for some a or some b or some n1 or some u`
 	count := 0.0
 	for r := 0; r <= u; r++ {
 		count += tallykit.Choose(a, n1-r) * tallykit.Choose(b, r)

@@ -5,7 +5,7 @@ package reliability
 import "math"
 
 // Choose returns C(n, k) with the multiplicative formula.
-func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks from 62`
+func Choose(n, k int64) int64 { // want Choose:`binomial of parameter 0, breaks from 62` Choose:`wrong for some n or some k`
 	b := int64(1)
 	for i := int64(1); i <= k; i++ { // want `multiplicative binomial loop in int64: the product b \* \(n - k \+ i\) wraps before the division for n ≥ 62 at k = n/2, although C\(n, n/2\) itself fits up to n = 66; n is not bounded here`
 		b = b * (n - k + i) / i
@@ -25,7 +25,7 @@ func chooseSteps(n, k int) int { // want chooseSteps:`binomial of parameter 0, b
 
 // Availability is the probability that at least k of n pumps work, each
 // with probability p.
-func Availability(n, k int, p float64) float64 {
+func Availability(n, k int, p float64) float64 { // want Availability:`wrong for n ≥ 62`
 	sum := 0.0
 	for i := k; i <= n; i++ {
 		sum += float64(chooseSteps(n, i)) * math.Pow(p, float64(i)) * math.Pow(1-p, float64(n-i)) // want `binomial probability C\(n, i\)·p\^i·\(1−p\)\^\(n−i\) in int: chooseSteps\(n, …\) breaks for n ≥ 62 although the probability itself is at most 1; n is not bounded here`
@@ -56,7 +56,7 @@ func ChooseFloat(n, k int) float64 { // want ChooseFloat:`binomial of parameter 
 }
 
 // ChooseU counts pump subsets in uint64.
-func ChooseU(n, k uint64) uint64 { // want ChooseU:`binomial of parameter 0, breaks from 63`
+func ChooseU(n, k uint64) uint64 { // want ChooseU:`binomial of parameter 0, breaks from 63` ChooseU:`wrong for some n or some k`
 	b := uint64(1)
 	for i := uint64(0); i < k; i++ { // want `multiplicative binomial loop in uint64: the product b \* \(n - i\) wraps before the division for n ≥ 63`
 		b = b * (n - i) / (i + 1)

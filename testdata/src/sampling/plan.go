@@ -15,7 +15,7 @@ type Lot struct {
 
 // Chance is the probability of exactly k defects in the lot: the
 // coefficient leaves log space before the powers scale it down.
-func (l Lot) Chance(k float64) float64 {
+func (l Lot) Chance(k float64) float64 { // want Chance:`wrong for some l`
 	ki := int(math.Floor(k))
 	if ki < 0 || ki > l.Size {
 		return 0
@@ -37,7 +37,7 @@ func Orderings(n1, n2 int) float64 { // want Orderings:`value Γ\(p0 \+ p1 \+ 1\
 
 // RankShare is the share of orderings whose rank sum is at most u,
 // given the count of them.
-func RankShare(count float64, n1, n2 int) float64 {
+func RankShare(count float64, n1, n2 int) float64 { // want RankShare:`wrong for some n1 or some n2`
 	a, _ := math.Lgamma(float64(n1 + n2 + 1))
 	b, _ := math.Lgamma(float64(n1 + 1))
 	c, _ := math.Lgamma(float64(n2 + 1))

@@ -4,7 +4,7 @@ package seating
 
 // Arrangements is n!/(n-k)!, the ordered seatings of k of n guests,
 // multiplied up from the smallest factor n-k+1 to n.
-func Arrangements(n, k int) int {
+func Arrangements(n, k int) int { // want Arrangements:`wrong for some n or some k`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -16,7 +16,7 @@ func Arrangements(n, k int) int {
 }
 
 // Arrangements64 is Arrangements in int64, counting down from n.
-func Arrangements64(n, k int64) int64 {
+func Arrangements64(n, k int64) int64 { // want Arrangements64:`wrong for some n or some k`
 	p := int64(1)
 	for i := n; i > n-k; i-- { // want `falling factorial of k factors from n down in int64 wraps`
 		p *= i
@@ -26,7 +26,7 @@ func Arrangements64(n, k int64) int64 {
 
 // Prizes counts the ordered ways to hand k distinct prizes to n
 // guests, with the factor written one above the loop variable.
-func Prizes(n, k uint64) uint64 {
+func Prizes(n, k uint64) uint64 { // want Prizes:`wrong for some n or some k`
 	p := uint64(1)
 	for i := n - k; i < n; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
 		p *= i + 1
@@ -76,7 +76,7 @@ func Judges(n, k int) int {
 // loop runs from n-2 up to n. The first n past int64, 2097154, is the
 // smallest n with n(n-1)(n-2) > 2^63-1, found by bisection with exact
 // integers (Python's arbitrary-precision int).
-func Podium(n int) int {
+func Podium(n int) int { // want Podium:`wrong for some n`
 	p := 1
 	for i := n - 2; i <= n; i++ { // want `falling factorial of 3 factors in int wraps for a largest factor ≥ 2097154; n is not bounded here`
 		p *= i
@@ -94,7 +94,7 @@ func Podium(n int) int {
 
 // MirroredHalls counts the ordered seatings of n guests at the n empty
 // seats of a mirrored hall of 2n seats, (n+1)·…·(2n).
-func MirroredHalls(n int64) int64 {
+func MirroredHalls(n int64) int64 { // want MirroredHalls:`wrong for some n`
 	p := int64(1)
 	for k := n + 1; k < 2*n+1; k++ { // want `falling factorial of n factors down from 2\*n in int64 wraps for n ≥ 15; n is not bounded here`
 		p *= k
@@ -116,7 +116,7 @@ func MirroredHallsCapped(n int64) int64 {
 }
 
 // MirroredHallsOneTooMany allows one pair more than fits.
-func MirroredHallsOneTooMany(n int64) int64 {
+func MirroredHallsOneTooMany(n int64) int64 { // want MirroredHallsOneTooMany:`wrong for some n`
 	if n < 1 || n > 15 {
 		return 0
 	}
@@ -140,7 +140,7 @@ func GrandHall(n uint64) uint64 {
 }
 
 // GrandHallUnchecked is GrandHall without its guard.
-func GrandHallUnchecked(n uint64) uint64 {
+func GrandHallUnchecked(n uint64) uint64 { // want GrandHallUnchecked:`wrong for some n`
 	p := uint64(1)
 	for k := n + 1; k <= 3*n; k++ { // want `falling factorial of 2\*n factors down from 3\*n in uint64 wraps for n ≥ 9; n is not bounded here`
 		p *= k
@@ -150,7 +150,7 @@ func GrandHallUnchecked(n uint64) uint64 {
 
 // BanquetsPast counts the seatings once the five tables of honour are
 // filled: 6·7·…·n.
-func BanquetsPast(n int64) int64 {
+func BanquetsPast(n int64) int64 { // want BanquetsPast:`wrong for some n`
 	if n > 30 {
 		return 0
 	}
@@ -163,7 +163,7 @@ func BanquetsPast(n int64) int64 {
 
 // BanquetsBig is BanquetsPast for halls of 22 or more seats, where the
 // product can never fit.
-func BanquetsBig(n int64) int64 {
+func BanquetsBig(n int64) int64 { // want BanquetsBig:`wrong for some n`
 	if n < 22 || n > 40 {
 		return 0
 	}

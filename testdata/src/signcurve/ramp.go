@@ -24,7 +24,7 @@ func NewRamp(shade []float64) *Ramp {
 }
 
 // Level is the paint level at t along the banner, 0 ≤ t ≤ 1.
-func (r *Ramp) Level(t float64) float64 {
+func (r *Ramp) Level(t float64) float64 { // want Level:`wrong for some r`
 	n := len(r.weights) - 1
 	s := 0.0
 	for i := 0; i <= n; i++ {

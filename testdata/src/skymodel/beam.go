@@ -15,7 +15,7 @@ type Aperture struct {
 
 // BesselI is the modified Bessel function I_n(x) by its power series,
 // with (x/2)^(n+2k), k! and (n+k)! each kept in a running product.
-func BesselI(n int, x float64) float64 {
+func BesselI(n int, x float64) float64 { // want BesselI:`wrong for some n`
 	if n < 0 {
 		return 0
 	}
@@ -38,7 +38,7 @@ func BesselI(n int, x float64) float64 {
 
 // Taper is the beam taper of a dish: J_n by its alternating series,
 // stopped when a term no longer changes the sum or after 100 terms.
-func (a Aperture) Taper() float64 {
+func (a Aperture) Taper() float64 { // want Taper:`wrong for some a`
 	x1 := math.Pow(a.Scale/2, float64(a.Order))
 	x2 := a.Scale * a.Scale / 4
 	n1, n2, n3, n4 := 1.0, 1.0, 0.0, float64(a.Order)

@@ -5,7 +5,7 @@ import "math"
 // AcceptProb is the chance that a lot of size lot holding defectives bad
 // items passes a single sampling plan: a sample of size sample with at
 // most accept bad items in it.
-func AcceptProb(lot, defectives, sample, accept int) float64 {
+func AcceptProb(lot, defectives, sample, accept int) float64 { // want AcceptProb:`wrong for some lot or some defectives or some sample or some accept`
 	total := float64(chooseU(uint64(lot), uint64(sample)))
 	p := 0.0
 	for x := 0; x <= accept && x <= defectives; x++ {
@@ -23,7 +23,7 @@ type SinglePlan struct {
 }
 
 // OC is the operating characteristic at fraction defective q.
-func (s SinglePlan) OC(q float64) float64 {
+func (s SinglePlan) OC(q float64) float64 { // want OC:`wrong for some s`
 	n := s.SampleSize
 	pa := 0.0
 	for i := 0; i <= s.AcceptNum; i++ {
@@ -43,10 +43,10 @@ type DoublePlan struct {
 
 // AcceptProb is the Poisson approximation of the first-sample acceptance
 // at a mean m of defects per sample.
-func (d DoublePlan) AcceptProb(m float64) float64 {
+func (d DoublePlan) AcceptProb(m float64) float64 { // want AcceptProb:`wrong for some d`
 	p := 0.0
 	for k := d.AcceptFirst; k >= 0; k-- {
-		p += poissonTerm(k, m)
+		p += poissonTerm(k, m) // want `AcceptProb builds its result from poissonTerm\(k, m\), which is wrong from k = 21 \(reported at sparecheck/sampling\.go:36\); k is not bounded here`
 	}
 	return p
 }

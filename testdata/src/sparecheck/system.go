@@ -4,7 +4,7 @@ import "math"
 
 // KOutOfN is the reliability of a system that works while at least k of
 // its n identical units work, each with reliability p.
-func KOutOfN(k, n int, p float64) float64 {
+func KOutOfN(k, n int, p float64) float64 { // want KOutOfN:`wrong for some k or some n`
 	r := 0.0
 	for i := k; i <= n; i++ {
 		c := floatFact(n) / (floatFact(i) * floatFact(n-i))            // want `KOutOfN computes C\(n, i\) in float64, which`
@@ -53,7 +53,7 @@ func MeanTimeToFailure(k, n int, lambda float64) float64 {
 
 // StandbyReliability is the reliability at time t of one active unit
 // with n cold spares, each failing at rate lambda.
-func StandbyReliability(n int, lambda, t float64) float64 {
+func StandbyReliability(n int, lambda, t float64) float64 { // want StandbyReliability:`wrong for some n`
 	lt := lambda * t
 	term, sum := 1.0, 1.0
 	for i := 1; i <= n; i++ {

@@ -18,7 +18,7 @@ func fact64(n int64) int64 { // want fact64:`factorial of parameter 0,`
 }
 
 // BoseEinsteinStates counts the ways to put particles bosons in g states.
-func BoseEinsteinStates(particles int64, g Level) int64 { // want BoseEinsteinStates:`value Γ\(p0 \+ p1\)/\(Γ\(p0`
+func BoseEinsteinStates(particles int64, g Level) int64 { // want BoseEinsteinStates:`value Γ\(p0 \+ p1\)/\(Γ\(p0` BoseEinsteinStates:`wrong for some particles or some g`
 	return fact64(particles+int64(g)-1) / (fact64(particles) * fact64(int64(g)-1)) // want `binomial coefficient as a ratio of factorials`
 }
 

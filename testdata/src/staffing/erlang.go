@@ -10,7 +10,7 @@ import (
 
 // ErlangC returns the probability that a caller waits, for offered
 // traffic a (in Erlangs) and c agents.
-func ErlangC(a float64, c int) float64 {
+func ErlangC(a float64, c int) float64 { // want ErlangC:`wrong for some c`
 	sum := 0.0
 	for k := 0; k < c; k++ {
 		sum += math.Pow(a, float64(k)) / mathkit.FactorialFloat(k) // want `power-over-factorial term a\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
@@ -32,7 +32,7 @@ func ErlangCSmallDesk(a float64) float64 {
 // ErlangB returns the blocking probability for traffic a on c lines.
 //
 //overfact:assume c <= 150
-func ErlangB(a float64, c int) float64 {
+func ErlangB(a float64, c int) float64 { // want ErlangB:`wrong for some c`
 	num := math.Pow(a, float64(c)) / mathkit.FactorialFloat(c)
 	den := 0.0
 	for k := 0; k <= c; k++ {
@@ -43,12 +43,12 @@ func ErlangB(a float64, c int) float64 {
 
 // Arrivals returns the probability of exactly k calls in an interval in
 // which lambda calls arrive on average.
-func Arrivals(lambda float64, k int) float64 { // want Arrivals:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+func Arrivals(lambda float64, k int) float64 { // want Arrivals:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171` Arrivals:`wrong for k ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / mathkit.FactorialFloat(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }
 
 // ArrivalsInt divides by an int64 factorial, which wraps much sooner.
-func ArrivalsInt(lambda float64, k int) float64 { // want ArrivalsInt:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 21`
+func ArrivalsInt(lambda float64, k int) float64 { // want ArrivalsInt:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 21` ArrivalsInt:`wrong for k ≥ 21`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(mathkit.Factorial(k)) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in int64: the divisor k! wraps for k ≥ 21`
 }
 
@@ -72,7 +72,7 @@ func Doubling(k int) float64 {
 }
 
 // Backlog is the same term with a cap far past both limits.
-func Backlog(k int) float64 { // want Backlog:`value \(2\)\^\(p0\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
+func Backlog(k int) float64 { // want Backlog:`value \(2\)\^\(p0\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171` Backlog:`wrong for k ≥ 171`
 	if k < 0 || k > 1100 {
 		return 0
 	}
@@ -81,7 +81,7 @@ func Backlog(k int) float64 { // want Backlog:`value \(2\)\^\(p0\)/Γ\(p0 \+ 1\)
 
 // Surge is the Poisson chance of k calls, with the power formed by a
 // loop.
-func Surge(lambda float64, k int) float64 { // want Surge:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+func Surge(lambda float64, k int) float64 { // want Surge:`value \(p0\)\^\(p1\)·exp\(-p0\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171` Surge:`wrong for k ≥ 171`
 	p := 1.0
 	for i := 0; i < k; i++ {
 		p *= lambda
@@ -102,7 +102,7 @@ func SurgeCapped(lambda float64, k int) float64 {
 // ErlangCIncremental builds each term from the last, term *= a/k: no
 // factorial is ever formed, but past a ≈ 709.78 the sum of a^k/k! is
 // +Inf, and so is last, while their ratio is a probability.
-func ErlangCIncremental(a float64, c int) float64 {
+func ErlangCIncremental(a float64, c int) float64 { // want ErlangCIncremental:`wrong for some c`
 	term, sum := 1.0, 1.0
 	for k := 1; k < c; k++ {
 		term *= a / float64(k)

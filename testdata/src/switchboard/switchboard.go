@@ -21,7 +21,7 @@ func lineFact(n int) float64 { // want lineFact:`factorial of parameter 0, break
 
 // BusyShare is the share of calls that find all lines busy (Erlang's
 // loss formula): load^lines/lines! over the sum of load^i/i!.
-func BusyShare(load float64, lines int) float64 {
+func BusyShare(load float64, lines int) float64 { // want BusyShare:`wrong for some lines`
 	top := math.Pow(load, float64(lines)) / lineFact(lines) // want `power-over-factorial term load\^lines/lines! in float64: the divisor lines! overflows to \+Inf for lines ≥ 171 .*lines is not bounded here`
 	sum := 0.0
 	for i := 0; i <= lines; i++ {
@@ -47,7 +47,7 @@ func operatorFact(n int) float64 { // want operatorFact:`factorial of parameter 
 
 // WaitChance is the chance that a guest waits for one of operators
 // operators (Erlang's delay formula), for a load below operators.
-func WaitChance(load float64, operators int) float64 {
+func WaitChance(load float64, operators int) float64 { // want WaitChance:`wrong for some operators`
 	c := float64(operators)
 	if load >= c {
 		return 1
@@ -64,7 +64,7 @@ func WaitChance(load float64, operators int) float64 {
 var ringOrders = []int{1}
 
 // RingOrders is the number of orders in which n rooms can be rung, n!.
-func RingOrders(n int) int { // want RingOrders:`factorial of parameter 0, breaks from 21`
+func RingOrders(n int) int { // want RingOrders:`factorial of parameter 0, breaks from 21` RingOrders:`wrong for n ≥ 21`
 	if n < len(ringOrders) {
 		return ringOrders[n]
 	}

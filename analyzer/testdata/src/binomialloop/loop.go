@@ -5,7 +5,7 @@ package binomialloop
 
 // Ways refuses a negative k first, so the rewrite needs no condition of
 // its own.
-func Ways(n, k int) int { // want Ways:`binomial of parameter 0`
+func Ways(n, k int) int { // want Ways:`binomial of parameter 0` Ways:`wrong for some n or some k`
 	if k < 0 {
 		return 0
 	}
@@ -29,7 +29,7 @@ func Small(n, k int) int { // want Small:`binomial of parameter 0, safe for`
 }
 
 // WaysU counts in unsigned arithmetic, which needs no test of k.
-func WaysU(n, k uint64) uint64 { // want WaysU:`binomial of parameter 0`
+func WaysU(n, k uint64) uint64 { // want WaysU:`binomial of parameter 0` WaysU:`wrong for some n or some k`
 	b := uint64(1)
 	for i := uint64(1); i <= k; i++ { // want `multiplicative binomial loop in uint64`
 		b = b * (n - k + i) / i

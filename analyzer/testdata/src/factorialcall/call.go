@@ -23,7 +23,7 @@ func Hand() int64 {
 }
 
 // Past asks for n! with n at least 30: definite.
-func Past(n int64) int64 { // want Past:`factorial of parameter 0, breaks from 21`
+func Past(n int64) int64 { // want Past:`factorial of parameter 0, breaks from 21` Past:`wrong for n ≥ 21`
 	if n < 30 {
 		return 0
 	}

@@ -5,7 +5,7 @@
 package factorialloop
 
 // Fact has no bound on n: possible, fixed by a range guard.
-func Fact(n int64) int64 { // want Fact:`factorial of parameter 0, breaks from 21`
+func Fact(n int64) int64 { // want Fact:`factorial of parameter 0, breaks from 21` Fact:`wrong for some n`
 	r := int64(1)
 	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21 \(20! ≈ 2.43e18 is the largest that fits\); n is not bounded here`
 		r *= i
@@ -101,7 +101,7 @@ func NamedFloat(n int) Real { // want NamedFloat:`factorial of parameter 0, brea
 // FloatRatio divides by its float product in the same function: the
 // product is +Inf from 171 while x^n/n! is finite, so the loop is
 // reported.
-func FloatRatio(x float64, n int) float64 {
+func FloatRatio(x float64, n int) float64 { // want FloatRatio:`wrong for some n`
 	f := 1.0
 	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
 		f *= float64(i)
@@ -115,7 +115,7 @@ func FloatRatio(x float64, n int) float64 {
 
 // FloatBinom divides two results of the silent FloatLoop: the caller's
 // ratio is reported, n! is +Inf from 171 although C(n, k) fits.
-func FloatBinom(n, k float64) float64 { // want FloatBinom:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171`
+func FloatBinom(n, k float64) float64 { // want FloatBinom:`value Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171` FloatBinom:`wrong for n ≥ 171`
 	return FloatLoop(n) / (FloatLoop(k) * FloatLoop(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171`
 }
 
@@ -131,7 +131,7 @@ func FloatToCount(n int) (float64, int64) { // want FloatToCount:`factorial of p
 
 // Tripled returns three times its product: 3·20! still fits uint64,
 // 21! alone does not, so a guard before the loop is exact.
-func Tripled(n uint64) uint64 {
+func Tripled(n uint64) uint64 { // want Tripled:`wrong for some n`
 	r := uint64(1)
 	for i := uint64(1); i <= n; i++ { // want `factorial of n in uint64 wraps for n ≥ 21`
 		r *= i
@@ -140,7 +140,7 @@ func Tripled(n uint64) uint64 {
 }
 
 // Share divides by its product instead of returning it: no guard.
-func Share(n int64) int64 {
+func Share(n int64) int64 { // want Share:`wrong for some n`
 	r := int64(1)
 	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
 		r *= i
@@ -151,7 +151,7 @@ func Share(n int64) int64 {
 // Staged multiplies in its product only for an even count: the guard
 // goes before the loop, where the count is known to be even, and an odd
 // count keeps its answer 1.
-func Staged(n int) int { // want Staged:`factorial of parameter 0, breaks from 21`
+func Staged(n int) int { // want Staged:`factorial of parameter 0, breaks from 21` Staged:`wrong for some n`
 	r := 1
 	if n%2 == 0 {
 		for i := 2; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21`
@@ -163,7 +163,7 @@ func Staged(n int) int { // want Staged:`factorial of parameter 0, breaks from 2
 
 // Rounds runs its loop once per round: a guard before the loop would
 // test the argument on every round, and none is offered.
-func Rounds(n, rounds int64) int64 { // want Rounds:`factorial of parameter 0, breaks from 21`
+func Rounds(n, rounds int64) int64 { // want Rounds:`factorial of parameter 0, breaks from 21` Rounds:`wrong for some n`
 	var r int64
 	for j := int64(0); j < rounds; j++ {
 		r = 1
@@ -177,7 +177,7 @@ func Rounds(n, rounds int64) int64 { // want Rounds:`factorial of parameter 0, b
 // LastDigits returns n!, or on request its last three digits, which fit
 // whatever n is: a guard would make that call panic, so none is offered
 // although the function returns its product elsewhere.
-func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of parameter 0, breaks from 21`
+func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of parameter 0, breaks from 21` LastDigits:`wrong for some n`
 	r := int64(1)
 	for i := int64(2); i <= n; i++ { // want `factorial of n in int64 wraps for n ≥ 21`
 		r *= i
@@ -191,7 +191,7 @@ func LastDigits(n int64, short bool) int64 { // want LastDigits:`factorial of pa
 // CountDown counts its parameter down in the loop's post statement, with
 // no init statement: the loop still starts from the argument, which a
 // guard at the entry tests.
-func CountDown(n int64) int64 { // want CountDown:`factorial of parameter 0, breaks from 21`
+func CountDown(n int64) int64 { // want CountDown:`factorial of parameter 0, breaks from 21` CountDown:`wrong for some n`
 	f := int64(1)
 	for ; n > 1; n-- { // want `factorial of n in int64 wraps for n ≥ 21`
 		f *= n
@@ -231,7 +231,7 @@ func LooseTable(apply func(func(int64) int64)) {
 
 // Span multiplies the integers from lo to hi, ends of their own: with lo
 // at 1 it is hi!, possible.
-func Span(lo, hi int64) int64 {
+func Span(lo, hi int64) int64 { // want Span:`wrong for some lo or some hi`
 	p := int64(1)
 	for v := lo; v <= hi; v++ { // want `product of the factors from lo up to hi in int64 wraps: with lo at 1 or 2 it is hi!, which wraps for hi ≥ 21; hi is not bounded here`
 		p *= v

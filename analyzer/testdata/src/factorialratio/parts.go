@@ -38,12 +38,14 @@ func TrayShares(sizes []int) int64 {
 }
 
 // FloatShares keeps the product in float64, whose +Inf past the type is
-// IEEE's answer: silent.
+// IEEE's answer, but converts lotChoose's int64 count, which wraps
+// inside its loop before C(n, k) leaves int64: reported as lotChoose's
+// caller (wrong-callee), with no category of its own here.
 func FloatShares(lots []int64) float64 {
 	ways, total := 1.0, int64(0)
 	for _, l := range lots {
 		total += l
-		ways *= float64(lotChoose(total, l))
+		ways *= float64(lotChoose(total, l)) // want `FloatShares builds its result from lotChoose\(total, l\), which is wrong for some values of n \(reported at factorialratio/parts\.go:12\); total, passed as n, is not bounded here`
 	}
 	return ways
 }
@@ -85,13 +87,14 @@ func FewShares(lots [4]int64) int64 {
 // rest in another, a trinomial n!/(k!·j!·(n−k−j)!). The input the
 // message names is checked against a math/big scan by
 // TestChooseProductWitness (analyzer/thresholds).
-func Splits(n, k, j int64) int64 {
+func Splits(n, k, j int64) int64 { // want Splits:`wrong for some n or some k or some j`
 	return lotChoose(n, k) * lotChoose(n-k, j) // want `product of binomial coefficients lotChoose\(n, k\) \* lotChoose\(n-k, j\) in int64 wraps where it leaves int64 while every factor fits: first at n = \d+, k = \d+, j = \d+ by the largest argument, where lotChoose\(n, k\) ≈ \S+ and lotChoose\(n-k, j\) ≈ \S+ fit and the product ≈ \S+ does not`
 }
 
-// FloatSplits multiplies in float64: silent.
-func FloatSplits(n, k, j int64) float64 {
-	return float64(lotChoose(n, k)) * float64(lotChoose(n-k, j))
+// FloatSplits multiplies in float64, where no product wraps; its
+// factors are lotChoose's counts, reported as lotChoose's caller.
+func FloatSplits(n, k, j int64) float64 { // want FloatSplits:`wrong for some n`
+	return float64(lotChoose(n, k)) * float64(lotChoose(n-k, j)) // want `FloatSplits builds its result from lotChoose\(n, k\), which is wrong for some values of n \(reported at factorialratio/parts\.go:12\)`
 }
 
 // SmallSplits sows at most 30 seeds, whose trinomials fit int64: silent.

@@ -18,7 +18,7 @@ func Rotas(n, k int) float64 { // want Rotas:`binomial of parameter 0`
 }
 
 // Orders is n!/(n-k)!.
-func Orders(n, k int) float64 { // want Orders:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 171 or p0 - p1 ≥ 171`
+func Orders(n, k int) float64 { // want Orders:`value Γ\(p0 \+ 1\)/Γ\(p0 - p1 \+ 1\), wrong once p0 ≥ 171 or p0 - p1 ≥ 171` Orders:`wrong for n ≥ 171`
 	return factF(n) / factF(n-k) // want `permutation count n!/\(n - k\)! as a ratio of factorials in float64`
 }
 

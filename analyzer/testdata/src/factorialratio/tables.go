@@ -20,7 +20,7 @@ func init() {
 
 // Sprouts is the chance that exactly k of n seeds sprout when each does
 // with chance p.
-func Sprouts(n, k int, p float64) float64 {
+func Sprouts(n, k int, p float64) float64 { // want Sprouts:`wrong for some n or some k`
 	ways := trayFact[n] / (trayFact[k] * trayFact[n-k])
 	return ways * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171 before the division; n is not bounded here`
 }
@@ -39,7 +39,7 @@ func SampleWays(n, k int) float64 { // want SampleWays:`binomial of parameter 0,
 // RowPlans is the number of orders in which the trays of a row can be
 // checked, n!/(n-k)! for the first k of them, from a table kept as the
 // running product goes.
-func RowPlans(n, k int) int64 {
+func RowPlans(n, k int) int64 { // want RowPlans:`wrong for some n`
 	orders := make([]int64, n+1)
 	orders[0] = 1
 	run := int64(1)
@@ -136,7 +136,7 @@ func CheckOrders(n int) []int64 {
 }
 
 // RackOrders grows its table by its own length, reading it after.
-func RackOrders(n, k int) uint64 {
+func RackOrders(n, k int) uint64 { // want RackOrders:`wrong for some n`
 	r := []uint64{1, 1}
 	for len(r) <= n { // want `loop fills the factorial table r with i! at index i up to n: the factorial of n in uint64 wraps for n ≥ 21`
 		r = append(r, r[len(r)-1]*uint64(len(r)))

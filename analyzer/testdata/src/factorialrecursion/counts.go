@@ -5,7 +5,7 @@ package factorialrecursion
 // Legs counts the orders of k runners picked from n for the relay's
 // legs: n!/(n−k)!, the falling factorial of k factors from n down.
 // Picks of 2 from 100 fit; when k reaches n it is n!.
-func Legs(n, k int) int { // want Legs:`falling-factorial of parameter 0, breaks from 21`
+func Legs(n, k int) int { // want Legs:`falling-factorial of parameter 0, breaks from 21` Legs:`wrong for some n or some k`
 	if k == 0 {
 		return 1
 	}
@@ -29,7 +29,7 @@ func podium(n, k int) int { // want podium:`falling-factorial of parameter 0, br
 }
 
 // Laps is n! with a modulus passed on unchanged: still n!.
-func Laps(n, m int64) int64 { // want Laps:`factorial of parameter 0, breaks from 21`
+func Laps(n, m int64) int64 { // want Laps:`factorial of parameter 0, breaks from 21` Laps:`wrong for n ≥ 21`
 	if n < 2 {
 		return 1
 	}
@@ -38,7 +38,7 @@ func Laps(n, m int64) int64 { // want Laps:`factorial of parameter 0, breaks fro
 
 // Crews is C(n, k) by the recursion C(n−1, k−1)·n/k: the product is
 // formed before the division, as in a multiplicative binomial loop.
-func Crews(n, k int64) int64 {
+func Crews(n, k int64) int64 { // want Crews:`wrong for some n or some k`
 	if k == 0 {
 		return 1
 	}

@@ -2,7 +2,7 @@ package factorialrecursion
 
 // Derangements counts the orders of n gifts in which nobody gets their
 // own, D(n) = (n−1)·(D(n−1) + D(n−2)) (OEIS A000166).
-func Derangements(n int) int64 {
+func Derangements(n int) int64 { // want Derangements:`wrong for some n`
 	if n < 2 {
 		return 1 - int64(n)
 	}
@@ -12,7 +12,7 @@ func Derangements(n int) int64 {
 var swaps = map[int]uint32{0: 1, 1: 0}
 
 // Swaps keeps the counts in a memo, the sum's calls the other way round.
-func Swaps(n int) uint32 {
+func Swaps(n int) uint32 { // want Swaps:`wrong for some n`
 	if v, ok := swaps[n]; ok {
 		return v
 	}
@@ -43,7 +43,7 @@ func Shuffles(n int) int64 {
 
 // Squads is the same recursion with both textbook base cases,
 // C(n, 0) = C(n, n) = 1: the product still wraps first.
-func Squads(n, k int) int {
+func Squads(n, k int) int { // want Squads:`wrong for some n or some k`
 	if k == 0 || k == n {
 		return 1
 	}

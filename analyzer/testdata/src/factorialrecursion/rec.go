@@ -4,7 +4,7 @@
 package factorialrecursion
 
 // Rec has no bound on n: possible, fixed by a range guard.
-func Rec(n int64) int64 { // want Rec:`factorial of parameter 0, breaks from 21`
+func Rec(n int64) int64 { // want Rec:`factorial of parameter 0, breaks from 21` Rec:`wrong for n ≥ 21`
 	if n < 2 {
 		return 1
 	}
@@ -12,7 +12,7 @@ func Rec(n int64) int64 { // want Rec:`factorial of parameter 0, breaks from 21`
 }
 
 // Rec32 breaks earlier, in int32.
-func Rec32(n int32) int32 { // want Rec32:`factorial of parameter 0, breaks from 13`
+func Rec32(n int32) int32 { // want Rec32:`factorial of parameter 0, breaks from 13` Rec32:`wrong for n ≥ 13`
 	if n < 2 {
 		return 1
 	}
@@ -86,7 +86,7 @@ func Thousandths(n int64) int64 {
 
 // Refusing returns 0 past 100: a guard at its start would fire where it
 // returned 0, so none is offered.
-func Refusing(n int64) int64 { // want Refusing:`factorial of parameter 0, breaks from 21`
+func Refusing(n int64) int64 { // want Refusing:`factorial of parameter 0, breaks from 21` Refusing:`wrong for n ≥ 21`
 	if n > 100 {
 		return 0
 	}
@@ -97,7 +97,7 @@ func Refusing(n int64) int64 { // want Refusing:`factorial of parameter 0, break
 }
 
 // Doubled is twice n!, with its base case first: the guard is exact.
-func Doubled(n int64) int64 { // want Doubled:`factorial of parameter 0, breaks from 21`
+func Doubled(n int64) int64 { // want Doubled:`factorial of parameter 0, breaks from 21` Doubled:`wrong for n ≥ 21`
 	if n <= 1 {
 		return 2
 	}

@@ -7,7 +7,7 @@ package gammaratio
 import "math"
 
 // Spread is Γ(a)/Γ(b) with nothing bounding a or b.
-func Spread(a, b float64) float64 { // want Spread:`value Γ\(p0\)/Γ\(p1\), wrong once p0 ≥ 171\.624377 or p1 ≥ 171\.624377`
+func Spread(a, b float64) float64 { // want Spread:`value Γ\(p0\)/Γ\(p1\), wrong once p0 ≥ 171\.624377 or p1 ≥ 171\.624377` Spread:`wrong for a ≥ 171\.624377 or b ≥ 171\.624377`
 	return math.Gamma(a) / math.Gamma(b) // want `ratio of math.Gamma`
 }
 

@@ -16,7 +16,7 @@ func count(n int64) int64 { // want count:`factorial of parameter 0`
 }
 
 // Odds converts too late: the int64 count has wrapped from 21 on.
-func Odds(n int64) float64 { // want Odds:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21`
+func Odds(n int64) float64 { // want Odds:`value Γ\(p0 \+ 1\), wrong once p0 ≥ 21` Odds:`wrong for n ≥ 21`
 	return float64(count(n)) // want `n! is computed in int64, which wraps for n ≥ 21, before the conversion to float64`
 }
 

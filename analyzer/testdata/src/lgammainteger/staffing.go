@@ -12,17 +12,17 @@ func lgamma(x float64) float64 {
 }
 
 // RotaOrders counts the orders n agents can take their breaks in.
-func RotaOrders(n int) int {
+func RotaOrders(n int) int { // want RotaOrders:`wrong for some n`
 	return int(math.Exp(lgamma(float64(n) + 1))) // want `reads the integer n! back .* the int result is wrong from n = 5 \(.* gives 119 where 5! is 120\)`
 }
 
 // Teams counts the teams of k agents a shift of n can field.
-func Teams(n, k int) int64 {
+func Teams(n, k int) int64 { // want Teams:`wrong for some n or some k`
 	return int64(math.Round(math.Exp(lgamma(float64(n)+1) - lgamma(float64(k)+1) - lgamma(float64(n-k)+1)))) // want `reads the integer C\(n, k\) back .* the int64 result is wrong from n = 48 \(at k = 25 it gives 30957699535775 where C\(48, 25\) is 30957699535776\)`
 }
 
 // DeskOrders is the number of desk orders as a float for the sheet.
-func DeskOrders(n int) float64 {
+func DeskOrders(n int) float64 { // want DeskOrders:`wrong for some n`
 	return math.Floor(math.Exp(lgamma(float64(n) + 1))) // want `the float64 result is wrong from n = 5`
 }
 

@@ -5,7 +5,7 @@
 package pascalrule
 
 // Ways is the plain recursion over int64.
-func Ways(n, k int) int64 {
+func Ways(n, k int) int64 { // want Ways:`wrong for some n or some k`
 	if k == 0 || k == n {
 		return 1
 	}
@@ -15,7 +15,7 @@ func Ways(n, k int) int64 {
 var seen = map[[2]int]int32{}
 
 // Memo caches the recursion's values, the k argument first.
-func Memo(k, n int) int32 {
+func Memo(k, n int) int32 { // want Memo:`wrong for some k or some n`
 	if k == 0 || k == n {
 		return 1
 	}
@@ -58,7 +58,7 @@ func Fib(n int) uint64 {
 
 // Paths counts lattice paths through a grid of r by c blocks, C(r+c, r),
 // a sum over two different parameters.
-func Paths(r, c int) int64 {
+func Paths(r, c int) int64 { // want Paths:`wrong for some r or some c`
 	if r == 0 || c == 0 {
 		return 1
 	}

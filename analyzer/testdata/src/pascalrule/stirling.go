@@ -6,7 +6,7 @@ package pascalrule
 // filled in the machine type by TestTriangleThresholds.
 
 // Partitions is S(n, k), the ways to split n items into k blocks.
-func Partitions(n, k int) int64 {
+func Partitions(n, k int) int64 { // want Partitions:`wrong for some n or some k`
 	if n == k {
 		return 1
 	}
@@ -22,7 +22,7 @@ type splitter struct {
 }
 
 // Blocks is the memoised method, the plain term first.
-func (s *splitter) Blocks(n, k int) int32 {
+func (s *splitter) Blocks(n, k int) int32 { // want Blocks:`wrong for some s or some n or some k`
 	if k == 0 || k > n {
 		return 0
 	}
@@ -38,7 +38,7 @@ func (s *splitter) Blocks(n, k int) int32 {
 }
 
 // Cycles counts permutations of n items with k cycles.
-func Cycles(n, k uint64) uint64 {
+func Cycles(n, k uint64) uint64 { // want Cycles:`wrong for some n or some k`
 	if n == 0 && k == 0 {
 		return 1
 	}

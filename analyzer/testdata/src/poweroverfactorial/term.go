@@ -14,12 +14,12 @@ func factF(n int) float64 { // want factF:`factorial of parameter 0`
 }
 
 // Load is an Erlang term a^k/k!.
-func Load(a float64, k int) float64 { // want Load:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171`
+func Load(a float64, k int) float64 { // want Load:`value \(p0\)\^\(p1\)/Γ\(p1 \+ 1\), wrong once p1 ≥ 171` Load:`wrong for k ≥ 171`
 	return math.Pow(a, float64(k)) / factF(k) // want `power-over-factorial term a\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 }
 
 // Arrivals is a Poisson probability.
-func Arrivals(k int, lambda float64) float64 { // want Arrivals:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
+func Arrivals(k int, lambda float64) float64 { // want Arrivals:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171` Arrivals:`wrong for k ≥ 171`
 	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / factF(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k!`
 }
 
