@@ -3,7 +3,7 @@ package curveforge
 import "math"
 
 // binom is C(n, k) by the multiplicative formula.
-func binom(n, k int) int {
+func binom(n, k int) int { // want binom:`binomial of parameter 0, breaks from 62`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -11,7 +11,7 @@ func binom(n, k int) int {
 		k = n - k
 	}
 	r := 1
-	for i := 0; i < k; i++ {
+	for i := 0; i < k; i++ { // want `multiplicative binomial loop in int: the product r \* \(n`
 		r = r * (n - i) / (i + 1)
 	}
 	return r
@@ -23,7 +23,7 @@ type Integer interface {
 }
 
 // Choose is C(n, k) in the caller's integer type.
-func Choose[T Integer](n, k T) T {
+func Choose[T Integer](n, k T) T { // want Choose:`binomial of parameter 0, breaks from 30`
 	if k > n {
 		return 0
 	}
@@ -31,7 +31,7 @@ func Choose[T Integer](n, k T) T {
 		k = n - k
 	}
 	var r T = 1
-	for i := T(1); i <= k; i++ {
+	for i := T(1); i <= k; i++ { // want `multiplicative binomial loop in int32 \(the narrowest`
 		r = r * (n - k + i) / i
 	}
 	return r
@@ -39,7 +39,7 @@ func Choose[T Integer](n, k T) T {
 
 // Bernstein is the Bernstein basis polynomial b_{i,n}(t).
 func Bernstein(n, i int, t float64) float64 {
-	return float64(binom(n, i)) * math.Pow(t, float64(i)) * math.Pow(1-t, float64(n-i))
+	return float64(binom(n, i)) * math.Pow(t, float64(i)) * math.Pow(1-t, float64(n-i)) // want `binomial probability C\(n, i\)·t\^i·\(1−t\)\^\(n−i\) in int:`
 }
 
 // BernsteinLog forms b_{i,n}(t) in log space, for 0 < t < 1.
@@ -47,7 +47,7 @@ func BernsteinLog(n, i int, t float64) float64 {
 	a, _ := math.Lgamma(float64(n + 1))
 	b, _ := math.Lgamma(float64(i + 1))
 	c, _ := math.Lgamma(float64(n - i + 1))
-	return math.Exp(a - b - c + float64(i)*math.Log(t) + float64(n-i)*math.Log1p(-t))
+	return math.Exp(a - b - c + float64(i)*math.Log(t) + float64(n-i)*math.Log1p(-t)) // want `math\.Exp of log-gamma values computes a product of Γ`
 }
 
 // BasisFunc returns the degree-n basis as a closure over its binomial
@@ -55,7 +55,7 @@ func BernsteinLog(n, i int, t float64) float64 {
 func BasisFunc(n int) func(i int, t float64) float64 {
 	w := make([]float64, n+1)
 	c := 1.0
-	for i := 0; i <= n; i++ {
+	for i := 0; i <= n; i++ { // want `multiplicative binomial loop computes C\(n,`
 		w[i] = c
 		c = c * float64(n-i) / float64(i+1)
 	}

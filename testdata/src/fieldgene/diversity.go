@@ -12,7 +12,7 @@ func lchoose(n, k int) float64 {
 
 // chooseG is C(n, k) from the Gamma function.
 func chooseG(n, k int) float64 {
-	return math.Gamma(float64(n+1)) / (math.Gamma(float64(k+1)) * math.Gamma(float64(n-k+1)))
+	return math.Gamma(float64(n+1)) / (math.Gamma(float64(k+1)) * math.Gamma(float64(n-k+1))) // want `ratio of math\.Gamma values in float64:`
 }
 
 // Rarefy is Hurlbert's expected number of species in a subsample of n
@@ -90,7 +90,7 @@ func Chao1(counts []int) float64 {
 }
 
 // chooseMul is C(n, k) by the multiplicative formula in int64.
-func chooseMul(n, k int) int64 {
+func chooseMul(n, k int) int64 { // want chooseMul:`binomial of parameter 0, breaks from 62`
 	if k < 0 || k > n {
 		return 0
 	}
@@ -98,7 +98,7 @@ func chooseMul(n, k int) int64 {
 		k = n - k
 	}
 	r := int64(1)
-	for i := 1; i <= k; i++ {
+	for i := 1; i <= k; i++ { // want `multiplicative binomial loop in int64: the product r \*`
 		r = r * int64(n-k+i) / int64(i)
 	}
 	return r

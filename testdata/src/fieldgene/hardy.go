@@ -6,7 +6,7 @@ import (
 )
 
 // floatFact is n! in float64.
-func floatFact(n int) float64 {
+func floatFact(n int) float64 { // want floatFact:`factorial of parameter 0, breaks from 171`
 	f := 1.0
 	for n > 1 {
 		f *= float64(n)
@@ -22,7 +22,7 @@ func hwProbDirect(nAA, nAB, nBB int) float64 {
 	nA := 2*nAA + nAB
 	nB := 2*nBB + nAB
 	num := math.Pow(2, float64(nAB)) * floatFact(n) * floatFact(nA) * floatFact(nB)
-	return num / (floatFact(nAA) * floatFact(nAB) * floatFact(nBB) * floatFact(2*n))
+	return num / (floatFact(nAA) * floatFact(nAB) * floatFact(nBB) * floatFact(2*n)) // want `ratio of factorials in float64: the numerator n!`
 }
 
 // HWExactTest is the Hardy–Weinberg exact test's p-value: the
@@ -85,7 +85,7 @@ func GenotypeMultinomial(counts []int, freqs []float64) float64 {
 	}
 	v := floatFact(n)
 	for i, c := range counts {
-		v *= math.Pow(freqs[i], float64(c)) / floatFact(c)
+		v *= math.Pow(freqs[i], float64(c)) / floatFact(c) // want `power-over-factorial term \(freqs\[i\]\)\^c/c! in float64:`
 	}
 	return v
 }

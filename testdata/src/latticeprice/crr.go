@@ -3,17 +3,17 @@ package latticeprice
 import "math"
 
 // factInt is n! in int.
-func factInt(n int) int {
+func factInt(n int) int { // want factInt:`factorial of parameter 0, breaks from 21`
 	f := 1
-	for i := 2; i <= n; i++ {
+	for i := 2; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21 \(20! ≈ 2\.43e18`
 		f *= i
 	}
 	return f
 }
 
 // chooseInt is C(n, k) from factorials.
-func chooseInt(n, k int) int {
-	return factInt(n) / (factInt(k) * factInt(n-k))
+func chooseInt(n, k int) int { // want chooseInt:`binomial of parameter 0, breaks from 21`
+	return factInt(n) / (factInt(k) * factInt(n-k)) // want `binomial coefficient as a ratio of factorials in int:`
 }
 
 // DigitalProb is the risk-neutral probability that at least j of n
@@ -21,7 +21,7 @@ func chooseInt(n, k int) int {
 func DigitalProb(n, j int, p float64) float64 {
 	prob := 0.0
 	for k := j; k <= n; k++ {
-		prob += float64(chooseInt(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
+		prob += float64(chooseInt(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int:`
 	}
 	return prob
 }
@@ -49,7 +49,7 @@ func CRRPriceDirect(S, K, r, sigma, T float64, n int, call bool) float64 {
 	u, d, p := crrParams(r, sigma, T, n)
 	coef := 1.0
 	sum := 0.0
-	for k := 0; k <= n; k++ {
+	for k := 0; k <= n; k++ { // want `multiplicative binomial loop computes C\(n,`
 		st := S * math.Pow(u, float64(k)) * math.Pow(d, float64(n-k))
 		sum += coef * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) * payoff(st, K, call)
 		coef = coef * float64(n-k) / float64(k+1)

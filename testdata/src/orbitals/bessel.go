@@ -6,7 +6,7 @@ import "math"
 func BesselJ(n int, x float64) float64 {
 	sum := 0.0
 	for k := 0; k < 60; k++ {
-		term := math.Pow(x/2, float64(2*k+n)) / (factorial(k) * factorial(k+n))
+		term := math.Pow(x/2, float64(2*k+n)) / (factorial(k) * factorial(k+n)) // want `term with \(x / 2\)\^\(2\*k \+ n\) over k!·\(k \+ n\)! in`
 		if k%2 == 1 {
 			term = -term
 		}

@@ -49,14 +49,14 @@ func Wigner3j(j1, j2, j3, m1, m2, m3 int) float64 {
 	if !admissible(j1, j2, j3, m1, m2, m3) {
 		return 0
 	}
-	tri := factorial(j1+j2-j3) * factorial(j1-j2+j3) * factorial(-j1+j2+j3) / factorial(j1+j2+j3+1)
-	pre := math.Sqrt(tri * factorial(j1+m1) * factorial(j1-m1) * factorial(j2+m2) *
+	tri := factorial(j1+j2-j3) * factorial(j1-j2+j3) * factorial(-j1+j2+j3) / factorial(j1+j2+j3+1) // want `Wigner3j computes Γ\(j1 \+ j2 - j3 \+ 1\)·Γ\(j1 - j2 \+ j3 \+`
+	pre := math.Sqrt(tri * factorial(j1+m1) * factorial(j1-m1) * factorial(j2+m2) *                 // want `ratio of factorials in float64: the numerator \(j1 \+ j2`
 		factorial(j2-m2) * factorial(j3+m3) * factorial(j3-m3))
 	tmin := imax3(0, j2-j3-m1, j1-j3+m2)
 	tmax := imin3(j1+j2-j3, j1-m1, j2+m2)
 	sum := 0.0
 	for t := tmin; t <= tmax; t++ {
-		d := factorial(t) * factorial(j3-j2+t+m1) * factorial(j3-j1+t-m2) *
+		d := factorial(t) * factorial(j3-j2+t+m1) * factorial(j3-j1+t-m2) * // want `product of factorials in float64: the factor t! alone`
 			factorial(j1+j2-j3-t) * factorial(j1-t-m1) * factorial(j2-t+m2)
 		if t%2 == 0 {
 			sum += 1 / d

@@ -7,7 +7,7 @@ import "math"
 const maxDegree = 1 << 16
 
 // factorial returns n! as a float64.
-func factorial(n int) float64 {
+func factorial(n int) float64 { // want factorial:`factorial of parameter 0, breaks from 171`
 	f := 1.0
 	for i := 2; i <= n; i++ {
 		f *= float64(i)
@@ -24,7 +24,7 @@ func YlmNorm(l, m int) float64 {
 	if m > l {
 		return 0
 	}
-	return math.Sqrt(float64(2*l+1) / (4 * math.Pi) * factorial(l-m) / factorial(l+m))
+	return math.Sqrt(float64(2*l+1) / (4 * math.Pi) * factorial(l-m) / factorial(l+m)) // want `ratio of factorials in float64: the numerator \(l - m\)!`
 }
 
 // YlmNormLog is YlmNorm with the factorial ratio taken in log space.

@@ -6,7 +6,7 @@ import "math"
 var factCache = []float64{1}
 
 // fact returns k! from the cache, growing it as needed.
-func fact(k int) float64 {
+func fact(k int) float64 { // want fact:`factorial of parameter 0, breaks from 171`
 	for len(factCache) <= k {
 		n := len(factCache)
 		factCache = append(factCache, factCache[n-1]*float64(n))
@@ -15,8 +15,8 @@ func fact(k int) float64 {
 }
 
 // PoissonPMF is the probability of k cases when lambda are expected.
-func PoissonPMF(k int, lambda float64) float64 {
-	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / fact(k)
+func PoissonPMF(k int, lambda float64) float64 { // want PoissonPMF:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171`
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / fact(k) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64:`
 }
 
 // maxCases bounds the counts the log-space pmf accepts.
@@ -50,7 +50,7 @@ func PoissonCDF(k int, lambda float64) float64 {
 func PoissonCDFRecur(k int, lambda float64) float64 {
 	term := math.Exp(-lambda)
 	s := term
-	for i := 1; i <= k; i++ {
+	for i := 1; i <= k; i++ { // want `running product term computes the Poisson terms`
 		term *= lambda / float64(i)
 		s += term
 	}

@@ -3,12 +3,12 @@ package outbreak
 import "math"
 
 // choose64 is C(n, k) by the multiplicative formula in int64.
-func choose64(n, k int) int64 {
+func choose64(n, k int) int64 { // want choose64:`binomial of parameter 0, breaks from 62`
 	if k < 0 || k > n {
 		return 0
 	}
 	r := int64(1)
-	for j := 0; j < k; j++ {
+	for j := 0; j < k; j++ { // want `multiplicative binomial loop in int64: the product r \*`
 		r = r * int64(n-j) / int64(j+1)
 	}
 	return r
@@ -19,7 +19,7 @@ func choose64(n, k int) int64 {
 // contact escaping infection with probability q.
 func ChainProb(s, i, c int, q float64) float64 {
 	esc := math.Pow(q, float64(i))
-	return float64(choose64(s, c)) * math.Pow(1-esc, float64(c)) * math.Pow(esc, float64(s-c))
+	return float64(choose64(s, c)) * math.Pow(1-esc, float64(c)) * math.Pow(esc, float64(s-c)) // want `binomial probability C\(s, c\)·\(1 - esc\)\^c·\(1−\(1 -`
 }
 
 // SusceptibleWays counts the ways to pick c infected among s, by the
@@ -31,7 +31,7 @@ func SusceptibleWays(s, c uint64) uint64 {
 	if c > s {
 		return 0
 	}
-	return SusceptibleWays(s-1, c-1) * s / c
+	return SusceptibleWays(s-1, c-1) * s / c // want `multiplicative binomial recursion in uint64: the`
 }
 
 // BirthdayCollision is the probability that among n people some two
@@ -53,13 +53,13 @@ func BirthdayDirect(n, days int) float64 {
 	if n > days {
 		return 1
 	}
-	return 1 - fact(days)/(fact(days-n)*math.Pow(float64(days), float64(n)))
+	return 1 - fact(days)/(fact(days-n)*math.Pow(float64(days), float64(n))) // want `permutation count days!/\(days - n\)! as a ratio of`
 }
 
 // NegBinomPMF is the Poisson–gamma mixture probability of k cases,
 // Γ(k+r)/(k! Γ(r))·p^r·(1−p)^k.
-func NegBinomPMF(k int, r, p float64) float64 {
-	c := math.Gamma(float64(k)+r) / (math.Gamma(float64(k)+1) * math.Gamma(r))
+func NegBinomPMF(k int, r, p float64) float64 { // want NegBinomPMF:`value Γ\(p0 \+ p1\)·\(p2\)\^\(p1\)·\(-p2 \+ 1\)\^\(p0\)/\(Γ\(p0 \+`
+	c := math.Gamma(float64(k)+r) / (math.Gamma(float64(k)+1) * math.Gamma(r)) // want `ratio of math\.Gamma values in float64:`
 	return c * math.Pow(p, r) * math.Pow(1-p, float64(k))
 }
 
