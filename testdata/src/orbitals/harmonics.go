@@ -24,7 +24,7 @@ func YlmNorm(l, m int) float64 {
 	if m > l {
 		return 0
 	}
-	return math.Sqrt(float64(2*l+1) / (4 * math.Pi) * factorial(l-m) / factorial(l+m)) // want `ratio of factorials in float64: the numerator \(l - m\)!`
+	return math.Sqrt(float64(2*l+1) / (4 * math.Pi) * factorial(l-m) / factorial(l+m)) // want `ratio of factorials in float64: the divisor \(l \+ m\)! overflows to \+Inf for l \+ m ≥ 171, no later than`
 }
 
 // YlmNormLog is YlmNorm with the factorial ratio taken in log space.

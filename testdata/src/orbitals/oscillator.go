@@ -60,5 +60,5 @@ func (a Atom) Energy(n int) float64 {
 // radii: sqrt((2Z/n)³ (n−l−1)! / (2n (n+l)!)).
 func (a Atom) RadialNorm(n, l int) float64 {
 	rho := 2 * float64(a.Z) / float64(n)
-	return math.Sqrt(rho * rho * rho * factorial(n-l-1) / (2 * float64(n) * factorial(n+l))) // want `ratio of factorials in float64: the numerator \(n - l -`
+	return math.Sqrt(rho * rho * rho * factorial(n-l-1) / (2 * float64(n) * factorial(n+l))) // want `ratio of factorials in float64: the divisor \(n \+ l\)! overflows to \+Inf for n \+ l ≥ 171, no later than`
 }
