@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"strings"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -12,8 +13,9 @@ import (
 // The factorial-ratio category: binomials, permutations, multinomials,
 // Catalan numbers, hypergeometric and binomial probabilities computed as
 // ratios or products of factorial values whose numerator overflows first,
-// and integer ratios whose bounded numerator fits but whose divisor wraps
-// (checkBrokenDivisor).
+// float ratios whose divisor factorial overflows no later than the
+// numerator's (checkDivisorFirst), and integer ratios whose bounded
+// numerator fits but whose divisor wraps (checkBrokenDivisor).
 
 // brokenFactor returns the numerator factor that can break first: the
 // first whose argument is not bounded below its threshold, with the
@@ -50,6 +52,9 @@ func bang(arg ast.Expr, off int64) string {
 // checkFactorialRatio judges binomials, permutations, Catalan numbers,
 // multinomials and other products and ratios of factorial values.
 func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
+	if fc.checkDivisorFirst(root, p) {
+		return
+	}
 	u, j, first, ok := fc.brokenFactor(p.num)
 	if !ok {
 		fc.checkBrokenDivisor(root, p)
@@ -352,4 +357,80 @@ var shapeWords = map[fixes.Shape]string{
 	fixes.ShapeBinomial:    "binomial coefficient",
 	fixes.ShapePermutation: "permutation count",
 	fixes.ShapeMultinomial: "multinomial coefficient",
+}
+
+// divisorFirst returns the divisor factorial of a float ratio that
+// overflows no later than any factorial of the numerator: its argument
+// exceeds each of theirs by a form with no negative coefficient that is
+// not 0 (k!/(k+j)!, (l−m)!/(l+m)!, n!/(n+1)!, a!b!/(a+b+1)!), so that
+// it passes its threshold first wherever the variables added are not
+// negative, the way the code is written to be called. The quotient,
+// the reciprocal of a rising factorial or a ratio below 1, is then 0
+// (NaN once the numerator follows) where it may still fit.
+func (fc *fnCtx) divisorFirst(p *product) (d factor, j judgement, first int64, ok bool) {
+	var nums []linear
+	for _, f := range p.num {
+		if f.kind != kindFactorial {
+			continue
+		}
+		l, ok := fc.linear(f.arg)
+		if !ok || !f.t.Float {
+			return factor{}, judgement{}, 0, false
+		}
+		nums = append(nums, l.add(linear{C: f.off}))
+	}
+	if len(nums) == 0 {
+		return factor{}, judgement{}, 0, false
+	}
+	for _, d := range p.den {
+		if d.kind != kindFactorial || !d.t.Float || d.fact != nil && d.fact.Safe {
+			continue
+		}
+		l, ok := fc.linear(d.arg)
+		if !ok || !exceedsAll(l.add(linear{C: d.off}), nums) {
+			continue
+		}
+		first := firstBadOf(d.kind, d.t) - d.off
+		if j := fc.judge(d.arg, first); !j.silent {
+			return d, j, first, true
+		}
+	}
+	return factor{}, judgement{}, 0, false
+}
+
+// exceedsAll reports whether d − n has no negative coefficient and is
+// not 0 for every n of nums.
+func exceedsAll(d linear, nums []linear) bool {
+	for _, n := range nums {
+		diff := d.add(n.scale(-1))
+		if diff.C < 0 || diff.C == 0 && len(diff.Terms) == 0 {
+			return false
+		}
+		for _, t := range diff.Terms {
+			if t.K < 0 {
+				return false
+			}
+		}
+	}
+	return true
+}
+
+// checkDivisorFirst reports a float ratio whose divisor factorial
+// overflows first (divisorFirst); it returns whether it did.
+func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
+	d, j, first, ok := fc.divisorFirst(p)
+	if !ok {
+		return false
+	}
+	var nums []string
+	for _, f := range p.num {
+		if f.kind == kindFactorial {
+			nums = append(nums, bang(f.arg, f.off))
+		}
+	}
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	fc.reportRatio(root, p, m, append(append([]factor{}, p.num...), d), d, j.definite,
+		fmt.Sprintf("ratio of factorials in %s: the divisor %s %s for %s ≥ %d, no later than the numerator's %s, and the quotient is then 0, or NaN once the numerator follows, although it may still fit%s",
+			d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, strings.Join(nums, ", "), j.clause))
+	return true
 }
