@@ -55,7 +55,7 @@ func BernsteinLog(n, i int, t float64) float64 {
 func BasisFunc(n int) func(i int, t float64) float64 {
 	w := make([]float64, n+1)
 	c := 1.0
-	for i := 0; i <= n; i++ { // want `multiplicative binomial loop computes C\(n,`
+	for i := 0; i <= n; i++ { // want `multiplicative binomial loop steps through C\(n, k\) for every k ≤ n in float64: the product c\*\(float64\(n - i\)\) overflows to \+Inf before the division for n ≥ 1021 at k = n/2`
 		w[i] = c
 		c = c * float64(n-i) / float64(i+1)
 	}

@@ -49,7 +49,7 @@ func CRRPriceDirect(S, K, r, sigma, T float64, n int, call bool) float64 {
 	u, d, p := crrParams(r, sigma, T, n)
 	coef := 1.0
 	sum := 0.0
-	for k := 0; k <= n; k++ { // want `multiplicative binomial loop computes C\(n,`
+	for k := 0; k <= n; k++ { // want `multiplicative binomial loop steps through C\(n, k\) for every k ≤ n in float64: the product coef\*\(float64\(n - k\)\) overflows to \+Inf before the division for n ≥ 1021 at k = n/2`
 		st := S * math.Pow(u, float64(k)) * math.Pow(d, float64(n-k))
 		sum += coef * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) * payoff(st, K, call)
 		coef = coef * float64(n-k) / float64(k+1)
