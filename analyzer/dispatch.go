@@ -58,6 +58,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall {
 		fc.checkLogGamma()
 		fc.checkLogOfValue()
+		fc.checkLogOfModelValue(model)
 	}
 }
 

@@ -215,6 +215,13 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 				return r.Meet(fc.lenLocalRange(s, at))
 			}
 		}
+		if fv, ok := s.Field.(*types.Var); ok && in == nil {
+			// The guards before at bound a field of a struct variable
+			// as they bound a variable.
+			if r := fc.ranges().FieldAt(s.Obj, fv, at); !r.IsTop() {
+				return r
+			}
+		}
 		if in == nil {
 			in = res.Exprs[s]
 		}
