@@ -276,19 +276,43 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 	}
 	clause, definite := j.clause, j.definite
 	what := "C(n,k)·p^k·(1−p)^(n−k)"
+	pmf := b.arg2 != nil && len(pows) == 2 && fc.pmfExponents(b, pows)
 	if b.arg2 != nil && len(pows) > 0 {
 		// The code's own n, k and p: C(n, d)·p^d·(1−p)^(n−d).
 		bn, bk := fc.stripConv(b.arg), fc.stripConv(b.arg2)
 		n, k, q := atom(bn), atom(bk), atom(pows[0].arg)
 		what = fmt.Sprintf("C(%s, %s)·%s^%s·(1−%s)^(%s−%s)", src(bn), src(bk), q, k, q, n, k)
 	}
-	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
-		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
+	if b.arg2 != nil && len(pows) == 2 && !pmf {
+		// Other powers (the negative binomial's C(k+r−1, k)·p^r·(1−p)^k):
+		// the code's own factors.
+		what = fmt.Sprintf("C(%s, %s)·%s·%s", src(fc.stripConv(b.arg)), src(fc.stripConv(b.arg2)), src(pows[0].call), src(pows[1].call))
+	}
+	bound := "the probability itself is at most 1"
+	if !pmf {
+		bound = "the product with the powers may still fit"
+	}
+	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although %s%s",
+		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, bound, clause)
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
+	if pmf && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.def()), match: p.fix(m)})
+}
+
+// pmfExponents reports whether the two powers' exponents are k and
+// n − k of the coefficient C(n, k), in either order, or are not read as
+// linear forms (then the fixer's own check of the shape decides).
+func (fc *fnCtx) pmfExponents(b factor, pows []factor) bool {
+	n, ok1 := fc.linear(b.arg)
+	k, ok2 := fc.linear(b.arg2)
+	e0, ok3 := fc.linear(pows[0].arg2)
+	e1, ok4 := fc.linear(pows[1].arg2)
+	if !(ok1 && ok2 && ok3 && ok4) {
+		return true
+	}
+	return e0.add(e1).equal(n) && (e0.equal(k) || e1.equal(k))
 }
 
 // emptyBelowAll reports whether every factor is a call of a factorial

@@ -114,7 +114,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) || mc.stepProduct(a, t) {
 				break
 			}
 		}
@@ -213,6 +213,13 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 		if in == nil && fc.isLenSym(s) {
 			if r, ok := fc.lenBefore(s, at); ok {
 				return r.Meet(fc.lenLocalRange(s, at))
+			}
+		}
+		if fv, ok := s.Field.(*types.Var); ok && in == nil {
+			// The guards before at bound a field of a struct variable
+			// as they bound a variable.
+			if r := fc.ranges().FieldAt(s.Obj, fv, at); !r.IsTop() {
+				return r
 			}
 		}
 		if in == nil {
