@@ -107,5 +107,5 @@ func chooseMul(n, k int) int64 { // want chooseMul:`binomial of parameter 0, bre
 // DetectionProb is the probability that a sample of the given size from
 // a population holding marked tagged animals catches at least one.
 func DetectionProb(total, marked, sample int) float64 {
-	return 1 - float64(chooseMul(total-marked, sample))/float64(chooseMul(total, sample))
+	return 1 - float64(chooseMul(total-marked, sample))/float64(chooseMul(total, sample)) // want `chooseMul\(total-marked, sample\) computes C\(total - marked, sample\) in int64, which wraps for total - marked ≥ 62 at sample = \(total - marked\)/2, before the conversion to float64` `chooseMul\(total, sample\) computes C\(total, sample\) in int64, which wraps for total ≥ 62 at sample = total/2`
 }
