@@ -38,6 +38,7 @@ var scenarios = []string{
 	"reliability", "generic", "gentable", "tables", "oddcode", "seating",
 	"labtables", "raffle", "pickroute", "linkbudget", "gameodds", "clinicq", "germtrial",
 	"linebroaden", "sparecheck", "queuedesk", "spinstats", "puzzlebox", "exacttest",
+	"orbitals", "curveforge", "latticeprice", "outbreak", "fieldgene",
 }
 
 // logSpacePackages are the category packages beside the analyzer of the

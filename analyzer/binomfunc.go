@@ -2,6 +2,7 @@ package analyzer
 
 import (
 	"go/ast"
+	"go/token"
 	"go/types"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
@@ -23,6 +24,9 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 	}
 	if fact == nil && loops {
 		fact = own.binomialLoopFunc(decl, res)
+	}
+	if fact == nil {
+		fact = own.binomialRecursionFunc(decl, obj, res)
 	}
 	if fact == nil && loops {
 		fact = own.modelBinomialFunc(decl, res)
@@ -78,6 +82,42 @@ func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
 		}
 		return false
 	})
+	return fact
+}
+
+// binomialRecursionFunc matches an integer function whose returns are
+// the multiplicative recursion f(n-1, k-1) * n / k (checkBinomialRecursion)
+// and constants 0 or 1, its base cases: C(n, k) for 0 ≤ k ≤ n. Its
+// products are the binomial loop's, so it breaks where that loop does.
+func (fc *fnCtx) binomialRecursionFunc(decl *ast.FuncDecl, self *types.Func, res numType) *FactorialFact {
+	if res.Float {
+		return nil // the value model reads a float recursion
+	}
+	var fact *FactorialFact
+	for _, ret := range fc.returnsOutsideClosures() {
+		if len(ret.Results) != 1 {
+			return nil
+		}
+		if v, ok := fc.c.queries().intConst(fc.stripConv(ret.Results[0])); ok && (v == 0 || v == 1) {
+			continue
+		}
+		quo, ok := fc.stripConv(ret.Results[0]).(*ast.BinaryExpr)
+		if !ok || quo.Op != token.QUO || fact != nil {
+			return nil
+		}
+		mul, ok := ast.Unparen(quo.X).(*ast.BinaryExpr)
+		if !ok || mul.Op != token.MUL {
+			return nil
+		}
+		nExpr, idx, j, ok := fc.binomialRecursion(decl, self, mul, quo)
+		if !ok {
+			return nil
+		}
+		fact = &FactorialFact{Kind: kindNames[kindBinomial], Param: idx, Param2: j, FirstBad: thresholds.CentralBinomialLoop(res.Num).FirstBad}
+		if n, k := fc.rangeOf(nExpr), fc.rangeOf(fc.stripConv(quo.Y)); fc.binomialLoopSafe(res, n, k) {
+			fact.Safe, fact.Lo, fact.Hi = true, n.Lo, n.Hi
+		}
+	}
 	return fact
 }
 

@@ -24,7 +24,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if d, ok := n.(*ast.FuncDecl); ok && s.callMul {
 		if ff := c.funcs[c.declObj(d)]; ff != nil && ff.rec != nil {
 			fc.checkRecursion(ff)
-		} else if ff == nil {
+		} else if ff == nil || ff.kind == kindBinomial {
+			// A binomial recursion is a binomial function too
+			// (binomialRecursionFunc).
 			fc.checkBinomialRecursion(d)
 		}
 	}
@@ -56,6 +58,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.knownCall {
 		fc.checkLogGamma()
 		fc.checkLogOfValue()
+		fc.checkLogOfModelValue(model)
 	}
 }
 

@@ -4,8 +4,10 @@ import (
 	"fmt"
 	"go/ast"
 	"go/types"
+	"math/big"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
+	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/fixes"
 	"github.com/overfact/overfact/internal/assigned"
 )
@@ -78,6 +80,53 @@ func (fc *fnCtx) checkClampedCall(call *ast.CallExpr, f factor, first int64, j j
 		related: fc.c.relatedDef(f.fn.Name(), f.fn.Pos()),
 		match: &fixes.Match{Shape: fixes.ShapeFactorial, Node: call, Args: []ast.Expr{f.arg},
 			Result: fc.c.pass.TypesInfo.TypeOf(call), Func: fc.node, Param: p, FirstBad: first, EntryGuard: true},
+	})
+}
+
+// checkLogOfModelValue reports math.Log, Log2 or Log10 of a call whose
+// value fact names a binomial coefficient in float64 (a method's
+// running product over its receiver's fields included), where the
+// coefficient's n, k and n − k can reach the central one past float64:
+// the call is +Inf there, and so is the logarithm, which is finite.
+// A call with a factorial or binomial fact is checkLogOfValue's.
+func (fc *fnCtx) checkLogOfModelValue(model func() *vm.Result) {
+	c := fc.c
+	fc.eachLogCall(func(log *ast.CallExpr, name string) {
+		inner, ok := fc.stripConv(log.Args[0]).(*ast.CallExpr)
+		if !ok || c.reportedWithin(log) {
+			return
+		}
+		fn := c.calleeOf(inner)
+		if c.factOf(fn) != nil {
+			return
+		}
+		f := c.valueFactOf(fn)
+		t, isNum := c.numOf(c.pass.TypesInfo.TypeOf(inner))
+		if f == nil || f.Log || !isNum || !t.Float || !types.Identical(c.pass.TypesInfo.TypeOf(inner), types.Typ[types.Float64]) {
+			return
+		}
+		res := model()
+		form := vm.Recognise(res.Values[inner])
+		if form.Kind != vm.Binomial {
+			return
+		}
+		central := thresholds.CentralBinomial(t.Num)
+		n, k := form.Args[0], form.Args[1]
+		half := (central.FirstBad - 1) / 2
+		if !fc.reaches(res, n, log, central.FirstBad) || !fc.reaches(res, k, log, half) || !fc.reaches(res, n.Sub(k), log, half) {
+			return
+		}
+		clause := ""
+		if v, alpha, beta, ok := oneVar(n); ok {
+			if first, ok := firstAtRat(alpha, beta, big.NewRat(central.FirstBad, 1)); ok {
+				clause, _ = verdict(v.Name(), fc.symRange(res, v, log), first)
+			}
+		} else {
+			clause = fmt.Sprintf("; %s is not bounded here", n)
+		}
+		msg := fmt.Sprintf("math.%s of %s, whose value is C(%s, %s): it overflows to +Inf for %s ≥ %d at %s = %s/2 (C(%d, %d) ≈ %s is the largest central one that fits), so the logarithm is +Inf where ln C(%s, %s) is finite%s",
+			name, src(inner), n, k, n, central.FirstBad, k, parenAffine(n), central.FirstBad-1, (central.FirstBad-1)/2, central.LastGoodApprox(), n, k, clause)
+		fc.report(finding{node: log, cat: catCall, msg: msg, related: c.relatedDef(fn.Name(), fn.Pos())})
 	})
 }
 

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"strings"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -12,8 +13,9 @@ import (
 // The factorial-ratio category: binomials, permutations, multinomials,
 // Catalan numbers, hypergeometric and binomial probabilities computed as
 // ratios or products of factorial values whose numerator overflows first,
-// and integer ratios whose bounded numerator fits but whose divisor wraps
-// (checkBrokenDivisor).
+// float ratios whose divisor factorial overflows no later than the
+// numerator's (checkDivisorFirst), and integer ratios whose bounded
+// numerator fits but whose divisor wraps (checkBrokenDivisor).
 
 // brokenFactor returns the numerator factor that can break first: the
 // first whose argument is not bounded below its threshold, with the
@@ -50,6 +52,9 @@ func bang(arg ast.Expr, off int64) string {
 // checkFactorialRatio judges binomials, permutations, Catalan numbers,
 // multinomials and other products and ratios of factorial values.
 func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
+	if fc.checkDivisorFirst(root, p) {
+		return
+	}
 	u, j, first, ok := fc.brokenFactor(p.num)
 	if !ok {
 		fc.checkBrokenDivisor(root, p)
@@ -271,19 +276,43 @@ func (fc *fnCtx) checkBinomialPMF(root ast.Expr, p *product) {
 	}
 	clause, definite := j.clause, j.definite
 	what := "C(n,k)·p^k·(1−p)^(n−k)"
+	pmf := b.arg2 != nil && len(pows) == 2 && fc.pmfExponents(b, pows)
 	if b.arg2 != nil && len(pows) > 0 {
 		// The code's own n, k and p: C(n, d)·p^d·(1−p)^(n−d).
 		bn, bk := fc.stripConv(b.arg), fc.stripConv(b.arg2)
 		n, k, q := atom(bn), atom(bk), atom(pows[0].arg)
 		what = fmt.Sprintf("C(%s, %s)·%s^%s·(1−%s)^(%s−%s)", src(bn), src(bk), q, k, q, n, k)
 	}
-	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although the probability itself is at most 1%s",
-		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, clause)
+	if b.arg2 != nil && len(pows) == 2 && !pmf {
+		// Other powers (the negative binomial's C(k+r−1, k)·p^r·(1−p)^k):
+		// the code's own factors.
+		what = fmt.Sprintf("C(%s, %s)·%s·%s", src(fc.stripConv(b.arg)), src(fc.stripConv(b.arg2)), src(pows[0].call), src(pows[1].call))
+	}
+	bound := "the probability itself is at most 1"
+	if !pmf {
+		bound = "the product with the powers may still fit"
+	}
+	msg := fmt.Sprintf("binomial probability %s in %s: %s(%s, …) breaks for %s ≥ %d although %s%s",
+		what, b.t.typeName(), b.fn.Name(), src(b.arg), src(b.arg), first, bound, clause)
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	if b.arg2 != nil && len(pows) == 2 && p.other == 0 {
+	if pmf && p.other == 0 {
 		m.Shape, m.Args = fixes.ShapeBinomialPMF, []ast.Expr{b.arg2, b.arg, pows[0].arg}
 	}
 	fc.report(finding{node: root, cat: catRatio, definite: definite, msg: msg, related: fc.c.relatedDef(b.def()), match: p.fix(m)})
+}
+
+// pmfExponents reports whether the two powers' exponents are k and
+// n − k of the coefficient C(n, k), in either order, or are not read as
+// linear forms (then the fixer's own check of the shape decides).
+func (fc *fnCtx) pmfExponents(b factor, pows []factor) bool {
+	n, ok1 := fc.linear(b.arg)
+	k, ok2 := fc.linear(b.arg2)
+	e0, ok3 := fc.linear(pows[0].arg2)
+	e1, ok4 := fc.linear(pows[1].arg2)
+	if !(ok1 && ok2 && ok3 && ok4) {
+		return true
+	}
+	return e0.add(e1).equal(n) && (e0.equal(k) || e1.equal(k))
 }
 
 // emptyBelowAll reports whether every factor is a call of a factorial
@@ -352,4 +381,80 @@ var shapeWords = map[fixes.Shape]string{
 	fixes.ShapeBinomial:    "binomial coefficient",
 	fixes.ShapePermutation: "permutation count",
 	fixes.ShapeMultinomial: "multinomial coefficient",
+}
+
+// divisorFirst returns the divisor factorial of a float ratio that
+// overflows no later than any factorial of the numerator: its argument
+// exceeds each of theirs by a form with no negative coefficient that is
+// not 0 (k!/(k+j)!, (l−m)!/(l+m)!, n!/(n+1)!, a!b!/(a+b+1)!), so that
+// it passes its threshold first wherever the variables added are not
+// negative, the way the code is written to be called. The quotient,
+// the reciprocal of a rising factorial or a ratio below 1, is then 0
+// (NaN once the numerator follows) where it may still fit.
+func (fc *fnCtx) divisorFirst(p *product) (d factor, j judgement, first int64, ok bool) {
+	var nums []linear
+	for _, f := range p.num {
+		if f.kind != kindFactorial {
+			continue
+		}
+		l, ok := fc.linear(f.arg)
+		if !ok || !f.t.Float {
+			return factor{}, judgement{}, 0, false
+		}
+		nums = append(nums, l.add(linear{C: f.off}))
+	}
+	if len(nums) == 0 {
+		return factor{}, judgement{}, 0, false
+	}
+	for _, d := range p.den {
+		if d.kind != kindFactorial || !d.t.Float || d.fact != nil && d.fact.Safe {
+			continue
+		}
+		l, ok := fc.linear(d.arg)
+		if !ok || !exceedsAll(l.add(linear{C: d.off}), nums) {
+			continue
+		}
+		first := firstBadOf(d.kind, d.t) - d.off
+		if j := fc.judge(d.arg, first); !j.silent {
+			return d, j, first, true
+		}
+	}
+	return factor{}, judgement{}, 0, false
+}
+
+// exceedsAll reports whether d − n has no negative coefficient and is
+// not 0 for every n of nums.
+func exceedsAll(d linear, nums []linear) bool {
+	for _, n := range nums {
+		diff := d.add(n.scale(-1))
+		if diff.C < 0 || diff.C == 0 && len(diff.Terms) == 0 {
+			return false
+		}
+		for _, t := range diff.Terms {
+			if t.K < 0 {
+				return false
+			}
+		}
+	}
+	return true
+}
+
+// checkDivisorFirst reports a float ratio whose divisor factorial
+// overflows first (divisorFirst); it returns whether it did.
+func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
+	d, j, first, ok := fc.divisorFirst(p)
+	if !ok {
+		return false
+	}
+	var nums []string
+	for _, f := range p.num {
+		if f.kind == kindFactorial {
+			nums = append(nums, bang(f.arg, f.off))
+		}
+	}
+	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	fc.reportRatio(root, p, m, append(append([]factor{}, p.num...), d), d, j.definite,
+		fmt.Sprintf("ratio of factorials in %s: the divisor %s %s for %s ≥ %d, no later than the numerator's %s, and the quotient is then 0, or NaN once the numerator follows, although it may still fit%s",
+			d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, strings.Join(nums, ", "), j.clause))
+	return true
 }

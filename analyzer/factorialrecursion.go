@@ -416,6 +416,24 @@ func (fc *fnCtx) judgeBinomialRecursion(decl *ast.FuncDecl, self *types.Func, mu
 	if !ok || t.Float {
 		return // a float recursion: the value model's judgment
 	}
+	nExpr, idx, j, ok := fc.binomialRecursion(decl, self, mul, quo)
+	if !ok {
+		return
+	}
+	n, k := fc.rangeOf(nExpr), fc.rangeOf(fc.stripConv(quo.Y))
+	if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) ||
+		fc.c.callsFit(self, decl, idx, j, func(n, k ranges.Interval) bool { return fc.binomialLoopSafe(t, n, k) }) {
+		return
+	}
+	msg, definite := binomialProductText("recursion", t, src(mul), "the division by "+src(quo.Y), nExpr, n, k)
+	fc.report(finding{node: mul, cat: catRecursion, definite: definite, msg: msg})
+}
+
+// binomialRecursion matches mul = f(n-1, k-1) * n (either order), with
+// f the function itself, divided by k in quo, in a function that
+// returns 1 at k == 0: C(n, k) = C(n−1, k−1)·n/k. It returns n's
+// operand and the indices of n and k.
+func (fc *fnCtx) binomialRecursion(decl *ast.FuncDecl, self *types.Func, mul, quo *ast.BinaryExpr) (ast.Expr, int, int, bool) {
 	for _, pair := range [2][2]ast.Expr{{mul.X, mul.Y}, {mul.Y, mul.X}} {
 		nExpr := fc.stripConv(pair[0])
 		idx := fc.c.paramIndex(decl, fc.c.objOf(nExpr))
@@ -430,15 +448,9 @@ func (fc *fnCtx) judgeBinomialRecursion(decl *ast.FuncDecl, self *types.Func, mu
 		if j < 0 || fc.c.paramIndex(decl, fc.c.objOf(fc.stripConv(quo.Y))) != j {
 			continue
 		}
-		n, k := fc.rangeOf(nExpr), fc.rangeOf(fc.stripConv(quo.Y))
-		if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) ||
-			fc.c.callsFit(self, decl, idx, j, func(n, k ranges.Interval) bool { return fc.binomialLoopSafe(t, n, k) }) {
-			return
-		}
-		msg, definite := binomialProductText("recursion", t, src(mul), "the division by "+src(quo.Y), nExpr, n, k)
-		fc.report(finding{node: mul, cat: catRecursion, definite: definite, msg: msg})
-		return
+		return nExpr, idx, j, true
 	}
+	return nil, -1, -1, false
 }
 
 // recursionGuardExact reports whether a guard at the function's entry,

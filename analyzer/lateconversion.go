@@ -8,8 +8,9 @@ import (
 	"github.com/overfact/overfact/fixes"
 )
 
-// The late-conversion category: a factorial converted to another type
-// after it has already wrapped or lost exactness in its own.
+// The late-conversion category: a factorial or binomial coefficient
+// converted to another type after it has already wrapped or lost
+// exactness in its own.
 
 // checkConversion judges T(v) where v is a factorial value that has
 // already broken in its own type: an integer factorial converted to
@@ -31,7 +32,17 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	}
 	var first int64
 	var msg string
+	definite := true
 	switch {
+	case f.kind == kindBinomial && !f.t.Float && to.Float && !f.fact.Safe && f.arg2 != nil:
+		// The integer function's own first bad n at k = n/2 (where its
+		// product or its n! wraps; C(n, n/2) itself at the latest),
+		// while the float type holds the coefficient much further: a
+		// caller converting it means to compute in the float type.
+		first = f.fact.FirstBad
+		definite = false // the range of k decides too
+		msg = fmt.Sprintf("%s computes C(%s, %s) in %s, which wraps for %s ≥ %d at %s = %s/2, before the conversion to %s (which holds C(n, n/2) up to n = %d)",
+			src(inner), src(f.arg), src(f.arg2), f.t.typeName(), src(f.arg), first, src(f.arg2), parenText(src(f.arg)), to.Name, thresholds.CentralBinomial(to.Num).FirstBad-1)
 	case f.kind == kindFactorial && !f.t.Float && to.Float && !f.fact.Safe:
 		first = thresholds.Factorial(f.t.Num).FirstBad - f.off
 		msg = fmt.Sprintf("%s is computed in %s, which wraps for %s ≥ %d, before the conversion to %s (which holds it up to %s = %d)",
@@ -53,9 +64,9 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 	// The conversion and the call become one helper call computing n! in
 	// the target type; a call whose value is (n+off)! is left alone.
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: conv, Result: c.pass.TypesInfo.TypeOf(conv)}
-	if f.off == 0 {
+	if f.off == 0 && f.kind == kindFactorial {
 		m.Shape, m.Args = fixes.ShapeFactorialValue, []ast.Expr{f.arg}
 	}
-	fc.report(finding{node: conv, cat: catLateConv, definite: j.definite, msg: msg + j.clause,
+	fc.report(finding{node: conv, cat: catLateConv, definite: definite && j.definite, msg: msg + j.clause,
 		related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})
 }

@@ -114,7 +114,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) || mc.stepProduct(a, t) {
 				break
 			}
 		}
@@ -213,6 +213,13 @@ func (fc *fnCtx) symRange(res *vm.Result, s vm.Sym, at ast.Node) ranges.Interval
 		if in == nil && fc.isLenSym(s) {
 			if r, ok := fc.lenBefore(s, at); ok {
 				return r.Meet(fc.lenLocalRange(s, at))
+			}
+		}
+		if fv, ok := s.Field.(*types.Var); ok && in == nil {
+			// The guards before at bound a field of a struct variable
+			// as they bound a variable.
+			if r := fc.ranges().FieldAt(s.Obj, fv, at); !r.IsTop() {
+				return r
 			}
 		}
 		if in == nil {
@@ -648,8 +655,15 @@ func (mc *modelCtx) binomialLoop(a *vm.Acc, t numType) bool {
 	name := nv.Name()
 	clause, _ := verdict(name, n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !fits(n.Lo, k.Lo)
-	msg := fmt.Sprintf("multiplicative binomial loop computes C(%s, %s) in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		name, kName, t.typeName(), a.Obj.Name(), src(ast.Unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
+	computes := fmt.Sprintf("computes C(%s, %s)", name, kName)
+	if k := f.Args[1]; k.IsConst() && k.C.Sign() < 0 {
+		// A loop through every k ≤ n: its last step's factor n − n is 0,
+		// so the form is C(n, n+1), which the algebra writes C(n, −1).
+		kName = "k"
+		computes = fmt.Sprintf("steps through C(%s, k) for every k ≤ %s", name, name)
+	}
+	msg := fmt.Sprintf("multiplicative binomial loop %s in %s: the product %s*(%s) %s before the division for %s ≥ %d at %s = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
+		computes, t.typeName(), a.Obj.Name(), src(ast.Unparen(mul.X)), verb(t), name, lim.FirstBad, kName, name, name, name, name, central.FirstBad-1, clause)
 	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg, match: mc.loopOrPMFMatch(a, f)})
 	return true
 }

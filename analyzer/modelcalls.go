@@ -14,6 +14,7 @@ import (
 	"github.com/overfact/overfact/analyzer/ranges"
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
+	"github.com/overfact/overfact/internal/assigned"
 )
 
 // callState is what the value model knows about the functions of the
@@ -132,6 +133,9 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 	for i := 0; i < sig.Params().Len(); i++ {
 		ps[sig.Params().At(i)] = i
 	}
+	if r := sig.Recv(); r != nil && fc.stableVar(r) {
+		ps[r] = recvParam // its fields, as a caller's receiver has them
+	}
 	// The value of each return but the edge cases; a return whose
 	// value differs from the others' is allowed only as a table for
 	// small inputs (tableBranch), and any return may be the formula.
@@ -221,7 +225,7 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 			if !ok {
 				continue
 			}
-			f.Weak = appendWeak(f.Weak, WeakPoint{Arg: arg, Bad: ratText(w.bad), What: w.what, Gamma: w.gamma})
+			f.Weak = appendWeak(f.Weak, WeakPoint{Arg: arg, Bad: ratText(w.bad), What: w.what, Gamma: w.gamma, Wraps: w.wraps})
 		}
 	}
 	// A value with no variable, or with no Γ factor and no intermediate
@@ -238,7 +242,10 @@ func (c *checker) computeValueFact(d *ast.FuncDecl, fn *types.Func) *ValueFact {
 	// log-gamma values) is worth a fact too: the digits its sum loses
 	// are judged where a caller exponentiates it (lgammadigits.go).
 	if len(f.Weak) == 0 && !fc.formedValue(res, roots, value, isLog, t) && !(isLog && len(value.Gamma) >= 2) {
-		return nil
+		if isLog || table != nil || !fc.runningValue(res, roots, value, t) {
+			return nil
+		}
+		f.Running = true
 	}
 	return f
 }
@@ -278,6 +285,31 @@ func (fc *fnCtx) formedValue(res *vm.Result, roots []ast.Expr, value *vm.Term, i
 		}
 	}
 	return true
+}
+
+// runningValue reports whether every root returns the accumulator of a
+// loop, a running product, whose value is a binomial coefficient in a
+// float type, and n can reach the first central coefficient that leaves
+// the type there (ValueFact.Running).
+func (fc *fnCtx) runningValue(res *vm.Result, roots []ast.Expr, value *vm.Term, t numType) bool {
+	form := vm.Recognise(value)
+	if form.Kind != vm.Binomial || !t.Float {
+		return false
+	}
+	first := thresholds.CentralBinomial(t.Num).FirstBad
+	for _, r := range roots {
+		obj := fc.c.objOf(fc.stripConv(r))
+		acc := false
+		for _, l := range res.Loops {
+			for _, a := range l.Accs {
+				acc = acc || obj != nil && a.Obj == obj && len(a.Ops) > 0 && !l.Exits
+			}
+		}
+		if !acc || !fc.reaches(res, form.Args[0], r, first) {
+			return false
+		}
+	}
+	return len(roots) > 0
 }
 
 // reaches reports whether the affine form a can be at least first at
@@ -331,7 +363,7 @@ func (fc *fnCtx) tableBranch(res *vm.Result, others []ast.Expr, value *vm.Term, 
 	}
 	n, alpha, beta, ok := oneVar(form.Args[0])
 	idx, isParam := ps[n.Obj]
-	if !ok || !isParam || n.Field != nil || n.Loop != nil || alpha.Sign() <= 0 {
+	if !ok || !isParam || idx == recvParam || n.Field != nil || n.Loop != nil || alpha.Sign() <= 0 {
 		return vm.Sym{}, nil, false
 	}
 	var hi int64 = math.MinInt64
@@ -413,7 +445,7 @@ func (fc *fnCtx) valueCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	if f == nil || f.Log {
 		return nil
 	}
-	return f.Value.Term(affineArgs(args))
+	return f.Value.Term(fc.factArgsOf(call, affineArgs(args)))
 }
 
 // logCallee gives t for a call of a function whose ValueFact says it
@@ -423,7 +455,7 @@ func (fc *fnCtx) logCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 	if f == nil || !f.Log {
 		return nil
 	}
-	return f.Value.Term(affineArgs(args))
+	return f.Value.Term(fc.factArgsOf(call, affineArgs(args)))
 }
 
 // formedCall reports whether call calls a function whose ValueFact is a
@@ -431,7 +463,7 @@ func (fc *fnCtx) logCallee(call *ast.CallExpr, args []*vm.Term) *vm.Term {
 // of log-gamma differences in another function), or its logarithm.
 func (fc *fnCtx) formedCall(call *ast.CallExpr) bool {
 	f := fc.c.valueFactOf(fc.c.calleeOf(call))
-	return f != nil && len(f.Weak) == 0
+	return f != nil && len(f.Weak) == 0 && !f.Running
 }
 
 // affineArgs returns the arguments that are affine forms; the others
@@ -446,6 +478,81 @@ func affineArgs(args []*vm.Term) []vm.Affine {
 	return out
 }
 
+// factArgsOf returns what a fact's variables are at call: the
+// arguments' values, and the fields of the receiver where call is a
+// method call on a variable that keeps its value in the caller (a
+// parameter or receiver never assigned), read as the caller's own
+// model reads them (vm.Sym{Obj: receiver, Field: field}).
+func (fc *fnCtx) factArgsOf(call *ast.CallExpr, params []vm.Affine) *factArgs {
+	out := &factArgs{params: params}
+	c := fc.c
+	sel, ok := ast.Unparen(call.Fun).(*ast.SelectorExpr)
+	if !ok {
+		return out
+	}
+	s := c.pass.TypesInfo.Selections[sel]
+	fn := c.calleeOf(call)
+	id, isIdent := ast.Unparen(sel.X).(*ast.Ident)
+	if s == nil || s.Kind() != types.MethodVal || fn == nil || !isIdent {
+		return out
+	}
+	base := c.pass.TypesInfo.Uses[id]
+	if base == nil || !fc.stableVar(base) {
+		return out
+	}
+	typ := c.pass.TypesInfo.TypeOf(sel.X)
+	out.recv = func(name string) (vm.Affine, bool) {
+		obj, index, _ := types.LookupFieldOrMethod(typ, true, fn.Pkg(), name)
+		f, ok := obj.(*types.Var)
+		if !ok || !f.IsField() || len(index) != 1 {
+			return vm.Affine{}, false
+		}
+		return vm.Var(vm.Sym{Obj: base, Field: f}), true
+	}
+	return out
+}
+
+// stableVar reports whether v is a parameter or the receiver of the
+// function (not a closure's) that no statement of it assigns, whose
+// fields it assigns to nowhere and whose address it never takes: its
+// fields hold at every call what they held at entry.
+func (fc *fnCtx) stableVar(v types.Object) bool {
+	d, ok := fc.node.(*ast.FuncDecl)
+	if !ok || d.Body == nil {
+		return false
+	}
+	declared := false
+	for _, fl := range []*ast.FieldList{d.Recv, d.Type.Params} {
+		if fl != nil && fl.Pos() <= v.Pos() && v.Pos() < fl.End() {
+			declared = true
+		}
+	}
+	if !declared {
+		return false
+	}
+	changed := false
+	assigned.EachTarget(d.Body, nil, func(e ast.Expr, _ ast.Node) bool {
+		for {
+			switch x := ast.Unparen(e).(type) {
+			case *ast.SelectorExpr:
+				e = x.X
+				continue
+			case *ast.IndexExpr:
+				e = x.X
+				continue
+			case *ast.StarExpr:
+				e = x.X
+				continue
+			case *ast.Ident:
+				changed = fc.c.pass.TypesInfo.Uses[x] == v
+			}
+			break
+		}
+		return !changed
+	})
+	return !changed
+}
+
 // weak is an intermediate of a root in the caller's variables: it is
 // wrong once arg ≥ bad.
 type weak struct {
@@ -455,6 +562,7 @@ type weak struct {
 	via   string   // the callee's own weak intermediate, when it is one
 	call  ast.Expr // the call that holds it
 	gamma bool
+	wraps bool // an integer intermediate, which wraps
 }
 
 // weakPoints returns the intermediates of root that can break, in the
@@ -522,7 +630,8 @@ func (fc *fnCtx) callWeak(res *vm.Result, call *ast.CallExpr) []weak {
 		if !ok {
 			return nil
 		}
-		return []weak{{arg: a, bad: big.NewRat(ff.FirstBad, 1), what: src(call), call: call}}
+		t, _ := c.numOf(c.pass.TypesInfo.TypeOf(call))
+		return []weak{{arg: a, bad: big.NewRat(ff.FirstBad, 1), what: src(call), call: call, wraps: !t.Float}}
 	}
 	vf := c.valueFactOf(fn)
 	if vf == nil {
@@ -533,13 +642,14 @@ func (fc *fnCtx) callWeak(res *vm.Result, call *ast.CallExpr) []weak {
 		args[i], _ = argAffine(i)
 	}
 	var out []weak
+	fa := fc.factArgsOf(call, args)
 	for _, w := range vf.Weak {
-		a, ok := w.Arg.Affine(args)
+		a, ok := w.Arg.Affine(fa)
 		bad, ok2 := parseRat(w.Bad)
 		if !ok || !ok2 {
 			continue
 		}
-		out = append(out, weak{arg: a, bad: bad, what: src(call), via: w.What, call: call, gamma: w.Gamma})
+		out = append(out, weak{arg: a, bad: bad, what: src(call), via: w.What, call: call, gamma: w.Gamma, wraps: w.Wraps})
 	}
 	return out
 }
@@ -598,11 +708,24 @@ func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
 // callRoots returns the expressions whose value is whole: returned,
 // assigned or passed to a function the model does not know, when the
 // function's own arithmetic combines them (a product or a quotient) and
-// one of their operands is a call the model knows through a fact.
+// one of their operands is a call the model knows through a fact. A
+// call on its own is a root too where its function's value fact has
+// intermediates that break (a pmf over a factorial helper summed or
+// returned by its caller): the caller's value is wrong where its
+// arguments reach them. Such a call assigned to a local is left to the
+// product that reads the local, or to the code that tests the local
+// for +Inf or NaN.
 func (fc *fnCtx) callRoots() []ast.Expr {
-	var out []ast.Expr
+	var out, calls []ast.Expr
+	var lhsOf = make(map[ast.Expr]types.Object)
 	c := fc.c
 	add := func(e ast.Expr) {
+		if call, ok := fc.stripConv(e).(*ast.CallExpr); ok {
+			if f := c.valueFactOf(c.calleeOf(call)); f != nil && len(f.Weak) > 0 && !f.Log {
+				calls = append(calls, e)
+			}
+			return
+		}
 		b, ok := fc.stripConv(e).(*ast.BinaryExpr)
 		if !ok || b.Op != token.MUL && b.Op != token.QUO {
 			return
@@ -629,11 +752,17 @@ func (fc *fnCtx) callRoots() []ast.Expr {
 				add(r)
 			}
 		case *ast.AssignStmt:
-			for _, r := range n.Rhs {
+			for i, r := range n.Rhs {
+				if len(n.Lhs) == len(n.Rhs) {
+					lhsOf[r] = c.objOf(n.Lhs[i])
+				}
 				add(r)
 			}
 		case *ast.ValueSpec:
-			for _, r := range n.Values {
+			for i, r := range n.Values {
+				if len(n.Names) == len(n.Values) {
+					lhsOf[r] = c.pass.TypesInfo.Defs[n.Names[i]]
+				}
 				add(r)
 			}
 		case *ast.CallExpr:
@@ -650,7 +779,23 @@ func (fc *fnCtx) callRoots() []ast.Expr {
 		}
 		return true
 	})
+	for _, e := range calls {
+		if v := lhsOf[e]; v != nil && (fc.readInRoots(v, out) || fc.testedNonFinite(v)) {
+			continue
+		}
+		out = append(out, e)
+	}
 	return out
+}
+
+// readInRoots reports whether one of roots reads v.
+func (fc *fnCtx) readInRoots(v types.Object, roots []ast.Expr) bool {
+	for _, r := range roots {
+		if mentions(fc.c.pass.TypesInfo, r, v) {
+			return true
+		}
+	}
+	return false
 }
 
 // reportedWithin reports whether a finding starts inside n.
@@ -901,9 +1046,12 @@ func (fc *fnCtx) reportCallRoot(res *vm.Result, root ast.Expr, val *vm.Term, w w
 		what = form.String()
 	}
 	breaks := "overflows to +Inf"
-	if !t.Float {
+	switch {
+	case !t.Float, w.wraps && w.via == "":
 		breaks = "wraps"
-	} else if w.via != "" {
+	case w.wraps:
+		breaks = "is wrong" // a float value over a wrapped integer
+	case w.via != "":
 		breaks = "is +Inf or NaN"
 	}
 	clause, definite := "", false
@@ -1001,6 +1149,29 @@ func (fc *fnCtx) argText(res *vm.Result, w weak) (string, *big.Rat, bool) {
 // helper's +Inf or NaN itself (falling back to a log form, say) is not
 // judged on the value alone.
 func (fc *fnCtx) checksNonFinite(root ast.Expr) bool {
+	tested := fc.nonFiniteTested()
+	if len(tested) == 0 {
+		return false
+	}
+	found := false
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && tested[fc.c.pass.TypesInfo.Uses[id]] {
+			found = true
+		}
+		return !found
+	})
+	return found
+}
+
+// testedNonFinite reports whether the function tests v with math.IsInf
+// or math.IsNaN.
+func (fc *fnCtx) testedNonFinite(v types.Object) bool {
+	return fc.nonFiniteTested()[v]
+}
+
+// nonFiniteTested returns the variables the function tests with
+// math.IsInf or math.IsNaN.
+func (fc *fnCtx) nonFiniteTested() map[types.Object]bool {
 	c := fc.c
 	tested := make(map[types.Object]bool)
 	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
@@ -1011,15 +1182,5 @@ func (fc *fnCtx) checksNonFinite(root ast.Expr) bool {
 		}
 		return true
 	})
-	if len(tested) == 0 {
-		return false
-	}
-	found := false
-	ast.Inspect(root, func(n ast.Node) bool {
-		if id, ok := n.(*ast.Ident); ok && tested[c.pass.TypesInfo.Uses[id]] {
-			found = true
-		}
-		return !found
-	})
-	return found
+	return tested
 }

@@ -42,6 +42,15 @@ func TestValueFactRoundTrip(t *testing.T) {
 	}, {
 		f:    ValueFact{Value: FactTerm{Coef: "1", Gamma: binom}, Log: true, Table: &TableBranch{Param: 0, Max: 20}},
 		want: "value ln Γ(p0 + 1)/(Γ(p1 + 1)·Γ(p0 - p1 + 1)), another return for p0 ≤ 20",
+	}, {
+		// A method's value over its receiver's fields and a parameter:
+		// C(recv.N, p0) as a running product.
+		f: ValueFact{Value: FactTerm{Coef: "1", Gamma: []FactGamma{
+			{Arg: FactAffine{C: "1", Param: []int{recvParam}, K: []string{"1"}, Field: []string{"N"}}, Pow: 1},
+			{Arg: FactAffine{C: "1", Param: []int{0}, K: []string{"1"}}, Pow: -1},
+			{Arg: FactAffine{C: "1", Param: []int{recvParam, 0}, K: []string{"1", "-1"}, Field: []string{"N", ""}}, Pow: -1},
+		}}, Running: true},
+		want: "value Γ(recv.N + 1)/(Γ(p0 + 1)·Γ(-p0 + recv.N + 1)), a running product",
 	}} {
 		var buf bytes.Buffer
 		if err := gob.NewEncoder(&buf).Encode(&c.f); err != nil {

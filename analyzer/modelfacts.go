@@ -31,6 +31,14 @@ type ValueFact struct {
 	// Value (ln C(n, k) as a sum of log-gamma values): a caller's
 	// math.Exp of the call is Value.
 	Log bool
+	// Running reports a binomial coefficient in a float type returned
+	// as the accumulator of a running product (w *= (n−1+i)/i), with no
+	// weak point the model names: it is +Inf where the coefficient
+	// leaves the type, if not before. A caller's logarithm of it is
+	// judged (checkLogOfModelValue); the rules that take a value fact
+	// without weak points as formed as one quantity (formedCall) do not
+	// take this one.
+	Running bool
 	// Table, when set, is a return for small inputs that the fact does
 	// not describe (a table lookup, an exact integer product): it runs
 	// only while parameter Table.Param is at most Table.Max, where Value
@@ -64,6 +72,9 @@ func (f *ValueFact) String() string {
 	if len(weak) > 0 {
 		out += ", wrong once " + strings.Join(weak, " or ")
 	}
+	if f.Running {
+		out += ", a running product"
+	}
 	if f.Table != nil {
 		out += fmt.Sprintf(", another return for p%d ≤ %d", f.Table.Param, f.Table.Max)
 	}
@@ -90,12 +101,19 @@ type FactPow struct {
 	Base, Exp FactAffine
 }
 
-// FactAffine is C + Σ K[i]·parameter Param[i], rationals as text.
+// FactAffine is C + Σ K[i]·parameter Param[i], rationals as text. A
+// method's value may read its receiver's fields (o.N, o.Quanta): such a
+// variable has Param −1 and Field[i] the field's name; Field is empty
+// when every variable is a parameter.
 type FactAffine struct {
 	C     string
 	Param []int
 	K     []string
+	Field []string
 }
+
+// recvParam is the Param of a receiver's field in a FactAffine.
+const recvParam = -1
 
 // WeakPoint is an intermediate of the function that is wrong (±Inf,
 // NaN, wrapped) once Arg ≥ Bad: a factorial-valued call or a math.Gamma
@@ -105,22 +123,33 @@ type WeakPoint struct {
 	Bad   string
 	What  string
 	Gamma bool // a math.Gamma value (else a factorial)
+	Wraps bool // an integer factorial, which wraps (else +Inf in a float type)
 }
 
-// paramSyms maps a function's parameter objects to their indices.
+// paramSyms maps a function's parameter objects to their indices, and
+// a method's receiver to recvParam.
 type paramSyms map[types.Object]int
 
-// encodeAffine writes a over the parameters; false when it has another
-// variable.
+// encodeAffine writes a over the parameters and the receiver's fields;
+// false when it has another variable.
 func (ps paramSyms) encodeAffine(a vm.Affine) (FactAffine, bool) {
 	out := FactAffine{C: ratText(a.C)}
+	fields := false
 	for _, l := range a.Terms {
 		i, ok := ps[l.Sym.Obj]
-		if !ok || l.Sym.Field != nil || l.Sym.Loop != nil {
+		if !ok || l.Sym.Loop != nil || l.Sym.Def != nil || (i == recvParam) != (l.Sym.Field != nil) {
 			return FactAffine{}, false
+		}
+		name := ""
+		if l.Sym.Field != nil {
+			name, fields = l.Sym.Field.Name(), true
 		}
 		out.Param = append(out.Param, i)
 		out.K = append(out.K, ratText(l.K))
+		out.Field = append(out.Field, name)
+	}
+	if !fields {
+		out.Field = nil
 	}
 	return out, true
 }
@@ -175,38 +204,91 @@ func parseRat(s string) (*big.Rat, bool) {
 	return r, ok
 }
 
-// Affine decodes a over the placeholders, or over args when given
-// (args[i] for parameter i); false when it is malformed or names a
-// parameter past them.
-func (a FactAffine) Affine(args []vm.Affine) (vm.Affine, bool) {
+// factArgs are what a fact's variables decode into at a call: params[i]
+// for parameter i (the zero Affine where the argument is unknown), and
+// the receiver's fields by name (recv, nil where the receiver is not
+// known). A nil *factArgs decodes into placeholders.
+type factArgs struct {
+	params []vm.Affine
+	recv   func(field string) (vm.Affine, bool)
+	// reading marks a decoding into placeholders (String); fields holds
+	// the placeholders of the receiver's fields of one such decoding,
+	// one variable per name.
+	reading bool
+	fields  map[string]vm.Sym
+}
+
+// recvPlaceholder is the receiver whose fields' placeholders decode a
+// fact for reading (String).
+var recvPlaceholder = types.NewVar(token.Pos(len(placeholders)+1), nil, "recv", types.Typ[types.Float64])
+
+// field returns the value of the receiver's field name: the caller's
+// variable, or a placeholder of its own when args is nil.
+func (args *factArgs) field(name string) (vm.Affine, bool) {
+	if !args.reading {
+		if args.recv == nil {
+			return vm.Affine{}, false
+		}
+		return args.recv(name)
+	}
+	if args.fields == nil {
+		args.fields = make(map[string]vm.Sym)
+	}
+	s, ok := args.fields[name]
+	if !ok {
+		// Distinct positions keep distinct fields apart in the
+		// algebra's order of variables.
+		s = vm.Sym{Obj: recvPlaceholder, Field: types.NewField(token.Pos(len(args.fields)+1), nil, name, types.Typ[types.Float64], false)}
+		args.fields[name] = s
+	}
+	return vm.Var(s), true
+}
+
+// Affine decodes a over args (placeholders when args is nil); false
+// when it is malformed or names a variable args does not know.
+func (a FactAffine) Affine(args *factArgs) (vm.Affine, bool) {
 	if a.C == "" && len(a.Param) == 0 {
 		return vm.Int(0), true // the zero form, as gob leaves it
 	}
 	c, ok := parseRat(a.C)
-	if !ok || len(a.Param) != len(a.K) {
+	if !ok || len(a.Param) != len(a.K) || len(a.Field) != 0 && len(a.Field) != len(a.Param) {
 		return vm.Affine{}, false
+	}
+	if args == nil {
+		args = &factArgs{reading: true}
 	}
 	out := vm.Const(c)
 	for i, p := range a.Param {
 		k, ok := parseRat(a.K[i])
-		if !ok || p < 0 || p >= len(placeholders) {
+		if !ok {
 			return vm.Affine{}, false
 		}
-		x := vm.Var(placeholders[p])
-		if args != nil {
-			if p >= len(args) || args[p].C == nil {
+		var x vm.Affine
+		switch {
+		case p == recvParam && len(a.Field) != 0 && a.Field[i] != "":
+			if x, ok = args.field(a.Field[i]); !ok {
 				return vm.Affine{}, false
 			}
-			x = args[p]
+		case p < 0 || p >= len(placeholders) || len(a.Field) != 0 && a.Field[i] != "":
+			return vm.Affine{}, false
+		case args.reading:
+			x = vm.Var(placeholders[p])
+		case p >= len(args.params) || args.params[p].C == nil:
+			return vm.Affine{}, false
+		default:
+			x = args.params[p]
 		}
 		out = out.Add(x.Scale(k))
 	}
 	return out, true
 }
 
-// Term decodes t with args for the parameters (placeholders when nil);
-// nil when it is malformed or an argument it needs is unknown.
-func (t FactTerm) Term(args []vm.Affine) *vm.Term {
+// Term decodes t with args (placeholders when nil); nil when it is
+// malformed or an argument it needs is unknown.
+func (t FactTerm) Term(args *factArgs) *vm.Term {
+	if args == nil {
+		args = &factArgs{reading: true} // one placeholder per field across the term
+	}
 	c, ok := parseRat(t.Coef)
 	if !ok {
 		return nil

@@ -673,6 +673,9 @@ func (fc *fnCtx) reportWrongCall(fn *types.Func, call *ast.CallExpr, callee *typ
 		msg:      fmt.Sprintf("%s, which is wrong %s (%s)%s", verbPart, where, origin, clause),
 		related:  c.relatedDef(callee.Name(), callee.Pos()),
 	})
+	if !c.reported[reportKey{call.Pos(), catWrongCallee}] && !c.reported[reportKey{call.Pos(), catWrongCallee + definiteSuffix}] {
+		return // silenced by a directive: its callers are silent too
+	}
 	inputs := fc.carriedInputs(call, in, arg)
 	if len(inputs) == 0 || !numericResult(fc.signature()) {
 		return

@@ -49,9 +49,9 @@ func poissonBig(k int, lambda float64) *big.Float {
 }
 
 func TestWrongCallersAgainstBig(t *testing.T) {
-	// Tail(k, λ) returns Poisson's value: right at k = 170, the last k
-	// below the stated 171, and 0 at 171 where the true term is a
-	// normal float64 (λ = 1.5: about 1e-277 and 1e-280).
+	// Poisson(k, λ), the root under CDF and its callers: right at
+	// k = 170, the last k below the stated 171, and 0 at 171 where the
+	// true term is a normal float64 (λ = 1.5: about 1e-277 and 1e-280).
 	for _, tc := range []struct {
 		k     int
 		wrong bool
@@ -64,7 +64,9 @@ func TestWrongCallersAgainstBig(t *testing.T) {
 		}
 	}
 	// CDF(200, 180) sums Poisson's terms: NaN, where the exact sum is
-	// about 0.93 (the value math/big gives, checked to lie in (0, 1)).
+	// about 0.93 (the value math/big gives, checked to lie in (0, 1)):
+	// Tail, Upper, Percent, Odds, Scaled, Mean and Chance return it or
+	// build their results from it by arithmetic that keeps a NaN.
 	sum, exact := 0.0, new(big.Float).SetPrec(512)
 	for i := 0; i <= 200; i++ {
 		sum += poissonF64(i, 180)
@@ -73,15 +75,15 @@ func TestWrongCallersAgainstBig(t *testing.T) {
 	if e, _ := exact.Float64(); !math.IsNaN(sum) || e <= 0.5 || e >= 1 {
 		t.Errorf("CDF(200, 180) = %g, exact %g: want NaN against a probability in (0.5, 1)", sum, e)
 	}
-	// Share(62, 31) converts pairs(62, 31), whose r*(n−k+i) wraps int64
-	// before the division: the float64 count differs from
-	// big.Int.Binomial(62, 31), which fits int64.
+	// Share(62, 31) converts doubled(62, 31) = 2·r, whose r*(n−k+i)
+	// wraps int64 before the division: r differs from
+	// big.Int.Binomial(62, 31), which fits int64 (and twice it float64).
 	r := int64(1)
 	for i := int64(1); i <= 31; i++ {
 		r = r * (62 - 31 + i) / i
 	}
 	want := new(big.Int).Binomial(62, 31)
 	if !want.IsInt64() || r == want.Int64() {
-		t.Errorf("pairs(62, 31) = %d, exact %s: want a wrapped value against a count that fits int64", r, want)
+		t.Errorf("doubled's r at (62, 31) = %d, exact %s: want a wrapped value against a count that fits int64", r, want)
 	}
 }

@@ -193,3 +193,16 @@ func (f *Func) lenOf(call *ast.CallExpr) (types.Object, bool) {
 	}
 	return f.standIn(v, lenField), true
 }
+
+// FieldAt returns the range of field fv of the local struct variable
+// base (a parameter or receiver of struct type included) just before
+// node n executes: guards on base.fv before n narrow it as they narrow
+// a variable. It is Top where the function never reads the field as a
+// tracked one (a pointer's field, an embedded one).
+func (f *Func) FieldAt(base types.Object, fv *types.Var, n ast.Node) Interval {
+	v, ok := f.fields[fieldKey{base, fv}]
+	if !ok {
+		return Top()
+	}
+	return f.At(v, n)
+}

@@ -10,7 +10,7 @@ func factF(n int) float64 { // want factF:`factorial of parameter 0,`
 	return f
 }
 
-func binomInt(n, k int) int {
+func binomInt(n, k int) int { // want binomInt:`binomial of parameter 0, breaks from 62`
 	if k == 0 || k == n {
 		return 1
 	}
@@ -41,7 +41,7 @@ func HypergeomCDF(k, N, K, n int) float64 {
 func NegBinomCDF(k, r int, p float64) float64 { // want NegBinomCDF:`wrong for some k or some r`
 	sum := 0.0
 	for i := 0; i <= k; i++ {
-		sum += float64(binomInt(i+r-1, i)) * math.Pow(p, float64(r)) * math.Pow(1-p, float64(i)) // want `NegBinomCDF builds its result from binomInt\(i\+r-1, i\), which is wrong for some values of n \(reported at exacttest/dist\.go:17\)`
+		sum += float64(binomInt(i+r-1, i)) * math.Pow(p, float64(r)) * math.Pow(1-p, float64(i)) // want `binomial probability C\(i \+ r - 1, i\)·math\.Pow\(p, float64\(r\)\)·math\.Pow\(1-p, float64\(i\)\) in int: binomInt\(i \+ r - 1, …\) breaks for i \+ r - 1 ≥ 62 although the product with the powers may still fit`
 	}
 	return sum
 }

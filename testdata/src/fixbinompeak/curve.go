@@ -108,7 +108,7 @@ func Sextics(n int) float64 {
 
 // Ramp multiplies the ratio in the other way round, as a product of
 // the step's own ratio: the same running binomial, with a float index.
-func Ramp(n float64) float64 {
+func Ramp(n float64) float64 { // want Ramp:`value Γ\(p0 \+ 1\)/Γ\(1/2\*p0 \+ 1\)\^2, a running product`
 	r := 1.0
 	for i := 1.0; i <= n/2; i++ {
 		r *= (n - i + 1) / i

@@ -9,7 +9,7 @@ type Trial struct {
 }
 
 // ProbExactly is the chance that exactly k seeds of the tray germinate.
-func (t *Trial) ProbExactly(k int) float64 { // want ProbExactly:`wrong for some t or some k`
+func (t *Trial) ProbExactly(k int) float64 { // want ProbExactly:`value Γ\(recv\.Seeds \+ 1\)·\(recv\.Rate\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ recv\.Seeds \+ 1\)·\(-recv\.Rate \+ 1\)\^\(p0 - recv\.Seeds\)\), wrong once recv\.Seeds \+ 1 ≥ 171\.624377` ProbExactly:`wrong for k ≥ 170\.624377`
 	c := math.Gamma(float64(t.Seeds+1)) / (math.Gamma(float64(k+1)) * math.Gamma(float64(t.Seeds-k+1))) // want `ratio of math\.Gamma values in float64: math\.Gamma\(float64\(t\.Seeds \+ 1\)`
 	return c * math.Pow(t.Rate, float64(k)) * math.Pow(1-t.Rate, float64(t.Seeds-k))
 }

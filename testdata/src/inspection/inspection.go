@@ -66,18 +66,19 @@ func PanelDefective(k, n int, p float64) float64 {
 	return probkit.SmallChoose(float64(n), float64(k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k))
 }
 
-// ChanceOf passes Defective's value on, wrong where Defective's is: it
-// is reported as Defective's caller, and Defective's fix makes it right.
+// ChanceOf passes Defective's value on: wrong where Defective is, from
+// n = 171 (Fact(171) = +Inf), while C(n, 1)·p·(1−p)^(n−1) is small;
+// Defective is the one to fix.
 func ChanceOf(k, n int, p float64) float64 { // want ChanceOf:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1 ≥ 171` ChanceOf:`wrong for n ≥ 171`
-	return Defective(k, n, p) // want `ChanceOf returns Defective\(k, n, p\)'s value, which is wrong from n = 171 \(reported at inspection/inspection\.go:15\); n is not bounded here`
+	return Defective(k, n, p) // want `ChanceOf computes C\(n, k\)·p\^k·\(1−p\)\^\(-k \+ n\) in float64, which fits where Defective\(k, n, p\) already is \+Inf or NaN from n = 171 \(its probkit\.Choose\(float64\(n\), float64\(k\)\) breaks first\)`
 }
 
-// Cumulative sums Defective's terms: NaN where one of them is, reported
-// as Defective's caller.
-func Cumulative(k, n int, p float64) float64 { // want Cumulative:`wrong for n ≥ 171`
+// Cumulative sums Defective's terms: each is NaN from n = 171, and so
+// is the sum, a probability.
+func Cumulative(k, n int, p float64) float64 { // want Cumulative:`wrong for some k or some n`
 	sum := 0.0
 	for i := 0; i <= k; i++ {
-		sum += Defective(i, n, p) // want `Cumulative builds its result from Defective\(i, n, p\), which is wrong from n = 171 \(reported at inspection/inspection\.go:15\); n is not bounded here`
+		sum += Defective(i, n, p) // want `Cumulative computes C\(n, i\)·p\^i·\(1−p\)\^\(n - i\) in float64, which fits where Defective\(i, n, p\) already is \+Inf or NaN from n = 171`
 	}
 	return sum
 }

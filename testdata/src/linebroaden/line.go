@@ -17,7 +17,7 @@ func collisionCount(n float64) float64 { // want collisionCount:`factorial of pa
 }
 
 // PressureTerm is the weight of the k-collision component of the profile.
-func (l Line) PressureTerm(k int) float64 { // want PressureTerm:`wrong for k ≥ 171`
+func (l Line) PressureTerm(k int) float64 { // want PressureTerm:`value \(recv\.Density\)\^\(p0\)·exp\(-recv\.Density\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 171` PressureTerm:`wrong for k ≥ 171`
 	return math.Pow(l.Density, float64(k)) / collisionCount(float64(k)) * math.Exp(-l.Density) // want `term with l\.Density\^k over \(float64\(k\)\)! in float64: the divisor \(floa`
 }
 

@@ -7,9 +7,9 @@ import "math"
 func EngsetBlocking(sources, servers int, alpha float64) float64 { // want EngsetBlocking:`wrong for sources ≥ 22`
 	den := 0.0
 	for i := 0; i <= servers; i++ {
-		den += float64(binom(sources-1, i)) * math.Pow(alpha, float64(i)) // want `EngsetBlocking builds its result from binom\(sources-1, i\), which is wrong from n = 21 \(reported at queuedesk/util\.go:21\); sources - 1, passed as n, is not bounded here`
+		den += float64(binom(sources-1, i)) * math.Pow(alpha, float64(i)) // want `binom\(sources-1, i\) computes C\(sources - 1, i\) in int, which wraps for sources - 1 ≥ 21 at i = \(sources - 1\)/2, before the conversion to float64`
 	}
-	return float64(binom(sources-1, servers)) * math.Pow(alpha, float64(servers)) / den
+	return float64(binom(sources-1, servers)) * math.Pow(alpha, float64(servers)) / den // want `binom\(sources-1, servers\) computes C\(sources - 1, servers\) in int, which wraps for sources - 1 ≥ 21`
 }
 
 // EngsetLog is EngsetBlocking with the terms in log space.

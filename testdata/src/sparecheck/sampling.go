@@ -46,7 +46,7 @@ type DoublePlan struct {
 func (d DoublePlan) AcceptProb(m float64) float64 { // want AcceptProb:`wrong for some d`
 	p := 0.0
 	for k := d.AcceptFirst; k >= 0; k-- {
-		p += poissonTerm(k, m) // want `AcceptProb builds its result from poissonTerm\(k, m\), which is wrong from k = 21 \(reported at sparecheck/sampling\.go:36\); k is not bounded here`
+		p += poissonTerm(k, m) // want `AcceptProb computes m\^k·e\^\(−m\)/k! in float64, which fits where poissonTerm\(k, m\) already is wrong from k = 21 \(its factU\(uint64\(k\)\) breaks first\)`
 	}
 	return p
 }

@@ -33,7 +33,7 @@ type Oscillators struct {
 }
 
 // Multiplicity is C(Quanta+N-1, Quanta), as a running product.
-func (o Oscillators) Multiplicity() float64 {
+func (o Oscillators) Multiplicity() float64 { // want Multiplicity:`value Γ\(recv\.N \+ recv\.Quanta\)/\(Γ\(recv\.N\)·Γ\(recv\.Quanta \+ 1\)\), a running product`
 	w := 1.0
 	for i := 1; i <= o.Quanta; i++ {
 		w *= float64(o.N-1+i) / float64(i)
@@ -42,6 +42,6 @@ func (o Oscillators) Multiplicity() float64 {
 }
 
 // Entropy is ln of the multiplicity, in units of k_B.
-func (o Oscillators) Entropy() float64 {
-	return math.Log(o.Multiplicity())
+func (o Oscillators) Entropy() float64 { // want Entropy:`value ln Γ\(recv\.N \+ recv\.Quanta\)/\(Γ\(recv\.N\)·Γ\(recv\.Quanta \+ 1\)\)`
+	return math.Log(o.Multiplicity()) // want `math\.Log of o\.Multiplicity\(\), whose value is C\(o\.N \+ o\.Quanta - 1, o\.N - 1\): it overflows to \+Inf for o\.N \+ o\.Quanta - 1 ≥ 1030 at o\.N - 1 = \(o\.N \+ o\.Quanta - 1\)/2 \(C\(1029, 514\) ≈ 1\.43e308 is the largest central one that fits\)`
 }

@@ -38,14 +38,15 @@ func TrayShares(sizes []int) int64 {
 }
 
 // FloatShares keeps the product in float64, whose +Inf past the type is
-// IEEE's answer, but converts lotChoose's int64 count, which wraps
-// inside its loop before C(n, k) leaves int64: reported as lotChoose's
-// caller (wrong-callee), with no category of its own here.
+// IEEE's answer: no multinomial finding. Each factor is converted only
+// after lotChoose has formed it in int64, whose loop wraps from total =
+// 62 at l = total/2 (lots {31, 31}: C(62, 31) ≈ 4.65e17, math/big),
+// far below float64's limit: a late conversion.
 func FloatShares(lots []int64) float64 {
 	ways, total := 1.0, int64(0)
 	for _, l := range lots {
 		total += l
-		ways *= float64(lotChoose(total, l)) // want `FloatShares builds its result from lotChoose\(total, l\), which is wrong for some values of n \(reported at factorialratio/parts\.go:12\); total, passed as n, is not bounded here`
+		ways *= float64(lotChoose(total, l)) // want `lotChoose\(total, l\) computes C\(total, l\) in int64, which wraps for total ≥ 62 at l = total/2, before the conversion to float64 \(which holds C\(n, n/2\) up to n = 1029\)`
 	}
 	return ways
 }
@@ -91,10 +92,10 @@ func Splits(n, k, j int64) int64 { // want Splits:`wrong for some n or some k or
 	return lotChoose(n, k) * lotChoose(n-k, j) // want `product of binomial coefficients lotChoose\(n, k\) \* lotChoose\(n-k, j\) in int64 wraps where it leaves int64 while every factor fits: first at n = \d+, k = \d+, j = \d+ by the largest argument, where lotChoose\(n, k\) ≈ \S+ and lotChoose\(n-k, j\) ≈ \S+ fit and the product ≈ \S+ does not`
 }
 
-// FloatSplits multiplies in float64, where no product wraps; its
-// factors are lotChoose's counts, reported as lotChoose's caller.
-func FloatSplits(n, k, j int64) float64 { // want FloatSplits:`wrong for some n`
-	return float64(lotChoose(n, k)) * float64(lotChoose(n-k, j)) // want `FloatSplits builds its result from lotChoose\(n, k\), which is wrong for some values of n \(reported at factorialratio/parts\.go:12\)`
+// FloatSplits multiplies in float64: no product finding, but each
+// coefficient is formed in int64 first (late conversions).
+func FloatSplits(n, k, j int64) float64 { // want FloatSplits:`wrong for some n or some k`
+	return float64(lotChoose(n, k)) * float64(lotChoose(n-k, j)) // want `lotChoose\(n, k\) computes C\(n, k\) in int64, which wraps for n ≥ 62 at k = n/2` `lotChoose\(n-k, j\) computes C\(n - k, j\) in int64, which wraps for n - k ≥ 62 at j = \(n - k\)/2`
 }
 
 // SmallSplits sows at most 30 seeds, whose trinomials fit int64: silent.

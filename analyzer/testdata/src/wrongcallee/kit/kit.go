@@ -8,6 +8,15 @@ func Arrangements(n, k int) float64 { // want Arrangements:`value Γ\(p0 \+ 1\)/
 	return fact(n) / fact(n-k) // want `permutation count`
 }
 
+// Total is the number of ways to seat some of n guests in a row.
+func Total(n int) float64 { // want Total:`wrong for some n`
+	s := 0.0
+	for j := 0; j <= n; j++ {
+		s += Arrangements(n, j) // want `Total computes`
+	}
+	return s
+}
+
 func fact(n int) float64 { // want fact:`factorial of parameter 0, breaks from 171`
 	f := 1.0
 	for i := 2; i <= n; i++ {
