@@ -36,6 +36,13 @@
 // approximations standing for n! (about 1/(12n) off; n^n overflows
 // before n! does).
 //
+// Last, it reports the callers of a function found wrong: a function
+// that returns that value, or sums, multiplies, divides, subtracts or
+// converts it into its result, where nothing it does keeps the
+// arguments out of the callee's wrong region. The message names the
+// origin; the callee's fix makes the caller right, so there is none of
+// its own.
+//
 // A function whose result is a factorial of a parameter carries a fact,
 // so its calls are known factorial values in importing packages too. A
 // factorial function that bounds its own parameter is safe, and neither
