@@ -127,6 +127,8 @@ var diffCases = []diffCase{
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// The loop's n is the sum across+up; no side ≤ 0 runs it.
+	{pkg: "fixloop", fn: "Routes", loops: []string{"a := -3; a <= 45; a++", "u := 0; u <= 45; u++"}, args: "a, u", typ: "int", ref: refRoutes},
 	// Factors written off the counter; k past n, where the falling
 	// factorial is 0 (the unsigned loop start wraps for k > n+2).
 	{pkg: "fixloop", fn: "Picks", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refFalling},
@@ -245,6 +247,7 @@ var diffCases = []diffCase{
 var negativeNCases = []diffCase{
 	{pkg: "fixloop", fn: "Ways", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refLoopChoose, noBreak: true},
 	{pkg: "fixloop", fn: "WaysChecked", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refCheckedChoose, noBreak: true},
+	{pkg: "fixloop", fn: "Routes", loops: []string{"a := 0; a <= 40; a++", "u := -80; u <= 0; u += 3"}, args: "a, u", typ: "int", ref: refRoutes, noBreak: true},
 }
 
 // generalisedChoose reports whether the helper module in the tree

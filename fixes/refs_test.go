@@ -301,6 +301,10 @@ func loopChooseBig(n, k int64) *big.Int {
 
 func refLoopChoose(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]), int64(x[1]))) }
 
+// refRoutes is the loop r = r·(a+u−i)/(i+1) over i = 0..a−1: the same
+// generalised coefficient, C(a+u, a), with 1 for a ≤ 0 (no trip).
+func refRoutes(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]+x[1]), int64(x[0]))) }
+
 // refCheckedChoose is a binomial loop behind "if k < 0 { return 0 }".
 func refCheckedChoose(x []float64) *big.Float {
 	if x[1] < 0 {

@@ -104,3 +104,15 @@ func Interleavings(n, k uint64) uint64 {
 	}
 	return num / den
 }
+
+// Routes counts the monotone routes across a grid of across × up
+// blocks, C(across+up, across), with the multiplicative loop written
+// over the route's length: its n is the sum across+up, which no single
+// variable of the loop names.
+func Routes(across, up int) int {
+	r := 1
+	for i := 0; i < across; i++ { // want "multiplicative binomial loop in int: the product r \\* \\(across \\+ up - i\\) wraps before the division for across \\+ up ≥ 62"
+		r = r * (across + up - i) / (i + 1)
+	}
+	return r
+}
