@@ -310,7 +310,11 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	if !t.Float && !fc.productReturned(al) {
 		// The integer helper panics where the product leaves t, but a
 		// product divided or reduced afterwards (n!/(n−k)! over k!, a
-		// binomial) may give a result that fits: leave it as written.
+		// binomial) may give a result that fits: leave it as written,
+		// unless it is divided by k! itself, which makes C(n, k).
+		if q := fc.loopQuotient(al); q != nil {
+			m = q
+		}
 	} else if n := fc.fallingBase(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
 	} else if n, k := fc.fallingSpan(al); n != nil {
@@ -549,6 +553,62 @@ func (fc *fnCtx) fallingBase(al *accLoop) ast.Expr {
 		return nil
 	}
 	return b.X
+}
+
+// loopQuotient is the match of num / den, where the falling-factorial
+// loop al leaves num = n(n−1)…(n−k+1) and a factorial loop of the same
+// function leaves den = k!: the quotient is C(n, k) (ShapeLoopQuotient;
+// the fixer checks the loops and the flow between them itself). nil
+// where there is no such pair, or the quotient is kept as written by an
+// allow directive, as the fix leaves it outside 0 ≤ k ≤ n.
+func (fc *fnCtx) loopQuotient(al *accLoop) *fixes.Match {
+	n, k := fc.fallingBase(al), al.count
+	if n == nil {
+		n, k = fc.fallingSpan(al)
+	}
+	kl, ok := fc.linear(k)
+	body := funcBody(fc.node)
+	if n == nil || !ok || al.early || al.accInit == nil || body == nil {
+		return nil
+	}
+	var den *accLoop
+	fc.eachLoop(body, func(o *accLoop) {
+		if den != nil || o.acc == al.acc || o.kind != kindFactorial || o.top == nil || o.topOff != 0 || o.early || o.div != nil || o.accInit == nil {
+			return
+		}
+		if tl, ok := fc.linear(o.top); ok && tl.equal(kl) {
+			den = o
+		}
+	})
+	if den == nil {
+		return nil
+	}
+	var q *ast.BinaryExpr
+	count := 0
+	ast.Inspect(body, func(x ast.Node) bool {
+		if b, ok := x.(*ast.BinaryExpr); ok && b.Op == token.QUO && fc.c.objOf(b.X) == al.acc && fc.c.objOf(b.Y) == den.acc {
+			q = b
+			count++
+		}
+		return true
+	})
+	if count != 1 {
+		return nil
+	}
+	if fi := fc.c.fileOf(q.Pos()); fi == nil || fi.dirs.allowed(fc.c.pass.Fset, q.Pos()) {
+		return nil
+	}
+	return &fixes.Match{
+		Shape:   fixes.ShapeLoopQuotient,
+		Node:    q,
+		Args:    []ast.Expr{n, k},
+		Result:  fc.c.pass.TypesInfo.TypeOf(q),
+		Acc:     al.acc,
+		AccInit: al.accInit,
+		Loop:    al.shape.stmt,
+		Func:    fc.node,
+		Divisor: &fixes.Match{Acc: den.acc, AccInit: den.accInit, Loop: den.shape.stmt},
+	}
 }
 
 // fallingSpan returns n and k when the loop counts up by one from n−k+1

@@ -127,6 +127,13 @@ var diffCases = []diffCase{
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// A falling factorial over k! in two loops: C(n, k) exactly where
+	// it fits, though the numerator wraps from n = 21; outside
+	// 0 ≤ k ≤ n the quotient as written, 1 with no trip and 0 past a
+	// zero factor (k ≤ 63 keeps the wrapped k! nonzero).
+	{pkg: "fixloop", fn: "Committees", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int64", ref: refChoose},
+	{pkg: "fixloop", fn: "Committees", loops: []string{"n := 0; n <= 60; n++", "k := -3; k <= n+3; k++"}, args: "n, k", typ: "int64", ref: refLoopChoose},
+	{pkg: "fixloop", fn: "Interleavings", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
 	// The loop's n is the sum across+up; no side ≤ 0 runs it.
 	{pkg: "fixloop", fn: "Routes", loops: []string{"a := -3; a <= 45; a++", "u := 0; u <= 45; u++"}, args: "a, u", typ: "int", ref: refRoutes},
 	// Factors written off the counter; k past n, where the falling
