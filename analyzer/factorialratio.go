@@ -117,6 +117,12 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	m.Shape = shape
 	if shape == fixes.ShapeNone {
 		m.Args = nil
+		if len(p.den) > 0 {
+			// Another ratio of float factorials, a 2×2 table's
+			// (a+b)!(c+d)!(a+c)!(b+d)!/(n!a!b!c!d!): in log space
+			// where its factors leave float64.
+			m = fc.factorialChain(root, append(p.num[:len(p.num):len(p.num)], p.den...))
+		}
 	}
 	fc.reportRatio(root, p, m, append([]factor{u}, dens...), u, definite, msg+clause)
 }

@@ -76,6 +76,9 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "Shifts", loops: []string{"a := 0; a <= 90; a += 9", "b := 0; b <= 90; b += 10", "c := 0; c <= 40; c += 8"}, args: "a, b, c", typ: "float64", ref: refMultinomial},
 	{pkg: "fixratio", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
+	// Nine float factorials over one another, in log space where they
+	// leave float64; below 0 each is the loop's empty product, as written.
+	{pkg: "fixratio", fn: "ShiftTable", loops: []string{"a := 0; a <= 300; a += 37", "b := 0; b <= 300; b += 41", "c := -2; c <= 200; c += 53", "d := 0; d <= 200; d += 29"}, args: "a, b, c, d", typ: "float64", ref: refTable},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
 	// The power multiplied up by a loop: +Inf from lambda^k past
 	// float64, the term NaN or 0 where it is not.

@@ -691,10 +691,14 @@ func buildProductChain(b *builder) error {
 	if !lp.chainable(e) || lp.leaves(e) < 2 {
 		return fmt.Errorf("not a product of two or more powers and Gamma values: %s", b.text(e))
 	}
-	if b.commentIn(e) {
-		return errors.New("a comment inside the product")
+	text := lp.chain(e) + ".Float64()"
+	if b.commentCopied(e) {
+		// Copied into the one line of the chain, a // comment would
+		// swallow the rest of it; a comment between the factors goes
+		// above the line (keepComments).
+		return errors.New("a comment inside a factor of the product")
 	}
-	b.replace(e.Pos(), e.End(), lp.chain(e)+".Float64()")
+	b.replace(e.Pos(), e.End(), text)
 	b.message = fmt.Sprintf("Take the product in log space where its factors leave float64 (%s.Product) (imports %s)", lp.pkg, HelperPath)
 	return nil
 }

@@ -305,6 +305,19 @@ func refLoopChoose(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0])
 // generalised coefficient, C(a+u, a), with 1 for a ≤ 0 (no trip).
 func refRoutes(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]+x[1]), int64(x[0]))) }
 
+// refTable is a 2×2 table's probability with its margins fixed,
+// (a+b)!(c+d)!(a+c)!(b+d)!/(n!·a!·b!·c!·d!), n = a+b+c+d (common
+// practice: the hypergeometric term of Fisher's exact test), over
+// factorials that are 1 below 2, as a loop from 2 computes them.
+func refTable(x []float64) *big.Float {
+	a, b, c, d := int64(x[0]), int64(x[1]), int64(x[2]), int64(x[3])
+	num := new(big.Int).Mul(factorialBig(a+b), factorialBig(c+d))
+	num.Mul(num, factorialBig(a+c)).Mul(num, factorialBig(b+d))
+	den := new(big.Int).Mul(factorialBig(a+b+c+d), factorialBig(a))
+	den.Mul(den, factorialBig(b)).Mul(den, factorialBig(c)).Mul(den, factorialBig(d))
+	return quo(bf(num), bf(den))
+}
+
 // refCheckedChoose is a binomial loop behind "if k < 0 { return 0 }".
 func refCheckedChoose(x []float64) *big.Float {
 	if x[1] < 0 {
