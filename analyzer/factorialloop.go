@@ -84,6 +84,9 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		if st := fc.seriesTermMatch(al); st != nil {
 			return st
 		}
+		if pm := fc.productReadMatch(al); pm != nil {
+			return pm
+		}
 		m.Shape = fixes.ShapeNone
 	}
 	if al.top != nil {
@@ -103,6 +106,49 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		}
 	}
 	return m
+}
+
+// productReadMatch is the match of a float64 factorial loop whose
+// product is read after the loop as a factor of a larger product, or of
+// a square root of one, 1/math.Sqrt(math.Pow(2, n)*f*math.Sqrt(math.Pi)):
+// n! may leave float64 where that product, or its root, does not. The
+// fix carries the accumulator as a Product (ShapeLogSpaceTerm), which
+// forms the same float64 values step by step and keeps the logarithm
+// beside them; the fixer checks that the variable can be carried. nil
+// where no read after the loop is such a factor.
+func (fc *fnCtx) productReadMatch(al *accLoop) *fixes.Match {
+	info := fc.c.pass.TypesInfo
+	body := funcBody(fc.node)
+	if al.kind != kindFactorial || al.accInit == nil || body == nil {
+		return nil
+	}
+	if t, ok := info.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]).Underlying().(*types.Basic); !ok || t.Kind() != types.Float64 {
+		return nil
+	}
+	var m *fixes.Match
+	ast.Inspect(body, func(n ast.Node) bool {
+		id, ok := n.(*ast.Ident)
+		if m != nil || !ok || id.Pos() < al.shape.stmt.End() || info.Uses[id] != al.acc {
+			return m == nil
+		}
+		if root := fc.productOrRootOf(id); root != id {
+			m = &fixes.Match{Shape: fixes.ShapeLogSpaceTerm, Node: root, Args: []ast.Expr{id}, Result: info.TypeOf(root), Func: fc.node}
+		}
+		return false
+	})
+	return m
+}
+
+// productOrRootOf is productRoot that climbs through math.Sqrt calls too.
+func (fc *fnCtx) productOrRootOf(e ast.Expr) ast.Expr {
+	for {
+		top := fc.productRoot(e)
+		call, ok := fc.parentMap()[top].(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || !fc.c.isMathFunc(call, "Sqrt") {
+			return top
+		}
+		e = call
+	}
 }
 
 // loopGuard makes m a range guard before the loop (ShapeLoopGuard) when

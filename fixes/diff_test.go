@@ -169,6 +169,7 @@ var diffCases = []diffCase{
 	{pkg: "fixseries", fn: "CoolingSum", loops: []string{"x := 1; x <= 300; x += 23", "n := 0; n <= 400; n += 20"}, args: "float64(x), int64(n)", typ: "float64", ref: refExpSeries},
 	{pkg: "fixseries", fn: "CoolingPower", loops: []string{"x := 1; x <= 300; x += 23", "n := 0; n <= 400; n += 20"}, args: "float64(x), n", typ: "float64", ref: refExpSeries},
 	{pkg: "fixseries", fn: "LateCount", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 900; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},
+	{pkg: "fixseries", fn: "ModeNorm", loops: []string{"n := 0; n <= 290; n++"}, args: "n", typ: "float64", ref: refModeNorm},
 	{pkg: "fixseries", fn: "Tail", loops: []string{"n := 0; n <= 260; n += 3"}, args: "n", typ: "float64", ref: refTail, noBreak: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 	// Loops the value model reads as C(n, k); the grids cross the

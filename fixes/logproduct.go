@@ -396,6 +396,9 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 		if in := lp.sameTypeConv(x); in != nil {
 			return lp.chainableIn(in, calls)
 		}
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.chainableIn(in, calls)
+		}
 		return calls && lp.isLeaf(x)
 	case *ast.ParenExpr:
 		return lp.chainableIn(x.X, calls)
@@ -423,6 +426,16 @@ func (lp *logProducts) factorialCall(e ast.Expr) *FactorialCall {
 		if f.Call == ast.Unparen(e) {
 			return &lp.b.m.Factorials[i]
 		}
+	}
+	return nil
+}
+
+// sqrtOf returns x of a call math.Sqrt(x), or nil: the square root of
+// a product is a Product too (Product.Sqrt), 1/√(2^n·n!·√π) keeps its
+// value where the product under the root leaves float64.
+func (lp *logProducts) sqrtOf(c *ast.CallExpr) ast.Expr {
+	if _, fn := lp.b.callOf(c); len(c.Args) == 1 && isMath(fn, "Sqrt") {
+		return c.Args[0]
 	}
 	return nil
 }
@@ -520,6 +533,9 @@ func (lp *logProducts) chain(e ast.Expr) string {
 	case *ast.CallExpr:
 		if in := lp.sameTypeConv(x); in != nil {
 			return lp.chain(in)
+		}
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.product(in) + ".Sqrt()"
 		}
 		return lp.leaf(x)
 	case *ast.ParenExpr:
@@ -708,6 +724,9 @@ func buildProductChain(b *builder) error {
 func (lp *logProducts) leaves(e ast.Expr) int {
 	switch x := e.(type) {
 	case *ast.CallExpr:
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.leaves(in)
+		}
 		return 1
 	case *ast.ParenExpr:
 		return lp.leaves(x.X)

@@ -235,6 +235,16 @@ func refTail(x []float64) *big.Float {
 	return quo(fl(1), bf(factorialBig(int64(x[0]))))
 }
 
+// refModeNorm is 1/√(2^n·n!·√π), the normaliser of the n-th Hermite
+// function (DLMF 18.3, Table 18.3.1: h_n = √π·2^n·n!), with √π as the
+// float64 math.Sqrt(math.Pi) the code multiplies by.
+func refModeNorm(x []float64) *big.Float {
+	sq := bf(factorialBig(int64(x[0])))
+	sq.SetMantExp(sq, int(x[0]))
+	sq.Mul(sq, fl(math.Sqrt(math.Pi)))
+	return quo(fl(1), new(big.Float).SetPrec(refPrec).Sqrt(sq))
+}
+
 // refPoissonCDF is the sum of λ^k e^(−λ)/k! for k = 0 … n, for (λ, n)
 // (DLMF 8.4.10 relates it to the incomplete gamma function; the sum is
 // the definition).
