@@ -358,7 +358,15 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 		// product divided or reduced afterwards (n!/(n−k)! over k!, a
 		// binomial) may give a result that fits: leave it as written,
 		// unless it is divided by k! itself, which makes C(n, k).
-		if q := fc.loopQuotient(al); q != nil {
+		q, kept := fc.loopQuotient(al)
+		if kept {
+			// The fix of the quotient left it as written only outside
+			// 0 ≤ k ≤ n, by an allow directive: nothing else reads the
+			// product, and the value model leaves the loop alone too.
+			stateOf(fc, keptLoopsKey).add(al.shape.stmt)
+			return
+		}
+		if q != nil {
 			m = q
 		}
 	} else if n := fc.fallingBase(al); n != nil {
@@ -601,13 +609,34 @@ func (fc *fnCtx) fallingBase(al *accLoop) ast.Expr {
 	return b.X
 }
 
+// keptLoops are the loops of a function whose product only a quotient
+// read, which an allow directive keeps as written (loopQuotient): they
+// get no finding, from the matchers or from the value model (keptLoop).
+type keptLoops struct{ set map[ast.Stmt]bool }
+
+var keptLoopsKey = &stateKey[keptLoops]{"loops whose one read a directive keeps"}
+
+func (k *keptLoops) add(s ast.Stmt) {
+	if k.set == nil {
+		k.set = make(map[ast.Stmt]bool)
+	}
+	k.set[s] = true
+}
+
+// keptLoop reports whether the loop s is one of keptLoops.
+func (fc *fnCtx) keptLoop(s ast.Stmt) bool {
+	k := peekState(fc, keptLoopsKey)
+	return k != nil && k.set[s]
+}
+
 // loopQuotient is the match of num / den, where the falling-factorial
 // loop al leaves num = n(n−1)…(n−k+1) and a factorial loop of the same
 // function leaves den = k!: the quotient is C(n, k) (ShapeLoopQuotient;
 // the fixer checks the loops and the flow between them itself). nil
-// where there is no such pair, or the quotient is kept as written by an
-// allow directive, as the fix leaves it outside 0 ≤ k ≤ n.
-func (fc *fnCtx) loopQuotient(al *accLoop) *fixes.Match {
+// where there is no such pair. kept tells that the quotient is the one
+// read of num and an allow directive keeps it as written, as the fix
+// leaves it outside 0 ≤ k ≤ n: no match then.
+func (fc *fnCtx) loopQuotient(al *accLoop) (m *fixes.Match, kept bool) {
 	n, k := fc.fallingBase(al), al.count
 	if n == nil {
 		n, k = fc.fallingSpan(al)
@@ -615,7 +644,7 @@ func (fc *fnCtx) loopQuotient(al *accLoop) *fixes.Match {
 	kl, ok := fc.linear(k)
 	body := funcBody(fc.node)
 	if n == nil || !ok || al.early || al.accInit == nil || body == nil {
-		return nil
+		return nil, false
 	}
 	var den *accLoop
 	fc.eachLoop(body, func(o *accLoop) {
@@ -627,22 +656,25 @@ func (fc *fnCtx) loopQuotient(al *accLoop) *fixes.Match {
 		}
 	})
 	if den == nil {
-		return nil
+		return nil, false
 	}
 	var q *ast.BinaryExpr
-	count := 0
+	count, reads := 0, 0
 	ast.Inspect(body, func(x ast.Node) bool {
 		if b, ok := x.(*ast.BinaryExpr); ok && b.Op == token.QUO && fc.c.objOf(b.X) == al.acc && fc.c.objOf(b.Y) == den.acc {
 			q = b
 			count++
 		}
+		if id, ok := x.(*ast.Ident); ok && fc.c.pass.TypesInfo.Uses[id] == al.acc && (id.Pos() < al.shape.stmt.Pos() || id.Pos() >= al.shape.stmt.End()) {
+			reads++
+		}
 		return true
 	})
 	if count != 1 {
-		return nil
+		return nil, false
 	}
 	if fi := fc.c.fileOf(q.Pos()); fi == nil || fi.dirs.allowed(fc.c.pass.Fset, q.Pos()) {
-		return nil
+		return nil, fi != nil && reads == 1
 	}
 	return &fixes.Match{
 		Shape:   fixes.ShapeLoopQuotient,
@@ -654,7 +686,7 @@ func (fc *fnCtx) loopQuotient(al *accLoop) *fixes.Match {
 		Loop:    al.shape.stmt,
 		Func:    fc.node,
 		Divisor: &fixes.Match{Acc: den.acc, AccInit: den.accInit, Loop: den.shape.stmt},
-	}
+	}, false
 }
 
 // fallingSpan returns n and k when the loop counts up by one from n−k+1

@@ -70,6 +70,13 @@ func buildLoopQuotient(b *builder) error {
 	if err := b.straightBefore(q, &b.m, d); err != nil {
 		return err
 	}
+	// Outside 0 ≤ k ≤ n the loops' values are not the helper's: the
+	// rewrite must be able to test the domain (keepOutsideDomain), on
+	// operands of one type that it may evaluate twice.
+	n, k := b.m.Args[0], b.m.Args[1]
+	if !b.plain(n) || !b.plain(k) || !types.Identical(info.TypeOf(n), info.TypeOf(k)) {
+		return errors.New("n and k are not plain operands of one type, which the test of the domain needs")
+	}
 	name, err := b.pick(shapes[b.m.Shape].helpers, b.m.Result)
 	if err != nil {
 		return err
