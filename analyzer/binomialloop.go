@@ -76,10 +76,65 @@ func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
 	if nObj == nil {
 		return nil
 	}
-	if id := identOf(fc.c.pass.TypesInfo, al.mult, nObj); id != nil {
-		return id
+	id := identOf(fc.c.pass.TypesInfo, al.mult, nObj)
+	if id == nil {
+		return nil
 	}
-	return nil
+	if want, ok := fc.loopBinomialN(al, lin); ok && !single(nObj).equal(want) {
+		// The variable stands for only part of n, as h does in
+		// r*(w+h-i)/(i+1), which is C(w+h, w): a subexpression of the
+		// factor may be all of it.
+		if e := fc.exprOfForm(al.mult, want); e != nil {
+			return e
+		}
+	}
+	return id
+}
+
+// loopBinomialN is the n of C(n, k) that the loop's factor F = lin makes
+// with the divisors j+1, j = i − lo over the k = count+coff trips of an
+// induction variable i counting up by one from the constant lo (common
+// practice: Π (n−j)/(j+1) and Π (n−k+1+j)/(j+1) over 0 ≤ j < k are both
+// C(n, k)): n = F(j=0) for a falling factor, F(j=0)+k−1 for a rising one.
+func (fc *fnCtx) loopBinomialN(al *accLoop, lin linear) (linear, bool) {
+	sh := al.shape
+	if sh.step != 1 || sh.first != nil || al.count == nil {
+		return linear{}, false
+	}
+	k, ok := fc.linear(al.count)
+	if !ok {
+		return linear{}, false
+	}
+	k.C += al.coff
+	a := lin.coefOf(sh.iv)
+	atLo := lin.without(sh.iv)
+	atLo.C += a * sh.firstOff
+	switch a {
+	case -1:
+		return atLo, true
+	case 1:
+		n := atLo.add(k)
+		n.C--
+		return n, true
+	}
+	return linear{}, false
+}
+
+// exprOfForm returns the outermost subexpression of e, conversions and
+// parentheses looked through, whose linear form is want, or nil.
+func (fc *fnCtx) exprOfForm(e ast.Expr, want linear) ast.Expr {
+	var found ast.Expr
+	ast.Inspect(e, func(n ast.Node) bool {
+		x, ok := n.(ast.Expr)
+		if found != nil || !ok {
+			return found == nil
+		}
+		if l, ok := fc.linear(x); ok && l.equal(want) {
+			found = x
+		}
+		return found == nil
+	})
+	return found
 }
 
 // binomialLoopSafe reports whether every (n, k) in the ranges keeps the
@@ -120,8 +175,12 @@ func binomialProductText(form string, t numType, product, division string, nExpr
 	lim := thresholds.CentralBinomialLoop(t.Num)
 	central := thresholds.CentralBinomial(t.Num)
 	name := src(nExpr)
+	half := name
+	if _, ok := ast.Unparen(nExpr).(*ast.BinaryExpr); ok {
+		half = "(" + name + ")"
+	}
 	clause, _ := verdict(shownName(nExpr), n, lim.FirstBad)
 	definite := n.Lo == n.Hi && k.Lo == k.Hi && !thresholds.BinomialLoopFits(t.Num, n.Lo, k.Lo)
 	return fmt.Sprintf("multiplicative binomial %s in %s: the product %s %s before %s for %s ≥ %d at k = %s/2, although C(%s, %s/2) itself fits up to %s = %d%s",
-		form, t.typeName(), product, verb(t), division, name, lim.FirstBad, name, name, name, name, central.FirstBad-1, clause), definite
+		form, t.typeName(), product, verb(t), division, name, lim.FirstBad, half, name, half, name, central.FirstBad-1, clause), definite
 }

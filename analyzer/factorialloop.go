@@ -84,6 +84,9 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		if st := fc.seriesTermMatch(al); st != nil {
 			return st
 		}
+		if pm := fc.productReadMatch(al); pm != nil {
+			return pm
+		}
 		m.Shape = fixes.ShapeNone
 	}
 	if al.top != nil {
@@ -103,6 +106,49 @@ func (fc *fnCtx) loopMatch(al *accLoop, t numType) *fixes.Match {
 		}
 	}
 	return m
+}
+
+// productReadMatch is the match of a float64 factorial loop whose
+// product is read after the loop as a factor of a larger product, or of
+// a square root of one, 1/math.Sqrt(math.Pow(2, n)*f*math.Sqrt(math.Pi)):
+// n! may leave float64 where that product, or its root, does not. The
+// fix carries the accumulator as a Product (ShapeLogSpaceTerm), which
+// forms the same float64 values step by step and keeps the logarithm
+// beside them; the fixer checks that the variable can be carried. nil
+// where no read after the loop is such a factor.
+func (fc *fnCtx) productReadMatch(al *accLoop) *fixes.Match {
+	info := fc.c.pass.TypesInfo
+	body := funcBody(fc.node)
+	if al.kind != kindFactorial || al.accInit == nil || body == nil {
+		return nil
+	}
+	if t, ok := info.TypeOf(al.update.(*ast.AssignStmt).Lhs[0]).Underlying().(*types.Basic); !ok || t.Kind() != types.Float64 {
+		return nil
+	}
+	var m *fixes.Match
+	ast.Inspect(body, func(n ast.Node) bool {
+		id, ok := n.(*ast.Ident)
+		if m != nil || !ok || id.Pos() < al.shape.stmt.End() || info.Uses[id] != al.acc {
+			return m == nil
+		}
+		if root := fc.productOrRootOf(id); root != id {
+			m = &fixes.Match{Shape: fixes.ShapeLogSpaceTerm, Node: root, Args: []ast.Expr{id}, Result: info.TypeOf(root), Func: fc.node}
+		}
+		return false
+	})
+	return m
+}
+
+// productOrRootOf is productRoot that climbs through math.Sqrt calls too.
+func (fc *fnCtx) productOrRootOf(e ast.Expr) ast.Expr {
+	for {
+		top := fc.productRoot(e)
+		call, ok := fc.parentMap()[top].(*ast.CallExpr)
+		if !ok || len(call.Args) != 1 || !fc.c.isMathFunc(call, "Sqrt") {
+			return top
+		}
+		e = call
+	}
 }
 
 // loopGuard makes m a range guard before the loop (ShapeLoopGuard) when
@@ -310,7 +356,19 @@ func (fc *fnCtx) checkFallingLoop(al *accLoop, t numType) {
 	if !t.Float && !fc.productReturned(al) {
 		// The integer helper panics where the product leaves t, but a
 		// product divided or reduced afterwards (n!/(n−k)! over k!, a
-		// binomial) may give a result that fits: leave it as written.
+		// binomial) may give a result that fits: leave it as written,
+		// unless it is divided by k! itself, which makes C(n, k).
+		q, kept := fc.loopQuotient(al)
+		if kept {
+			// The fix of the quotient left it as written only outside
+			// 0 ≤ k ≤ n, by an allow directive: nothing else reads the
+			// product, and the value model leaves the loop alone too.
+			stateOf(fc, keptLoopsKey).add(al.shape.stmt)
+			return
+		}
+		if q != nil {
+			m = q
+		}
 	} else if n := fc.fallingBase(al); n != nil {
 		m.Shape, m.Args = fixes.ShapeFallingLoop, []ast.Expr{n, al.count}
 	} else if n, k := fc.fallingSpan(al); n != nil {
@@ -549,6 +607,86 @@ func (fc *fnCtx) fallingBase(al *accLoop) ast.Expr {
 		return nil
 	}
 	return b.X
+}
+
+// keptLoops are the loops of a function whose product only a quotient
+// read, which an allow directive keeps as written (loopQuotient): they
+// get no finding, from the matchers or from the value model (keptLoop).
+type keptLoops struct{ set map[ast.Stmt]bool }
+
+var keptLoopsKey = &stateKey[keptLoops]{"loops whose one read a directive keeps"}
+
+func (k *keptLoops) add(s ast.Stmt) {
+	if k.set == nil {
+		k.set = make(map[ast.Stmt]bool)
+	}
+	k.set[s] = true
+}
+
+// keptLoop reports whether the loop s is one of keptLoops.
+func (fc *fnCtx) keptLoop(s ast.Stmt) bool {
+	k := peekState(fc, keptLoopsKey)
+	return k != nil && k.set[s]
+}
+
+// loopQuotient is the match of num / den, where the falling-factorial
+// loop al leaves num = n(n−1)…(n−k+1) and a factorial loop of the same
+// function leaves den = k!: the quotient is C(n, k) (ShapeLoopQuotient;
+// the fixer checks the loops and the flow between them itself). nil
+// where there is no such pair. kept tells that the quotient is the one
+// read of num and an allow directive keeps it as written, as the fix
+// leaves it outside 0 ≤ k ≤ n: no match then.
+func (fc *fnCtx) loopQuotient(al *accLoop) (m *fixes.Match, kept bool) {
+	n, k := fc.fallingBase(al), al.count
+	if n == nil {
+		n, k = fc.fallingSpan(al)
+	}
+	kl, ok := fc.linear(k)
+	body := funcBody(fc.node)
+	if n == nil || !ok || al.early || al.accInit == nil || body == nil {
+		return nil, false
+	}
+	var den *accLoop
+	fc.eachLoop(body, func(o *accLoop) {
+		if den != nil || o.acc == al.acc || o.kind != kindFactorial || o.top == nil || o.topOff != 0 || o.early || o.div != nil || o.accInit == nil {
+			return
+		}
+		if tl, ok := fc.linear(o.top); ok && tl.equal(kl) {
+			den = o
+		}
+	})
+	if den == nil {
+		return nil, false
+	}
+	var q *ast.BinaryExpr
+	count, reads := 0, 0
+	ast.Inspect(body, func(x ast.Node) bool {
+		if b, ok := x.(*ast.BinaryExpr); ok && b.Op == token.QUO && fc.c.objOf(b.X) == al.acc && fc.c.objOf(b.Y) == den.acc {
+			q = b
+			count++
+		}
+		if id, ok := x.(*ast.Ident); ok && fc.c.pass.TypesInfo.Uses[id] == al.acc && (id.Pos() < al.shape.stmt.Pos() || id.Pos() >= al.shape.stmt.End()) {
+			reads++
+		}
+		return true
+	})
+	if count != 1 {
+		return nil, false
+	}
+	if fi := fc.c.fileOf(q.Pos()); fi == nil || fi.dirs.allowed(fc.c.pass.Fset, q.Pos()) {
+		return nil, fi != nil && reads == 1
+	}
+	return &fixes.Match{
+		Shape:   fixes.ShapeLoopQuotient,
+		Node:    q,
+		Args:    []ast.Expr{n, k},
+		Result:  fc.c.pass.TypesInfo.TypeOf(q),
+		Acc:     al.acc,
+		AccInit: al.accInit,
+		Loop:    al.shape.stmt,
+		Func:    fc.node,
+		Divisor: &fixes.Match{Acc: den.acc, AccInit: den.accInit, Loop: den.shape.stmt},
+	}, false
 }
 
 // fallingSpan returns n and k when the loop counts up by one from n−k+1

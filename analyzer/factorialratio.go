@@ -122,8 +122,28 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	m.Shape = shape
 	if shape == fixes.ShapeNone {
 		m.Args = nil
+		if len(p.den) > 0 && within(root, p.num, p.den) {
+			// Another ratio of float factorials, a 2×2 table's
+			// (a+b)!(c+d)!(a+c)!(b+d)!/(n!a!b!c!d!): in log space
+			// where its factors leave float64.
+			m = fc.factorialChain(root, append(p.num[:len(p.num):len(p.num)], p.den...))
+		}
 	}
 	fc.reportRatio(root, p, m, append([]factor{u}, dens...), u, definite, msg+clause)
+}
+
+// within reports whether every factorial call among the factors lies in
+// root, the expression a fix rewrites, and not in the value of a local
+// the product was followed into.
+func within(root ast.Expr, fss ...[]factor) bool {
+	for _, fs := range fss {
+		for _, f := range fs {
+			if f.kind != kindNone && (f.call == nil || f.call.Pos() < root.Pos() || f.call.End() > root.End()) {
+				return false
+			}
+		}
+	}
+	return true
 }
 
 // reportRatio reports a ratio's finding, its definition related and its

@@ -105,7 +105,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 		// { return }; for x >= 3 { x--; z *= x } in std's math.Gamma),
 		// which the range analysis does not follow: precision first,
 		// only loops with a counter of their own are judged.
-		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) || fc.keptLoop(l.Stmt) {
 			continue
 		}
 		mc := &modelCtx{fc: fc, res: res, loop: l}
@@ -1038,7 +1038,7 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 		return
 	}
 	for _, l := range loops {
-		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) {
+		if l.Counter == nil || l.Exits || fc.c.reportedAt(l.Stmt.Pos()) || fc.decidedAtCalls(l.Stmt) || fc.keptLoop(l.Stmt) {
 			return
 		}
 	}

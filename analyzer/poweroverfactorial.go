@@ -290,20 +290,7 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), strings.Join(dens, "·"))
 	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
 		what, worst.t.typeName(), bang(worst.arg, worst.off), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
-	// The fix takes the product in log space, each factorial the
-	// value its function returns with ln n! beside it: a float value,
-	// +Inf past its limit (an integer one has wrapped to a finite
-	// value, which a Product would keep).
-	m := &fixes.Match{Shape: fixes.ShapeProductChain, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
-	for _, f := range p.den {
-		if f.kind != kindNone {
-			if f.call == nil || f.fact == nil || f.kind != kindFactorial || !f.t.Float {
-				m.Shape = fixes.ShapeNone
-				break
-			}
-			m.Factorials = append(m.Factorials, fixes.FactorialCall{Call: f.call, Arg: f.arg, Off: f.off})
-		}
-	}
+	m := fc.factorialChain(root, p.den)
 	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
 		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})
 }

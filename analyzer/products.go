@@ -68,6 +68,25 @@ func (p *product) fix(m *fixes.Match) *fixes.Match {
 	return m
 }
 
+// factorialChain is the match of a product whose fix takes it in log
+// space (fixes.ShapeProductChain), each factorial among fs the value its
+// function returns with ln n! beside it: a float value, +Inf past its
+// limit (an integer one has wrapped to a finite value, which a Product
+// would keep, so any other factorial leaves the match without a shape).
+func (fc *fnCtx) factorialChain(root ast.Expr, fs []factor) *fixes.Match {
+	m := &fixes.Match{Shape: fixes.ShapeProductChain, Node: root, Result: fc.c.pass.TypesInfo.TypeOf(root)}
+	for _, f := range fs {
+		if f.kind != kindNone {
+			if f.call == nil || f.fact == nil || f.kind != kindFactorial || !f.t.Float {
+				m.Shape = fixes.ShapeNone
+				break
+			}
+			m.Factorials = append(m.Factorials, fixes.FactorialCall{Call: f.call, Arg: f.arg, Off: f.off})
+		}
+	}
+	return m
+}
+
 // evalProduct splits e into known factors, following local variables
 // that are assigned exactly once.
 func (fc *fnCtx) evalProduct(e ast.Expr) *product {

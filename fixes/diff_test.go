@@ -76,6 +76,9 @@ var diffCases = []diffCase{
 	{pkg: "fixratio", fn: "Shifts", loops: []string{"a := 0; a <= 90; a += 9", "b := 0; b <= 90; b += 10", "c := 0; c <= 40; c += 8"}, args: "a, b, c", typ: "float64", ref: refMultinomial},
 	{pkg: "fixratio", fn: "Rotas32", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "int32(n), int32(k)", typ: "int32", ref: refChoose},
 	{pkg: "fixratio", fn: "Queues", loops: []string{"n := 0; n <= 40; n++"}, args: "n", typ: "int", ref: refCatalan},
+	// Nine float factorials over one another, in log space where they
+	// leave float64; below 0 each is the loop's empty product, as written.
+	{pkg: "fixratio", fn: "ShiftTable", loops: []string{"a := 0; a <= 300; a += 37", "b := 0; b <= 300; b += 41", "c := -2; c <= 200; c += 53", "d := 0; d <= 200; d += 29"}, args: "a, b, c, d", typ: "float64", ref: refTable},
 	{pkg: "fixterm", fn: "Arrivals", loops: []string{"k := 0; k <= 260; k += 4", "l := 1; l <= 200; l *= 3"}, args: "k, float64(l) / 2", typ: "float64", ref: refPoisson},
 	// The power multiplied up by a loop: +Inf from lambda^k past
 	// float64, the term NaN or 0 where it is not.
@@ -127,6 +130,15 @@ var diffCases = []diffCase{
 	{pkg: "fixloop", fn: "Rolls", loops: []string{"n := 0; n <= 40; n++", "k := -3; k <= n; k++"}, args: "n, k", typ: "int", ref: refLoopFalling},
 	{pkg: "fixloop", fn: "RollsUp", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int", ref: refFalling},
 	{pkg: "fixloop", fn: "WaysU", loops: []string{"n := 0; n <= 68; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// A falling factorial over k! in two loops: C(n, k) exactly where
+	// it fits, though the numerator wraps from n = 21; outside
+	// 0 ≤ k ≤ n the quotient as written, 1 with no trip and 0 past a
+	// zero factor (k ≤ 63 keeps the wrapped k! nonzero).
+	{pkg: "fixloop", fn: "Committees", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "n, k", typ: "int64", ref: refChoose},
+	{pkg: "fixloop", fn: "Committees", loops: []string{"n := 0; n <= 60; n++", "k := -3; k <= n+3; k++"}, args: "n, k", typ: "int64", ref: refLoopChoose},
+	{pkg: "fixloop", fn: "Interleavings", loops: []string{"n := 0; n <= 70; n++", "k := 0; k <= n; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refChoose},
+	// The loop's n is the sum across+up; no side ≤ 0 runs it.
+	{pkg: "fixloop", fn: "Routes", loops: []string{"a := -3; a <= 45; a++", "u := 0; u <= 45; u++"}, args: "a, u", typ: "int", ref: refRoutes},
 	// Factors written off the counter; k past n, where the falling
 	// factorial is 0 (the unsigned loop start wraps for k > n+2).
 	{pkg: "fixloop", fn: "Picks", loops: []string{"n := 0; n <= 40; n++", "k := 0; k <= n+4; k++"}, args: "uint64(n), uint64(k)", typ: "uint64", ref: refFalling},
@@ -157,6 +169,7 @@ var diffCases = []diffCase{
 	{pkg: "fixseries", fn: "CoolingSum", loops: []string{"x := 1; x <= 300; x += 23", "n := 0; n <= 400; n += 20"}, args: "float64(x), int64(n)", typ: "float64", ref: refExpSeries},
 	{pkg: "fixseries", fn: "CoolingPower", loops: []string{"x := 1; x <= 300; x += 23", "n := 0; n <= 400; n += 20"}, args: "float64(x), n", typ: "float64", ref: refExpSeries},
 	{pkg: "fixseries", fn: "LateCount", loops: []string{"l := 50; l <= 700; l += 130", "n := 0; n <= 900; n += 45"}, args: "float64(l), n", typ: "float64", ref: refPoissonCDF},
+	{pkg: "fixseries", fn: "ModeNorm", loops: []string{"n := 0; n <= 290; n++"}, args: "n", typ: "float64", ref: refModeNorm},
 	{pkg: "fixseries", fn: "Tail", loops: []string{"n := 0; n <= 260; n += 3"}, args: "n", typ: "float64", ref: refTail, noBreak: true},
 	{pkg: "probemany", fn: "Hands", loops: []string{"n := 0; n <= 66; n++", "k := 0; k <= n; k += 2"}, args: "n, k", typ: "int", ref: refChoose},
 	// Loops the value model reads as C(n, k); the grids cross the
@@ -245,6 +258,7 @@ var diffCases = []diffCase{
 var negativeNCases = []diffCase{
 	{pkg: "fixloop", fn: "Ways", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refLoopChoose, noBreak: true},
 	{pkg: "fixloop", fn: "WaysChecked", loops: []string{"n := -40; n <= 5; n++", "k := -3; k <= 40; k++"}, args: "n, k", typ: "int", ref: refCheckedChoose, noBreak: true},
+	{pkg: "fixloop", fn: "Routes", loops: []string{"a := 0; a <= 40; a++", "u := -80; u <= 0; u += 3"}, args: "a, u", typ: "int", ref: refRoutes, noBreak: true},
 }
 
 // generalisedChoose reports whether the helper module in the tree

@@ -183,7 +183,7 @@ func domainOf(name string, n int) (domain, bool) {
 var domainShapes = map[Shape]bool{
 	ShapeBinomial: true, ShapePermutation: true, ShapeMultinomial: true, ShapeCatalan: true, ShapeFactorialValue: true,
 	ShapeHypergeometric: true, ShapePowOverFactorial: true, ShapePoisson: true, ShapeBinomialPMF: true,
-	ShapeNegBinomialPMF: true, ShapeBeta: true, ShapeInverseBeta: true,
+	ShapeNegBinomialPMF: true, ShapeBeta: true, ShapeInverseBeta: true, ShapeLoopQuotient: true,
 }
 
 // keepOutsideDomain makes the node's own expression run where the

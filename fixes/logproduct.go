@@ -396,6 +396,9 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 		if in := lp.sameTypeConv(x); in != nil {
 			return lp.chainableIn(in, calls)
 		}
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.chainableIn(in, calls)
+		}
 		return calls && lp.isLeaf(x)
 	case *ast.ParenExpr:
 		return lp.chainableIn(x.X, calls)
@@ -423,6 +426,16 @@ func (lp *logProducts) factorialCall(e ast.Expr) *FactorialCall {
 		if f.Call == ast.Unparen(e) {
 			return &lp.b.m.Factorials[i]
 		}
+	}
+	return nil
+}
+
+// sqrtOf returns x of a call math.Sqrt(x), or nil: the square root of
+// a product is a Product too (Product.Sqrt), 1/√(2^n·n!·√π) keeps its
+// value where the product under the root leaves float64.
+func (lp *logProducts) sqrtOf(c *ast.CallExpr) ast.Expr {
+	if _, fn := lp.b.callOf(c); len(c.Args) == 1 && isMath(fn, "Sqrt") {
+		return c.Args[0]
 	}
 	return nil
 }
@@ -520,6 +533,9 @@ func (lp *logProducts) chain(e ast.Expr) string {
 	case *ast.CallExpr:
 		if in := lp.sameTypeConv(x); in != nil {
 			return lp.chain(in)
+		}
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.product(in) + ".Sqrt()"
 		}
 		return lp.leaf(x)
 	case *ast.ParenExpr:
@@ -693,10 +709,14 @@ func buildProductChain(b *builder) error {
 	if !lp.chainable(e) || lp.leaves(e) < 2 {
 		return fmt.Errorf("not a product of two or more powers and Gamma values: %s", b.text(e))
 	}
-	if b.commentIn(e) {
-		return errors.New("a comment inside the product")
+	text := lp.chain(e) + ".Float64()"
+	if b.commentCopied(e) {
+		// Copied into the one line of the chain, a // comment would
+		// swallow the rest of it; a comment between the factors goes
+		// above the line (keepComments).
+		return errors.New("a comment inside a factor of the product")
 	}
-	b.replace(e.Pos(), e.End(), lp.chain(e)+".Float64()")
+	b.replace(e.Pos(), e.End(), text)
 	b.message = fmt.Sprintf("Take the product in log space where its factors leave float64 (%s.Product) (imports %s)", lp.pkg, HelperPath)
 	return nil
 }
@@ -706,6 +726,9 @@ func buildProductChain(b *builder) error {
 func (lp *logProducts) leaves(e ast.Expr) int {
 	switch x := e.(type) {
 	case *ast.CallExpr:
+		if in := lp.sqrtOf(x); in != nil {
+			return lp.leaves(in)
+		}
 		return 1
 	case *ast.ParenExpr:
 		return lp.leaves(x.X)

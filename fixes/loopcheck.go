@@ -17,7 +17,7 @@ import (
 //	acc = acc * F / G   (or acc *= F; acc /= G)    binomial loop
 //	acc = acc * F       (or acc *= F)              falling-factorial loop
 //
-// where, with j = i − lo running over 0..k−1, F is n−j or n−k+1+j and G
+// (the numerator of ShapeLoopQuotient is the latter), where, with j = i − lo running over 0..k−1, F is n−j or n−k+1+j and G
 // is j+1 (common practice: C(n,k) = Π (n−k+j+1)/(j+1), each partial
 // product an integer, and n!/(n−k)! = Π (n−j)).
 func (b *builder) checkLoop(loop ast.Stmt, acc types.Object) error {
@@ -44,7 +44,7 @@ func (b *builder) checkLoop(loop ast.Stmt, acc types.Object) error {
 	// F and G as functions of j: substitute i = lo + j.
 	jf, restF := split(f, iv, lo)
 	fOK := jf == -1 && restF.equal(n) || jf == 1 && restF.equal(n.add(k.neg()).add(one))
-	if b.m.Shape == ShapeFallingLoop {
+	if b.m.Shape == ShapeFallingLoop || b.m.Shape == ShapeLoopQuotient {
 		if g != nil || !fOK {
 			return errors.New("the loop is not the falling factorial of its operands")
 		}

@@ -59,6 +59,7 @@ const (
 	ShapeLogSum                 // math.Log(s) of a float sum s += term   Node: the math.Log, Log2 or Log10 call; Acc: s; Binomials (see buildLogSum)
 	ShapeLogOfValue             // math.Log(f(n)) of a float factorial or binomial function's call  Node: the math.Log, Log2 or Log10 call; Factorials or Binomials: that call (see buildLogOfValue)
 	ShapeRunSum                 // s += term of a running term, read after the loop as a product with s  Node: that read; Acc: s; Args: the running terms (see buildRunSum)
+	ShapeLoopQuotient           // num/den after num *= n − i over k trips and den *= i up to k  Node: the quotient; Args: n, k; Acc, AccInit, Loop: num's; Divisor: den's (see buildLoopQuotient)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.
@@ -140,6 +141,9 @@ type Match struct {
 	// binomial loop the model reads, is that loop's own match
 	// (ShapeModelBinomLoop), which the fix rewrites too.
 	CoefficientLoop *Match
+	// Divisor, for ShapeLoopQuotient, is the factorial loop whose
+	// accumulator the quotient divides by: its Acc, AccInit and Loop.
+	Divisor *Match
 	// Chain, when Node is the value first assigned to a variable r
 	// (r := fact(n)), holds the statements right after it that complete
 	// the match's value, r /= fact(k), r *= …: their right sides are

@@ -235,6 +235,16 @@ func refTail(x []float64) *big.Float {
 	return quo(fl(1), bf(factorialBig(int64(x[0]))))
 }
 
+// refModeNorm is 1/√(2^n·n!·√π), the normaliser of the n-th Hermite
+// function (DLMF 18.3, Table 18.3.1: h_n = √π·2^n·n!), with √π as the
+// float64 math.Sqrt(math.Pi) the code multiplies by.
+func refModeNorm(x []float64) *big.Float {
+	sq := bf(factorialBig(int64(x[0])))
+	sq.SetMantExp(sq, int(x[0]))
+	sq.Mul(sq, fl(math.Sqrt(math.Pi)))
+	return quo(fl(1), new(big.Float).SetPrec(refPrec).Sqrt(sq))
+}
+
 // refPoissonCDF is the sum of λ^k e^(−λ)/k! for k = 0 … n, for (λ, n)
 // (DLMF 8.4.10 relates it to the incomplete gamma function; the sum is
 // the definition).
@@ -300,6 +310,23 @@ func loopChooseBig(n, k int64) *big.Int {
 }
 
 func refLoopChoose(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]), int64(x[1]))) }
+
+// refRoutes is the loop r = r·(a+u−i)/(i+1) over i = 0..a−1: the same
+// generalised coefficient, C(a+u, a), with 1 for a ≤ 0 (no trip).
+func refRoutes(x []float64) *big.Float { return bf(loopChooseBig(int64(x[0]+x[1]), int64(x[0]))) }
+
+// refTable is a 2×2 table's probability with its margins fixed,
+// (a+b)!(c+d)!(a+c)!(b+d)!/(n!·a!·b!·c!·d!), n = a+b+c+d (common
+// practice: the hypergeometric term of Fisher's exact test), over
+// factorials that are 1 below 2, as a loop from 2 computes them.
+func refTable(x []float64) *big.Float {
+	a, b, c, d := int64(x[0]), int64(x[1]), int64(x[2]), int64(x[3])
+	num := new(big.Int).Mul(factorialBig(a+b), factorialBig(c+d))
+	num.Mul(num, factorialBig(a+c)).Mul(num, factorialBig(b+d))
+	den := new(big.Int).Mul(factorialBig(a+b+c+d), factorialBig(a))
+	den.Mul(den, factorialBig(b)).Mul(den, factorialBig(c)).Mul(den, factorialBig(d))
+	return quo(bf(num), bf(den))
+}
 
 // refCheckedChoose is a binomial loop behind "if k < 0 { return 0 }".
 func refCheckedChoose(x []float64) *big.Float {

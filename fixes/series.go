@@ -427,3 +427,18 @@ func (b *builder) commentIn(n ast.Node) bool {
 	}
 	return false
 }
+
+// commentCopied reports whether a comment inside n lies in source the
+// fix copies (copyText).
+func (b *builder) commentCopied(n ast.Node) bool {
+	for _, g := range b.file.Comments {
+		if n.Pos() < g.Pos() && g.End() < n.End() {
+			for _, c := range b.copied {
+				if c.pos <= g.Pos() && g.End() <= c.end {
+					return true
+				}
+			}
+		}
+	}
+	return false
+}

@@ -82,6 +82,7 @@ func init() {
 		ShapeLogSum:           {"logarithm of a sum", buildLogSum, family{float: "SumOf"}, 0, nil},
 		ShapeLogOfValue:       {"logarithm of a factorial value", buildLogOfValue, family{float: "FactorialProduct"}, 0, nil},
 		ShapeRunSum:           {"running sum scaled after its loop", buildRunSum, family{float: "SumOf"}, 0, nil},
+		ShapeLoopQuotient:     {"falling-factorial loop over a factorial loop", buildLoopQuotient, chooseHelpers, 0, nil},
 	}
 }
 

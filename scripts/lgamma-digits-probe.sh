@@ -14,7 +14,9 @@
 # in another function: gonum's combin.GeneralizedBinomial (exp of
 # LogGeneralizedBinomial) and mathext.Beta (exp of internal Lbeta),
 # go-moremath's mathx.Choose past its table (exp of lchoose) and
-# stats.HypergeometicDist.PMF (exp of three Lchoose values).
+# stats.HypergeometicDist.PMF (exp of three Lchoose values); and
+# gonum's distuv.Binomial.Prob, math.Exp of the method LogProb, a sum
+# of three log-gamma values and two logarithms (binomial.go:72).
 #
 #   scripts/lgamma-digits-probe.sh     # seconds, after the module download
 set -euo pipefail
@@ -61,6 +63,7 @@ func main() {
 		fmt.Printf("gbeta %g %.17g\n", n, mathext.Beta(n, 3.5))
 		h := stats.HypergeometicDist{N: int(n), K: int(n) / 2, Draws: 10}
 		fmt.Printf("hyper %g %.17g\n", n, h.PMF(5))
+		fmt.Printf("bprob %g %.17g\n", n, distuv.Binomial{N: n, P: 0.5}.Prob(n/2))
 	}
 	for _, a := range []float64{1e3, 1e5, 1e7} {
 		// BetaInc's coefficient, as mathx/beta.go:44 writes it.
@@ -101,6 +104,9 @@ for line in open(sys.argv[1]):
         big = int(x)
         ref = mpmath.binomial(big // 2, 5) * mpmath.binomial(big - big // 2, 5) / mpmath.binomial(big, 10)
         what = 'HypergeometicDist{N: %s, K: N/2, Draws: 10}.PMF(5)' % mpmath.nstr(x, 3)
+    elif kind == 'bprob':
+        ref = mpmath.binomial(x, x / 2) * mpmath.mpf(0.5) ** x
+        what = 'distuv.Binomial{N: %s, P: 0.5}.Prob(N/2)' % mpmath.nstr(x, 3)
     else:
         ref = mpmath.exp(mpmath.loggamma((x + 1) / 2) - mpmath.loggamma(x / 2)) / mpmath.sqrt(x * mpmath.pi)
         what = 'stats.TDist{V: %s}.PDF(0)' % mpmath.nstr(x, 3)

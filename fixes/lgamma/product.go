@@ -152,6 +152,25 @@ func (p Product) MulFloat(x float64) Product { return p.Mul(ProductOf(x)) }
 // QuoFloat returns p/x, p.Quo(ProductOf(x)).
 func (p Product) QuoFloat(x float64) Product { return p.Quo(ProductOf(x)) }
 
+// Sqrt returns the square root of the product: math.Sqrt of its float64
+// value, as math.Sqrt(p) forms it, and half its logarithm, so that a
+// product past float64 whose root is not, 2^n·n! in 1/√(2^n·n!·√π),
+// keeps its value.
+//
+// Special cases are (as math.Sqrt's):
+//
+//	Sqrt of a product holding ±0 holds ±0
+//	Sqrt of a product holding +Inf holds +Inf where the product overflows
+//	Sqrt of a negative product holds NaN
+//	Sqrt of a product holding NaN holds NaN
+func (p Product) Sqrt() Product {
+	if p.neg && p.v != 0 || math.IsNaN(p.v) {
+		return ProductOf(math.NaN())
+	}
+	r := Product{v: math.Sqrt(p.v), l: p.l.mulF(0.5), neg: p.neg, lost: p.lost}
+	return r.mark(p.under)
+}
+
 // Neg returns −p.
 func (p Product) Neg() Product {
 	p.v, p.neg = -p.v, !p.neg

@@ -194,3 +194,52 @@ func TestFactorialProduct(t *testing.T) {
 		t.Errorf("FactorialProduct(NaN, 3) = %v, want NaN", got)
 	}
 }
+
+// TestProductSqrt checks the square root of a product against math/big's
+// Float.Sqrt: where the product's float64 steps stay normal it is
+// math.Sqrt of them, bit for bit; where the product leaves float64 and
+// its root does not, the root of the exact product of the factors.
+func TestProductSqrt(t *testing.T) {
+	r := rand.New(rand.NewSource(11))
+	for i := 0; i < 500; i++ {
+		x, y := r.Float64()*1e150, r.Float64()*1e-100+1e-120
+		if got, want := ProductOf(x).MulFloat(y).Sqrt().Float64(), math.Sqrt(x*y); math.Float64bits(got) != math.Float64bits(want) {
+			t.Fatalf("√(%v·%v) = %v, math.Sqrt gives %v", x, y, got, want)
+		}
+	}
+	fact := func(n int) float64 {
+		f := 1.0
+		for i := 2; i <= n; i++ {
+			f *= float64(i)
+		}
+		return f
+	}
+	// 1/√(2^n·n!·√π), the normaliser of the n-th Hermite function
+	// (DLMF 18.3, Table 18.3.1's h_n = √π·2^n·n!): past float64 from
+	// n = 151 on in its square, not in itself (n = 151 from Python's
+	// math.lgamma).
+	for _, n := range []int{10, 150, 151, 170, 171, 200, 250} {
+		p := ProductOf(1).Quo(PowProduct(2, float64(n)).Mul(FactorialProduct(fact(n), float64(n))).MulFloat(math.Sqrt(math.Pi)).Sqrt())
+		sq := new(big.Float).SetPrec(refPrec).SetInt(new(big.Int).MulRange(1, int64(n)))
+		sq.SetMantExp(sq, n)
+		sq.Mul(sq, bf(math.Sqrt(math.Pi)))
+		want := bnew().Quo(bf(1), bnew().Sqrt(sq))
+		if off := relOff(p.Float64(), want); off > 1e-14 {
+			t.Errorf("1/√(2^%d·%d!·√π) = %v, want %s (math/big), relative error %.3g", n, n, p.Float64(), want.Text('g', 17), off)
+		}
+	}
+	// 1e-200·1e-200 underflows to 0; its root, 1e-200, does not.
+	if got := ProductOf(1e-200).MulFloat(1e-200).Sqrt().Float64(); relOff(got, bnew().Sqrt(bnew().Mul(bf(1e-200), bf(1e-200)))) > 1e-15 {
+		t.Errorf("√(1e-200·1e-200) = %v, want 1e-200 (math/big)", got)
+	}
+	// A root past float64 is +Inf: √(10^400·10^400).
+	if got := PowProduct(10, 400).Mul(PowProduct(10, 400)).Sqrt().Float64(); !math.IsInf(got, 1) {
+		t.Errorf("√(10^800) = %v, want +Inf", got)
+	}
+	if got := ProductOf(-4).Sqrt().Float64(); !math.IsNaN(got) {
+		t.Errorf("√-4 = %v, want NaN (as math.Sqrt)", got)
+	}
+	if got := ProductOf(-1).MulFloat(0).Sqrt().Float64(); !(got == 0 && math.Signbit(got)) {
+		t.Errorf("√-0 = %v, want -0 (as math.Sqrt)", got)
+	}
+}

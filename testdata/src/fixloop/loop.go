@@ -92,7 +92,8 @@ func Shifted(n, k int64) (p int64) { // want Shifted:`wrong for some n or some k
 // Interleavings divides the falling factorial by k! after both loops:
 // C(n, k) may fit where the numerator wraps, and a helper that panics
 // past the numerator's range would refuse it, so the numerator's loop
-// has no fix.
+// has no fix of its own; the quotient, C(n, k), is rewritten instead,
+// and outside k ≤ n it stays as written.
 func Interleavings(n, k uint64) uint64 { // want Interleavings:`wrong for some n or some k`
 	num := uint64(1)
 	for i := uint64(0); i < k; i++ { // want `falling factorial of k factors from n down in uint64 wraps`
@@ -101,6 +102,48 @@ func Interleavings(n, k uint64) uint64 { // want Interleavings:`wrong for some n
 	den := uint64(1)
 	for i := uint64(2); i <= k; i++ { // want `factorial of k in uint64 wraps for k ≥ 21`
 		den *= i
+	}
+	return num / den
+}
+
+// Routes counts the monotone routes across a grid of across × up
+// blocks, C(across+up, across), with the multiplicative loop written
+// over the route's length: its n is the sum across+up, which no single
+// variable of the loop names.
+func Routes(across, up int) int { // want Routes:`wrong for some across or some up`
+	r := 1
+	for i := 0; i < across; i++ { // want "multiplicative binomial loop in int: the product r \\* \\(across \\+ up - i\\) wraps before the division for across \\+ up ≥ 62"
+		r = r * (across + up - i) / (i + 1)
+	}
+	return r
+}
+
+// Committees counts the committees of k members out of n: the falling
+// factorial over k!, each multiplied up by a loop of its own.
+func Committees(n, k int) int64 { // want Committees:`wrong for some n or some k`
+	num := int64(1)
+	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
+		num *= int64(n - i)
+	}
+	den := int64(1)
+	for i := 1; i <= k; i++ { // want `factorial of k in int64 wraps for k ≥ 21`
+		den = den * int64(i)
+	}
+	return num / den
+}
+
+// CommitteesAfterLeave takes one member out between the loops: the
+// quotient is not C(n, k) of the n it is left with, and stays as
+// written.
+func CommitteesAfterLeave(n, k int) int64 { // want CommitteesAfterLeave:`wrong for some n or some k`
+	num := int64(1)
+	for i := 0; i < k; i++ { // want `falling factorial of k factors from n down in int64 wraps`
+		num *= int64(n - i)
+	}
+	n--
+	den := int64(1)
+	for i := 1; i <= k; i++ { // want `factorial of k in int64 wraps for k ≥ 21`
+		den *= int64(i)
 	}
 	return num / den
 }

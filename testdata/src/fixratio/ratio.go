@@ -76,3 +76,11 @@ func PairingsFlat(n, k int) int { // want PairingsFlat:`value 2·Γ\(p0 \+ 1\)/\
 func TripleShare(n, k int) float64 { // want TripleShare:`value 3·Γ\(p0 \+ 1\)/\(Γ\(p1 \+ 1\)·Γ\(p0 - p1 \+ 1\)\), wrong once p0 ≥ 171` TripleShare:`wrong for n ≥ 171`
 	return factF(n) / (factF(k) * factF(n-k)) * 3 // want "binomial coefficient"
 }
+
+// ShiftTable is the chance of a 2×2 table of a, b, c, d agents by shift
+// and by team, with its margins fixed: nine factorials over one another,
+// no single binomial, taken in log space where they leave float64.
+func ShiftTable(a, b, c, d int) float64 { // want ShiftTable:`value Γ\(p0 \+ p1 \+ 1\)·Γ\(p2 \+ p3 \+ 1\)` ShiftTable:`wrong for some a or some b`
+	n := a + b + c + d
+	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / (factF(n) * factF(a) * factF(b) * factF(c) * factF(d)) // want `ratio of factorials in float64: the numerator \(a \+ b\)! overflows`
+}

@@ -40,7 +40,8 @@ func ExpSeries(x float64, terms int) float64 { // want ExpSeries:`wrong for some
 }
 
 // Tail is 1/n!, the weight of the n-th term, from an integer product
-// converted at the end.
+// converted at the end; carried as a Product, it keeps 1/n! where n!
+// alone leaves float64 and the quotient is subnormal (171 ≤ n ≤ 177).
 func Tail(n int) float64 { // want Tail:`wrong for some n`
 	p := 1.0
 	for i := 1; i <= n; i++ { // want "factorial of n in float64"
@@ -127,4 +128,16 @@ func PowerFirst(x float64, terms int) float64 { // want PowerFirst:`wrong for so
 		pow *= x
 	}
 	return sum
+}
+
+// ModeNorm is 1/√(2^n·n!·√π), the normaliser of the kiln wall's n-th
+// Hermite temperature mode: 2^n·n! leaves float64 from n = 151 and n!
+// from 171, while the normaliser stays a normal float64 up to n = 267
+// (bounds from Python's math.lgamma).
+func ModeNorm(n int) float64 { // want ModeNorm:`wrong for some n`
+	f := 1.0
+	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171`
+		f *= float64(i)
+	}
+	return 1 / math.Sqrt(math.Pow(2, float64(n))*f*math.Sqrt(math.Pi))
 }

@@ -3,7 +3,7 @@ package puzzlebox
 import "math/big"
 
 // LatticePaths counts monotone paths across a w×h grid.
-func LatticePaths(w, h int) int64 { // want LatticePaths:`binomial of parameter 1,` LatticePaths:`wrong for some w or some h`
+func LatticePaths(w, h int) int64 { // want LatticePaths:`wrong for some w or some h`
 	r := int64(1)
 	for i := 0; i < w; i++ { // want `multiplicative binomial loop in int64: the product`
 		r = r * int64(w+h-i) / int64(i+1)
@@ -37,7 +37,7 @@ func PathsAvoiding(w, h int, blocked map[Cell]bool) *big.Int {
 
 // StirlingSecond counts partitions of n labelled items into k blocks,
 // by inclusion–exclusion.
-func StirlingSecond(n, k int) int64 {
+func StirlingSecond(n, k int) int64 { // want StirlingSecond:`wrong for some k`
 	sum := int64(0)
 	sign := int64(1)
 	for j := 0; j <= k; j++ {
@@ -45,7 +45,7 @@ func StirlingSecond(n, k int) int64 {
 		for e := 0; e < n; e++ {
 			p *= int64(k - j)
 		}
-		sum += sign * LatticePaths(j, k-j) * p
+		sum += sign * LatticePaths(j, k-j) * p // want `StirlingSecond builds its result from LatticePaths\(j, k-j\), which is wrong for some values of w`
 		sign = -sign
 	}
 	return sum / int64(ifact(k))
