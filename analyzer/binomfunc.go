@@ -34,6 +34,9 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 	if fact == nil {
 		return
 	}
+	if fact.Form == "" && res.Signed && !res.Float && own.zeroOutside(decl, fact) {
+		fact.Form = binomialZero
+	}
 	c.funcs[obj] = &facFunc{obj: obj, decl: decl, kind: kindBinomial, param: fact.Param, param2: fact.Param2, result: res, fact: *fact}
 	c.pass.ExportObjectFact(obj, fact)
 }
@@ -42,7 +45,71 @@ func (c *checker) findBinomialFunc(decl *ast.FuncDecl, calls, loops bool) {
 const (
 	binomialLoop       = "loop"
 	binomialFactorials = "factorials"
+	binomialZero       = "zero"
 )
+
+// binomialForms are the forms as the fixer names them.
+var binomialForms = map[string]fixes.BinomialForm{
+	binomialLoop: fixes.FormLoop, binomialFactorials: fixes.FormFactorials, binomialZero: fixes.FormZero,
+}
+
+// zeroOutside reports whether decl, a binomial function of fact's n and
+// k, first of all returns 0 wherever k < 0 or k > n:
+//
+//	if k < 0 || k > n {
+//		return 0
+//	}
+//
+// in either order, with either comparison written either way round.
+// Then it computes C(n, k) only for 0 ≤ k ≤ n and is 0 everywhere else
+// (FactorialFact.Form "zero").
+func (fc *fnCtx) zeroOutside(decl *ast.FuncDecl, fact *FactorialFact) bool {
+	if decl.Body == nil || len(decl.Body.List) == 0 {
+		return false
+	}
+	ifs, ok := decl.Body.List[0].(*ast.IfStmt)
+	if !ok || ifs.Init != nil || ifs.Else != nil || len(ifs.Body.List) != 1 {
+		return false
+	}
+	ret, ok := ifs.Body.List[0].(*ast.ReturnStmt)
+	if !ok || len(ret.Results) != 1 {
+		return false
+	}
+	if v, ok := fc.intConst(ret.Results[0]); !ok || v != 0 {
+		return false
+	}
+	or, ok := ast.Unparen(ifs.Cond).(*ast.BinaryExpr)
+	if !ok || or.Op != token.LOR {
+		return false
+	}
+	// less returns x, y of x < y (y > x read the other way round).
+	less := func(e ast.Expr) (x, y ast.Expr, ok bool) {
+		cmp, ok := ast.Unparen(e).(*ast.BinaryExpr)
+		switch {
+		case !ok:
+			return nil, nil, false
+		case cmp.Op == token.LSS:
+			return cmp.X, cmp.Y, true
+		case cmp.Op == token.GTR:
+			return cmp.Y, cmp.X, true
+		}
+		return nil, nil, false
+	}
+	param := func(e ast.Expr) int { return fc.c.paramIndex(decl, fc.c.objOf(e)) }
+	negK, kAboveN := false, false
+	for _, side := range []ast.Expr{or.X, or.Y} {
+		x, y, ok := less(side)
+		if !ok {
+			return false
+		}
+		if v, ok := fc.intConst(y); ok && v == 0 && param(x) == fact.Param2 {
+			negK = true
+		} else if param(x) == fact.Param && param(y) == fact.Param2 {
+			kAboveN = true
+		}
+	}
+	return negK && kAboveN
+}
 
 // binomialRatioFunc matches return n!/(k!(n-k)!) over parameters n, k.
 func (fc *fnCtx) binomialRatioFunc(decl *ast.FuncDecl) *FactorialFact {
@@ -177,13 +244,17 @@ func (fc *fnCtx) intBinomials(m *fixes.Match) map[*ast.CallExpr]fixes.IntBinomia
 			return true
 		}
 		fact := fc.c.factOf(fc.c.calleeOf(call))
-		if fact == nil || fact.Form == "" || kindOfName(fact.Kind) != kindBinomial || max(fact.Param, fact.Param2) >= len(call.Args) || fact.Param2 < 0 {
+		if fact == nil || kindOfName(fact.Kind) != kindBinomial || max(fact.Param, fact.Param2) >= len(call.Args) || fact.Param2 < 0 {
+			return true
+		}
+		form, known := binomialForms[fact.Form]
+		if !known {
 			return true
 		}
 		if out == nil {
 			out = make(map[*ast.CallExpr]fixes.IntBinomial)
 		}
-		out[call] = fixes.IntBinomial{N: call.Args[fact.Param], K: call.Args[fact.Param2], Loop: fact.Form == binomialLoop}
+		out[call] = fixes.IntBinomial{N: call.Args[fact.Param], K: call.Args[fact.Param2], Form: form}
 		return true
 	})
 	return out

@@ -47,9 +47,11 @@ type FactorialFact struct {
 	// function computes outside 0 ≤ k ≤ n too, with integers that do
 	// not wrap: "loop" for a multiplicative loop from 1 over k trips
 	// (the generalised C(n, k) for k ≥ 0, 1 for k < 0), "factorials"
-	// for n!/(k!(n−k)!) over factorial functions with EmptyBelow; ""
-	// where it is not known. A caller's float expression kept as written
-	// outside a helper's domain takes the call's value from the float
+	// for n!/(k!(n−k)!) over factorial functions with EmptyBelow,
+	// "zero" for a function that first returns 0 wherever k < 0 or
+	// k > n; "" where it is not known. A caller's float expression kept
+	// as written outside a helper's domain, and a caller's float64(…) of
+	// the call (late-conversion), take the call's value from the float
 	// helper of that form (fixes.Match.IntBinomials) rather than calling
 	// the function, whose own fix panics where C(n, k) leaves its type.
 	Form string

@@ -62,10 +62,17 @@ func (fc *fnCtx) checkConversion(conv *ast.CallExpr) {
 		return
 	}
 	// The conversion and the call become one helper call computing n! in
-	// the target type; a call whose value is (n+off)! is left alone.
+	// the target type, or C(n, k) in float64; a call whose value is
+	// (n+off)! is left alone.
 	m := &fixes.Match{Shape: fixes.ShapeNone, Node: conv, Result: c.pass.TypesInfo.TypeOf(conv)}
-	if f.off == 0 && f.kind == kindFactorial {
+	switch {
+	case f.off == 0 && f.kind == kindFactorial:
 		m.Shape, m.Args = fixes.ShapeFactorialValue, []ast.Expr{f.arg}
+	case f.kind == kindBinomial:
+		// The conversion and the call become the float helper of the
+		// function's form, where the form is known (report fills
+		// Match.IntBinomials); no fix otherwise.
+		m.Shape = fixes.ShapeBinomialValue
 	}
 	fc.report(finding{node: conv, cat: catLateConv, definite: definite && j.definite, msg: msg + j.clause,
 		related: c.relatedDef(f.fn.Name(), f.fn.Pos()), match: m})

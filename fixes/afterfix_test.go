@@ -148,9 +148,6 @@ var stillWrong = map[string]string{
 // not accepted outcomes: the list is what remains to fix, and like
 // stillWrong it may only shrink.
 var openViolations = map[string]string{
-	"src/curveforge.Bernstein":     "the binomial helper rewritten to MustChooseInt64 panics where the caller's value, already wrong, fits float64: (67, 34, 150.5): original 1.7175843882173905e+163, fixed panics MustChooseInt64(67, 33), exact -8.9639423890138422e+164",
-	"src/fieldgene.DetectionProb":  "the binomial helper rewritten to MustChooseInt64 panics where the caller's probability was right: (200, 170, 66): original 1, fixed panics MustChooseInt64(200, 66), exact 1",
-	"src/outbreak.ChainProb":       "the binomial helper rewritten to MustChooseInt64 panics where the caller's value, already wrong, fits float64: (1030, 63, 67, -1): original -9.945612931045829e+36, fixed panics MustChooseInt64(1030, 67), exact -3.267084741261652e+126",
 	"src/puzzlebox.StirlingSecond": "the range guard -fix puts in the factorial helper ifact panics where the caller divides 0 by its wrapped value: (-3, 25): original 0, fixed panics ifact: n = 25 overflows int, exact 0",
 	"src/sparecheck.AcceptProb":    "a binomial helper rewritten to MustChooseUint64 panics on an operand the caller never uses: (-1, -1, 5, 12): original 0, fixed panics MustChooseUint64(18446744073709551615, 5), exact 0",
 }

@@ -13,7 +13,7 @@ import (
 // whose directory names start with "fix", and the category packages
 // others add (caseDir finds those beside the analyzer): the real
 // analyzer's findings and their fixes, against hand-written .golden files.
-var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard", "fixconv", "fixseries", "fixexit", "fixcounts", "fixloggamma", "fixkept", "fixpascal"}
+var fixPackages = []string{"fixratio", "fixterm", "fixloop", "fixguard", "fixconv", "fixseries", "fixexit", "fixcounts", "fixloggamma", "fixkept", "fixpascal", "fixconvbinom"}
 
 func TestAnalyzerGolden(t *testing.T) {
 	t.Parallel()

@@ -236,6 +236,16 @@ var diffCases = []diffCase{
 	// original's float64 sum is +Inf − Inf = NaN where the true sum, led
 	// by its largest term, overflows too: the fixed loop panics there.
 	{pkg: "fixkept", fn: "Passed", loops: []string{"n := 300; n <= 600; n += 100", "c := 0; c <= 5; c++"}, args: "n, c, 34.5", typ: "float64", ref: refKeptPMFSum},
+	// Counts of an int64 binomial function that is 0 outside 0 ≤ k ≤ n,
+	// converted to float64 by their callers: taken from the float helper
+	// of that form, they are right past int64 (n ≥ 62) up to where
+	// C(lot, drawn) leaves float64, and a sample larger than the sound
+	// items gives 0 whatever the lot's count; a binomial probability kept
+	// as written outside its domain (k past n, p = 150.5) is 0 there,
+	// where the float64 arithmetic says 0·Inf = NaN.
+	{pkg: "fixconvbinom", fn: "MissAll", loops: []string{"lot := 0; lot <= 1020; lot += 17", "bad := 0; bad <= lot; bad += 1 + lot/5", "drawn := 0; drawn <= lot; drawn += 1 + lot/7"}, args: "lot, bad, drawn", typ: "float64", ref: refMissAll},
+	{pkg: "fixconvbinom", fn: "Exactly", loops: []string{"n := -3; n <= 100; n += 3", "k := -3; k <= n+3; k += 1 + max(n, 0)/9"}, args: "n, k, 1.5", typ: "float64", ref: keptPMF(zeroChooseBig)},
+	{pkg: "fixconvbinom", fn: "Exactly", loops: []string{"n := 0; n <= 10; n++", "k := 140; k <= 160; k += 5"}, args: "n, k, 150.5", typ: "float64", ref: keptPMF(zeroChooseBig)},
 	{pkg: "fixkept", fn: "Passed", loops: []string{"n := 0; n <= 100; n += 3", "c := 0; c <= n; c += 1 + n/9"}, args: "n, c, 0.25", typ: "float64", ref: refKeptPMFSum},
 	// Falling-factorial loops over float counts, k past n included: the
 	// loop multiplies by 0 there, after +Inf from n = 171 on (NaN as

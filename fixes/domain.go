@@ -463,7 +463,7 @@ var productShapes = map[Shape]bool{
 //     (Match.Floor) is their exact quotient in log space (emptyQuotient);
 //   - each float conversion of an integer binomial function's call in it
 //     (Match.IntBinomials) is taken from the float helper of the
-//     function's form: float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
+//     function's form (binomialFormHelpers): float64(ways(n, k)) becomes lgamma.ChooseLoop(n, k),
 //     the value the call had before its function's own fix, which panics
 //     where C(n, k) leaves the integer type;
 //   - a binomial probability's float64 product, or one of Gamma values
@@ -485,6 +485,7 @@ func (b *builder) asWrittenWith(node ast.Node, subs map[ast.Expr]string) (string
 	if subs == nil {
 		subs = make(map[ast.Expr]string)
 	}
+	counts := make(map[ast.Expr]bool)
 	if node == b.m.Node && b.m.Floor {
 		shown, counts := b.shown, b.counts
 		q, err := b.emptyQuotient()
@@ -508,12 +509,10 @@ func (b *builder) asWrittenWith(node ast.Node, subs map[ast.Expr]string) (string
 		if !ok {
 			return true
 		}
-		name := "ChooseFactorials"
-		if bin.Loop {
-			name = "ChooseLoop"
-		}
+		name := binomialFormHelpers[bin.Form]
 		shown := b.shown
 		subs[conv], err = b.call(name, []ast.Expr{bin.N, bin.K}, to)
+		counts[conv] = true
 		b.shown = shown
 		return false
 	})
@@ -526,7 +525,7 @@ func (b *builder) asWrittenWith(node ast.Node, subs map[ast.Expr]string) (string
 	// Without calls, no part of the expression is a chain: spliced writes
 	// it with subs alone.
 	lp := &logProducts{b: b, set: map[types.Object]bool{}, pkg: b.helper(e.Pos()), subs: subs}
-	if chain := (&logProducts{b: b, set: lp.set, pkg: lp.pkg, calls: true, subs: subs}); productShapes[b.m.Shape] &&
+	if chain := (&logProducts{b: b, set: lp.set, pkg: lp.pkg, calls: true, subs: subs, counts: counts}); productShapes[b.m.Shape] &&
 		types.Identical(b.pass.TypesInfo.TypeOf(e), types.Typ[types.Float64]) && chain.chainable(e) && chain.leaves(e) >= 1 && !b.commentIn(e) {
 		return chain.chain(e) + ".Float64()", nil
 	}

@@ -22,6 +22,7 @@ func ChooseInt64(n, k int64) (int64, bool)                  { panic("") }
 func ChooseUint64(n, k uint64) (uint64, bool)               { panic("") }
 func ChooseLoop(n, k int) float64                           { panic("") }
 func ChooseFactorials(n, k int) float64                     { panic("") }
+func ChooseOrZero(n, k int) float64                         { panic("") }
 func Falling(n, k int) float64                              { panic("") }
 func MustFallingInt64(n, k int64) int64                     { panic("") }
 func MustFallingUint64(n, k uint64) uint64                  { panic("") }
@@ -49,6 +50,7 @@ func LogGamma(x float64) float64                            { panic("") }
 type Product struct{ v float64 }
 
 func ProductOf(x float64) Product                          { panic("") }
+func CountProduct(v float64) Product                       { panic("") }
 func PowProduct(x, p float64) Product                      { panic("") }
 func GammaProduct(a float64) Product                       { panic("") }
 func ExpProduct(x float64) Product                         { panic("") }

@@ -223,6 +223,11 @@ type logProducts struct {
 	// chain takes them as they are (a count from a float helper in an
 	// expression kept as written, asWritten).
 	subs map[ast.Expr]string
+	// counts are the subs that are exact integer counts (a binomial
+	// function's value from the float helper of its form): a factor of
+	// the chain as lgamma.CountProduct, whose zero makes the product
+	// zero however far the other factors left float64.
+	counts map[ast.Expr]bool
 	// err is the first type the rewrite could not name in the file.
 	err error
 	// names, where set, are the Product expressions carried variables
@@ -512,6 +517,9 @@ func (lp *logProducts) leaf(e ast.Expr) string {
 // power from PowProduct, a Gamma value from GammaProduct, any other
 // value from ProductOf.
 func (lp *logProducts) product(e ast.Expr) string {
+	if c, ok := lp.countProduct(e); ok {
+		return c
+	}
 	if lp.chainableIn(e, true) {
 		return lp.chain(e)
 	}
@@ -519,6 +527,16 @@ func (lp *logProducts) product(e ast.Expr) string {
 		return l
 	}
 	return lp.pkg + ".ProductOf(" + lp.asFloat64(e, lp.spliced(e)) + ")"
+}
+
+// countProduct writes e as lgamma.CountProduct of its text where it is
+// one of the counts.
+func (lp *logProducts) countProduct(e ast.Expr) (string, bool) {
+	e = ast.Unparen(e)
+	if !lp.counts[e] {
+		return "", false
+	}
+	return lp.pkg + ".CountProduct(" + lp.asFloat64(e, lp.subs[e]) + ")", true
 }
 
 // chain writes a chainable e as the Product operations that form the
@@ -554,7 +572,7 @@ func (lp *logProducts) apply(left string, op token.Token, y ast.Expr) string {
 	if op == token.QUO || op == token.QUO_ASSIGN {
 		name = "Quo"
 	}
-	if lp.chainableIn(y, true) {
+	if _, count := lp.countProduct(y); count || lp.chainableIn(y, true) {
 		return left + "." + name + "(" + lp.product(y) + ")"
 	}
 	// The call's parentheses group y: its own would be doubled.

@@ -60,6 +60,7 @@ const (
 	ShapeLogOfValue             // math.Log(f(n)) of a float factorial or binomial function's call  Node: the math.Log, Log2 or Log10 call; Factorials or Binomials: that call (see buildLogOfValue)
 	ShapeRunSum                 // s += term of a running term, read after the loop as a product with s  Node: that read; Acc: s; Args: the running terms (see buildRunSum)
 	ShapeLoopQuotient           // num/den after num *= n − i over k trips and den *= i up to k  Node: the quotient; Args: n, k; Acc, AccInit, Loop: num's; Divisor: den's (see buildLoopQuotient)
+	ShapeBinomialValue          // T(f(n, k)) of an integer binomial function of known form, T a float type  Node: the conversion; IntBinomials: the call (see buildBinomialValue)
 )
 
 // Match is what the analyzer found, in the terms a fix needs.
@@ -186,8 +187,22 @@ type BinomialCall struct {
 // (Match.IntBinomials): its operands n and k, and its form.
 type IntBinomial struct {
 	N, K ast.Expr
-	// Loop: the multiplicative loop from 1 over k trips, the generalised
-	// C(n, k) for k ≥ 0 and 1 for k < 0; otherwise n!/(k!(n−k)!) over
-	// factorial functions that return 1 below 2, rounded toward zero.
-	Loop bool
+	Form BinomialForm
 }
+
+// A BinomialForm says what an integer binomial function computes
+// outside 0 ≤ k ≤ n too, in integers that do not wrap; each form has
+// the float helper that computes the same (binomialFormHelpers).
+type BinomialForm int
+
+const (
+	// FormFactorials: n!/(k!(n−k)!) over factorial functions that return
+	// 1 below 2, rounded toward zero.
+	FormFactorials BinomialForm = iota
+	// FormLoop: the multiplicative loop from 1 over k trips, the
+	// generalised C(n, k) for k ≥ 0 and 1 for k < 0.
+	FormLoop
+	// FormZero: 0 wherever k < 0 or k > n (the function returns 0 there
+	// before it computes anything), C(n, k) elsewhere.
+	FormZero
+)

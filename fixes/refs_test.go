@@ -453,3 +453,20 @@ func refKeptHypergeometric(x []float64) *big.Float {
 // refBinomialPMFnk is refBinomialPMF with the operands in the order
 // (n, k, p).
 func refBinomialPMFnk(x []float64) *big.Float { return refBinomialPMF([]float64{x[1], x[0], x[2]}) }
+
+// zeroChooseBig is what a binomial function that returns 0 outside
+// 0 ≤ k ≤ n computes without wrapping: C(n, k) from math/big there, 0
+// elsewhere.
+func zeroChooseBig(n, k int64) *big.Int {
+	if k < 0 || k > n {
+		return big.NewInt(0)
+	}
+	return chooseBig(n, k)
+}
+
+// refMissAll is C(lot − bad, drawn)/C(lot, drawn) for (lot, bad, drawn),
+// each count zeroChooseBig's, in math/big.
+func refMissAll(x []float64) *big.Float {
+	lot, bad, drawn := int64(x[0]), int64(x[1]), int64(x[2])
+	return quo(bf(zeroChooseBig(lot-bad, drawn)), bf(zeroChooseBig(lot, drawn)))
+}

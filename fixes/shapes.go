@@ -83,6 +83,7 @@ func init() {
 		ShapeLogOfValue:       {"logarithm of a factorial value", buildLogOfValue, family{float: "FactorialProduct"}, 0, nil},
 		ShapeRunSum:           {"running sum scaled after its loop", buildRunSum, family{float: "SumOf"}, 0, nil},
 		ShapeLoopQuotient:     {"falling-factorial loop over a factorial loop", buildLoopQuotient, chooseHelpers, 0, nil},
+		ShapeBinomialValue:    {"converted binomial", buildBinomialValue, family{float: "ChooseOrZero"}, 0, nil},
 	}
 }
 

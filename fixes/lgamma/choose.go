@@ -264,3 +264,31 @@ func ChooseLoop(n, k int) float64 {
 	}
 	return Choose(n, k)
 }
+
+// ChooseOrZero returns, as a float64, what a binomial function that
+// returns 0 wherever k < 0 or k > n, and C(n, k) elsewhere, computes in
+// integers that do not wrap:
+//
+//	if k < 0 || k > n {
+//		return 0
+//	}
+//	… C(n, k) by any formula …
+//
+// It is Choose for 0 ≤ k ≤ n and 0 everywhere else, negative n
+// included (where Choose gives the generalised coefficient). It is the
+// value such a function computes without wrapping, where
+// MustChooseInt64 panics because it leaves int64.
+//
+// Accuracy: as Choose's (checked against math/big in exact_test.go).
+//
+// Special cases are:
+//
+//	ChooseOrZero(n, k < 0) = 0
+//	ChooseOrZero(n, k > n) = 0
+//	ChooseOrZero(n, k) = +Inf if the result overflows
+func ChooseOrZero(n, k int) float64 {
+	if k < 0 || k > n {
+		return 0
+	}
+	return Choose(n, k)
+}

@@ -203,3 +203,24 @@ func TestChooseLoopAgainstBig(t *testing.T) {
 		}
 	}
 }
+
+// TestChooseOrZeroAgainstBig compares ChooseOrZero with the function it
+// stands for run in math/big: 0 outside 0 ≤ k ≤ n, and there C(n, k)
+// from math/big's Binomial, rounded to float64 by math/big (correctly
+// rounded, as the integer converted by float64(…) is, below 2^64).
+func TestChooseOrZeroAgainstBig(t *testing.T) {
+	for _, n := range []int64{-700, -67, -3, -1, 0, 1, 2, 5, 20, 30, 62, 66, 67, 100, 200, 1029, 1030, 1100} {
+		for _, k := range []int64{-5, -1, 0, 1, 2, 3, 10, 30, 33, 34, 66, 67, 100, 171, 500, 515, 550} {
+			want := 0.0
+			if 0 <= k && k <= n {
+				want, _ = new(big.Float).SetInt(new(big.Int).Binomial(n, k)).Float64()
+			}
+			got := ChooseOrZero(int(n), int(k))
+			// Below 2^64 the value must be the correctly rounded one (what
+			// float64 of the exact integer gives); beyond, within one ulp.
+			if got != want && (want < 0x1p64 || math.Abs(got-want) > want*0x1p-52) {
+				t.Errorf("ChooseOrZero(%d, %d) = %g; math/big gives %g", n, k, got, want)
+			}
+		}
+	}
+}

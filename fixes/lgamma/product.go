@@ -30,6 +30,10 @@ type Product struct {
 	// product was too; v is the float64 value there, but with bits lost,
 	// so a step that brings it back into the normal range loses it.
 	under bool
+	// zero: a factor is a count the code computes as an exact integer
+	// and is 0 (CountProduct), so that the product is ±0 whatever the
+	// other factors' float64 values, unless one of them is NaN (nan).
+	zero, nan bool
 }
 
 // ProductOf returns the product of the one factor x.
@@ -40,7 +44,44 @@ type Product struct {
 //	ProductOf(±Inf) holds ±Inf (log +Inf)
 //	ProductOf(NaN) holds NaN
 func ProductOf(x float64) Product {
-	return Product{v: x, l: ddLog(dd{math.Abs(x), 0}), neg: math.Signbit(x)}
+	return Product{v: x, l: ddLog(dd{math.Abs(x), 0}), neg: math.Signbit(x), nan: math.IsNaN(x)}
+}
+
+// CountProduct returns the product of the one factor v, a count the
+// code computes as an exact integer (a binomial function's value taken
+// from the float helper of its form): where v is 0, every product it is
+// a factor of is ±0, the sign of the other factors, whatever their
+// float64 values. The code's other factors are float64 values of real
+// numbers, ±Inf where such a number left float64 while it is finite
+// (1 − q^i for q = −2.5, i = 1100), so 0·Inf, NaN in float64, is 0 in
+// the product the code means: C(5, 100)·(1 − q^i)^100·(q^i)^−95 is 0.
+// A NaN factor stays NaN.
+//
+// Special cases are:
+//
+//	CountProduct(0).Mul(p) holds ±0 for every p not holding NaN
+//	CountProduct(v) is ProductOf(v) for v ≠ 0
+func CountProduct(v float64) Product {
+	p := ProductOf(v)
+	p.zero = v == 0
+	return p
+}
+
+// settleZero makes r ±0 where it has an exact zero count among its
+// factors and no NaN factor (CountProduct).
+func (r Product) settleZero() Product {
+	if r.zero && !r.nan {
+		r.v, r.l, r.lost, r.under = math.Copysign(0, boolSign(r.neg)), dd{math.Inf(-1), 0}, false, false
+	}
+	return r
+}
+
+// boolSign is −1 for neg, +1 otherwise.
+func boolSign(neg bool) float64 {
+	if neg {
+		return -1
+	}
+	return 1
 }
 
 // PowProduct returns the product holding x^p: math.Pow(x, p) and
@@ -135,15 +176,17 @@ func ChooseProduct(v, n, k float64) Product {
 // Mul returns the product p·q; its float64 value is p's times q's, as
 // the expression p * q forms it.
 func (p Product) Mul(q Product) Product {
-	r := Product{v: p.v * q.v, l: p.l.add(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
-	return r.mark(p.under || q.under)
+	r := Product{v: p.v * q.v, l: p.l.add(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost, zero: p.zero || q.zero, nan: p.nan || q.nan}
+	return r.mark(p.under || q.under).settleZero()
 }
 
 // Quo returns the quotient p/q; its float64 value is p's over q's, as
 // the expression p / q forms it.
 func (p Product) Quo(q Product) Product {
-	r := Product{v: p.v / q.v, l: p.l.sub(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost}
-	return r.mark(p.under || q.under)
+	// An exact zero count in the divisor is a division by zero, which
+	// float64 answers.
+	r := Product{v: p.v / q.v, l: p.l.sub(q.l), neg: p.neg != q.neg, lost: p.lost || q.lost, zero: p.zero && !q.zero, nan: p.nan || q.nan}
+	return r.mark(p.under || q.under).settleZero()
 }
 
 // MulFloat returns p·x, p.Mul(ProductOf(x)).
@@ -167,7 +210,7 @@ func (p Product) Sqrt() Product {
 	if p.neg && p.v != 0 || math.IsNaN(p.v) {
 		return ProductOf(math.NaN())
 	}
-	r := Product{v: math.Sqrt(p.v), l: p.l.mulF(0.5), neg: p.neg, lost: p.lost}
+	r := Product{v: math.Sqrt(p.v), l: p.l.mulF(0.5), neg: p.neg, lost: p.lost, zero: p.zero, nan: p.nan}
 	return r.mark(p.under)
 }
 

@@ -243,3 +243,36 @@ func TestProductSqrt(t *testing.T) {
 		t.Errorf("√-0 = %v, want -0 (as math.Sqrt)", got)
 	}
 }
+
+// TestCountProductZero forms a binomial probability with a zero count,
+// C(s, c)·(1 − e)^c·e^(s−c) with e = q^i and c > s, the way a rewrite
+// kept as written forms it: e is math.Pow(q, i), ±Inf where q^i leaves
+// float64, and the true value, computed with math/big from the exact
+// q^i, is 0 with the sign of the powers. Float64 must be that zero
+// where the float64 product is NaN (0·Inf); a nonzero count changes
+// nothing (ProductOf's value).
+func TestCountProductZero(t *testing.T) {
+	for _, c := range []struct {
+		s, i, c int
+		q       float64
+	}{{5, 1100, 100, -2.5}, {7, 200, 200, 170}, {13, 170, 1030, 171}, {3, 500, 7, -3}, {2, 3, 5, 0.5}} {
+		e := math.Pow(c.q, float64(c.i))
+		got := CountProduct(0).Mul(PowProduct(1-e, float64(c.c))).Mul(PowProduct(e, float64(c.s-c.c))).Float64()
+		// math/big: the sign of (1 − q^i)^c·(q^i)^(s−c), both bases exact.
+		be := new(big.Float).SetPrec(0).SetFloat64(1)
+		for j := 0; j < c.i; j++ {
+			be.Mul(be, big.NewFloat(c.q))
+		}
+		one := new(big.Float).Sub(big.NewFloat(1), be)
+		neg := one.Sign() < 0 && c.c%2 != 0 != (be.Sign() < 0 && (c.s-c.c)%2 != 0)
+		if got != 0 || math.Signbit(got) != neg {
+			t.Errorf("s=%d i=%d c=%d q=%g: CountProduct(0)·powers = %g; math/big gives %s0", c.s, c.i, c.c, c.q, got, map[bool]string{true: "-", false: "+"}[neg])
+		}
+	}
+	if got := CountProduct(0).Mul(ProductOf(math.NaN())).Float64(); !math.IsNaN(got) {
+		t.Errorf("CountProduct(0)·NaN = %g; want NaN", got)
+	}
+	if got, want := CountProduct(6).Mul(PowProduct(0.5, 3)).Float64(), 0.75; got != want {
+		t.Errorf("CountProduct(6)·0.5³ = %g; want %g (exact)", got, want)
+	}
+}
