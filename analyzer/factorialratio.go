@@ -4,10 +4,14 @@ import (
 	"fmt"
 	"go/ast"
 	"go/token"
+	"math"
+	"sort"
 	"strings"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
+	"github.com/overfact/overfact/internal/astpath"
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // The factorial-ratio category: binomials, permutations, multinomials,
@@ -118,6 +122,14 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 		msg = fmt.Sprintf("product of factorials in %s: the factor %s alone %s for %s ≥ %d, and the product earlier", u.t.typeName(), bang(u.arg, u.off), verb(u.t), src(u.arg), first)
 	default:
 		msg = fmt.Sprintf("ratio of factorials in %s: %s before the division", u.t.typeName(), breaks)
+	}
+	if u.t.Float && len(p.den) > 0 {
+		// A product the code forms on the way may leave float64 before
+		// any factor does: name it and its first input.
+		if what, at, ok := fc.firstIntermediate(root, u.t); ok {
+			msg = fmt.Sprintf("ratio of factorials in %s: the intermediate %s %s first, at %s on that line of inputs, before any factor does (%s only for %s ≥ %d)",
+				u.t.typeName(), what, verb(u.t), at, bang(u.arg, u.off), src(u.arg), first)
+		}
 	}
 	m.Shape = shape
 	if shape == fixes.ShapeNone {
@@ -466,6 +478,10 @@ func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
 	if !ok {
 		return false
 	}
+	if _, _, earlier := fc.firstIntermediate(root, d.t); earlier {
+		// A product the code forms breaks before the divisor does.
+		return false
+	}
 	var nums []string
 	for _, f := range p.num {
 		if f.kind == kindFactorial {
@@ -477,4 +493,266 @@ func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
 		fmt.Sprintf("ratio of factorials in %s: the divisor %s %s for %s ≥ %d, no later than the numerator's %s, and the quotient is then 0, or NaN once the numerator follows, although it may still fit%s",
 			d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, strings.Join(nums, ", "), j.clause))
 	return true
+}
+
+// A chainPart is one factor of a float product of factorials and
+// powers as the code writes it: (arg)! when base is 0, base^arg
+// otherwise, in the divisor when div is set.
+type chainPart struct {
+	arg  linear
+	base int64
+	div  bool
+	text string
+}
+
+// A chainStep is one value the code forms on its way to a product: a
+// factor, or the result of one multiplication or division, with the
+// parts whose product it is.
+type chainStep struct {
+	parts []chainPart
+	leaf  bool
+}
+
+// chainSteps returns the values a float product of factorial calls and
+// integer-based powers forms, in the order the code evaluates them
+// (locals the product reads, assigned once, before the expression), or
+// false when an operand is anything else.
+func (fc *fnCtx) chainSteps(root ast.Expr) (steps []chainStep, ok bool) {
+	var pre []chainStep
+	var walk func(e ast.Expr, local bool, depth int) ([]chainPart, bool)
+	walk = func(e ast.Expr, local bool, depth int) ([]chainPart, bool) {
+		if depth > maxDepth {
+			return nil, false
+		}
+		add := func(s chainStep) {
+			if local {
+				pre = append(pre, s)
+			} else {
+				steps = append(steps, s)
+			}
+		}
+		switch e := ast.Unparen(e).(type) {
+		case *ast.BinaryExpr:
+			if e.Op != token.MUL && e.Op != token.QUO {
+				return nil, false
+			}
+			x, okx := walk(e.X, local, depth+1)
+			y, oky := walk(e.Y, local, depth+1)
+			if !okx || !oky {
+				return nil, false
+			}
+			parts := append([]chainPart{}, x...)
+			for _, p := range y {
+				p.div = p.div != (e.Op == token.QUO)
+				parts = append(parts, p)
+			}
+			add(chainStep{parts: parts})
+			return parts, true
+		case *ast.CallExpr:
+			f, ok := fc.factorOf(e)
+			if !ok || !f.t.Float {
+				return nil, false
+			}
+			var p chainPart
+			switch {
+			case f.kind == kindFactorial && f.fact != nil && !f.fact.Safe:
+				l, ok := fc.linear(f.arg)
+				if !ok {
+					return nil, false
+				}
+				p = chainPart{arg: fc.expandLocals(l.add(linear{C: f.off}), 0), text: bang(f.arg, f.off)}
+			case f.math == "Pow":
+				b, okb := fc.intConst(f.arg)
+				l, okl := fc.linear(f.arg2)
+				if !okb || !okl || b < 2 {
+					return nil, false
+				}
+				p = chainPart{arg: fc.expandLocals(l, 0), base: b, text: fmt.Sprintf("%d^%s", b, atom(fc.stripConv(f.arg2)))}
+			default:
+				return nil, false
+			}
+			add(chainStep{parts: []chainPart{p}, leaf: true})
+			return []chainPart{p}, true
+		case *ast.Ident:
+			if def := fc.singleDef(e); def != nil {
+				return walk(def, true, depth+1)
+			}
+		}
+		return nil, false
+	}
+	if _, ok := walk(root, false, 0); !ok {
+		return nil, false
+	}
+	return append(pre, steps...), true
+}
+
+// expandLocals substitutes in l the linear value of each local it reads
+// that is assigned once (n := a + b + c), so that the forms speak of the
+// same variables.
+func (fc *fnCtx) expandLocals(l linear, depth int) linear {
+	if depth > maxDepth {
+		return l
+	}
+	for _, t := range l.Terms {
+		obj := t.Sym.Object
+		if !(fc.node.Pos() <= obj.Pos() && obj.Pos() < fc.node.End()) {
+			continue
+		}
+		if defs := fc.defsOf(obj); len(defs) == 1 && defs[0] != nil {
+			if d, ok := fc.linear(defs[0]); ok {
+				return fc.expandLocals(linear(lform(l).Subst(t.Sym, lform(d))), depth+1)
+			}
+		}
+	}
+	return l
+}
+
+// A chainLine is the line of inputs a chain is judged along: every
+// variable t, but those centred at 0.
+type chainLine struct {
+	vars    []linform.Obj
+	centred map[linform.Obj]bool
+	from    int64
+}
+
+// lineOf chooses the line: each variable equal to t, except one that
+// two factorials take with opposite signs around the same rest
+// ((j+m)! and (j−m)!), which is held at 0, the middle of its pair. It
+// fails where a factorial's argument or an exponent falls along it.
+func lineOf(steps []chainStep) (chainLine, bool) {
+	all := steps[len(steps)-1].parts
+	ln := chainLine{centred: map[linform.Obj]bool{}}
+	seen := map[linform.Obj]bool{}
+	for i, a := range all {
+		for _, t := range a.arg.Terms {
+			if !seen[t.Sym] {
+				seen[t.Sym] = true
+				ln.vars = append(ln.vars, t.Sym)
+			}
+			for _, b := range all[i+1:] {
+				if a.base == 0 && b.base == 0 && b.arg.coefOf(t.Sym.Object) == -t.K && a.arg.without(t.Sym.Object).equal(b.arg.without(t.Sym.Object)) {
+					ln.centred[t.Sym] = true
+				}
+			}
+		}
+	}
+	sort.Slice(ln.vars, func(i, j int) bool { return ln.vars[i].Before(ln.vars[j]) })
+	if len(ln.centred) == len(ln.vars) {
+		return ln, false
+	}
+	for _, p := range all {
+		a, b := ln.coef(p.arg)
+		switch {
+		case a < 0 || a == 0 && b < 0:
+			return ln, false
+		case a > 0 && b < 0:
+			ln.from = max(ln.from, (-b+a-1)/a)
+		}
+	}
+	return ln, true
+}
+
+// coef returns l along the line as A·t + B.
+func (ln chainLine) coef(l linear) (a, b int64) {
+	for _, t := range l.Terms {
+		if !ln.centred[t.Sym] {
+			a += t.K
+		}
+	}
+	return a, l.C
+}
+
+// parts returns the thresholds' parts of a step along the line.
+func (ln chainLine) parts(s chainStep) []thresholds.ChainPart {
+	var out []thresholds.ChainPart
+	for _, p := range s.parts {
+		a, b := ln.coef(p.arg)
+		out = append(out, thresholds.ChainPart{A: a, B: b, Base: p.base, Div: p.div})
+	}
+	return out
+}
+
+// text names the inputs of the line at t.
+func (ln chainLine) text(t int64) string {
+	var on, off []string
+	for _, v := range ln.vars {
+		if ln.centred[v] {
+			off = append(off, v.Name())
+		} else {
+			on = append(on, v.Name())
+		}
+	}
+	s := strings.Join(on, " = ") + fmt.Sprintf(" = %d", t)
+	if len(on) > 1 {
+		s += " (all equal)"
+	}
+	if len(off) > 0 {
+		s += ", " + strings.Join(off, " = ") + " = 0"
+	}
+	return s
+}
+
+// firstIntermediate returns, for a float product of factorials and
+// powers, the value the code forms that leaves float64 first along the
+// line lineOf chooses, where that is no single factor and the whole
+// value still fits there: the product's text, where it breaks, and the
+// leaf factors' own first break along the line.
+func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, ok bool) {
+	steps, ok := fc.chainSteps(root)
+	if !ok || len(steps) < 2 {
+		return "", "", false
+	}
+	ln, ok := lineOf(steps)
+	if !ok {
+		return "", "", false
+	}
+	best, bestAt := -1, int64(math.MaxInt64)
+	for i, s := range steps {
+		if x := thresholds.ChainFirstBad(t.Num, ln.parts(s), ln.from); x < bestAt {
+			best, bestAt = i, x
+		}
+	}
+	last := steps[len(steps)-1]
+	// The value the code keeps is the product, or its square root.
+	root2 := 1
+	if fc.file != nil {
+		path, _ := astpath.Enclosing(fc.file.file, root.Pos(), root.End())
+		for _, n := range path[1:] {
+			if _, paren := n.(*ast.ParenExpr); paren {
+				continue
+			}
+			if call, ok := n.(*ast.CallExpr); ok && fc.c.isMathFunc(call, "Sqrt") {
+				root2 = 2
+			}
+			break
+		}
+	}
+	if best < 0 || steps[best].leaf || !thresholds.ChainFits(t.Num, ln.parts(last), bestAt, root2) {
+		return "", "", false
+	}
+	for _, v := range ln.vars {
+		iv := fc.entryRange(v.Object, root)
+		if want := map[bool]int64{false: bestAt, true: 0}[ln.centred[v]]; iv.IsEmpty() || iv.Hi < want || iv.Lo > want {
+			println("DBG range", v.Name(), iv.Lo, iv.Hi)
+			return "", "", false
+		}
+	}
+	var num, den []string
+	for _, p := range steps[best].parts {
+		if p.div {
+			den = append(den, p.text)
+		} else {
+			num = append(num, p.text)
+		}
+	}
+	what = strings.Join(num, "·")
+	if len(num) == 0 {
+		what = "1"
+	}
+	if len(den) == 1 {
+		what += "/" + den[0]
+	} else if len(den) > 1 {
+		what += "/(" + strings.Join(den, "·") + ")"
+	}
+	return what, ln.text(bestAt), true
 }

@@ -7,7 +7,7 @@ type Table struct {
 
 func hyperPMF(a, b, c, d int) float64 {
 	n := a + b + c + d
-	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / // want `ratio of factorials in float64: the numerator`
+	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / // want `ratio of factorials in float64: the intermediate \(a \+ b\)!·\(c \+ d\)!·\(a \+ c\)!·\(b \+ d\)! overflows to \+Inf first, at a = b = c = d = 29 \(all equal\)`
 		(factF(n) * factF(a) * factF(b) * factF(c) * factF(d))
 }
 

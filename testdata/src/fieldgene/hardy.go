@@ -22,7 +22,7 @@ func hwProbDirect(nAA, nAB, nBB int) float64 {
 	nA := 2*nAA + nAB
 	nB := 2*nBB + nAB
 	num := math.Pow(2, float64(nAB)) * floatFact(n) * floatFact(nA) * floatFact(nB)
-	return num / (floatFact(nAA) * floatFact(nAB) * floatFact(nBB) * floatFact(2*n)) // want `ratio of factorials in float64: the numerator n!`
+	return num / (floatFact(nAA) * floatFact(nAB) * floatFact(nBB) * floatFact(2*n)) // want `ratio of factorials in float64: the intermediate 2\^nAB·n!·nA!·nB! overflows to \+Inf first, at nAA = nAB = nBB = 24 \(all equal\)`
 }
 
 // HWExactTest is the Hardy–Weinberg exact test's p-value: the

@@ -82,5 +82,5 @@ func TripleShare(n, k int) float64 { // want TripleShare:`value 3·Γ\(p0 \+ 1\)
 // no single binomial, taken in log space where they leave float64.
 func ShiftTable(a, b, c, d int) float64 { // want ShiftTable:`value Γ\(p0 \+ p1 \+ 1\)·Γ\(p2 \+ p3 \+ 1\)` ShiftTable:`wrong for some a or some b`
 	n := a + b + c + d
-	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / (factF(n) * factF(a) * factF(b) * factF(c) * factF(d)) // want `ratio of factorials in float64: the numerator \(a \+ b\)! overflows`
+	return factF(a+b) * factF(c+d) * factF(a+c) * factF(b+d) / (factF(n) * factF(a) * factF(b) * factF(c) * factF(d)) // want `ratio of factorials in float64: the intermediate \(a \+ b\)!·\(c \+ d\)!·\(a \+ c\)!·\(b \+ d\)! overflows to \+Inf first, at a = b = c = d = 29`
 }

@@ -50,7 +50,7 @@ func Wigner3j(j1, j2, j3, m1, m2, m3 int) float64 { // want Wigner3j:`wrong for 
 		return 0
 	}
 	tri := factorial(j1+j2-j3) * factorial(j1-j2+j3) * factorial(-j1+j2+j3) / factorial(j1+j2+j3+1) // want `Wigner3j computes Γ\(j1 \+ j2 - j3 \+ 1\)·Γ\(j1 - j2 \+ j3 \+`
-	pre := math.Sqrt(tri * factorial(j1+m1) * factorial(j1-m1) * factorial(j2+m2) *                 // want `ratio of factorials in float64: the numerator \(j1 \+ j2`
+	pre := math.Sqrt(tri * factorial(j1+m1) * factorial(j1-m1) * factorial(j2+m2) *                 // want `ratio of factorials in float64: the intermediate \(j1 \+ j2 - j3\)!·.*/\(j1 \+ j2 \+ j3 \+ 1\)! overflows to \+Inf first, at j1 = j2 = j3 = 50 \(all equal\), m1 = m2 = m3 = 0`
 		factorial(j2-m2) * factorial(j3+m3) * factorial(j3-m3))
 	tmin := imax3(0, j2-j3-m1, j1-j3+m2)
 	tmax := imin3(j1+j2-j3, j1-m1, j2+m2)
