@@ -22,20 +22,20 @@ func samples(n, k int) int64 { // want samples:"binomial of parameter 0, breaks 
 
 // MissAll is the probability that drawn items from a lot holding bad
 // defective ones are all sound.
-func MissAll(lot, bad, drawn int) float64 {
+func MissAll(lot, bad, drawn int) float64 { // want MissAll:`wrong for some lot or some bad`
 	return float64(samples(lot-bad, drawn)) / float64(samples(lot, drawn)) // want `samples\(lot-bad, drawn\) computes C\(lot - bad, drawn\) in int64` `samples\(lot, drawn\) computes C\(lot, drawn\) in int64`
 }
 
 // Exactly is the binomial probability of k defective items among n when
 // each is defective with probability p.
-func Exactly(n, k int, p float64) float64 {
+func Exactly(n, k int, p float64) float64 { // want Exactly:`wrong for n ≥ 62`
 	return float64(samples(n, k)) * math.Pow(p, float64(k)) * math.Pow(1-p, float64(n-k)) // want `binomial probability C\(n, k\)·p\^k·\(1−p\)\^\(n−k\) in int64`
 }
 
 // Weight32 is the count in float32, whose single rounding of the
 // integer the float64 helper would double: it keeps its finding and has
 // no fix.
-func Weight32(n, k int) float32 {
+func Weight32(n, k int) float32 { // want Weight32:`wrong for n ≥ 62`
 	return float32(samples(n, k)) // want `before the conversion to float32`
 }
 
@@ -53,6 +53,6 @@ func halved(n, k int) int64 { // want halved:"binomial of parameter 0, breaks fr
 }
 
 // Share converts halved's count: no fix.
-func Share(n, k int) float64 {
+func Share(n, k int) float64 { // want Share:`wrong for n ≥ 62`
 	return float64(halved(n, k)) / 2 // want `halved\(n, k\) computes C\(n, k\) in int64`
 }
