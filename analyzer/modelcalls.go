@@ -532,21 +532,8 @@ func (fc *fnCtx) stableVar(v types.Object) bool {
 	}
 	changed := false
 	assigned.EachTarget(d.Body, nil, func(e ast.Expr, _ ast.Node) bool {
-		for {
-			switch x := ast.Unparen(e).(type) {
-			case *ast.SelectorExpr:
-				e = x.X
-				continue
-			case *ast.IndexExpr:
-				e = x.X
-				continue
-			case *ast.StarExpr:
-				e = x.X
-				continue
-			case *ast.Ident:
-				changed = fc.c.pass.TypesInfo.Uses[x] == v
-			}
-			break
+		if id := assigned.Root(e); id != nil {
+			changed = fc.c.pass.TypesInfo.Uses[id] == v
 		}
 		return !changed
 	})

@@ -78,6 +78,26 @@ func EachTarget(root ast.Node, skip func(ast.Node) bool, f func(target ast.Expr,
 	})
 }
 
+// Root returns the variable a target of EachTarget writes into: x of
+// x, x.f, x[i], *x and their combinations ((*x).f[i]), or nil where the
+// target starts from no identifier (f().g, a composite literal).
+func Root(target ast.Expr) *ast.Ident {
+	for {
+		switch x := ast.Unparen(target).(type) {
+		case *ast.Ident:
+			return x
+		case *ast.SelectorExpr:
+			target = x.X
+		case *ast.IndexExpr:
+			target = x.X
+		case *ast.StarExpr:
+			target = x.X
+		default:
+			return nil
+		}
+	}
+}
+
 // In reports whether root may change v, outside the subtrees skip names.
 func In(info *types.Info, root ast.Node, v types.Object, skip func(ast.Node) bool) bool {
 	found := false

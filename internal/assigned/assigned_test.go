@@ -114,3 +114,25 @@ func TestEachTarget(t *testing.T) {
 		t.Errorf("walk went on to %d targets after f returned false at the third", n)
 	}
 }
+
+// TestRoot reads written targets as the Go specification builds them
+// (selectors, index expressions, pointer indirections) back to the
+// variable they start from.
+func TestRoot(t *testing.T) {
+	for _, c := range []struct{ expr, want string }{
+		{"x", "x"}, {"x.f", "x"}, {"x[i]", "x"}, {"*x", "x"},
+		{"(*x).f[i].g", "x"}, {"(x)", "x"}, {"f().g", ""}, {"T{}.f", ""},
+	} {
+		e, err := parser.ParseExpr(c.expr)
+		if err != nil {
+			t.Fatal(err)
+		}
+		got := ""
+		if id := Root(e); id != nil {
+			got = id.Name
+		}
+		if got != c.want {
+			t.Errorf("Root(%s) = %q, want %q", c.expr, got, c.want)
+		}
+	}
+}
