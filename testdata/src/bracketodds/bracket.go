@@ -1,0 +1,89 @@
+package bracketodds
+
+import "math"
+
+// Outcomes is the number of ways a single-elimination bracket of
+// 2^rounds teams can be filled in.
+func Outcomes(rounds int) float64 {
+	return math.Pow(2, math.Pow(2, float64(rounds))-1)
+}
+
+// factF is n! in float64, counted with a float64 counter.
+func factF(n float64) float64 {
+	r := 1.0
+	for i := 2.0; i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+
+// SeriesWin is the probability that a team winning each game with
+// probability p takes a best-of-(2n-1) series: it wins n games while
+// the opponent wins k < n.
+func SeriesWin(n int, p float64) float64 {
+	q := 1 - p
+	s := 0.0
+	for k := 0; k < n; k++ {
+		ways := factF(float64(n-1+k)) / (factF(float64(k)) * factF(float64(n-1)))
+		s += ways * math.Pow(p, float64(n)) * math.Pow(q, float64(k))
+	}
+	return s
+}
+
+// SeriesWinRunning is SeriesWin with the term updated from the
+// previous one.
+func SeriesWinRunning(n int, p float64) float64 {
+	q := 1 - p
+	term := math.Pow(p, float64(n))
+	s := term
+	for k := 1; k < n; k++ {
+		term *= float64(n-1+k) / float64(k) * q
+		s += term
+	}
+	return s
+}
+
+// SeriesWinLog is SeriesWin with each term from its logarithm.
+func SeriesWinLog(n int, p float64) float64 {
+	lp, lq := math.Log(p), math.Log1p(-p)
+	ln1, _ := math.Lgamma(float64(n))
+	s := 0.0
+	for k := 0; k < n; k++ {
+		a, _ := math.Lgamma(float64(n + k))
+		b, _ := math.Lgamma(float64(k + 1))
+		s += math.Exp(a - b - ln1 + float64(n)*lp + float64(k)*lq)
+	}
+	return s
+}
+
+// Seedings is the number of ways to seed n teams into n slots.
+func Seedings(n uint64) uint64 {
+	s := uint64(1)
+	for i := uint64(2); i <= n; i++ {
+		s *= i
+	}
+	return s
+}
+
+// DistinctBrackets is the number of seedings of n = 2^r teams that
+// give different first-round pairings: n! / (2^(n/2) (n/2)!).
+func DistinctBrackets(n uint64) uint64 {
+	h := n / 2
+	return Seedings(n) / (Seedings(h) << h)
+}
+
+// MeetProb is the probability that two given teams meet somewhere in
+// a random bracket of 2^rounds teams with every game a coin toss.
+func MeetProb(rounds int) float64 {
+	return 1 / math.Pow(2, float64(rounds-1))
+}
+
+// Schedules is the number of round-robin pairings of 2n teams in one
+// round, (2n)! / (2^n n!), computed by the product of odd numbers.
+func Schedules(n int) uint64 {
+	r := uint64(1)
+	for i := 1; i < 2*n; i += 2 {
+		r *= uint64(i)
+	}
+	return r
+}

@@ -1,0 +1,81 @@
+// Package claimfreq models the number of claims a motor portfolio
+// files: Poisson and negative binomial frequencies, and the
+// Beta-binomial lapse model used beside them.
+package claimfreq
+
+import "math"
+
+// NegBin is a negative binomial claim-count distribution: the number
+// of claims before the R-th "success" with success probability P.
+type NegBin struct {
+	R float64
+	P float64
+}
+
+// PMF returns the probability of exactly k claims.
+func (d NegBin) PMF(k int) float64 {
+	kf := float64(k)
+	coef := math.Gamma(kf+d.R) / (math.Gamma(d.R) * math.Gamma(kf+1))
+	return coef * math.Pow(d.P, d.R) * math.Pow(1-d.P, kf)
+}
+
+// LogPMF returns the logarithm of the probability of exactly k claims.
+func (d NegBin) LogPMF(k int) float64 {
+	kf := float64(k)
+	a, _ := math.Lgamma(kf + d.R)
+	b, _ := math.Lgamma(d.R)
+	c, _ := math.Lgamma(kf + 1)
+	return a - b - c + d.R*math.Log(d.P) + kf*math.Log1p(-d.P)
+}
+
+// CDF returns the probability of at most k claims, summing the
+// probabilities by their ratio p(i)/p(i-1) = (i-1+R)/i * (1-P).
+func (d NegBin) CDF(k int) float64 {
+	p := math.Pow(d.P, d.R)
+	s := p
+	for i := 1; i <= k; i++ {
+		p *= (float64(i) - 1 + d.R) / float64(i) * (1 - d.P)
+		s += p
+	}
+	return s
+}
+
+// Mean is the expected claim count.
+func (d NegBin) Mean() float64 { return d.R * (1 - d.P) / d.P }
+
+// FitMoments fits a negative binomial to a sample mean and variance;
+// ok is false when the sample is not over-dispersed.
+func FitMoments(mean, variance float64) (d NegBin, ok bool) {
+	if variance <= mean || mean <= 0 {
+		return NegBin{}, false
+	}
+	p := mean / variance
+	return NegBin{R: mean * p / (1 - p), P: p}, true
+}
+
+// Allocations is the number of ways n identical claims can fall on k
+// policies, C(n+k-1, k-1).
+func Allocations(n, k int64) int64 {
+	f := func(m int64) int64 {
+		r := int64(1)
+		for ; m > 1; m-- {
+			r *= m
+		}
+		return r
+	}
+	return f(n+k-1) / (f(k-1) * f(n))
+}
+
+// Fact is n! in the caller's numeric type.
+func Fact[T ~int | ~int64 | ~uint64 | ~float64](n T) T {
+	var r T = 1
+	for i := T(2); i <= n; i++ {
+		r *= i
+	}
+	return r
+}
+
+// PoissonProb is the Poisson probability of k claims at rate lambda.
+func PoissonProb(k int, lambda float64) float64 {
+	return math.Exp(-lambda) * math.Pow(lambda, float64(k)) / Fact(float64(k))
+}

@@ -1,0 +1,107 @@
+// Package repairshop sizes the repair crew of a machine shop with the
+// finite-source (machine interference) queue: N machines that break
+// down at rate Lambda each, R mechanics that repair at rate Mu each.
+package repairshop
+
+import (
+	"errors"
+	"math"
+)
+
+// Shop describes one machine shop.
+type Shop struct {
+	Machines  int
+	Mechanics int
+	Lambda    float64
+	Mu        float64
+}
+
+// ErrNoCrew is returned for a shop without mechanics.
+var ErrNoCrew = errors.New("repairshop: no mechanics")
+
+func factorial(n int) float64 {
+	p := 1.0
+	for i := n; i > 1; i-- {
+		p *= float64(i)
+	}
+	return p
+}
+
+// weight is the unnormalised stationary weight of n machines down.
+func (s Shop) weight(n int) float64 {
+	rho := s.Lambda / s.Mu
+	N, r := s.Machines, s.Mechanics
+	w := factorial(N) / factorial(N-n) * math.Pow(rho, float64(n))
+	if n <= r {
+		return w / factorial(n)
+	}
+	return w / (factorial(r) * math.Pow(float64(r), float64(n-r)))
+}
+
+// Distribution returns the stationary probabilities of 0..N machines
+// being down.
+func (s Shop) Distribution() ([]float64, error) {
+	if s.Mechanics < 1 {
+		return nil, ErrNoCrew
+	}
+	p := make([]float64, s.Machines+1)
+	total := 0.0
+	for n := range p {
+		p[n] = s.weight(n)
+		total += p[n]
+	}
+	for n := range p {
+		p[n] /= total
+	}
+	return p, nil
+}
+
+// MeanDown is the expected number of machines out of service.
+func (s Shop) MeanDown() (float64, error) {
+	p, err := s.Distribution()
+	if err != nil {
+		return 0, err
+	}
+	m := 0.0
+	for n, v := range p {
+		m += float64(n) * v
+	}
+	return m, nil
+}
+
+// DistributionStable computes the same probabilities from the
+// birth-death balance p(n+1) = p(n) * birth(n) / death(n+1), rescaling
+// whenever the running weight grows large.
+func (s Shop) DistributionStable() []float64 {
+	N := s.Machines
+	p := make([]float64, N+1)
+	p[0] = 1
+	for n := 0; n < N; n++ {
+		birth := float64(N-n) * s.Lambda
+		death := float64(min(n+1, s.Mechanics)) * s.Mu
+		p[n+1] = p[n] * birth / death
+		if p[n+1] > 1e250 {
+			for i := 0; i <= n+1; i++ {
+				p[i] /= 1e250
+			}
+		}
+	}
+	total := 0.0
+	for _, v := range p {
+		total += v
+	}
+	for i := range p {
+		p[i] /= total
+	}
+	return p
+}
+
+// Utilisation is the share of mechanics busy.
+func (s Shop) Utilisation() float64 {
+	p := s.DistributionStable()
+	busy := 0.0
+	for n, v := range p {
+		busy += float64(min(n, s.Mechanics)) * v
+	}
+	return busy / float64(s.Mechanics)
+}
