@@ -39,6 +39,7 @@ var scenarios = []string{
 	"labtables", "raffle", "pickroute", "linkbudget", "gameodds", "clinicq", "germtrial",
 	"linebroaden", "sparecheck", "queuedesk", "spinstats", "puzzlebox", "exacttest",
 	"orbitals", "curveforge", "latticeprice", "outbreak", "fieldgene",
+	"annuity", "claimfreq", "bracketodds", "dspwindow", "repairshop",
 }
 
 // logSpacePackages are the category packages beside the analyzer of the

@@ -40,9 +40,9 @@ func GompertzSurvival(b, c, t float64) float64 {
 
 // JointLifeCount is the number of ordered ways to assign n annuitants
 // to n distinct payment slots.
-func JointLifeCount(n int) int64 {
+func JointLifeCount(n int) int64 { // want JointLifeCount:`wrong for some n \(JointLifeCount, annuity/erlang\.go:45\)` JointLifeCount:`factorial of parameter 0, breaks from 21`
 	var p int64 = 1
-	for i := int64(2); i <= int64(n); i++ {
+	for i := int64(2); i <= int64(n); i++ { // want `factorial of int64\(n\) in int64 wraps for int64\(n\) ≥ 21`
 		p *= i
 	}
 	return p
@@ -50,11 +50,11 @@ func JointLifeCount(n int) int64 {
 
 // ReversionaryPairs is the number of unordered (first death, second
 // death) pairs among n lives, n!/(2!(n-2)!).
-func ReversionaryPairs(n int) int64 {
+func ReversionaryPairs(n int) int64 { // want ReversionaryPairs:`value 1/2·Γ\(p0 \+ 1\)/Γ\(p0 - 1\), wrong once p0 ≥ 21 or p0 - 2 ≥ 21` ReversionaryPairs:`wrong for n ≥ 21 \(ReversionaryPairs, annuity/erlang\.go:57\)`
 	if n < 2 {
 		return 0
 	}
-	return JointLifeCount(n) / (2 * JointLifeCount(n-2))
+	return JointLifeCount(n) / (2 * JointLifeCount(n-2)) // want `ratio of factorials in int64: the numerator n! wraps for n ≥ 21 before the division`
 }
 
 // MakehamPMF is the chance of exactly k accidental deaths in a group
@@ -62,7 +62,7 @@ func ReversionaryPairs(n int) int64 {
 // evaluated as a ratio of a power and a Gamma value.
 func MakehamPMF(k int, a, t float64) float64 {
 	m := a * t
-	return math.Pow(m, float64(k)) / math.Gamma(float64(k)+1) * math.Exp(-m)
+	return math.Pow(m, float64(k)) / math.Gamma(float64(k)+1) * math.Exp(-m) // want `math\.Gamma overflows: math\.Gamma\(float64\(k\) \+ 1\) is \+Inf for k ≥ 171`
 }
 
 // SelectPeriodWeights returns the weights (n choose j)/2^n that blend

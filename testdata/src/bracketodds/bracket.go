@@ -9,7 +9,7 @@ func Outcomes(rounds int) float64 {
 }
 
 // factF is n! in float64, counted with a float64 counter.
-func factF(n float64) float64 {
+func factF(n float64) float64 { // want factF:`factorial of parameter 0, breaks from 171`
 	r := 1.0
 	for i := 2.0; i <= n; i++ {
 		r *= i
@@ -20,12 +20,12 @@ func factF(n float64) float64 {
 // SeriesWin is the probability that a team winning each game with
 // probability p takes a best-of-(2n-1) series: it wins n games while
 // the opponent wins k < n.
-func SeriesWin(n int, p float64) float64 {
+func SeriesWin(n int, p float64) float64 { // want SeriesWin:`wrong for some n \(SeriesWin, bracketodds/bracket\.go:28\)`
 	q := 1 - p
 	s := 0.0
 	for k := 0; k < n; k++ {
-		ways := factF(float64(n-1+k)) / (factF(float64(k)) * factF(float64(n-1)))
-		s += ways * math.Pow(p, float64(n)) * math.Pow(q, float64(k))
+		ways := factF(float64(n-1+k)) / (factF(float64(k)) * factF(float64(n-1))) // want `SeriesWin computes C\(n \+ k - 1, n - 1\) in float64, which fits where factF\(float64\(n - 1 \+ k\)\) already overflow`
+		s += ways * math.Pow(p, float64(n)) * math.Pow(q, float64(k))             // want `ratio of factorials in float64: the numerator`
 	}
 	return s
 }
@@ -57,9 +57,9 @@ func SeriesWinLog(n int, p float64) float64 {
 }
 
 // Seedings is the number of ways to seed n teams into n slots.
-func Seedings(n uint64) uint64 {
+func Seedings(n uint64) uint64 { // want Seedings:`factorial of parameter 0, breaks from 21` Seedings:`wrong for some n \(Seedings, bracketodds/bracket\.go:62\)`
 	s := uint64(1)
-	for i := uint64(2); i <= n; i++ {
+	for i := uint64(2); i <= n; i++ { // want `factorial of n in uint64 wraps for n ≥ 21`
 		s *= i
 	}
 	return s
@@ -80,9 +80,9 @@ func MeetProb(rounds int) float64 {
 
 // Schedules is the number of round-robin pairings of 2n teams in one
 // round, (2n)! / (2^n n!), computed by the product of odd numbers.
-func Schedules(n int) uint64 {
+func Schedules(n int) uint64 { // want Schedules:`wrong for some n \(Schedules, bracketodds/bracket\.go:85\)`
 	r := uint64(1)
-	for i := 1; i < 2*n; i += 2 {
+	for i := 1; i < 2*n; i += 2 { // want `double factorial of 2 \* n-1 in uint64 wraps for 2 \* n ≥ 35`
 		r *= uint64(i)
 	}
 	return r

@@ -8,19 +8,19 @@ import (
 )
 
 // fact returns n! in an int64.
-func fact(n int) int64 {
+func fact(n int) int64 { // want fact:`factorial of parameter 0, breaks from 21`
 	if n <= 1 {
 		return 1
 	}
-	return int64(n) * fact(n-1)
+	return int64(n) * fact(n-1) // want `recursive factorial of n in int64 wraps for n ≥ 21`
 }
 
 // Combinations is the number of tickets in an n-choose-k draw.
-func Combinations(n, k int) int64 {
+func Combinations(n, k int) int64 { // want Combinations:`wrong for n ≥ 21 \(Combinations, bracketodds/lottery\.go:23\)` Combinations:`binomial of parameter 0, breaks from 21`
 	if k < 0 || k > n {
 		return 0
 	}
-	return fact(n) / (fact(k) * fact(n-k))
+	return fact(n) / (fact(k) * fact(n-k)) // want `binomial coefficient as a ratio of factorials in int64: the numerator n! wraps for n ≥ 21, although C\(n, n/2\) `
 }
 
 // Odds formats the one-in-N jackpot odds of a draw.
@@ -30,7 +30,7 @@ func Odds(n, k int) string {
 
 // Tickets is Combinations computed by the multiplicative formula, for
 // draws from at most 60 balls.
-func Tickets(n, k int) (int64, error) {
+func Tickets(n, k int) (int64, error) { // want Tickets:`binomial of parameter 0, safe for \[0, 60\]`
 	if n > 60 || k < 0 || k > n {
 		return 0, fmt.Errorf("bracketodds: draw %d from %d not supported", k, n)
 	}

@@ -13,9 +13,9 @@ type NegBin struct {
 }
 
 // PMF returns the probability of exactly k claims.
-func (d NegBin) PMF(k int) float64 {
+func (d NegBin) PMF(k int) float64 { // want PMF:`wrong for k ≥ 170\.624377 \(PMF, claimfreq/negbin\.go:18\)` PMF:`value Γ\(p0 \+ recv\.R\)·\(recv\.P\)\^\(recv\.R\)·\(-recv\.P \+ 1\)\^\(p0\)/\(Γ\(recv\.R\)·Γ\(p0 \+ 1\)\), wrong once p0 \+ recv\.R ≥ 171\.`
 	kf := float64(k)
-	coef := math.Gamma(kf+d.R) / (math.Gamma(d.R) * math.Gamma(kf+1))
+	coef := math.Gamma(kf+d.R) / (math.Gamma(d.R) * math.Gamma(kf+1)) // want `ratio of math\.Gamma values in float64: math\.Gamma\(kf \+ d\.R\) is \+Inf for arguments ≥ 171\.624377`
 	return coef * math.Pow(d.P, d.R) * math.Pow(1-d.P, kf)
 }
 
@@ -58,7 +58,7 @@ func FitMoments(mean, variance float64) (d NegBin, ok bool) {
 func Allocations(n, k int64) int64 {
 	f := func(m int64) int64 {
 		r := int64(1)
-		for ; m > 1; m-- {
+		for ; m > 1; m-- { // want `factorial of m in int64 wraps for m ≥ 21`
 			r *= m
 		}
 		return r
@@ -67,15 +67,15 @@ func Allocations(n, k int64) int64 {
 }
 
 // Fact is n! in the caller's numeric type.
-func Fact[T ~int | ~int64 | ~uint64 | ~float64](n T) T {
+func Fact[T ~int | ~int64 | ~uint64 | ~float64](n T) T { // want Fact:`factorial of parameter 0, breaks from 21`
 	var r T = 1
-	for i := T(2); i <= n; i++ {
+	for i := T(2); i <= n; i++ { // want `factorial of n in int \(the narrowest type in the constraint of T\) wraps for n ≥ 21`
 		r *= i
 	}
 	return r
 }
 
 // PoissonProb is the Poisson probability of k claims at rate lambda.
-func PoissonProb(k int, lambda float64) float64 {
-	return math.Exp(-lambda) * math.Pow(lambda, float64(k)) / Fact(float64(k))
+func PoissonProb(k int, lambda float64) float64 { // want PoissonProb:`value \(p1\)\^\(p0\)·exp\(-p1\)/Γ\(p0 \+ 1\), wrong once p0 ≥ 21` PoissonProb:`wrong for k ≥ 21 \(PoissonProb, claimfreq/negbin\.go:80\)`
+	return math.Exp(-lambda) * math.Pow(lambda, float64(k)) / Fact(float64(k)) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/\(float64\(k\)\)! in float64: the divisor`
 }

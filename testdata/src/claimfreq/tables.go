@@ -23,10 +23,10 @@ func PoissonTable(maxK int, lambda float64) []float64 {
 }
 
 // PoissonCDF returns P(N <= k) at rate lambda.
-func PoissonCDF(k int, lambda float64) float64 {
+func PoissonCDF(k int, lambda float64) float64 { // want PoissonCDF:`wrong for some k \(PoissonCDF, claimfreq/tables\.go:29\)`
 	term := math.Exp(-lambda)
 	sum := term
-	for i := 1; i <= k; i++ {
+	for i := 1; i <= k; i++ { // want `running product term computes the Poisson terms lambda\^k·e\^\(−lambda\)/k! from math\.Exp\(-lambda\), which in float`
 		term = term * lambda / float64(i)
 		sum += term
 	}
@@ -35,8 +35,8 @@ func PoissonCDF(k int, lambda float64) float64 {
 
 // ExcessProb is the probability that a year produces more than k
 // claims.
-func ExcessProb(k int, lambda float64) float64 {
-	return 1 - PoissonCDF(k, lambda)
+func ExcessProb(k int, lambda float64) float64 { // want ExcessProb:`wrong for some k \(PoissonCDF, claimfreq/tables\.go:29\)`
+	return 1 - PoissonCDF(k, lambda) // want `ExcessProb builds its result from PoissonCDF\(k, lambda\), which is wrong for some values of k`
 }
 
 // Lapse is a Beta-binomial model of how many of N policies lapse
@@ -47,16 +47,16 @@ type Lapse struct {
 }
 
 func beta(a, b float64) float64 {
-	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b)
+	return math.Gamma(a) * math.Gamma(b) / math.Gamma(a+b) // want `Beta function as Γ\(a\)Γ\(b\)/Γ\(a\+b\) in float64: math\.Gamma\(a\) is \+Inf for a ≥ 171\.624377`
 }
 
 // Prob is the probability that exactly k policies lapse.
-func (l Lapse) Prob(k int) float64 {
+func (l Lapse) Prob(k int) float64 { // want Prob:`wrong for some l or some k \(Prob, claimfreq/tables\.go:56\)` Prob:`value Γ\(recv\.N \+ 1\)·Γ\(p0 \+ recv\.A\)·Γ\(-p0 \+ recv\.N \+ recv\.B\)·Γ\(recv\.A \+ recv\.B\)/\(Γ\(-p0 \+ recv\.N \+ 1\)·Γ\(p0 \+ 1\)·`
 	c := 1.0
-	for i := 1; i <= k; i++ {
+	for i := 1; i <= k; i++ { // want `multiplicative binomial loop computes C\(l\.N, k\) in float64: the product c\*\(float64\(l\.N - k \+ i\)\) overflows to `
 		c = c * float64(l.N-k+i) / float64(i)
 	}
-	return c * beta(float64(k)+l.A, float64(l.N-k)+l.B) / beta(l.A, l.B)
+	return c * beta(float64(k)+l.A, float64(l.N-k)+l.B) / beta(l.A, l.B) // want `Prob computes Γ\(l\.N \+ 1\)·Γ\(k \+ l\.A\)·Γ\(-k \+ l\.N \+ l\.B\)·Γ\(l\.A \+ l\.B\)/\(Γ\(-k \+ l\.N \+ 1\)·Γ\(k \+ 1\)·Γ\(l\.N \+ l\.A \+ l\.B`
 }
 
 // LogProb is the logarithm of Prob.

@@ -6,7 +6,7 @@ import "math"
 func ExpTaylor(x float64) float64 {
 	s := 0.0
 	for k := 0; k < 1000; k++ {
-		t := math.Pow(x, float64(k)) / fact(k)
+		t := math.Pow(x, float64(k)) / fact(k) // want `power-over-factorial term x\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
 		s += t
 		if math.Abs(t) < 1e-16*math.Abs(s) {
 			break
@@ -51,7 +51,7 @@ type Kernel struct {
 }
 
 // factFloat is n! with the counter kept in float64.
-func factFloat(n float64) float64 {
+func factFloat(n float64) float64 { // want factFloat:`factorial of parameter 0, breaks from 171`
 	f := 1.0
 	for i := 1.0; i <= n; i++ {
 		f *= i
@@ -65,7 +65,7 @@ func (k Kernel) Taps() []float64 {
 	taps := make([]float64, k.N+1)
 	for i := range taps {
 		j := float64(i)
-		taps[i] = factFloat(n) / (factFloat(j) * factFloat(n-j)) / math.Pow(2, n)
+		taps[i] = factFloat(n) / (factFloat(j) * factFloat(n-j)) / math.Pow(2, n) // want `binomial coefficient as a ratio of factorials in float64: the numerator n! overflows to \+Inf for n ≥ 171, alth`
 	}
 	return taps
 }

@@ -61,19 +61,19 @@ func MMInfinity(n int, a float64) []float64 {
 			pw *= a
 			kf *= float64(k)
 		}
-		p[k] = math.Exp(-a) * pw / kf
+		p[k] = math.Exp(-a) * pw / kf // want `series term math\.Exp\(-a\) \* pw / kf computes`
 	}
 	return p
 }
 
 // SpareCount is the number of ways to choose which s of n spare
 // machines are kept warm, in int.
-func SpareCount(n, s int) int {
+func SpareCount(n, s int) int { // want SpareCount:`wrong for some n or some s \(SpareCount, repairshop/chain\.go:76\)`
 	if s < 0 || s > n {
 		return 0
 	}
 	num, den := 1, 1
-	for i := 0; i < s; i++ {
+	for i := 0; i < s; i++ { // want `falling factorial of s factors from n down in int wraps: when s = n it is n!, which wraps for n ≥ 21`
 		num *= n - i
 		den *= i + 1
 	}
@@ -96,11 +96,11 @@ func CrewOrderings(r, k int) int64 {
 // RepairTimeTail is the probability that an Erlang-k repair of rate mu
 // per phase takes longer than t, by its closed form as a ratio of
 // the regularised upper incomplete Gamma written out as a sum.
-func RepairTimeTail(k int, mu, t float64) float64 {
+func RepairTimeTail(k int, mu, t float64) float64 { // want RepairTimeTail:`wrong for some k \(RepairTimeTail, repairshop/chain\.go:103\)`
 	x := mu * t
 	s := 0.0
 	for i := 0; i < k; i++ {
-		s += math.Pow(x, float64(i)) / math.Gamma(float64(i+1))
+		s += math.Pow(x, float64(i)) / math.Gamma(float64(i+1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(i \+ 1\)\) is \+Inf for i ≥ 171` `series term math\.Pow\(x, float64\(i\)\) / math\.Gamma\(float64\(i\+1\)\) computes`
 	}
 	return math.Exp(-x) * s
 }

@@ -19,7 +19,7 @@ type Shop struct {
 // ErrNoCrew is returned for a shop without mechanics.
 var ErrNoCrew = errors.New("repairshop: no mechanics")
 
-func factorial(n int) float64 {
+func factorial(n int) float64 { // want factorial:`factorial of parameter 0, breaks from 171`
 	p := 1.0
 	for i := n; i > 1; i-- {
 		p *= float64(i)
@@ -31,11 +31,11 @@ func factorial(n int) float64 {
 func (s Shop) weight(n int) float64 {
 	rho := s.Lambda / s.Mu
 	N, r := s.Machines, s.Mechanics
-	w := factorial(N) / factorial(N-n) * math.Pow(rho, float64(n))
+	w := factorial(N) / factorial(N-n) * math.Pow(rho, float64(n)) // want `weight computes Γ\(s\.Machines \+ 1\)·\(s\.Lambda\)\^\(n\)/\(Γ\(-n \+ s\.Machines \+ 1\)·\(s\.Mu\)\^\(n\)\) in float64, which fits wh`
 	if n <= r {
-		return w / factorial(n)
+		return w / factorial(n) // want `ratio of factorials in float64: the numerator N! overflows to \+Inf for N ≥ 171 before the division`
 	}
-	return w / (factorial(r) * math.Pow(float64(r), float64(n-r)))
+	return w / (factorial(r) * math.Pow(float64(r), float64(n-r))) // want `ratio of factorials in float64: the numerator N! overflows to \+Inf for N ≥ 171 before the division`
 }
 
 // Distribution returns the stationary probabilities of 0..N machines
