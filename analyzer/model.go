@@ -1077,7 +1077,7 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 	central := thresholds.CentralBinomial(t.Num)
 	msg := fmt.Sprintf("computes C(%s, %s) as %s divided by %s in %s: the numerator %s for %s ≥ %d%s, although C(%s, %s/2) itself fits up to %s = %d",
 		f.Args[0], f.Args[1], num, den, t.typeName(), verb(t), nv.Name(), first, at, nv.Name(), nv.Name(), nv.Name(), central.FirstBad-1)
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.loopQuotientLogMatch(res, b, loops)})
 }
 
 // modelWorth is the model's own cheap prefilter: a counting loop that
