@@ -793,6 +793,9 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if m == nil && f.Kind == vm.BinomialPMF {
 		m = fc.loopPMFMatch(res, e, f, coef)
 	}
+	if m == nil {
+		m = fc.expPMFMatch(res, e, f, coef)
+	}
 	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: m, related: fc.coefDef(coef)})
 }
 
