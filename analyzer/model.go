@@ -902,7 +902,7 @@ func (fc *fnCtx) expFormed(x ast.Expr) bool {
 // tallykit.Choose(n, k) * math.Pow(p, k) * math.Pow(1-p, n-k) becomes
 // lgamma.BinomialPMF(k, n, p), which the fixer checks factor by factor.
 // An exponential the code takes itself (math.Exp(Lchoose(n, k))) has
-// no such factor and no fix.
+// no such factor: expPMFMatch vouches for it instead.
 func (fc *fnCtx) formedPMFMatch(res *vm.Result, e ast.Expr, f vm.Form) *fixes.Match {
 	found := false
 	var walk func(x ast.Expr)
