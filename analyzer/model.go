@@ -793,6 +793,9 @@ func (fc *fnCtx) modelPMF(res *vm.Result, e ast.Expr) {
 	if m == nil && f.Kind == vm.BinomialPMF {
 		m = fc.loopPMFMatch(res, e, f, coef)
 	}
+	if m == nil {
+		m = fc.expPMFMatch(res, e, f, coef)
+	}
 	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: m, related: fc.coefDef(coef)})
 }
 
@@ -899,7 +902,7 @@ func (fc *fnCtx) expFormed(x ast.Expr) bool {
 // tallykit.Choose(n, k) * math.Pow(p, k) * math.Pow(1-p, n-k) becomes
 // lgamma.BinomialPMF(k, n, p), which the fixer checks factor by factor.
 // An exponential the code takes itself (math.Exp(Lchoose(n, k))) has
-// no such factor and no fix.
+// no such factor: expPMFMatch vouches for it instead.
 func (fc *fnCtx) formedPMFMatch(res *vm.Result, e ast.Expr, f vm.Form) *fixes.Match {
 	found := false
 	var walk func(x ast.Expr)
@@ -1077,7 +1080,7 @@ func (fc *fnCtx) modelRatio(res *vm.Result, e ast.Expr, judged map[ast.Stmt]bool
 	central := thresholds.CentralBinomial(t.Num)
 	msg := fmt.Sprintf("computes C(%s, %s) as %s divided by %s in %s: the numerator %s for %s ≥ %d%s, although C(%s, %s/2) itself fits up to %s = %d",
 		f.Args[0], f.Args[1], num, den, t.typeName(), verb(t), nv.Name(), first, at, nv.Name(), nv.Name(), nv.Name(), central.FirstBad-1)
-	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause})
+	fc.report(finding{node: e, cat: catRatio, definite: definite, msg: msg + clause, match: fc.loopQuotientLogMatch(res, b, loops)})
 }
 
 // modelWorth is the model's own cheap prefilter: a counting loop that

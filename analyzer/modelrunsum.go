@@ -138,6 +138,9 @@ func (fc *fnCtx) runSumMatch(s *vm.SumAcc, scaled ast.Expr) *fixes.Match {
 	if term == nil {
 		return nil
 	}
+	if m := fc.runSumTermsMatch(s, scaled, term); m != nil {
+		return m
+	}
 	var args []ast.Expr
 	ast.Inspect(term, func(n ast.Node) bool {
 		if id, ok := n.(*ast.Ident); ok {

@@ -154,6 +154,9 @@ type logSum struct {
 	defs    []*ast.AssignStmt // t := E before an add whose t is that local, else nil
 	resets  []ast.Stmt        // s = e, e not reading s
 	carries bool              // some term carries a logarithm of its own
+	// readParts are the carried locals the read of the sum multiplies
+	// beside it, where the terms are written out (runsumterms.go).
+	readParts map[types.Object]bool
 }
 
 // writes sorts every write of the sum, and refuses any it cannot keep

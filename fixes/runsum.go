@@ -66,7 +66,7 @@ func buildRunSum(b *builder) error {
 		}
 		lp.set[v] = true
 	}
-	if len(lp.set) == 0 {
+	if len(lp.set) == 0 && len(b.m.Factorials) == 0 {
 		return errors.New("no running term the fixer can carry in log space")
 	}
 	ls := &logSum{b: b, sum: sum, lp: lp}
@@ -76,8 +76,14 @@ func buildRunSum(b *builder) error {
 	if ls.decl == nil || len(ls.adds) == 0 {
 		return errors.New("the sum has no declaration or no addition the fixer can rewrite")
 	}
+	if len(lp.set) == 0 {
+		// Terms written out on each trip (runsumterms.go).
+		if ls.readParts, err = ls.explicitTerms(body, node); err != nil {
+			return err
+		}
+	}
 	for i, t := range ls.terms {
-		if ls.defs[i] != nil || !lp.chainableIn(ast.Unparen(t), false) {
+		if ls.defs[i] != nil || !lp.chainableIn(ast.Unparen(t), ls.readParts != nil) {
 			return fmt.Errorf("a term the fixer cannot carry in log space: %s", b.text(t))
 		}
 	}
@@ -140,6 +146,10 @@ func (ls *logSum) scaledRead(node ast.Expr, name string) (string, error) {
 		return "", fmt.Errorf("the read of the sum is not a product the fixer can carry: %s", b.text(node))
 	}
 	for v := range lp.set {
+		if ls.readParts[v] {
+			read.set[v] = true
+			continue
+		}
 		if b.mentionsObj(node, v) {
 			return "", fmt.Errorf("the read of the sum reads the running term %s too", v.Name())
 		}

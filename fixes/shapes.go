@@ -136,8 +136,8 @@ func negBinomialPMFFactors(b *builder, o []linear) (num, den []factorPattern, al
 	f, s, p := o[0], o[1], o[2]
 	n := f.add(s).add(linearOne().neg())
 	ps, qf := b.mathCall("Pow", p, s), b.mathCall("Pow", linearOne().add(p.neg()), f)
-	return []factorPattern{b.userCall(n, f), ps, qf}, nil,
-		&[2][]factorPattern{{b.userCall(n, s.add(linearOne().neg())), ps, qf}, nil}
+	return []factorPattern{b.vouched(b.userCall(n, f)), ps, qf}, nil,
+		&[2][]factorPattern{{b.vouched(b.userCall(n, s.add(linearOne().neg()))), ps, qf}, nil}
 }
 
 func gammaRatioFactors(b *builder, o []linear) (num, den []factorPattern, alt *[2][]factorPattern) { // a, b
