@@ -127,7 +127,12 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	if u.t.Float && (len(p.den) > 0 || rooted) {
 		// A product the code forms on the way may leave float64 before
 		// any factor does: name it and its first input.
-		what, at, ok := fc.firstIntermediate(root, u.t)
+		what, at, ln, at1, ok := fc.intermediateOn(root, u.t)
+		if id := fc.loneLineVar(root, ln); ok && id != nil {
+			// One input alone moves the line: the function is wrong
+			// from the intermediate's break on, before the factor's.
+			fc.noteJudged(id, at1, j)
+		}
 		switch {
 		case ok && rooted:
 			msg = fmt.Sprintf("product of factorials and powers under math.Sqrt in %s: the intermediate %s %s first, at %s on that line of inputs, while the square root the code keeps still fits (%s alone only for %s ≥ %d)",
@@ -727,6 +732,22 @@ func (ln chainLine) text(t int64) string {
 	return s
 }
 
+// loneLineVar returns a read in root of the one variable a line of
+// inputs moves, or nil where it moves several or holds one at 0.
+func (fc *fnCtx) loneLineVar(root ast.Expr, ln chainLine) *ast.Ident {
+	if len(ln.vars) != 1 || len(ln.centred) != 0 {
+		return nil
+	}
+	var found *ast.Ident
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && found == nil && fc.c.objOf(id) == ln.vars[0].Object {
+			found = id
+		}
+		return found == nil
+	})
+	return found
+}
+
 // underSqrt reports whether root is the argument of math.Sqrt: the code
 // keeps its square root, which fits where root may not.
 func (fc *fnCtx) underSqrt(root ast.Expr) bool {
@@ -775,13 +796,20 @@ func (fc *fnCtx) positiveConst(e ast.Expr) (float64, bool) {
 // value still fits there: the product's text, where it breaks, and the
 // leaf factors' own first break along the line.
 func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, ok bool) {
+	what, at, _, _, ok = fc.intermediateOn(root, t)
+	return what, at, ok
+}
+
+// intermediateOn is firstIntermediate with the line of inputs and the t
+// on it where the intermediate breaks.
+func (fc *fnCtx) intermediateOn(root ast.Expr, t numType) (what, at string, ln chainLine, first int64, ok bool) {
 	steps, ok := fc.chainSteps(root)
 	if !ok || len(steps) < 2 {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
-	ln, ok := lineOf(steps)
+	ln, ok = lineOf(steps)
 	if !ok {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
 	best, bestAt := -1, int64(math.MaxInt64)
 	for i, s := range steps {
@@ -796,12 +824,12 @@ func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, o
 		root2 = 2
 	}
 	if best < 0 || steps[best].leaf || !thresholds.ChainFits(t.Num, ln.parts(last), bestAt, root2) {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
 	for _, v := range ln.vars {
 		iv := fc.entryRange(v.Object, root)
 		if want := map[bool]int64{false: bestAt, true: 0}[ln.centred[v]]; iv.IsEmpty() || iv.Hi < want || iv.Lo > want {
-			return "", "", false
+			return "", "", ln, 0, false
 		}
 	}
 	var num, den []string
@@ -821,5 +849,5 @@ func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, o
 	} else if len(den) > 1 {
 		what += "/(" + strings.Join(den, "·") + ")"
 	}
-	return what, ln.text(bestAt), true
+	return what, ln.text(bestAt), ln, bestAt, true
 }

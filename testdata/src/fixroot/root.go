@@ -19,7 +19,7 @@ func fact(n int) float64 { // want fact:`factorial of parameter 0, breaks from 1
 
 // ModeScale is 1/√(3^n·n!), the scale of the n-th mode of a lens's
 // cylindrical basis: 3^n·n! leaves float64 at n = 141 (mpmath), its root only far later.
-func ModeScale(n int) float64 { // want ModeScale:`wrong for n ≥ 171`
+func ModeScale(n int) float64 { // want ModeScale:`wrong for n ≥ 141`
 	return 1 / math.Sqrt(math.Pow(3, float64(n))*fact(n)) // want `product of factorials and powers under math\.Sqrt in float64: the intermediate 3\^n·n! overflows to \+Inf first, at n = 141 on that line of inputs`
 }
 

@@ -10,7 +10,7 @@ import "math"
 
 // CoherentNorm is 1/√(4^n·n!), a coherent state's normaliser in a
 // scaled basis: 4^n·n! leaves float64 at n = 134, its root fits.
-func CoherentNorm(n int) float64 { // want CoherentNorm:`wrong for n ≥ 171`
+func CoherentNorm(n int) float64 { // want CoherentNorm:`wrong for n ≥ 134`
 	return 1 / math.Sqrt(math.Pow(4, float64(n))*factF(n)) // want `product of factorials and powers under math\.Sqrt in float64: the intermediate 4\^n·n! overflows to \+Inf first, at n = 134 on that line of inputs, while the square root the code keeps still fits \(n! alone only for n ≥ 171\)`
 }
 
