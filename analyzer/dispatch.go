@@ -166,7 +166,7 @@ func (fc *fnCtx) checkExprs(body *ast.BlockStmt) {
 // sub-expression that holds its factors alone, when the syntax groups
 // one: that is the expression a shape describes and a fix replaces.
 func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
-	if sub, sp := fc.exactPart(root, p); sub != nil {
+	if sub, sp := fc.exactPart(root, p); sub != nil && !fc.rootedChain(root) {
 		root, p = sub, sp
 	}
 	var facNum, facDen, gamma, powNum, binNum, binDen int
@@ -209,7 +209,10 @@ func (fc *fnCtx) checkProduct(root ast.Expr, p *product) {
 	case binNum == 1 && binDen == 0 && powNum == 2 && facNum == 0 && facDen == 0:
 		fc.consume(p)
 		fc.checkBinomialPMF(root, p)
-	case facNum >= 1 && (facDen >= 1 || facNum >= 2):
+	case facNum >= 1 && (facDen >= 1 || facNum >= 2 || powNum >= 1 && fc.underSqrt(root)):
+		// A power times a factorial fits where its true value does; under
+		// a square root (1/√(2^n·n!·√π)) the root the code keeps fits
+		// where the product it forms first does not.
 		fc.consume(p)
 		fc.checkFactorialRatio(root, p)
 	}

@@ -123,22 +123,46 @@ func (fc *fnCtx) checkFactorialRatio(root ast.Expr, p *product) {
 	default:
 		msg = fmt.Sprintf("ratio of factorials in %s: %s before the division", u.t.typeName(), breaks)
 	}
-	if u.t.Float && len(p.den) > 0 {
+	rooted := len(p.den) == 0 && fc.underSqrt(root)
+	if u.t.Float && (len(p.den) > 0 || rooted) {
 		// A product the code forms on the way may leave float64 before
 		// any factor does: name it and its first input.
-		if what, at, ok := fc.firstIntermediate(root, u.t); ok {
+		what, at, ln, at1, ok := fc.intermediateOn(root, u.t)
+		if id := fc.loneLineVar(root, ln); ok && id != nil {
+			// One input alone moves the line: the function is wrong
+			// from the intermediate's break on, before the factor's.
+			fc.noteJudged(id, at1, j)
+		}
+		switch {
+		case ok && rooted:
+			msg = fmt.Sprintf("product of factorials and powers under math.Sqrt in %s: the intermediate %s %s first, at %s on that line of inputs, while the square root the code keeps still fits (%s alone only for %s ≥ %d)",
+				u.t.typeName(), what, verb(u.t), at, bang(u.arg, u.off), src(u.arg), first)
+		case ok:
 			msg = fmt.Sprintf("ratio of factorials in %s: the intermediate %s %s first, at %s on that line of inputs, before any factor does (%s only for %s ≥ %d)",
 				u.t.typeName(), what, verb(u.t), at, bang(u.arg, u.off), src(u.arg), first)
+		case rooted && len(facts) == 1:
+			// One factorial times powers (judged for its root alone,
+			// checkProduct) breaks only where its root does too: the
+			// code returns the +Inf the value is.
+			return
 		}
 	}
 	m.Shape = shape
+	if shape != fixes.ShapeNone && len(facts)+len(dens) < len(p.num)+len(p.den) {
+		// The shape is a part of the ratio only (days!/((days−n)!·days^n)
+		// holds a power beside the permutation): the whole ratio is
+		// taken in log space instead, where the chain applies.
+		if cm := fc.factorialChainOf(root, p); cm.Shape != fixes.ShapeNone {
+			m = cm
+		}
+	}
 	if shape == fixes.ShapeNone {
 		m.Args = nil
-		if len(p.den) > 0 && within(root, p.num, p.den) {
+		if len(p.den) > 0 || rooted {
 			// Another ratio of float factorials, a 2×2 table's
 			// (a+b)!(c+d)!(a+c)!(b+d)!/(n!a!b!c!d!): in log space
 			// where its factors leave float64.
-			m = fc.factorialChain(root, append(p.num[:len(p.num):len(p.num)], p.den...))
+			m = fc.factorialChainOf(root, p)
 		}
 	}
 	fc.reportRatio(root, p, m, append([]factor{u}, dens...), u, definite, msg+clause)
@@ -489,6 +513,12 @@ func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
 		}
 	}
 	m := &fixes.Match{Result: fc.c.pass.TypesInfo.TypeOf(root), Node: root}
+	// The quotient the code means fits where its divisor does not:
+	// taken in log space, each factorial the value its function returns
+	// with ln n! beside it.
+	if cm := fc.factorialChainOf(root, p); cm.Shape != fixes.ShapeNone {
+		m = cm
+	}
 	fc.reportRatio(root, p, m, append(append([]factor{}, p.num...), d), d, j.definite,
 		fmt.Sprintf("ratio of factorials in %s: the divisor %s %s for %s ≥ %d, no later than the numerator's %s, and the quotient is then 0, or NaN once the numerator follows, although it may still fit%s",
 			d.t.typeName(), bang(d.arg, d.off), verb(d.t), src(d.arg), first, strings.Join(nums, ", "), j.clause))
@@ -499,10 +529,11 @@ func (fc *fnCtx) checkDivisorFirst(root ast.Expr, p *product) bool {
 // powers as the code writes it: (arg)! when base is 0, base^arg
 // otherwise, in the divisor when div is set.
 type chainPart struct {
-	arg  linear
-	base int64
-	div  bool
-	text string
+	arg   linear
+	base  int64
+	div   bool
+	text  string
+	konst float64 // a positive constant factor, when > 0
 }
 
 // A chainStep is one value the code forms on its way to a product: a
@@ -550,6 +581,15 @@ func (fc *fnCtx) chainSteps(root ast.Expr) (steps []chainStep, ok bool) {
 			return parts, true
 		case *ast.CallExpr:
 			f, ok := fc.factorOf(e)
+			if !ok {
+				// A positive constant such as √π: a factor that moves no
+				// threshold's line but shifts where the product breaks.
+				if c, ok := fc.positiveConst(e); ok {
+					p := chainPart{konst: c, text: src(e)}
+					add(chainStep{parts: []chainPart{p}, leaf: true})
+					return []chainPart{p}, true
+				}
+			}
 			if !ok || !f.t.Float {
 				return nil, false
 			}
@@ -667,7 +707,7 @@ func (ln chainLine) parts(s chainStep) []thresholds.ChainPart {
 	var out []thresholds.ChainPart
 	for _, p := range s.parts {
 		a, b := ln.coef(p.arg)
-		out = append(out, thresholds.ChainPart{A: a, B: b, Base: p.base, Div: p.div})
+		out = append(out, thresholds.ChainPart{A: a, B: b, Base: p.base, Div: p.div, Const: p.konst})
 	}
 	return out
 }
@@ -692,19 +732,84 @@ func (ln chainLine) text(t int64) string {
 	return s
 }
 
+// loneLineVar returns a read in root of the one variable a line of
+// inputs moves, or nil where it moves several or holds one at 0.
+func (fc *fnCtx) loneLineVar(root ast.Expr, ln chainLine) *ast.Ident {
+	if len(ln.vars) != 1 || len(ln.centred) != 0 {
+		return nil
+	}
+	var found *ast.Ident
+	ast.Inspect(root, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok && found == nil && fc.c.objOf(id) == ln.vars[0].Object {
+			found = id
+		}
+		return found == nil
+	})
+	return found
+}
+
+// underSqrt reports whether root is the argument of math.Sqrt: the code
+// keeps its square root, which fits where root may not.
+func (fc *fnCtx) underSqrt(root ast.Expr) bool {
+	if fc.file == nil {
+		return false
+	}
+	path, _ := astpath.Enclosing(fc.file.file, root.Pos(), root.End())
+	for _, n := range path[1:] {
+		if _, paren := n.(*ast.ParenExpr); paren {
+			continue
+		}
+		call, ok := n.(*ast.CallExpr)
+		return ok && fc.c.isMathFunc(call, "Sqrt")
+	}
+	return false
+}
+
+// rootedChain reports whether root is a float product under math.Sqrt
+// whose operands are all factorial calls, integer-based powers and
+// positive constants (2^n·n!·√π): judged whole, since the root the code
+// keeps is of the whole product.
+func (fc *fnCtx) rootedChain(root ast.Expr) bool {
+	if !fc.underSqrt(root) {
+		return false
+	}
+	_, ok := fc.chainSteps(root)
+	return ok
+}
+
+// positiveConst returns the value of a positive constant factor: a
+// constant expression, or math.Sqrt of one (√π, √2).
+func (fc *fnCtx) positiveConst(e ast.Expr) (float64, bool) {
+	if call, ok := ast.Unparen(e).(*ast.CallExpr); ok && len(call.Args) == 1 && fc.c.isMathFunc(call, "Sqrt") {
+		if v, ok := fc.floatConst(call.Args[0]); ok && v > 0 && !math.IsInf(v, 0) {
+			return math.Sqrt(v), true
+		}
+		return 0, false
+	}
+	v, ok := fc.floatConst(e)
+	return v, ok && v > 0 && !math.IsInf(v, 0)
+}
+
 // firstIntermediate returns, for a float product of factorials and
 // powers, the value the code forms that leaves float64 first along the
 // line lineOf chooses, where that is no single factor and the whole
 // value still fits there: the product's text, where it breaks, and the
 // leaf factors' own first break along the line.
 func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, ok bool) {
+	what, at, _, _, ok = fc.intermediateOn(root, t)
+	return what, at, ok
+}
+
+// intermediateOn is firstIntermediate with the line of inputs and the t
+// on it where the intermediate breaks.
+func (fc *fnCtx) intermediateOn(root ast.Expr, t numType) (what, at string, ln chainLine, first int64, ok bool) {
 	steps, ok := fc.chainSteps(root)
 	if !ok || len(steps) < 2 {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
-	ln, ok := lineOf(steps)
+	ln, ok = lineOf(steps)
 	if !ok {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
 	best, bestAt := -1, int64(math.MaxInt64)
 	for i, s := range steps {
@@ -715,26 +820,16 @@ func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, o
 	last := steps[len(steps)-1]
 	// The value the code keeps is the product, or its square root.
 	root2 := 1
-	if fc.file != nil {
-		path, _ := astpath.Enclosing(fc.file.file, root.Pos(), root.End())
-		for _, n := range path[1:] {
-			if _, paren := n.(*ast.ParenExpr); paren {
-				continue
-			}
-			if call, ok := n.(*ast.CallExpr); ok && fc.c.isMathFunc(call, "Sqrt") {
-				root2 = 2
-			}
-			break
-		}
+	if fc.underSqrt(root) {
+		root2 = 2
 	}
 	if best < 0 || steps[best].leaf || !thresholds.ChainFits(t.Num, ln.parts(last), bestAt, root2) {
-		return "", "", false
+		return "", "", ln, 0, false
 	}
 	for _, v := range ln.vars {
 		iv := fc.entryRange(v.Object, root)
 		if want := map[bool]int64{false: bestAt, true: 0}[ln.centred[v]]; iv.IsEmpty() || iv.Hi < want || iv.Lo > want {
-			println("DBG range", v.Name(), iv.Lo, iv.Hi)
-			return "", "", false
+			return "", "", ln, 0, false
 		}
 	}
 	var num, den []string
@@ -754,5 +849,5 @@ func (fc *fnCtx) firstIntermediate(root ast.Expr, t numType) (what, at string, o
 	} else if len(den) > 1 {
 		what += "/(" + strings.Join(den, "·") + ")"
 	}
-	return what, ln.text(bestAt), true
+	return what, ln.text(bestAt), ln, bestAt, true
 }

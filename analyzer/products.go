@@ -87,6 +87,62 @@ func (fc *fnCtx) factorialChain(root ast.Expr, fs []factor) *fixes.Match {
 	return m
 }
 
+// factorialChainOf is the match of a float product or ratio of
+// factorial values whose fix takes it in log space: the expression
+// itself as a chain (factorialChain) where every factorial call lies in
+// it; where some lie in the values of locals it reads, assigned once
+// (num := 2^nAB·n!·nA!·nB!; return num / (…)), those locals are carried
+// as Products too (fixes.ShapeLogSpaceTerm), so that a numerator past
+// float64 keeps its value until the divisor brings it back. A match
+// without a shape where neither applies.
+func (fc *fnCtx) factorialChainOf(root ast.Expr, p *product) *fixes.Match {
+	m := fc.factorialChain(root, append(p.num[:len(p.num):len(p.num)], p.den...))
+	if m.Shape == fixes.ShapeNone || within(root, p.num, p.den) {
+		return m
+	}
+	calls := make(map[*ast.CallExpr]bool)
+	for _, f := range m.Factorials {
+		calls[f.Call] = true
+	}
+	var locals []ast.Expr
+	var walk func(e ast.Expr, depth int)
+	walk = func(e ast.Expr, depth int) {
+		if depth > maxDepth {
+			return
+		}
+		switch x := fc.stripConv(e).(type) {
+		case *ast.BinaryExpr:
+			if x.Op == token.MUL || x.Op == token.QUO {
+				walk(x.X, depth+1)
+				walk(x.Y, depth+1)
+			}
+		case *ast.Ident:
+			if def := fc.singleDef(x); def != nil && holdsCall(def, calls) {
+				locals = append(locals, x)
+			}
+		}
+	}
+	walk(root, 0)
+	if len(locals) == 0 {
+		m.Shape = fixes.ShapeNone
+		return m
+	}
+	m.Shape, m.Args, m.Func = fixes.ShapeLogSpaceTerm, locals, fc.node
+	return m
+}
+
+// holdsCall reports whether one of calls lies in e.
+func holdsCall(e ast.Expr, calls map[*ast.CallExpr]bool) bool {
+	found := false
+	ast.Inspect(e, func(n ast.Node) bool {
+		if c, ok := n.(*ast.CallExpr); ok && calls[c] {
+			found = true
+		}
+		return !found
+	})
+	return found
+}
+
 // evalProduct splits e into known factors, following local variables
 // that are assigned exactly once.
 func (fc *fnCtx) evalProduct(e ast.Expr) *product {

@@ -727,6 +727,7 @@ func buildProductChain(b *builder) error {
 	if !lp.chainable(e) || lp.leaves(e) < 2 {
 		return fmt.Errorf("not a product of two or more powers and Gamma values: %s", b.text(e))
 	}
+	e = lp.rootedTop(e)
 	text := lp.chain(e) + ".Float64()"
 	if b.commentCopied(e) {
 		// Copied into the one line of the chain, a // comment would
@@ -737,6 +738,41 @@ func buildProductChain(b *builder) error {
 	b.replace(e.Pos(), e.End(), text)
 	b.message = fmt.Sprintf("Take the product in log space where its factors leave float64 (%s.Product) (imports %s)", lp.pkg, HelperPath)
 	return nil
+}
+
+// rootedTop returns the expression that holds e under a square root:
+// math.Sqrt(e), and the products and further roots that hold that, as
+// √((2l+1)/(4π)·(l−m)!/(l+m)!) or 1/√(2^n·n!·√π); e itself where no
+// root holds it. The quotient under a root may leave float64 where its
+// root does not (158!/183! does not, 1036!/1163! does), so the chain
+// takes the root too, and Product.Sqrt halves its logarithm.
+func (lp *logProducts) rootedTop(e ast.Expr) ast.Expr {
+	path, _ := astpath.Enclosing(lp.b.file, e.Pos(), e.End())
+	top, rooted := e, false
+	for i, n := range path {
+		if n != e {
+			continue
+		}
+		for _, up := range path[i+1:] {
+			switch x := up.(type) {
+			case *ast.ParenExpr:
+				continue
+			case *ast.CallExpr:
+				if lp.sqrtOf(x) != nil {
+					top, rooted = x, true
+					continue
+				}
+			case *ast.BinaryExpr:
+				if rooted && (x.Op == token.MUL || x.Op == token.QUO) && types.Identical(lp.b.pass.TypesInfo.TypeOf(x), types.Typ[types.Float64]) {
+					top = x
+					continue
+				}
+			}
+			break
+		}
+		break
+	}
+	return top
 }
 
 // leaves counts the direct factors of a chainable e that are calls of

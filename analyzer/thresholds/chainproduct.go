@@ -7,11 +7,14 @@ import (
 
 // A ChainPart is one factor of a product or quotient the code forms,
 // along a line t ↦ A·t + B of its variables: (A·t + B)! when Base is 0,
-// Base^(A·t + B) otherwise; Div puts it in the divisor.
+// Base^(A·t + B) otherwise; Div puts it in the divisor. A part with
+// Const > 0 is that constant instead, exactly as the float64 holds it
+// (the √π of 2^n·n!·√π), whatever A, B and Base say.
 type ChainPart struct {
-	A, B int64
-	Base int64
-	Div  bool
+	A, B  int64
+	Base  int64
+	Div   bool
+	Const float64
 }
 
 // chainScan bounds the t a chain is searched over.
@@ -36,9 +39,12 @@ func ChainFirstBad(t Num, parts []ChainPart, from int64) int64 {
 		for _, p := range parts {
 			v := p.A*x + p.B
 			var lv float64
-			if p.Base == 0 {
+			switch {
+			case p.Const > 0:
+				lv = math.Log(p.Const)
+			case p.Base == 0:
 				lv, _ = math.Lgamma(float64(v) + 1)
-			} else {
+			default:
 				lv = float64(v) * math.Log(float64(p.Base))
 			}
 			if p.Div {
@@ -60,17 +66,22 @@ func ChainFits(t Num, parts []ChainPart, x int64, k int) bool {
 	num, den := big.NewInt(1), big.NewInt(1)
 	for _, p := range parts {
 		v := p.A*x + p.B
-		var f *big.Int
-		if p.Base == 0 {
+		f, d := big.NewInt(1), big.NewInt(1)
+		switch {
+		case p.Const > 0:
+			// A float64 is a rational: the comparison stays exact.
+			r := new(big.Rat).SetFloat64(p.Const)
+			f, d = r.Num(), r.Denom()
+		case p.Base == 0:
 			f = factorial(v)
-		} else {
+		default:
 			f = new(big.Int).Exp(big.NewInt(p.Base), big.NewInt(v), nil)
 		}
 		if p.Div {
-			den.Mul(den, f)
-		} else {
-			num.Mul(num, f)
+			f, d = d, f
 		}
+		num.Mul(num, f)
+		den.Mul(den, d)
 	}
 	return num.Cmp(new(big.Int).Mul(den, new(big.Int).Exp(t.maxInt(), big.NewInt(int64(k)), nil))) <= 0
 }

@@ -20,6 +20,10 @@ func TestChainFirstBad(t *testing.T) {
 		{{A: 1}, {A: 1}, {A: 1}, {A: 1}, {A: 2, B: 1, Div: true}}, // t!⁴/(2t+1)!
 		{{A: 3, Base: 2}, {A: 1}, {A: 1}, {A: 2, Div: true}},      // 8^t·t!²/(2t)!
 		{{A: 1, B: -3}, {A: 2, B: 5}},                             // (t−3)!·(2t+5)!
+		// 2^t·t!·√π, the square of the Hermite functions' normaliser
+		// (DLMF 18.3, h_n = √π·2^n·n!), and t!/0.001.
+		{{A: 1, Base: 2}, {A: 1}, {Const: math.Sqrt(math.Pi)}},
+		{{A: 1}, {Const: 0.001, Div: true}},
 	}
 	maxF := new(big.Rat).SetFloat64(math.MaxFloat64)
 	for i, parts := range cases {
@@ -30,16 +34,19 @@ func TestChainFirstBad(t *testing.T) {
 			q := new(big.Rat).SetInt64(1)
 			for _, p := range parts {
 				v := p.A*x + p.B
-				var f *big.Int
-				if p.Base == 0 {
-					f = new(big.Int).MulRange(1, max(v, 1))
-				} else {
-					f = new(big.Int).Exp(big.NewInt(p.Base), big.NewInt(v), nil)
+				f := new(big.Rat)
+				switch {
+				case p.Const > 0:
+					f.SetFloat64(p.Const)
+				case p.Base == 0:
+					f.SetInt(new(big.Int).MulRange(1, max(v, 1)))
+				default:
+					f.SetInt(new(big.Int).Exp(big.NewInt(p.Base), big.NewInt(v), nil))
 				}
 				if p.Div {
-					q.Quo(q, new(big.Rat).SetInt(f))
+					q.Quo(q, f)
 				} else {
-					q.Mul(q, new(big.Rat).SetInt(f))
+					q.Mul(q, f)
 				}
 			}
 			if q.Cmp(maxF) > 0 {
@@ -62,6 +69,10 @@ func TestChainFirstBad(t *testing.T) {
 			v := 1.0
 			for _, p := range parts {
 				n := p.A*x + p.B
+				if p.Const > 0 {
+					v *= p.Const
+					continue
+				}
 				if p.Base != 0 {
 					v *= math.Pow(float64(p.Base), float64(n))
 					continue

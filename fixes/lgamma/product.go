@@ -204,10 +204,14 @@ func (p Product) QuoFloat(x float64) Product { return p.Quo(ProductOf(x)) }
 //
 //	Sqrt of a product holding ±0 holds ±0
 //	Sqrt of a product holding +Inf holds +Inf where the product overflows
-//	Sqrt of a negative product holds NaN
-//	Sqrt of a product holding NaN holds NaN
+//	Sqrt of a negative product holds NaN, where its float64 value is −0
+//	    because a step left float64 too (−1/(n+l)! for n+l ≥ 171): the
+//	    product is negative, not −0
+//	Sqrt of a product holding NaN holds NaN; one whose float64 value is
+//	    NaN only because its steps left float64 (+Inf/+Inf for
+//	    (l+m)!/(l+m)! past 170!) holds the root of its logarithm's value
 func (p Product) Sqrt() Product {
-	if p.neg && p.v != 0 || math.IsNaN(p.v) {
+	if p.neg && (p.v != 0 || p.lost || p.under) || p.nan || math.IsNaN(p.v) && !p.lost {
 		return ProductOf(math.NaN())
 	}
 	r := Product{v: math.Sqrt(p.v), l: p.l.mulF(0.5), neg: p.neg, lost: p.lost, zero: p.zero, nan: p.nan}

@@ -239,6 +239,23 @@ func TestProductSqrt(t *testing.T) {
 	if got := ProductOf(-4).Sqrt().Float64(); !math.IsNaN(got) {
 		t.Errorf("√-4 = %v, want NaN (as math.Sqrt)", got)
 	}
+	// −1/(200!) and −1e-200·1e-200 are negative where float64 gives −0
+	// (the divisor +Inf, the product below the range): their roots are
+	// NaN, as math/big's Sqrt refuses a negative operand and math.Sqrt
+	// answers NaN for one.
+	for _, p := range []Product{ProductOf(-1).Quo(FactorialProduct(fact(200), 200)), ProductOf(-1e-200).MulFloat(1e-200)} {
+		if got := p.Sqrt().Float64(); !math.IsNaN(got) {
+			t.Errorf("√ of a negative product past float64 (float64 value %v) = %v, want NaN", p.v, got)
+		}
+	}
+	// √(500!·3/500!) is √3 where float64 forms +Inf/+Inf = NaN
+	// (math/big: the factorials cancel exactly).
+	if got := FactorialProduct(fact(500), 500).MulFloat(3).Quo(FactorialProduct(fact(500), 500)).Sqrt().Float64(); relOff(got, bnew().Sqrt(bf(3))) > 1e-14 {
+		t.Errorf("√(500!·3/500!) = %v, want √3 (math/big)", got)
+	}
+	if got := ProductOf(math.NaN()).MulFloat(2).Sqrt().Float64(); !math.IsNaN(got) {
+		t.Errorf("√(NaN·2) = %v, want NaN", got)
+	}
 	if got := ProductOf(-1).MulFloat(0).Sqrt().Float64(); !(got == 0 && math.Signbit(got)) {
 		t.Errorf("√-0 = %v, want -0 (as math.Sqrt)", got)
 	}

@@ -16,14 +16,14 @@ func hermiteH(n int, x float64) float64 {
 
 // HermiteNorm is the normalisation 1/sqrt(2^n n! √π) of the nth
 // harmonic-oscillator eigenfunction in natural units.
-func HermiteNorm(n int) float64 {
-	return 1 / math.Sqrt(math.Pow(2, float64(n))*factorial(n)*math.Sqrt(math.Pi))
+func HermiteNorm(n int) float64 { // want HermiteNorm:`wrong for n ≥ 151`
+	return 1 / math.Sqrt(math.Pow(2, float64(n))*factorial(n)*math.Sqrt(math.Pi)) // want `product of factorials and powers under math\.Sqrt in float64: the intermediate 2\^n·n! overflows to \+Inf first, at n = 151 on that line of inputs, while the square root the code keeps still fits`
 }
 
 // OscillatorPsi is the nth eigenfunction ψ_n(x) of the quantum harmonic
 // oscillator, written as the textbook product.
-func OscillatorPsi(n int, x float64) float64 {
-	return HermiteNorm(n) * hermiteH(n, x) * math.Exp(-x*x/2)
+func OscillatorPsi(n int, x float64) float64 { // want OscillatorPsi:`wrong for n ≥ 151`
+	return HermiteNorm(n) * hermiteH(n, x) * math.Exp(-x*x/2) // want `OscillatorPsi builds its result from HermiteNorm\(n\), which is wrong from n = 151`
 }
 
 // OscillatorPsiStable evaluates ψ_n(x) by the normalised three-term
