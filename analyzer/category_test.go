@@ -1,9 +1,11 @@
 package analyzer
 
 import (
+	"os"
 	"testing"
 
 	"golang.org/x/tools/go/analysis/analysistest"
+	"golang.org/x/tools/go/packages"
 )
 
 // categoryPackages are the packages of testdata/src beside the analyzer,
@@ -19,4 +21,29 @@ var categoryPackages = []string{
 
 func TestCategories(t *testing.T) {
 	analysistest.RunWithSuggestedFixes(t, analysistest.TestData(), Analyzer, categoryPackages...)
+}
+
+// TestCategoryPackagesTypeCheck makes sure every category package
+// type-checks: the analyzer offers no fix in a package with type errors,
+// so RunWithSuggestedFixes would compare none of its .golden files and
+// the test above would pass without checking them.
+func TestCategoryPackagesTypeCheck(t *testing.T) {
+	dir := analysistest.TestData()
+	cfg := &packages.Config{
+		Mode: packages.NeedName | packages.NeedTypes | packages.NeedSyntax | packages.NeedTypesInfo,
+		Dir:  dir,
+		Env:  append(os.Environ(), "GOPATH="+dir, "GO111MODULE=off", "GOPROXY=off"),
+	}
+	pkgs, err := packages.Load(cfg, categoryPackages...)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(pkgs) != len(categoryPackages) {
+		t.Fatalf("loaded %d packages, want %d", len(pkgs), len(categoryPackages))
+	}
+	for _, p := range pkgs {
+		for _, e := range p.Errors {
+			t.Errorf("%s: %v", p.PkgPath, e)
+		}
+	}
 }

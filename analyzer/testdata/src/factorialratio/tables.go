@@ -94,8 +94,8 @@ func init() {
 	}
 }
 
-// ShelfOrders stops at the largest shelf that fits: no finding.
-func ShelfOrders(n int) []int64 {
+// ShelfTable stops at the largest shelf that fits: no finding.
+func ShelfTable(n int) []int64 {
 	if n > 20 {
 		n = 20
 	}
