@@ -36,6 +36,9 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	if s.sumTable {
 		fc.checkPascalTables(body)
 	}
+	if s.loop && s.pairStep {
+		fc.checkPairRecurrences(body)
+	}
 	if !s.worthProducts() {
 		return
 	}

@@ -19,6 +19,7 @@ type scan struct {
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 	sumCalls  bool // a sum (or difference) of two calls of one name, one maybe weighed: a Pascal's-rule, Stirling or derangement recursion may be here (pascalrule.go)
 	sumTable  bool // a sum of two entries of one table: a table filled by such a rule may be here
+	pairStep  bool // a, b = b, x: a recurrence over two rolling variables may be here (pairrecurrence.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -59,6 +60,9 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 		case *ast.AssignStmt:
 			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && (isMulOrQuo(n.Rhs[0]) || appendsProduct(n.Rhs[0]))) {
 				cur.product = true
+			}
+			if cur != nil && !cur.pairStep {
+				cur.pairStep = rollsPair(n)
 			}
 		case *ast.BinaryExpr:
 			if cur != nil && n.Op == token.MUL && !cur.callMul {
@@ -201,7 +205,23 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthProducts() || s.sumCalls || s.sumTable }
+func (s *scan) worth() bool {
+	return s.worthProducts() || s.sumCalls || s.sumTable || s.loop && s.pairStep
+}
+
+// rollsPair reports whether as is a, b = b, x or b, a = x, b: two
+// variables rolled forward by one step.
+func rollsPair(as *ast.AssignStmt) bool {
+	if as.Tok != token.ASSIGN || len(as.Lhs) != 2 || len(as.Rhs) != 2 {
+		return false
+	}
+	same := func(x, y ast.Expr) bool {
+		a, ok1 := x.(*ast.Ident)
+		b, ok2 := y.(*ast.Ident)
+		return ok1 && ok2 && a.Name == b.Name && a.Name != "_"
+	}
+	return same(as.Rhs[0], as.Lhs[1]) || same(as.Rhs[1], as.Lhs[0])
+}
 
 // worthProducts reports whether a function may hold anything to report
 // but Pascal's rule: only these run the value model.
