@@ -35,6 +35,7 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	}
 	if s.sumTable {
 		fc.checkPascalTables(body)
+		fc.checkCountTables(body)
 	}
 	if s.loop && s.pairStep {
 		fc.checkPairRecurrences(body)

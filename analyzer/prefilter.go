@@ -18,7 +18,7 @@ type scan struct {
 	localCall bool // a call of a function of this package, which may become factorial-valued
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 	sumCalls  bool // a sum (or difference) of two calls of one name, one maybe weighed: a Pascal's-rule, Stirling or derangement recursion may be here (pascalrule.go)
-	sumTable  bool // a sum of two entries of one table: a table filled by such a rule may be here
+	sumTable  bool // a sum of two entries of one table: a table filled by such a rule, or a count table (counttable.go), may be here
 	pairStep  bool // a, b = b, x: a recurrence over two rolling variables may be here (pairrecurrence.go)
 }
 
@@ -63,6 +63,11 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 			}
 			if cur != nil && !cur.pairStep {
 				cur.pairStep = rollsPair(n)
+			}
+			if cur != nil && n.Tok == token.ADD_ASSIGN && len(n.Lhs) == 1 && len(n.Rhs) == 1 {
+				// c[s] += c[s-r]: a count table (counttable.go).
+				_, table := sameKind(n.Lhs[0], ast.Unparen(n.Rhs[0]))
+				cur.sumTable = cur.sumTable || table
 			}
 		case *ast.BinaryExpr:
 			if cur != nil && n.Op == token.MUL && !cur.callMul {
