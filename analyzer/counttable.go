@@ -39,19 +39,7 @@ import (
 
 // checkCountTables reports the count tables body fills.
 func (fc *fnCtx) checkCountTables(body *ast.BlockStmt) {
-	ast.Inspect(body, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.FuncLit:
-			return false
-		case *ast.BlockStmt:
-			for _, st := range n.List {
-				if loop, ok := st.(*ast.ForStmt); ok {
-					fc.judgeCountLoop(body, loop)
-				}
-			}
-		}
-		return true
-	})
+	blockLoops(body, func(_ []ast.Stmt, loop *ast.ForStmt) { fc.judgeCountLoop(body, loop) })
 }
 
 // countStep is an inner loop's one statement c[s] += c[s-d] read with

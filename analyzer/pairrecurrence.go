@@ -34,6 +34,13 @@ import (
 
 // checkPairRecurrences reports the rolling pair recurrences of body.
 func (fc *fnCtx) checkPairRecurrences(body *ast.BlockStmt) {
+	blockLoops(body, fc.judgePairLoop)
+}
+
+// blockLoops calls f with each for statement of body outside closures
+// and the statements before it in its block, where the values it
+// starts from are set.
+func blockLoops(body *ast.BlockStmt, f func(before []ast.Stmt, loop *ast.ForStmt)) {
 	ast.Inspect(body, func(n ast.Node) bool {
 		switch n := n.(type) {
 		case *ast.FuncLit:
@@ -41,7 +48,7 @@ func (fc *fnCtx) checkPairRecurrences(body *ast.BlockStmt) {
 		case *ast.BlockStmt:
 			for k, st := range n.List {
 				if loop, ok := st.(*ast.ForStmt); ok {
-					fc.judgePairLoop(n.List[:k], loop)
+					f(n.List[:k], loop)
 				}
 			}
 		}

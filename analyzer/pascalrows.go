@@ -33,19 +33,7 @@ import (
 
 // checkPascalRows reports the Pascal rows body builds.
 func (fc *fnCtx) checkPascalRows(body *ast.BlockStmt) {
-	ast.Inspect(body, func(n ast.Node) bool {
-		switch n := n.(type) {
-		case *ast.FuncLit:
-			return false
-		case *ast.BlockStmt:
-			for k, st := range n.List {
-				if loop, ok := st.(*ast.ForStmt); ok {
-					fc.judgePascalRows(n.List[:k], loop)
-				}
-			}
-		}
-		return true
-	})
+	blockLoops(body, fc.judgePascalRows)
 }
 
 // judgePascalRows judges outer as the rows of Pascal's triangle.
