@@ -56,6 +56,7 @@ type countStep struct {
 	counterName string
 	index       string       // the inner counter's name
 	counter     types.Object // the outer counter
+	counterID   *ast.Ident   // where the outer loop declares it
 	perRow      bool         // the end moves with the rows (for j := i; j >= 1; j--)
 }
 
@@ -78,7 +79,7 @@ func (fc *fnCtx) judgeCountLoop(fnBody *ast.BlockStmt, outer *ast.ForStmt) {
 		if !ok {
 			continue
 		}
-		cs.rule.Start, cs.rowEnd, cs.rowAdj, cs.counterName = start, rowEnd, rowAdj, counter.Name
+		cs.rule.Start, cs.rowEnd, cs.rowAdj, cs.counterName, cs.counterID = start, rowEnd, rowAdj, counter.Name, counter
 		if fc.countTableOnly(fnBody, outer, cs) {
 			fc.judgeCountStep(outer, cs)
 		}
@@ -288,6 +289,7 @@ func (fc *fnCtx) seed(target, v ast.Expr, table types.Object) bool {
 func (fc *fnCtx) judgeCountStep(outer *ast.ForStmt, cs countStep) {
 	endAt, ok := fc.endOf(cs, outer)
 	if !ok {
+		fc.judgePascalRowTo(outer, cs)
 		return
 	}
 	first := thresholds.CountTable(cs.t.Num, cs.rule, endAt)
@@ -476,4 +478,50 @@ func (ev endEval) onlyDef(id *ast.Ident) (ast.Expr, bool) {
 		return nil, false
 	}
 	return def, true
+}
+
+// judgePascalRowTo judges Pascal's row kept only up to an entry k the
+// code does not fix, for j := min(i, k); j > 0; j-- { c[j] += c[j-1] }
+// (or from k itself): after row n the table holds C(n, s) for s ≤ k,
+// judged over the ranges of n and k as a table of Pascal's rule is
+// (pascalFits).
+func (fc *fnCtx) judgePascalRowTo(outer *ast.ForStmt, cs countStep) {
+	if !cs.rule.Falling || cs.rule.Alpha != 0 || cs.rule.Beta != 1 || cs.rule.Start != 1 {
+		return
+	}
+	k := cs.end
+	if call, ok := ast.Unparen(k).(*ast.CallExpr); ok && len(call.Args) == 2 {
+		id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+		if _, builtin := fc.c.pass.TypesInfo.ObjectOf(id).(*types.Builtin); !ok || !builtin || id.Name != "min" {
+			return
+		}
+		// min(i, k): entries past i are still 0 at row i.
+		for i, a := range call.Args {
+			if d, ok := fc.shiftOf(a, cs.counterID); ok && d == 0 {
+				k = call.Args[1-i]
+			}
+		}
+	}
+	if k == cs.end && cs.perRow || mentions(fc.c.pass.TypesInfo, k, cs.counter) {
+		return
+	}
+	n := shift(fc.rangeOf(cs.rowEnd), cs.rowAdj)
+	kr := shift(fc.rangeOf(k), cs.endAdj)
+	if n.IsEmpty() || kr.IsEmpty() || pascalFits(cs.t, n, kr) {
+		return
+	}
+	first := thresholds.CentralBinomial(cs.t.Num)
+	if kr.Hi < first.FirstBad/2 {
+		// k stays below the central entry of the first row that
+		// wraps: C(n, k) wraps only further on, at a row this message
+		// does not compute.
+		return
+	}
+	bad := first.FirstBad - cs.rowAdj
+	name := src(cs.rowEnd)
+	clause, _ := verdict(name, fc.rangeOf(cs.rowEnd), bad)
+	msg := fmt.Sprintf("table %s is filled by additions row by row (%s, %s falling) in %s: after row %s it holds that row of Pascal's triangle up to entry %s, %s[%s] = C(%s, %s), which %s where it leaves %s, from %s = %d at %s = ⌊%s/2⌋ (C(%d, %d) ≈ %s is the largest central one that fits), and the rows after add the wrapped entries on",
+		cs.table.Name(), stepText(cs.stmt), cs.index, cs.t.typeName(), cs.counterName, src(k), cs.table.Name(), cs.index, cs.counterName, cs.index,
+		verb(cs.t), cs.t.Name, name, bad, src(k), name, first.FirstBad-1, (first.FirstBad-1)/2, first.LastGoodApprox())
+	fc.report(finding{node: outer, cat: catPascal, definite: pascalAlwaysPast(cs.t, n, kr), msg: msg + clause})
 }

@@ -122,3 +122,44 @@ func Unseeded(n int) []int64 {
 	}
 	return c
 }
+
+// Pick keeps Pascal's row only up to entry k: C(n, k) from one table
+// of k+1 counts.
+func Pick(n, k int) int64 { // want Pick:`wrong for some n or some k`
+	c := make([]int64, k+1)
+	c[0] = 1
+	for i := 1; i <= n; i++ { // want `table c is filled by additions row by row \(c\[j\] \+= c\[j-1\], j falling\) in int64: after row i it holds that row of Pascal's triangle up to entry k, c\[j\] = C\(i, j\), which wraps where it leaves int64, from n = 67 at k = ⌊n/2⌋`
+		for j := min(i, k); j > 0; j-- {
+			c[j] += c[j-1]
+		}
+	}
+	return c[k]
+}
+
+// PickBounded asks for at most 60 rows: silent.
+func PickBounded(n, k int) int64 {
+	if n > 60 {
+		return -1
+	}
+	c := make([]int64, k+1)
+	c[0] = 1
+	for i := 1; i <= n; i++ {
+		for j := min(i, k); j > 0; j-- {
+			c[j] += c[j-1]
+		}
+	}
+	return c[k]
+}
+
+// Triples keeps entries up to 3, C(n, 3), which wraps only past a
+// million rows: silent (no first row computed for a fixed small k).
+func Triples(n int) int64 {
+	c := make([]int64, 4)
+	c[0] = 1
+	for i := 1; i <= n; i++ {
+		for j := min(i, 3); j > 0; j-- {
+			c[j] += c[j-1]
+		}
+	}
+	return c[3]
+}
