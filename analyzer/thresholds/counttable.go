@@ -19,8 +19,8 @@ import (
 //
 // After row R, c[s] is the coefficient of x^s in ∏ (1 + x^d) over the
 // rows when s falls (each part used at most once: d = r counts the
-// subsets of {1, …, R} with sum s, OEIS A053632, whose largest entry
-// is A025591; d = 1 makes row R of Pascal's triangle, C(R, s)) and in
+// subsets of {1, …, R} with sum s, OEIS A053632 (from memory), whose
+// largest entry is A025591; d = 1 makes row R of Pascal's triangle, C(R, s)) and in
 // ∏ 1/(1 − x^d) when it rises (each part any number of times: d = r
 // counts the partitions of s into parts at most R, whose entry at
 // s = R is the partition number p(R), OEIS A000041).
