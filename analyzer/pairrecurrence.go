@@ -5,6 +5,7 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"slices"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/internal/assigned"
@@ -20,7 +21,7 @@ import (
 //	}
 //
 // or with the new value named first (next := (i-1)*(a+b); a, b = b,
-// next). Each step's product x_i = (i+c)·(x_{i−1} + x_{i−2}) grows like
+// next, or a = b; b = next). Each step's product x_i = (i+c)·(x_{i−1} + x_{i−2}) grows like
 // a factorial whatever the starting values, so it leaves an integer type
 // within a few dozen steps (thresholds.PairRecurrence simulates the
 // sequence from the code's own constants) and the steps after carry the
@@ -60,7 +61,8 @@ func blockLoops(body *ast.BlockStmt, f func(before []ast.Stmt, loop *ast.ForStmt
 // takes the old newer value, the one that takes the new value, the
 // weight and the loop counter.
 type pairStep struct {
-	stmt          *ast.AssignStmt
+	stmt          *ast.AssignStmt // the step as one parallel assignment
+	writes        []ast.Node      // the statements that write the pair
 	older, newer  types.Object
 	mul           *ast.BinaryExpr
 	weight        ast.Expr
@@ -75,22 +77,52 @@ func (fc *fnCtx) judgePairLoop(before []ast.Stmt, loop *ast.ForStmt) {
 	if !ok || loopMayLeave(loop.Body) {
 		return
 	}
-	for k, st := range loop.Body.List {
-		as, ok := st.(*ast.AssignStmt)
-		if !ok || as.Tok != token.ASSIGN || len(as.Lhs) != 2 || len(as.Rhs) != 2 {
-			continue
-		}
+	list := loop.Body.List
+	for k, st := range list {
 		var prev ast.Stmt
 		if k > 0 {
-			prev = loop.Body.List[k-1]
+			prev = list[k-1]
+		}
+		as, writes := asPairStep(st, list[k+1:])
+		if as == nil {
+			continue
 		}
 		ps, ok := fc.pairStepOf(as, prev, counter)
 		if !ok {
 			continue
 		}
-		ps.start = start
+		ps.start, ps.writes = start, writes
 		fc.judgePairStep(before, loop, ps)
 	}
+}
+
+// asPairStep returns st as a parallel assignment a, b = b, x, and the
+// statements that write the pair: st itself, or st and the statement
+// after it when they roll the pair one after the other, a = b; b = x
+// (x a variable, so that b's old value is not read after a changed).
+func asPairStep(st ast.Stmt, after []ast.Stmt) (*ast.AssignStmt, []ast.Node) {
+	as, ok := st.(*ast.AssignStmt)
+	if !ok || as.Tok != token.ASSIGN {
+		return nil, nil
+	}
+	if len(as.Lhs) == 2 && len(as.Rhs) == 2 {
+		return as, []ast.Node{as}
+	}
+	if len(as.Lhs) != 1 || len(as.Rhs) != 1 || len(after) == 0 {
+		return nil, nil
+	}
+	next, ok := after[0].(*ast.AssignStmt)
+	if !ok || next.Tok != token.ASSIGN || len(next.Lhs) != 1 || len(next.Rhs) != 1 {
+		return nil, nil
+	}
+	a, okA := as.Lhs[0].(*ast.Ident)
+	b, okB := as.Rhs[0].(*ast.Ident)
+	b2, okB2 := next.Lhs[0].(*ast.Ident)
+	x, okX := next.Rhs[0].(*ast.Ident)
+	if !okA || !okB || !okB2 || !okX || b.Name != b2.Name || a.Name == b.Name || x.Name == a.Name || x.Name == b.Name {
+		return nil, nil
+	}
+	return &ast.AssignStmt{Lhs: []ast.Expr{a, b2}, TokPos: next.TokPos, Tok: token.ASSIGN, Rhs: []ast.Expr{b, x}}, []ast.Node{as, next}
 }
 
 // unitCounter returns the counter of for i := C; …; i++ and C.
@@ -194,7 +226,8 @@ func (fc *fnCtx) judgePairStep(before []ast.Stmt, loop *ast.ForStmt, ps pairStep
 	// condition does not read it: a bound on the values may stop the
 	// loop before it wraps).
 	for _, v := range []types.Object{ps.older, ps.newer} {
-		if assigned.In(info, loop.Body, v, func(n ast.Node) bool { return n == ps.stmt }) || loop.Cond != nil && mentions(info, loop.Cond, v) {
+		writes := func(n ast.Node) bool { return slices.Contains(ps.writes, n) }
+		if assigned.In(info, loop.Body, v, writes) || loop.Cond != nil && mentions(info, loop.Cond, v) {
 			return
 		}
 	}
@@ -226,7 +259,7 @@ func (fc *fnCtx) judgePairStep(before []ast.Stmt, loop *ast.ForStmt, ps pairStep
 	step := fmt.Sprintf("%s, %s = %s, %s", src(ps.stmt.Lhs[0]), src(ps.stmt.Lhs[1]), src(ps.stmt.Rhs[0]), src(ps.stmt.Rhs[1]))
 	msg := fmt.Sprintf("rolling pair %s computes %s in %s: the step at %s = %d %s (%s ≈ %s is the largest that fits), and the steps after it carry the wrapped value on",
 		step, what, t.typeName(), name, first.FirstBad, verb(t), last, first.LastGoodApprox())
-	fc.report(finding{node: ps.stmt, cat: catLoop, definite: definite, msg: msg + clause})
+	fc.report(finding{node: ps.writes[len(ps.writes)-1], cat: catLoop, definite: definite, msg: msg + clause})
 }
 
 // counterUse returns the first use of the counter in e (its range there

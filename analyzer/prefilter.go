@@ -19,7 +19,7 @@ type scan struct {
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 	sumCalls  bool // a sum (or difference) of two calls of one name, one maybe weighed: a Pascal's-rule, Stirling or derangement recursion may be here (pascalrule.go)
 	sumTable  bool // a sum of two entries of one table: a table filled by such a rule, or a count table (counttable.go), may be here
-	pairStep  bool // a, b = b, x: a recurrence over two rolling variables may be here (pairrecurrence.go)
+	pairStep  bool // a, b = b, x or x := w·(a + b): a recurrence over two rolling variables may be here (pairrecurrence.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -62,7 +62,7 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 				cur.product = true
 			}
 			if cur != nil && !cur.pairStep {
-				cur.pairStep = rollsPair(n)
+				cur.pairStep = rollsPair(n) || weighsSum(n)
 			}
 			if cur != nil && n.Tok == token.ADD_ASSIGN && len(n.Lhs) == 1 && len(n.Rhs) == 1 {
 				// c[s] += c[s-r]: a count table (counttable.go).
@@ -226,6 +226,28 @@ func rollsPair(as *ast.AssignStmt) bool {
 		return ok1 && ok2 && a.Name == b.Name && a.Name != "_"
 	}
 	return same(as.Rhs[0], as.Lhs[1]) || same(as.Rhs[1], as.Lhs[0])
+}
+
+// weighsSum reports whether as is x := w·(a + b) over two variables, the
+// new value of a pair rolled one variable at a time (a = b; b = x).
+func weighsSum(as *ast.AssignStmt) bool {
+	if as.Tok != token.DEFINE || len(as.Rhs) != 1 {
+		return false
+	}
+	m, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
+	if !ok || m.Op != token.MUL {
+		return false
+	}
+	for _, e := range []ast.Expr{m.X, m.Y} {
+		if sum, ok := ast.Unparen(e).(*ast.BinaryExpr); ok && sum.Op == token.ADD {
+			_, x := ast.Unparen(sum.X).(*ast.Ident)
+			_, y := ast.Unparen(sum.Y).(*ast.Ident)
+			if x && y {
+				return true
+			}
+		}
+	}
+	return false
 }
 
 // worthProducts reports whether a function may hold anything to report

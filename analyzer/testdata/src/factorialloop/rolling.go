@@ -97,3 +97,25 @@ func FromSeed(a, b int64, n int) int64 {
 	}
 	return b
 }
+
+// Seating rolls the pair one variable at a time through a named value.
+func Seating(n int) int64 { // want Seating:`wrong for some n`
+	older, newer := int64(1), int64(0)
+	for k := 2; k <= n; k++ {
+		next := int64(k-1) * (older + newer)
+		older = newer
+		newer = next // want `rolling pair older, newer = newer, next computes the derangement numbers D\(k\) .* in int64: the step at k = 21 wraps`
+	}
+	return newer
+}
+
+// SeatingWrongOrder overwrites b before a reads it: another sequence
+// (a copy of the new value twice), silent.
+func SeatingWrongOrder(n int) int64 {
+	a, b := int64(1), int64(0)
+	for k := 2; k <= n; k++ {
+		b = int64(k-1) * (a + b)
+		a = b
+	}
+	return b
+}
