@@ -49,7 +49,7 @@ var patterns = []struct{ id, title string }{
 	{catCall, "A call of a factorial-valued function receives an argument whose factorial cannot fit the result type, or a float factorial or binomial value that can be +Inf reaches a logarithm that is finite."},
 	{catRatio, "A binomial, permutation, multinomial, Catalan or hypergeometric value is computed as a ratio of factorials whose numerator overflows first."},
 	{catBinomLoop, "A multiplicative binomial loop overflows in its intermediate product before the division, even where the coefficient fits."},
-	{catPascal, "A count built by a triangle rule, a binomial coefficient by Pascal's rule C(n, k) = C(n-1, k-1) + C(n-1, k), a Stirling number by k·S(n-1, k) + S(n-1, k-1) or a Bell number by the Bell triangle, in a recursion or a table wraps in an integer type once the count leaves it."},
+	{catPascal, "A count built by a triangle rule, a binomial coefficient by Pascal's rule C(n, k) = C(n-1, k-1) + C(n-1, k), a Stirling number by k·S(n-1, k) + S(n-1, k-1) or a Bell number by the Bell triangle, in a recursion or a table, or a table of counts filled by additions row by row (Pascal's row in place, subsets by their sum, partitions), wraps in an integer type once the count leaves it."},
 	{catPowOverFac, "A power-over-factorial term such as x^k/k! (Poisson, Erlang, Taylor series) divides two values that overflow separately."},
 	{catGammaRatio, "A ratio or product of math.Gamma values (Beta function, Student-t constant) overflows in a Gamma call although the result is finite."},
 	{catGamma, "math.Gamma receives an argument not bounded below the point where it returns +Inf."},

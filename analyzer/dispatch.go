@@ -35,6 +35,11 @@ func (c *checker) checkFunc(n ast.Node, s scan) {
 	}
 	if s.sumTable {
 		fc.checkPascalTables(body)
+		fc.checkCountTables(body)
+		fc.checkPascalRows(body)
+	}
+	if s.loop && s.pairStep {
+		fc.checkPairRecurrences(body)
 	}
 	if !s.worthProducts() {
 		return

@@ -18,7 +18,8 @@ type scan struct {
 	localCall bool // a call of a function of this package, which may become factorial-valued
 	logCall   bool // a call of math.Lgamma or math.Log: log-space forms (lgammasign.go, stirlingapproximation.go)
 	sumCalls  bool // a sum (or difference) of two calls of one name, one maybe weighed: a Pascal's-rule, Stirling or derangement recursion may be here (pascalrule.go)
-	sumTable  bool // a sum of two entries of one table: a table filled by such a rule may be here
+	sumTable  bool // a sum of two entries of one table: a table filled by such a rule, or a count table (counttable.go), may be here
+	pairStep  bool // a, b = b, x or x := w·(a + b): a recurrence over two rolling variables may be here (pairrecurrence.go)
 }
 
 // scanAll is the syntactic prefilter. In one walk of the files it
@@ -59,6 +60,14 @@ func (c *checker) scanAll(files []*ast.File) map[ast.Node]*scan {
 		case *ast.AssignStmt:
 			if cur != nil && (n.Tok == token.MUL_ASSIGN || n.Tok == token.ASSIGN && len(n.Rhs) == 1 && (isMulOrQuo(n.Rhs[0]) || appendsProduct(n.Rhs[0]))) {
 				cur.product = true
+			}
+			if cur != nil && !cur.pairStep {
+				cur.pairStep = rollsPair(n) || weighsSum(n)
+			}
+			if cur != nil && n.Tok == token.ADD_ASSIGN && len(n.Lhs) == 1 && len(n.Rhs) == 1 {
+				// c[s] += c[s-r]: a count table (counttable.go).
+				_, table := sameKind(n.Lhs[0], ast.Unparen(n.Rhs[0]))
+				cur.sumTable = cur.sumTable || table
 			}
 		case *ast.BinaryExpr:
 			if cur != nil && n.Op == token.MUL && !cur.callMul {
@@ -201,7 +210,45 @@ func isMulOrQuo(e ast.Expr) bool {
 func (s *scan) worthLoops() bool { return s.loop && s.product }
 
 // worth reports whether a function may hold anything to report.
-func (s *scan) worth() bool { return s.worthProducts() || s.sumCalls || s.sumTable }
+func (s *scan) worth() bool {
+	return s.worthProducts() || s.sumCalls || s.sumTable || s.loop && s.pairStep
+}
+
+// rollsPair reports whether as is a, b = b, x or b, a = x, b: two
+// variables rolled forward by one step.
+func rollsPair(as *ast.AssignStmt) bool {
+	if as.Tok != token.ASSIGN || len(as.Lhs) != 2 || len(as.Rhs) != 2 {
+		return false
+	}
+	same := func(x, y ast.Expr) bool {
+		a, ok1 := x.(*ast.Ident)
+		b, ok2 := y.(*ast.Ident)
+		return ok1 && ok2 && a.Name == b.Name && a.Name != "_"
+	}
+	return same(as.Rhs[0], as.Lhs[1]) || same(as.Rhs[1], as.Lhs[0])
+}
+
+// weighsSum reports whether as is x := w·(a + b) over two variables, the
+// new value of a pair rolled one variable at a time (a = b; b = x).
+func weighsSum(as *ast.AssignStmt) bool {
+	if as.Tok != token.DEFINE || len(as.Rhs) != 1 {
+		return false
+	}
+	m, ok := ast.Unparen(as.Rhs[0]).(*ast.BinaryExpr)
+	if !ok || m.Op != token.MUL {
+		return false
+	}
+	for _, e := range []ast.Expr{m.X, m.Y} {
+		if sum, ok := ast.Unparen(e).(*ast.BinaryExpr); ok && sum.Op == token.ADD {
+			_, x := ast.Unparen(sum.X).(*ast.Ident)
+			_, y := ast.Unparen(sum.Y).(*ast.Ident)
+			if x && y {
+				return true
+			}
+		}
+	}
+	return false
+}
 
 // worthProducts reports whether a function may hold anything to report
 // but Pascal's rule: only these run the value model.

@@ -140,7 +140,7 @@ func (fc *fnCtx) noteWrongValue(f finding) {
 	}
 	c := fc.c
 	d, ok := fc.node.(*ast.FuncDecl)
-	if !ok || !rootCategory(f.cat) || !numericResult(fc.signature()) {
+	if !ok || !rootCategory(f.cat) || !numericResult(fc.signature()) && !tableResult(fc.signature()) {
 		return
 	}
 	fn := c.declObj(d)
@@ -465,6 +465,27 @@ func numericResult(sig *types.Signature) bool {
 	return ok && b.Info()&types.IsNumeric != 0
 }
 
+// tableResult reports whether sig's first result is a slice or array of
+// integers, a table of counts its callers read entry by entry. Such a
+// function's fact stays in its package: MayCarryFacts, which decides
+// what the driver analyses of a dependency, looks for numeric results.
+func tableResult(sig *types.Signature) bool {
+	if sig == nil || sig.Results().Len() == 0 || sig.Results().Len() > 2 {
+		return false
+	}
+	var elem types.Type
+	switch t := sig.Results().At(0).Type().Underlying().(type) {
+	case *types.Slice:
+		elem = t.Elem()
+	case *types.Array:
+		elem = t.Elem()
+	default:
+		return false
+	}
+	b, ok := elem.Underlying().(*types.Basic)
+	return ok && b.Info()&types.IsInteger != 0
+}
+
 // intResult reports whether fn's first result is an integer.
 func intResult(fn *types.Func) bool {
 	sig, _ := fn.Type().(*types.Signature)
@@ -520,7 +541,7 @@ func (c *checker) checkWrongCallers() {
 	// Only another package's callers need the fact, and they can call
 	// only the exported functions.
 	for fn, f := range st.facts {
-		if fn.Exported() {
+		if sig, _ := fn.Type().(*types.Signature); fn.Exported() && numericResult(sig) {
 			c.pass.ExportObjectFact(fn, f)
 		}
 	}
@@ -796,8 +817,8 @@ func assignedPairs(n ast.Node) (lhs, rhs []ast.Expr) {
 
 // carries reports whether e's value is call's, or built from it (or
 // from a carrier) by arithmetic that keeps a wrong value wrong: sums,
-// differences, products, quotients, negation, conversions, square roots
-// and absolute values.
+// differences, products, quotients, negation, conversions, square roots,
+// absolute values and entries of a carried table.
 func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Object]bool) bool {
 	c := f.fc.c
 	switch e := ast.Unparen(e).(type) {
@@ -810,6 +831,9 @@ func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Obje
 		}
 	case *ast.Ident:
 		return vars[c.pass.TypesInfo.ObjectOf(e)]
+	case *ast.IndexExpr:
+		// An entry of a table of counts a call returned (tableResult).
+		return f.carries(e.X, call, vars)
 	case *ast.UnaryExpr:
 		return (e.Op == token.SUB || e.Op == token.ADD) && f.carries(e.X, call, vars)
 	case *ast.BinaryExpr:

@@ -32,7 +32,7 @@ func wilcoxonCounts(n int) []uint64 {
 	top := n * (n + 1) / 2
 	c := make([]uint64, top+1)
 	c[0] = 1
-	for r := 1; r <= n; r++ {
+	for r := 1; r <= n; r++ { // want `table c is filled by additions row by row \(c\[s\] \+= c\[s-r\], s falling\) in uint64: each row adds one part, and c\[s\] counts the sets of distinct parts with sum s; its largest entry wraps once n reaches 73`
 		for s := top; s >= r; s-- {
 			c[s] += c[s-r]
 		}
@@ -42,8 +42,8 @@ func wilcoxonCounts(n int) []uint64 {
 
 // WilcoxonP is the exact lower-tail p-value P(W <= w) of the signed-rank
 // statistic for n pairs.
-func WilcoxonP(w, n int) float64 {
-	c := wilcoxonCounts(n)
+func WilcoxonP(w, n int) float64 { // want WilcoxonP:`wrong for n ≥ 73`
+	c := wilcoxonCounts(n) // want `WilcoxonP builds its result from wilcoxonCounts\(n\), which is wrong from n = 73`
 	sum := 0.0
 	for s := 0; s <= w && s < len(c); s++ {
 		sum += float64(c[s])

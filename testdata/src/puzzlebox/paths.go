@@ -80,7 +80,7 @@ func derangements(n int) int64 {
 		return 1
 	}
 	for i := 2; i <= n; i++ {
-		a, b = b, int64(i-1)*(a+b)
+		a, b = b, int64(i-1)*(a+b) // want `rolling pair a, b = b, int64\(i-1\) \* \(a \+ b\) computes the derangement numbers D\(i\) .* in int64: the step at i = 21 wraps \(D\(20\) ≈ 8.95e17 is the largest that fits\)`
 	}
 	return b
 }
