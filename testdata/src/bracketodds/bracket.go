@@ -32,11 +32,11 @@ func SeriesWin(n int, p float64) float64 { // want SeriesWin:`wrong for some n \
 
 // SeriesWinRunning is SeriesWin with the term updated from the
 // previous one.
-func SeriesWinRunning(n int, p float64) float64 {
+func SeriesWinRunning(n int, p float64) float64 { // want SeriesWinRunning:`wrong for some n \(SeriesWinRunning, bracketodds/bracket\.go:39\)`
 	q := 1 - p
 	term := math.Pow(p, float64(n))
 	s := term
-	for k := 1; k < n; k++ {
+	for k := 1; k < n; k++ { // want `running product term computes the probabilities C\(n \+ k - 1, k\)·p\^n·\(1−p\)\^k one factor at a time from \(p\)\^\(n\), which in float64 loses its digits for n ≥ 1023 and is 0 for n ≥ 1075 \(at p = 0\.5\)`
 		term *= float64(n-1+k) / float64(k) * q
 		s += term
 	}
