@@ -67,9 +67,9 @@ func Seedings(n uint64) uint64 { // want Seedings:`factorial of parameter 0, bre
 
 // DistinctBrackets is the number of seedings of n = 2^r teams that
 // give different first-round pairings: n! / (2^(n/2) (n/2)!).
-func DistinctBrackets(n uint64) uint64 {
+func DistinctBrackets(n uint64) uint64 { // want DistinctBrackets:`wrong for n ≥ 21 \(DistinctBrackets, bracketodds/bracket\.go:72\)`
 	h := n / 2
-	return Seedings(n) / (Seedings(h) << h)
+	return Seedings(n) / (Seedings(h) << h) // want `ratio of factorials in uint64: the numerator n! wraps for n ≥ 21 before the division`
 }
 
 // MeetProb is the probability that two given teams meet somewhere in
