@@ -163,7 +163,7 @@ func (fc *fnCtx) noteWrongValue(f finding) {
 	if st.facts == nil {
 		st.facts = make(map[*types.Func]*WrongValueFact)
 	}
-	leaves := c.funcs[fn] != nil || leavesType(f.cat)
+	leaves := c.valueLeaves(fn, f.cat)
 	if old := st.facts[fn]; old != nil {
 		old.Inputs = mergeInputs(old.Inputs, inputs)
 		old.Leaves = old.Leaves && leaves
@@ -808,6 +808,7 @@ func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Obje
 		if f.fc.isConversion(e) || c.isMathFunc(e, "Sqrt") || c.isMathFunc(e, "Abs") {
 			return len(e.Args) == 1 && f.carries(e.Args[0], call, vars)
 		}
+		return f.carriesFormatted(e, call, vars)
 	case *ast.Ident:
 		return vars[c.pass.TypesInfo.ObjectOf(e)]
 	case *ast.UnaryExpr:
