@@ -758,13 +758,14 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 			if _, ok := n.(*ast.FuncLit); ok {
 				return false
 			}
-			// A field's store, out.X += v, carries the value into out.
+			// A field's or an element's store, out.X += v or p[n] = v,
+			// carries the value into out or p.
 			lhs, rhs := assignedPairs(n)
 			if len(lhs) != len(rhs) {
 				return true
 			}
 			for i, l := range lhs {
-				id, ok := ranges.RootIdent(l)
+				id, ok := storedRoot(l)
 				if !ok {
 					continue
 				}

@@ -53,3 +53,22 @@ func (f *resultFlow) carriesFormatted(e *ast.CallExpr, call *ast.CallExpr, vars 
 	}
 	return false
 }
+
+// storedRoot returns the variable a store to l writes into: the root of
+// a field selection (out.X), as ranges.RootIdent finds it, or of an
+// element of a slice, array or map (p[n], out.W[i]), which holds the
+// value stored as the variable returned does.
+func storedRoot(l ast.Expr) (*ast.Ident, bool) {
+	for {
+		switch x := ast.Unparen(l).(type) {
+		case *ast.IndexExpr:
+			l = x.X
+		case *ast.SelectorExpr:
+			l = x.X
+		case *ast.Ident:
+			return x, true
+		default:
+			return nil, false
+		}
+	}
+}

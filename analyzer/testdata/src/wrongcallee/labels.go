@@ -54,3 +54,20 @@ func FactLabel(n int) string {
 func Handshakes(a, b int) int64 { // want Handshakes:`wrong for a ≥ 21 \(Choose, wrongcallee/labels\.go:24\)`
 	return Choose(a, 2) * Choose(b, 2) // want `Handshakes builds its result from Choose\(a, 2\), which is wrong from n = 21 \(reported at wrongcallee/labels\.go:24\); a, passed as n, is not bounded here`
 }
+
+// PairTable fills a table of counts: each element holds Choose's wrong
+// value at n ≥ 21 (C(21, 2) = 210), and so does the table returned.
+func PairTable(n int) []int64 {
+	t := make([]int64, n+1)
+	for i := range t {
+		t[i] = Choose(i, 2) // want `PairTable builds its result from Choose\(i, 2\), which is wrong from n = 21`
+	}
+	return t
+}
+
+// PairCount stores the count in a table it does not return: silent.
+func PairCount(n int) int {
+	t := make([]int64, 1)
+	t[0] = Choose(n, 2)
+	return len(t)
+}
