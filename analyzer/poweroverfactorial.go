@@ -117,6 +117,8 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
 			msg += "; " + powText
+		} else {
+			msg += fc.powerFirst(pow, fac, first)
 		}
 	} else {
 		msg = fmt.Sprintf("%s in %s: %s", what, pow.t.typeName(), powText)
@@ -201,6 +203,29 @@ func (fc *fnCtx) powerLimit(pow factor) (string, bool) {
 		return "", true
 	}
 	return fmt.Sprintf("math.Pow(%s, %s) %s for %s ≥ %d", src(pow.arg), src(pow.arg2), verb(pow.t), src(fc.stripConv(pow.arg2)), first), false
+}
+
+// powerFirst names, for a power x^e whose base the code does not fix,
+// where the power overflows before the divisor does: e at the last
+// value of the factorial's argument that still fits, and the first |x|
+// whose e-th power passes the type there. Empty where the exponent is
+// not a multiple of that argument plus a constant.
+func (fc *fnCtx) powerFirst(pow, fac factor, first int64) string {
+	if _, ok := fc.floatConst(pow.arg); ok || !pow.t.Float || fac.off != 0 {
+		return ""
+	}
+	e, ok1 := fc.linearCount(fc.stripConv(pow.arg2))
+	n, ok2 := fc.linearCount(fc.stripConv(fac.arg))
+	if !ok1 || !ok2 || len(n.Terms) != 1 || n.C != 0 || n.Terms[0].K != 1 || len(e.Terms) != 1 || e.Terms[0].Sym != n.Terms[0].Sym || e.Terms[0].K <= 0 {
+		return ""
+	}
+	last := e.Terms[0].K*(first-1) + e.C
+	b := thresholds.PowerBaseFirstBad(pow.t.Num, last)
+	if math.IsInf(b, 1) {
+		return ""
+	}
+	return fmt.Sprintf("; where |%s| ≥ %s the power %s %s first, before %s reaches %d",
+		src(pow.arg), fmtFloat(b), powerText(fc, pow), verb(pow.t), src(fc.stripConv(fac.arg)), first)
 }
 
 // powerText renders math.Pow(x, e) as x^e, with the exponent's
@@ -290,6 +315,9 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), strings.Join(dens, "·"))
 	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
 		what, worst.t.typeName(), bang(worst.arg, worst.off), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
+	if pow.call != nil {
+		msg += fc.powerFirst(pow, *worst, first)
+	}
 	m := fc.factorialChain(root, p.den)
 	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
 		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})

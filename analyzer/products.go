@@ -168,6 +168,15 @@ func (fc *fnCtx) evalInto(p *product, e ast.Expr, den bool, depth int) {
 			fc.evalInto(p, e.X, den, depth+1)
 			fc.evalInto(p, e.Y, !den, depth+1)
 			return
+		case token.SHL:
+			if den {
+				// A divisor x << s is x·2^s, s ≥ 0: the quotient is
+				// at most the one by x, a factor the product does not
+				// know beside it.
+				fc.evalInto(p, e.X, den, depth+1)
+				p.other++
+				return
+			}
 		}
 	case *ast.CallExpr:
 		if f, ok := fc.factorOf(e); ok {

@@ -163,7 +163,7 @@ func (fc *fnCtx) noteWrongValue(f finding) {
 	if st.facts == nil {
 		st.facts = make(map[*types.Func]*WrongValueFact)
 	}
-	leaves := c.funcs[fn] != nil || leavesType(f.cat)
+	leaves := c.valueLeaves(fn, f.cat)
 	if old := st.facts[fn]; old != nil {
 		old.Inputs = mergeInputs(old.Inputs, inputs)
 		old.Leaves = old.Leaves && leaves
@@ -779,13 +779,14 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 			if _, ok := n.(*ast.FuncLit); ok {
 				return false
 			}
-			// A field's store, out.X += v, carries the value into out.
+			// A field's or an element's store, out.X += v or p[n] = v,
+			// carries the value into out or p.
 			lhs, rhs := assignedPairs(n)
 			if len(lhs) != len(rhs) {
 				return true
 			}
 			for i, l := range lhs {
-				id, ok := ranges.RootIdent(l)
+				id, ok := storedRoot(l)
 				if !ok {
 					continue
 				}
@@ -829,6 +830,7 @@ func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Obje
 		if f.fc.isConversion(e) || c.isMathFunc(e, "Sqrt") || c.isMathFunc(e, "Abs") {
 			return len(e.Args) == 1 && f.carries(e.Args[0], call, vars)
 		}
+		return f.carriesFormatted(e, call, vars)
 	case *ast.Ident:
 		return vars[c.pass.TypesInfo.ObjectOf(e)]
 	case *ast.IndexExpr:

@@ -5,11 +5,11 @@ import "math"
 // ErlangSurvival is the probability that a life whose remaining
 // lifetime is Erlang with k stages of rate mu survives past t:
 // the sum of e^-x x^i / i! for i < k at x = mu*t.
-func ErlangSurvival(k int, mu, t float64) float64 {
+func ErlangSurvival(k int, mu, t float64) float64 { // want ErlangSurvival:`wrong for some k \(ErlangSurvival, annuity/erlang\.go:12\)`
 	x := mu * t
 	term := math.Exp(-x)
 	s := term
-	for i := 1; i < k; i++ {
+	for i := 1; i < k; i++ { // want `running product term computes the Poisson terms x\^k·e\^\(−x\)/k! from math\.Exp\(-x\) with x = \(mu\)·\(t\), which in float64 loses its digits for x > 708\.396`
 		term *= x / float64(i)
 		s += term
 	}

@@ -32,11 +32,11 @@ func SeriesWin(n int, p float64) float64 { // want SeriesWin:`wrong for some n \
 
 // SeriesWinRunning is SeriesWin with the term updated from the
 // previous one.
-func SeriesWinRunning(n int, p float64) float64 {
+func SeriesWinRunning(n int, p float64) float64 { // want SeriesWinRunning:`wrong for some n \(SeriesWinRunning, bracketodds/bracket\.go:39\)`
 	q := 1 - p
 	term := math.Pow(p, float64(n))
 	s := term
-	for k := 1; k < n; k++ {
+	for k := 1; k < n; k++ { // want `running product term computes the probabilities C\(n \+ k - 1, k\)·p\^n·\(1−p\)\^k one factor at a time from \(p\)\^\(n\), which in float64 loses its digits for n ≥ 1023 and is 0 for n ≥ 1075 \(at p = 0\.5\)`
 		term *= float64(n-1+k) / float64(k) * q
 		s += term
 	}
@@ -67,9 +67,9 @@ func Seedings(n uint64) uint64 { // want Seedings:`factorial of parameter 0, bre
 
 // DistinctBrackets is the number of seedings of n = 2^r teams that
 // give different first-round pairings: n! / (2^(n/2) (n/2)!).
-func DistinctBrackets(n uint64) uint64 {
+func DistinctBrackets(n uint64) uint64 { // want DistinctBrackets:`wrong for n ≥ 21 \(DistinctBrackets, bracketodds/bracket\.go:72\)`
 	h := n / 2
-	return Seedings(n) / (Seedings(h) << h)
+	return Seedings(n) / (Seedings(h) << h) // want `ratio of factorials in uint64: the numerator n! wraps for n ≥ 21 before the division`
 }
 
 // MeetProb is the probability that two given teams meet somewhere in

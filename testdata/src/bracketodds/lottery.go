@@ -25,7 +25,7 @@ func Combinations(n, k int) int64 { // want Combinations:`wrong for n ≥ 21 \(C
 
 // Odds formats the one-in-N jackpot odds of a draw.
 func Odds(n, k int) string {
-	return fmt.Sprintf("1 in %d", Combinations(n, k))
+	return fmt.Sprintf("1 in %d", Combinations(n, k)) // want `Odds builds its result from Combinations\(n, k\), which is wrong from n = 21 \(reported at bracketodds/lottery\.go:23\)`
 }
 
 // Tickets is Combinations computed by the multiplicative formula, for
@@ -73,6 +73,6 @@ func KenoHit(spots, hits int) float64 {
 
 // KenoWays is the number of winning combinations of a keno card: the
 // draws of 20 from 80 in which exactly hits of the spots come up.
-func KenoWays(spots, hits int) int64 {
-	return Combinations(spots, hits) * Combinations(80-spots, 20-hits)
+func KenoWays(spots, hits int) int64 { // want KenoWays:`wrong for spots ≥ 21 \(Combinations, bracketodds/lottery\.go:23\)`
+	return Combinations(spots, hits) * Combinations(80-spots, 20-hits) // want `KenoWays builds its result from Combinations\(spots, hits\), which is wrong from n = 21 \(reported at bracketodds/lottery\.go:23\); spots, passed as n, is not bounded here`
 }

@@ -30,10 +30,10 @@ func (d NegBin) LogPMF(k int) float64 {
 
 // CDF returns the probability of at most k claims, summing the
 // probabilities by their ratio p(i)/p(i-1) = (i-1+R)/i * (1-P).
-func (d NegBin) CDF(k int) float64 {
+func (d NegBin) CDF(k int) float64 { // want CDF:`wrong for some d or some k \(CDF, claimfreq/negbin\.go:36\)`
 	p := math.Pow(d.P, d.R)
 	s := p
-	for i := 1; i <= k; i++ {
+	for i := 1; i <= k; i++ { // want `running product p computes the probabilities C\(i \+ d\.R - 1, i\)·d\.P\^d\.R·\(1−d\.P\)\^i one factor at a time from \(d\.P\)\^\(d\.R\), which in float64 loses its digits for d\.R ≥ 1023 and is 0 for d\.R ≥ 1075`
 		p *= (float64(i) - 1 + d.R) / float64(i) * (1 - d.P)
 		s += p
 	}

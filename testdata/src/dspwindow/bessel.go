@@ -18,7 +18,7 @@ func fact(k int) float64 { // want fact:`factorial of parameter 0, breaks from 1
 func besselI0Series(x float64) float64 {
 	sum := 0.0
 	for k := 0; k < 500; k++ {
-		t := math.Pow(x/2, float64(2*k)) / (fact(k) * fact(k)) // want `term with \(x / 2\)\^\(2 \* k\) over k!·k! in float64: k! overflows to \+Inf for k ≥ 171`
+		t := math.Pow(x/2, float64(2*k)) / (fact(k) * fact(k)) // want `term with \(x / 2\)\^\(2 \* k\) over k!·k! in float64: k! overflows to \+Inf for k ≥ 171 .*; where \|x / 2\| ≥ 8\.0655 the power \(x / 2\)\^\(2 \* k\) overflows to \+Inf first, before k reaches 171`
 		sum += t
 		if t < 1e-17*sum {
 			break

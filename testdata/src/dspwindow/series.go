@@ -6,7 +6,7 @@ import "math"
 func ExpTaylor(x float64) float64 {
 	s := 0.0
 	for k := 0; k < 1000; k++ {
-		t := math.Pow(x, float64(k)) / fact(k) // want `power-over-factorial term x\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171`
+		t := math.Pow(x, float64(k)) / fact(k) // want `power-over-factorial term x\^k/k! in float64: the divisor k! overflows to \+Inf for k ≥ 171 .*; where \|x\| ≥ 65\.0524 the power x\^k overflows to \+Inf first, before k reaches 171`
 		s += t
 		if math.Abs(t) < 1e-16*math.Abs(s) {
 			break
