@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/types"
 	"maps"
+	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -212,14 +213,57 @@ func (r *rangeQueries) rangeOf(e ast.Expr) ranges.Interval {
 		return ranges.Point(v)
 	}
 	iv := r.ranges().Of(e)
-	if lin, ok := r.q.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
+	lin, ok := r.q.linear(e)
+	if !ok {
+		return iv
+	}
+	if len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
 		for _, a := range r.assumes {
 			if a.obj == lin.Terms[0].Sym.Object && a.from <= e.Pos() && e.End() <= a.to {
 				iv = iv.Meet(shift(a.iv, lin.C))
 			}
 		}
 	}
+	if len(lin.Terms) > 0 && (typeLimit(iv.Hi) || lowLimit(iv.Lo)) {
+		iv = iv.Meet(r.affineRange(lin, e))
+	}
 	return iv
+}
+
+// affineRange returns the range of the linear form lin, evaluated at e,
+// from the ranges of its variables there: the guards on m bound 2*m+1
+// and m+k through m's and k's own ranges. The range analysis alone
+// gives such a sum the whole type whenever a variable is unbounded on
+// one side (m ≤ 10 leaves m free to sit at MinInt64, where 2*m wraps);
+// here an unbounded end stays unbounded and the bounded end carries
+// through, as ranges.Options.NoWrap reads it: the range is then sound
+// for every execution in which no unbounded variable lies near the
+// limits of its type, the trade every guard n ≤ 20 in front of n−1
+// makes.
+func (r *rangeQueries) affineRange(lin linear, e ast.Expr) ranges.Interval {
+	out := ranges.Point(lin.C)
+	for _, t := range lin.Terms {
+		v := r.entryRange(t.Sym.Object, e)
+		if v.IsEmpty() || t.K == 0 {
+			return ranges.Top()
+		}
+		lo, hi := v.Lo, v.Hi
+		if lowLimit(lo) {
+			lo = math.MinInt64
+		}
+		if typeLimit(hi) {
+			hi = math.MaxInt64
+		}
+		a, b := mulSat(lo, t.K), mulSat(hi, t.K)
+		if t.K < 0 {
+			a, b = b, a
+		}
+		if a == math.MaxInt64 || b == math.MinInt64 {
+			return ranges.Top()
+		}
+		out = ranges.Interval{Lo: addSat(out.Lo, a), Hi: addSat(out.Hi, b)}
+	}
+	return out
 }
 
 // entryRange returns the range of variable v at node n.
