@@ -213,21 +213,39 @@ func (r *rangeQueries) rangeOf(e ast.Expr) ranges.Interval {
 		return ranges.Point(v)
 	}
 	iv := r.ranges().Of(e)
-	lin, ok := r.q.linear(e)
-	if !ok {
-		return iv
-	}
-	if len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
+	if lin, ok := r.q.linear(e); ok && len(lin.Terms) == 1 && lin.Terms[0].K == 1 {
 		for _, a := range r.assumes {
 			if a.obj == lin.Terms[0].Sym.Object && a.from <= e.Pos() && e.End() <= a.to {
 				iv = iv.Meet(shift(a.iv, lin.C))
 			}
 		}
 	}
-	if len(lin.Terms) > 0 && (typeLimit(iv.Hi) || lowLimit(iv.Lo)) {
+	return iv
+}
+
+// guardedRange is rangeOf read through the guards on the variables of
+// a linear e (see affineRange).
+func (r *rangeQueries) guardedRange(e ast.Expr) ranges.Interval {
+	iv := r.rangeOf(e)
+	lin, ok := r.q.linear(ast.Unparen(e))
+	if ok && len(lin.Terms) > 0 && (typeLimit(iv.Hi) || lowLimit(iv.Lo)) && noConversion(e) {
 		iv = iv.Meet(r.affineRange(lin, e))
 	}
 	return iv
+}
+
+// noConversion reports whether e converts nothing: a conversion such as
+// uint64(i) changes the value where i is negative, which the linear
+// form, reading through it, does not see.
+func noConversion(e ast.Expr) bool {
+	none := true
+	ast.Inspect(e, func(n ast.Node) bool {
+		if _, call := n.(*ast.CallExpr); call {
+			none = false
+		}
+		return none
+	})
+	return none
 }
 
 // affineRange returns the range of the linear form lin, evaluated at e,
