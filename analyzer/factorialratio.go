@@ -34,7 +34,11 @@ func (fc *fnCtx) brokenFactor(num []factor) (f factor, j judgement, first int64,
 			continue
 		}
 		first := firstBadOf(f.kind, f.t) - f.off
-		if j := fc.judge(f.arg, first); !j.silent {
+		// The argument's range through the guards on its variables:
+		// after m ≤ 10, (2m)! is at most 20!.
+		j := decide(f.arg, fc.guardedRange(f.arg), first)
+		fc.noteJudged(f.arg, first, j)
+		if !j.silent {
 			return f, j, first, true
 		}
 	}

@@ -4,6 +4,7 @@ import (
 	"go/ast"
 	"go/types"
 	"maps"
+	"math"
 
 	"github.com/overfact/overfact/analyzer/ranges"
 )
@@ -220,6 +221,67 @@ func (r *rangeQueries) rangeOf(e ast.Expr) ranges.Interval {
 		}
 	}
 	return iv
+}
+
+// guardedRange is rangeOf read through the guards on the variables of
+// a linear e (see affineRange).
+func (r *rangeQueries) guardedRange(e ast.Expr) ranges.Interval {
+	iv := r.rangeOf(e)
+	lin, ok := r.q.linear(ast.Unparen(e))
+	if ok && len(lin.Terms) > 0 && (typeLimit(iv.Hi) || lowLimit(iv.Lo)) && noConversion(e) {
+		iv = iv.Meet(r.affineRange(lin, e))
+	}
+	return iv
+}
+
+// noConversion reports whether e converts nothing: a conversion such as
+// uint64(i) changes the value where i is negative, which the linear
+// form, reading through it, does not see.
+func noConversion(e ast.Expr) bool {
+	none := true
+	ast.Inspect(e, func(n ast.Node) bool {
+		if _, call := n.(*ast.CallExpr); call {
+			none = false
+		}
+		return none
+	})
+	return none
+}
+
+// affineRange returns the range of the linear form lin, evaluated at e,
+// from the ranges of its variables there: the guards on m bound 2*m+1
+// and m+k through m's and k's own ranges. The range analysis alone
+// gives such a sum the whole type whenever a variable is unbounded on
+// one side (m ≤ 10 leaves m free to sit at MinInt64, where 2*m wraps);
+// here an unbounded end stays unbounded and the bounded end carries
+// through, as ranges.Options.NoWrap reads it: the range is then sound
+// for every execution in which no unbounded variable lies near the
+// limits of its type, the trade every guard n ≤ 20 in front of n−1
+// makes.
+func (r *rangeQueries) affineRange(lin linear, e ast.Expr) ranges.Interval {
+	out := ranges.Point(lin.C)
+	for _, t := range lin.Terms {
+		v := r.entryRange(t.Sym.Object, e)
+		if v.IsEmpty() || t.K == 0 {
+			return ranges.Top()
+		}
+		lo, hi := v.Lo, v.Hi
+		if lowLimit(lo) {
+			lo = math.MinInt64
+		}
+		if typeLimit(hi) {
+			hi = math.MaxInt64
+		}
+		a, b := mulSat(lo, t.K), mulSat(hi, t.K)
+		if t.K < 0 {
+			a, b = b, a
+		}
+		if a == math.MaxInt64 || b == math.MinInt64 {
+			return ranges.Top()
+		}
+		out = ranges.Interval{Lo: addSat(out.Lo, a), Hi: addSat(out.Hi, b)}
+	}
+	return out
 }
 
 // entryRange returns the range of variable v at node n.

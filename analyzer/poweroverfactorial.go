@@ -86,11 +86,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	default:
 		// Not the shape as written (x^(k+1)/k!, e^(−2λ), an extra
 		// factor): name what the code computes instead.
-		den := bang(fac.arg, fac.off)
-		if fac.kind == kindDouble {
-			den += "!"
-		}
-		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), den)
+		what = fmt.Sprintf("term with %s over %s", powerText(fc, pow), factorialText(fac))
 		if fac.kind == kindFactorial && fac.t.Float && fac.call != nil && fac.fact != nil {
 			// The term in log space, the factorial the value its
 			// function returns with ln n! beside it (see
@@ -114,7 +110,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 	if !facSafe {
 		clause, definite = j.clause, j.definite
 		msg = fmt.Sprintf("%s in %s: the divisor %s %s for %s ≥ %d (%s), after which the term is 0 or NaN although its true value is small",
-			what, fac.t.typeName(), bang(fac.arg, fac.off), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
+			what, fac.t.typeName(), factorialText(fac), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
 			msg += "; " + powText
 		} else {
@@ -301,7 +297,7 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 		if f.kind != kindFactorial && f.kind != kindDouble {
 			return
 		}
-		dens = append(dens, bang(f.arg, f.off))
+		dens = append(dens, factorialText(f))
 		fb := firstBadOf(f.kind, f.t) - f.off
 		j := fc.judge(f.arg, fb)
 		if f.fact != nil && f.fact.Safe || j.silent || worst != nil && (wj.definite || !j.definite) {
@@ -314,11 +310,20 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	}
 	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), strings.Join(dens, "·"))
 	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
-		what, worst.t.typeName(), bang(worst.arg, worst.off), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
+		what, worst.t.typeName(), factorialText(*worst), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
 	if pow.call != nil {
 		msg += fc.powerFirst(pow, *worst, first)
 	}
 	m := fc.factorialChain(root, p.den)
 	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
 		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})
+}
+
+// factorialText names the factorial a divisor computes: n! or, for a
+// double factorial, n!!.
+func factorialText(f factor) string {
+	if f.kind == kindDouble {
+		return bang(f.arg, f.off) + "!"
+	}
+	return bang(f.arg, f.off)
 }

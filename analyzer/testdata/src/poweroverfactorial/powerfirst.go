@@ -18,5 +18,5 @@ func dfact(n int) float64 { // want dfact:`double-factorial of parameter 0, brea
 
 // oddTerm is x^n/n!!, a term of the series of erf's odd powers.
 func oddTerm(x float64, n int) float64 {
-	return math.Pow(x, float64(n)) / dfact(n) // want `term with x\^n over n!! in float64: the divisor n! overflows to \+Inf for n ≥ 301 .*; where \|x\| ≥ 10\.6541 the power x\^n overflows to \+Inf first, before n reaches 301; n is not bounded here`
+	return math.Pow(x, float64(n)) / dfact(n) // want `term with x\^n over n!! in float64: the divisor n!! overflows to \+Inf for n ≥ 301 .*; where \|x\| ≥ 10\.6541 the power x\^n overflows to \+Inf first, before n reaches 301; n is not bounded here`
 }
