@@ -900,12 +900,17 @@ func (r *funcReport) status() string {
 
 // afterfixBudget is the sample size per function and the exact
 // evaluator's step bound per input: a quick grid in the test suite, the
-// larger sample with OVERFACT_AFTERFIX_FULL=1 (scripts/afterfix.sh).
+// larger sample with OVERFACT_AFTERFIX_FULL=1 (scripts/afterfix.sh). The
+// quick bound keeps the test suite within CI's time: the inputs that run
+// into it were most of the exact evaluation's time (at 60,000 steps, 308
+// of 11,335 inputs took about 33 of its 82 CPU seconds; at 30,000, 382
+// are skipped and four fixed functions are left without a failing input
+// in the quick grid, which the full run still evaluates).
 func afterfixBudget() (inputs, steps int) {
 	if os.Getenv("OVERFACT_AFTERFIX_FULL") != "" {
 		return 400, 1_000_000
 	}
-	return 24, 60_000
+	return 24, 30_000
 }
 
 // TestAfterFixScenarios is the differential of the "After -fix"

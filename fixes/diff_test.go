@@ -9,8 +9,10 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"runtime"
 	"strconv"
 	"strings"
+	"sync"
 	"testing"
 
 	"github.com/overfact/overfact/analyzer"
@@ -446,15 +448,21 @@ func spaced(args string) string {
 type caseStats struct{ runs, broke int }
 
 func checkDiff(t *testing.T, out []byte, cases []diffCase) {
-	stats := make([]caseStats, len(cases))
+	type line struct {
+		f   []string
+		x   []float64
+		ref *big.Float
+	}
+	var lines []line
 	sc := bufio.NewScanner(bytes.NewReader(out))
 	for sc.Scan() {
 		f := strings.Split(sc.Text(), "|")
 		if len(f) != 4 {
 			t.Fatalf("bad line %q", sc.Text())
 		}
-		i, _ := strconv.Atoi(f[0])
-		c := cases[i]
+		if i, err := strconv.Atoi(f[0]); err != nil || i < 0 || i >= len(cases) {
+			t.Fatalf("bad case index in %q", sc.Text())
+		}
 		var x []float64
 		for _, a := range strings.Fields(f[1]) {
 			v, err := strconv.ParseFloat(a, 64)
@@ -463,7 +471,28 @@ func checkDiff(t *testing.T, out []byte, cases []diffCase) {
 			}
 			x = append(x, v)
 		}
-		ref := c.ref(x)
+		lines = append(lines, line{f: f, x: x})
+	}
+	// The math/big references are most of this test's time and
+	// independent of each other: they are computed on every processor.
+	var wg sync.WaitGroup
+	workers := runtime.GOMAXPROCS(0)
+	for w := 0; w < workers; w++ {
+		wg.Add(1)
+		go func(w int) {
+			defer wg.Done()
+			for j := w; j < len(lines); j += workers {
+				i, _ := strconv.Atoi(lines[j].f[0])
+				lines[j].ref = cases[i].ref(lines[j].x)
+			}
+		}(w)
+	}
+	wg.Wait()
+	stats := make([]caseStats, len(cases))
+	for _, l := range lines {
+		f, ref := l.f, l.ref
+		i, _ := strconv.Atoi(f[0])
+		c := cases[i]
 		stats[i].runs++
 		if !right(c.typ, f[2], ref, c.guard) {
 			stats[i].broke++
