@@ -272,14 +272,11 @@ func (r *rangeQueries) affineRange(lin linear, e ast.Expr) ranges.Interval {
 		if typeLimit(hi) {
 			hi = math.MaxInt64
 		}
-		a, b := mulSat(lo, t.K), mulSat(hi, t.K)
-		if t.K < 0 {
-			a, b = b, a
-		}
-		if a == math.MaxInt64 || b == math.MinInt64 {
+		term := ranges.Span(lo, hi).Mul(ranges.Point(t.K))
+		if term.Lo == math.MaxInt64 || term.Hi == math.MinInt64 {
 			return ranges.Top()
 		}
-		out = ranges.Interval{Lo: addSat(out.Lo, a), Hi: addSat(out.Hi, b)}
+		out = out.Add(term)
 	}
 	return out
 }

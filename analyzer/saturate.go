@@ -40,33 +40,6 @@ func addSat(x, d int64) int64 {
 	return x + d
 }
 
-// mulSat returns x·k, an unbounded x staying unbounded (its sign set by
-// k's) and a product past int64 clamped to the end it passes.
-//
-// Special cases are:
-//
-//	mulSat(math.MinInt64, k) = math.MinInt64 for k > 0, math.MaxInt64 for k < 0
-//	mulSat(math.MaxInt64, k) = math.MaxInt64 for k > 0, math.MinInt64 for k < 0
-func mulSat(x, k int64) int64 {
-	if k == 0 {
-		return 0
-	}
-	if x == math.MinInt64 || x == math.MaxInt64 {
-		if (x > 0) == (k > 0) {
-			return math.MaxInt64
-		}
-		return math.MinInt64
-	}
-	p := x * k
-	if p/k != x || (x == -1 && k == math.MinInt64) {
-		if (x > 0) == (k > 0) {
-			return math.MaxInt64
-		}
-		return math.MinInt64
-	}
-	return p
-}
-
 // lowLimit reports whether v, the low end of a range, is the least value
 // of a signed integer type (or below int32's), where the range says
 // nothing about how low the value goes.
