@@ -1,0 +1,73 @@
+// Package microstates counts the microstates of small statistical-mechanics
+// models (Einstein solids, ideal gases, Bose and Fermi occupations) and
+// evaluates their partition functions.
+package microstates
+
+import "math"
+
+// Multiplicity returns the number of ways to share q energy quanta among
+// n oscillators of an Einstein solid, C(q+n−1, q).
+func Multiplicity(n, q int) uint64 {
+	var w uint64 = 1
+	for i := 1; i <= q; i++ {
+		w = w * uint64(n-1+i) / uint64(i)
+	}
+	return w
+}
+
+// MultiplicityFloat is Multiplicity in floating point, for solids whose
+// counts exceed 64 bits.
+func MultiplicityFloat(n, q int) float64 {
+	w := 1.0
+	for i := 1; i <= q; i++ {
+		w = w * float64(n-1+i) / float64(i)
+	}
+	return w
+}
+
+// Entropy returns S/k_B = ln Ω of an Einstein solid.
+func Entropy(n, q int) float64 {
+	return math.Log(float64(Multiplicity(n, q)))
+}
+
+// EntropyLog returns S/k_B from log-gamma values.
+func EntropyLog(n, q int) float64 {
+	a, _ := math.Lgamma(float64(q + n))
+	b, _ := math.Lgamma(float64(q + 1))
+	c, _ := math.Lgamma(float64(n))
+	return a - b - c
+}
+
+func fact(n int) float64 {
+	f := 1.0
+	for ; n > 1; n-- {
+		f *= float64(n)
+	}
+	return f
+}
+
+func omega(n, q int) float64 {
+	return fact(q+n-1) / (fact(q) * fact(n-1))
+}
+
+// Pair is two Einstein solids in thermal contact sharing Q quanta.
+type Pair struct {
+	NA, NB int
+	Q      int
+}
+
+// Prob returns the probability that solid A holds qa of the quanta.
+func (p Pair) Prob(qa int) float64 {
+	return omega(p.NA, qa) * omega(p.NB, p.Q-qa) / omega(p.NA+p.NB, p.Q)
+}
+
+// MostProbable returns the macrostate qa of highest probability.
+func (p Pair) MostProbable() int {
+	best, arg := -1.0, 0
+	for qa := 0; qa <= p.Q; qa++ {
+		if pr := p.Prob(qa); pr > best {
+			best, arg = pr, qa
+		}
+	}
+	return arg
+}

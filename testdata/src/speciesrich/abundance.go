@@ -1,0 +1,69 @@
+package speciesrich
+
+import (
+	"math"
+	"math/big"
+)
+
+// NegBinAbundance returns the probability that a species is represented
+// by k individuals when abundances follow a negative binomial with
+// clumping parameter r and probability p.
+func NegBinAbundance(k int, r, p float64) float64 {
+	g := func(x float64) float64 { return math.Gamma(x) }
+	coef := g(float64(k)+r) / (g(r) * g(float64(k)+1))
+	return coef * math.Pow(p, r) * math.Pow(1-p, float64(k))
+}
+
+// QuadratFreq returns the expected number of quadrats, out of q, that
+// hold exactly k individuals when individuals fall at random with mean
+// density lambda per quadrat.
+func QuadratFreq(q int, lambda float64, k int) float64 {
+	pk := math.Pow(lambda, float64(k)) / fact(k) * math.Exp(-lambda)
+	return float64(q) * pk
+}
+
+// ExpectedQuadrats returns the expected number of quadrats holding 0, 1,
+// …, kmax individuals under random placement. Densities above 500 per
+// quadrat are outside the model's use and return nil.
+func ExpectedQuadrats(q int, lambda float64, kmax int) []float64 {
+	if lambda > 500 {
+		return nil
+	}
+	out := make([]float64, kmax+1)
+	term := math.Exp(-lambda)
+	for k := 0; k <= kmax; k++ {
+		if k > 0 {
+			term *= lambda / float64(k)
+		}
+		out[k] = float64(q) * term
+	}
+	return out
+}
+
+func factU(n int) uint64 {
+	var f uint64 = 1
+	for i := uint64(2); i <= uint64(n); i++ {
+		f *= i
+	}
+	return f
+}
+
+// Arrangements returns the number of distinct orders in which the
+// individuals of the sample could have been recorded, species being
+// indistinguishable within themselves.
+func (s Sample) Arrangements() uint64 {
+	w := factU(s.Total())
+	for _, c := range s.Counts {
+		w /= factU(c)
+	}
+	return w
+}
+
+// ArrangementsBig is Arrangements in arbitrary precision.
+func (s Sample) ArrangementsBig() *big.Int {
+	w := new(big.Int).MulRange(1, int64(s.Total()))
+	for _, c := range s.Counts {
+		w.Quo(w, new(big.Int).MulRange(1, int64(c)))
+	}
+	return w
+}
