@@ -40,6 +40,7 @@ var scenarios = []string{
 	"linebroaden", "sparecheck", "queuedesk", "spinstats", "puzzlebox", "exacttest",
 	"orbitals", "curveforge", "latticeprice", "outbreak", "fieldgene",
 	"annuity", "claimfreq", "bracketodds", "dspwindow", "repairshop",
+	"speciesrich", "coalesce", "microstates", "matchgoals", "bezierkit",
 }
 
 // logSpacePackages are the category packages beside the analyzer of the
@@ -54,9 +55,15 @@ func TestScenarios(t *testing.T) {
 	results := analysistest.Run(t, testdata(t), Analyzer, scenarios...)
 	results = append(results, analysistest.Run(t, analysistest.TestData(), Analyzer, logSpacePackages...)...)
 	var diags []analysis.Diagnostic
+	unrelated := make(map[string]bool)
 	for _, r := range results {
 		diags = append(diags, r.Diagnostics...)
-		checkRelated(t, r.Pass.Fset, r.Diagnostics)
+		checkRelated(t, r.Pass.Fset, r.Diagnostics, unrelated)
+	}
+	for k := range relatedOpen {
+		if !unrelated[k] {
+			t.Errorf("relatedOpen lists %s, which has no finding without its definition any more: remove it", k)
+		}
 	}
 	if len(diags) == 0 {
 		t.Fatal("no diagnostics at all")
@@ -275,13 +282,31 @@ func TestDocIsPackageComment(t *testing.T) {
 	}
 }
 
+// relatedOpen lists the findings of the fifth held-out set
+// (docs/blind5-labels.tsv) that name a binomial function's calls but not
+// its declaration, keyed by package directory, file and line. Like the
+// after-fix lists it may only shrink: TestScenarios fails when a listed
+// finding is gone or points at the declaration.
+var relatedOpen = map[string]string{
+	"speciesrich/sample.go:58": "divides by C(n, m) formed on its own: names choose(n-c, m), declared in binom.go, without a related position",
+	"bezierkit/elevate.go:17":  "divides by C(r + n, t) formed on its own: names gchoose(n, j), declared in the same file, without a related position",
+	"matchgoals/season.go:21":  "product of binomial coefficients binom(w+d+l, w) * binom(d+l, d): names binom without a related position",
+}
+
 // checkRelated: a finding about a value that comes from a call of a
-// factorial function points at that function's declaration.
-func checkRelated(t *testing.T, fset *token.FileSet, diags []analysis.Diagnostic) {
+// factorial function points at that function's declaration. The findings
+// listed in relatedOpen that have none are recorded in unrelated instead.
+func checkRelated(t *testing.T, fset *token.FileSet, diags []analysis.Diagnostic, unrelated map[string]bool) {
 	for _, d := range diags {
 		switch strings.TrimSuffix(d.Category, definiteSuffix) {
 		case catRatio, catCall, catLateConv:
 		default:
+			continue
+		}
+		pos := fset.Position(d.Pos)
+		key := filepath.Base(filepath.Dir(pos.Filename)) + "/" + filepath.Base(pos.Filename) + ":" + strconv.Itoa(pos.Line)
+		if _, open := relatedOpen[key]; open && len(d.Related) == 0 {
+			unrelated[key] = true
 			continue
 		}
 		if len(d.Related) != 1 {

@@ -1,13 +1,13 @@
 #!/usr/bin/env bash
 # heldout.sh scores overfact on the held-out scenario sets: each set's
 # five packages of testdata/src, written and labelled before any run
-# (docs/blind2-labels.tsv, docs/blind3-labels.tsv, docs/blind4-labels.tsv),
+# (docs/blind2-labels.tsv … docs/blind5-labels.tsv),
 # are copied into a throwaway module without their .golden files, the
 # command built from this tree runs on it (`overfact ./...`), and
 # scripts/heldout-score.py prints per set the BAD functions found
 # (recall), the SAFE and NEUTRAL functions with a finding, and each miss.
 #
-#   scripts/heldout.sh            # all three sets
+#   scripts/heldout.sh            # all four sets
 #   scripts/heldout.sh 4          # one set
 set -euo pipefail
 cd "$(dirname "$0")/.."
@@ -21,8 +21,9 @@ declare -A sets=(
 	[2]="exacttest puzzlebox queuedesk sparecheck spinstats"
 	[3]="orbitals curveforge latticeprice outbreak fieldgene"
 	[4]="annuity claimfreq bracketodds dspwindow repairshop"
+	[5]="speciesrich coalesce microstates matchgoals bezierkit"
 )
-for n in ${@:-2 3 4}; do
+for n in ${@:-2 3 4 5}; do
 	d=$tmp/set$n
 	mkdir -p "$d"
 	printf 'module heldout%s\n\ngo 1.22\n' "$n" >"$d/go.mod"

@@ -8,7 +8,7 @@ import "math"
 // Point is a point in the plane.
 type Point struct{ X, Y float64 }
 
-func factorial(n float64) float64 {
+func factorial(n float64) float64 { // want factorial:`factorial of parameter 0, breaks from 171`
 	f := 1.0
 	for x := 2.0; x <= n; x++ {
 		f *= x
@@ -17,9 +17,9 @@ func factorial(n float64) float64 {
 }
 
 // Bernstein returns the Bernstein basis polynomial B_{i,n}(t).
-func Bernstein(i, n int, t float64) float64 {
-	c := factorial(float64(n)) / (factorial(float64(i)) * factorial(float64(n-i)))
-	return c * math.Pow(t, float64(i)) * math.Pow(1-t, float64(n-i))
+func Bernstein(i, n int, t float64) float64 { // want Bernstein:`wrong for n ≥ 171 \(Bernstein, bezierkit/bernstein\.go:22\)` Bernstein:`value Γ\(p1 \+ 1\)·\(p2\)\^\(p0\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p1 \+ 1\)·\(-p2 \+ 1\)\^\(p0 - p1\)\), wrong once p1`
+	c := factorial(float64(n)) / (factorial(float64(i)) * factorial(float64(n-i))) // want `Bernstein computes C\(n, i\) in float64, which fits where factorial\(float64\(n\)\) already`
+	return c * math.Pow(t, float64(i)) * math.Pow(1-t, float64(n-i))               // want `ratio of factorials in float64: the numerator \(float64\(n\)\)! overflows to \+Inf for`
 }
 
 // Curve is a Bézier curve given by its control points.
@@ -32,7 +32,7 @@ func (c Curve) Eval(t float64) Point {
 	n := len(c.Ctrl) - 1
 	var p Point
 	for i, q := range c.Ctrl {
-		b := Bernstein(i, n, t)
+		b := Bernstein(i, n, t) // want `Eval builds its result from Bernstein\(i, n, t\), which is wrong from n = 171 \(reported at`
 		p.X += b * q.X
 		p.Y += b * q.Y
 	}

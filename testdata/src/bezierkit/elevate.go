@@ -3,7 +3,7 @@ package bezierkit
 import "math"
 
 func gchoose(n, k int) float64 {
-	return math.Gamma(float64(n+1)) / (math.Gamma(float64(k+1)) * math.Gamma(float64(n-k+1)))
+	return math.Gamma(float64(n+1)) / (math.Gamma(float64(k+1)) * math.Gamma(float64(n-k+1))) // want `ratio of math\.Gamma values in float64: math\.Gamma\(float64\(n \+ 1\)\) is \+Inf for n ≥ 171`
 }
 
 // ElevateBy returns the control points of the curve raised by r degrees
@@ -14,7 +14,7 @@ func (c Curve) ElevateBy(r int) Curve {
 	for i := range out {
 		lo, hi := max(0, i-r), min(n, i)
 		for j := lo; j <= hi; j++ {
-			w := gchoose(n, j) * gchoose(r, i-j) / gchoose(n+r, i)
+			w := gchoose(n, j) * gchoose(r, i-j) / gchoose(n+r, i) // want `divides by C\(r \+ n, t\) formed on its own in float64: it overflows to \+Inf for r \+ n ≥`
 			out[i].X += w * c.Ctrl[j].X
 			out[i].Y += w * c.Ctrl[j].Y
 		}
@@ -47,13 +47,13 @@ func (c Curve) ElevateByLog(r int) Curve {
 // laguerreScale returns Γ(n+α+1)/n!, the factor of the generalised
 // Gauss–Laguerre weights.
 func laguerreScale(n int, alpha float64) float64 {
-	return math.Gamma(float64(n)+alpha+1) / math.Gamma(float64(n)+1)
+	return math.Gamma(float64(n)+alpha+1) / math.Gamma(float64(n)+1) // want `ratio of math\.Gamma values in float64: math\.Gamma\(float64\(n\) \+ alpha \+ 1\) is \+Inf for`
 }
 
 // LaguerreWeight returns the Gauss–Laguerre weight of the node x for an
 // n-point rule, given L_{n+1}^{(α)}(x).
-func LaguerreWeight(n int, alpha, x, lnext float64) float64 {
-	return laguerreScale(n, alpha) * x / (float64((n+1)*(n+1)) * lnext * lnext)
+func LaguerreWeight(n int, alpha, x, lnext float64) float64 { // want LaguerreWeight:`value Γ\(p0 \+ p1 \+ 1\)·\(p2\)/\(Γ\(p0 \+ 2\)·\(p0 \+ 1\)·\(p3\)\^\(2\)\), wrong once p0 \+ p1 \+ 1 ≥` LaguerreWeight:`wrong for n ≥ 170\.624377 \(LaguerreWeight, bezierkit/elevate\.go:56\)`
+	return laguerreScale(n, alpha) * x / (float64((n+1)*(n+1)) * lnext * lnext) // want `LaguerreWeight computes Γ\(n \+ alpha \+ 1\)·\(x\)/\(Γ\(n \+ 2\)·\(n \+ 1\)·\(lnext\)\^\(2\)\) in float64,`
 }
 
 // Simpson integrates f over [a, b] with the composite Simpson rule on n

@@ -10,7 +10,7 @@ func stirlingTable(n int) [][]int64 {
 	t[0][0] = 1
 	for m := 1; m <= n; m++ {
 		for k := 1; k <= m; k++ {
-			t[m][k] = t[m-1][k-1] + int64(m-1)*t[m-1][k]
+			t[m][k] = t[m-1][k-1] + int64(m-1)*t[m-1][k] // want `table t is filled with the unsigned Stirling numbers of the first kind, c\(m, k\), by the`
 		}
 	}
 	return t

@@ -15,17 +15,17 @@ func EwensProb(a []int, theta float64) float64 {
 		n += (j + 1) * aj
 	}
 	num := 1.0
-	for i := 2; i <= n; i++ {
+	for i := 2; i <= n; i++ { // want `factorial of n in float64 overflows to \+Inf for n ≥ 171 \(170! ≈ 7\.26e306 is the largest`
 		num *= float64(i)
 	}
 	den := 1.0
-	for i := 0; i < n; i++ {
+	for i := 0; i < n; i++ { // want `rising factorial of n factors from theta in float64 overflows to \+Inf for n ≥ 171 at`
 		den *= theta + float64(i)
 	}
 	p := num / den
 	for j, aj := range a {
 		jj := float64(j + 1)
-		p *= math.Pow(theta/jj, float64(aj)) / math.Gamma(float64(aj+1))
+		p *= math.Pow(theta/jj, float64(aj)) / math.Gamma(float64(aj+1)) // want `math\.Gamma overflows: math\.Gamma\(float64\(aj \+ 1\)\) is \+Inf for aj ≥ 171 \(Γ\(x\) overflows`
 	}
 	return p
 }

@@ -5,16 +5,16 @@ package matchgoals
 
 import "math"
 
-func factorial(n int) int {
+func factorial(n int) int { // want factorial:`factorial of parameter 0, breaks from 21`
 	f := 1
-	for i := 2; i <= n; i++ {
+	for i := 2; i <= n; i++ { // want `factorial of n in int wraps for n ≥ 21 \(20! ≈ 2\.43e18 is the largest that fits\); n is not`
 		f *= i
 	}
 	return f
 }
 
 func poisson(k int, lambda float64) float64 {
-	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(factorial(k))
+	return math.Pow(lambda, float64(k)) * math.Exp(-lambda) / float64(factorial(k)) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in int: the divisor k! wraps for k ≥ 21 \(20! ≈`
 }
 
 // ScoreMatrix returns P(home scores i, away scores j) for i, j ≤ maxGoals.
@@ -23,7 +23,7 @@ func ScoreMatrix(home, away float64, maxGoals int) [][]float64 {
 	for i := range m {
 		m[i] = make([]float64, maxGoals+1)
 		for j := range m[i] {
-			m[i][j] = poisson(i, home) * poisson(j, away)
+			m[i][j] = poisson(i, home) * poisson(j, away) // want `ScoreMatrix builds its result from poisson\(i, home\), which is wrong from k = 21 \(reported`
 		}
 	}
 	return m

@@ -17,8 +17,8 @@ func NegBinAbundance(k int, r, p float64) float64 {
 // QuadratFreq returns the expected number of quadrats, out of q, that
 // hold exactly k individuals when individuals fall at random with mean
 // density lambda per quadrat.
-func QuadratFreq(q int, lambda float64, k int) float64 {
-	pk := math.Pow(lambda, float64(k)) / fact(k) * math.Exp(-lambda)
+func QuadratFreq(q int, lambda float64, k int) float64 { // want QuadratFreq:`value \(p0\)·\(p1\)\^\(p2\)·exp\(-p1\)/Γ\(p2 \+ 1\), wrong once p2 ≥ 171` QuadratFreq:`wrong for k ≥ 171 \(QuadratFreq, speciesrich/abundance\.go:21\)`
+	pk := math.Pow(lambda, float64(k)) / fact(k) * math.Exp(-lambda) // want `Poisson-style term lambda\^k·e\^\(−lambda\)/k! in float64: the divisor k! overflows to \+Inf`
 	return float64(q) * pk
 }
 
@@ -40,9 +40,9 @@ func ExpectedQuadrats(q int, lambda float64, kmax int) []float64 {
 	return out
 }
 
-func factU(n int) uint64 {
+func factU(n int) uint64 { // want factU:`factorial of parameter 0, breaks from 21`
 	var f uint64 = 1
-	for i := uint64(2); i <= uint64(n); i++ {
+	for i := uint64(2); i <= uint64(n); i++ { // want `factorial of uint64\(n\) in uint64 wraps for uint64\(n\) ≥ 21 \(20! ≈ 2\.43e18 is the largest`
 		f *= i
 	}
 	return f

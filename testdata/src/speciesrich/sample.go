@@ -47,7 +47,7 @@ func (s Sample) Chao1() float64 {
 
 // Rarefy returns Hurlbert's expected number of species in a random
 // subsample of m individuals drawn without replacement.
-func (s Sample) Rarefy(m int) float64 {
+func (s Sample) Rarefy(m int) float64 { // want Rarefy:`wrong for some s or some m \(Rarefy, speciesrich/sample\.go:58\)`
 	n := s.Total()
 	denom := choose(n, m)
 	e := 0.0
@@ -55,7 +55,7 @@ func (s Sample) Rarefy(m int) float64 {
 		if c == 0 {
 			continue
 		}
-		e += 1 - choose(n-c, m)/denom
+		e += 1 - choose(n-c, m)/denom // want `divides by C\(n, m\) formed on its own in float64: it overflows to \+Inf for n ≥ 1030 at m =`
 	}
 	return e
 }
