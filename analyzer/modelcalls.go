@@ -662,6 +662,20 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 	if alpha.Sign() <= 0 {
 		return 0, false
 	}
+	// Integers of at most 2^40, the usual case (the witness search asks
+	// this for every candidate point): ⌈(bad − β)/α⌉ in int64, exact,
+	// without the rationals below.
+	a, okA := smallWhole(alpha)
+	b, okB := smallWhole(beta)
+	c, okC := smallWhole(bad)
+	if okA && okB && okC {
+		num := c - b
+		q := num / a
+		if num%a != 0 && num > 0 {
+			q++
+		}
+		return q, true
+	}
 	x := new(big.Rat).Sub(bad, beta)
 	x.Quo(x, alpha)
 	q := new(big.Int).Quo(x.Num(), x.Denom())
@@ -672,6 +686,16 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 		return 0, false
 	}
 	return q.Int64(), true
+}
+
+// smallWhole returns r as an int64 when it is an integer of at most
+// 2^40 in size.
+func smallWhole(r *big.Rat) (int64, bool) {
+	if !r.IsInt() || !r.Num().IsInt64() {
+		return 0, false
+	}
+	v := r.Num().Int64()
+	return v, v >= -1<<40 && v <= 1<<40
 }
 
 // checkModelCalls reports, at each place where a function's whole value
