@@ -19,11 +19,62 @@ func src(e ast.Expr) string {
 	if e == nil {
 		return ""
 	}
+	if s, ok := plainSrc(e); ok {
+		return s
+	}
 	var b strings.Builder
 	if err := printer.Fprint(&b, emptyFset, e); err != nil {
 		return types.ExprString(e)
 	}
 	return b.String()
+}
+
+// plainSrc renders the expressions the printer shows exactly as
+// written, names, selections of names and calls of them on names
+// (n, s.n, f(n, k), pkg.F(x)), without the printer and the tab writer it
+// allocates for every expression: messages name such operands by the
+// thousand in a large package.
+func plainSrc(e ast.Expr) (string, bool) {
+	switch e := e.(type) {
+	case *ast.Ident:
+		return e.Name, true
+	case *ast.SelectorExpr:
+		if x, ok := e.X.(*ast.Ident); ok {
+			return x.Name + "." + e.Sel.Name, true
+		}
+	case *ast.CallExpr:
+		if e.Ellipsis.IsValid() {
+			return "", false
+		}
+		fun, ok := plainSrc(e.Fun)
+		if !ok {
+			return "", false
+		}
+		if _, isCall := e.Fun.(*ast.CallExpr); isCall {
+			return "", false
+		}
+		var b strings.Builder
+		b.WriteString(fun)
+		b.WriteByte('(')
+		for i, a := range e.Args {
+			switch a.(type) {
+			case *ast.Ident, *ast.SelectorExpr:
+			default:
+				return "", false
+			}
+			s, ok := plainSrc(a)
+			if !ok {
+				return "", false
+			}
+			if i > 0 {
+				b.WriteString(", ")
+			}
+			b.WriteString(s)
+		}
+		b.WriteByte(')')
+		return b.String(), true
+	}
+	return "", false
 }
 
 // emptyFset gives the printer no line information, so that an

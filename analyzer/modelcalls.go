@@ -15,6 +15,7 @@ import (
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/internal/assigned"
+	"github.com/overfact/overfact/internal/linform"
 )
 
 // callState is what the value model knows about the functions of the
@@ -661,6 +662,20 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 	if alpha.Sign() <= 0 {
 		return 0, false
 	}
+	// Integers of at most 2^40, the usual case (the witness search asks
+	// this for every candidate point): ⌈(bad − β)/α⌉ in int64, exact,
+	// without the rationals below.
+	a, okA := smallWhole(alpha)
+	b, okB := smallWhole(beta)
+	c, okC := smallWhole(bad)
+	if okA && okB && okC {
+		num := c - b
+		q := num / a
+		if num%a != 0 && num > 0 {
+			q++
+		}
+		return q, true
+	}
 	x := new(big.Rat).Sub(bad, beta)
 	x.Quo(x, alpha)
 	q := new(big.Int).Quo(x.Num(), x.Denom())
@@ -671,6 +686,16 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 		return 0, false
 	}
 	return q.Int64(), true
+}
+
+// smallWhole returns r as an int64 when it is an integer of at most
+// 2^40 in size.
+func smallWhole(r *big.Rat) (int64, bool) {
+	if !r.IsInt() || !r.Num().IsInt64() {
+		return 0, false
+	}
+	v := r.Num().Int64()
+	return v, v >= -1<<40 && v <= 1<<40
 }
 
 // checkModelCalls reports, at each place where a function's whole value
@@ -824,6 +849,10 @@ func (fc *fnCtx) checkCallRoot(res *vm.Result, root ast.Expr) {
 	}
 }
 
+// witnessHalf is the candidate ½ of a float variable in witness, never
+// modified.
+var witnessHalf = big.NewRat(1, 2)
+
 // witnessBudget caps the points the witness search tries for one weak
 // point.
 const witnessBudget = 4096
@@ -870,15 +899,18 @@ func (fc *fnCtx) witness(res *vm.Result, root ast.Expr, val *vm.Term, w weak, t 
 		// Small values, and values past the bad one, for variables
 		// that must exceed the one solved for (a population beside
 		// its part).
-		try := []*big.Rat{big.NewRat(1, 1), big.NewRat(2, 1), big.NewRat(0, 1), big.NewRat(3, 1), big.NewRat(10, 1)}
+		// The candidates are only read (the point's values are
+		// evaluated, never changed): shared constants where they are
+		// small, since the search runs for every weak point.
+		try := []*big.Rat{linform.SharedInt(1), linform.SharedInt(2), linform.SharedInt(0), linform.SharedInt(3), linform.SharedInt(10)}
 		if b := new(big.Int).Quo(w.bad.Num(), w.bad.Denom()); b.IsInt64() && b.Int64() < 1<<40 {
-			try = append(try, big.NewRat(2*b.Int64()+2, 1), big.NewRat(b.Int64()+1, 1))
+			try = append(try, linform.SharedInt(2*b.Int64()+2), linform.SharedInt(b.Int64()+1))
 		}
 		if symFloat(s) {
-			try = append(try, big.NewRat(1, 2))
+			try = append(try, witnessHalf)
 		}
 		if bounded(r) {
-			try = append(try, big.NewRat(r.Lo, 1), big.NewRat(r.Hi, 1))
+			try = append(try, linform.SharedInt(r.Lo), linform.SharedInt(r.Hi))
 		}
 		for _, x := range try {
 			if inRange(r, x) {
@@ -940,7 +972,7 @@ func (fc *fnCtx) tryWitness(point map[vm.Sym]*big.Rat, solve vm.Sym, r ranges.In
 	if !ok || first > 1<<40 {
 		return false
 	}
-	x := big.NewRat(first, 1)
+	x := new(big.Rat).SetInt64(first)
 	if !inRange(r, x) {
 		return false
 	}
@@ -975,10 +1007,10 @@ func positiveAt(t *vm.Term, point map[vm.Sym]*big.Rat) bool {
 }
 
 func inRange(r ranges.Interval, x *big.Rat) bool {
-	if r.Lo != math.MinInt64 && x.Cmp(big.NewRat(r.Lo, 1)) < 0 {
+	if r.Lo != math.MinInt64 && x.Cmp(linform.SharedInt(r.Lo)) < 0 {
 		return false
 	}
-	return r.Hi == math.MaxInt64 || x.Cmp(big.NewRat(r.Hi, 1)) <= 0
+	return r.Hi == math.MaxInt64 || x.Cmp(linform.SharedInt(r.Hi)) <= 0
 }
 
 // symFloat reports whether a variable has a float type.

@@ -205,3 +205,36 @@ func TestTableFactsProbe(t *testing.T) {
 		t.Errorf("SplitShare(515, 515, 515, 515) = %v, want NaN (the true share is 1)", v)
 	}
 }
+
+// TestFirstAtRatByDefinition checks firstAtRat, on integer operands (its
+// int64 path) and on fractions (its rational path), against its
+// definition evaluated with math/big: the result v satisfies
+// α·v + β ≥ bad and v − 1 does not.
+func TestFirstAtRatByDefinition(t *testing.T) {
+	vals := []*big.Rat{big.NewRat(0, 1), big.NewRat(1, 1), big.NewRat(-1, 1), big.NewRat(7, 1), big.NewRat(-7, 1),
+		big.NewRat(171, 1), big.NewRat(1<<40, 1), big.NewRat(-(1 << 40), 1), big.NewRat(1<<41, 1), big.NewRat(1, 2), big.NewRat(-5, 3)}
+	holds := func(alpha, beta, bad *big.Rat, v int64) bool {
+		x := new(big.Rat).Mul(alpha, new(big.Rat).SetInt64(v))
+		return x.Add(x, beta).Cmp(bad) >= 0
+	}
+	for _, alpha := range vals {
+		for _, beta := range vals {
+			for _, bad := range vals {
+				v, ok := firstAtRat(alpha, beta, bad)
+				if alpha.Sign() <= 0 {
+					if ok {
+						t.Errorf("firstAtRat(%v, %v, %v) = %d for α ≤ 0", alpha, beta, bad, v)
+					}
+					continue
+				}
+				if !ok {
+					t.Errorf("firstAtRat(%v, %v, %v) declined", alpha, beta, bad)
+					continue
+				}
+				if !holds(alpha, beta, bad, v) || holds(alpha, beta, bad, v-1) {
+					t.Errorf("firstAtRat(%v, %v, %v) = %d, not the first v with α·v + β ≥ bad", alpha, beta, bad, v)
+				}
+			}
+		}
+	}
+}

@@ -5,6 +5,7 @@ import (
 	"go/token"
 	"go/types"
 	"math/big"
+	"strconv"
 	"strings"
 
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
@@ -200,6 +201,11 @@ var placeholders = func() []vm.Sym {
 }()
 
 func parseRat(s string) (*big.Rat, bool) {
+	// Most numbers in facts are integers: read without SetString's
+	// reader and GCD, the same value.
+	if n, err := strconv.ParseInt(s, 10, 64); err == nil {
+		return new(big.Rat).SetInt64(n), true
+	}
 	r, ok := new(big.Rat).SetString(s)
 	return r, ok
 }

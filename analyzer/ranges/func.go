@@ -79,8 +79,6 @@ func Analyze(info *types.Info, fn ast.Node, opts Options) *Func {
 		root:   fn,
 		opts:   opts,
 		ids:    make(map[types.Object]int32),
-		exprs:  make(map[ast.Expr]Interval),
-		snaps:  make(map[ast.Node]*facts),
 		opaque: make(map[ast.Node]bool),
 		lits:   make(map[*ast.FuncLit]bool),
 	}
@@ -96,8 +94,10 @@ func Analyze(info *types.Info, fn ast.Node, opts Options) *Func {
 		return f
 	}
 	f.scan(f.body)
-	// Sized up front: a long function's maps would otherwise be rehashed
-	// as they grow, each time rereading every entry.
+	// Made here, sized up front, and not before (nothing writes them
+	// until the walk; a body-less function's stay nil, which reads as
+	// empty): a long function's maps would otherwise be rehashed as they
+	// grow, each time rereading every entry.
 	f.exprs = make(map[ast.Expr]Interval, f.size/2)
 	f.snaps = make(map[ast.Node]*facts, f.size/4)
 	s := state{live: true}

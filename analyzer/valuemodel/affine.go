@@ -108,7 +108,10 @@ type Affine form
 
 var ratDomain linform.Rat
 
-func rat(n int64) *big.Rat { return big.NewRat(n, 1) }
+// rat returns n as a new rational. SetInt64 rather than big.NewRat(n,
+// 1): NewRat reduces the fraction by a GCD of its operands, allocating
+// four integers for a denominator that is 1 anyway.
+func rat(n int64) *big.Rat { return new(big.Rat).SetInt64(n) }
 
 // shared returns n as a rational the caller must not modify.
 func shared(n int64) *big.Rat { return linform.SharedInt(n) }

@@ -1,9 +1,10 @@
 package valuemodel
 
 import (
+	"cmp"
 	"math"
 	"math/big"
-	"sort"
+	"slices"
 	"strings"
 )
 
@@ -89,13 +90,21 @@ func (t *Term) Mul(u *Term) *Term {
 	if t == nil || u == nil {
 		return nil
 	}
-	out := t.clone()
-	out.Coef = mulRat(out.Coef, u.Coef)
-	out.SqrtPi += u.SqrtPi
-	out.Gamma = append(out.Gamma, u.Gamma...)
-	out.Pows = append(out.Pows, u.Pows...)
-	out.Exp = out.Exp.Add(u.Exp)
+	// The factors of both, each list allocated once at its full length
+	// (a clone of t grown by u's would allocate twice).
+	out := &Term{Coef: mulRat(t.Coef, u.Coef), SqrtPi: t.SqrtPi + u.SqrtPi, Exp: t.Exp.Add(u.Exp)}
+	out.Gamma = concat(t.Gamma, u.Gamma)
+	out.Pows = concat(t.Pows, u.Pows)
 	return out.norm()
+}
+
+// concat returns a new slice holding a's elements then b's, nil when
+// both are empty (as appending them to a nil slice gives).
+func concat[E any](a, b []E) []E {
+	if len(a)+len(b) == 0 {
+		return nil
+	}
+	return append(append(make([]E, 0, len(a)+len(b)), a...), b...)
 }
 
 // Inv returns 1/t; nil for an unknown or zero term.
@@ -211,7 +220,9 @@ func (t *Term) norm() *Term {
 	if len(t.Gamma)+len(t.Pows) > maxFactors {
 		return nil
 	}
-	sort.SliceStable(t.Gamma, func(i, j int) bool { return t.Gamma[i].Pow > t.Gamma[j].Pow })
+	// By falling power, stably; slices' sort allocates nothing (sort's
+	// SliceStable did, for every term the model normalises).
+	slices.SortStableFunc(t.Gamma, func(a, b GammaPow) int { return cmp.Compare(b.Pow, a.Pow) })
 	return t
 }
 
@@ -301,14 +312,28 @@ func ratioOf(a, b Affine) (*big.Rat, bool) {
 
 func sameSign(a, b int64) bool { return a > 0 && b > 0 || a < 0 && b < 0 }
 
+// ratHalf is ½, never modified.
+var ratHalf = big.NewRat(1, 2)
+
 // duplicate applies Γ(z)·Γ(z+½) = 2^(1−2z)·√π·Γ(2z) to pairs of equal
 // powers.
 func (t *Term) duplicate() {
-	half := big.NewRat(1, 2)
+	if len(t.Gamma) < 2 {
+		return // no pair: most terms, and the rule is asked of every one
+	}
 	for i := 0; i < len(t.Gamma); i++ {
+		// Γ(z)'s partner argument z+½, made once per z and only read.
+		var above Affine
+		made := false
 		for j := 0; j < len(t.Gamma); j++ {
 			gi, gj := t.Gamma[i], t.Gamma[j]
-			if i == j || gi.Pow != gj.Pow || !gj.Arg.Equal(gi.Arg.Add(Const(half))) {
+			if i == j || gi.Pow != gj.Pow {
+				continue
+			}
+			if !made {
+				above, made = gi.Arg.Add(Affine{C: ratHalf}), true
+			}
+			if !gj.Arg.Equal(above) {
 				continue
 			}
 			z, p := gi.Arg, gi.Pow
@@ -410,7 +435,10 @@ func (t *Term) String() string {
 // folds constant powers into the coefficient; false when a power of a
 // non-positive constant does not fold.
 func (t *Term) normPows() bool {
-	var pows []Power
+	if len(t.Pows) == 0 {
+		return true
+	}
+	pows := make([]Power, 0, len(t.Pows)) // merging only shortens the list
 	for _, p := range t.Pows {
 		b, e := p.Base, p.Exp
 		switch {

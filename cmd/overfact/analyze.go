@@ -65,6 +65,7 @@ func runAnalysis(args []string) int {
 	if driver.IsTerminal(os.Stderr) {
 		opts.Progress = os.Stderr
 	}
+	defer paceCollector()()
 	return driver.Run(analyzer.Analyzer, patterns, opts)
 }
 

@@ -21,7 +21,9 @@ const parseMode = parser.AllErrors | parser.ParseComments | parser.SkipObjectRes
 // the limit the collector runs more often as the heap nears it instead.
 // A run whose live heap exceeds the limit runs the collector often, at
 // most about half of the CPU by the runtime's own bound; GOMEMLIMIT=off
-// restores the default pacing.
+// restores the default pacing. The command's standalone mode also raises
+// GOGC under this limit (cmd/overfact/collector.go), which the limit is
+// the ceiling of.
 const memoryLimit = 1280 << 20
 
 // limitMemory sets memoryLimit for the run unless the environment sets a

@@ -264,7 +264,7 @@ func SharedInt(n int64) *big.Rat {
 	if n >= -64 && n <= 64 {
 		return smallRats[n+64]
 	}
-	return big.NewRat(n, 1)
+	return new(big.Rat).SetInt64(n) // no GCD, which big.NewRat(n, 1) computes
 }
 
 // smallInt64 returns r as an int64 when it is an integer of at most
