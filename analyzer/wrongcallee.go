@@ -466,9 +466,10 @@ func numericResult(sig *types.Signature) bool {
 }
 
 // tableResult reports whether sig's first result is a slice or array of
-// integers, a table of counts its callers read entry by entry. Such a
-// function's fact stays in its package: MayCarryFacts, which decides
-// what the driver analyses of a dependency, looks for numeric results.
+// numbers, a table of counts or of probabilities its callers read entry
+// by entry. Such a function's fact stays in its package: MayCarryFacts,
+// which decides what the driver analyses of a dependency, looks for
+// numeric results.
 func tableResult(sig *types.Signature) bool {
 	if sig == nil || sig.Results().Len() == 0 || sig.Results().Len() > 2 {
 		return false
@@ -483,7 +484,7 @@ func tableResult(sig *types.Signature) bool {
 		return false
 	}
 	b, ok := elem.Underlying().(*types.Basic)
-	return ok && b.Info()&types.IsInteger != 0
+	return ok && b.Info()&types.IsNumeric != 0 && b.Info()&types.IsComplex == 0
 }
 
 // intResult reports whether fn's first result is an integer.
@@ -698,7 +699,7 @@ func (fc *fnCtx) reportWrongCall(fn *types.Func, call *ast.CallExpr, callee *typ
 		return // silenced by a directive: its callers are silent too
 	}
 	inputs := fc.carriedInputs(call, in, arg)
-	if len(inputs) == 0 || !numericResult(fc.signature()) {
+	if len(inputs) == 0 || !numericResult(fc.signature()) && !tableResult(fc.signature()) {
 		return
 	}
 	st := passStateOf(c, wrongPassKey)
@@ -782,6 +783,12 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 			// A field's or an element's store, out.X += v or p[n] = v,
 			// carries the value into out or p.
 			lhs, rhs := assignedPairs(n)
+			if len(rhs) == 1 && len(lhs) == 2 {
+				// p, err := s.Distribution(): the value is the first.
+				if _, ok := ast.Unparen(rhs[0]).(*ast.CallExpr); ok {
+					lhs = lhs[:1]
+				}
+			}
 			if len(lhs) != len(rhs) {
 				return true
 			}
@@ -802,9 +809,15 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 }
 
 // assignedPairs returns the left and right sides of an assignment or a
-// variable declaration, nil for any other node.
+// variable declaration, and the value of a range statement with the
+// collection it ranges over (an entry of a carried table carries it);
+// nil for any other node.
 func assignedPairs(n ast.Node) (lhs, rhs []ast.Expr) {
 	switch n := n.(type) {
+	case *ast.RangeStmt:
+		if n.Value != nil {
+			return []ast.Expr{n.Value}, []ast.Expr{&ast.IndexExpr{X: n.X}}
+		}
 	case *ast.AssignStmt:
 		return n.Lhs, n.Rhs
 	case *ast.ValueSpec:

@@ -57,8 +57,8 @@ func (s Shop) Distribution() ([]float64, error) {
 }
 
 // MeanDown is the expected number of machines out of service.
-func (s Shop) MeanDown() (float64, error) {
-	p, err := s.Distribution()
+func (s Shop) MeanDown() (float64, error) { // want MeanDown:`wrong for some s`
+	p, err := s.Distribution() // want `MeanDown builds its result from s\.Distribution\(\), which is wrong for some inputs \(through weight, reported at repairshop/interference\.go:36\)`
 	if err != nil {
 		return 0, err
 	}
