@@ -40,7 +40,7 @@ func (s Shop) weight(n int) float64 {
 
 // Distribution returns the stationary probabilities of 0..N machines
 // being down.
-func (s Shop) Distribution() ([]float64, error) {
+func (s Shop) Distribution() ([]float64, error) { // want Distribution:`wrong for some s`
 	if s.Mechanics < 1 {
 		return nil, ErrNoCrew
 	}
