@@ -1112,6 +1112,23 @@ func (fc *fnCtx) modelWorth() bool {
 	return open || lgamma && pows >= 2 || lgamma && fc.divides()
 }
 
+// assignedOutsideReflections is assignedOutside, where the statements
+// that move v to the other end of a symmetric range (k = n − k, which
+// leaves C(n, k) as it was) do not count either.
+func assignedOutsideReflections(info *types.Info, body *ast.BlockStmt, v types.Object, skip ast.Node, refl []vm.Reflection) bool {
+	return assigned.In(info, body, v, func(n ast.Node) bool {
+		if n == skip {
+			return true
+		}
+		for _, r := range refl {
+			if r.Sym.Obj == v && n == r.Stmt {
+				return true
+			}
+		}
+		return false
+	})
+}
+
 // fallingLoop reports an accumulator that ends as n!/(n−k)! of a loop
 // the matchers did not read (one counting in float64), the way they
 // report one counting in an integer type: the product grows with n and
@@ -1204,10 +1221,10 @@ func (fc *fnCtx) modelBinomialFunc(decl *ast.FuncDecl, res numType) *FactorialFa
 	var idx [2]int
 	for i, a := range f.Args {
 		v, ok := plainVar(a)
-		if !ok || v.Field != nil || v.Obj == nil {
+		if !ok || v.Field != nil || v.Obj == nil || v.Def != nil {
 			return nil
 		}
-		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutside(fc.c.pass.TypesInfo, decl.Body, v.Obj, loop.Stmt) {
+		if idx[i] = fc.c.paramIndex(decl, v.Obj); idx[i] < 0 || assignedOutsideReflections(fc.c.pass.TypesInfo, decl.Body, v.Obj, loop.Stmt, m.Reflections) {
 			return nil
 		}
 	}

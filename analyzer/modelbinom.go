@@ -68,6 +68,12 @@ func (mc *modelCtx) binomialPeak(a *vm.Acc, t numType) bool {
 	// the largest one so far and overflows only where it must, when
 	// the number of trips is at most n/2 (k ≤ n/2 for C(n, k)).
 	if cnt, ok := mc.countVar(); ok {
+		if r, moved := mc.res.Reflected(cnt); moved {
+			// k moved to the smaller half (k = n − k where k > n − k)
+			// stays there; one moved the other way is left unjudged,
+			// as before the model followed the move.
+			return r.Low
+		}
 		kr := fc.symRange(mc.res, cnt, l.Stmt)
 		if !kr.IsEmpty() && kr.Hi != math.MaxInt64 && r.Lo > 0 && r.Lo != math.MinInt64 && 2*kr.Hi <= r.Lo {
 			return true

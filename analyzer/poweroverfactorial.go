@@ -106,6 +106,7 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 		m = fc.loopPowerMatch(m, root, pow)
 	}
 	var msg, clause string
+	var way ast.Expr
 	definite := false
 	if !facSafe {
 		clause, definite = j.clause, j.definite
@@ -113,14 +114,14 @@ func (fc *fnCtx) checkPowOverFactorial(root ast.Expr, p *product) {
 			what, fac.t.typeName(), factorialText(fac), verb(fac.t), src(fac.arg), first, largestFits(fac.kind, fac.t))
 		if powText != "" {
 			msg += "; " + powText
-		} else {
-			msg += fc.powerFirst(pow, fac, first)
+		} else if first := fc.powerFirst(pow, fac, first); first != "" {
+			msg, way = msg+first, pow.arg
 		}
 	} else {
 		msg = fmt.Sprintf("%s in %s: %s", what, pow.t.typeName(), powText)
 	}
 	fc.report(finding{node: root, cat: catPowOverFac, definite: definite, msg: msg + clause,
-		related: fc.c.relatedDef(fac.def()), match: p.fix(m)})
+		related: fc.c.relatedDef(fac.def()), match: p.fix(m), floatWay: way})
 }
 
 // loopPowerMatch offers m, a power over a factorial or Poisson term
@@ -311,12 +312,15 @@ func (fc *fnCtx) checkPowOverFactorials(root ast.Expr, p *product) {
 	what := fmt.Sprintf("term with %s over %s", powerText(fc, pow), strings.Join(dens, "·"))
 	msg := fmt.Sprintf("%s in %s: %s %s for %s ≥ %d (%s), and the divisor with it, after which the term is 0 or NaN although its true value is finite",
 		what, worst.t.typeName(), factorialText(*worst), verb(worst.t), src(worst.arg), first, largestFits(worst.kind, worst.t))
+	var way ast.Expr
 	if pow.call != nil {
-		msg += fc.powerFirst(pow, *worst, first)
+		if first := fc.powerFirst(pow, *worst, first); first != "" {
+			msg, way = msg+first, pow.arg
+		}
 	}
 	m := fc.factorialChain(root, p.den)
 	fc.report(finding{node: root, cat: catPowOverFac, definite: wj.definite, msg: msg + wj.clause,
-		related: fc.c.relatedDef(worst.def()), match: p.fix(m)})
+		related: fc.c.relatedDef(worst.def()), match: p.fix(m), floatWay: way})
 }
 
 // factorialText names the factorial a divisor computes: n! or, for a

@@ -19,6 +19,11 @@ type finding struct {
 	msg      string
 	related  []analysis.RelatedInformation
 	match    *fixes.Match
+	// floatWay, when set, is a float expression through whose large
+	// magnitudes the value is wrong (the base of a power that overflows
+	// first): its float parameters are the function's ways in for
+	// WrongValueFact when no count is.
+	floatWay ast.Expr
 }
 
 // report emits f unless it lies in a generated file, is silenced by an

@@ -156,6 +156,9 @@ func (fc *fnCtx) noteWrongValue(f finding) {
 	if len(inputs) == 0 {
 		inputs = fc.unknownInputs(fc.paramDeps(f.node))
 	}
+	if len(inputs) == 0 && f.floatWay != nil {
+		inputs = fc.floatInputs(fc.paramDeps(f.floatWay))
+	}
 	if len(inputs) == 0 {
 		return // not reached through the parameters
 	}
@@ -314,6 +317,56 @@ func (fc *fnCtx) unknownInputs(deps map[types.Object]bool) []WrongInput {
 	return out
 }
 
+// floatInputs are the float parameters of deps with no threshold known,
+// for a function that is wrong through their large magnitudes alone
+// (finding.floatWay). A caller passes such a parameter a float whose
+// range is not known; judgeWrongArg takes one the caller compares
+// anywhere as bounded by it.
+func (fc *fnCtx) floatInputs(deps map[types.Object]bool) []WrongInput {
+	var out []WrongInput
+	for v := range deps {
+		i, ok := fc.paramIndex(v)
+		if t, num := fc.c.numOf(v.Type()); ok && i >= 0 && num && t.Float {
+			out = append(out, WrongInput{Param: i, Name: v.Name()})
+		}
+	}
+	sort.Slice(out, func(a, b int) bool { return out[a].Param < out[b].Param })
+	return out
+}
+
+// comparesAny reports whether the function compares a variable that e
+// reads, anywhere in its body.
+func (fc *fnCtx) comparesAny(e ast.Expr) bool {
+	info := fc.c.pass.TypesInfo
+	vars := make(map[types.Object]bool)
+	ast.Inspect(e, func(n ast.Node) bool {
+		if id, ok := n.(*ast.Ident); ok {
+			if v, ok := info.Uses[id].(*types.Var); ok {
+				vars[v] = true
+			}
+		}
+		return true
+	})
+	found := false
+	ast.Inspect(funcBody(fc.node), func(n ast.Node) bool {
+		b, ok := n.(*ast.BinaryExpr)
+		if !ok || found {
+			return !found
+		}
+		switch b.Op {
+		case token.EQL, token.NEQ, token.LSS, token.LEQ, token.GTR, token.GEQ:
+			ast.Inspect(b, func(m ast.Node) bool {
+				if id, ok := m.(*ast.Ident); ok && vars[info.Uses[id]] {
+					found = true
+				}
+				return !found
+			})
+		}
+		return !found
+	})
+	return found
+}
+
 // mergeInputs adds b to a: per parameter the lowest threshold, and no
 // threshold where one way in has none.
 func mergeInputs(a, b []WrongInput) []WrongInput {
@@ -466,24 +519,46 @@ func numericResult(sig *types.Signature) bool {
 }
 
 // tableResult reports whether sig's first result is a slice or array of
-// integers, a table of counts its callers read entry by entry. Such a
-// function's fact stays in its package: MayCarryFacts, which decides
-// what the driver analyses of a dependency, looks for numeric results.
+// numbers, a table of counts or of probabilities its callers read entry
+// by entry. Only a table of float64 or float32 carries its fact out of
+// the package (floatTable): MayCarryFacts, which decides what the driver
+// analyses of a dependency, looks for numeric results and those.
 func tableResult(sig *types.Signature) bool {
 	if sig == nil || sig.Results().Len() == 0 || sig.Results().Len() > 2 {
 		return false
 	}
-	var elem types.Type
-	switch t := sig.Results().At(0).Type().Underlying().(type) {
-	case *types.Slice:
-		elem = t.Elem()
-	case *types.Array:
-		elem = t.Elem()
-	default:
+	elem := elemOf(sig.Results().At(0).Type().Underlying())
+	if elem == nil {
 		return false
 	}
 	b, ok := elem.Underlying().(*types.Basic)
-	return ok && b.Info()&types.IsInteger != 0
+	return ok && b.Info()&types.IsNumeric != 0 && b.Info()&types.IsComplex == 0
+}
+
+// elemOf returns the element type of a slice or array type t, nil for
+// any other type.
+func elemOf(t types.Type) types.Type {
+	switch t := t.(type) {
+	case *types.Slice:
+		return t.Elem()
+	case *types.Array:
+		return t.Elem()
+	}
+	return nil
+}
+
+// floatTable reports whether sig's first result is a slice or array of
+// float64 or float32 themselves (no named type), a distribution: the
+// one kind of table whose fact leaves the package, as MayCarryFacts
+// predicts from the result's syntax.
+func floatTable(sig *types.Signature) bool {
+	if !tableResult(sig) {
+		return false
+	}
+	// The result's own type, not its underlying one: a named slice type
+	// is no []float64 written out.
+	b, ok := elemOf(sig.Results().At(0).Type()).(*types.Basic)
+	return ok && (b.Kind() == types.Float64 || b.Kind() == types.Float32)
 }
 
 // intResult reports whether fn's first result is an integer.
@@ -541,7 +616,7 @@ func (c *checker) checkWrongCallers() {
 	// Only another package's callers need the fact, and they can call
 	// only the exported functions.
 	for fn, f := range st.facts {
-		if sig, _ := fn.Type().(*types.Signature); fn.Exported() && numericResult(sig) {
+		if sig, _ := fn.Type().(*types.Signature); fn.Exported() && (numericResult(sig) || floatTable(sig)) {
 			c.pass.ExportObjectFact(fn, f)
 		}
 	}
@@ -647,8 +722,12 @@ func (fc *fnCtx) judgeWrongArg(arg ast.Expr, in WrongInput) (judgement, bool) {
 	}
 	r := ranges.Top()
 	inner := fc.stripConv(arg)
-	if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(inner)); ok && !t.Float {
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(inner))
+	if ok && !t.Float {
 		r = fc.rangeOf(inner)
+	}
+	if ok && t.Float && !in.Known && fc.comparesAny(arg) {
+		return judgement{}, false // no float ranges: a guard on it may bound it
 	}
 	if !in.Known {
 		if r.IsEmpty() || !typeLimit(r.Hi) {
@@ -698,7 +777,7 @@ func (fc *fnCtx) reportWrongCall(fn *types.Func, call *ast.CallExpr, callee *typ
 		return // silenced by a directive: its callers are silent too
 	}
 	inputs := fc.carriedInputs(call, in, arg)
-	if len(inputs) == 0 || !numericResult(fc.signature()) {
+	if len(inputs) == 0 || !numericResult(fc.signature()) && !tableResult(fc.signature()) {
 		return
 	}
 	st := passStateOf(c, wrongPassKey)
@@ -724,7 +803,15 @@ func (fc *fnCtx) carriedInputs(call *ast.CallExpr, in WrongInput, arg ast.Expr) 
 			}
 		}
 	}
-	return fc.unknownInputs(fc.paramDeps(arg))
+	if out := fc.unknownInputs(fc.paramDeps(arg)); len(out) > 0 {
+		return out
+	}
+	if t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(fc.stripConv(arg))); ok && t.Float && !in.Known {
+		// A float way in stays one: the caller is wrong through the
+		// float parameters the argument reads.
+		return fc.floatInputs(fc.paramDeps(arg))
+	}
+	return nil
 }
 
 // resultFlow answers whether a value reaches a function's result: the
@@ -782,6 +869,12 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 			// A field's or an element's store, out.X += v or p[n] = v,
 			// carries the value into out or p.
 			lhs, rhs := assignedPairs(n)
+			if len(rhs) == 1 && len(lhs) == 2 {
+				// p, err := s.Distribution(): the value is the first.
+				if _, ok := ast.Unparen(rhs[0]).(*ast.CallExpr); ok {
+					lhs = lhs[:1]
+				}
+			}
 			if len(lhs) != len(rhs) {
 				return true
 			}
@@ -802,9 +895,15 @@ func (f *resultFlow) carriers(call *ast.CallExpr) map[types.Object]bool {
 }
 
 // assignedPairs returns the left and right sides of an assignment or a
-// variable declaration, nil for any other node.
+// variable declaration, and the value of a range statement with the
+// collection it ranges over (an entry of a carried table carries it);
+// nil for any other node.
 func assignedPairs(n ast.Node) (lhs, rhs []ast.Expr) {
 	switch n := n.(type) {
+	case *ast.RangeStmt:
+		if n.Value != nil {
+			return []ast.Expr{n.Value}, []ast.Expr{&ast.IndexExpr{X: n.X}}
+		}
 	case *ast.AssignStmt:
 		return n.Lhs, n.Rhs
 	case *ast.ValueSpec:

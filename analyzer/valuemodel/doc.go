@@ -35,6 +35,13 @@
 // sum the body adds to. Anything else is unknown (a nil *Term), which
 // can only lose a finding, never invent one.
 //
+// A variable moved to the other end of a symmetric range, the reduction
+// if k > n−k { k = n − k } or k = min(k, n−k) that binomial helpers make
+// before their loop, is read after the move as a fresh variable k′ that
+// holds k or n − k (Result.Reflections, with whether it ends in the
+// smaller half); a value the move does not change, C(n, k′) = C(n, k),
+// is then given in k itself.
+//
 // The work per function is capped (Options.MaxNodes); past the cap the
 // evaluation stops and Result.Capped says so.
 package valuemodel

@@ -52,12 +52,40 @@ type Result struct {
 	Logs map[ast.Expr]*Term
 	// Exprs holds, for each variable met, an expression that reads it.
 	Exprs map[Sym]ast.Expr
+	// Reflections holds each variable the code moved to the other end
+	// of a symmetric range (k = n − k under a condition, or
+	// k = min(k, n−k)); the values that do not change under that move
+	// are given in the variable as it was (Values, Logs), the others
+	// keep the fresh variable Reflection.Sym.
+	Reflections []Reflection
 	// Capped reports that the evaluation stopped at Options.MaxNodes,
 	// or failed (Failed).
 	Capped bool
 	// Failed, when not empty, is the internal failure that stopped the
 	// evaluation: the result is empty and Capped is set.
 	Failed string
+}
+
+// Reflection is a variable that holds either Of or Total − Of after
+// Stmt, read as the fresh variable Sym: the code's reduction of C(n, k)
+// to the smaller of k and n − k, whichever its condition picks.
+type Reflection struct {
+	Stmt      ast.Stmt
+	Sym       Sym
+	Of, Total Affine
+	// Low reports that the move leaves the variable at most Total/2
+	// (k = n − k where k > n − k, or k = min(k, n−k)).
+	Low bool
+}
+
+// Reflected returns the reflection whose fresh variable is s.
+func (r *Result) Reflected(s Sym) (Reflection, bool) {
+	for _, x := range r.Reflections {
+		if x.Sym == s {
+			return x, true
+		}
+	}
+	return Reflection{}, false
 }
 
 // Loop summarises a counting loop: trip t runs from 0 to Count−1 and
@@ -177,7 +205,209 @@ func Evaluate(info *types.Info, fn ast.Node, opts Options) (res *Result) {
 	e := &evaluator{info: info, opts: opts, res: res, opaque: make(map[types.Object]bool), fields: make(map[types.Object]bool), once: make(map[types.Object]bool), sets: make(map[types.Object]int), makeLen: make(map[types.Object]*value)}
 	e.scanOpaque(body)
 	e.block(body.List, env{})
+	e.unreflect()
 	return res
+}
+
+// reflection recognises st as the move of a variable to the other end
+// of a symmetric range, whatever the condition that picks it:
+//
+//	if k > n-k { k = n - k }
+//	k = min(k, n-k)
+//
+// and returns the variable and its value before st and the total n;
+// after st the variable holds k or n − k.
+func (e *evaluator) reflection(st ast.Stmt, en env) (obj types.Object, of, total Affine, low, ok bool) {
+	obj, of, total, ok = e.reflectionOf(st, en)
+	if !ok {
+		return
+	}
+	switch s := st.(type) {
+	case *ast.IfStmt:
+		low = e.movesDown(s.Cond, of, total, en)
+	case *ast.AssignStmt:
+		call := ast.Unparen(s.Rhs[0]).(*ast.CallExpr)
+		low = e.isBuiltin(call, "min")
+	}
+	return
+}
+
+// movesDown reports whether cond holds exactly where of > total/2 (or
+// of ≥ total/2): a comparison whose sides differ by a positive multiple
+// of 2·of − total (k > n−k, 2*k > n, k > n/2) under > or ≥, or by a
+// negative one under < or ≤. Moving k to n − k there leaves it at most
+// total/2.
+func (e *evaluator) movesDown(cond ast.Expr, of, total Affine, en env) bool {
+	b, ok := ast.Unparen(cond).(*ast.BinaryExpr)
+	if !ok {
+		return false
+	}
+	x, okX := affineOf(e.peek(b.X, en))
+	y, okY := affineOf(e.peek(b.Y, en))
+	if !okX || !okY {
+		return false
+	}
+	d, w := x.Sub(y), of.Scale(big.NewRat(2, 1)).Sub(total)
+	syms := w.Syms()
+	if len(syms) == 0 || w.Coef(syms[0]).Sign() == 0 {
+		return false
+	}
+	r := new(big.Rat).Quo(d.Coef(syms[0]), w.Coef(syms[0]))
+	if r.Sign() == 0 || !d.Equal(w.Scale(r)) {
+		return false
+	}
+	switch b.Op {
+	case token.GTR, token.GEQ:
+		return r.Sign() > 0
+	case token.LSS, token.LEQ:
+		return r.Sign() < 0
+	}
+	return false
+}
+
+// reflectionOf matches the move itself, whatever picks it.
+func (e *evaluator) reflectionOf(st ast.Stmt, en env) (types.Object, Affine, Affine, bool) {
+	var as *ast.AssignStmt
+	switch s := st.(type) {
+	case *ast.IfStmt:
+		if s.Init != nil || s.Else != nil || len(s.Body.List) != 1 {
+			return nil, Affine{}, Affine{}, false
+		}
+		as, _ = s.Body.List[0].(*ast.AssignStmt)
+	case *ast.AssignStmt:
+		as = s
+	}
+	if as == nil || as.Tok != token.ASSIGN || len(as.Lhs) != 1 || len(as.Rhs) != 1 {
+		return nil, Affine{}, Affine{}, false
+	}
+	obj := e.objOf(as.Lhs[0])
+	if obj == nil || e.opaque[obj] || !e.numeric(as.Lhs[0]) {
+		return nil, Affine{}, Affine{}, false
+	}
+	of, ok := affineOf(e.peek(as.Lhs[0], en))
+	if !ok {
+		return nil, Affine{}, Affine{}, false
+	}
+	rhs := ast.Unparen(as.Rhs[0])
+	if _, isIf := st.(*ast.IfStmt); !isIf {
+		// k = min(k, n-k) or max(k, n-k): the other argument is the
+		// reflection, in either order.
+		call, ok := rhs.(*ast.CallExpr)
+		if !ok || len(call.Args) != 2 || !e.isBuiltin(call, "min", "max") {
+			return nil, Affine{}, Affine{}, false
+		}
+		a, okA := affineOf(e.peek(call.Args[0], en))
+		b, okB := affineOf(e.peek(call.Args[1], en))
+		switch {
+		case okA && okB && a.Equal(of):
+			rhs = call.Args[1]
+		case okA && okB && b.Equal(of):
+			rhs = call.Args[0]
+		default:
+			return nil, Affine{}, Affine{}, false
+		}
+	}
+	other, ok := affineOf(e.peek(rhs, en))
+	if !ok {
+		return nil, Affine{}, Affine{}, false
+	}
+	total := other.Add(of)
+	if total.IsConst() {
+		return nil, Affine{}, Affine{}, false // k = −k is a sign, not a range's other end
+	}
+	for _, v := range of.Syms() {
+		if total.Has(v) {
+			return nil, Affine{}, Affine{}, false // not n − k of the same k
+		}
+	}
+	return obj, of, total, true
+}
+
+// peek evaluates x in a copy of en without recording its value.
+func (e *evaluator) peek(x ast.Expr, en env) *value {
+	saved := e.res.Values
+	savedLogs := e.res.Logs
+	e.res.Values, e.res.Logs = make(map[ast.Expr]*Term), make(map[ast.Expr]*Term)
+	v := e.evalRaw(x, en)
+	e.res.Values, e.res.Logs = saved, savedLogs
+	return v
+}
+
+// isBuiltin reports whether call calls one of the builtins named.
+func (e *evaluator) isBuiltin(call *ast.CallExpr, names ...string) bool {
+	id, ok := ast.Unparen(call.Fun).(*ast.Ident)
+	if !ok {
+		return false
+	}
+	b, ok := e.info.Uses[id].(*types.Builtin)
+	if !ok {
+		return false
+	}
+	for _, n := range names {
+		if b.Name() == n {
+			return true
+		}
+	}
+	return false
+}
+
+// reflect reads obj after st as a fresh variable that holds of or
+// total − of, and records it.
+func (e *evaluator) reflect(st ast.Stmt, obj types.Object, of, total Affine, low bool, en env) {
+	s := Sym{Obj: obj, Def: st}
+	en[obj] = &value{t: FromAffine(Var(s))}
+	e.res.Reflections = append(e.res.Reflections, Reflection{Stmt: st, Sym: s, Of: of, Total: total, Low: low})
+}
+
+// unreflect gives each value that is the same whichever end a reflected
+// variable holds (C(n, k') for k' ∈ {k, n − k}) in the variable as it
+// was before the reflection.
+func (e *evaluator) unreflect() {
+	if len(e.res.Reflections) == 0 {
+		return
+	}
+	for i := len(e.res.Reflections) - 1; i >= 0; i-- {
+		r := e.res.Reflections[i]
+		other := r.Total.Sub(r.Of)
+		for _, m := range []map[ast.Expr]*Term{e.res.Values, e.res.Logs} {
+			for x, t := range m {
+				if !termHas(t, r.Sym) {
+					continue
+				}
+				if a, b := t.Subst(r.Sym, r.Of), t.Subst(r.Sym, other); sameTerm(a, b) {
+					m[x] = a
+				}
+			}
+		}
+	}
+}
+
+// sameTerm reports whether a and b are one value: their quotient is the
+// constant 1 (the factors of a product in any order).
+func sameTerm(a, b *Term) bool {
+	if a == nil || b == nil {
+		return false
+	}
+	c, ok := a.Div(b).IsConst()
+	return ok && c.Cmp(ratOne) == 0
+}
+
+// termHas reports whether t reads s.
+func termHas(t *Term, s Sym) bool {
+	if t.Exp.Has(s) {
+		return true
+	}
+	for _, g := range t.Gamma {
+		if g.Arg.Has(s) {
+			return true
+		}
+	}
+	for _, p := range t.Pows {
+		if p.Base.Has(s) || p.Exp.Has(s) {
+			return true
+		}
+	}
+	return false
 }
 
 // env maps each local to its current value; a missing entry is the
@@ -368,9 +598,13 @@ func (e *evaluator) stmt(st ast.Stmt, en env) {
 			e.stmt(s.Init, en)
 		}
 		e.eval(s.Cond, en)
+		obj, of, total, low, refl := e.reflection(s, en)
 		e.branch([]ast.Stmt{s.Body}, en)
 		if s.Else != nil {
 			e.branch([]ast.Stmt{s.Else}, en)
+		}
+		if refl && e.loops == 0 {
+			e.reflect(s, obj, of, total, low, en)
 		}
 	default:
 		// switch, select, go, defer, goto …: walk for the values inside,
@@ -436,6 +670,13 @@ func (e *evaluator) forgetAssigned(list []ast.Stmt, en env) {
 
 // assign evaluates an assignment and updates en.
 func (e *evaluator) assign(s *ast.AssignStmt, en env) {
+	if obj, of, total, low, ok := e.reflection(s, en); ok && e.loops == 0 {
+		for _, r := range s.Rhs {
+			e.eval(r, en)
+		}
+		e.reflect(s, obj, of, total, low, en)
+		return
+	}
 	if len(s.Lhs) == 2 && len(s.Rhs) == 1 {
 		// lg, sign := math.Lgamma(x)
 		if call, ok := ast.Unparen(s.Rhs[0]).(*ast.CallExpr); ok && e.isMath(call, "Lgamma") && len(call.Args) == 1 {

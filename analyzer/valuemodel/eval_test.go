@@ -401,3 +401,98 @@ func TestLogInsideLoop(t *testing.T) {
 		t.Errorf("exp(a·ln x − x) = %v, want x^a·e^(−x)", got)
 	}
 }
+
+// A variable moved to the other end of a symmetric range, k ↦ n − k,
+// leaves C(n, k) = C(n, n − k) as it was (the symmetry of Pascal's
+// triangle, common practice): the returned value is read in the
+// parameter k itself whatever the condition, and a value that the move
+// changes keeps the fresh variable.
+func TestReflection(t *testing.T) {
+	tests := []struct {
+		name, src, want string
+		param           bool // the value reads the parameter k, not the moved one
+	}{
+		{"condition", `func f(n, k int) float64 {
+	if k > n-k {
+		k = n - k
+	}
+	c := 1.0
+	for i := 1; i <= k; i++ {
+		c *= float64(n-k+i) / float64(i)
+	}
+	return c
+}`, "C(n, k)", true},
+		{"half", `func f(n, k int) float64 {
+	if 2*k > n {
+		k = n - k
+	}
+	c := 1.0
+	for i := 0; i < k; i++ {
+		c = c * float64(n-i) / float64(i+1)
+	}
+	return c
+}`, "C(n, k)", true},
+		{"min", `func f(n, k int) float64 {
+	k = min(k, n-k)
+	c := 1.0
+	for i := 0; i < k; i++ {
+		c = c * float64(n-i) / float64(i+1)
+	}
+	return c
+}`, "C(n, k)", true},
+		{"up", `func f(n, k float64) float64 {
+	if k < n-k {
+		k = n - k
+	}
+	c := 1.0
+	for i := 1.0; i <= k; i++ {
+		c *= (n - k + i) / i
+	}
+	return c
+}`, "C(n, k)", true},
+		{"falling changes", `func f(n, k int) float64 {
+	if k > n-k {
+		k = n - k
+	}
+	c := 1.0
+	for i := 0; i < k; i++ {
+		c *= float64(n-i)
+	}
+	return c
+}`, "n!/(n - k)!", false},
+		{"off by one", `func f(n, k int) float64 {
+	if k > n-k {
+		k = n - k - 1
+	}
+	c := 1.0
+	for i := 1; i <= k; i++ {
+		c *= float64(n-k+i) / float64(i)
+	}
+	return c
+}`, "C(n, k)", false},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			info, fd := load(t, tc.src, "f")
+			res := Evaluate(info, fd, Options{})
+			v := returned(res, fd)
+			f := Recognise(v)
+			if got := f.String(); got != tc.want {
+				t.Fatalf("got %s (value %v), want %s", got, v, tc.want)
+			}
+			moved := false
+			for _, a := range f.Args {
+				for _, s := range a.Syms() {
+					moved = moved || s.Def != nil
+				}
+			}
+			if moved == tc.param {
+				t.Errorf("value %v reads the moved variable: %v, want %v", v, moved, !tc.param)
+			}
+			// Every move above but the last takes k to the smaller half.
+			if len(res.Reflections) != 1 || res.Reflections[0].Low != (tc.name != "off by one" && tc.name != "up") {
+				t.Errorf("reflections %+v", res.Reflections)
+			}
+		})
+	}
+}

@@ -70,7 +70,7 @@ type Cohort struct {
 }
 
 // choose is C(n, k) as a float64, built one factor at a time.
-func choose(n, k int) float64 {
+func choose(n, k int) float64 { // want choose:"binomial of parameter 0, breaks from 1030"
 	if k < 0 || k > n {
 		return 0
 	}
@@ -86,8 +86,8 @@ func choose(n, k int) float64 {
 
 // ProbDeaths is the binomial probability that exactly d of the cohort
 // die within the year.
-func (c *Cohort) ProbDeaths(d int) float64 {
-	return choose(c.Size, d) * math.Pow(c.Q, float64(d)) * math.Pow(1-c.Q, float64(c.Size-d))
+func (c *Cohort) ProbDeaths(d int) float64 { // want ProbDeaths:"wrong for some c"
+	return choose(c.Size, d) * math.Pow(c.Q, float64(d)) * math.Pow(1-c.Q, float64(c.Size-d)) // want `binomial probability C\(c.Size, d\)·c.Q\^d·\(1−c.Q\)\^\(c.Size−d\) in float64: choose\(c.Size, …\) breaks for c.Size ≥ 1030 although the probability itself is at most 1`
 }
 
 // ProbDeathsLog is ProbDeaths computed through logarithms.

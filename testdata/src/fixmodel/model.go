@@ -128,8 +128,10 @@ func Folded(n, k int) float64 { // want Folded:`binomial of parameter 0, breaks 
 }
 
 // Mirrored takes the shorter side first, as C(n, k) = C(n, n−k) allows:
-// k no longer holds its entry value, and the loop is left as it is.
-func Mirrored(n, k int) float64 {
+// k then holds k or n − k, and the loop computes C(n, k) either way; its
+// product r·(n−k+d), formed before the division, passes float64 from
+// n = 1021 at k = n/2.
+func Mirrored(n, k int) float64 { // want Mirrored:`binomial of parameter 0, breaks from 1021`
 	if n < 0 || k < 0 || k > n {
 		return 0
 	}
@@ -137,7 +139,7 @@ func Mirrored(n, k int) float64 {
 		k = n - k
 	}
 	r := 1.0
-	for d := 1; d <= k; d++ {
+	for d := 1; d <= k; d++ { // want `multiplicative binomial loop computes C\(n, k\) in float64: the product r\*\(float64\(n - k \+ d\)\) overflows to \+Inf before the division for n ≥ 1021 at k = n/2`
 		r = r * float64(n-k+d) / float64(d)
 	}
 	return r

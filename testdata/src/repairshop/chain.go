@@ -53,7 +53,7 @@ func (c BirthDeath) StationaryLog() []float64 {
 
 // MMInfinity returns the first n+1 stationary probabilities of an
 // M/M/inf repair pool at offered load a, e^-a a^k / k!.
-func MMInfinity(n int, a float64) []float64 {
+func MMInfinity(n int, a float64) []float64 { // want MMInfinity:`wrong for some n`
 	p := make([]float64, n+1)
 	pw, kf := 1.0, 1.0
 	for k := 0; k <= n; k++ {

@@ -40,7 +40,7 @@ func (s Shop) weight(n int) float64 {
 
 // Distribution returns the stationary probabilities of 0..N machines
 // being down.
-func (s Shop) Distribution() ([]float64, error) {
+func (s Shop) Distribution() ([]float64, error) { // want Distribution:`wrong for some s`
 	if s.Mechanics < 1 {
 		return nil, ErrNoCrew
 	}
@@ -57,8 +57,8 @@ func (s Shop) Distribution() ([]float64, error) {
 }
 
 // MeanDown is the expected number of machines out of service.
-func (s Shop) MeanDown() (float64, error) {
-	p, err := s.Distribution()
+func (s Shop) MeanDown() (float64, error) { // want MeanDown:`wrong for some s`
+	p, err := s.Distribution() // want `MeanDown builds its result from s\.Distribution\(\), which is wrong for some inputs \(through weight, reported at repairshop/interference\.go:36\)`
 	if err != nil {
 		return 0, err
 	}

@@ -7,6 +7,7 @@ import (
 	"example.com/loadfacts/gammaw"
 	"example.com/loadfacts/ledger"
 	"example.com/loadfacts/plain"
+	"example.com/loadfacts/shares"
 	"example.com/loadfacts/stats"
 )
 
@@ -22,4 +23,14 @@ func Plan(name string, size int) []float64 {
 		float64(plain.Search([]int{1, 2, 3}, size)),
 		ledger.Scaled(2, size),
 	}
+}
+
+// MeanSplit is the expected number of crates at the first dock, n/2,
+// summed from the shares of another package.
+func MeanSplit(n int) float64 {
+	m := 0.0
+	for j, v := range shares.Split(n) {
+		m += float64(j) * v
+	}
+	return m
 }
