@@ -162,9 +162,6 @@ func (fc *fnCtx) productOrRootOf(e ast.Expr) ast.Expr {
 func (fc *fnCtx) loopGuard(m *fixes.Match, al *accLoop, t numType, param ast.Expr, first int64) {
 	id, ok := ast.Unparen(param).(*ast.Ident)
 	sig := fc.signature()
-	if !ok && sig != nil && !t.Float {
-		id, first, ok = fc.scaledParam(sig, param, first)
-	}
 	if t.Float || !ok || sig == nil || first <= 0 || first == math.MaxInt64 || !isParam(sig, fc.c.objOf(id)) || !fc.productReturned(al) {
 		return
 	}
@@ -178,71 +175,6 @@ func (fc *fnCtx) loopGuard(m *fixes.Match, al *accLoop, t numType, param ast.Exp
 			m.Shape, m.EntryGuard = fixes.ShapeFactorial, true
 		}
 	}
-}
-
-// scaledParam reads the loop's top as c·p + d of a parameter p of a
-// signed integer type, c > 0 (2*n for the double factorial (2n−1)!!,
-// the loop i < 2*n), and returns p with the first value of p at which
-// the top reaches first, ⌈(first − d)/c⌉. Where 2*n wraps, the exact
-// count 2n is past first too. Such a guard is offered only for a
-// function nothing in the package calls or takes as a value: a caller
-// that divides the wrapped value, n!/(2·(n−2)!), may still be right
-// where the guard would make it panic, and no rewrite of such a caller
-// waits for the guard.
-func (fc *fnCtx) scaledParam(sig *types.Signature, top ast.Expr, first int64) (*ast.Ident, int64, bool) {
-	d, ok := fc.node.(*ast.FuncDecl)
-	if !ok || fc.c.usedInPackage(fc.c.pass.TypesInfo.Defs[d.Name]) {
-		return nil, 0, false
-	}
-	var p *ast.Ident
-	ast.Inspect(top, func(n ast.Node) bool {
-		if id, ok := n.(*ast.Ident); ok && p == nil && isParam(sig, fc.c.objOf(id)) {
-			p = id
-		}
-		return p == nil
-	})
-	if p == nil || hasConversion(fc.c.pass.TypesInfo, top) {
-		return nil, 0, false
-	}
-	if b, ok := fc.c.objOf(p).Type().Underlying().(*types.Basic); !ok || b.Info()&types.IsInteger == 0 || b.Info()&types.IsUnsigned != 0 {
-		return nil, 0, false
-	}
-	l, ok := fc.linear(top)
-	if !ok || len(l.Terms) != 1 {
-		return nil, 0, false
-	}
-	c := l.coefOf(fc.c.objOf(p))
-	if c <= 0 || l.C > first {
-		return nil, 0, false
-	}
-	return p, (first - l.C + c - 1) / c, true
-}
-
-// hasConversion reports whether e converts a value anywhere.
-func hasConversion(info *types.Info, e ast.Expr) bool {
-	found := false
-	ast.Inspect(e, func(n ast.Node) bool {
-		if call, ok := n.(*ast.CallExpr); ok {
-			if tv, ok := info.Types[call.Fun]; ok && tv.IsType() {
-				found = true
-			}
-		}
-		return !found
-	})
-	return found
-}
-
-// usedInPackage reports whether obj is used anywhere in the package.
-func (c *checker) usedInPackage(obj types.Object) bool {
-	if obj == nil {
-		return true
-	}
-	for _, u := range c.pass.TypesInfo.Uses {
-		if u == obj {
-			return true
-		}
-	}
-	return false
 }
 
 // productReturned reports whether every return that can follow the loop

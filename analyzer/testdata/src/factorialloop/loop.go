@@ -263,30 +263,3 @@ func SpanAbove(lo, hi int64) int64 {
 	}
 	return p
 }
-
-// Pairings is the number of ways to pair 2n players, (2n−1)!!, the
-// product of the odd numbers below 2n: its loop's top is 2n, and
-// nothing in the package calls it, so the guard before the loop tests
-// n ≥ 18 (33!! ≈ 6.3e18 fits uint64, 35!! ≈ 2.2e20 does not; OEIS
-// A001147, from memory).
-func Pairings(n int) uint64 { // want Pairings:`wrong for some n`
-	r := uint64(1)
-	for i := 1; i < 2*n; i += 2 { // want `double factorial of 2 \* n-1 in uint64 wraps for 2 \* n ≥ 35`
-		r *= uint64(i)
-	}
-	return r
-}
-
-// Brackets is the same product, but BracketsOdd reads it: a product of
-// odd numbers stays odd when it wraps, so BracketsOdd is right for every
-// n, and a guard in Brackets would make it panic. Brackets gets none.
-func Brackets(n int) uint64 { // want Brackets:`wrong for some n`
-	r := uint64(1)
-	for i := 1; i < 2*n; i += 2 { // want `double factorial of 2 \* n-1 in uint64 wraps for 2 \* n ≥ 35`
-		r *= uint64(i)
-	}
-	return r
-}
-
-// BracketsOdd reports whether the number of pairings is odd.
-func BracketsOdd(n int) bool { return Brackets(n)%2 == 1 }
