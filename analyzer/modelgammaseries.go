@@ -10,7 +10,6 @@ import (
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
-	"github.com/overfact/overfact/fixes"
 )
 
 // The series of the lower incomplete gamma function,
@@ -103,24 +102,10 @@ func gammaSeriesTerm(t *vm.Term, iter vm.Sym) (vm.Affine, vm.Affine, bool) {
 
 // expOfNegated reports whether e is, or holds as a factor or in a
 // quotient's numerator, math.Exp of an argument with the term −x:
-// math.Exp(-x), math.Exp(a*math.Log(x) - x), math.Exp(-x + …); or the
-// helper's Product chain of such a factor, lgamma.ExpProduct(-x), as an
-// earlier fix of the same read writes it (a Gamma value beside it,
-// lgamma.PowProduct(x, s).Mul(lgamma.ExpProduct(-x)).Quo(…)).
+// math.Exp(-x), math.Exp(a*math.Log(x) - x), math.Exp(-x + …).
 func (fc *fnCtx) expOfNegated(e ast.Expr, x types.Object) bool {
 	switch e := ast.Unparen(e).(type) {
 	case *ast.CallExpr:
-		if name, recv, ok := fc.c.helperCall(e); ok {
-			switch {
-			case recv == nil:
-				return name == "ExpProduct" && len(e.Args) == 1 && fc.negatedTerm(e.Args[0], x, false)
-			case name == "Mul" && len(e.Args) == 1:
-				return fc.expOfNegated(recv, x) || fc.expOfNegated(e.Args[0], x)
-			case name == "Quo" || name == "MulFloat" || name == "QuoFloat":
-				return fc.expOfNegated(recv, x)
-			}
-			return false
-		}
 		return fc.c.isMathFunc(e, "Exp") && len(e.Args) == 1 && fc.negatedTerm(e.Args[0], x, false)
 	case *ast.BinaryExpr:
 		switch e.Op {
@@ -171,21 +156,4 @@ func (fc *fnCtx) comparedBefore(x types.Object, loop ast.Stmt) bool {
 		return !found
 	})
 	return found
-}
-
-// helperCall returns the name of the helper module's function or
-// Product method that call calls, and for a method its receiver.
-func (c *checker) helperCall(call *ast.CallExpr) (string, ast.Expr, bool) {
-	fn := c.calleeOf(call)
-	if fn == nil || fn.Pkg() == nil || fn.Pkg().Path() != fixes.HelperPath {
-		return "", nil, false
-	}
-	if fn.Type().(*types.Signature).Recv() == nil {
-		return fn.Name(), nil, true
-	}
-	sel, ok := ast.Unparen(call.Fun).(*ast.SelectorExpr)
-	if !ok {
-		return "", nil, false
-	}
-	return fn.Name(), sel.X, true
 }

@@ -246,14 +246,6 @@ func (fc *fnCtx) scaledRead(res *vm.Result, loop ast.Stmt, s *vm.SumAcc, scale f
 		if _, ok := n.(*ast.FuncLit); ok {
 			return false
 		}
-		if call, ok := n.(*ast.CallExpr); ok && call.Pos() > loop.End() && len(call.Args) == 1 && isSum(call.Args[0]) {
-			// p.MulFloat(sum) of a helper Product p that an earlier
-			// fix of the read wrote: the sum is a factor of p's chain.
-			if name, recv, ok := c.helperCall(call); ok && recv != nil && name == "MulFloat" && scale(recv) {
-				found = call
-				return false
-			}
-		}
 		b, ok := n.(*ast.BinaryExpr)
 		if !ok || b.Pos() < loop.End() {
 			return true

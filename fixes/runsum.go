@@ -124,30 +124,10 @@ func buildRunSum(b *builder) error {
 // over the running terms (Erlang C's last / (sum + last)), as num's
 // chain over name.Add(x).Product(): the same float64 addition and
 // division, each carried in log space.
-// A read that an earlier fix made a helper Product chain already,
-// p.MulFloat(sum) (math.Gamma beside the sum, taken as GammaProduct),
-// takes the sum as p.Mul(name.Product()).
 func (ls *logSum) scaledRead(node ast.Expr, name string) (string, error) {
 	b, lp, sum := ls.b, ls.lp, ls.sum
 	if node.Pos() < ls.decl.End() {
 		return "", errors.New("the sum is read before it is declared")
-	}
-	if call, ok := ast.Unparen(node).(*ast.CallExpr); ok {
-		// p.MulFloat(sum), p a helper Product chain an earlier fix
-		// wrote: the sum joins the chain as its Product.
-		sel, ok := call.Fun.(*ast.SelectorExpr)
-		if !ok || sel.Sel.Name != "MulFloat" || len(call.Args) != 1 || !isHelperProduct(b.pass.TypesInfo.TypeOf(sel.X)) {
-			return "", fmt.Errorf("the read of the sum is not a product the fixer can carry: %s", b.text(node))
-		}
-		if id, ok := ast.Unparen(call.Args[0]).(*ast.Ident); !ok || b.pass.TypesInfo.Uses[id] != sum {
-			return "", fmt.Errorf("MulFloat does not take the sum itself: %s", b.text(node))
-		}
-		for v := range lp.set {
-			if b.mentionsObj(sel.X, v) {
-				return "", fmt.Errorf("the read of the sum reads the running term %s too", v.Name())
-			}
-		}
-		return b.copyText(sel.X) + ".Mul(" + name + ".Product())", nil
 	}
 	if q, ok := ast.Unparen(node).(*ast.BinaryExpr); ok && q.Op == token.QUO {
 		if add, ok := ast.Unparen(q.Y).(*ast.BinaryExpr); ok && add.Op == token.ADD {
@@ -248,10 +228,4 @@ func (ls *logSum) compares(body *ast.BlockStmt, name string) {
 		lp.skip[x] = true
 		return false
 	})
-}
-
-// isHelperProduct reports whether t is the helper module's Product.
-func isHelperProduct(t types.Type) bool {
-	n, ok := t.(*types.Named)
-	return ok && n.Obj().Name() == "Product" && n.Obj().Pkg() != nil && n.Obj().Pkg().Path() == HelperPath
 }
