@@ -39,6 +39,9 @@ import (
 // C(n, k) on each trip, read after the loop as a scaled sum or a ratio.
 func (fc *fnCtx) modelRunningSum(res *vm.Result) {
 	for _, l := range res.Loops {
+		if l.Counter != nil && !fc.c.reportedAs(l.Stmt.Pos(), catPowOverFac) {
+			fc.gammaSeriesSums(res, l)
+		}
 		// A loop of a constant number of trips sums a truncated
 		// series for small arguments: precision first, it is not judged.
 		// A loop reported already for a running factorial inside the
@@ -52,7 +55,7 @@ func (fc *fnCtx) modelRunningSum(res *vm.Result) {
 			if !ok || !t.Float || t.Num.Bits != 64 || fc.c.reportedWithin(s.Stmt) {
 				continue
 			}
-			scaled := fc.scaledRead(res, l.Stmt, s)
+			scaled := fc.scaledRead(res, l.Stmt, s, fc.scaleFactor)
 			if scaled == nil || fc.checksNonFinite(scaled) {
 				continue
 			}
@@ -228,10 +231,11 @@ func (fc *fnCtx) affineRange(res *vm.Result, a vm.Affine, at ast.Node) ranges.In
 }
 
 // scaledRead returns the expression after loop, in the statements that
-// follow it, that reads the sum s as a factor of a product with
-// math.Exp or math.Pow, or in the denominator of a quotient (alone or
-// plus other terms); nil if there is none.
-func (fc *fnCtx) scaledRead(res *vm.Result, loop ast.Stmt, s *vm.SumAcc) ast.Expr {
+// follow it, that reads the sum s as a factor of a product with a factor
+// scale accepts (math.Exp or math.Pow, scaleFactor), or in the
+// denominator of a quotient (alone or plus other terms); nil if there is
+// none.
+func (fc *fnCtx) scaledRead(res *vm.Result, loop ast.Stmt, s *vm.SumAcc, scale func(ast.Expr) bool) ast.Expr {
 	c := fc.c
 	isSum := func(e ast.Expr) bool { return c.objOf(ast.Unparen(e)) == s.Obj }
 	var found ast.Expr
@@ -248,8 +252,8 @@ func (fc *fnCtx) scaledRead(res *vm.Result, loop ast.Stmt, s *vm.SumAcc) ast.Exp
 		}
 		switch b.Op {
 		case token.MUL:
-			if hasFactor(b.X, isSum) && fc.scaleFactor(b.Y) || hasFactor(b.Y, isSum) && fc.scaleFactor(b.X) ||
-				hasFactor(b, isSum) && (fc.scaleFactor(b.X) || fc.scaleFactor(b.Y)) {
+			if hasFactor(b.X, isSum) && scale(b.Y) || hasFactor(b.Y, isSum) && scale(b.X) ||
+				hasFactor(b, isSum) && (scale(b.X) || scale(b.Y)) {
 				found = b
 			}
 		case token.QUO:

@@ -60,6 +60,8 @@ func (p Product) Quo(q Product) Product                    { panic("") }
 func (p Product) MulFloat(x float64) Product               { panic("") }
 func (p Product) QuoFloat(x float64) Product               { panic("") }
 func (p Product) Neg() Product                             { panic("") }
+func (p Product) Abs() Product                             { panic("") }
+func (p Product) Less(q Product) bool                      { panic("") }
 func (p Product) Sqrt() Product                            { panic("") }
 func (p Product) Float64() float64                         { panic("") }
 func ChooseProduct(v, n, k float64) Product                { panic("") }

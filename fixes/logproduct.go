@@ -235,6 +235,9 @@ type logProducts struct {
 	names map[types.Object]string
 	// skip are statements the rewrite leaves to its caller.
 	skip map[ast.Node]bool
+	// abs: math.Abs of a chainable expression is chainable too
+	// (Product.Abs), for the sides of a comparison (runsum.go).
+	abs bool
 }
 
 // isFloat64Kind reports whether t is float64 or a named type over it
@@ -404,6 +407,9 @@ func (lp *logProducts) chainableIn(e ast.Expr, calls bool) bool {
 		if in := lp.sqrtOf(x); in != nil {
 			return lp.chainableIn(in, calls)
 		}
+		if in := lp.absOf(x); in != nil {
+			return lp.chainableIn(in, calls)
+		}
 		return calls && lp.isLeaf(x)
 	case *ast.ParenExpr:
 		return lp.chainableIn(x.X, calls)
@@ -440,6 +446,15 @@ func (lp *logProducts) factorialCall(e ast.Expr) *FactorialCall {
 // value where the product under the root leaves float64.
 func (lp *logProducts) sqrtOf(c *ast.CallExpr) ast.Expr {
 	if _, fn := lp.b.callOf(c); len(c.Args) == 1 && isMath(fn, "Sqrt") {
+		return c.Args[0]
+	}
+	return nil
+}
+
+// absOf returns x of a call math.Abs(x) where lp takes such calls
+// (abs), or nil.
+func (lp *logProducts) absOf(c *ast.CallExpr) ast.Expr {
+	if _, fn := lp.b.callOf(c); lp.abs && len(c.Args) == 1 && isMath(fn, "Abs") {
 		return c.Args[0]
 	}
 	return nil
@@ -554,6 +569,9 @@ func (lp *logProducts) chain(e ast.Expr) string {
 		}
 		if in := lp.sqrtOf(x); in != nil {
 			return lp.product(in) + ".Sqrt()"
+		}
+		if in := lp.absOf(x); in != nil {
+			return lp.product(in) + ".Abs()"
 		}
 		return lp.leaf(x)
 	case *ast.ParenExpr:

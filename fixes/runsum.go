@@ -107,6 +107,7 @@ func buildRunSum(b *builder) error {
 		lp.skip[st] = true
 	}
 	lp.skip[node] = true
+	ls.compares(body, name)
 	lp.rewrite(body)
 	if lp.err != nil {
 		return lp.err
@@ -178,5 +179,53 @@ func (ls *logSum) dropSumCopies(body *ast.BlockStmt) {
 			}
 		}
 		return true
+	})
+}
+
+// compares rewrites each comparison < or > after the sum's declaration
+// that reads a running term or the sum, math.Abs(del) <
+// math.Abs(sum)*1e-16 (the exit of a series once its terms no longer
+// change the sum), as Product.Less of its two sides, the sum read as
+// its Product:
+//
+//	del.Abs().Less(sumLog.Product().Abs().MulFloat(1e-16))
+//
+// Less is the float64 comparison wherever both sides are normal
+// float64s the code formed, and the comparison of the values carried
+// beside them elsewhere: where the float64 sum is +Inf while the sum is
+// not, del < +Inf would stop the series on its first trip past float64,
+// far from its end. A side that is no product over the carried values
+// must not read one; the comparison is then left to the rewrite, which
+// reads each value back as a float64.
+func (ls *logSum) compares(body *ast.BlockStmt, name string) {
+	b, lp := ls.b, ls.lp
+	set := map[types.Object]bool{ls.sum: true}
+	for v := range lp.set {
+		set[v] = true
+	}
+	cmp := &logProducts{b: b, set: set, pkg: lp.pkg, abs: true, names: map[types.Object]string{ls.sum: name + ".Product()"}}
+	reads := func(e ast.Expr) bool {
+		for v := range set {
+			if b.mentionsObj(e, v) {
+				return true
+			}
+		}
+		return false
+	}
+	ast.Inspect(body, func(n ast.Node) bool {
+		x, ok := n.(*ast.BinaryExpr)
+		if !ok || x.Op != token.LSS && x.Op != token.GTR || x.Pos() < ls.decl.End() {
+			return true
+		}
+		l, r := ast.Unparen(x.X), ast.Unparen(x.Y)
+		if !cmp.chainable(l) && !cmp.chainable(r) || !cmp.chainable(l) && reads(l) || !cmp.chainable(r) && reads(r) {
+			return true
+		}
+		if x.Op == token.GTR {
+			l, r = r, l
+		}
+		b.replace(x.Pos(), x.End(), cmp.product(l)+".Less("+cmp.product(r)+")")
+		lp.skip[x] = true
+		return false
 	})
 }

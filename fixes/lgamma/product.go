@@ -224,6 +224,76 @@ func (p Product) Neg() Product {
 	return p
 }
 
+// Abs returns |p|: math.Abs of its float64 value, as math.Abs(p) forms
+// it, and the same logarithm.
+func (p Product) Abs() Product {
+	p.v, p.neg = math.Abs(p.v), false
+	return p
+}
+
+// Less reports whether p < q: where both products' float64 values are
+// normal float64s, or zeros, that the steps forming them kept, the
+// comparison p < q of those values, bit for bit the code's own (a NaN
+// the product is included); elsewhere, where a value is ±Inf, 0 or
+// subnormal as float64 while the product is not, or both products
+// left float64 together (+Inf < +Inf is false, as 1e400 < 1e420 is
+// not), the comparison of the products by their signs and logarithms.
+// Code that stops a series once its term no longer changes the sum,
+// term < sum*1e-16, so stops where the sum is past float64 as the
+// exact arithmetic does, and not on the first trip that makes the
+// float64 sum +Inf.
+//
+// Special cases are:
+//
+//	Less is false where either product is NaN
+//	Less(p, q) is false for p and q both ±0, and for p and q both +Inf (−Inf) products that the logarithms do not tell apart
+func (p Product) Less(q Product) bool {
+	if p.plain() && q.plain() || !p.lost && !q.lost && (math.IsNaN(p.v) || math.IsNaN(q.v)) {
+		return p.v < q.v
+	}
+	if p.nan || q.nan || math.IsNaN(p.l.hi) || math.IsNaN(q.l.hi) || math.IsNaN(p.v) && !p.lost || math.IsNaN(q.v) && !q.lost {
+		return false
+	}
+	ps, qs := p.signum(), q.signum()
+	if ps != qs {
+		return ps < qs
+	}
+	c := cmpDD(p.l, q.l)
+	if ps < 0 {
+		return c > 0
+	}
+	return ps > 0 && c < 0
+}
+
+// plain reports whether the product's float64 value is the value the
+// code forms and a normal float64 or a zero the product is.
+func (p Product) plain() bool {
+	a := math.Abs(p.v)
+	return !p.lost && (a >= 0x1p-1022 && a <= math.MaxFloat64 || a == 0 && math.IsInf(p.l.hi, -1))
+}
+
+// signum is −1, 0 or +1 as the product is negative, zero or positive.
+func (p Product) signum() int {
+	switch {
+	case math.IsInf(p.l.hi, -1) || p.zero:
+		return 0
+	case p.neg:
+		return -1
+	}
+	return 1
+}
+
+// cmpDD compares two double-double numbers: −1, 0 or +1.
+func cmpDD(a, b dd) int {
+	switch {
+	case a.hi < b.hi || a.hi == b.hi && a.lo < b.lo:
+		return -1
+	case a.hi > b.hi || a.hi == b.hi && a.lo > b.lo:
+		return 1
+	}
+	return 0
+}
+
 // Float64 returns the value of the product.
 //
 // Where every step that formed the product's float64 value stayed a

@@ -293,3 +293,66 @@ func TestCountProductZero(t *testing.T) {
 		t.Errorf("CountProduct(6)·0.5³ = %g; want %g (exact)", got, want)
 	}
 }
+
+// TestProductLess checks Less, and Abs before it, against the exact
+// comparison of the products in math/big: the float64 factors are
+// multiplied exactly (big.Float at 2000 bits holds a product of a few
+// 53-bit factors without rounding), so the reference is the comparison
+// the code means, not the one float64 arithmetic makes.
+func TestProductLess(t *testing.T) {
+	inf := math.Inf(1)
+	cases := []struct {
+		name       string
+		p, q       []float64 // the factors, multiplied left to right
+		absP, absQ bool
+	}{
+		{"normal values", []float64{2}, []float64{3}, false, false},
+		{"normal values, reversed", []float64{3}, []float64{2}, false, false},
+		{"equal values", []float64{0.1, 3}, []float64{0.1, 3}, false, false},
+		{"a term below a sum past float64 scaled back", []float64{1e305}, []float64{1e300, 1e20, 1e-16}, false, false},
+		{"a term past float64 below a scaled sum past it", []float64{1e300, 1e10}, []float64{1e300, 1e30, 1e-16}, false, false},
+		{"both past float64", []float64{1e300, 1e300}, []float64{1e300, 1e305}, false, false},
+		{"both past float64, reversed", []float64{1e300, 1e305}, []float64{1e300, 1e300}, false, false},
+		{"below the normal range", []float64{1e-200, 1e-200}, []float64{1e-200, 1e-190}, false, false},
+		{"zero below a product that underflows", []float64{0}, []float64{1e-200, 1e-200}, false, false},
+		{"negative past float64 below one", []float64{-1e300, 1e300}, []float64{1}, false, false},
+		{"one below a negative past float64", []float64{1}, []float64{-1e300, 1e300}, false, false},
+		{"two negatives past float64", []float64{-1e300, 1e305}, []float64{-1e300, 1e300}, false, false},
+		{"the magnitude of a negative past float64", []float64{-1e300, 1e300}, []float64{1e300, 1e305}, true, false},
+		{"a negative term's magnitude against a sum", []float64{-1e305}, []float64{1e300, 1e20, 1e-16}, true, true},
+		{"infinite factors", []float64{inf}, []float64{1e300, 1e300}, false, false},
+	}
+	product := func(fs []float64, abs bool) (Product, *big.Float) {
+		p, x := ProductOf(fs[0]), new(big.Float).SetPrec(2000)
+		x.SetFloat64(fs[0])
+		for _, f := range fs[1:] {
+			p = p.MulFloat(f)
+			x.Mul(x, new(big.Float).SetPrec(2000).SetFloat64(f))
+		}
+		if abs {
+			p = p.Abs()
+			x.Abs(x)
+		}
+		return p, x
+	}
+	for _, c := range cases {
+		p, x := product(c.p, c.absP)
+		q, y := product(c.q, c.absQ)
+		if got, want := p.Less(q), x.Cmp(y) < 0; got != want {
+			t.Errorf("%s: Less = %v, math/big says %v", c.name, got, want)
+		}
+	}
+	// Where both values are normal float64s, Less is the float64
+	// comparison itself; a NaN compares false either way.
+	nan := ProductOf(math.NaN())
+	if nan.Less(ProductOf(1)) || ProductOf(1).Less(nan) {
+		t.Error("a NaN product compares less")
+	}
+	r := rand.New(rand.NewSource(11))
+	for i := 0; i < 1000; i++ {
+		a, b := (r.Float64()*2-1)*1e10, (r.Float64()*2-1)*1e10
+		if got := ProductOf(a).Less(ProductOf(b)); got != (a < b) {
+			t.Fatalf("ProductOf(%v).Less(ProductOf(%v)) = %v, want %v", a, b, got, a < b)
+		}
+	}
+}

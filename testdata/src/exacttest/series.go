@@ -24,7 +24,7 @@ func BesselI0(x float64) float64 {
 func LowerGammaP(s, x float64) float64 {
 	sum, term := 0.0, 1.0
 	for k := 1; k < 1000; k++ {
-		sum += term
+		sum += term // want `sum sums the running term Γ\(s \+ 1\)·\(x\)\^\(t\)/Γ\(s \+ t \+ 1\) on trip t \(from 0\), a power over a rising factorial of s \+ 1 \(the incomplete gamma series\), in float64, and math\.Pow\(x, s\) \* math\.Exp\(-x\) / math\.Gamma\(s\+1\) \* sum reads the sum after the loop`
 		term *= x / (s + float64(k))
 		if term < 1e-16*sum {
 			break

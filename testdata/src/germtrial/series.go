@@ -25,7 +25,7 @@ func regGammaP(s, x float64) float64 {
 	for n := 0; n < 1000; n++ {
 		ap++
 		del *= x / ap
-		sum += del
+		sum += del // want `sum sums the running term Γ\(s\)·\(x\)\^\(t \+ 1\)/Γ\(s \+ t \+ 2\) on trip t \(from 0\), a power over a rising factorial of s \(the incomplete gamma series\), in float64, and sum \* math\.Exp\(-x\+s\*math\.Log\(x\)-lg\) reads the sum after the loop through a factor e\^\(−x\)`
 		if math.Abs(del) < math.Abs(sum)*1e-16 {
 			break
 		}
