@@ -688,6 +688,7 @@ func firstAtRat(alpha, beta, bad *big.Rat) (int64, bool) {
 // float factorials, ratios of factorial and Γ helpers.
 func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
 	fc.checkBinomialPartsLoops()
+	fc.checkDividedOut()
 	var res *vm.Result
 	for _, root := range fc.callRoots() {
 		fc.checkLoopMultinomial(root)
