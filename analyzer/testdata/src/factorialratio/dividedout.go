@@ -14,11 +14,11 @@ func factorial64(n int) uint64 { // want factorial64:`factorial of parameter 0, 
 	return f
 }
 
-// Tray is a seed tray's counts per cultivar.
-type Tray struct{ Counts []int }
+// SeedTray is a seed tray's counts per cultivar.
+type SeedTray struct{ Counts []int }
 
 // Size is the number of seeds in the tray.
-func (t Tray) Size() int {
+func (t SeedTray) Size() int {
 	n := 0
 	for _, c := range t.Counts {
 		n += c
@@ -27,7 +27,7 @@ func (t Tray) Size() int {
 }
 
 // Orders counts the distinct sowing orders of the tray.
-func (t Tray) Orders() uint64 { // want Orders:`wrong for`
+func (t SeedTray) Orders() uint64 { // want Orders:`wrong for`
 	w := factorial64(t.Size())
 	for _, c := range t.Counts { // want `Orders divides w = factorial64\(t\.Size\(\)\) by factorials over a loop in uint64: the quotient fits where they cancel most of it, but factorial64\(t\.Size\(\)\) already wraps from t\.Size\(\) = 21; t\.Size\(\) is not bounded here`
 		w /= factorial64(c)
