@@ -288,9 +288,7 @@ func TestDocIsPackageComment(t *testing.T) {
 // after-fix lists it may only shrink: TestScenarios fails when a listed
 // finding is gone or points at the declaration.
 var relatedOpen = map[string]string{
-	"speciesrich/sample.go:58": "divides by C(n, m) formed on its own: names choose(n-c, m), declared in binom.go, without a related position",
-	"bezierkit/elevate.go:17":  "divides by C(r + n, t) formed on its own: names gchoose(n, j), declared in the same file, without a related position",
-	"matchgoals/season.go:21":  "product of binomial coefficients binom(w+d+l, w) * binom(d+l, d): names binom without a related position",
+	"matchgoals/season.go:21": "product of binomial coefficients binom(w+d+l, w) * binom(d+l, d): names binom without a related position",
 }
 
 // checkRelated: a finding about a value that comes from a call of a

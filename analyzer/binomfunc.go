@@ -196,7 +196,10 @@ func (fc *fnCtx) binomialLoopFunc(decl *ast.FuncDecl, res numType) *FactorialFac
 		if fact != nil || al.div == nil || al.early || al.kind != kindFalling || !fc.returns(decl.Body, al.acc) {
 			return
 		}
-		nExpr := fc.binomialN(al)
+		nExpr, _ := fc.binomialN(al)
+		if nExpr == nil {
+			return
+		}
 		nIdx := fc.c.paramIndex(decl, fc.c.objOf(nExpr))
 		kIdx := fc.c.paramIndex(decl, fc.c.objOf(al.count))
 		if nIdx < 0 || kIdx < 0 || res.Float {

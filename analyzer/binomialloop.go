@@ -29,17 +29,25 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 	}
 	sh := al.shape
 	k := fc.endRange(al.count, al.coff)
-	nExpr := fc.binomialN(al)
-	if nExpr == nil {
+	kExpr := al.count
+	nExpr, form := fc.binomialN(al)
+	var n ranges.Interval
+	switch {
+	case nExpr != nil:
+		n = fc.rangeOf(nExpr)
+	case form != nil:
+		// n is a sum the code never writes (n − 1 + i over q trips is
+		// C(n+q−1, q)): named and ranged as that sum, and not fixed,
+		// since no operand of the loop holds it.
+		nExpr, n, kExpr = form.expr(), fc.rangeQueries.affineRange(*form, al.mult), nil
+	default:
 		return
 	}
-	n := fc.rangeOf(nExpr)
-	if n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) {
+	if nExpr == nil || n.IsEmpty() || k.IsEmpty() || fc.binomialLoopSafe(t, n, k) {
 		return
 	}
 	product := src(&ast.BinaryExpr{X: ast.NewIdent(al.acc.Name()), Op: token.MUL, Y: &ast.ParenExpr{X: ast.Unparen(al.mult)}})
 	msg, definite := binomialProductText("loop", t, product, "the division", nExpr, n, k)
-	kExpr := al.count
 	if al.coff != 0 {
 		kExpr = nil
 	}
@@ -60,11 +68,13 @@ func (fc *fnCtx) checkBinomialLoop(al *accLoop, t numType) {
 }
 
 // binomialN finds n in the factor: the variable with coefficient +1
-// other than the induction variable and the trip count.
-func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
+// other than the induction variable and the trip count, or the
+// subexpression that is all of n. Where n is known but no expression of
+// the code is all of it, it returns nil and n's linear form.
+func (fc *fnCtx) binomialN(al *accLoop) (ast.Expr, *linear) {
 	lin, ok := fc.linear(al.mult)
 	if !ok {
-		return nil
+		return nil, nil
 	}
 	kObj := fc.c.objOf(al.count)
 	var nObj types.Object
@@ -74,21 +84,24 @@ func (fc *fnCtx) binomialN(al *accLoop) ast.Expr {
 		}
 	}
 	if nObj == nil {
-		return nil
+		return nil, nil
 	}
 	id := identOf(fc.c.pass.TypesInfo, al.mult, nObj)
 	if id == nil {
-		return nil
+		return nil, nil
 	}
 	if want, ok := fc.loopBinomialN(al, lin); ok && !single(nObj).equal(want) {
 		// The variable stands for only part of n, as h does in
 		// r*(w+h-i)/(i+1), which is C(w+h, w): a subexpression of the
-		// factor may be all of it.
+		// factor may be all of it. Where none is, as in the rising
+		// w*(n-1+i)/i over q trips, C(n+q−1, q), naming the variable
+		// would state another binomial and its thresholds.
 		if e := fc.exprOfForm(al.mult, want); e != nil {
-			return e
+			return e, nil
 		}
+		return nil, &want
 	}
-	return id
+	return id, nil
 }
 
 // loopBinomialN is the n of C(n, k) that the loop's factor F = lin makes

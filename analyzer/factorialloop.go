@@ -726,8 +726,17 @@ func (fc *fnCtx) fallingTop(al *accLoop) ast.Expr {
 	if n := fc.fallingBase(al); n != nil {
 		return n
 	}
-	if al.top != nil && al.topOff == 0 {
+	if al.top != nil && al.topOff == 0 && !(al.top == al.mult && fc.readsInduction(al)) {
 		return al.top
 	}
+	// A factor that moves with the loop, g - 1 + i, is no largest factor:
+	// no expression of the code names that one.
 	return nil
+}
+
+// readsInduction reports whether the loop's factor reads its induction
+// variable.
+func (fc *fnCtx) readsInduction(al *accLoop) bool {
+	lin, ok := fc.linear(al.mult)
+	return ok && lin.coefOf(al.shape.iv) != 0
 }

@@ -6,6 +6,7 @@ import (
 	"go/token"
 	"go/types"
 	"math"
+	"strings"
 
 	"github.com/overfact/overfact/analyzer/thresholds"
 	"github.com/overfact/overfact/fixes"
@@ -32,7 +33,7 @@ func (fc *fnCtx) checkGamma(call *ast.CallExpr) {
 	if !ok {
 		msg = fmt.Sprintf("math.Gamma overflows: %s; the argument is not bounded here", g.describe("math.Gamma("+src(call.Args[0])+")"))
 	}
-	msg += choice.clause()
+	msg += choice.clause() + fc.gammaPowerFirst(call, first)
 	fc.c.gammaLines().note(line)
 	fc.report(finding{node: call, cat: catGamma, definite: g.certain, msg: msg, match: fc.gammaCallMatch(call)})
 }
@@ -270,4 +271,85 @@ func parentsIn(root ast.Node) map[ast.Node]ast.Node {
 func (c *checker) lineOf(n ast.Node) token.Position {
 	p := c.pass.Fset.Position(n.Pos())
 	return token.Position{Filename: p.Filename, Line: p.Line}
+}
+
+// gammaPowerFirst names, for math.Gamma(v+c) in the divisor of
+// math.Pow(x, e)/(…) whose base the code does not fix and whose exponent
+// grows with v (e = a·v + the rest, a > 0, the rest never negative where
+// it is read), where the power overflows before the Γ value does: at the
+// last v whose Γ value fits, e is at least a·v + the rest's least value,
+// and from the e-th root of the largest float (thresholds.PowerBaseFirstBad)
+// on, the power is +Inf first (a Bessel series x^(2m+d)/(m!(m+d)!)).
+// Empty for any other shape.
+func (fc *fnCtx) gammaPowerFirst(call *ast.CallExpr, gammaFirst float64) string {
+	parents := fc.parentMap()
+	var quo *ast.BinaryExpr
+	var up ast.Node = call
+	for quo == nil {
+		p := parents[up]
+		switch p := p.(type) {
+		case *ast.ParenExpr:
+		case *ast.BinaryExpr:
+			switch {
+			case p.Op == token.QUO && p.Y == up:
+				quo = p
+			case p.Op != token.MUL:
+				return ""
+			}
+		default:
+			return ""
+		}
+		up = p
+	}
+	pow, ok := ast.Unparen(quo.X).(*ast.CallExpr)
+	if !ok || !fc.c.isMathFunc(pow, "Pow") || len(pow.Args) != 2 {
+		return ""
+	}
+	t, ok := fc.c.numOf(fc.c.pass.TypesInfo.TypeOf(pow))
+	if _, konst := fc.floatConst(pow.Args[0]); konst || !ok || !t.Float {
+		return ""
+	}
+	g, ok1 := fc.linearCount(fc.stripConv(call.Args[0]))
+	e, ok2 := fc.linearCount(fc.stripConv(pow.Args[1]))
+	if !ok1 || !ok2 || len(g.Terms) != 1 || g.Terms[0].K != 1 {
+		return ""
+	}
+	v := g.Terms[0].Sym
+	a := e.coefOf(v.Object)
+	if a <= 0 {
+		return ""
+	}
+	// The last v whose Γ(v + c) fits: v + c < gammaFirst.
+	last := int64(math.Ceil(gammaFirst-float64(g.C))) - 1
+	least := a*last + e.C
+	var at []string
+	for _, term := range e.without(v.Object).Terms {
+		id := identOf(fc.c.pass.TypesInfo, pow.Args[1], term.Sym.Object)
+		if id == nil || term.K <= 0 {
+			return ""
+		}
+		// A term the code may make negative is measured at 0, and
+		// the message says so (|d| where d = MinInt64 stays negative).
+		r := fc.rangeOf(id)
+		switch {
+		case r.IsEmpty():
+			return ""
+		case r.Lo < 0:
+			at = append(at, id.Name+" = 0")
+		case r.Lo > (math.MaxInt64-least)/term.K:
+			return ""
+		default:
+			least += term.K * r.Lo
+		}
+	}
+	where := ""
+	if len(at) > 0 {
+		where = " at " + strings.Join(at, ", ")
+	}
+	b := thresholds.PowerBaseFirstBad(t.Num, least)
+	if math.IsInf(b, 1) {
+		return ""
+	}
+	return fmt.Sprintf("; where |%s| ≥ %s%s the power %s^%s %s first, before %s reaches %d",
+		src(pow.Args[0]), fmtFloat(b), where, atom(pow.Args[0]), atom(fc.stripConv(pow.Args[1])), verb(t), v.Object.Name(), last+1)
 }

@@ -4,6 +4,8 @@ import (
 	"go/ast"
 	"go/token"
 	"go/types"
+	"math"
+	"strconv"
 
 	"github.com/overfact/overfact/internal/linform"
 )
@@ -122,4 +124,41 @@ func (l linear) coefOf(v types.Object) int64 {
 // without returns l with the term of v removed.
 func (l linear) without(v types.Object) linear {
 	return linear(lform(l).Without(linform.Obj{Object: v}))
+}
+
+// expr returns an expression whose value is l, its terms in their
+// order and the constant last (n + q - 1), for a message to name a
+// quantity the code never writes as one expression; nil for a form
+// with no terms.
+func (l linear) expr() ast.Expr {
+	var e ast.Expr
+	add := func(k int64, x ast.Expr) {
+		op := token.ADD
+		if k < 0 {
+			op, k = token.SUB, -k
+		}
+		if k != 1 {
+			x = &ast.BinaryExpr{X: &ast.BasicLit{Kind: token.INT, Value: strconv.FormatInt(k, 10)}, Op: token.MUL, Y: x}
+		}
+		switch {
+		case e != nil:
+			e = &ast.BinaryExpr{X: e, Op: op, Y: x}
+		case op == token.SUB:
+			e = &ast.UnaryExpr{Op: token.SUB, X: x}
+		default:
+			e = x
+		}
+	}
+	for _, t := range l.Terms {
+		add(t.K, ast.NewIdent(t.Sym.Object.Name()))
+	}
+	if e != nil && l.C != 0 {
+		c := l.C
+		if c < 0 && c != math.MinInt64 {
+			e = &ast.BinaryExpr{X: e, Op: token.SUB, Y: &ast.BasicLit{Kind: token.INT, Value: strconv.FormatInt(-c, 10)}}
+		} else {
+			e = &ast.BinaryExpr{X: e, Op: token.ADD, Y: &ast.BasicLit{Kind: token.INT, Value: strconv.FormatInt(c, 10)}}
+		}
+	}
+	return e
 }

@@ -11,6 +11,7 @@ import (
 	"github.com/overfact/overfact/analyzer/thresholds"
 	vm "github.com/overfact/overfact/analyzer/valuemodel"
 	"github.com/overfact/overfact/fixes"
+	"golang.org/x/tools/go/analysis"
 )
 
 // binomialPeak judges a float running product that is a binomial
@@ -256,6 +257,14 @@ func (fc *fnCtx) modelCountRatio(res *vm.Result) {
 			if fc.expFormed(y) {
 				central, reach = thresholds.CentralBinomialExp(t.Num), "math.Exp reaches"
 			}
+			if w, first, ok := fc.divisorWeak(res, y, f.Args[0], t); ok && first < central.FirstBad {
+				// The code's divisor breaks inside, at every k, long
+				// before the coefficient itself leaves the type.
+				if !r.IsEmpty() && !(bounded(r) && r.Hi < first) {
+					fc.reportDivisorWeak(n, f, w, first, r, nv, t)
+				}
+				return true
+			}
 			if r.IsEmpty() || bounded(r) && r.Hi < central.FirstBad {
 				return true
 			}
@@ -270,6 +279,53 @@ func (fc *fnCtx) modelCountRatio(res *vm.Result) {
 		}
 		return true
 	})
+}
+
+// divisorWeak returns the intermediate of the divisor y, whose value is
+// C(n, ·), that breaks first (a factorial or Γ value inside the helper
+// the code calls, Γ(n+1) or n!), with the first n at which it does: its
+// argument must be n plus a constant for the two to compare.
+func (fc *fnCtx) divisorWeak(res *vm.Result, y ast.Expr, n vm.Affine, t numType) (weak, int64, bool) {
+	var best weak
+	first, found := int64(math.MaxInt64), false
+	for _, w := range fc.weakPoints(res, y, t) {
+		d := w.arg.Sub(n)
+		if !d.IsConst() {
+			continue
+		}
+		// n + d ≥ bad from n = ⌈bad − d⌉.
+		at := new(big.Rat).Sub(w.bad, d.C)
+		q := new(big.Int).Quo(at.Num(), at.Denom())
+		if at.Sign() > 0 && !at.IsInt() {
+			q.Add(q, big.NewInt(1))
+		}
+		if q.IsInt64() && q.Int64() < first {
+			best, first, found = w, q.Int64(), true
+		}
+	}
+	return best, first, found
+}
+
+// reportDivisorWeak words modelCountRatio's finding where the divisor's
+// own intermediate breaks first: the quotient is then 0 or NaN from
+// that n, whatever k.
+func (fc *fnCtx) reportDivisorWeak(quo *ast.BinaryExpr, f vm.Form, w weak, first int64, r ranges.Interval, nv vm.Sym, t numType) {
+	name := f.Args[0].String()
+	clause := ""
+	if nv.Obj != nil {
+		clause, _ = verdict(nv.Name(), r, first)
+	}
+	via := ""
+	if w.via != "" && w.via != w.what {
+		via = fmt.Sprintf(" (its %s breaks first)", w.via)
+	}
+	msg := fmt.Sprintf("divides by C(%s, %s) formed on its own in %s: %s is +Inf or NaN for %s ≥ %d%s, long before C(%s, %s) leaves %s, after which the quotient is 0 or NaN although the ratio is finite%s",
+		f.Args[0], f.Args[1], t.typeName(), w.what, name, first, via, f.Args[0], f.Args[1], t.Name, clause)
+	var related []analysis.RelatedInformation
+	if w.call != nil {
+		related = fc.coefDef(w.call)
+	}
+	fc.report(finding{node: quo, cat: catRatio, msg: msg, related: related})
 }
 
 // fromReportedLoop reports whether y reads an accumulator of a loop

@@ -611,6 +611,14 @@ func (fc *fnCtx) callWeak(res *vm.Result, call *ast.CallExpr) []weak {
 	}
 	fn := c.calleeOf(call)
 	if ff := c.factOf(fn); ff != nil {
+		t, _ := c.numOf(c.pass.TypesInfo.TypeOf(call))
+		if !ff.Safe && kindOfName(ff.Kind) == kindBinomial && t.Float && ff.FirstBad <= thresholds.Factorial(t.Num).FirstBad {
+			// A float binomial function whose n! overflows is +Inf or
+			// NaN from there on, whatever k.
+			if a, ok := argAffine(ff.Param); ok {
+				return []weak{{arg: a, bad: big.NewRat(ff.FirstBad, 1), what: src(call), via: src(call), call: call}}
+			}
+		}
 		if ff.Safe || kindOfName(ff.Kind) != kindFactorial {
 			return nil
 		}
@@ -618,7 +626,6 @@ func (fc *fnCtx) callWeak(res *vm.Result, call *ast.CallExpr) []weak {
 		if !ok {
 			return nil
 		}
-		t, _ := c.numOf(c.pass.TypesInfo.TypeOf(call))
 		return []weak{{arg: a, bad: big.NewRat(ff.FirstBad, 1), what: src(call), call: call, wraps: !t.Float}}
 	}
 	vf := c.valueFactOf(fn)
@@ -706,6 +713,7 @@ func smallWhole(r *big.Rat) (int64, bool) {
 // float factorials, ratios of factorial and Γ helpers.
 func (fc *fnCtx) checkModelCalls(model func() *vm.Result) {
 	fc.checkBinomialPartsLoops()
+	fc.checkDividedOut()
 	var res *vm.Result
 	for _, root := range fc.callRoots() {
 		fc.checkLoopMultinomial(root)

@@ -73,6 +73,148 @@ func (fc *fnCtx) checkLoopMultinomial(root ast.Expr) {
 		match: fc.multinomialLogMatch(root, num, num.Args[ff.Param], den, loop, t)})
 }
 
+// checkDividedOut reports the other way to write a multinomial over a
+// loop's parts: the factorial of a total first, w := fact(n), then each
+// part's factorial divided out of it in a loop, w /= fact(x), and w
+// returned. Whatever the total is made of, the value is n!/Π x!, at most
+// n! and often far below it, while fact(n) already breaks from the
+// factorial's first bad n: from there every quotient is wrong (wrapped,
+// or +Inf), as where the parts are [12 12], C(24, 12) = 2704156, with
+// 24! past uint64 (math/big).
+func (fc *fnCtx) checkDividedOut() {
+	c := fc.c
+	body := funcBody(fc.node)
+	if body == nil {
+		return
+	}
+	ast.Inspect(body, func(n ast.Node) bool {
+		if _, lit := n.(*ast.FuncLit); lit {
+			return false
+		}
+		blk, ok := n.(*ast.BlockStmt)
+		if !ok {
+			return true
+		}
+		for i, st := range blk.List {
+			w, num, ff := fc.factorialStart(st)
+			if w == nil || !fc.returns(body, w) {
+				continue
+			}
+			for _, next := range blk.List[i+1:] {
+				if lb := loopBody(next); lb != nil && fc.dividesOutFactorials(lb, w) {
+					fc.reportDividedOut(next, w, num, ff)
+					break
+				}
+				if assigned.In(c.pass.TypesInfo, next, w, nil) {
+					break
+				}
+			}
+		}
+		return true
+	})
+}
+
+// factorialStart matches w := f(n), w = f(n) or var w = f(n) with f a
+// factorial function whose own value breaks (a fact, not Safe, offset 0).
+func (fc *fnCtx) factorialStart(st ast.Stmt) (types.Object, *ast.CallExpr, *FactorialFact) {
+	var lhs, rhs ast.Expr
+	switch st := st.(type) {
+	case *ast.AssignStmt:
+		if len(st.Lhs) != 1 || len(st.Rhs) != 1 || st.Tok != token.DEFINE && st.Tok != token.ASSIGN {
+			return nil, nil, nil
+		}
+		lhs, rhs = st.Lhs[0], st.Rhs[0]
+	case *ast.DeclStmt:
+		gd, ok := st.Decl.(*ast.GenDecl)
+		if !ok || len(gd.Specs) != 1 {
+			return nil, nil, nil
+		}
+		vs, ok := gd.Specs[0].(*ast.ValueSpec)
+		if !ok || len(vs.Names) != 1 || len(vs.Values) != 1 {
+			return nil, nil, nil
+		}
+		lhs, rhs = vs.Names[0], vs.Values[0]
+	default:
+		return nil, nil, nil
+	}
+	call, ok := fc.stripConv(rhs).(*ast.CallExpr)
+	if !ok {
+		return nil, nil, nil
+	}
+	ff := fc.c.factOf(fc.c.calleeOf(call))
+	if ff == nil || ff.Safe || kindOfName(ff.Kind) != kindFactorial || ff.Offset != 0 || ff.Param >= len(call.Args) {
+		return nil, nil, nil
+	}
+	w := fc.c.objOf(lhs)
+	if w == nil {
+		return nil, nil, nil
+	}
+	return w, call, ff
+}
+
+// dividesOutFactorials reports whether the loop body divides w by a
+// factorial function's value, w /= f(x) or w = w / f(x), and changes w
+// no other way.
+func (fc *fnCtx) dividesOutFactorials(body *ast.BlockStmt, w types.Object) bool {
+	c := fc.c
+	divides, other := false, false
+	assigned.Each(c.pass.TypesInfo, body, nil, func(v types.Object, at ast.Node) bool {
+		if v != w {
+			return true
+		}
+		a, ok := at.(*ast.AssignStmt)
+		if !ok || len(a.Rhs) != 1 {
+			other = true
+			return false
+		}
+		var y ast.Expr
+		switch {
+		case a.Tok == token.QUO_ASSIGN:
+			y = a.Rhs[0]
+		case a.Tok == token.ASSIGN:
+			if q, ok := fc.stripConv(a.Rhs[0]).(*ast.BinaryExpr); ok && q.Op == token.QUO && c.objOf(fc.stripConv(q.X)) == w {
+				y = q.Y
+			}
+		}
+		call, ok := fc.stripConv(y).(*ast.CallExpr)
+		if y == nil || !ok {
+			other = true
+			return false
+		}
+		if ff := c.factOf(c.calleeOf(call)); ff == nil || kindOfName(ff.Kind) != kindFactorial {
+			other = true
+			return false
+		}
+		divides = true
+		return true
+	})
+	return divides && !other
+}
+
+// reportDividedOut words checkDividedOut's finding.
+func (fc *fnCtx) reportDividedOut(loop ast.Stmt, w types.Object, num *ast.CallExpr, ff *FactorialFact) {
+	c := fc.c
+	t, ok := c.numOf(w.Type())
+	if !ok || c.reportedWithin(loop) {
+		return
+	}
+	arg := fc.stripConv(num.Args[ff.Param])
+	r := fc.rangeOf(arg)
+	first := ff.FirstBad
+	if r.IsEmpty() || r.Hi < first {
+		return
+	}
+	name := "the function literal"
+	if d, ok := fc.node.(*ast.FuncDecl); ok {
+		name = d.Name.Name
+	}
+	clause, definite := verdict(shownName(arg), r, first)
+	msg := fmt.Sprintf("%s divides %s = %s by factorials over a loop in %s: the quotient fits where they cancel most of it, but %s already %s from %s = %d%s",
+		name, w.Name(), src(num), t.typeName(), src(num), verb(t), src(arg), first, clause)
+	fn := c.calleeOf(num)
+	fc.report(finding{node: loop, cat: catRatio, definite: definite, msg: msg, related: c.relatedDef(fn.Name(), fn.Pos())})
+}
+
 // multinomialLogMatch offers to carry the divisor of a float multinomial
 // in log space (ShapeLogSpaceTerm): den becomes an lgamma.Product, each
 // factorial call the value its function returns with ln n! beside it

@@ -918,7 +918,8 @@ func assignedPairs(n ast.Node) (lhs, rhs []ast.Expr) {
 // carries reports whether e's value is call's, or built from it (or
 // from a carrier) by arithmetic that keeps a wrong value wrong: sums,
 // differences, products, quotients, negation, conversions, square roots,
-// absolute values and entries of a carried table.
+// absolute values, logarithms (one to one, so a wrong value stays
+// wrong) and entries of a carried table.
 func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Object]bool) bool {
 	c := f.fc.c
 	switch e := ast.Unparen(e).(type) {
@@ -926,7 +927,8 @@ func (f *resultFlow) carries(e ast.Expr, call *ast.CallExpr, vars map[types.Obje
 		if e == call {
 			return true
 		}
-		if f.fc.isConversion(e) || c.isMathFunc(e, "Sqrt") || c.isMathFunc(e, "Abs") {
+		if f.fc.isConversion(e) || c.isMathFunc(e, "Sqrt") || c.isMathFunc(e, "Abs") ||
+			c.isMathFunc(e, "Log") || c.isMathFunc(e, "Log2") || c.isMathFunc(e, "Log10") {
 			return len(e.Args) == 1 && f.carries(e.Args[0], call, vars)
 		}
 		return f.carriesFormatted(e, call, vars)

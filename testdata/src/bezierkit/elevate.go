@@ -14,7 +14,7 @@ func (c Curve) ElevateBy(r int) Curve {
 	for i := range out {
 		lo, hi := max(0, i-r), min(n, i)
 		for j := lo; j <= hi; j++ {
-			w := gchoose(n, j) * gchoose(r, i-j) / gchoose(n+r, i) // want `divides by C\(r \+ n, t\) formed on its own in float64: it overflows to \+Inf for r \+ n ≥`
+			w := gchoose(n, j) * gchoose(r, i-j) / gchoose(n+r, i) // want `divides by C\(r \+ n, t\) formed on its own in float64: gchoose\(n\+r, i\) is \+Inf or NaN for r \+ n ≥ 171 \(its math\.Gamma\(float64\(n \+ 1\)\) breaks first\)`
 			out[i].X += w * c.Ctrl[j].X
 			out[i].Y += w * c.Ctrl[j].Y
 		}

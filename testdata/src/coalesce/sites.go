@@ -28,12 +28,12 @@ func SegregatingSitesPMF(n, k int, theta float64) float64 {
 // HWEProb returns the probability of observing nAB heterozygotes among n
 // diploid individuals carrying nA copies of allele A, conditional on the
 // allele counts (the Hardy–Weinberg exact test).
-func HWEProb(n, nA, nAB int) float64 {
+func HWEProb(n, nA, nAB int) float64 { // want HWEProb:`wrong for some n or some nA or some nAB \(HWEProb, coalesce/sites\.go:36\)`
 	nB := 2*n - nA
 	nAA := (nA - nAB) / 2
 	nBB := (nB - nAB) / 2
 	g := math.Gamma
-	num := math.Pow(2, float64(nAB)) * g(float64(n+1)) * g(float64(nA+1)) * g(float64(nB+1))
+	num := math.Pow(2, float64(nAB)) * g(float64(n+1)) * g(float64(nA+1)) * g(float64(nB+1)) // want `ratio of math\.Gamma values in float64: math\.Gamma\(float64\(n \+ 1\)\) is \+Inf for n ≥ 171`
 	den := g(float64(nAA+1)) * g(float64(nAB+1)) * g(float64(nBB+1)) * g(float64(2*n+1))
 	return num / den
 }

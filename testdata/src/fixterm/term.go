@@ -29,7 +29,7 @@ func Load(a float64, k int) float64 { // want Load:`value \(p0\)\^\(p1\)/Γ\(p1 
 
 // Lot is the chance of k faulty bottles when n are drawn from a lot of
 // total holding bad faulty ones.
-func Lot(k, total, bad, n int) float64 { // want Lot:`wrong for total ≥ 171`
+func Lot(k, total, bad, n int) float64 { // want Lot:`wrong for total ≥ 171` Lot:`value Γ\(p2 \+ 1\)·Γ\(p1 - p2 \+ 1\)·Γ\(p3 \+ 1\)·Γ\(p1 - p3 \+ 1\)/\(Γ\(p0 \+ 1\)·Γ\(-p0 \+ p2 \+ 1\)·Γ\(-p0 \+ p3 \+ 1\)·Γ\(p0 \+ p1 - p2 - p3 \+ 1\)·Γ\(p1 \+ 1\)\), wrong once p2 ≥ 171 or p1 - p2 ≥ 171 or p1 ≥ 171`
 	return choose(bad, k) * choose(total-bad, n-k) / choose(total, n) // want "hypergeometric"
 }
 

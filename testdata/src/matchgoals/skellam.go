@@ -13,7 +13,7 @@ func SkellamPMF(d int, mu1, mu2 float64) float64 {
 	bessel := 0.0
 	for m := 0; m < 200; m++ {
 		bessel += math.Pow(x/2, float64(2*m+ad)) /
-			(math.Gamma(float64(m+1)) * math.Gamma(float64(m+ad+1))) // want `math\.Gamma overflows: math\.Gamma\(float64\(m \+ 1\)\) is \+Inf for m ≥ 171 \(Γ\(x\) overflows`
+			(math.Gamma(float64(m+1)) * math.Gamma(float64(m+ad+1))) // want `math\.Gamma overflows: math\.Gamma\(float64\(m \+ 1\)\) is \+Inf for m ≥ 171 \(Γ\(x\) overflows float64 from x = 171\.624377\); the argument may reach 200 here; where \|x / 2\| ≥ 8\.0655 at ad = 0 the power \(x / 2\)\^\(2\*m \+ ad\) overflows to \+Inf first, before m reaches 171`
 	}
 	return math.Exp(-(mu1 + mu2)) * math.Pow(mu1/mu2, float64(d)/2) * bessel
 }

@@ -9,7 +9,7 @@ type Integer interface {
 // states, C(n+g−1, n).
 func Ways[T Integer](n, g T) T {
 	var num, den T = 1, 1
-	for i := T(1); i <= n; i++ { // want `falling factorial of n factors from g - 1 \+ i down in int32 \(the narrowest type in the`
+	for i := T(1); i <= n; i++ { // want `falling factorial of n factors in int32 \(the narrowest type in the constraint of T\) wraps: when its factors run down to 1 it is a factorial`
 		num *= g - 1 + i
 		den *= i
 	}

@@ -8,9 +8,9 @@ import (
 // NegBinAbundance returns the probability that a species is represented
 // by k individuals when abundances follow a negative binomial with
 // clumping parameter r and probability p.
-func NegBinAbundance(k int, r, p float64) float64 {
+func NegBinAbundance(k int, r, p float64) float64 { // want NegBinAbundance:`wrong for some k \(NegBinAbundance, speciesrich/abundance\.go:13\)`
 	g := func(x float64) float64 { return math.Gamma(x) }
-	coef := g(float64(k)+r) / (g(r) * g(float64(k)+1))
+	coef := g(float64(k)+r) / (g(r) * g(float64(k)+1)) // want `ratio of math\.Gamma values in float64: math\.Gamma\(float64\(k\) \+ r\) is \+Inf for arguments ≥ 171\.624377`
 	return coef * math.Pow(p, r) * math.Pow(1-p, float64(k))
 }
 
@@ -51,9 +51,9 @@ func factU(n int) uint64 { // want factU:`factorial of parameter 0, breaks from 
 // Arrangements returns the number of distinct orders in which the
 // individuals of the sample could have been recorded, species being
 // indistinguishable within themselves.
-func (s Sample) Arrangements() uint64 {
+func (s Sample) Arrangements() uint64 { // want Arrangements:`wrong for`
 	w := factU(s.Total())
-	for _, c := range s.Counts {
+	for _, c := range s.Counts { // want `Arrangements divides w = factU\(s\.Total\(\)\) by factorials over a loop in uint64: the quotient fits where they cancel most of it, but factU\(s\.Total\(\)\) already wraps from s\.Total\(\) = 21`
 		w /= factU(c)
 	}
 	return w

@@ -55,7 +55,7 @@ func (s Sample) Rarefy(m int) float64 { // want Rarefy:`wrong for some s or some
 		if c == 0 {
 			continue
 		}
-		e += 1 - choose(n-c, m)/denom // want `divides by C\(n, m\) formed on its own in float64: it overflows to \+Inf for n ≥ 1030 at m =`
+		e += 1 - choose(n-c, m)/denom // want `divides by C\(n, m\) formed on its own in float64: choose\(n, m\) is \+Inf or NaN for n ≥ 171, long before C\(n, m\) leaves float64`
 	}
 	return e
 }
