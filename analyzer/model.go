@@ -114,7 +114,7 @@ func (fc *fnCtx) checkModel(model func() *vm.Result) {
 			if !ok {
 				continue
 			}
-			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.runStart(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) || mc.stepProduct(a, t) {
+			if mc.runningFactorial(a, t) || mc.poissonRun(a, t) || mc.runStart(a, t) || mc.binomialPeak(a, t) || mc.binomialLoop(a, t) || mc.factorialLoop(a, t) || mc.fallingLoop(a, t) || mc.stepProduct(a, t) || mc.factorialProduct(a, t) {
 				break
 			}
 		}

@@ -629,7 +629,10 @@ func (fc *fnCtx) checkBinomialProduct(root ast.Expr) {
 	}
 	msg := fmt.Sprintf("product of binomial coefficients %s in %s wraps where it leaves %s while every factor fits: first at %s by the largest argument, where %s fit and the product ≈ %s does not",
 		src(root), t.typeName(), t.Name, strings.Join(at, ", "), strings.Join(vals, " and "), thresholds.Approx(product))
-	fc.report(finding{node: root, cat: catRatio, msg: msg})
+	// The binomial function the product calls, first named: where its
+	// value comes from.
+	callee := c.calleeOf(calls[0])
+	fc.report(finding{node: root, cat: catRatio, msg: msg, related: c.relatedDef(callee.Name(), callee.Pos())})
 }
 
 // varRange returns the range of v at the first read of it within root.

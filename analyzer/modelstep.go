@@ -51,23 +51,9 @@ func (mc *modelCtx) stepProduct(a *vm.Acc, t numType) bool {
 	}
 	// The product on the last trip, in n: the trip index is count − 1.
 	last := mul.After.Subst(iter, mc.loop.Count.Shift(-1))
-	seq := func(x *vm.Term) thresholds.StepSeq {
-		return thresholds.StepSeq{
-			Log: func(n int64) (float64, bool) {
-				return x.LogAbs(map[vm.Sym]float64{nv: float64(n)})
-			},
-			Exact: func(n int64) (*big.Int, bool) {
-				r, ok := x.RatAt(map[vm.Sym]*big.Rat{nv: big.NewRat(n, 1)})
-				if !ok || !r.IsInt() {
-					return nil, false
-				}
-				return r.Num(), true
-			},
-		}
-	}
 	// The loop runs at least once from count 1.
 	from := 1 - beta.Num().Int64()
-	first, valueLast, ok := thresholds.StepProduct(t.Num, from, seq(a.After), seq(last))
+	first, valueLast, ok := thresholds.StepProduct(t.Num, from, termSeq(a.After, nv), termSeq(last, nv))
 	if !ok {
 		return false
 	}
@@ -88,4 +74,21 @@ func (mc *modelCtx) stepProduct(a *vm.Acc, t numType) bool {
 		a.Obj.Name(), src(mul.X), t.typeName(), verb(t), src(div.X), nv.Name(), first, what, nv.Name(), valueLast, clause)
 	fc.report(finding{node: mc.loop.Stmt, cat: catBinomLoop, definite: definite, msg: msg})
 	return true
+}
+
+// termSeq is the term x as a sequence in its one variable nv, for the
+// thresholds' scans of running products.
+func termSeq(x *vm.Term, nv vm.Sym) thresholds.StepSeq {
+	return thresholds.StepSeq{
+		Log: func(n int64) (float64, bool) {
+			return x.LogAbs(map[vm.Sym]float64{nv: float64(n)})
+		},
+		Exact: func(n int64) (*big.Int, bool) {
+			r, ok := x.RatAt(map[vm.Sym]*big.Rat{nv: big.NewRat(n, 1)})
+			if !ok || !r.IsInt() {
+				return nil, false
+			}
+			return r.Num(), true
+		},
+	}
 }

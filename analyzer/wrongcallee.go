@@ -519,8 +519,10 @@ func numericResult(sig *types.Signature) bool {
 }
 
 // tableResult reports whether sig's first result is a slice or array of
-// numbers, a table of counts or of probabilities its callers read entry
-// by entry. Only a table of float64 or float32 carries its fact out of
+// numbers, or of such slices (a two-dimensional table: Stirling numbers
+// by row, a matrix of score probabilities), a table of counts or of
+// probabilities its callers read entry by entry or row by row. Only a
+// one-dimensional table of float64 or float32 carries its fact out of
 // the package (floatTable): MayCarryFacts, which decides what the driver
 // analyses of a dependency, looks for numeric results and those.
 func tableResult(sig *types.Signature) bool {
@@ -530,6 +532,9 @@ func tableResult(sig *types.Signature) bool {
 	elem := elemOf(sig.Results().At(0).Type().Underlying())
 	if elem == nil {
 		return false
+	}
+	if row := elemOf(elem.Underlying()); row != nil {
+		elem = row // an entry t[i][j] of a table of rows
 	}
 	b, ok := elem.Underlying().(*types.Basic)
 	return ok && b.Info()&types.IsNumeric != 0 && b.Info()&types.IsComplex == 0

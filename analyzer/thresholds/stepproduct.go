@@ -31,24 +31,7 @@ func StepProduct(t Num, from int64, value, step StepSeq) (first, valueLast int64
 	if t.Float {
 		return 0, 0, false
 	}
-	lim, logMax := t.maxInt(), t.logMax()
-	// fits decides whether the sequence fits t at n: false, known, when
-	// it does not or is not known.
-	fits := func(s StepSeq, n int64) (bool, bool) {
-		if l, ok := s.Log(n); ok && !math.IsNaN(l) {
-			switch {
-			case l < logMax-1:
-				return true, true
-			case l > logMax+1:
-				return false, true
-			}
-		}
-		v, ok := s.Exact(n)
-		if !ok {
-			return false, false
-		}
-		return v.CmpAbs(lim) <= 0, true
-	}
+	fits := func(s StepSeq, n int64) (bool, bool) { return seqFits(t, s, n) }
 	first = -1
 	for n := max(from, 0); n <= stepScanMax; n++ {
 		vf, known := fits(value, n)
@@ -73,4 +56,52 @@ func StepProduct(t Num, from int64, value, step StepSeq) (first, valueLast int64
 		}
 	}
 	return first, valueLast, first >= 0
+}
+
+// seqFits decides whether the sequence s fits integer type t at n: the
+// logarithm screens, the exact value decides within a margin of t's
+// limit. known is false where neither is known.
+func seqFits(t Num, s StepSeq, n int64) (fits, known bool) {
+	if l, ok := s.Log(n); ok && !math.IsNaN(l) {
+		switch logMax := t.logMax(); {
+		case l < logMax-1:
+			return true, true
+		case l > logMax+1:
+			return false, true
+		}
+	}
+	v, ok := s.Exact(n)
+	if !ok {
+		return false, false
+	}
+	return v.CmpAbs(t.maxInt()) <= 0, true
+}
+
+// ProductFirstBad returns the first count n ≥ from at which an integer
+// running product of whole factors, whose value after n trips is
+// value(n), leaves integer type t, and value(n − 1), the largest value
+// that fits. Every factor is at least 1 in magnitude (or 0, which makes
+// the product right again), so no intermediate of the first n − 1 trips
+// leaves t where value(n − 1) fits: n is where the code first goes
+// wrong. ok is false for a float type, where a value is not known, or
+// where no count up to stepScanMax leaves t.
+func ProductFirstBad(t Num, from int64, value StepSeq) (first int64, last *big.Int, ok bool) {
+	if t.Float {
+		return 0, nil, false
+	}
+	for n := max(from, 0); n <= stepScanMax; n++ {
+		fits, known := seqFits(t, value, n)
+		if !known {
+			return 0, nil, false
+		}
+		if fits {
+			continue
+		}
+		if n == max(from, 0) {
+			return 0, nil, false // wrong from the loop's first count: no line to draw
+		}
+		last, known := value.Exact(n - 1)
+		return n, last, known
+	}
+	return 0, nil, false
 }

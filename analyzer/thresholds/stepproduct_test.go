@@ -84,3 +84,48 @@ func TestStepProduct(t *testing.T) {
 		t.Error("a slowly growing value reported a wrapping step")
 	}
 }
+
+// TestProductFirstBad checks the first wrapping count of running
+// products of two factors a trip against a math/big scan and, in 64
+// bits, the loops run in machine integers (math/bits), and the largest
+// value that fits against math/big: h·i(i−1), whose value n!(n−1)! is OEIS A010790, and
+// h·(2i−1)(2i), whose value is (2n)! (OEIS A010050).
+func TestProductFirstBad(t *testing.T) {
+	fact := func(n int64) *big.Int { return new(big.Int).MulRange(1, n) }
+	for _, c := range []struct {
+		name  string
+		from  int64 // the first count at which the loop runs
+		value func(int64) *big.Int
+		mul   func(k uint64) uint64 // the factor of trip k (from 0)
+	}{
+		{"n!(n-1)!", 2, func(n int64) *big.Int { return new(big.Int).Mul(fact(n), fact(n-1)) }, func(k uint64) uint64 { return (k + 2) * (k + 1) }},
+		{"(2n)!", 1, func(n int64) *big.Int { return fact(2 * n) }, func(k uint64) uint64 { return (2*k + 1) * (2*k + 2) }},
+	} {
+		for _, name := range []string{"uint64", "int64", "int32", "uint8"} {
+			num := mustNamed(t, name, nil)
+			first, last, ok := ProductFirstBad(num, c.from, exactSeq(c.value))
+			// A plain math/big scan, and for the 64-bit types the loop
+			// run in machine integers, whose counts start at 1 for trip
+			// 0: shifted to the value's count.
+			want := c.from
+			for c.value(want).Cmp(num.MaxInt()) <= 0 {
+				want++
+			}
+			if num.Bits == 64 {
+				if run := runStep(num.Signed, c.mul, func(uint64) uint64 { return 1 }, 200) + c.from - 1; run != want {
+					t.Errorf("%s in %s: the loop run in machine integers wraps first at %d, math/big at %d", c.name, name, run, want)
+				}
+			}
+			if !ok || first != want {
+				t.Errorf("%s in %s: first wrapping count %d (ok %v), math/big says %d", c.name, name, first, ok, want)
+				continue
+			}
+			if last.Cmp(c.value(first-1)) != 0 || last.Cmp(num.MaxInt()) > 0 || c.value(first).Cmp(num.MaxInt()) <= 0 {
+				t.Errorf("%s in %s: largest value that fits %v at %d, math/big disagrees", c.name, name, last, first-1)
+			}
+		}
+	}
+	if _, _, ok := ProductFirstBad(mustNamed(t, "float64", nil), 1, exactSeq(fact)); ok {
+		t.Error("float64: a first wrapping count for a float type")
+	}
+}

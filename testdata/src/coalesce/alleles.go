@@ -18,8 +18,8 @@ func stirlingTable(n int) [][]int64 {
 
 // AlleleCountProb returns the probability that a sample of n genes
 // carries exactly k distinct alleles: |s(n, k)| θ^k / θ(θ+1)…(θ+n−1).
-func AlleleCountProb(n, k int, theta float64) float64 {
-	s := stirlingTable(n)
+func AlleleCountProb(n, k int, theta float64) float64 { // want AlleleCountProb:`wrong for some n`
+	s := stirlingTable(n) // want `AlleleCountProb builds its result from stirlingTable\(n\), which is wrong for some values of n`
 	p := float64(s[n][k])
 	for i := 0; i < k; i++ {
 		p *= theta

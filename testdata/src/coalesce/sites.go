@@ -55,9 +55,9 @@ func HWELogProb(n, nA, nAB int) float64 {
 
 // RankedHistories returns the number of ranked labelled genealogies of n
 // sampled genes: n!(n−1)!/2^(n−1).
-func RankedHistories(n int) int64 {
+func RankedHistories(n int) int64 { // want RankedHistories:`wrong for n ≥ 14`
 	var h int64 = 1
-	for i := 2; i <= n; i++ {
+	for i := 2; i <= n; i++ { // want `running product h computes Γ\(n \+ 1\)·Γ\(n\), which in int64 wraps for n ≥ 14`
 		h *= int64(i) * int64(i-1)
 	}
 	return h >> (n - 1)

@@ -32,7 +32,7 @@ func ScoreMatrix(home, away float64, maxGoals int) [][]float64 {
 // OutcomeProbs returns the probabilities of a home win, a draw and an
 // away win, over scores up to maxGoals.
 func OutcomeProbs(home, away float64, maxGoals int) (win, draw, loss float64) {
-	m := ScoreMatrix(home, away, maxGoals)
+	m := ScoreMatrix(home, away, maxGoals) // want `OutcomeProbs builds its result from ScoreMatrix\(home, away, maxGoals\), which is wrong for some values of maxGoals`
 	for i, row := range m {
 		for j, p := range row {
 			switch {
