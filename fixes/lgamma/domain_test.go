@@ -153,7 +153,7 @@ func TestSpecialCases(t *testing.T) {
 		{"GammaRatio(+Inf, 2)", GammaRatio(inf, 2), inf},
 		{"GammaRatio(+Inf, -0.5)", GammaRatio(inf, -0.5), ninf},
 		{"GammaRatio(2, +Inf)", GammaRatio(2, inf), 0},
-		{"GammaRatio(2, -3)", GammaRatio(2, -3), 0},
+		{"GammaRatio(2, -3)", GammaRatio(2, -3), nan}, // math.Gamma(-3) is NaN
 		{"GammaRatio(-3, 2)", GammaRatio(-3, 2), nan},
 		{"GammaRatio(-3, -3)", GammaRatio(-3, -3), nan},
 		{"GammaRatio(+Inf, +Inf)", GammaRatio(inf, inf), nan},
@@ -163,7 +163,7 @@ func TestSpecialCases(t *testing.T) {
 		{"LogGammaRatio(+Inf, 2)", LogGammaRatio(inf, 2), inf},
 		{"LogGammaRatio(2, +Inf)", LogGammaRatio(2, inf), ninf},
 		{"LogGammaRatio(2, 0)", LogGammaRatio(2, 0), ninf},
-		{"LogGammaRatio(0, 2)", LogGammaRatio(0, 2), nan},
+		{"LogGammaRatio(0, 2)", LogGammaRatio(0, 2), inf}, // math.Lgamma(0) is +Inf
 		{"LogGammaRatio(3, 3)", LogGammaRatio(3, 3), 0},
 		{"LogBeta(-1, 2)", LogBeta(-1, 2), nan},
 		{"LogBeta(NaN, 2)", LogBeta(nan, 2), nan},
@@ -185,6 +185,99 @@ func TestSpecialCases(t *testing.T) {
 		if !same(tt.got, tt.want) {
 			t.Errorf("%s = %g, want %g", tt.name, tt.got, tt.want)
 		}
+	}
+}
+
+// gammaSpecials are the arguments of the special cases the math
+// package's documentation lists for Gamma (Gamma(+Inf) = +Inf,
+// Gamma(+0) = +Inf, Gamma(-0) = -Inf, Gamma(x) = NaN for integer x < 0,
+// Gamma(-Inf) = NaN, Gamma(NaN) = NaN) and for Lgamma (Lgamma(+Inf) =
+// +Inf, Lgamma(0) = +Inf, Lgamma(-integer) = +Inf, Lgamma(-Inf) = -Inf,
+// Lgamma(NaN) = NaN).
+var gammaSpecials = []float64{inf, 0, math.Copysign(0, -1), -1, -2, -3, -170, ninf, nan}
+
+// gammaRegulars are points where Γ is a nonzero float64: positive,
+// negative of both signs of Γ (Γ(-0.5) < 0, Γ(-1.5) > 0), and 30, where
+// Γ(30) = 29! is finite.
+var gammaRegulars = []float64{0.5, 1, 2, 5.5, 30, -0.5, -1.5, -2.5}
+
+// identical reports whether got and want are the same float64, the sign
+// of a zero included; any NaN is the same as any other.
+func identical(got, want float64) bool {
+	if math.IsNaN(want) || math.IsNaN(got) {
+		return math.IsNaN(want) && math.IsNaN(got)
+	}
+	return got == want && math.Signbit(got) == math.Signbit(want)
+}
+
+// TestGammaRatioSpecialCases: wherever a or b is one of math.Gamma's
+// special cases and the other's Γ is a float64, GammaRatio(a, b) is
+// math.Gamma(a)/math.Gamma(b) and LogGammaRatio(a, b) is
+// math.Lgamma(a) − math.Lgamma(b), the values the code these helpers
+// replace computes there (reference: the math package, whose special
+// cases are documented above).
+func TestGammaRatioSpecialCases(t *testing.T) {
+	args := append(append([]float64{}, gammaSpecials...), gammaRegulars...)
+	for _, a := range args {
+		for _, b := range args {
+			if !gammaSpecial(a) && !gammaSpecial(b) {
+				continue
+			}
+			if want := math.Gamma(a) / math.Gamma(b); !identical(GammaRatio(a, b), want) {
+				t.Errorf("GammaRatio(%g, %g) = %g, math.Gamma's quotient is %g", a, b, GammaRatio(a, b), want)
+			}
+			la, _ := math.Lgamma(a)
+			lb, _ := math.Lgamma(b)
+			if want := la - lb; !identical(LogGammaRatio(a, b), want) {
+				t.Errorf("LogGammaRatio(%g, %g) = %g, math.Lgamma's difference is %g", a, b, LogGammaRatio(a, b), want)
+			}
+		}
+	}
+}
+
+// TestGammaRatioSpecialLimits: where the other argument's Γ leaves
+// float64 (Γ(200) = 199! ≈ 3.9e372, computed below with math/big), the
+// quotient of math.Gamma's values is Inf/Inf = NaN, but Γ(200) is a
+// positive real number (Γ has no zeros, DLMF 5.2.1), so the ratio with
+// a special case is the limit: ±Inf over it, ±0 under it.
+func TestGammaRatioSpecialLimits(t *testing.T) {
+	f := new(big.Int).MulRange(1, 199)
+	if f.BitLen() <= 1024 {
+		t.Fatalf("199! has %d bits: it fits float64, the test needs one that does not", f.BitLen())
+	}
+	tests := []struct {
+		name      string
+		got, want float64
+	}{
+		{"GammaRatio(+Inf, 200)", GammaRatio(inf, 200), inf},
+		{"GammaRatio(+0, 200)", GammaRatio(0, 200), inf},
+		{"GammaRatio(-0, 200)", GammaRatio(math.Copysign(0, -1), 200), ninf},
+		{"GammaRatio(200, +Inf)", GammaRatio(200, inf), 0},
+		{"GammaRatio(200, +0)", GammaRatio(200, 0), 0},
+		{"GammaRatio(200, -0)", GammaRatio(200, math.Copysign(0, -1)), math.Copysign(0, -1)},
+		{"GammaRatio(200, -2)", GammaRatio(200, -2), nan}, // math.Gamma(-2) is NaN
+		{"GammaRatio(-2, 200)", GammaRatio(-2, 200), nan},
+		{"LogGammaRatio(200, -2)", LogGammaRatio(200, -2), ninf}, // math.Lgamma(-2) is +Inf
+		{"LogGammaRatio(-2, 200)", LogGammaRatio(-2, 200), inf},
+	}
+	for _, tt := range tests {
+		if !identical(tt.got, tt.want) {
+			t.Errorf("%s = %g, want %g", tt.name, tt.got, tt.want)
+		}
+	}
+}
+
+// TestGammaRatioRegular: at regular points next to the special cases
+// the ratio is still the quotient of factorials: Γ(30)/Γ(20) = 29!/19!
+// from math/big, and Γ(-0.5)/Γ(0.5) = −2 (Γ(½) = √π and
+// Γ(−½) = −2√π, DLMF 5.4.6 and 5.5.1).
+func TestGammaRatioRegular(t *testing.T) {
+	q := new(big.Float).SetPrec(200).SetInt(new(big.Int).MulRange(20, 29))
+	if got := GammaRatio(30, 20); ulpsOff(got, q) > 1 {
+		t.Errorf("GammaRatio(30, 20) = %v, 29!/19! is %v", got, q)
+	}
+	if got := GammaRatio(-0.5, 0.5); got != -2 {
+		t.Errorf("GammaRatio(-0.5, 0.5) = %v, want -2", got)
 	}
 }
 

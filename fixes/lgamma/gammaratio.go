@@ -74,23 +74,25 @@ func lnAbsGammaDD(x float64) dd {
 	return lnAbsGammaNegDD(x)
 }
 
-// gammaRatioSpecial returns ln|Γ(a)/Γ(b)|, its sign and true for NaNs,
-// infinities and poles, and false when both arguments are finite and
-// neither is a pole.
-func gammaRatioSpecial(a, b float64) (float64, int, bool) {
-	badA := math.IsNaN(a) || math.IsInf(a, -1)
-	badB := math.IsNaN(b) || math.IsInf(b, -1)
-	bigA := isPole(a) || math.IsInf(a, 1)
-	bigB := isPole(b) || math.IsInf(b, 1)
-	switch {
-	case badA || badB || (bigA && bigB) || isPole(a):
-		return math.NaN(), 0, true
-	case bigA:
-		return math.Inf(1), GammaSign(b), true
-	case bigB:
-		return math.Inf(-1), GammaSign(a), true
+// gammaSpecial reports whether x is one of math.Gamma's special cases:
+// NaN, ±Inf, or a pole (±0 or a negative integer), where Γ(x) as a
+// float64 is ±Inf or NaN. At every other float64 x, Γ(x) is a nonzero
+// real number, though one that may leave float64.
+func gammaSpecial(x float64) bool {
+	return math.IsNaN(x) || math.IsInf(x, 0) || isPole(x)
+}
+
+// gammaStandIn returns what stands for Γ(x) in a ratio with a special
+// case: math.Gamma's own value at a special case, and elsewhere ±1 with
+// the sign of Γ(x), so that the quotient of the two stand-ins is the
+// quotient of math.Gamma's values wherever the other one is finite and
+// the limit of the ratio where it leaves float64 (Γ(+Inf)/Γ(200) is
+// +Inf, not math.Gamma's Inf/Inf).
+func gammaStandIn(x float64) float64 {
+	if gammaSpecial(x) {
+		return math.Gamma(x)
 	}
-	return 0, 0, false
+	return float64(GammaSign(x))
 }
 
 // LogGammaRatio returns ln|Γ(a)/Γ(b)|.
@@ -101,17 +103,22 @@ func gammaRatioSpecial(a, b float64) (float64, int, bool) {
 // about 1e-29, which is within 1 ulp unless the result is below about
 // 1e-13. the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
-// Special cases are:
+// Special cases are those of LogGamma(a) − LogGamma(b), which are
+// math.Lgamma's, so the value is the one math.Lgamma(a) − math.Lgamma(b)
+// has wherever a or b is ±Inf, NaN or a pole (0, −0 or a negative
+// integer; "finite" below means finite and not a pole):
 //
-//	LogGammaRatio(+Inf, b) = +Inf for finite b that is not a pole
+//	LogGammaRatio(+Inf, b) = LogGammaRatio(pole, b) = +Inf for finite b
 //	LogGammaRatio(a, +Inf) = LogGammaRatio(a, pole) = -Inf for finite a
-//	    that is not a pole
-//	LogGammaRatio(pole, b) = NaN (Γ(a) has no sign there)
-//	LogGammaRatio(a, b) = NaN if a or b is NaN or -Inf, or both are
-//	    +Inf or poles
+//	LogGammaRatio(-Inf, b) = -Inf for finite b
+//	LogGammaRatio(a, -Inf) = +Inf for finite a
+//	LogGammaRatio(+Inf, -Inf) = LogGammaRatio(pole, -Inf) = +Inf
+//	LogGammaRatio(-Inf, +Inf) = LogGammaRatio(-Inf, pole) = -Inf
+//	LogGammaRatio(a, b) = NaN if a or b is NaN, or both are +Inf or
+//	    poles, or both are -Inf
 func LogGammaRatio(a, b float64) float64 {
-	if v, _, ok := gammaRatioSpecial(a, b); ok {
-		return v
+	if gammaSpecial(a) || gammaSpecial(b) {
+		return LogGamma(a) - LogGamma(b)
 	}
 	r := lnAbsGammaRatioDD(a, b)
 	if a != b && a > 0 && b > 0 && a < bigMax && b < bigMax && math.Abs(r.hi) < 0x1p-20*math.Max(math.Abs(a-b), 0x1p-20) {
@@ -138,21 +145,23 @@ func lnAbsGammaRatioDD(a, b float64) dd {
 // Accuracy: within 1 ulp wherever the result is a normal float64,
 // negative arguments included; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
-// Special cases are:
+// Special cases are those of math.Gamma (Gamma(+Inf) = +Inf,
+// Gamma(+0) = +Inf, Gamma(-0) = -Inf, Gamma(x) = NaN for integer x < 0,
+// Gamma(-Inf) = NaN, Gamma(NaN) = NaN), so the value is the one
+// math.Gamma(a)/math.Gamma(b) has wherever a or b is one of them and
+// the other's Γ is a float64; where the other's Γ leaves float64 it is
+// the limit ("finite" below means finite and not zero or a negative
+// integer; ±1 is the sign of Γ at the finite argument):
 //
-//	GammaRatio(+Inf, b) = ±Inf (the sign of Γ(b)) for finite b that is
-//	    not a pole
-//	GammaRatio(a, +Inf) = GammaRatio(a, pole) = 0 for finite a that is
-//	    not a pole
-//	GammaRatio(pole, b) = NaN (Γ(a) has no sign there)
-//	GammaRatio(a, b) = NaN if a or b is NaN or -Inf, or both are +Inf
-//	    or poles
+//	GammaRatio(+Inf, b) = GammaRatio(+0, b) = ±Inf for finite b
+//	GammaRatio(-0, b) = ∓Inf for finite b
+//	GammaRatio(a, +Inf) = GammaRatio(a, +0) = ±0 for finite a
+//	GammaRatio(a, -0) = ∓0 for finite a
+//	GammaRatio(a, b) = NaN if a or b is NaN, -Inf or a negative
+//	    integer, or both are ±0 or +Inf
 func GammaRatio(a, b float64) float64 {
-	if v, s, ok := gammaRatioSpecial(a, b); ok {
-		if math.IsNaN(v) {
-			return v
-		}
-		return float64(s) * math.Exp(v)
+	if gammaSpecial(a) || gammaSpecial(b) {
+		return gammaStandIn(a) / gammaStandIn(b)
 	}
 	v := expOf(lnAbsGammaRatioDD(a, b))
 	if GammaSign(a) != GammaSign(b) {
