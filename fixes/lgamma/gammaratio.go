@@ -101,7 +101,7 @@ func gammaStandIn(x float64) float64 {
 // and next to the curve Γ(a) = Γ(b) (taken in math/big there for
 // a, b < 2^40); for negative arguments the absolute error is below
 // about 1e-29, which is within 1 ulp unless the result is below about
-// 1e-13. the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
+// 1e-13; the mpmath sweep of docs/numerics.md measured at most 0.5 ulp.
 //
 // Special cases are those of LogGamma(a) − LogGamma(b), which are
 // math.Lgamma's, so the value is the one math.Lgamma(a) − math.Lgamma(b)
